@@ -1,0 +1,24 @@
+// Starts the built app for the Playwright journeys on a fresh SQLite file under tmp/.
+import { rmSync, mkdirSync } from 'node:fs';
+import { spawn } from 'node:child_process';
+
+const dir = 'tmp/e2e';
+rmSync(dir, { recursive: true, force: true });
+mkdirSync(dir, { recursive: true });
+
+const port = process.env.PORT ?? '4317';
+const child = spawn(process.execPath, ['build/index.js'], {
+	stdio: 'inherit',
+	env: {
+		...process.env,
+		NODE_ENV: 'test',
+		PORT: port,
+		HOST: '127.0.0.1',
+		ORIGIN: `http://127.0.0.1:${port}`,
+		DATABASE_PATH: `${dir}/statewright.db`,
+		SEED_DEMO: '1',
+		STATEWRIGHT_DEV_TOOLS: '1'
+	}
+});
+for (const sig of ['SIGINT', 'SIGTERM']) process.on(sig, () => child.kill(sig));
+child.on('exit', (code) => process.exit(code ?? 0));

@@ -1,0 +1,107 @@
+/**
+ * Shape of a fluid data file. Every coefficient of a reference equation of state is data:
+ * the solvers hold no fluid-specific number. Each file names the publication its numbers
+ * come from. Reduced variables: δ = ρ/ρr, τ = Tr/T with the equation's reducing values
+ * (which for some fluids differ from the critical point).
+ *
+ * Reduced Helmholtz energy: α(δ, τ) = a/(R·T) = α⁰(δ, τ) + αʳ(δ, τ).
+ */
+
+/** Ideal-gas part α⁰ terms. */
+export type IdealTerm =
+	/** ln δ + a1 + a2·τ  (a1, a2 may be shifted at load time to the declared reference state) */
+	| { kind: 'lead'; a1: number; a2: number }
+	/** a·ln τ */
+	| { kind: 'log-tau'; a: number }
+	/** Σ nᵢ·τ^tᵢ */
+	| { kind: 'power'; n: number[]; t: number[] }
+	/** Σ nᵢ·ln(1 − exp(−γᵢ·τ)) */
+	| { kind: 'planck-einstein'; n: number[]; gamma: number[] };
+
+/** Residual part αʳ terms. */
+export type ResidualTerm =
+	/** Σ nᵢ·δ^dᵢ·τ^tᵢ */
+	| { kind: 'polynomial'; n: number[]; d: number[]; t: number[] }
+	/** Σ nᵢ·δ^dᵢ·τ^tᵢ·exp(−δ^lᵢ) */
+	| { kind: 'exponential'; n: number[]; d: number[]; t: number[]; l: number[] }
+	/** Σ nᵢ·δ^dᵢ·τ^tᵢ·exp(−αᵢ(δ − εᵢ)² − βᵢ(τ − γᵢ)²) */
+	| {
+			kind: 'gaussian';
+			n: number[];
+			d: number[];
+			t: number[];
+			alpha: number[];
+			beta: number[];
+			gamma: number[];
+			epsilon: number[];
+	  }
+	/**
+	 * IAPWS-95 / Span–Wagner non-analytic near-critical terms:
+	 * Σ nᵢ·Δ^bᵢ·δ·ψ with Δ = θ² + Bᵢ[(δ−1)²]^aᵢ, θ = (1−τ) + Aᵢ[(δ−1)²]^(1/(2βᵢ)),
+	 * ψ = exp(−Cᵢ(δ−1)² − Dᵢ(τ−1)²).
+	 */
+	| {
+			kind: 'non-analytic';
+			n: number[];
+			a: number[];
+			b: number[];
+			beta: number[];
+			A: number[];
+			B: number[];
+			C: number[];
+			D: number[];
+	  };
+
+/**
+ * Ancillary equation (starting guesses only), θ = 1 − T/Tc, with reducing values Tc and yc:
+ * - `ln-ratio-tc-over-t`: ln(y/yc) = (Tc/T)·Σ nᵢ·θ^tᵢ   (typical for vapor pressure)
+ * - `ln-ratio`:           ln(y/yc) = Σ nᵢ·θ^tᵢ          (typical for vapor density)
+ * - `ratio-plus-one`:     y/yc = 1 + Σ nᵢ·θ^tᵢ           (typical for liquid density)
+ */
+export interface Ancillary {
+	form: 'ln-ratio-tc-over-t' | 'ln-ratio' | 'ratio-plus-one';
+	n: number[];
+	t: number[];
+	/** reducing value of y (Pa or kg/m³); Tc is the fluid's critical temperature */
+	yc: number;
+	/** where these coefficients come from */
+	source: string;
+}
+
+/** How the constants of the lead ideal-gas term are set. */
+export type ReferenceStateSpec =
+	/** use the published a1, a2 unchanged (water: IAPWS-95's own u = 0, s = 0 at the triple-point liquid) */
+	| { kind: 'as-published'; label: string }
+	/** shift a1, a2 so that the saturated liquid at T has enthalpy h and entropy s (IIR: 273.15 K, 200 kJ/kg, 1 kJ/(kg·K)) */
+	| { kind: 'saturated-liquid-at-T'; label: string; T: number; h: number; s: number }
+	/** shift a1, a2 so that the saturated liquid at P has enthalpy h and entropy s (NBP: 101325 Pa, 0, 0) */
+	| { kind: 'saturated-liquid-at-P'; label: string; P: number; h: number; s: number };
+
+export interface FluidData {
+	id: string;
+	name: string;
+	formula: string;
+	aliases: string[];
+	formulation: {
+		/** short name, e.g. "IAPWS-95" */
+		name: string;
+		/** full citation of the publication the coefficients are taken from */
+		reference: string;
+		/** where the numbers were transcribed from and how they were checked; licence note */
+		provenance: string;
+	};
+	/** molar mass, kg/mol */
+	molarMass: number;
+	/** specific gas constant used by the equation, J/(kg·K) */
+	R: number;
+	/** reducing temperature and density of the equation */
+	reducing: { T: number; rho: number };
+	critical: { T: number; P: number; rho: number };
+	triple: { T: number; P: number };
+	/** range of validity of the formulation */
+	limits: { Tmin: number; Tmax: number; Pmax: number };
+	referenceState: ReferenceStateSpec;
+	ideal: IdealTerm[];
+	residual: ResidualTerm[];
+	ancillaries: { pSat: Ancillary; rhoLiquid: Ancillary; rhoVapor: Ancillary };
+}
