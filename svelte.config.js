@@ -5,7 +5,29 @@ import { vitePreprocess } from '@sveltejs/vite-plugin-svelte';
 const config = {
 	preprocess: vitePreprocess(),
 	kit: {
-		adapter: adapter({ out: "build" })
+		adapter: adapter({ out: 'build' }),
+		// nonces for the inline theme script and SvelteKit's own start-up script
+		csp: {
+			mode: 'auto',
+			directives: {
+				'default-src': ['self'],
+				'script-src': ['self'],
+				// Svelte transitions and D3 set style attributes
+				'style-src': ['self', 'unsafe-inline'],
+				'img-src': ['self', 'data:', 'blob:'],
+				'font-src': ['self', 'data:'],
+				'connect-src': ['self'],
+				'object-src': ['none'],
+				'base-uri': ['self'],
+				'form-action': ['self'],
+				'frame-ancestors': ['none']
+			}
+		},
+		typescript: {
+			config(tsconfig) {
+				tsconfig.include.push('../migrations/**/*.ts', '../scripts/**/*.ts');
+			}
+		}
 	}
 };
 

@@ -1,11 +1,23 @@
 // See https://svelte.dev/docs/kit/types#app.d.ts
+import type { SessionInfo, SessionUser } from '$lib/server/auth';
+import type { TokenPrincipal } from '$lib/server/api-tokens';
+
 declare global {
 	namespace App {
 		interface Error {
 			message: string;
+			/** stable machine-readable code, e.g. 'not-found', 'forbidden' */
 			code?: string;
+			/** reference for an unexpected error, to find it in the server log */
+			ref?: string;
 		}
-		// interface Locals {}
+		interface Locals {
+			/** the signed-in person (cookie session), or null */
+			user: SessionUser | null;
+			session: SessionInfo | null;
+			/** an API token principal (only on /api/v1/* with Authorization: Bearer), or null */
+			token: TokenPrincipal | null;
+		}
 		// interface PageData {}
 		// interface PageState {}
 		// interface Platform {}

@@ -1,0 +1,97 @@
+import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
+import { sequence } from '@sveltejs/kit/hooks';
+import { dev } from '$app/environment';
+import { randomUUID } from 'node:crypto';
+import { startApp } from '$lib/server/startup';
+import { getDb } from '$lib/server/db';
+import { clearSessionCookie, sessionCookieName, setSessionCookie, validateSession } from '$lib/server/auth';
+import { authenticateToken } from '$lib/server/api-tokens';
+import { codeForStatus, jsonError } from '$lib/server/api';
+
+/** Migrations, mail and the demo seed, before the first request. */
+export const init: ServerInit = async () => {
+	await startApp({ devServerUrl: dev ? 'http://localhost:5173' : undefined });
+};
+
+const isApi = (path: string) => path.startsWith('/api/');
+
+/** Bearer tokens on /api/v1/*; a bad token is refused outright (no silent fallback to a cookie). */
+const authenticateApiToken: Handle = async ({ event, resolve }) => {
+	event.locals.token = null;
+	const header = event.request.headers.get('authorization');
+	if (header === null || !event.url.pathname.startsWith('/api/v1/')) return resolve(event);
+	const match = /^Bearer\s+(\S+)\s*$/i.exec(header);
+	if (!match) return jsonError(401, 'unauthenticated', 'Send the token as "Authorization: Bearer swt_…".', {}, { 'www-authenticate': 'Bearer' });
+	const found = await authenticateToken(getDb(), match[1]);
+	if (!found) {
+		return jsonError(401, 'invalid-token', 'This API token is not valid: it may be mistyped or revoked. Create a new one in team settings.', {}, {
+			'www-authenticate': 'Bearer error="invalid_token"'
+		});
+	}
+	event.locals.token = found.principal;
+	return resolve(event);
+};
+
+/** Cookie sessions: validate, renew when due, clear a stale cookie. */
+const authenticateSession: Handle = async ({ event, resolve }) => {
+	event.locals.user = null;
+	event.locals.session = null;
+	if (event.locals.token) return resolve(event);
+	const token = event.cookies.get(sessionCookieName(event.url));
+	if (token) {
+		const found = await validateSession(getDb(), token);
+		if (found) {
+			event.locals.user = found.user;
+			event.locals.session = found.session;
+			if (found.session.renewed) setSessionCookie(event.cookies, event.url, token, found.session.expiresAt);
+		} else {
+			clearSessionCookie(event.cookies, event.url);
+		}
+	}
+	return resolve(event);
+};
+
+/** Every /api/* error answers in the API's JSON shape, including unknown routes and wrong methods. */
+const apiErrorShape: Handle = async ({ event, resolve }) => {
+	const response = await resolve(event);
+	if (!isApi(event.url.pathname) || response.status < 400) return response;
+	if ((response.headers.get('content-type') ?? '').includes('application/json')) {
+		const body = await response.clone().json().catch(() => null);
+		if (body && typeof body === 'object' && 'error' in body) return response;
+		const message = body && typeof body.message === 'string' ? body.message : `Request failed (${response.status}).`;
+		return jsonError(response.status, body?.code ?? codeForStatus(response.status), message, {}, response.headers);
+	}
+	const message =
+		response.status === 404
+			? `There is no API route ${event.request.method} ${event.url.pathname}.`
+			: response.status === 405
+				? `${event.request.method} is not allowed on ${event.url.pathname}${response.headers.get('allow') ? `; use ${response.headers.get('allow')}` : ''}.`
+				: `Request failed (${response.status}).`;
+	const headers = new Headers(response.headers);
+	headers.delete('content-type');
+	headers.delete('content-length');
+	return jsonError(response.status, codeForStatus(response.status), message, {}, headers);
+};
+
+const securityHeaders: Handle = async ({ event, resolve }) => {
+	const response = await resolve(event);
+	const h = response.headers;
+	h.set('x-content-type-options', 'nosniff');
+	h.set('referrer-policy', 'same-origin');
+	h.set('x-frame-options', 'DENY');
+	h.set('cross-origin-opener-policy', 'same-origin');
+	h.set('permissions-policy', 'camera=(), microphone=(), geolocation=(), payment=()');
+	if (event.url.protocol === 'https:') h.set('strict-transport-security', 'max-age=31536000');
+	// static assets never pass through here; everything that does is per-user or carries one-time tokens
+	if (!h.has('cache-control')) h.set('cache-control', 'private, no-store');
+	return response;
+};
+
+export const handle = sequence(securityHeaders, apiErrorShape, authenticateApiToken, authenticateSession);
+
+export const handleError: HandleServerError = ({ error, event, status, message }) => {
+	if (status === 404) return { message: 'Not found', code: 'not-found' };
+	const ref = randomUUID().slice(0, 8);
+	console.error(`[statewright] ${ref} ${event.request.method} ${event.url.pathname}`, error);
+	return { message: status >= 500 ? `Something went wrong on our side (reference ${ref}).` : message, code: codeForStatus(status), ref };
+};

@@ -1,0 +1,88 @@
+import { isHttpError, isRedirect, json, type RequestEvent } from '@sveltejs/kit';
+import { ZodError, type z } from 'zod';
+import { AppError, isAppError } from './errors';
+
+/*
+ * JSON API plumbing for /api/v1/*. Every error answers
+ *   { "error": { "code": "…", "message": "…what was wrong and what to give instead…" } }
+ * with a 4xx status (5xx only for our own faults).
+ *
+ *   export const GET = apiRoute(async (event) => {
+ *     const access = await requireTeam(event, event.params.team);   // 401/403/404 in the shape above
+ *     return { team: … };                                            // → 200 JSON
+ *   });
+ */
+
+export interface ApiErrorBody {
+	error: { code: string; message: string; issues?: Array<{ path: string; message: string }> };
+}
+
+export function jsonError(status: number, code: string, message: string, extra: Record<string, unknown> = {}, headers?: HeadersInit): Response {
+	return json({ error: { code, message, ...extra } } satisfies ApiErrorBody, { status, headers });
+}
+
+const CODE_FOR_STATUS: Record<number, string> = {
+	400: 'bad-request',
+	401: 'unauthenticated',
+	403: 'forbidden',
+	404: 'not-found',
+	405: 'method-not-allowed',
+	409: 'conflict',
+	410: 'gone',
+	413: 'too-large',
+	415: 'unsupported-media-type',
+	422: 'unprocessable',
+	429: 'rate-limited'
+};
+
+export function codeForStatus(status: number): string {
+	return CODE_FOR_STATUS[status] ?? (status >= 500 ? 'internal' : 'error');
+}
+
+export function zodIssues(e: ZodError): Array<{ path: string; message: string }> {
+	return e.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
+}
+
+/** Turns anything thrown inside an API handler into the error shape; rethrows our own faults. */
+export function toApiResponse(e: unknown): Response {
+	if (isRedirect(e)) throw e;
+	if (isHttpError(e)) {
+		const body = e.body as App.Error;
+		return jsonError(e.status, body.code ?? codeForStatus(e.status), body.message);
+	}
+	if (isAppError(e)) return jsonError(e.status, e.code, e.message, e.field ? { field: e.field } : {});
+	if (e instanceof ZodError) {
+		const issues = zodIssues(e);
+		return jsonError(400, 'invalid-input', issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join('; '), { issues });
+	}
+	throw e;
+}
+
+/** Wraps a handler: a returned object becomes 200 JSON, a Response passes through, errors take the shape. */
+export function apiRoute<E extends RequestEvent>(handler: (event: E) => Promise<unknown> | unknown): (event: E) => Promise<Response> {
+	return async (event) => {
+		try {
+			const result = await handler(event);
+			return result instanceof Response ? result : json(result);
+		} catch (e) {
+			return toApiResponse(e);
+		}
+	};
+}
+
+/** Reads and validates a JSON body (415 if not JSON, 413 over `maxBytes`, 400 if malformed or invalid). */
+export async function readJson<S extends z.ZodType>(request: Request, schema: S, maxBytes = 256 * 1024): Promise<z.infer<S>> {
+	const type = request.headers.get('content-type') ?? '';
+	if (!/^application\/(?:[\w.+-]+\+)?json\b/i.test(type)) {
+		throw new AppError(415, 'unsupported-media-type', 'Send the body as JSON with "Content-Type: application/json".');
+	}
+	const text = await request.text();
+	if (Buffer.byteLength(text) > maxBytes) throw new AppError(413, 'too-large', `The body is larger than ${Math.round(maxBytes / 1024)} kB.`);
+	let value: unknown;
+	try {
+		value = JSON.parse(text);
+	} catch {
+		throw new AppError(400, 'invalid-json', 'The body is not valid JSON.');
+	}
+	return schema.parse(value);
+}

@@ -1,0 +1,162 @@
+/**
+ * In-memory token-bucket rate limiting, one bucket per key (an IP, an e-mail, a token id…).
+ *
+ * A bucket holds at most `burst` tokens and refills continuously at `ratePerSecond`. Each
+ * request `take`s one token (or `cost`); with none left the answer says how long until one is
+ * back. `ratePerSecond <= 0` switches a limiter off (every take is allowed), which is what
+ * `COMPUTE_RATE_LIMIT=0` means.
+ *
+ * State lives in this process only: a restart forgets it, and several processes would each
+ * keep their own. Idle keys are dropped once their bucket has refilled, and at most `maxKeys`
+ * are kept (least recently used go first), so an attacker cycling keys cannot grow memory.
+ *
+ * Usage:
+ *   const limiter = createLimiter({ ratePerSecond: 100, burst: 200 });
+ *   const r = limiter.take(clientAddress);
+ *   if (!r.allowed) return new Response(..., { status: 429, headers: { 'retry-after': retryAfterSeconds(r) } });
+ */
+
+export type TakeResult = { allowed: true; remaining: number } | { allowed: false; retryAfterMs: number };
+
+export interface LimiterOptions {
+	/** tokens added per second; <= 0 turns the limiter off */
+	ratePerSecond: number;
+	/** bucket size: how many requests may come at once after a quiet spell */
+	burst: number;
+	/** keys kept at most (default 50 000) */
+	maxKeys?: number;
+	/** clock in ms, for tests */
+	now?: () => number;
+}
+
+export interface Limiter {
+	take(key: string, cost?: number): TakeResult;
+	/** gives tokens back, e.g. after a successful sign-in so only failures count */
+	refund(key: string, amount?: number): void;
+	/** tokens available now, without taking any */
+	available(key: string): number;
+	/** forgets one key, or every key */
+	reset(key?: string): void;
+	readonly size: number;
+	readonly enabled: boolean;
+}
+
+interface Bucket {
+	tokens: number;
+	at: number;
+}
+
+export function createLimiter(options: LimiterOptions): Limiter {
+	const { ratePerSecond, burst } = options;
+	if (!(burst >= 1) || !Number.isFinite(burst)) throw new RangeError('burst must be a finite number >= 1');
+	if (!Number.isFinite(ratePerSecond)) throw new RangeError('ratePerSecond must be finite');
+	const enabled = ratePerSecond > 0;
+	const maxKeys = options.maxKeys ?? 50_000;
+	const now = options.now ?? Date.now;
+	const perMs = ratePerSecond / 1000;
+	const buckets = new Map<string, Bucket>();
+	const fullAfterMs = enabled ? burst / perMs : 0;
+	let takesSinceSweep = 0;
+
+	function level(b: Bucket, t: number): number {
+		return Math.min(burst, b.tokens + (t - b.at) * perMs);
+	}
+
+	function sweep(t: number) {
+		for (const [k, b] of buckets) if (t - b.at >= fullAfterMs) buckets.delete(k);
+	}
+
+	function store(key: string, b: Bucket) {
+		buckets.delete(key); // re-insert so Map order is least-recently-used first
+		buckets.set(key, b);
+		if (buckets.size > maxKeys) buckets.delete(buckets.keys().next().value as string);
+	}
+
+	return {
+		get size() {
+			return buckets.size;
+		},
+		enabled,
+		take(key, cost = 1) {
+			if (!enabled) return { allowed: true, remaining: burst };
+			const t = now();
+			if (++takesSinceSweep >= 1000) {
+				takesSinceSweep = 0;
+				sweep(t);
+			}
+			const b = buckets.get(key);
+			const tokens = b ? level(b, t) : burst;
+			if (tokens >= cost) {
+				store(key, { tokens: tokens - cost, at: t });
+				return { allowed: true, remaining: Math.floor(tokens - cost) };
+			}
+			store(key, { tokens, at: t });
+			return { allowed: false, retryAfterMs: Math.ceil((cost - tokens) / perMs) };
+		},
+		refund(key, amount = 1) {
+			const b = buckets.get(key);
+			if (!enabled || !b) return;
+			const t = now();
+			b.tokens = Math.min(burst, level(b, t) + amount);
+			b.at = t;
+		},
+		available(key) {
+			if (!enabled) return burst;
+			const b = buckets.get(key);
+			return b ? Math.floor(level(b, now())) : burst;
+		},
+		reset(key) {
+			if (key === undefined) buckets.clear();
+			else buckets.delete(key);
+		}
+	};
+}
+
+/** Whole seconds for a Retry-After header (at least 1). */
+export function retryAfterSeconds(r: { retryAfterMs: number }): string {
+	return String(Math.max(1, Math.ceil(r.retryAfterMs / 1000)));
+}
+
+/**
+ * Takes one token from each (limiter, key) pair, or none: if any refuses, the tokens already
+ * taken are given back and the longest wait is returned.
+ */
+export function takeAll(pairs: ReadonlyArray<readonly [Limiter, string]>): TakeResult {
+	const taken: Array<readonly [Limiter, string]> = [];
+	let wait = 0;
+	for (const pair of pairs) {
+		const r = pair[0].take(pair[1]);
+		if (r.allowed) taken.push(pair);
+		else wait = Math.max(wait, r.retryAfterMs);
+	}
+	if (wait > 0) {
+		for (const [l, k] of taken) l.refund(k);
+		return { allowed: false, retryAfterMs: wait };
+	}
+	return { allowed: true, remaining: 0 };
+}
+
+export function refundAll(pairs: ReadonlyArray<readonly [Limiter, string]>): void {
+	for (const [l, k] of pairs) l.refund(k);
+}
+
+/**
+ * Sign-in attempts. Every attempt takes a token from its account's bucket (keyed by the
+ * normalised e-mail, whether or not such an account exists, so the limit reveals nothing) and
+ * from its IP's bucket; a successful sign-in gives both back, so only failures count.
+ * Five failures lock an account for about a minute per further try; thirty failures from one
+ * address slow that address to one try every ten seconds.
+ */
+export const signInLimits = {
+	perAccount: createLimiter({ ratePerSecond: 1 / 60, burst: 5 }),
+	perIp: createLimiter({ ratePerSecond: 1 / 10, burst: 30 })
+};
+
+/** Mail-sending actions a stranger can trigger (reset links, verification resends, sign-ups). */
+export const mailLimits = {
+	perAddress: createLimiter({ ratePerSecond: 1 / 120, burst: 3 }),
+	perIp: createLimiter({ ratePerSecond: 1 / 30, burst: 30 })
+};
+
+/** Invitations sent per team. */
+export const inviteLimits = createLimiter({ ratePerSecond: 1 / 60, burst: 30 });

@@ -1,0 +1,14 @@
+import type { LayoutServerLoad } from './$types';
+import { getDb } from '$lib/server/db';
+import { listTeamsForUser } from '$lib/server/db/teams';
+import { config } from '$lib/server/config';
+
+export const load: LayoutServerLoad = async ({ locals }) => {
+	if (!locals.user) return { user: null, teams: [], showOutbox: false };
+	const teams = await listTeamsForUser(getDb(), locals.user.id);
+	return {
+		user: locals.user,
+		teams: teams.map((t) => ({ slug: t.slug, name: t.name, role: t.role, memberCount: Number(t.member_count) })),
+		showOutbox: config().devTools && teams.some((t) => t.role === 'owner')
+	};
+};

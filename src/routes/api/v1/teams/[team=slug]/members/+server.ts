@@ -1,0 +1,11 @@
+import type { RequestHandler } from './$types';
+import { getDb } from '$lib/server/db';
+import { apiRoute } from '$lib/server/api';
+import { requireTeam } from '$lib/server/guard';
+import { listMembers } from '$lib/server/db/memberships';
+
+export const GET: RequestHandler = apiRoute(async (event) => {
+	const access = await requireTeam(event, event.params.team, 'read');
+	const members = await listMembers(getDb(), access.team.id);
+	return { members: members.map((m) => ({ name: m.name, email: m.email, role: m.role, since: m.created_at })) };
+});

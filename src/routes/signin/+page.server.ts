@@ -1,0 +1,34 @@
+import { redirect } from '@sveltejs/kit';
+import { z } from 'zod';
+import type { Actions, PageServerLoad } from './$types';
+import { getDb } from '$lib/server/db';
+import { createSession, setSessionCookie, signIn } from '$lib/server/auth';
+import { fields, parseForm, runAction, safeNext } from '$lib/server/forms';
+import { clientIp, clientMeta } from '$lib/server/request';
+
+export const load: PageServerLoad = async ({ locals, url }) => {
+	const next = safeNext(url.searchParams.get('next'));
+	if (locals.user) redirect(303, next);
+	return { next, reset: url.searchParams.has('reset') };
+};
+
+const schema = z.object({
+	email: fields.email,
+	password: fields.password,
+	next: z.string().optional()
+});
+
+export const actions: Actions = {
+	default: async (event) => {
+		const parsed = parseForm(schema, await event.request.formData(), ['email', 'next']);
+		if (!parsed.ok) return parsed.failure;
+		const { email, password, next } = parsed.data;
+		return runAction(parsed.values, async () => {
+			const db = getDb();
+			const user = await signIn(db, { email, password }, clientIp(event));
+			const { token, expiresAt } = await createSession(db, user.id, clientMeta(event));
+			setSessionCookie(event.cookies, event.url, token, expiresAt);
+			redirect(303, safeNext(next));
+		}, event);
+	}
+};

@@ -1,0 +1,44 @@
+import { redirect } from '@sveltejs/kit';
+import { z } from 'zod';
+import type { Actions, PageServerLoad } from './$types';
+import { getDb } from '$lib/server/db';
+import { createSession, PASSWORD_MIN, setSessionCookie, signUp } from '$lib/server/auth';
+import { fields, parseForm, runAction, safeNext } from '$lib/server/forms';
+import { clientMeta, flowContext } from '$lib/server/request';
+import { inspectInvite } from '$lib/server/teams';
+
+export const load: PageServerLoad = async ({ locals, url }) => {
+	const next = safeNext(url.searchParams.get('next'));
+	if (locals.user) redirect(303, next);
+	const token = url.searchParams.get('invite');
+	const view = token ? await inspectInvite(getDb(), token) : null;
+	const invite = view && view.state === 'open' ? { token: token!, email: view.invite.email, team: view.team.name, role: view.invite.role } : null;
+	return { next, invite, passwordMin: PASSWORD_MIN };
+};
+
+const schema = z.object({
+	name: fields.personName,
+	email: fields.email,
+	password: fields.password,
+	next: z.string().optional(),
+	invite: z.string().max(100).optional()
+});
+
+export const actions: Actions = {
+	default: async (event) => {
+		const parsed = parseForm(schema, await event.request.formData(), ['name', 'email', 'next', 'invite']);
+		if (!parsed.ok) return parsed.failure;
+		const { name, email, password, next, invite } = parsed.data;
+		return runAction(
+			parsed.values,
+			async () => {
+				const db = getDb();
+				const user = await signUp(db, { name, email, password }, flowContext(event));
+				const { token, expiresAt } = await createSession(db, user.id, clientMeta(event));
+				setSessionCookie(event.cookies, event.url, token, expiresAt);
+				redirect(303, invite ? `/invite/${encodeURIComponent(invite)}` : safeNext(next));
+			},
+			event
+		);
+	}
+};

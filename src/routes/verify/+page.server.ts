@@ -1,0 +1,35 @@
+import type { Actions, PageServerLoad } from './$types';
+import { getDb } from '$lib/server/db';
+import { sendVerification, verifyEmail } from '$lib/server/auth';
+import { requireUser } from '$lib/server/guard';
+import { runAction } from '$lib/server/forms';
+import { flowContext } from '$lib/server/request';
+import { isAppError } from '$lib/server/errors';
+
+// Following the e-mailed link confirms the address (the link is single-use and expires).
+export const load: PageServerLoad = async ({ url, locals }) => {
+	const token = url.searchParams.get('token');
+	if (token === null) return { result: null, signedIn: !!locals.user, verified: locals.user?.emailVerified ?? false, email: locals.user?.email ?? null };
+	try {
+		const { user, alreadyVerified } = await verifyEmail(getDb(), token);
+		return { result: { ok: true as const, email: user.email, alreadyVerified }, signedIn: !!locals.user, verified: true, email: user.email };
+	} catch (e) {
+		if (!isAppError(e)) throw e;
+		return { result: { ok: false as const, message: e.message }, signedIn: !!locals.user, verified: locals.user?.emailVerified ?? false, email: locals.user?.email ?? null };
+	}
+};
+
+export const actions: Actions = {
+	resend: async (event) => {
+		const user = requireUser(event);
+		if (user.emailVerified) return { resent: false, already: true };
+		return runAction(
+			{},
+			async () => {
+				await sendVerification(getDb(), user, flowContext(event));
+				return { resent: true, already: false };
+			},
+			event
+		);
+	}
+};
