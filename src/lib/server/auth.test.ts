@@ -1,0 +1,238 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import {
+	changePassword,
+	createSession,
+	hashPassword,
+	invalidateSession,
+	invalidateUserSessions,
+	passwordProblem,
+	requestPasswordReset,
+	resetPassword,
+	sendVerification,
+	SESSION_DAYS,
+	sessionCookieName,
+	signIn,
+	signUp,
+	validateSession,
+	verifyEmail,
+	verifyPassword
+} from './auth';
+import { createLimiter } from './rate-limit';
+import { linkIn, setupIntegration } from './testing';
+import { getUserByEmail } from './db/users';
+import { listUserSessions } from './db/sessions';
+import { sha256 } from './secrets';
+import { AppError } from './errors';
+
+let env: Awaited<ReturnType<typeof setupIntegration>>;
+beforeEach(async () => {
+	env = await setupIntegration();
+});
+afterEach(async () => {
+	await env.close();
+});
+
+const meta = { ip: '192.0.2.1', userAgent: 'vitest' };
+const freshLimits = () => ({ perAccount: createLimiter({ ratePerSecond: 1 / 60, burst: 5 }), perIp: createLimiter({ ratePerSecond: 1 / 10, burst: 30 }) });
+
+async function expectAppError(p: Promise<unknown>, status: number, code: string) {
+	const e = await p.then(
+		() => null,
+		(err: unknown) => err
+	);
+	expect(e).toBeInstanceOf(AppError);
+	expect((e as AppError).status).toBe(status);
+	expect((e as AppError).code).toBe(code);
+	return e as AppError;
+}
+
+describe('passwords', () => {
+	it('hashes with argon2id and verifies only the right password', async () => {
+		const h = await hashPassword('correct horse battery');
+		expect(h).toMatch(/^\$argon2id\$v=19\$m=19456,t=2,p=1\$/);
+		expect(await verifyPassword(h, 'correct horse battery')).toBe(true);
+		expect(await verifyPassword(h, 'correct horse batterY')).toBe(false);
+		expect(await verifyPassword('not a hash', 'x')).toBe(false);
+	});
+
+	it('says what is wrong with a weak password', () => {
+		expect(passwordProblem('short')).toMatch(/at least 10/);
+		expect(passwordProblem('a'.repeat(257))).toMatch(/at most 256/);
+		expect(passwordProblem('aaaaaaaaaaaa')).toMatch(/repeated/);
+		expect(passwordProblem('me@example.com', 'ME@example.com')).toMatch(/e-mail/);
+		expect(passwordProblem('a sensible passphrase')).toBeNull();
+	});
+});
+
+describe('sign-up and sign-in', () => {
+	it('signs up, mails a confirmation link, and signs in', async () => {
+		const u = await signUp(env.db, { name: 'Ines Duarte', email: 'Ines@Example.com', password: 'long enough pass' }, env.ctx);
+		expect(u.email).toBe('ines@example.com');
+		expect(u.email_verified_at).toBeNull();
+		expect(u.password_hash).not.toContain('long enough pass');
+		const [mail] = await env.mailTo('ines@example.com');
+		expect(mail.subject).toBe('Confirm your e-mail address for Statewright');
+		expect((await signIn(env.db, { email: 'INES@example.com', password: 'long enough pass' }, '192.0.2.1', freshLimits())).id).toBe(u.id);
+	});
+
+	it('refuses a taken address, a weak password, and a wrong password', async () => {
+		await signUp(env.db, { name: 'A', email: 'a@example.com', password: 'long enough pass' }, env.ctx);
+		await expectAppError(signUp(env.db, { name: 'B', email: 'A@example.com', password: 'another long one' }, env.ctx), 409, 'email-taken');
+		const weak = await expectAppError(signUp(env.db, { name: 'C', email: 'c@example.com', password: 'short' }, env.ctx), 400, 'weak-password');
+		expect(weak.field).toBe('password');
+		expect(await getUserByEmail(env.db, 'c@example.com')).toBeUndefined();
+		const wrong = await expectAppError(signIn(env.db, { email: 'a@example.com', password: 'not the password' }, '192.0.2.1', freshLimits()), 400, 'wrong-credentials');
+		// the same answer for an unknown address: no account probing
+		const unknown = await expectAppError(signIn(env.db, { email: 'nobody@example.com', password: 'not the password' }, '192.0.2.1', freshLimits()), 400, 'wrong-credentials');
+		expect(unknown.message).toBe(wrong.message);
+	});
+
+	it('locks an account after five failures, even for the right password, and counts only failures', async () => {
+		await signUp(env.db, { name: 'R', email: 'r@example.com', password: 'the right password' }, env.ctx);
+		const limits = freshLimits();
+		// successes give their token back: ten good sign-ins never lock anyone
+		for (let i = 0; i < 10; i++) await signIn(env.db, { email: 'r@example.com', password: 'the right password' }, '192.0.2.1', limits);
+		for (let i = 0; i < 5; i++) await expectAppError(signIn(env.db, { email: 'r@example.com', password: 'wrong' }, '192.0.2.1', limits), 400, 'wrong-credentials');
+		const locked = await expectAppError(signIn(env.db, { email: 'r@example.com', password: 'the right password' }, '192.0.2.2', limits), 429, 'rate-limited');
+		expect(locked.retryAfterMs).toBeGreaterThan(0);
+		expect(locked.message).toMatch(/Try again in \d+ seconds/);
+	});
+
+	it('limits one address trying many accounts', async () => {
+		const limits = freshLimits();
+		for (let i = 0; i < 30; i++) await expectAppError(signIn(env.db, { email: `u${i}@example.com`, password: 'x' }, '198.51.100.7', limits), 400, 'wrong-credentials');
+		await expectAppError(signIn(env.db, { email: 'fresh@example.com', password: 'x' }, '198.51.100.7', limits), 429, 'rate-limited');
+		// another address is unaffected
+		await expectAppError(signIn(env.db, { email: 'fresh@example.com', password: 'x' }, '198.51.100.8', limits), 400, 'wrong-credentials');
+	});
+});
+
+describe('sessions', () => {
+	it('stores only a hash of the token and validates it', async () => {
+		const u = await signUp(env.db, { name: 'S', email: 's@example.com', password: 'long enough pass' }, env.ctx);
+		const { token, expiresAt } = await createSession(env.db, u.id, meta);
+		expect(token).toMatch(/^[a-z0-9]{40}$/);
+		expect(expiresAt - Date.now()).toBeGreaterThan((SESSION_DAYS - 1) * 86_400_000);
+		const [row] = await listUserSessions(env.db, u.id);
+		expect(row.id).toBe(sha256(token));
+		expect(row.id).not.toBe(token);
+		expect(row.ip).toBe('192.0.2.1');
+		const v = await validateSession(env.db, token);
+		expect(v?.user).toEqual({ id: u.id, email: 's@example.com', name: 'S', emailVerified: false });
+		expect(v?.session.renewed).toBe(false);
+		// the stored hash is not itself a valid cookie value
+		expect(await validateSession(env.db, row.id)).toBeNull();
+		expect(await validateSession(env.db, 'garbage!')).toBeNull();
+	});
+
+	it('renews a session used in its second half and drops an expired one', async () => {
+		const u = await signUp(env.db, { name: 'S', email: 's@example.com', password: 'long enough pass' }, env.ctx);
+		const { token } = await createSession(env.db, u.id, meta);
+		const id = sha256(token);
+		await env.db.updateTable('sessions').set({ expires_at: Date.now() + 10 * 86_400_000 }).where('id', '=', id).execute();
+		const v = await validateSession(env.db, token);
+		expect(v?.session.renewed).toBe(true);
+		expect(v!.session.expiresAt - Date.now()).toBeGreaterThan(29 * 86_400_000);
+		await env.db.updateTable('sessions').set({ expires_at: Date.now() - 1 }).where('id', '=', id).execute();
+		expect(await validateSession(env.db, token)).toBeNull();
+		expect(await listUserSessions(env.db, u.id)).toEqual([]);
+	});
+
+	it('signs out one session, the others, or everywhere', async () => {
+		const u = await signUp(env.db, { name: 'S', email: 's@example.com', password: 'long enough pass' }, env.ctx);
+		const a = await createSession(env.db, u.id, meta);
+		const b = await createSession(env.db, u.id, meta);
+		const c = await createSession(env.db, u.id, meta);
+		await invalidateSession(env.db, a.token);
+		expect(await validateSession(env.db, a.token)).toBeNull();
+		expect(await invalidateUserSessions(env.db, u.id, sha256(b.token))).toBe(1);
+		expect(await validateSession(env.db, b.token)).not.toBeNull();
+		expect(await validateSession(env.db, c.token)).toBeNull();
+		await invalidateUserSessions(env.db, u.id);
+		expect(await validateSession(env.db, b.token)).toBeNull();
+	});
+
+	it('names the cookie by the origin: __Host- and Secure only on https', () => {
+		expect(sessionCookieName(new URL('https://sw.example.org/'))).toBe('__Host-statewright_session');
+		expect(sessionCookieName(new URL('http://192.168.1.20:3000/'))).toBe('statewright_session');
+	});
+});
+
+describe('e-mail verification', () => {
+	it('confirms the address from the mailed link, once', async () => {
+		const u = await signUp(env.db, { name: 'V', email: 'v@example.com', password: 'long enough pass' }, env.ctx);
+		const [mail] = await env.mailTo('v@example.com');
+		const token = new URL(linkIn(mail.text, 'http://statewright.test/verify?token=')).searchParams.get('token')!;
+		const first = await verifyEmail(env.db, token);
+		expect(first.alreadyVerified).toBe(false);
+		expect(first.user.email_verified_at).not.toBeNull();
+		expect((await verifyEmail(env.db, token)).alreadyVerified).toBe(true);
+		await expectAppError(verifyEmail(env.db, 'made-up'), 400, 'link-invalid');
+		expect(u.id).toBe(first.user.id);
+	});
+
+	it('retires the old link when a new one is sent, and refuses an expired one', async () => {
+		const u = await signUp(env.db, { name: 'V', email: 'v@example.com', password: 'long enough pass' }, env.ctx);
+		await sendVerification(env.db, u, env.ctx);
+		const mails = await env.mailTo('v@example.com');
+		expect(mails).toHaveLength(2);
+		const newest = new URL(linkIn(mails[0].text, 'http://statewright.test/verify')).searchParams.get('token')!;
+		const oldest = new URL(linkIn(mails[1].text, 'http://statewright.test/verify')).searchParams.get('token')!;
+		await expectAppError(verifyEmail(env.db, oldest), 400, 'link-used');
+		await env.db.updateTable('email_tokens').set({ expires_at: Date.now() - 1 }).where('token_hash', '=', sha256(newest)).execute();
+		await expectAppError(verifyEmail(env.db, newest), 400, 'link-expired');
+	});
+});
+
+describe('password reset by e-mail', () => {
+	it('mails a one-time link that sets a new password and ends every session', async () => {
+		const u = await signUp(env.db, { name: 'P', email: 'p@example.com', password: 'old password here' }, env.ctx);
+		const s = await createSession(env.db, u.id, meta);
+		await requestPasswordReset(env.db, 'P@example.com', env.ctx);
+		const [mail] = await env.mailTo('p@example.com');
+		expect(mail.subject).toBe('Reset your Statewright password');
+		const token = new URL(linkIn(mail.text, 'http://statewright.test/reset?token=')).searchParams.get('token')!;
+		await expectAppError(resetPassword(env.db, token, 'short'), 400, 'weak-password');
+		await resetPassword(env.db, token, 'brand new password');
+		expect(await validateSession(env.db, s.token)).toBeNull();
+		await expectAppError(signIn(env.db, { email: 'p@example.com', password: 'old password here' }, null, freshLimits()), 400, 'wrong-credentials');
+		await signIn(env.db, { email: 'p@example.com', password: 'brand new password' }, null, freshLimits());
+		// the mail proved the address
+		expect((await getUserByEmail(env.db, 'p@example.com'))?.email_verified_at).not.toBeNull();
+		// used up
+		await expectAppError(resetPassword(env.db, token, 'another new password'), 400, 'link-used');
+	});
+
+	it('says nothing for an unknown address and refuses an expired link', async () => {
+		await requestPasswordReset(env.db, 'ghost@example.com', env.ctx);
+		expect(await env.mailTo('ghost@example.com')).toEqual([]);
+		await signUp(env.db, { name: 'P', email: 'p@example.com', password: 'old password here' }, env.ctx);
+		await requestPasswordReset(env.db, 'p@example.com', env.ctx);
+		const [mail] = await env.mailTo('p@example.com');
+		const token = new URL(linkIn(mail.text, 'http://statewright.test/reset')).searchParams.get('token')!;
+		await env.db.updateTable('email_tokens').set({ expires_at: Date.now() - 1 }).where('token_hash', '=', sha256(token)).execute();
+		await expectAppError(resetPassword(env.db, token, 'brand new password'), 400, 'link-expired');
+	});
+
+	it('limits reset mails per address', async () => {
+		await signUp(env.db, { name: 'P', email: 'p@example.com', password: 'old password here' }, env.ctx);
+		// sign-up used one of the three; two more are allowed
+		await requestPasswordReset(env.db, 'p@example.com', env.ctx);
+		await requestPasswordReset(env.db, 'p@example.com', env.ctx);
+		await expectAppError(requestPasswordReset(env.db, 'p@example.com', env.ctx), 429, 'rate-limited');
+	});
+});
+
+describe('changing the password', () => {
+	it('needs the current password, keeps this session, ends the others and sends a notice', async () => {
+		const u = await signUp(env.db, { name: 'C', email: 'c@example.com', password: 'first password' }, env.ctx);
+		const keep = await createSession(env.db, u.id, meta);
+		const other = await createSession(env.db, u.id, meta);
+		const user = (await validateSession(env.db, keep.token))!.user;
+		await expectAppError(changePassword(env.db, user, { current: 'nope', next: 'second password', keepSessionId: sha256(keep.token) }, env.ctx), 400, 'wrong-password');
+		expect(await changePassword(env.db, user, { current: 'first password', next: 'second password', keepSessionId: sha256(keep.token) }, env.ctx)).toBe(1);
+		expect(await validateSession(env.db, keep.token)).not.toBeNull();
+		expect(await validateSession(env.db, other.token)).toBeNull();
+		expect((await env.mailTo('c@example.com')).map((m) => m.subject)).toContain('Your Statewright password was changed');
+	});
+});

@@ -1,0 +1,40 @@
+import type { Kysely } from 'kysely';
+import { createTestDb } from './db';
+import type { Database } from './db/schema';
+import { createMailer, type Mailer } from './mail';
+import type { FlowContext } from './auth';
+import { listOutboxMessages } from './db/outbox';
+import { mailLimits, signInLimits, inviteLimits } from './rate-limit';
+
+/**
+ * For integration tests: a fresh migrated in-memory database and a real local fake SMTP server
+ * storing into it. Not used by the app.
+ */
+export async function setupIntegration(origin = 'http://statewright.test'): Promise<{
+	db: Kysely<Database>;
+	mailer: Mailer;
+	ctx: FlowContext;
+	mailTo(address: string): Promise<Array<{ subject: string; text: string }>>;
+	close(): Promise<void>;
+}> {
+	const db = await createTestDb();
+	const mailer = await createMailer({ db, from: 'Statewright <no-reply@statewright.test>' });
+	for (const l of [mailLimits.perAddress, mailLimits.perIp, signInLimits.perAccount, signInLimits.perIp, inviteLimits]) l.reset();
+	return {
+		db,
+		mailer,
+		ctx: { origin, send: (m) => mailer.send(m), ip: '192.0.2.10' },
+		mailTo: (address) => listOutboxMessages(db, { to: address }),
+		async close() {
+			await mailer.close();
+			await db.destroy();
+		}
+	};
+}
+
+/** The first link in a mail's text that starts with `prefix`. */
+export function linkIn(text: string, prefix: string): string {
+	const m = text.match(/https?:\/\/\S+/g)?.find((u) => u.startsWith(prefix));
+	if (!m) throw new Error(`no link starting with ${prefix} in:\n${text}`);
+	return m;
+}
