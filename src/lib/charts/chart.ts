@@ -1,0 +1,808 @@
+import { drag, pointer, select, zoom, zoomIdentity, type Selection, type ZoomBehavior, type ZoomTransform } from 'd3';
+import type { UnitPrefs } from '$lib/units';
+import { clampCoords } from './clamp';
+import { isPressureLimit, legAriaLabel, LIMIT_ORDER, limitText, stateAriaLabel } from './describe';
+import { LEG_STROKE, LIMIT_STROKE, processStyle } from './encoding';
+import { KEY, keyEntries, layoutKey } from './key';
+import { ObstacleIndex, placeEdgeLabels, placeNear, textWidth, type LabelRequest } from './labels';
+import { axisTicks, axisUnit, compactNumber, fitDomain, makeXScale, makeYScale, thinLabels, yScaleType, type Scale, type Tick } from './scales';
+import { DRAWING_CSS, OVERLAY_CSS } from './style';
+import type {
+	ChartCoords,
+	ChartKind,
+	ChartLeg,
+	ChartSelection,
+	ChartState,
+	CurvePoint,
+	DesignLimitName,
+	DesignLimits,
+	Domain,
+	FluidRange,
+	Isoline,
+	MeasuredTrace,
+	Point,
+	PressureScale,
+	Rect,
+	SaturationCurve,
+	TriplePoint
+} from './types';
+
+/** Everything that changes rarely: redrawing it redraws the whole chart. */
+export interface ChartFrame {
+	kind: ChartKind;
+	pressureScale: PressureScale;
+	width: number;
+	height: number;
+	units: UnitPrefs;
+	saturation?: SaturationCurve | null;
+	triple?: TriplePoint | null;
+	range?: FluidRange | null;
+	isolines?: readonly Isoline[] | null;
+	limits?: DesignLimits | null;
+	/** a fixed window instead of the fitted one */
+	domain?: Domain | null;
+	fluidName?: string;
+}
+
+/** What changes while a designer drags: redrawing it touches only the path layers. */
+export interface ChartPath {
+	states: readonly ChartState[];
+	legs: readonly ChartLeg[];
+	selection: ChartSelection | null;
+	traces?: readonly MeasuredTrace[] | null;
+}
+
+export interface ChartInteraction {
+	mode: 'select' | 'add-leg';
+	canDrag: (stateId: string) => boolean;
+}
+
+export interface StateDragEvent {
+	stateId: string;
+	/** pointer position in SI, clamped to the fluid's valid range */
+	coords: ChartCoords;
+	/** why the position was clamped, or null */
+	reason: string | null;
+}
+
+export interface AddPointEvent {
+	coords: ChartCoords;
+	reason: string | null;
+}
+
+export interface NudgeEvent {
+	target: ChartSelection;
+	/** the state the nudge moves: the state itself, or a leg's end state */
+	stateId: string;
+	direction: 'left' | 'right' | 'up' | 'down';
+	/** Alt = fine (1 px), plain = normal (4 px), Shift = coarse (20 px) */
+	step: 'fine' | 'normal' | 'coarse';
+	/** the moved state's position after the nudge, SI, clamped */
+	coords: ChartCoords;
+	reason: string | null;
+}
+
+export interface HoverEvent {
+	coords: ChartCoords;
+	/** set when the pointer is outside the fluid's valid range */
+	reason: string | null;
+}
+
+export interface ChartHandlers {
+	select(selection: ChartSelection | null): void;
+	dragStart(e: StateDragEvent): void;
+	drag(e: StateDragEvent): void;
+	dragEnd(e: StateDragEvent): void;
+	add(e: AddPointEvent): void;
+	nudge(e: NudgeEvent): void;
+	hover(e: HoverEvent | null): void;
+}
+
+export interface ChartController {
+	setFrame(frame: ChartFrame): void;
+	setPath(path: ChartPath): void;
+	setInteraction(interaction: ChartInteraction): void;
+	/** back to the fitted window (what double-click does) */
+	resetView(): void;
+	/** the plot rectangle in SVG px (for tests and benchmarks) */
+	plotRect(): Rect;
+	/** SI coordinates → SVG px */
+	toScreen(c: ChartCoords): Point | null;
+	destroy(): void;
+}
+
+type G = Selection<SVGGElement, unknown, null, undefined>;
+
+const NUDGE_PX = { fine: 1, normal: 4, coarse: 20 } as const;
+const STATE_R = 9.5;
+const MARGIN = { right: 18, bottom: 46, left: 66 } as const;
+let instances = 0;
+
+function polylineD(points: readonly Point[]): string {
+	let d = '';
+	for (let i = 0; i < points.length; i++) {
+		const p = points[i];
+		if (!Number.isFinite(p.x) || !Number.isFinite(p.y)) continue;
+		d += `${d === '' ? 'M' : 'L'}${p.x.toFixed(1)},${p.y.toFixed(1)}`;
+	}
+	return d;
+}
+
+function diamond(size: number): string {
+	return `M0,${-size}L${size},0L0,${size}L${-size},0Z`;
+}
+
+/**
+ * Draw a T–v or P–v chart into two stacked SVG elements: `drawing` (role="img", the picture
+ * that is exported) and `overlay` (transparent, on top: focusable marks, zoom, drag, hover).
+ * The frame (axes, dome, isolines, limits) is redrawn only by `setFrame` and zoom; `setPath`
+ * updates the legs, states, crossings, traces, key and the labels that must avoid them, with
+ * keyed joins.
+ */
+export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, handlers: ChartHandlers): ChartController {
+	const uid = `swc${++instances}`;
+	let frame: ChartFrame | null = null;
+	let path: ChartPath = { states: [], legs: [], selection: null, traces: [] };
+	let interaction: ChartInteraction = { mode: 'select', canDrag: () => true };
+	let transform: ZoomTransform = zoomIdentity;
+	let baseDomain: Domain | null = null;
+	let domainKey: unknown[] = [];
+	let fittedWithPath = false;
+	let keyRows = 0;
+	let x: Scale | null = null;
+	let y: Scale | null = null;
+	let plot: Rect = { x: 0, y: 0, width: 0, height: 0 };
+	let dragging: { id: string; moved: boolean } | null = null;
+
+	// ---- drawing skeleton
+	const svg = select(drawing).attr('class', 'swc-drawing');
+	svg.selectAll('*:not(title):not(desc)').remove();
+	svg.append('style').text(DRAWING_CSS);
+	const clipRect = svg.append('defs').append('clipPath').attr('id', `${uid}-clip`).append('rect');
+	const plate = svg.append('rect').attr('class', 'swc-plate');
+	const root = svg.append('g');
+	const gGrid = root.append('g').attr('class', 'swc-grid');
+	const clipped = root.append('g').attr('clip-path', `url(#${uid}-clip)`);
+	const domeFill = clipped.append('path').attr('class', 'swc-dome-fill');
+	const gIso = clipped.append('g');
+	const domeLine = clipped.append('path').attr('class', 'swc-dome-line');
+	const tripleLine = clipped.append('line').attr('class', 'swc-triple');
+	const gLimits = clipped.append('g');
+	const gTraces = clipped.append('g');
+	const gLegs = clipped.append('g');
+	const gCross = clipped.append('g');
+	const cp = clipped.append('circle').attr('class', 'swc-cp').attr('r', 3.5);
+	const gStates = clipped.append('g');
+	const gLabels = root.append('g');
+	const cpLabel = gLabels.append('text').attr('class', 'swc-cp-label').text('c.p.');
+	const frameRect = root.append('rect').attr('class', 'swc-frame');
+	const gAxes = root.append('g');
+	const gKey = root.append('g').attr('class', 'swc-key');
+
+	// ---- overlay skeleton
+	const ov = select(overlay).attr('class', 'swc-overlay');
+	ov.selectAll('*').remove();
+	ov.append('style').text(OVERLAY_CSS);
+	const oroot = ov.append('g');
+	const bg = oroot.append('rect').attr('class', 'swc-bg');
+	const crossV = oroot.append('line').attr('class', 'swc-cross').style('display', 'none');
+	const crossH = oroot.append('line').attr('class', 'swc-cross').style('display', 'none');
+	const hitLegs = oroot.append('g');
+	const hitStates = oroot.append('g');
+	const ghost = oroot.append('circle').attr('class', 'swc-ghost').attr('r', STATE_R + 3).style('display', 'none');
+
+	const yOf = (p: { T: number; P: number }) => (frame!.kind === 'T-v' ? p.T : p.P);
+	const project = (p: { v: number; T: number; P: number }): Point => ({ x: plot.x + x!(p.v), y: plot.y + y!(yOf(p)) });
+	const dataAt = (px: number, py: number): ChartCoords => {
+		const v = x!.invert(px - plot.x);
+		const q = y!.invert(py - plot.y);
+		return frame!.kind === 'T-v' ? { T: q, v } : { P: q, v };
+	};
+	const clamp = (c: ChartCoords) => clampCoords(frame!.kind, c, { triple: frame!.triple, range: frame!.range, saturation: frame!.saturation }, frame!.units);
+
+	function margins() {
+		return { top: 16 + Math.max(1, keyRows) * KEY.row, ...MARGIN };
+	}
+
+	function computeKeyRows(width: number): number {
+		return layoutKey(currentKeyEntries(), width - MARGIN.left - MARGIN.right).rows;
+	}
+
+	function currentKeyEntries() {
+		return keyEntries(path.legs, { limits: drawnLimits().length > 0, traces: (path.traces ?? []).some((t) => t.points.some((p) => p.v)) });
+	}
+
+	/** Limits that can be drawn on this chart kind: straight rules, or curves when points are given. */
+	function drawnLimits(): { name: DesignLimitName; value: number; points?: readonly CurvePoint[]; straight: boolean }[] {
+		if (!frame?.limits) return [];
+		const out = [];
+		for (const name of LIMIT_ORDER) {
+			const lim = frame.limits[name];
+			if (!lim) continue;
+			const straight = (frame.kind === 'T-v') !== isPressureLimit(name);
+			if (straight) out.push({ name, value: lim.value, straight });
+			else if (lim.points && lim.points.length > 1) out.push({ name, value: lim.value, points: lim.points, straight });
+		}
+		return out;
+	}
+
+	function ensureDomain() {
+		const f = frame!;
+		const key = [f.kind, f.pressureScale, f.saturation, f.domain, f.triple];
+		const changed = key.length !== domainKey.length || key.some((k, i) => k !== domainKey[i]);
+		if (changed || !baseDomain) {
+			domainKey = key;
+			baseDomain = f.domain ?? fitDomain(f.kind, f.pressureScale, { saturation: f.saturation, triple: f.triple, states: path.states, legs: path.legs, limits: f.limits });
+			fittedWithPath = path.states.length > 0;
+			transform = zoomIdentity;
+			ov.property('__zoom', zoomIdentity);
+		}
+	}
+
+	function layout() {
+		const f = frame!;
+		keyRows = computeKeyRows(f.width);
+		const m = margins();
+		plot = { x: m.left, y: m.top, width: Math.max(10, f.width - m.left - m.right), height: Math.max(10, f.height - m.top - m.bottom) };
+		const x0 = makeXScale(baseDomain!, plot.width);
+		const y0 = makeYScale(f.kind, f.pressureScale, baseDomain!, plot.height);
+		x = transform.rescaleX(x0);
+		y = transform.rescaleY(y0);
+	}
+
+	// ---- frame drawing
+	function drawFrame() {
+		if (!frame || frame.width <= 0 || frame.height <= 0) return;
+		ensureDomain();
+		layout();
+		const f = frame;
+		svg.attr('width', f.width).attr('height', f.height).attr('viewBox', `0 0 ${f.width} ${f.height}`);
+		ov.attr('width', f.width).attr('height', f.height).attr('viewBox', `0 0 ${f.width} ${f.height}`);
+		plate.attr('width', f.width).attr('height', f.height);
+		clipRect.attr('x', plot.x).attr('y', plot.y).attr('width', plot.width).attr('height', plot.height);
+		frameRect.attr('x', plot.x).attr('y', plot.y).attr('width', plot.width).attr('height', plot.height);
+		bg.attr('x', plot.x).attr('y', plot.y).attr('width', plot.width).attr('height', plot.height);
+		drawAxes();
+		drawDome();
+		drawIsolines();
+		drawLimits();
+		drawPath();
+	}
+
+	function drawAxes() {
+		const f = frame!;
+		const atm = f.units.atmosphere;
+		const vUnit = axisUnit('v', f.units, f.pressureScale);
+		const yAxis = f.kind === 'T-v' ? 'T' : 'P';
+		const yDomain = y!.domain() as [number, number];
+		const yUnit = axisUnit(yAxis, f.units, f.pressureScale, yDomain);
+		const xDomain = x!.domain() as [number, number];
+		const xt = thinLabels(axisTicks('log', xDomain, vUnit, atm), (s) => x!(s), 8, (l) => textWidth(l, 10));
+		const yt = thinLabels(axisTicks(yScaleType(f.kind, f.pressureScale), yDomain, yUnit, atm, Math.max(3, Math.round(plot.height / 60))), (s) => -y!(s), 4, () => 11);
+		const inX = (t: Tick) => x!(t.value) >= -0.5 && x!(t.value) <= plot.width + 0.5;
+		const inY = (t: Tick) => y!(t.value) >= -0.5 && y!(t.value) <= plot.height + 0.5;
+		const xs = xt.filter(inX);
+		const ys = yt.filter(inY);
+
+		gGrid
+			.selectAll('line.gx')
+			.data(xs.filter((t) => t.major))
+			.join('line')
+			.attr('class', 'gx')
+			.attr('x1', (t) => plot.x + x!(t.value))
+			.attr('x2', (t) => plot.x + x!(t.value))
+			.attr('y1', plot.y)
+			.attr('y2', plot.y + plot.height);
+		gGrid
+			.selectAll('line.gy')
+			.data(ys.filter((t) => t.major))
+			.join('line')
+			.attr('class', 'gy')
+			.attr('x1', plot.x)
+			.attr('x2', plot.x + plot.width)
+			.attr('y1', (t) => plot.y + y!(t.value))
+			.attr('y2', (t) => plot.y + y!(t.value));
+
+		// inward ticks on all four sides, like a drafting frame
+		const tickPath = (t: Tick, axis: 'x' | 'y') => {
+			const len = t.major ? 6 : 3;
+			if (axis === 'x') {
+				const px = (plot.x + x!(t.value)).toFixed(1);
+				return `M${px},${plot.y + plot.height}v${-len}M${px},${plot.y}v${len}`;
+			}
+			const py = (plot.y + y!(t.value)).toFixed(1);
+			return `M${plot.x},${py}h${len}M${plot.x + plot.width},${py}h${-len}`;
+		};
+		gAxes
+			.selectAll('path.swc-tick')
+			.data([xs.map((t) => tickPath(t, 'x')).join('') + ys.map((t) => tickPath(t, 'y')).join('')])
+			.join('path')
+			.attr('class', 'swc-tick')
+			.attr('d', (d) => d);
+		gAxes
+			.selectAll('text.xl')
+			.data(xs.filter((t) => t.label))
+			.join('text')
+			.attr('class', 'xl swc-num')
+			.attr('x', (t) => plot.x + x!(t.value))
+			.attr('y', plot.y + plot.height + 15)
+			.attr('text-anchor', 'middle')
+			.text((t) => t.label);
+		gAxes
+			.selectAll('text.yl')
+			.data(ys.filter((t) => t.label))
+			.join('text')
+			.attr('class', 'yl swc-num')
+			.attr('x', plot.x - 7)
+			.attr('y', (t) => plot.y + y!(t.value))
+			.attr('dy', '0.34em')
+			.attr('text-anchor', 'end')
+			.text((t) => t.label);
+
+		const titles = [
+			{ cls: 'xt', sym: 'v', word: 'specific volume', unit: `${vUnit.label}, log`, x: plot.x + plot.width / 2, y: plot.y + plot.height + 36, rotate: false },
+			{
+				cls: 'yt',
+				sym: yAxis,
+				word: yAxis === 'T' ? 'temperature' : 'pressure',
+				unit: yAxis === 'P' && f.pressureScale === 'log' ? `${yUnit.label}, log` : yUnit.label,
+				x: 16,
+				y: plot.y + plot.height / 2,
+				rotate: true
+			}
+		];
+		gAxes
+			.selectAll('text.swc-title')
+			.data(titles, (d) => (d as { cls: string }).cls)
+			.join((enter) => {
+				const t = enter.append('text').attr('text-anchor', 'middle');
+				t.append('tspan').attr('class', 'w');
+				t.append('tspan').attr('class', 'swc-sym');
+				t.append('tspan').attr('class', 'swc-unit');
+				return t;
+			})
+			.attr('class', (d) => `swc-title ${d.cls}`)
+			.attr('transform', (d) => (d.rotate ? `translate(${d.x},${d.y}) rotate(-90)` : `translate(${d.x},${d.y})`))
+			.each(function (d) {
+				const t = select(this);
+				t.select('tspan.w').text(`${d.word} `);
+				t.select('tspan.swc-sym').text(d.sym);
+				t.select('tspan.swc-unit').text(`  ·  ${d.unit}`);
+			});
+	}
+
+	function drawDome() {
+		const sat = frame!.saturation;
+		if (!sat || sat.liquid.length < 2 || sat.vapor.length < 2) {
+			domeFill.attr('d', null);
+			domeLine.attr('d', null);
+			cp.style('display', 'none');
+			tripleLine.style('display', 'none');
+			return;
+		}
+		const outline = [...sat.liquid, sat.critical, ...[...sat.vapor].reverse()].map(project);
+		const d = polylineD(outline);
+		domeFill.attr('d', d + 'Z');
+		domeLine.attr('d', d);
+		const c = project(sat.critical);
+		cp.style('display', null).attr('cx', c.x).attr('cy', c.y);
+		const a = project(sat.liquid[0]);
+		const b = project(sat.vapor[0]);
+		tripleLine.style('display', null).attr('x1', a.x).attr('y1', a.y).attr('x2', b.x).attr('y2', b.y);
+	}
+
+	function drawIsolines() {
+		const iso = frame!.isolines ?? [];
+		gIso
+			.selectAll('path')
+			.data(iso)
+			.join('path')
+			.attr('class', 'swc-isoline')
+			.attr('d', (l) => polylineD(l.points.map(project)));
+	}
+
+	function drawLimits() {
+		const lims = drawnLimits();
+		gLimits
+			.selectAll('path')
+			.data(lims, (d) => (d as { name: string }).name)
+			.join('path')
+			.attr('class', 'swc-limit')
+			.attr('stroke-width', LIMIT_STROKE.width)
+			.attr('stroke-dasharray', LIMIT_STROKE.dash)
+			.attr('d', (l) => (l.straight ? polylineD(limitLine(l.value)) : polylineD(l.points!.map(project))));
+	}
+
+	function limitLine(value: number): Point[] {
+		const py = plot.y + y!(value);
+		return [
+			{ x: plot.x - 1, y: py },
+			{ x: plot.x + plot.width + 1, y: py }
+		];
+	}
+
+	function isolineLabel(l: Isoline): string {
+		const f = frame!;
+		if (l.kind === 'isobar') {
+			const unit = axisUnit('P', f.units, 'linear');
+			return `${compactNumber(unit.fromSI(l.value, f.units.atmosphere))} ${unit.label}`;
+		}
+		if (l.kind === 'isotherm') {
+			const unit = axisUnit('T', f.units, 'linear');
+			return `${compactNumber(unit.fromSI(l.value, f.units.atmosphere), 4)} ${unit.label}`;
+		}
+		const unit = axisUnit('v', f.units, 'linear');
+		return `${compactNumber(unit.fromSI(l.value, f.units.atmosphere))} ${unit.label}`;
+	}
+
+	// ---- path drawing (cheap: called on every drag answer)
+	function drawPath() {
+		if (!frame || !x || !y) return;
+		const f = frame;
+		const rows = computeKeyRows(f.width);
+		if (rows !== keyRows) {
+			drawFrame();
+			return;
+		}
+		const sel = path.selection;
+		const legPts = new Map(path.legs.map((l) => [l.id, l.points.map(project)]));
+
+		gLegs
+			.selectAll<SVGGElement, ChartLeg>('g.swc-leg')
+			.data(path.legs, (d) => d.id)
+			.join((enter) => {
+				const g = enter.append('g').attr('class', 'swc-leg');
+				g.append('path').attr('class', 'swc-leg-casing');
+				g.append('path').attr('class', 'swc-leg-line');
+				return g;
+			})
+			.classed('is-selected', (d) => sel?.kind === 'leg' && sel.id === d.id)
+			.each(function (d) {
+				const g = select(this);
+				const st = processStyle(d.process);
+				const dd = polylineD(legPts.get(d.id)!);
+				const selected = sel?.kind === 'leg' && sel.id === d.id;
+				g.select('.swc-leg-casing')
+					.attr('d', dd)
+					.attr('stroke-width', selected ? LEG_STROKE.casing + 5 : LEG_STROKE.casing);
+				g.select('.swc-leg-line')
+					.attr('d', dd)
+					.attr('stroke', st.colour)
+					.attr('stroke-width', selected ? LEG_STROKE.width + 0.75 : LEG_STROKE.width)
+					.attr('stroke-dasharray', st.dash || null);
+			});
+
+		const crossings = path.legs.flatMap((l) => l.crossings.map((c, i) => ({ key: `${l.id}:${i}`, p: project(c.state) })));
+		gCross
+			.selectAll<SVGPathElement, (typeof crossings)[number]>('path')
+			.data(crossings, (d) => d.key)
+			.join('path')
+			.attr('class', 'swc-crossing')
+			.attr('d', diamond(4.5))
+			.attr('transform', (d) => `translate(${d.p.x.toFixed(1)},${d.p.y.toFixed(1)})`);
+
+		const traces = (path.traces ?? []).map((t) => ({
+			id: t.id,
+			pts: t.points.filter((p) => p.v && p.v > 0).map((p) => ({ ...project({ v: p.v!, T: p.T, P: p.P }), inDome: !!p.inDome }))
+		}));
+		gTraces
+			.selectAll<SVGGElement, (typeof traces)[number]>('g')
+			.data(traces, (d) => d.id)
+			.join((enter) => {
+				const g = enter.append('g');
+				g.append('path').attr('class', 'swc-trace-line');
+				g.append('path').attr('class', 'swc-trace-mark');
+				return g;
+			})
+			.each(function (d) {
+				const g = select(this);
+				g.select('.swc-trace-line').attr('d', polylineD(d.pts));
+				const every = Math.max(1, Math.ceil(d.pts.length / 120));
+				const marks = d.pts
+					.filter((_, i) => i % every === 0)
+					.map((p) =>
+						p.inDome
+							? `M${(p.x + 2.2).toFixed(1)},${p.y.toFixed(1)}a2.2,2.2 0 1,0 -4.4,0a2.2,2.2 0 1,0 4.4,0`
+							: `M${(p.x - 2.5).toFixed(1)},${p.y.toFixed(1)}h5M${p.x.toFixed(1)},${(p.y - 2.5).toFixed(1)}v5`
+					)
+					.join('');
+				g.select('.swc-trace-mark').attr('d', marks);
+			});
+
+		gStates
+			.selectAll<SVGGElement, ChartState>('g.swc-state')
+			.data(path.states, (d) => d.id)
+			.join((enter) => {
+				const g = enter.append('g').attr('class', 'swc-state');
+				g.append('circle').attr('class', 'swc-state-ring').attr('r', STATE_R + 3.5);
+				g.append('circle').attr('class', 'swc-state-disc').attr('r', STATE_R);
+				g.append('text').attr('class', 'swc-state-text').attr('dy', '0.36em');
+				return g;
+			})
+			.classed('is-selected', (d) => sel?.kind === 'state' && sel.id === d.id)
+			.attr('transform', (d) => {
+				const p = project(d.state);
+				return `translate(${p.x.toFixed(1)},${p.y.toFixed(1)})`;
+			})
+			.each(function (d) {
+				const t = select(this).select('text');
+				if (t.text() !== d.label) t.text(d.label).attr('font-size', d.label.length > 2 ? 7.5 : null);
+			});
+
+		drawLabels(legPts, crossings.map((c) => c.p));
+		drawKey();
+		drawOverlay(legPts);
+	}
+
+	function drawLabels(legPts: Map<string, Point[]>, crossingPts: Point[]) {
+		const f = frame!;
+		const obstacles = new ObstacleIndex(32);
+		for (const pts of legPts.values()) obstacles.addPolyline(pts);
+		for (const s of path.states) {
+			const p = project(s.state);
+			obstacles.addBox({ x: p.x - STATE_R - 3, y: p.y - STATE_R - 3, width: 2 * STATE_R + 6, height: 2 * STATE_R + 6 });
+		}
+		for (const p of crossingPts) obstacles.addBox({ x: p.x - 5, y: p.y - 5, width: 10, height: 10 });
+		if (f.saturation) {
+			const c = project(f.saturation.critical);
+			obstacles.addBox({ x: c.x - 4, y: c.y - 4, width: 8, height: 8 });
+		}
+
+		const lims = drawnLimits();
+		const limReqs: LabelRequest[] = lims.map((l) => {
+			const text = limitText(l.name, l.value, f.units);
+			return { id: l.name, width: textWidth(text, 10.5, false) + 8, height: 12, line: l.straight ? limitLine(l.value) : l.points!.map(project), prefer: 'end' };
+		});
+		const limitPlaced = placeEdgeLabels(limReqs, plot, obstacles, { maxSlide: plot.width, step: 16 });
+		gLabels
+			.selectAll<SVGTextElement, (typeof limitPlaced)[number]>('text.swc-limit-label')
+			.data(limitPlaced, (d) => d.id)
+			.join('text')
+			.attr('class', 'swc-limit-label')
+			.attr('x', (d) => d.box.x)
+			.attr('y', (d) => d.box.y + d.box.height - 2)
+			.text((d) => limitText(d.id as DesignLimitName, lims.find((l) => l.name === d.id)!.value, f.units));
+
+		if (f.saturation) {
+			const c = project(f.saturation.critical);
+			const inside = c.x >= plot.x && c.x <= plot.x + plot.width && c.y >= plot.y && c.y <= plot.y + plot.height;
+			const box = inside ? placeNear(c, 22, 11, plot, obstacles) : null;
+			cpLabel.attr('visibility', box ? null : 'hidden');
+			if (box) cpLabel.attr('x', box.x).attr('y', box.y + box.height - 2);
+		} else cpLabel.attr('visibility', 'hidden');
+
+		const iso = f.isolines ?? [];
+		const isoReqs: LabelRequest[] = iso.map((l, i) => {
+			const text = isolineLabel(l);
+			return { id: `${i}`, width: textWidth(text, 9.5) + 2, height: 11, line: l.points.map(project), prefer: 'end' };
+		});
+		const isoPlaced = placeEdgeLabels(isoReqs, plot, obstacles);
+		gLabels
+			.selectAll<SVGTextElement, (typeof isoPlaced)[number]>('text.swc-iso-label')
+			.data(isoPlaced, (d) => d.id)
+			.join('text')
+			.attr('class', 'swc-iso-label')
+			.attr('x', (d) => d.box.x + 1)
+			.attr('y', (d) => d.box.y + d.box.height - 2)
+			.text((d) => isolineLabel(iso[Number(d.id)]));
+	}
+
+	function drawKey() {
+		const f = frame!;
+		const { slots } = layoutKey(currentKeyEntries(), f.width - MARGIN.left - MARGIN.right);
+		const top = 12;
+		gKey
+			.selectAll<SVGGElement, (typeof slots)[number]>('g')
+			.data(slots, (d) => d.entry.text)
+			.join((enter) => {
+				const g = enter.append('g');
+				g.append('path').attr('class', 'sample');
+				g.append('text').attr('class', 'swc-key-text').attr('dy', '0.34em');
+				return g;
+			})
+			.attr('transform', (d) => `translate(${plot.x + d.x},${top + d.row * KEY.row})`)
+			.each(function (d) {
+				const g = select(this);
+				const sample = g.select('path.sample');
+				const e = d.entry;
+				sample.attr('class', 'sample').attr('stroke', null).attr('stroke-dasharray', null).attr('stroke-width', null).attr('fill', null).attr('stroke-linecap', null);
+				if (e.kind === 'process') {
+					const st = processStyle(e.process);
+					sample.attr('d', `M1,0h${KEY.sample - 2}`).attr('fill', 'none').attr('stroke', st.colour).attr('stroke-width', LEG_STROKE.width).attr('stroke-linecap', 'round').attr('stroke-dasharray', st.dash || null);
+				} else if (e.kind === 'crossing') {
+					sample.attr('class', 'sample swc-crossing').attr('d', `M${KEY.sample / 2},-4.5l4.5,4.5l-4.5,4.5l-4.5,-4.5Z`);
+				} else if (e.kind === 'limit') {
+					sample.attr('class', 'sample swc-limit').attr('d', `M0,0h${KEY.sample}`).attr('stroke-width', LIMIT_STROKE.width).attr('stroke-dasharray', '9 4');
+				} else {
+					sample.attr('class', 'sample swc-trace-mark').attr('d', `M3,0h20M${KEY.sample / 2 - 2.5},0h5M${KEY.sample / 2},-2.5v5`);
+				}
+				g.select('text').attr('x', KEY.sample + KEY.gap).text(e.text);
+			});
+	}
+
+	// ---- overlay: focusable marks, drag, keyboard
+	function drawOverlay(legPts: Map<string, Point[]>) {
+		const f = frame!;
+		const sel = path.selection;
+		ov.classed('is-adding', interaction.mode === 'add-leg');
+		hitLegs
+			.selectAll<SVGPathElement, ChartLeg>('path')
+			.data(path.legs, (d) => d.id)
+			.join((enter) =>
+				enter
+					.append('path')
+					.attr('class', 'swc-hit-leg')
+					.attr('tabindex', 0)
+					.attr('role', 'button')
+					.on('click', (ev: MouseEvent, d) => {
+						ev.stopPropagation();
+						handlers.select({ kind: 'leg', id: d.id });
+					})
+					.on('keydown', (ev: KeyboardEvent, d) => onKey(ev, { kind: 'leg', id: d.id }))
+			)
+			.attr('d', (d) => polylineD(legPts.get(d.id)!))
+			.attr('aria-label', (d) => legAriaLabel(d, path.states))
+			.attr('aria-pressed', (d) => String(sel?.kind === 'leg' && sel.id === d.id));
+
+		hitStates
+			.selectAll<SVGCircleElement, ChartState>('circle')
+			.data(path.states, (d) => d.id)
+			.join((enter) =>
+				enter
+					.append('circle')
+					.attr('class', 'swc-hit-state')
+					.attr('r', STATE_R + 4)
+					.attr('tabindex', 0)
+					.attr('role', 'button')
+					.on('keydown', (ev: KeyboardEvent, d) => onKey(ev, { kind: 'state', id: d.id }))
+					.call(stateDrag)
+			)
+			.classed('is-locked', (d) => !interaction.canDrag(d.id))
+			.attr('cx', (d) => project(d.state).x)
+			.attr('cy', (d) => project(d.state).y)
+			.attr('aria-label', (d) => stateAriaLabel(d, f.units))
+			.attr('aria-pressed', (d) => String(sel?.kind === 'state' && sel.id === d.id));
+	}
+
+	const stateDrag = drag<SVGCircleElement, ChartState>()
+		.container(() => overlay as unknown as SVGGElement)
+		.subject((ev: { x: number; y: number }) => ({ x: ev.x, y: ev.y }))
+		.on('start', (_ev, d) => {
+			dragging = { id: d.id, moved: false };
+		})
+		.on('drag', (ev, d) => {
+			if (!dragging || !interaction.canDrag(d.id)) return;
+			const { coords, reason } = clamp(dataAt(ev.x, ev.y));
+			const e: StateDragEvent = { stateId: d.id, coords, reason };
+			const g = toScreen(coords);
+			ghost.style('display', null).classed('is-clamped', reason !== null);
+			if (g) ghost.attr('cx', g.x).attr('cy', g.y);
+			if (!dragging.moved) {
+				dragging.moved = true;
+				handlers.dragStart(e);
+			}
+			handlers.drag(e);
+		})
+		.on('end', (ev, d) => {
+			const was = dragging;
+			dragging = null;
+			ghost.style('display', 'none');
+			if (was?.moved) {
+				const { coords, reason } = clamp(dataAt(ev.x, ev.y));
+				handlers.dragEnd({ stateId: d.id, coords, reason });
+			} else handlers.select({ kind: 'state', id: d.id });
+		});
+
+	function onKey(ev: KeyboardEvent, target: ChartSelection) {
+		const dirs: Record<string, NudgeEvent['direction']> = { ArrowLeft: 'left', ArrowRight: 'right', ArrowUp: 'up', ArrowDown: 'down' };
+		if (ev.key === 'Enter' || ev.key === ' ') {
+			ev.preventDefault();
+			handlers.select(target);
+			return;
+		}
+		if (ev.key === 'Escape') {
+			handlers.select(null);
+			return;
+		}
+		const direction = dirs[ev.key];
+		if (!direction) return;
+		ev.preventDefault();
+		const stateId = target.kind === 'state' ? target.id : path.legs.find((l) => l.id === target.id)?.to;
+		const st = path.states.find((s) => s.id === stateId);
+		if (!st || !stateId) return;
+		const step: NudgeEvent['step'] = ev.altKey ? 'fine' : ev.shiftKey ? 'coarse' : 'normal';
+		const p = project(st.state);
+		const d = NUDGE_PX[step];
+		const moved = { x: p.x + (direction === 'left' ? -d : direction === 'right' ? d : 0), y: p.y + (direction === 'up' ? -d : direction === 'down' ? d : 0) };
+		const { coords, reason } = clamp(dataAt(moved.x, moved.y));
+		handlers.nudge({ target, stateId, direction, step, coords, reason });
+	}
+
+	function toScreen(c: ChartCoords): Point | null {
+		if (!frame || !x || !y) return null;
+		const q = frame.kind === 'T-v' ? c.T : c.P;
+		if (q === undefined) return null;
+		return { x: plot.x + x(c.v), y: plot.y + y(q) };
+	}
+
+	// ---- zoom, pan, hover, add
+	const zoomer: ZoomBehavior<SVGSVGElement, unknown> = zoom<SVGSVGElement, unknown>()
+		.scaleExtent([0.5, 200])
+		.filter((ev: Event) => {
+			if (ev.type === 'wheel' || ev.type.startsWith('touch')) return true;
+			const t = ev.target as Element;
+			return t === bg.node() && !(ev as MouseEvent).button && !(ev as MouseEvent).ctrlKey;
+		})
+		.on('zoom', (ev) => {
+			transform = ev.transform;
+			drawFrame();
+		});
+	ov.call(zoomer).on('dblclick.zoom', null);
+	ov.on('dblclick', (ev: MouseEvent) => {
+		if (ev.target === bg.node() && interaction.mode === 'select') resetView();
+	});
+	bg.on('click', (ev: MouseEvent) => {
+		if (!frame || !x) return;
+		const [px, py] = pointer(ev, overlay);
+		if (interaction.mode === 'add-leg') handlers.add(clamp(dataAt(px, py)));
+		else handlers.select(null);
+	});
+	ov.on('pointermove', (ev: PointerEvent) => {
+		if (!frame || !x) return;
+		const [px, py] = pointer(ev, overlay);
+		const inside = px >= plot.x && px <= plot.x + plot.width && py >= plot.y && py <= plot.y + plot.height;
+		if (!inside) {
+			hideHover();
+			return;
+		}
+		crossV.style('display', null).attr('x1', px).attr('x2', px).attr('y1', plot.y).attr('y2', plot.y + plot.height);
+		crossH.style('display', null).attr('y1', py).attr('y2', py).attr('x1', plot.x).attr('x2', plot.x + plot.width);
+		const raw = dataAt(px, py);
+		handlers.hover({ coords: raw, reason: clamp(raw).reason });
+	});
+	ov.on('pointerleave', hideHover);
+
+	function hideHover() {
+		crossV.style('display', 'none');
+		crossH.style('display', 'none');
+		handlers.hover(null);
+	}
+
+	function resetView() {
+		if (!frame) return;
+		baseDomain = frame.domain ?? fitDomain(frame.kind, frame.pressureScale, { saturation: frame.saturation, triple: frame.triple, states: path.states, legs: path.legs, limits: frame.limits });
+		transform = zoomIdentity;
+		ov.property('__zoom', zoomIdentity);
+		drawFrame();
+	}
+
+	return {
+		setFrame(next) {
+			frame = next;
+			drawFrame();
+		},
+		setPath(next) {
+			path = next;
+			if (!frame) return;
+			if (!fittedWithPath && next.states.length > 0 && !frame.domain && transform.k === 1 && transform.x === 0 && transform.y === 0) {
+				fittedWithPath = true;
+				baseDomain = fitDomain(frame.kind, frame.pressureScale, { saturation: frame.saturation, triple: frame.triple, states: path.states, legs: path.legs, limits: frame.limits });
+				drawFrame();
+				return;
+			}
+			drawPath();
+		},
+		setInteraction(next) {
+			interaction = next;
+			if (frame && x) drawPath();
+		},
+		resetView,
+		plotRect: () => ({ ...plot }),
+		toScreen,
+		destroy() {
+			ov.on('.zoom', null).on('pointermove', null).on('pointerleave', null).on('dblclick', null);
+			svg.selectAll('*:not(title):not(desc)').remove();
+			ov.selectAll('*').remove();
+		}
+	};
+}

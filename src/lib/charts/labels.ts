@@ -1,0 +1,252 @@
+import type { Point, Rect } from './types';
+
+/**
+ * Label placement that keeps value labels off the path. Everything is in screen px of the plot;
+ * no DOM: widths come from `textWidth`, an estimate good enough for monospaced and Plex Sans text.
+ */
+
+/** Approximate rendered width: JetBrains Mono advances 0.6 em; IBM Plex Sans averages ~0.55 em. */
+export function textWidth(text: string, fontSize: number, mono = true): number {
+	return [...text].length * fontSize * (mono ? 0.6 : 0.55);
+}
+
+export function rectsOverlap(a: Rect, b: Rect): boolean {
+	return a.x < b.x + b.width && b.x < a.x + a.width && a.y < b.y + b.height && b.y < a.y + a.height;
+}
+
+export function inflate(r: Rect, by: number): Rect {
+	return { x: r.x - by, y: r.y - by, width: r.width + 2 * by, height: r.height + 2 * by };
+}
+
+/**
+ * Clip segment a→b to a rectangle (Liang–Barsky). Returns the visible part or null.
+ */
+export function clipSegment(a: Point, b: Point, r: Rect): [Point, Point] | null {
+	const dx = b.x - a.x;
+	const dy = b.y - a.y;
+	let t0 = 0;
+	let t1 = 1;
+	const edges: [number, number][] = [
+		[-dx, a.x - r.x],
+		[dx, r.x + r.width - a.x],
+		[-dy, a.y - r.y],
+		[dy, r.y + r.height - a.y]
+	];
+	for (const [p, q] of edges) {
+		if (p === 0) {
+			if (q < 0) return null;
+		} else {
+			const t = q / p;
+			if (p < 0) {
+				if (t > t1) return null;
+				if (t > t0) t0 = t;
+			} else {
+				if (t < t0) return null;
+				if (t < t1) t1 = t;
+			}
+		}
+	}
+	return [
+		{ x: a.x + t0 * dx, y: a.y + t0 * dy },
+		{ x: a.x + t1 * dx, y: a.y + t1 * dy }
+	];
+}
+
+/** The visible runs of a polyline inside a rectangle, each a polyline starting/ending on the border where cut. */
+export function clipPolyline(line: readonly Point[], r: Rect): Point[][] {
+	const runs: Point[][] = [];
+	let run: Point[] | null = null;
+	for (let i = 1; i < line.length; i++) {
+		const seg = clipSegment(line[i - 1], line[i], r);
+		if (!seg) {
+			run = null;
+			continue;
+		}
+		const [p, q] = seg;
+		const continues = run !== null && run.length > 0 && Math.hypot(run[run.length - 1].x - p.x, run[run.length - 1].y - p.y) < 1e-9;
+		if (!continues) {
+			run = [p];
+			runs.push(run);
+		}
+		run!.push(q);
+	}
+	return runs.filter((r) => r.length >= 2);
+}
+
+/**
+ * A uniform grid of the path's segments and boxes (state discs, crossing marks, placed labels),
+ * so a label box is tested only against what lies near it.
+ */
+export class ObstacleIndex {
+	private cells = new Map<string, { segs: [Point, Point][]; boxes: Rect[] }>();
+	constructor(private readonly cell = 32) {}
+
+	private *keys(r: Rect) {
+		const c = this.cell;
+		for (let i = Math.floor(r.x / c); i <= Math.floor((r.x + r.width) / c); i++)
+			for (let j = Math.floor(r.y / c); j <= Math.floor((r.y + r.height) / c); j++) yield `${i},${j}`;
+	}
+
+	private bucket(k: string) {
+		let b = this.cells.get(k);
+		if (!b) {
+			b = { segs: [], boxes: [] };
+			this.cells.set(k, b);
+		}
+		return b;
+	}
+
+	addSegment(a: Point, b: Point): void {
+		const box = { x: Math.min(a.x, b.x), y: Math.min(a.y, b.y), width: Math.abs(a.x - b.x), height: Math.abs(a.y - b.y) };
+		for (const k of this.keys(box)) this.bucket(k).segs.push([a, b]);
+	}
+
+	addPolyline(points: readonly Point[]): void {
+		for (let i = 1; i < points.length; i++) this.addSegment(points[i - 1], points[i]);
+	}
+
+	addBox(r: Rect): void {
+		for (const k of this.keys(r)) this.bucket(k).boxes.push(r);
+	}
+
+	/** Whether anything indexed touches the rectangle. */
+	hits(r: Rect): boolean {
+		for (const k of this.keys(r)) {
+			const b = this.cells.get(k);
+			if (!b) continue;
+			for (const box of b.boxes) if (rectsOverlap(box, r)) return true;
+			for (const [p, q] of b.segs) if (clipSegment(p, q, r)) return true;
+		}
+		return false;
+	}
+}
+
+export interface LabelRequest {
+	id: string;
+	width: number;
+	height: number;
+	/** the labelled line in plot px */
+	line: readonly Point[];
+	/** which visible end to try first (default 'end': where the line leaves the plot last) */
+	prefer?: 'end' | 'start';
+}
+
+export interface LabelPlacement {
+	id: string;
+	box: Rect;
+	/** the point on the line the label belongs to */
+	anchor: Point;
+}
+
+export interface PlaceOptions {
+	/** how far along the line from its visible end a label may slide, px */
+	maxSlide?: number;
+	/** slide step, px */
+	step?: number;
+	/** clearance kept around each label, px */
+	pad?: number;
+}
+
+function pointsAlong(run: readonly Point[], step: number, maxSlide: number): Point[] {
+	const out: Point[] = [run[0]];
+	let travelled = 0;
+	let next = step;
+	for (let i = 1; i < run.length && travelled < maxSlide; i++) {
+		const a = run[i - 1];
+		const b = run[i];
+		const len = Math.hypot(b.x - a.x, b.y - a.y);
+		while (next <= travelled + len && next <= maxSlide) {
+			const t = (next - travelled) / len;
+			out.push({ x: a.x + t * (b.x - a.x), y: a.y + t * (b.y - a.y) });
+			next += step;
+		}
+		travelled += len;
+	}
+	return out;
+}
+
+/** The label box for an anchor: tucked inside the plot edge the line crosses, else up and right of the point. */
+export function boxAt(p: Point, w: number, h: number, plot: Rect): Rect {
+	const e = 0.75;
+	const right = plot.x + plot.width;
+	const bottom = plot.y + plot.height;
+	let x: number;
+	let y: number;
+	if (Math.abs(p.y - plot.y) < e) {
+		x = p.x + 4;
+		y = plot.y + 3;
+	} else if (Math.abs(p.x - right) < e) {
+		x = right - w - 3;
+		y = p.y - h - 3;
+	} else if (Math.abs(p.x - plot.x) < e) {
+		x = plot.x + 3;
+		y = p.y - h - 3;
+	} else if (Math.abs(p.y - bottom) < e) {
+		x = p.x + 4;
+		y = bottom - h - 3;
+	} else {
+		x = p.x + 4;
+		y = p.y - h - 3;
+	}
+	if (x + w > right - 2) x = p.x - 4 - w;
+	if (y < plot.y + 2) y = p.y + 3;
+	x = Math.min(Math.max(x, plot.x + 2), right - w - 2);
+	y = Math.min(Math.max(y, plot.y + 2), bottom - h - 2);
+	return { x, y, width: w, height: h };
+}
+
+/**
+ * Place one label per request at the edge where its line leaves the plot, sliding inward along
+ * the line, then trying the line's other visible end, until the box (with `pad` clearance)
+ * touches nothing in `obstacles` nor an earlier label. Requests are placed in order (put the
+ * important ones first); a label with no free spot is left out rather than drawn over the path.
+ * Placed labels are added to `obstacles`.
+ */
+export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, obstacles: ObstacleIndex, options: PlaceOptions = {}): LabelPlacement[] {
+	const step = options.step ?? 10;
+	const maxSlide = options.maxSlide ?? 160;
+	const pad = options.pad ?? 2;
+	const placed: LabelPlacement[] = [];
+	for (const req of requests) {
+		const runs = clipPolyline(req.line, plot);
+		if (!runs.length) continue;
+		const endRun = [...runs[runs.length - 1]].reverse();
+		const startRun = runs[0];
+		const order = req.prefer === 'start' ? [startRun, endRun] : [endRun, startRun];
+		let done = false;
+		for (const run of order) {
+			for (const p of pointsAlong(run, step, maxSlide)) {
+				const box = boxAt(p, req.width, req.height, plot);
+				if (obstacles.hits(inflate(box, pad))) continue;
+				placed.push({ id: req.id, box, anchor: p });
+				obstacles.addBox(box);
+				done = true;
+				break;
+			}
+			if (done) break;
+		}
+	}
+	return placed;
+}
+
+/**
+ * A small label beside a point (the critical point's "c.p."): up-right, down-right, up-left,
+ * down-left, the first spot that is inside the plot and free. Null when none is.
+ */
+export function placeNear(p: Point, w: number, h: number, plot: Rect, obstacles: ObstacleIndex, gap = 5): Rect | null {
+	const spots: Point[] = [
+		{ x: p.x + gap, y: p.y - h - gap },
+		{ x: p.x + gap, y: p.y + gap },
+		{ x: p.x - w - gap, y: p.y - h - gap },
+		{ x: p.x - w - gap, y: p.y + gap }
+	];
+	for (const s of spots) {
+		const box = { x: s.x, y: s.y, width: w, height: h };
+		const inside = box.x >= plot.x && box.y >= plot.y && box.x + w <= plot.x + plot.width && box.y + h <= plot.y + plot.height;
+		if (inside && !obstacles.hits(box)) {
+			obstacles.addBox(box);
+			return box;
+		}
+	}
+	return null;
+}

@@ -1,0 +1,131 @@
+import type { Crossing, Process, State } from '$lib/thermo/types';
+
+/** Which property diagram: temperature or pressure against specific volume (always log v). */
+export type ChartKind = 'T-v' | 'P-v';
+export type PressureScale = 'log' | 'linear';
+
+/** Saturation lines as `GET /api/v1/fluids/{id}/saturation` returns them (triple point → critical point). */
+export interface SaturationCurve {
+	liquid: State[];
+	vapor: State[];
+	critical: State;
+}
+
+export interface TriplePoint {
+	/** K */
+	T: number;
+	/** Pa */
+	P: number;
+}
+
+/** The formulation's valid range (`FluidInfo.limits`), SI. */
+export interface FluidRange {
+	Tmin: number;
+	Tmax: number;
+	Pmax: number;
+}
+
+/** A point of a background line or limit curve, SI. */
+export interface CurvePoint {
+	T: number;
+	P: number;
+	v: number;
+}
+
+export type IsolineKind = 'isobar' | 'isotherm' | 'isochore';
+
+/** A background line of constant P, T or v. `value` is SI (Pa absolute, K, m³/kg). */
+export interface Isoline {
+	kind: IsolineKind;
+	value: number;
+	points: CurvePoint[];
+}
+
+/** A state on the path: `label` is what the disc shows (S1, S2, …). */
+export interface ChartState {
+	id: string;
+	label: string;
+	state: State;
+}
+
+/** A leg of the path between two states (ids of `ChartState`). */
+export interface ChartLeg {
+	id: string;
+	process: Process;
+	points: State[];
+	crossings: Crossing[];
+	from: string;
+	to: string;
+	/** polytropic exponent, shown in the leg's accessible name */
+	n?: number;
+}
+
+export interface ChartSelection {
+	kind: 'state' | 'leg';
+	id: string;
+}
+
+/**
+ * One design limit, SI (pressures absolute, Pa; temperatures K). `points` is the limit's own
+ * isobar (for a pressure limit on T–v) or isotherm (for a temperature limit on P–v); without
+ * it that limit is not drawn on that diagram, because its curve cannot be drawn without the engine.
+ */
+export interface DesignLimit {
+	value: number;
+	points?: CurvePoint[];
+}
+
+export interface DesignLimits {
+	designPressure?: DesignLimit | null;
+	reliefSetPressure?: DesignLimit | null;
+	designTemperature?: DesignLimit | null;
+	minimumTemperature?: DesignLimit | null;
+}
+
+export type DesignLimitName = keyof DesignLimits;
+
+/** A logged point. Only points with `v` can be drawn (the page fills v in with the engine). */
+export interface TracePoint {
+	T: number;
+	P: number;
+	v?: number | null;
+	/** the logger or the engine says the point is inside the vapor dome */
+	inDome?: boolean;
+}
+
+export interface MeasuredTrace {
+	id: string;
+	label: string;
+	points: TracePoint[];
+}
+
+/** A position on the chart in SI: v always, and T (T–v) or P (P–v, absolute Pa). */
+export interface ChartCoords {
+	T?: number;
+	P?: number;
+	v: number;
+}
+
+export interface ClampResult {
+	coords: ChartCoords;
+	/** null when the coordinates were inside the valid range */
+	reason: string | null;
+}
+
+/** Data-space window: x is v (m³/kg), y is T (K) or P (Pa absolute). */
+export interface Domain {
+	x: [number, number];
+	y: [number, number];
+}
+
+export interface Rect {
+	x: number;
+	y: number;
+	width: number;
+	height: number;
+}
+
+export interface Point {
+	x: number;
+	y: number;
+}
