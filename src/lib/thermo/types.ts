@@ -49,11 +49,35 @@ export interface State {
  * Which root to return when a pair of inputs has two valid states (for example water's
  * density maximum near 4 °C for (P, v)). Without a hint such a pair is refused with both
  * candidates named in the error.
+ * - `lower-T` / `higher-T`: the candidate with the lower / higher temperature;
+ * - `lower-P` / `higher-P`: the candidate with the lower / higher pressure (e.g. two liquid states
+ *   at the same T for (T, h));
+ * - `liquid-side` / `vapor-side`: the denser / lighter candidate. For (T, P) exactly on the
+ *   saturation line these also select the saturated liquid / saturated vapor.
  */
-export type RootHint = 'lower-T' | 'higher-T' | 'liquid-side' | 'vapor-side';
+export type RootHint = 'lower-T' | 'higher-T' | 'lower-P' | 'higher-P' | 'liquid-side' | 'vapor-side';
 
 export interface FixOptions {
 	hint?: RootHint;
+}
+
+/** Saturation at one temperature: the saturated liquid and vapor states (phase saturated-liquid / -vapor). */
+export interface Saturation {
+	/** K */
+	T: number;
+	/** Pa */
+	P: number;
+	liquid: State;
+	vapor: State;
+}
+
+/** Saturation curves for drawing the vapor dome (GET /api/v1/fluids/{id}/saturation). */
+export interface SaturationCurve {
+	/** saturated liquid from the triple point up toward the critical point */
+	liquid: State[];
+	/** saturated vapor, at the same temperatures */
+	vapor: State[];
+	critical: State;
 }
 
 export type Process = 'isobaric' | 'isochoric' | 'isothermal' | 'isentropic' | 'isenthalpic' | 'polytropic';

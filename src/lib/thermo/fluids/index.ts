@@ -1,0 +1,11 @@
+import type { FluidData } from './schema.ts';
+import { water } from './water.ts';
+
+/**
+ * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
+ * the engine validates and compiles it on first use. To add a fluid: import its data file and add
+ * one line to this array.
+ */
+export const fluidData: FluidData[] = [
+	water,
+];

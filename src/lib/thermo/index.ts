@@ -1,0 +1,111 @@
+/**
+ * Statewright property engine: reference multiparameter Helmholtz equations of state.
+ * Pure TypeScript (no DOM, no Node built-ins, no packages); this file is the only entry.
+ * Units everywhere: SI base units — T K, P Pa, v m³/kg, rho kg/m³, u h J/kg, s cv cp J/(kg·K),
+ * w m/s, x 0…1.
+ *
+ * Every property derives from the reduced Helmholtz energy α(δ, τ) = a/(RT) = α⁰ + αʳ with
+ * δ = ρ/ρr, τ = Tr/T (e.g. IAPWS R6-95(2018) for water), see properties.ts.
+ */
+import { ThermoError } from './errors.ts';
+import { allFluidInfo, fluidIds, fluidInfo, getCompiledFluid } from './registry.ts';
+import { fluidData } from './fluids/index.ts';
+import { saturatedState } from './state.ts';
+import { curveOf } from './solvers/curve.ts';
+import { fixStateOf } from './solvers/fix-state.ts';
+import { computeLeg as computeLegImpl } from './solvers/legs.ts';
+import { checkSaturationP } from './solvers/range.ts';
+import { satAtP, satAtT } from './solvers/saturation.ts';
+import { fmt } from './errors.ts';
+import type { FixOptions, FluidInfo, Inputs, Leg, LegSpec, Saturation, SaturationCurve, State } from './types.ts';
+
+export type * from './types.ts';
+export type { FluidData } from './fluids/schema.ts';
+export { ThermoError } from './errors.ts';
+export type { ThermoErrorCode, StateCandidate } from './errors.ts';
+
+/**
+ * Fix a state from exactly two of T, P, v, rho, u, h, s, x (any of the 21 pairs; v and rho are one
+ * property). Returns every property (SI) and the phase. Single-phase properties from α(δ, τ) per
+ * IAPWS R6-95(2018) Table 3; inside the dome v, u, h, s are mass-weighted between the saturated
+ * phases (equal P and Gibbs energy), x = (v − v')/(v'' − v').
+ * Phase rules: see state.ts (on a saturation line when the density is within 1e−9 of the
+ * saturated density; T ≥ Tc and P ≥ Pc is supercritical; T ≥ Tc, P < Pc superheated vapor;
+ * T < Tc, P ≥ Pc compressed liquid).
+ * `options.hint` picks one state where a pair has two (RootHint); without it such pairs throw
+ * `ambiguous-state` naming both. Throws ThermoError for anything it cannot answer.
+ */
+export function fixState(fluid: string, inputs: Inputs, options: FixOptions = {}): State {
+	return fixStateOf(getCompiledFluid(fluid), inputs, options);
+}
+
+function finite(name: string, value: number): void {
+	if (typeof value !== 'number' || !Number.isFinite(value))
+		throw new ThermoError('non-finite-input', `${name} must be a finite number (got ${String(value)}).`, `Give ${name} as a finite number in SI units.`);
+}
+
+/**
+ * Saturation at temperature T (K), triple point ≤ T ≤ Tc: P (Pa) and the saturated liquid and
+ * vapor states, from equal pressure and equal Gibbs energy in both phases (Maxwell criterion;
+ * Newton after Akasaka (2008), J. Therm. Sci. Technol. 3, 442). At Tc both are the critical state.
+ */
+export function saturationAtT(fluid: string, T: number): Saturation {
+	const fl = getCompiledFluid(fluid);
+	finite('T', T);
+	if (T < fl.Tt)
+		throw new ThermoError('below-triple-point', `T = ${fmt(T)} K is below the triple point of ${fl.id} (${fmt(fl.Tt)} K).`, `Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`);
+	if (T > fl.Tc)
+		throw new ThermoError('inconsistent-inputs', `There is no saturation above the critical temperature of ${fl.id} (${fmt(fl.Tc)} K); T = ${fmt(T)} K.`, `Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`);
+	const sat = satAtT(fl, T);
+	return { T, P: sat.P, liquid: saturatedState(fl, sat, 0), vapor: saturatedState(fl, sat, 1) };
+}
+
+/**
+ * Saturation at pressure P (Pa), triple-point pressure ≤ P ≤ Pc: the saturation temperature (K)
+ * and the saturated liquid and vapor states (Newton in (T, ρ', ρ'') on P' = P'' = P, g' = g'').
+ */
+export function saturationAtP(fluid: string, P: number): Saturation {
+	const fl = getCompiledFluid(fluid);
+	finite('P', P);
+	if (!(P > 0))
+		throw new ThermoError('non-positive-input', `P must be positive (got ${fmt(P)}).`, 'Give an absolute pressure in Pa.');
+	if (P > fl.Pc)
+		throw new ThermoError('inconsistent-inputs', `There is no saturation above the critical pressure of ${fl.id} (${fmt(fl.Pc)} Pa); P = ${fmt(P)} Pa.`, `Give a pressure up to ${fmt(fl.Pc)} Pa.`);
+	checkSaturationP(fl, P);
+	const sat = satAtP(fl, P);
+	return { T: sat.T, P, liquid: saturatedState(fl, sat, 0), vapor: saturatedState(fl, sat, 1) };
+}
+
+/**
+ * Saturation curves for the vapor dome: `points` saturated liquid and vapor states from the
+ * triple point toward the critical point, spaced Tᵢ = Tc − (Tc − Tt)(1 − i/points)³ (denser near
+ * Tc), and the critical state (cv, cp, w null there: they diverge). Default 100 points.
+ */
+export function saturationCurve(fluid: string, points = 100): SaturationCurve {
+	return curveOf(getCompiledFluid(fluid), points);
+}
+
+/** Metadata of every fluid (FluidInfo: id, name, formula, formulation and citation, critical and triple points, limits, reference state). */
+export const fluids: FluidInfo[] = allFluidInfo();
+
+/** Metadata of every fluid, freshly built (same content as `fluids`). */
+export function listFluids(): FluidInfo[] {
+	return allFluidInfo();
+}
+
+/** Metadata of one fluid by id or alias (case-insensitive); throws ThermoError `unknown-fluid`. */
+export function getFluid(id: string): FluidInfo {
+	const key = typeof id === 'string' ? id.trim().toLowerCase() : '';
+	const data = fluidData.find((f) => f.id === key || f.aliases.some((a) => a.toLowerCase() === key));
+	if (!data) throw new ThermoError('unknown-fluid', `Unknown fluid "${String(id)}".`, `Use one of: ${fluidIds().join(', ')}.`);
+	return fluidInfo(data);
+}
+
+/**
+ * A process leg between a start state and a target (API.md): points along the path, crossings of
+ * the saturation lines, w = ∫P dv, q = Δu + w, wShaft = −∫v dP, qFlow = Δh + wShaft (J/kg).
+ * Not built yet: throws ThermoError `not-implemented`.
+ */
+export function computeLeg(spec: LegSpec): Leg {
+	return computeLegImpl(spec);
+}

@@ -1,0 +1,88 @@
+/**
+ * Loading fluids: find the data file by id or alias, validate it, compile it, pin the equation's
+ * critical point and apply the declared reference state. Compiled fluids are cached.
+ */
+import { ThermoError } from './errors.ts';
+import { Fluid, validateFluidData } from './fluid.ts';
+import { fluidData } from './fluids/index.ts';
+import type { FluidData } from './fluids/schema.ts';
+import { evalPoint, Point } from './properties.ts';
+import { refineCriticalPoint } from './solvers/critical.ts';
+import { satAtP, satAtT } from './solvers/saturation.ts';
+import type { FluidInfo } from './types.ts';
+
+const compiled = new Map<string, Fluid>();
+
+/**
+ * Compile a validated FluidData and apply its reference state. The lead ideal-gas constants are
+ * shifted so that the saturated liquid at the declared T (or P) has the declared h and s:
+ * changing a1 by Δa1 changes s by −R·Δa1 and leaves h; changing a2 by Δa2 changes h by R·Tr·Δa2
+ * and leaves s; the saturation state itself does not depend on a1, a2.
+ */
+export function loadFluid(data: unknown): Fluid {
+	validateFluidData(data);
+	const fl = new Fluid(data);
+	refineCriticalPoint(fl);
+	const rs = data.referenceState;
+	if (rs.kind === 'as-published') return fl;
+	const sat = rs.kind === 'saturated-liquid-at-T' ? satAtT(fl, rs.T) : satAtP(fl, rs.P);
+	const p = evalPoint(fl, sat.T, sat.rhoL, new Point(), 1);
+	const a1 = fl.a1 - (rs.s - p.s) / fl.R;
+	const a2 = fl.a2 + (rs.h - p.h) / (fl.R * fl.Tr);
+	const shifted = new Fluid(data, { a1, a2 });
+	shifted.Tc = fl.Tc;
+	shifted.Pc = fl.Pc;
+	shifted.rhoc = fl.rhoc;
+	// saturation (T, P, densities) is unchanged by the shift: keep the built caches
+	Object.assign(shifted.cache, fl.cache);
+	return shifted;
+}
+
+function findData(id: string): FluidData | undefined {
+	const key = id.trim().toLowerCase();
+	return fluidData.find((f) => f.id === key || f.aliases.some((a) => a.toLowerCase() === key));
+}
+
+/** The compiled fluid for an id or alias; throws ThermoError `unknown-fluid`. */
+export function getCompiledFluid(id: string): Fluid {
+	if (typeof id !== 'string')
+		throw new ThermoError('unknown-fluid', 'The fluid must be given as a string id.', `Use one of: ${fluidIds().join(', ')}.`);
+	const hit = compiled.get(id);
+	if (hit) return hit;
+	const data = findData(id);
+	if (!data)
+		throw new ThermoError('unknown-fluid', `Unknown fluid "${id}".`, `Use one of: ${fluidIds().join(', ')}.`);
+	let fl = compiled.get(data.id);
+	if (!fl) {
+		fl = loadFluid(data);
+		compiled.set(data.id, fl);
+	}
+	compiled.set(id, fl);
+	return fl;
+}
+
+/** Ids of every registered fluid, in display order. */
+export function fluidIds(): string[] {
+	return fluidData.map((f) => f.id);
+}
+
+/** Public metadata of a fluid (FluidInfo, types.ts) from its data file. */
+export function fluidInfo(data: FluidData): FluidInfo {
+	return {
+		id: data.id,
+		name: data.name,
+		formula: data.formula,
+		aliases: [...data.aliases],
+		formulation: { name: data.formulation.name, reference: data.formulation.reference },
+		critical: { ...data.critical },
+		triple: { ...data.triple },
+		limits: { ...data.limits },
+		referenceState: data.referenceState.label,
+		molarMass: data.molarMass
+	};
+}
+
+/** Metadata of every registered fluid. */
+export function allFluidInfo(): FluidInfo[] {
+	return fluidData.map(fluidInfo);
+}

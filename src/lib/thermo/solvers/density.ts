@@ -1,0 +1,35 @@
+/**
+ * Density at given (T, P) on a chosen branch: Newton on f(ρ) = P(T, ρ) − P with
+ * f' = (∂P/∂ρ)_T = RT(1 + 2δαʳ_δ + δ²αʳ_δδ), kept inside a bracket [lo, hi] that tightens as
+ * iterates fall on either side (bisection when Newton would leave it or meets (∂P/∂ρ)_T ≤ 0).
+ */
+import type { Fluid } from '../fluid.ts';
+
+/**
+ * Solve P(T, ρ) = P for ρ (kg/m³) starting at `guess`, with f(lo) < 0 and f(hi) > 0 known or
+ * assumed (hi may be Infinity: the bracket grows). Returns NaN if no root is found.
+ */
+export function densityAtTP(fl: Fluid, T: number, P: number, guess: number, lo = 0, hi = Infinity): number {
+	const tau = fl.Tr / T;
+	const RT = fl.R * T;
+	const rhor = fl.rhor;
+	let rho = guess;
+	if (!(rho > lo && rho < hi)) rho = Number.isFinite(hi) ? 0.5 * (lo + hi) : Math.max(2 * lo, 1e-12 * rhor);
+	for (let it = 0; it < 100; it++) {
+		const r = fl.residualAt(rho / rhor, tau, 2);
+		const f = rho * RT * (1 + r.d1) - P;
+		const df = RT * (1 + 2 * r.d1 + r.d2);
+		if (f === 0) return rho;
+		if (f < 0) lo = rho;
+		else hi = rho;
+		let next = df > 0 ? rho - f / df : NaN;
+		if (!(next > lo && next < hi)) {
+			next = Number.isFinite(hi) ? 0.5 * (lo + hi) : 2 * rho;
+		}
+		if (Math.abs(next - rho) <= 1e-14 * rho) return next;
+		if (Number.isFinite(hi) && hi - lo <= 4e-16 * hi) return 0.5 * (lo + hi);
+		rho = next;
+		if (rho > 1e3 * fl.rhoc) return NaN;
+	}
+	return NaN;
+}

@@ -1,0 +1,81 @@
+/**
+ * fixState: validate the two inputs and dispatch to the flash named by the pair.
+ */
+import { ThermoError, fmt } from '../errors.ts';
+import type { Fluid } from '../fluid.ts';
+import type { FixOptions, InputName, Inputs, State } from '../types.ts';
+import { ROOT_HINTS } from './choose.ts';
+import { flashPX } from './flash-p-x.ts';
+import { flashTP } from './flash-t-p.ts';
+import { flashTRho } from './flash-t-v.ts';
+import { flashTX } from './flash-t-x.ts';
+import { checkP, checkT } from './range.ts';
+
+/** Canonical property keys after v → rho: order used to name pairs. */
+export type Key = 'T' | 'P' | 'rho' | 'u' | 'h' | 's' | 'x';
+const ORDER: Key[] = ['T', 'P', 'rho', 'u', 'h', 's', 'x'];
+const NAMES: readonly InputName[] = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'];
+
+export type Flash = (fl: Fluid, a: number, b: number, options: FixOptions) => State;
+
+const notYet: Flash = () => {
+	throw new ThermoError('not-implemented', 'This pair of inputs is not available yet.', 'Give (T, P), (T, v), (T, x) or (P, x).');
+};
+
+/** Flash for each pair, keyed "A,B" in ORDER. */
+export const FLASHES: Record<string, Flash> = {
+	'T,P': (fl, T, P, o) => flashTP(fl, T, P, o.hint),
+	'T,rho': (fl, T, rho) => flashTRho(fl, T, rho),
+	'T,x': (fl, T, x) => flashTX(fl, T, x),
+	'P,x': (fl, P, x) => flashPX(fl, P, x)
+};
+
+function unit(k: InputName): string {
+	return { T: 'K', P: 'Pa', v: 'm³/kg', rho: 'kg/m³', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)', x: '' }[k];
+}
+
+/** Parse and check the inputs: exactly two known, finite properties in range. */
+export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, number] {
+	if (typeof inputs !== 'object' || inputs === null)
+		throw new ThermoError('wrong-input-count', 'Inputs must be an object holding two properties.', 'Give exactly two of T, P, v, rho, u, h, s, x.');
+	const given = Object.keys(inputs).filter((k) => (inputs as Record<string, unknown>)[k] !== undefined);
+	for (const k of given)
+		if (!NAMES.includes(k as InputName))
+			throw new ThermoError('unknown-input', `Unknown input "${k}".`, 'Give exactly two of T, P, v, rho, u, h, s, x (SI units).');
+	if (given.includes('v') && given.includes('rho'))
+		throw new ThermoError(
+			'duplicate-property',
+			'v and rho are the same property (rho = 1/v); they cannot fix a state together.',
+			'Give one of v or rho together with one of T, P, u, h, s, x.'
+		);
+	if (given.length !== 2)
+		throw new ThermoError(
+			'wrong-input-count',
+			`A state needs exactly two independent properties; got ${given.length}${given.length ? ` (${given.join(', ')})` : ''}.`,
+			'Give exactly two of T, P, v, rho, u, h, s, x.'
+		);
+	const vals: Partial<Record<Key, number>> = {};
+	for (const k of given as InputName[]) {
+		const val = (inputs as Record<string, unknown>)[k];
+		if (typeof val !== 'number' || !Number.isFinite(val))
+			throw new ThermoError('non-finite-input', `${k} must be a finite number (got ${String(val)}).`, `Give ${k} as a finite number in ${unit(k) || 'SI units'}.`);
+		if ((k === 'T' || k === 'P' || k === 'v' || k === 'rho') && !(val > 0))
+			throw new ThermoError('non-positive-input', `${k} must be positive (got ${fmt(val)}); the engine uses absolute values.`, `Give ${k} in ${unit(k)} as a positive absolute value (for example kelvin, not °C; absolute, not gauge pressure).`);
+		if (k === 'x' && !(val >= 0 && val <= 1))
+			throw new ThermoError('quality-out-of-range', `The quality x must lie between 0 and 1 (got ${fmt(val)}).`, 'Give x as a mass fraction of vapor from 0 (saturated liquid) to 1 (saturated vapor), or give the state by two other properties.');
+		vals[k === 'v' ? 'rho' : k] = k === 'v' ? 1 / val : val;
+	}
+	if (vals.T !== undefined) checkT(fl, vals.T);
+	if (vals.P !== undefined) checkP(fl, vals.P);
+	const keys = ORDER.filter((k) => vals[k] !== undefined);
+	return [keys[0], vals[keys[0]] as number, keys[1], vals[keys[1]] as number];
+}
+
+/** Fix a state from two properties (see index.ts fixState). */
+export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}): State {
+	if (options.hint !== undefined && !ROOT_HINTS.includes(options.hint))
+		throw new ThermoError('invalid-option', `Unknown hint "${String(options.hint)}".`, `Use one of: ${ROOT_HINTS.join(', ')}.`);
+	const [ka, a, kb, b] = parseInputs(fl, inputs);
+	const flash = FLASHES[`${ka},${kb}`] ?? notYet;
+	return flash(fl, a, b, options);
+}

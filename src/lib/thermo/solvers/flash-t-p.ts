@@ -1,0 +1,75 @@
+/**
+ * State from (T, P). Below Tc the side of the saturation line is decided first (table, then a full
+ * saturation solve only within its margin), then the density is solved on that branch. T and P
+ * on the saturation line (|P/Psat − 1| ≤ 1e−9) are not independent: refused unless the hint
+ * `liquid-side` / `vapor-side` asks for the saturated liquid / vapor.
+ */
+import { ThermoError, fmt } from '../errors.ts';
+import type { Fluid } from '../fluid.ts';
+import { evalPoint, Point } from '../properties.ts';
+import { saturatedState, singleState } from '../state.ts';
+import type { RootHint, State } from '../types.ts';
+import { densityAtTP } from './density.ts';
+import { locate, locateWithSat } from './locate.ts';
+import { CRITICAL_BAND, TABLE_ACCURACY, satAtT, satGuess, type SatGuess, type SatPoint } from './saturation.ts';
+
+const p = new Point();
+const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
+const M = 10 * TABLE_ACCURACY;
+
+/** Relative pressure tolerance for (T, P) "on the saturation line". */
+export const TP_LINE_TOL = 1e-9;
+
+function failed(fl: Fluid, T: number, P: number): ThermoError {
+	return new ThermoError(
+		'no-convergence',
+		`No density found for ${fl.id} at T = ${fmt(T)} K, P = ${fmt(P)} Pa.`,
+		'Please report the inputs; try values a little away from the critical point.'
+	);
+}
+
+export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State {
+	let rho: number;
+	let sat: SatPoint | null = null;
+	if (T >= fl.Tc * (1 - CRITICAL_BAND)) {
+		rho = densityAtTP(fl, T, P, P / (fl.R * T));
+	} else {
+		satGuess(fl, T, g);
+		let side: 'liquid' | 'vapor';
+		let lo: number, hi: number;
+		if (P > g.P * (1 + M)) {
+			side = 'liquid';
+			lo = g.rhoL * (1 - M);
+			hi = Infinity;
+		} else if (P < g.P * (1 - M)) {
+			side = 'vapor';
+			lo = 0;
+			hi = g.rhoV * (1 + M);
+		} else {
+			sat = satAtT(fl, T);
+			if (Math.abs(P / sat.P - 1) <= TP_LINE_TOL) {
+				if (hint === 'liquid-side') return saturatedState(fl, sat, 0);
+				if (hint === 'vapor-side') return saturatedState(fl, sat, 1);
+				throw new ThermoError(
+					'two-phase-pressure-temperature',
+					`T = ${fmt(T)} K and P = ${fmt(P)} Pa lie on the saturation line of ${fl.id}, where T and P are not independent: every state from saturated liquid to saturated vapor has them.`,
+					'Give T or P together with v, x, h, u or s instead (or hint liquid-side / vapor-side for the saturated liquid / vapor).'
+				);
+			}
+			side = P > sat.P ? 'liquid' : 'vapor';
+			lo = side === 'liquid' ? sat.rhoL : 0;
+			hi = side === 'liquid' ? Infinity : sat.rhoV;
+		}
+		rho =
+			side === 'liquid'
+				? densityAtTP(fl, T, P, (sat ? sat.rhoL : g.rhoL) * (1 + 1e-12), lo, hi)
+				: densityAtTP(fl, T, P, ((sat ? sat.rhoV : g.rhoV) * P) / (sat ? sat.P : g.P), lo, hi);
+	}
+	if (!(rho > 0)) throw failed(fl, T, P);
+	evalPoint(fl, T, rho, p, 2);
+	p.P = P;
+	const loc = sat ? locateWithSat(T, rho, sat) : locate(fl, p);
+	if (loc.phase === 'saturated-mixture') throw failed(fl, T, P);
+	if (loc.sat) return saturatedState(fl, loc.sat, loc.x ?? 0);
+	return singleState(fl, p, loc.phase);
+}

@@ -1,0 +1,350 @@
+/**
+ * Vapor–liquid saturation from the equation of state: equal pressure and equal Gibbs energy in the
+ * two phases (Maxwell criterion). At given T the two densities are found by Newton's method in the
+ * form of Akasaka (2008), J. Therm. Sci. Technol. 3, 442–451:
+ *   J(δ) = δ(1 + δαʳ_δ),  K(δ) = δαʳ_δ + αʳ + ln δ,   J(δ') = J(δ''),  K(δ') = K(δ'').
+ * At given P, a three-unknown Newton in (τ, δ', δ'') solves P(τ,δ') = P, P(τ,δ'') = P, K(δ') = K(δ'').
+ * Starting guesses come from a per-fluid saturation table built once from the ancillary equations
+ * (continuation toward the critical point), which makes later solves converge in one or two steps.
+ */
+import { ThermoError, fmt } from '../errors.ts';
+import type { Fluid } from '../fluid.ts';
+
+/** A solved saturation state: T K, P Pa, saturated liquid and vapor densities kg/m³. */
+export interface SatPoint {
+	T: number;
+	P: number;
+	rhoL: number;
+	rhoV: number;
+}
+
+/** Within this distance of Tc (K, relative to Tc) the two phases are taken as the critical point. */
+export const CRITICAL_BAND = 1e-9;
+
+interface AkasakaOut {
+	dL: number;
+	dV: number;
+	P: number;
+}
+
+/** Newton–Akasaka at fixed τ; returns false if it fails (caller tries other guesses). */
+function akasaka(fl: Fluid, T: number, dL0: number, dV0: number, out: AkasakaOut): boolean {
+	const tau = fl.Tr / T;
+	let dL = dL0, dV = dV0;
+	let prevNorm = Infinity;
+	for (let it = 0; it < 60; it++) {
+		let r = fl.residualAt(dL, tau, 2);
+		const JL = dL * (1 + r.d1);
+		const KL = r.d1 + r.a + Math.log(dL);
+		const JdL = 1 + 2 * r.d1 + r.d2;
+		const KdL = JdL / dL;
+		r = fl.residualAt(dV, tau, 2);
+		const d1V = r.d1;
+		const JV = dV * (1 + d1V);
+		const KV = d1V + r.a + Math.log(dV);
+		const JdV = 1 + 2 * d1V + r.d2;
+		const KdV = JdV / dV;
+		const FJ = JV - JL;
+		const FK = KV - KL;
+		// J' carries the cancellation of 1 + δαʳ_δ in the liquid: judge it on the liquid's scale δ'
+		const norm = Math.abs(FJ) / dL + Math.abs(FK);
+		if (!Number.isFinite(norm)) return false;
+		// stop at round-off: residuals tiny, or no longer shrinking once small
+		if (norm < 1e-15 || (norm < 1e-11 && norm > 0.25 * prevNorm)) {
+			if (dL - dV < 1e-9 * dL) return false; // the trivial solution
+			out.dL = dL;
+			out.dV = dV;
+			// the vapor side gives P without cancellation at low T
+			out.P = dV * fl.rhor * fl.R * T * (1 + d1V);
+			return out.P > 0;
+		}
+		prevNorm = norm;
+		const det = JdV * KdL - JdL * KdV;
+		if (!Number.isFinite(det) || det === 0) return false;
+		let stepL = (FK * JdV - FJ * KdV) / det;
+		let stepV = (FK * JdL - FJ * KdL) / det;
+		// keep both densities positive and ordered
+		let g = 1;
+		for (let k = 0; k < 40; k++) {
+			const nL = dL + g * stepL, nV = dV + g * stepV;
+			if (nL > 0 && nV > 0 && nL > nV) break;
+			g *= 0.5;
+		}
+		stepL *= g;
+		stepV *= g;
+		dL += stepL;
+		dV += stepV;
+		if (!(dL > dV && dV > 0)) return false;
+	}
+	return false;
+}
+
+/**
+ * Saturation table in two overlapping segments, each uniform in its own abscissa:
+ * low: z = 1/T from the triple point to 0.95·Tc (ln P and ln ρ'' are nearly linear in 1/T);
+ * high: z = ξ = (1 − T/Tc)^(1/3) from 0.85·Tc to the critical point (densities ≈ linear in ξ).
+ * Below 0.9·Tc the low segment is used, above it the high one. Stored: ln P, ρ', ln ρ''.
+ */
+interface SatSegment {
+	z0: number;
+	dz: number;
+	lnP: Float64Array;
+	rhoL: Float64Array;
+	lnRhoV: Float64Array;
+}
+interface SatTable {
+	split: number;
+	low: SatSegment;
+	high: SatSegment;
+}
+
+const SEGMENT_NODES = 100;
+
+function xiOf(fl: Fluid, T: number): number {
+	const th = 1 - T / fl.Tc;
+	return th > 0 ? Math.cbrt(th) : 0;
+}
+
+function segment(fl: Fluid, z0: number, z1: number, Tof: (z: number) => number, endsAtCritical: boolean): SatSegment {
+	const n = SEGMENT_NODES;
+	const seg: SatSegment = {
+		z0,
+		dz: (z1 - z0) / (n - 1),
+		lnP: new Float64Array(n),
+		rhoL: new Float64Array(n),
+		lnRhoV: new Float64Array(n)
+	};
+	const out: AkasakaOut = { dL: 0, dV: 0, P: 0 };
+	for (let i = 0; i < n; i++) {
+		if (endsAtCritical && i === n - 1) {
+			seg.lnP[i] = Math.log(fl.Pc);
+			seg.rhoL[i] = fl.rhoc;
+			seg.lnRhoV[i] = Math.log(fl.rhoc);
+			break;
+		}
+		const T = Tof(z0 + i * seg.dz);
+		let ok = akasaka(fl, T, fl.ancRhoL.value(T) / fl.rhor, fl.ancRhoV.value(T) / fl.rhor, out);
+		if (!ok && i >= 2) {
+			// continuation: extrapolate linearly from the two previous nodes
+			const eL = 2 * seg.rhoL[i - 1] - seg.rhoL[i - 2];
+			const eV = Math.exp(2 * seg.lnRhoV[i - 1] - seg.lnRhoV[i - 2]);
+			ok = akasaka(fl, T, eL / fl.rhor, eV / fl.rhor, out);
+		}
+		if (!ok)
+			throw new ThermoError(
+				'no-convergence',
+				`Saturation of ${fl.id} did not converge at T = ${fmt(T)} K while building the saturation table.`,
+				'This is a defect in the fluid data or the engine; please report it.'
+			);
+		seg.lnP[i] = Math.log(out.P);
+		seg.rhoL[i] = out.dL * fl.rhor;
+		seg.lnRhoV[i] = Math.log(out.dV * fl.rhor);
+	}
+	return seg;
+}
+
+function buildTable(fl: Fluid): SatTable {
+	const Tc = fl.Tc;
+	const low = segment(fl, 1 / fl.Tt, 1 / (0.95 * Tc), (z) => 1 / z, false);
+	const high = segment(fl, Math.cbrt(0.15), 0, (xi) => Tc * (1 - xi * xi * xi), true);
+	return { split: 0.9 * Tc, low, high };
+}
+
+/** The fluid's saturation table (built on first use, a few milliseconds). */
+export function satTable(fl: Fluid): SatTable {
+	let t = fl.cache.satTable as SatTable | undefined;
+	if (!t) {
+		t = buildTable(fl);
+		fl.cache.satTable = t;
+	}
+	return t;
+}
+
+/** 4-point Lagrange interpolation of arr at fractional index u (nodes uniform). */
+function lagrange(arr: Float64Array, u: number): number {
+	const n = arr.length;
+	let i = Math.floor(u) - 1;
+	if (i < 0) i = 0;
+	if (i > n - 4) i = n - 4;
+	const s = u - i;
+	const y0 = arr[i], y1 = arr[i + 1], y2 = arr[i + 2], y3 = arr[i + 3];
+	return (
+		(-y0 * (s - 1) * (s - 2) * (s - 3)) / 6 +
+		(y1 * s * (s - 2) * (s - 3)) / 2 -
+		(y2 * s * (s - 1) * (s - 3)) / 2 +
+		(y3 * s * (s - 1) * (s - 2)) / 6
+	);
+}
+
+/** Segment and fractional node index for T. */
+function locateInTable(tab: SatTable, fl: Fluid, T: number): [SatSegment, number] {
+	if (T < tab.split) return [tab.low, (1 / T - tab.low.z0) / tab.low.dz];
+	return [tab.high, (xiOf(fl, T) - tab.high.z0) / tab.high.dz];
+}
+
+/** Table-interpolated saturation at T (guesses and fast phase checks only; see TABLE_ACCURACY). */
+export interface SatGuess {
+	P: number;
+	rhoL: number;
+	rhoV: number;
+}
+
+/**
+ * Relative accuracy promised for satGuess (P and both densities) from the triple point to
+ * 0.999·Tc; checked for every registered fluid by the engine tests. Fast phase checks use margins
+ * of 10× this.
+ */
+export const TABLE_ACCURACY = 1e-5;
+
+export function satGuess(fl: Fluid, T: number, out: SatGuess): SatGuess {
+	const [seg, u] = locateInTable(satTable(fl), fl, T);
+	out.P = Math.exp(lagrange(seg.lnP, u));
+	out.rhoL = lagrange(seg.rhoL, u);
+	out.rhoV = Math.exp(lagrange(seg.lnRhoV, u));
+	return out;
+}
+
+/**
+ * Saturation at temperature T (K), Tt ≤ T ≤ Tc. Returns T, P (Pa) and the two densities (kg/m³).
+ * Within CRITICAL_BAND·Tc of Tc it returns the critical point. Throws `no-convergence` on failure.
+ */
+export function satAtT(fl: Fluid, T: number): SatPoint {
+	if (T >= fl.Tc * (1 - CRITICAL_BAND)) return { T, P: fl.Pc, rhoL: fl.rhoc, rhoV: fl.rhoc };
+	const g = satGuess(fl, T, { P: 0, rhoL: 0, rhoV: 0 });
+	const out: AkasakaOut = { dL: 0, dV: 0, P: 0 };
+	let ok = akasaka(fl, T, g.rhoL / fl.rhor, g.rhoV / fl.rhor, out);
+	if (!ok) ok = akasaka(fl, T, fl.ancRhoL.value(T) / fl.rhor, fl.ancRhoV.value(T) / fl.rhor, out);
+	if (!ok)
+		throw new ThermoError(
+			'no-convergence',
+			`Saturation of ${fl.id} did not converge at T = ${fmt(T)} K.`,
+			'Try a temperature a little further from the critical point, or report the inputs.'
+		);
+	return { T, P: out.P, rhoL: out.dL * fl.rhor, rhoV: out.dV * fl.rhor };
+}
+
+/** Table-based guess of the saturation temperature at P (triple-point pressure ≤ P ≤ Pc). */
+function guessTsat(fl: Fluid, tab: SatTable, P: number): number {
+	const lnP = Math.log(P);
+	const useLow = lnP < Math.log(satGuess(fl, tab.split, { P: 0, rhoL: 0, rhoV: 0 }).P);
+	const seg = useLow ? tab.low : tab.high;
+	const lp = seg.lnP;
+	// both segments store ln P rising with the node index
+	let lo = 0, hi = lp.length - 1;
+	while (hi - lo > 1) {
+		const mid = (lo + hi) >> 1;
+		if (lp[mid] <= lnP) lo = mid;
+		else hi = mid;
+	}
+	let a = lo, b = hi;
+	let fa = lagrange(lp, a) - lnP;
+	const fb0 = lagrange(lp, b) - lnP;
+	let u = fb0 === fa ? a : a + ((b - a) * -fa) / (fb0 - fa);
+	for (let k = 0; k < 40; k++) {
+		const fu = lagrange(lp, u) - lnP;
+		if (Math.abs(fu) < 1e-14) break;
+		if (fu < 0 === fa < 0) {
+			a = u;
+			fa = fu;
+		} else b = u;
+		u = 0.5 * (a + b);
+	}
+	const z = seg.z0 + u * seg.dz;
+	return useLow ? 1 / z : fl.Tc * (1 - z * z * z);
+}
+
+/**
+ * Saturation at pressure P (Pa), triple-point pressure ≤ P ≤ Pc: Newton in (τ, δ', δ'') with a
+ * table-interpolated start; falls back to an outer Newton/bisection on T over satAtT.
+ */
+export function satAtP(fl: Fluid, P: number): SatPoint {
+	if (P >= fl.Pc * (1 - 1e-12)) return { T: fl.Tc, P: fl.Pc, rhoL: fl.rhoc, rhoV: fl.rhoc };
+	const tab = satTable(fl);
+	const T0 = guessTsat(fl, tab, P);
+	const g0 = satGuess(fl, T0, { P: 0, rhoL: 0, rhoV: 0 });
+	let tau = fl.Tr / T0;
+	let dL = g0.rhoL / fl.rhor;
+	let dV = g0.rhoV / fl.rhor;
+	const c = fl.rhor * fl.R * fl.Tr;
+	let ok = false;
+	for (let it = 0; it < 30; it++) {
+		let r = fl.residualAt(dL, tau, 2);
+		const PL = (c * dL * (1 + r.d1)) / tau;
+		const a11 = (c * dL * (r.dt - 1 - r.d1)) / (tau * tau) / P;
+		const a12 = (c * (1 + 2 * r.d1 + r.d2)) / tau / P;
+		const KL = r.d1 + r.a + Math.log(dL);
+		const KtL = r.t1 + r.dt;
+		const KdL = (1 + 2 * r.d1 + r.d2) / dL;
+		r = fl.residualAt(dV, tau, 2);
+		const PV = (c * dV * (1 + r.d1)) / tau;
+		const a21 = (c * dV * (r.dt - 1 - r.d1)) / (tau * tau) / P;
+		const a23 = (c * (1 + 2 * r.d1 + r.d2)) / tau / P;
+		const KV = r.d1 + r.a + Math.log(dV);
+		const KtV = r.t1 + r.dt;
+		const KdV = (1 + 2 * r.d1 + r.d2) / dV;
+		const r1 = PL / P - 1, r2 = PV / P - 1, r3 = KL - KV;
+		if (!(a12 > 0 && a23 > 0)) break;
+		const a31 = (KtL - KtV) / tau;
+		const den = a31 - (KdL * a11) / a12 + (KdV * a21) / a23;
+		const dTau = (-r3 + (KdL * r1) / a12 - (KdV * r2) / a23) / den;
+		const ddL = (-r1 - a11 * dTau) / a12;
+		const ddV = (-r2 - a21 * dTau) / a23;
+		if (!Number.isFinite(dTau + ddL + ddV)) break;
+		let g = 1;
+		while (g > 1e-6 && !(dL + g * ddL > dV + g * ddV && dV + g * ddV > 0 && tau + g * dTau > 0)) g *= 0.5;
+		tau += g * dTau;
+		dL += g * ddL;
+		dV += g * ddV;
+		if (
+			Math.abs(dTau) < 1e-14 * tau &&
+			Math.abs(ddL) < 1e-13 * dL &&
+			Math.abs(ddV) < 1e-13 * dV &&
+			Math.abs(r1) < 1e-9 &&
+			Math.abs(r2) < 1e-9
+		) {
+			ok = dL - dV > 1e-9 * dL;
+			break;
+		}
+	}
+	if (ok) return { T: fl.Tr / tau, P, rhoL: dL * fl.rhor, rhoV: dV * fl.rhor };
+	return satAtPByT(fl, P, T0);
+}
+
+/** Robust fallback: solve ln Psat(T) = ln P by safeguarded secant on T within [Tt, Tc]. */
+function satAtPByT(fl: Fluid, P: number, T0: number): SatPoint {
+	let lo = fl.Tt, hi = fl.Tc * (1 - CRITICAL_BAND);
+	const lnP = Math.log(P);
+	let T = Math.min(Math.max(T0, lo), hi);
+	let best: SatPoint | null = null;
+	for (let it = 0; it < 100; it++) {
+		const s = satAtT(fl, T);
+		const f = Math.log(s.P) - lnP;
+		best = s;
+		if (Math.abs(f) < 1e-13) break;
+		if (f < 0) lo = T;
+		else hi = T;
+		// Clapeyron-like slope: d lnP/dT ≈ lnP/T·(…) — use secant with bracket
+		const slopeT = (Math.log(satAtT(fl, T * (1 - 1e-7)).P) - Math.log(s.P)) / (-T * 1e-7);
+		let Tn = T - f / slopeT;
+		if (!(Tn > lo && Tn < hi)) Tn = 0.5 * (lo + hi);
+		if (Math.abs(Tn - T) < 1e-12 * T) {
+			T = Tn;
+			best = satAtT(fl, T);
+			break;
+		}
+		T = Tn;
+	}
+	if (!best || Math.abs(Math.log(best.P) - lnP) > 1e-9)
+		throw new ThermoError(
+			'no-convergence',
+			`Saturation of ${fl.id} did not converge at P = ${fmt(P)} Pa.`,
+			'Try a pressure a little further from the critical pressure, or report the inputs.'
+		);
+	return { T: best.T, P, rhoL: best.rhoL, rhoV: best.rhoV };
+}
+
+
+/** The equation's vapor pressure at the triple-point temperature, Pa. */
+export function triplePressure(fl: Fluid): number {
+	return Math.exp(satTable(fl).low.lnP[0]);
+}

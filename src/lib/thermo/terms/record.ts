@@ -1,0 +1,135 @@
+/**
+ * The record every Helmholtz term adds into, and the per-evaluation context the terms share.
+ *
+ * The record holds the reduced Helmholtz energy α(δ, τ) and its derivatives in scaled form,
+ * the form the property relations use (IAPWS R6-95(2018), Table 3):
+ *   a = α,  d1 = δ·α_δ,  d2 = δ²·α_δδ,  d3 = δ³·α_δδδ,
+ *   t1 = τ·α_τ,  t2 = τ²·α_ττ,  t3 = τ³·α_τττ,
+ *   dt = δτ·α_δτ,  d2t = δ²τ·α_δδτ,  dt2 = δτ²·α_δττ.
+ * `order` says how far a term must go: 0 → a; 1 → + d1, t1; 2 → + d2, t2, dt; 3 → + d3, t3, d2t, dt2.
+ * Fields above the requested order are left at zero.
+ */
+
+export type DerivativeOrder = 0 | 1 | 2 | 3;
+
+export class AlphaRecord {
+	a = 0;
+	d1 = 0;
+	t1 = 0;
+	d2 = 0;
+	t2 = 0;
+	dt = 0;
+	d3 = 0;
+	t3 = 0;
+	d2t = 0;
+	dt2 = 0;
+
+	reset(): void {
+		this.a = 0;
+		this.d1 = 0;
+		this.t1 = 0;
+		this.d2 = 0;
+		this.t2 = 0;
+		this.dt = 0;
+		this.d3 = 0;
+		this.t3 = 0;
+		this.d2t = 0;
+		this.dt2 = 0;
+	}
+
+	copyFrom(o: AlphaRecord): void {
+		this.a = o.a;
+		this.d1 = o.d1;
+		this.t1 = o.t1;
+		this.d2 = o.d2;
+		this.t2 = o.t2;
+		this.dt = o.dt;
+		this.d3 = o.d3;
+		this.t3 = o.t3;
+		this.d2t = o.d2t;
+		this.dt2 = o.dt2;
+	}
+}
+
+/**
+ * Values shared by all terms of one evaluation at (δ, τ): logarithms and tables of integer powers
+ * (built by multiplication once, read by every term).
+ */
+export class EvalContext {
+	delta = 1;
+	tau = 1;
+	lnDelta = 0;
+	lnTau = 0;
+	/** dPow[k] = δ^k for k = 0…maxD */
+	readonly dPow: Float64Array;
+	/** tPow[k] = τ^k for k = 0…maxT */
+	readonly tPow: Float64Array;
+
+	constructor(maxD: number, maxT: number) {
+		this.dPow = new Float64Array(maxD + 1);
+		this.tPow = new Float64Array(maxT + 1);
+	}
+
+	/** Set (δ, τ); a table is rebuilt only when its variable changed (solvers often hold T or ρ fixed). */
+	set(delta: number, tau: number): void {
+		if (delta !== this.tableDelta) {
+			this.delta = delta;
+			this.lnDelta = Math.log(delta);
+			const dp = this.dPow;
+			let p = 1;
+			dp[0] = 1;
+			for (let k = 1; k < dp.length; k++) {
+				p *= delta;
+				dp[k] = p;
+			}
+			this.tableDelta = delta;
+		}
+		if (tau !== this.tableTau) {
+			this.tau = tau;
+			this.lnTau = Math.log(tau);
+			const tp = this.tPow;
+			let p = 1;
+			tp[0] = 1;
+			for (let k = 1; k < tp.length; k++) {
+				p *= tau;
+				tp[k] = p;
+			}
+			this.tableTau = tau;
+		}
+	}
+
+	/** Set (δ, τ) and their logarithms only (for the ideal part, which reads no tables). */
+	setLogs(delta: number, tau: number): void {
+		if (delta !== this.tableDelta) {
+			this.delta = delta;
+			this.lnDelta = Math.log(delta);
+			this.tableDelta = NaN;
+		}
+		if (tau !== this.tableTau) {
+			this.tau = tau;
+			this.lnTau = Math.log(tau);
+			this.tableTau = NaN;
+		}
+	}
+
+	private tableDelta = NaN;
+	private tableTau = NaN;
+}
+
+/** Largest integer exponent served from the power tables; larger or fractional ones use exp(e·ln x). */
+export const MAX_TABLE_EXPONENT = 64;
+
+/** An exponent's table index if it is a small non-negative integer, else −1 (use Math.pow). */
+export function tableIndex(e: number): number {
+	return Number.isInteger(e) && e >= 0 && e <= MAX_TABLE_EXPONENT ? e : -1;
+}
+
+/** A compiled term of α⁰ or αʳ: adds its value and derivatives (scaled, see AlphaRecord) into `rec`. */
+export interface TermEvaluator {
+	readonly kind: string;
+	/** largest integer δ exponent it reads from the context's table */
+	readonly maxD: number;
+	/** largest integer τ exponent it reads from the context's table */
+	readonly maxT: number;
+	add(ctx: EvalContext, order: DerivativeOrder, rec: AlphaRecord): void;
+}
