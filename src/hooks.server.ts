@@ -90,8 +90,9 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 export const handle = sequence(securityHeaders, apiErrorShape, authenticateApiToken, authenticateSession);
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
-	if (status === 404) return { message: 'Not found', code: 'not-found' };
+	// 4xx here are the framework's own answers to bad requests (unknown route, wrong content type)
+	if (status < 500) return { message, code: codeForStatus(status) };
 	const ref = randomUUID().slice(0, 8);
 	console.error(`[statewright] ${ref} ${event.request.method} ${event.url.pathname}`, error);
-	return { message: status >= 500 ? `Something went wrong on our side (reference ${ref}).` : message, code: codeForStatus(status), ref };
+	return { message: `Something went wrong on our side (reference ${ref}).`, code: codeForStatus(status), ref };
 };

@@ -72,6 +72,8 @@ export async function startFakeSmtp(db: DB): Promise<{ port: number; close(): Pr
 		server.once('error', reject);
 		server.listen(0, '127.0.0.1', () => resolve());
 	});
+	// the catcher alone must not keep a stopping server process alive
+	server.server.unref();
 	const port = (server.server.address() as AddressInfo).port;
 	return { port, close: () => new Promise<void>((resolve) => server.close(() => resolve())) };
 }

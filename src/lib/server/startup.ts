@@ -19,6 +19,11 @@ export async function startApp(options: { devServerUrl?: string } = {}): Promise
 
 	const timer = setInterval(() => void deleteExpiredSessions(db).catch(() => {}), 3600_000);
 	timer.unref();
+	// adapter-node emits this after it stopped taking requests (SIGINT/SIGTERM)
+	process.once('sveltekit:shutdown', () => {
+		clearInterval(timer);
+		void mailer.close().finally(() => db.destroy());
+	});
 
 	const shownHost = c.host === '0.0.0.0' || c.host === '::' ? 'localhost' : c.host;
 	const url = options.devServerUrl ?? c.origin ?? `http://${shownHost}:${c.port}`;

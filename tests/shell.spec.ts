@@ -1,0 +1,113 @@
+import { expect, test } from '@playwright/test';
+import { DEMO, signInPage } from './helpers';
+
+test.describe('the shell', () => {
+	test('health check answers', async ({ request }) => {
+		const res = await request.get('/healthz');
+		expect(res.status()).toBe(200);
+		expect(await res.json()).toEqual({ ok: true });
+	});
+
+	test('signed-out home explains the product and offers sign-in', async ({ page }) => {
+		await page.goto('/');
+		await expect(page.getByRole('heading', { level: 1 })).toContainText('Follow the working fluid');
+		await expect(page.getByRole('link', { name: 'Sign in' }).first()).toBeVisible();
+		await expect(page.getByRole('img', { name: /heating leg/ })).toBeVisible();
+	});
+
+	test('signed-in home lists the teams and the empty sheet list', async ({ page }) => {
+		await signInPage(page, DEMO.checker);
+		const teams = page.getByTestId('team-list');
+		await expect(teams).toContainText('Brindlemoor Thermal Works');
+		await expect(teams).toContainText('Checker');
+		await expect(page.getByText('No sheets yet')).toBeVisible();
+		await page.getByTestId('team-list').getByRole('link').first().click();
+		await expect(page.getByTestId('sheet-list')).toContainText('No sheets yet');
+		await expect(page.getByTestId('sheet-list')).toContainText('for you to check');
+	});
+
+	test('a new user starts a team and becomes its owner', async ({ page }) => {
+		await page.goto('/signup');
+		await page.getByLabel('Name').fill('Tess Founder');
+		await page.getByLabel('E-mail').fill(`founder.${Date.now()}@e2e.example`);
+		await page.getByLabel('Password').fill('a long enough password');
+		await page.getByRole('button', { name: 'Create account' }).click();
+		await page.getByLabel('Team name').fill('Coldchain Receivers');
+		await page.getByRole('button', { name: 'Create team' }).click();
+		await expect(page).toHaveURL(/\/t\/coldchain-receivers(-\d+)?$/);
+		await expect(page.getByRole('heading', { name: 'Coldchain Receivers' })).toBeVisible();
+		await expect(page.getByTestId('member-summary')).toContainText('Owner');
+	});
+
+	test('our own 404 page, also for a team you are not in', async ({ page }) => {
+		const res = await page.goto('/no/such/page');
+		expect(res?.status()).toBe(404);
+		await expect(page.getByRole('heading', { name: 'Off the chart' })).toBeVisible();
+		await signInPage(page, DEMO.viewer);
+		const team = await page.goto('/t/someone-elses-team');
+		expect(team?.status()).toBe(404);
+		await expect(page.getByTestId('error-page')).toHaveAttribute('data-status', '404');
+	});
+
+	test('the theme toggle switches to slate and chalk and is remembered', async ({ page }) => {
+		await page.emulateMedia({ colorScheme: 'light' });
+		await page.goto('/');
+		await expect(page.locator('html')).toHaveAttribute('data-theme', 'light');
+		await page.getByTestId('theme-toggle').click();
+		await expect(page.locator('html')).toHaveAttribute('data-theme', 'dark');
+		const bg = await page.evaluate(() => getComputedStyle(document.documentElement).backgroundColor);
+		expect(bg).toBe('rgb(26, 32, 39)');
+		await page.reload();
+		await expect(page.locator('html')).toHaveAttribute('data-theme', 'dark');
+	});
+
+	test('numbers are set in JetBrains Mono', async ({ page }) => {
+		await signInPage(page, DEMO.owner);
+		const family = await page.locator('.num').first().evaluate((el) => getComputedStyle(el).fontFamily);
+		expect(family).toContain('JetBrains Mono');
+		expect(await page.evaluate(() => document.fonts.check('12px "JetBrains Mono"'))).toBe(true);
+	});
+
+	test('responses carry a CSP with a nonce and the other security headers', async ({ request }) => {
+		const res = await request.get('/signin');
+		const h = res.headers();
+		expect(h['content-security-policy']).toMatch(/script-src 'self' 'nonce-[^']+'/);
+		expect(h['content-security-policy']).toContain("frame-ancestors 'none'");
+		expect(h['x-content-type-options']).toBe('nosniff');
+		expect(h['x-frame-options']).toBe('DENY');
+		expect(h['referrer-policy']).toBe('same-origin');
+		expect(h['cache-control']).toBe('private, no-store');
+		const html = await res.text();
+		const nonce = h['content-security-policy'].match(/'nonce-([^']+)'/)![1];
+		expect(html).toContain(`<script nonce="${nonce}">`);
+	});
+
+	test('every API error has the same JSON shape', async ({ request }) => {
+		const cases: Array<[string, string, number, string]> = [
+			['GET', '/api/v1/no-such-route', 404, 'not-found'],
+			['DELETE', '/api/v1/me', 405, 'method-not-allowed'],
+			['GET', '/api/v1/me', 401, 'unauthenticated'],
+			['GET', '/api/v1/teams/Bad_Name', 404, 'not-found']
+		];
+		for (const [method, path, status, code] of cases) {
+			const res = await request.fetch(path, { method });
+			expect(res.status(), `${method} ${path}`).toBe(status);
+			const body = await res.json();
+			expect(body.error.code, `${method} ${path}`).toBe(code);
+			expect(typeof body.error.message).toBe('string');
+		}
+	});
+
+	test('the outbox is for owners', async ({ browser }) => {
+		for (const [who, status] of [
+			['viewer', 403],
+			['owner', 200]
+		] as const) {
+			const ctx = await browser.newContext();
+			const page = await ctx.newPage();
+			await signInPage(page, DEMO[who]);
+			expect((await page.goto('/dev/outbox'))?.status(), who).toBe(status);
+			await ctx.close();
+		}
+	});
+});
