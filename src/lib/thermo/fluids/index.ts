@@ -1,5 +1,9 @@
 import type { FluidData } from './schema.ts';
 import { water } from './water.ts';
+import { ammonia } from './ammonia.ts';
+import { carbonDioxide } from './carbon-dioxide.ts';
+import { r134a } from './r134a.ts';
+import { nitrogen } from './nitrogen.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -8,4 +12,8 @@ import { water } from './water.ts';
  */
 export const fluidData: FluidData[] = [
 	water,
+	ammonia,
+	carbonDioxide,
+	r134a,
+	nitrogen,
 ];
