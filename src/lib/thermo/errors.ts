@@ -37,7 +37,15 @@ export type ThermoErrorCode =
 	/** a fluid data file is malformed; `field` names the first bad field */
 	| 'invalid-fluid-data'
 	/** a part of the contract that is not built yet */
-	| 'not-implemented';
+	| 'not-implemented'
+	/** a leg's target is never reached along the leg; the message states the reachable range */
+	| 'unreachable-target'
+	/** a leg's target names the leg's own invariant (an isobaric leg cannot end on a P) */
+	| 'target-is-invariant'
+	/** a malformed leg spec: unknown process, not exactly one target, polytropic without n, bad samples */
+	| 'invalid-leg'
+	/** a malformed path spec: system, legs or design limits */
+	| 'invalid-path';
 
 /** One of several states that satisfy the same inputs (see `ambiguous-state`). */
 export interface StateCandidate {

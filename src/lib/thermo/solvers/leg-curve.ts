@@ -1,0 +1,698 @@
+/**
+ * The curve a process leg follows, cut at its crossings of the saturation lines into segments.
+ *
+ * Each process keeps one quantity fixed (the invariant: P, v, T, s, h, or ln P + n·ln v for a
+ * polytropic leg). Along the whole curve a canonical direction is fixed (rising T for isobaric and
+ * isochoric legs, rising v for isothermal, isentropic and polytropic legs, rising P for
+ * isenthalpic legs) and every segment is parametrised by a quantity that is monotone on it:
+ *
+ * | process     | single phase: parameter, solve                     | two-phase: parameter, solve          |
+ * | ----------- | -------------------------------------------------- | ------------------------------------ |
+ * | isobaric    | T; ρ from P(T, ρ) = P on the segment's branch      | ln v; fixed saturation at P          |
+ * | isochoric   | T; direct (T, ρ)                                   | T; saturation at T, x from v         |
+ * | isothermal  | ln v; direct (T, ρ)                                | ln v; fixed saturation at T          |
+ * | isentropic  | ln v; T from s(T, ρ) = s (ds/dT = cv/T > 0)        | T; saturation at T, x from s         |
+ * | isenthalpic | ln P; (T, ρ) from P and h by 2-D Newton            | ln P; saturation at P, x from h      |
+ * | polytropic  | ln v; P = C·v⁻ⁿ, T from P(T, ρ) = P                | ln v; saturation at P = C·v⁻ⁿ, x from v |
+ *
+ * Two-phase points are mass-weighted between the saturated phases (x = (v − v')/(v'' − v') etc.).
+ * Crossings are the temperatures where the invariant equals its value on a saturation line, found
+ * from the saturation table's nodes and refined by Newton along the line with the slopes
+ *   dPs/dT = (s'' − s')/(v'' − v') (Clapeyron), dρ/dT|sat = (dPs/dT − (∂P/∂T)_ρ)/(∂P/∂ρ)_T.
+ * The curve's domain is the formulation's range (Tmin ≤ T ≤ Tmax, P ≤ Pmax) with a pressure floor
+ * of 1 Pa (or the start's pressure if lower); the ends of the outer segments are where the curve
+ * leaves it.
+ */
+import { ThermoError, fmt } from '../errors.ts';
+import type { Fluid } from '../fluid.ts';
+import { evalPoint, Point, propDT, propDrho } from '../properties.ts';
+import { saturatedState, singleState } from '../state.ts';
+import type { Inputs, Process, SaturationLine, State } from '../types.ts';
+import { densityAtTP } from './density.ts';
+import { fixStateOf } from './fix-state.ts';
+import { locate } from './locate.ts';
+import { CRITICAL_BAND, TABLE_ACCURACY, domeNodes, satAtP, satAtT, satGuess, triplePressure, type SatGuess, type SatPoint } from './saturation.ts';
+
+/** A point on a leg's curve: a single-phase evaluation, or a saturation with a quality. */
+export interface CPt {
+	T: number;
+	rho: number;
+	P: number;
+	u: number;
+	h: number;
+	s: number;
+	/** quality on or inside the dome, else null */
+	x: number | null;
+	/** the saturation at T for two-phase points and crossings */
+	sat: SatPoint | null;
+	/** the single-phase evaluation (order 2), for building the State */
+	pt: Point | null;
+	/** cached public State */
+	state?: State;
+}
+
+export type Branch = 'liquid' | 'vapor' | 'any';
+
+export interface Segment {
+	dome: boolean;
+	branch: Branch;
+	/** parameter at the canonical start / end of the segment */
+	ta: number;
+	tb: number;
+	/** points at the ends, once known (crossings are known from the start; outer ends are found lazily) */
+	A: CPt | null;
+	B: CPt | null;
+	/** the saturation line at each end (null for an outer end) */
+	lineA: SaturationLine | null;
+	lineB: SaturationLine | null;
+}
+
+export interface CrossingPt {
+	line: SaturationLine;
+	p: CPt;
+}
+
+/** Pressure floor of every curve, Pa (lowered to the start's pressure if that is lower). */
+export const P_FLOOR = 1;
+
+const M = 10 * TABLE_ACCURACY;
+
+/** The process's fixed quantity and its parameters. */
+export interface Invariant {
+	process: Process;
+	P?: number;
+	rho?: number;
+	T?: number;
+	s?: number;
+	h?: number;
+	/** polytropic: n and ln C = ln P + n·ln v */
+	n?: number;
+	lnC?: number;
+}
+
+function mixture(fl: Fluid, sat: SatPoint, x: number, L: Point, V: Point): CPt {
+	const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
+	const v = vL + x * (vV - vL);
+	return {
+		T: sat.T,
+		rho: 1 / v,
+		P: sat.P,
+		u: L.u + x * (V.u - L.u),
+		h: L.h + x * (V.h - L.h),
+		s: L.s + x * (V.s - L.s),
+		x,
+		sat,
+		pt: null
+	};
+}
+
+function phases(fl: Fluid, sat: SatPoint): [Point, Point] {
+	const L = evalPoint(fl, sat.T, sat.rhoL, new Point(), 1);
+	const V = evalPoint(fl, sat.T, sat.rhoV, new Point(), 1);
+	L.P = sat.P;
+	V.P = sat.P;
+	return [L, V];
+}
+
+function single(p: Point): CPt {
+	return { T: p.T, rho: p.rho, P: p.P, u: p.u, h: p.h, s: p.s, x: null, sat: null, pt: p };
+}
+
+/** The public State of a curve point (phase per the engine's rules in state.ts). */
+export function stateOf(fl: Fluid, c: CPt): State {
+	if (c.state) return c.state;
+	let st: State;
+	if (c.sat && c.x !== null) st = saturatedState(fl, c.sat, c.x);
+	else {
+		const p = c.pt ?? evalPoint(fl, c.T, c.rho, new Point(), 2);
+		const P = p.P;
+		const loc = locate(fl, p);
+		p.P = P;
+		st = loc.sat ? saturatedState(fl, loc.sat, loc.x ?? 0) : singleState(fl, p, loc.phase);
+	}
+	c.state = st;
+	return st;
+}
+
+/** A curve point from a public State (the leg's start). */
+export function cptOfState(fl: Fluid, st: State): CPt {
+	if (st.x !== null && st.phase !== 'supercritical-fluid') {
+		const sat = satAtT(fl, st.T);
+		const [L, V] = phases(fl, sat);
+		const c = mixture(fl, sat, st.x, L, V);
+		c.state = st;
+		return c;
+	}
+	const p = evalPoint(fl, st.T, st.rho, new Point(), 2);
+	p.P = st.P;
+	return { T: st.T, rho: st.rho, P: st.P, u: st.u, h: st.h, s: st.s, x: null, sat: null, pt: p, state: st };
+}
+
+/** Saturation at T with both phases' v, u, h, s, P and their slopes along the lines (T < Tc). */
+interface LineSlopes {
+	sat: SatPoint;
+	/** per phase [0 liquid, 1 vapor]: [v, u, h, s] and d/dT */
+	y: [number[], number[]];
+	dy: [number[], number[]];
+	dPs: number;
+}
+
+function lineAt(fl: Fluid, T: number): LineSlopes {
+	const sat = satAtT(fl, T);
+	const L = evalPoint(fl, T, sat.rhoL, new Point(), 2);
+	const V = evalPoint(fl, T, sat.rhoV, new Point(), 2);
+	const dPs = (V.s - L.s) / (1 / sat.rhoV - 1 / sat.rhoL);
+	const out: LineSlopes = { sat, y: [[], []], dy: [[], []], dPs };
+	[L, V].forEach((p, k) => {
+		const drho = (dPs - p.dPdT) / p.dPdrho;
+		out.y[k] = [1 / p.rho, p.u, p.h, p.s];
+		out.dy[k] = [-drho / (p.rho * p.rho), propDT(p, 'u') + propDrho(p, 'u') * drho, propDT(p, 'h') + propDrho(p, 'h') * drho, propDT(p, 's') + propDrho(p, 's') * drho];
+	});
+	return out;
+}
+
+/** F on a saturation line from P and [v, u, h, s]; dF/dT from their slopes. */
+type LineFn = (P: number, y: ArrayLike<number>, dP: number, dy: ArrayLike<number>) => [number, number];
+
+/**
+ * Temperatures where F vanishes on one saturation line (0 liquid, 1 vapor): sign changes between
+ * the saturation table's nodes (and between the last node and the critical point), refined by
+ * Newton kept inside the bracket.
+ */
+function lineRoots(fl: Fluid, side: 0 | 1, F: LineFn): number[] {
+	const nd = domeNodes(fl);
+	const n = nd.n;
+	const Ts: number[] = [];
+	const Fs: number[] = [];
+	const y = [0, 0, 0, 0];
+	const arr = side === 0 ? nd.liq : nd.vap;
+	for (let i = 0; i < n; i++) {
+		for (let k = 0; k < 4; k++) y[k] = arr[k][i];
+		Ts.push(nd.T[i]);
+		Fs.push(F(nd.P[i], y, 0, y)[0]);
+	}
+	const c = evalPoint(fl, fl.Tc, fl.rhoc, new Point(), 1);
+	const Tcb = fl.Tc * (1 - 2 * CRITICAL_BAND);
+	if (Ts[n - 1] < Tcb) {
+		Ts.push(Tcb);
+		Fs.push(F(fl.Pc, [1 / fl.rhoc, c.u, c.h, c.s], 0, y)[0]);
+	}
+	const roots: number[] = [];
+	for (let i = 0; i < Ts.length - 1; i++) {
+		let a = Ts[i], b = Ts[i + 1];
+		let fa = Fs[i];
+		const fb = Fs[i + 1];
+		if (!Number.isFinite(fa) || !Number.isFinite(fb)) continue;
+		if (fa === 0) {
+			roots.push(a);
+			continue;
+		}
+		if (fa < 0 === fb < 0) continue;
+		let T = a - (fa * (b - a)) / (fb - fa);
+		for (let it = 0; it < 80; it++) {
+			const ls = lineAt(fl, T);
+			const [f, df] = F(ls.sat.P, ls.y[side], ls.dPs, ls.dy[side]);
+			if (f === 0) break;
+			if (f < 0 === fa < 0) {
+				a = T;
+				fa = f;
+			} else b = T;
+			let next = T - f / df;
+			if (!(next > Math.min(a, b) && next < Math.max(a, b))) next = 0.5 * (a + b);
+			if (Math.abs(next - T) <= 1e-13 * T || Math.abs(b - a) <= 1e-13 * T) {
+				T = next;
+				break;
+			}
+			T = next;
+		}
+		if (!roots.some((r) => Math.abs(r - T) <= 1e-9 * T)) roots.push(T);
+	}
+	return roots;
+}
+
+export type Param = 'T' | 'lnv' | 'lnP';
+
+export function paramOf(kind: Param, c: CPt): number {
+	return kind === 'T' ? c.T : kind === 'lnv' ? -Math.log(c.rho) : Math.log(c.P);
+}
+
+/** The curve of one leg: its segments in canonical order, evaluators and domain. */
+export class Curve {
+	readonly fl: Fluid;
+	readonly inv: Invariant;
+	readonly process: Process;
+	readonly singleParam: Param;
+	readonly domeParam: Param;
+	segs: Segment[] = [];
+	crossings: CrossingPt[] = [];
+	readonly Pfloor: number;
+	private fixedSat: { sat: SatPoint; L: Point; V: Point } | null = null;
+	private g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
+	/** evaluations done (for benchmarks and tests) */
+	evaluations = 0;
+
+	constructor(fl: Fluid, inv: Invariant, start: CPt) {
+		this.fl = fl;
+		this.inv = inv;
+		this.process = inv.process;
+		this.Pfloor = Math.min(P_FLOOR, start.P * (1 - 1e-12));
+		const params: Record<Process, [Param, Param]> = {
+			isobaric: ['T', 'lnv'],
+			isochoric: ['T', 'T'],
+			isothermal: ['lnv', 'lnv'],
+			isentropic: ['lnv', 'T'],
+			isenthalpic: ['lnP', 'lnP'],
+			polytropic: ['lnv', 'lnv']
+		};
+		[this.singleParam, this.domeParam] = params[inv.process];
+		this.build(start);
+	}
+
+	/** +1 when the two-phase parameter rises along the canonical direction, −1 when it falls. */
+	get domeSign(): 1 | -1 {
+		return this.process === 'isentropic' ? -1 : 1;
+	}
+
+	/** Key rising along the canonical direction (orders crossings). */
+	key(c: CPt): number {
+		switch (this.process) {
+			case 'isobaric':
+				return c.h;
+			case 'isochoric':
+				return c.T;
+			case 'isenthalpic':
+				return Math.log(c.P);
+			default:
+				return -Math.log(c.rho);
+		}
+	}
+
+	/** Whether a point lies in the curve's domain (g ≤ 0; see violation). */
+	violation(c: CPt): number {
+		const fl = this.fl;
+		return Math.max(Math.log(c.P / fl.Pmax), Math.log(this.Pfloor / c.P), c.T / fl.Tmax - 1, fl.Tmin / c.T - 1);
+	}
+
+	// ---- evaluators ---------------------------------------------------------------------------
+
+	/** Point at parameter t of a segment; null when no state there (solver failure or out of range). */
+	at(seg: Segment, t: number, guess: CPt | null): CPt | null {
+		this.evaluations++;
+		try {
+			const c = seg.dome ? this.dome(t) : this.single(t, guess, seg.branch);
+			if (!c || !Number.isFinite(c.T) || !Number.isFinite(c.rho) || !(c.P > 0)) return null;
+			return c;
+		} catch (e) {
+			if (e instanceof ThermoError) return null;
+			throw e;
+		}
+	}
+
+	private single(t: number, guess: CPt | null, branch: Branch): CPt | null {
+		const fl = this.fl, inv = this.inv;
+		switch (inv.process) {
+			case 'isobaric':
+				return this.isobaricSingle(t, guess, branch);
+			case 'isochoric':
+				return single(evalPoint(fl, t, inv.rho as number, new Point(), 2));
+			case 'isothermal':
+				return single(evalPoint(fl, inv.T as number, Math.exp(-t), new Point(), 2));
+			case 'isentropic':
+				return this.tAtRho(Math.exp(-t), guess, branch, (p) => [p.s - (inv.s as number), p.cv / p.T], { s: inv.s as number });
+			case 'isenthalpic':
+				return this.isenthalpicSingle(Math.exp(t), guess, branch);
+			case 'polytropic': {
+				const P = Math.exp((inv.lnC as number) - (inv.n as number) * t);
+				const c = this.tAtRho(Math.exp(-t), guess, branch, (p) => [p.P / P - 1, p.dPdT / P], { P });
+				if (c) c.P = P;
+				return c;
+			}
+		}
+	}
+
+	private isobaricSingle(T: number, guess: CPt | null, branch: Branch): CPt | null {
+		const fl = this.fl;
+		const P = this.inv.P as number;
+		let rho: number;
+		if (T < fl.Tc && branch !== 'any') {
+			satGuess(fl, T, this.g);
+			if (branch === 'liquid') rho = densityAtTP(fl, T, P, Math.max(guess?.rho ?? 0, this.g.rhoL * 1.001), this.g.rhoL * (1 - M));
+			else rho = densityAtTP(fl, T, P, Math.min(guess?.rho ?? P / (fl.R * T), this.g.rhoV), 0, this.g.rhoV * (1 + M));
+		} else if (T < fl.Tc) {
+			satGuess(fl, T, this.g);
+			rho = densityAtTP(fl, T, P, Math.max(guess?.rho ?? 0, this.g.rhoL), this.g.rhoL * (1 - M));
+		} else rho = densityAtTP(fl, T, P, guess?.rho ?? (P < fl.Pc ? P / (fl.R * T) : 2 * fl.rhoc));
+		if (!(rho > 0)) return null;
+		const p = evalPoint(fl, T, rho, new Point(), 2);
+		p.P = P;
+		return single(p);
+	}
+
+	/** T at fixed ρ with f(point) = 0, Newton from the guess (df/dT given); fallback: the engine's flash. */
+	private tAtRho(rho: number, guess: CPt | null, branch: Branch, f: (p: Point) => [number, number], pair: Inputs): CPt | null {
+		const fl = this.fl;
+		let T = guess ? guess.T : fl.Tc;
+		const p = new Point();
+		for (let it = 0; it < 40; it++) {
+			evalPoint(fl, T, rho, p, 2);
+			const [r, dr] = f(p);
+			if (!Number.isFinite(r) || !(dr > 0)) break;
+			let dT = -r / dr;
+			const cap = 0.25 * T;
+			if (Math.abs(dT) > cap) dT = Math.sign(dT) * cap;
+			if (Math.abs(dT) <= 1e-13 * T) return single(p);
+			T += dT;
+			if (!(T > 0.5 * fl.Tmin && T < 2 * fl.Tmax)) break;
+			if (Math.abs(dT) <= 1e-11 * T) {
+				evalPoint(fl, T, rho, p, 2);
+				return single(p);
+			}
+		}
+		return this.fallback({ ...pair, rho }, guess, branch);
+	}
+
+	private isenthalpicSingle(P: number, guess: CPt | null, branch: Branch): CPt | null {
+		const fl = this.fl;
+		const h0 = this.inv.h as number;
+		const sh = fl.R * fl.Tc;
+		let T = guess ? guess.T : fl.Tc;
+		let z = Math.log(guess ? guess.rho : P / (fl.R * fl.Tc));
+		const p = new Point();
+		for (let it = 0; it < 50; it++) {
+			const rho = Math.exp(z);
+			evalPoint(fl, T, rho, p, 2);
+			const r1 = p.P / P - 1, r2 = (p.h - h0) / sh;
+			const j11 = p.dPdT / P, j12 = (rho * p.dPdrho) / P;
+			const j21 = propDT(p, 'h') / sh, j22 = (rho * propDrho(p, 'h')) / sh;
+			const det = j11 * j22 - j12 * j21;
+			if (!Number.isFinite(det) || det === 0 || !(p.dPdrho > 0)) break;
+			let dT = -(r1 * j22 - j12 * r2) / det;
+			let dz = -(j11 * r2 - r1 * j21) / det;
+			const m = Math.max(1, Math.abs(dT) / (0.2 * T), Math.abs(dz) / 0.5);
+			dT /= m;
+			dz /= m;
+			T += dT;
+			z += dz;
+			if (!(T > 0.5 * fl.Tmin && T < 2 * fl.Tmax)) break;
+			if (Math.abs(dT) <= 1e-12 * T && Math.abs(dz) <= 1e-12) {
+				evalPoint(fl, T, Math.exp(z), p, 2);
+				p.P = P;
+				return single(p);
+			}
+		}
+		return this.fallback({ P, h: h0 }, guess, branch);
+	}
+
+	/** The engine's general flash for the pair; where it finds several states, the one nearest the guess. */
+	private fallback(inputs: Inputs, guess: CPt | null, branch: Branch): CPt | null {
+		const fl = this.fl;
+		let st: State;
+		try {
+			st = fixStateOf(fl, inputs, branch === 'liquid' ? { hint: 'liquid-side' } : branch === 'vapor' ? { hint: 'vapor-side' } : {});
+		} catch (e) {
+			if (!(e instanceof ThermoError) || e.code !== 'ambiguous-state' || !e.candidates || !guess) return null;
+			const best = [...e.candidates].sort((a, b) => Math.abs(a.T - guess.T) - Math.abs(b.T - guess.T))[0];
+			const p = evalPoint(fl, best.T, best.rho, new Point(), 2);
+			return single(p);
+		}
+		if (st.x !== null && st.phase === 'saturated-mixture') return null;
+		const p = evalPoint(fl, st.T, st.rho, new Point(), 2);
+		p.P = st.P;
+		return single(p);
+	}
+
+	/** Two-phase point at parameter t; null when the invariant puts no mixture there. */
+	private dome(t: number): CPt | null {
+		const fl = this.fl, inv = this.inv;
+		let sat: SatPoint, L: Point, V: Point, x: number;
+		if (this.fixedSat) {
+			({ sat, L, V } = this.fixedSat);
+			x = (Math.exp(t) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
+		} else {
+			if (inv.process === 'isochoric' || inv.process === 'isentropic') {
+				if (!(t >= fl.Tmin * (1 - 1e-12) && t < fl.Tc * (1 - CRITICAL_BAND))) return null;
+				sat = satAtT(fl, t);
+			} else {
+				const P = inv.process === 'isenthalpic' ? Math.exp(t) : Math.exp((inv.lnC as number) - (inv.n as number) * t);
+				if (!(P >= triplePressure(fl) * (1 - 1e-12) && P < fl.Pc)) return null;
+				sat = satAtP(fl, P);
+			}
+			[L, V] = phases(fl, sat);
+			if (inv.process === 'isochoric') x = (1 / (inv.rho as number) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
+			else if (inv.process === 'isentropic') x = ((inv.s as number) - L.s) / (V.s - L.s);
+			else if (inv.process === 'isenthalpic') x = ((inv.h as number) - L.h) / (V.h - L.h);
+			else x = (Math.exp(t) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
+		}
+		if (!(x >= -1e-9 && x <= 1 + 1e-9)) return null;
+		return mixture(fl, sat, Math.min(1, Math.max(0, x)), L, V);
+	}
+
+	/**
+	 * Integrand of the leg integral on a segment at parameter t: for parameter ln v, P·v
+	 * (∫P dv = ∫P·v d ln v); for the isentropic two-phase segment (parameter T), −v·dPs/dT
+	 * (−∫v dP). Returns [value, kind] where kind says which integral it belongs to.
+	 */
+	integrand(seg: Segment, t: number, guess: CPt | null): number {
+		if (seg.dome && this.process === 'isentropic') {
+			const fl = this.fl;
+			const sat = satAtT(fl, t);
+			const [L, V] = phases(fl, sat);
+			const x = ((this.inv.s as number) - L.s) / (V.s - L.s);
+			const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
+			const dPs = (V.s - L.s) / (vV - vL);
+			return -(vL + x * (vV - vL)) * dPs;
+		}
+		const c = this.at(seg, t, guess);
+		if (!c) throw new ThermoError('no-convergence', `A point of this ${this.process} leg could not be solved.`, 'Please report the leg; try a slightly different start or target.');
+		return c.P / c.rho;
+	}
+
+	// ---- construction -------------------------------------------------------------------------
+
+	private crossingPt(sat: SatPoint, line: SaturationLine): CPt {
+		const [L, V] = phases(this.fl, sat);
+		return mixture(this.fl, sat, line === 'saturated-liquid' ? 0 : 1, L, V);
+	}
+
+	private build(start: CPt): void {
+		const fl = this.fl, inv = this.inv;
+		const Pt = triplePressure(fl);
+		const subT = (T: number) => T < fl.Tc * (1 - CRITICAL_BAND);
+		let crossings: CrossingPt[] = [];
+		if (inv.process === 'isobaric') {
+			const P = inv.P as number;
+			if (P >= Pt * (1 - 1e-12) && P < fl.Pc) {
+				const sat = satAtP(fl, P);
+				this.fixedSat = { sat, ...(([L, V]) => ({ L, V }))(phases(fl, sat)) };
+				crossings = [
+					{ line: 'saturated-liquid', p: this.crossingPt(sat, 'saturated-liquid') },
+					{ line: 'saturated-vapor', p: this.crossingPt(sat, 'saturated-vapor') }
+				];
+			}
+		} else if (inv.process === 'isothermal') {
+			const T = inv.T as number;
+			if (subT(T)) {
+				const sat = satAtT(fl, T);
+				this.fixedSat = { sat, ...(([L, V]) => ({ L, V }))(phases(fl, sat)) };
+				crossings = [
+					{ line: 'saturated-liquid', p: this.crossingPt(sat, 'saturated-liquid') },
+					{ line: 'saturated-vapor', p: this.crossingPt(sat, 'saturated-vapor') }
+				];
+			}
+		} else {
+			const F = this.lineFn();
+			for (const side of [0, 1] as const) {
+				const line: SaturationLine = side === 0 ? 'saturated-liquid' : 'saturated-vapor';
+				for (const T of lineRoots(fl, side, F)) crossings.push({ line, p: this.crossingPt(T >= fl.Tc * (1 - 2 * CRITICAL_BAND) ? satAtT(fl, fl.Tc) : satAtT(fl, T), line) });
+			}
+			// a start on a saturation line is a point of the curve on that line
+			if (start.x === 0 || start.x === 1) {
+				const line: SaturationLine = start.x === 0 ? 'saturated-liquid' : 'saturated-vapor';
+				if (!crossings.some((c) => c.line === line && Math.abs(c.p.T - start.T) <= 1e-7 * start.T)) crossings.push({ line, p: start });
+			}
+			crossings.sort((a, b) => this.key(a.p) - this.key(b.p));
+		}
+		this.crossings = crossings;
+		// regions of the m + 1 pieces between crossings
+		const m = crossings.length;
+		const dome: boolean[] = new Array(m + 1).fill(false);
+		if (this.fixedSat) dome[1] = true;
+		else if (m === 0) dome[0] = start.x !== null && start.x > 0 && start.x < 1;
+		else {
+			const probe = (c: CPt, dir: 1 | -1) => {
+				const t = paramOf(this.domeParam, c);
+				const eps = this.domeParam === 'T' ? 1e-6 * t : 1e-6;
+				const q = this.dome(t + dir * this.domeSign * eps);
+				return q !== null && q.x !== null && q.x > 0 && q.x < 1;
+			};
+			dome[0] = probe(crossings[0].p, -1);
+			for (let k = 1; k <= m; k++) dome[k] = probe(crossings[k - 1].p, 1);
+		}
+		const segs: Segment[] = [];
+		for (let k = 0; k <= m; k++) {
+			const a = k > 0 ? crossings[k - 1] : null;
+			const b = k < m ? crossings[k] : null;
+			const isDome = dome[k];
+			const param = isDome ? this.domeParam : this.singleParam;
+			const lines = [a?.line, b?.line].filter((l): l is SaturationLine => !!l);
+			const branch: Branch = isDome || lines.length === 0 ? 'any' : lines.every((l) => l === 'saturated-liquid') ? 'liquid' : lines.every((l) => l === 'saturated-vapor') ? 'vapor' : 'any';
+			const [ha, hb] = this.hardBounds(isDome, param);
+			segs.push({
+				dome: isDome,
+				branch,
+				ta: a ? paramOf(param, a.p) : ha,
+				tb: b ? paramOf(param, b.p) : hb,
+				A: a ? a.p : null,
+				B: b ? b.p : null,
+				lineA: a ? a.line : null,
+				lineB: b ? b.line : null
+			});
+		}
+		// an isobar below the triple-point pressure or above Pc, or an isotherm above Tc: one piece
+		if (this.fixedSat === null && (inv.process === 'isobaric' || inv.process === 'isothermal') && segs.length === 1) segs[0].branch = 'any';
+		this.segs = segs;
+	}
+
+	/** F on a saturation line for the processes whose crossings are searched (see lineRoots). */
+	private lineFn(): LineFn {
+		const inv = this.inv;
+		switch (inv.process) {
+			case 'isochoric': {
+				const v0 = 1 / (inv.rho as number);
+				return (_P, y, _dP, dy) => [y[0] / v0 - 1, dy[0] / v0];
+			}
+			case 'isentropic': {
+				const s0 = inv.s as number;
+				const sc = Math.max(Math.abs(s0), this.fl.R);
+				return (_P, y, _dP, dy) => [(y[3] - s0) / sc, dy[3] / sc];
+			}
+			case 'isenthalpic': {
+				const h0 = inv.h as number;
+				const sc = Math.max(Math.abs(h0), this.fl.R * this.fl.Tc);
+				return (_P, y, _dP, dy) => [(y[2] - h0) / sc, dy[2] / sc];
+			}
+			default: {
+				const n = inv.n as number, lnC = inv.lnC as number;
+				return (P, y, dP, dy) => [Math.log(P) + n * Math.log(y[0]) - lnC, dP / P + (n * dy[0]) / y[0]];
+			}
+		}
+	}
+
+	/** Hard parameter bounds of an outer piece (beyond them lies no state of the domain). */
+	private hardBounds(dome: boolean, param: Param): [number, number] {
+		const fl = this.fl, inv = this.inv;
+		if (dome) {
+			// two-phase pieces end at the triple point (or, failing that, just below the critical point)
+			const Ttrip = fl.Tmin, Pt = triplePressure(fl);
+			const lo = param === 'T' ? Ttrip : param === 'lnP' ? Math.log(Pt) : ((inv.lnC as number) - Math.log(Pt)) / (inv.n as number);
+			const hi = param === 'T' ? fl.Tc * (1 - 2 * CRITICAL_BAND) : param === 'lnP' ? Math.log(fl.Pc * (1 - 1e-9)) : ((inv.lnC as number) - Math.log(fl.Pc * (1 - 1e-9))) / (inv.n as number);
+			const [a, b] = lo <= hi ? [lo, hi] : [hi, lo];
+			return this.domeSign > 0 ? [a, b] : [b, a];
+		}
+		switch (param) {
+			case 'T':
+				return [fl.Tmin, fl.Tmax];
+			case 'lnP':
+				return [Math.log(this.Pfloor), Math.log(fl.Pmax)];
+			case 'lnv': {
+				if (inv.process === 'isothermal') {
+					const T = inv.T as number;
+					const g = T < fl.Tc ? satGuess(fl, T, { P: 0, rhoL: 0, rhoV: 0 }) : null;
+					const rMax = densityAtTP(fl, T, fl.Pmax, g ? g.rhoL * 1.1 : 3 * fl.rhoc, g ? g.rhoL * (1 - M) : 0);
+					const rMin = densityAtTP(fl, T, this.Pfloor, this.Pfloor / (fl.R * T), 0, g ? g.rhoV * (1 + M) : Infinity);
+					return [-Math.log(rMax), -Math.log(rMin)];
+				}
+				const rhoTop = densityAtTP(fl, fl.Tmin, fl.Pmax, 3 * fl.rhoc);
+				let lo = -Math.log(1.2 * (rhoTop > 0 ? rhoTop : 5 * fl.rhoc));
+				let hi = Math.log((1.2 * fl.R * fl.Tmax) / this.Pfloor);
+				if (inv.process === 'polytropic' && inv.n !== 0) {
+					const n = inv.n as number, lnC = inv.lnC as number;
+					const a = (lnC - Math.log(fl.Pmax)) / n, b = (lnC - Math.log(this.Pfloor)) / n;
+					lo = Math.max(lo, Math.min(a, b));
+					hi = Math.min(hi, Math.max(a, b));
+				}
+				return [lo, hi];
+			}
+		}
+	}
+
+	/**
+	 * The end of segment k on `side` ('A' canonical start, 'B' end): a crossing, or where the curve
+	 * leaves the domain (found by regula falsi on the violation from a known point `ok` inside).
+	 * Returns null if no state of the piece can be found at all.
+	 */
+	end(k: number, side: 'A' | 'B', ok: CPt, tOk: number): { t: number; p: CPt } | null {
+		const seg = this.segs[k];
+		const known = side === 'A' ? seg.A : seg.B;
+		if (known) return { t: side === 'A' ? seg.ta : seg.tb, p: known };
+		const tHard = side === 'A' ? seg.ta : seg.tb;
+		const hard = this.at(seg, tHard, ok);
+		let res: { t: number; p: CPt };
+		if (hard && this.violation(hard) <= 1e-12) res = { t: tHard, p: hard };
+		else {
+			// violation g: ≤ 0 inside; a failed solve counts as outside
+			let a = tOk, b = tHard;
+			let ga = Math.min(0, this.violation(ok));
+			let gb = hard ? this.violation(hard) : NaN;
+			let pa = ok;
+			let lastSide = 0;
+			for (let it = 0; it < 100; it++) {
+				let t: number;
+				if (Number.isFinite(gb) && gb > 0 && ga < 0) {
+					t = a + (ga * (a - b)) / (gb - ga);
+					if (!(t > Math.min(a, b) && t < Math.max(a, b))) t = 0.5 * (a + b);
+				} else t = 0.5 * (a + b);
+				const c = this.at(seg, t, pa);
+				const g = c ? this.violation(c) : NaN;
+				if (c && g <= 0) {
+					a = t;
+					ga = g;
+					pa = c;
+					if (lastSide === -1 && Number.isFinite(gb)) gb *= 0.5;
+					lastSide = -1;
+				} else {
+					b = t;
+					gb = g;
+					if (lastSide === 1) ga *= 0.5;
+					lastSide = 1;
+				}
+				if (Math.abs(b - a) <= 1e-13 * Math.max(1, Math.abs(a)) || (ga > -1e-13 && c && g <= 0)) break;
+			}
+			res = { t: a, p: pa };
+		}
+		if (side === 'A') {
+			seg.ta = res.t;
+			seg.A = res.p;
+		} else {
+			seg.tb = res.t;
+			seg.B = res.p;
+		}
+		return res;
+	}
+
+	/** Where the start lies: segment index and parameter, or the crossing it sits on. */
+	locateStart(start: CPt): { seg: number; t: number; crossing: number | null } {
+		const cs = this.crossings;
+		if (start.x === 0 || start.x === 1) {
+			const line: SaturationLine = start.x === 0 ? 'saturated-liquid' : 'saturated-vapor';
+			const i = cs.findIndex((c) => c.line === line && Math.abs(c.p.T - start.T) <= 1e-7 * start.T && Math.abs(c.p.P - start.P) <= 1e-6 * start.P);
+			if (i >= 0) return { seg: i + 1, t: this.segs[i + 1].ta, crossing: i };
+		}
+		const key = this.key(start);
+		let k = cs.filter((c) => this.key(c.p) < key).length;
+		const inDome = start.x !== null && start.x > 0 && start.x < 1;
+		if (this.segs[k].dome !== inDome) {
+			// next to a crossing within round-off: take the neighbour that matches
+			if (k > 0 && this.segs[k - 1].dome === inDome && Math.abs(this.key(cs[k - 1].p) - key) <= 1e-6 * Math.max(1, Math.abs(key))) k -= 1;
+			else if (k + 1 < this.segs.length && this.segs[k + 1].dome === inDome && k < cs.length && Math.abs(this.key(cs[k].p) - key) <= 1e-6 * Math.max(1, Math.abs(key))) k += 1;
+			else
+				throw new ThermoError(
+					'no-convergence',
+					`The start of this ${this.process} leg could not be placed on its path (near ${fmt(start.T)} K, ${fmt(start.P)} Pa).`,
+					'Please report the leg; try a start a little further from the saturation lines.'
+				);
+		}
+		const seg = this.segs[k];
+		return { seg: k, t: paramOf(seg.dome ? this.domeParam : this.singleParam, start), crossing: null };
+	}
+}
