@@ -33,8 +33,8 @@ export function loadFluid(data: unknown): Fluid {
 	shifted.Tc = fl.Tc;
 	shifted.Pc = fl.Pc;
 	shifted.rhoc = fl.rhoc;
-	// saturation (T, P, densities) is unchanged by the shift: keep the built caches
-	Object.assign(shifted.cache, fl.cache);
+	// the critical point is unchanged by the shift; the saturation table (which stores h, s) is rebuilt
+	shifted.cache.criticalRefined = true;
 	return shifted;
 }
 

@@ -3,8 +3,10 @@
  *
  * Phase rules (documented contract):
  * - Below Tc a state is placed against the saturation at its own temperature. It lies ON a
- *   saturation line when its density is within SAT_TOL (1 part in 10⁹) of the saturated density;
- *   it is then `saturated-liquid` (x = 0) or `saturated-vapor` (x = 1) exactly.
+ *   saturation line when its density is within SAT_TOL (1 part in 10⁹; wider within a few mK of
+ *   Tc, see lineTol) of the saturated density, or when a two-phase solution has a quality less
+ *   than X_SNAP (1e−12) from 0 or 1 (inside); it is then `saturated-liquid` (x = 0) or
+ *   `saturated-vapor` (x = 1).
  * - Inside the dome it is a `saturated-mixture` with x = (v − v')/(v'' − v'); no metastable states.
  * - Denser than the saturated liquid: `compressed-liquid` (this includes T < Tc with P ≥ Pc).
  * - Lighter than the saturated vapor: `superheated-vapor`.
@@ -20,6 +22,18 @@ import type { Phase, State } from './types.ts';
 
 /** Relative density tolerance for "on the saturation line". */
 export const SAT_TOL = 1e-9;
+
+/** A two-phase solution whose quality lies within X_SNAP inside 0 or 1 is put on that line (solver round-off). */
+export const X_SNAP = 1e-12;
+
+/**
+ * Relative density tolerance for "on a saturation line" at T: SAT_TOL, widened within a few
+ * millikelvin of Tc by the round-off of the saturation solve there (≈ 1e−16·θ^−1.5, θ = 1 − T/Tc).
+ */
+export function lineTol(fl: Fluid, T: number): number {
+	const th = Math.max(1 - T / fl.Tc, 1e-12);
+	return SAT_TOL + 1e-16 / (th * Math.sqrt(th));
+}
 
 function finiteOrNull(x: number): number | null {
 	return Number.isFinite(x) ? x : null;

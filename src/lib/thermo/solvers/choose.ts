@@ -9,9 +9,16 @@ import type { RootHint, State } from '../types.ts';
 /** Hints accepted by fixState (see RootHint in types.ts). */
 export const ROOT_HINTS: readonly RootHint[] = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'];
 
-/** Same state to within solver round-off. */
+/**
+ * Same state to within solver round-off. Pressure is compared too: two liquid states can differ by
+ * hundreds of pascals while their T and ρ agree to 1e−7.
+ */
 function same(a: State, b: State): boolean {
-	return Math.abs(a.T - b.T) <= 1e-8 * a.T && Math.abs(a.rho - b.rho) <= 1e-6 * a.rho;
+	return (
+		Math.abs(a.T - b.T) <= 1e-8 * a.T &&
+		Math.abs(a.rho - b.rho) <= 1e-7 * a.rho &&
+		Math.abs(a.P - b.P) <= 1e-4 * Math.max(a.P, b.P)
+	);
 }
 
 /** Remove duplicates (kept in input order). */

@@ -15,6 +15,7 @@ export function densityAtTP(fl: Fluid, T: number, P: number, guess: number, lo =
 	const rhor = fl.rhor;
 	let rho = guess;
 	if (!(rho > lo && rho < hi)) rho = Number.isFinite(hi) ? 0.5 * (lo + hi) : Math.max(2 * lo, 1e-12 * rhor);
+	let dxOld = Infinity, dx = Infinity;
 	for (let it = 0; it < 100; it++) {
 		const r = fl.residualAt(rho / rhor, tau, 2);
 		const f = rho * RT * (1 + r.d1) - P;
@@ -23,9 +24,15 @@ export function densityAtTP(fl: Fluid, T: number, P: number, guess: number, lo =
 		if (f < 0) lo = rho;
 		else hi = rho;
 		let next = df > 0 ? rho - f / df : NaN;
-		if (!(next > lo && next < hi)) {
+		// with an open bracket, grow by at most a factor 4 per step (flat isotherms near Tc)
+		if (!Number.isFinite(hi) && next > 4 * rho) next = 4 * rho;
+		// rtsafe rule: bisect when Newton leaves the bracket, or stops halving once bracketed
+		const slow = Number.isFinite(hi) && Math.abs(next - rho) > 0.5 * dxOld;
+		dxOld = dx;
+		if (!(next > lo && next < hi) || slow) {
 			next = Number.isFinite(hi) ? 0.5 * (lo + hi) : 2 * rho;
 		}
+		dx = Math.abs(next - rho);
 		if (Math.abs(next - rho) <= 1e-14 * rho) return next;
 		if (Number.isFinite(hi) && hi - lo <= 4e-16 * hi) return 0.5 * (lo + hi);
 		rho = next;

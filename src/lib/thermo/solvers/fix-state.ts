@@ -5,10 +5,27 @@ import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { FixOptions, InputName, Inputs, State } from '../types.ts';
 import { ROOT_HINTS } from './choose.ts';
+import { flashHS } from './flash-h-s.ts';
+import { flashHX } from './flash-h-x.ts';
+import { flashPH } from './flash-p-h.ts';
+import { flashPS } from './flash-p-s.ts';
+import { flashPU } from './flash-p-u.ts';
+import { flashPV } from './flash-p-v.ts';
 import { flashPX } from './flash-p-x.ts';
+import { flashSX } from './flash-s-x.ts';
+import { flashTH } from './flash-t-h.ts';
 import { flashTP } from './flash-t-p.ts';
+import { flashTS } from './flash-t-s.ts';
+import { flashTU } from './flash-t-u.ts';
 import { flashTRho } from './flash-t-v.ts';
 import { flashTX } from './flash-t-x.ts';
+import { flashUH } from './flash-u-h.ts';
+import { flashUS } from './flash-u-s.ts';
+import { flashUX } from './flash-u-x.ts';
+import { flashVH } from './flash-v-h.ts';
+import { flashVS } from './flash-v-s.ts';
+import { flashVU } from './flash-v-u.ts';
+import { flashVX } from './flash-v-x.ts';
 import { checkP, checkT } from './range.ts';
 
 /** Canonical property keys after v → rho: order used to name pairs. */
@@ -18,16 +35,29 @@ const NAMES: readonly InputName[] = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'];
 
 export type Flash = (fl: Fluid, a: number, b: number, options: FixOptions) => State;
 
-const notYet: Flash = () => {
-	throw new ThermoError('not-implemented', 'This pair of inputs is not available yet.', 'Give (T, P), (T, v), (T, x) or (P, x).');
-};
-
-/** Flash for each pair, keyed "A,B" in ORDER. */
+/** Flash for each of the 21 pairs, keyed "A,B" in ORDER (T, P, rho, u, h, s, x). */
 export const FLASHES: Record<string, Flash> = {
 	'T,P': (fl, T, P, o) => flashTP(fl, T, P, o.hint),
 	'T,rho': (fl, T, rho) => flashTRho(fl, T, rho),
+	'T,u': (fl, T, u, o) => flashTU(fl, T, u, o.hint),
+	'T,h': (fl, T, h, o) => flashTH(fl, T, h, o.hint),
+	'T,s': (fl, T, s, o) => flashTS(fl, T, s, o.hint),
 	'T,x': (fl, T, x) => flashTX(fl, T, x),
-	'P,x': (fl, P, x) => flashPX(fl, P, x)
+	'P,rho': (fl, P, rho, o) => flashPV(fl, P, rho, o.hint),
+	'P,u': (fl, P, u) => flashPU(fl, P, u),
+	'P,h': (fl, P, h) => flashPH(fl, P, h),
+	'P,s': (fl, P, s) => flashPS(fl, P, s),
+	'P,x': (fl, P, x) => flashPX(fl, P, x),
+	'rho,u': (fl, rho, u, o) => flashVU(fl, rho, u, o.hint),
+	'rho,h': (fl, rho, h, o) => flashVH(fl, rho, h, o.hint),
+	'rho,s': (fl, rho, s, o) => flashVS(fl, rho, s, o.hint),
+	'rho,x': (fl, rho, x, o) => flashVX(fl, rho, x, o.hint),
+	'u,h': (fl, u, h, o) => flashUH(fl, u, h, o.hint),
+	'u,s': (fl, u, s, o) => flashUS(fl, u, s, o.hint),
+	'u,x': (fl, u, x, o) => flashUX(fl, u, x, o.hint),
+	'h,s': (fl, h, s, o) => flashHS(fl, h, s, o.hint),
+	'h,x': (fl, h, x, o) => flashHX(fl, h, x, o.hint),
+	's,x': (fl, s, x, o) => flashSX(fl, s, x, o.hint)
 };
 
 function unit(k: InputName): string {
@@ -76,6 +106,5 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 	if (options.hint !== undefined && !ROOT_HINTS.includes(options.hint))
 		throw new ThermoError('invalid-option', `Unknown hint "${String(options.hint)}".`, `Use one of: ${ROOT_HINTS.join(', ')}.`);
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
-	const flash = FLASHES[`${ka},${kb}`] ?? notYet;
-	return flash(fl, a, b, options);
+	return FLASHES[`${ka},${kb}`](fl, a, b, options);
 }

@@ -68,7 +68,7 @@ export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State
 	if (!(rho > 0)) throw failed(fl, T, P);
 	evalPoint(fl, T, rho, p, 2);
 	p.P = P;
-	const loc = sat ? locateWithSat(T, rho, sat) : locate(fl, p);
+	const loc = sat ? locateWithSat(fl, T, rho, sat) : locate(fl, p);
 	if (loc.phase === 'saturated-mixture') throw failed(fl, T, P);
 	if (loc.sat) return saturatedState(fl, loc.sat, loc.x ?? 0);
 	return singleState(fl, p, loc.phase);

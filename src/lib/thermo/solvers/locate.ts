@@ -7,7 +7,8 @@
  */
 import type { Fluid } from '../fluid.ts';
 import type { Point } from '../properties.ts';
-import { SAT_TOL, phaseAboveCritical } from '../state.ts';
+import { SAT_TOL, X_SNAP, lineTol, phaseAboveCritical, saturatedState } from '../state.ts';
+import type { State } from '../types.ts';
 import type { Phase } from '../types.ts';
 import { CRITICAL_BAND, TABLE_ACCURACY, satAtT, satGuess, type SatGuess, type SatPoint } from './saturation.ts';
 
@@ -22,14 +23,30 @@ export interface Located {
 const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
 const M = 10 * TABLE_ACCURACY;
 
-/** Place (T, ρ) against a known saturation at T. */
-export function locateWithSat(T: number, rho: number, sat: SatPoint): Located {
-	if (rho > sat.rhoL * (1 + SAT_TOL)) return { phase: 'compressed-liquid', sat: null, x: null };
-	if (rho >= sat.rhoL * (1 - SAT_TOL)) return { phase: 'saturated-liquid', sat, x: 0 };
-	if (rho < sat.rhoV * (1 - SAT_TOL)) return { phase: 'superheated-vapor', sat: null, x: null };
-	if (rho <= sat.rhoV * (1 + SAT_TOL)) return { phase: 'saturated-vapor', sat, x: 1 };
+/** Place (T, ρ) against a known saturation at T (tolerances: state.ts lineTol, X_SNAP). */
+export function locateWithSat(fl: Fluid, T: number, rho: number, sat: SatPoint): Located {
+	const tol = lineTol(fl, T);
+	if (rho > sat.rhoL * (1 + tol)) return { phase: 'compressed-liquid', sat: null, x: null };
+	if (rho >= sat.rhoL * (1 - tol)) return { phase: 'saturated-liquid', sat, x: 0 };
+	if (rho < sat.rhoV * (1 - tol)) return { phase: 'superheated-vapor', sat: null, x: null };
+	if (rho <= sat.rhoV * (1 + tol)) return { phase: 'saturated-vapor', sat, x: 1 };
 	const x = (1 / rho - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
+	if (x <= X_SNAP) return { phase: 'saturated-liquid', sat, x: 0 };
+	if (x >= 1 - X_SNAP) return { phase: 'saturated-vapor', sat, x: 1 };
 	return { phase: 'saturated-mixture', sat, x };
+}
+
+/**
+ * The state at quality x of a solved saturation, placed by the same rules as any (T, ρ): returns
+ * null when the density lies outside the dome beyond the line tolerance (not two-phase).
+ */
+export function twoPhaseAt(fl: Fluid, sat: SatPoint, x: number): State | null {
+	// a quality just outside 0…1 is judged by the density rule alone (a compressed liquid a few Pa
+	// above the line has x ≈ −1e−12 at low T); just inside, round-off snaps to the line
+	const v = 1 / sat.rhoL + x * (1 / sat.rhoV - 1 / sat.rhoL);
+	if (!(v > 0)) return null;
+	const loc = locateWithSat(fl, sat.T, 1 / v, sat);
+	return loc.sat ? saturatedState(fl, sat, loc.x ?? 0) : null;
 }
 
 /** Place an evaluated point p (order 2: P and (∂P/∂ρ)_T set) against the dome. */
@@ -46,5 +63,5 @@ export function locate(fl: Fluid, p: Point): Located {
 		if (rho <= g.rhoV * (1 + M) && p.dPdrho > 0 && g.P * (1 - M) - p.P > K)
 			return { phase: 'superheated-vapor', sat: null, x: null };
 	}
-	return locateWithSat(T, rho, satAtT(fl, T));
+	return locateWithSat(fl, T, rho, satAtT(fl, T));
 }

@@ -59,13 +59,13 @@ export function checkSaturationP(fl: Fluid, P: number): void {
 
 /** Whether a computed state lies in range (T within limits, P ≤ Pmax). */
 export function inRange(fl: Fluid, s: State): boolean {
-	return s.T >= fl.Tmin * (1 - 1e-12) && s.T <= fl.Tmax * (1 + 1e-12) && s.P <= fl.Pmax * (1 + 1e-9) && s.P > 0;
+	return s.T >= fl.Tmin * (1 - 1e-9) && s.T <= fl.Tmax * (1 + 1e-9) && s.P <= fl.Pmax * (1 + 1e-9) && s.P > 0;
 }
 
 /** Throw out-of-range for a computed state outside the limits. */
 export function assertInRange(fl: Fluid, s: State): State {
-	if (s.T < fl.Tmin * (1 - 1e-12)) throw belowTriple(fl, s.T);
-	if (s.T > fl.Tmax * (1 + 1e-12)) throw aboveTmax(fl, s.T);
+	if (s.T < fl.Tmin * (1 - 1e-9)) throw belowTriple(fl, s.T);
+	if (s.T > fl.Tmax * (1 + 1e-9)) throw aboveTmax(fl, s.T);
 	if (s.P > fl.Pmax * (1 + 1e-9)) throw abovePmax(fl, s.P);
 	return s;
 }

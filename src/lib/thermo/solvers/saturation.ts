@@ -9,6 +9,7 @@
  */
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
+import { evalPoint, Point } from '../properties.ts';
 
 /** A solved saturation state: T K, P Pa, saturated liquid and vapor densities kg/m³. */
 export interface SatPoint {
@@ -92,10 +93,22 @@ interface SatSegment {
 	rhoL: Float64Array;
 	lnRhoV: Float64Array;
 }
+/** Saturation nodes in rising T (triple point to just below Tc), with both phases' v, u, h, s. */
+export interface DomeNodes {
+	n: number;
+	T: Float64Array;
+	P: Float64Array;
+	rhoL: Float64Array;
+	rhoV: Float64Array;
+	/** [v, u, h, s] of the liquid and vapor, each a Float64Array over the nodes */
+	liq: Float64Array[];
+	vap: Float64Array[];
+}
 interface SatTable {
 	split: number;
 	low: SatSegment;
 	high: SatSegment;
+	nodes: DomeNodes;
 }
 
 const SEGMENT_NODES = 100;
@@ -145,9 +158,47 @@ function segment(fl: Fluid, z0: number, z1: number, Tof: (z: number) => number, 
 
 function buildTable(fl: Fluid): SatTable {
 	const Tc = fl.Tc;
+	const split = 0.9 * Tc;
 	const low = segment(fl, 1 / fl.Tt, 1 / (0.95 * Tc), (z) => 1 / z, false);
 	const high = segment(fl, Math.cbrt(0.15), 0, (xi) => Tc * (1 - xi * xi * xi), true);
-	return { split: 0.9 * Tc, low, high };
+	const list: [number, number, number, number][] = [];
+	for (let i = 0; i < SEGMENT_NODES; i++) {
+		const T = 1 / (low.z0 + i * low.dz);
+		if (T < split) list.push([T, Math.exp(low.lnP[i]), low.rhoL[i], Math.exp(low.lnRhoV[i])]);
+	}
+	for (let i = 0; i < SEGMENT_NODES - 1; i++) {
+		const xi = high.z0 + i * high.dz;
+		const T = Tc * (1 - xi * xi * xi);
+		if (T >= split) list.push([T, Math.exp(high.lnP[i]), high.rhoL[i], Math.exp(high.lnRhoV[i])]);
+	}
+	const n = list.length;
+	const nodes: DomeNodes = {
+		n,
+		T: new Float64Array(n),
+		P: new Float64Array(n),
+		rhoL: new Float64Array(n),
+		rhoV: new Float64Array(n),
+		liq: [0, 1, 2, 3].map(() => new Float64Array(n)),
+		vap: [0, 1, 2, 3].map(() => new Float64Array(n))
+	};
+	const p = new Point();
+	list.forEach(([T, P, rL, rV], i) => {
+		nodes.T[i] = T;
+		nodes.P[i] = P;
+		nodes.rhoL[i] = rL;
+		nodes.rhoV[i] = rV;
+		evalPoint(fl, T, rL, p, 1);
+		nodes.liq[0][i] = 1 / rL;
+		nodes.liq[1][i] = p.u;
+		nodes.liq[2][i] = p.h;
+		nodes.liq[3][i] = p.s;
+		evalPoint(fl, T, rV, p, 1);
+		nodes.vap[0][i] = 1 / rV;
+		nodes.vap[1][i] = p.u;
+		nodes.vap[2][i] = p.h;
+		nodes.vap[3][i] = p.s;
+	});
+	return { split, low, high, nodes };
 }
 
 /** The fluid's saturation table (built on first use, a few milliseconds). */
@@ -347,4 +398,9 @@ function satAtPByT(fl: Fluid, P: number, T0: number): SatPoint {
 /** The equation's vapor pressure at the triple-point temperature, Pa. */
 export function triplePressure(fl: Fluid): number {
 	return Math.exp(satTable(fl).low.lnP[0]);
+}
+
+/** The saturation table's nodes (rising T, triple point to just below Tc). */
+export function domeNodes(fl: Fluid): DomeNodes {
+	return satTable(fl).nodes;
 }

@@ -1,0 +1,188 @@
+/**
+ * Two-phase states with a given pair: find the temperatures on the saturation curve where a mixture
+ * has the pair. Quality comes from the fixed member (x itself, or x = (A − a')/(a'' − a') for a
+ * property A), and G(T) = b' + x·(b'' − b') − B must vanish for the other member B. The saturation
+ * table's nodes give every sign change of G (and near-misses by a parabola through three nodes),
+ * then Newton with the exact derivative along the saturation line refines each root:
+ *   dPs/dT = (s'' − s')/(v'' − v')  (Clapeyron),  dρ/dT|sat = (dPs/dT − (∂P/∂T)_ρ)/(∂P/∂ρ)_T,
+ *   dy/dT|sat = (∂y/∂T)_ρ + (∂y/∂ρ)_T·dρ/dT|sat for y = v, u, h, s of each phase.
+ */
+import type { Fluid } from '../fluid.ts';
+import { evalPoint, Point, propDT, propDrho, type EnergyProp } from '../properties.ts';
+import { domeNodes, satAtT, type SatPoint } from './saturation.ts';
+
+export type DomeProp = 'v' | 'u' | 'h' | 's';
+const IDX: Record<DomeProp, number> = { v: 0, u: 1, h: 2, s: 3 };
+
+/** Saturation at T with v, u, h, s of both phases and their slopes along the saturation line. */
+export class SatLine {
+	T = 0;
+	sat: SatPoint = { T: 0, P: 0, rhoL: 0, rhoV: 0 };
+	readonly yL = new Float64Array(4);
+	readonly yV = new Float64Array(4);
+	readonly dL = new Float64Array(4);
+	readonly dV = new Float64Array(4);
+	readonly pL = new Point();
+	readonly pV = new Point();
+}
+
+function slopes(p: Point, dPs: number, y: Float64Array, d: Float64Array): void {
+	const drho = (dPs - p.dPdT) / p.dPdrho;
+	y[0] = 1 / p.rho;
+	d[0] = -drho / (p.rho * p.rho);
+	const names: EnergyProp[] = ['u', 'h', 's'];
+	for (let k = 0; k < 3; k++) {
+		const w = names[k];
+		y[k + 1] = w === 'u' ? p.u : w === 'h' ? p.h : p.s;
+		d[k + 1] = propDT(p, w) + propDrho(p, w) * drho;
+	}
+}
+
+/** Fill `out` for temperature T (below Tc). */
+export function evalSatLine(fl: Fluid, T: number, out: SatLine, sat?: SatPoint): SatLine {
+	const s = sat ?? satAtT(fl, T);
+	out.T = T;
+	out.sat = s;
+	evalPoint(fl, T, s.rhoL, out.pL, 2);
+	evalPoint(fl, T, s.rhoV, out.pV, 2);
+	out.pL.P = s.P;
+	out.pV.P = s.P;
+	const dPs = (out.pV.s - out.pL.s) / (1 / s.rhoV - 1 / s.rhoL);
+	slopes(out.pL, dPs, out.yL, out.dL);
+	slopes(out.pV, dPs, out.yV, out.dV);
+	return out;
+}
+
+/** What fixes the quality: x itself, or a property value. */
+export type QualitySpec = { x: number } | { prop: DomeProp; value: number };
+
+export interface DomeRoot {
+	sat: SatPoint;
+	x: number;
+}
+
+/** Quality and G at one saturation line; also their T-derivatives when `line` carries slopes. */
+function gOf(
+	spec: QualitySpec,
+	b: number,
+	B: number,
+	yL: ArrayLike<number>,
+	yV: ArrayLike<number>,
+	dL?: ArrayLike<number>,
+	dV?: ArrayLike<number>
+): [number, number, number] {
+	let x: number, dx = 0;
+	if ('x' in spec) x = spec.x;
+	else {
+		const a = IDX[spec.prop];
+		const span = yV[a] - yL[a];
+		x = (spec.value - yL[a]) / span;
+		if (dL && dV) dx = -((1 - x) * dL[a] + x * dV[a]) / span;
+	}
+	const G = yL[b] + x * (yV[b] - yL[b]) - B;
+	const dG = dL && dV ? (1 - x) * dL[b] + x * dV[b] + (yV[b] - yL[b]) * dx : NaN;
+	return [x, G, dG];
+}
+
+/**
+ * All two-phase solutions with quality fixed by `spec` and property `target` = `value`. Quality
+ * may overshoot 0…1 by round-off (up to 1e−6 near Tc); place each with twoPhaseAt.
+ */
+export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value: number): DomeRoot[] {
+	const nodes = domeNodes(fl);
+	const b = IDX[target];
+	const n = nodes.n;
+	const G = new Float64Array(n);
+	const yL = [0, 0, 0, 0], yV = [0, 0, 0, 0];
+	for (let i = 0; i < n; i++) {
+		for (let k = 0; k < 4; k++) {
+			yL[k] = nodes.liq[k][i];
+			yV[k] = nodes.vap[k][i];
+		}
+		G[i] = gOf(spec, b, value, yL, yV)[1];
+	}
+	const line = new SatLine();
+	const roots: DomeRoot[] = [];
+	const fn = (T: number): [number, number, number] => {
+		evalSatLine(fl, T, line);
+		return gOf(spec, b, value, line.yL, line.yV, line.dL, line.dV);
+	};
+	const refine = (Ta: number, Ga: number, Tb: number, Gb: number, T0: number) => {
+		let a = Ta, fa = Ga, c = Tb;
+		let T = T0;
+		for (let it = 0; it < 60; it++) {
+			const [x, g, dg] = fn(T);
+			if (g === 0 || it === 59) return accept(x);
+			if (g < 0 === fa < 0) {
+				a = T;
+				fa = g;
+			} else c = T;
+			let next = T - g / dg;
+			const lo = Math.min(a, c), hi = Math.max(a, c);
+			if (!(next > lo && next < hi)) next = 0.5 * (a + c);
+			if (Math.abs(next - T) <= 1e-14 * T || hi - lo <= 1e-14 * T) {
+				const r = fn(next);
+				return accept(r[0]);
+			}
+			T = next;
+		}
+	};
+	const accept = (x: number) => {
+		// keep round-off overshoots; callers place the state (twoPhaseAt) and drop real outsiders
+		if (!(x >= -1e-6 && x <= 1 + 1e-6)) return;
+		const sat = line.sat;
+		if (roots.some((r) => Math.abs(r.sat.T - sat.T) <= 1e-9 * sat.T)) return;
+		roots.push({ sat, x });
+	};
+	// a root sitting on an end node (e.g. exactly at the triple point) shows no sign change
+	for (const [i, j] of [
+		[0, 1],
+		[n - 1, n - 2]
+	]) {
+		if (Math.abs(G[i]) <= 1e-6 * Math.abs(G[j] - G[i])) {
+			const [x, g] = fn(nodes.T[i]);
+			if (Math.abs(g) <= 1e-8 * Math.abs(G[j] - G[i])) accept(x);
+		}
+	}
+	for (let i = 0; i < n - 1; i++) {
+		const Ga = G[i], Gb = G[i + 1];
+		if (!Number.isFinite(Ga) || !Number.isFinite(Gb)) continue;
+		const Ta = nodes.T[i], Tb = nodes.T[i + 1];
+		if (Ga === 0) {
+			refine(Ta, Ga, Tb, Gb, Ta);
+			continue;
+		}
+		if (Ga < 0 !== Gb < 0) {
+			refine(Ta, Ga, Tb, Gb, Ta - (Ga * (Tb - Ta)) / (Gb - Ga));
+			continue;
+		}
+		// near-miss: a turning point between nodes may cross zero; test the parabola through three nodes
+		if (i > 0 && Math.abs(Ga) < Math.abs(G[i - 1]) && Math.abs(Ga) < Math.abs(Gb)) {
+			const T0 = nodes.T[i - 1], G0 = G[i - 1];
+			const d1 = (Ga - G0) / (Ta - T0), d2 = (Gb - Ga) / (Tb - Ta);
+			const c2 = (d2 - d1) / (Tb - T0);
+			const c1 = d1 - c2 * (T0 + Ta);
+			const Tv = -c1 / (2 * c2);
+			const Gv = Ga + (Tv - Ta) * (d1 + c2 * (Tv - T0));
+			if (Tv > T0 && Tv < Tb && Gv < 0 !== Ga < 0) {
+				// locate the true turning point by secant on dG/dT, then refine both sides
+				let lo = T0, hi = Tb, m = Tv;
+				let gm = 0;
+				for (let k = 0; k < 40; k++) {
+					const [, g, dg] = fn(m);
+					gm = g;
+					if (g < 0 !== Ga < 0) break;
+					if (dg < 0 === Ga > 0) lo = m;
+					else hi = m;
+					m = 0.5 * (lo + hi);
+					if (hi - lo < 1e-10 * m) break;
+				}
+				if (gm < 0 !== Ga < 0) {
+					refine(T0, G0, m, gm, 0.5 * (T0 + m));
+					refine(m, gm, Tb, Gb, 0.5 * (m + Tb));
+				}
+			}
+		}
+	}
+	return roots;
+}

@@ -1,0 +1,206 @@
+/**
+ * States at fixed P: with u, h or s (unique: along an isobar h and s rise with T, dh = cp·dT,
+ * ds = cp/T·dT, and u with du = (cp − Pvβ)dT), and with v (several roots possible where
+ * (∂P/∂T)_ρ changes sign, e.g. water's density maximum).
+ * Below Pc the saturation at P decides the branch: the mixture if y' ≤ y ≤ y'', compressed liquid
+ * for T ≤ Tsat, superheated vapor for T ≥ Tsat. Along the isobar the density at each T comes from
+ * densityAtTP on the branch, and T by Newton with dy/dT|P = (∂y/∂T)_ρ − (∂y/∂ρ)_T·(∂P/∂T)_ρ/(∂P/∂ρ)_T
+ * kept inside a bracket.
+ */
+import { fmt } from '../errors.ts';
+import type { Fluid } from '../fluid.ts';
+import { evalPoint, Point, propDT, propDrho, propValue, type EnergyProp } from '../properties.ts';
+import { saturatedState, singleState } from '../state.ts';
+import type { RootHint, State } from '../types.ts';
+import { choose } from './choose.ts';
+import { densityAtTP } from './density.ts';
+import { evalSatLine, SatLine } from './dome.ts';
+import { locate, locateWithSat, twoPhaseAt } from './locate.ts';
+import { noStateInRange } from './range.ts';
+import { newtonBracket, scanRoots, type FD } from './roots.ts';
+import { TABLE_ACCURACY, satAtP, satGuess, triplePressure, type SatGuess } from './saturation.ts';
+
+const IDX: Record<EnergyProp, number> = { u: 1, h: 2, s: 3 };
+const UNIT: Record<EnergyProp, string> = { u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)' };
+const M = 10 * TABLE_ACCURACY;
+
+type Branch = 'liquid' | 'vapor' | 'any';
+
+/** Density on a branch at (T, P), warm-started from `guess`; NaN if none. */
+function rhoOnBranch(fl: Fluid, T: number, P: number, branch: Branch, guess: number, g: SatGuess): number {
+	if (T < fl.Tc && branch !== 'any') {
+		satGuess(fl, T, g);
+		if (branch === 'liquid') return densityAtTP(fl, T, P, Math.max(guess, g.rhoL), g.rhoL * (1 - M));
+		return densityAtTP(fl, T, P, Math.min(guess, g.rhoV), 0, g.rhoV * (1 + M));
+	}
+	if (T < fl.Tc) {
+		satGuess(fl, T, g);
+		return densityAtTP(fl, T, P, Math.max(guess, g.rhoL), g.rhoL * (1 - M));
+	}
+	return densityAtTP(fl, T, P, guess);
+}
+
+/**
+ * Solve y(T, ρ(T, P)) = y for T in [Ta, Tb] on one branch. fa = f(Ta) and fb = f(Tb) may be NaN
+ * (unknown; evaluated if Newton needs the bracket). Returns the evaluated point or null.
+ */
+function solveAlongIsobar(
+	fl: Fluid,
+	P: number,
+	which: EnergyProp,
+	y: number,
+	branch: Branch,
+	Ta: number,
+	fa: number,
+	Tb: number,
+	fb: number,
+	T0: number,
+	rho0: number
+): Point | null {
+	const p = new Point();
+	const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
+	let rho = rho0;
+	const evalAt = (T: number): number => {
+		const r = rhoOnBranch(fl, T, P, branch, rho, g);
+		if (!(r > 0)) return NaN;
+		rho = r;
+		evalPoint(fl, T, r, p, 2);
+		return propValue(p, which) - y;
+	};
+	const slope = () => propDT(p, which) - (propDrho(p, which) * p.dPdT) / p.dPdrho;
+	let T = T0;
+	// rtsafe rule (Numerical Recipes): bisect when Newton leaves the bracket or stops halving
+	let dxOld = Tb - Ta, dx = dxOld;
+	for (let it = 0; it < 100; it++) {
+		const f = evalAt(T);
+		if (!Number.isFinite(f)) return null;
+		if (f < 0) {
+			Ta = T;
+			fa = f;
+		} else {
+			Tb = T;
+			fb = f;
+		}
+		let next = T - f / slope();
+		const slow = Math.abs(next - T) > 0.5 * Math.abs(dxOld);
+		dxOld = dx;
+		dx = next - T;
+		if (!(next > Ta && next < Tb) || (slow && !Number.isNaN(fa) && !Number.isNaN(fb))) {
+			// a step outside the bracket: make sure the far end really brackets the root
+			if (next >= Tb && Number.isNaN(fb)) {
+				const rhoKeep = rho;
+				fb = evalAt(Tb);
+				if (!(fb >= 0)) return null;
+				rho = rhoKeep;
+			} else if (next <= Ta && Number.isNaN(fa)) {
+				const rhoKeep = rho;
+				fa = evalAt(Ta);
+				if (!(fa <= 0)) return null;
+				rho = rhoKeep;
+			}
+			next = 0.5 * (Ta + Tb);
+			dx = next - T;
+		}
+		if (Math.abs(next - T) <= 1e-12 * T) {
+			evalAt(next);
+			return p;
+		}
+		T = next;
+	}
+	return null;
+}
+
+export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): State {
+	const what = `P = ${fmt(P)} Pa and ${which} = ${fmt(y)} ${UNIT[which]}`;
+	const none = () => noStateInRange(fl, what);
+	let result: Point | null = null;
+	if (P < fl.Pc && P >= triplePressure(fl) * (1 - 1e-9)) {
+		const sat = satAtP(fl, P);
+		const line = evalSatLine(fl, sat.T, new SatLine(), sat);
+		const b = IDX[which];
+		const yL = line.yL[b], yV = line.yV[b];
+		const mix = twoPhaseAt(fl, sat, (y - yL) / (yV - yL));
+		if (mix) return mix;
+		if (y < yL) {
+			const pL = line.pL;
+			const dy = propDT(pL, which) - (propDrho(pL, which) * pL.dPdT) / pL.dPdrho;
+			const T0 = Math.max(fl.Tmin, sat.T + (y - yL) / dy);
+			result = solveAlongIsobar(fl, P, which, y, 'liquid', fl.Tmin * (1 - 1e-7), NaN, sat.T, yL - y, T0, sat.rhoL);
+		} else {
+			const pV = line.pV;
+			const dy = propDT(pV, which) - (propDrho(pV, which) * pV.dPdT) / pV.dPdrho;
+			const T0 = Math.min(fl.Tmax, sat.T + (y - yV) / dy);
+			result = solveAlongIsobar(fl, P, which, y, 'vapor', sat.T, yV - y, fl.Tmax * (1 + 1e-7), NaN, T0, sat.rhoV);
+		}
+	} else {
+		const branch: Branch = P < fl.Pc ? 'vapor' : 'any';
+		const p = new Point();
+		const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
+		const ends = [fl.Tmin * (1 - 1e-7), fl.Tmax * (1 + 1e-7)].map((T) => {
+			const r = rhoOnBranch(fl, T, P, branch, branch === 'vapor' ? P / (fl.R * T) : 2 * fl.rhoc, g);
+			evalPoint(fl, T, r, p, 2);
+			return { T, rho: r, f: propValue(p, which) - y };
+		});
+		const [a, b] = ends;
+		if (!(a.f <= 0 && b.f >= 0)) throw none();
+		const T0 = a.T - (a.f * (b.T - a.T)) / (b.f - a.f);
+		result = solveAlongIsobar(fl, P, which, y, branch, a.T, a.f, b.T, b.f, T0, T0 < fl.Tc ? a.rho : b.rho);
+	}
+	if (!result) throw none();
+	result.P = P;
+	const loc = locate(fl, result);
+	if (loc.sat) return saturatedState(fl, loc.sat, loc.x ?? 0);
+	if (result.T < fl.Tmin * (1 - 1e-9) || result.T > fl.Tmax * (1 + 1e-9)) throw none();
+	return singleState(fl, result, loc.phase);
+}
+
+/** States at fixed P and ρ: the mixture if ρ'' ≤ ρ ≤ ρ', else every root of P(T, ρ) = P on the branch. */
+export function flashPRho(fl: Fluid, P: number, rho: number, hint?: RootHint): State {
+	const what = `P = ${fmt(P)} Pa and ρ = ${fmt(rho)} kg/m³`;
+	const p = new Point();
+	const fn = (T: number, out: FD) => {
+		evalPoint(fl, T, rho, p, 2);
+		out.f = p.P - P;
+		out.df = p.dPdT;
+	};
+	const found: State[] = [];
+	const add = (T: number) => {
+		evalPoint(fl, T, rho, p, 2);
+		if (Math.abs(p.P / P - 1) > 1e-7) return;
+		const loc = locate(fl, p);
+		if (loc.phase === 'saturated-mixture') return; // inside the dome: covered by the saturation at P
+		if (loc.sat) {
+			found.push(saturatedState(fl, loc.sat, loc.x ?? 0));
+			return;
+		}
+		if (T < fl.Tmin * (1 - 1e-9) || T > fl.Tmax * (1 + 1e-9)) return;
+		p.P = P;
+		found.push(singleState(fl, p, loc.phase));
+	};
+	let Ta = fl.Tmin * (1 - 1e-7), Tb = fl.Tmax * (1 + 1e-7);
+	let monotone = false;
+	if (P < fl.Pc && P >= triplePressure(fl) * (1 - 1e-9)) {
+		const sat = satAtP(fl, P);
+		const loc = locateWithSat(fl, sat.T, rho, sat);
+		// vapor at P is never denser than ρ''(P); liquid at P is denser than ρ'(P) except where the
+		// density has a maximum (water near 4 °C): a two-phase state and liquid ones may share (P, ρ)
+		if (loc.sat) found.push(saturatedState(fl, sat, loc.x ?? 0));
+		if (rho < sat.rhoV) {
+			Ta = sat.T;
+			monotone = true;
+		} else Tb = sat.T;
+	}
+	if (monotone) {
+		const out: FD = { f: 0, df: 0 };
+		fn(Ta, out);
+		const fa = out.f;
+		fn(Tb, out);
+		const fb = out.f;
+		if (fa < 0 === fb < 0) throw noStateInRange(fl, what);
+		add(newtonBracket(fn, Ta, fa, Tb, fb, 1e-15 * Tb));
+	} else {
+		for (const T of scanRoots(fn, Ta, Tb, 16, 1e-15 * Tb)) add(T);
+	}
+	return choose(fl, found, hint, what, () => noStateInRange(fl, what));
+}
+

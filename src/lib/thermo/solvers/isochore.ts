@@ -1,0 +1,92 @@
+/**
+ * States at fixed density with a given u, h or s. Along an isochore u, h and s all rise with T
+ * (du = cv·dT, ds = cv/T·dT, dh = (cv + v(∂P/∂T)_v)dT in one phase, likewise across the dome), so
+ * there is one answer; both the two-phase part (domeRoots with the quality fixed by v) and the
+ * single-phase stretches of the isochore (outside the dome, from the saturation table's densities)
+ * are searched, and the candidates checked.
+ */
+import { fmt } from '../errors.ts';
+import type { Fluid } from '../fluid.ts';
+import { evalPoint, Point, propDT, propValue, type EnergyProp } from '../properties.ts';
+import { saturatedState, singleState } from '../state.ts';
+import type { RootHint, State } from '../types.ts';
+import { choose } from './choose.ts';
+import { domeRoots } from './dome.ts';
+import { locate, twoPhaseAt } from './locate.ts';
+import { noStateInRange } from './range.ts';
+import { newtonBracket, scanRoots, type FD } from './roots.ts';
+import { domeNodes } from './saturation.ts';
+
+const UNIT: Record<EnergyProp, string> = { u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)' };
+
+/**
+ * Temperature intervals where the isochore ρ lies outside the dome (from the table nodes), each
+ * widened by one node spacing toward the dome so that an inexact boundary cannot hide a root.
+ */
+export function singlePhaseIntervals(fl: Fluid, rho: number): [number, number][] {
+	const nd = domeNodes(fl);
+	const n = nd.n;
+	const inside = (i: number) => rho > nd.rhoV[i] && rho < nd.rhoL[i];
+	const out: [number, number][] = [];
+	let start: number | null = inside(0) ? null : fl.Tmin;
+	for (let i = 0; i < n - 1; i++) {
+		const a = inside(i), b = inside(i + 1);
+		if (a && !b) start = nd.T[i];
+		else if (!a && b) {
+			out.push([start ?? fl.Tmin, Math.min(nd.T[i + 1] + (nd.T[i + 1] - nd.T[i]), fl.Tmax)]);
+			start = null;
+		}
+	}
+	out.push([start ?? nd.T[n - 1], fl.Tmax * (1 + 1e-7)]);
+	return out.map(([a, b]) => [Math.max(a, fl.Tmin * (1 - 1e-7)), b] as [number, number]).filter(([a, b]) => b > a);
+}
+
+export function flashRhoY(fl: Fluid, rho: number, which: EnergyProp, y: number, hint?: RootHint): State {
+	const what = `ρ = ${fmt(rho)} kg/m³ and ${which} = ${fmt(y)} ${UNIT[which]}`;
+	const found: State[] = [];
+	const nd = domeNodes(fl);
+	let maxRhoL = 0;
+	for (let i = 0; i < nd.n; i++) maxRhoL = Math.max(maxRhoL, nd.rhoL[i]);
+	if (rho > nd.rhoV[0] * (1 - 1e-6) && rho < maxRhoL * (1 + 1e-6)) {
+		for (const r of domeRoots(fl, { prop: 'v', value: 1 / rho }, which, y)) {
+			const st = twoPhaseAt(fl, r.sat, r.x);
+			if (st) found.push(st);
+		}
+	}
+	const p = new Point();
+	const fn = (T: number, out: FD) => {
+		evalPoint(fl, T, rho, p, 2);
+		out.f = propValue(p, which) - y;
+		out.df = propDT(p, which);
+	};
+	const out: FD = { f: 0, df: 0 };
+	for (const [Ta, Tb] of singlePhaseIntervals(fl, rho)) {
+		fn(Ta, out);
+		const fa = out.f;
+		fn(Tb, out);
+		const fb = out.f;
+		const tiny = 1e-12 * (Math.abs(y) + fl.R * Tb);
+		const roots =
+			Math.abs(fa) <= tiny
+				? [Ta]
+				: Math.abs(fb) <= tiny
+					? [Tb]
+					: fa < 0 !== fb < 0
+						? [newtonBracket(fn, Ta, fa, Tb, fb, 1e-13 * Tb)]
+						: Tb < fl.Tc
+							? scanRoots(fn, Ta, Tb, 6, 1e-13 * Tb)
+							: [];
+		for (const T of roots) {
+			evalPoint(fl, T, rho, p, 2);
+			const loc = locate(fl, p);
+			if (loc.phase === 'saturated-mixture') continue; // inside the dome: the two-phase search covers it
+			if (loc.sat) {
+				found.push(saturatedState(fl, loc.sat, loc.x ?? 0));
+				continue;
+			}
+			if (p.P > fl.Pmax * (1 + 1e-9)) continue;
+			found.push(singleState(fl, p, loc.phase));
+		}
+	}
+	return choose(fl, found, hint, what, () => noStateInRange(fl, what));
+}

@@ -1,0 +1,90 @@
+/**
+ * States at fixed T with a given u, h or s. Along an isotherm these properties can turn (e.g.
+ * water's s near its density maximum, h of hot compressed liquid), so every branch is scanned:
+ * below Tc the liquid branch ρ' ≤ ρ ≤ ρ(T, Pmax) (in ρ) and the vapor branch ρ ≤ ρ'' (in ln ρ),
+ * plus the mixture if y' ≤ y ≤ y''; at or above Tc the single branch up to ρ(T, Pmax).
+ * Derivatives: (∂u/∂ρ)_T = (P − T(∂P/∂T)_ρ)/ρ², (∂h/∂ρ)_T = (∂P/∂ρ)_T/ρ − T(∂P/∂T)_ρ/ρ²,
+ * (∂s/∂ρ)_T = −(∂P/∂T)_ρ/ρ².
+ */
+import { fmt } from '../errors.ts';
+import type { Fluid } from '../fluid.ts';
+import { evalPoint, Point, propDrho, propValue, type EnergyProp } from '../properties.ts';
+import { SAT_TOL, saturatedState, singleState } from '../state.ts';
+import type { RootHint, State } from '../types.ts';
+import { choose } from './choose.ts';
+import { densityAtTP } from './density.ts';
+import { evalSatLine, SatLine } from './dome.ts';
+import { locate, locateWithSat, twoPhaseAt } from './locate.ts';
+import { noStateInRange } from './range.ts';
+import { scanRoots, type FD } from './roots.ts';
+import { CRITICAL_BAND } from './saturation.ts';
+
+const IDX: Record<EnergyProp, number> = { u: 1, h: 2, s: 3 };
+const UNIT: Record<EnergyProp, string> = { u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)' };
+
+/** Lowest density searched on vapor branches, relative to the critical density. */
+const RHO_FLOOR = 1e-10;
+
+export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint?: RootHint): State {
+	const p = new Point();
+	const found: State[] = [];
+	const fn = (logScale: boolean) => (z: number, out: FD) => {
+		const rho = logScale ? Math.exp(z) : z;
+		evalPoint(fl, T, rho, p, 2);
+		out.f = propValue(p, which) - y;
+		out.df = propDrho(p, which) * (logScale ? rho : 1);
+	};
+	const single = (rho: number, known: 'liquid' | 'vapor' | 'any', line: SatLine | null) => {
+		evalPoint(fl, T, rho, p, 2);
+		const loc = line ? locateWithSat(fl, T, rho, line.sat) : locate(fl, p);
+		if (loc.phase === 'saturated-mixture') return;
+		if (loc.sat) {
+			found.push(saturatedState(fl, loc.sat, loc.x ?? 0));
+			return;
+		}
+		if (known !== 'any' && (loc.phase === 'compressed-liquid') !== (known === 'liquid')) return;
+		if (p.P > fl.Pmax * (1 + 1e-9)) return;
+		found.push(singleState(fl, p, loc.phase));
+	};
+	const subcritical = T < fl.Tc * (1 - CRITICAL_BAND);
+	const rhoLow = RHO_FLOOR * fl.rhoc;
+	if (subcritical) {
+		const line = evalSatLine(fl, T, new SatLine());
+		const rhoMax = densityAtTP(fl, T, fl.Pmax * (1 + 1e-6), line.sat.rhoL * 1.01, line.sat.rhoL);
+		const b = IDX[which];
+		const yL = line.yL[b], yV = line.yV[b];
+		const st = twoPhaseAt(fl, line.sat, (y - yL) / (yV - yL));
+		if (st) found.push(st);
+		const { rhoL, rhoV } = line.sat;
+		if (rhoMax > rhoL) {
+			for (const r of scanRoots(fn(false), rhoL, rhoMax, 10, 1e-13 * rhoMax))
+				if (r > rhoL * (1 + SAT_TOL)) single(r, 'liquid', line);
+		}
+		for (const z of scanRoots(fn(true), Math.log(rhoLow), Math.log(rhoV), 12, 1e-13))
+			if (Math.exp(z) < rhoV * (1 - SAT_TOL)) single(Math.exp(z), 'vapor', line);
+		if (which === 's') extendDilute(fl, T, y, rhoLow, fn(true), (r) => single(r, 'vapor', line));
+	} else {
+		const rhoMax = densityAtTP(fl, T, fl.Pmax * (1 + 1e-6), 2 * fl.rhoc);
+		for (const z of scanRoots(fn(true), Math.log(rhoLow), Math.log(rhoMax), 24, 1e-13)) single(Math.exp(z), 'any', null);
+		if (which === 's') extendDilute(fl, T, y, rhoLow, fn(true), (r) => single(r, 'any', null));
+	}
+	return choose(fl, found, hint, `T = ${fmt(T)} K and ${which} = ${fmt(y)} ${UNIT[which]}`, () =>
+		noStateInRange(fl, `T = ${fmt(T)} K and ${which} = ${fmt(y)} ${UNIT[which]}`)
+	);
+}
+
+/** Entropy beyond the densest-to-lightest scan: below RHO_FLOOR s ≈ s₀ − R·ln ρ, solved by Newton in ln ρ. */
+function extendDilute(fl: Fluid, T: number, y: number, rhoLow: number, fn: (z: number, out: FD) => void, add: (rho: number) => void): void {
+	const out: FD = { f: 0, df: 0 };
+	let z = Math.log(rhoLow);
+	fn(z, out);
+	if (!(out.f < 0)) return;
+	for (let it = 0; it < 50; it++) {
+		const step = -out.f / out.df;
+		z += Math.max(-50, Math.min(50, step));
+		fn(z, out);
+		if (Math.abs(step) < 1e-13) break;
+	}
+	if (Math.abs(out.f) <= 1e-9 * Math.max(1, Math.abs(y)) && Math.exp(z) > 0) add(Math.exp(z));
+	void T;
+}

@@ -1,0 +1,264 @@
+/**
+ * States from two of u, h, s — (h, s), (u, h), (u, s) — which fix neither T, P nor ρ directly.
+ * Two-phase candidates: domeRoots with the quality fixed by the first property. Single-phase
+ * candidates: 2-D Newton in (T, ln ρ) on both residuals, started from every cell of a per-fluid
+ * state grid whose image contains the target (barycentric interpolation gives the start).
+ * The grid follows each isotherm on two branches that meet the saturation line (or, above Tc, the
+ * critical isobar) at their ends, so no cell straddles the dome:
+ *   vapor-like: ln P uniform from Pt/100 up to Psat(T) (or Pc); liquid-like: from Psat(T) (or Pc) to Pmax.
+ * Every converged candidate is checked to be single-phase and in range; duplicates are merged.
+ */
+import { fmt } from '../errors.ts';
+import type { Fluid } from '../fluid.ts';
+import { evalPoint, Point, propDT, propDrho, propValue, type EnergyProp } from '../properties.ts';
+import { saturatedState, singleState } from '../state.ts';
+import type { RootHint, State } from '../types.ts';
+import { choose } from './choose.ts';
+import { densityAtTP } from './density.ts';
+import { domeRoots } from './dome.ts';
+import { locate, twoPhaseAt } from './locate.ts';
+import { noStateInRange } from './range.ts';
+import { satAtT, triplePressure } from './saturation.ts';
+
+const NT = 40;
+const NV = 18;
+const NL = 18;
+const UNIT: Record<EnergyProp, string> = { u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)' };
+
+interface Grid {
+	/** per branch: node arrays [i*(nj)+j] */
+	branches: { nj: number; T: Float64Array; lnRho: Float64Array; y: Float64Array[] }[];
+	/** bounding boxes per pair key, per branch, per cell: [min a, max a, min b, max b] */
+	boxes: Map<string, Float64Array[]>;
+}
+
+function buildGrid(fl: Fluid): Grid {
+	const Pt = triplePressure(fl);
+	const Plo = Pt / 100;
+	const Ts: number[] = [];
+	// uniform in T, with the critical temperature itself as a node
+	const span = fl.Tmax - fl.Tmin;
+	for (let i = 0; i < NT; i++) Ts.push(fl.Tmin + (span * i) / (NT - 1));
+	let k = 0;
+	for (let i = 1; i < NT; i++) if (Math.abs(Ts[i] - fl.Tc) < Math.abs(Ts[k] - fl.Tc)) k = i;
+	Ts[k] = fl.Tc;
+	const p = new Point();
+	const branches = [NV, NL].map((nj) => ({
+		nj,
+		T: new Float64Array(NT * nj),
+		lnRho: new Float64Array(NT * nj),
+		y: [0, 1, 2].map(() => new Float64Array(NT * nj))
+	}));
+	for (let i = 0; i < NT; i++) {
+		const T = Ts[i];
+		const sub = T < fl.Tc * (1 - 1e-9);
+		const sat = sub ? satAtT(fl, T) : null;
+		const Pmid = sat ? sat.P : fl.Pc;
+		for (let b = 0; b < 2; b++) {
+			const br = branches[b];
+			const nj = br.nj;
+			let rho = b === 0 ? Plo / (fl.R * T) : sat ? sat.rhoL : fl.rhoc;
+			for (let j = 0; j < nj; j++) {
+				const f = j / (nj - 1);
+				const lnP = b === 0 ? Math.log(Plo) + f * (Math.log(Pmid) - Math.log(Plo)) : Math.log(Pmid) + f * (Math.log(fl.Pmax) - Math.log(Pmid));
+				const P = Math.exp(lnP);
+				if (sat && b === 0 && j === nj - 1) rho = sat.rhoV;
+				else if (sat && b === 1 && j === 0) rho = sat.rhoL;
+				else if (sat && b === 0) rho = densityAtTP(fl, T, P, Math.min(rho, sat.rhoV), 0, sat.rhoV);
+				else if (sat && b === 1) rho = densityAtTP(fl, T, P, Math.max(rho, sat.rhoL), sat.rhoL);
+				else rho = densityAtTP(fl, T, P, rho);
+				const idx = i * nj + j;
+				evalPoint(fl, T, rho, p, 1);
+				br.T[idx] = T;
+				br.lnRho[idx] = Math.log(rho);
+				br.y[0][idx] = p.u;
+				br.y[1][idx] = p.h;
+				br.y[2][idx] = p.s;
+			}
+		}
+	}
+	return { branches, boxes: new Map() };
+}
+
+function grid(fl: Fluid): Grid {
+	let g = fl.cache.stateGrid as Grid | undefined;
+	if (!g) {
+		g = buildGrid(fl);
+		fl.cache.stateGrid = g;
+	}
+	return g;
+}
+
+const YI: Record<EnergyProp, number> = { u: 0, h: 1, s: 2 };
+
+function boxes(g: Grid, a: EnergyProp, b: EnergyProp): Float64Array[] {
+	const key = a + b;
+	let bx = g.boxes.get(key);
+	if (bx) return bx;
+	bx = g.branches.map((br) => {
+		const nj = br.nj;
+		const A = br.y[YI[a]], B = br.y[YI[b]];
+		const out = new Float64Array((NT - 1) * (nj - 1) * 4);
+		for (let i = 0; i < NT - 1; i++)
+			for (let j = 0; j < nj - 1; j++) {
+				const c = [i * nj + j, i * nj + j + 1, (i + 1) * nj + j, (i + 1) * nj + j + 1];
+				const o = (i * (nj - 1) + j) * 4;
+				out[o] = Math.min(...c.map((q) => A[q]));
+				out[o + 1] = Math.max(...c.map((q) => A[q]));
+				out[o + 2] = Math.min(...c.map((q) => B[q]));
+				out[o + 3] = Math.max(...c.map((q) => B[q]));
+			}
+		return out;
+	});
+	g.boxes.set(key, bx);
+	return bx;
+}
+
+/**
+ * Starting points (T, ln ρ): every grid cell across which both residuals change sign (the target
+ * lies in the cell's bounding box in the (a, b) plane). The start is the barycentric point when the
+ * target lies inside one of the cell's two triangles (listed first), else the cell's centre — cells
+ * on dilute-vapor isotherms are nearly degenerate in (u, h), where only the centre is usable.
+ */
+export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number): [number, number][] {
+	const g = grid(fl);
+	const bx = boxes(g, a, b);
+	const inTri: [number, number][] = [];
+	const centres: [number, number][] = [];
+	let best: [number, number] | null = null;
+	let bestD = Infinity;
+	g.branches.forEach((br, bi) => {
+		const nj = br.nj;
+		const box = bx[bi];
+		const Ya = br.y[YI[a]], Yb = br.y[YI[b]];
+		for (let i = 0; i < NT - 1; i++)
+			for (let j = 0; j < nj - 1; j++) {
+				const o = (i * (nj - 1) + j) * 4;
+				const wa = 1e-9 * Math.abs(A) + 1e-6 * (box[o + 1] - box[o]);
+				const wb = 1e-9 * Math.abs(B) + 1e-6 * (box[o + 3] - box[o + 2]);
+				if (A < box[o] - wa || A > box[o + 1] + wa || B < box[o + 2] - wb || B > box[o + 3] + wb) continue;
+				const c = [i * nj + j, i * nj + j + 1, (i + 1) * nj + j + 1, (i + 1) * nj + j];
+				let hit = false;
+				for (const [p0, p1, p2] of [
+					[c[0], c[1], c[2]],
+					[c[0], c[2], c[3]]
+				]) {
+					const x0 = Ya[p0], y0 = Yb[p0];
+					const d = (Ya[p1] - x0) * (Yb[p2] - y0) - (Ya[p2] - x0) * (Yb[p1] - y0);
+					if (d === 0) continue;
+					const l1 = ((A - x0) * (Yb[p2] - y0) - (Ya[p2] - x0) * (B - y0)) / d;
+					const l2 = ((Ya[p1] - x0) * (B - y0) - (A - x0) * (Yb[p1] - y0)) / d;
+					const l0 = 1 - l1 - l2;
+					if (l0 >= -0.05 && l1 >= -0.05 && l2 >= -0.05) {
+						inTri.push([
+							l0 * br.T[p0] + l1 * br.T[p1] + l2 * br.T[p2],
+							l0 * br.lnRho[p0] + l1 * br.lnRho[p1] + l2 * br.lnRho[p2]
+						]);
+						hit = true;
+						break;
+					}
+				}
+				if (!hit)
+					centres.push([
+						0.25 * (br.T[c[0]] + br.T[c[1]] + br.T[c[2]] + br.T[c[3]]),
+						0.25 * (br.lnRho[c[0]] + br.lnRho[c[1]] + br.lnRho[c[2]] + br.lnRho[c[3]])
+					]);
+			}
+		// the nearest node, a last resort for targets outside the grid (e.g. below its lowest pressure)
+		for (let q = 0; q < NT * nj; q++) {
+			const da = (Ya[q] - A) / (fl.R * fl.Tc), db = (Yb[q] - B) / (fl.R * fl.Tc);
+			const dist = da * da + db * db;
+			if (dist < bestD) {
+				bestD = dist;
+				best = [br.T[q], br.lnRho[q]];
+			}
+		}
+	});
+	const res = [...inTri, ...centres];
+	if (best) res.push(best);
+	return res;
+}
+
+/** 2-D Newton in (T, ln ρ) on y_a = A, y_b = B; returns the converged point or null. */
+export function newton2(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, T0: number, z0: number, p: Point): Point | null {
+	const sa = a === 's' ? fl.R : fl.R * fl.Tc;
+	const sb = b === 's' ? fl.R : fl.R * fl.Tc;
+	let T = T0, z = z0;
+	let prev = Infinity;
+	let bestNorm = Infinity, bestT = T, bestZ = z, stalled = 0;
+	for (let it = 0; it < 60; it++) {
+		const rho = Math.exp(z);
+		evalPoint(fl, T, rho, p, 2);
+		const ra = (propValue(p, a) - A) / sa, rb = (propValue(p, b) - B) / sb;
+		const norm = Math.abs(ra) + Math.abs(rb);
+		if (!Number.isFinite(norm)) return null;
+		if (norm < bestNorm) {
+			bestNorm = norm;
+			bestT = T;
+			bestZ = z;
+		}
+		if (norm < 1e-16) return p;
+		// at round-off the residual stops falling: take a few more steps and keep the best iterate
+		if (norm < 1e-12 && norm >= 0.5 * prev && ++stalled >= 4) {
+			evalPoint(fl, bestT, Math.exp(bestZ), p, 2);
+			return p;
+		}
+		prev = norm;
+		const j11 = propDT(p, a) / sa, j12 = (propDrho(p, a) * rho) / sa;
+		const j21 = propDT(p, b) / sb, j22 = (propDrho(p, b) * rho) / sb;
+		const det = j11 * j22 - j12 * j21;
+		if (!Number.isFinite(det) || det === 0) return null;
+		let dT = -(ra * j22 - j12 * rb) / det;
+		let dz = -(j11 * rb - ra * j21) / det;
+		const m = Math.max(1, Math.abs(dT) / (0.2 * T), Math.abs(dz) / 1.0);
+		dT /= m;
+		dz /= m;
+		T += dT;
+		z += dz;
+		if (!(T > 0.5 * fl.Tmin && T < 2 * fl.Tmax && z < Math.log(50 * fl.rhoc))) return null;
+		if (Math.abs(dT) < 1e-13 * T && Math.abs(dz) < 1e-13) {
+			evalPoint(fl, T, Math.exp(z), p, 2);
+			return p;
+		}
+	}
+	return null;
+}
+
+export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, hint?: RootHint): State {
+	const what = `${a} = ${fmt(A)} ${UNIT[a]} and ${b} = ${fmt(B)} ${UNIT[b]}`;
+	const found: State[] = [];
+	// the quality from s (or h) is better conditioned than from u; any works
+	for (const r of domeRoots(fl, { prop: a, value: A }, b, B)) {
+		const st = twoPhaseAt(fl, r.sat, r.x);
+		if (st) found.push(st);
+	}
+	const p = new Point();
+	const dT = (fl.Tmax - fl.Tmin) / (NT - 1);
+	const accepted: [number, number][] = [];
+	const metastable: [number, number][] = [];
+	const queue = starts(fl, a, A, b, B);
+	let runs = 0;
+	while (queue.length > 0 && runs < 24) {
+		const [T0, z0] = queue.shift() as [number, number];
+		// a start within a grid cell of an accepted state leads to the same state
+		if (accepted.some(([T, z]) => Math.abs(T - T0) < dT && Math.abs(z - z0) < 0.5)) continue;
+		runs++;
+		const q = newton2(fl, a, A, b, B, T0, z0, p);
+		if (!q) continue;
+		if (q.T < fl.Tmin * (1 - 1e-9) || q.T > fl.Tmax * (1 + 1e-9) || q.P > fl.Pmax * (1 + 1e-9) || !(q.P > 0)) continue;
+		const loc = locate(fl, q);
+		if (loc.phase === 'saturated-mixture' && loc.sat) {
+			// a metastable root of the equation inside the dome: look again just outside it on its
+			// side, once per such root
+			if (metastable.some(([T, z]) => Math.abs(T - q.T) < 1e-6 * T && Math.abs(z - Math.log(q.rho)) < 1e-6)) continue;
+			metastable.push([q.T, Math.log(q.rho)]);
+			const { rhoL, rhoV } = loc.sat;
+			const side = q.rho > Math.sqrt(rhoL * rhoV) ? Math.log(rhoL * 1.001) : Math.log(rhoV * 0.999);
+			queue.unshift([q.T, side]);
+			continue;
+		}
+		accepted.push([q.T, Math.log(q.rho)]);
+		found.push(loc.sat ? saturatedState(fl, loc.sat, loc.x ?? 0) : singleState(fl, q, loc.phase));
+	}
+	return choose(fl, found, hint, what, () => noStateInRange(fl, what));
+}
