@@ -4,7 +4,7 @@ import { clampCoords } from './clamp';
 import { isPressureLimit, legAriaLabel, LIMIT_ORDER, limitText, stateAriaLabel } from './describe';
 import { LEG_STROKE, LIMIT_STROKE, processStyle } from './encoding';
 import { KEY, keyEntries, layoutKey } from './key';
-import { ObstacleIndex, placeEdgeLabels, placeNear, textWidth, type LabelRequest } from './labels';
+import { levelAnchors, ObstacleIndex, placeEdgeLabels, placeNear, textWidth, type LabelRequest } from './labels';
 import { axisTicks, axisUnit, compactNumber, fitDomain, makeXScale, makeYScale, thinLabels, yScaleType, type Scale, type Tick } from './scales';
 import { DRAWING_CSS, OVERLAY_CSS } from './style';
 import type {
@@ -153,9 +153,10 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	let y: Scale | null = null;
 	let plot: Rect = { x: 0, y: 0, width: 0, height: 0 };
 	let dragging: { id: string; moved: boolean } | null = null;
+	let pathRev = 0;
 
 	// ---- drawing skeleton
-	const svg = select(drawing).attr('class', 'swc-drawing');
+	const svg = select(drawing).classed('swc-drawing', true);
 	svg.selectAll('*:not(title):not(desc)').remove();
 	svg.append('style').text(DRAWING_CSS);
 	const clipRect = svg.append('defs').append('clipPath').attr('id', `${uid}-clip`).append('rect');
@@ -168,8 +169,8 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	const domeLine = clipped.append('path').attr('class', 'swc-dome-line');
 	const tripleLine = clipped.append('line').attr('class', 'swc-triple');
 	const gLimits = clipped.append('g');
-	const gTraces = clipped.append('g');
 	const gLegs = clipped.append('g');
+	const gTraces = clipped.append('g');
 	const gCross = clipped.append('g');
 	const cp = clipped.append('circle').attr('class', 'swc-cp').attr('r', 3.5);
 	const gStates = clipped.append('g');
@@ -180,7 +181,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	const gKey = root.append('g').attr('class', 'swc-key');
 
 	// ---- overlay skeleton
-	const ov = select(overlay).attr('class', 'swc-overlay');
+	const ov = select(overlay).classed('swc-overlay', true);
 	ov.selectAll('*').remove();
 	ov.append('style').text(OVERLAY_CSS);
 	const oroot = ov.append('g');
@@ -438,6 +439,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	// ---- path drawing (cheap: called on every drag answer)
 	function drawPath() {
 		if (!frame || !x || !y) return;
+		const started = performance.now();
 		const f = frame;
 		const rows = computeKeyRows(f.width);
 		if (rows !== keyRows) {
@@ -532,6 +534,8 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		drawLabels(legPts, crossings.map((c) => c.p));
 		drawKey();
 		drawOverlay(legPts);
+		// for benchmarks and tests: a redraw counter and its cost, on the overlay (never exported)
+		ov.attr('data-path-rev', ++pathRev).attr('data-path-ms', (performance.now() - started).toFixed(2));
 	}
 
 	function drawLabels(legPts: Map<string, Point[]>, crossingPts: Point[]) {
@@ -551,7 +555,9 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const lims = drawnLimits();
 		const limReqs: LabelRequest[] = lims.map((l) => {
 			const text = limitText(l.name, l.value, f.units);
-			return { id: l.name, width: textWidth(text, 10.5, false) + 8, height: 12, line: l.straight ? limitLine(l.value) : l.points!.map(project), prefer: 'end' };
+			const width = textWidth(text, 10.5, false) + 8;
+			const line = l.straight ? limitLine(l.value) : l.points!.map(project);
+			return { id: l.name, width, height: 12, line, prefer: 'end', anchors: l.straight ? [] : levelAnchors(line, width) };
 		});
 		const limitPlaced = placeEdgeLabels(limReqs, plot, obstacles, { maxSlide: plot.width, step: 16 });
 		gLabels

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { clipPolyline, clipSegment, inflate, ObstacleIndex, placeEdgeLabels, placeNear, rectsOverlap, type LabelRequest } from './labels';
+import { clipPolyline, clipSegment, inflate, levelAnchors, ObstacleIndex, placeEdgeLabels, placeNear, rectsOverlap, type LabelRequest } from './labels';
 import type { Point, Rect } from './types';
 
 const plot: Rect = { x: 50, y: 20, width: 400, height: 300 };
@@ -99,5 +99,35 @@ describe('edge labels avoid the path', () => {
 		const box = placeNear(p, 22, 11, plot, obstacles)!;
 		expect(box.x).toBeGreaterThan(p.x);
 		expect(box.y).toBeGreaterThan(p.y); // down-right
+	});
+});
+
+describe('labels for curved limits', () => {
+	it('prefer the curve’s level stretch, right to left', () => {
+		const line = [
+			{ x: 88, y: 30 },
+			{ x: 89, y: 210 },
+			{ x: 150, y: 210 },
+			{ x: 280, y: 210.5 },
+			{ x: 300, y: 250 },
+			{ x: 440, y: 300 }
+		];
+		const a = levelAnchors(line, 100);
+		expect(a[0].x).toBe(280 - 100 - 8);
+		expect(a.every((p) => p.x >= 89 && Math.abs(p.y - 210) < 1)).toBe(true);
+		const [placed] = placeEdgeLabels([{ id: 'dt', width: 100, height: 12, line, anchors: a }], plot, new ObstacleIndex());
+		expect(placed.box.y + placed.box.height).toBeLessThanOrEqual(210); // above the stretch
+		expect(placed.box.x).toBeGreaterThanOrEqual(89);
+		expect(placed.box.x + placed.box.width).toBeLessThanOrEqual(290);
+	});
+
+	it('a label longer than the stretch starts at its left end; no level stretch, no anchors', () => {
+		const short = [
+			{ x: 100, y: 100 },
+			{ x: 160, y: 100 },
+			{ x: 200, y: 200 }
+		];
+		expect(levelAnchors(short, 150)).toEqual([{ x: 100, y: 100 }]);
+		expect(levelAnchors([{ x: 0, y: 0 }, { x: 100, y: 100 }], 50)).toEqual([]);
 	});
 });

@@ -129,6 +129,8 @@ export interface LabelRequest {
 	line: readonly Point[];
 	/** which visible end to try first (default 'end': where the line leaves the plot last) */
 	prefer?: 'end' | 'start';
+	/** points to try before the edges (e.g. above a curve's flat stretch) */
+	anchors?: readonly Point[];
 }
 
 export interface LabelPlacement {
@@ -196,8 +198,8 @@ export function boxAt(p: Point, w: number, h: number, plot: Rect): Rect {
 }
 
 /**
- * Place one label per request at the edge where its line leaves the plot, sliding inward along
- * the line, then trying the line's other visible end, until the box (with `pad` clearance)
+ * Place one label per request at its preferred anchors if any, else at the edge where its line
+ * leaves the plot, sliding inward along the line, then trying the line's other visible end, until the box (with `pad` clearance)
  * touches nothing in `obstacles` nor an earlier label. Requests are placed in order (put the
  * important ones first); a label with no free spot is left out rather than drawn over the path.
  * Placed labels are added to `obstacles`.
@@ -212,10 +214,12 @@ export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, o
 		if (!runs.length) continue;
 		const endRun = [...runs[runs.length - 1]].reverse();
 		const startRun = runs[0];
-		const order = req.prefer === 'start' ? [startRun, endRun] : [endRun, startRun];
+		const edges = req.prefer === 'start' ? [startRun, endRun] : [endRun, startRun];
+		const inside = (p: Point) => p.x >= plot.x && p.x <= plot.x + plot.width && p.y >= plot.y && p.y <= plot.y + plot.height;
+		const order = [(req.anchors ?? []).filter(inside), ...edges.map((run) => pointsAlong(run, step, maxSlide))];
 		let done = false;
-		for (const run of order) {
-			for (const p of pointsAlong(run, step, maxSlide)) {
+		for (const candidates of order) {
+			for (const p of candidates) {
 				const box = boxAt(p, req.width, req.height, plot);
 				if (obstacles.hits(inflate(box, pad))) continue;
 				placed.push({ id: req.id, box, anchor: p });
@@ -249,4 +253,34 @@ export function placeNear(p: Point, w: number, h: number, plot: Rect, obstacles:
 		}
 	}
 	return null;
+}
+
+/**
+ * Anchors above the right part of a polyline's longest level stretch (|Δy| ≤ 1 px per segment),
+ * where a label reads as belonging to that curve: a limit isobar's run across the dome on T–v,
+ * a limit isotherm's on P–v. Ordered right to left (just the stretch's left end when the label is
+ * longer than the stretch); empty when no stretch is as long as `minLength` px.
+ */
+export function levelAnchors(line: readonly Point[], width: number, step = 12, minLength = 48): Point[] {
+	let best: [number, number] | null = null;
+	let i = 0;
+	while (i < line.length - 1) {
+		let j = i;
+		while (j < line.length - 1 && Math.abs(line[j + 1].y - line[j].y) <= 1) j++;
+		if (j > i) {
+			const len = Math.abs(line[j].x - line[i].x);
+			if (!best || len > Math.abs(line[best[1]].x - line[best[0]].x)) best = [i, j];
+		}
+		i = j + 1;
+	}
+	if (!best) return [];
+	const a = line[best[0]];
+	const b = line[best[1]];
+	const left = Math.min(a.x, b.x);
+	const right = Math.max(a.x, b.x);
+	if (right - left < minLength) return [];
+	const y = (a.y + b.y) / 2;
+	const out: Point[] = [];
+	for (let x = right - width - 8; x >= left; x -= step) out.push({ x, y });
+	return out.length ? out : [{ x: left, y }];
 }
