@@ -1,4 +1,4 @@
-import { fail, type ActionFailure, type RequestEvent } from '@sveltejs/kit';
+import { error, fail, type ActionFailure, type RequestEvent } from '@sveltejs/kit';
 import { retryAfterSeconds } from './rate-limit';
 import { z } from 'zod';
 import { isAppError } from './errors';
@@ -22,6 +22,15 @@ export interface FormFailure {
 
 export function formFailure(status: number, message: string, errors: Record<string, string> = {}, values: Record<string, string> = {}): ActionFailure<FormFailure> {
 	return fail(status, { message, errors, values });
+}
+
+/** The posted form; a body that is not a readable form is the client's fault (400), not ours. */
+export async function readFormData(request: Request): Promise<FormData> {
+	try {
+		return await request.formData();
+	} catch {
+		error(400, { code: 'bad-form', message: 'The form could not be read. Send it as application/x-www-form-urlencoded or multipart/form-data.' });
+	}
 }
 
 export type Parsed<T> = { ok: true; data: T; values: Record<string, string> } | { ok: false; failure: ActionFailure<FormFailure> };

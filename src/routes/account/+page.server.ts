@@ -4,7 +4,7 @@ import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { changePassword, clearSessionCookie, invalidateUserSessions, PASSWORD_MIN, sendVerification } from '$lib/server/auth';
 import { requireUser } from '$lib/server/guard';
-import { fields, formFailure, parseForm, runAction } from '$lib/server/forms';
+import { fields, formFailure, parseForm, runAction, readFormData } from '$lib/server/forms';
 import { flowContext } from '$lib/server/request';
 import { deleteUserSession, listUserSessions } from '$lib/server/db/sessions';
 import { updateUserName } from '$lib/server/db/users';
@@ -34,14 +34,14 @@ const sessionSchema = z.object({ session: z.string().regex(/^[0-9a-f]{64}$/, 'Th
 export const actions: Actions = {
 	profile: async (event) => {
 		const user = requireUser(event);
-		const parsed = parseForm(profileSchema, await event.request.formData(), ['name']);
+		const parsed = parseForm(profileSchema, await readFormData(event.request), ['name']);
 		if (!parsed.ok) return parsed.failure;
 		await updateUserName(getDb(), user.id, parsed.data.name);
 		return { saved: 'profile' };
 	},
 	password: async (event) => {
 		const user = requireUser(event);
-		const parsed = parseForm(passwordSchema, await event.request.formData());
+		const parsed = parseForm(passwordSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
 		if (parsed.data.next !== parsed.data.confirm) return formFailure(400, 'The two new passwords differ.', { confirm: 'Does not match the new password.' });
 		return runAction({}, async () => {
@@ -56,7 +56,7 @@ export const actions: Actions = {
 	},
 	revokeSession: async (event) => {
 		const user = requireUser(event);
-		const parsed = parseForm(sessionSchema, await event.request.formData());
+		const parsed = parseForm(sessionSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
 		if (parsed.data.session === event.locals.session?.id) return formFailure(400, 'That is this session: use Sign out instead.');
 		const gone = await deleteUserSession(getDb(), user.id, parsed.data.session);

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { checkResetToken, createSession, PASSWORD_MIN, requestPasswordReset, resetPassword, setSessionCookie } from '$lib/server/auth';
-import { fields, formFailure, parseForm, runAction } from '$lib/server/forms';
+import { fields, formFailure, parseForm, runAction, readFormData } from '$lib/server/forms';
 import { clientMeta, flowContext } from '$lib/server/request';
 import { isAppError } from '$lib/server/errors';
 
@@ -24,7 +24,7 @@ const setSchema = z.object({ token: z.string().min(1).max(100), password: fields
 
 export const actions: Actions = {
 	request: async (event) => {
-		const parsed = parseForm(requestSchema, await event.request.formData(), ['email']);
+		const parsed = parseForm(requestSchema, await readFormData(event.request), ['email']);
 		if (!parsed.ok) return parsed.failure;
 		return runAction(
 			parsed.values,
@@ -36,7 +36,7 @@ export const actions: Actions = {
 		);
 	},
 	set: async (event) => {
-		const parsed = parseForm(setSchema, await event.request.formData());
+		const parsed = parseForm(setSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
 		const { token, password, confirm } = parsed.data;
 		if (password !== confirm) return formFailure(400, 'The two passwords differ. Type the same new password twice.', { confirm: 'Does not match the password above.' });

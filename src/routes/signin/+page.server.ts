@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { createSession, setSessionCookie, signIn } from '$lib/server/auth';
-import { fields, parseForm, runAction, safeNext } from '$lib/server/forms';
+import { fields, parseForm, runAction, safeNext, readFormData } from '$lib/server/forms';
 import { clientIp, clientMeta } from '$lib/server/request';
 
 export const load: PageServerLoad = async ({ locals, url }) => {
@@ -20,7 +20,7 @@ const schema = z.object({
 
 export const actions: Actions = {
 	default: async (event) => {
-		const parsed = parseForm(schema, await event.request.formData(), ['email', 'next']);
+		const parsed = parseForm(schema, await readFormData(event.request), ['email', 'next']);
 		if (!parsed.ok) return parsed.failure;
 		const { email, password, next } = parsed.data;
 		return runAction(parsed.values, async () => {

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { createSession, PASSWORD_MIN, setSessionCookie, signUp } from '$lib/server/auth';
-import { fields, parseForm, runAction, safeNext } from '$lib/server/forms';
+import { fields, parseForm, runAction, safeNext, readFormData } from '$lib/server/forms';
 import { clientMeta, flowContext } from '$lib/server/request';
 import { inspectInvite } from '$lib/server/teams';
 
@@ -26,7 +26,7 @@ const schema = z.object({
 
 export const actions: Actions = {
 	default: async (event) => {
-		const parsed = parseForm(schema, await event.request.formData(), ['name', 'email', 'next', 'invite']);
+		const parsed = parseForm(schema, await readFormData(event.request), ['name', 'email', 'next', 'invite']);
 		if (!parsed.ok) return parsed.failure;
 		const { name, email, password, next, invite } = parsed.data;
 		return runAction(

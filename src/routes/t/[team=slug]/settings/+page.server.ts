@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { requireTeam } from '$lib/server/guard';
-import { fields, formFailure, parseForm, runAction } from '$lib/server/forms';
+import { fields, formFailure, parseForm, runAction, readFormData } from '$lib/server/forms';
 import { flowContext } from '$lib/server/request';
 import { listMembers } from '$lib/server/db/memberships';
 import { listPendingInvites } from '$lib/server/db/invites';
@@ -56,7 +56,7 @@ const leaveSchema = z.object({ confirm: z.literal('yes', { error: 'Tick the box 
 export const actions: Actions = {
 	rename: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'team:manage');
-		const parsed = parseForm(renameSchema, await event.request.formData(), ['name', 'description']);
+		const parsed = parseForm(renameSchema, await readFormData(event.request), ['name', 'description']);
 		if (!parsed.ok) return parsed.failure;
 		return runAction(parsed.values, async () => {
 			await renameTeam(getDb(), access, parsed.data);
@@ -65,7 +65,7 @@ export const actions: Actions = {
 	},
 	invite: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'team:manage');
-		const parsed = parseForm(inviteSchema, await event.request.formData(), ['email', 'role']);
+		const parsed = parseForm(inviteSchema, await readFormData(event.request), ['email', 'role']);
 		if (!parsed.ok) return parsed.failure;
 		return runAction(
 			parsed.values,
@@ -78,7 +78,7 @@ export const actions: Actions = {
 	},
 	revokeInvite: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'team:manage');
-		const parsed = parseForm(idSchema, await event.request.formData());
+		const parsed = parseForm(idSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
 		return runAction({}, async () => {
 			const invite = await cancelInvite(getDb(), access, parsed.data.id);
@@ -87,7 +87,7 @@ export const actions: Actions = {
 	},
 	changeRole: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'team:manage');
-		const parsed = parseForm(roleSchema, await event.request.formData());
+		const parsed = parseForm(roleSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
 		return runAction({}, async () => {
 			const r = await changeMemberRole(getDb(), access, parsed.data.id, parsed.data.role);
@@ -96,7 +96,7 @@ export const actions: Actions = {
 	},
 	removeMember: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'team:manage');
-		const parsed = parseForm(idSchema, await event.request.formData());
+		const parsed = parseForm(idSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
 		return runAction({}, async () => {
 			const user = await removeTeamMember(getDb(), access, parsed.data.id);
@@ -105,7 +105,7 @@ export const actions: Actions = {
 	},
 	createToken: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'token:create');
-		const parsed = parseForm(tokenSchema, await event.request.formData(), ['name', 'role']);
+		const parsed = parseForm(tokenSchema, await readFormData(event.request), ['name', 'role']);
 		if (!parsed.ok) return parsed.failure;
 		return runAction(parsed.values, async () => {
 			const { token, row } = await createTeamToken(getDb(), access, parsed.data);
@@ -114,7 +114,7 @@ export const actions: Actions = {
 	},
 	revokeToken: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'token:create');
-		const parsed = parseForm(idSchema, await event.request.formData());
+		const parsed = parseForm(idSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
 		return runAction({}, async () => {
 			const row = await revokeTeamToken(getDb(), access, parsed.data.id);
@@ -124,7 +124,7 @@ export const actions: Actions = {
 	leave: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'read');
 		if (access.principal.kind !== 'user') return formFailure(403, 'Only people can leave teams.');
-		const parsed = parseForm(leaveSchema, await event.request.formData());
+		const parsed = parseForm(leaveSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
 		const r = await runAction({}, () => leaveTeam(getDb(), access));
 		if (r) return r;
