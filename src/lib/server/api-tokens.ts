@@ -40,6 +40,7 @@ export async function createTeamToken(
 	input: { name: string; role: Role }
 ): Promise<{ token: string; row: ApiToken }> {
 	if (access.principal.kind !== 'user') throw new AppError(403, 'forbidden', 'API tokens are created by people, not by other tokens.');
+	const creator = access.principal.user.id;
 	if (!grantableTokenRoles(access.role).includes(input.role)) {
 		throw new AppError(
 			403,
@@ -56,7 +57,7 @@ export async function createTeamToken(
 			tokenHash: sha256(token),
 			prefix: token.slice(0, TOKEN_PREFIX.length + 6),
 			role: input.role,
-			createdBy: access.actor.id!
+			createdBy: creator
 		});
 		await logTeamEvent(trx, { teamId: access.team.id, actorId: access.actor.id, actorLabel: access.actor.label, kind: 'token.created', detail: { name: row.name, role: row.role } });
 		return row;

@@ -13,6 +13,7 @@ import {
 	sessionCookieName,
 	signIn,
 	signUp,
+	startSession,
 	validateSession,
 	verifyEmail,
 	verifyPassword
@@ -152,6 +153,26 @@ describe('sessions', () => {
 		expect(await validateSession(env.db, b.token)).toBeNull();
 	});
 
+	it('starting a session on sign-in ends the one the browser still carried', async () => {
+		const u = await signUp(env.db, { name: 'F', email: 'f@example.com', password: 'long enough pass' }, env.ctx);
+		const jar = new Map<string, string>();
+		const cookies = {
+			get: (name: string) => jar.get(name),
+			set: (name: string, value: string, opts: { secure?: boolean; httpOnly?: boolean }) => {
+				expect(opts).toMatchObject({ secure: false, httpOnly: true });
+				jar.set(name, value);
+			}
+		} as unknown as import('@sveltejs/kit').Cookies;
+		const url = new URL('http://statewright.test/signin');
+		const first = await createSession(env.db, u.id, meta);
+		jar.set('statewright_session', first.token);
+		await startSession(env.db, { cookies, url }, u.id, meta);
+		const second = jar.get('statewright_session')!;
+		expect(second).not.toBe(first.token);
+		expect(await validateSession(env.db, first.token)).toBeNull();
+		expect(await validateSession(env.db, second)).not.toBeNull();
+	});
+
 	it('names the cookie by the origin: __Host- and Secure only on https', () => {
 		expect(sessionCookieName(new URL('https://sw.example.org/'))).toBe('__Host-statewright_session');
 		expect(sessionCookieName(new URL('http://192.168.1.20:3000/'))).toBe('statewright_session');
@@ -201,6 +222,13 @@ describe('password reset by e-mail', () => {
 		expect((await getUserByEmail(env.db, 'p@example.com'))?.email_verified_at).not.toBeNull();
 		// used up
 		await expectAppError(resetPassword(env.db, token, 'another new password'), 400, 'link-used');
+	});
+
+	it('answers 503 when the mail server cannot be reached, and sign-up still stands', async () => {
+		const down = { ...env.ctx, send: async () => Promise.reject(new Error('ECONNREFUSED')) };
+		const u = await signUp(env.db, { name: 'D', email: 'd@example.com', password: 'long enough pass' }, down);
+		expect(u.email).toBe('d@example.com');
+		await expectAppError(requestPasswordReset(env.db, 'd@example.com', down), 503, 'mail-unavailable');
 	});
 
 	it('says nothing for an unknown address and refuses an expired link', async () => {

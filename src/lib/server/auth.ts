@@ -213,6 +213,17 @@ export function setSessionCookie(cookies: Cookies, url: URL, token: string, expi
 	});
 }
 
+/**
+ * Signs a user in on this request: ends the session the browser still carried (no fixation),
+ * creates a new one and sets its cookie.
+ */
+export async function startSession(db: DB, event: { cookies: Cookies; url: URL }, userId: string, meta: ClientMeta): Promise<void> {
+	const previous = event.cookies.get(sessionCookieName(event.url));
+	if (previous) await invalidateSession(db, previous);
+	const { token, expiresAt } = await createSession(db, userId, meta);
+	setSessionCookie(event.cookies, event.url, token, expiresAt);
+}
+
 export function clearSessionCookie(cookies: Cookies, url: URL): void {
 	cookies.delete(sessionCookieName(url), { path: '/', httpOnly: true, sameSite: 'lax', secure: url.protocol === 'https:' });
 }
@@ -232,6 +243,16 @@ function tooMany(r: { retryAfterMs: number }, what: string): AppError {
 	const s = Number(retryAfterSeconds(r));
 	const wait = s >= 90 ? `${Math.ceil(s / 60)} minutes` : `${s} seconds`;
 	return new AppError(429, 'rate-limited', `Too many ${what}. Try again in ${wait}.`, undefined, { retryAfterMs: r.retryAfterMs });
+}
+
+/** Sends through the context; an unreachable mail server is a 503 the user can retry, not a crash. */
+async function deliver(ctx: FlowContext, message: MailMessage): Promise<void> {
+	try {
+		await ctx.send(message);
+	} catch (e) {
+		console.error('[statewright] mail to', message.to, 'failed:', e);
+		throw new AppError(503, 'mail-unavailable', 'The mail could not be sent just now. Try again in a few minutes.');
+	}
 }
 
 function limitMail(email: string, ip: string | null, what: string): void {
@@ -262,7 +283,8 @@ export async function signUp(
 		if (String(e).includes('UNIQUE')) throw new AppError(409, 'email-taken', 'An account with this e-mail address already exists.', 'email');
 		throw e;
 	}
-	await sendVerification(db, user, ctx, { limited: false });
+	// the account stands even if the mail does not go out: the user can ask for it again
+	await sendVerification(db, user, ctx, { limited: false }).catch(() => {});
 	return user;
 }
 
@@ -303,7 +325,7 @@ export async function sendVerification(
 		await insertEmailToken(trx, { userId: user.id, purpose: 'verify-email', tokenHash: sha256(token), email: user.email, expiresAt });
 	});
 	const url = `${ctx.origin}/verify?token=${encodeURIComponent(token)}`;
-	await ctx.send({ to: user.email, ...verifyEmailMail({ name: user.name, url, expiresAt }) });
+	await deliver(ctx, { to: user.email, ...verifyEmailMail({ name: user.name, url, expiresAt }) });
 }
 
 /** Confirms an address from its link. Returns the user; throws when the link is unusable. */
@@ -338,7 +360,7 @@ export async function requestPasswordReset(db: DB, email: string, ctx: FlowConte
 		await insertEmailToken(trx, { userId: user.id, purpose: 'reset-password', tokenHash: sha256(token), email: user.email, expiresAt });
 	});
 	const url = `${ctx.origin}/reset?token=${encodeURIComponent(token)}`;
-	await ctx.send({ to: user.email, ...resetPasswordMail({ name: user.name, url, expiresAt }) });
+	await deliver(ctx, { to: user.email, ...resetPasswordMail({ name: user.name, url, expiresAt }) });
 }
 
 /** The account a reset link belongs to, if the link can still be used. */
@@ -394,6 +416,6 @@ export async function changePassword(
 		await retireEmailTokens(trx, row.id, 'reset-password');
 		return sessions.deleteUserSessions(trx, row.id, input.keepSessionId);
 	});
-	await ctx.send({ to: row.email, ...passwordChangedMail({ name: row.name, url: `${ctx.origin}/reset` }) }).catch(() => {});
+	await deliver(ctx, { to: row.email, ...passwordChangedMail({ name: row.name, url: `${ctx.origin}/reset` }) }).catch(() => {});
 	return ended;
 }

@@ -23,7 +23,7 @@ const schema = z.object({
 	SEED_DEMO: flag,
 	STATEWRIGHT_DEV_TOOLS: flag,
 	NODE_ENV: z.string().optional(),
-	ORIGIN: z.string().url().optional().or(z.literal('').transform(() => undefined)),
+	ORIGIN: z.url().optional().or(z.literal('').transform(() => undefined)),
 	PORT: z.coerce.number().int().min(0).max(65535).default(3000),
 	HOST: z.string().default('0.0.0.0')
 });

@@ -1,4 +1,4 @@
-import { ROLE_LABEL, roleWithin, ROLES, type Role } from '../roles';
+import { roleWithin, ROLES, type Role } from '../roles';
 import type { DB, Invite, Team, User } from './db/schema';
 import { createTeam, getTeamById, updateTeam } from './db/teams';
 import { addMember, countOwners, getMembership, removeMember, setMemberRole } from './db/memberships';
@@ -86,7 +86,7 @@ export async function inviteMember(
 			email,
 			role: input.role,
 			tokenHash: sha256(token),
-			invitedBy: access.actor.id!,
+			invitedBy: access.actor.id,
 			expiresAt
 		});
 		await log(trx, access, 'invite.sent', { email, role: input.role });
@@ -230,6 +230,3 @@ export async function leaveTeam(db: DB, access: TeamAccess): Promise<void> {
 	});
 }
 
-export function describeRoleChange(from: Role, to: Role): string {
-	return `${ROLE_LABEL[from]} → ${ROLE_LABEL[to]}`;
-}

@@ -2,7 +2,7 @@ import { redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
-import { checkResetToken, createSession, PASSWORD_MIN, requestPasswordReset, resetPassword, setSessionCookie } from '$lib/server/auth';
+import { checkResetToken, PASSWORD_MIN, requestPasswordReset, resetPassword, startSession } from '$lib/server/auth';
 import { fields, formFailure, parseForm, runAction, readFormData } from '$lib/server/forms';
 import { clientMeta, flowContext } from '$lib/server/request';
 import { isAppError } from '$lib/server/errors';
@@ -43,8 +43,7 @@ export const actions: Actions = {
 		return runAction({}, async () => {
 			const db = getDb();
 			const user = await resetPassword(db, token, password);
-			const session = await createSession(db, user.id, clientMeta(event));
-			setSessionCookie(event.cookies, event.url, session.token, session.expiresAt);
+			await startSession(db, event, user.id, clientMeta(event));
 			redirect(303, '/account?password=reset');
 		});
 	}

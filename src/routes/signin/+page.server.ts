@@ -2,7 +2,7 @@ import { redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
-import { createSession, setSessionCookie, signIn } from '$lib/server/auth';
+import { signIn, startSession } from '$lib/server/auth';
 import { fields, parseForm, runAction, safeNext, readFormData } from '$lib/server/forms';
 import { clientIp, clientMeta } from '$lib/server/request';
 
@@ -26,8 +26,7 @@ export const actions: Actions = {
 		return runAction(parsed.values, async () => {
 			const db = getDb();
 			const user = await signIn(db, { email, password }, clientIp(event));
-			const { token, expiresAt } = await createSession(db, user.id, clientMeta(event));
-			setSessionCookie(event.cookies, event.url, token, expiresAt);
+			await startSession(db, event, user.id, clientMeta(event));
 			redirect(303, safeNext(next));
 		}, event);
 	}

@@ -2,7 +2,7 @@ import { redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
-import { createSession, PASSWORD_MIN, setSessionCookie, signUp } from '$lib/server/auth';
+import { PASSWORD_MIN, signUp, startSession } from '$lib/server/auth';
 import { fields, parseForm, runAction, safeNext, readFormData } from '$lib/server/forms';
 import { clientMeta, flowContext } from '$lib/server/request';
 import { inspectInvite } from '$lib/server/teams';
@@ -34,8 +34,7 @@ export const actions: Actions = {
 			async () => {
 				const db = getDb();
 				const user = await signUp(db, { name, email, password }, flowContext(event));
-				const { token, expiresAt } = await createSession(db, user.id, clientMeta(event));
-				setSessionCookie(event.cookies, event.url, token, expiresAt);
+				await startSession(db, event, user.id, clientMeta(event));
 				redirect(303, invite ? `/invite/${encodeURIComponent(invite)}` : safeNext(next));
 			},
 			event

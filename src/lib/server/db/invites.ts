@@ -5,7 +5,7 @@ import { normalizeEmail } from './users';
 
 export async function insertInvite(
 	db: DB,
-	input: { teamId: string; email: string; role: Role; tokenHash: string; invitedBy: string; expiresAt: number },
+	input: { teamId: string; email: string; role: Role; tokenHash: string; invitedBy: string | null; expiresAt: number },
 	now = Date.now()
 ): Promise<Invite> {
 	const invite: Invite = {
