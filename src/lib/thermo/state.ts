@@ -10,7 +10,8 @@
  * - Inside the dome it is a `saturated-mixture` with x = (v − v')/(v'' − v'); no metastable states.
  * - Denser than the saturated liquid: `compressed-liquid` (this includes T < Tc with P ≥ Pc).
  * - Lighter than the saturated vapor: `superheated-vapor`.
- * - T ≥ Tc: `supercritical-fluid` if P ≥ Pc, else `superheated-vapor` (a gas above Tc below Pc).
+ * - T ≥ Tc: `supercritical-fluid` if P ≥ Pc, else `superheated-vapor` (a gas above Tc below Pc);
+ *   the critical point itself is reported as `supercritical-fluid` (P within 1e−9 of Pc counts as Pc).
  * - Within 1 part in 10⁹ below Tc (CRITICAL_BAND) T counts as Tc.
  * cp and w are null inside the dome; at the critical point cv, cp and w diverge (w → 0) and are null.
  */
@@ -80,7 +81,7 @@ export function singleState(fl: Fluid, p: Point, phase: Phase, x: number | null 
 
 /** Phase of a single-phase state at or above Tc, or at P ≥ Pc (see the rules above). */
 export function phaseAboveCritical(fl: Fluid, T: number, P: number): Phase {
-	if (T >= fl.Tc * (1 - CRITICAL_BAND)) return P >= fl.Pc ? 'supercritical-fluid' : 'superheated-vapor';
+	if (T >= fl.Tc * (1 - CRITICAL_BAND)) return P >= fl.Pc * (1 - 1e-9) ? 'supercritical-fluid' : 'superheated-vapor';
 	return 'compressed-liquid';
 }
 

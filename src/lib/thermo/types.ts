@@ -59,6 +59,12 @@ export type RootHint = 'lower-T' | 'higher-T' | 'lower-P' | 'higher-P' | 'liquid
 
 export interface FixOptions {
 	hint?: RootHint;
+	/**
+	 * Where several states have the inputs, return the one nearest this T (K) and/or P (Pa)
+	 * (distance |ln T/T₀| + |ln P/P₀|). Used when no `hint` is given; useful to stay on the branch
+	 * of a previous state (e.g. while dragging). Three or more candidates can only be told apart this way.
+	 */
+	near?: { T?: number; P?: number };
 }
 
 /** Saturation at one temperature: the saturated liquid and vapor states (phase saturated-liquid / -vapor). */

@@ -4,7 +4,13 @@
  */
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
-import type { RootHint, State } from '../types.ts';
+import type { FixOptions, RootHint, State } from '../types.ts';
+
+/** The `near` option of the fixState call in progress (set by fixStateOf; engine calls are synchronous). */
+let currentNear: FixOptions['near'] | undefined;
+export function setNear(near: FixOptions['near'] | undefined): void {
+	currentNear = near;
+}
 
 /** Hints accepted by fixState (see RootHint in types.ts). */
 export const ROOT_HINTS: readonly RootHint[] = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'];
@@ -54,6 +60,12 @@ export function choose(fl: Fluid, found: State[], hint: RootHint | undefined, wh
 	const c = dedupe(found);
 	if (c.length === 0) throw noneError();
 	if (c.length === 1) return c[0];
+	const near = currentNear;
+	if (!hint && near && (near.T !== undefined || near.P !== undefined)) {
+		const d = (s: State) =>
+			(near.T !== undefined ? Math.abs(Math.log(s.T / near.T)) : 0) + (near.P !== undefined ? Math.abs(Math.log(s.P / near.P)) : 0);
+		return [...c].sort((a, b) => d(a) - d(b))[0];
+	}
 	const list = c.map((s) => `${s.phase} at T = ${fmt(s.T)} K, P = ${fmt(s.P)} Pa`).join('; ');
 	const candidates = c.map((s) => ({ T: s.T, P: s.P, rho: s.rho, phase: s.phase }));
 	if (hint) {

@@ -4,7 +4,7 @@
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { FixOptions, InputName, Inputs, State } from '../types.ts';
-import { ROOT_HINTS } from './choose.ts';
+import { ROOT_HINTS, setNear } from './choose.ts';
 import { flashHS } from './flash-h-s.ts';
 import { flashHX } from './flash-h-x.ts';
 import { flashPH } from './flash-p-h.ts';
@@ -105,6 +105,17 @@ export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, numbe
 export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}): State {
 	if (options.hint !== undefined && !ROOT_HINTS.includes(options.hint))
 		throw new ThermoError('invalid-option', `Unknown hint "${String(options.hint)}".`, `Use one of: ${ROOT_HINTS.join(', ')}.`);
+	const near = options.near;
+	if (near !== undefined) {
+		const ok = (v: unknown) => v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
+		if (typeof near !== 'object' || near === null || !ok(near.T) || !ok(near.P))
+			throw new ThermoError('invalid-option', 'options.near must hold a positive T (K) and/or P (Pa).', 'Give near as { T, P } of the state to stay close to, or leave it out.');
+	}
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
-	return FLASHES[`${ka},${kb}`](fl, a, b, options);
+	setNear(near);
+	try {
+		return FLASHES[`${ka},${kb}`](fl, a, b, options);
+	} finally {
+		setNear(undefined);
+	}
 }

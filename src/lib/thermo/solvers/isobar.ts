@@ -119,6 +119,10 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 		const line = evalSatLine(fl, sat.T, new SatLine(), sat);
 		const b = IDX[which];
 		const yL = line.yL[b], yV = line.yV[b];
+		// a value equal to y' or y'' within round-off of the input is the saturated state itself
+		const eps = 1e-12 * (Math.abs(y) + (which === 's' ? fl.R : fl.R * sat.T));
+		if (Math.abs(y - yL) <= eps) return saturatedState(fl, sat, 0);
+		if (Math.abs(y - yV) <= eps) return saturatedState(fl, sat, 1);
 		const mix = twoPhaseAt(fl, sat, (y - yL) / (yV - yL));
 		if (mix) return mix;
 		if (y < yL) {
@@ -196,8 +200,9 @@ export function flashPRho(fl: Fluid, P: number, rho: number, hint?: RootHint): S
 		const fa = out.f;
 		fn(Tb, out);
 		const fb = out.f;
-		if (fa < 0 === fb < 0) throw noStateInRange(fl, what);
-		add(newtonBracket(fn, Ta, fa, Tb, fb, 1e-15 * Tb));
+		// a root on the saturation end (round-off decides its sign) sits at Ta
+		if (Math.abs(fa) <= 1e-9 * P) add(Ta);
+		else if (fa < 0 !== fb < 0) add(newtonBracket(fn, Ta, fa, Tb, fb, 1e-15 * Tb));
 	} else {
 		for (const T of scanRoots(fn, Ta, Tb, 16, 1e-15 * Tb)) add(T);
 	}

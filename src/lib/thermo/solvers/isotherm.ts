@@ -53,8 +53,14 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 		const rhoMax = densityAtTP(fl, T, fl.Pmax * (1 + 1e-6), line.sat.rhoL * 1.01, line.sat.rhoL);
 		const b = IDX[which];
 		const yL = line.yL[b], yV = line.yV[b];
-		const st = twoPhaseAt(fl, line.sat, (y - yL) / (yV - yL));
-		if (st) found.push(st);
+		// a value equal to y' or y'' within round-off of the input is the saturated state itself
+		const eps = 1e-12 * (Math.abs(y) + (which === 's' ? fl.R : fl.R * T));
+		if (Math.abs(y - yL) <= eps) found.push(saturatedState(fl, line.sat, 0));
+		else if (Math.abs(y - yV) <= eps) found.push(saturatedState(fl, line.sat, 1));
+		else {
+			const st = twoPhaseAt(fl, line.sat, (y - yL) / (yV - yL));
+			if (st) found.push(st);
+		}
 		const { rhoL, rhoV } = line.sat;
 		if (rhoMax > rhoL) {
 			for (const r of scanRoots(fn(false), rhoL, rhoMax, 10, 1e-13 * rhoMax))

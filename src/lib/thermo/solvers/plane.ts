@@ -20,12 +20,16 @@ import { locate, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
 import { satAtT, triplePressure } from './saturation.ts';
 
-const NT = 40;
+const NT_UNIFORM = 40;
+/** relative offsets from Tc of extra isotherms (the map from (T, ρ) to u, h, s bends sharply there) */
+const NEAR_CRITICAL = [-0.03, -0.01, -0.003, -0.001, 0.001, 0.003, 0.01, 0.03];
 const NV = 18;
 const NL = 18;
 const UNIT: Record<EnergyProp, string> = { u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)' };
 
 interface Grid {
+	/** number of isotherms */
+	nt: number;
 	/** per branch: node arrays [i*(nj)+j] */
 	branches: { nj: number; T: Float64Array; lnRho: Float64Array; y: Float64Array[] }[];
 	/** bounding boxes per pair key, per branch, per cell: [min a, max a, min b, max b] */
@@ -35,21 +39,23 @@ interface Grid {
 function buildGrid(fl: Fluid): Grid {
 	const Pt = triplePressure(fl);
 	const Plo = Pt / 100;
-	const Ts: number[] = [];
-	// uniform in T, with the critical temperature itself as a node
+	// uniform in T, plus nodes closing in on the critical temperature from both sides
 	const span = fl.Tmax - fl.Tmin;
-	for (let i = 0; i < NT; i++) Ts.push(fl.Tmin + (span * i) / (NT - 1));
-	let k = 0;
-	for (let i = 1; i < NT; i++) if (Math.abs(Ts[i] - fl.Tc) < Math.abs(Ts[k] - fl.Tc)) k = i;
-	Ts[k] = fl.Tc;
+	const set = new Set<number>();
+	for (let i = 0; i < NT_UNIFORM; i++) set.add(fl.Tmin + (span * i) / (NT_UNIFORM - 1));
+	for (const f of NEAR_CRITICAL) set.add(fl.Tc * (1 + f));
+	set.add(fl.Tc);
+	const Ts = [...set].filter((T) => T >= fl.Tmin && T <= fl.Tmax).sort((a, b) => a - b);
+	for (let i = Ts.length - 1; i > 0; i--) if (Ts[i] - Ts[i - 1] < 1e-6 * Ts[i]) Ts.splice(i, 1);
+	const nt = Ts.length;
 	const p = new Point();
 	const branches = [NV, NL].map((nj) => ({
 		nj,
-		T: new Float64Array(NT * nj),
-		lnRho: new Float64Array(NT * nj),
-		y: [0, 1, 2].map(() => new Float64Array(NT * nj))
+		T: new Float64Array(nt * nj),
+		lnRho: new Float64Array(nt * nj),
+		y: [0, 1, 2].map(() => new Float64Array(nt * nj))
 	}));
-	for (let i = 0; i < NT; i++) {
+	for (let i = 0; i < nt; i++) {
 		const T = Ts[i];
 		const sub = T < fl.Tc * (1 - 1e-9);
 		const sat = sub ? satAtT(fl, T) : null;
@@ -77,7 +83,7 @@ function buildGrid(fl: Fluid): Grid {
 			}
 		}
 	}
-	return { branches, boxes: new Map() };
+	return { nt, branches, boxes: new Map() };
 }
 
 function grid(fl: Fluid): Grid {
@@ -98,8 +104,8 @@ function boxes(g: Grid, a: EnergyProp, b: EnergyProp): Float64Array[] {
 	bx = g.branches.map((br) => {
 		const nj = br.nj;
 		const A = br.y[YI[a]], B = br.y[YI[b]];
-		const out = new Float64Array((NT - 1) * (nj - 1) * 4);
-		for (let i = 0; i < NT - 1; i++)
+		const out = new Float64Array((g.nt - 1) * (nj - 1) * 4);
+		for (let i = 0; i < g.nt - 1; i++)
 			for (let j = 0; j < nj - 1; j++) {
 				const c = [i * nj + j, i * nj + j + 1, (i + 1) * nj + j, (i + 1) * nj + j + 1];
 				const o = (i * (nj - 1) + j) * 4;
@@ -131,7 +137,7 @@ export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: nu
 		const nj = br.nj;
 		const box = bx[bi];
 		const Ya = br.y[YI[a]], Yb = br.y[YI[b]];
-		for (let i = 0; i < NT - 1; i++)
+		for (let i = 0; i < g.nt - 1; i++)
 			for (let j = 0; j < nj - 1; j++) {
 				const o = (i * (nj - 1) + j) * 4;
 				const wa = 1e-9 * Math.abs(A) + 1e-6 * (box[o + 1] - box[o]);
@@ -165,7 +171,7 @@ export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: nu
 					]);
 			}
 		// the nearest node, a last resort for targets outside the grid (e.g. below its lowest pressure)
-		for (let q = 0; q < NT * nj; q++) {
+		for (let q = 0; q < g.nt * nj; q++) {
 			const da = (Ya[q] - A) / (fl.R * fl.Tc), db = (Yb[q] - B) / (fl.R * fl.Tc);
 			const dist = da * da + db * db;
 			if (dist < bestD) {
@@ -179,33 +185,28 @@ export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: nu
 	return res;
 }
 
-/** 2-D Newton in (T, ln ρ) on y_a = A, y_b = B; returns the converged point or null. */
+/**
+ * 2-D Newton in (T, ln ρ) on y_a = A, y_b = B (for (u, h): u = U and P/ρ = H − U); returns the
+ * converged point or null.
+ */
 export function newton2(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, T0: number, z0: number, p: Point): Point | null {
 	const sa = a === 's' ? fl.R : fl.R * fl.Tc;
 	const sb = b === 's' ? fl.R : fl.R * fl.Tc;
+	const pv = a === 'u' && b === 'h';
 	let T = T0, z = z0;
-	let prev = Infinity;
-	let bestNorm = Infinity, bestT = T, bestZ = z, stalled = 0;
+	let lastDT = Infinity, lastDz = Infinity, noisy = 0, norm = Infinity;
 	for (let it = 0; it < 60; it++) {
 		const rho = Math.exp(z);
 		evalPoint(fl, T, rho, p, 2);
-		const ra = (propValue(p, a) - A) / sa, rb = (propValue(p, b) - B) / sb;
-		const norm = Math.abs(ra) + Math.abs(rb);
+		const ra = (propValue(p, a) - A) / sa;
+		// for (u, h) the second residual is Pv − (H − U): h − u = P/ρ without cancellation
+		const rb = pv ? (p.P / rho - (B - A)) / sb : (propValue(p, b) - B) / sb;
+		norm = Math.abs(ra) + Math.abs(rb);
 		if (!Number.isFinite(norm)) return null;
-		if (norm < bestNorm) {
-			bestNorm = norm;
-			bestT = T;
-			bestZ = z;
-		}
 		if (norm < 1e-16) return p;
-		// at round-off the residual stops falling: take a few more steps and keep the best iterate
-		if (norm < 1e-12 && norm >= 0.5 * prev && ++stalled >= 4) {
-			evalPoint(fl, bestT, Math.exp(bestZ), p, 2);
-			return p;
-		}
-		prev = norm;
 		const j11 = propDT(p, a) / sa, j12 = (propDrho(p, a) * rho) / sa;
-		const j21 = propDT(p, b) / sb, j22 = (propDrho(p, b) * rho) / sb;
+		const j21 = pv ? p.dPdT / rho / sb : propDT(p, b) / sb;
+		const j22 = pv ? (p.dPdrho - p.P / rho) / sb : (propDrho(p, b) * rho) / sb;
 		const det = j11 * j22 - j12 * j21;
 		if (!Number.isFinite(det) || det === 0) return null;
 		let dT = -(ra * j22 - j12 * rb) / det;
@@ -213,14 +214,21 @@ export function newton2(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		const m = Math.max(1, Math.abs(dT) / (0.2 * T), Math.abs(dz) / 1.0);
 		dT /= m;
 		dz /= m;
+		// converged when the steps are at round-off, or have stopped shrinking once tiny (noise)
+		const tiny = Math.abs(dT) <= 1e-14 * T && Math.abs(dz) <= 1e-13;
+		const stuck = norm < 1e-11 && Math.abs(dT) >= 0.5 * lastDT && Math.abs(dz) >= 0.5 * lastDz;
+		noisy = stuck ? noisy + 1 : 0;
+		lastDT = Math.abs(dT);
+		lastDz = Math.abs(dz);
 		T += dT;
 		z += dz;
 		if (!(T > 0.5 * fl.Tmin && T < 2 * fl.Tmax && z < Math.log(50 * fl.rhoc))) return null;
-		if (Math.abs(dT) < 1e-13 * T && Math.abs(dz) < 1e-13) {
+		if (tiny || noisy >= 3) {
 			evalPoint(fl, T, Math.exp(z), p, 2);
 			return p;
 		}
 	}
+	if (norm < 1e-10) return p;
 	return null;
 }
 
@@ -233,7 +241,7 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		if (st) found.push(st);
 	}
 	const p = new Point();
-	const dT = (fl.Tmax - fl.Tmin) / (NT - 1);
+	const dT = (fl.Tmax - fl.Tmin) / (NT_UNIFORM - 1);
 	const accepted: [number, number][] = [];
 	const metastable: [number, number][] = [];
 	const queue = starts(fl, a, A, b, B);

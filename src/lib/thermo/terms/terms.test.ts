@@ -1,0 +1,94 @@
+/**
+ * Each Helmholtz term kind: value and every derivative to third order against central finite
+ * differences of the next lower order (internal consistency; coefficients are arbitrary test data,
+ * chosen to exercise integer and fractional exponents).
+ */
+import { describe, expect, it } from 'vitest';
+import { AlphaRecord, EvalContext, type DerivativeOrder, type TermEvaluator } from './record.ts';
+import { IdealLead } from './ideal-lead.ts';
+import { IdealLogTau } from './ideal-log-tau.ts';
+import { IdealPower } from './ideal-power.ts';
+import { IdealPlanckEinstein } from './ideal-planck-einstein.ts';
+import { ResidualPolynomial } from './residual-polynomial.ts';
+import { ResidualExponential } from './residual-exponential.ts';
+import { ResidualGaussian } from './residual-gaussian.ts';
+import { ResidualNonAnalytic } from './residual-non-analytic.ts';
+
+function evaluate(term: TermEvaluator, delta: number, tau: number, order: DerivativeOrder): AlphaRecord {
+	const ctx = new EvalContext(Math.max(term.maxD, 1), Math.max(term.maxT, 1));
+	ctx.set(delta, tau);
+	const rec = new AlphaRecord();
+	term.add(ctx, order, rec);
+	return rec;
+}
+
+/** Unscaled derivative ∂^(i+j)α/∂δ^i∂τ^j from the scaled record. */
+function raw(r: AlphaRecord, i: number, j: number, delta: number, tau: number): number {
+	const key: Record<string, keyof AlphaRecord> = { '00': 'a', '10': 'd1', '01': 't1', '20': 'd2', '02': 't2', '11': 'dt', '30': 'd3', '03': 't3', '21': 'd2t', '12': 'dt2' };
+	return (r[key[`${i}${j}`]] as number) / (delta ** i * tau ** j);
+}
+
+const cases: [string, TermEvaluator][] = [
+	['ideal lead', new IdealLead(-8.3, 6.7)],
+	['ideal log-tau', new IdealLogTau(3.00632)],
+	['ideal power', new IdealPower([1.2, -0.7, 0.3], [-0.5, 1.5, 2])],
+	['ideal Planck–Einstein', new IdealPlanckEinstein([0.97, 1.28], [3.5, 7.7])],
+	['residual polynomial', new ResidualPolynomial([0.0125, 7.9, -0.3], [1, 2, 4], [-0.5, 0.875, 1])],
+	['residual exponential (integer exponents)', new ResidualExponential([-0.67, 0.2, 0.016, -0.02], [1, 2, 5, 3], [4, 6, 1, 10], [1, 2, 2, 6])],
+	['residual exponential (fractional exponents)', new ResidualExponential([-0.67, 0.2], [1.5, 2], [4.25, 0.5], [1, 2.5])],
+	['residual Gaussian', new ResidualGaussian([-31.3, 31.5, -2521], [3, 3, 3], [0, 1, 4], [20, 20, 20], [150, 150, 250], [1.21, 1.21, 1.25], [1, 1, 1])],
+	['residual non-analytic', new ResidualNonAnalytic([-0.1487, 0.318], [3.5, 3.5], [0.85, 0.95], [0.3, 0.3], [0.32, 0.32], [0.2, 0.2], [28, 32], [700, 800])]
+];
+
+// points away from δ = τ = 1 (where the non-analytic term is singular), on both sides of 1
+const points: [number, number][] = [
+	[0.6, 1.15],
+	[1.3, 0.92],
+	[2.6, 1.9],
+	[1.05, 1.03]
+];
+
+describe('Helmholtz terms: derivatives against finite differences', () => {
+	for (const [name, term] of cases) {
+		it(name, () => {
+			for (const [d, t] of points) {
+				const r = evaluate(term, d, t, 3);
+				// each derivative of order n against the central difference of the order n − 1 one
+				const pairs: [number, number, number, number][] = [
+					[1, 0, 0, 0],
+					[0, 1, 0, 0],
+					[2, 0, 1, 0],
+					[0, 2, 0, 1],
+					[1, 1, 0, 1],
+					[3, 0, 2, 0],
+					[0, 3, 0, 2],
+					[2, 1, 1, 1],
+					[1, 2, 1, 1]
+				];
+				for (const [i, j, li, lj] of pairs) {
+					const byDelta = i > li;
+					const hp = byDelta ? 1e-4 * d : 1e-4 * t;
+					// fourth-order central difference of the lower derivative
+					const f = (k: number) => {
+						const dd = byDelta ? d + k * hp : d, tt = byDelta ? t : t + k * hp;
+						return raw(evaluate(term, dd, tt, 3), li, lj, dd, tt);
+					};
+					const fd = (8 * (f(1) - f(-1)) - (f(2) - f(-2))) / (12 * hp);
+					const an = raw(r, i, j, d, t);
+					const scale = Math.max(Math.abs(an), Math.abs(raw(r, li, lj, d, t)), 1e-8);
+					expect(Math.abs(an - fd) / scale, `${name} at δ=${d}, τ=${t}: ∂${i}${j}`).toBeLessThan(2e-7);
+				}
+				// lower orders leave the higher fields untouched and agree with the full evaluation
+				for (const o of [0, 1, 2] as DerivativeOrder[]) {
+					const ro = evaluate(term, d, t, o);
+					expect(ro.a).toBeCloseTo(r.a, 12);
+					if (o >= 1) expect(ro.d1).toBeCloseTo(r.d1, 12);
+					if (o >= 2) expect(ro.dt).toBeCloseTo(r.dt, 12);
+					if (o < 3) expect(ro.d3).toBe(0);
+					if (o < 2) expect(ro.t2).toBe(0);
+					if (o < 1) expect(ro.t1).toBe(0);
+				}
+			}
+		});
+	}
+});
