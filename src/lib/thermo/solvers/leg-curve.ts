@@ -198,6 +198,8 @@ function lineRoots(fl: Fluid, side: 0 | 1, F: LineFn): number[] {
 		Fs.push(F(fl.Pc, [1 / fl.rhoc, c.u, c.h, c.s], 0, y)[0]);
 	}
 	const roots: number[] = [];
+	// a curve through the critical point itself (e.g. the critical isochore)
+	if (Ts[Ts.length - 1] >= fl.Tc * (1 - 2 * CRITICAL_BAND) && Math.abs(Fs[Fs.length - 1]) <= 1e-12) roots.push(fl.Tc);
 	for (let i = 0; i < Ts.length - 1; i++) {
 		let a = Ts[i], b = Ts[i + 1];
 		let fa = Fs[i];
@@ -209,9 +211,19 @@ function lineRoots(fl: Fluid, side: 0 | 1, F: LineFn): number[] {
 		}
 		if (fa < 0 === fb < 0) continue;
 		let T = a - (fa * (b - a)) / (fb - fa);
+		let fT = NaN;
 		for (let it = 0; it < 80; it++) {
-			const ls = lineAt(fl, T);
+			let ls: LineSlopes;
+			try {
+				ls = lineAt(fl, T);
+			} catch (e) {
+				// saturation fails only within ~1e−8 of Tc: the curve passes through the critical point
+				if (!(e instanceof ThermoError)) throw e;
+				T = fl.Tc;
+				break;
+			}
 			const [f, df] = F(ls.sat.P, ls.y[side], ls.dPs, ls.dy[side]);
+			fT = f;
 			if (f === 0) break;
 			if (f < 0 === fa < 0) {
 				a = T;
@@ -225,6 +237,8 @@ function lineRoots(fl: Fluid, side: 0 | 1, F: LineFn): number[] {
 			}
 			T = next;
 		}
+		// a root left unresolved at the edge of the critical band is the critical point itself
+		if (T >= fl.Tc * (1 - 1e-8) && !(Math.abs(fT) <= 1e-9)) T = fl.Tc;
 		if (!roots.some((r) => Math.abs(r - T) <= 1e-9 * T)) roots.push(T);
 	}
 	return roots;
@@ -301,11 +315,21 @@ export class Curve {
 		try {
 			const c = seg.dome ? this.dome(t) : this.single(t, guess, seg.branch);
 			if (!c || !Number.isFinite(c.T) || !Number.isFinite(c.rho) || !(c.P > 0)) return null;
+			// the equation of state continues into the dome (metastable and unstable states): not a point of the leg
+			if (!seg.dome && this.insideDome(c)) return null;
 			return c;
 		} catch (e) {
 			if (e instanceof ThermoError) return null;
 			throw e;
 		}
+	}
+
+	/** A single-phase evaluation lying clearly inside the dome (beyond the table's accuracy). */
+	private insideDome(c: CPt): boolean {
+		const fl = this.fl;
+		if (!(c.T < fl.Tc * (1 - 1e-6)) || c.T < fl.Tt) return false;
+		satGuess(fl, c.T, this.g);
+		return c.rho < this.g.rhoL * (1 - 100 * M) && c.rho > this.g.rhoV * (1 + 100 * M);
 	}
 
 	private single(t: number, guess: CPt | null, branch: Branch): CPt | null {
@@ -429,13 +453,30 @@ export class Curve {
 			({ sat, L, V } = this.fixedSat);
 			x = (Math.exp(t) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
 		} else {
+			// within round-off of the critical point the saturation solvers may fail: it is the critical point
+			const critical = (e: unknown, near: boolean): SatPoint => {
+				if (!(e instanceof ThermoError) || !near) throw e;
+				return { T: fl.Tc, P: fl.Pc, rhoL: fl.rhoc, rhoV: fl.rhoc };
+			};
 			if (inv.process === 'isochoric' || inv.process === 'isentropic') {
-				if (!(t >= fl.Tmin * (1 - 1e-12) && t < fl.Tc * (1 - CRITICAL_BAND))) return null;
-				sat = satAtT(fl, t);
+				if (!(t >= fl.Tmin * (1 - 1e-12) && t <= fl.Tc * (1 + 1e-9))) return null;
+				try {
+					sat = satAtT(fl, Math.min(t, fl.Tc));
+				} catch (e) {
+					sat = critical(e, t > fl.Tc * (1 - 1e-6));
+				}
 			} else {
 				const P = inv.process === 'isenthalpic' ? Math.exp(t) : Math.exp((inv.lnC as number) - (inv.n as number) * t);
-				if (!(P >= triplePressure(fl) * (1 - 1e-12) && P < fl.Pc)) return null;
-				sat = satAtP(fl, P);
+				if (!(P >= triplePressure(fl) * (1 - 1e-12) && P <= fl.Pc * (1 + 1e-6))) return null;
+				try {
+					sat = satAtP(fl, Math.min(P, fl.Pc));
+				} catch (e) {
+					sat = critical(e, P > fl.Pc * (1 - 1e-5));
+				}
+			}
+			if (sat.rhoL === sat.rhoV) {
+				const c = evalPoint(fl, fl.Tc, fl.rhoc, new Point(), 1);
+				return { T: fl.Tc, rho: fl.rhoc, P: fl.Pc, u: c.u, h: c.h, s: c.s, x: 0.5, sat, pt: null };
 			}
 			[L, V] = phases(fl, sat);
 			if (inv.process === 'isochoric') x = (1 / (inv.rho as number) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
@@ -443,7 +484,9 @@ export class Curve {
 			else if (inv.process === 'isenthalpic') x = ((inv.h as number) - L.h) / (V.h - L.h);
 			else x = (Math.exp(t) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
 		}
-		if (!(x >= -1e-9 && x <= 1 + 1e-9)) return null;
+		// next to the critical point a crossing may be placed at the critical point itself (see lineRoots):
+		// there the curve's few ppm of two-phase stretch are clamped onto the nearer line
+		if (!(x >= -1e-9 && x <= 1 + 1e-9) && !(sat.P > fl.Pc * (1 - 1e-4) && Number.isFinite(x))) return null;
 		return mixture(fl, sat, Math.min(1, Math.max(0, x)), L, V);
 	}
 
@@ -463,8 +506,20 @@ export class Curve {
 			return -(vL + x * (vV - vL)) * dPs;
 		}
 		const c = this.at(seg, t, guess);
-		if (!c) throw new ThermoError('no-convergence', `A point of this ${this.process} leg could not be solved.`, 'Please report the leg; try a slightly different start or target.');
+		if (!c) throw this.unsolved();
 		return c.P / c.rho;
+	}
+
+	/** The error for a point that cannot be solved (near the critical point the lines cannot be resolved). */
+	unsolved(): ThermoError {
+		const critical = this.crossings.some((c) => c.p.sat !== null && c.p.sat.rhoL === c.p.sat.rhoV);
+		return critical
+			? new ThermoError(
+					'no-convergence',
+					`This ${this.process} leg of ${this.fl.id} passes within round-off of the critical point (${fmt(this.fl.Tc)} K, ${fmt(this.fl.Pc)} Pa), where its crossing of the saturation line cannot be resolved.`,
+					'Move the start or the target slightly so that the leg passes the critical point at a distance.'
+				)
+			: new ThermoError('no-convergence', `A point of this ${this.process} leg of ${this.fl.id} could not be solved.`, 'Please report the leg; try a slightly different start or target.');
 	}
 
 	// ---- construction -------------------------------------------------------------------------
@@ -503,7 +558,7 @@ export class Curve {
 			const F = this.lineFn();
 			for (const side of [0, 1] as const) {
 				const line: SaturationLine = side === 0 ? 'saturated-liquid' : 'saturated-vapor';
-				for (const T of lineRoots(fl, side, F)) crossings.push({ line, p: this.crossingPt(T >= fl.Tc * (1 - 2 * CRITICAL_BAND) ? satAtT(fl, fl.Tc) : satAtT(fl, T), line) });
+				for (const T of lineRoots(fl, side, F)) crossings.push({ line, p: this.crossingPt(satAtT(fl, T >= fl.Tc * (1 - 2 * CRITICAL_BAND) ? fl.Tc : T), line) });
 			}
 			// a start on a saturation line is a point of the curve on that line
 			if (start.x === 0 || start.x === 1) {
@@ -511,6 +566,8 @@ export class Curve {
 				if (!crossings.some((c) => c.line === line && Math.abs(c.p.T - start.T) <= 1e-7 * start.T)) crossings.push({ line, p: start });
 			}
 			crossings.sort((a, b) => this.key(a.p) - this.key(b.p));
+			// a curve through the critical point meets both lines there: one crossing
+			crossings = crossings.filter((c, i) => i === 0 || !(c.p.sat && c.p.sat.rhoL === c.p.sat.rhoV && crossings[i - 1].p.sat?.rhoL === crossings[i - 1].p.sat?.rhoV));
 		}
 		this.crossings = crossings;
 		// regions of the m + 1 pieces between crossings
@@ -519,14 +576,36 @@ export class Curve {
 		if (this.fixedSat) dome[1] = true;
 		else if (m === 0) dome[0] = start.x !== null && start.x > 0 && start.x < 1;
 		else {
+			const okAt = (t: number) => {
+				try {
+					const q = this.dome(t);
+					return q !== null && q.x !== null && q.x > 0 && q.x < 1;
+				} catch (e) {
+					if (e instanceof ThermoError) return false;
+					throw e;
+				}
+			};
 			const probe = (c: CPt, dir: 1 | -1) => {
 				const t = paramOf(this.domeParam, c);
 				const eps = this.domeParam === 'T' ? 1e-6 * t : 1e-6;
-				const q = this.dome(t + dir * this.domeSign * eps);
-				return q !== null && q.x !== null && q.x > 0 && q.x < 1;
+				return okAt(t + dir * this.domeSign * eps);
 			};
-			dome[0] = probe(crossings[0].p, -1);
-			for (let k = 1; k <= m; k++) dome[k] = probe(crossings[k - 1].p, 1);
+			// between two crossings: test the middle of the two-phase parameter
+			for (let k = 1; k < m; k++) dome[k] = okAt(0.5 * (paramOf(this.domeParam, crossings[k - 1].p) + paramOf(this.domeParam, crossings[k].p)));
+			// outer pieces: the other side of the neighbouring crossing, or a probe beside it
+			dome[0] = m > 1 ? !dome[1] : probe(crossings[0].p, -1);
+			dome[m] = m > 1 ? !dome[m - 1] : probe(crossings[m - 1].p, 1);
+			// the start's own piece is what the start says it is
+			const inDome = start.x !== null && start.x > 0 && start.x < 1;
+			const onCrossing = crossings.some((c) => Math.abs(c.p.T - start.T) <= 1e-9 * start.T && Math.abs(c.p.rho - start.rho) <= 1e-9 * start.rho);
+			if (!(start.x === 0 || start.x === 1) && !onCrossing) {
+				const key = this.key(start);
+				const k = crossings.filter((c) => this.key(c.p) < key).length;
+				if (dome[k] !== inDome) {
+					dome[k] = inDome;
+					if (m === 1) dome[1 - k] = !inDome;
+				}
+			}
 		}
 		const segs: Segment[] = [];
 		for (let k = 0; k <= m; k++) {
@@ -534,7 +613,9 @@ export class Curve {
 			const b = k < m ? crossings[k] : null;
 			const isDome = dome[k];
 			const param = isDome ? this.domeParam : this.singleParam;
-			const lines = [a?.line, b?.line].filter((l): l is SaturationLine => !!l);
+			// a crossing at the critical point belongs to neither branch
+			const atCritical = (c: CrossingPt | null) => !!c && !!c.p.sat && c.p.sat.rhoL === c.p.sat.rhoV;
+			const lines = atCritical(a) || atCritical(b) ? ['critical'] : [a?.line, b?.line].filter((l): l is SaturationLine => !!l);
 			const branch: Branch = isDome || lines.length === 0 ? 'any' : lines.every((l) => l === 'saturated-liquid') ? 'liquid' : lines.every((l) => l === 'saturated-vapor') ? 'vapor' : 'any';
 			const [ha, hb] = this.hardBounds(isDome, param);
 			segs.push({
@@ -673,6 +754,8 @@ export class Curve {
 	/** Where the start lies: segment index and parameter, or the crossing it sits on. */
 	locateStart(start: CPt): { seg: number; t: number; crossing: number | null } {
 		const cs = this.crossings;
+		const same = cs.findIndex((c) => Math.abs(c.p.T - start.T) <= 1e-9 * start.T && Math.abs(c.p.rho - start.rho) <= 1e-9 * start.rho);
+		if (same >= 0) return { seg: same + 1, t: this.segs[same + 1].ta, crossing: same };
 		if (start.x === 0 || start.x === 1) {
 			const line: SaturationLine = start.x === 0 ? 'saturated-liquid' : 'saturated-vapor';
 			const i = cs.findIndex((c) => c.line === line && Math.abs(c.p.T - start.T) <= 1e-7 * start.T && Math.abs(c.p.P - start.P) <= 1e-6 * start.P);

@@ -99,7 +99,7 @@ export function checkLegSpec(spec: LegSpec): CheckedLeg {
 	if (INVARIANT_KEYS[process].includes(key) || (process === 'polytropic' && n === 0 && key === 'P'))
 		throw new ThermoError(
 			'target-is-invariant',
-			`An ${process} leg keeps ${key === 'rho' ? 'rho (= 1/v)' : key} fixed, so ${key} cannot be its target.`,
+			`${process === 'polytropic' ? 'A polytropic leg with n = 0' : `An ${process} leg`} keeps ${key === 'rho' ? 'rho (= 1/v)' : key} fixed, so ${key} cannot be its target.`,
 			`Give the end by another property: one of ${TARGET_NAMES.filter((k) => !INVARIANT_KEYS[process].includes(k)).join(', ')}.`
 		);
 	let samples = SAMPLES_DEFAULT;
@@ -326,6 +326,14 @@ function scan(
 			if (Math.abs(f) <= tolF) return { seg: k, t, p: c, crossing: crossingIndex, dist: entered + frac };
 			if (Number.isFinite(f) && Number.isFinite(Fprev) && f < 0 !== Fprev < 0) {
 				const r = refine(curve, seg, tPrev, Fprev, prev, t, f, c, F);
+				if (!(Math.abs(F(r.p)) <= 1e-7))
+					throw new ThermoError(
+						'no-convergence',
+						Math.abs(r.p.T / curve.fl.Tc - 1) < 1e-4
+							? `The target ${key} could not be met to round-off along this leg: it lies at the critical point (T = ${fmt(r.p.T)} K), where the properties change without bound.`
+							: `The target ${key} could not be met to round-off along this leg (near T = ${fmt(r.p.T)} K, P = ${fmt(r.p.P)} Pa).`,
+						'Give a target a little away from there, or please report the leg.'
+					);
 				const fr = tEnd === tEntry ? 1 : (r.t - tEntry) / (tEnd - tEntry);
 				return { seg: k, t: r.t, p: r.p, crossing: null, dist: entered + fr };
 			}
@@ -595,11 +603,11 @@ function integrals(curve: Curve, pieces: Piece[], sampled: SP[]): number {
 		if (pc.seg.dome && curve.process === 'isentropic') {
 			let dPsv = 0;
 			for (const s of mine) dPsv = Math.max(dPsv, Math.abs(s.c.P / s.c.rho / s.c.T));
-			const ws = integrate(f, pc.from, pc.to, 1e-10, 1e-14 * dPsv * Math.abs(pc.to - pc.from)).value;
+			const ws = integrate(f, pc.from, pc.to, 1e-10, 1e-9 * dPsv * Math.abs(pc.to - pc.from)).value;
 			w += Pv(pc.B) - Pv(pc.A) + ws;
 			return;
 		}
-		w += integrate(f, pc.from, pc.to, 1e-10, 1e-14 * scaleAbs * Math.abs(pc.to - pc.from)).value;
+		w += integrate(f, pc.from, pc.to, 1e-10, 1e-9 * scaleAbs * Math.abs(pc.to - pc.from)).value;
 	});
 	return w;
 }

@@ -43,10 +43,12 @@ function gk15(f: (t: number) => number, a: number, b: number): [number, number] 
 }
 
 /**
- * ∫ f(t) dt from a to b, halving intervals until the Gauss–Kronrod error estimate is below
- * max(absTol, relTol·|∫|) (at most `maxDepth` halvings along any branch).
+ * ∫ f(t) dt from a to b. An interval is accepted when its Gauss–Kronrod error estimate is below
+ * its share (by length) of max(absTol, relTol·|∫|); otherwise it is halved, at most `maxDepth`
+ * times along a branch and until `maxEvals` evaluations are spent (then the best estimate stands;
+ * `error` reports what is left).
  */
-export function integrate(f: (t: number) => number, a: number, b: number, relTol = 1e-11, absTol = 0, maxDepth = 20): QuadResult {
+export function integrate(f: (t: number) => number, a: number, b: number, relTol = 1e-11, absTol = 0, maxDepth = 16, maxEvals = 4000): QuadResult {
 	if (a === b) return { value: 0, error: 0, evaluations: 0 };
 	let evaluations = 0;
 	const g = (t: number) => {
@@ -55,15 +57,17 @@ export function integrate(f: (t: number) => number, a: number, b: number, relTol
 	};
 	const [whole, err0] = gk15(g, a, b);
 	const target = Math.max(absTol, relTol * Math.abs(whole));
-	const rec = (lo: number, hi: number, value: number, error: number, tol: number, depth: number): [number, number] => {
-		if (error <= tol || depth >= maxDepth) return [value, error];
+	const span = Math.abs(b - a);
+	const rec = (lo: number, hi: number, value: number, error: number, depth: number): [number, number] => {
+		const tol = (target * Math.abs(hi - lo)) / span;
+		if (error <= tol || depth >= maxDepth || evaluations + 30 > maxEvals) return [value, error];
 		const mid = 0.5 * (lo + hi);
 		const [v1, e1] = gk15(g, lo, mid);
 		const [v2, e2] = gk15(g, mid, hi);
-		const [r1, q1] = rec(lo, mid, v1, e1, tol / 2, depth + 1);
-		const [r2, q2] = rec(mid, hi, v2, e2, tol / 2, depth + 1);
+		const [r1, q1] = rec(lo, mid, v1, e1, depth + 1);
+		const [r2, q2] = rec(mid, hi, v2, e2, depth + 1);
 		return [r1 + r2, q1 + q2];
 	};
-	const [value, error] = rec(a, b, whole, err0, target, 0);
+	const [value, error] = rec(a, b, whole, err0, 0);
 	return { value, error, evaluations };
 }
