@@ -1,4 +1,5 @@
 import type { ParamMatcher } from '@sveltejs/kit';
+import { SLUG_PATTERN } from '../lib/slug';
 
-/** Team URL names (see db/teams.ts SLUG_PATTERN): anything else is a 404 before any lookup. */
-export const match: ParamMatcher = (param) => /^[a-z0-9](?:[a-z0-9]|-(?=[a-z0-9])){1,39}$/.test(param);
+/** Team URL names: anything else is a 404 before any lookup. */
+export const match: ParamMatcher = (param) => SLUG_PATTERN.test(param);

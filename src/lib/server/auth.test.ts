@@ -19,11 +19,10 @@ import {
 	verifyPassword
 } from './auth';
 import { createLimiter } from './rate-limit';
-import { linkIn, setupIntegration } from './testing';
+import { expectAppError, linkIn, setupIntegration } from './testing';
 import { getUserByEmail } from './db/users';
 import { listUserSessions } from './db/sessions';
 import { sha256 } from './secrets';
-import { AppError } from './errors';
 
 let env: Awaited<ReturnType<typeof setupIntegration>>;
 beforeEach(async () => {
@@ -35,17 +34,6 @@ afterEach(async () => {
 
 const meta = { ip: '192.0.2.1', userAgent: 'vitest' };
 const freshLimits = () => ({ perAccount: createLimiter({ ratePerSecond: 1 / 60, burst: 5 }), perIp: createLimiter({ ratePerSecond: 1 / 10, burst: 30 }) });
-
-async function expectAppError(p: Promise<unknown>, status: number, code: string) {
-	const e = await p.then(
-		() => null,
-		(err: unknown) => err
-	);
-	expect(e).toBeInstanceOf(AppError);
-	expect((e as AppError).status).toBe(status);
-	expect((e as AppError).code).toBe(code);
-	return e as AppError;
-}
 
 describe('passwords', () => {
 	it('hashes with argon2id and verifies only the right password', async () => {

@@ -1,6 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { Role } from '../roles';
-import { linkIn, setupIntegration } from './testing';
+import { expectAppError, linkIn, setupIntegration } from './testing';
 import { createUser } from './db/users';
 import { addMember, getMembership } from './db/memberships';
 import { listApiTokens } from './db/api-tokens';
@@ -10,7 +10,6 @@ import { acceptInvite, cancelInvite, changeMemberRole, createTeamFor, inspectInv
 import { createTeamToken } from './api-tokens';
 import { resolveTeamAccess, type TeamAccess } from './guard';
 import type { SessionUser } from './auth';
-import { AppError } from './errors';
 import type { Team } from './db/schema';
 
 let env: Awaited<ReturnType<typeof setupIntegration>>;
@@ -26,14 +25,6 @@ async function access(who: SessionUser, t: Team = team): Promise<TeamAccess> {
 	const a = await resolveTeamAccess(env.db, { kind: 'user', user: who }, t.slug);
 	if (!a) throw new Error(`${who.email} has no access to ${t.slug}`);
 	return a;
-}
-
-async function expectAppError(p: Promise<unknown>, status: number, code?: string) {
-	const e = await p.then(() => null, (err: unknown) => err);
-	expect(e).toBeInstanceOf(AppError);
-	expect((e as AppError).status).toBe(status);
-	if (code) expect((e as AppError).code).toBe(code);
-	return e as AppError;
 }
 
 function tokenFromInviteMail(text: string) {

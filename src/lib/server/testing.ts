@@ -1,4 +1,6 @@
+import { expect } from 'vitest';
 import type { Kysely } from 'kysely';
+import { AppError } from './errors';
 import { createTestDb } from './db';
 import type { Database } from './db/schema';
 import { createMailer, type Mailer } from './mail';
@@ -30,6 +32,18 @@ export async function setupIntegration(origin = 'http://statewright.test'): Prom
 			await db.destroy();
 		}
 	};
+}
+
+/** Awaits a promise that must reject with an AppError of this status (and code); returns the error. */
+export async function expectAppError(p: Promise<unknown>, status: number, code?: string): Promise<AppError> {
+	const e = await p.then(
+		() => null,
+		(err: unknown) => err
+	);
+	expect(e).toBeInstanceOf(AppError);
+	expect((e as AppError).status).toBe(status);
+	if (code) expect((e as AppError).code).toBe(code);
+	return e as AppError;
 }
 
 /** The first link in a mail's text that starts with `prefix`. */

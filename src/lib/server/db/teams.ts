@@ -2,8 +2,7 @@ import type { Role } from '../../roles';
 import type { DB, Team } from './schema';
 import { newId } from '../secrets';
 
-/** Team URL names: lower-case letters, digits and single hyphens, 2–40 characters. */
-export const SLUG_PATTERN = /^[a-z0-9](?:[a-z0-9]|-(?=[a-z0-9])){1,39}$/;
+export { SLUG_PATTERN } from '../../slug';
 
 export function slugify(name: string): string {
 	const base = name
