@@ -553,11 +553,13 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		}
 
 		const lims = drawnLimits();
-		const limReqs: LabelRequest[] = lims.map((l) => {
+		const limLines = lims.map((l) => (l.straight ? limitLine(l.value) : l.points!.map(project)));
+		const limReqs: LabelRequest[] = lims.map((l, i) => {
 			const text = limitText(l.name, l.value, f.units);
 			const width = textWidth(text, 10.5, false) + 8;
-			const line = l.straight ? limitLine(l.value) : l.points!.map(project);
-			return { id: l.name, width, height: 12, line, prefer: 'end', anchors: l.straight ? [] : levelAnchors(line, width) };
+			const line = limLines[i];
+			const avoid = limLines.filter((_, j) => j !== i);
+			return { id: l.name, width, height: 12, line, prefer: 'end', anchors: l.straight ? [] : levelAnchors(line, width), avoid };
 		});
 		const limitPlaced = placeEdgeLabels(limReqs, plot, obstacles, { maxSlide: plot.width, step: 16 });
 		gLabels

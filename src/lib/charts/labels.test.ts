@@ -131,3 +131,14 @@ describe('labels for curved limits', () => {
 		expect(levelAnchors([{ x: 0, y: 0 }, { x: 100, y: 100 }], 50)).toEqual([]);
 	});
 });
+
+describe('labels avoid the other limits', () => {
+	it('a label keeps off lines it is told to avoid', () => {
+		const line = [{ x: 60, y: 200 }, { x: 600, y: 200 }];
+		const free = placeEdgeLabels([{ id: 'a', width: 80, height: 11, line }], plot, new ObstacleIndex())[0];
+		const neighbour = [{ x: 60, y: free.box.y + 4 }, { x: 600, y: free.box.y + 4 }];
+		const [p] = placeEdgeLabels([{ id: 'a', width: 80, height: 11, line, avoid: [neighbour] }], plot, new ObstacleIndex());
+		expect(p).toBeDefined();
+		expect(touchesPolyline(inflate(p.box, 2), neighbour)).toBe(false);
+	});
+});

@@ -73,6 +73,11 @@ export function clipPolyline(line: readonly Point[], r: Rect): Point[][] {
 	return runs.filter((r) => r.length >= 2);
 }
 
+function polylineHits(line: readonly Point[], r: Rect): boolean {
+	for (let i = 1; i < line.length; i++) if (clipSegment(line[i - 1], line[i], r)) return true;
+	return false;
+}
+
 /**
  * A uniform grid of the path's segments and boxes (state discs, crossing marks, placed labels),
  * so a label box is tested only against what lies near it.
@@ -131,6 +136,8 @@ export interface LabelRequest {
 	prefer?: 'end' | 'start';
 	/** points to try before the edges (e.g. above a curve's flat stretch) */
 	anchors?: readonly Point[];
+	/** further lines this label must not touch (e.g. the other design limits) */
+	avoid?: readonly (readonly Point[])[];
 }
 
 export interface LabelPlacement {
@@ -167,34 +174,40 @@ function pointsAlong(run: readonly Point[], step: number, maxSlide: number): Poi
 	return out;
 }
 
-/** The label box for an anchor: tucked inside the plot edge the line crosses, else up and right of the point. */
-export function boxAt(p: Point, w: number, h: number, plot: Rect): Rect {
+function clampBox(x: number, y: number, w: number, h: number, plot: Rect): Rect {
+	const right = plot.x + plot.width;
+	const bottom = plot.y + plot.height;
+	return {
+		x: Math.min(Math.max(x, plot.x + 2), right - w - 2),
+		y: Math.min(Math.max(y, plot.y + 2), bottom - h - 2),
+		width: w,
+		height: h
+	};
+}
+
+/**
+ * Label boxes for an anchor, best first: tucked inside the plot edge the line crosses (beside the
+ * line), else above and right of the point; then the mirror spot (other side of the line).
+ */
+export function boxesAt(p: Point, w: number, h: number, plot: Rect): [Rect, Rect] {
 	const e = 0.75;
 	const right = plot.x + plot.width;
 	const bottom = plot.y + plot.height;
-	let x: number;
-	let y: number;
-	if (Math.abs(p.y - plot.y) < e) {
-		x = p.x + 4;
-		y = plot.y + 3;
-	} else if (Math.abs(p.x - right) < e) {
-		x = right - w - 3;
-		y = p.y - h - 3;
-	} else if (Math.abs(p.x - plot.x) < e) {
-		x = plot.x + 3;
-		y = p.y - h - 3;
-	} else if (Math.abs(p.y - bottom) < e) {
-		x = p.x + 4;
-		y = bottom - h - 3;
-	} else {
-		x = p.x + 4;
-		y = p.y - h - 3;
-	}
-	if (x + w > right - 2) x = p.x - 4 - w;
-	if (y < plot.y + 2) y = p.y + 3;
-	x = Math.min(Math.max(x, plot.x + 2), right - w - 2);
-	y = Math.min(Math.max(y, plot.y + 2), bottom - h - 2);
-	return { x, y, width: w, height: h };
+	const above = p.y - h - 3;
+	const below = p.y + 3;
+	const after = p.x + 4 + w > right - 2 ? p.x - 4 - w : p.x + 4;
+	const before = p.x - 4 - w < plot.x + 2 ? p.x + 4 : p.x - 4 - w;
+	if (Math.abs(p.y - plot.y) < e) return [clampBox(after, plot.y + 3, w, h, plot), clampBox(before, plot.y + 3, w, h, plot)];
+	if (Math.abs(p.y - bottom) < e) return [clampBox(after, bottom - h - 3, w, h, plot), clampBox(before, bottom - h - 3, w, h, plot)];
+	if (Math.abs(p.x - right) < e) return [clampBox(right - w - 3, above, w, h, plot), clampBox(right - w - 3, below, w, h, plot)];
+	if (Math.abs(p.x - plot.x) < e) return [clampBox(plot.x + 3, above, w, h, plot), clampBox(plot.x + 3, below, w, h, plot)];
+	const primary = clampBox(after, above < plot.y + 2 ? below : above, w, h, plot);
+	return [primary, clampBox(after, above < plot.y + 2 ? above : below, w, h, plot)];
+}
+
+/** The preferred label box for an anchor (see `boxesAt`). */
+export function boxAt(p: Point, w: number, h: number, plot: Rect): Rect {
+	return boxesAt(p, w, h, plot)[0];
 }
 
 /**
@@ -220,8 +233,11 @@ export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, o
 		let done = false;
 		for (const candidates of order) {
 			for (const p of candidates) {
-				const box = boxAt(p, req.width, req.height, plot);
-				if (obstacles.hits(inflate(box, pad))) continue;
+				const box = boxesAt(p, req.width, req.height, plot).find((b) => {
+					const padded = inflate(b, pad);
+					return !obstacles.hits(padded) && !req.avoid?.some((line) => polylineHits(line, padded));
+				});
+				if (!box) continue;
 				placed.push({ id: req.id, box, anchor: p });
 				obstacles.addBox(box);
 				done = true;

@@ -57,68 +57,10 @@ function logspace(a: number, b: number, n: number): number[] {
 	return Array.from({ length: n }, (_, i) => Math.exp(la + ((lb - la) * i) / (n - 1)));
 }
 
-/**
- * fixState, and where the engine does not take a pair yet (it grows pair by pair), a stand-in for
- * the bench only: with v known and one of P, s, h given, solve T on (T, v) by regula falsi
- * (Illinois). All three rise with T at constant v, so the root is bracketed and unique.
- */
-function tryFix(fluid: string, inputs: Inputs, guessT?: number): State | null {
+/** fixState, or null where the engine refuses (outside the fluid's range, a solid, …). */
+function tryFix(fluid: string, inputs: Inputs): State | null {
 	try {
 		return fixState(fluid, inputs);
-	} catch (e) {
-		const code = (e as { code?: string }).code;
-		if (code !== 'not-implemented' || inputs.v === undefined) return null;
-	}
-	const key = (['P', 's', 'h'] as const).find((k) => inputs[k] !== undefined);
-	if (!key) return null;
-	const target = inputs[key]!;
-	const info = getFluid(fluid);
-	const at = (T: number) => tryFixTv(fluid, T, inputs.v!);
-	const f = (T: number) => {
-		const st = at(T);
-		return st ? st[key] - target : NaN;
-	};
-	let lo = info.triple.T * (1 + 1e-9);
-	let hi = info.limits.Tmax;
-	if (guessT !== undefined) {
-		// expand a small bracket around the guess before falling back to the whole range
-		for (let d = 2; d < 400; d *= 3) {
-			const a = Math.max(lo, guessT - d);
-			const b = Math.min(hi, guessT + d);
-			if (f(a) <= 0 && f(b) >= 0) {
-				lo = a;
-				hi = b;
-				break;
-			}
-		}
-	}
-	let flo = f(lo);
-	let fhi = f(hi);
-	if (!(flo <= 0 && fhi >= 0)) return null;
-	let side = 0;
-	for (let i = 0; i < 60; i++) {
-		const T = (lo * fhi - hi * flo) / (fhi - flo);
-		const fT = f(T);
-		if (!Number.isFinite(fT)) return null;
-		if (Math.abs(fT) <= 1e-9 * Math.max(1, Math.abs(target)) || hi - lo < 1e-9) return at(T);
-		if (fT > 0) {
-			hi = T;
-			fhi = fT;
-			if (side === -1) flo /= 2;
-			side = -1;
-		} else {
-			lo = T;
-			flo = fT;
-			if (side === 1) fhi /= 2;
-			side = 1;
-		}
-	}
-	return at((lo + hi) / 2);
-}
-
-function tryFixTv(fluid: string, T: number, v: number): State | null {
-	try {
-		return fixState(fluid, { T, v });
 	} catch {
 		return null;
 	}
@@ -128,77 +70,11 @@ function isWet(s: State) {
 	return s.phase === 'saturated-mixture';
 }
 
-/** The leg's inputs at a value of its parameter (T for isochoric legs, else v). */
-function inputsAlong(start: State, spec: _LegSpec, param: number): Inputs {
-	switch (spec.process) {
-		case 'isochoric':
-			return { v: start.v, T: param };
-		case 'isobaric':
-			return { P: start.P, v: param };
-		case 'isothermal':
-			return { T: start.T, v: param };
-		case 'isentropic':
-			return { s: start.s, v: param };
-		case 'isenthalpic':
-			return { h: start.h, v: param };
-		case 'polytropic':
-			return { P: start.P * (start.v / param) ** (spec.n ?? 1.3), v: param };
-	}
-}
-
-interface Sample {
-	param: number;
-	state: State;
-}
-
-/**
- * Points of one leg: the engine's computeLeg when it is built; until then sampled here along the
- * process invariant (40 points, log-spaced in v, linear in T for isochoric legs), with each
- * crossing of the dome found by bisection between the samples either side of it.
- */
-function legOf(fluid: string, start: State, spec: _LegSpec): { points: State[]; end: State; crossings: ChartLeg['crossings'] } {
+/** One leg from the engine, starting at the previous state. */
+function legOf(fluid: string, start: State, spec: _LegSpec) {
 	const target = spec.process === 'isochoric' ? { T: spec.target.T! } : { v: spec.target.v! };
-	try {
-		const leg = computeLeg({ fluid, start: { T: start.T, v: start.v }, process: spec.process, target, n: spec.n, samples: SAMPLES });
-		return { points: leg.points, end: leg.end, crossings: leg.crossings };
-	} catch {
-		// computeLeg not available yet or refused: sample locally
-	}
-	const params =
-		spec.process === 'isochoric'
-			? Array.from({ length: SAMPLES }, (_, i) => start.T + ((spec.target.T! - start.T) * i) / (SAMPLES - 1))
-			: logspace(start.v, spec.target.v!, SAMPLES);
-	const samples: Sample[] = [];
-	let guess = start.T;
-	for (const param of params) {
-		const state = tryFix(fluid, inputsAlong(start, spec, param), guess);
-		if (state) {
-			samples.push({ param, state });
-			guess = state.T;
-		}
-	}
-	if (samples.length < 2) throw new Error(`The ${spec.process} leg could not be followed from this state.`);
-	const crossings: ChartLeg['crossings'] = [];
-	const points: State[] = [samples[0].state];
-	for (let i = 1; i < samples.length; i++) {
-		let a = samples[i - 1];
-		let b = samples[i];
-		if (isWet(a.state) !== isWet(b.state)) {
-			const line = (isWet(a.state) ? b : a).state.v > (isWet(a.state) ? a : b).state.v ? 'saturated-vapor' : 'saturated-liquid';
-			for (let k = 0; k < 22; k++) {
-				const param = (a.param + b.param) / 2;
-				const state = tryFix(fluid, inputsAlong(start, spec, param), a.state.T);
-				if (!state) break;
-				if (isWet(state) === isWet(a.state)) a = { param, state };
-				else b = { param, state };
-			}
-			const edge = isWet(a.state) ? a.state : b.state;
-			crossings.push({ line, state: edge });
-			points.push(edge);
-		}
-		points.push(samples[i].state);
-	}
-	return { points, end: samples[samples.length - 1].state, crossings };
+	const leg = computeLeg({ fluid, start: { T: start.T, v: start.v }, process: spec.process, target, n: spec.n, samples: SAMPLES });
+	return { points: leg.points, end: leg.end, crossings: leg.crossings };
 }
 
 const legCache = new Map<string, ReturnType<typeof legOf>>();
@@ -242,7 +118,7 @@ export function _isobar(info: FluidInfo, P: number, vRange: [number, number]): I
 	const T0 = info.triple.T * (1 + 1e-6);
 	for (let i = 0; i < 90; i++) {
 		const T = T0 * (info.limits.Tmax / T0) ** (i / 89);
-		const s = tryFixAt(info.id, { T, P });
+		const s = tryFix(info.id, { T, P });
 		if (s && s.v >= vRange[0] && s.v <= vRange[1]) pts.push(s);
 	}
 	if (P < info.critical.P) {
@@ -257,19 +133,11 @@ export function _isobar(info: FluidInfo, P: number, vRange: [number, number]): I
 	return { kind: 'isobar', value: P, points: pts.map(curvePoint) };
 }
 
-function tryFixAt(fluid: string, inputs: Inputs): State | null {
-	try {
-		return fixState(fluid, inputs);
-	} catch {
-		return null;
-	}
-}
-
 /** An isotherm across the chart, likewise. */
 export function _isotherm(info: FluidInfo, T: number, vRange: [number, number]): Isoline {
 	const pts: State[] = [];
 	for (const v of logspace(vRange[0], vRange[1], 90)) {
-		const s = tryFixTv(info.id, T, v);
+		const s = tryFix(info.id, { T, v });
 		if (s && s.P <= info.limits.Pmax) pts.push(s);
 	}
 	if (T < info.critical.T) {
@@ -332,7 +200,7 @@ export function _demo(fluid: string, path: { legs: ChartLeg[] }): _Demo {
 				.map((p) => {
 					const T = p.T + noise() * 1.5;
 					const v = p.v * (1 + noise() * 0.04);
-					const s = tryFixTv(fluid, T, v);
+					const s = tryFix(fluid, { T, v });
 					return s ? { T: s.T, P: s.P, v: s.v, inDome: isWet(s) } : { T, P: p.P, v: null };
 				})
 		}
