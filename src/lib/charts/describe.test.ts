@@ -47,5 +47,6 @@ describe('accessible names', () => {
 		expect(d).toContain('State S1');
 		expect(d).toContain('Leg S1 to S2');
 		expect(d).toContain('Design limit: design pressure');
+		expect(d).toContain('Legs are drawn by process: isochoric as a vermillion long dash line.');
 	});
 });

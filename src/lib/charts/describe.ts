@@ -1,6 +1,6 @@
 import type { Phase, State } from '$lib/thermo/types';
 import { formatQuantity, type UnitPrefs } from '$lib/units';
-import { processStyle } from './encoding';
+import { PROCESS_ORDER, processStyle } from './encoding';
 import type { ChartKind, ChartLeg, ChartState, DesignLimitName, DesignLimits } from './types';
 
 const PHASE_NAMES: Record<Phase, string> = {
@@ -91,6 +91,8 @@ export function chartDescription(input: ChartSummaryInput): string {
 	if (input.critical) lines.push(`Critical point at ${shortT(input.critical.T, input.prefs)} and ${shortP(input.critical.P, input.prefs)}.`);
 	for (const s of input.states) lines.push(`${stateAriaLabel(s, input.prefs)}.`);
 	for (const l of input.legs) lines.push(`${legAriaLabel(l, input.states)}.`);
+	const used = PROCESS_ORDER.filter((p) => input.legs.some((l) => l.process === p)).map(processStyle);
+	if (used.length) lines.push(`Legs are drawn by process: ${used.map((s) => `${s.name} as a ${s.colourName} ${s.pattern} line`).join('; ')}.`);
 	for (const [name, limit] of Object.entries(input.limits ?? {}) as [DesignLimitName, { value: number } | null | undefined][]) {
 		if (limit) lines.push(`Design limit: ${limitText(name, limit.value, input.prefs)}.`);
 	}

@@ -23,6 +23,7 @@ describe('process encoding', () => {
 		const sigs = styles.map((s) => JSON.stringify(dashSignature(s.dash)));
 		expect(new Set(sigs).size).toBe(styles.length);
 		expect(new Set(styles.map((s) => s.pattern)).size).toBe(styles.length);
+		expect(new Set(styles.map((s) => s.colourName)).size).toBe(styles.length);
 		expect(styles.filter((s) => s.dash === '')).toHaveLength(1);
 	});
 

@@ -3,16 +3,16 @@ import type { Process } from '$lib/thermo/types';
 /**
  * Statewright's process encoding: every process kind has its own colour from the Okabe–Ito
  * palette (tailwind tokens `leg.1…6`) AND its own stroke pattern, so a leg reads in colour, in
- * grey-scale print and for colour-blind readers alike. Our mapping, with its mnemonic:
+ * grey-scale print and for colour-blind readers alike. Our mapping:
  *
- * | process      | token | colour          | pattern        | why                                      |
- * | ------------ | ----- | --------------- | -------------- | ---------------------------------------- |
- * | isobaric     | leg.1 | blue            | unbroken       | the plain case: pressure held steady     |
- * | isochoric    | leg.2 | vermillion      | long dash      | the sealed vessel, heated in long pulls  |
- * | isothermal   | leg.3 | bluish green    | fine dots      | a bath holding temperature, drop by drop |
- * | isentropic   | leg.4 | reddish purple  | dash–dot       | the ideal machine: stroke and beat       |
- * | isenthalpic  | leg.5 | orange          | short dash     | the valve: broken, irreversible          |
- * | polytropic   | leg.6 | sky blue        | dash–dot–dot   | between the others, with its exponent    |
+ * | process      | token | colour          | pattern       |
+ * | ------------ | ----- | --------------- | ------------- |
+ * | isobaric     | leg.1 | blue            | unbroken      |
+ * | isochoric    | leg.2 | vermillion      | long dash     |
+ * | isothermal   | leg.3 | bluish green    | dots          |
+ * | isentropic   | leg.4 | reddish purple  | dash–dot      |
+ * | isenthalpic  | leg.5 | orange          | short dash    |
+ * | polytropic   | leg.6 | sky blue        | dash–dot–dot  |
  *
  * Token leg.7 (yellow) is not used for lines: it is too faint on the paper theme.
  * Patterns are in px for a 2.25 px stroke with round caps (dots are zero-length dashes).
@@ -25,19 +25,21 @@ export interface ProcessStyle {
 	colour: string;
 	/** SVG stroke-dasharray, '' for unbroken */
 	dash: string;
-	/** name of the pattern, for the key's accessible text */
+	/** name of the pattern, for the chart's text description */
 	pattern: string;
+	/** name of the colour, likewise */
+	colourName: string;
 	/** how the key and accessible names call the process */
 	name: string;
 }
 
 export const PROCESS_STYLES: Readonly<Record<Process, ProcessStyle>> = Object.freeze({
-	isobaric: { process: 'isobaric', token: 'leg.1', colour: '#0072B2', dash: '', pattern: 'unbroken', name: 'isobaric' },
-	isochoric: { process: 'isochoric', token: 'leg.2', colour: '#D55E00', dash: '13 5', pattern: 'long dash', name: 'isochoric' },
-	isothermal: { process: 'isothermal', token: 'leg.3', colour: '#009E73', dash: '0 4.5', pattern: 'dots', name: 'isothermal' },
-	isentropic: { process: 'isentropic', token: 'leg.4', colour: '#CC79A7', dash: '10 4 0 4', pattern: 'dash–dot', name: 'isentropic' },
-	isenthalpic: { process: 'isenthalpic', token: 'leg.5', colour: '#E69F00', dash: '5 4', pattern: 'short dash', name: 'isenthalpic (throttling)' },
-	polytropic: { process: 'polytropic', token: 'leg.6', colour: '#56B4E9', dash: '10 4 0 4 0 4', pattern: 'dash–dot–dot', name: 'polytropic' }
+	isobaric: { process: 'isobaric', token: 'leg.1', colour: '#0072B2', dash: '', pattern: 'unbroken', colourName: 'blue', name: 'isobaric' },
+	isochoric: { process: 'isochoric', token: 'leg.2', colour: '#D55E00', dash: '13 5', pattern: 'long dash', colourName: 'vermillion', name: 'isochoric' },
+	isothermal: { process: 'isothermal', token: 'leg.3', colour: '#009E73', dash: '0 4.5', pattern: 'dots', colourName: 'bluish green', name: 'isothermal' },
+	isentropic: { process: 'isentropic', token: 'leg.4', colour: '#CC79A7', dash: '10 4 0 4', pattern: 'dash–dot', colourName: 'reddish purple', name: 'isentropic' },
+	isenthalpic: { process: 'isenthalpic', token: 'leg.5', colour: '#E69F00', dash: '5 4', pattern: 'short dash', colourName: 'orange', name: 'isenthalpic (throttling)' },
+	polytropic: { process: 'polytropic', token: 'leg.6', colour: '#56B4E9', dash: '10 4 0 4 0 4', pattern: 'dash–dot–dot', colourName: 'sky blue', name: 'polytropic' }
 });
 
 /** Processes in key order. */
