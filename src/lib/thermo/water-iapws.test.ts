@@ -8,10 +8,8 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from './errors.ts';
 import { fixState } from './index.ts';
-import { PAIRS, expectFinite, inputsFrom, relErr, solveLike } from './pairs.test-support.ts';
-import { evalPoint, Point } from './properties.ts';
-import { getCompiledFluid } from './registry.ts';
-import type { InputName, Phase, State } from './types.ts';
+import { PAIRS, expectFinite, inputsFrom, relErr, solveLike, spread } from './pairs.test-support.ts';
+import type { Phase } from './types.ts';
 
 interface Row {
 	region: string;
@@ -61,48 +59,6 @@ function phaseOf(r: Row): Phase | null {
 	return null;
 }
 
-/**
- * How well a pair can fix the state at all. Some pairs carry little information in places —
- * (u, s) in a liquid (at constant s, du = −P·dv and a liquid's dv is tiny), (u, h) in dilute vapor
- * (h − u = ZRT with Z ≈ 1, and the u and Pv lines nearly parallel) — so the small difference
- * between two implementations of the same equation (δ: ours minus python3-iapws at the row's
- * (T, ρ), plus the round-off of each input) moves the answer by J⁻¹·δ, J the Jacobian of the pair with respect
- * to (T, ln ρ) (finite differences of our own equation; an error bound, not an expected value).
- * Returns, for each output, ten times that propagated spread, relative.
- */
-function spread(r: Row, a: InputName, b: InputName): Record<'T' | 'P' | 'v', number> {
-	const fl = getCompiledFluid('water');
-	const pt = new Point();
-	const val = (T: number, rho: number, k: InputName): number => {
-		evalPoint(fl, T, rho, pt, 2);
-		return k === 'T' ? T : k === 'P' ? pt.P : k === 'v' ? 1 / rho : k === 'u' ? pt.u : k === 'h' ? pt.h : pt.s;
-	};
-	// central differences of the single-phase equation in (T, ln ρ)
-	const dT = 1e-6 * r.T, dz = 1e-6;
-	const d = (k: InputName): [number, number] => [
-		(val(r.T + dT, r.rho, k) - val(r.T - dT, r.rho, k)) / (2 * dT),
-		(val(r.T, r.rho * Math.exp(dz), k) - val(r.T, r.rho * Math.exp(-dz), k)) / (2 * dz)
-	];
-	const [Ja, Jb, JP] = [d(a), d(b), d('P')];
-	// round-off of u, h, s is set by their terms (about R·T, R), not by their value, which can be
-	// near the reference zero
-	const noise = (k: InputName): number => {
-		const ours = val(r.T, r.rho, k);
-		const ref = k === 'v' ? r.v : (r[k as keyof Row] as number);
-		const floor = k === 'u' || k === 'h' ? 1e-14 * (Math.abs(ours) + R * r.T) : k === 's' ? 1e-14 * (Math.abs(ours) + R) : 1e-15 * Math.abs(ours);
-		return Math.abs(ours - ref) + floor;
-	};
-	const da = noise(a), db = noise(b);
-	const det = Ja[0] * Jb[1] - Ja[1] * Jb[0];
-	const eT = (Math.abs(Jb[1]) * da + Math.abs(Ja[1]) * db) / Math.abs(det);
-	const ez = (Math.abs(Jb[0]) * da + Math.abs(Ja[0]) * db) / Math.abs(det);
-	return {
-		T: (10 * eT) / r.T,
-		P: (10 * (Math.abs(JP[0]) * eT + Math.abs(JP[1]) * ez)) / r.P,
-		v: 10 * ez
-	};
-}
-
 describe('water against python3-iapws (fixture)', () => {
 	it('has a fixture of a few hundred rows over every region', () => {
 		expect(fixture.source).toMatch(/python3-iapws/);
@@ -141,7 +97,7 @@ describe('water against python3-iapws (fixture)', () => {
 				if (res.hinted) hinted++;
 				const st = res.state;
 				expectFinite(st);
-				const sp = spread(r, a, b);
+				const sp = spread('water', r, a, b);
 				for (const k of KEYS) {
 					const tol = 1e-6 + (k === 'T' || k === 'P' || k === 'v' ? sp[k] : 0);
 					expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}: ${st[k]} vs ${r[k]}`).toBeLessThan(tol);
@@ -189,11 +145,11 @@ describe('water against python3-iapws (fixture)', () => {
 				const st = res.state;
 				expectFinite(st);
 				if (a === 'u' && b === 's' && r.x === 0 && st.x === null) {
-					// see spread: on the saturated liquid at low T, (u, s) fixes P only to tens of
+					// see spread (pairs.test-support.ts): on the saturated liquid at low T, (u, s) fixes P only to tens of
 					// pascals, so a compressed liquid that close to the line is the same answer
 					const liq = fixState('water', { T: r.T, rho: r.rho });
 					const row = { ...liq, region: 'saturated-liquid', cv: 0, cp: 0, w: 0 } as unknown as Row;
-					expect(relErr('P', st.P, r.P, R, r.T), where).toBeLessThan(1e-5 + spread(row, 'u', 's').P);
+					expect(relErr('P', st.P, r.P, R, r.T), where).toBeLessThan(1e-5 + spread('water', row, 'u', 's').P);
 					for (const k of ['T', 'v', 'u', 'h', 's'] as const) expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}`).toBeLessThan(1e-5);
 					continue;
 				}

@@ -1,0 +1,116 @@
+/**
+ * Saturation (internal consistency): equal pressure and Gibbs energy in both phases, inverse
+ * consistency of saturation at T and at P, robustness within 1 mK of the critical temperature,
+ * the dome curve, and the accuracy of the saturation table the fast paths rely on (for every
+ * registered fluid).
+ */
+import { describe, expect, it } from 'vitest';
+import { ThermoError } from './errors.ts';
+import { fixState, listFluids, saturationAtP, saturationAtT, saturationCurve } from './index.ts';
+import { evalPoint, Point } from './properties.ts';
+import { getCompiledFluid } from './registry.ts';
+import { TABLE_ACCURACY, satAtT, satGuess } from './solvers/saturation.ts';
+
+describe('saturation of water', () => {
+	const fl = getCompiledFluid('water');
+	const Ts: number[] = [273.16, 280, 300, 350, 400, 450, 500, 550, 600, 630, 640, 645, 646.9];
+	for (let k = 1; k <= 6; k++) Ts.push(647.096 - 10 ** -k * 647.096 * 1e-1); // 64.7 K … 0.065 mK below Tc
+
+	it('has equal P and equal g in both phases from the triple point to within 0.1 mK of Tc', () => {
+		const pL = new Point(), pV = new Point();
+		for (const T of Ts) {
+			const s = satAtT(fl, T);
+			evalPoint(fl, T, s.rhoL, pL, 2);
+			evalPoint(fl, T, s.rhoV, pV, 2);
+			const RT = fl.R * T;
+			// P on the liquid scale ρ'RT (the liquid's P is the small remainder of ρRT(1 + δαʳ_δ))
+			expect(Math.abs(pL.P - pV.P) / (s.rhoL * RT), `P at ${T}`).toBeLessThan(1e-12);
+			expect(Math.abs(pL.g - pV.g) / RT, `g at ${T}`).toBeLessThan(1e-11);
+			expect(s.rhoL).toBeGreaterThan(s.rhoV);
+		}
+	});
+
+	it('solves within 1 mK of Tc and narrows the dome toward the critical point', () => {
+		let prev = Infinity;
+		for (const dT of [1, 0.1, 0.01, 0.001]) {
+			const sat = saturationAtT('water', 647.096 - dT);
+			const gap = sat.liquid.rho - sat.vapor.rho;
+			expect(gap).toBeGreaterThan(0);
+			expect(gap).toBeLessThan(prev);
+			prev = gap;
+			expect(sat.P).toBeLessThan(22.064e6);
+		}
+	});
+
+	it('saturation at P inverts saturation at T', () => {
+		for (const T of Ts.slice(0, 14)) {
+			const a = saturationAtT('water', T);
+			const b = saturationAtP('water', a.P);
+			expect(Math.abs(b.T / T - 1), `T at ${T}`).toBeLessThan(1e-10);
+			expect(Math.abs(b.liquid.rho / a.liquid.rho - 1)).toBeLessThan(1e-9);
+			expect(Math.abs(b.vapor.rho / a.vapor.rho - 1)).toBeLessThan(1e-9);
+			expect(b.liquid.phase).toBe('saturated-liquid');
+			expect(b.vapor.phase).toBe('saturated-vapor');
+			expect(b.liquid.x).toBe(0);
+			expect(b.vapor.x).toBe(1);
+		}
+	});
+
+	it('clapeyron: dPs/dT from neighbouring saturation points equals Δs/Δv', () => {
+		for (const T of [300, 450, 600]) {
+			const a = saturationAtT('water', T - 0.01), b = saturationAtT('water', T + 0.01), m = saturationAtT('water', T);
+			const slope = (b.P - a.P) / 0.02;
+			const clap = (m.vapor.s - m.liquid.s) / (m.vapor.v - m.liquid.v);
+			expect(Math.abs(slope / clap - 1)).toBeLessThan(1e-6);
+		}
+	});
+
+	it('two-phase cv equals the slope of u along the isochore (finite difference)', () => {
+		for (const [T, x] of [
+			[400, 0.3],
+			[600, 0.7]
+		]) {
+			const s = fixState('water', { T, x });
+			const up = fixState('water', { T: T + 0.01, v: s.v }), dn = fixState('water', { T: T - 0.01, v: s.v });
+			expect(up.phase).toBe('saturated-mixture');
+			expect(Math.abs((up.u - dn.u) / 0.02 / (s.cv as number) - 1)).toBeLessThan(1e-5);
+			expect(s.cp).toBeNull();
+			expect(s.w).toBeNull();
+		}
+	});
+
+	it('draws the dome: liquid and vapor arrays, denser near Tc, and the critical state', () => {
+		const c = saturationCurve('water', 60);
+		expect(c.liquid).toHaveLength(60);
+		expect(c.vapor).toHaveLength(60);
+		expect(c.liquid[0].T).toBe(273.16);
+		const dT = c.liquid.map((s, i) => (i ? s.T - c.liquid[i - 1].T : 0)).slice(1);
+		expect(dT[dT.length - 1]).toBeLessThan(dT[0]);
+		for (let i = 1; i < 60; i++) {
+			expect(c.liquid[i].T).toBeGreaterThan(c.liquid[i - 1].T);
+			expect(c.vapor[i].rho).toBeGreaterThan(c.vapor[i - 1].rho);
+			expect(c.liquid[i].P).toBe(c.vapor[i].P);
+		}
+		expect(647.096 - c.liquid[59].T).toBeLessThan(0.01);
+		expect(c.critical.T).toBe(647.096);
+		expect(c.critical.phase).toBe('supercritical-fluid');
+		expect(() => saturationCurve('water', 1)).toThrowError(ThermoError);
+	});
+});
+
+describe('saturation table accuracy (every registered fluid)', () => {
+	for (const info of listFluids()) {
+		it(`${info.id}: table-interpolated P, ρ', ρ'' within TABLE_ACCURACY from the triple point to 0.9999·Tc`, () => {
+			const fl = getCompiledFluid(info.id);
+			const g = { P: 0, rhoL: 0, rhoV: 0 };
+			let worst = 0;
+			for (let i = 0; i <= 600; i++) {
+				const T = fl.Tt + ((fl.Tc * 0.9999 - fl.Tt) * i) / 600;
+				const s = satAtT(fl, T);
+				satGuess(fl, T, g);
+				worst = Math.max(worst, Math.abs(g.P / s.P - 1), Math.abs(g.rhoL / s.rhoL - 1), Math.abs(g.rhoV / s.rhoV - 1));
+			}
+			expect(worst).toBeLessThan(TABLE_ACCURACY);
+		});
+	}
+});
