@@ -10,7 +10,7 @@ import { codeForStatus, jsonError } from '$lib/server/api';
 
 /** Migrations, mail and the demo seed, before the first request. */
 export const init: ServerInit = async () => {
-	await startApp({ devServerUrl: dev ? 'http://localhost:5173' : undefined });
+	await startApp({ dev });
 };
 
 const isApi = (path: string) => path.startsWith('/api/');

@@ -10,7 +10,7 @@ import { deleteExpiredSessions } from './db/sessions';
  * seed the demo team on an empty database, and print where to go and how to sign in.
  * Called from `init` in hooks.server.ts, before the first request is served.
  */
-export async function startApp(options: { devServerUrl?: string } = {}): Promise<void> {
+export async function startApp(options: { dev?: boolean } = {}): Promise<void> {
 	const c = config();
 	const applied = await migrateAppDatabase();
 	const db = getDb();
@@ -26,11 +26,12 @@ export async function startApp(options: { devServerUrl?: string } = {}): Promise
 	});
 
 	const shownHost = c.host === '0.0.0.0' || c.host === '::' ? 'localhost' : c.host;
-	const url = options.devServerUrl ?? c.origin ?? `http://${shownHost}:${c.port}`;
+	// under `vite dev` the address is Vite's, printed above
+	const url = options.dev ? '' : (c.origin ?? `http://${shownHost}:${c.port}`);
 	const lines = [
 		'',
 		'  Statewright',
-		`  ${url}`,
+		url ? `  ${url}` : '  (development server)',
 		`  database  ${c.databasePath}${applied.length ? `  (applied ${applied.length} migration${applied.length > 1 ? 's' : ''})` : ''}`,
 		mailer.catching
 			? `  mail      caught by the local SMTP server on 127.0.0.1:${mailer.port}${c.devTools ? `; read it at ${url}/dev/outbox` : ' (SMTP_URL unset: mail is not delivered)'}`
