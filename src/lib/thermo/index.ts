@@ -14,6 +14,7 @@ import { saturatedState } from './state.ts';
 import { curveOf } from './solvers/curve.ts';
 import { fixStateOf } from './solvers/fix-state.ts';
 import { computeLeg as computeLegImpl } from './solvers/legs.ts';
+import { stateExtras as stateExtrasOf } from './solvers/path.ts';
 import { checkSaturationP } from './solvers/range.ts';
 import { satAtP, satAtT } from './solvers/saturation.ts';
 import { fmt } from './errors.ts';
@@ -104,8 +105,32 @@ export function getFluid(id: string): FluidInfo {
 /**
  * A process leg between a start state and a target (API.md): points along the path, crossings of
  * the saturation lines, w = ∫P dv, q = Δu + w, wShaft = −∫v dP, qFlow = Δh + wShaft (J/kg).
- * Not built yet: throws ThermoError `not-implemented`.
+ * The leg runs until the target first takes its value along the process curve (solvers/legs.ts;
+ * integrals by Gauss–Kronrod quadrature per piece between crossings, or exactly where P or v is
+ * fixed). Throws ThermoError (`unreachable-target` states the reachable range).
  */
 export function computeLeg(spec: LegSpec): Leg {
 	return computeLegImpl(spec);
 }
+
+/**
+ * A whole path (PathSpec → PathResult, types.ts): states S1…, legs with totals (× mass in J, or ×
+ * mass flow in W), the cycle analysis when it closes, design-limit events found exactly along each
+ * leg, per-state extras (superheat, subcooling, volume fractions) and warnings with stable codes
+ * (solvers/path.ts). Throws ThermoError (`invalid-path`, or a leg's error prefixed with its id).
+ */
+export { computePath, PRESSURE_EQUIPMENT_CAUTION, CYCLE_TOLERANCE, MAX_LEGS } from './solvers/path.ts';
+
+/** Degrees of superheat/subcooling against saturation at the state's P, and liquid/vapor volume fractions. */
+export function stateExtras(state: State): import('./types.ts').StateExtras {
+	return stateExtrasOf(getCompiledFluid(state.fluid), state);
+}
+
+/** Leg limits and names for validators (process names, target names, samples range, |n| bound). */
+export { PROCESSES, TARGET_NAMES, SAMPLES_DEFAULT, SAMPLES_MIN, SAMPLES_MAX, N_MAX } from './solvers/legs.ts';
+
+/**
+ * Background isolines (isobars Pa, isotherms K, isochores m³/kg) across the drawable range, through
+ * the dome (solvers/isolines.ts).
+ */
+export { isolines, ISOLINE_KINDS, ISOLINE_POINTS_DEFAULT, ISOLINE_POINTS_MIN, ISOLINE_POINTS_MAX, ISOLINE_VALUES_MAX } from './solvers/isolines.ts';

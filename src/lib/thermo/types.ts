@@ -144,3 +144,197 @@ export interface FluidInfo {
 	referenceState: string;
 	molarMass: number;
 }
+
+// ---- Paths (computePath; POST /api/v1/paths) --------------------------------------------------
+
+/**
+ * The system a path belongs to. A closed system (vessel, piston–cylinder) holds a fixed mass:
+ * give `mass` (kg) or `volume` (m³, the volume at the start: mass = V / v₁), not both; with neither
+ * the totals are per 1 kg. A steady-flow device carries `massFlow` (kg/s).
+ */
+export type PathSystem = { kind: 'closed'; mass?: number; volume?: number } | { kind: 'flow'; massFlow: number };
+
+/** One leg of a path: the process, one target property for its end, n for polytropic legs. */
+export interface PathLegSpec {
+	/** stable id for review notes (default L1, L2, …); unique within the path */
+	id?: string;
+	process: Process;
+	target: Partial<Record<TargetName, number>>;
+	n?: number;
+	/** points along this leg (default: the path's `samples`, else 40) */
+	samples?: number;
+}
+
+/** Design limits drawn on the chart and checked along every leg (Pa, K; absolute pressure). */
+export interface DesignLimits {
+	designPressure?: number;
+	designTemperature?: number;
+	reliefSetPressure?: number;
+	minimumTemperature?: number;
+}
+
+export type DesignLimitName = keyof DesignLimits;
+
+/** A whole path: the sheet's spec (PRODUCT.md "What a sheet holds"). */
+export interface PathSpec {
+	fluid: string;
+	system: PathSystem;
+	/** exactly two properties of the first state */
+	start: Inputs;
+	/** at least one leg, in order (at most 50) */
+	legs: PathLegSpec[];
+	limits?: DesignLimits;
+	/** the site's atmospheric pressure, Pa, for gauge readings on the screen (default 101 325); carried through */
+	atmosphericPressure?: number;
+	/** points per leg unless a leg says otherwise (default 40) */
+	samples?: number;
+}
+
+/** What practitioners read beside T, P, v (null where not meaningful). */
+export interface StateExtras {
+	/** saturation temperature at the state's pressure, K (triple-point pressure ≤ P < Pc), else null */
+	Tsat: number | null;
+	/** degrees of superheat T − Tsat(P), K: superheated vapor (0 for saturated vapor) below Pc */
+	superheat: number | null;
+	/** degrees of subcooling Tsat(P) − T, K: compressed liquid (0 for saturated liquid) below Pc */
+	subcooling: number | null;
+	/** liquid volume fraction (1 − x)·v′/v on and inside the dome: what a level gauge shows */
+	liquidVolumeFraction: number | null;
+	/** vapor volume fraction x·v″/v on and inside the dome */
+	vaporVolumeFraction: number | null;
+}
+
+/** A state of the path: S1 (the start), S2 (end of the first leg), … */
+export interface PathState {
+	id: string;
+	state: State;
+	extras: StateExtras;
+}
+
+/** Totals of a leg or path: per-kg values × mass (J) for a closed system, × mass flow (W) for a device. */
+export interface PathTotals {
+	/** 'J' for a closed system, 'W' for a steady-flow device */
+	unit: 'J' | 'W';
+	/** heat in, closed system: m·q */
+	Q: number;
+	/** boundary work by the fluid: m·w */
+	W: number;
+	/** shaft work by the fluid, steady flow: ṁ·wShaft (or m·wShaft) */
+	WShaft: number;
+	/** heat in, steady flow: ṁ·qFlow (or m·qFlow) */
+	QFlow: number;
+}
+
+export interface PathLeg {
+	id: string;
+	/** ids of the states at its ends */
+	from: string;
+	to: string;
+	leg: Leg;
+	totals: PathTotals;
+}
+
+/**
+ * A path that ends where it started (every property within 1 part in 10⁶: |ΔT| ≤ 10⁻⁶·T and
+ * |Δρ| ≤ 10⁻⁶·ρ) is a cycle. Per kg, with q and w of the system kind (closed: q, w; flow: qFlow,
+ * wShaft): net work = Σw; heat added = Σ of the legs' positive q, heat rejected = Σ of the negative
+ * q (as positive numbers). Net work > 0: a power cycle, efficiency = net work / heat added.
+ * Net work < 0: a reverse (refrigeration or heat-pump) cycle, COP cooling = heat added / |net work|,
+ * COP heating = heat rejected / |net work|.
+ */
+export interface CycleAnalysis {
+	kind: 'power' | 'reverse' | 'no-net-work';
+	/** J/kg */
+	netWork: number;
+	heatAdded: number;
+	heatRejected: number;
+	/** the same three × mass (J) or × mass flow (W) */
+	totals: { unit: 'J' | 'W'; netWork: number; heatAdded: number; heatRejected: number };
+	thermalEfficiency: number | null;
+	copCooling: number | null;
+	copHeating: number | null;
+}
+
+/**
+ * A design limit met along a leg: the first state along the leg where the property reaches the limit
+ * coming from the safe side (found by root-finding along the leg, not the nearest point), or the
+ * path's start when it already lies beyond.
+ */
+export interface LimitEvent {
+	limit: DesignLimitName;
+	/** the limit, Pa or K */
+	value: number;
+	/** the leg's id; null for the path's start */
+	leg: string | null;
+	kind: 'reached' | 'start-beyond';
+	/** the leg (or the start) goes beyond the limit, not only up to it */
+	exceeded: boolean;
+	state: State;
+}
+
+/** Stable warning codes of a path (see path.ts for the conditions). */
+export type PathWarningCode =
+	| 'pressure-equipment-caution'
+	| 'design-pressure-reached'
+	| 'design-pressure-exceeded'
+	| 'relief-set-pressure-reached'
+	| 'relief-set-pressure-exceeded'
+	| 'design-temperature-reached'
+	| 'design-temperature-exceeded'
+	| 'below-minimum-temperature'
+	| 'relief-set-above-design-pressure'
+	| 'liquid-full'
+	| 'liquid-full-ahead'
+	| 'throttling-irreversible'
+	| 'per-kg-totals';
+
+export interface PathWarning {
+	code: PathWarningCode;
+	/** 'caution': safety; 'warning': a limit or hazard met; 'info': how to read the numbers */
+	severity: 'caution' | 'warning' | 'info';
+	message: string;
+	/** the leg and state concerned, if any */
+	leg?: string;
+	state?: string;
+	/** the state where it happens (e.g. where the vessel goes liquid-full) */
+	at?: State;
+}
+
+export interface PathResult {
+	fluid: string;
+	system: { kind: 'closed'; mass: number; volume: number } | { kind: 'flow'; massFlow: number };
+	atmosphericPressure: number;
+	limits: DesignLimits;
+	states: PathState[];
+	legs: PathLeg[];
+	/** sums over the legs: per kg (J/kg; ds J/(kg·K)) and totals */
+	perKg: { q: number; w: number; wShaft: number; qFlow: number; du: number; dh: number; ds: number };
+	totals: PathTotals;
+	/** null unless the path closes into a cycle */
+	cycle: CycleAnalysis | null;
+	limitEvents: LimitEvent[];
+	warnings: PathWarning[];
+}
+
+// ---- Isolines (GET /api/v1/fluids/{id}/isolines) ------------------------------------------------
+
+export type IsolineKind = 'isobar' | 'isotherm' | 'isochore';
+
+/** A point of an isoline: T K, P Pa, v m³/kg. */
+export interface IsolinePoint {
+	T: number;
+	P: number;
+	v: number;
+}
+
+/**
+ * A background line of constant P (isobar), T (isotherm) or v (isochore) across the fluid's
+ * drawable range, through the dome (flat in T for an isobar, flat in P for an isotherm below the
+ * critical point), in order of rising T (isobar, isochore) or rising v (isotherm).
+ */
+export interface Isoline {
+	kind: IsolineKind;
+	/** Pa, K or m³/kg */
+	value: number;
+	points: IsolinePoint[];
+}

@@ -265,11 +265,12 @@ export class Curve {
 	/** evaluations done (for benchmarks and tests) */
 	evaluations = 0;
 
-	constructor(fl: Fluid, inv: Invariant, start: CPt) {
+	/** `Pfloor` overrides the curve's lowest pressure (isolines end at a drawable pressure). */
+	constructor(fl: Fluid, inv: Invariant, start: CPt, Pfloor?: number) {
 		this.fl = fl;
 		this.inv = inv;
 		this.process = inv.process;
-		this.Pfloor = Math.min(P_FLOOR, start.P * (1 - 1e-12));
+		this.Pfloor = Math.min(Pfloor ?? P_FLOOR, start.P * (1 - 1e-12));
 		const params: Record<Process, [Param, Param]> = {
 			isobaric: ['T', 'lnv'],
 			isochoric: ['T', 'T'],

@@ -151,6 +151,25 @@ function valueOf(c: CPt, key: TargetName): number {
 
 /** Compute a leg (see the module comment and API.md). Throws ThermoError for anything it cannot answer. */
 export function computeLeg(spec: LegSpec): Leg {
+	return traceLeg(spec).leg;
+}
+
+/** A computed leg with what paths need to look along it again. */
+export interface LegTrace {
+	leg: Leg;
+	/** per crossing of leg.crossings: [two-phase before, two-phase after] */
+	sides: [boolean, boolean][];
+	/** the last piece of the leg is two-phase (an end on a line reached from inside the dome) */
+	endsFromDome: boolean;
+	/**
+	 * The first state along the leg where g turns from negative to ≥ 0 (g of the point's T, P, v;
+	 * refined by regula falsi on the curve, not the nearest point), or null.
+	 */
+	firstReach(g: (T: number, P: number, v: number) => number): State | null;
+}
+
+/** computeLeg with the curve kept (for paths: limit crossings along the leg, crossing directions). */
+export function traceLeg(spec: LegSpec): LegTrace {
 	const chk = checkLegSpec(spec);
 	const { fl, process, key, value, n, samples } = chk;
 	const start = fixStateOf(fl, spec.start);
@@ -203,7 +222,7 @@ export function computeLeg(spec: LegSpec): Leg {
 		}
 	}
 	const pieces = piecesBetween(curve, pos0, startC, end, dir);
-	const sampled = sample(curve, pieces, samples);
+	const sampled = samplePieces(curve, pieces, samples);
 	const points: State[] = sampled.map((sp) => stateOf(fl, sp.c));
 	points[0] = start;
 	const endState = points[points.length - 1];
@@ -245,7 +264,26 @@ export function computeLeg(spec: LegSpec): Leg {
 	};
 	if (notes.length) leg.notes = notes;
 	if (process === 'polytropic') leg.n = n;
-	return leg;
+	const sides = pieces.slice(1).map((pc, i): [boolean, boolean] => [pieces[i].seg.dome, pc.seg.dome]);
+	const endsFromDome = pieces[pieces.length - 1].seg.dome && pieces[pieces.length - 1].from !== pieces[pieces.length - 1].to;
+	const firstReach = (g: (T: number, P: number, v: number) => number): State | null => {
+		const G = (c: CPt) => g(c.T, c.P, 1 / c.rho);
+		let gPrev = G(sampled[0].c);
+		for (let j = 1; j < sampled.length; j++) {
+			const b = sampled[j], a = sampled[j - 1];
+			const gb = G(b.c);
+			if (gPrev < 0 && gb >= 0) {
+				if (gb === 0) return stateOf(fl, b.c);
+				const pc = pieces[b.piece];
+				const ta = a.piece === b.piece ? a.t : pc.from;
+				const r = refine(curve, pc.seg, ta, gPrev, a.c, b.t, gb, b.c, G);
+				return stateOf(fl, r.p);
+			}
+			gPrev = gb;
+		}
+		return null;
+	};
+	return { leg, sides, endsFromDome, firstReach };
 }
 
 function unreachable(fl: Fluid, process: Process, inv: Invariant, n: number | undefined, key: TargetName, value: number, range: { lo: number; hi: number }): ThermoError {
@@ -396,7 +434,7 @@ function refine(curve: Curve, seg: Segment, a: number, fa: number, pa: CPt, b: n
 }
 
 /** A piece of the leg inside one segment, in leg order. */
-interface Piece {
+export interface Piece {
 	seg: Segment;
 	from: number;
 	to: number;
@@ -432,7 +470,7 @@ function piecesBetween(curve: Curve, pos0: { seg: number; t: number; crossing: n
 	return kept.length ? kept : out.slice(0, 1);
 }
 
-interface SP {
+export interface SP {
 	piece: number;
 	t: number;
 	c: CPt;
@@ -440,7 +478,7 @@ interface SP {
 }
 
 /** Adaptive points along the pieces (see the module comment). */
-function sample(curve: Curve, pieces: Piece[], samples: number): SP[] {
+export function samplePieces(curve: Curve, pieces: Piece[], samples: number): SP[] {
 	const pts: SP[] = [];
 	const coords = (c: CPt) => [-Math.log(c.rho), c.T, Math.log(c.P), c.P];
 	if (pieces.length === 1 && pieces[0].from === pieces[0].to) {
@@ -474,10 +512,11 @@ function sample(curve: Curve, pieces: Piece[], samples: number): SP[] {
 	const norm = (X: number[]) => [X[0] / S[0], X[1] / S[1], X[2] / S[2], X[3] / S[3]];
 	const N: number[][] = pts.map((p) => norm(p.X));
 	// boundary vertices (crossings) may kink: never count their angle
-	const boundary = (j: number) => j === 0 || j === pts.length - 1 || pts[j].piece !== pts[j + 1].piece || pts[j].piece !== pts[j - 1].piece;
+	// an interval (j, j + 1) lies in the piece of its right end; a piece's last point carries that piece's index
+	const boundary = (j: number) => j === 0 || j === pts.length - 1 || pts[j].piece !== pts[j + 1].piece;
+	const leftT = (j: number) => (pts[j].piece === pts[j + 1].piece ? pts[j].t : pieces[pts[j + 1].piece].from);
 	// length of an interval: the longest of its projections on (ln v, T), (ln v, ln P), (ln v, P)
 	const len = (j: number) => {
-		if (pts[j].piece !== pts[j + 1].piece) return -1;
 		const a = N[j], b = N[j + 1];
 		const dx = b[0] - a[0];
 		let m = 0;
@@ -511,14 +550,15 @@ function sample(curve: Curve, pieces: Piece[], samples: number): SP[] {
 	/** Split interval j (pts[j], pts[j+1]) into m + 1 equal parameter steps; returns the new points. */
 	const split = (j: number, m: number): SP[] => {
 		const a = pts[j], b = pts[j + 1];
+		const ta = leftT(j);
 		const out: SP[] = [];
 		let prev = a.c;
 		for (let i = 1; i <= m; i++) {
-			const t = a.t + ((b.t - a.t) * i) / (m + 1);
-			if (t === a.t || t === b.t) continue;
-			const c = curve.at(pieces[a.piece].seg, t, prev);
+			const t = ta + ((b.t - ta) * i) / (m + 1);
+			if (t === ta || t === b.t) continue;
+			const c = curve.at(pieces[b.piece].seg, t, prev);
 			if (!c) continue;
-			out.push({ piece: a.piece, t, c, X: coords(c) });
+			out.push({ piece: b.piece, t, c, X: coords(c) });
 			prev = c;
 		}
 		return out;
@@ -526,14 +566,14 @@ function sample(curve: Curve, pieces: Piece[], samples: number): SP[] {
 	// pass 1: share the remaining budget among the coarse intervals by length weighted by turning
 	{
 		const theta = pts.map((_, j) => turn(j));
-		const wts = pts.map((_, j) => (j < pts.length - 1 && pts[j].piece === pts[j + 1].piece ? len(j) * (1 + 8 * Math.max(theta[j], theta[j + 1])) : 0));
+		const wts = pts.map((_, j) => (j < pts.length - 1 ? len(j) * (1 + 8 * Math.max(theta[j], theta[j + 1])) : 0));
 		const total = wts.reduce((x, y) => x + y, 0);
 		const budget = Math.max(0, samples - pts.length);
 		const share = wts.map((w) => (total > 0 ? (budget * w) / total : 0));
 		const m = share.map(Math.floor);
 		let left = budget - m.reduce((x, y) => x + y, 0);
 		const order = share.map((v, j) => [v - m[j], j]).filter(([, j]) => wts[j] > 0 || total === 0).sort((x, y) => y[0] - x[0]);
-		if (total === 0) for (let j = 0; j < pts.length - 1; j++) if (pts[j].piece === pts[j + 1].piece) order.push([0, j]);
+		if (total === 0) for (let j = 0; j < pts.length - 1; j++) order.push([0, j]);
 		for (let i = 0; left > 0 && order.length; i = (i + 1) % order.length, left--) m[order[i][1]]++;
 		const next: SP[] = [];
 		for (let j = 0; j < pts.length; j++) {
@@ -549,7 +589,6 @@ function sample(curve: Curve, pieces: Piece[], samples: number): SP[] {
 		const theta = pts.map((_, j) => turn(j));
 		const want = new Set<number>();
 		for (let j = 0; j < pts.length - 1; j++) {
-			if (pts[j].piece !== pts[j + 1].piece) continue;
 			if (Math.max(theta[j], theta[j + 1]) > TURN_TOL && len(j) > 1e-3) want.add(j);
 		}
 		if (pts.length < samples) {
