@@ -1,0 +1,82 @@
+/**
+ * Test helper (not engine code): fix a known state again from one pair of its own properties and
+ * say how the answer differs. Used by the fluid tests beside this file.
+ */
+import { fixState } from '../index.ts';
+import { ThermoError } from '../errors.ts';
+import type { InputName, Inputs, RootHint, State } from '../types.ts';
+
+/** The seven input names; v stands for v and rho (one property). */
+export const INPUT_NAMES: InputName[] = ['T', 'P', 'v', 'u', 'h', 's', 'x'];
+
+/** All 21 pairs of INPUT_NAMES. */
+export const INPUT_PAIRS: [InputName, InputName][] = [];
+for (let i = 0; i < INPUT_NAMES.length; i++)
+	for (let j = i + 1; j < INPUT_NAMES.length; j++) INPUT_PAIRS.push([INPUT_NAMES[i], INPUT_NAMES[j]]);
+
+const HINTS: RootHint[] = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'];
+
+/** The properties a reference state must agree in (x separately). */
+export type Reference = Pick<State, 'T' | 'P' | 'v' | 'u' | 'h' | 's' | 'x'>;
+
+/** Relative agreement, with a floor for energies near zero where a relative measure means nothing. */
+function close(a: number, b: number, rel: number, floor: number): boolean {
+	return Math.abs(a - b) <= rel * Math.max(Math.abs(b), floor);
+}
+
+/** null when `got` is `ref` within `rel` (u, h with a 1 kJ/kg floor, s with 10 J/(kg·K)); else what differs. */
+export function differs(got: Reference, ref: Reference, rel: number): string | null {
+	const checks: [keyof Reference, number][] = [
+		['T', 1],
+		['P', 1],
+		['v', 0],
+		['u', 1e3],
+		['h', 1e3],
+		['s', 10]
+	];
+	for (const [k, floor] of checks) {
+		if (!close(got[k] as number, ref[k] as number, rel, floor)) return `${k} ${got[k]} vs ${ref[k]}`;
+	}
+	if ((ref.x === null) !== (got.x === null)) return `x ${got.x} vs ${ref.x}`;
+	if (ref.x !== null && Math.abs((got.x as number) - ref.x) > rel) return `x ${got.x} vs ${ref.x}`;
+	return null;
+}
+
+export interface PairOutcome {
+	/** null when the state came back; otherwise why not */
+	failure: string | null;
+	/** the pair has several states (ambiguous-state) and the reference is named among them */
+	ambiguous: boolean;
+	/** ambiguous, and no hint returns the reference (a middle one of three or more candidates) */
+	unreachable: boolean;
+}
+
+/**
+ * Fix `ref` again from the pair (a, b). Where the engine answers `ambiguous-state` (which the
+ * contract allows), the reference must be one of the named candidates; when a hint returns it, that
+ * answer must match too. A reference between two other candidates may be out of every hint's reach
+ * (hints pick an extreme in T, P or ρ): it passes as named, flagged `unreachable`.
+ */
+export function fixFromPair(fluid: string, ref: Reference, [a, b]: [InputName, InputName], rel: number): PairOutcome {
+	const inputs: Inputs = { [a]: ref[a] as number, [b]: ref[b] as number };
+	const judge = (got: State): string | null => differs(got, ref, rel);
+	try {
+		return { failure: judge(fixState(fluid, inputs)), ambiguous: false, unreachable: false };
+	} catch (e) {
+		if (!(e instanceof ThermoError)) throw e;
+		if (e.code !== 'ambiguous-state') return { failure: `${e.code}: ${e.message}`, ambiguous: false, unreachable: false };
+		const listed = (e.candidates ?? []).some(
+			(c) => Math.abs(c.T - ref.T) <= rel * ref.T && Math.abs(c.rho * ref.v - 1) <= Math.max(rel, 1e-6)
+		);
+		if (!listed)
+			return { failure: `ambiguous, reference not among ${JSON.stringify(e.candidates)}`, ambiguous: true, unreachable: false };
+		for (const hint of HINTS) {
+			try {
+				if (judge(fixState(fluid, inputs, { hint })) === null) return { failure: null, ambiguous: true, unreachable: false };
+			} catch (err) {
+				if (!(err instanceof ThermoError)) throw err;
+			}
+		}
+		return { failure: null, ambiguous: true, unreachable: true };
+	}
+}
