@@ -221,6 +221,13 @@ export function traceLeg(spec: LegSpec): LegTrace {
 			dir = hit1 ? first : first === 1 ? -1 : 1;
 		}
 	}
+	// a throttle only lowers the pressure: along constant h, ds = −(v/T)·dP
+	if (process === 'isenthalpic' && end.p.P > start.P * (1 + 1e-12))
+		throw new ThermoError(
+			'unreachable-target',
+			`A throttling (isenthalpic) leg can only lower the pressure — its entropy rises by ds = −(v/T)·dP — but this target needs P to rise from ${fmt(start.P)} to ${fmt(end.p.P)} Pa.`,
+			'Give a target at a lower pressure, or use another process (isentropic or polytropic compression).'
+		);
 	const pieces = piecesBetween(curve, pos0, startC, end, dir);
 	const sampled = samplePieces(curve, pieces, samples);
 	const points: State[] = sampled.map((sp) => stateOf(fl, sp.c));
