@@ -92,6 +92,8 @@ test.describe('accounts', () => {
 
 		await page.goto('/signin');
 		await page.getByRole('link', { name: 'Forgot the password?' }).click();
+		// the sign-in form has an E-mail field too: wait until the reset page has replaced it
+		await expect(page.getByRole('heading', { name: 'Reset your password' })).toBeVisible();
 		await page.getByLabel('E-mail').fill(email);
 		await page.getByRole('button', { name: 'Send reset link' }).click();
 		await expect(page.getByText('Check your mail')).toBeVisible();
@@ -115,6 +117,7 @@ test.describe('accounts', () => {
 		await expect(page.getByText('This reset link was already used')).toBeVisible();
 
 		await page.getByRole('button', { name: 'Sign out' }).click();
+		await expect(page).toHaveURL(/\/signin$/);
 		await page.getByLabel('E-mail').fill(email);
 		await page.getByLabel('Password').fill('the old password');
 		await page.getByRole('button', { name: 'Sign in' }).click();
