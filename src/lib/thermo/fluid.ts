@@ -332,14 +332,29 @@ export class Fluid {
 		return rec;
 	}
 
-	/** α⁰ and derivatives up to `order` at (δ, τ), into this.recI (overwritten by the next call). */
+	/**
+	 * α⁰ and derivatives up to `order` at (δ, τ), into this.recI (overwritten by the next call).
+	 * α⁰ depends on δ only through the lead term's ln δ, so the rest is cached for the last τ.
+	 */
 	idealAt(delta: number, tau: number, order: DerivativeOrder): AlphaRecord {
+		const cache = this.idealCache;
+		if (tau !== this.idealTau || order > this.idealOrder) {
+			cache.reset();
+			const ctx = this.idealCtx;
+			ctx.setLogs(1, tau); // ln δ = 0: the record holds everything but the ln δ of the lead term
+			const terms = this.ideal;
+			for (let i = 0; i < terms.length; i++) terms[i].add(ctx, order, cache);
+			this.idealTau = tau;
+			this.idealOrder = order;
+		}
 		const rec = this.recI;
-		rec.reset();
-		const ctx = this.ctx;
-		ctx.setLogs(delta, tau);
-		const terms = this.ideal;
-		for (let i = 0; i < terms.length; i++) terms[i].add(ctx, order, rec);
+		rec.copyFrom(cache);
+		rec.a += Math.log(delta);
 		return rec;
 	}
+
+	private readonly idealCache = new AlphaRecord();
+	private readonly idealCtx = new EvalContext(0, 0);
+	private idealTau = NaN;
+	private idealOrder = -1;
 }

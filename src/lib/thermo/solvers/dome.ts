@@ -38,9 +38,19 @@ function slopes(p: Point, dPs: number, y: Float64Array, d: Float64Array): void {
 	}
 }
 
-/** Fill `out` for temperature T (below Tc). */
+/**
+ * Fill `out` for temperature T (below Tc). When `out` already holds a nearby temperature, its
+ * densities and slopes start the saturation solve (ρ(T) ≈ ρ(T₀) + dρ/dT·(T − T₀)).
+ */
 export function evalSatLine(fl: Fluid, T: number, out: SatLine, sat?: SatPoint): SatLine {
-	const s = sat ?? satAtT(fl, T);
+	let guess: { rhoL: number; rhoV: number } | undefined;
+	if (!sat && out.T > 0 && Math.abs(T - out.T) < 0.05 * T) {
+		const dT = T - out.T;
+		const rL = out.sat.rhoL, rV = out.sat.rhoV;
+		guess = { rhoL: rL - rL * rL * out.dL[0] * dT, rhoV: rV - rV * rV * out.dV[0] * dT };
+		if (!(guess.rhoL > guess.rhoV && guess.rhoV > 0)) guess = undefined;
+	}
+	const s = sat ?? satAtT(fl, T, guess);
 	out.T = T;
 	out.sat = s;
 	evalPoint(fl, T, s.rhoL, out.pL, 2);
@@ -93,14 +103,23 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 	const b = IDX[target];
 	const n = nodes.n;
 	const G = new Float64Array(n);
-	const yL = [0, 0, 0, 0], yV = [0, 0, 0, 0];
-	for (let i = 0; i < n; i++) {
-		for (let k = 0; k < 4; k++) {
-			yL[k] = nodes.liq[k][i];
-			yV[k] = nodes.vap[k][i];
-		}
-		G[i] = gOf(spec, b, value, yL, yV)[1];
+	const bL = nodes.liq[b], bV = nodes.vap[b];
+	let any = false;
+	if ('x' in spec) {
+		const x = spec.x;
+		for (let i = 0; i < n; i++) G[i] = bL[i] + x * (bV[i] - bL[i]) - value;
+	} else {
+		const a = IDX[spec.prop], A = spec.value;
+		const aL = nodes.liq[a], aV = nodes.vap[a];
+		for (let i = 0; i < n; i++) G[i] = bL[i] + ((A - aL[i]) / (aV[i] - aL[i])) * (bV[i] - bL[i]) - value;
 	}
+	// nothing to refine when G keeps one sign and |G| never dips (the common single-phase case)
+	for (let i = 1; i < n && !any; i++) {
+		if (G[i] < 0 !== G[i - 1] < 0) any = true;
+		else if (i < n - 1 && Math.abs(G[i]) < Math.abs(G[i - 1]) && Math.abs(G[i]) < Math.abs(G[i + 1])) any = true;
+	}
+	if (!any && !(Math.abs(G[0]) <= 1e-6 * Math.abs(G[1] - G[0])) && !(Math.abs(G[n - 1]) <= 1e-6 * Math.abs(G[n - 2] - G[n - 1])))
+		return [];
 	const line = new SatLine();
 	const roots: DomeRoot[] = [];
 	const fn = (T: number): [number, number, number] => {
@@ -119,13 +138,24 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 			} else c = T;
 			let next = T - g / dg;
 			const lo = Math.min(a, c), hi = Math.max(a, c);
+			// Newton converges quadratically: a predicted step this small is the remaining error
+			if (Math.abs(next - T) <= 1e-13 * T && next > lo && next < hi) return accept(x);
 			if (!(next > lo && next < hi)) next = 0.5 * (a + c);
-			if (Math.abs(next - T) <= 1e-14 * T || hi - lo <= 1e-14 * T) {
-				const r = fn(next);
-				return accept(r[0]);
-			}
+			if (hi - lo <= 1e-14 * T) return accept(x);
 			T = next;
 		}
+	};
+	/** start for a bracket [i, i+1]: inverse quadratic through three nodes, else the secant */
+	const start = (i: number): number => {
+		const Ta = nodes.T[i], Tb = nodes.T[i + 1], Ga = G[i], Gb = G[i + 1];
+		const lin = Ta - (Ga * (Tb - Ta)) / (Gb - Ga);
+		const k = i > 0 ? i - 1 : i + 2;
+		if (k >= n) return lin;
+		const Tk = nodes.T[k], Gk = G[k];
+		if (Gk === Ga || Gk === Gb) return lin;
+		const q =
+			(Ta * Gb * Gk) / ((Ga - Gb) * (Ga - Gk)) + (Tb * Ga * Gk) / ((Gb - Ga) * (Gb - Gk)) + (Tk * Ga * Gb) / ((Gk - Ga) * (Gk - Gb));
+		return q > Math.min(Ta, Tb) && q < Math.max(Ta, Tb) ? q : lin;
 	};
 	const accept = (x: number) => {
 		// keep round-off overshoots; callers place the state (twoPhaseAt) and drop real outsiders
@@ -144,16 +174,27 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 			if (Math.abs(g) <= 1e-8 * Math.abs(G[j] - G[i])) accept(x);
 		}
 	}
+	// quality at a node (for a property-fixed quality), to skip roots that would lie outside 0…1
+	const xAt = (i: number): number => {
+		if ('x' in spec) return spec.x;
+		const a = IDX[spec.prop];
+		return (spec.value - nodes.liq[a][i]) / (nodes.vap[a][i] - nodes.liq[a][i]);
+	};
+	const outside = (i: number, j: number): boolean => {
+		const xa = xAt(i), xb = xAt(j);
+		return (xa < -0.01 && xb < -0.01) || (xa > 1.01 && xb > 1.01);
+	};
 	for (let i = 0; i < n - 1; i++) {
 		const Ga = G[i], Gb = G[i + 1];
 		if (!Number.isFinite(Ga) || !Number.isFinite(Gb)) continue;
+		if (outside(i, i + 1) && (i === 0 || outside(i - 1, i + 1))) continue;
 		const Ta = nodes.T[i], Tb = nodes.T[i + 1];
 		if (Ga === 0) {
 			refine(Ta, Ga, Tb, Gb, Ta);
 			continue;
 		}
 		if (Ga < 0 !== Gb < 0) {
-			refine(Ta, Ga, Tb, Gb, Ta - (Ga * (Tb - Ta)) / (Gb - Ga));
+			refine(Ta, Ga, Tb, Gb, start(i));
 			continue;
 		}
 		// near-miss: a turning point between nodes may cross zero; test the parabola through three nodes

@@ -30,7 +30,6 @@ import { checkP, checkT } from './range.ts';
 
 /** Canonical property keys after v → rho: order used to name pairs. */
 export type Key = 'T' | 'P' | 'rho' | 'u' | 'h' | 's' | 'x';
-const ORDER: Key[] = ['T', 'P', 'rho', 'u', 'h', 's', 'x'];
 const NAMES: readonly InputName[] = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'];
 
 export type Flash = (fl: Fluid, a: number, b: number, options: FixOptions) => State;
@@ -65,40 +64,59 @@ function unit(k: InputName): string {
 }
 
 /** Parse and check the inputs: exactly two known, finite properties in range. */
+const RANK: Record<InputName, number> = { T: 0, P: 1, v: 2, rho: 2, u: 3, h: 4, s: 5, x: 6 };
+
 export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, number] {
 	if (typeof inputs !== 'object' || inputs === null)
 		throw new ThermoError('wrong-input-count', 'Inputs must be an object holding two properties.', 'Give exactly two of T, P, v, rho, u, h, s, x.');
-	const given = Object.keys(inputs).filter((k) => (inputs as Record<string, unknown>)[k] !== undefined);
-	for (const k of given)
-		if (!NAMES.includes(k as InputName))
+	// one pass over the keys, no allocation on the common path
+	let k1: InputName | null = null, k2: InputName | null = null, count = 0;
+	const rec = inputs as Record<string, unknown>;
+	for (const k in rec) {
+		if (rec[k] === undefined) continue;
+		if (RANK[k as InputName] === undefined || !NAMES.includes(k as InputName))
 			throw new ThermoError('unknown-input', `Unknown input "${k}".`, 'Give exactly two of T, P, v, rho, u, h, s, x (SI units).');
-	if (given.includes('v') && given.includes('rho'))
-		throw new ThermoError(
-			'duplicate-property',
-			'v and rho are the same property (rho = 1/v); they cannot fix a state together.',
-			'Give one of v or rho together with one of T, P, u, h, s, x.'
-		);
-	if (given.length !== 2)
+		count++;
+		if (count === 1) k1 = k as InputName;
+		else if (count === 2) k2 = k as InputName;
+	}
+	if (count !== 2 || k1 === null || k2 === null) {
+		const given = Object.keys(rec).filter((k) => rec[k] !== undefined);
+		if (given.includes('v') && given.includes('rho'))
+			throw new ThermoError(
+				'duplicate-property',
+				'v and rho are the same property (rho = 1/v); they cannot fix a state together.',
+				'Give one of v or rho together with one of T, P, u, h, s, x.'
+			);
 		throw new ThermoError(
 			'wrong-input-count',
 			`A state needs exactly two independent properties; got ${given.length}${given.length ? ` (${given.join(', ')})` : ''}.`,
 			'Give exactly two of T, P, v, rho, u, h, s, x.'
 		);
-	const vals: Partial<Record<Key, number>> = {};
-	for (const k of given as InputName[]) {
-		const val = (inputs as Record<string, unknown>)[k];
-		if (typeof val !== 'number' || !Number.isFinite(val))
-			throw new ThermoError('non-finite-input', `${k} must be a finite number (got ${String(val)}).`, `Give ${k} as a finite number in ${unit(k) || 'SI units'}.`);
-		if ((k === 'T' || k === 'P' || k === 'v' || k === 'rho') && !(val > 0))
-			throw new ThermoError('non-positive-input', `${k} must be positive (got ${fmt(val)}); the engine uses absolute values.`, `Give ${k} in ${unit(k)} as a positive absolute value (for example kelvin, not °C; absolute, not gauge pressure).`);
-		if (k === 'x' && !(val >= 0 && val <= 1))
-			throw new ThermoError('quality-out-of-range', `The quality x must lie between 0 and 1 (got ${fmt(val)}).`, 'Give x as a mass fraction of vapor from 0 (saturated liquid) to 1 (saturated vapor), or give the state by two other properties.');
-		vals[k === 'v' ? 'rho' : k] = k === 'v' ? 1 / val : val;
 	}
-	if (vals.T !== undefined) checkT(fl, vals.T);
-	if (vals.P !== undefined) checkP(fl, vals.P);
-	const keys = ORDER.filter((k) => vals[k] !== undefined);
-	return [keys[0], vals[keys[0]] as number, keys[1], vals[keys[1]] as number];
+	if (RANK[k1] === RANK[k2])
+		throw new ThermoError(
+			'duplicate-property',
+			'v and rho are the same property (rho = 1/v); they cannot fix a state together.',
+			'Give one of v or rho together with one of T, P, u, h, s, x.'
+		);
+	const a = checkValue(fl, k1, rec[k1]);
+	const b = checkValue(fl, k2, rec[k2]);
+	const ka: Key = k1 === 'v' ? 'rho' : (k1 as Key), kb: Key = k2 === 'v' ? 'rho' : (k2 as Key);
+	return RANK[k1] < RANK[k2] ? [ka, a, kb, b] : [kb, b, ka, a];
+}
+
+/** A finite number in range for its property (v returned as rho = 1/v). */
+function checkValue(fl: Fluid, k: InputName, val: unknown): number {
+	if (typeof val !== 'number' || !Number.isFinite(val))
+		throw new ThermoError('non-finite-input', `${k} must be a finite number (got ${String(val)}).`, `Give ${k} as a finite number in ${unit(k) || 'SI units'}.`);
+	if ((k === 'T' || k === 'P' || k === 'v' || k === 'rho') && !(val > 0))
+		throw new ThermoError('non-positive-input', `${k} must be positive (got ${fmt(val)}); the engine uses absolute values.`, `Give ${k} in ${unit(k)} as a positive absolute value (for example kelvin, not °C; absolute, not gauge pressure).`);
+	if (k === 'x' && !(val >= 0 && val <= 1))
+		throw new ThermoError('quality-out-of-range', `The quality x must lie between 0 and 1 (got ${fmt(val)}).`, 'Give x as a mass fraction of vapor from 0 (saturated liquid) to 1 (saturated vapor), or give the state by two other properties.');
+	if (k === 'T') checkT(fl, val);
+	if (k === 'P') checkP(fl, val);
+	return k === 'v' ? 1 / val : val;
 }
 
 /** Fix a state from two properties (see index.ts fixState). */

@@ -68,6 +68,8 @@ function solveAlongIsobar(
 		return propValue(p, which) - y;
 	};
 	const slope = () => propDT(p, which) - (propDrho(p, which) * p.dPdT) / p.dPdrho;
+	const fast = newtonTRho(fl, P, which, y, branch, Ta, Tb, T0, rho0, p, g);
+	if (fast) return fast;
 	let T = T0;
 	// rtsafe rule (Numerical Recipes): bisect when Newton leaves the bracket or stops halving
 	let dxOld = Tb - Ta, dx = dxOld;
@@ -106,6 +108,64 @@ function solveAlongIsobar(
 			return p;
 		}
 		T = next;
+	}
+	return null;
+}
+
+/**
+ * Fast path along an isobar: Newton in (T, ln ρ) on P(T, ρ) = P and y(T, ρ) = y at once (one
+ * evaluation per step), from the density at T0. Gives up (null) if T leaves [Ta, Tb], the density
+ * leaves the branch, or it does not settle in 30 steps; the bracketed search then takes over.
+ */
+function newtonTRho(
+	fl: Fluid,
+	P: number,
+	which: EnergyProp,
+	y: number,
+	branch: Branch,
+	Ta: number,
+	Tb: number,
+	T0: number,
+	rho0: number,
+	p: Point,
+	g: SatGuess
+): Point | null {
+	let T = T0;
+	const r0 = rhoOnBranch(fl, T, P, branch, rho0, g);
+	if (!(r0 > 0)) return null;
+	let z = Math.log(r0);
+	const sy = which === 's' ? fl.R : fl.R * fl.Tc;
+	let lastT = Infinity, lastZ = Infinity, noisy = 0;
+	for (let it = 0; it < 30; it++) {
+		const rho = Math.exp(z);
+		evalPoint(fl, T, rho, p, 2);
+		const r1 = p.P / P - 1;
+		const r2 = (propValue(p, which) - y) / sy;
+		const j11 = p.dPdT / P, j12 = (p.dPdrho * rho) / P;
+		const j21 = propDT(p, which) / sy, j22 = (propDrho(p, which) * rho) / sy;
+		const det = j11 * j22 - j12 * j21;
+		if (!Number.isFinite(det) || det === 0 || !(p.dPdrho > 0)) return null;
+		let dT = -(r1 * j22 - j12 * r2) / det;
+		let dz = -(j11 * r2 - r1 * j21) / det;
+		const m = Math.max(1, Math.abs(dT) / (0.1 * T), Math.abs(dz) / 0.5);
+		dT /= m;
+		dz /= m;
+		const tiny = Math.abs(dT) <= 1e-14 * T && Math.abs(dz) <= 1e-14;
+		noisy = Math.abs(r1) < 1e-11 && Math.abs(r2) < 1e-11 && Math.abs(dT) >= 0.5 * lastT && Math.abs(dz) >= 0.5 * lastZ ? noisy + 1 : 0;
+		lastT = Math.abs(dT);
+		lastZ = Math.abs(dz);
+		T += dT;
+		z += dz;
+		if (!(T >= Ta && T <= Tb)) return null;
+		if (branch !== 'any' && T < fl.Tc) {
+			satGuess(fl, T, g);
+			const r = Math.exp(z);
+			if (branch === 'liquid' ? r < g.rhoL * (1 - M) : r > g.rhoV * (1 + M)) return null;
+		}
+		if (tiny || noisy >= 2) {
+			evalPoint(fl, T, Math.exp(z), p, 2);
+			return Math.abs(p.P / P - 1) < 1e-9 ? p : null;
+		}
 	}
 	return null;
 }

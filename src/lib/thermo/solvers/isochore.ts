@@ -1,9 +1,9 @@
 /**
  * States at fixed density with a given u, h or s. Along an isochore u, h and s all rise with T
  * (du = cv·dT, ds = cv/T·dT, dh = (cv + v(∂P/∂T)_v)dT in one phase, likewise across the dome), so
- * there is one answer; both the two-phase part (domeRoots with the quality fixed by v) and the
- * single-phase stretches of the isochore (outside the dome, from the saturation table's densities)
- * are searched, and the candidates checked.
+ * there is one answer: the single-phase stretches of the isochore (outside the dome, from the
+ * saturation table's densities) are searched first, and only if none holds it the two-phase part
+ * (domeRoots with the quality fixed by v).
  */
 import { fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
@@ -45,14 +45,6 @@ export function flashRhoY(fl: Fluid, rho: number, which: EnergyProp, y: number, 
 	const what = `ρ = ${fmt(rho)} kg/m³ and ${which} = ${fmt(y)} ${UNIT[which]}`;
 	const found: State[] = [];
 	const nd = domeNodes(fl);
-	let maxRhoL = 0;
-	for (let i = 0; i < nd.n; i++) maxRhoL = Math.max(maxRhoL, nd.rhoL[i]);
-	if (rho > nd.rhoV[0] * (1 - 1e-6) && rho < maxRhoL * (1 + 1e-6)) {
-		for (const r of domeRoots(fl, { prop: 'v', value: 1 / rho }, which, y)) {
-			const st = twoPhaseAt(fl, r.sat, r.x);
-			if (st) found.push(st);
-		}
-	}
 	const p = new Point();
 	const fn = (T: number, out: FD) => {
 		evalPoint(fl, T, rho, p, 2);
@@ -86,6 +78,16 @@ export function flashRhoY(fl: Fluid, rho: number, which: EnergyProp, y: number, 
 			}
 			if (p.P > fl.Pmax * (1 + 1e-9)) continue;
 			found.push(singleState(fl, p, loc.phase));
+		}
+	}
+	// y rises with T along the whole isochore (one answer): a single-phase one ends the search
+	if (found.length > 0) return choose(fl, found, hint, what, () => noStateInRange(fl, what));
+	let maxRhoL = 0;
+	for (let i = 0; i < nd.n; i++) maxRhoL = Math.max(maxRhoL, nd.rhoL[i]);
+	if (rho > nd.rhoV[0] * (1 - 1e-6) && rho < maxRhoL * (1 + 1e-6)) {
+		for (const r of domeRoots(fl, { prop: 'v', value: 1 / rho }, which, y)) {
+			const st = twoPhaseAt(fl, r.sat, r.x);
+			if (st) found.push(st);
 		}
 	}
 	return choose(fl, found, hint, what, () => noStateInRange(fl, what));

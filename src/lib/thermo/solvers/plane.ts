@@ -120,69 +120,85 @@ function boxes(g: Grid, a: EnergyProp, b: EnergyProp): Float64Array[] {
 	return bx;
 }
 
+/** Starting points (T, ln ρ) for the 2-D Newton, best first. */
+export interface Starts {
+	/** barycentric points of cells with the target inside one of their two triangles */
+	inside: [number, number][];
+	/** centres of cells whose bounding box holds the target but neither triangle does */
+	centres: [number, number][];
+	/** the nearest node, when no cell holds the target (e.g. below the grid's lowest pressure) */
+	nearest: [number, number][];
+}
+
+function barycentric(Ya: Float64Array, Yb: Float64Array, p0: number, p1: number, p2: number, A: number, B: number): [number, number, number] | null {
+	const x0 = Ya[p0], y0 = Yb[p0];
+	const d = (Ya[p1] - x0) * (Yb[p2] - y0) - (Ya[p2] - x0) * (Yb[p1] - y0);
+	if (d === 0) return null;
+	const l1 = ((A - x0) * (Yb[p2] - y0) - (Ya[p2] - x0) * (B - y0)) / d;
+	const l2 = ((Ya[p1] - x0) * (B - y0) - (A - x0) * (Yb[p1] - y0)) / d;
+	const l0 = 1 - l1 - l2;
+	return l0 >= -0.05 && l1 >= -0.05 && l2 >= -0.05 ? [l0, l1, l2] : null;
+}
+
 /**
- * Starting points (T, ln ρ): every grid cell across which both residuals change sign (the target
- * lies in the cell's bounding box in the (a, b) plane). The start is the barycentric point when the
- * target lies inside one of the cell's two triangles (listed first), else the cell's centre — cells
- * on dilute-vapor isotherms are nearly degenerate in (u, h), where only the centre is usable.
+ * Starting points: every grid cell across which both residuals change sign (the target lies in
+ * the cell's bounding box in the (a, b) plane). The start is the barycentric point when the target
+ * lies inside one of the cell's two triangles, else the cell's centre — cells on dilute-vapor
+ * isotherms are nearly degenerate in (u, h), where only the centre is usable.
  */
-export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number): [number, number][] {
+export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number): Starts {
 	const g = grid(fl);
 	const bx = boxes(g, a, b);
-	const inTri: [number, number][] = [];
-	const centres: [number, number][] = [];
-	let best: [number, number] | null = null;
-	let bestD = Infinity;
-	g.branches.forEach((br, bi) => {
+	const out: Starts = { inside: [], centres: [], nearest: [] };
+	const ia = YI[a], ib = YI[b];
+	for (let bi = 0; bi < g.branches.length; bi++) {
+		const br = g.branches[bi];
 		const nj = br.nj;
 		const box = bx[bi];
-		const Ya = br.y[YI[a]], Yb = br.y[YI[b]];
-		for (let i = 0; i < g.nt - 1; i++)
-			for (let j = 0; j < nj - 1; j++) {
-				const o = (i * (nj - 1) + j) * 4;
-				const wa = 1e-9 * Math.abs(A) + 1e-6 * (box[o + 1] - box[o]);
-				const wb = 1e-9 * Math.abs(B) + 1e-6 * (box[o + 3] - box[o + 2]);
-				if (A < box[o] - wa || A > box[o + 1] + wa || B < box[o + 2] - wb || B > box[o + 3] + wb) continue;
-				const c = [i * nj + j, i * nj + j + 1, (i + 1) * nj + j + 1, (i + 1) * nj + j];
-				let hit = false;
-				for (const [p0, p1, p2] of [
-					[c[0], c[1], c[2]],
-					[c[0], c[2], c[3]]
-				]) {
-					const x0 = Ya[p0], y0 = Yb[p0];
-					const d = (Ya[p1] - x0) * (Yb[p2] - y0) - (Ya[p2] - x0) * (Yb[p1] - y0);
-					if (d === 0) continue;
-					const l1 = ((A - x0) * (Yb[p2] - y0) - (Ya[p2] - x0) * (B - y0)) / d;
-					const l2 = ((Ya[p1] - x0) * (B - y0) - (A - x0) * (Yb[p1] - y0)) / d;
-					const l0 = 1 - l1 - l2;
-					if (l0 >= -0.05 && l1 >= -0.05 && l2 >= -0.05) {
-						inTri.push([
-							l0 * br.T[p0] + l1 * br.T[p1] + l2 * br.T[p2],
-							l0 * br.lnRho[p0] + l1 * br.lnRho[p1] + l2 * br.lnRho[p2]
-						]);
-						hit = true;
-						break;
-					}
-				}
-				if (!hit)
-					centres.push([
-						0.25 * (br.T[c[0]] + br.T[c[1]] + br.T[c[2]] + br.T[c[3]]),
-						0.25 * (br.lnRho[c[0]] + br.lnRho[c[1]] + br.lnRho[c[2]] + br.lnRho[c[3]])
-					]);
+		const Ya = br.y[ia], Yb = br.y[ib];
+		const cells = (g.nt - 1) * (nj - 1);
+		for (let cell = 0; cell < cells; cell++) {
+			const o = cell * 4;
+			const lo0 = box[o], hi0 = box[o + 1], lo1 = box[o + 2], hi1 = box[o + 3];
+			const wa = 1e-9 * Math.abs(A) + 1e-6 * (hi0 - lo0);
+			if (A < lo0 - wa || A > hi0 + wa) continue;
+			const wb = 1e-9 * Math.abs(B) + 1e-6 * (hi1 - lo1);
+			if (B < lo1 - wb || B > hi1 + wb) continue;
+			const i = (cell / (nj - 1)) | 0, j = cell - i * (nj - 1);
+			const c0 = i * nj + j, c1 = c0 + 1, c3 = c0 + nj, c2 = c3 + 1;
+			let w = barycentric(Ya, Yb, c0, c1, c2, A, B);
+			let tri = [c0, c1, c2];
+			if (!w) {
+				w = barycentric(Ya, Yb, c0, c2, c3, A, B);
+				tri = [c0, c2, c3];
 			}
-		// the nearest node, a last resort for targets outside the grid (e.g. below its lowest pressure)
-		for (let q = 0; q < g.nt * nj; q++) {
+			if (w) {
+				out.inside.push([
+					w[0] * br.T[tri[0]] + w[1] * br.T[tri[1]] + w[2] * br.T[tri[2]],
+					w[0] * br.lnRho[tri[0]] + w[1] * br.lnRho[tri[1]] + w[2] * br.lnRho[tri[2]]
+				]);
+			} else {
+				out.centres.push([
+					0.25 * (br.T[c0] + br.T[c1] + br.T[c2] + br.T[c3]),
+					0.25 * (br.lnRho[c0] + br.lnRho[c1] + br.lnRho[c2] + br.lnRho[c3])
+				]);
+			}
+		}
+	}
+	if (out.inside.length + out.centres.length > 0) return out;
+	let bestD = Infinity;
+	for (const br of g.branches) {
+		const Ya = br.y[ia], Yb = br.y[ib];
+		for (let q = 0; q < g.nt * br.nj; q++) {
 			const da = (Ya[q] - A) / (fl.R * fl.Tc), db = (Yb[q] - B) / (fl.R * fl.Tc);
 			const dist = da * da + db * db;
 			if (dist < bestD) {
 				bestD = dist;
-				best = [br.T[q], br.lnRho[q]];
+				out.nearest = [[br.T[q], br.lnRho[q]]];
 			}
 		}
-	});
-	const res = [...inTri, ...centres];
-	if (best) res.push(best);
-	return res;
+	}
+	return out;
 }
 
 /**
@@ -240,13 +256,28 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		const st = twoPhaseAt(fl, r.sat, r.x);
 		if (st) found.push(st);
 	}
+	// (h, s) is one-to-one across the dome (Mollier): a compressed liquid with entropy s lies above
+	// h'(T) + v'-weighted pressure work, every mixture with that s below it; a two-phase answer ends
+	// the search
+	if (found.length > 0 && ((a === 's' && b === 'h') || (a === 'h' && b === 's'))) return choose(fl, found, hint, what, () => noStateInRange(fl, what));
 	const p = new Point();
 	const dT = (fl.Tmax - fl.Tmin) / (NT_UNIFORM - 1);
 	const accepted: [number, number][] = [];
 	const metastable: [number, number][] = [];
-	const queue = starts(fl, a, A, b, B);
+	const st = starts(fl, a, A, b, B);
+	// cells holding the target first; centres of the other candidate cells only if none gave a
+	// state — except for (u, h), whose dilute-vapor cells are degenerate and only reached that way
+	const degenerate = (a === 'u' && b === 'h') || (a === 'h' && b === 'u');
+	const queue: [number, number][] = [...st.inside, ...st.nearest, ...(degenerate ? st.centres : [])];
+	let centresQueued = degenerate;
 	let runs = 0;
-	while (queue.length > 0 && runs < 24) {
+	while (runs < 24) {
+		if (queue.length === 0) {
+			if (centresQueued || accepted.length > 0) break;
+			queue.push(...st.centres);
+			centresQueued = true;
+			if (queue.length === 0) break;
+		}
 		const [T0, z0] = queue.shift() as [number, number];
 		// a start within a grid cell of an accepted state leads to the same state
 		if (accepted.some(([T, z]) => Math.abs(T - T0) < dT && Math.abs(z - z0) < 0.5)) continue;

@@ -257,13 +257,16 @@ export function satGuess(fl: Fluid, T: number, out: SatGuess): SatGuess {
 
 /**
  * Saturation at temperature T (K), Tt ≤ T ≤ Tc. Returns T, P (Pa) and the two densities (kg/m³).
+ * `guess` (densities near T, e.g. from a neighbouring solve) replaces the table's start.
  * Within CRITICAL_BAND·Tc of Tc it returns the critical point. Throws `no-convergence` on failure.
  */
-export function satAtT(fl: Fluid, T: number): SatPoint {
+export function satAtT(fl: Fluid, T: number, guess?: { rhoL: number; rhoV: number }): SatPoint {
 	if (T >= fl.Tc * (1 - CRITICAL_BAND)) return { T, P: fl.Pc, rhoL: fl.rhoc, rhoV: fl.rhoc };
-	const g = satGuess(fl, T, { P: 0, rhoL: 0, rhoV: 0 });
 	const out: AkasakaOut = { dL: 0, dV: 0, P: 0 };
-	let ok = akasaka(fl, T, g.rhoL / fl.rhor, g.rhoV / fl.rhor, out);
+	let ok = false;
+	if (guess) ok = akasaka(fl, T, guess.rhoL / fl.rhor, guess.rhoV / fl.rhor, out);
+	const g = ok ? null : satGuess(fl, T, { P: 0, rhoL: 0, rhoV: 0 });
+	if (g) ok = akasaka(fl, T, g.rhoL / fl.rhor, g.rhoV / fl.rhor, out);
 	if (!ok) ok = akasaka(fl, T, fl.ancRhoL.value(T) / fl.rhor, fl.ancRhoV.value(T) / fl.rhor, out);
 	if (!ok)
 		throw new ThermoError(

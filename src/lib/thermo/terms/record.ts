@@ -7,7 +7,8 @@
  *   t1 = τ·α_τ,  t2 = τ²·α_ττ,  t3 = τ³·α_τττ,
  *   dt = δτ·α_δτ,  d2t = δ²τ·α_δδτ,  dt2 = δτ²·α_δττ.
  * `order` says how far a term must go: 0 → a; 1 → + d1, t1; 2 → + d2, t2, dt; 3 → + d3, t3, d2t, dt2.
- * Fields above the requested order are left at zero.
+ * Fields above the requested order are left at zero by the terms (a fluid's cached ideal part may
+ * carry higher orders from an earlier call).
  */
 
 export type DerivativeOrder = 0 | 1 | 2 | 3;
