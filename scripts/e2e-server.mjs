@@ -2,11 +2,12 @@
 import { rmSync, mkdirSync } from 'node:fs';
 import { spawn } from 'node:child_process';
 
-const dir = 'tmp/e2e';
+const port = process.env.PORT ?? '4317';
+// one directory per port, so a second run on another port (E2E_PORT) never deletes this one's database
+const dir = `tmp/e2e-${port}`;
 rmSync(dir, { recursive: true, force: true });
 mkdirSync(dir, { recursive: true });
 
-const port = process.env.PORT ?? '4317';
 const child = spawn(process.execPath, ['build/index.js'], {
 	stdio: 'inherit',
 	env: {
