@@ -1,0 +1,210 @@
+import { createHash, randomUUID } from 'node:crypto';
+import { json, type RequestEvent } from '@sveltejs/kit';
+import { ZodError, type z } from 'zod';
+import { ThermoError, type ThermoErrorCode } from '$lib/thermo';
+import { jsonError } from '$lib/server/api';
+import { AppError } from '$lib/server/errors';
+import { createLimiter, retryAfterSeconds, type Limiter } from '$lib/server/rate-limit';
+import { clientIp } from '$lib/server/request';
+
+/*
+ * Glue between the compute routes (/api/v1/fluids, /states, /legs, /paths) and the engine.
+ * Compute routes touch no stored data and need no sign-in.
+ *
+ * Status codes (error body { "error": { "code", "message", "hint"?, "issues"?, "field"?, "candidates"? } }):
+ *   200  the answer
+ *   304  a GET whose ETag matches If-None-Match
+ *   400  malformed request: not JSON, wrong shape or types, unknown fields, values out of their
+ *        plain range (negative absolute P, x > 1, samples, too many isoline values…): code
+ *        `invalid-json` or `invalid-input` (with `issues` naming each field), or the engine's
+ *        input codes (wrong-input-count, non-positive-input, quality-out-of-range, invalid-leg,
+ *        invalid-path, invalid-option, unknown-fluid in a body…)
+ *   404  unknown fluid in the URL (code `unknown-fluid`, the message lists the fluids)
+ *   405  wrong method (the foundation's hooks answer in the same shape)
+ *   413  body over 64 kB (code `too-large`)
+ *   415  body not sent as application/json (code `unsupported-media-type`)
+ *   422  well-formed but the engine cannot answer: unreachable-target, target-is-invariant,
+ *        out-of-range, below-triple-point, two-phase-pressure-temperature, inconsistent-inputs,
+ *        ambiguous-state, no-convergence… — also any unexpected failure while computing
+ *        (code `compute-failed`, logged with a reference): never a 5xx for what a client sends
+ *   429  over COMPUTE_RATE_LIMIT requests per second from one client (bursts of twice that),
+ *        with Retry-After in seconds (code `rate-limited`)
+ */
+
+/** Largest request body, bytes. */
+export const MAX_BODY_BYTES = 64 * 1024;
+
+/** Engine codes that mean the request itself was malformed (400); the rest are 422. */
+const BAD_REQUEST_CODES = new Set<ThermoErrorCode>([
+	'unknown-input',
+	'wrong-input-count',
+	'duplicate-property',
+	'non-finite-input',
+	'non-positive-input',
+	'quality-out-of-range',
+	'invalid-option',
+	'invalid-leg',
+	'invalid-path',
+	'unknown-fluid'
+]);
+
+export function thermoStatus(code: ThermoErrorCode): number {
+	return BAD_REQUEST_CODES.has(code) ? 400 : 422;
+}
+
+let limiter: Limiter | undefined;
+
+/** The compute limiter: COMPUTE_RATE_LIMIT requests/s per client (default 100, bursts 2×, 0 = off). */
+export function computeLimiter(): Limiter {
+	if (!limiter) {
+		const raw = process.env.COMPUTE_RATE_LIMIT;
+		const rate = raw === undefined || raw.trim() === '' ? 100 : Number(raw);
+		const ok = Number.isFinite(rate) && rate >= 0;
+		if (!ok) console.warn(`[statewright] COMPUTE_RATE_LIMIT="${raw}" is not a number ≥ 0; using 100.`);
+		const r = ok ? rate : 100;
+		limiter = createLimiter({ ratePerSecond: r, burst: Math.max(1, 2 * r) });
+	}
+	return limiter;
+}
+
+function issueText(issues: z.core.$ZodIssue[]): { message: string; issues: { path: string; message: string }[] } {
+	const list = issues.map((i) => {
+		const path = i.path.map(String).join('.');
+		let message = i.message;
+		if (i.code === 'unrecognized_keys' && !/^Unknown field/.test(message)) {
+			const keys = (i as { keys: string[] }).keys;
+			message = `Unknown field${keys.length > 1 ? 's' : ''} ${keys.map((k) => `"${k}"`).join(', ')}${path ? ` in ${path}` : ''}; remove ${keys.length > 1 ? 'them' : 'it'} (names are case-sensitive, values SI).`;
+		} else if (i.code === 'invalid_type' && /expected object/.test(message)) message = `${path || 'The body'} must be a JSON object.`;
+		return { path, message };
+	});
+	const message = list.map((i) => (i.path && !i.message.includes(i.path) ? `${i.path}: ${i.message}` : i.message)).join(' ');
+	return { message, issues: list };
+}
+
+/** Turn anything thrown while computing into the error shape; never a 5xx. */
+export function computeError(e: unknown, event: RequestEvent): Response {
+	if (e instanceof AppError) {
+		const headers: Record<string, string> = {};
+		if (e.retryAfterMs !== undefined) headers['retry-after'] = retryAfterSeconds({ retryAfterMs: e.retryAfterMs });
+		return jsonError(e.status, e.code, e.message, {}, headers);
+	}
+	if (e instanceof ZodError) {
+		const { message, issues } = issueText(e.issues);
+		return jsonError(400, 'invalid-input', message, { issues });
+	}
+	if (e instanceof ThermoError) {
+		const extra: Record<string, unknown> = {};
+		if (e.hint) extra.hint = e.hint;
+		if (e.field !== undefined) extra.field = e.field;
+		if (e.candidates !== undefined) extra.candidates = e.candidates;
+		return jsonError(thermoStatus(e.code), e.code, e.message, extra);
+	}
+	const ref = randomUUID().slice(0, 8);
+	console.error(`[statewright] compute ${ref} ${event.request.method} ${event.url.pathname}`, e);
+	return jsonError(422, 'compute-failed', `This request could not be computed (reference ${ref}). Please report it with the request body.`);
+}
+
+function rateLimited(event: RequestEvent): Response | null {
+	const r = computeLimiter().take(clientIp(event) ?? 'unknown');
+	if (r.allowed) return null;
+	const after = retryAfterSeconds(r);
+	const rate = process.env.COMPUTE_RATE_LIMIT?.trim() || '100';
+	return jsonError(429, 'rate-limited', `Too many compute requests: at most ${rate} per second from one client (bursts of twice that). Retry after ${after} s.`, {}, { 'retry-after': after });
+}
+
+/** Read a JSON body: application/json, at most MAX_BODY_BYTES, parsed and checked by `schema`. */
+export async function readBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+	const type = request.headers.get('content-type') ?? '';
+	if (!/^application\/(?:[\w.+-]+\+)?json\b/i.test(type))
+		throw new AppError(415, 'unsupported-media-type', `Send the body as JSON with "Content-Type: application/json" (got ${type ? `"${type.slice(0, 60)}"` : 'no content type'}).`);
+	const tooLarge = () => new AppError(413, 'too-large', `The body is larger than ${MAX_BODY_BYTES / 1024} kB; a path of 50 legs fits easily in that. Send a smaller request.`);
+	const declared = Number(request.headers.get('content-length'));
+	if (Number.isFinite(declared) && declared > MAX_BODY_BYTES) throw tooLarge();
+	let text = '';
+	if (request.body) {
+		const reader = request.body.getReader();
+		const chunks: Uint8Array[] = [];
+		let size = 0;
+		try {
+			for (;;) {
+				const { done, value } = await reader.read();
+				if (done) break;
+				size += value.byteLength;
+				// past the limit keep draining (bounded by the server's BODY_SIZE_LIMIT): cancelling the
+				// stream would drop the connection before the 413 is sent
+				if (size <= MAX_BODY_BYTES) chunks.push(value);
+			}
+		} catch (e) {
+			// the server's own body limit (adapter-node BODY_SIZE_LIMIT) or a dropped upload
+			if ((e as { status?: number }).status === 413) throw tooLarge();
+			throw new AppError(400, 'invalid-json', 'The request body could not be read completely.');
+		}
+		if (size > MAX_BODY_BYTES) throw tooLarge();
+		text = Buffer.concat(chunks).toString('utf8');
+	}
+	if (text.trim() === '') throw new AppError(400, 'invalid-json', 'The body is empty; send a JSON object (see the API documentation for its fields).');
+	let value: unknown;
+	try {
+		value = JSON.parse(text);
+	} catch (e) {
+		throw new AppError(400, 'invalid-json', `The body is not valid JSON (${(e as Error).message.slice(0, 120)}). Numbers must be plain JSON numbers: no NaN, Infinity or units.`);
+	}
+	return schema.parse(value);
+}
+
+/** Check URL query parameters against `schema` (each parameter once). */
+export function readQuery<S extends z.ZodType>(url: URL, schema: S): z.infer<S> {
+	const obj: Record<string, string> = {};
+	for (const [k, v] of url.searchParams) {
+		if (k in obj) throw new AppError(400, 'invalid-input', `The query parameter "${k}" is given more than once.`);
+		obj[k] = v;
+	}
+	return schema.parse(obj);
+}
+
+/** A POST compute route: rate limit, then the handler's object as JSON, errors in the shape. */
+export function computePost<E extends RequestEvent>(handler: (event: E) => Promise<unknown> | unknown) {
+	return async (event: E): Promise<Response> => {
+		const limited = rateLimited(event);
+		if (limited) return limited;
+		try {
+			return json(await handler(event));
+		} catch (e) {
+			return computeError(e, event);
+		}
+	};
+}
+
+const cache = new Map<string, { body: string; etag: string }>();
+const CACHE_MAX = 300;
+
+/**
+ * A cache-friendly GET compute route: the answer depends only on the URL (and the engine's
+ * version), so it is memoised (least recently used of CACHE_MAX kept), served with a strong ETag
+ * and `Cache-Control: public, max-age=86400`, and answered 304 on a matching If-None-Match.
+ */
+export function computeGet<E extends RequestEvent>(handler: (event: E) => Promise<unknown> | unknown) {
+	return async (event: E): Promise<Response> => {
+		const limited = rateLimited(event);
+		if (limited) return limited;
+		const key = event.url.pathname + event.url.search;
+		let hit = cache.get(key);
+		if (!hit) {
+			try {
+				const body = JSON.stringify(await handler(event));
+				hit = { body, etag: `"${createHash('sha1').update(body).digest('base64url').slice(0, 27)}"` };
+			} catch (e) {
+				return computeError(e, event);
+			}
+			cache.set(key, hit);
+			if (cache.size > CACHE_MAX) cache.delete(cache.keys().next().value as string);
+		} else {
+			cache.delete(key);
+			cache.set(key, hit);
+		}
+		const headers = { etag: hit.etag, 'cache-control': 'public, max-age=86400', vary: 'accept-encoding' };
+		const inm = event.request.headers.get('if-none-match');
+		if (inm && inm.split(',').some((t) => t.trim() === hit.etag || t.trim() === `W/${hit.etag}`)) return new Response(null, { status: 304, headers });
+		return new Response(hit.body, { headers: { ...headers, 'content-type': 'application/json' } });
+	};
+}

@@ -1,0 +1,12 @@
+import type { RequestHandler } from './$types';
+import { saturationCurve } from '$lib/thermo';
+import { computeGet, readQuery } from '$lib/server/compute/http';
+import { fluidFromParam } from '$lib/server/compute/fluids';
+import { saturationQuerySchema } from '$lib/server/compute/schemas';
+
+/** The vapor dome: saturated liquid and vapor states from the triple point toward the critical point. */
+export const GET: RequestHandler = computeGet((event) => {
+	const fluid = fluidFromParam(event.params.id);
+	const q = readQuery(event.url, saturationQuerySchema);
+	return saturationCurve(fluid.id, q.points ?? 100);
+});
