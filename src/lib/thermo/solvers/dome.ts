@@ -157,12 +157,43 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 			(Ta * Gb * Gk) / ((Ga - Gb) * (Ga - Gk)) + (Tb * Ga * Gk) / ((Gb - Ga) * (Gb - Gk)) + (Tk * Ga * Gb) / ((Gk - Ga) * (Gk - Gb));
 		return q > Math.min(Ta, Tb) && q < Math.max(Ta, Tb) ? q : lin;
 	};
+	const hs = !('x' in spec) && ((spec.prop === 's' && target === 'h') || (spec.prop === 'h' && target === 's'));
+	const push = (sat: SatPoint, x: number) => {
+		if (roots.some((r) => Math.abs(r.sat.T - sat.T) <= 1e-9 * sat.T)) return;
+		roots.push({ sat, x });
+	};
 	const accept = (x: number) => {
 		// keep round-off overshoots; callers place the state (twoPhaseAt) and drop real outsiders
 		if (!(x >= -1e-6 && x <= 1 + 1e-6)) return;
 		const sat = line.sat;
-		if (roots.some((r) => Math.abs(r.sat.T - sat.T) <= 1e-9 * sat.T)) return;
-		roots.push({ sat, x });
+		// next to a saturation line G can be nearly tangent to zero (for (h, s), dh = T·ds + v·dP
+		// makes the mixtures' h(T) touch the line's): there solve the line itself, a' (T) = A
+		// (only for (h, s): for (u, s) in a liquid the pair cannot tell a line from a state a few
+		// hundred pascals off it, and the polish would add such a twin)
+		if (!('x' in spec) && hs && (Math.abs(x) < 1e-4 || Math.abs(1 - x) < 1e-4)) {
+			const end = Math.abs(x) < 1e-4 ? 0 : 1;
+			const on = polishOnLine(spec, end, sat.T);
+			if (on) return push(on, end);
+		}
+		push(sat, x);
+	};
+	/** T where the saturated liquid (end 0) or vapor (end 1) has a = A, if b = B holds there too */
+	const polishOnLine = (sp: { prop: DomeProp; value: number }, end: 0 | 1, T0: number): SatPoint | null => {
+		const a = IDX[sp.prop];
+		let T = T0;
+		for (let it = 0; it < 30; it++) {
+			evalSatLine(fl, T, line);
+			const ya = end ? line.yV[a] : line.yL[a], dya = end ? line.dV[a] : line.dL[a];
+			const step = (ya - sp.value) / dya;
+			if (!Number.isFinite(step)) return null;
+			T -= step;
+			if (!(T > fl.Tt * (1 - 1e-9) && T < fl.Tc)) return null;
+			if (Math.abs(step) <= 1e-13 * T) break;
+		}
+		evalSatLine(fl, T, line);
+		const yb = end ? line.yV[b] : line.yL[b];
+		const span = Math.abs(line.yV[b] - line.yL[b]);
+		return Math.abs(yb - value) <= 1e-12 * span ? line.sat : null;
 	};
 	// a root sitting on an end node (e.g. exactly at the triple point) shows no sign change
 	for (const [i, j] of [

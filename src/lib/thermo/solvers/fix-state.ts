@@ -59,6 +59,14 @@ export const FLASHES: Record<string, Flash> = {
 	's,x': (fl, s, x, o) => flashSX(fl, s, x, o.hint)
 };
 
+const KEY_RANK: Record<Key, number> = { T: 0, P: 1, rho: 2, u: 3, h: 4, s: 5, x: 6 };
+/** FLASHES by rank pair (7 × 7, row = first key), so dispatch builds no string */
+const BY_RANK: Flash[] = [];
+for (const [pair, f] of Object.entries(FLASHES)) {
+	const [a, b] = pair.split(',') as [Key, Key];
+	BY_RANK[KEY_RANK[a] * 7 + KEY_RANK[b]] = f;
+}
+
 function unit(k: InputName): string {
 	return { T: 'K', P: 'Pa', v: 'm³/kg', rho: 'kg/m³', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)', x: '' }[k];
 }
@@ -130,9 +138,11 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 			throw new ThermoError('invalid-option', 'options.near must hold a positive T (K) and/or P (Pa).', 'Give near as { T, P } of the state to stay close to, or leave it out.');
 	}
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
+	const flash = BY_RANK[KEY_RANK[ka] * 7 + KEY_RANK[kb]];
+	if (near === undefined) return flash(fl, a, b, options);
 	setNear(near);
 	try {
-		return FLASHES[`${ka},${kb}`](fl, a, b, options);
+		return flash(fl, a, b, options);
 	} finally {
 		setNear(undefined);
 	}
