@@ -33,6 +33,8 @@ export type { ThermoErrorCode, StateCandidate } from './errors.ts';
  * Phase rules: see state.ts (on a saturation line when the density is within 1e−9 of the
  * saturated density; T ≥ Tc and P ≥ Pc is supercritical; T ≥ Tc, P < Pc superheated vapor;
  * T < Tc, P ≥ Pc compressed liquid).
+ * Range: T from the triple point to the formulation's Tmax, P up to its Pmax (melting line not
+ * checked); outside it throws `below-triple-point` or `out-of-range`.
  * `options.hint` picks one state where a pair has two (RootHint); without it such pairs throw
  * `ambiguous-state` naming both. Throws ThermoError for anything it cannot answer.
  */

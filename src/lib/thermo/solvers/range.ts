@@ -1,4 +1,9 @@
-/** Range checks shared by the flashes (limits from the fluid data file). */
+/**
+ * Range checks shared by the flashes (limits from the fluid data file). The range is kept simple:
+ * T from the triple-point temperature (or limits.Tmin if higher) to limits.Tmax, P up to
+ * limits.Pmax. The melting line is not checked: a state at T ≥ Tt is accepted whatever its
+ * pressure (e.g. water near 273 K above about 630 MPa, where ice VI would form).
+ */
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { State } from '../types.ts';
