@@ -175,7 +175,7 @@ export const saturationQuerySchema = z.strictObject(
 	{
 		points: z
 			.string()
-			.regex(/^\d{1,6}$/, { error: 'points must be a whole number.' })
+			.regex(/^\d{1,12}$/, { error: 'points must be a whole number.' })
 			.transform(Number)
 			.pipe(z.number().min(2, { error: 'points must be at least 2.' }).max(API_SATURATION_POINTS_MAX, { error: `points must be at most ${API_SATURATION_POINTS_MAX}.` }))
 			.optional()
@@ -211,7 +211,7 @@ export const isolineQuerySchema = z.strictObject(
 			}),
 		points: z
 			.string()
-			.regex(/^\d{1,6}$/, { error: 'points must be a whole number.' })
+			.regex(/^\d{1,12}$/, { error: 'points must be a whole number.' })
 			.transform(Number)
 			.pipe(
 				z
