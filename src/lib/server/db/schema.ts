@@ -115,6 +115,31 @@ export interface TeamEventsTable {
 	created_at: number;
 }
 
+export type SheetStatusValue = 'draft' | 'in-check' | 'checked' | 'approved';
+
+export interface SheetsTable {
+	id: string;
+	team_id: string;
+	/** 1, 2, 3 … within the team */
+	number: number;
+	title: string;
+	fluid: string;
+	system_kind: 'closed' | 'flow';
+	status: SheetStatusValue;
+	/** the worked example the sheet started from, if any */
+	example: string | null;
+	/** the working draft: a SheetDoc as JSON (src/lib/sheets/types.ts) */
+	draft: string;
+	/** bumped by every draft save; a save names the version it started from (optimistic concurrency) */
+	draft_version: number;
+	created_by: string | null;
+	created_by_label: string;
+	created_at: number;
+	updated_by: string | null;
+	updated_by_label: string;
+	updated_at: number;
+}
+
 export interface Database {
 	users: UsersTable;
 	sessions: SessionsTable;
@@ -125,6 +150,7 @@ export interface Database {
 	api_tokens: ApiTokensTable;
 	outbox: OutboxTable;
 	team_events: TeamEventsTable;
+	sheets: SheetsTable;
 }
 
 /** A database handle or an open transaction: every data function takes one of these first. */
@@ -141,3 +167,4 @@ export type EmailToken = Selectable<EmailTokensTable>;
 export type ApiToken = Selectable<ApiTokensTable>;
 export type OutboxMessage = Selectable<OutboxTable>;
 export type TeamEvent = Selectable<TeamEventsTable>;
+export type SheetRow = Selectable<SheetsTable>;
