@@ -58,7 +58,8 @@ export interface PairOutcome {
  * (hints pick an extreme in T, P or ρ): it passes as named, flagged `unreachable`.
  */
 export function fixFromPair(fluid: string, ref: Reference, [a, b]: [InputName, InputName], rel: number): PairOutcome {
-	const inputs: Inputs = { [a]: ref[a] as number, [b]: ref[b] as number };
+	const value = (k: InputName): number => (k === 'rho' ? 1 / ref.v : (ref[k] as number));
+	const inputs: Inputs = { [a]: value(a), [b]: value(b) };
 	const judge = (got: State): string | null => differs(got, ref, rel);
 	try {
 		return { failure: judge(fixState(fluid, inputs)), ambiguous: false, unreachable: false };
