@@ -1,0 +1,146 @@
+import Papa from 'papaparse';
+import type { PathResult } from '../thermo/types';
+import { displayUnit, formatNumber, formatQuantity, type Quantity, type UnitPrefs } from '../units';
+import { phaseName } from '../charts/describe';
+import { processStyle } from '../charts/encoding';
+
+/**
+ * The state and leg table of a computed path in the sheet's display units, for the memo: as CSV
+ * (papaparse) and as a Markdown table. Headers carry their units ("T [°C]", "P [kPa g]"); numbers
+ * are the numbers the screen shows (5 significant figures, temperatures to 0.01, quality to 4
+ * decimals), in plain ASCII for CSV so spreadsheets read them as numbers.
+ */
+
+export interface TableColumn {
+	key: string;
+	/** header with its unit, e.g. "T [°C]" */
+	header: string;
+	/** right-aligned numbers */
+	numeric: boolean;
+}
+
+export interface SheetTable {
+	states: { columns: TableColumn[]; rows: string[][] };
+	legs: { columns: TableColumn[]; rows: string[][] };
+	/** what the energy columns mean for this system kind */
+	note: string;
+}
+
+export interface TableOptions {
+	/** `ascii` for CSV (- and e-5), `unicode` for Markdown (− and ×10⁻⁵) */
+	style?: 'ascii' | 'unicode';
+}
+
+function unitLabel(q: Quantity, prefs: UnitPrefs, magnitude?: number[]): string {
+	return displayUnit(q, prefs, magnitude ? { magnitude } : {}).label || '–';
+}
+
+/** Leg label by position: L1, L2, … (ids stay stable; labels follow the order). */
+export const legLabel = (index: number) => `L${index + 1}`;
+export const stateLabel = (index: number) => `S${index + 1}`;
+
+export function processText(process: string, n?: number): string {
+	const name = processStyle(process as Parameters<typeof processStyle>[0])?.name ?? process;
+	return process === 'polytropic' && n !== undefined ? `${name}, n = ${formatNumber(n, { sig: 4 })}` : name;
+}
+
+export function sheetTable(result: PathResult, prefs: UnitPrefs, options: TableOptions = {}): SheetTable {
+	const style = options.style ?? 'unicode';
+	const q = (si: number | null | undefined, quantity: Quantity, magnitude?: number[]): string => {
+		if (si === null || si === undefined || !Number.isFinite(si)) return '';
+		const unit = displayUnit(quantity, prefs, magnitude ? { magnitude } : {});
+		return formatQuantity(si, quantity, prefs, { unit, style }).text;
+	};
+
+	const states = {
+		columns: [
+			{ key: 'state', header: 'State', numeric: false },
+			{ key: 'phase', header: 'Phase', numeric: false },
+			{ key: 'T', header: `T [${unitLabel('temperature', prefs)}]`, numeric: true },
+			{ key: 'P', header: `P [${unitLabel('pressure', prefs)}]`, numeric: true },
+			{ key: 'v', header: `v [${unitLabel('specificVolume', prefs)}]`, numeric: true },
+			{ key: 'u', header: `u [${unitLabel('specificEnergy', prefs)}]`, numeric: true },
+			{ key: 'h', header: `h [${unitLabel('specificEnergy', prefs)}]`, numeric: true },
+			{ key: 's', header: `s [${unitLabel('specificEntropy', prefs)}]`, numeric: true },
+			{ key: 'x', header: 'x [–]', numeric: true },
+			{ key: 'superheat', header: `superheat [${unitLabel('temperatureDifference', prefs)}]`, numeric: true },
+			{ key: 'subcooling', header: `subcooling [${unitLabel('temperatureDifference', prefs)}]`, numeric: true }
+		],
+		rows: result.states.map((ps, i) => [
+			stateLabel(i),
+			phaseName(ps.state.phase),
+			q(ps.state.T, 'temperature'),
+			q(ps.state.P, 'pressure'),
+			q(ps.state.v, 'specificVolume'),
+			q(ps.state.u, 'specificEnergy'),
+			q(ps.state.h, 'specificEnergy'),
+			q(ps.state.s, 'specificEntropy'),
+			q(ps.state.x, 'quality'),
+			q(ps.extras.superheat, 'temperatureDifference'),
+			q(ps.extras.subcooling, 'temperatureDifference')
+		])
+	};
+
+	const flow = result.system.kind === 'flow';
+	const totalQuantity: Quantity = flow ? 'power' : 'energy';
+	const magnitudes = result.legs.flatMap((l) => (flow ? [l.totals.QFlow, l.totals.WShaft] : [l.totals.Q, l.totals.W]));
+	const totalUnit = unitLabel(totalQuantity, prefs, magnitudes);
+	const eU = unitLabel('specificEnergy', prefs);
+	const labelOf = (id: string) => stateLabel(result.states.findIndex((s) => s.id === id));
+	const legs = {
+		columns: [
+			{ key: 'leg', header: 'Leg', numeric: false },
+			{ key: 'from', header: 'From', numeric: false },
+			{ key: 'to', header: 'To', numeric: false },
+			{ key: 'process', header: 'Process', numeric: false },
+			{ key: 'q', header: `q [${eU}]`, numeric: true },
+			{ key: 'w', header: flow ? `w shaft [${eU}]` : `w [${eU}]`, numeric: true },
+			{ key: 'ds', header: `Δs [${unitLabel('specificEntropy', prefs)}]`, numeric: true },
+			{ key: 'Q', header: flow ? `Q̇ [${totalUnit}]` : `Q [${totalUnit}]`, numeric: true },
+			{ key: 'W', header: flow ? `Ẇ shaft [${totalUnit}]` : `W [${totalUnit}]`, numeric: true }
+		],
+		rows: result.legs.map((pl, i) => [
+			legLabel(i),
+			labelOf(pl.from),
+			labelOf(pl.to),
+			processText(pl.leg.process, pl.leg.n),
+			q(flow ? pl.leg.qFlow : pl.leg.q, 'specificEnergy'),
+			q(flow ? pl.leg.wShaft : pl.leg.w, 'specificEnergy'),
+			q(pl.leg.ds, 'specificEntropy'),
+			q(flow ? pl.totals.QFlow : pl.totals.Q, totalQuantity, magnitudes),
+			q(flow ? pl.totals.WShaft : pl.totals.W, totalQuantity, magnitudes)
+		])
+	};
+	const note = flow
+		? 'Steady-flow device: q − w shaft = Δh per kg; Q̇ and Ẇ shaft are per-kg values × mass flow. Heat is positive into the fluid, work positive when done by the fluid.'
+		: 'Closed system: q − w = Δu per kg, w = ∫P dv; Q and W are per-kg values × mass. Heat is positive into the fluid, work positive when done by the fluid.';
+	return { states, legs, note };
+}
+
+/** The table as one CSV file: a "States" block and a "Legs" block, separated by a blank line. */
+export function tableCsv(result: PathResult, prefs: UnitPrefs, caption: string[] = []): string {
+	const t = sheetTable(result, prefs, { style: 'ascii' });
+	const block = (title: string, b: SheetTable['states']) => Papa.unparse({ fields: [title, ...b.columns.slice(1).map(() => '')], data: [] }) + '\r\n' + Papa.unparse({ fields: b.columns.map((c) => c.header), data: b.rows });
+	const head = caption.length ? Papa.unparse(caption.map((c) => [c])) + '\r\n\r\n' : '';
+	return head + block('States', t.states) + '\r\n\r\n' + block('Legs', t.legs) + '\r\n\r\n' + Papa.unparse([[t.note]]) + '\r\n';
+}
+
+function mdCell(s: string): string {
+	return s.replace(/\|/g, '\\|').replace(/\n/g, ' ');
+}
+
+function mdTable(b: SheetTable['states']): string {
+	const head = `| ${b.columns.map((c) => mdCell(c.header)).join(' | ')} |`;
+	const rule = `| ${b.columns.map((c) => (c.numeric ? '---:' : ':---')).join(' | ')} |`;
+	const rows = b.rows.map((r) => `| ${r.map(mdCell).join(' | ')} |`);
+	return [head, rule, ...rows].join('\n');
+}
+
+/** The table as Markdown (GitHub-flavoured pipe tables), with an optional caption paragraph. */
+export function tableMarkdown(result: PathResult, prefs: UnitPrefs, caption: string[] = []): string {
+	const t = sheetTable(result, prefs, { style: 'unicode' });
+	const parts = [];
+	if (caption.length) parts.push(caption.map(mdCell).join('  \n'));
+	parts.push('**States**', mdTable(t.states), '**Legs**', mdTable(t.legs), `_${t.note}_`);
+	return parts.join('\n\n') + '\n';
+}

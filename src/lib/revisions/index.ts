@@ -1,0 +1,3 @@
+/** Comparing revisions of a sheet (pure, client-safe). */
+export * from './diff';
+export * from './format';
