@@ -69,7 +69,7 @@ function tryState(f: () => State): State | null {
  * a window of v around the pointer and refined by golden-section search. Null when the line has
  * no valid state near the pointer.
  */
-export function projectOntoLeg(process: Process, from: State, coords: ChartCoords, metric: ScreenMetric, fix: FixFn, n?: number): State | null {
+export function projectOntoLeg(process: Process, from: State, coords: ChartCoords, metric: ScreenMetric, fix: FixFn, n?: number, hint?: number): State | null {
 	if (process === 'isochoric') {
 		return tryState(() => (metric.kind === 'T-v' ? fix({ T: coords.T!, v: from.v }) : fix({ P: coords.P!, v: from.v })));
 	}
@@ -79,25 +79,23 @@ export function projectOntoLeg(process: Process, from: State, coords: ChartCoord
 		return Math.hypot(p[0] - target[0], p[1] - target[1]);
 	};
 	const at = (lv: number) => tryState(() => stateAtV(process, from, 10 ** lv, fix, n));
-	// a window of 1.2 decades either side of the pointer's v (and reaching the leg's start)
-	const lo = Math.min(Math.log10(coords.v), Math.log10(from.v)) - 1.2;
-	const hi = Math.max(Math.log10(coords.v), Math.log10(from.v)) + 1.2;
-	const N = 64;
+	// Sample a window of v around the pointer (and the previous answer while dragging: the
+	// nearest point moves little between two pointer moves), then refine the best bracket.
+	const near = hint !== undefined && hint > 0 ? hint : coords.v;
+	const width = hint !== undefined ? 0.25 : 0.8;
+	const lo = Math.min(Math.log10(coords.v), Math.log10(near)) - width;
+	const hi = Math.max(Math.log10(coords.v), Math.log10(near)) + width;
+	const N = Math.min(40, Math.max(8, Math.ceil((hi - lo) / 0.05)));
 	let best: { lv: number; s: State; d: number } | null = null;
-	const grid: ({ lv: number; d: number } | null)[] = [];
 	for (let i = 0; i <= N; i++) {
 		const lv = lo + ((hi - lo) * i) / N;
 		const s = at(lv);
-		if (!s) {
-			grid.push(null);
-			continue;
-		}
+		if (!s) continue;
 		const d = dist(s);
-		grid.push({ lv, d });
 		if (!best || d < best.d) best = { lv, s, d };
 	}
 	if (!best) return null;
-	// refine between the neighbours of the best grid point
+	// golden-section search between the neighbours of the best grid point, to 2e-5 decades in v
 	const step = (hi - lo) / N;
 	let a = best.lv - step;
 	let b = best.lv + step;
@@ -110,7 +108,7 @@ export function projectOntoLeg(process: Process, from: State, coords: ChartCoord
 	let d = a + g * (b - a);
 	let fc = score(c);
 	let fd = score(d);
-	for (let i = 0; i < 40 && b - a > 1e-7; i++) {
+	while (b - a > 2e-5) {
 		if ((fc?.d ?? Infinity) < (fd?.d ?? Infinity)) {
 			b = d;
 			d = c;

@@ -1,0 +1,110 @@
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { createCoalescer } from './coalescer';
+
+/** A fake server: each request resolves after `latency` ms of fake time with its input doubled. */
+function fakeServer(latency: number) {
+	const calls: number[] = [];
+	const run = (input: number) => {
+		calls.push(input);
+		return new Promise<number>((resolve, reject) => setTimeout(() => (input < 0 ? reject(new Error(`bad ${input}`)) : resolve(input * 2)), latency));
+	};
+	return { calls, run };
+}
+
+beforeEach(() => {
+	vi.useFakeTimers();
+});
+afterEach(() => {
+	vi.useRealTimers();
+});
+
+describe('request coalescer', () => {
+	it('sends at most one request at a time; moves meanwhile collapse to the newest', async () => {
+		const server = fakeServer(30);
+		const results: Array<[number, number]> = [];
+		const c = createCoalescer(server.run, { result: (o, i) => results.push([i, o]), error: () => {} });
+		for (let i = 1; i <= 10; i++) {
+			c.submit(i);
+			await vi.advanceTimersByTimeAsync(5); // pointer moves every 5 ms, the server takes 30
+		}
+		// 1 landed at t = 30 ms, when 6 was the newest move; 7…10 arrived while 6 was in flight
+		expect(server.calls).toEqual([1, 6]);
+		await vi.advanceTimersByTimeAsync(100);
+		expect(server.calls).toEqual([1, 6, 10]);
+		expect(results).toEqual([
+			[1, 2],
+			[6, 12],
+			[10, 20]
+		]);
+		expect(c.stats).toMatchObject({ sent: 3, delivered: 3, dropped: 0 });
+		expect(c.stats.replaced).toBe(7);
+		expect(c.busy).toBe(false);
+	});
+
+	it('delivers each answer the moment it lands, in order', async () => {
+		const server = fakeServer(20);
+		const seen: Array<[number, number]> = [];
+		const c = createCoalescer(server.run, { result: (o) => seen.push([Date.now(), o]), error: () => {} });
+		const t0 = Date.now();
+		c.submit(1);
+		c.submit(2);
+		await vi.advanceTimersByTimeAsync(20);
+		expect(seen).toEqual([[t0 + 20, 2]]);
+		await vi.advanceTimersByTimeAsync(20);
+		expect(seen).toEqual([
+			[t0 + 20, 2],
+			[t0 + 40, 4]
+		]);
+	});
+
+	it('drops the answer in flight after cancel (stale), and the waiting input with it', async () => {
+		const server = fakeServer(30);
+		const results: number[] = [];
+		const c = createCoalescer(server.run, { result: (o) => results.push(o), error: () => {} });
+		c.submit(1);
+		c.submit(2);
+		c.cancel();
+		await vi.advanceTimersByTimeAsync(100);
+		expect(server.calls).toEqual([1]);
+		expect(results).toEqual([]);
+		expect(c.stats.dropped).toBe(1);
+		c.submit(3);
+		await vi.advanceTimersByTimeAsync(30);
+		expect(results).toEqual([6]);
+	});
+
+	it('reports failures for their input and keeps going; idle() resolves when drained', async () => {
+		const server = fakeServer(10);
+		const errors: number[] = [];
+		const results: number[] = [];
+		const c = createCoalescer(server.run, { result: (o) => results.push(o), error: (_e, i) => errors.push(i) });
+		c.submit(-1);
+		c.submit(5);
+		let idle = false;
+		void c.idle().then(() => (idle = true));
+		await vi.advanceTimersByTimeAsync(10);
+		expect(errors).toEqual([-1]);
+		expect(idle).toBe(false);
+		await vi.advanceTimersByTimeAsync(10);
+		expect(results).toEqual([10]);
+		expect(idle).toBe(true);
+	});
+
+	it('a handler that throws does not stall the queue', async () => {
+		const server = fakeServer(10);
+		const spy = vi.spyOn(console, 'error').mockImplementation(() => {});
+		let n = 0;
+		const c = createCoalescer(server.run, {
+			result: () => {
+				n++;
+				if (n === 1) throw new Error('boom');
+			},
+			error: () => {}
+		});
+		c.submit(1);
+		c.submit(2);
+		await vi.advanceTimersByTimeAsync(50);
+		expect(n).toBe(2);
+		spy.mockRestore();
+	});
+});
