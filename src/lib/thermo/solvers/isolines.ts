@@ -54,6 +54,7 @@ function isolineOf(fl: Fluid, kind: IsolineKind, value: number, points: number):
 	const inv: Invariant =
 		kind === 'isobar' ? { process: 'isobaric', P: value } : kind === 'isotherm' ? { process: 'isothermal', T: value } : { process: 'isochoric', rho: 1 / value };
 	const curve = new Curve(fl, inv, startC, isolineFloor(fl));
+	curve.energies = false;
 	const pieces: Piece[] = [];
 	const pos = curve.locateStart(startC);
 	curve.segs.forEach((seg, k) => {

@@ -47,6 +47,9 @@ export interface CPt {
 	sat: SatPoint | null;
 	/** the single-phase evaluation (order 2), for building the State */
 	pt: Point | null;
+	/** two-phase points: both saturated phases evaluated at order 2 (EOS pressure kept), for the State */
+	L?: Point;
+	V?: Point;
 	/** cached public State */
 	state?: State;
 }
@@ -102,16 +105,54 @@ function mixture(fl: Fluid, sat: SatPoint, x: number, L: Point, V: Point): CPt {
 		s: L.s + x * (V.s - L.s),
 		x,
 		sat,
-		pt: null
+		pt: null,
+		L,
+		V
 	};
 }
 
+/** Both saturated phases at order 2 (u, h, s, cv and the pressure derivatives; the EOS pressure is kept). */
 function phases(fl: Fluid, sat: SatPoint): [Point, Point] {
-	const L = evalPoint(fl, sat.T, sat.rhoL, new Point(), 1);
-	const V = evalPoint(fl, sat.T, sat.rhoV, new Point(), 1);
-	L.P = sat.P;
-	V.P = sat.P;
-	return [L, V];
+	return [evalPoint(fl, sat.T, sat.rhoL, new Point(), 2), evalPoint(fl, sat.T, sat.rhoV, new Point(), 2)];
+}
+
+/**
+ * The State of a two-phase point from its already evaluated phases: the same formulas as the
+ * engine's saturatedState (state.ts) — mass-weighted v, u, h, s; cv of the two-phase system
+ *   cv = (1−x)·du′/dT + x·du″/dT − (Δu/Δv)·[(1−x)·dv′/dT + x·dv″/dT] along the saturation lines —
+ * without evaluating the phases again (legs.test.ts checks the two agree).
+ */
+export function mixtureState(fl: Fluid, sat: SatPoint, x: number, pL: Point, pV: Point): State {
+	if (sat.rhoL === sat.rhoV || x <= 0 || x >= 1) return saturatedState(fl, sat, x);
+	const T = sat.T;
+	const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
+	const v = vL + x * (vV - vL);
+	const dPs = (pV.s - pL.s) / (vV - vL);
+	const slope = (p: Point) => {
+		const drho = (dPs - p.dPdT) / p.dPdrho;
+		return [p.cv + ((p.P - T * p.dPdT) / (p.rho * p.rho)) * drho, -drho / (p.rho * p.rho)];
+	};
+	const [duL, dvL] = slope(pL);
+	const [duV, dvV] = slope(pV);
+	const cv = (1 - x) * duL + x * duV - ((pV.u - pL.u) / (vV - vL)) * ((1 - x) * dvL + x * dvV);
+	const st: State = {
+		fluid: fl.id,
+		phase: 'saturated-mixture',
+		T,
+		P: sat.P,
+		v,
+		rho: 1 / v,
+		u: pL.u + x * (pV.u - pL.u),
+		h: pL.h + x * (pV.h - pL.h),
+		s: pL.s + x * (pV.s - pL.s),
+		x,
+		cp: null,
+		cv: Number.isFinite(cv) ? cv : null,
+		w: null
+	};
+	for (const k of ['v', 'u', 'h', 's'] as const)
+		if (!Number.isFinite(st[k])) throw new ThermoError('no-convergence', `A two-phase ${fl.id} state could not be evaluated (${k} is not finite).`, 'Please report the leg.');
+	return st;
 }
 
 function single(p: Point): CPt {
@@ -122,7 +163,7 @@ function single(p: Point): CPt {
 export function stateOf(fl: Fluid, c: CPt): State {
 	if (c.state) return c.state;
 	let st: State;
-	if (c.sat && c.x !== null) st = saturatedState(fl, c.sat, c.x);
+	if (c.sat && c.x !== null) st = c.L && c.V ? mixtureState(fl, c.sat, c.x, c.L, c.V) : saturatedState(fl, c.sat, c.x);
 	else {
 		const p = c.pt ?? evalPoint(fl, c.T, c.rho, new Point(), 2);
 		const P = p.P;
@@ -262,8 +303,17 @@ export class Curve {
 	readonly Pfloor: number;
 	private fixedSat: { sat: SatPoint; L: Point; V: Point } | null = null;
 	private g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
+	private pL = new Point();
+	private pV = new Point();
 	/** evaluations done (for benchmarks and tests) */
 	evaluations = 0;
+	/** while looking for the domain's edge: no slow fallback flashes (failures there are expected) */
+	private quick = false;
+	/**
+	 * Whether two-phase points need u, h, s at once (a target in u, h or s). Without, isochoric and
+	 * polytropic two-phase points carry NaN there and their State (stateOf) has the full values.
+	 */
+	energies = true;
 
 	/** `Pfloor` overrides the curve's lowest pressure (isolines end at a drawable pressure). */
 	constructor(fl: Fluid, inv: Invariant, start: CPt, Pfloor?: number) {
@@ -430,6 +480,7 @@ export class Curve {
 
 	/** The engine's general flash for the pair; where it finds several states, the one nearest the guess. */
 	private fallback(inputs: Inputs, guess: CPt | null, branch: Branch): CPt | null {
+		if (this.quick) return null;
 		const fl = this.fl;
 		let st: State;
 		try {
@@ -479,11 +530,20 @@ export class Curve {
 				const c = evalPoint(fl, fl.Tc, fl.rhoc, new Point(), 1);
 				return { T: fl.Tc, rho: fl.rhoc, P: fl.Pc, u: c.u, h: c.h, s: c.s, x: 0.5, sat, pt: null };
 			}
-			[L, V] = phases(fl, sat);
-			if (inv.process === 'isochoric') x = (1 / (inv.rho as number) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
-			else if (inv.process === 'isentropic') x = ((inv.s as number) - L.s) / (V.s - L.s);
-			else if (inv.process === 'isenthalpic') x = ((inv.h as number) - L.h) / (V.h - L.h);
-			else x = (Math.exp(t) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
+			if (inv.process === 'isochoric' || inv.process === 'polytropic') {
+				const v = inv.process === 'isochoric' ? 1 / (inv.rho as number) : Math.exp(t);
+				x = (v - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
+				// x from v needs no energies; they are filled in only when someone reads them
+				if (!this.energies) {
+					if (!(x >= -1e-9 && x <= 1 + 1e-9) && !(sat.P > fl.Pc * (1 - 1e-4) && Number.isFinite(x))) return null;
+					x = Math.min(1, Math.max(0, x));
+					return { T: sat.T, rho: 1 / (1 / sat.rhoL + x * (1 / sat.rhoV - 1 / sat.rhoL)), P: sat.P, u: NaN, h: NaN, s: NaN, x, sat, pt: null };
+				}
+				[L, V] = phases(fl, sat);
+			} else {
+				[L, V] = phases(fl, sat);
+				x = inv.process === 'isentropic' ? ((inv.s as number) - L.s) / (V.s - L.s) : ((inv.h as number) - L.h) / (V.h - L.h);
+			}
 		}
 		// next to the critical point a crossing may be placed at the critical point itself (see lineRoots):
 		// there the curve's few ppm of two-phase stretch are clamped onto the nearer line
@@ -500,7 +560,8 @@ export class Curve {
 		if (seg.dome && this.process === 'isentropic') {
 			const fl = this.fl;
 			const sat = satAtT(fl, t);
-			const [L, V] = phases(fl, sat);
+			const L = evalPoint(fl, t, sat.rhoL, this.pL, 1);
+			const V = evalPoint(fl, t, sat.rhoV, this.pV, 1);
 			const x = ((this.inv.s as number) - L.s) / (V.s - L.s);
 			const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
 			const dPs = (V.s - L.s) / (vV - vL);
@@ -703,15 +764,16 @@ export class Curve {
 	 * leaves the domain (found by regula falsi on the violation from a known point `ok` inside).
 	 * Returns null if no state of the piece can be found at all.
 	 */
-	end(k: number, side: 'A' | 'B', ok: CPt, tOk: number): { t: number; p: CPt } | null {
+	end(k: number, side: 'A' | 'B', ok: CPt, tOk: number, tBad?: number, bad?: CPt | null): { t: number; p: CPt } | null {
 		const seg = this.segs[k];
 		const known = side === 'A' ? seg.A : seg.B;
 		if (known) return { t: side === 'A' ? seg.ta : seg.tb, p: known };
-		const tHard = side === 'A' ? seg.ta : seg.tb;
-		const hard = this.at(seg, tHard, ok);
+		const tHard = tBad ?? (side === 'A' ? seg.ta : seg.tb);
+		const hard = tBad !== undefined ? (bad ?? null) : this.at(seg, tHard, ok);
 		let res: { t: number; p: CPt };
 		if (hard && this.violation(hard) <= 1e-12) res = { t: tHard, p: hard };
 		else {
+			this.quick = true;
 			// violation g: ≤ 0 inside; a failed solve counts as outside
 			let a = tOk, b = tHard;
 			let ga = Math.min(0, this.violation(ok));
@@ -740,6 +802,7 @@ export class Curve {
 				}
 				if (Math.abs(b - a) <= 1e-13 * Math.max(1, Math.abs(a)) || (ga > -1e-13 && c && g <= 0)) break;
 			}
+			this.quick = false;
 			res = { t: a, p: pa };
 		}
 		if (side === 'A') {

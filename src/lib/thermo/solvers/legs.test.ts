@@ -39,7 +39,7 @@ function thrown(fn: () => unknown): ThermoError {
 // python3-iapws 1.5.2 (Debian): IAPWS95 and ammonia.NH3 end states and crossings from direct
 // (T, rho), (T, P) and (T, x) calls, bracketed by bisection (tests/reference/make-iapws-legs.py)
 describe('legs against python3-iapws end states (tests/reference/iapws-legs.json)', () => {
-	for (const c of (fixture as { cases: Case[] }).cases) {
+	for (const c of (fixture as unknown as { cases: Case[] }).cases) {
 		it(`${c.fluid}: ${c.name}`, () => {
 			const leg = computeLeg({ fluid: c.fluid, start: c.start, process: c.process, target: c.target, n: c.n });
 			const e = leg.end;
@@ -303,6 +303,25 @@ describe('leg targets and refusals', () => {
 			expect(leg.process).toBe(process);
 			expect(leg.points.length).toBeGreaterThanOrEqual(40);
 			if (process === 'polytropic') expect(leg.n).toBe(1.2);
+		}
+	});
+});
+
+describe('two-phase states assembled along a leg', () => {
+	it('equal the engine’s saturatedState for the same saturation and quality', async () => {
+		const { mixtureState } = await import('./leg-curve.ts');
+		const { getCompiledFluid } = await import('../registry.ts');
+		const { evalPoint, Point } = await import('../properties.ts');
+		const { satAtT } = await import('./saturation.ts');
+		const { saturatedState } = await import('../state.ts');
+		for (const id of ['water', 'ammonia', 'carbon-dioxide']) {
+			const fl = getCompiledFluid(id);
+			for (const f of [0.05, 0.4, 0.8, 0.99]) {
+				const sat = satAtT(fl, fl.Tt + f * (fl.Tc - fl.Tt));
+				const L = evalPoint(fl, sat.T, sat.rhoL, new Point(), 2);
+				const V = evalPoint(fl, sat.T, sat.rhoV, new Point(), 2);
+				for (const x of [0, 1e-4, 0.3, 0.999, 1]) expect(mixtureState(fl, sat, x, L, V)).toEqual(saturatedState(fl, sat, x));
+			}
 		}
 	});
 });

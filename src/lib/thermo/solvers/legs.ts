@@ -189,6 +189,7 @@ export function traceLeg(spec: LegSpec): LegTrace {
 				? { process, n, lnC: Math.log(start.P) + (n as number) * Math.log(start.v) }
 				: { process, P: start.P, rho: start.rho, T: start.T, s: start.s, h: start.h };
 	const curve = new Curve(fl, inv, startC);
+	curve.energies = key === 'u' || key === 'h' || key === 's';
 	const notes: string[] = [];
 	if (process === 'isenthalpic') notes.push(THROTTLING_NOTE);
 
@@ -214,8 +215,10 @@ export function traceLeg(spec: LegSpec): LegTrace {
 		seen(startC);
 		// look first the way the target property moves toward the target
 		const first = preferredDirection(curve, pos0, startC, F, F0);
-		const hit1 = scan(curve, pos0, startC, F, F0, tolF, first, Infinity, key, seen, range);
-		const hit2 = scan(curve, pos0, startC, F, F0, tolF, first === 1 ? -1 : 1, hit1 ? Math.floor(hit1.dist) : Infinity, key, seen, range);
+		const mono = isMonotone(inv.process, key);
+		const hit1 = scan(curve, pos0, startC, F, F0, tolF, first, Infinity, key, seen, range, mono);
+		// a property monotone along the whole curve is reached one way only: no need to look back
+		const hit2 = hit1 && mono ? null : scan(curve, pos0, startC, F, F0, tolF, first === 1 ? -1 : 1, hit1 ? Math.floor(hit1.dist) : Infinity, key, seen, range, mono);
 		if (!hit1 && !hit2) throw unreachable(fl, process, inv, n, key, value, range);
 		if (hit1 && hit2) {
 			const [a, b] = hit1.dist <= hit2.dist ? [hit1, hit2] : [hit2, hit1];
@@ -336,6 +339,26 @@ function preferredDirection(curve: Curve, pos: Pos | { seg: number; t: number; c
 const SCAN_STEPS = 8;
 
 /**
+ * Target properties that never turn back along a process curve (so each value is met at most once):
+ * isobaric T, h, s, x (dh = T·ds > 0 at constant P); isochoric T, u, s (du = T·ds = cv·dT);
+ * isothermal v, P; isentropic v, P, u, h (du = −P·dv, dh = v·dP); isenthalpic P, s (ds = −v/T·dP);
+ * polytropic v, P (P = C·v⁻ⁿ). Others (T along an isentrope near water's density maximum, v along
+ * an isobar…) can turn and are searched both ways.
+ */
+const MONOTONE: Record<Process, readonly TargetName[]> = {
+	isobaric: ['T', 'h', 's'],
+	isochoric: ['T', 'u', 's'],
+	isothermal: ['v', 'rho', 'P'],
+	isentropic: ['v', 'rho', 'P', 'u', 'h'],
+	isenthalpic: ['P', 's'],
+	polytropic: ['v', 'rho', 'P']
+};
+
+function isMonotone(process: Process, key: TargetName): boolean {
+	return MONOTONE[process].includes(key);
+}
+
+/**
  * Walk the curve from the start in direction dir (segments entered ≤ maxSegs), sampling F on each
  * segment; return the first place where F reaches zero, refined by regula falsi (Illinois).
  */
@@ -350,7 +373,8 @@ function scan(
 	maxSegs: number,
 	key: TargetName,
 	seen: (c: CPt) => void,
-	range: { dome: boolean }
+	range: { dome: boolean },
+	mono = false
 ): Pos | null {
 	const segs = curve.segs;
 	let k = pos0.crossing === null ? pos0.seg : dir === 1 ? pos0.crossing + 1 : pos0.crossing;
@@ -360,16 +384,30 @@ function scan(
 	let entered = 0;
 	while (k >= 0 && k < segs.length && entered <= maxSegs) {
 		const seg = segs[k];
-		const e = curve.end(k, dir === 1 ? 'B' : 'A', prev, tPrev);
-		if (!e) return null;
-		const tEnd = e.t;
+		const side = dir === 1 ? 'B' : 'A';
+		// a crossing ends the segment; an outer end is found only if the walk gets there (lazy edge)
+		const known = side === 'B' ? seg.B : seg.A;
+		let e: { t: number; p: CPt } | null = known ? { t: side === 'B' ? seg.tb : seg.ta, p: known } : null;
+		// no quality on an outer single-phase segment, and nothing beyond it
+		if (!e && key === 'x' && !seg.dome) return null;
+		const tEnd = e ? e.t : side === 'B' ? seg.tb : seg.ta;
 		const tEntry = tPrev;
 		if (seg.dome) range.dome = true;
 		const skip = key === 'x' && !seg.dome;
-		const steps = skip ? 1 : SCAN_STEPS;
+		// a monotone property between known ends: one look at the far end brackets it
+		const steps = skip || (mono && e) ? 1 : SCAN_STEPS;
+		let stop = false;
 		for (let j = 1; j <= steps; j++) {
-			const t = j === steps ? tEnd : tEntry + ((tEnd - tEntry) * j) / steps;
-			const c = j === steps ? e.p : curve.at(seg, t, prev);
+			let t = j === steps ? tEnd : tEntry + ((tEnd - tEntry) * j) / steps;
+			let c = j === steps && e ? e.p : curve.at(seg, t, prev);
+			if (!e && (!c || curve.violation(c) > 1e-12)) {
+				// past the domain's edge: find it between the last good sample and this one, and end there
+				e = curve.end(k, side, prev, tPrev, t, c);
+				if (!e) return null;
+				t = e.t;
+				c = e.p;
+				stop = true;
+			}
 			if (!c) continue;
 			const f = F(c);
 			seen(c);
@@ -393,7 +431,9 @@ function scan(
 			prev = c;
 			Fprev = f;
 			tPrev = t;
+			if (stop) break;
 		}
+		if (stop || !e) return null;
 		prev = e.p;
 		Fprev = F(e.p);
 		k += dir;
