@@ -140,6 +140,140 @@ export interface SheetsTable {
 	updated_at: number;
 }
 
+// ---- revisions, review notes, notification settings, measured traces (issue 6) ----------------
+
+export interface SheetRevisionsTable {
+	id: string;
+	sheet_id: string;
+	team_id: string;
+	/** Rev 1, 2, … within the sheet */
+	number: number;
+	/** the revision the saved draft started from */
+	based_on: number | null;
+	/** the sheet's title when the revision was saved */
+	title: string;
+	/** SheetDoc JSON (immutable) */
+	doc: string;
+	/** PathResult JSON computed from doc (immutable) */
+	result: string;
+	message: string;
+	author_id: string | null;
+	author_label: string;
+	created_at: number;
+	status: Generated<SheetStatusValue>;
+	submitted_by: string | null;
+	submitted_by_label: string | null;
+	submitted_at: number | null;
+	check_requested_from: string | null;
+	checked_by: string | null;
+	checked_by_label: string | null;
+	checked_at: number | null;
+	approved_by: string | null;
+	approved_by_label: string | null;
+	approved_at: number | null;
+	returned_by: string | null;
+	returned_by_label: string | null;
+	returned_at: number | null;
+}
+
+export type RevisionEventKind = 'saved' | 'submitted' | 'returned' | 'checked' | 'approved' | 'restored';
+
+export interface SheetRevisionEventsTable {
+	id: Generated<number>;
+	revision_id: string;
+	sheet_id: string;
+	kind: RevisionEventKind;
+	actor_id: string | null;
+	actor_label: string;
+	note: string | null;
+	created_at: number;
+}
+
+export type NoteAnchorKind = 'sheet' | 'leg' | 'state';
+
+export interface ReviewNotesTable {
+	id: string;
+	sheet_id: string;
+	team_id: string;
+	anchor_kind: NoteAnchorKind;
+	/** leg id (leg), 'start' or the id of the leg the state ends (state), null (sheet) */
+	anchor_id: string | null;
+	/** L2, S3 … where the note was written */
+	anchor_label: string;
+	/** the revision the author was viewing; null for the working draft */
+	revision_number: number | null;
+	draft_version: number | null;
+	body: string;
+	author_id: string | null;
+	author_label: string;
+	created_at: number;
+	edited_at: number | null;
+	resolved_at: number | null;
+	resolved_by: string | null;
+	resolved_by_label: string | null;
+	last_activity_at: number;
+}
+
+export type NoteReplyKind = 'reply' | 'resolved' | 'reopened';
+
+export interface ReviewNoteRepliesTable {
+	id: string;
+	note_id: string;
+	kind: NoteReplyKind;
+	body: string;
+	author_id: string | null;
+	author_label: string;
+	created_at: number;
+}
+
+export interface ReviewNoteMentionsTable {
+	id: Generated<number>;
+	note_id: string;
+	reply_id: string | null;
+	user_id: string;
+	created_at: number;
+}
+
+/** 1 = send the mail, 0 = do not; a person without a row gets every kind. */
+export interface NotificationSettingsTable {
+	user_id: string;
+	on_mention: number;
+	on_reply: number;
+	on_submitted: number;
+	on_checked: number;
+	on_approved: number;
+	on_returned: number;
+	updated_at: number;
+}
+
+export interface SheetTracesTable {
+	id: string;
+	sheet_id: string;
+	team_id: string;
+	name: string;
+	original_filename: string;
+	fluid: string;
+	/** JSON TraceColumn[] */
+	columns: string;
+	/** Pa absolute, for gauge columns */
+	atmosphere: number;
+	/** K */
+	tolerance: number;
+	/** JSON TracePoint[] (SI) */
+	points: string;
+	point_count: number;
+	in_dome_count: number;
+	rejected_count: number;
+	/** JSON RejectedLine[] left out at upload */
+	rejected: string;
+	/** JSON string[] */
+	notes: string;
+	started_at: string | null;
+	uploaded_by: string | null;
+	uploaded_by_label: string;
+	uploaded_at: number;
+}
+
 export interface Database {
 	users: UsersTable;
 	sessions: SessionsTable;
@@ -151,6 +285,13 @@ export interface Database {
 	outbox: OutboxTable;
 	team_events: TeamEventsTable;
 	sheets: SheetsTable;
+	sheet_revisions: SheetRevisionsTable;
+	sheet_revision_events: SheetRevisionEventsTable;
+	review_notes: ReviewNotesTable;
+	review_note_replies: ReviewNoteRepliesTable;
+	review_note_mentions: ReviewNoteMentionsTable;
+	notification_settings: NotificationSettingsTable;
+	sheet_traces: SheetTracesTable;
 }
 
 /** A database handle or an open transaction: every data function takes one of these first. */
@@ -168,3 +309,9 @@ export type ApiToken = Selectable<ApiTokensTable>;
 export type OutboxMessage = Selectable<OutboxTable>;
 export type TeamEvent = Selectable<TeamEventsTable>;
 export type SheetRow = Selectable<SheetsTable>;
+export type SheetRevisionRow = Selectable<SheetRevisionsTable>;
+export type SheetRevisionEvent = Selectable<SheetRevisionEventsTable>;
+export type ReviewNoteRow = Selectable<ReviewNotesTable>;
+export type ReviewNoteReplyRow = Selectable<ReviewNoteRepliesTable>;
+export type NotificationSettingsRow = Selectable<NotificationSettingsTable>;
+export type SheetTraceRow = Selectable<SheetTracesTable>;
