@@ -3,7 +3,7 @@ import fixture from '../../../../tests/reference/iapws-legs.json';
 import { ThermoError, getFluid, isolines, saturationAtP, saturationAtT } from '../index.ts';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
-const cases = (fixture as { cases: { name: string; crossings: { line: string; T: number; P: number; rho: number }[] }[] }).cases;
+const cases = (fixture as unknown as { cases: { name: string; crossings: { line: string; T: number; P: number; rho: number }[] }[] }).cases;
 
 function thrown(fn: () => unknown): ThermoError {
 	try {

@@ -24,7 +24,7 @@ const VESSEL: PathSpec = {
 	limits: { designPressure: 1.6e6, reliefSetPressure: 1.5e6, designTemperature: 473.15, minimumTemperature: 263.15 }
 };
 
-const cases = (fixture as { cases: { name: string; crossings: { T: number; P: number }[]; end: { T: number; P: number } }[] }).cases;
+const cases = (fixture as unknown as { cases: { name: string; crossings: { T: number; P: number }[]; end: { T: number; P: number } }[] }).cases;
 
 describe('computePath: the sealed vessel heated until liquid-full', () => {
 	const r = computePath(VESSEL);
@@ -192,7 +192,7 @@ describe('computePath: warnings and extras', () => {
 	});
 	it('computes superheat, subcooling and volume fractions like python3-iapws', () => {
 		// python3-iapws 1.5.2 (Debian): Tsat by bisection of (T, x = 0) calls, fractions from (T, x) calls
-		for (const ex of (fixture as { extras: { fluid: string; inputs: Record<string, number>; Tsat: number; vaporVolumeFraction?: number; liquidVolumeFraction?: number }[] }).extras) {
+		for (const ex of (fixture as unknown as { extras: { fluid: string; inputs: Record<string, number>; Tsat: number; vaporVolumeFraction?: number; liquidVolumeFraction?: number }[] }).extras) {
 			const st = fixState(ex.fluid, ex.inputs);
 			const e = stateExtras(st);
 			expect(rel(e.Tsat as number, ex.Tsat)).toBeLessThan(1e-9);
