@@ -289,7 +289,8 @@ test.describe('compute API: rate limit', () => {
 	});
 	test.afterAll(async () => {
 		await api?.dispose();
-		child?.kill('SIGTERM');
+		if (child && child.exitCode === null) await new Promise((r) => child.once('exit', r).kill('SIGTERM'));
+		rmSync(`tmp/e2e-compute-${PORT}`, { recursive: true, force: true });
 	});
 	test('answers 429 with Retry-After once the bucket is empty', async () => {
 		const codes: number[] = [];
