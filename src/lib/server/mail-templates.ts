@@ -104,3 +104,129 @@ export function passwordChangedMail(input: { name: string; url: string }): Compo
 		'This notice is sent whenever an account password changes.'
 	);
 }
+
+// ---- review and sign-off notifications (revisions, review notes) ---------------------------------
+
+/** Where a person turns notification mails off. */
+function settingsNote(settingsUrl: string): string {
+	return `You get this mail because of your notification settings in Statewright. Turn each kind off at ${settingsUrl}`;
+}
+
+function quote(text: string, max = 600): string {
+	const t = text.length > max ? `${text.slice(0, max - 1)}…` : text;
+	return `<span style="display:block;border-left:3px solid #d6ccb8;padding:2px 0 2px 10px;color:#2a2825;white-space:pre-wrap">${esc(t)}</span>`;
+}
+
+export interface NoteMailInput {
+	/** recipient's name */
+	name: string;
+	/** who wrote */
+	authorName: string;
+	sheetTitle: string;
+	teamName: string;
+	/** "leg L2 (isochoric)", "state S3", "the sheet as a whole" */
+	anchorText: string;
+	body: string;
+	/** opens the sheet at this note */
+	url: string;
+	settingsUrl: string;
+}
+
+export function mentionMail(input: NoteMailInput): Composed {
+	return compose(
+		`${input.authorName} mentioned you on ${input.sheetTitle}`,
+		`You were mentioned in a review note`,
+		[
+			`Hello ${esc(input.name)},`,
+			`${esc(input.authorName)} mentioned you in a review note on <strong>${esc(input.anchorText)}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}):`,
+			quote(input.body)
+		],
+		{ label: 'Open the note', url: input.url },
+		settingsNote(input.settingsUrl)
+	);
+}
+
+export function replyMail(input: NoteMailInput): Composed {
+	return compose(
+		`${input.authorName} replied to your note on ${input.sheetTitle}`,
+		`A reply to your review note`,
+		[
+			`Hello ${esc(input.name)},`,
+			`${esc(input.authorName)} replied to your review note on <strong>${esc(input.anchorText)}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}):`,
+			quote(input.body)
+		],
+		{ label: 'Open the thread', url: input.url },
+		settingsNote(input.settingsUrl)
+	);
+}
+
+export interface RevisionMailInput {
+	name: string;
+	/** who did it */
+	actorName: string;
+	sheetTitle: string;
+	teamName: string;
+	revision: number;
+	/** the revision's message, or the checker's note */
+	text: string;
+	url: string;
+	settingsUrl: string;
+}
+
+export function submittedMail(input: RevisionMailInput): Composed {
+	return compose(
+		`Rev ${input.revision} of ${input.sheetTitle} is ready for your check`,
+		`A revision to check`,
+		[
+			`Hello ${esc(input.name)},`,
+			`${esc(input.actorName)} submitted <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}) for checking. The revision message:`,
+			quote(input.text),
+			'Write review notes on its legs and states, then mark it checked or return it to the designer.'
+		],
+		{ label: `Check Rev ${input.revision}`, url: input.url },
+		settingsNote(input.settingsUrl)
+	);
+}
+
+export function checkedMail(input: RevisionMailInput): Composed {
+	return compose(
+		`Rev ${input.revision} of ${input.sheetTitle} was checked`,
+		`Your revision was checked`,
+		[
+			`Hello ${esc(input.name)},`,
+			`${esc(input.actorName)} marked <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}) as checked. It now waits for an owner's approval.`,
+			...(input.text ? [quote(input.text)] : [])
+		],
+		{ label: `Open Rev ${input.revision}`, url: input.url },
+		settingsNote(input.settingsUrl)
+	);
+}
+
+export function approvedMail(input: RevisionMailInput): Composed {
+	return compose(
+		`Rev ${input.revision} of ${input.sheetTitle} was approved`,
+		`Your revision was approved`,
+		[
+			`Hello ${esc(input.name)},`,
+			`${esc(input.actorName)} approved <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}). The revision is now locked; further edits start a new draft based on it.`,
+			...(input.text ? [quote(input.text)] : [])
+		],
+		{ label: `Open Rev ${input.revision}`, url: input.url },
+		settingsNote(input.settingsUrl)
+	);
+}
+
+export function returnedMail(input: RevisionMailInput): Composed {
+	return compose(
+		`Rev ${input.revision} of ${input.sheetTitle} was returned to you`,
+		`Your revision was returned`,
+		[
+			`Hello ${esc(input.name)},`,
+			`${esc(input.actorName)} returned <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}) without checking it:`,
+			quote(input.text),
+			'Answer the review notes, fix the sheet and save a new revision.'
+		],
+		{ label: 'Open the sheet', url: input.url },
+		settingsNote(input.settingsUrl)
+	);
+}
