@@ -1,10 +1,24 @@
 import { redirect } from '@sveltejs/kit';
 import { z } from 'zod';
-import type { Actions } from './$types';
+import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { requireUser } from '$lib/server/guard';
 import { fields, parseForm, runAction, readFormData } from '$lib/server/forms';
 import { createTeamFor } from '$lib/server/teams';
+import { listRecentSheetsForUser, sheetCountsForUser } from '$lib/server/db/sheets';
+import { summaryOf } from '$lib/server/sheets';
+import { listFluids } from '$lib/thermo';
+
+export const load: PageServerLoad = async ({ locals }) => {
+	if (!locals.user) return { recentSheets: [], sheetCounts: {} as Record<string, number>, fluidNames: {} as Record<string, string> };
+	const db = getDb();
+	const [recent, counts] = await Promise.all([listRecentSheetsForUser(db, locals.user.id, 8), sheetCountsForUser(db, locals.user.id)]);
+	return {
+		recentSheets: recent.map((r) => ({ ...summaryOf(r), teamSlug: r.team_slug, teamName: r.team_name })),
+		sheetCounts: Object.fromEntries(counts),
+		fluidNames: Object.fromEntries(listFluids().map((f) => [f.id, f.name]))
+	};
+};
 
 const newTeam = z.object({ name: fields.teamName, description: fields.description });
 

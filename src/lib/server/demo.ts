@@ -5,6 +5,9 @@ import { createTeam } from './db/teams';
 import { addMember } from './db/memberships';
 import { logTeamEvent } from './db/team-events';
 import { hashPassword } from './auth';
+import { insertSheet } from './db/sheets';
+import { newId } from './secrets';
+import { WORKED_EXAMPLES } from '../sheets/templates';
 
 /*
  * The demo scenario: an invented consultancy with invented people and equipment, seeded on the
@@ -84,6 +87,17 @@ export async function seedDemo(db: DB): Promise<SeedResult> {
 		const team = await createTeam(trx, { name: DEMO_TEAM.name, description: DEMO_TEAM.description, slug: DEMO_TEAM.slug, ownerId: ids.owner! });
 		await logTeamEvent(trx, { teamId: team.id, actorId: ids.owner!, actorLabel: DEMO_PEOPLE[0].name, kind: 'team.created', detail: { name: team.name } });
 		for (const p of DEMO_PEOPLE) if (p.role !== 'owner') await addMember(trx, team.id, ids[p.role]!, p.role);
+		// the worked examples as the designer's sheets, oldest first
+		const designer = DEMO_PEOPLE.find((p) => p.role === 'designer')!;
+		const t0 = Date.now() - WORKED_EXAMPLES.length * 3_600_000;
+		for (const [i, ex] of WORKED_EXAMPLES.entries()) {
+			const doc = ex.build();
+			await insertSheet(
+				trx,
+				{ id: newId(), teamId: team.id, title: ex.title, fluid: doc.spec.fluid, systemKind: doc.spec.system.kind, example: ex.id, draft: JSON.stringify(doc), actor: { id: ids.designer!, label: designer.name } },
+				t0 + i * 3_600_000
+			);
+		}
 	});
 	return { seeded: true, teamSlug: DEMO_TEAM.slug, people: DEMO_PEOPLE, password: DEMO_PASSWORD };
 }

@@ -147,7 +147,7 @@ describe('reading, listing and searching', () => {
 		const recent = await listRecentSheetsForUser(env.db, people.checker.id);
 		expect(recent.map((r) => r.title)).toEqual(['B', 'A']);
 		expect(recent[0].team_slug).toBe(team.slug);
-		expect((await sheetCountsForUser(env.db, people.checker.id)).get(team.id)).toBe(2);
+		expect((await sheetCountsForUser(env.db, people.checker.id)).get(team.slug)).toBe(2);
 	});
 });
 

@@ -156,16 +156,17 @@ export async function countSheets(db: DB, teamId: string, q?: string): Promise<n
 	return Number(r?.n ?? 0);
 }
 
-/** Sheet counts per team, for the teams a person belongs to. */
+/** Sheet counts per team (by the team's slug), for the teams a person belongs to. */
 export async function sheetCountsForUser(db: DB, userId: string): Promise<Map<string, number>> {
 	const rows = await db
 		.selectFrom('sheets as s')
 		.innerJoin('memberships as m', 'm.team_id', 's.team_id')
-		.select(['s.team_id', (eb) => eb.fn.countAll<number>().as('n')])
+		.innerJoin('teams as t', 't.id', 's.team_id')
+		.select(['t.slug', (eb) => eb.fn.countAll<number>().as('n')])
 		.where('m.user_id', '=', userId)
-		.groupBy('s.team_id')
+		.groupBy('t.slug')
 		.execute();
-	return new Map(rows.map((r) => [r.team_id, Number(r.n)]));
+	return new Map(rows.map((r) => [r.slug, Number(r.n)]));
 }
 
 export interface RecentSheet extends SheetListItem {

@@ -2,12 +2,22 @@ import type { PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { requireTeam } from '$lib/server/guard';
 import { listMembers } from '$lib/server/db/memberships';
+import { countSheets } from '$lib/server/db/sheets';
+import { listTeamSheets } from '$lib/server/sheets';
+import { listFluids } from '$lib/thermo';
 
 export const load: PageServerLoad = async (event) => {
 	const access = await requireTeam(event, event.params.team, 'read');
 	const members = await listMembers(getDb(), access.team.id);
+	const q = (event.url.searchParams.get('q') ?? '').trim().slice(0, 200);
+	const [{ sheets, total }, all] = await Promise.all([listTeamSheets(getDb(), access, { q, limit: 100 }), countSheets(getDb(), access.team.id)]);
 	return {
 		joined: event.url.searchParams.has('joined'),
-		members: members.map((m) => ({ id: m.user_id, name: m.name, role: m.role }))
+		members: members.map((m) => ({ id: m.user_id, name: m.name, role: m.role })),
+		q,
+		sheets: sheets.map((s) => ({ ...s, teamSlug: access.team.slug })),
+		matching: total,
+		sheetCount: all,
+		fluidNames: Object.fromEntries(listFluids().map((f) => [f.id, f.name]))
 	};
 };

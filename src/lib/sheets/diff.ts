@@ -1,0 +1,104 @@
+/**
+ * What differs between two sheet documents, as rows a person can read: the start state, each leg
+ * (matched by its id, so a reordered or renamed-process leg is recognised), the system, limits,
+ * units and title block. Values are formatted in the display units of `prefs`. Used when an
+ * autosave is refused because someone else saved in between (and by revision compares later).
+ */
+import { formatQuantity, type UnitPrefs } from '../units';
+import type { Quantity } from '../units';
+import type { Inputs, TargetName } from '../thermo/types';
+import { legLabel, TITLE_BLOCK_LABELS } from './doc';
+import type { SheetDoc, SheetLegSpec } from './types';
+
+export interface DiffRow {
+	/** where: "Start state", "Leg L2", "Design limits", … */
+	section: string;
+	/** what: "T", "process", "target", "design pressure", … */
+	field: string;
+	/** display text in each document ('' when absent) */
+	a: string;
+	b: string;
+}
+
+const QUANTITY: Record<TargetName, Quantity | null> = {
+	T: 'temperature',
+	P: 'pressure',
+	v: 'specificVolume',
+	rho: 'density',
+	u: 'specificEnergy',
+	h: 'specificEnergy',
+	s: 'specificEntropy',
+	x: 'quality'
+};
+
+function prop(name: TargetName, si: number | undefined, prefs: UnitPrefs): string {
+	if (si === undefined) return '';
+	const q = QUANTITY[name];
+	return q ? `${name} = ${formatQuantity(si, q, prefs).full}` : `${name} = ${si}`;
+}
+
+function inputsText(i: Inputs | Partial<Record<TargetName, number>>, prefs: UnitPrefs): string {
+	return (Object.entries(i) as [TargetName, number | undefined][])
+		.filter(([, v]) => v !== undefined)
+		.map(([k, v]) => prop(k, v, prefs))
+		.join(', ');
+}
+
+function legText(l: SheetLegSpec | undefined, prefs: UnitPrefs): { process: string; target: string } {
+	if (!l) return { process: '', target: '' };
+	return { process: l.process + (l.n !== undefined ? ` (n = ${l.n})` : ''), target: inputsText(l.target, prefs) };
+}
+
+function systemText(d: SheetDoc, prefs: UnitPrefs): string {
+	const s = d.spec.system;
+	if (s.kind === 'flow') return `steady flow, ${formatQuantity(s.massFlow, 'massFlow', prefs).full}`;
+	if (s.mass !== undefined) return `closed, ${formatQuantity(s.mass, 'mass', prefs).full}`;
+	if (s.volume !== undefined) return `closed, ${formatQuantity(s.volume, 'volume', prefs).full}`;
+	return 'closed, per kg';
+}
+
+const LIMITS = [
+	['designPressure', 'design pressure', 'pressure'],
+	['reliefSetPressure', 'relief set pressure', 'pressure'],
+	['designTemperature', 'design temperature', 'temperature'],
+	['minimumTemperature', 'minimum temperature', 'temperature']
+] as const;
+
+/** Rows where `a` and `b` differ; values shown in `prefs` (usually the reader's sheet units). */
+export function diffDocs(a: SheetDoc, b: SheetDoc, prefs: UnitPrefs = a.units): DiffRow[] {
+	const rows: DiffRow[] = [];
+	const add = (section: string, field: string, x: string, y: string) => {
+		if (x !== y) rows.push({ section, field, a: x, b: y });
+	};
+	add('Sheet', 'fluid', a.spec.fluid, b.spec.fluid);
+	add('Sheet', 'system', systemText(a, prefs), systemText(b, prefs));
+	add('Sheet', 'description', a.description, b.description);
+	add('Start state S1', 'fixed by', inputsText(a.spec.start, prefs), inputsText(b.spec.start, prefs));
+
+	const ids = [...new Set([...a.spec.legs.map((l) => l.id), ...b.spec.legs.map((l) => l.id)])];
+	for (const id of ids) {
+		const ia = a.spec.legs.findIndex((l) => l.id === id);
+		const ib = b.spec.legs.findIndex((l) => l.id === id);
+		const name = ia >= 0 && ib >= 0 && ia !== ib ? `Leg ${legLabel(ia)} → ${legLabel(ib)}` : `Leg ${legLabel(ia >= 0 ? ia : ib)}`;
+		const la = legText(a.spec.legs[ia], prefs);
+		const lb = legText(b.spec.legs[ib], prefs);
+		if (ia < 0 || ib < 0) {
+			add(name, ia < 0 ? 'added' : 'deleted', ia < 0 ? '' : `${la.process} to ${la.target}`, ib < 0 ? '' : `${lb.process} to ${lb.target}`);
+			continue;
+		}
+		if (ia !== ib) add(name, 'position', legLabel(ia), legLabel(ib));
+		add(name, 'process', la.process, lb.process);
+		add(name, 'target', la.target, lb.target);
+	}
+
+	for (const [key, label, q] of LIMITS) {
+		const x = a.spec.limits?.[key];
+		const y = b.spec.limits?.[key];
+		add('Design limits', label, x === undefined ? '' : formatQuantity(x, q, prefs).full, y === undefined ? '' : formatQuantity(y, q, prefs).full);
+	}
+	const unitsText = (u: UnitPrefs) => `${u.system === 'si' ? 'SI' : 'US customary'}, ${u.system === 'si' ? u.pressureUnit : 'psi'} ${u.pressureReference}`;
+	add('Units', 'display', unitsText(a.units), unitsText(b.units));
+	add('Units', 'atmospheric pressure', formatQuantity(a.units.atmosphere, 'pressure', prefs, { reference: 'absolute' }).full, formatQuantity(b.units.atmosphere, 'pressure', prefs, { reference: 'absolute' }).full);
+	for (const k of Object.keys(TITLE_BLOCK_LABELS) as (keyof typeof TITLE_BLOCK_LABELS)[]) add('Title block', TITLE_BLOCK_LABELS[k], a.titleBlock[k], b.titleBlock[k]);
+	return rows;
+}

@@ -1,0 +1,819 @@
+/**
+ * The sketcher's state: one sheet being read or edited. The page, the chart, the table and the
+ * panels all read and change the sheet through this object, so every edit takes one path:
+ * build the next document → compute it (POST /api/v1/paths; the engine in the browser for a
+ * sheet without legs) → on success make it the document, push it on the undo stack and hand it
+ * to autosave; on failure keep the old one and say why. Drags are live: every pointer move asks
+ * the server through a coalescer (one request in flight, the newest position waiting, stale
+ * answers dropped) and the chart redraws as answers land; the gesture is one undo step.
+ *
+ * Extending (revisions, notes, traces): read `doc`, `view`, `selection`; draw over the chart by
+ * setting `traces`; add panel tabs on the page (see SheetPanel.svelte).
+ */
+import type { AddPointEvent, NudgeEvent, StateDragEvent } from '../charts/chart';
+import { fitDomain } from '../charts/scales';
+import type { ChartCoords, ChartKind, ChartSelection, CurvePoint, DesignLimits as ChartLimits, Isoline, MeasuredTrace, SaturationCurve } from '../charts/types';
+import type { FluidInfo, Inputs, PathResult, Process, State, TargetName } from '../thermo/types';
+import type { UnitPrefs } from '../units/prefs';
+import { Autosave, readLocalCopy, type AutosaveState, type KeyValueStore } from './autosave';
+import { ApiError, getIsolines, getSaturation, getSheetDraft, OfflineError, postPath, putDraft } from './client';
+import { createCoalescer, type Coalescer } from './coalescer';
+import {
+	cloneDoc,
+	engineSpec,
+	INVARIANT,
+	labelIds,
+	MAX_SHEET_LEGS,
+	newLegId,
+	sameDoc,
+	sameSpec,
+	startOnlyResult,
+	stateIndex,
+	stateKey,
+	targetOf,
+	viewOf,
+	type EditableProp,
+	type PathView
+} from './doc';
+import { History } from './history';
+import { isobarValues, isothermValues } from './isolines';
+import { defaultTargetKind, projectOntoLeg, targetFor, valueOf, type FixFn, type ScreenMetric } from './targets';
+import type { ChartPrefs, SheetDoc, SheetLegSpec, SheetStatus, TitleBlockFields } from './types';
+
+type Engine = typeof import('../thermo');
+
+export interface EditorInit {
+	team: string;
+	sheetId: string;
+	number: number;
+	title: string;
+	status: SheetStatus;
+	doc: SheetDoc;
+	version: number;
+	updatedAt: number;
+	updatedBy: string;
+	/** the draft computed on the server for the first paint, or why it could not be */
+	result: PathResult | null;
+	resultError: string | null;
+	canEdit: boolean;
+	fluid: FluidInfo;
+	saturation: SaturationCurve;
+	fluids: FluidInfo[];
+}
+
+export type Outcome = { ok: true; note?: string | null } | { ok: false; message: string };
+
+/** What a drag is moving. */
+interface Drag {
+	kind: 'state' | 'new-leg';
+	/** anchor key of the state dragged (for a new leg: its id) */
+	key: string;
+	chart: ChartKind;
+	metric: ScreenMetric;
+	base: SheetDoc;
+	baseView: PathView | null;
+	/** the target kind the leg had when the drag began (kept where it can hold the end) */
+	wanted: EditableProp | null;
+	/** v of the last projected end: the next projection searches near it */
+	hint?: number;
+	/** the newest document the server answered for */
+	live: SheetDoc | null;
+}
+
+interface Candidate {
+	doc: SheetDoc;
+	note: string | null;
+}
+
+function messageOf(e: unknown, legs: readonly { id: string }[]): string {
+	if (e instanceof OfflineError) return 'No connection to the server: the path cannot be computed right now, so the edit was not applied.';
+	if (e instanceof ApiError) return labelIds(e.message, legs);
+	if (e instanceof Error) return labelIds(e.message, legs);
+	return String(e);
+}
+
+export class SheetEditor {
+	readonly team: string;
+	readonly sheetId: string;
+	readonly number: number;
+	readonly canEdit: boolean;
+	readonly fluids: FluidInfo[];
+
+	title = $state('');
+	status = $state<SheetStatus>('draft');
+
+	/** the document shown (during a drag: the live one) */
+	doc = $state.raw<SheetDoc>(null as unknown as SheetDoc);
+	/** its computed path (null if it could not be computed: `computeError` says why) */
+	view = $state.raw<PathView | null>(null);
+	/** the view of the committed document (isolines and the chart window follow it, not a drag) */
+	committedView = $state.raw<PathView | null>(null);
+	computeError = $state<string | null>(null);
+	/** a committed edit is being computed */
+	busy = $state(false);
+
+	fluid = $state.raw<FluidInfo>(null as unknown as FluidInfo);
+	saturation = $state.raw<SaturationCurve | null>(null);
+	isolines = $state.raw<{ tv: Isoline[]; pv: Isoline[] }>({ tv: [], pv: [] });
+	limitCurves = $state.raw<{ isobars: Isoline[]; isotherms: Isoline[] }>({ isobars: [], isotherms: [] });
+
+	selection = $state<ChartSelection | null>(null);
+	mode = $state<'select' | 'add-leg'>('select');
+	addProcess = $state<Process>('isochoric');
+	addN = $state(1.3);
+	/** what the last drag or chart edit ran into (shown for a few seconds) */
+	chartNote = $state<{ text: string; kind: 'info' | 'caution' } | null>(null);
+	/** a one-line message under the header (restored local copy, loaded draft …) */
+	notice = $state<{ text: string; kind: 'ok' | 'info' | 'caution' } | null>(null);
+	dragging = $state(false);
+
+	save = $state<AutosaveState>({ status: 'saved', version: 1, savedAt: null, message: null, conflict: null });
+	updatedAt = $state(0);
+	updatedBy = $state('');
+	/** a local copy from an older version than the server's, waiting for the person to decide */
+	recovery = $state.raw<{ doc: SheetDoc; baseVersion: number; changedAt: number } | null>(null);
+	/** theirs, when comparing after a conflict */
+	theirs = $state.raw<{ doc: SheetDoc; version: number; updatedAt: number; updatedBy: string } | null>(null);
+
+	/** drawn over the path on both charts (measured traces, a revision to compare with …) */
+	traces = $state.raw<MeasuredTrace[]>([]);
+
+	engine = $state.raw<Engine | null>(null);
+
+	#history: History<SheetDoc>;
+	#historyRev = $state(0);
+	#autosave: Autosave<SheetDoc> | null = null;
+	#queue: Promise<unknown> = Promise.resolve();
+	#drag: Drag | null = null;
+	#coalescer: Coalescer<Candidate>;
+	#noteTimer: ReturnType<typeof setTimeout> | undefined;
+	#isoKey = '';
+	#limitKey = '';
+
+	constructor(init: EditorInit) {
+		this.team = init.team;
+		this.sheetId = init.sheetId;
+		this.number = init.number;
+		this.canEdit = init.canEdit;
+		this.fluids = init.fluids;
+		this.title = init.title;
+		this.status = init.status;
+		this.doc = init.doc;
+		this.fluid = init.fluid;
+		this.saturation = init.saturation;
+		this.updatedAt = init.updatedAt;
+		this.updatedBy = init.updatedBy;
+		this.save = { status: 'saved', version: init.version, savedAt: null, message: null, conflict: null };
+		if (init.result) {
+			this.view = viewOf(init.doc.spec, init.result);
+			this.committedView = this.view;
+		}
+		this.computeError = init.resultError;
+		this.#history = new History(init.doc, { limit: 200, same: sameDoc });
+		this.#coalescer = createCoalescer<Candidate, { view: PathView; candidate: Candidate }>(
+			async (c) => ({ view: await this.#compute(c.doc), candidate: c }),
+			{
+				result: ({ view, candidate }) => {
+					if (!this.#drag) return;
+					this.#drag.live = candidate.doc;
+					this.doc = candidate.doc;
+					this.view = view;
+					if (candidate.note) this.#note(candidate.note, 'info');
+				},
+				error: (e) => {
+					if (!this.#drag) return;
+					this.#note(`Not there: ${messageOf(e, this.#drag.base.spec.legs)} The last valid path stays drawn.`, 'caution');
+				}
+			}
+		);
+	}
+
+	// ---- lifecycle (browser only) -------------------------------------------------------------
+
+	/** Start autosave, replay a local copy, load the engine. Call once, in the browser. */
+	start(storage: KeyValueStore | null): () => void {
+		if (this.canEdit) {
+			this.#autosave = new Autosave<SheetDoc>(this.save.version, {
+				save: async (doc, v) => {
+					const r = await putDraft(this.team, this.sheetId, v, doc);
+					this.updatedAt = r.updatedAt;
+					this.updatedBy = r.updatedBy;
+					return r;
+				},
+				storage,
+				key: `sw:draft:${this.sheetId}`,
+				onState: (s) => (this.save = s)
+			});
+			const local = readLocalCopy<SheetDoc>(storage, `sw:draft:${this.sheetId}`);
+			if (local && !sameDoc(local.doc, this.doc)) {
+				if (local.baseVersion === this.save.version) void this.#replay(local.doc);
+				else this.recovery = local;
+			} else if (local) storage?.removeItem(`sw:draft:${this.sheetId}`);
+		}
+		void this.loadEngine();
+		return () => {
+			this.#autosave?.dispose();
+			clearTimeout(this.#noteTimer);
+		};
+	}
+
+	async loadEngine(): Promise<Engine> {
+		if (this.engine) return this.engine;
+		const e = await import('../thermo');
+		this.engine = e;
+		return e;
+	}
+
+	/** Save now (leaving the page, or the connection came back). */
+	flush(): void {
+		void this.#autosave?.flush();
+	}
+	online(): void {
+		this.#autosave?.online();
+	}
+	/** True while something is not on the server yet. */
+	get unsaved(): boolean {
+		return this.#autosave?.dirty ?? false;
+	}
+
+	async #replay(doc: SheetDoc) {
+		const r = await this.commit(doc);
+		if (r.ok) this.notice = { kind: 'info', text: 'Restored edits kept in this browser that had not reached the server; saving them now.' };
+		else this.recovery = { doc, baseVersion: this.save.version, changedAt: Date.now() };
+	}
+
+	// ---- computing ----------------------------------------------------------------------------
+
+	async #compute(doc: SheetDoc): Promise<PathView> {
+		if (doc.spec.legs.length === 0) {
+			const e = await this.loadEngine();
+			const start = e.fixState(doc.spec.fluid, doc.spec.start);
+			return { result: startOnlyResult(doc, start, e.stateExtras(start)), states: [{ id: 'start', label: 'S1', state: start }], legs: [] };
+		}
+		const result = await postPath(engineSpec(doc));
+		return viewOf(doc.spec, result);
+	}
+
+	#note(text: string, kind: 'info' | 'caution' = 'info', ms = 6000) {
+		clearTimeout(this.#noteTimer);
+		this.chartNote = { text, kind };
+		this.#noteTimer = setTimeout(() => (this.chartNote = null), ms);
+	}
+
+	/** Run edits one after another (each computes against the one before). */
+	#serial<T>(f: () => Promise<T>): Promise<T> {
+		const p = this.#queue.then(f, f);
+		this.#queue = p.catch(() => undefined);
+		return p;
+	}
+
+	/**
+	 * Make `next` the document, if it computes: the one way every edit is applied. Documents
+	 * with the same spec (title block, units, chart settings) need no computing.
+	 */
+	commit(next: SheetDoc): Promise<Outcome> {
+		return this.#serial(async () => {
+			if (!this.canEdit) return { ok: false, message: 'Your role can read this sheet but not edit it.' };
+			if (sameDoc(next, this.doc)) return { ok: true };
+			if (sameSpec(next, this.doc) && this.view) {
+				this.#apply(next, this.view);
+				return { ok: true };
+			}
+			this.busy = true;
+			try {
+				const view = await this.#compute(next);
+				this.#apply(next, view);
+				return { ok: true };
+			} catch (e) {
+				return { ok: false, message: messageOf(e, next.spec.legs) };
+			} finally {
+				this.busy = false;
+			}
+		});
+	}
+
+	#apply(next: SheetDoc, view: PathView) {
+		this.doc = next;
+		this.view = view;
+		this.committedView = view;
+		this.computeError = null;
+		if (this.#history.push(next)) this.#historyRev++;
+		this.#autosave?.change(next);
+		this.#keepSelection();
+	}
+
+	#keepSelection() {
+		const s = this.selection;
+		if (!s) return;
+		const legs = this.doc.spec.legs;
+		if (s.kind === 'leg' ? !legs.some((l) => l.id === s.id) : stateIndex(legs, s.id) < 0) this.selection = null;
+	}
+
+	// ---- undo / redo --------------------------------------------------------------------------
+
+	get canUndo(): boolean {
+		void this.#historyRev;
+		return this.canEdit && this.#history.canUndo;
+	}
+	get canRedo(): boolean {
+		void this.#historyRev;
+		return this.canEdit && this.#history.canRedo;
+	}
+
+	undo(): Promise<void> {
+		return this.#step(() => this.#history.undo());
+	}
+	redo(): Promise<void> {
+		return this.#step(() => this.#history.redo());
+	}
+
+	#step(move: () => SheetDoc | null): Promise<void> {
+		return this.#serial(async () => {
+			if (!this.canEdit || this.#drag) return;
+			const doc = move();
+			if (!doc) return;
+			this.#historyRev++;
+			this.doc = doc;
+			this.#autosave?.change(doc);
+			try {
+				this.view = await this.#compute(doc);
+				this.committedView = this.view;
+				this.computeError = null;
+			} catch (e) {
+				this.computeError = messageOf(e, doc.spec.legs);
+			}
+			this.#keepSelection();
+		});
+	}
+
+	// ---- dragging on the chart ----------------------------------------------------------------
+
+	#fix(fluid = this.doc.spec.fluid): FixFn | null {
+		const e = this.engine;
+		if (!e) return null;
+		return (inputs: Inputs) => e.fixState(fluid, inputs);
+	}
+
+	/** The document with state `key` moved to the pointer, or why it cannot go there. */
+	#candidate(drag: Drag, coords: ChartCoords): Candidate | { error: string } {
+		const base = drag.base;
+		const fix = this.#fix();
+		if (drag.kind === 'state' && drag.key === 'start') {
+			const next = cloneDoc(base);
+			next.spec.start = drag.chart === 'T-v' ? { T: coords.T!, v: coords.v } : { P: coords.P!, v: coords.v };
+			return { doc: next, note: null };
+		}
+		if (!fix) return { error: 'The property engine is still loading; try again in a moment.' };
+		const legs = base.spec.legs;
+		const states = drag.baseView?.states ?? [];
+		let i: number;
+		let leg: SheetLegSpec;
+		if (drag.kind === 'new-leg') {
+			i = legs.length;
+			leg = { id: drag.key, process: this.addProcess, target: {}, ...(this.addProcess === 'polytropic' ? { n: this.addN } : {}) };
+		} else {
+			i = stateIndex(legs, drag.key) - 1;
+			if (i < 0) return { error: 'That state is no longer on the sheet.' };
+			leg = legs[i];
+		}
+		const from = states[i]?.state;
+		if (!from) return { error: 'The path has to compute before its states can be moved.' };
+		const end = projectOntoLeg(leg.process, from, coords, drag.metric, fix, leg.n, drag.hint);
+		if (!end) return { error: `No ${leg.process} state of ${this.fluid.name} lies near there.` };
+		drag.hint = end.v;
+		const wanted = drag.wanted ?? defaultTargetKind(leg.process, end, drag.chart, leg.n);
+		const choice = targetFor(leg.process, end, wanted, drag.chart, leg.n);
+		const next = cloneDoc(base);
+		const moved: SheetLegSpec = { ...leg, target: choice.target };
+		if (drag.kind === 'new-leg') next.spec.legs.push(moved);
+		else next.spec.legs[i] = moved;
+		return { doc: next, note: choice.note };
+	}
+
+	dragStart(e: StateDragEvent, chart: ChartKind, metric: ScreenMetric): void {
+		if (!this.canEdit || this.busy) return;
+		const legs = this.doc.spec.legs;
+		const index = stateIndex(legs, e.stateId);
+		const pullNewLeg = this.mode === 'add-leg' && index === legs.length && legs.length < MAX_SHEET_LEGS;
+		const key = pullNewLeg ? newLegId(legs.map((l) => l.id)) : e.stateId;
+		const leg = !pullNewLeg && index > 0 ? legs[index - 1] : null;
+		this.#coalescer.cancel();
+		this.#drag = {
+			kind: pullNewLeg ? 'new-leg' : 'state',
+			key,
+			chart,
+			metric,
+			base: this.doc,
+			baseView: this.view,
+			wanted: leg ? targetOf(leg.target)[0] : null,
+			hint: pullNewLeg ? undefined : this.view?.states[index]?.state.v,
+			live: null
+		};
+		this.dragging = true;
+		if (!pullNewLeg) this.selection = { kind: 'state', id: e.stateId };
+	}
+
+	drag(e: StateDragEvent): void {
+		const d = this.#drag;
+		if (!d) return;
+		const c = this.#candidate(d, e.coords);
+		if ('error' in c) {
+			this.#note(c.error, 'caution');
+			return;
+		}
+		this.#coalescer.submit(c);
+	}
+
+	async dragEnd(e: StateDragEvent): Promise<void> {
+		const d = this.#drag;
+		if (!d) return;
+		this.drag(e);
+		await this.#coalescer.idle();
+		this.#drag = null;
+		this.dragging = false;
+		const live = d.live;
+		if (!live || sameDoc(live, d.base) || !this.view) {
+			this.doc = d.base;
+			this.view = d.baseView;
+			return;
+		}
+		const view = this.view;
+		await this.#serial(async () => this.#apply(live, view));
+		if (d.kind === 'new-leg') {
+			this.selection = { kind: 'leg', id: d.key };
+			this.mode = 'select';
+		}
+	}
+
+	// ---- chart clicks and keys ----------------------------------------------------------------
+
+	/** Add a leg of the chosen process ending where the chart was clicked. */
+	async addLegAt(e: AddPointEvent, chart: ChartKind, metric: ScreenMetric): Promise<Outcome> {
+		if (!this.canEdit) return { ok: false, message: 'Your role cannot edit this sheet.' };
+		const legs = this.doc.spec.legs;
+		if (legs.length >= MAX_SHEET_LEGS) return { ok: false, message: `A sheet holds at most ${MAX_SHEET_LEGS} legs.` };
+		const fix = this.#fix() ?? (await this.loadEngine(), this.#fix()!);
+		const from = this.view?.states[this.view.states.length - 1]?.state;
+		if (!from) return { ok: false, message: 'The path has to compute before a leg can be added.' };
+		const process = this.addProcess;
+		const n = process === 'polytropic' ? this.addN : undefined;
+		const end = projectOntoLeg(process, from, e.coords, metric, fix, n);
+		if (!end) {
+			this.#note(`No ${process} state from the last state lies near there.`, 'caution');
+			return { ok: false, message: `No ${process} state lies near there.` };
+		}
+		const kind = defaultTargetKind(process, end, chart, n);
+		const value = valueOf(end, kind);
+		const id = newLegId(legs.map((l) => l.id));
+		const next = cloneDoc(this.doc);
+		next.spec.legs.push({ id, process, target: { [value === null ? 'v' : kind]: value ?? end.v }, ...(n !== undefined ? { n } : {}) });
+		const r = await this.commit(next);
+		if (r.ok) {
+			this.selection = { kind: 'leg', id };
+			this.mode = 'select';
+		} else this.#note(r.message, 'caution');
+		return r;
+	}
+
+	/** Arrow keys on a focused state or leg: one small move, one undo step. */
+	async nudge(e: NudgeEvent, chart: ChartKind, metric: ScreenMetric): Promise<void> {
+		if (!this.canEdit || this.#drag) return;
+		const legs = this.doc.spec.legs;
+		const index = stateIndex(legs, e.stateId);
+		if (index < 0) return;
+		if (index > 0 && legs[index - 1].process === 'isochoric' && (e.direction === 'left' || e.direction === 'right')) {
+			this.#note('The end of an isochoric leg moves only up and down: its v is fixed by the state before it.', 'info');
+			return;
+		}
+		await this.loadEngine();
+		const leg = index > 0 ? legs[index - 1] : null;
+		const drag: Drag = {
+			kind: 'state',
+			key: e.stateId,
+			chart,
+			metric,
+			base: this.doc,
+			baseView: this.view,
+			wanted: leg ? targetOf(leg.target)[0] : null,
+			hint: this.view?.states[index]?.state.v,
+			live: null
+		};
+		const c = this.#candidate(drag, e.coords);
+		if ('error' in c) {
+			this.#note(c.error, 'caution');
+			return;
+		}
+		const r = await this.commit(c.doc);
+		if (!r.ok) this.#note(`Not there: ${r.message}`, 'caution');
+		else if (c.note) this.#note(c.note, 'info');
+		if (e.reason) this.#note(e.reason, 'caution');
+	}
+
+	/** The hover readout's state: the engine in the browser, synchronous. */
+	probe(chart: ChartKind, c: ChartCoords): State | null {
+		const e = this.engine;
+		if (!e) return null;
+		try {
+			return e.fixState(this.doc.spec.fluid, chart === 'T-v' ? { T: c.T!, v: c.v } : { P: c.P!, v: c.v }, { near: this.view?.states[0]?.state });
+		} catch {
+			return null;
+		}
+	}
+
+	// ---- typed edits (table and setup) --------------------------------------------------------
+
+	/**
+	 * Fix S1 by a typed property. Typing one of its two properties changes that value; typing
+	 * another replaces the older of the two (the one set first), so the last two typed fix it.
+	 */
+	setStartProperty(prop: EditableProp, si: number): Promise<Outcome> {
+		const next = cloneDoc(this.doc);
+		const start: Record<string, number> = {};
+		// rho is shown and typed as v
+		for (const [k, v] of Object.entries(next.spec.start)) if (v !== undefined) start[k === 'rho' ? 'v' : k] = k === 'rho' ? 1 / v : v;
+		const [older, newer] = Object.keys(start);
+		const keep = prop === newer ? older : newer;
+		next.spec.start = { [keep]: start[keep], [prop]: si };
+		return this.commit(next);
+	}
+
+	/** Replace the start pair at once (the table's "fixed by" picker). */
+	setStartPair(a: EditableProp, b: EditableProp): Promise<Outcome> {
+		const s = this.view?.states[0]?.state;
+		if (!s || a === b) return Promise.resolve({ ok: false, message: 'Pick two different properties.' });
+		const va = valueOf(s, a);
+		const vb = valueOf(s, b);
+		if (va === null || vb === null) return Promise.resolve({ ok: false, message: 'S1 has no quality outside the vapor dome; pick other properties.' });
+		const next = cloneDoc(this.doc);
+		next.spec.start = { [a]: va, [b]: vb };
+		return this.commit(next);
+	}
+
+	/** End leg `index` exactly on a typed property of its end state. */
+	setTarget(index: number, prop: EditableProp, si: number): Promise<Outcome> {
+		const leg = this.doc.spec.legs[index];
+		if (!leg) return Promise.resolve({ ok: false, message: 'That leg is no longer on the sheet.' });
+		if (INVARIANT[leg.process] === prop) return Promise.resolve({ ok: false, message: `An ${leg.process} leg keeps ${prop} constant; type another property of this state.` });
+		const next = cloneDoc(this.doc);
+		next.spec.legs[index] = { ...leg, target: { [prop]: si } as Partial<Record<TargetName, number>> };
+		return this.commit(next);
+	}
+
+	/** Change a leg's process, keeping its id (so its review notes stay on it) and, where it can, its end. */
+	setProcess(index: number, process: Process): Promise<Outcome> {
+		const leg = this.doc.spec.legs[index];
+		if (!leg || leg.process === process) return Promise.resolve({ ok: true });
+		const end = this.view?.states[index + 1]?.state;
+		const [kind, value] = targetOf(leg.target);
+		let target: Partial<Record<TargetName, number>> = { [kind]: value };
+		if (INVARIANT[process] === kind && end) target = targetFor(process, end, kind, 'T-v', process === 'polytropic' ? this.addN : undefined).target;
+		else if (INVARIANT[process] === kind) target = { T: value };
+		const next = cloneDoc(this.doc);
+		const changed: SheetLegSpec = { id: leg.id, process, target };
+		if (process === 'polytropic') changed.n = leg.n ?? this.addN;
+		next.spec.legs[index] = changed;
+		return this.commit(next);
+	}
+
+	setN(index: number, n: number): Promise<Outcome> {
+		const leg = this.doc.spec.legs[index];
+		if (!leg || leg.process !== 'polytropic') return Promise.resolve({ ok: false, message: 'Only a polytropic leg has n.' });
+		if (!Number.isFinite(n) || Math.abs(n) > 50) return Promise.resolve({ ok: false, message: 'n must be a number from −50 to 50, e.g. 1.3.' });
+		const next = cloneDoc(this.doc);
+		next.spec.legs[index] = { ...leg, n };
+		return this.commit(next);
+	}
+
+	deleteLeg(index: number): Promise<Outcome> {
+		const leg = this.doc.spec.legs[index];
+		if (!leg) return Promise.resolve({ ok: false, message: 'That leg is no longer on the sheet.' });
+		const next = cloneDoc(this.doc);
+		next.spec.legs.splice(index, 1);
+		return this.commit(next).then((r) => {
+			if (r.ok) this.selection = null;
+			return r;
+		});
+	}
+
+	/** Move a leg one place earlier (-1) or later (+1); every state after it re-solves. */
+	moveLeg(index: number, by: -1 | 1): Promise<Outcome> {
+		const to = index + by;
+		const legs = this.doc.spec.legs;
+		if (to < 0 || to >= legs.length) return Promise.resolve({ ok: true });
+		const next = cloneDoc(this.doc);
+		const [leg] = next.spec.legs.splice(index, 1);
+		next.spec.legs.splice(to, 0, leg);
+		return this.commit(next);
+	}
+
+	/** Delete the selected leg (the Delete key); a selected state deletes the leg ending there. */
+	deleteSelected(): Promise<Outcome> {
+		const s = this.selection;
+		if (!s) return Promise.resolve({ ok: false, message: 'Select a leg first.' });
+		const legs = this.doc.spec.legs;
+		const index = s.kind === 'leg' ? legs.findIndex((l) => l.id === s.id) : stateIndex(legs, s.id) - 1;
+		if (index < 0) return Promise.resolve({ ok: false, message: 'The first state cannot be deleted; change it instead.' });
+		return this.deleteLeg(index);
+	}
+
+	setSystem(system: SheetDoc['spec']['system']): Promise<Outcome> {
+		const next = cloneDoc(this.doc);
+		next.spec.system = system;
+		return this.commit(next);
+	}
+
+	setLimits(limits: NonNullable<SheetDoc['spec']['limits']>): Promise<Outcome> {
+		const next = cloneDoc(this.doc);
+		const clean = Object.fromEntries(Object.entries(limits).filter(([, v]) => typeof v === 'number' && Number.isFinite(v)));
+		if (Object.keys(clean).length) next.spec.limits = clean;
+		else delete next.spec.limits;
+		return this.commit(next);
+	}
+
+	setUnits(patch: Partial<UnitPrefs>): Promise<Outcome> {
+		const next = cloneDoc(this.doc);
+		next.units = { ...next.units, ...patch };
+		next.spec.atmosphericPressure = next.units.atmosphere;
+		if (!this.canEdit) {
+			this.doc = next;
+			return Promise.resolve({ ok: true });
+		}
+		return this.commit(next);
+	}
+
+	/** Chart preferences; for readers they change the view only (nothing is saved). */
+	setChart(patch: Partial<ChartPrefs>): Promise<Outcome> {
+		const next = cloneDoc(this.doc);
+		next.chart = { ...next.chart, ...patch };
+		if (!this.canEdit) {
+			this.doc = next;
+			return Promise.resolve({ ok: true });
+		}
+		return this.commit(next);
+	}
+
+	setTitleBlock(patch: Partial<TitleBlockFields>): Promise<Outcome> {
+		const next = cloneDoc(this.doc);
+		next.titleBlock = { ...next.titleBlock, ...patch };
+		return this.commit(next);
+	}
+
+	setDescription(text: string): Promise<Outcome> {
+		const next = cloneDoc(this.doc);
+		next.description = text;
+		return this.commit(next);
+	}
+
+	/** Another fluid: the same spec in it, if its start state exists there. */
+	async setFluid(id: string): Promise<Outcome> {
+		const info = this.fluids.find((f) => f.id === id);
+		if (!info) return { ok: false, message: 'Unknown fluid.' };
+		if (id === this.doc.spec.fluid) return { ok: true };
+		const next = cloneDoc(this.doc);
+		next.spec.fluid = id;
+		let sat: SaturationCurve;
+		try {
+			sat = await getSaturation(id);
+		} catch (e) {
+			return { ok: false, message: messageOf(e, []) };
+		}
+		const r = await this.commit(next);
+		if (r.ok) {
+			this.fluid = info;
+			this.saturation = sat;
+		} else return { ok: false, message: `The path cannot be computed for ${info.name}: ${r.message} Change the start state or the targets first.` };
+		return r;
+	}
+
+	// ---- conflicts and recovery ---------------------------------------------------------------
+
+	/** Fetch the draft someone else saved (to compare, or to load it). */
+	async fetchTheirs(): Promise<Outcome> {
+		try {
+			const s = await getSheetDraft(this.team, this.sheetId);
+			this.theirs = { doc: s.doc, version: s.version, updatedAt: s.updatedAt, updatedBy: s.updatedBy };
+			return { ok: true };
+		} catch (e) {
+			return { ok: false, message: messageOf(e, []) };
+		}
+	}
+
+	/** Drop these edits and continue from the server's draft. */
+	async loadTheirs(): Promise<Outcome> {
+		const r = this.theirs ? { ok: true as const } : await this.fetchTheirs();
+		if (!r.ok || !this.theirs) return r;
+		const t = this.theirs;
+		this.#autosave?.adopt(t.version, t.updatedAt);
+		this.#history.reset(t.doc);
+		this.#historyRev++;
+		this.doc = t.doc;
+		this.updatedAt = t.updatedAt;
+		this.updatedBy = t.updatedBy;
+		this.theirs = null;
+		this.recovery = null;
+		try {
+			this.view = await this.#compute(t.doc);
+			this.committedView = this.view;
+			this.computeError = null;
+		} catch (e) {
+			this.computeError = messageOf(e, t.doc.spec.legs);
+		}
+		this.#keepSelection();
+		this.notice = { kind: 'info', text: `Loaded the draft ${t.updatedBy} saved.` };
+		return { ok: true };
+	}
+
+	/** Keep these edits: save them over the draft the server now holds. */
+	keepMine(): void {
+		const c = this.save.conflict;
+		if (!c) return;
+		this.theirs = null;
+		this.#autosave?.overwrite(c.version);
+	}
+
+	/** Use the local copy a previous visit left behind (based on an older version). */
+	async useRecovery(): Promise<Outcome> {
+		const rec = this.recovery;
+		if (!rec) return { ok: true };
+		const r = await this.commit(rec.doc);
+		if (r.ok) {
+			this.recovery = null;
+			this.notice = { kind: 'info', text: 'Restored the copy from this browser; it replaces the saved draft.' };
+		}
+		return r;
+	}
+
+	discardRecovery(storage: KeyValueStore | null): void {
+		this.recovery = null;
+		storage?.removeItem(`sw:draft:${this.sheetId}`);
+	}
+
+	// ---- background lines ---------------------------------------------------------------------
+
+	/** Fetch the isolines and limit curves the current fluid, units and path need (cached by URL). */
+	async refreshLines(): Promise<void> {
+		const doc = this.doc;
+		const sat = this.saturation;
+		const f = this.fluid;
+		if (!sat || !f) return;
+		const states = this.committedView?.states ?? [];
+		const maxP = Math.max(f.critical.P, ...states.map((s) => s.state.P));
+		const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.state.P));
+		const maxT = Math.max(f.critical.T, ...states.map((s) => s.state.T));
+		const isobars = doc.chart.isolines ? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units) : [];
+		const isotherms = doc.chart.isolines ? isothermValues({ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) }, doc.units) : [];
+		const key = JSON.stringify([f.id, isobars, isotherms]);
+		if (key !== this.#isoKey) {
+			this.#isoKey = key;
+			try {
+				const [tv, pv] = await Promise.all([getIsolines(f.id, 'isobar', isobars), getIsolines(f.id, 'isotherm', isotherms)]);
+				if (this.#isoKey === key) this.isolines = { tv, pv };
+			} catch {
+				this.#isoKey = '';
+			}
+		}
+		const lim = doc.spec.limits ?? {};
+		const pLimits = [lim.designPressure, lim.reliefSetPressure].filter((v): v is number => typeof v === 'number' && v <= f.limits.Pmax);
+		const tLimits = [lim.designTemperature, lim.minimumTemperature].filter((v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax);
+		const lkey = JSON.stringify([f.id, pLimits, tLimits]);
+		if (lkey !== this.#limitKey) {
+			this.#limitKey = lkey;
+			try {
+				const [isobars, isotherms] = await Promise.all([getIsolines(f.id, 'isobar', pLimits), getIsolines(f.id, 'isotherm', tLimits)]);
+				if (this.#limitKey === lkey) this.limitCurves = { isobars, isotherms };
+			} catch {
+				this.#limitKey = '';
+			}
+		}
+	}
+
+	/** Design limits for the chart, with the curves a limit needs on the other diagram. */
+	chartLimits(): ChartLimits {
+		const lim = this.doc.spec.limits ?? {};
+		const curve = (list: Isoline[], value: number | undefined): CurvePoint[] | undefined => list.find((l) => Math.abs(l.value / (value ?? NaN) - 1) < 1e-9)?.points;
+		const out: ChartLimits = {};
+		if (lim.designPressure !== undefined) out.designPressure = { value: lim.designPressure, points: curve(this.limitCurves.isobars, lim.designPressure) };
+		if (lim.reliefSetPressure !== undefined) out.reliefSetPressure = { value: lim.reliefSetPressure, points: curve(this.limitCurves.isobars, lim.reliefSetPressure) };
+		if (lim.designTemperature !== undefined) out.designTemperature = { value: lim.designTemperature, points: curve(this.limitCurves.isotherms, lim.designTemperature) };
+		if (lim.minimumTemperature !== undefined) out.minimumTemperature = { value: lim.minimumTemperature, points: curve(this.limitCurves.isotherms, lim.minimumTemperature) };
+		return out;
+	}
+
+	/** How the chart of `kind` maps data to screen (for projecting the pointer onto a leg). */
+	metric(kind: ChartKind, width: number, height: number): ScreenMetric {
+		const v = this.committedView;
+		const d = fitDomain(kind, this.doc.chart.pressureScale, {
+			saturation: this.saturation,
+			triple: this.fluid.triple,
+			states: v?.states ?? [],
+			legs: v?.legs ?? [],
+			limits: this.chartLimits()
+		});
+		return { kind, pressureScale: this.doc.chart.pressureScale, ySpan: d.y, vSpan: d.x, aspect: Math.max(0.3, (width - 84) / Math.max(60, height - 90)) };
+	}
+
+	/** Anchor key of the state at a position (for the table and notes). */
+	stateKeyAt(index: number): string {
+		return stateKey(this.doc.spec.legs, index);
+	}
+}

@@ -1,0 +1,86 @@
+/**
+ * Numbers of the state and leg table in the sheet's display units, with significant figures an
+ * engineer expects: temperatures to 0.01, quality to 4 decimals, everything else 5 significant.
+ */
+import { chooseUnit, displayUnit, formatQuantity, type Formatted, type Quantity, type UnitDef, type UnitPrefs } from '../units';
+import type { Phase, State } from '../thermo/types';
+import type { EditableProp } from './doc';
+
+export const PROP_QUANTITY: Record<EditableProp, Quantity> = {
+	T: 'temperature',
+	P: 'pressure',
+	v: 'specificVolume',
+	u: 'specificEnergy',
+	h: 'specificEnergy',
+	s: 'specificEntropy',
+	x: 'quality'
+};
+
+export const PROP_NAME: Record<EditableProp, string> = {
+	T: 'temperature',
+	P: 'pressure',
+	v: 'specific volume',
+	u: 'internal energy',
+	h: 'enthalpy',
+	s: 'entropy',
+	x: 'quality'
+};
+
+/** The unit a table column is shown in (pressures: absolute or gauge as the sheet says). */
+export function columnUnit(prop: EditableProp, prefs: UnitPrefs): UnitDef {
+	return displayUnit(PROP_QUANTITY[prop], prefs);
+}
+
+/** A column's unit label; quality has none. */
+export function columnUnitLabel(prop: EditableProp, prefs: UnitPrefs): string {
+	if (prop === 'x') return '–';
+	return columnUnit(prop, prefs).label;
+}
+
+/** One cell: the number only (its unit is in the column head). */
+export function cellText(state: State, prop: EditableProp, prefs: UnitPrefs): string {
+	if (prop === 'x') return state.x === null ? '—' : formatQuantity(state.x, 'quality', prefs).text;
+	return formatQuantity(state[prop], PROP_QUANTITY[prop], prefs).text;
+}
+
+/** A value with its unit, e.g. "180.00 °C", "7.0000 bar g". */
+export function withUnit(si: number, prop: EditableProp, prefs: UnitPrefs): string {
+	return formatQuantity(si, PROP_QUANTITY[prop], prefs).full;
+}
+
+export function specificEnergy(si: number, prefs: UnitPrefs): Formatted {
+	return formatQuantity(si, 'specificEnergy', prefs);
+}
+
+export function specificEntropy(si: number, prefs: UnitPrefs): Formatted {
+	return formatQuantity(si, 'specificEntropy', prefs);
+}
+
+export function temperatureDifference(si: number, prefs: UnitPrefs): Formatted {
+	return formatQuantity(si, 'temperatureDifference', prefs);
+}
+
+/**
+ * Totals: energy (J) for a closed system, power (W) for a device, in a unit that suits the
+ * column's largest value (kJ or MJ; kW or MW; Btu, Btu/h or hp).
+ */
+export function totalUnit(kind: 'J' | 'W', values: readonly number[], prefs: UnitPrefs): UnitDef {
+	return chooseUnit(kind === 'J' ? 'energy' : 'power', values.length ? values : [0], prefs);
+}
+
+export function total(si: number, kind: 'J' | 'W', unit: UnitDef, prefs: UnitPrefs): string {
+	return formatQuantity(si, kind === 'J' ? 'energy' : 'power', prefs, { unit }).full;
+}
+
+const PHASE: Record<Phase, string> = {
+	'compressed-liquid': 'compressed liquid',
+	'saturated-liquid': 'saturated liquid',
+	'saturated-mixture': 'saturated mixture',
+	'saturated-vapor': 'saturated vapor',
+	'superheated-vapor': 'superheated vapor',
+	'supercritical-fluid': 'supercritical fluid'
+};
+
+export function phaseText(p: Phase): string {
+	return PHASE[p];
+}
