@@ -9,7 +9,7 @@ import { listMembers, type Member } from './db/memberships';
 import { checkDoc } from './sheets';
 import { loadSheet } from './revisions';
 import { mentionMail, replyMail } from './mail-templates';
-import { notePath, notify, SETTINGS_PATH, type NotifyContext, type Recipient } from './notifications';
+import { notePath, notify, SETTINGS_PATH, signerOf, type NotifyContext, type Recipient } from './notifications';
 import { ROLE_LABEL } from '../roles';
 import { mentionedIds } from '$lib/notes/mentions';
 import { processText } from '$lib/export/table';
@@ -91,6 +91,14 @@ export function anchorText(doc: SheetDoc | null, anchor: Anchor, fallback: strin
 		return leg ? `leg ${label} (${processText(leg.process, leg.n)})` : `leg ${label}`;
 	}
 	return `state ${label}`;
+}
+
+/** The `revision` query parameter: a number, or the working draft (absent, empty or "draft"). */
+export function noteContextOf(url: URL): number | null {
+	const r = url.searchParams.get('revision');
+	if (r === null || r === '' || r === 'draft') return null;
+	if (!/^[1-9]\d{0,8}$/.test(r)) throw new AppError(400, 'invalid-revision', 'revision must be a revision number (1, 2, …) or "draft".');
+	return Number(r);
 }
 
 function anchorOf(row: ReviewNoteRow): Anchor {
@@ -212,6 +220,7 @@ export async function createNote(db: DB, access: TeamAccess, sheetId: string, in
 		);
 	const members = await listMembers(db, access.team.id);
 	const mentioned = mentionedIds(body.data, mentionable(members));
+	const author = await signerOf(db, access);
 	const id = newId();
 	const row = await db.transaction().execute(async (trx) => {
 		const r = await insertNote(
@@ -226,7 +235,7 @@ export async function createNote(db: DB, access: TeamAccess, sheetId: string, in
 				revisionNumber: revision,
 				draftVersion: revision === null ? sheet.draft_version : null,
 				body: body.data,
-				author: access.actor
+				author
 			},
 			now
 		);
@@ -242,7 +251,7 @@ export async function createNote(db: DB, access: TeamAccess, sheetId: string, in
 			'mention',
 			members.filter((m) => mentioned.includes(m.user_id)).map(recipient),
 			access.actor.id,
-			(r) => mentionMail({ name: r.name, authorName: access.actor.label, sheetTitle: sheet.title, teamName: access.team.name, anchorText: where, body: body.data, url, settingsUrl: `${ctx.origin}${SETTINGS_PATH}` })
+			(r) => mentionMail({ name: r.name, authorName: author.label, sheetTitle: sheet.title, teamName: access.team.name, anchorText: where, body: body.data, url, settingsUrl: `${ctx.origin}${SETTINGS_PATH}` })
 		);
 	}
 	return view(row, [], mentioned.map((u) => ({ note_id: id, reply_id: null, user_id: u })), doc);
@@ -258,16 +267,17 @@ export async function replyToNote(db: DB, access: TeamAccess, sheetId: string, n
 	if (!note) noteNotFound();
 	const members = await listMembers(db, access.team.id);
 	const mentioned = mentionedIds(body.data, mentionable(members));
+	const author = await signerOf(db, access);
 	const replyId = newId();
 	await db.transaction().execute(async (trx) => {
-		await insertReply(trx, { id: replyId, noteId: note.id, kind: 'reply', body: body.data, author: access.actor }, now);
+		await insertReply(trx, { id: replyId, noteId: note.id, kind: 'reply', body: body.data, author }, now);
 		await insertMentions(trx, note.id, replyId, mentioned, now);
 	});
 	if (ctx) {
 		const doc = parseDoc(sheet.draft);
 		const anchor = anchorOf(note);
 		const common = {
-			authorName: access.actor.label,
+			authorName: author.label,
 			sheetTitle: sheet.title,
 			teamName: access.team.name,
 			anchorText: anchorText(doc, anchor, note.anchor_label),
@@ -278,8 +288,8 @@ export async function replyToNote(db: DB, access: TeamAccess, sheetId: string, n
 		const mentionedMembers = members.filter((m) => mentioned.includes(m.user_id));
 		await notify(db, ctx, 'mention', mentionedMembers.map(recipient), access.actor.id, (r) => mentionMail({ ...common, name: r.name }));
 		// the thread's author gets one mail: the mention if they were mentioned, else the reply
-		const author = members.filter((m) => m.user_id === note.author_id && !mentioned.includes(m.user_id));
-		await notify(db, ctx, 'reply', author.map(recipient), access.actor.id, (r) => replyMail({ ...common, name: r.name }));
+		const threadAuthor = members.filter((m) => m.user_id === note.author_id && !mentioned.includes(m.user_id));
+		await notify(db, ctx, 'reply', threadAuthor.map(recipient), access.actor.id, (r) => replyMail({ ...common, name: r.name }));
 	}
 	return getNote(db, access, sheetId, noteId);
 }
@@ -290,10 +300,11 @@ export async function setNoteState(db: DB, access: TeamAccess, sheetId: string, 
 	const sheet = await loadSheet(db, access, sheetId);
 	const note = await getNoteRow(db, sheet.id, noteId);
 	if (!note) noteNotFound();
+	const by = await signerOf(db, access);
 	await db.transaction().execute(async (trx) => {
-		const changed = await setNoteResolved(trx, note.id, resolved ? access.actor : null, now);
+		const changed = await setNoteResolved(trx, note.id, resolved ? by : null, now);
 		if (!changed) throw new AppError(409, resolved ? 'already-resolved' : 'already-open', resolved ? 'This thread is already resolved.' : 'This thread is already open.');
-		await insertReply(trx, { id: newId(), noteId: note.id, kind: resolved ? 'resolved' : 'reopened', body: '', author: access.actor }, now);
+		await insertReply(trx, { id: newId(), noteId: note.id, kind: resolved ? 'resolved' : 'reopened', body: '', author: by }, now);
 	});
 	return getNote(db, access, sheetId, noteId);
 }

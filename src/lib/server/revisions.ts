@@ -18,7 +18,7 @@ import {
 import { listMembers, type Member } from './db/memberships';
 import { checkDoc, DraftConflictError, SHEET_ID, type SaveResult } from './sheets';
 import { approvedMail, checkedMail, returnedMail, submittedMail } from './mail-templates';
-import { notify, revisionPath, sheetPath, SETTINGS_PATH, type NotifyContext, type Recipient } from './notifications';
+import { notify, revisionPath, sheetPath, SETTINGS_PATH, signerOf, type NotifyContext, type Recipient } from './notifications';
 import { can, ROLE_LABEL, type Capability } from '../roles';
 import { computePath, ThermoError } from '$lib/thermo';
 import type { PathResult } from '$lib/thermo/types';
@@ -214,6 +214,7 @@ export async function saveRevision(db: DB, access: TeamAccess, sheetId: string, 
 		doc = checkDoc(parseJson(sheet.draft, 'draft')).doc;
 	}
 	const result = computeDoc(doc);
+	const author = await signerOf(db, access);
 
 	return db.transaction().execute(async (trx) => {
 		const latest = await latestRevision(trx, sheet.id);
@@ -237,10 +238,10 @@ export async function saveRevision(db: DB, access: TeamAccess, sheetId: string, 
 		const id = newId();
 		await insertRevision(
 			trx,
-			{ id, sheetId: sheet.id, teamId: access.team.id, number, basedOn: latestNumber, title: sheet.title, doc: JSON.stringify(doc), result: JSON.stringify(result), message: message.data, author: access.actor },
+			{ id, sheetId: sheet.id, teamId: access.team.id, number, basedOn: latestNumber, title: sheet.title, doc: JSON.stringify(doc), result: JSON.stringify(result), message: message.data, author },
 			now
 		);
-		await logRevisionEvent(trx, { revisionId: id, sheetId: sheet.id, kind: 'saved', actor: access.actor, note: message.data }, now);
+		await logRevisionEvent(trx, { revisionId: id, sheetId: sheet.id, kind: 'saved', actor: author, note: message.data }, now);
 		await syncSheetStatus(trx, sheet.id);
 		const row = (await latestRevision(trx, sheet.id))!;
 		return { ...summaryOf(row, number), doc, result };
@@ -324,6 +325,7 @@ export async function moveRevision(
 	if (action === 'return' && !note.data) throw new AppError(400, 'invalid-note', 'Say why the revision goes back: the designer reads this note.', 'note');
 	const sheet = await loadSheet(db, access, sheetId);
 	const members = await listMembers(db, access.team.id);
+	const by = await signerOf(db, access);
 
 	const updated = await db.transaction().execute(async (trx) => {
 		const row = await getRevision(trx, sheet.id, number);
@@ -353,7 +355,6 @@ export async function moveRevision(
 			checkerId = m.user_id;
 		}
 
-		const by = access.actor;
 		const patch =
 			action === 'submit'
 				? { status: step.to, submitted_by: by.id, submitted_by_label: by.label, submitted_at: now, check_requested_from: checkerId, checked_by: null, checked_by_label: null, checked_at: null }
@@ -370,7 +371,7 @@ export async function moveRevision(
 		return (await getRevision(trx, sheet.id, number))!;
 	});
 
-	await mailFor(db, ctx, access, sheet, updated, action, note.data, members);
+	await mailFor(db, ctx, access, by.label, sheet, updated, action, note.data, members);
 	return summaryOf(updated, number);
 }
 
@@ -378,10 +379,10 @@ function recipient(m: Member): Recipient {
 	return { id: m.user_id, name: m.name, email: m.email };
 }
 
-async function mailFor(db: DB, ctx: NotifyContext | undefined, access: TeamAccess, sheet: SheetRow, rev: SheetRevisionRow, action: Action, note: string, members: Member[]): Promise<void> {
+async function mailFor(db: DB, ctx: NotifyContext | undefined, access: TeamAccess, actorName: string, sheet: SheetRow, rev: SheetRevisionRow, action: Action, note: string, members: Member[]): Promise<void> {
 	if (!ctx || action === 'withdraw') return;
 	const base = {
-		actorName: access.actor.label,
+		actorName,
 		sheetTitle: sheet.title,
 		teamName: access.team.name,
 		revision: rev.number,
@@ -418,6 +419,7 @@ export async function restoreRevision(db: DB, access: TeamAccess, sheetId: strin
 	requireCap(access, 'sheet:edit');
 	if (!Number.isInteger(version) || version < 1) throw new AppError(400, 'invalid-version', 'version must be the whole number the sheet was read with (1 or more).', 'version');
 	const sheet = await loadSheet(db, access, sheetId);
+	const by = await signerOf(db, access);
 	return db.transaction().execute(async (trx) => {
 		const row = await getRevision(trx, sheet.id, number);
 		if (!row) revisionNotFound(number);
@@ -426,7 +428,7 @@ export async function restoreRevision(db: DB, access: TeamAccess, sheetId: strin
 		if (fresh.draft_version !== version) throw new DraftConflictError(fresh);
 		const next = await writeDraft(trx, access.team.id, sheet.id, { draft: JSON.stringify(doc), fluid: doc.spec.fluid, systemKind: doc.spec.system.kind, baseVersion: version, actor: access.actor }, now);
 		if (next === null) throw new DraftConflictError((await getSheet(trx, access.team.id, sheet.id))!);
-		await logRevisionEvent(trx, { revisionId: row.id, sheetId: sheet.id, kind: 'restored', actor: access.actor, note: `Rev ${number} restored as the working draft` }, now);
+		await logRevisionEvent(trx, { revisionId: row.id, sheetId: sheet.id, kind: 'restored', actor: by, note: `Rev ${number} restored as the working draft` }, now);
 		return { version: next, updatedAt: now, updatedBy: access.actor.label, doc };
 	});
 }

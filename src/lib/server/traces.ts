@@ -6,6 +6,7 @@ import type { TeamAccess } from './guard';
 import { countTraces, deleteTraceRow, getTraceRow, insertTrace, listTraceRows, listTraceRowsWithPoints, type TraceListRow } from './db/traces';
 import { checkDoc } from './sheets';
 import { loadSheet } from './revisions';
+import { signerOf } from './notifications';
 import { ROLE_LABEL } from '../roles';
 import { readTraceCsv } from '$lib/traces/read';
 import { DEFAULT_SATURATION_TOLERANCE, MAX_SATURATION_TOLERANCE } from '$lib/traces/fix';
@@ -133,6 +134,7 @@ export async function uploadTrace(db: DB, access: TeamAccess, sheetId: string, i
 	const tolerance = input.tolerance ?? DEFAULT_SATURATION_TOLERANCE;
 	const r = readTraceCsv(input.bytes, { fluid: doc.spec.fluid, atmosphere, toleranceK: tolerance, allowRejected: input.allowRejected ?? false });
 	if (!r.ok) throw new TraceRefusedError(r.code, r.message, r.rejected, r.rejectedCount);
+	const by = await signerOf(db, access);
 	const name = input.name?.trim() || filename.replace(/\.[^.]*$/, '').slice(0, 80) || 'Measured trace';
 	const row: SheetTraceRow = {
 		id: newId(),
@@ -151,8 +153,8 @@ export async function uploadTrace(db: DB, access: TeamAccess, sheetId: string, i
 		rejected: JSON.stringify(r.rejected),
 		notes: JSON.stringify(r.notes),
 		started_at: r.startedAt,
-		uploaded_by: access.actor.id,
-		uploaded_by_label: access.actor.label,
+		uploaded_by: by.id,
+		uploaded_by_label: by.label,
 		uploaded_at: now
 	};
 	await db.transaction().execute(async (trx) => {
@@ -185,4 +187,64 @@ export async function deleteTrace(db: DB, access: TeamAccess, sheetId: string, t
 	requireEdit(access);
 	const sheet = await loadSheet(db, access, sheetId);
 	if (!(await deleteTraceRow(db, sheet.id, traceId))) throw new AppError(404, 'trace-not-found', 'There is no such measured trace on this sheet.');
+}
+
+/** Room for the multipart framing and the small fields around the file. */
+const FRAMING = 16 * 1024;
+
+async function readLimited(request: Request, max: number): Promise<Uint8Array> {
+	const tooLarge = () => new TraceRefusedError('too-large', `The upload is larger than ${MAX_TRACE_BYTES / 1024} kB. Split the log into shorter periods or thin it out before uploading.`, [], 0);
+	const declared = Number(request.headers.get('content-length'));
+	if (Number.isFinite(declared) && declared > max) throw tooLarge();
+	if (!request.body) return new Uint8Array();
+	const reader = request.body.getReader();
+	const chunks: Uint8Array[] = [];
+	let size = 0;
+	try {
+		for (;;) {
+			const { done, value } = await reader.read();
+			if (done) break;
+			size += value.byteLength;
+			// keep draining past the limit so the 413 reaches the client before the connection closes
+			if (size <= max) chunks.push(value);
+		}
+	} catch (e) {
+		if ((e as { status?: number }).status === 413) throw tooLarge();
+		throw new AppError(400, 'unreadable-upload', 'The upload could not be read completely. Try again.');
+	}
+	if (size > max) throw tooLarge();
+	return Buffer.concat(chunks);
+}
+
+/**
+ * An upload as the API and the sheet page send it: multipart/form-data with a `file` field (and
+ * optional `name`, `tolerance` in K, `allowRejected`), or the CSV itself as text/csv with the
+ * options in the query string (`filename`, `name`, `tolerance`, `allowRejected`).
+ */
+export async function readUpload(request: Request, url: URL): Promise<UploadInput> {
+	const type = request.headers.get('content-type') ?? '';
+	if (/^multipart\/form-data/i.test(type)) {
+		const raw = await readLimited(request, MAX_TRACE_BYTES + FRAMING);
+		let form: FormData;
+		try {
+			form = await new Request('http://upload.invalid/', { method: 'POST', body: new Blob([raw as Uint8Array<ArrayBuffer>]), headers: { 'content-type': type } }).formData();
+		} catch {
+			throw new AppError(400, 'unreadable-upload', 'The form could not be read. Send multipart/form-data with the CSV in a field named "file".');
+		}
+		const file = form.get('file');
+		if (!(file instanceof File)) throw new AppError(400, 'no-file', 'Choose a CSV file to upload (form field "file").', 'file');
+		const opts = traceOptionsSchema.parse({
+			name: form.get('name') ?? undefined,
+			tolerance: (form.get('tolerance') as string | null) || undefined,
+			allowRejected: form.get('allowRejected') ?? undefined
+		});
+		return { bytes: new Uint8Array(await file.arrayBuffer()), filename: file.name, name: opts.name, tolerance: opts.tolerance, allowRejected: opts.allowRejected };
+	}
+	if (/^text\/(csv|plain)\b/i.test(type)) {
+		const bytes = await readLimited(request, MAX_TRACE_BYTES);
+		const q = url.searchParams;
+		const opts = traceOptionsSchema.parse({ name: q.get('name') ?? undefined, tolerance: q.get('tolerance') || undefined, allowRejected: q.get('allowRejected') ?? undefined });
+		return { bytes, filename: (q.get('filename') ?? 'trace.csv').slice(0, 255), name: opts.name, tolerance: opts.tolerance, allowRejected: opts.allowRejected };
+	}
+	throw new AppError(415, 'unsupported-media-type', 'Send the logger file as multipart/form-data (field "file") or as the body with "Content-Type: text/csv".');
 }

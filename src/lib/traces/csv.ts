@@ -4,8 +4,12 @@ import { DEFAULT_ATMOSPHERE } from '../units/factors';
 import { formatNumber } from '../units/format';
 import type { RawTracePoint, RejectedLine, TraceColumn, TraceColumnKind, TraceRefusal, TraceRefusalCode } from './types';
 
-/** Largest file accepted, bytes (1 MiB: about 20 000 lines of a four-column logger export). */
-export const MAX_TRACE_BYTES = 1024 * 1024;
+/**
+ * Largest file accepted, bytes: 500 KiB, room for the row limit at about 50 characters a line, and
+ * under the server's request body limit (adapter-node BODY_SIZE_LIMIT, 512 KiB by default) with
+ * the multipart framing of an upload.
+ */
+export const MAX_TRACE_BYTES = 500 * 1024;
 /** Most data lines accepted in one file. */
 export const MAX_TRACE_ROWS = 10_000;
 /** Rejected lines listed in a refusal (all are counted). */

@@ -1,0 +1,60 @@
+import { z } from 'zod';
+import type { RequestHandler } from './$types';
+import { getDb } from '$lib/server/db';
+import { apiRoute, jsonError, readJson } from '$lib/server/api';
+import { requireTeam } from '$lib/server/guard';
+import { flowContext } from '$lib/server/request';
+import { moveRevision, parseRevisionNumber, restoreRevision } from '$lib/server/revisions';
+import { DraftConflictError } from '$lib/server/sheets';
+
+/*
+ * Sign-off steps on the newest revision, and restoring any revision as the working draft.
+ *   POST …/submit   { checkerId?, note? }  designers, owners       draft → in-check (mails the checker)
+ *   POST …/withdraw { note? }              designers, owners       in-check → draft
+ *   POST …/check    { note? }              checkers, owners; not the author   in-check → checked
+ *   POST …/return   { note }               checkers, owners (owners only once checked) → draft
+ *   POST …/approve  { note? }              owners; not the author  checked → approved (locked)
+ *   POST …/restore  { version }            designers, owners: the revision's document becomes the
+ *                                          working draft (409 draft-conflict if `version` is stale)
+ *   → 200 { revision } (restore: { version, updatedAt, updatedBy, doc })
+ *   403 forbidden / self-check / self-approve / self-return; 409 not-latest / wrong-status;
+ *   400 invalid-note / invalid-checker; 404 unknown step or revision.
+ */
+
+const ACTIONS = ['submit', 'withdraw', 'check', 'return', 'approve'] as const;
+
+const stepBody = z.strictObject(
+	{
+		note: z.string({ error: 'note must be text.' }).optional(),
+		checkerId: z.string({ error: 'checkerId must be the id of a team member.' }).nullable().optional()
+	},
+	{ error: 'Send a JSON object, e.g. { "note": "…" }.' }
+);
+const restoreBody = z.strictObject({ version: z.number({ error: 'version must be the draft version you hold.' }).int() }, { error: 'Send { "version": n }: the draft version you hold.' });
+
+async function bodyOf<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+	// a step without a body is fine: every field is optional
+	const copy = request.clone();
+	if ((await copy.text()).trim() === '') return schema.parse({});
+	return readJson(request, schema);
+}
+
+export const POST: RequestHandler = apiRoute(async (event) => {
+	const access = await requireTeam(event, event.params.team, 'read');
+	const number = parseRevisionNumber(event.params.number);
+	const action = event.params.action;
+	if (action === 'restore') {
+		const input = await readJson(event.request, restoreBody);
+		try {
+			return await restoreRevision(getDb(), access, event.params.sheet, number, input.version);
+		} catch (e) {
+			if (e instanceof DraftConflictError) return jsonError(409, e.code, e.message, { current: e.current });
+			throw e;
+		}
+	}
+	if (!(ACTIONS as readonly string[]).includes(action))
+		return jsonError(404, 'not-found', `There is no step "${action}". Use one of: ${ACTIONS.join(', ')}, restore.`);
+	const input = await bodyOf(event.request, stepBody);
+	const revision = await moveRevision(getDb(), access, event.params.sheet, number, action as (typeof ACTIONS)[number], input, flowContext(event));
+	return { revision };
+});
