@@ -70,7 +70,7 @@ test('revisions: save per role, 409 on a moved base with the would-be revision, 
 	expect(one.status()).toBe(200);
 	await errorOf(await tokens.viewer.get(`${R}/9`), 404, 'revision-not-found');
 	await errorOf(await tokens.designer.post(R, { data: { message: 'x' } }), 400, 'invalid-input');
-	await errorOf(await tokens.designer.post(R, { data: 'not json', headers: { 'content-type': 'text/plain' } }), 415);
+	await errorOf(await tokens.designer.post(R, { data: '<revision/>', headers: { 'content-type': 'application/xml' } }), 415);
 	const cmp = await tokens.viewer.get(`${R}/compare?a=1&b=2`);
 	expect(cmp.status()).toBe(200);
 	const diff = ((await cmp.json()) as { diff: { legs: Array<{ id: string; status: string }> } }).diff;
