@@ -84,3 +84,10 @@ const PHASE: Record<Phase, string> = {
 export function phaseText(p: Phase): string {
 	return PHASE[p];
 }
+
+/** A value with its unit, trailing zeros trimmed ("0.5 m³", "12 kg", "0.04 kg/s"): for prose, not for tables. */
+export function compactQuantity(si: number, q: Quantity, prefs: UnitPrefs): string {
+	const f = formatQuantity(si, q, prefs, { sig: 4 });
+	const text = f.text.includes('×') || !f.text.includes('.') ? f.text : f.text.replace(/\.?0+$/, '');
+	return f.unit.label ? `${text}\u00a0${f.unit.label}` : text;
+}

@@ -22,9 +22,9 @@ describe('isoline values', () => {
 		// psi is 6894.757 Pa (NIST SP 811, App. B.8): a 100 psia isobar
 		const us = isobarValues({ min: 5e4, max: 2e6 }, unitPrefs({ system: 'us' }));
 		expect(us.some((p) => Math.abs(p - 100 * 6894.757293168) < 1e-3)).toBe(true);
-		// gauge display still draws absolute round values
-		const g = isobarValues({ min: 5e4, max: 2e6 }, unitPrefs({ pressureUnit: 'bar', pressureReference: 'gauge' }));
-		expect(g).toContain(1e5);
+		// a gauge sheet gets round gauge readings (1, 2, 5, 10 bar g: the label is what the gauge shows), none below atmospheric
+		const g = isobarValues({ min: 5e4, max: 2e6 }, unitPrefs({ pressureUnit: 'bar', pressureReference: 'gauge', atmosphere: 95_000 }));
+		expect(g.map((p) => Math.round((p - 95_000) / 1e3) / 100)).toEqual([0.1, 0.2, 0.5, 1, 2, 5, 10, 20]);
 	});
 
 	it('isotherms are round °C or °F, returned in K', () => {

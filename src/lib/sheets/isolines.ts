@@ -55,15 +55,18 @@ export function linearRoundValues(lo: number, hi: number, max = MAX_LINES): numb
 }
 
 /**
- * Isobar values (Pa absolute) for a T–v chart: round in the display unit, absolute (a gauge
- * reading of a round number is not round in absolute terms, and isobars are labelled absolute
- * on log axes), across `span` widened a little on each side.
+ * Isobar values (Pa absolute) for a T–v chart, round in the unit the chart labels them in: the
+ * sheet's pressure unit, absolute — or gauge on a sheet that shows gauge pressures, where the
+ * lines sit at round gauge readings (1, 2, 5, 10 bar g …) and none is drawn below atmospheric.
  */
 export function isobarValues(span: Span, prefs: UnitPrefs): number[] {
-	const unit = displayUnit('pressure', { ...prefs, pressureReference: 'absolute' }, { magnitude: span.max });
-	const lo = unit.fromSI(span.min, prefs.atmosphere);
-	const hi = unit.fromSI(span.max, prefs.atmosphere);
-	return logRoundValues(lo * 1.05, hi * 1.5).map((d) => unit.toSI(d, prefs.atmosphere));
+	const gauge = prefs.pressureReference === 'gauge';
+	const unit = displayUnit('pressure', prefs, { magnitude: span.max });
+	const atm = prefs.atmosphere;
+	const lo = gauge ? Math.max(unit.fromSI(Math.max(span.min, atm), atm), unit.fromSI(atm * 1.01, atm)) : unit.fromSI(span.min, atm);
+	const hi = unit.fromSI(span.max, atm) * 1.5;
+	// gauge readings far below the top are all "about atmospheric": start 2.5 decades down
+	return logRoundValues(gauge ? Math.max(lo, hi / 300) : lo * 1.05, hi).map((d) => unit.toSI(d, atm));
 }
 
 /** Isotherm values (K) for a P–v chart: round °C or °F across `span`. */
