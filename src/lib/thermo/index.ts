@@ -30,9 +30,12 @@ export type { ThermoErrorCode, StateCandidate } from './errors.ts';
  * property). Returns every property (SI) and the phase. Single-phase properties from α(δ, τ) per
  * IAPWS R6-95(2018) Table 3; inside the dome v, u, h, s are mass-weighted between the saturated
  * phases (equal P and Gibbs energy), x = (v − v')/(v'' − v').
- * Phase rules: see state.ts (on a saturation line when the density is within 1e−9 of the
- * saturated density; T ≥ Tc and P ≥ Pc is supercritical; T ≥ Tc, P < Pc superheated vapor;
- * T < Tc, P ≥ Pc compressed liquid).
+ * Phase rules (state.ts): a state is on a saturation line only when it matches the saturated phase
+ * at its temperature in density (within 1e−9) AND pressure (within 1e−9·Psat plus the liquid's
+ * round-off floor, 2e−12·ρRT ≈ 2.5e−4 Pa for water at 0 °C), so a liquid a pascal above Psat is
+ * a compressed liquid; T ≥ Tc and P ≥ Pc is supercritical; T ≥ Tc, P < Pc superheated vapor;
+ * T < Tc, P ≥ Pc compressed liquid. A returned state carries the inputs it was fixed from: P in,
+ * the same P out (also when it is put on a line).
  * Range: T from the triple point to the formulation's Tmax, P up to its Pmax (melting line not
  * checked); outside it throws `below-triple-point` or `out-of-range`.
  * `options.hint` picks one state where a pair has two (RootHint); without it such pairs throw

@@ -6,12 +6,30 @@
  */
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from './errors.ts';
-import { fixState, saturationAtP } from './index.ts';
+import { fixState, saturationAtP, saturationAtT } from './index.ts';
 import { PAIRS, expectFinite, inputsFrom, relErr, solveLike, spread } from './pairs.test-support.ts';
 import type { Inputs, State } from './types.ts';
 
 const R = 461.51805; // IAPWS R6-95(2018)
 const KEYS = ['T', 'P', 'v', 'u', 'h', 's'] as const;
+
+/** The saturation line next to a single-phase state's side of the dome. */
+function adjacentLine(ref: State): string {
+	return ref.phase === 'compressed-liquid' ? 'saturated-liquid' : 'saturated-vapor';
+}
+
+/**
+ * Whether a single-phase state lies closer to its saturation line (in pressure, at its T) than the
+ * pair can resolve (`spreadP`, relative): then the pair cannot tell it from the line, and the line
+ * is an answer as good as the state. Only (u, s) in a cold liquid gets there: at constant s,
+ * du = −P·dv (the Gibbs relation; IAPWS R6-95(2018) Table 3 relations), and a liquid's dv is
+ * ~κ·v·dP, so u moves by only P·v·κ per pascal — below the round-off of u at a few kPa.
+ */
+function nearLine(ref: State, spreadP: number): boolean {
+	if (ref.phase !== 'compressed-liquid' && ref.phase !== 'superheated-vapor') return false;
+	if (ref.T >= 647.096) return false;
+	return Math.abs(ref.P - saturationAtT('water', ref.T).P) <= spreadP * ref.P;
+}
 
 function roundTrip(seed: Inputs): number {
 	const ref = fixState('water', seed);
@@ -38,7 +56,7 @@ function roundTrip(seed: Inputs): number {
 			const tol = base + (k === 'T' || k === 'P' || k === 'v' ? sp[k] : 0);
 			expect(relErr(k, st[k], ref[k], R, ref.T), `${where} ${k}: ${st[k]} vs ${ref[k]}`).toBeLessThan(tol);
 		}
-		if (!dome) expect(st.phase, where).toBe(ref.phase);
+		if (!dome) expect(st.phase, where).toBe(nearLine(ref, sp.P) && st.phase === adjacentLine(ref) ? adjacentLine(ref) : ref.phase);
 		checked++;
 	}
 	return checked;
@@ -63,13 +81,14 @@ describe('water round trips through all 21 pairs', () => {
 
 	it('at ±1 mK around the saturation temperature', () => {
 		let n = 0;
-		for (const P of [5e3, 0.1e6, 1e6, 10e6, 20e6]) {
+		for (const P of [1e3, 5e3, 0.1e6, 1e6, 10e6, 20e6]) {
 			const Ts = saturationAtP('water', P).T;
 			const liq = fixState('water', { T: Ts - 1e-3, P });
 			const vap = fixState('water', { T: Ts + 1e-3, P });
-			// at low pressure a liquid 1 mK below saturation is within 1e−9 of ρ' in density, which
-			// the phase rules (state.ts) put on the line
-			expect(['compressed-liquid', 'saturated-liquid']).toContain(liq.phase);
+			// even at 1 kPa, where this liquid is only 0.07 Pa above Psat(T) and within 1e−9 of ρ' in
+			// density, it is a compressed liquid (state.ts: on a line only within the pressure band too)
+			expect(liq.phase).toBe('compressed-liquid');
+			expect(liq.P).toBe(P);
 			expect(vap.phase).toBe('superheated-vapor');
 			n += roundTrip({ T: Ts - 1e-3, P }) + roundTrip({ T: Ts + 1e-3, P });
 		}

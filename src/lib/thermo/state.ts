@@ -2,17 +2,23 @@
  * Building public State objects, and the phase rules.
  *
  * Phase rules (documented contract):
- * - Below Tc a state is placed against the saturation at its own temperature. It lies ON a
- *   saturation line when its density is within SAT_TOL (1 part in 10⁹; wider within a few mK of
- *   Tc, see lineTol) of the saturated density, or when a two-phase solution has a quality less
- *   than X_SNAP (1e−12) from 0 or 1 (inside); it is then `saturated-liquid` (x = 0) or
- *   `saturated-vapor` (x = 1).
+ * - Below Tc a state is placed against the saturation at its own temperature (Psat, ρ', ρ'').
+ *   It lies ON a saturation line only when it matches the saturated phase in both density and
+ *   pressure: |ρ/ρsat − 1| ≤ lineTol (SAT_TOL = 1e−9, wider within a few mK of Tc) AND
+ *   |P − Psat| ≤ pressureTol = P_LINE_TOL·Psat + P_ROUNDOFF·ρRT (1e−9 relative, plus the
+ *   round-off of a liquid's equation-of-state pressure, 2.5e−4 Pa for water at 0 °C). A liquid
+ *   a pascal above saturation is therefore a compressed liquid at every temperature; a state is
+ *   also put on a line when a two-phase solution has a quality within X_SNAP (1e−12) of 0 or 1.
+ *   It is then `saturated-liquid` (x = 0) or `saturated-vapor` (x = 1).
  * - Inside the dome it is a `saturated-mixture` with x = (v − v')/(v'' − v'); no metastable states.
- * - Denser than the saturated liquid: `compressed-liquid` (this includes T < Tc with P ≥ Pc).
- * - Lighter than the saturated vapor: `superheated-vapor`.
+ * - Denser than the saturated liquid (or at higher pressure, beyond those bands): `compressed-liquid`
+ *   (this includes T < Tc with P ≥ Pc).
+ * - Lighter than the saturated vapor (or at lower pressure): `superheated-vapor`.
  * - T ≥ Tc: `supercritical-fluid` if P ≥ Pc, else `superheated-vapor` (a gas above Tc below Pc);
  *   the critical point itself is reported as `supercritical-fluid` (P within 1e−9 of Pc counts as Pc).
  * - Within 1 part in 10⁹ below Tc (CRITICAL_BAND) T counts as Tc.
+ * - A returned state carries the inputs it was fixed from: a state given with P keeps that P even
+ *   when it is placed on a line (its other values are then the saturated phase's, within the bands).
  * cp and w are null inside the dome; at the critical point cv, cp and w diverge (w → 0) and are null.
  */
 import { ThermoError, fmt } from './errors.ts';
@@ -23,6 +29,24 @@ import type { Phase, State } from './types.ts';
 
 /** Relative density tolerance for "on the saturation line". */
 export const SAT_TOL = 1e-9;
+
+/** Relative pressure tolerance for "on the saturation line" (also T and P given on the line, flash-t-p.ts). */
+export const P_LINE_TOL = 1e-9;
+
+/**
+ * Round-off of the equation-of-state pressure of a liquid, relative to ρRT: P = ρRT(1 + δαʳ_δ)
+ * cancels to a few parts in 10⁵ of ρRT in a cold liquid (measured ≤ 4e−13·ρRT along the saturated
+ * liquid of every registered fluid, water the worst; saturation.test.ts holds it below 1e−12).
+ */
+export const P_ROUNDOFF = 2e-12;
+
+/**
+ * Pressure band (Pa) of a saturation line at T for a point of density ρ: a state within it of Psat
+ * (and within lineTol in density) is on the line. P_LINE_TOL·Psat + P_ROUNDOFF·ρ·R·T.
+ */
+export function pressureTol(fl: Fluid, T: number, rho: number, Psat: number): number {
+	return P_LINE_TOL * Psat + P_ROUNDOFF * rho * fl.R * T;
+}
 
 /** A two-phase solution whose quality lies within X_SNAP inside 0 or 1 is put on that line (solver round-off). */
 export const X_SNAP = 1e-12;
@@ -58,7 +82,7 @@ export function isCriticalPoint(fl: Fluid, T: number, rho: number): boolean {
 }
 
 /** State of a single-phase point (evaluated at order 2). */
-export function singleState(fl: Fluid, p: Point, phase: Phase, x: number | null = null): State {
+export function singleState(fl: Fluid, p: Point, phase: Phase, x: number | null = null, P = p.P): State {
 	const crit = isCriticalPoint(fl, p.T, p.rho);
 	const cp = crit || !(p.cp > 0) ? null : finiteOrNull(p.cp);
 	const w = crit ? null : finiteOrNull(p.w);
@@ -66,7 +90,7 @@ export function singleState(fl: Fluid, p: Point, phase: Phase, x: number | null 
 		fluid: fl.id,
 		phase,
 		T: p.T,
-		P: p.P,
+		P,
 		v: 1 / p.rho,
 		rho: p.rho,
 		u: p.u,
@@ -91,8 +115,8 @@ export function criticalState(fl: Fluid): State {
 	return singleState(fl, p, 'supercritical-fluid');
 }
 
-const pL = new Point();
-const pV = new Point();
+const sL = new Point();
+const sV = new Point();
 
 /**
  * State on or inside the dome at a solved saturation point, quality x ∈ [0, 1]:
@@ -100,40 +124,24 @@ const pV = new Point();
  * dPs/dT = Δs/Δv, dρ_k/dT = (dPs/dT − (∂P/∂T)_ρ)/(∂P/∂ρ)_T along each saturation line):
  *   cv = (1−x)·du'/dT + x·du''/dT − (Δu/Δv)·[(1−x)·dv'/dT + x·dv''/dT].
  * x = 0 or 1 give the saturated liquid or vapor with its single-phase cp, cv, w.
+ * `pL`, `pV`: the saturated phases already evaluated at order 2 (T, ρ', ρ''), e.g. by a leg; they
+ * are read, not changed, and give the same State as evaluating them here.
  */
-export function saturatedState(fl: Fluid, sat: SatPoint, x: number): State {
-	if (sat.rhoL === sat.rhoV) {
-		const s = criticalState(fl);
-		return s;
-	}
+export function saturatedState(fl: Fluid, sat: SatPoint, x: number, pL?: Point, pV?: Point): State {
+	if (sat.rhoL === sat.rhoV) return criticalState(fl);
 	const T = sat.T;
-	if (x <= 0) {
-		evalPoint(fl, T, sat.rhoL, pL, 2);
-		pL.P = sat.P;
-		return singleState(fl, pL, 'saturated-liquid', 0);
-	}
-	if (x >= 1) {
-		evalPoint(fl, T, sat.rhoV, pV, 2);
-		pV.P = sat.P;
-		return singleState(fl, pV, 'saturated-vapor', 1);
-	}
-	evalPoint(fl, T, sat.rhoL, pL, 2);
-	evalPoint(fl, T, sat.rhoV, pV, 2);
+	if (x <= 0) return singleState(fl, pL ?? evalPoint(fl, T, sat.rhoL, sL, 2), 'saturated-liquid', 0, sat.P);
+	if (x >= 1) return singleState(fl, pV ?? evalPoint(fl, T, sat.rhoV, sV, 2), 'saturated-vapor', 1, sat.P);
+	const L = pL ?? evalPoint(fl, T, sat.rhoL, sL, 2);
+	const V = pV ?? evalPoint(fl, T, sat.rhoV, sV, 2);
 	const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
 	const v = vL + x * (vV - vL);
-	const u = pL.u + x * (pV.u - pL.u);
-	const h = pL.h + x * (pV.h - pL.h);
-	const s = pL.s + x * (pV.s - pL.s);
-	const dPs = (pV.s - pL.s) / (vV - vL);
-	const slope = (p: Point) => {
-		const drho = (dPs - p.dPdT) / p.dPdrho;
-		const du = p.cv + ((p.P - T * p.dPdT) / (p.rho * p.rho)) * drho;
-		const dv = -drho / (p.rho * p.rho);
-		return [du, dv];
-	};
-	const [duL, dvL] = slope(pL);
-	const [duV, dvV] = slope(pV);
-	const cv = (1 - x) * duL + x * duV - ((pV.u - pL.u) / (vV - vL)) * ((1 - x) * dvL + x * dvV);
+	const dPs = (V.s - L.s) / (vV - vL);
+	// d(u, v)/dT along each saturation line
+	const drhoL = (dPs - L.dPdT) / L.dPdrho, drhoV = (dPs - V.dPdT) / V.dPdrho;
+	const duL = L.cv + ((L.P - T * L.dPdT) / (L.rho * L.rho)) * drhoL, dvL = -drhoL / (L.rho * L.rho);
+	const duV = V.cv + ((V.P - T * V.dPdT) / (V.rho * V.rho)) * drhoV, dvV = -drhoV / (V.rho * V.rho);
+	const cv = (1 - x) * duL + x * duV - ((V.u - L.u) / (vV - vL)) * ((1 - x) * dvL + x * dvV);
 	return assertFinite(fl, {
 		fluid: fl.id,
 		phase: 'saturated-mixture',
@@ -141,9 +149,9 @@ export function saturatedState(fl: Fluid, sat: SatPoint, x: number): State {
 		P: sat.P,
 		v,
 		rho: 1 / v,
-		u,
-		h,
-		s,
+		u: L.u + x * (V.u - L.u),
+		h: L.h + x * (V.h - L.h),
+		s: L.s + x * (V.s - L.s),
 		x,
 		cp: null,
 		cv: finiteOrNull(cv),

@@ -1,24 +1,26 @@
 /**
  * State from (T, P). Below Tc the side of the saturation line is decided first (table, then a full
  * saturation solve only within its margin), then the density is solved on that branch. T and P
- * on the saturation line (|P/Psat − 1| ≤ 1e−9) are not independent: refused unless the hint
- * `liquid-side` / `vapor-side` asks for the saturated liquid / vapor.
+ * on the saturation line (|P − Psat| within state.ts pressureTol: 1e−9·Psat plus the liquid's
+ * round-off floor) are not independent: refused unless the hint `liquid-side` / `vapor-side` asks
+ * for the saturated liquid / vapor (returned with the given P). Off the line the answer is the
+ * single phase on P's side, however close: a liquid a pascal above Psat is a compressed liquid.
  */
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point } from '../properties.ts';
-import { saturatedState, singleState } from '../state.ts';
+import { P_LINE_TOL, pressureTol, saturatedState, singleState } from '../state.ts';
 import type { RootHint, State } from '../types.ts';
 import { densityAtTP } from './density.ts';
-import { locate, locateWithSat } from './locate.ts';
+import { locate, placedState } from './locate.ts';
 import { CRITICAL_BAND, TABLE_ACCURACY, satAtT, satGuess, type SatGuess, type SatPoint } from './saturation.ts';
 
 const p = new Point();
 const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
 const M = 10 * TABLE_ACCURACY;
 
-/** Relative pressure tolerance for (T, P) "on the saturation line". */
-export const TP_LINE_TOL = 1e-9;
+/** Relative pressure tolerance for (T, P) "on the saturation line" (state.ts P_LINE_TOL; a round-off floor is added for liquids). */
+export const TP_LINE_TOL = P_LINE_TOL;
 
 function failed(fl: Fluid, T: number, P: number): ThermoError {
 	return new ThermoError(
@@ -47,9 +49,14 @@ export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State
 			hi = g.rhoV * (1 + M);
 		} else {
 			sat = satAtT(fl, T);
-			if (Math.abs(P / sat.P - 1) <= TP_LINE_TOL) {
-				if (hint === 'liquid-side') return saturatedState(fl, sat, 0);
-				if (hint === 'vapor-side') return saturatedState(fl, sat, 1);
+			const dP = P - sat.P;
+			if (Math.abs(dP) <= pressureTol(fl, T, dP > 0 ? sat.rhoL : sat.rhoV, sat.P)) {
+				const x = hint === 'liquid-side' ? 0 : hint === 'vapor-side' ? 1 : null;
+				if (x !== null) {
+					const st = saturatedState(fl, sat, x);
+					st.P = P;
+					return st;
+				}
 				throw new ThermoError(
 					'two-phase-pressure-temperature',
 					`T = ${fmt(T)} K and P = ${fmt(P)} Pa lie on the saturation line of ${fl.id}, where T and P are not independent: every state from saturated liquid to saturated vapor has them.`,
@@ -68,8 +75,12 @@ export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State
 	if (!(rho > 0)) throw failed(fl, T, P);
 	evalPoint(fl, T, rho, p, 2);
 	p.P = P;
-	const loc = sat ? locateWithSat(fl, T, rho, sat) : locate(fl, p);
+	// beside a solved saturation the side is already decided, outside the pressure band
+	if (sat) {
+		if (sat.P < P ? !(rho >= sat.rhoL) : !(rho <= sat.rhoV)) throw failed(fl, T, P);
+		return singleState(fl, p, sat.P < P ? 'compressed-liquid' : 'superheated-vapor');
+	}
+	const loc = locate(fl, p);
 	if (loc.phase === 'saturated-mixture') throw failed(fl, T, P);
-	if (loc.sat) return saturatedState(fl, loc.sat, loc.x ?? 0);
-	return singleState(fl, p, loc.phase);
+	return placedState(fl, p, loc, true);
 }

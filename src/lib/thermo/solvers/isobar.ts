@@ -15,7 +15,7 @@ import type { RootHint, State } from '../types.ts';
 import { choose } from './choose.ts';
 import { densityAtTP } from './density.ts';
 import { evalSatLine, SatLine } from './dome.ts';
-import { locate, locateWithSat, twoPhaseAt } from './locate.ts';
+import { locate, locateWithSat, placedState, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
 import { newtonBracket, scanRoots, type FD } from './roots.ts';
 import { TABLE_ACCURACY, satAtP, satGuess, triplePressure, type SatGuess } from './saturation.ts';
@@ -213,9 +213,8 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 	if (!result) throw none();
 	result.P = P;
 	const loc = locate(fl, result);
-	if (loc.sat) return saturatedState(fl, loc.sat, loc.x ?? 0);
-	if (result.T < fl.Tmin * (1 - 1e-9) || result.T > fl.Tmax * (1 + 1e-9)) throw none();
-	return singleState(fl, result, loc.phase);
+	if (!loc.sat && (result.T < fl.Tmin * (1 - 1e-9) || result.T > fl.Tmax * (1 + 1e-9))) throw none();
+	return placedState(fl, result, loc, true);
 }
 
 /** States at fixed P and ρ: the mixture if ρ'' ≤ ρ ≤ ρ', else every root of P(T, ρ) = P on the branch. */
@@ -231,21 +230,17 @@ export function flashPRho(fl: Fluid, P: number, rho: number, hint?: RootHint): S
 	const add = (T: number) => {
 		evalPoint(fl, T, rho, p, 2);
 		if (Math.abs(p.P / P - 1) > 1e-7) return;
+		p.P = P;
 		const loc = locate(fl, p);
 		if (loc.phase === 'saturated-mixture') return; // inside the dome: covered by the saturation at P
-		if (loc.sat) {
-			found.push(saturatedState(fl, loc.sat, loc.x ?? 0));
-			return;
-		}
-		if (T < fl.Tmin * (1 - 1e-9) || T > fl.Tmax * (1 + 1e-9)) return;
-		p.P = P;
-		found.push(singleState(fl, p, loc.phase));
+		if (!loc.sat && (T < fl.Tmin * (1 - 1e-9) || T > fl.Tmax * (1 + 1e-9))) return;
+		found.push(placedState(fl, p, loc, true));
 	};
 	let Ta = fl.Tmin * (1 - 1e-7), Tb = fl.Tmax * (1 + 1e-7);
 	let monotone = false;
 	if (P < fl.Pc && P >= triplePressure(fl) * (1 - 1e-9)) {
 		const sat = satAtP(fl, P);
-		const loc = locateWithSat(fl, sat.T, rho, sat);
+		const loc = locateWithSat(fl, sat.T, rho, P, sat);
 		// vapor at P is never denser than ρ''(P); liquid at P is denser than ρ'(P) except where the
 		// density has a maximum (water near 4 °C): a two-phase state and liquid ones may share (P, ρ)
 		if (loc.sat) found.push(saturatedState(fl, sat, loc.x ?? 0));

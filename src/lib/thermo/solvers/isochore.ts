@@ -8,11 +8,10 @@
 import { fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDT, propValue, type EnergyProp } from '../properties.ts';
-import { saturatedState, singleState } from '../state.ts';
 import type { RootHint, State } from '../types.ts';
 import { choose } from './choose.ts';
 import { domeRoots } from './dome.ts';
-import { locate, twoPhaseAt } from './locate.ts';
+import { locate, placedState, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
 import { newtonBracket, scanRoots, type FD } from './roots.ts';
 import { domeNodes } from './saturation.ts';
@@ -72,12 +71,8 @@ export function flashRhoY(fl: Fluid, rho: number, which: EnergyProp, y: number, 
 			evalPoint(fl, T, rho, p, 2);
 			const loc = locate(fl, p);
 			if (loc.phase === 'saturated-mixture') continue; // inside the dome: the two-phase search covers it
-			if (loc.sat) {
-				found.push(saturatedState(fl, loc.sat, loc.x ?? 0));
-				continue;
-			}
-			if (p.P > fl.Pmax * (1 + 1e-9)) continue;
-			found.push(singleState(fl, p, loc.phase));
+			if (!loc.sat && p.P > fl.Pmax * (1 + 1e-9)) continue;
+			found.push(placedState(fl, p, loc));
 		}
 	}
 	// y rises with T along the whole isochore (one answer): a single-phase one ends the search

@@ -9,12 +9,12 @@
 import { fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDrho, propValue, type EnergyProp } from '../properties.ts';
-import { SAT_TOL, saturatedState, singleState } from '../state.ts';
+import { saturatedState } from '../state.ts';
 import type { RootHint, State } from '../types.ts';
 import { choose } from './choose.ts';
 import { densityAtTP } from './density.ts';
 import { evalSatLine, SatLine } from './dome.ts';
-import { locate, locateWithSat, twoPhaseAt } from './locate.ts';
+import { locate, locateWithSat, placedState, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
 import { scanRoots, type FD } from './roots.ts';
 import { CRITICAL_BAND } from './saturation.ts';
@@ -36,15 +36,13 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 	};
 	const single = (rho: number, known: 'liquid' | 'vapor' | 'any', line: SatLine | null) => {
 		evalPoint(fl, T, rho, p, 2);
-		const loc = line ? locateWithSat(fl, T, rho, line.sat) : locate(fl, p);
+		const loc = line ? locateWithSat(fl, T, rho, p.P, line.sat) : locate(fl, p);
 		if (loc.phase === 'saturated-mixture') return;
-		if (loc.sat) {
-			found.push(saturatedState(fl, loc.sat, loc.x ?? 0));
-			return;
+		if (!loc.sat) {
+			if (known !== 'any' && (loc.phase === 'compressed-liquid') !== (known === 'liquid')) return;
+			if (p.P > fl.Pmax * (1 + 1e-9)) return;
 		}
-		if (known !== 'any' && (loc.phase === 'compressed-liquid') !== (known === 'liquid')) return;
-		if (p.P > fl.Pmax * (1 + 1e-9)) return;
-		found.push(singleState(fl, p, loc.phase));
+		found.push(placedState(fl, p, loc));
 	};
 	const subcritical = T < fl.Tc * (1 - CRITICAL_BAND);
 	const rhoLow = RHO_FLOOR * fl.rhoc;
@@ -64,10 +62,10 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 		const { rhoL, rhoV } = line.sat;
 		if (rhoMax > rhoL) {
 			for (const r of scanRoots(fn(false), rhoL, rhoMax, 10, 1e-13 * rhoMax))
-				if (r > rhoL * (1 + SAT_TOL)) single(r, 'liquid', line);
+				if (r > rhoL) single(r, 'liquid', line);
 		}
 		for (const z of scanRoots(fn(true), Math.log(rhoLow), Math.log(rhoV), 12, 1e-13))
-			if (Math.exp(z) < rhoV * (1 - SAT_TOL)) single(Math.exp(z), 'vapor', line);
+			if (Math.exp(z) < rhoV) single(Math.exp(z), 'vapor', line);
 		if (which === 's') extendDilute(fl, T, y, rhoLow, fn(true), (r) => single(r, 'vapor', line));
 	} else {
 		const rhoMax = densityAtTP(fl, T, fl.Pmax * (1 + 1e-6), 2 * fl.rhoc);

@@ -26,11 +26,11 @@
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDT, propDrho } from '../properties.ts';
-import { saturatedState, singleState } from '../state.ts';
+import { saturatedState } from '../state.ts';
 import type { Inputs, Process, SaturationLine, State } from '../types.ts';
 import { densityAtTP } from './density.ts';
 import { fixStateOf } from './fix-state.ts';
-import { locate } from './locate.ts';
+import { locate, placedState } from './locate.ts';
 import { CRITICAL_BAND, TABLE_ACCURACY, domeNodes, satAtP, satAtT, satGuess, triplePressure, type SatGuess, type SatPoint } from './saturation.ts';
 
 /** A point on a leg's curve: a single-phase evaluation, or a saturation with a quality. */
@@ -52,6 +52,8 @@ export interface CPt {
 	V?: Point;
 	/** cached public State */
 	state?: State;
+	/** single-phase points of a curve that fixes P (isobaric, isenthalpic, polytropic): the State keeps c.P */
+	givenP?: boolean;
 }
 
 export type Branch = 'liquid' | 'vapor' | 'any';
@@ -116,45 +118,6 @@ function phases(fl: Fluid, sat: SatPoint): [Point, Point] {
 	return [evalPoint(fl, sat.T, sat.rhoL, new Point(), 2), evalPoint(fl, sat.T, sat.rhoV, new Point(), 2)];
 }
 
-/**
- * The State of a two-phase point from its already evaluated phases: the same formulas as the
- * engine's saturatedState (state.ts) — mass-weighted v, u, h, s; cv of the two-phase system
- *   cv = (1−x)·du′/dT + x·du″/dT − (Δu/Δv)·[(1−x)·dv′/dT + x·dv″/dT] along the saturation lines —
- * without evaluating the phases again (legs.test.ts checks the two agree).
- */
-export function mixtureState(fl: Fluid, sat: SatPoint, x: number, pL: Point, pV: Point): State {
-	if (sat.rhoL === sat.rhoV || x <= 0 || x >= 1) return saturatedState(fl, sat, x);
-	const T = sat.T;
-	const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
-	const v = vL + x * (vV - vL);
-	const dPs = (pV.s - pL.s) / (vV - vL);
-	const slope = (p: Point) => {
-		const drho = (dPs - p.dPdT) / p.dPdrho;
-		return [p.cv + ((p.P - T * p.dPdT) / (p.rho * p.rho)) * drho, -drho / (p.rho * p.rho)];
-	};
-	const [duL, dvL] = slope(pL);
-	const [duV, dvV] = slope(pV);
-	const cv = (1 - x) * duL + x * duV - ((pV.u - pL.u) / (vV - vL)) * ((1 - x) * dvL + x * dvV);
-	const st: State = {
-		fluid: fl.id,
-		phase: 'saturated-mixture',
-		T,
-		P: sat.P,
-		v,
-		rho: 1 / v,
-		u: pL.u + x * (pV.u - pL.u),
-		h: pL.h + x * (pV.h - pL.h),
-		s: pL.s + x * (pV.s - pL.s),
-		x,
-		cp: null,
-		cv: Number.isFinite(cv) ? cv : null,
-		w: null
-	};
-	for (const k of ['v', 'u', 'h', 's'] as const)
-		if (!Number.isFinite(st[k])) throw new ThermoError('no-convergence', `A two-phase ${fl.id} state could not be evaluated (${k} is not finite).`, 'Please report the leg.');
-	return st;
-}
-
 function single(p: Point): CPt {
 	return { T: p.T, rho: p.rho, P: p.P, u: p.u, h: p.h, s: p.s, x: null, sat: null, pt: p };
 }
@@ -163,13 +126,12 @@ function single(p: Point): CPt {
 export function stateOf(fl: Fluid, c: CPt): State {
 	if (c.state) return c.state;
 	let st: State;
-	if (c.sat && c.x !== null) st = c.L && c.V ? mixtureState(fl, c.sat, c.x, c.L, c.V) : saturatedState(fl, c.sat, c.x);
+	if (c.sat && c.x !== null) st = saturatedState(fl, c.sat, c.x, c.L, c.V);
 	else {
 		const p = c.pt ?? evalPoint(fl, c.T, c.rho, new Point(), 2);
-		const P = p.P;
-		const loc = locate(fl, p);
-		p.P = P;
-		st = loc.sat ? saturatedState(fl, loc.sat, loc.x ?? 0) : singleState(fl, p, loc.phase);
+		// a curve that fixes P (isobaric, isenthalpic, polytropic) carries it like a given input
+		if (c.givenP) p.P = c.P;
+		st = placedState(fl, p, locate(fl, p), c.givenP === true);
 	}
 	c.state = st;
 	return st;
@@ -366,6 +328,7 @@ export class Curve {
 		try {
 			const c = seg.dome ? this.dome(t) : this.single(t, guess, seg.branch);
 			if (!c || !Number.isFinite(c.T) || !Number.isFinite(c.rho) || !(c.P > 0)) return null;
+			if (!seg.dome && (this.process === 'isobaric' || this.process === 'isenthalpic' || this.process === 'polytropic')) c.givenP = true;
 			// the equation of state continues into the dome (metastable and unstable states): not a point of the leg
 			if (!seg.dome && this.insideDome(c)) return null;
 			return c;

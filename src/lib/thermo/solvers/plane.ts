@@ -11,12 +11,11 @@
 import { fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDT, propDrho, propValue, type EnergyProp } from '../properties.ts';
-import { saturatedState, singleState } from '../state.ts';
 import type { RootHint, State } from '../types.ts';
 import { choose } from './choose.ts';
 import { densityAtTP } from './density.ts';
 import { domeRoots } from './dome.ts';
-import { locate, twoPhaseAt } from './locate.ts';
+import { locate, placedState, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
 import { satAtT, triplePressure } from './saturation.ts';
 
@@ -297,7 +296,7 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 			continue;
 		}
 		accepted.push([q.T, Math.log(q.rho)]);
-		found.push(loc.sat ? saturatedState(fl, loc.sat, loc.x ?? 0) : singleState(fl, q, loc.phase));
+		found.push(placedState(fl, q, loc));
 	}
 	return choose(fl, found, hint, what, () => noStateInRange(fl, what));
 }
