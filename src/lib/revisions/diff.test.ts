@@ -116,3 +116,16 @@ describe('formatting differences in display units', () => {
 		expect(formatValue({ key: 'phase', label: 'phase', quantity: null, before: 'saturated-mixture', after: null, delta: null, changed: true }, 'before', prefs)).toBe('saturated mixture');
 	});
 });
+
+describe('pathOverlay', () => {
+	it('follows every leg in order without repeating the shared end points', async () => {
+		const { pathOverlay } = await import('./overlay');
+		const r = computePath(vesselDoc().spec);
+		const o = pathOverlay(r, 'rev-1', 'Rev 1');
+		const total = r.legs.reduce((n, l) => n + l.leg.points.length, 0);
+		expect(o.points.length).toBe(total - (r.legs.length - 1));
+		expect(o.points[0].T).toBe(r.states[0].state.T);
+		expect(o.points[o.points.length - 1].v).toBe(r.states[r.states.length - 1].state.v);
+		expect(o.label).toBe('Rev 1');
+	});
+});

@@ -1,7 +1,7 @@
 import type { DB } from './db/schema';
 import type { FlowContext } from './auth';
 import type { Composed } from './mail-templates';
-import { wantsMail, type NotificationKind } from './db/notification-settings';
+import { NOTIFICATION_KINDS, wantsMail, type NotificationKind, type NotificationSettings } from './db/notification-settings';
 import { getUserById } from './db/users';
 import type { TeamAccess } from './guard';
 
@@ -91,4 +91,19 @@ export async function signerOf(db: DB, access: TeamAccess): Promise<{ id: string
 	const creator = access.actor.id ? await getUserById(db, access.actor.id) : undefined;
 	const token = `token “${access.principal.token.name}”`;
 	return { id: access.actor.id, label: creator ? `${creator.name} (${token})` : token };
+}
+
+/** What each switch on the account page means. */
+export const NOTIFICATION_LABELS: Record<NotificationKind, { label: string; hint: string }> = {
+	mention: { label: 'Someone mentions me in a review note', hint: '@Your Name in a note or reply' },
+	reply: { label: 'Someone replies to a review note I started', hint: 'replies in your threads' },
+	submitted: { label: 'A revision is submitted for my check', hint: 'checkers and owners' },
+	checked: { label: 'My revision is marked checked', hint: 'revisions you saved or submitted' },
+	approved: { label: 'My revision is approved', hint: 'revisions you saved or submitted' },
+	returned: { label: 'My revision is returned to me', hint: 'with the checker’s note' }
+};
+
+/** The account page's form: a checkbox per kind, present when on. */
+export function settingsFromForm(form: FormData): NotificationSettings {
+	return Object.fromEntries(NOTIFICATION_KINDS.map((k) => [k, form.get(k) === 'on' || form.get(k) === '1'])) as NotificationSettings;
 }

@@ -1,0 +1,23 @@
+import type { MeasuredTrace } from '../charts/types';
+import type { PathResult } from '../thermo/types';
+
+/**
+ * Another revision's path as a thin overlay line on the chart (drawn like a measured trace: a
+ * hairline with small crosses), so two revisions can be read on one diagram: the compared path
+ * in full colour, the other as the overlay. Every leg's points, in order, state to state.
+ */
+export function pathOverlay(result: PathResult, id: string, label: string): MeasuredTrace {
+	const points: MeasuredTrace['points'] = [];
+	for (const l of result.legs) {
+		for (const p of l.leg.points) {
+			const last = points[points.length - 1];
+			if (last && last.T === p.T && last.P === p.P && last.v === p.v) continue;
+			points.push({ T: p.T, P: p.P, v: p.v, inDome: false });
+		}
+	}
+	if (points.length === 0 && result.states[0]) {
+		const s = result.states[0].state;
+		points.push({ T: s.T, P: s.P, v: s.v, inDome: false });
+	}
+	return { id, label, points };
+}
