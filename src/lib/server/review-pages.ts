@@ -1,7 +1,7 @@
 import type { DB } from './db/schema';
 import { AppError } from './errors';
 import type { TeamAccess } from './guard';
-import { getFluid, isolines as engineIsolines, saturationCurve, ThermoError } from '$lib/thermo';
+import { computePath, getFluid, isolines as engineIsolines, saturationCurve, ThermoError } from '$lib/thermo';
 import type { Isoline, PathResult, SaturationCurve } from '$lib/thermo/types';
 import type { ChartFrame } from '$lib/review/types';
 import type { SheetDoc } from '$lib/sheets/types';
@@ -9,7 +9,12 @@ import { isobarValues, isothermValues } from '$lib/sheets/isolines';
 import type { DesignLimits as ChartLimits, CurvePoint } from '$lib/charts/types';
 import { listMembers } from './db/memberships';
 import { latestRevision } from './db/revisions';
-import { loadSheet } from './revisions';
+import { compareRevisions, listRevisions, loadSheet, readRevision, signOffOf, type CompareSide, type RevisionSummary } from './revisions';
+import { listNotes } from './notes';
+import { listTraces } from './traces';
+import { checkDoc } from './sheets';
+import { getSheet } from './db/sheets';
+import { engineSpec } from '$lib/sheets/doc';
 
 /*
  * Data the read-only pages (a revision, a comparison, the print view) need to draw a path without
@@ -81,4 +86,80 @@ export function revisionParam(value: string | null, latest: number | null): numb
 	if (value === 'draft') return 'draft';
 	if (/^[1-9]\d{0,8}$/.test(value)) return Number(value);
 	throw new AppError(400, 'invalid-revision', 'rev must be a revision number (1, 2, …) or "draft".');
+}
+
+// ---- page data -----------------------------------------------------------------------------------
+
+function capabilities(access: TeamAccess) {
+	return { canEdit: access.can('sheet:edit'), canCheck: access.can('sheet:check'), canApprove: access.can('sheet:approve'), canWrite: access.can('note:write') };
+}
+
+/** The read-only page of one revision: its path, notes shown against it, sign-off and history. */
+export async function revisionPageData(db: DB, access: TeamAccess, sheetId: string, number: number) {
+	const ctx = await sheetContext(db, access, sheetId);
+	const revision = await readRevision(db, access, sheetId, number);
+	const [{ notes }, traces, history] = await Promise.all([listNotes(db, access, sheetId, number), listTraces(db, access, sheetId, { points: 'chart' }), listRevisions(db, access, sheetId)]);
+	return {
+		...ctx,
+		revision,
+		frame: chartFrame(revision.doc, [revision.result]),
+		notes,
+		traces,
+		revisions: history.revisions,
+		events: history.events,
+		signOff: signOffOf(revision),
+		me: access.actor.id,
+		...capabilities(access)
+	};
+}
+
+/** The comparison page: both sides with their paths, the diff, and the revision list for the pickers. */
+export async function comparePageData(db: DB, access: TeamAccess, sheetId: string, a: CompareSide, b: CompareSide) {
+	const ctx = await sheetContext(db, access, sheetId);
+	const c = await compareRevisions(db, access, sheetId, a, b);
+	const history = await listRevisions(db, access, sheetId);
+	return {
+		...ctx,
+		a,
+		b,
+		...c,
+		frame: chartFrame(c.after.doc, [c.after.result, c.before.result]),
+		revisions: history.revisions.map((r: RevisionSummary) => ({ number: r.number, status: r.status, message: r.message }))
+	};
+}
+
+/** The print view of a revision or of the working draft. */
+export async function printPageData(db: DB, access: TeamAccess, sheetId: string, rev: number | 'draft') {
+	const ctx = await sheetContext(db, access, sheetId);
+	let doc;
+	let result: PathResult | null;
+	let revision: RevisionSummary | null = null;
+	if (rev === 'draft') {
+		const row = (await getSheet(db, access.team.id, ctx.sheet.id))!;
+		doc = checkDoc(JSON.parse(row.draft)).doc;
+		try {
+			result = computePath(engineSpec(doc));
+		} catch (e) {
+			if (!(e instanceof ThermoError)) throw e;
+			result = null;
+		}
+	} else {
+		const { doc: frozen, result: computed, ...summary } = await readRevision(db, access, sheetId, rev);
+		doc = frozen;
+		result = computed;
+		revision = summary;
+	}
+	const [{ notes }, traces] = await Promise.all([listNotes(db, access, sheetId, rev === 'draft' ? null : rev), listTraces(db, access, sheetId, { points: 'chart' })]);
+	return {
+		...ctx,
+		rev,
+		doc,
+		result,
+		revision,
+		signOff: revision ? signOffOf(revision) : { designer: { name: null, at: null }, checker: { name: null, at: null }, approver: { name: null, at: null } },
+		frame: chartFrame(doc, [result]),
+		notes,
+		traces,
+		teamName: access.team.name
+	};
 }

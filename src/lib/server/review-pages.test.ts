@@ -1,0 +1,70 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { expectAppError } from './testing';
+import { reviewWorld, type ReviewWorld } from './revisions.test-support';
+import { chartFrame, comparePageData, printPageData, revisionPageData, revisionParam } from './review-pages';
+import { saveRevision } from './revisions';
+import { createNote } from './notes';
+import { vesselDoc } from '$lib/revisions/test-fixtures';
+import { computePath } from '$lib/thermo';
+
+let w: ReviewWorld;
+beforeEach(async () => {
+	w = await reviewWorld();
+});
+afterEach(async () => {
+	await w.env.close();
+});
+
+describe('read-only page data', () => {
+	it('frames a chart: dome, isolines in the sheet units, limit curves for both diagrams', () => {
+		const doc = vesselDoc();
+		const f = chartFrame(doc, [computePath(doc.spec)]);
+		expect(f.fluid.id).toBe('water');
+		expect(f.saturation.liquid.length).toBeGreaterThan(50);
+		expect(f.isolines.tv.every((l) => l.kind === 'isobar')).toBe(true);
+		expect(f.isolines.pv.every((l) => l.kind === 'isotherm')).toBe(true);
+		expect(f.isolines.tv.length).toBeGreaterThan(2);
+		// the design pressure (1 101 325 Pa a, set on the sheet) is drawn on T–v as its own isobar
+		expect(f.limits.designPressure?.value).toBe(1_101_325);
+		expect(f.limits.designPressure?.points?.length).toBeGreaterThan(10);
+		const off = chartFrame({ ...doc, chart: { ...doc.chart, isolines: false } }, [null]);
+		expect(off.isolines.tv).toEqual([]);
+	});
+
+	it('gives a revision page its notes against that revision, sign-off and history', async () => {
+		const sheet = await w.newSheet();
+		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, { message: 'First', baseRevision: null });
+		await createNote(w.env.db, await w.access(w.people.checker), sheet, { anchor: { kind: 'leg', legId: 'vent' }, body: 'Why 200 kPa?', revision: 1 });
+		const d = await revisionPageData(w.env.db, await w.access(w.people.checker), sheet, 1);
+		expect(d.revision.number).toBe(1);
+		expect(d.notes.map((n) => n.label)).toEqual(['L2']);
+		expect(d.signOff.designer.name).toBe('Arlo Brandt');
+		expect(d).toMatchObject({ canCheck: true, canEdit: false, canWrite: true, latest: { number: 1, status: 'draft' } });
+		expect(d.members.map((m) => m.name)).toContain('Priya Nandakumar');
+		await expectAppError(revisionPageData(w.env.db, await w.access(w.people.checker), sheet, 2), 404, 'revision-not-found');
+	});
+
+	it('compares two sides and prints a revision or the draft', async () => {
+		const sheet = await w.newSheet();
+		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, { message: 'First', baseRevision: null });
+		const c = await comparePageData(w.env.db, await w.access(w.people.viewer), sheet, 1, 'draft');
+		expect(c.before.label).toBe('Rev 1');
+		expect(c.after.label).toBe('Working draft');
+		expect(c.revisions.map((r) => r.number)).toEqual([1]);
+		const p = await printPageData(w.env.db, await w.access(w.people.viewer), sheet, 1);
+		expect(p.revision?.number).toBe(1);
+		expect(p.result?.legs).toHaveLength(2);
+		expect('doc' in (p.revision as object)).toBe(false);
+		const dr = await printPageData(w.env.db, await w.access(w.people.viewer), sheet, 'draft');
+		expect(dr.revision).toBeNull();
+		expect(dr.signOff.checker.name).toBeNull();
+	});
+
+	it('reads the rev parameter', () => {
+		expect(revisionParam(null, 3)).toBe(3);
+		expect(revisionParam(null, null)).toBe('draft');
+		expect(revisionParam('draft', 3)).toBe('draft');
+		expect(revisionParam('2', 3)).toBe(2);
+		expect(() => revisionParam('x', 3)).toThrow(/rev must be/);
+	});
+});
