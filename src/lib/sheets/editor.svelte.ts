@@ -42,6 +42,9 @@ import type { ChartPrefs, SheetDoc, SheetLegSpec, SheetStatus, TitleBlockFields 
 
 type Engine = typeof import('../thermo');
 
+/** Points per leg while dragging (the engine's least): half the work per answer; the end of the gesture redraws at full detail. */
+const DRAG_SAMPLES = 20;
+
 export interface EditorInit {
 	team: string;
 	sheetId: string;
@@ -171,7 +174,7 @@ export class SheetEditor {
 		this.computeError = init.resultError;
 		this.#history = new History(init.doc, { limit: 200, same: sameDoc });
 		this.#coalescer = createCoalescer<Candidate, { view: PathView; candidate: Candidate }>(
-			async (c) => ({ view: await this.#compute(c.doc), candidate: c }),
+			async (c) => ({ view: await this.#compute(c.doc, DRAG_SAMPLES), candidate: c }),
 			{
 				result: ({ view, candidate }) => {
 					if (!this.#drag) return;
@@ -244,14 +247,31 @@ export class SheetEditor {
 
 	// ---- computing ----------------------------------------------------------------------------
 
-	async #compute(doc: SheetDoc): Promise<PathView> {
+	/** The path of `doc`: the server's answer (fewer points per leg while dragging), or S1 alone from the browser's engine. */
+	async #compute(doc: SheetDoc, samples?: number): Promise<PathView> {
 		if (doc.spec.legs.length === 0) {
 			const e = await this.loadEngine();
 			const start = e.fixState(doc.spec.fluid, doc.spec.start);
 			return { result: startOnlyResult(doc, start, e.stateExtras(start)), states: [{ id: 'start', label: 'S1', state: start }], legs: [] };
 		}
-		const result = await postPath(engineSpec(doc));
+		const spec = engineSpec(doc);
+		if (samples !== undefined && spec.samples === undefined && spec.legs.every((l) => l.samples === undefined)) spec.samples = samples;
+		const result = await postPath(spec);
 		return viewOf(doc.spec, result);
+	}
+
+	/** Recompute the current document at full detail (after a drag drew it with fewer points). */
+	async #refine(): Promise<void> {
+		const doc = this.doc;
+		try {
+			const view = await this.#compute(doc);
+			if (this.doc === doc && !this.#drag) {
+				this.view = view;
+				this.committedView = view;
+			}
+		} catch {
+			// the drag's view stays; the next edit recomputes anyway
+		}
 	}
 
 	#note(text: string, kind: 'info' | 'caution' = 'info', ms = 6000) {
@@ -439,6 +459,7 @@ export class SheetEditor {
 		}
 		const view = this.view;
 		await this.#serial(async () => this.#apply(live, view));
+		void this.#serial(() => this.#refine());
 		if (d.kind === 'new-leg') {
 			this.selection = { kind: 'leg', id: d.key };
 			this.mode = 'select';
