@@ -327,6 +327,30 @@ test.describe('the sketcher', () => {
 });
 
 test.describe('sheet pages refuse what they should', () => {
+	test('the new-sheet form says what is wrong beside the field and creates nothing', async ({ page }) => {
+		await signInPage(page, DEMO.designer);
+		await page.goto(`/t/${TEAM}/sheets/new`);
+		const title = `Refused ${stamp()}`;
+		await page.getByLabel('Title').fill(title);
+		await page.locator('#f-propA').selectOption('T');
+		await page.locator('#f-valueA').fill('100 °C');
+		await page.locator('#f-propB').selectOption('x');
+		await page.locator('#f-valueB').fill('1.5');
+		await page.getByLabel('Volume').fill('0,5 m³');
+		await page.getByRole('button', { name: 'Create sheet' }).click();
+		await expect(page.locator('#f-valueB-err')).toContainText('outside 0 to 1');
+		await expect(page.locator('#f-sizeValue-err')).toContainText('decimal point');
+		await expect(page.getByLabel('Title')).toHaveValue(title);
+		// the engine's refusal lands beside the start state: no quality above the critical temperature
+		await page.locator('#f-valueA').fill('700 °C');
+		await page.locator('#f-valueB').fill('0.5');
+		await page.getByLabel('Volume').fill('0.5 m³');
+		await page.getByRole('button', { name: 'Create sheet' }).click();
+		await expect(page.locator('#f-valueB-err')).toContainText('start state cannot be fixed');
+		await page.goto(`/t/${TEAM}?q=${encodeURIComponent(title)}`);
+		await expect(page.getByTestId('sheet-list')).toContainText('No sheet matches');
+	});
+
 	test('a viewer cannot open the new-sheet page (403); an unknown sheet is 404', async () => {
 		const viewer = await signedInRequest(DEMO.viewer);
 		expect((await viewer.get(`/t/${TEAM}/sheets/new`)).status()).toBe(403);
