@@ -48,12 +48,23 @@ export function withUnit(si: number, prop: EditableProp, prefs: UnitPrefs): stri
 	return formatQuantity(si, PROP_QUANTITY[prop], prefs).full;
 }
 
+/**
+ * Round-off to zero: an isentropic leg's Δs or an isochoric leg's w comes back from the
+ * quadrature as ±10⁻¹² or so; printed as "4.5×10⁻¹³ kJ/kg" it reads as a real number.
+ * Below these magnitudes (SI: J/kg, J/(kg·K), J or W) a value is shown as 0.
+ */
+const NOISE = { specificEnergy: 1e-6, specificEntropy: 1e-9, total: 1e-6 } as const;
+
+export function tidy(si: number, kind: keyof typeof NOISE): number {
+	return Math.abs(si) < NOISE[kind] ? 0 : si;
+}
+
 export function specificEnergy(si: number, prefs: UnitPrefs): Formatted {
-	return formatQuantity(si, 'specificEnergy', prefs);
+	return formatQuantity(tidy(si, 'specificEnergy'), 'specificEnergy', prefs);
 }
 
 export function specificEntropy(si: number, prefs: UnitPrefs): Formatted {
-	return formatQuantity(si, 'specificEntropy', prefs);
+	return formatQuantity(tidy(si, 'specificEntropy'), 'specificEntropy', prefs);
 }
 
 export function temperatureDifference(si: number, prefs: UnitPrefs): Formatted {
@@ -69,7 +80,7 @@ export function totalUnit(kind: 'J' | 'W', values: readonly number[], prefs: Uni
 }
 
 export function total(si: number, kind: 'J' | 'W', unit: UnitDef, prefs: UnitPrefs): string {
-	return formatQuantity(si, kind === 'J' ? 'energy' : 'power', prefs, { unit }).full;
+	return formatQuantity(tidy(si, 'total'), kind === 'J' ? 'energy' : 'power', prefs, { unit }).full;
 }
 
 const PHASE: Record<Phase, string> = {
