@@ -60,7 +60,8 @@ export interface EditorInit {
 	resultError: string | null;
 	canEdit: boolean;
 	fluid: FluidInfo;
-	saturation: SaturationCurve;
+	/** null when the engine could not trace the dome: the chart draws without it */
+	saturation: SaturationCurve | null;
 	fluids: FluidInfo[];
 }
 
@@ -172,6 +173,7 @@ export class SheetEditor {
 			this.committedView = this.view;
 		}
 		this.computeError = init.resultError;
+		if (!init.saturation) this.notice = { kind: 'caution', text: `The engine could not trace the vapor dome of ${init.fluid.name} just now, so the charts are drawn without it. The states and legs are computed as usual.` };
 		this.#history = new History(init.doc, { limit: 200, same: sameDoc });
 		this.#coalescer = createCoalescer<Candidate, { view: PathView; candidate: Candidate }>(
 			async (c) => ({ view: await this.#compute(c.doc, DRAG_SAMPLES), candidate: c }),
@@ -774,9 +776,8 @@ export class SheetEditor {
 	/** Fetch the isolines and limit curves the current fluid, units and path need (cached by URL). */
 	async refreshLines(): Promise<void> {
 		const doc = this.doc;
-		const sat = this.saturation;
 		const f = this.fluid;
-		if (!sat || !f) return;
+		if (!f) return;
 		const states = this.committedView?.states ?? [];
 		const maxP = Math.max(f.critical.P, ...states.map((s) => s.state.P));
 		const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.state.P));

@@ -11,10 +11,17 @@ import { engineSpec, labelIds, startOnlyResult } from '$lib/sheets/doc';
 import type { SheetDoc } from '$lib/sheets/types';
 
 const domes = new Map<string, SaturationCurve>();
-function dome(fluid: string): SaturationCurve {
+/** The vapor dome for the chart (cached per fluid); null if the engine cannot trace it — the sheet still opens. */
+function dome(fluid: string): SaturationCurve | null {
 	let d = domes.get(fluid);
 	if (!d) {
-		d = saturationCurve(fluid, 100);
+		try {
+			d = saturationCurve(fluid, 100);
+		} catch (e) {
+			if (!(e instanceof ThermoError)) throw e;
+			console.error(`[statewright] the vapor dome of ${fluid} could not be traced: ${e.message}`);
+			return null;
+		}
 		domes.set(fluid, d);
 	}
 	return d;
