@@ -1,4 +1,4 @@
-import { toPng } from 'html-to-image';
+import { toBlob } from 'html-to-image';
 import plex400 from '@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-400-normal.woff2?url';
 import plex400i from '@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-400-italic.woff2?url';
 import plex600 from '@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-600-normal.woff2?url';
@@ -79,7 +79,8 @@ export async function memoPng(figure: MemoFigure, pixelRatio: 2 | 4): Promise<Bl
 	host.innerHTML = figure.svg;
 	document.body.appendChild(host);
 	try {
-		const url = await toPng(host, {
+		// toBlob, not toPng + fetch(dataUrl): the page's CSP allows no fetch of data: URLs
+		const blob = await toBlob(host, {
 			pixelRatio,
 			width: figure.width,
 			height: figure.height,
@@ -88,7 +89,8 @@ export async function memoPng(figure: MemoFigure, pixelRatio: 2 | 4): Promise<Bl
 			style: { position: 'static', left: '0' },
 			skipAutoScale: true
 		});
-		return await (await fetch(url)).blob();
+		if (!blob) throw new Error('the browser made no image');
+		return blob;
 	} finally {
 		host.remove();
 	}
