@@ -129,3 +129,14 @@ describe('pathOverlay', () => {
 		expect(o.label).toBe('Rev 1');
 	});
 });
+
+describe('sameContent', () => {
+	it('ignores key order and sees any changed value', async () => {
+		const { sameContent } = await import('./same');
+		const a = vesselDoc();
+		const b = JSON.parse(JSON.stringify({ titleBlock: a.titleBlock, chart: a.chart, units: a.units, spec: a.spec, description: a.description, version: a.version }));
+		expect(sameContent(a, b)).toBe(true);
+		b.spec.legs[0].target.T = 450;
+		expect(sameContent(a, b)).toBe(false);
+	});
+});

@@ -68,3 +68,20 @@ describe('read-only page data', () => {
 		expect(() => revisionParam('x', 3)).toThrow(/rev must be/);
 	});
 });
+
+describe('the sheet page’s review data', () => {
+	it('brings revisions, notes against the draft, traces, members and the newest revision’s document', async () => {
+		const { sheetReviewData } = await import('./review-pages');
+		const { uploadTrace } = await import('./traces');
+		const sheet = await w.newSheet();
+		const empty = await sheetReviewData(w.env.db, await w.access(w.people.viewer), sheet);
+		expect(empty).toMatchObject({ revisions: [], notes: [], traces: [], latestDoc: null, canEdit: false, canWrite: false });
+		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, { message: 'First', baseRevision: null });
+		await uploadTrace(w.env.db, await w.access(w.people.designer), sheet, { bytes: new TextEncoder().encode('time [s],P [kPa a],T [°C]\n0,200,20\n'), filename: 'a.csv' });
+		const d = await sheetReviewData(w.env.db, await w.access(w.people.designer), sheet);
+		expect(d.revisions.map((r) => r.number)).toEqual([1]);
+		expect(d.latestDoc?.spec.legs.map((l) => l.id)).toEqual(['heat', 'vent']);
+		expect(d.traces[0].points).toHaveLength(1);
+		expect(d).toMatchObject({ canEdit: true, canWrite: true, canCheck: false, me: w.people.designer.id });
+	});
+});

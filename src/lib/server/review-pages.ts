@@ -163,3 +163,24 @@ export async function printPageData(db: DB, access: TeamAccess, sheetId: string,
 		teamName: access.team.name
 	};
 }
+
+/**
+ * What the sheet page adds for review: revisions and the sign-off log, review notes against the
+ * working draft, measured traces (thinned for the chart), members (mentions, checkers), the newest
+ * revision's document (to tell whether the draft changed since), and the viewer's capabilities.
+ */
+export async function sheetReviewData(db: DB, access: TeamAccess, sheetId: string) {
+	const ctx = await sheetContext(db, access, sheetId);
+	const [history, { notes }, traces] = await Promise.all([listRevisions(db, access, sheetId), listNotes(db, access, sheetId, null), listTraces(db, access, sheetId, { points: 'chart' })]);
+	const latestDoc = ctx.latest ? (await readRevision(db, access, sheetId, ctx.latest.number)).doc : null;
+	return {
+		revisions: history.revisions,
+		events: history.events,
+		notes,
+		traces,
+		members: ctx.members,
+		latestDoc,
+		me: access.actor.id,
+		...capabilities(access)
+	};
+}
