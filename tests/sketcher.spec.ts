@@ -184,6 +184,32 @@ test.describe('the sketcher', () => {
 		await expect(page.locator('tr[data-label="S2"]')).toHaveCount(1);
 	});
 
+	test('the start moves freely: dragged on P–v it is fixed by the pointer’s P and v', async ({ page }) => {
+		await signInPage(page, DEMO.designer);
+		await newBlankWaterSheet(page, `Free start ${stamp()}`);
+		const id = page.url().split('/').pop()!;
+		const chart = page.locator('[data-chart="P-v"]');
+		await chart.scrollIntoViewIfNeeded();
+		const box = (await chart.locator('svg.swc-overlay').boundingBox())!;
+		const disc = chart.locator('circle.swc-hit-state').first();
+		const x = box.x + Number(await disc.getAttribute('cx'));
+		const y = box.y + Number(await disc.getAttribute('cy'));
+		const before = await cellText(page, 'S1', 'P');
+		await page.mouse.move(x, y);
+		await page.mouse.down();
+		for (let i = 1; i <= 8; i++) await page.mouse.move(x + 5 * i, y - 4 * i);
+		await page.mouse.up();
+		await expect.poll(() => cellText(page, 'S1', 'P')).not.toBe(before);
+		await waitSaved(page);
+		const sheet = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json()).sheet;
+		expect(Object.keys(sheet.doc.spec.start).sort()).toEqual(['P', 'v']);
+		expect(sheet.doc.spec.start.v).toBeGreaterThan(0.5);
+		// the table's S1 shows what the API gives for that start
+		const { state } = await (await page.request.post('/api/v1/states', { data: { fluid: 'water', inputs: sheet.doc.spec.start } })).json();
+		expect(Math.abs(num(await cellText(page, 'S1', 'P')) * 1e3 / state.P - 1)).toBeLessThan(2e-4);
+		await expect(page.getByTestId('phase-S1')).toContainText(state.phase.replace('-', ' '));
+	});
+
 	test('a checker reads the sheet but cannot drag or type, and the server refuses a draft save (403)', async ({ page }) => {
 		await signInPage(page, DEMO.checker);
 		await page.goto(`/t/${TEAM}`);

@@ -32,5 +32,16 @@ describe('isoline values', () => {
 		expect(c.map((k) => Math.round((k - 273.15) * 1e6) / 1e6).every((t) => t % 50 === 0)).toBe(true);
 		const f = isothermValues({ min: 273.16, max: 647.1 }, unitPrefs({ system: 'us' }));
 		expect(f.map((k) => Math.round((k * 1.8 - 459.67) * 1e6) / 1e6).every((t) => t % 50 === 0 || t % 100 === 0)).toBe(true);
+		expect(c.length).toBeLessThanOrEqual(7);
+	});
+
+	it('a zero isotherm converts back to exactly zero (a label reads 0 °F, not −4×10⁻¹³ °F)', () => {
+		const us = unitPrefs({ system: 'us' });
+		const f = isothermValues({ min: 220, max: 420 }, us);
+		// °F = K × 1.8 − 459.67 (NIST SP 811, App. B.9)
+		const back = f.map((k) => k * 1.8 - 459.67);
+		expect(back).toContain(0);
+		// elsewhere a few units in the last place remain, which the label's 4 significant figures hide
+		for (const t of back) expect(Math.abs(t - Math.round(t))).toBeLessThan(1e-9);
 	});
 });

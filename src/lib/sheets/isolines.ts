@@ -4,6 +4,7 @@
  * temperatures the dome and the path span. Values are returned in SI for the isolines endpoint.
  */
 import { displayUnit, type UnitPrefs } from '../units/prefs';
+import type { UnitDef } from '../units/catalogue';
 
 export interface Span {
 	/** SI: Pa absolute or K */
@@ -66,14 +67,32 @@ export function isobarValues(span: Span, prefs: UnitPrefs): number[] {
 	const lo = gauge ? Math.max(unit.fromSI(Math.max(span.min, atm), atm), unit.fromSI(atm * 1.01, atm)) : unit.fromSI(span.min, atm);
 	const hi = unit.fromSI(span.max, atm) * 1.5;
 	// gauge readings far below the top are all "about atmospheric": start 2.5 decades down
-	return logRoundValues(gauge ? Math.max(lo, hi / 300) : lo * 1.05, hi).map((d) => unit.toSI(d, atm));
+	return logRoundValues(gauge ? Math.max(lo, hi / 300) : lo * 1.05, hi).map((d) => exactSI(d, unit, atm));
 }
 
-/** Isotherm values (K) for a P–v chart: round °C or °F across `span`. */
+/**
+ * The SI value nearest `display` whose conversion back gives `display` exactly, so a chart label
+ * reads "0 °F" and not "−4×10⁻¹³ °F" (0 °F is 255.372… K, which no double holds exactly).
+ */
+export function exactSI(display: number, unit: UnitDef, atmosphere: number): number {
+	const si = unit.toSI(display, atmosphere);
+	if (unit.fromSI(si, atmosphere) === display) return si;
+	const buf = new Float64Array(1);
+	const bits = new BigInt64Array(buf.buffer);
+	for (let k = 1; k <= 64; k++)
+		for (const dir of [1n, -1n]) {
+			buf[0] = si;
+			bits[0] += dir * BigInt(k);
+			if (unit.fromSI(buf[0], atmosphere) === display) return buf[0];
+		}
+	return si;
+}
+
+/** Isotherm values (K) for a P–v chart: round °C or °F across `span`, at most seven (they crowd where they converge). */
 export function isothermValues(span: Span, prefs: UnitPrefs): number[] {
 	const unit = displayUnit('temperature', prefs);
 	const lo = unit.fromSI(span.min, prefs.atmosphere);
 	const hi = unit.fromSI(span.max, prefs.atmosphere);
 	const pad = (hi - lo) * 0.05;
-	return linearRoundValues(lo + pad, hi + pad * 3).map((d) => unit.toSI(d, prefs.atmosphere));
+	return linearRoundValues(lo + pad, hi + pad * 3, 7).map((d) => exactSI(d, unit, prefs.atmosphere));
 }
