@@ -77,6 +77,18 @@ export interface CrossingPt {
 	p: CPt;
 }
 
+/**
+ * Work limits of one curve: evaluations of its points and fallbacks to the general flash. Random
+ * legs of every fluid need at most ~400 evaluations and ~5 fallbacks (the fuzz in bench/legs.bench.ts),
+ * a 2000-point leg or isoline a few thousand;
+ * the limits only turn a pathological case into a prompt `no-convergence` error.
+ */
+const MAX_EVALUATIONS = 50000;
+const MAX_FALLBACKS = 400;
+
+/** Where leavesDomain looks between the start (0) and a crossing (1). */
+const LEAVE_FRACTIONS = [1e-4, 1e-3, 0.01, 0.03, 0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 0.97, 0.99];
+
 /** Pressure floor of every curve, Pa (lowered to the start's pressure if that is lower). */
 export const P_FLOOR = 1;
 
@@ -267,8 +279,10 @@ export class Curve {
 	private g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
 	private pL = new Point();
 	private pV = new Point();
-	/** evaluations done (for benchmarks and tests) */
+	/** evaluations done (for benchmarks and tests); at most MAX_EVALUATIONS */
 	evaluations = 0;
+	/** general flashes called where the curve's own Newton failed; at most MAX_FALLBACKS */
+	private fallbacks = 0;
 	/** while looking for the domain's edge: no slow fallback flashes (failures there are expected) */
 	private quick = false;
 	/**
@@ -324,7 +338,7 @@ export class Curve {
 
 	/** Point at parameter t of a segment; null when no state there (solver failure or out of range). */
 	at(seg: Segment, t: number, guess: CPt | null): CPt | null {
-		this.evaluations++;
+		if (++this.evaluations > MAX_EVALUATIONS) throw this.tooMuchWork();
 		try {
 			const c = seg.dome ? this.dome(t) : this.single(t, guess, seg.branch);
 			if (!c || !Number.isFinite(c.T) || !Number.isFinite(c.rho) || !(c.P > 0)) return null;
@@ -444,6 +458,7 @@ export class Curve {
 	/** The engine's general flash for the pair; where it finds several states, the one nearest the guess. */
 	private fallback(inputs: Inputs, guess: CPt | null, branch: Branch): CPt | null {
 		if (this.quick) return null;
+		if (++this.fallbacks > MAX_FALLBACKS) throw this.tooMuchWork();
 		const fl = this.fl;
 		let st: State;
 		try {
@@ -535,6 +550,15 @@ export class Curve {
 		return c.P / c.rho;
 	}
 
+	/** The error for a curve that needs far more solves than any leg does (a pathological case): fail fast. */
+	tooMuchWork(): ThermoError {
+		return new ThermoError(
+			'no-convergence',
+			`This ${this.process} leg of ${this.fl.id} could not be followed: its points would not solve within the engine's work limit.`,
+			'Please report the leg; try a slightly different start or target.'
+		);
+	}
+
 	/** The error for a point that cannot be solved (near the critical point the lines cannot be resolved). */
 	unsolved(): ThermoError {
 		const critical = this.crossings.some((c) => c.p.sat !== null && c.p.sat.rhoL === c.p.sat.rhoV);
@@ -594,44 +618,48 @@ export class Curve {
 			// a curve through the critical point meets both lines there: one crossing
 			crossings = crossings.filter((c, i) => i === 0 || !(c.p.sat && c.p.sat.rhoL === c.p.sat.rhoV && crossings[i - 1].p.sat?.rhoL === crossings[i - 1].p.sat?.rhoV));
 		}
-		this.crossings = crossings;
 		// regions of the m + 1 pieces between crossings
-		const m = crossings.length;
-		const dome: boolean[] = new Array(m + 1).fill(false);
-		if (this.fixedSat) dome[1] = true;
-		else if (m === 0) dome[0] = start.x !== null && start.x > 0 && start.x < 1;
-		else {
-			const okAt = (t: number) => {
-				try {
-					const q = this.dome(t);
-					return q !== null && q.x !== null && q.x > 0 && q.x < 1;
-				} catch (e) {
-					if (e instanceof ThermoError) return false;
-					throw e;
-				}
-			};
-			const probe = (c: CPt, dir: 1 | -1) => {
-				const t = paramOf(this.domeParam, c);
-				const eps = this.domeParam === 'T' ? 1e-6 * t : 1e-6;
-				return okAt(t + dir * this.domeSign * eps);
-			};
-			// between two crossings: test the middle of the two-phase parameter
-			for (let k = 1; k < m; k++) dome[k] = okAt(0.5 * (paramOf(this.domeParam, crossings[k - 1].p) + paramOf(this.domeParam, crossings[k].p)));
-			// outer pieces: the other side of the neighbouring crossing, or a probe beside it
-			dome[0] = m > 1 ? !dome[1] : probe(crossings[0].p, -1);
-			dome[m] = m > 1 ? !dome[m - 1] : probe(crossings[m - 1].p, 1);
-			// the start's own piece is what the start says it is
-			const inDome = start.x !== null && start.x > 0 && start.x < 1;
-			const onCrossing = crossings.some((c) => Math.abs(c.p.T - start.T) <= 1e-9 * start.T && Math.abs(c.p.rho - start.rho) <= 1e-9 * start.rho);
-			if (!(start.x === 0 || start.x === 1) && !onCrossing) {
-				const key = this.key(start);
-				const k = crossings.filter((c) => this.key(c.p) < key).length;
-				if (dome[k] !== inDome) {
-					dome[k] = inDome;
-					if (m === 1) dome[1 - k] = !inDome;
-				}
+		const inDome = start.x !== null && start.x > 0 && start.x < 1;
+		const flags = (cs: CrossingPt[]): { dome: boolean[]; conflict: number | null } => {
+			const m = cs.length;
+			const dome: boolean[] = new Array(m + 1).fill(false);
+			if (this.fixedSat) dome[1] = true;
+			else if (m === 0) dome[0] = inDome;
+			else {
+				// between two crossings: test the middle of the two-phase parameter
+				for (let k = 1; k < m; k++) dome[k] = this.twoPhaseAt(0.5 * (paramOf(this.domeParam, cs[k - 1].p) + paramOf(this.domeParam, cs[k].p)));
+				// outer pieces: the other side of the neighbouring crossing, or a probe beside it
+				dome[0] = m > 1 ? !dome[1] : this.probe(cs[0].p, -1);
+				dome[m] = m > 1 ? !dome[m - 1] : this.probe(cs[m - 1].p, 1);
+			}
+			// the start's own piece must be what the start says it is
+			const onCrossing = cs.some((c) => Math.abs(c.p.T - start.T) <= 1e-9 * start.T && Math.abs(c.p.rho - start.rho) <= 1e-9 * start.rho);
+			if (this.fixedSat || m === 0 || start.x === 0 || start.x === 1 || onCrossing) return { dome, conflict: null };
+			const k = cs.filter((c) => this.key(c.p) < this.key(start)).length;
+			return { dome, conflict: dome[k] !== inDome ? k : null };
+		};
+		let { dome, conflict } = flags(crossings);
+		if (conflict !== null) {
+			// the curve may leave the domain (below the triple point) between the start and a crossing,
+			// and meet the dome again beyond: what lies past such a gap is not part of this leg
+			const k = conflict;
+			const below = k > 0 && this.leavesDomain(start, crossings[k - 1].p);
+			const above = k < crossings.length && this.leavesDomain(start, crossings[k].p);
+			if (below || above) {
+				crossings = crossings.slice(below ? k : 0, above ? k : crossings.length);
+				({ dome, conflict } = flags(crossings));
+			}
+			if (conflict !== null) {
+				dome[conflict] = inDome;
+				// a probe beside a crossing near the critical point can be misled by round-off: there the
+				// other side is the other phase; elsewhere its probe stands (a curve may touch a line and
+				// stay on its side, e.g. water's liquid near its density maximum)
+				const c = crossings[0];
+				if (crossings.length === 1 && Math.abs(c.p.T / fl.Tc - 1) < 1e-3) dome[1 - conflict] = !inDome;
 			}
 		}
+		this.crossings = crossings;
+		const m = crossings.length;
 		const segs: Segment[] = [];
 		for (let k = 0; k <= m; k++) {
 			const a = k > 0 ? crossings[k - 1] : null;
@@ -654,9 +682,55 @@ export class Curve {
 				lineB: b ? b.line : null
 			});
 		}
-		// an isobar below the triple-point pressure or above Pc, or an isotherm above Tc: one piece
-		if (this.fixedSat === null && (inv.process === 'isobaric' || inv.process === 'isothermal') && segs.length === 1) segs[0].branch = 'any';
+		// an isobar below the triple-point pressure (all vapor: Psat(T) ≥ Pt there) or above Pc, or an
+		// isotherm above Tc: one piece
+		if (this.fixedSat === null && (inv.process === 'isobaric' || inv.process === 'isothermal') && segs.length === 1)
+			segs[0].branch = inv.process === 'isobaric' && (inv.P as number) < Pt ? 'vapor' : 'any';
 		this.segs = segs;
+	}
+
+	/** Whether the curve has a two-phase point at parameter t of the two-phase parametrisation. */
+	private twoPhaseAt(t: number): boolean {
+		try {
+			const q = this.dome(t);
+			return q !== null && q.x !== null && q.x > 0 && q.x < 1;
+		} catch (e) {
+			if (e instanceof ThermoError) return false;
+			throw e;
+		}
+	}
+
+	/** Two-phase just beside a crossing, on the side dir (−1 below, +1 above in canonical order). */
+	private probe(c: CPt, dir: 1 | -1): boolean {
+		const t = paramOf(this.domeParam, c);
+		const eps = this.domeParam === 'T' ? 1e-6 * t : 1e-6;
+		return this.twoPhaseAt(t + dir * this.domeSign * eps);
+	}
+
+	/**
+	 * Whether the single-phase curve from the start toward a crossing leaves the domain or its branch
+	 * on the way (e.g. a polytropic vapor that cools below the triple point before it meets the
+	 * dome): points of the single-phase parametrisation (LEAVE_FRACTIONS), quick solves only.
+	 */
+	private leavesDomain(start: CPt, toward: CPt): boolean {
+		const t0 = paramOf(this.singleParam, start), t1 = paramOf(this.singleParam, toward);
+		const branch: Branch = start.rho > this.fl.rhoc ? 'liquid' : 'vapor';
+		this.quick = true;
+		try {
+			let prev: CPt = start;
+			// closer together near the start, where a branch may end within a small step
+			for (const f of LEAVE_FRACTIONS) {
+				const c = this.single(t0 + (t1 - t0) * f, prev, branch);
+				if (!c || this.violation(c) > 1e-12) return true;
+				prev = c;
+			}
+			return false;
+		} catch (e) {
+			if (e instanceof ThermoError) return false;
+			throw e;
+		} finally {
+			this.quick = false;
+		}
 	}
 
 	/** F on a saturation line for the processes whose crossings are searched (see lineRoots). */

@@ -327,3 +327,45 @@ describe('two-phase states assembled along a leg', () => {
 		}
 	});
 });
+
+describe('legs that meet the edges of the domain', () => {
+	it('follow an isobar below the triple-point pressure as vapor (it has no saturation)', () => {
+		const leg = computeLeg({ fluid: 'water', start: { T: 300, P: 400 }, process: 'isobaric', target: { T: 500 } });
+		expect(leg.crossings).toEqual([]);
+		expect(leg.points.every((p) => p.phase === 'superheated-vapor')).toBe(true);
+		// python3-iapws 1.5.2 (Debian), IAPWS95(T=300, P=400e-6) and IAPWS95(T=500, P=400e-6): h = 2551264.98 and 2932333.26 J/kg
+		expect(leg.start.h).toBeCloseTo(2551264.98, 1);
+		expect(leg.end.h).toBeCloseTo(2932333.26, 1);
+		expect(leg.qFlow).toBeCloseTo(2932333.26 - 2551264.98, 1);
+		// and back to an entropy on the way: the target is met on the vapor branch
+		const back = computeLeg({ fluid: 'water', start: { T: 500, P: 400 }, process: 'isobaric', target: { s: 10000 } });
+		expect(back.end.phase).toBe('superheated-vapor');
+		expect(back.end.s).toBeCloseTo(10000, 6);
+	});
+
+	it('refuse a target only reachable past a stretch below the triple point (unreachable, not no-convergence)', () => {
+		// P·v^0.29 = const from dilute vapor cools below the triple point before it could meet the dome
+		const spec: LegSpec = { fluid: 'water', start: { T: 731.581888357609, rho: 0.0007106054653450441 }, process: 'polytropic', n: 0.29, target: { v: 0.00185 } };
+		expect(() => computeLeg(spec)).toThrowError(expect.objectContaining({ code: 'unreachable-target' }));
+		// the same leg toward larger v is fine
+		expect(computeLeg({ ...spec, target: { v: 2000 } }).end.phase).toBe('superheated-vapor');
+	});
+
+	it('turn a curve that needs far more solves than any leg into a prompt no-convergence error', async () => {
+		const { Curve, cptOfState } = await import('./leg-curve.ts');
+		const { getCompiledFluid } = await import('../registry.ts');
+		const fl = getCompiledFluid('water');
+		const start = fixState('water', { T: 800, P: 1e6 });
+		const curve = new Curve(fl, { process: 'isentropic', s: start.s }, cptOfState(fl, start));
+		const seg = curve.segs[curve.segs.length - 1];
+		let error: unknown = null;
+		try {
+			for (let i = 0; i < 60000; i++) curve.at(seg, -Math.log(start.rho), null);
+		} catch (e) {
+			error = e;
+		}
+		expect(error).toBeInstanceOf(ThermoError);
+		expect((error as ThermoError).code).toBe('no-convergence');
+		expect(curve.evaluations).toBeLessThan(60000);
+	});
+});

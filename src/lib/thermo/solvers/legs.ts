@@ -509,6 +509,8 @@ function piecesBetween(curve: Curve, pos0: { seg: number; t: number; crossing: n
 	const out: Piece[] = [];
 	for (;;) {
 		const seg = segs[k];
+		if (!seg)
+			throw new ThermoError('no-convergence', 'The end of this leg could not be placed on its path.', 'Please report the leg; try a slightly different start or target.');
 		if (k === end.seg) {
 			out.push({ seg, from, to: end.t, A, B: end.p, lineFrom });
 			break;

@@ -136,13 +136,29 @@ function segment(fl: Fluid, z0: number, z1: number, Tof: (z: number) => number, 
 			break;
 		}
 		const T = Tof(z0 + i * seg.dz);
-		let ok = akasaka(fl, T, fl.ancRhoL.value(T) / fl.rhor, fl.ancRhoV.value(T) / fl.rhor, out);
-		if (!ok && i >= 2) {
-			// continuation: extrapolate linearly from the two previous nodes
-			const eL = 2 * seg.rhoL[i - 1] - seg.rhoL[i - 2];
-			const eV = Math.exp(2 * seg.lnRhoV[i - 1] - seg.lnRhoV[i - 2]);
-			ok = akasaka(fl, T, eL / fl.rhor, eV / fl.rhor, out);
-		}
+		// continuation (linear extrapolation from the two previous nodes) first toward the critical
+		// point, where the ancillaries may end at a published Tc below the equation's own (ammonia,
+		// R-134a) and lead Newton to the trivial solution; a node must narrow the dome, not close it
+		const plausible = (): boolean => {
+			if (!endsAtCritical || i < 2) return true;
+			const gap = out.dL - out.dV, prev = (seg.rhoL[i - 1] - Math.exp(seg.lnRhoV[i - 1])) / fl.rhor;
+			const zr = (z0 + i * seg.dz) / (z0 + (i - 1) * seg.dz);
+			return gap < prev && gap > 0.2 * prev * zr * zr;
+		};
+		const tryAt = (rL: number, rV: number) => akasaka(fl, T, rL / fl.rhor, rV / fl.rhor, out) && plausible();
+		// toward Tc: the mean density linear in the abscissa, the gap by the power of it seen over the
+		// last two nodes (1 far out, 1.5 at the critical point: an analytic equation's ρ' − ρ'' ∝ θ^½)
+		const extrapolate = () => {
+			if (!endsAtCritical) return tryAt(2 * seg.rhoL[i - 1] - seg.rhoL[i - 2], Math.exp(2 * seg.lnRhoV[i - 1] - seg.lnRhoV[i - 2]));
+			const mean = (k: number) => 0.5 * (seg.rhoL[k] + Math.exp(seg.lnRhoV[k]));
+			const gap = (k: number) => seg.rhoL[k] - Math.exp(seg.lnRhoV[k]);
+			const z = (k: number) => z0 + k * seg.dz;
+			const e = Math.min(2, Math.max(0.5, Math.log(gap(i - 1) / gap(i - 2)) / Math.log(z(i - 1) / z(i - 2))));
+			const m = 2 * mean(i - 1) - mean(i - 2), h = 0.5 * gap(i - 1) * Math.pow(z(i) / z(i - 1), e);
+			return tryAt(m + h, m - h);
+		};
+		const ancillary = () => tryAt(fl.ancRhoL.value(T), fl.ancRhoV.value(T));
+		const ok = endsAtCritical && i >= 2 ? extrapolate() || ancillary() : ancillary() || (i >= 2 && extrapolate());
 		if (!ok)
 			throw new ThermoError(
 				'no-convergence',
@@ -263,11 +279,14 @@ export function satGuess(fl: Fluid, T: number, out: SatGuess): SatGuess {
 export function satAtT(fl: Fluid, T: number, guess?: { rhoL: number; rhoV: number }): SatPoint {
 	if (T >= fl.Tc * (1 - CRITICAL_BAND)) return { T, P: fl.Pc, rhoL: fl.rhoc, rhoV: fl.rhoc };
 	const out: AkasakaOut = { dL: 0, dV: 0, P: 0 };
+	// near Tc Newton can also settle on the trivial solution ρ' ≈ ρ'': a solution must keep at least
+	// a quarter of the gap of its start
+	const from = (rL: number, rV: number) => akasaka(fl, T, rL / fl.rhor, rV / fl.rhor, out) && out.dL - out.dV > (0.25 * (rL - rV)) / fl.rhor;
 	let ok = false;
-	if (guess) ok = akasaka(fl, T, guess.rhoL / fl.rhor, guess.rhoV / fl.rhor, out);
+	if (guess) ok = from(guess.rhoL, guess.rhoV);
 	const g = ok ? null : satGuess(fl, T, { P: 0, rhoL: 0, rhoV: 0 });
-	if (g) ok = akasaka(fl, T, g.rhoL / fl.rhor, g.rhoV / fl.rhor, out);
-	if (!ok) ok = akasaka(fl, T, fl.ancRhoL.value(T) / fl.rhor, fl.ancRhoV.value(T) / fl.rhor, out);
+	if (g) ok = from(g.rhoL, g.rhoV);
+	if (!ok) ok = from(fl.ancRhoL.value(T), fl.ancRhoV.value(T));
 	if (!ok)
 		throw new ThermoError(
 			'no-convergence',

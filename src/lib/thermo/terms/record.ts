@@ -61,7 +61,7 @@ export class EvalContext {
 	tau = 1;
 	lnDelta = 0;
 	lnTau = 0;
-	/** dPow[k] = δ^k for k = 0…maxD */
+	/** dPow[k] = δ^k for k = 0…maxD (built by multiplication, squaring where it can) */
 	readonly dPow: Float64Array;
 	/** tPow[k] = τ^k for k = 0…maxT */
 	readonly tPow: Float64Array;
@@ -77,24 +77,19 @@ export class EvalContext {
 			this.delta = delta;
 			this.lnDelta = Math.log(delta);
 			const dp = this.dPow;
-			let p = 1;
 			dp[0] = 1;
-			for (let k = 1; k < dp.length; k++) {
-				p *= delta;
-				dp[k] = p;
-			}
+			if (dp.length > 1) dp[1] = delta;
+			// by squaring where possible: a short chain of dependent multiplications
+			for (let k = 2; k < dp.length; k++) dp[k] = k & 1 ? dp[k - 1] * delta : dp[k >> 1] * dp[k >> 1];
 			this.tableDelta = delta;
 		}
 		if (tau !== this.tableTau) {
 			this.tau = tau;
 			this.lnTau = Math.log(tau);
 			const tp = this.tPow;
-			let p = 1;
 			tp[0] = 1;
-			for (let k = 1; k < tp.length; k++) {
-				p *= tau;
-				tp[k] = p;
-			}
+			if (tp.length > 1) tp[1] = tau;
+			for (let k = 2; k < tp.length; k++) tp[k] = k & 1 ? tp[k - 1] * tau : tp[k >> 1] * tp[k >> 1];
 			this.tableTau = tau;
 		}
 	}

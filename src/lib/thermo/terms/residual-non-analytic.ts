@@ -8,7 +8,13 @@ import type { AlphaRecord, DerivativeOrder, EvalContext, TermEvaluator } from '.
  * to third order come from the chain rule for E = f(Δ) and the Leibniz rule for the product.
  * The term is singular at δ = τ = 1 (the critical point): Δ is floored at 1e−100 so that values
  * stay finite there (the heat capacities then come out huge; the state builder reports them null).
+ * Far from the critical point ψ underflows the sum: where C(δ−1)² + D(τ−1)² > SKIP_EXPONENT the
+ * term and its derivatives (ψ times factors polynomial in δ, τ and Δ) are skipped — they change
+ * no field of the record by more than 1e−32 of its value anywhere in range (checked for water,
+ * carbon dioxide and nitrogen, terms.test.ts).
  */
+export const SKIP_EXPONENT = 100;
+
 export class ResidualNonAnalytic implements TermEvaluator {
 	readonly kind = 'non-analytic';
 	readonly maxD = 0;
@@ -30,7 +36,9 @@ export class ResidualNonAnalytic implements TermEvaluator {
 		A: readonly number[],
 		B: readonly number[],
 		C: readonly number[],
-		D: readonly number[]
+		D: readonly number[],
+		/** skip threshold (tests pass Infinity to compare) */
+		private readonly skip = SKIP_EXPONENT
 	) {
 		this.n = Float64Array.from(n);
 		this.a = Float64Array.from(a);
@@ -54,7 +62,9 @@ export class ResidualNonAnalytic implements TermEvaluator {
 		const y2 = y * y;
 		const z2 = z * z;
 		for (let i = 0; i < this.n.length; i++) {
-			const n = this.n[i], b = this.b[i], A = this.A[i], B = this.B[i], C = this.C[i], Dc = this.D[i];
+			const C = this.C[i], Dc = this.D[i];
+			if (C * y2 + Dc * z2 > this.skip) continue;
+			const n = this.n[i], b = this.b[i], A = this.A[i], B = this.B[i];
 			const e1 = 1 / this.beta[i]; // [(δ−1)²]^(1/(2β)) = |δ−1|^(1/β)
 			const e2 = 2 * this.a[i]; // [(δ−1)²]^a = |δ−1|^(2a)
 			const P0 = Math.exp(-C * y2);

@@ -93,3 +93,39 @@ describe('Helmholtz terms: derivatives against finite differences', () => {
 		});
 	}
 });
+
+describe('Helmholtz terms: far bells skipped without effect', () => {
+	it('Gaussian and non-analytic terms change no record field by more than 1e−30 when skipped', async () => {
+		const { getCompiledFluid } = await import('../registry.ts');
+		for (const id of ['water', 'carbon-dioxide', 'nitrogen']) {
+			const fl = getCompiledFluid(id);
+			const pairs: [TermEvaluator, TermEvaluator][] = [];
+			for (const t of fl.data.residual) {
+				if (t.kind === 'gaussian')
+					pairs.push([new ResidualGaussian(t.n, t.d, t.t, t.alpha, t.beta, t.gamma, t.epsilon), new ResidualGaussian(t.n, t.d, t.t, t.alpha, t.beta, t.gamma, t.epsilon, Infinity)]);
+				if (t.kind === 'non-analytic')
+					pairs.push([new ResidualNonAnalytic(t.n, t.a, t.b, t.beta, t.A, t.B, t.C, t.D), new ResidualNonAnalytic(t.n, t.a, t.b, t.beta, t.A, t.B, t.C, t.D, Infinity)]);
+			}
+			expect(pairs.length).toBeGreaterThan(0);
+			let skipped = 0, worst = 0, where = '';
+			for (let i = 0; i <= 60; i++)
+				for (let j = 0; j <= 60; j++) {
+					const T = fl.Tmin + ((fl.Tmax - fl.Tmin) * i) / 60;
+					const delta = 1e-6 + (4.5 * fl.rhoc * j) / (60 * fl.rhor);
+					const full = fl.residualAt(delta, fl.Tr / T, 3);
+					const scale = { ...full } as Record<string, number>;
+					for (const [fast, exact] of pairs) {
+						const a = evaluate(fast, delta, fl.Tr / T, 3), b = evaluate(exact, delta, fl.Tr / T, 3);
+						if (a.a === 0 && b.a !== 0) skipped++;
+						for (const k of ['a', 'd1', 't1', 'd2', 't2', 'dt', 'd3', 't3', 'd2t', 'dt2'] as const) {
+							const e = Math.abs(a[k] - b[k]) / Math.max(1, Math.abs(scale[k]));
+							if (e > worst) [worst, where] = [e, `${k} at T=${T}, δ=${delta}`];
+						}
+					}
+				}
+			expect(worst, `${id}: ${where}`).toBeLessThan(1e-30);
+			// the skip does happen over most of the range
+			expect(skipped).toBeGreaterThan(1000);
+		}
+	});
+});
