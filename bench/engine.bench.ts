@@ -99,6 +99,22 @@ const cases: Case[] = [
 		py: 'IAPWS95(rho=1/d["v"], u=d["u"]/1e3)'
 	},
 	{
+		// dragging isentropic and isenthalpic legs on the chart fixes states from (s, v) and (h, v):
+		// target ≤ 100 µs (not in ENGINEERING.md's table)
+		name: 'state from (s, v)',
+		budget: 100,
+		inputs: all.map((s) => ({ s: s.s, v: s.v })),
+		run: (i) => fixState('water', i),
+		py: 'IAPWS95(rho=1/d["v"], s=d["s"]/1e3)'
+	},
+	{
+		name: 'state from (h, v)',
+		budget: 100,
+		inputs: all.map((s) => ({ h: s.h, v: s.v })),
+		run: (i) => fixState('water', i),
+		py: 'IAPWS95(rho=1/d["v"], h=d["h"]/1e3)'
+	},
+	{
 		name: 'state from (h, s)',
 		budget: 80,
 		inputs: all.map((s) => ({ h: s.h, s: s.s })),

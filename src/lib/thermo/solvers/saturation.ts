@@ -309,18 +309,28 @@ function guessTsat(fl: Fluid, tab: SatTable, P: number): number {
 		if (lp[mid] <= lnP) lo = mid;
 		else hi = mid;
 	}
+	// Illinois regula falsi on the interpolant: the table itself is good to TABLE_ACCURACY, so a
+	// guess to 1e−10 in ln P is all Newton needs
 	let a = lo, b = hi;
 	let fa = lagrange(lp, a) - lnP;
-	const fb0 = lagrange(lp, b) - lnP;
-	let u = fb0 === fa ? a : a + ((b - a) * -fa) / (fb0 - fa);
-	for (let k = 0; k < 40; k++) {
+	let fb = lagrange(lp, b) - lnP;
+	let u = a, side = 0;
+	for (let k = 0; k < 60; k++) {
+		u = fb === fa ? 0.5 * (a + b) : a - (fa * (b - a)) / (fb - fa);
+		if (!(u >= Math.min(a, b) && u <= Math.max(a, b))) u = 0.5 * (a + b);
 		const fu = lagrange(lp, u) - lnP;
-		if (Math.abs(fu) < 1e-14) break;
+		if (Math.abs(fu) < 1e-10 || Math.abs(b - a) < 1e-12) break;
 		if (fu < 0 === fa < 0) {
 			a = u;
 			fa = fu;
-		} else b = u;
-		u = 0.5 * (a + b);
+			if (side === -1) fb *= 0.5;
+			side = -1;
+		} else {
+			b = u;
+			fb = fu;
+			if (side === 1) fa *= 0.5;
+			side = 1;
+		}
 	}
 	const z = seg.z0 + u * seg.dz;
 	return useLow ? 1 / z : fl.Tc * (1 - z * z * z);
