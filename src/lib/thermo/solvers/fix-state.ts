@@ -30,7 +30,6 @@ import { checkP, checkT } from './range.ts';
 
 /** Canonical property keys after v → rho: order used to name pairs. */
 export type Key = 'T' | 'P' | 'rho' | 'u' | 'h' | 's' | 'x';
-const NAMES: readonly InputName[] = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'];
 
 export type Flash = (fl: Fluid, a: number, b: number, options: FixOptions) => State;
 
@@ -72,7 +71,28 @@ function unit(k: InputName): string {
 }
 
 /** Parse and check the inputs: exactly two known, finite properties in range. */
-const RANK: Record<InputName, number> = { T: 0, P: 1, v: 2, rho: 2, u: 3, h: 4, s: 5, x: 6 };
+/** Rank of an input name in the order T, P, v = rho, u, h, s, x; −1 for anything else (also inherited names such as "toString") */
+function rankOf(k: string): number {
+	switch (k) {
+		case 'T':
+			return 0;
+		case 'P':
+			return 1;
+		case 'v':
+		case 'rho':
+			return 2;
+		case 'u':
+			return 3;
+		case 'h':
+			return 4;
+		case 's':
+			return 5;
+		case 'x':
+			return 6;
+		default:
+			return -1;
+	}
+}
 
 export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, number] {
 	if (typeof inputs !== 'object' || inputs === null)
@@ -82,7 +102,7 @@ export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, numbe
 	const rec = inputs as Record<string, unknown>;
 	for (const k in rec) {
 		if (rec[k] === undefined) continue;
-		if (RANK[k as InputName] === undefined || !NAMES.includes(k as InputName))
+		if (rankOf(k) < 0)
 			throw new ThermoError('unknown-input', `Unknown input "${k}".`, 'Give exactly two of T, P, v, rho, u, h, s, x (SI units).');
 		count++;
 		if (count === 1) k1 = k as InputName;
@@ -102,7 +122,8 @@ export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, numbe
 			'Give exactly two of T, P, v, rho, u, h, s, x.'
 		);
 	}
-	if (RANK[k1] === RANK[k2])
+	const r1 = rankOf(k1), r2 = rankOf(k2);
+	if (r1 === r2)
 		throw new ThermoError(
 			'duplicate-property',
 			'v and rho are the same property (rho = 1/v); they cannot fix a state together.',
@@ -111,7 +132,7 @@ export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, numbe
 	const a = checkValue(fl, k1, rec[k1]);
 	const b = checkValue(fl, k2, rec[k2]);
 	const ka: Key = k1 === 'v' ? 'rho' : (k1 as Key), kb: Key = k2 === 'v' ? 'rho' : (k2 as Key);
-	return RANK[k1] < RANK[k2] ? [ka, a, kb, b] : [kb, b, ka, a];
+	return r1 < r2 ? [ka, a, kb, b] : [kb, b, ka, a];
 }
 
 /** A finite number in range for its property (v returned as rho = 1/v). */
