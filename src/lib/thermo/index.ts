@@ -86,12 +86,15 @@ export function saturationAtP(fluid: string, P: number): Saturation {
  * Saturation curves for the vapor dome: `points` saturated liquid and vapor states from the
  * triple point toward the critical point, spaced Tᵢ = Tc − (Tc − Tt)(1 − i/points)³ (denser near
  * Tc), and the critical state (cv, cp, w null there: they diverge). Default 100 points.
+ * Tc and the critical state are the equation's own critical point ((∂P/∂ρ)_T = (∂²P/∂ρ²)_T = 0;
+ * FluidInfo.equationCritical), where its two phases merge — not the published `critical`, which
+ * for some fluids differs (ammonia: 405.50 K against 405.40 K).
  */
 export function saturationCurve(fluid: string, points = 100): SaturationCurve {
 	return curveOf(getCompiledFluid(fluid), points);
 }
 
-/** Metadata of every fluid (FluidInfo: id, name, formula, formulation and citation, critical and triple points, limits, reference state). */
+/** Metadata of every fluid (FluidInfo: id, name, formula, formulation and citation, published critical point and the equation's own, triple point, limits, reference state). */
 export const fluids: FluidInfo[] = allFluidInfo();
 
 /** Metadata of every fluid, freshly built (same content as `fluids`). */

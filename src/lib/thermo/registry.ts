@@ -66,6 +66,23 @@ export function fluidIds(): string[] {
 	return fluidData.map((f) => f.id);
 }
 
+const equationCriticals = new Map<string, { T: number; P: number; rho: number }>();
+
+/**
+ * The equation's own critical point (solvers/critical.ts): from the compiled fluid when it is
+ * loaded, else from the terms alone (no saturation table is built for it), cached per fluid.
+ */
+function equationCritical(data: FluidData): { T: number; P: number; rho: number } {
+	let c = equationCriticals.get(data.id);
+	if (!c) {
+		const fl = compiled.get(data.id) ?? new Fluid(data);
+		refineCriticalPoint(fl);
+		c = { T: fl.Tc, P: fl.Pc, rho: fl.rhoc };
+		equationCriticals.set(data.id, c);
+	}
+	return { ...c };
+}
+
 /** Public metadata of a fluid (FluidInfo, types.ts) from its data file. */
 export function fluidInfo(data: FluidData): FluidInfo {
 	return {
@@ -75,6 +92,7 @@ export function fluidInfo(data: FluidData): FluidInfo {
 		aliases: [...data.aliases],
 		formulation: { name: data.formulation.name, reference: data.formulation.reference },
 		critical: { ...data.critical },
+		equationCritical: equationCritical(data),
 		triple: { ...data.triple },
 		limits: { ...data.limits },
 		referenceState: data.referenceState.label,

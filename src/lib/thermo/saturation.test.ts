@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from './errors.ts';
-import { fixState, listFluids, saturationAtP, saturationAtT, saturationCurve } from './index.ts';
+import { fixState, getFluid, listFluids, saturationAtP, saturationAtT, saturationCurve } from './index.ts';
 import { evalPoint, Point } from './properties.ts';
 import { getCompiledFluid } from './registry.ts';
 import { TABLE_ACCURACY, satAtT, satGuess } from './solvers/saturation.ts';
@@ -153,4 +153,52 @@ describe('saturation next to the equation’s own critical point (every register
 		expect(Math.abs(st.T / ref.T - 1)).toBeLessThan(1e-10);
 		expect(st.phase).toBe('saturated-mixture');
 	});
+});
+
+describe('the equation’s own critical point (FluidInfo.equationCritical, saturationCurve().critical)', () => {
+	it('ammonia: 405.50 K and 11.359 MPa from the equation, beside the published 405.40 K and 11.333 MPa', () => {
+		const info = getFluid('ammonia');
+		// Tillner-Roth, Harms-Watzenberg & Baehr (1993), as listed in REFERENCE-VALUES.md
+		expect(info.critical).toEqual({ T: 405.4, P: 11.333e6, rho: 225 });
+		// python3-iapws 1.5.2 (Debian), ammonia.NH3: (∂P/∂ρ)_T = (∂²P/∂ρ²)_T = 0 solved over direct
+		// (T, rho) calls (dpdrho_T): T = 405.5001629673764 K, ρ = 224.777509627 kg/m³, P = 11359196.24 Pa
+		expect(info.equationCritical.T).toBeCloseTo(405.5001629673764, 8);
+		expect(info.equationCritical.rho).toBeCloseTo(224.777509627, 5);
+		expect(info.equationCritical.P).toBeCloseTo(11359196.24, 1);
+		const c = saturationCurve('ammonia', 50).critical;
+		expect([c.T, c.P, c.rho]).toEqual([info.equationCritical.T, info.equationCritical.P, info.equationCritical.rho]);
+	});
+
+	it('water: the equation’s critical point is the published one', () => {
+		// IAPWS R6-95(2018): Tc = 647.096 K, ρc = 322 kg/m³, pc = 22.064 MPa
+		const { equationCritical } = getFluid('water');
+		expect(equationCritical.T).toBe(647.096);
+		expect(equationCritical.rho).toBe(322);
+		expect(Math.abs(equationCritical.P / 22.064e6 - 1)).toBeLessThan(1e-9);
+	});
+
+	for (const info of listFluids()) {
+		it(`${info.id}: (∂P/∂ρ)_T and (∂²P/∂ρ²)_T vanish there, and the dome ends there`, () => {
+			const fl = getCompiledFluid(info.id);
+			const { T, P, rho } = info.equationCritical;
+			const p = new Point();
+			const Pat = (r: number) => evalPoint(fl, T, r, p, 1).P;
+			const h = 1e-3 * rho;
+			const d1 = (Pat(rho + h) - Pat(rho - h)) / (2 * h), d2 = (Pat(rho + h) - 2 * Pat(rho) + Pat(rho - h)) / (h * h);
+			// against the scale P/ρ and P/ρ² of each derivative (central differences: O(h²) left)
+			expect(Math.abs(d1) / (P / rho)).toBeLessThan(1e-6);
+			expect(Math.abs(d2) / (P / (rho * rho))).toBeLessThan(1e-3);
+			expect(Math.abs(Pat(rho) / P - 1)).toBeLessThan(1e-12);
+			const curve = saturationCurve(info.id, 200);
+			expect([curve.critical.T, curve.critical.P, curve.critical.rho]).toEqual([T, P, rho]);
+			const last = curve.liquid.length - 1;
+			expect(curve.liquid[last].T).toBeLessThan(T);
+			expect(T - curve.liquid[last].T).toBeLessThan(1e-3 * T);
+			expect(curve.liquid[last].rho).toBeGreaterThan(rho);
+			expect(curve.vapor[last].rho).toBeLessThan(rho);
+			expect(curve.liquid[last].P).toBeLessThan(P);
+			// FluidInfo served by listFluids and getFluid agree
+			expect(getFluid(info.id).equationCritical).toEqual(info.equationCritical);
+		});
+	}
 });

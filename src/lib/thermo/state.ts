@@ -113,7 +113,8 @@ export function phaseAboveCritical(fl: Fluid, T: number, P: number): Phase {
 /** The critical state (T, P, ρ of the equation's critical point; cv, cp, w null). */
 export function criticalState(fl: Fluid): State {
 	const p = evalPoint(fl, fl.Tc, fl.rhoc, new Point(), 2);
-	return singleState(fl, p, 'supercritical-fluid');
+	// the same Pc as FluidInfo.equationCritical (solvers/critical.ts), not a re-rounded one
+	return singleState(fl, p, 'supercritical-fluid', null, fl.Pc);
 }
 
 const sL = new Point();

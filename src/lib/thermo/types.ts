@@ -83,6 +83,7 @@ export interface SaturationCurve {
 	liquid: State[];
 	/** saturated vapor, at the same temperatures */
 	vapor: State[];
+	/** the equation's own critical point (FluidInfo.equationCritical), where both curves end */
 	critical: State;
 }
 
@@ -138,7 +139,14 @@ export interface FluidInfo {
 	formula: string;
 	aliases: string[];
 	formulation: { name: string; reference: string };
+	/** the published critical point (K, Pa, kg/m³), as listed with the formulation (often rounded) */
 	critical: { T: number; P: number; rho: number };
+	/**
+	 * The equation's own critical point, where (∂P/∂ρ)_T = (∂²P/∂ρ²)_T = 0 (K, Pa, kg/m³): the
+	 * saturation curve ends here (saturationCurve().critical). It can differ from `critical`, e.g.
+	 * ammonia's equation has 405.50 K, 11.359 MPa against the published 405.40 K, 11.333 MPa.
+	 */
+	equationCritical: { T: number; P: number; rho: number };
 	triple: { T: number; P: number };
 	limits: { Tmin: number; Tmax: number; Pmax: number };
 	referenceState: string;
