@@ -1,4 +1,3 @@
-import Papa from 'papaparse';
 import type { PathResult } from '../thermo/types';
 import { displayUnit, formatNumber, formatQuantity, type Quantity, type UnitPrefs } from '../units';
 import { phaseName } from '../charts/describe';
@@ -115,14 +114,6 @@ export function sheetTable(result: PathResult, prefs: UnitPrefs, options: TableO
 		? 'Steady-flow device: q − w shaft = Δh per kg; Q̇ and Ẇ shaft are per-kg values × mass flow. Heat is positive into the fluid, work positive when done by the fluid.'
 		: 'Closed system: q − w = Δu per kg, w = ∫P dv; Q and W are per-kg values × mass. Heat is positive into the fluid, work positive when done by the fluid.';
 	return { states, legs, note };
-}
-
-/** The table as one CSV file: a "States" block and a "Legs" block, separated by a blank line. */
-export function tableCsv(result: PathResult, prefs: UnitPrefs, caption: string[] = []): string {
-	const t = sheetTable(result, prefs, { style: 'ascii' });
-	const block = (title: string, b: SheetTable['states']) => Papa.unparse({ fields: [title, ...b.columns.slice(1).map(() => '')], data: [] }) + '\r\n' + Papa.unparse({ fields: b.columns.map((c) => c.header), data: b.rows });
-	const head = caption.length ? Papa.unparse(caption.map((c) => [c])) + '\r\n\r\n' : '';
-	return head + block('States', t.states) + '\r\n\r\n' + block('Legs', t.legs) + '\r\n\r\n' + Papa.unparse([[t.note]]) + '\r\n';
 }
 
 function mdCell(s: string): string {
