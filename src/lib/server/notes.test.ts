@@ -152,3 +152,17 @@ describe('threads and mails', () => {
 		await expectAppError(setNoteState(db(), await w.access(w.people.checker), sheet, 'aaaaaaaaaaaaaaaa', true), 404, 'note-not-found');
 	});
 });
+
+describe('mail content', () => {
+	it('escapes what people wrote in the HTML part and keeps the plain text readable', async () => {
+		const { getOutboxMessage, listOutboxMessages } = await import('./db/outbox');
+		await note(w.people.checker, { kind: 'sheet' }, '@Arlo Brandt see <script>alert(1)</script> & the "vent" line');
+		const [summary] = await listOutboxMessages(db(), { to: w.people.designer.email });
+		const full = (await getOutboxMessage(db(), summary.id))!;
+		expect(full.html).toContain('&lt;script&gt;alert(1)&lt;/script&gt; &amp; the &quot;vent&quot; line');
+		expect(full.html).not.toContain('<script>');
+		expect(full.html).toContain(`?note=`);
+		expect(full.text).toContain('<script>alert(1)</script> & the "vent" line');
+		expect(full.to_header).toContain(w.people.designer.email);
+	});
+});

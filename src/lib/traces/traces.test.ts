@@ -259,3 +259,17 @@ describe('fixing points with the engine', () => {
 		expect(r.rejected[0].reason).toMatch(/triple point/);
 	});
 });
+
+describe('other fluids', () => {
+	it('flags ammonia readings at its saturation pressure, and fixes those a few kelvin off it', () => {
+		// python3-iapws 1.5.2 (Debian), iapws.ammonia.NH3: saturated liquid at 273.15 K — tests/reference/iapws-ammonia.json
+		const amm = JSON.parse(readFileSync('tests/reference/iapws-ammonia.json', 'utf8')) as { saturatedLiquidAt273_15: { T: number; P: number } };
+		const { P } = amm.saturatedLiquidAt273_15;
+		const kPaA = (P / 1000).toPrecision(12);
+		const r = ok(readTraceCsv(`time [s],P [kPa a],T [°C]\n0,${kPaA},0.2\n10,${kPaA},-3\n20,${kPaA},3\n`, { fluid: 'ammonia' }));
+		expect(r.points.map((p) => p.inDome)).toEqual([true, false, false]);
+		expect(r.points[1].phase).toBe('compressed-liquid');
+		expect(r.points[2].phase).toBe('superheated-vapor');
+		expect(r.points[0].dTsat!).toBeCloseTo(0.2, 3);
+	});
+});
