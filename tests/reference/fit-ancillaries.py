@@ -1,9 +1,8 @@
 #!/usr/bin/python3
 """Fit ancillary equations (starting guesses only) to a fluid's own reference equation.
 
-Some published ancillary equations cannot be used as they stand (R-134a's are reduced with
-374.18 K, not the critical temperature the schema's ancillary forms use) or could not be
-traced to the publication (ammonia). For those fluids this script evaluates the fluid's
+Some published ancillary equations could not be traced to the publication (ammonia's). For
+such fluids this script evaluates the fluid's
 reference equation from its data file in src/lib/thermo/fluids/, solves the phase
 equilibrium (equal P and g) on a temperature grid from the triple point to just below the
 critical point, and fits the coefficients n of the schema's forms with fixed exponents
@@ -22,7 +21,10 @@ with the largest relative error of each fit.
 The evaluator here is independent of the engine in src/lib/thermo (it uses complex-step
 derivatives), so it also serves as a second implementation when checking a data file.
 
-Run:  /usr/bin/python3 tests/reference/fit-ancillaries.py ammonia r134a
+(R-134a used fitted ancillaries too until the schema took a reducing temperature `Tr`: its
+data file now carries the paper's own, reduced with 374.18 K.)
+
+Run:  /usr/bin/python3 tests/reference/fit-ancillaries.py ammonia
       (needs numpy and Node with tsx, to read the TypeScript data file)
 """
 import cmath

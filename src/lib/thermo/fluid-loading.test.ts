@@ -62,6 +62,23 @@ describe('fluid loading', () => {
 		refused((d) => (d.limits.Pmax = 1e6), 'limits.Pmax');
 		refused((d) => ((d as { formulation: unknown }).formulation = undefined), 'formulation');
 		refused((d) => ((d.ideal[2] as { gamma: number[] }).gamma[0] = -1), 'ideal[2].gamma[0]');
+		refused((d) => ((d.ancillaries.rhoVapor as { Tr: unknown }).Tr = 'hot'), 'ancillaries.rhoVapor.Tr');
+		refused((d) => (d.ancillaries.pSat.Tr = 200), 'ancillaries.pSat.Tr');
+	});
+
+	it('reduces an ancillary with its own Tr when it gives one, else with the critical temperature', () => {
+		// IAPWS SR1-86(1992) ancillaries are reduced with Tc = 647.096 K; Tillner-Roth & Baehr (1994) R-134a's with 374.18 K
+		expect(getCompiledFluid('water').ancP.Tc).toBe(647.096);
+		expect(getCompiledFluid('r134a').ancP.Tc).toBe(374.18);
+		expect(getCompiledFluid('r134a').ancRhoV.Tc).toBe(374.18);
+		const d = clone();
+		d.id = 'water-tr';
+		d.ancillaries.pSat.Tr = 600;
+		const fl = loadFluid(d);
+		expect(fl.ancP.Tc).toBe(600);
+		expect(fl.ancRhoL.Tc).toBe(647.096);
+		// θ = 1 − T/Tr: at Tr the vapor-pressure ancillary gives its yc
+		expect(fl.ancP.value(600)).toBe(d.ancillaries.pSat.yc);
 	});
 
 	it('applies a declared reference state by shifting the lead constants only', () => {

@@ -52,13 +52,14 @@ class Checker {
 	}
 }
 
-function checkAncillary(c: Checker, v: unknown, field: string): void {
+function checkAncillary(c: Checker, v: unknown, field: string, Tt: number): void {
 	const a = c.obj(v, field);
 	if (a.form !== 'ln-ratio-tc-over-t' && a.form !== 'ln-ratio' && a.form !== 'ratio-plus-one')
 		bad(c.id, `${field}.form`, 'is not one of ln-ratio-tc-over-t, ln-ratio, ratio-plus-one');
 	const n = c.nums(a.n, `${field}.n`);
 	c.nums(a.t, `${field}.t`, n.length);
 	c.num(a.yc, `${field}.yc`, true);
+	if (a.Tr !== undefined && !(c.num(a.Tr, `${field}.Tr`, true) > Tt)) bad(c.id, `${field}.Tr`, 'must lie above triple.T');
 	c.str(a.source, `${field}.source`);
 }
 
@@ -177,9 +178,9 @@ export function validateFluidData(data: unknown): asserts data is FluidData {
 	});
 
 	const anc = c.obj(d.ancillaries, 'ancillaries');
-	checkAncillary(c, anc.pSat, 'ancillaries.pSat');
-	checkAncillary(c, anc.rhoLiquid, 'ancillaries.rhoLiquid');
-	checkAncillary(c, anc.rhoVapor, 'ancillaries.rhoVapor');
+	checkAncillary(c, anc.pSat, 'ancillaries.pSat', Tt);
+	checkAncillary(c, anc.rhoLiquid, 'ancillaries.rhoLiquid', Tt);
+	checkAncillary(c, anc.rhoVapor, 'ancillaries.rhoVapor', Tt);
 }
 
 /** Compiled ancillary equation y(T) (starting guesses only). */
@@ -188,16 +189,16 @@ export class AncillaryEq {
 	private readonly t: Float64Array;
 	private readonly form: Ancillary['form'];
 	readonly yc: number;
-	constructor(
-		a: Ancillary,
-		readonly Tc: number
-	) {
+	/** reducing temperature: the ancillary's own Tr, else the fluid's critical temperature */
+	readonly Tc: number;
+	constructor(a: Ancillary, criticalT: number) {
 		this.n = Float64Array.from(a.n);
 		this.t = Float64Array.from(a.t);
 		this.form = a.form;
 		this.yc = a.yc;
+		this.Tc = a.Tr ?? criticalT;
 	}
-	/** Σ nᵢ·θ^tᵢ with θ = 1 − T/Tc clamped to ≥ 0 */
+	/** Σ nᵢ·θ^tᵢ with θ = 1 − T/Tr clamped to ≥ 0 */
 	private sum(T: number): number {
 		const theta = 1 - T / this.Tc;
 		if (!(theta > 0)) return 0;

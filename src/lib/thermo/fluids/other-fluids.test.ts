@@ -214,6 +214,29 @@ describe('R-134a, Tillner-Roth & Baehr (1994)', () => {
 		}
 	});
 
+	it('carries the paper’s ancillary equations, reduced with 374.18 K, and they follow the equation', async () => {
+		const { getCompiledFluid } = await import('../registry.ts');
+		const fl = getCompiledFluid(id);
+		// Tillner-Roth & Baehr (1994), ancillary equations as transcribed (see r134a.ts provenance), θ = 1 − T/374.18 K:
+		// ln(p/4.05629 MPa) = (374.18/T)(−7.686556θ + 2.311791θ^1.5 − 2.039554θ² − 3.583758θ⁴)
+		// ρ′ = 518.20 + 884.13θ^(1/3) + 485.84θ^(2/3) + 193.29θ^(10/3)
+		// ρ″ = 516.86·exp(−2.837294θ^(1/3) − 7.875988θ^(2/3) + 4.478586θ^(1/2) − 14.140125θ^(9/4) − 52.361297θ^(11/2))
+		const th = (T: number) => 1 - T / 374.18;
+		const ps = (T: number) => 4.05629e6 * Math.exp((374.18 / T) * (-7.686556 * th(T) + 2.311791 * th(T) ** 1.5 - 2.039554 * th(T) ** 2 - 3.583758 * th(T) ** 4));
+		const rl = (T: number) => 518.2 + 884.13 * th(T) ** (1 / 3) + 485.84 * th(T) ** (2 / 3) + 193.29 * th(T) ** (10 / 3);
+		const rv = (T: number) => 516.86 * Math.exp(-2.837294 * th(T) ** (1 / 3) - 7.875988 * th(T) ** (2 / 3) + 4.478586 * th(T) ** 0.5 - 14.140125 * th(T) ** 2.25 - 52.361297 * th(T) ** 5.5);
+		for (let T = 170; T <= 374; T += 6) {
+			expect(Math.abs(fl.ancP.value(T) / ps(T) - 1), `pSat form at ${T}`).toBeLessThan(1e-13);
+			expect(Math.abs(fl.ancRhoL.value(T) / rl(T) - 1), `rhoLiquid form at ${T}`).toBeLessThan(1e-13);
+			expect(Math.abs(fl.ancRhoV.value(T) / rv(T) - 1), `rhoVapor form at ${T}`).toBeLessThan(1e-13);
+			// and they follow the equation where they were fitted (the paper's data range), a transcription check
+			const { liq, vap } = sat(id, T);
+			if (T >= 240) expect(Math.abs(ps(T) / liq.P - 1), `p_s at ${T}`).toBeLessThan(3e-4);
+			if (T <= 370) expect(Math.abs(rl(T) / liq.rho - 1), `ρ′ at ${T}`).toBeLessThan(4e-4);
+			if (T >= 260 && T <= 340) expect(Math.abs(rv(T) / vap.rho - 1), `ρ″ at ${T}`).toBeLessThan(1e-3);
+		}
+	});
+
 	it('agrees with round-°C saturation values', () => {
 		// from memory: a standards body's online fluid tables (REFERENCE-VALUES.md); −20 / 0 / 20 °C
 		const rows = [

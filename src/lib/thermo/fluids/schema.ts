@@ -53,17 +53,23 @@ export type ResidualTerm =
 	  };
 
 /**
- * Ancillary equation (starting guesses only), θ = 1 − T/Tc, with reducing values Tc and yc:
- * - `ln-ratio-tc-over-t`: ln(y/yc) = (Tc/T)·Σ nᵢ·θ^tᵢ   (typical for vapor pressure)
+ * Ancillary equation (starting guesses only), θ = 1 − T/Tr, with reducing values Tr and yc:
+ * - `ln-ratio-tc-over-t`: ln(y/yc) = (Tr/T)·Σ nᵢ·θ^tᵢ   (typical for vapor pressure)
  * - `ln-ratio`:           ln(y/yc) = Σ nᵢ·θ^tᵢ          (typical for vapor density)
  * - `ratio-plus-one`:     y/yc = 1 + Σ nᵢ·θ^tᵢ           (typical for liquid density)
+ * Above Tr (θ ≤ 0) the sum is taken as 0.
  */
 export interface Ancillary {
 	form: 'ln-ratio-tc-over-t' | 'ln-ratio' | 'ratio-plus-one';
 	n: number[];
 	t: number[];
-	/** reducing value of y (Pa or kg/m³); Tc is the fluid's critical temperature */
+	/** reducing value of y (Pa or kg/m³) */
 	yc: number;
+	/**
+	 * reducing temperature of θ and of the Tr/T factor, K (default: the fluid's critical.T).
+	 * Some publications reduce their ancillaries with another value (R-134a: 374.18 K).
+	 */
+	Tr?: number;
 	/** where these coefficients come from */
 	source: string;
 }
