@@ -114,6 +114,18 @@ describe('states just off the saturation line, every fluid (internal consistency
 		});
 	}
 
+	it('(T, P) within the line’s band is refused without a hint; with one it is the saturated phase carrying the given P', () => {
+		for (const { id } of listFluids()) {
+			const fl = getCompiledFluid(id);
+			const T = fl.Tt + 0.5 * (fl.Tc - fl.Tt);
+			const P = saturationAtT(id, T).P * (1 + 5e-10);
+			expect(() => fixState(id, { T, P }), id).toThrowError(expect.objectContaining({ code: 'two-phase-pressure-temperature' }));
+			const liq = fixState(id, { T, P }, { hint: 'liquid-side' }), vap = fixState(id, { T, P }, { hint: 'vapor-side' });
+			expect([liq.phase, liq.x, liq.P, liq.T]).toEqual(['saturated-liquid', 0, P, T]);
+			expect([vap.phase, vap.x, vap.P, vap.T]).toEqual(['saturated-vapor', 1, P, T]);
+		}
+	});
+
 	it('the reported case: water at 373.124 K and 101325 Pa is a compressed liquid 1.07 Pa above Psat', () => {
 		const st = fixState('water', { T: 373.124, P: 101325 });
 		// IAPWS R6-95(2018): Psat(373.124 K) = 101323.93 Pa (python3-iapws 1.5.2, IAPWS95(T=373.124, x=0))

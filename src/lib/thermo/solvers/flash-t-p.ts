@@ -9,10 +9,10 @@
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point } from '../properties.ts';
-import { P_LINE_TOL, pressureTol, saturatedState, singleState } from '../state.ts';
+import { P_LINE_TOL, pressureTol, singleState } from '../state.ts';
 import type { RootHint, State } from '../types.ts';
 import { densityAtTP } from './density.ts';
-import { locate, placedState } from './locate.ts';
+import { locate, onLineAt, placedState } from './locate.ts';
 import { CRITICAL_BAND, TABLE_ACCURACY, satAtT, satGuess, type SatGuess, type SatPoint } from './saturation.ts';
 
 const p = new Point();
@@ -51,12 +51,8 @@ export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State
 			sat = satAtT(fl, T);
 			const dP = P - sat.P;
 			if (Math.abs(dP) <= pressureTol(fl, T, dP > 0 ? sat.rhoL : sat.rhoV, sat.P)) {
-				const x = hint === 'liquid-side' ? 0 : hint === 'vapor-side' ? 1 : null;
-				if (x !== null) {
-					const st = saturatedState(fl, sat, x);
-					st.P = P;
-					return st;
-				}
+				if (hint === 'liquid-side') return onLineAt(fl, sat, 0, P);
+				if (hint === 'vapor-side') return onLineAt(fl, sat, 1, P);
 				throw new ThermoError(
 					'two-phase-pressure-temperature',
 					`T = ${fmt(T)} K and P = ${fmt(P)} Pa lie on the saturation line of ${fl.id}, where T and P are not independent: every state from saturated liquid to saturated vapor has them.`,

@@ -93,7 +93,12 @@ export function locate(fl: Fluid, p: Point): Located {
  */
 export function placedState(fl: Fluid, p: Point, loc: Located, givenP = false): State {
 	if (!loc.sat) return singleState(fl, p, loc.phase);
-	const st = saturatedState(fl, loc.sat, loc.x ?? 0);
-	if (givenP && st.phase !== 'supercritical-fluid') st.P = p.P;
+	return givenP ? onLineAt(fl, loc.sat, loc.x ?? 0, p.P) : saturatedState(fl, loc.sat, loc.x ?? 0);
+}
+
+/** The saturated liquid (x = 0) or vapor (x = 1) at `sat`, carrying the given pressure P (within the line's band of Psat). */
+export function onLineAt(fl: Fluid, sat: SatPoint, x: number, P: number): State {
+	const st = saturatedState(fl, sat, x);
+	if (st.phase !== 'supercritical-fluid') st.P = P;
 	return st;
 }

@@ -136,9 +136,9 @@ function segment(fl: Fluid, z0: number, z1: number, Tof: (z: number) => number, 
 			break;
 		}
 		const T = Tof(z0 + i * seg.dz);
-		// continuation (linear extrapolation from the two previous nodes) first toward the critical
-		// point, where the ancillaries may end at a published Tc below the equation's own (ammonia,
-		// R-134a) and lead Newton to the trivial solution; a node must narrow the dome, not close it
+		// toward the critical point continuation from the previous nodes comes first: the ancillaries
+		// may end at a published Tc below the equation's own (ammonia) and lead Newton to the trivial
+		// solution; a node must narrow the dome, not close it
 		const plausible = (): boolean => {
 			if (!endsAtCritical || i < 2) return true;
 			const gap = out.dL - out.dV, prev = (seg.rhoL[i - 1] - Math.exp(seg.lnRhoV[i - 1])) / fl.rhor;
