@@ -15,15 +15,15 @@ test.describe('the shell', () => {
 		await expect(page.getByRole('img', { name: /heating leg/ })).toBeVisible();
 	});
 
-	test('signed-in home lists the teams and the empty sheet list', async ({ page }) => {
+	test('signed-in home lists the teams and their sheets', async ({ page }) => {
 		await signInPage(page, DEMO.checker);
 		const teams = page.getByTestId('team-list');
 		await expect(teams).toContainText('Brindlemoor Thermal Works');
 		await expect(teams).toContainText('Checker');
-		await expect(page.getByText('No sheets yet')).toBeVisible();
+		// the demo seed's worked examples
+		await expect(page.getByTestId('recent-sheets')).toContainText('HP-410');
 		await page.getByTestId('team-list').getByRole('link').first().click();
-		await expect(page.getByTestId('sheet-list')).toContainText('No sheets yet');
-		await expect(page.getByTestId('sheet-list')).toContainText('for you to check');
+		await expect(page.getByTestId('sheet-list')).toContainText('R-310 ammonia receiver on a hot day');
 	});
 
 	test('a new user starts a team and becomes its owner', async ({ page }) => {
@@ -37,6 +37,7 @@ test.describe('the shell', () => {
 		await expect(page).toHaveURL(/\/t\/coldchain-receivers(-\d+)?$/);
 		await expect(page.getByRole('heading', { name: 'Coldchain Receivers' })).toBeVisible();
 		await expect(page.getByTestId('member-summary')).toContainText('Owner');
+		await expect(page.getByTestId('sheet-list')).toContainText('No sheets yet');
 	});
 
 	test('our own 404 page, also for a team you are not in', async ({ page }) => {
