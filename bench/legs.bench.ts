@@ -7,9 +7,10 @@
  * Then a seeded fuzz per fluid: a few thousand fixState and computeLeg calls on random inputs, with
  * their median, p99 and slowest inputs, and the error codes met (any `no-convergence` is worth a look).
  *
- * Times are medians over batches after a warm-up, as wall time and as this process's CPU time
- * (user + system); on a shared machine the CPU time is the steadier figure and is the one compared
- * with the budget. The load average is printed beside them.
+ * Times are medians over batches after a warm-up (a second of all legs, then 20 calls of each), as
+ * wall time and as this process's CPU time (user + system, which includes the garbage collector's
+ * background threads); on a shared machine the CPU time is the steadier figure and is the one
+ * compared with the budget. The load average is printed beside them.
  */
 import { loadavg } from 'node:os';
 import { PROCESSES, ThermoError, computeLeg, computePath, fixState, getFluid, listFluids } from '../src/lib/thermo/index.ts';
@@ -43,9 +44,9 @@ function median(xs: number[]): number {
 	return s.length % 2 ? s[m] : 0.5 * (s[m - 1] + s[m]);
 }
 
-/** Median wall and CPU ms per call over `batches` batches of `per` calls. */
+/** Median wall and CPU ms per call over `batches` batches of `per` calls (after 20 calls of warm-up). */
 function time(fn: () => unknown, batches = 15, per = 4): { wall: number; cpu: number } {
-	for (let i = 0; i < 5; i++) fn();
+	for (let i = 0; i < 20; i++) fn();
 	const wall: number[] = [], cpu: number[] = [];
 	for (let b = 0; b < batches; b++) {
 		const c0 = process.cpuUsage();
@@ -65,6 +66,9 @@ const num = (x: number) => x.toFixed(2).padStart(7);
 console.log(`Statewright leg benchmark — ${SAMPLES}-point legs with their crossings (budget ≤ ${BUDGET_MS} ms, CPU median)`);
 console.log(`node ${process.version}, load average ${loadavg().map((l) => l.toFixed(2)).join(' ')}\n`);
 console.log(`${pad('leg', 52)} ${pad('points', 7)} ${pad('cross', 6)} ${'wall ms'.padStart(7)} ${'cpu ms'.padStart(7)}  budget`);
+// every leg kind shares most of the engine: run them all for a second first, so the optimizing
+// compiler has settled (its background threads would otherwise show in the CPU figures)
+for (const t0 = performance.now(); performance.now() - t0 < 1000; ) for (const [, spec] of legs) computeLeg({ ...spec, samples: SAMPLES });
 const cpus: number[] = [];
 for (const [name, spec] of legs) {
 	const s = { ...spec, samples: SAMPLES };
