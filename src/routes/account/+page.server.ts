@@ -8,6 +8,8 @@ import { fields, formFailure, parseForm, runAction, readFormData } from '$lib/se
 import { flowContext } from '$lib/server/request';
 import { deleteUserSession, listUserSessions } from '$lib/server/db/sessions';
 import { updateUserName } from '$lib/server/db/users';
+import { getNotificationSettings, setNotificationSettings } from '$lib/server/db/notification-settings';
+import { NOTIFICATION_LABELS, settingsFromForm } from '$lib/server/notifications';
 
 export const load: PageServerLoad = async (event) => {
 	const user = requireUser(event);
@@ -15,6 +17,7 @@ export const load: PageServerLoad = async (event) => {
 	return {
 		passwordMin: PASSWORD_MIN,
 		passwordReset: event.url.searchParams.get('password') === 'reset',
+		notifications: { settings: await getNotificationSettings(getDb(), user.id), labels: NOTIFICATION_LABELS },
 		sessions: sessions.map((s) => ({
 			id: s.id,
 			current: s.id === event.locals.session?.id,
@@ -32,6 +35,11 @@ const passwordSchema = z.object({ current: fields.password, next: fields.passwor
 const sessionSchema = z.object({ session: z.string().regex(/^[0-9a-f]{64}$/, 'That session id is not valid.') });
 
 export const actions: Actions = {
+	notifications: async (event) => {
+		const user = requireUser(event);
+		await setNotificationSettings(getDb(), user.id, settingsFromForm(await readFormData(event.request)));
+		return { saved: 'notifications' };
+	},
 	profile: async (event) => {
 		const user = requireUser(event);
 		const parsed = parseForm(profileSchema, await readFormData(event.request), ['name']);

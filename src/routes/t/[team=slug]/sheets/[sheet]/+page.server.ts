@@ -6,6 +6,7 @@ import { requireTeam } from '$lib/server/guard';
 import { isAppError } from '$lib/server/errors';
 import { parseForm, readFormData, runAction } from '$lib/server/forms';
 import { readSheet, renameTeamSheet, titleSchema } from '$lib/server/sheets';
+import { sheetReviewData } from '$lib/server/review-pages';
 import { computePath, fixState, getFluid, listFluids, saturationCurve, stateExtras, ThermoError, type PathResult, type SaturationCurve } from '$lib/thermo';
 import { engineSpec, labelIds, startOnlyResult } from '$lib/sheets/doc';
 import type { SheetDoc } from '$lib/sheets/types';
@@ -58,7 +59,8 @@ export const load: PageServerLoad = async (event) => {
 		fluid: getFluid(doc.spec.fluid),
 		saturation: dome(doc.spec.fluid),
 		fluids: listFluids(),
-		canEdit: access.can('sheet:edit')
+		canEdit: access.can('sheet:edit'),
+		review: await sheetReviewData(getDb(), access, event.params.sheet)
 	};
 };
 
