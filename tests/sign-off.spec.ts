@@ -178,9 +178,20 @@ test('designer saves Rev 1, checker notes and returns it, designer fixes the leg
 	await owner.getByRole('link', { name: 'Letter' }).click();
 	await expect(owner.getByTestId('print-view')).toHaveAttribute('data-paper', 'letter');
 
-	// editing the approved sheet starts a new draft based on Rev 2
+	// editing the approved sheet starts a new draft based on Rev 2; Rev 2 stays approved
 	await designer.goto(sheetUrl);
-	await expect(designer.getByTestId('sheet-header').locator('[data-status]')).toHaveAttribute('data-status', 'approved');
+	const chip = designer.getByTestId('sheet-header').locator('[data-status]');
+	await expect(chip).toHaveAttribute('data-status', 'approved');
+	await expect(designer.getByTestId('draft-base')).toHaveText('Rev 2');
+	const again = designer.locator('tr[data-label="S2"] [data-prop="T"]');
+	await again.fill('115 °C');
+	await again.press('Enter');
+	await expect(designer.getByTestId('draft-base')).toHaveText('Rev 2 + edits');
+	await expect(chip).toHaveAttribute('data-status', 'draft');
+	await waitSaved(designer);
+	const rev2 = (await (await api.get(`/api/v1/teams/${TEAM}/sheets/${sheetId}/revisions/2`)).json()) as { revision: { status: string; doc: { spec: { legs: Array<{ target: { T: number } }> } } } };
+	expect(rev2.revision.status).toBe('approved');
+	expect(rev2.revision.doc.spec.legs[0].target.T).toBeCloseTo(393.15, 6);
 });
 
 test('a measured trace uploads and shows on the chart; a malformed file is refused with its line numbers', async ({ browser }) => {
