@@ -4,93 +4,14 @@
  * the error body, e.g. `latest` and `yours` of a revision conflict, `rejected` lines of a refused
  * trace); a network failure as OfflineError.
  */
-import { ApiError, OfflineError } from '../sheets/client';
+import { ApiError, OfflineError, apiCall } from '../sheets/client';
 import type { SheetDoc, Anchor } from '../sheets/types';
 import type { PathResult } from '../thermo/types';
 import type { RevisionDiff } from '../revisions/diff';
-import type { RejectedLine, TraceColumn, TracePoint } from '../traces/types';
+import type { NoteView, RevisionEvent, RevisionFull, RevisionSummary, TraceSummary } from './types';
 
 export { ApiError, OfflineError };
-
-export interface Signature {
-	id: string | null;
-	name: string;
-	at: number;
-}
-
-export type SignOffStatus = 'draft' | 'in-check' | 'checked' | 'approved';
-
-export interface RevisionSummary {
-	number: number;
-	basedOn: number | null;
-	title: string;
-	message: string;
-	author: Signature;
-	status: SignOffStatus;
-	submitted: (Signature & { checkerId: string | null }) | null;
-	checked: Signature | null;
-	approved: Signature | null;
-	returned: Signature | null;
-	latest: boolean;
-}
-
-export interface RevisionFull extends RevisionSummary {
-	doc: SheetDoc;
-	result: PathResult;
-}
-
-export interface RevisionEvent {
-	number: number;
-	kind: string;
-	actor: string;
-	note: string | null;
-	at: number;
-}
-
-export interface ReplyView {
-	id: string;
-	kind: 'reply' | 'resolved' | 'reopened';
-	body: string;
-	author: { id: string | null; name: string };
-	at: number;
-	mentions: string[];
-}
-
-export interface NoteView {
-	id: string;
-	anchor: Anchor;
-	writtenAt: string;
-	label: string | null;
-	outdated: boolean;
-	revision: number | null;
-	body: string;
-	author: { id: string | null; name: string };
-	at: number;
-	mentions: string[];
-	resolved: { by: string; at: number } | null;
-	replies: ReplyView[];
-	lastActivityAt: number;
-}
-
-export interface TraceSummary {
-	id: string;
-	name: string;
-	filename: string;
-	fluid: string;
-	columns: TraceColumn[];
-	atmosphere: number;
-	tolerance: number;
-	pointCount: number;
-	inDomeCount: number;
-	rejectedCount: number;
-	rejected: RejectedLine[];
-	notes: string[];
-	startedAt: string | null;
-	uploadedBy: string;
-	uploadedAt: number;
-	stale: boolean;
-	points?: TracePoint[];
-}
+export type { NoteView, ReplyView, RevisionEvent, RevisionFull, RevisionSummary, Signature, TraceSummary } from './types';
 
 export interface CompareSide {
 	label: string;
@@ -100,28 +21,7 @@ export interface CompareSide {
 
 type Fetch = typeof fetch;
 
-async function call<T>(f: Fetch, url: string, init: RequestInit = {}): Promise<T> {
-	let res: Response;
-	const json = typeof init.body === 'string';
-	try {
-		res = await f(url, { ...init, headers: { accept: 'application/json', ...(json ? { 'content-type': 'application/json' } : {}), ...(init.headers ?? {}) } });
-	} catch (e) {
-		if (e instanceof DOMException && e.name === 'AbortError') throw e;
-		throw new OfflineError(e);
-	}
-	if (res.status === 204) return undefined as T;
-	let body: unknown = null;
-	try {
-		body = await res.json();
-	} catch {
-		body = null;
-	}
-	if (!res.ok) {
-		const err = (body as { error?: { code?: string; message?: string } } | null)?.error;
-		throw new ApiError(res.status, err?.code ?? `http-${res.status}`, err?.message ?? `The server answered ${res.status}.`, (err ?? {}) as Record<string, unknown>);
-	}
-	return body as T;
-}
+const call = apiCall;
 
 /** Calls for one sheet. */
 export function reviewApi(team: string, sheet: string, f: Fetch = fetch) {

@@ -1,5 +1,7 @@
 import type { DesignLimits as ChartLimits } from '../charts/types';
-import type { FluidInfo, Isoline, SaturationCurve } from '../thermo/types';
+import type { FluidInfo, Isoline, PathResult, SaturationCurve } from '../thermo/types';
+import type { Anchor, SheetDoc, SheetStatus } from '../sheets/types';
+import type { RejectedLine, TraceColumn, TracePoint } from '../traces/types';
 
 /** What a read-only chart needs besides the path: the dome, background isolines, design limits. */
 export interface ChartFrame {
@@ -7,4 +9,99 @@ export interface ChartFrame {
 	saturation: SaturationCurve;
 	isolines: { tv: Isoline[]; pv: Isoline[] };
 	limits: ChartLimits;
+}
+
+/*
+ * What the review API answers (revisions, notes, traces): one definition for the server that
+ * builds these and the browser that reads them.
+ */
+
+export interface Signature {
+	/** user id (null for a removed account) */
+	id: string | null;
+	name: string;
+	at: number;
+}
+
+export interface RevisionSummary {
+	number: number;
+	basedOn: number | null;
+	title: string;
+	message: string;
+	author: Signature;
+	status: SheetStatus;
+	submitted: (Signature & { checkerId: string | null }) | null;
+	checked: Signature | null;
+	approved: Signature | null;
+	returned: Signature | null;
+	/** the newest revision of the sheet (the only one that moves through sign-off) */
+	latest: boolean;
+}
+
+export interface RevisionFull extends RevisionSummary {
+	doc: SheetDoc;
+	result: PathResult;
+}
+
+export interface RevisionEvent {
+	number: number;
+	kind: string;
+	actor: string;
+	note: string | null;
+	at: number;
+}
+
+export interface ReplyView {
+	id: string;
+	kind: 'reply' | 'resolved' | 'reopened';
+	body: string;
+	author: { id: string | null; name: string };
+	at: number;
+	mentions: string[];
+}
+
+export interface NoteView {
+	id: string;
+	anchor: Anchor;
+	/** the label the anchor had where the note was written (L2, S3, Sheet) */
+	writtenAt: string;
+	/** the anchor's label in the document the notes are shown against; null when it is gone */
+	label: string | null;
+	/** the anchor (a leg or the state it ends) is not in that document */
+	outdated: boolean;
+	/** the revision the author was viewing (null: the working draft) */
+	revision: number | null;
+	body: string;
+	author: { id: string | null; name: string };
+	at: number;
+	mentions: string[];
+	resolved: { by: string; at: number } | null;
+	replies: ReplyView[];
+	lastActivityAt: number;
+}
+
+export interface TraceSummary {
+	id: string;
+	name: string;
+	filename: string;
+	fluid: string;
+	columns: TraceColumn[];
+	atmosphere: number;
+	tolerance: number;
+	pointCount: number;
+	inDomeCount: number;
+	rejectedCount: number;
+	rejected: RejectedLine[];
+	notes: string[];
+	startedAt: string | null;
+	uploadedBy: string;
+	uploadedAt: number;
+	/** the points were fixed for another fluid than the sheet's current one */
+	stale: boolean;
+	/** present where the answer carries the points (a single trace, or a list asked with points) */
+	points?: TracePoint[];
+}
+
+export interface TraceWithPoints extends TraceSummary {
+	points: TracePoint[];
 }

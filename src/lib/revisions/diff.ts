@@ -1,6 +1,6 @@
 import type { SheetDoc } from '../sheets/types';
 import type { Inputs, PathLeg, PathResult, PathState, TargetName } from '../thermo/types';
-import type { Quantity } from '../units';
+import { PROPERTY_QUANTITY, type Quantity } from '../units';
 
 /**
  * What changed between two revisions of a sheet (or a revision and a draft): the spec's fields,
@@ -83,16 +83,7 @@ function change(key: string, label: string, quantity: Quantity | null, before: n
 	return { key, label, quantity, before: b, after: a, delta: numeric ? a - b : null, changed };
 }
 
-const INPUT_QUANTITY: Record<keyof Inputs, Quantity> = {
-	T: 'temperature',
-	P: 'pressure',
-	v: 'specificVolume',
-	rho: 'density',
-	u: 'specificEnergy',
-	h: 'specificEnergy',
-	s: 'specificEntropy',
-	x: 'quality'
-};
+const INPUT_QUANTITY: Record<keyof Inputs, Quantity> = PROPERTY_QUANTITY;
 
 const INPUT_NAMES = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'] as const;
 

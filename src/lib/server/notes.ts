@@ -14,6 +14,9 @@ import { ROLE_LABEL } from '../roles';
 import { mentionedIds } from '$lib/notes/mentions';
 import { processText } from '$lib/export/table';
 import type { Anchor, SheetDoc } from '$lib/sheets/types';
+import type { NoteView, ReplyView } from '$lib/review/types';
+
+export type { NoteView, ReplyView };
 
 /*
  * Review notes: threads anchored to a leg, a state or the sheet as a whole, by stable ids (a
@@ -39,35 +42,6 @@ export const anchorSchema = z.discriminatedUnion(
 	],
 	{ error: 'anchor must be { "kind": "sheet" }, { "kind": "leg", "legId": "…" } or { "kind": "state", "at": "start" | "<leg id>" }.' }
 );
-
-export interface ReplyView {
-	id: string;
-	kind: 'reply' | 'resolved' | 'reopened';
-	body: string;
-	author: { id: string | null; name: string };
-	at: number;
-	mentions: string[];
-}
-
-export interface NoteView {
-	id: string;
-	anchor: Anchor;
-	/** the label the anchor had where the note was written (L2, S3, Sheet) */
-	writtenAt: string;
-	/** the anchor's label in the document the notes are shown against; null when it is gone */
-	label: string | null;
-	/** the anchor (a leg or the state it ends) is not in that document */
-	outdated: boolean;
-	/** the revision the author was viewing (null: the working draft) */
-	revision: number | null;
-	body: string;
-	author: { id: string | null; name: string };
-	at: number;
-	mentions: string[];
-	resolved: { by: string; at: number } | null;
-	replies: ReplyView[];
-	lastActivityAt: number;
-}
 
 /** The label an anchor has in a document, or null when the document does not have it. */
 export function anchorLabel(doc: SheetDoc, anchor: Anchor): string | null {

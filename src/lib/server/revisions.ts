@@ -26,6 +26,9 @@ import { engineSpec, sameDoc } from '$lib/sheets/doc';
 import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
 import { diffRevisions, type RevisionDiff } from '$lib/revisions/diff';
 import type { TitleSignOff } from '$lib/export/title';
+import type { RevisionEvent, RevisionFull, RevisionSummary, Signature } from '$lib/review/types';
+
+export type { RevisionEvent, RevisionFull, RevisionSummary, Signature };
 
 /*
  * Revisions and their sign-off. Saving the working draft creates an immutable revision (Rev 1,
@@ -62,41 +65,6 @@ export const noteSchema = z
 	.optional()
 	.transform((s) => (s ?? '').trim())
 	.pipe(z.string().max(2000, { error: 'Use at most 2000 characters for the note.' }));
-
-export interface Signature {
-	/** user id (null for a removed account) */
-	id: string | null;
-	name: string;
-	at: number;
-}
-
-export interface RevisionSummary {
-	number: number;
-	basedOn: number | null;
-	title: string;
-	message: string;
-	author: Signature;
-	status: SheetStatus;
-	submitted: (Signature & { checkerId: string | null }) | null;
-	checked: Signature | null;
-	approved: Signature | null;
-	returned: Signature | null;
-	/** the newest revision of the sheet (the only one that moves through sign-off) */
-	latest: boolean;
-}
-
-export interface RevisionFull extends RevisionSummary {
-	doc: SheetDoc;
-	result: PathResult;
-}
-
-export interface RevisionEventView {
-	number: number;
-	kind: string;
-	actor: string;
-	note: string | null;
-	at: number;
-}
 
 function sig(id: string | null, label: string | null, at: number | null): Signature | null {
 	return label !== null && at !== null ? { id, name: label, at } : null;
@@ -248,7 +216,7 @@ export async function saveRevision(db: DB, access: TeamAccess, sheetId: string, 
 	});
 }
 
-export async function listRevisions(db: DB, access: TeamAccess, sheetId: string): Promise<{ revisions: RevisionSummary[]; events: RevisionEventView[] }> {
+export async function listRevisions(db: DB, access: TeamAccess, sheetId: string): Promise<{ revisions: RevisionSummary[]; events: RevisionEvent[] }> {
 	const sheet = await loadSheet(db, access, sheetId);
 	const rows = await listRevisionRows(db, sheet.id);
 	const latest = rows[0]?.number ?? 0;

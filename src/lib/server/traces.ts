@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { DB, SheetTraceRow } from './db/schema';
 import { AppError } from './errors';
 import { newId } from './secrets';
+import { readCapped } from './request';
 import type { TeamAccess } from './guard';
 import { countTraces, deleteTraceRow, getTraceRow, insertTrace, listTraceRows, listTraceRowsWithPoints, type TraceListRow } from './db/traces';
 import { checkDoc } from './sheets';
@@ -12,6 +13,9 @@ import { readTraceCsv } from '$lib/traces/read';
 import { DEFAULT_SATURATION_TOLERANCE, MAX_SATURATION_TOLERANCE } from '$lib/traces/fix';
 import { MAX_TRACE_BYTES } from '$lib/traces/csv';
 import type { RejectedLine, TraceColumn, TracePoint, TraceRefusalCode } from '$lib/traces/types';
+import type { TraceSummary, TraceWithPoints } from '$lib/review/types';
+
+export type { TraceSummary, TraceWithPoints };
 
 /*
  * Measured traces: a logger CSV uploaded to a sheet, read and checked on the server (the file
@@ -54,29 +58,6 @@ export class TraceRefusedError extends AppError {
 	}
 }
 
-export interface TraceSummary {
-	id: string;
-	name: string;
-	filename: string;
-	fluid: string;
-	columns: TraceColumn[];
-	atmosphere: number;
-	tolerance: number;
-	pointCount: number;
-	inDomeCount: number;
-	rejectedCount: number;
-	rejected: RejectedLine[];
-	notes: string[];
-	startedAt: string | null;
-	uploadedBy: string;
-	uploadedAt: number;
-	/** the points were fixed for another fluid than the sheet's current one */
-	stale: boolean;
-}
-
-export interface TraceWithPoints extends TraceSummary {
-	points: TracePoint[];
-}
 
 function summaryOf(r: TraceListRow, sheetFluid: string): TraceSummary {
 	return {
@@ -192,28 +173,13 @@ export async function deleteTrace(db: DB, access: TeamAccess, sheetId: string, t
 /** Room for the multipart framing and the small fields around the file. */
 const FRAMING = 16 * 1024;
 
-async function readLimited(request: Request, max: number): Promise<Uint8Array> {
-	const tooLarge = () => new TraceRefusedError('too-large', `The upload is larger than ${MAX_TRACE_BYTES / 1024} kB. Split the log into shorter periods or thin it out before uploading.`, [], 0);
-	const declared = Number(request.headers.get('content-length'));
-	if (Number.isFinite(declared) && declared > max) throw tooLarge();
-	if (!request.body) return new Uint8Array();
-	const reader = request.body.getReader();
-	const chunks: Uint8Array[] = [];
-	let size = 0;
-	try {
-		for (;;) {
-			const { done, value } = await reader.read();
-			if (done) break;
-			size += value.byteLength;
-			// keep draining past the limit so the 413 reaches the client before the connection closes
-			if (size <= max) chunks.push(value);
-		}
-	} catch (e) {
-		if ((e as { status?: number }).status === 413) throw tooLarge();
-		throw new AppError(400, 'unreadable-upload', 'The upload could not be read completely. Try again.');
-	}
-	if (size > max) throw tooLarge();
-	return Buffer.concat(chunks);
+function readLimited(request: Request, max: number): Promise<Uint8Array> {
+	return readCapped(
+		request,
+		max,
+		() => new TraceRefusedError('too-large', `The upload is larger than ${MAX_TRACE_BYTES / 1024} kB. Split the log into shorter periods or thin it out before uploading.`, [], 0),
+		() => new AppError(400, 'unreadable-upload', 'The upload could not be read completely. Try again.')
+	);
 }
 
 /**

@@ -28,14 +28,21 @@ export class OfflineError extends Error {
 
 type Fetch = typeof fetch;
 
-async function call<T>(f: Fetch, url: string, init?: RequestInit): Promise<T> {
+/**
+ * One JSON call to the API: JSON in (when the body is a string), JSON out; a 204 is undefined.
+ * A non-2xx answer throws ApiError with the API's error code and message, a network failure
+ * OfflineError; an abort is passed on as it is.
+ */
+export async function apiCall<T>(f: Fetch, url: string, init: RequestInit = {}): Promise<T> {
 	let res: Response;
+	const json = typeof init.body === 'string';
 	try {
-		res = await f(url, { ...init, headers: { accept: 'application/json', ...(init?.body ? { 'content-type': 'application/json' } : {}), ...(init?.headers ?? {}) } });
+		res = await f(url, { ...init, headers: { accept: 'application/json', ...(json ? { 'content-type': 'application/json' } : {}), ...(init.headers ?? {}) } });
 	} catch (e) {
 		if (e instanceof DOMException && e.name === 'AbortError') throw e;
 		throw new OfflineError(e);
 	}
+	if (res.status === 204) return undefined as T;
 	let body: unknown = null;
 	try {
 		body = await res.json();
@@ -48,6 +55,8 @@ async function call<T>(f: Fetch, url: string, init?: RequestInit): Promise<T> {
 	}
 	return body as T;
 }
+
+const call = apiCall;
 
 /** POST /api/v1/paths: the whole path for a spec. */
 export async function postPath(spec: PathSpec, f: Fetch = fetch): Promise<PathResult> {

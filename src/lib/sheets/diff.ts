@@ -4,8 +4,7 @@
  * units and title block. Values are formatted in the display units of `prefs`. Used when an
  * autosave is refused because someone else saved in between (and by revision compares later).
  */
-import { formatQuantity, type UnitPrefs } from '../units';
-import type { Quantity } from '../units';
+import { formatQuantity, PROPERTY_QUANTITY, type Quantity, type UnitPrefs } from '../units';
 import type { Inputs, TargetName } from '../thermo/types';
 import { legLabel, TITLE_BLOCK_LABELS } from './doc';
 import type { SheetDoc, SheetLegSpec } from './types';
@@ -20,16 +19,7 @@ export interface DiffRow {
 	b: string;
 }
 
-const QUANTITY: Record<TargetName, Quantity | null> = {
-	T: 'temperature',
-	P: 'pressure',
-	v: 'specificVolume',
-	rho: 'density',
-	u: 'specificEnergy',
-	h: 'specificEnergy',
-	s: 'specificEntropy',
-	x: 'quality'
-};
+const QUANTITY: Record<TargetName, Quantity | null> = PROPERTY_QUANTITY;
 
 function prop(name: TargetName, si: number | undefined, prefs: UnitPrefs): string {
 	if (si === undefined) return '';

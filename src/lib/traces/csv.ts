@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { BARE_PRESSURE, lookupUnit, normaliseUnitText, unitById, unitsOf, type Quantity, type UnitDef } from '../units/catalogue';
+import { BARE_PRESSURE, PROPERTY_QUANTITY, lookupUnit, normaliseUnitText, unitById, unitsOf, type Quantity, type UnitDef } from '../units/catalogue';
 import { DEFAULT_ATMOSPHERE } from '../units/factors';
 import { formatNumber } from '../units/format';
 import type { RawTracePoint, RejectedLine, TraceColumn, TraceColumnKind, TraceRefusal, TraceRefusalCode } from './types';
@@ -39,12 +39,7 @@ export const TIME_UNITS: Readonly<Record<string, { id: string; seconds: number }
 	timestamp: { id: 'iso', seconds: 1 }
 };
 
-const QUANTITY: Record<Exclude<TraceColumnKind, 'time'>, Quantity> = {
-	P: 'pressure',
-	T: 'temperature',
-	v: 'specificVolume',
-	rho: 'density'
-};
+const QUANTITY: Record<Exclude<TraceColumnKind, 'time'>, Quantity> = PROPERTY_QUANTITY;
 
 const COLUMN_NAME: Record<TraceColumnKind, string> = {
 	time: 'time',

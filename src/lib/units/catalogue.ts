@@ -40,6 +40,18 @@ export type Quantity =
 	| 'quality'
 	| 'fraction';
 
+/** The quantity of each state property a sheet names (T, P, v, rho, u, h, s, x). */
+export const PROPERTY_QUANTITY = {
+	T: 'temperature',
+	P: 'pressure',
+	v: 'specificVolume',
+	rho: 'density',
+	u: 'specificEnergy',
+	h: 'specificEnergy',
+	s: 'specificEntropy',
+	x: 'quality'
+} as const satisfies Record<'T' | 'P' | 'v' | 'rho' | 'u' | 'h' | 's' | 'x', Quantity>;
+
 /** Absolute or gauge: every pressure unit is one or the other, and its label says which. */
 export type PressureReference = 'absolute' | 'gauge';
 

@@ -18,6 +18,7 @@ export {
 	lookupUnit,
 	unitsOf,
 	normaliseUnitText,
+	PROPERTY_QUANTITY,
 	type Quantity,
 	type PressureReference,
 	type UnitDef

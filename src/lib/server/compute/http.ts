@@ -5,7 +5,7 @@ import { ThermoError, type ThermoErrorCode } from '$lib/thermo';
 import { jsonError } from '$lib/server/api';
 import { AppError } from '$lib/server/errors';
 import { createLimiter, retryAfterSeconds, type Limiter } from '$lib/server/rate-limit';
-import { clientIp } from '$lib/server/request';
+import { clientIp, readCapped } from '$lib/server/request';
 
 /*
  * Glue between the compute routes (/api/v1/fluids, /states, /legs, /paths) and the engine.
@@ -118,30 +118,8 @@ export async function readBody<S extends z.ZodType>(request: Request, schema: S)
 	if (!/^application\/(?:[\w.+-]+\+)?json\b/i.test(type))
 		throw new AppError(415, 'unsupported-media-type', `Send the body as JSON with "Content-Type: application/json" (got ${type ? `"${type.slice(0, 60)}"` : 'no content type'}).`);
 	const tooLarge = () => new AppError(413, 'too-large', `The body is larger than ${MAX_BODY_BYTES / 1024} kB; a path of 50 legs fits easily in that. Send a smaller request.`);
-	const declared = Number(request.headers.get('content-length'));
-	if (Number.isFinite(declared) && declared > MAX_BODY_BYTES) throw tooLarge();
-	let text = '';
-	if (request.body) {
-		const reader = request.body.getReader();
-		const chunks: Uint8Array[] = [];
-		let size = 0;
-		try {
-			for (;;) {
-				const { done, value } = await reader.read();
-				if (done) break;
-				size += value.byteLength;
-				// past the limit keep draining (bounded by the server's BODY_SIZE_LIMIT): cancelling the
-				// stream would drop the connection before the 413 is sent
-				if (size <= MAX_BODY_BYTES) chunks.push(value);
-			}
-		} catch (e) {
-			// the server's own body limit (adapter-node BODY_SIZE_LIMIT) or a dropped upload
-			if ((e as { status?: number }).status === 413) throw tooLarge();
-			throw new AppError(400, 'invalid-json', 'The request body could not be read completely.');
-		}
-		if (size > MAX_BODY_BYTES) throw tooLarge();
-		text = Buffer.concat(chunks).toString('utf8');
-	}
+	const unreadable = () => new AppError(400, 'invalid-json', 'The request body could not be read completely.');
+	const text = Buffer.from(await readCapped(request, MAX_BODY_BYTES, tooLarge, unreadable)).toString('utf8');
 	if (text.trim() === '') throw new AppError(400, 'invalid-json', 'The body is empty; send a JSON object (see the API documentation for its fields).');
 	let value: unknown;
 	try {
