@@ -7,6 +7,7 @@ import { getDb } from '$lib/server/db';
 import { clearSessionCookie, sessionCookieName, setSessionCookie, validateSession } from '$lib/server/auth';
 import { authenticateToken } from '$lib/server/api-tokens';
 import { codeForStatus, jsonError } from '$lib/server/api';
+import { crossSiteFormRefusal } from '$lib/server/csrf';
 
 /** Migrations, mail and the demo seed, before the first request. */
 export const init: ServerInit = async () => {
@@ -73,6 +74,9 @@ const apiErrorShape: Handle = async ({ event, resolve }) => {
 	return jsonError(response.status, codeForStatus(response.status), message, {}, headers);
 };
 
+/** Cross-site form posts are refused before anything else runs (see src/lib/server/csrf.ts). */
+const crossSiteForms: Handle = async ({ event, resolve }) => crossSiteFormRefusal(event.request, event.url) ?? resolve(event);
+
 const securityHeaders: Handle = async ({ event, resolve }) => {
 	const response = await resolve(event);
 	const h = response.headers;
@@ -87,7 +91,7 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-export const handle = sequence(securityHeaders, apiErrorShape, authenticateApiToken, authenticateSession);
+export const handle = sequence(securityHeaders, crossSiteForms, apiErrorShape, authenticateApiToken, authenticateSession);
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	// 4xx here are the framework's own answers to bad requests (unknown route, wrong content type)

@@ -141,9 +141,13 @@ test('measured traces over the API: upload as CSV or form, refusals with line nu
 	expect(up.status(), await up.text()).toBe(201);
 	const trace = ((await up.json()) as { trace: { id: string; name: string; pointCount: number } }).trace;
 	expect(trace).toMatchObject({ name: 'Morning run', pointCount: 3 });
-	// multipart is what browsers send (SvelteKit refuses cross-site form posts, so it carries the Origin)
-	const form = await tokens.designer.post(T, { headers: { origin: BASE }, multipart: { file: { name: 'second.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) }, tolerance: '0.3' } });
+	// multipart as a script sends it (curl -F): no Origin header, the token is what counts
+	const form = await tokens.designer.post(T, { multipart: { file: { name: 'second.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) }, tolerance: '0.3' } });
 	expect(form.status(), await form.text()).toBe(201);
+	// a cookie session is refused a cross-site form post, in the API's error shape
+	const browserish = await signedInRequest(DEMO.designer);
+	const forged = await errorOf(await browserish.post(T, { headers: { origin: 'http://forged.example' }, multipart: { file: { name: 'x.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) } } }), 403, 'cross-site-form');
+	expect(forged.message).toMatch(/Authorization: Bearer/);
 	const bad = await errorOf(await tokens.designer.post(T, { headers: { origin: BASE }, multipart: { file: { name: 'bad.csv', mimeType: 'text/csv', buffer: Buffer.from('time [s],P [kPa g],T [°C]\n0,100,20\n5,abc,21\n10,110;22\n') } } }), 422, 'rejected-lines');
 	expect((bad.rejected as Array<{ line: number }>).map((r) => r.line)).toEqual([3, 4]);
 	expect(bad.rejectedCount).toBe(2);
