@@ -60,7 +60,11 @@ const apiErrorShape: Handle = async ({ event, resolve }) => {
 		const body = await response.clone().json().catch(() => null);
 		if (body && typeof body === 'object' && 'error' in body) return response;
 		const message = body && typeof body.message === 'string' ? body.message : `Request failed (${response.status}).`;
-		return jsonError(response.status, body?.code ?? codeForStatus(response.status), message, {}, response.headers);
+		const code = body?.code ?? codeForStatus(response.status);
+		const extra = body && typeof body.ref === 'string' ? { ref: body.ref } : {};
+		const headers = new Headers(response.headers);
+		headers.delete('content-length');
+		return jsonError(response.status, response.status === 413 ? 'too-large' : code, response.status === 413 ? tooLargeMessage() : message, extra, headers);
 	}
 	const message =
 		response.status === 404
@@ -73,6 +77,14 @@ const apiErrorShape: Handle = async ({ event, resolve }) => {
 	headers.delete('content-length');
 	return jsonError(response.status, codeForStatus(response.status), message, {}, headers);
 };
+
+/** The server's own body limit (adapter-node BODY_SIZE_LIMIT, default 512 kB) reached before a route read the body. */
+function tooLargeMessage(): string {
+	const m = /^\s*(\d+)\s*([KMG]?)\s*$/i.exec(process.env.BODY_SIZE_LIMIT ?? '512K');
+	const bytes = m ? Number(m[1]) * 1024 ** ' KMG'.indexOf((m[2] || ' ').toUpperCase()) : NaN;
+	const size = bytes > 0 ? (bytes >= 1024 * 1024 ? `${(bytes / 1024 ** 2).toFixed(1)} MB` : `${Math.round(bytes / 1024)} kB`) : 'its limit';
+	return `The body is larger than the server accepts (${size}). Send a smaller request.`;
+}
 
 /** Cross-site form posts are refused before anything else runs (see src/lib/server/csrf.ts). */
 const crossSiteForms: Handle = async ({ event, resolve }) => crossSiteFormRefusal(event.request, event.url) ?? resolve(event);

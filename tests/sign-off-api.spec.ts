@@ -171,3 +171,47 @@ test('nobody outside the team, and nobody signed out, reaches a sheet’s revisi
 	for (const path of ['revisions', 'notes', 'traces']) await errorOf(await anon.get(`${API}/sheets/${sheet}/${path}`), 401, 'unauthenticated');
 	await errorOf(await tokens.viewer.get(`${API}/sheets/aaaaaaaaaaaaaaaa/revisions`), 404, 'sheet-not-found');
 });
+
+test('what scripts rely on: member ids, examples in the list, a clean sign-off record, 401 and 413 answers', async () => {
+	// member ids, usable as checkerId and in mentions
+	const members = ((await (await tokens.viewer.get(`${API}/members`)).json()) as { members: Array<{ id: string; email: string; role: string }> }).members;
+	const checker = members.find((m) => m.email === DEMO.checker);
+	expect(checker?.id).toMatch(/^\w{8,}$/);
+
+	// a sheet made from a worked example says so in the list as well as alone; a token's actor names its creator
+	const made = await tokens.designer.post(`${API}/sheets`, { data: { example: 'kettle-k101', title: `K-101 scripted ${Date.now().toString(36)}` } });
+	expect(made.status(), await made.text()).toBe(201);
+	const sheet = ((await made.json()) as { sheet: { id: string; title: string; createdBy: string } }).sheet;
+	expect(sheet.createdBy).toMatch(/^Tobias Lindqvist \(token “api review designer \d+”\)$/);
+	const listed = (await (await tokens.viewer.get(`${API}/sheets?q=${encodeURIComponent(sheet.title)}`)).json()) as { sheets: Array<{ id: string; example: string | null }> };
+	expect(listed.sheets.find((s) => s.id === sheet.id)?.example).toBe('kettle-k101');
+
+	// withdrawn, resubmitted to a named checker, checked, approved: no "returned" left on the record
+	const R = `${API}/sheets/${sheet.id}/revisions`;
+	expect((await tokens.designer.post(R, { data: { message: 'First issue', baseRevision: null } })).status()).toBe(201);
+	expect((await tokens.designer.post(`${R}/1/submit`, { data: {} })).status()).toBe(200);
+	const withdrawn = await tokens.designer.post(`${R}/1/withdraw`, { data: {} });
+	expect(((await withdrawn.json()) as { revision: { status: string; returned: unknown } }).revision).toMatchObject({ status: 'draft', returned: { name: expect.stringMatching(/^Tobias Lindqvist/) } });
+	expect((await tokens.designer.post(`${R}/1/submit`, { data: { checkerId: checker!.id } })).status()).toBe(200);
+	expect((await tokens.checker.post(`${R}/1/check`, { data: {} })).status()).toBe(200);
+	expect((await tokens.owner.post(`${R}/1/approve`, { data: {} })).status()).toBe(200);
+	const rev = ((await (await tokens.viewer.get(`${R}/1`)).json()) as { revision: { status: string; returned: unknown; submitted: { checkerId: string } } }).revision;
+	expect(rev).toMatchObject({ status: 'approved', returned: null, submitted: { checkerId: checker!.id } });
+
+	// no credentials: 401 with the Bearer challenge
+	const anon = await playwrightRequest.newContext({ baseURL: BASE });
+	const me = await anon.get('/api/v1/me');
+	await errorOf(me, 401, 'unauthenticated');
+	expect(me.headers()['www-authenticate']).toBe('Bearer');
+
+	// a body past any limit: a whole JSON error, not a cut-off one
+	for (const [method, path] of [['POST', `${API}/sheets`], ['PUT', `${API}/sheets/${sheet.id}/draft`]] as const) {
+		const big = JSON.stringify({ title: 'x', version: 1, doc: { description: 'a'.repeat(600_000) } });
+		const res = await tokens.designer.fetch(path, { method, data: big, headers: { 'content-type': 'application/json' } });
+		const e = await errorOf(res, 413, 'too-large');
+		expect(e.message).toMatch(/smaller/);
+	}
+	// a note on revision 0 says what to give
+	const bad = await errorOf(await tokens.checker.post(`${API}/sheets/${sheet.id}/notes`, { data: { anchor: { kind: 'sheet' }, body: 'x', revision: 0 } }), 400, 'invalid-input');
+	expect(bad.message).toMatch(/revision must be the number of the revision/);
+});

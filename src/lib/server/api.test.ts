@@ -19,7 +19,9 @@ describe('apiRoute', () => {
 			[() => error(403, { code: 'forbidden', message: 'no' }), 403, { error: { code: 'forbidden', message: 'no' } }],
 			[() => error(404, { message: 'gone' }), 404, { error: { code: 'not-found', message: 'gone' } }],
 			[() => { throw new AppError(409, 'last-owner', 'keep one', 'role'); }, 409, { error: { code: 'last-owner', message: 'keep one', field: 'role' } }],
-			[() => { z.object({ n: z.number({ error: 'n must be a number' }) }).parse({ n: 'x' }); throw new Error('unreachable'); }, 400, { error: { code: 'invalid-input', message: 'n: n must be a number', issues: [{ path: 'n', message: 'n must be a number' }] } }]
+			[() => { z.object({ n: z.number({ error: 'n must be a number' }) }).parse({ n: 'x' }); throw new Error('unreachable'); }, 400, { error: { code: 'invalid-input', message: 'n must be a number.', issues: [{ path: 'n', message: 'n must be a number' }] } }],
+			// one sentence per issue, named by its field, no doubled stops
+			[() => { z.object({ a: z.number({ error: 'Give a number.' }), b: z.string({ error: 'Give text' }) }).parse({ a: 'x', b: 1 }); throw new Error('unreachable'); }, 400, { error: { code: 'invalid-input', message: 'a: Give a number. b: Give text.', issues: [{ path: 'a', message: 'Give a number.' }, { path: 'b', message: 'Give text' }] } }]
 		];
 		for (const [fn, status, json] of cases) expect(await body(await apiRoute(fn)(event))).toEqual({ status, json });
 	});

@@ -1,6 +1,7 @@
 import { isHttpError, isRedirect, json, type RequestEvent } from '@sveltejs/kit';
 import { ZodError, type z } from 'zod';
 import { AppError, isAppError } from './errors';
+import { readCapped } from './body';
 
 /*
  * JSON API plumbing for /api/v1/*. Every error answers
@@ -39,8 +40,30 @@ export function codeForStatus(status: number): string {
 	return CODE_FOR_STATUS[status] ?? (status >= 500 ? 'internal' : 'error');
 }
 
-export function zodIssues(e: ZodError): Array<{ path: string; message: string }> {
-	return e.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
+/** Whether a message already names its field ("limit must be …", "… \"limit\" …", "… start.T …"). */
+function namesField(message: string, path: string): boolean {
+	return message.startsWith(`${path} `) || message.includes(`"${path}"`) || (path.length > 2 && message.includes(path));
+}
+
+/**
+ * Zod's issues as the API reports them: one sentence per issue naming its field ("limit: …"), unknown
+ * fields named with what to do, and the list itself in `issues`.
+ */
+export function issueText(issues: z.core.$ZodIssue[]): { message: string; issues: { path: string; message: string }[] } {
+	const list = issues.map((i) => {
+		const path = i.path.map(String).join('.');
+		let message = i.message;
+		if (i.code === 'unrecognized_keys' && !/^Unknown field/.test(message)) {
+			const keys = (i as { keys: string[] }).keys;
+			message = `Unknown field${keys.length > 1 ? 's' : ''} ${keys.map((k) => `"${k}"`).join(', ')}${path ? ` in ${path}` : ''}; remove ${keys.length > 1 ? 'them' : 'it'} (names are case-sensitive, values SI).`;
+		} else if (i.code === 'invalid_type' && /expected object/.test(message)) message = `${path || 'The body'} must be a JSON object.`;
+		return { path, message };
+	});
+	const message = list
+		.map((i) => (i.path && !namesField(i.message, i.path) ? `${i.path}: ${i.message}` : i.message))
+		.map((t) => (/[.!?)]$/.test(t) ? t : `${t}.`))
+		.join(' ');
+	return { message, issues: list };
 }
 
 /** Turns anything thrown inside an API handler into the error shape; rethrows our own faults. */
@@ -48,12 +71,12 @@ export function toApiResponse(e: unknown): Response {
 	if (isRedirect(e)) throw e;
 	if (isHttpError(e)) {
 		const body = e.body as App.Error;
-		return jsonError(e.status, body.code ?? codeForStatus(e.status), body.message);
+		return jsonError(e.status, body.code ?? codeForStatus(e.status), body.message, {}, e.status === 401 ? { 'www-authenticate': 'Bearer' } : undefined);
 	}
-	if (isAppError(e)) return jsonError(e.status, e.code, e.message, e.field ? { field: e.field } : {});
+	if (isAppError(e)) return jsonError(e.status, e.code, e.message, e.field ? { field: e.field } : {}, e.status === 401 ? { 'www-authenticate': 'Bearer' } : undefined);
 	if (e instanceof ZodError) {
-		const issues = zodIssues(e);
-		return jsonError(400, 'invalid-input', issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join('; '), { issues });
+		const { message, issues } = issueText(e.issues);
+		return jsonError(400, 'invalid-input', message, { issues });
 	}
 	throw e;
 }
@@ -76,8 +99,9 @@ export async function readJson<S extends z.ZodType>(request: Request, schema: S,
 	if (!/^application\/(?:[\w.+-]+\+)?json\b/i.test(type)) {
 		throw new AppError(415, 'unsupported-media-type', 'Send the body as JSON with "Content-Type: application/json".');
 	}
-	const text = await request.text();
-	if (Buffer.byteLength(text) > maxBytes) throw new AppError(413, 'too-large', `The body is larger than ${Math.round(maxBytes / 1024)} kB.`);
+	const tooLarge = () => new AppError(413, 'too-large', `The body is larger than ${Math.round(maxBytes / 1024)} kB; send a smaller request.`);
+	const unreadable = () => new AppError(400, 'invalid-json', 'The request body could not be read completely.');
+	const text = Buffer.from(await readCapped(request, maxBytes, tooLarge, unreadable)).toString('utf8');
 	let value: unknown;
 	try {
 		value = JSON.parse(text);

@@ -4,6 +4,7 @@ import type { DB, Team } from './db/schema';
 import { getDb } from './db';
 import { getTeamBySlug } from './db/teams';
 import { getMembership, ownsAnyTeam } from './db/memberships';
+import { getUserById } from './db/users';
 import type { SessionUser } from './auth';
 import type { TokenPrincipal } from './api-tokens';
 
@@ -25,7 +26,7 @@ export interface TeamAccess {
 	team: Team;
 	role: Role;
 	principal: Principal;
-	/** who to record as having done something (a person, or a token's creator and name) */
+	/** who to record as having done something: the person, or for a token "Creator Name (token “name”)" */
 	actor: { id: string | null; label: string };
 	can(capability: Capability): boolean;
 }
@@ -100,7 +101,10 @@ export async function resolveTeamAccess(db: DB, principal: Principal, teamSlug: 
 	if (principal.kind === 'token') {
 		if (principal.token.teamId !== team.id) return null;
 		role = principal.token.role;
-		actor = { id: principal.token.createdBy, label: `token “${principal.token.name}”` };
+		// the person behind the token signs what it does ("Tobias Lindqvist (token “ci-export”)")
+		const token = `token “${principal.token.name}”`;
+		const creator = principal.token.createdBy ? await getUserById(db, principal.token.createdBy) : undefined;
+		actor = { id: principal.token.createdBy, label: creator ? `${creator.name} (${token})` : token };
 	} else {
 		const m = await getMembership(db, team.id, principal.user.id);
 		if (!m) return null;

@@ -9,7 +9,7 @@ import { listMembers, type Member } from './db/memberships';
 import { checkDoc } from './sheets';
 import { loadSheet } from './revisions';
 import { mentionMail, replyMail } from './mail-templates';
-import { notePath, notify, SETTINGS_PATH, signerOf, type NotifyContext, type Recipient } from './notifications';
+import { notePath, notify, SETTINGS_PATH, type NotifyContext, type Recipient } from './notifications';
 import { ROLE_LABEL } from '../roles';
 import { mentionedIds } from '$lib/notes/mentions';
 import { processText } from '$lib/export/table';
@@ -32,7 +32,7 @@ export const bodySchema = z
 	.transform((s) => s.replace(/\r\n?/g, '\n').trim())
 	.pipe(z.string().min(1, { error: 'Write the note (it cannot be empty).' }).max(4000, { error: 'Use at most 4000 characters for a note.' }));
 
-const idText = z.string().min(1).max(40);
+const idText = z.string({ error: 'Give the id as a string, e.g. "L4k9xq2" for a leg or "start" for the start state.' }).min(1, { error: 'The id is empty; give a leg id, or "start" for the start state.' }).max(40, { error: 'Ids are at most 40 characters.' });
 export const anchorSchema = z.discriminatedUnion(
 	'kind',
 	[
@@ -194,7 +194,7 @@ export async function createNote(db: DB, access: TeamAccess, sheetId: string, in
 		);
 	const members = await listMembers(db, access.team.id);
 	const mentioned = mentionedIds(body.data, mentionable(members));
-	const author = await signerOf(db, access);
+	const author = access.actor;
 	const id = newId();
 	const row = await db.transaction().execute(async (trx) => {
 		const r = await insertNote(
@@ -241,7 +241,7 @@ export async function replyToNote(db: DB, access: TeamAccess, sheetId: string, n
 	if (!note) noteNotFound();
 	const members = await listMembers(db, access.team.id);
 	const mentioned = mentionedIds(body.data, mentionable(members));
-	const author = await signerOf(db, access);
+	const author = access.actor;
 	const replyId = newId();
 	await db.transaction().execute(async (trx) => {
 		await insertReply(trx, { id: replyId, noteId: note.id, kind: 'reply', body: body.data, author }, now);
@@ -274,7 +274,7 @@ export async function setNoteState(db: DB, access: TeamAccess, sheetId: string, 
 	const sheet = await loadSheet(db, access, sheetId);
 	const note = await getNoteRow(db, sheet.id, noteId);
 	if (!note) noteNotFound();
-	const by = await signerOf(db, access);
+	const by = access.actor;
 	await db.transaction().execute(async (trx) => {
 		const changed = await setNoteResolved(trx, note.id, resolved ? by : null, now);
 		if (!changed) throw new AppError(409, resolved ? 'already-resolved' : 'already-open', resolved ? 'This thread is already resolved.' : 'This thread is already open.');

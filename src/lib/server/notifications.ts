@@ -2,8 +2,6 @@ import type { DB } from './db/schema';
 import type { FlowContext } from './auth';
 import type { Composed } from './mail-templates';
 import { NOTIFICATION_KINDS, wantsMail, type NotificationKind, type NotificationSettings } from './db/notification-settings';
-import { getUserById } from './db/users';
-import type { TeamAccess } from './guard';
 
 /*
  * Review and sign-off mails: who gets one, honouring each person's settings, and the links in
@@ -80,17 +78,6 @@ export async function notify(
 		})
 	);
 	return outcome;
-}
-
-/**
- * Who signs a revision or a note: the person, also when they act through an API token
- * ("Tobias Lindqvist (token “ci-export”)"), so title blocks and threads name people.
- */
-export async function signerOf(db: DB, access: TeamAccess): Promise<{ id: string | null; label: string }> {
-	if (access.principal.kind !== 'token') return access.actor;
-	const creator = access.actor.id ? await getUserById(db, access.actor.id) : undefined;
-	const token = `token “${access.principal.token.name}”`;
-	return { id: access.actor.id, label: creator ? `${creator.name} (${token})` : token };
 }
 
 /** What each switch on the account page means. */

@@ -18,7 +18,7 @@ import {
 import { listMembers, type Member } from './db/memberships';
 import { checkDoc, DraftConflictError, SHEET_ID, type SaveResult } from './sheets';
 import { approvedMail, checkedMail, returnedMail, submittedMail } from './mail-templates';
-import { notify, revisionPath, sheetPath, SETTINGS_PATH, signerOf, type NotifyContext, type Recipient } from './notifications';
+import { notify, revisionPath, sheetPath, SETTINGS_PATH, type NotifyContext, type Recipient } from './notifications';
 import { can, ROLE_LABEL, type Capability } from '../roles';
 import { computePath, ThermoError } from '$lib/thermo';
 import type { PathResult } from '$lib/thermo/types';
@@ -182,7 +182,7 @@ export async function saveRevision(db: DB, access: TeamAccess, sheetId: string, 
 		doc = checkDoc(parseJson(sheet.draft, 'draft')).doc;
 	}
 	const result = computeDoc(doc);
-	const author = await signerOf(db, access);
+	const author = access.actor;
 
 	return db.transaction().execute(async (trx) => {
 		const latest = await latestRevision(trx, sheet.id);
@@ -293,7 +293,7 @@ export async function moveRevision(
 	if (action === 'return' && !note.data) throw new AppError(400, 'invalid-note', 'Say why the revision goes back: the designer reads this note.', 'note');
 	const sheet = await loadSheet(db, access, sheetId);
 	const members = await listMembers(db, access.team.id);
-	const by = await signerOf(db, access);
+	const by = access.actor;
 
 	const updated = await db.transaction().execute(async (trx) => {
 		const row = await getRevision(trx, sheet.id, number);
@@ -325,7 +325,7 @@ export async function moveRevision(
 
 		const patch =
 			action === 'submit'
-				? { status: step.to, submitted_by: by.id, submitted_by_label: by.label, submitted_at: now, check_requested_from: checkerId, checked_by: null, checked_by_label: null, checked_at: null }
+				? { status: step.to, submitted_by: by.id, submitted_by_label: by.label, submitted_at: now, check_requested_from: checkerId, checked_by: null, checked_by_label: null, checked_at: null, returned_by: null, returned_by_label: null, returned_at: null }
 				: action === 'check'
 					? { status: step.to, checked_by: by.id, checked_by_label: by.label, checked_at: now }
 					: action === 'approve'
@@ -387,7 +387,7 @@ export async function restoreRevision(db: DB, access: TeamAccess, sheetId: strin
 	requireCap(access, 'sheet:edit');
 	if (!Number.isInteger(version) || version < 1) throw new AppError(400, 'invalid-version', 'version must be the whole number the sheet was read with (1 or more).', 'version');
 	const sheet = await loadSheet(db, access, sheetId);
-	const by = await signerOf(db, access);
+	const by = access.actor;
 	return db.transaction().execute(async (trx) => {
 		const row = await getRevision(trx, sheet.id, number);
 		if (!row) revisionNotFound(number);

@@ -61,7 +61,7 @@ function meta(row: SheetRow | SheetListItem): SheetMeta {
 		fluid: row.fluid,
 		systemKind: row.system_kind,
 		status: row.status,
-		example: 'example' in row ? row.example : null,
+		example: row.example ?? null,
 		version: row.draft_version,
 		createdBy: row.created_by_label,
 		createdAt: row.created_at,

@@ -137,7 +137,7 @@ describe('guard', () => {
 		const principal = (await authenticateToken(env.db, token))!.principal as TokenPrincipal;
 		const ok = await requireTeam(event(`/api/v1/teams/${team.slug}`, { token: principal }), team.slug, 'sheet:check', env.db);
 		expect(ok.role).toBe('checker');
-		expect(ok.actor).toEqual({ id: people.owner.id, label: 'token “ci”' });
+		expect(ok.actor).toEqual({ id: people.owner.id, label: `${people.owner.name} (token “ci”)` });
 		const edit = await thrown(requireTeam(event(`/api/v1/teams/${team.slug}`, { token: principal }), team.slug, 'sheet:edit', env.db));
 		expect((edit as { status: number }).status).toBe(403);
 		const other = await thrown(requireTeam(event(`/api/v1/teams/${otherTeam.slug}`, { token: principal }), otherTeam.slug, 'read', env.db));

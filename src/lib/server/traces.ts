@@ -2,12 +2,11 @@ import { z } from 'zod';
 import type { DB, SheetTraceRow } from './db/schema';
 import { AppError } from './errors';
 import { newId } from './secrets';
-import { readCapped } from './request';
+import { readCapped } from './body';
 import type { TeamAccess } from './guard';
 import { countTraces, deleteTraceRow, getTraceRow, insertTrace, listTraceRows, listTraceRowsWithPoints, type TraceListRow } from './db/traces';
 import { checkDoc } from './sheets';
 import { loadSheet } from './revisions';
-import { signerOf } from './notifications';
 import { ROLE_LABEL } from '../roles';
 import { readTraceCsv } from '$lib/traces/read';
 import { DEFAULT_SATURATION_TOLERANCE, MAX_SATURATION_TOLERANCE } from '$lib/traces/fix';
@@ -115,7 +114,7 @@ export async function uploadTrace(db: DB, access: TeamAccess, sheetId: string, i
 	const tolerance = input.tolerance ?? DEFAULT_SATURATION_TOLERANCE;
 	const r = readTraceCsv(input.bytes, { fluid: doc.spec.fluid, atmosphere, toleranceK: tolerance, allowRejected: input.allowRejected ?? false });
 	if (!r.ok) throw new TraceRefusedError(r.code, r.message, r.rejected, r.rejectedCount);
-	const by = await signerOf(db, access);
+	const by = access.actor;
 	const name = input.name?.trim() || filename.replace(/\.[^.]*$/, '').slice(0, 80) || 'Measured trace';
 	const row: SheetTraceRow = {
 		id: newId(),

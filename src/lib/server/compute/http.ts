@@ -2,10 +2,11 @@ import { createHash, randomUUID } from 'node:crypto';
 import { json, type RequestEvent } from '@sveltejs/kit';
 import { ZodError, type z } from 'zod';
 import { ThermoError, type ThermoErrorCode } from '$lib/thermo';
-import { jsonError } from '$lib/server/api';
+import { issueText, jsonError } from '$lib/server/api';
 import { AppError } from '$lib/server/errors';
 import { createLimiter, retryAfterSeconds, type Limiter } from '$lib/server/rate-limit';
-import { clientIp, readCapped } from '$lib/server/request';
+import { clientIp } from '$lib/server/request';
+import { readCapped } from '$lib/server/body';
 
 /*
  * Glue between the compute routes (/api/v1/fluids, /states, /legs, /paths) and the engine.
@@ -65,20 +66,6 @@ export function computeLimiter(): Limiter {
 		limiter = createLimiter({ ratePerSecond: r, burst: Math.max(1, 2 * r) });
 	}
 	return limiter;
-}
-
-function issueText(issues: z.core.$ZodIssue[]): { message: string; issues: { path: string; message: string }[] } {
-	const list = issues.map((i) => {
-		const path = i.path.map(String).join('.');
-		let message = i.message;
-		if (i.code === 'unrecognized_keys' && !/^Unknown field/.test(message)) {
-			const keys = (i as { keys: string[] }).keys;
-			message = `Unknown field${keys.length > 1 ? 's' : ''} ${keys.map((k) => `"${k}"`).join(', ')}${path ? ` in ${path}` : ''}; remove ${keys.length > 1 ? 'them' : 'it'} (names are case-sensitive, values SI).`;
-		} else if (i.code === 'invalid_type' && /expected object/.test(message)) message = `${path || 'The body'} must be a JSON object.`;
-		return { path, message };
-	});
-	const message = list.map((i) => (i.path && !i.message.includes(i.path) ? `${i.path}: ${i.message}` : i.message)).join(' ');
-	return { message, issues: list };
 }
 
 /** Turn anything thrown while computing into the error shape; never a 5xx. */

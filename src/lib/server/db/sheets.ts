@@ -9,6 +9,7 @@ export interface SheetListItem {
 	title: string;
 	fluid: string;
 	system_kind: 'closed' | 'flow';
+	example: string | null;
 	status: SheetStatusValue;
 	draft_version: number;
 	tag: string;
@@ -77,6 +78,7 @@ const LIST_COLUMNS = [
 	'title',
 	'fluid',
 	'system_kind',
+	'example',
 	'status',
 	'draft_version',
 	'created_by_label',

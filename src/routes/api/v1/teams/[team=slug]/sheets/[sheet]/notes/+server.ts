@@ -27,7 +27,7 @@ const body = z.strictObject(
 	{
 		anchor: z.unknown().refine((a) => a !== undefined, { message: 'anchor is required: { "kind": "sheet" }, { "kind": "leg", "legId": "…" } or { "kind": "state", "at": "…" }.' }),
 		body: z.string({ error: 'body must be the text of the note.' }),
-		revision: z.number().int().min(1).nullable().optional()
+		revision: z.number({ error: 'revision must be the number of the revision you are reading (1, 2, …), or null for the working draft.' }).int({ error: 'revision must be the number of the revision you are reading (1, 2, …), or null for the working draft.' }).min(1, { error: 'revision must be the number of the revision you are reading (1, 2, …), or null for the working draft.' }).nullable().optional()
 	},
 	{ error: 'Send { "anchor": {…}, "body": "…" } and optionally "revision".' }
 );

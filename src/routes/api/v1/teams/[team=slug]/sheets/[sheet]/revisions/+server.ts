@@ -30,7 +30,7 @@ const body = z.strictObject(
 		message: z.string({ error: 'message is required: say what changed in this revision.' }),
 		baseRevision: z.number({ error: 'baseRevision must be the revision number the draft started from, or null.' }).int().nullable(),
 		doc: z.unknown().optional(),
-		draftVersion: z.number().int().min(1).optional()
+		draftVersion: z.number({ error: "draftVersion must be the working draft's version (a whole number from 1, as GET …/sheets/{id} returns it)." }).int({ error: "draftVersion must be the working draft's version (a whole number from 1, as GET …/sheets/{id} returns it)." }).min(1, { error: "draftVersion must be the working draft's version (a whole number from 1, as GET …/sheets/{id} returns it)." }).optional()
 	},
 	{ error: 'Send { "message": "…", "baseRevision": n | null } and optionally "doc" or "draftVersion".' }
 );
