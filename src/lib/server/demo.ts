@@ -8,6 +8,11 @@ import { hashPassword } from './auth';
 import { insertSheet } from './db/sheets';
 import { newId } from './secrets';
 import { WORKED_EXAMPLES } from '../sheets/templates';
+import type { SheetDoc } from '../sheets/types';
+import { resolveTeamAccess, type TeamAccess } from './guard';
+import { moveRevision, saveRevision } from './revisions';
+import { createNote, replyToNote, setNoteState } from './notes';
+import { uploadTrace } from './traces';
 
 /*
  * The demo scenario: an invented consultancy with invented people and equipment, seeded on the
@@ -78,9 +83,10 @@ export interface SeedResult {
 export async function seedDemo(db: DB): Promise<SeedResult> {
 	if ((await countUsers(db)) > 0) return { seeded: false };
 	const passwordHash = await hashPassword(DEMO_PASSWORD);
-	await db.transaction().execute(async (trx) => {
-		if ((await countUsers(trx)) > 0) return;
-		const ids: Partial<Record<Role, string>> = {};
+	const ids: Partial<Record<Role, string>> = {};
+	const sheets = new Map<string, { id: string; doc: SheetDoc; at: number }>();
+	const seeded = await db.transaction().execute(async (trx) => {
+		if ((await countUsers(trx)) > 0) return false;
 		for (const p of DEMO_PEOPLE) {
 			ids[p.role] = (await createUser(trx, { email: p.email, name: p.name, passwordHash, emailVerified: true })).id;
 		}
@@ -92,12 +98,71 @@ export async function seedDemo(db: DB): Promise<SeedResult> {
 		const t0 = Date.now() - WORKED_EXAMPLES.length * 3_600_000;
 		for (const [i, ex] of WORKED_EXAMPLES.entries()) {
 			const doc = ex.build();
-			await insertSheet(
-				trx,
-				{ id: newId(), teamId: team.id, title: ex.title, fluid: doc.spec.fluid, systemKind: doc.spec.system.kind, example: ex.id, draft: JSON.stringify(doc), actor: { id: ids.designer!, label: designer.name } },
-				t0 + i * 3_600_000
-			);
+			const id = newId();
+			const at = t0 + i * 3_600_000;
+			await insertSheet(trx, { id, teamId: team.id, title: ex.title, fluid: doc.spec.fluid, systemKind: doc.spec.system.kind, example: ex.id, draft: JSON.stringify(doc), actor: { id: ids.designer!, label: designer.name } }, at);
+			sheets.set(ex.id, { id, doc, at });
 		}
+		return true;
 	});
+	if (!seeded) return { seeded: false };
+	await seedReviewHistory(db, ids as Record<Role, string>, sheets);
 	return { seeded: true, teamSlug: DEMO_TEAM.slug, people: DEMO_PEOPLE, password: DEMO_PASSWORD };
+}
+
+/**
+ * A review history to look at in the demo, written through the same services the API uses (no
+ * mail is sent while seeding): K-101 saved, checked and approved, with a commissioning trace;
+ * HP-410 submitted for checking with an open note on its compression leg and a resolved one.
+ * V-204 and R-310 stay plain drafts.
+ */
+async function seedReviewHistory(db: DB, ids: Record<Role, string>, sheets: Map<string, { id: string; doc: SheetDoc; at: number }>): Promise<void> {
+	const access = async (role: Role): Promise<TeamAccess> => {
+		const p = DEMO_PEOPLE.find((x) => x.role === role)!;
+		return (await resolveTeamAccess(db, { kind: 'user', user: { id: ids[role], email: p.email, name: p.name, emailVerified: true } }, DEMO_TEAM.slug))!;
+	};
+	const [owner, designer, checker] = [await access('owner'), await access('designer'), await access('checker')];
+	const min = 60_000;
+
+	const kettle = sheets.get('kettle-k101');
+	if (kettle) {
+		const t = kettle.at + 10 * min;
+		await saveRevision(db, designer, kettle.id, { message: 'First issue: jacket at 5 bar g, trap to the 0.5 bar g return.', baseRevision: null }, t);
+		await moveRevision(db, designer, kettle.id, 1, 'submit', { checkerId: ids.checker, note: 'Steam table figures for the jacket duty; please check the flash fraction at the trap.' }, undefined, t + min);
+		await moveRevision(db, checker, kettle.id, 1, 'check', { note: 'Jacket duty and flash fraction agree with my hand check.' }, undefined, t + 20 * min);
+		await moveRevision(db, owner, kettle.id, 1, 'approve', {}, undefined, t + 30 * min);
+		// invented commissioning readings: jacket pressure rising to the 5 bar g header, a few kelvin of superheat
+		const csv = [
+			'# K-101 commissioning, jacket logger 1 (invented demo data)',
+			'time [s],P [bar g],T [°C]',
+			'0,0.5,116.0',
+			'60,1.5,131.0',
+			'120,2.5,141.5',
+			'180,3.5,150.5',
+			'240,4.5,157.5',
+			'300,5.0,161.5',
+			'360,5.0,159.0',
+			'420,4.9,160.6'
+		].join('\n');
+		await uploadTrace(db, designer, kettle.id, { bytes: new TextEncoder().encode(csv), filename: 'k101-commissioning.csv', name: 'Commissioning, jacket logger 1' }, t + 40 * min);
+	}
+
+	const heatPump = sheets.get('heat-pump-hp410');
+	if (heatPump) {
+		const t = heatPump.at + 10 * min;
+		const compression = heatPump.doc.spec.legs[0].id;
+		await saveRevision(db, designer, heatPump.id, { message: 'Rating point, ideal cycle for a first look.', baseRevision: null }, t);
+		await moveRevision(db, designer, heatPump.id, 1, 'submit', { checkerId: ids.checker }, undefined, t + min);
+		const open = await createNote(
+			db,
+			checker,
+			heatPump.id,
+			{ anchor: { kind: 'leg', legId: compression }, body: '@Tobias Lindqvist An isentropic leg gives the ideal heating COP only. State the compressor’s isentropic efficiency from the vendor sheet, or use a polytropic leg, before this goes to the client.', revision: 1 },
+			undefined,
+			t + 15 * min
+		);
+		await replyToNote(db, designer, heatPump.id, open.id, { body: 'Agreed. Waiting for the vendor’s curve; I will add the efficiency in Rev 2.' }, undefined, t + 25 * min);
+		const settled = await createNote(db, owner, heatPump.id, { anchor: { kind: 'sheet' }, body: 'Rating point confirmed with the creamery: 300 kPa a evaporating, 1.4 MPa a condensing.', revision: 1 }, undefined, t + 30 * min);
+		await setNoteState(db, owner, heatPump.id, settled.id, true, t + 31 * min);
+	}
 }
