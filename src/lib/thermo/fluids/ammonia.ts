@@ -1,4 +1,4 @@
-import type { FluidData } from './schema.ts';
+import { IIR_REFERENCE_STATE, type FluidData } from './schema.ts';
 
 const FITTED_SOURCE = 'fitted to this equation by tests/reference/fit-ancillaries.py';
 
@@ -38,13 +38,7 @@ export const ammonia: FluidData = {
 	critical: { T: 405.4, P: 11.333e6, rho: 225 },
 	triple: { T: 195.495, P: 6.0912e3 },
 	limits: { Tmin: 195.495, Tmax: 700, Pmax: 1000e6 },
-	referenceState: {
-		kind: 'saturated-liquid-at-T',
-		label: 'IIR: h = 200 kJ/kg, s = 1 kJ/(kg·K) for saturated liquid at 0 °C',
-		T: 273.15,
-		h: 200e3,
-		s: 1e3
-	},
+	referenceState: IIR_REFERENCE_STATE,
 	ideal: [
 		{ kind: 'lead', a1: -15.81502, a2: 4.255726 },
 		{ kind: 'log-tau', a: -1 },

@@ -1,4 +1,4 @@
-import type { FluidData } from './schema.ts';
+import { IIR_REFERENCE_STATE, type FluidData } from './schema.ts';
 
 /**
  * Carbon dioxide, reference equation of Span & Wagner (1996): 42 residual terms
@@ -31,13 +31,7 @@ export const carbonDioxide: FluidData = {
 	critical: { T: 304.1282, P: 7.3773e6, rho: 467.6 },
 	triple: { T: 216.592, P: 0.51795e6 },
 	limits: { Tmin: 216.592, Tmax: 1100, Pmax: 800e6 },
-	referenceState: {
-		kind: 'saturated-liquid-at-T',
-		label: 'IIR: h = 200 kJ/kg, s = 1 kJ/(kg·K) for saturated liquid at 0 °C',
-		T: 273.15,
-		h: 200e3,
-		s: 1e3
-	},
+	referenceState: IIR_REFERENCE_STATE,
 	ideal: [
 		{ kind: 'lead', a1: 8.37304456, a2: -3.70454304 },
 		{ kind: 'log-tau', a: 2.5 },

@@ -1,4 +1,4 @@
-import type { FluidData } from './schema.ts';
+import { IIR_REFERENCE_STATE, type FluidData } from './schema.ts';
 
 const PUBLISHED_SOURCE =
 	'Tillner-Roth & Baehr (1994), J. Phys. Chem. Ref. Data 23, 657, ancillary equations (θ = 1 − T/374.18 K); see formulation.provenance';
@@ -43,13 +43,7 @@ export const r134a: FluidData = {
 	critical: { T: 374.21, P: 4.05928e6, rho: 511.9 },
 	triple: { T: 169.85, P: 389.56 },
 	limits: { Tmin: 169.85, Tmax: 455, Pmax: 70e6 },
-	referenceState: {
-		kind: 'saturated-liquid-at-T',
-		label: 'IIR: h = 200 kJ/kg, s = 1 kJ/(kg·K) for saturated liquid at 0 °C',
-		T: 273.15,
-		h: 200e3,
-		s: 1e3
-	},
+	referenceState: IIR_REFERENCE_STATE,
 	ideal: [
 		{ kind: 'lead', a1: -1.019535, a2: 9.047135 },
 		{ kind: 'log-tau', a: -1.629789 },

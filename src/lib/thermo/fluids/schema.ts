@@ -83,6 +83,18 @@ export type ReferenceStateSpec =
 	/** shift a1, a2 so that the saturated liquid at P has enthalpy h and entropy s (NBP: 101325 Pa, 0, 0) */
 	| { kind: 'saturated-liquid-at-P'; label: string; P: number; h: number; s: number };
 
+/**
+ * The IIR convention for refrigerants: h = 200 kJ/kg and s = 1 kJ/(kg·K) for the saturated liquid
+ * at 0 °C (used by the ammonia, R-134a and carbon dioxide equations' papers).
+ */
+export const IIR_REFERENCE_STATE: ReferenceStateSpec = {
+	kind: 'saturated-liquid-at-T',
+	label: 'IIR: h = 200 kJ/kg, s = 1 kJ/(kg·K) for saturated liquid at 0 °C',
+	T: 273.15,
+	h: 200e3,
+	s: 1e3
+};
+
 export interface FluidData {
 	id: string;
 	name: string;
