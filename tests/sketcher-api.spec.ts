@@ -126,4 +126,26 @@ test.describe('sheet API', () => {
 		expect((await (await viewer.get(`${url}/${sheet.id}`)).json()).sheet.version).toBe(1);
 		expect((await (await viewer.get(`${url}?limit=200`)).json()).total).toBe(before + 1);
 	});
+
+	test('delete: checkers and viewers cannot, a designer deletes a scratch sheet, an approved revision keeps its sheet', async () => {
+		const made = await designer.post(url, { data: { title: 'Scratch sheet to delete', doc: bareSpec } });
+		expect(made.status()).toBe(201);
+		const id = ((await made.json()) as { sheet: { id: string } }).sheet.id;
+		for (const ctx of [checker, viewer]) {
+			const r = await ctx.delete(`${url}/${id}`);
+			expect(r.status()).toBe(403);
+			expect(((await r.json()) as { error: { code: string } }).error.code).toBe('forbidden');
+		}
+		expect((await designer.delete(`${url}/${id}`)).status()).toBe(204);
+		expect((await viewer.get(`${url}/${id}`)).status()).toBe(404);
+		expect((await designer.delete(`${url}/${id}`)).status()).toBe(404);
+		// the seeded K-101 holds an approved revision: kept, even for the owner
+		const k101 = ((await (await viewer.get(`${url}?q=K-101`)).json()) as { sheets: Array<{ id: string }> }).sheets[0];
+		const kept = await owner.delete(`${url}/${k101.id}`);
+		expect(kept.status()).toBe(409);
+		const e = ((await kept.json()) as { error: { code: string; message: string } }).error;
+		expect(e.code).toBe('approved-record');
+		expect(e.message).toMatch(/approved/);
+		expect((await viewer.get(`${url}/${k101.id}`)).status()).toBe(200);
+	});
 });

@@ -286,6 +286,32 @@ test.describe('the sketcher', () => {
 		await expect(page.locator('[data-chart="P-v"] .swc-limit-label')).toHaveCount(3);
 	});
 
+	test('a designer deletes a sheet they started from its Setup tab; an approved sheet says why it stays', async ({ page }) => {
+		await signInPage(page, DEMO.designer);
+		const title = `Scratch R-310 ${Date.now().toString(36)}`;
+		const made = await page.request.post(`/api/v1/teams/${TEAM}/sheets`, { data: { example: 'receiver-r310-hot-day', title } });
+		expect(made.status(), await made.text()).toBe(201);
+		const id = ((await made.json()) as { sheet: { id: string } }).sheet.id;
+		await page.goto(`/t/${TEAM}/sheets/${id}`);
+		await page.getByRole('tab', { name: /Setup/ }).click();
+		const box = page.getByTestId('sheet-delete');
+		await box.getByTestId('sheet-delete-start').click();
+		await expect(box).toContainText('This cannot be undone');
+		await box.getByRole('button', { name: 'Keep it' }).click();
+		await expect(box.getByTestId('sheet-delete-confirm')).toHaveCount(0);
+		await box.getByTestId('sheet-delete-start').click();
+		await box.getByTestId('sheet-delete-confirm').click();
+		await expect(page).toHaveURL(new RegExp(`/t/${TEAM}\\?deleted=`));
+		await expect(page.locator('[data-notice="ok"]')).toContainText(`Sheet “${title}” was deleted.`);
+		expect((await page.request.get(`/t/${TEAM}/sheets/${id}`)).status()).toBe(404);
+		// the seeded K-101 holds an approved revision: the designer reads why it cannot be deleted
+		const k101 = ((await (await page.request.get(`/api/v1/teams/${TEAM}/sheets?q=K-101`)).json()) as { sheets: Array<{ id: string }> }).sheets[0];
+		await page.goto(`/t/${TEAM}/sheets/${k101.id}`);
+		await page.getByRole('tab', { name: /Setup/ }).click();
+		await expect(page.getByTestId('sheet-delete-reason')).toContainText('approved');
+		await expect(page.getByTestId('sheet-delete-start')).toHaveCount(0);
+	});
+
 	test('two windows: the second save is refused with 409, said on screen, and offered compare, load or keep', async ({ browser }) => {
 		const ctx = await browser.newContext();
 		const a = await ctx.newPage();

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import type { DB, SheetRow } from './db/schema';
-import { getSheet, insertSheet, listSheets, renameSheet, writeDraft, countSheets, type SheetListItem } from './db/sheets';
+import { getSheet, insertSheet, listSheets, renameSheet, writeDraft, countSheets, deleteSheetRow, type SheetListItem } from './db/sheets';
+import { listRevisionRows } from './db/revisions';
+import { logTeamEvent } from './db/team-events';
 import { AppError } from './errors';
 import { newId } from './secrets';
 import type { TeamAccess } from './guard';
@@ -177,6 +179,50 @@ export async function renameTeamSheet(db: DB, access: TeamAccess, id: string, ti
 	return db.transaction().execute(async (trx) => {
 		if (!(await renameSheet(trx, access.team.id, id, t.data, access.actor, now))) notFound();
 		return meta((await getSheet(trx, access.team.id, id))!);
+	});
+}
+
+/**
+ * Who may delete a sheet, and why not. An approved revision is a design record and is kept: a
+ * sheet holding one is never deleted (it can be superseded by a new revision). Otherwise owners may
+ * delete any sheet, and designers a sheet they started that has no revisions yet (a scratch sheet).
+ */
+export function deletion(access: TeamAccess, sheet: { created_by: string | null }, revisions: ReadonlyArray<{ number: number; status: string }>): { allowed: true } | { allowed: false; status: 403 | 409; code: string; message: string } {
+	if (!access.can('sheet:edit')) return { allowed: false, status: 403, code: 'forbidden', message: `Your role in this team is ${access.role}, which cannot delete sheets.` };
+	const approved = revisions.filter((r) => r.status === 'approved').map((r) => r.number);
+	if (approved.length)
+		return {
+			allowed: false,
+			status: 409,
+			code: 'approved-record',
+			message: `Rev ${approved.join(', Rev ')} of this sheet ${approved.length === 1 ? 'is' : 'are'} approved. Approved revisions are kept as the design record, so the sheet cannot be deleted; save a new revision to supersede it.`
+		};
+	if (access.role === 'owner') return { allowed: true };
+	if (sheet.created_by !== access.actor.id) return { allowed: false, status: 403, code: 'forbidden', message: 'Designers delete only sheets they started; ask an owner to delete this one.' };
+	if (revisions.length) return { allowed: false, status: 403, code: 'forbidden', message: 'This sheet has revisions, so only an owner can delete it.' };
+	return { allowed: true };
+}
+
+/** Whether this caller may delete the sheet now (for the page: the DELETE route checks again). */
+export async function sheetDeletion(db: DB, access: TeamAccess, id: string): Promise<{ allowed: boolean; message: string | null }> {
+	const row = SHEET_ID.test(id) ? await getSheet(db, access.team.id, id) : undefined;
+	if (!row) notFound();
+	const v = deletion(access, row, await listRevisionRows(db, row.id));
+	return v.allowed ? { allowed: true, message: null } : { allowed: false, message: v.message };
+}
+
+/** Deletes a sheet with its draft, revisions, notes and traces (rules in `deletion`), logged in the team's activity. */
+export async function deleteTeamSheet(db: DB, access: TeamAccess, id: string): Promise<void> {
+	requireEdit(access);
+	if (!SHEET_ID.test(id)) notFound();
+	await db.transaction().execute(async (trx) => {
+		const row = await getSheet(trx, access.team.id, id);
+		if (!row) notFound();
+		const revisions = await listRevisionRows(trx, row.id);
+		const verdict = deletion(access, row, revisions);
+		if (!verdict.allowed) throw new AppError(verdict.status, verdict.code, verdict.message);
+		if (!(await deleteSheetRow(trx, access.team.id, id))) notFound();
+		await logTeamEvent(trx, { teamId: access.team.id, actorId: access.actor.id, actorLabel: access.actor.label, kind: 'sheet.deleted', detail: { number: row.number, title: row.title, revisions: revisions.length } });
 	});
 }
 

@@ -235,3 +235,9 @@ export async function renameSheet(db: DB, teamId: string, id: string, title: str
 		.executeTakeFirst();
 	return Number(r.numUpdatedRows) === 1;
 }
+
+/** Deletes a sheet; its revisions, events, notes and traces go with it (foreign keys cascade). */
+export async function deleteSheetRow(db: DB, teamId: string, id: string): Promise<boolean> {
+	const r = await db.deleteFrom('sheets').where('team_id', '=', teamId).where('id', '=', id).executeTakeFirst();
+	return Number(r.numDeletedRows) > 0;
+}

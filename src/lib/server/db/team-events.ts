@@ -11,7 +11,8 @@ export type TeamEventKind =
 	| 'member.removed'
 	| 'member.left'
 	| 'token.created'
-	| 'token.revoked';
+	| 'token.revoked'
+	| 'sheet.deleted';
 
 export async function logTeamEvent(
 	db: DB,

@@ -26,6 +26,8 @@ export function describeEvent(e: { actor_label: string; kind: string; detail: Re
 			return `${who} created the ${role(d.role)} token “${d.name}”`;
 		case 'token.revoked':
 			return `${who} revoked the token “${d.name}”`;
+		case 'sheet.deleted':
+			return `${who} deleted sheet ${d.number} “${d.title}”${d.revisions ? ` with ${d.revisions} revision${d.revisions === 1 ? '' : 's'}` : ''}`;
 		default:
 			return `${who}: ${e.kind}`;
 	}

@@ -5,7 +5,7 @@ import { getDb } from '$lib/server/db';
 import { requireTeam } from '$lib/server/guard';
 import { isAppError } from '$lib/server/errors';
 import { parseForm, readFormData, runAction } from '$lib/server/forms';
-import { readSheet, renameTeamSheet, titleSchema } from '$lib/server/sheets';
+import { readSheet, renameTeamSheet, sheetDeletion, titleSchema } from '$lib/server/sheets';
 import { sheetReviewData } from '$lib/server/review-pages';
 import { computePath, fixState, getFluid, listFluids, saturationCurve, stateExtras, ThermoError, type PathResult, type SaturationCurve } from '$lib/thermo';
 import { engineSpec, labelIds, startOnlyResult } from '$lib/sheets/doc';
@@ -60,7 +60,8 @@ export const load: PageServerLoad = async (event) => {
 		saturation: dome(doc.spec.fluid),
 		fluids: listFluids(),
 		canEdit: access.can('sheet:edit'),
-		review: await sheetReviewData(getDb(), access, event.params.sheet)
+		review: await sheetReviewData(getDb(), access, event.params.sheet),
+		deletion: await sheetDeletion(getDb(), access, event.params.sheet)
 	};
 };
 
