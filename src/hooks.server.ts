@@ -87,7 +87,8 @@ function tooLargeMessage(): string {
 }
 
 /** Cross-site form posts are refused before anything else runs (see src/lib/server/csrf.ts). */
-const crossSiteForms: Handle = async ({ event, resolve }) => crossSiteFormRefusal(event.request, event.url) ?? resolve(event);
+const crossSiteForms: Handle = async ({ event, resolve }) =>
+	crossSiteFormRefusal(event.request, event.url, event.cookies.get(sessionCookieName(event.url)) !== undefined) ?? resolve(event);
 
 const securityHeaders: Handle = async ({ event, resolve }) => {
 	const response = await resolve(event);

@@ -148,6 +148,9 @@ test('measured traces over the API: upload as CSV or form, refusals with line nu
 	const browserish = await signedInRequest(DEMO.designer);
 	const forged = await errorOf(await browserish.post(T, { headers: { origin: 'http://forged.example' }, multipart: { file: { name: 'x.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) } } }), 403, 'cross-site-form');
 	expect(forged.message).toMatch(/Authorization: Bearer/);
+	// with neither a session nor a token there is nothing to forge: the answer is the 401 of any unauthenticated call
+	const nobody = await playwrightRequest.newContext({ baseURL: BASE });
+	await errorOf(await nobody.post(T, { multipart: { file: { name: 'x.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) } } }), 401, 'unauthenticated');
 	const bad = await errorOf(await tokens.designer.post(T, { headers: { origin: BASE }, multipart: { file: { name: 'bad.csv', mimeType: 'text/csv', buffer: Buffer.from('time [s],P [kPa g],T [°C]\n0,100,20\n5,abc,21\n10,110;22\n') } } }), 422, 'rejected-lines');
 	expect((bad.rejected as Array<{ line: number }>).map((r) => r.line)).toEqual([3, 4]);
 	expect(bad.rejectedCount).toBe(2);

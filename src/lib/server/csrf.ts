@@ -23,11 +23,16 @@ function formContentType(request: Request): boolean {
 	return FORM_TYPES.has(type);
 }
 
-/** The refusal for a cross-site form submission, or null when the request may go on. */
-export function crossSiteFormRefusal(request: Request, url: URL): Response | null {
+/**
+ * The refusal for a cross-site form submission, or null when the request may go on. `hasSession`:
+ * the request carries a session cookie. On the API a request without one has nothing to forge (it
+ * goes on, and is answered 401 where sign-in is needed); pages stay strict (sign-in forms too).
+ */
+export function crossSiteFormRefusal(request: Request, url: URL, hasSession: boolean): Response | null {
 	if (!UNSAFE.has(request.method) || !formContentType(request)) return null;
 	if (request.headers.get('origin') === url.origin) return null;
 	const api = url.pathname.startsWith('/api/');
+	if (api && !hasSession) return null;
 	if (api && /^Bearer\s+\S+\s*$/i.test(request.headers.get('authorization') ?? '')) return null;
 	const message = `Cross-site ${request.method} form submissions are refused. Submit the form from ${url.origin}, or from a script send "Authorization: Bearer <team API token>".`;
 	if (api) return jsonError(403, 'cross-site-form', message);
