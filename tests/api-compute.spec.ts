@@ -1,6 +1,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { expect, request as playwrightRequest, test, type APIRequestContext } from '@playwright/test';
+import { DEMO, signedInRequest } from './helpers';
 
 /*
  * The compute API over real HTTP against the built app (the Playwright config starts it).
@@ -158,9 +159,15 @@ test.describe('compute API: every bad input answers 4xx with a useful message', 
 		expect(over.status()).toBe(413);
 	});
 
-	test('form content types are refused before the route (SvelteKit’s cross-site check)', async ({ request }) => {
+	test('form content types: without a session the route says to send JSON; with a session from another site the cross-site check refuses', async ({ request }) => {
 		const res = await request.post('/api/v1/legs', { headers: { 'content-type': 'text/plain' }, data: Buffer.from(JSON.stringify(LEG)) });
-		expect(res.status()).toBe(403);
+		expect(res.status()).toBe(415);
+		expect(((await res.json()) as { error: { code: string } }).error.code).toBe('unsupported-media-type');
+		const session = await signedInRequest(DEMO.viewer);
+		const forged = await session.post('/api/v1/legs', { headers: { 'content-type': 'text/plain', origin: 'http://forged.example' }, data: Buffer.from(JSON.stringify(LEG)) });
+		expect(forged.status()).toBe(403);
+		expect(((await forged.json()) as { error: { code: string } }).error.code).toBe('cross-site-form');
+		await session.dispose();
 	});
 });
 
