@@ -21,7 +21,7 @@ export const ammonia: FluidData = {
 			'R. Tillner-Roth, F. Harms-Watzenberg, H. D. Baehr, "Eine neue Fundamentalgleichung für Ammoniak", DKV-Tagungsbericht 20 (1993) 167–181',
 		provenance:
 			'Coefficients transcribed from python3-iapws 1.5.2 (Debian, iapws/ammonia.py, class NH3) and compared term by term by ' +
-			'script with two independent transcriptions: NIST’s teqp (usnistgov/teqp, include/teqp/models/ammonia_water.hpp) and ' +
+			'script with two independent copies of the coefficients: NIST’s teqp (usnistgov/teqp, include/teqp/models/ammonia_water.hpp) and ' +
 			'ASCEND (ascend4/ascend4, models/johnpye/fprops/fluids/ammonia.c, stated as taken from REFPROP 7.0): identical, including the sign of n = −0.3497111e-1, which REFPROP ' +
 			'notes as misprinted in the original paper. Checked in ammonia-iapws.test.ts against python3-iapws states ' +
 			'(tests/reference/iapws-ammonia.json) and in other-fluids.test.ts against the tables of Baehr & Tillner-Roth (1994), ' +

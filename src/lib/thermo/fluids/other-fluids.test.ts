@@ -229,7 +229,7 @@ describe('R-134a, Tillner-Roth & Baehr (1994)', () => {
 			expect(Math.abs(fl.ancP.value(T) / ps(T) - 1), `pSat form at ${T}`).toBeLessThan(1e-13);
 			expect(Math.abs(fl.ancRhoL.value(T) / rl(T) - 1), `rhoLiquid form at ${T}`).toBeLessThan(1e-13);
 			expect(Math.abs(fl.ancRhoV.value(T) / rv(T) - 1), `rhoVapor form at ${T}`).toBeLessThan(1e-13);
-			// and they follow the equation where they were fitted (the paper's data range), a transcription check
+			// and they follow the equation where they were fitted (the paper's data range): a check that the coefficients were copied right
 			const { liq, vap } = sat(id, T);
 			if (T >= 240) expect(Math.abs(ps(T) / liq.P - 1), `p_s at ${T}`).toBeLessThan(3e-4);
 			if (T <= 370) expect(Math.abs(rl(T) / liq.rho - 1), `ρ′ at ${T}`).toBeLessThan(4e-4);
@@ -260,7 +260,7 @@ describe('ammonia, Tillner-Roth, Harms-Watzenberg & Baehr (1993)', () => {
 		// Tillner-Roth et al. (1993): Tc = 405.40 K, ρc = 225 kg/m³, pc = 11.333 MPa. The equation's own
 		// pressure there is 11.339 MPa (python3-iapws 1.5.2 gives the same, see ammonia-iapws.test.ts),
 		// 0.06 % above the published pc; its saturation values 0.25 K below Tc still match the
-		// published table (next test), so the difference belongs to the equation, not to the transcription.
+		// published table (next test), so the difference belongs to the equation, not to our copy of its coefficients.
 		const P = fixState(id, { T: 405.4, rho: 225 }).P;
 		expect(Math.abs(P / 11.333e6 - 1)).toBeLessThan(1e-3);
 	});

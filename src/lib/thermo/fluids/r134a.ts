@@ -22,7 +22,7 @@ export const r134a: FluidData = {
 			'R. Tillner-Roth, H. D. Baehr, "An International Standard Formulation for the Thermodynamic Properties of 1,1,1,2-Tetrafluoroethane (HFC-134a) for Temperatures from 170 K to 455 K and Pressures up to 70 MPa", J. Phys. Chem. Ref. Data 23 (1994) 657–729, doi:10.1063/1.555958',
 		provenance:
 			'Coefficients transcribed from the public pychemqt repository (jjgomera/pychemqt, lib/mEoS/R134a.py) and compared term ' +
-			'by term by script with two independent transcriptions, CoolProp (CoolProp/CoolProp, dev/fluids/R134a.json) and Cantera ' +
+			'by term by script with two independent copies of the coefficients, CoolProp (CoolProp/CoolProp, dev/fluids/R134a.json) and Cantera ' +
 			'(Cantera/cantera, src/tpx/HFC134a.cpp): identical. Ancillary equations (starting guesses only): the paper’s vapor ' +
 			'pressure (4.05629 MPa at 374.18 K), saturated liquid density and saturated vapor density (516.86 kg/m³), all reduced ' +
 			'with 374.18 K, as transcribed by public implementations citing the paper: a C library by M. Engelpracht ' +
