@@ -26,6 +26,8 @@ export interface TokenPrincipal {
 	role: Role;
 	teamId: string;
 	createdBy: string | null;
+	/** the creator's name, who signs what the token does (null when the account is gone) */
+	createdByName: string | null;
 }
 
 /** The roles a member may give a new token. */
@@ -89,5 +91,5 @@ export async function authenticateToken(db: DB, bearer: string): Promise<{ princ
 	if (!team) return null;
 	const now = Date.now();
 	if (row.last_used_at === null || now - row.last_used_at > LAST_USED_RESOLUTION_MS) await touchApiToken(db, row.id, now);
-	return { principal: { id: row.id, name: row.name, role: row.role, teamId: row.team_id, createdBy: row.created_by }, team };
+	return { principal: { id: row.id, name: row.name, role: row.role, teamId: row.team_id, createdBy: row.created_by, createdByName: row.created_by_name }, team };
 }

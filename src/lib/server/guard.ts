@@ -4,7 +4,6 @@ import type { DB, Team } from './db/schema';
 import { getDb } from './db';
 import { getTeamBySlug } from './db/teams';
 import { getMembership, ownsAnyTeam } from './db/memberships';
-import { getUserById } from './db/users';
 import type { SessionUser } from './auth';
 import type { TokenPrincipal } from './api-tokens';
 
@@ -103,8 +102,8 @@ export async function resolveTeamAccess(db: DB, principal: Principal, teamSlug: 
 		role = principal.token.role;
 		// the person behind the token signs what it does ("Tobias Lindqvist (token “ci-export”)")
 		const token = `token “${principal.token.name}”`;
-		const creator = principal.token.createdBy ? await getUserById(db, principal.token.createdBy) : undefined;
-		actor = { id: principal.token.createdBy, label: creator ? `${creator.name} (${token})` : token };
+		const creator = principal.token.createdByName;
+		actor = { id: principal.token.createdBy, label: creator ? `${creator} (${token})` : token };
 	} else {
 		const m = await getMembership(db, team.id, principal.user.id);
 		if (!m) return null;

@@ -24,12 +24,15 @@ export async function insertApiToken(
 }
 
 /** A live (not revoked) token by its hash. */
-export async function getLiveApiTokenByHash(db: DB, tokenHash: string): Promise<ApiToken | undefined> {
+/** A live token by its hash, with its creator's name (null when the account is gone). */
+export async function getLiveApiTokenByHash(db: DB, tokenHash: string): Promise<(ApiToken & { created_by_name: string | null }) | undefined> {
 	return db
 		.selectFrom('api_tokens')
-		.selectAll()
-		.where('token_hash', '=', tokenHash)
-		.where('revoked_at', 'is', null)
+		.leftJoin('users', 'users.id', 'api_tokens.created_by')
+		.selectAll('api_tokens')
+		.select('users.name as created_by_name')
+		.where('api_tokens.token_hash', '=', tokenHash)
+		.where('api_tokens.revoked_at', 'is', null)
 		.executeTakeFirst();
 }
 
