@@ -1,5 +1,5 @@
 import type { SheetDoc } from '../sheets/types';
-import type { Inputs, PathLeg, PathResult, PathState, TargetName } from '../thermo/types';
+import type { PathLeg, PathResult, PathState, TargetName } from '../thermo/types';
 import { PROPERTY_QUANTITY, type Quantity } from '../units';
 
 /**
@@ -83,8 +83,6 @@ function change(key: string, label: string, quantity: Quantity | null, before: n
 	return { key, label, quantity, before: b, after: a, delta: numeric ? a - b : null, changed };
 }
 
-const INPUT_QUANTITY: Record<keyof Inputs, Quantity> = PROPERTY_QUANTITY;
-
 const INPUT_NAMES = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'] as const;
 
 const LIMITS = [
@@ -104,7 +102,7 @@ function specChanges(a: SheetDoc, b: SheetDoc): ValueChange[] {
 	out.push(change('system.mass', 'mass', 'mass', sys(a, 'mass'), sys(b, 'mass')));
 	out.push(change('system.volume', 'volume', 'volume', sys(a, 'volume'), sys(b, 'volume')));
 	out.push(change('system.massFlow', 'mass flow', 'massFlow', sys(a, 'massFlow'), sys(b, 'massFlow')));
-	for (const n of INPUT_NAMES) out.push(change(`start.${n}`, `start ${n}`, INPUT_QUANTITY[n], sa.start[n], sb.start[n]));
+	for (const n of INPUT_NAMES) out.push(change(`start.${n}`, `start ${n}`, PROPERTY_QUANTITY[n], sa.start[n], sb.start[n]));
 	for (const [k, label, q] of LIMITS) out.push(change(`limits.${k}`, label, q, sa.limits?.[k], sb.limits?.[k]));
 	out.push(change('atmosphericPressure', 'atmospheric pressure', 'pressure', sa.atmosphericPressure ?? a.units.atmosphere, sb.atmosphericPressure ?? b.units.atmosphere));
 	// leave out fields absent on both sides
@@ -129,8 +127,6 @@ function targetOf(t: Partial<Record<TargetName, number>>): { name: string | null
 	const name = (Object.keys(t) as TargetName[]).find((k) => t[k] !== undefined) ?? null;
 	return { name, value: name ? (t[name] as number) : null };
 }
-
-const TARGET_QUANTITY: Record<TargetName, Quantity> = INPUT_QUANTITY;
 
 /** Leg ids in display order: the later side's order, removed legs placed after their predecessor. */
 export function mergedLegOrder(before: readonly string[], after: readonly string[]): string[] {
@@ -189,11 +185,11 @@ export function diffRevisions(before: DiffSide, after: DiffSide): RevisionDiff {
 		const tb = sb ? targetOf(sb.target) : { name: null, value: null };
 		const spec = [change('process', 'process', null, sa?.process, sb?.process)];
 		const sameTarget = ta.name === tb.name;
-		if (sameTarget && ta.name) spec.push(change(`target.${ta.name}`, `target ${ta.name}`, TARGET_QUANTITY[ta.name as TargetName], ta.value, tb.value));
+		if (sameTarget && ta.name) spec.push(change(`target.${ta.name}`, `target ${ta.name}`, PROPERTY_QUANTITY[ta.name as TargetName], ta.value, tb.value));
 		else {
 			spec.push(change('target', 'target property', null, ta.name, tb.name));
-			if (ta.name) spec.push(change(`target.${ta.name}`, `target ${ta.name}`, TARGET_QUANTITY[ta.name as TargetName], ta.value, null));
-			if (tb.name) spec.push(change(`target.${tb.name}`, `target ${tb.name}`, TARGET_QUANTITY[tb.name as TargetName], null, tb.value));
+			if (ta.name) spec.push(change(`target.${ta.name}`, `target ${ta.name}`, PROPERTY_QUANTITY[ta.name as TargetName], ta.value, null));
+			if (tb.name) spec.push(change(`target.${tb.name}`, `target ${tb.name}`, PROPERTY_QUANTITY[tb.name as TargetName], null, tb.value));
 		}
 		if (sa?.process === 'polytropic' || sb?.process === 'polytropic') spec.push(change('n', 'n', null, sa?.n ?? null, sb?.n ?? null));
 		const la = legAt(before.result, id);

@@ -56,11 +56,9 @@ export async function apiCall<T>(f: Fetch, url: string, init: RequestInit = {}):
 	return body as T;
 }
 
-const call = apiCall;
-
 /** POST /api/v1/paths: the whole path for a spec. */
 export async function postPath(spec: PathSpec, f: Fetch = fetch): Promise<PathResult> {
-	const r = await call<{ path: PathResult }>(f, '/api/v1/paths', { method: 'POST', body: JSON.stringify(spec) });
+	const r = await apiCall<{ path: PathResult }>(f, '/api/v1/paths', { method: 'POST', body: JSON.stringify(spec) });
 	return r.path;
 }
 
@@ -68,12 +66,12 @@ export async function postPath(spec: PathSpec, f: Fetch = fetch): Promise<PathRe
 export async function getIsolines(fluid: string, kind: IsolineKind, values: number[], f: Fetch = fetch): Promise<Isoline[]> {
 	if (!values.length) return [];
 	const q = values.map((v) => Number(v.toPrecision(12))).join(',');
-	const r = await call<{ lines: Isoline[] }>(f, `/api/v1/fluids/${encodeURIComponent(fluid)}/isolines?kind=${kind}&values=${q}&points=80`);
+	const r = await apiCall<{ lines: Isoline[] }>(f, `/api/v1/fluids/${encodeURIComponent(fluid)}/isolines?kind=${kind}&values=${q}&points=80`);
 	return r.lines;
 }
 
 export async function getSaturation(fluid: string, points = 100, f: Fetch = fetch): Promise<SaturationCurve> {
-	return call<SaturationCurve>(f, `/api/v1/fluids/${encodeURIComponent(fluid)}/saturation?points=${points}`);
+	return apiCall<SaturationCurve>(f, `/api/v1/fluids/${encodeURIComponent(fluid)}/saturation?points=${points}`);
 }
 
 export interface SavedDraft {
@@ -84,7 +82,7 @@ export interface SavedDraft {
 
 /** PUT …/sheets/{id}/draft. A 409 is an ApiError with `body.current` naming who saved. */
 export async function putDraft(team: string, sheet: string, version: number, doc: SheetDoc, f: Fetch = fetch): Promise<SavedDraft> {
-	return call<SavedDraft>(f, `/api/v1/teams/${encodeURIComponent(team)}/sheets/${encodeURIComponent(sheet)}/draft`, { method: 'PUT', body: JSON.stringify({ version, doc }) });
+	return apiCall<SavedDraft>(f, `/api/v1/teams/${encodeURIComponent(team)}/sheets/${encodeURIComponent(sheet)}/draft`, { method: 'PUT', body: JSON.stringify({ version, doc }) });
 }
 
 export interface ServerSheet {
@@ -97,6 +95,6 @@ export interface ServerSheet {
 }
 
 export async function getSheetDraft(team: string, sheet: string, f: Fetch = fetch): Promise<ServerSheet> {
-	const r = await call<{ sheet: ServerSheet }>(f, `/api/v1/teams/${encodeURIComponent(team)}/sheets/${encodeURIComponent(sheet)}`);
+	const r = await apiCall<{ sheet: ServerSheet }>(f, `/api/v1/teams/${encodeURIComponent(team)}/sheets/${encodeURIComponent(sheet)}`);
 	return r.sheet;
 }

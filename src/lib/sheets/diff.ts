@@ -4,7 +4,7 @@
  * units and title block. Values are formatted in the display units of `prefs`. Used when an
  * autosave is refused because someone else saved in between (and by revision compares later).
  */
-import { formatQuantity, PROPERTY_QUANTITY, type Quantity, type UnitPrefs } from '../units';
+import { formatQuantity, PROPERTY_QUANTITY, type UnitPrefs } from '../units';
 import type { Inputs, TargetName } from '../thermo/types';
 import { legLabel, TITLE_BLOCK_LABELS } from './doc';
 import type { SheetDoc, SheetLegSpec } from './types';
@@ -19,12 +19,9 @@ export interface DiffRow {
 	b: string;
 }
 
-const QUANTITY: Record<TargetName, Quantity | null> = PROPERTY_QUANTITY;
-
 function prop(name: TargetName, si: number | undefined, prefs: UnitPrefs): string {
 	if (si === undefined) return '';
-	const q = QUANTITY[name];
-	return q ? `${name} = ${formatQuantity(si, q, prefs).full}` : `${name} = ${si}`;
+	return `${name} = ${formatQuantity(si, PROPERTY_QUANTITY[name], prefs).full}`;
 }
 
 function inputsText(i: Inputs | Partial<Record<TargetName, number>>, prefs: UnitPrefs): string {

@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { BARE_PRESSURE, PROPERTY_QUANTITY, lookupUnit, normaliseUnitText, unitById, unitsOf, type Quantity, type UnitDef } from '../units/catalogue';
+import { BARE_PRESSURE, PROPERTY_QUANTITY, lookupUnit, normaliseUnitText, unitById, unitsOf, type UnitDef } from '../units/catalogue';
 import { DEFAULT_ATMOSPHERE } from '../units/factors';
 import { formatNumber } from '../units/format';
 import type { RawTracePoint, RejectedLine, TraceColumn, TraceColumnKind, TraceRefusal, TraceRefusalCode } from './types';
@@ -38,8 +38,6 @@ export const TIME_UNITS: Readonly<Record<string, { id: string; seconds: number }
 	datetime: { id: 'iso', seconds: 1 },
 	timestamp: { id: 'iso', seconds: 1 }
 };
-
-const QUANTITY: Record<Exclude<TraceColumnKind, 'time'>, Quantity> = PROPERTY_QUANTITY;
 
 const COLUMN_NAME: Record<TraceColumnKind, string> = {
 	time: 'time',
@@ -195,7 +193,7 @@ export function parseTraceCsv(input: string | Uint8Array, options: TraceCsvOptio
 			columns.push({ kind, index: i, header: cell, unit: t.id, unitText: unit });
 			continue;
 		}
-		const quantity = QUANTITY[kind];
+		const quantity = PROPERTY_QUANTITY[kind];
 		if (kind === 'P' && normaliseUnitText(unit) in BARE_PRESSURE)
 			return refuse(
 				'pressure-reference',
