@@ -43,7 +43,7 @@ describe('readJson', () => {
 
 	it('refuses wrong type, too large, malformed and invalid bodies', async () => {
 		await expect(readJson(req('{"a":1}', 'text/plain'), schema)).rejects.toMatchObject({ status: 415 });
-		await expect(readJson(req(`{"a":1,"pad":"${'x'.repeat(2000)}"}`), schema, 1000)).rejects.toMatchObject({ status: 413 });
+		await expect(readJson(req(`{"a":1,"pad":"${'x'.repeat(2000)}"}`), schema, { maxBytes: 1000 })).rejects.toMatchObject({ status: 413 });
 		await expect(readJson(req('{"a":'), schema)).rejects.toMatchObject({ status: 400, code: 'invalid-json' });
 		await expect(readJson(req('{"a":"1"}'), schema)).rejects.toBeInstanceOf(z.ZodError);
 	});

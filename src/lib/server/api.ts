@@ -93,20 +93,24 @@ export function apiRoute<E extends RequestEvent>(handler: (event: E) => Promise<
 	};
 }
 
-/** Reads and validates a JSON body (415 if not JSON, 413 over `maxBytes`, 400 if malformed or invalid). */
-export async function readJson<S extends z.ZodType>(request: Request, schema: S, maxBytes = 256 * 1024): Promise<z.infer<S>> {
+/**
+ * Reads and validates a JSON body: 415 if not JSON, 413 over `maxBytes` (the message adds
+ * `sizeHint`, e.g. what fits), 400 if empty, malformed or invalid for `schema`.
+ */
+export async function readJson<S extends z.ZodType>(request: Request, schema: S, { maxBytes = 256 * 1024, sizeHint = '' }: { maxBytes?: number; sizeHint?: string } = {}): Promise<z.infer<S>> {
 	const type = request.headers.get('content-type') ?? '';
-	if (!/^application\/(?:[\w.+-]+\+)?json\b/i.test(type)) {
-		throw new AppError(415, 'unsupported-media-type', 'Send the body as JSON with "Content-Type: application/json".');
-	}
-	const tooLarge = () => new AppError(413, 'too-large', `The body is larger than ${Math.round(maxBytes / 1024)} kB; send a smaller request.`);
+	if (!/^application\/(?:[\w.+-]+\+)?json\b/i.test(type))
+		throw new AppError(415, 'unsupported-media-type', `Send the body as JSON with "Content-Type: application/json" (got ${type ? `"${type.slice(0, 60)}"` : 'no content type'}).`);
+	const limit = `The body is larger than ${Math.round(maxBytes / 1024)} kB`;
+	const tooLarge = () => new AppError(413, 'too-large', sizeHint ? `${limit}; ${sizeHint} Send a smaller request.` : `${limit}; send a smaller request.`);
 	const unreadable = () => new AppError(400, 'invalid-json', 'The request body could not be read completely.');
-	const text = Buffer.from(await readCapped(request, maxBytes, tooLarge, unreadable)).toString('utf8');
+	const text = (await readCapped(request, maxBytes, tooLarge, unreadable)).toString('utf8');
+	if (text.trim() === '') throw new AppError(400, 'invalid-json', 'The body is empty; send a JSON object (see the API documentation for its fields).');
 	let value: unknown;
 	try {
 		value = JSON.parse(text);
-	} catch {
-		throw new AppError(400, 'invalid-json', 'The body is not valid JSON.');
+	} catch (e) {
+		throw new AppError(400, 'invalid-json', `The body is not valid JSON (${(e as Error).message.slice(0, 120)}). Numbers must be plain JSON numbers: no NaN, Infinity or units.`);
 	}
 	return schema.parse(value);
 }

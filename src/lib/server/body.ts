@@ -4,10 +4,10 @@
  * BODY_SIZE_LIMIT), since cancelling it would drop the connection before the 413 is sent. A
  * dropped upload throws `unreadable()`; the server's own body limit counts as too large.
  */
-export async function readCapped(request: Request, max: number, tooLarge: () => Error, unreadable: () => Error): Promise<Uint8Array> {
+export async function readCapped(request: Request, max: number, tooLarge: () => Error, unreadable: () => Error): Promise<Buffer> {
 	const declared = Number(request.headers.get('content-length'));
 	if (Number.isFinite(declared) && declared > max) throw tooLarge();
-	if (!request.body) return new Uint8Array();
+	if (!request.body) return Buffer.alloc(0);
 	const reader = request.body.getReader();
 	const chunks: Uint8Array[] = [];
 	let size = 0;

@@ -172,7 +172,7 @@ export async function deleteTrace(db: DB, access: TeamAccess, sheetId: string, t
 /** Room for the multipart framing and the small fields around the file. */
 const FRAMING = 16 * 1024;
 
-function readLimited(request: Request, max: number): Promise<Uint8Array> {
+function readLimited(request: Request, max: number): Promise<Buffer> {
 	return readCapped(
 		request,
 		max,

@@ -2,11 +2,10 @@ import { createHash, randomUUID } from 'node:crypto';
 import { json, type RequestEvent } from '@sveltejs/kit';
 import { ZodError, type z } from 'zod';
 import { ThermoError, type ThermoErrorCode } from '$lib/thermo';
-import { issueText, jsonError } from '$lib/server/api';
+import { issueText, jsonError, readJson } from '$lib/server/api';
 import { AppError } from '$lib/server/errors';
 import { createLimiter, retryAfterSeconds, type Limiter } from '$lib/server/rate-limit';
 import { clientIp } from '$lib/server/request';
-import { readCapped } from '$lib/server/body';
 
 /*
  * Glue between the compute routes (/api/v1/fluids, /states, /legs, /paths) and the engine.
@@ -100,21 +99,8 @@ function rateLimited(event: RequestEvent): Response | null {
 }
 
 /** Read a JSON body: application/json, at most MAX_BODY_BYTES, parsed and checked by `schema`. */
-export async function readBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
-	const type = request.headers.get('content-type') ?? '';
-	if (!/^application\/(?:[\w.+-]+\+)?json\b/i.test(type))
-		throw new AppError(415, 'unsupported-media-type', `Send the body as JSON with "Content-Type: application/json" (got ${type ? `"${type.slice(0, 60)}"` : 'no content type'}).`);
-	const tooLarge = () => new AppError(413, 'too-large', `The body is larger than ${MAX_BODY_BYTES / 1024} kB; a path of 50 legs fits easily in that. Send a smaller request.`);
-	const unreadable = () => new AppError(400, 'invalid-json', 'The request body could not be read completely.');
-	const text = Buffer.from(await readCapped(request, MAX_BODY_BYTES, tooLarge, unreadable)).toString('utf8');
-	if (text.trim() === '') throw new AppError(400, 'invalid-json', 'The body is empty; send a JSON object (see the API documentation for its fields).');
-	let value: unknown;
-	try {
-		value = JSON.parse(text);
-	} catch (e) {
-		throw new AppError(400, 'invalid-json', `The body is not valid JSON (${(e as Error).message.slice(0, 120)}). Numbers must be plain JSON numbers: no NaN, Infinity or units.`);
-	}
-	return schema.parse(value);
+export function readBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+	return readJson(request, schema, { maxBytes: MAX_BODY_BYTES, sizeHint: 'a path of 50 legs fits easily in that.' });
 }
 
 /** Check URL query parameters against `schema` (each parameter once). */
