@@ -203,23 +203,25 @@ export function deletion(access: TeamAccess, sheet: { created_by: string | null 
 	return { allowed: true };
 }
 
-/** Whether this caller may delete the sheet now (for the page: the DELETE route checks again). */
-export async function sheetDeletion(db: DB, access: TeamAccess, id: string): Promise<{ allowed: boolean; message: string | null }> {
+/** The sheet, its revisions and the deletion verdict for this caller (404 for no such sheet). */
+async function judgeDeletion(db: DB, access: TeamAccess, id: string) {
 	const row = SHEET_ID.test(id) ? await getSheet(db, access.team.id, id) : undefined;
 	if (!row) notFound();
-	const v = deletion(access, row, await listRevisionRows(db, row.id));
-	return v.allowed ? { allowed: true, message: null } : { allowed: false, message: v.message };
+	const revisions = await listRevisionRows(db, row.id);
+	return { row, revisions, verdict: deletion(access, row, revisions) };
+}
+
+/** Whether this caller may delete the sheet now (for the page: the DELETE route checks again). */
+export async function sheetDeletion(db: DB, access: TeamAccess, id: string): Promise<{ allowed: boolean; message: string | null }> {
+	const { verdict } = await judgeDeletion(db, access, id);
+	return verdict.allowed ? { allowed: true, message: null } : { allowed: false, message: verdict.message };
 }
 
 /** Deletes a sheet with its draft, revisions, notes and traces (rules in `deletion`), logged in the team's activity. */
 export async function deleteTeamSheet(db: DB, access: TeamAccess, id: string): Promise<void> {
 	requireEdit(access);
-	if (!SHEET_ID.test(id)) notFound();
 	await db.transaction().execute(async (trx) => {
-		const row = await getSheet(trx, access.team.id, id);
-		if (!row) notFound();
-		const revisions = await listRevisionRows(trx, row.id);
-		const verdict = deletion(access, row, revisions);
+		const { row, revisions, verdict } = await judgeDeletion(trx, access, id);
 		if (!verdict.allowed) throw new AppError(verdict.status, verdict.code, verdict.message);
 		if (!(await deleteSheetRow(trx, access.team.id, id))) notFound();
 		await logTeamEvent(trx, { teamId: access.team.id, actorId: access.actor.id, actorLabel: access.actor.label, kind: 'sheet.deleted', detail: { number: row.number, title: row.title, revisions: revisions.length } });
