@@ -37,11 +37,8 @@ function at(s: State, prefs: UnitPrefs): string {
 	return `${formatQuantity(s.T, 'temperature', prefs).full} and ${formatQuantity(s.P, 'pressure', prefs).full}`;
 }
 
-/** (∂P/∂T)ᵥ in the sheet's pressure unit per temperature-difference unit, from the engine's MPa/K. */
-function rateText(message: string, prefs: UnitPrefs): string | null {
-	const m = /about ([\d.]+(?:e[+-]?\d+)?) MPa per kelvin/.exec(message);
-	if (!m) return null;
-	const paPerK = Number(m[1]) * 1e6;
+/** (∂P/∂T)ᵥ (Pa/K) in the sheet's pressure unit per temperature-difference unit, 3 significant figures. */
+export function rateText(paPerK: number, prefs: UnitPrefs): string {
 	const p = displayUnit('pressure', { ...prefs, pressureReference: 'absolute' }, { magnitude: paPerK });
 	const dT = unitById(prefs.system === 'us' ? 'dF' : 'dK');
 	const value = p.fromSI(paPerK, 0) / dT.fromSI(1, 0);
@@ -66,13 +63,17 @@ export function sheetWarnings(result: PathResult, legs: readonly SheetLegSpec[],
 				break;
 			case 'liquid-full': {
 				const where = w.at ? ` at ${at(w.at, prefs)}` : '';
-				const rate = rateText(w.message, prefs);
+				const rate = w.dPdT !== undefined && Number.isFinite(w.dPdT) && w.dPdT > 0 ? rateText(w.dPdT, prefs) : null;
+				const what =
+					w.onset === 'start'
+						? `${name(w.leg)} heats a closed system that is liquid-full from the leg’s start (compressed liquid${where}), at constant volume.`
+						: `${name(w.leg)} fills the closed system with liquid${where}. It crosses the saturated-liquid line toward the liquid side.`;
 				out.push({
 					key: `${w.code}:${w.leg}`,
 					code: w.code,
 					severity: 'caution',
 					title: 'Liquid-full',
-					text: `${name(w.leg)} fills the closed system with liquid${where}. ${LIQUID_FULL_CAUTION}${rate ? ` Here ${rate} at constant volume.` : ''}`,
+					text: `${what} ${LIQUID_FULL_CAUTION}${rate ? ` Here ${rate} at constant volume.` : ''}`,
 					target: legTarget(w.leg)
 				});
 				break;
