@@ -4,7 +4,7 @@
  * met, then notes on how to read the numbers. Built from the engine's PathWarnings and
  * LimitEvents; where the engine's text is in SI (it always is), it is rewritten in display units.
  */
-import { LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
+import { CAUTION_TITLE, LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
 import type { ChartSelection } from '../charts/types';
 import type { DesignLimitName, FluidInfo, LimitEvent, PathResult, PathWarning, State } from '../thermo/types';
 import { displayUnit, formatQuantity, unitById, type UnitPrefs } from '../units';
@@ -59,7 +59,7 @@ export function sheetWarnings(result: PathResult, legs: readonly SheetLegSpec[],
 		const i = legIndex(w.leg);
 		switch (w.code) {
 			case 'pressure-equipment-caution':
-				out.push({ key: w.code, code: w.code, severity: 'caution', title: 'Design exploration, not a design approval', text: PRESSURE_EQUIPMENT_CAUTION, target: null });
+				out.push({ key: w.code, code: w.code, severity: 'caution', title: CAUTION_TITLE, text: PRESSURE_EQUIPMENT_CAUTION, target: null });
 				break;
 			case 'liquid-full': {
 				const where = w.at ? ` at ${at(w.at, prefs)}` : '';
