@@ -36,6 +36,8 @@ export interface MemoTitle {
 	tag?: string;
 	documentNumber?: string;
 	site?: string;
+	/** sign-off steps taken over open review notes, in words (shown with the findings) */
+	overrides?: string[];
 	/** when the figure was made, Unix ms */
 	issued: number;
 }
@@ -322,7 +324,7 @@ export function composeMemoFigure(input: MemoInput): MemoFigure {
 	// the findings (ink), then the caution (caution colour), each paragraph wrapped
 	y += 16;
 	const notes: string[] = [];
-	for (const para of input.findings ?? []) {
+	for (const para of [...(title.overrides ?? []), ...(input.findings ?? [])]) {
 		const lines = wrapText(para, inner, L.note);
 		notes.push(`<text class="swm-finding">${lines.map((l, i) => `<tspan x="${M}" y="${y + i * L.noteLine}">${escapeXml(l)}</tspan>`).join('')}</text>`);
 		y += lines.length * L.noteLine + 4;
