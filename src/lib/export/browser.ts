@@ -126,3 +126,4 @@ export async function memoPng(figure: MemoFigure, pixelRatio: number): Promise<B
 }
 
 export { download, fileStem } from './names';
+export { MEMO_COLUMN_PIXEL_RATIO } from './memo';
