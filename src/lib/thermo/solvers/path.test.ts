@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fixture from '../../../../tests/reference/iapws-legs.json';
 import liquidFull from '../../../../tests/reference/iapws-liquid-full.json';
-import { PRESSURE_EQUIPMENT_CAUTION as APP_CAUTION } from '../../cautions.ts';
-import { PRESSURE_EQUIPMENT_CAUTION, ThermoError, computeLeg, computePath, fixState, saturationAtT, stateExtras, type PathSpec } from '../index.ts';
+import { LIQUID_FULL_CAUTION as APP_LIQUID_FULL, PRESSURE_EQUIPMENT_CAUTION as APP_CAUTION } from '../../cautions.ts';
+import { LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION, ThermoError, computeLeg, computePath, fixState, saturationAtT, stateExtras, type PathSpec } from '../index.ts';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
@@ -85,6 +85,7 @@ describe('computePath: the sealed vessel heated until liquid-full', () => {
 
 	it('carries the brief’s code-deferral caution, word for word the app’s', () => {
 		expect(PRESSURE_EQUIPMENT_CAUTION).toBe(APP_CAUTION);
+		expect(LIQUID_FULL_CAUTION).toBe(APP_LIQUID_FULL);
 		const c = r.warnings.find((w) => w.code === 'pressure-equipment-caution');
 		expect(c?.message).toBe(APP_CAUTION);
 		expect(c?.message).toMatch(/ASME BPVC Section VIII or EN 13445/);
@@ -111,6 +112,7 @@ describe('computePath: a vessel that starts liquid-full', () => {
 			expect(rel(w!.dPdT!, c.dPdT_v)).toBeLessThan(1e-7);
 			expect(w?.message).toMatch(/about [\d.]+ MPa per kelvin at constant volume/);
 			expect(w?.message).toMatch(/starts as compressed liquid/);
+			expect(w?.message).toContain(LIQUID_FULL_CAUTION);
 			// no design limits set: the liquid-full caution is there regardless
 			expect(r.limitEvents).toEqual([]);
 		});

@@ -55,6 +55,9 @@ export const PRESSURE_EQUIPMENT_CAUTION =
 	'ISO 4126 or API 520/521 for overpressure protection and relief devices) and local regulations, by a qualified ' +
 	'engineer. Statewright supplies states and warnings, never relief sizes.';
 
+/** Said with every liquid-full warning (same words as LIQUID_FULL_CAUTION in src/lib/cautions.ts). */
+export const LIQUID_FULL_CAUTION = 'Heating a liquid-full sealed vessel raises its pressure very fast.';
+
 const LIMIT_NAMES: DesignLimitName[] = ['designPressure', 'reliefSetPressure', 'designTemperature', 'minimumTemperature'];
 const LIMIT_LABEL: Record<DesignLimitName, string> = {
 	designPressure: 'design pressure',
@@ -260,8 +263,8 @@ export function computePath(spec: PathSpec): PathResult {
 						(onset === 'crossing'
 							? `Leg ${id} (${ls.process}) fills the closed system with liquid at T = ${kel(f.T)}, P = ${pa(f.P)}: it crosses the saturated-liquid line toward the liquid side. `
 							: `Leg ${id} (${ls.process}) heats a liquid-full closed system at constant volume: it starts as compressed liquid at T = ${kel(f.T)}, P = ${pa(f.P)}. `) +
-						`Heating a liquid-full sealed vessel raises its pressure very fast` +
-						(known ? ` — here about ${fmt(rate / 1e6)} MPa per kelvin at constant volume ((∂P/∂T)ᵥ of the liquid).` : '.')
+						LIQUID_FULL_CAUTION +
+						(known ? ` Here about ${fmt(rate / 1e6)} MPa per kelvin at constant volume ((∂P/∂T)ᵥ of the liquid).` : '')
 				});
 			} else if (ls.process === 'isochoric' && leg.end.phase === 'saturated-mixture' && leg.end.T > leg.start.T && leg.end.rho > fl.rhoc) {
 				warnings.push({
