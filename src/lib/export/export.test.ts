@@ -289,6 +289,13 @@ describe('memo figure', () => {
 		expect(columnPoints(MEMO_COLUMN.minFontPx)).toBeGreaterThanOrEqual(7);
 		expect(columnPoints(MEMO_COLUMN.minFontPx)).toBeCloseTo(7.15, 2);
 		expect(fig.svg).toContain('Liquid-full');
+		// the title block in a column: every field whole (wrapped, never cut), the empty ones left out
+		const words = fig.svg.replace(/<style>[\s\S]*?<\/style>/g, '').replace(/<[^>]+>/g, ' ').replace(/\s+/g, ' ');
+		expect(words).toContain('Rev 2 · Approved · BTW-CALC-0417 · issued 2026-01-08');
+		expect(words).toContain('Designed Tobias Lindqvist · 2026-01-05; checked Priya Ramanathan · 2026-01-06; approved Maren Okafor · 2026-01-07');
+		expect(words).toContain('V-204 fire case &lt;draft &amp; check&gt;');
+		expect(words).toContain('SI · T °C · P kPa g (atmosphere 101.33 kPa a) · v m³/kg'); // the no-break space reads as a space here
+		expect(words).not.toContain('…');
 		const opened = (fig.svg.match(/<(svg|g|text|tspan|title|style)\b/g) ?? []).length;
 		const closed = (fig.svg.match(/<\/(svg|g|text|tspan|title|style)>/g) ?? []).length;
 		expect(opened).toBe(closed);

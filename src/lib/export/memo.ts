@@ -236,20 +236,22 @@ function wideRows(title: MemoTitle): { h: number; cells: Cell[] }[] {
 	];
 }
 
-/** The title block for a column: at most two cells a row, so the text keeps its size. */
-function columnRows(title: MemoTitle): { h: number; cells: Cell[] }[] {
-	const h = 34;
+/**
+ * The title block for a column: one full-width field a row, its value wrapped rather than cut, so
+ * the text keeps its size; fields that say nothing are left out.
+ */
+function columnFields(title: MemoTitle): { label: string; value: string; mono?: boolean; big?: boolean }[] {
+	const join = (parts: Array<string | undefined>, sep = ' · ') => parts.filter((p) => p && p !== '—').join(sep);
+	const signed = (what: string, p: MemoPerson) => (p.name ? `${what} ${person(p)}` : '');
+	const equipment = join([title.tag, title.equipment, title.project, title.site]);
+	const signOff = join([signed('Designed', title.designer), signed('checked', title.checker), signed('approved', title.approver)], '; ');
 	return [
-		{ h: 38, cells: [{ label: title.team ? `Sheet · ${title.team}` : 'Sheet', value: title.sheet, w: 1, big: true }] },
-		{ h, cells: [{ label: 'Revision', value: title.revision, w: 0.6 }, { label: 'Status', value: title.status, w: 0.4 }] },
-		{ h, cells: [{ label: 'Document no.', value: title.documentNumber || '—', w: 0.6, mono: true }, { label: 'Tag', value: title.tag || '—', w: 0.4, mono: true }] },
-		{ h, cells: [{ label: 'Project', value: title.project || '—', w: 1 }] },
-		{ h, cells: [{ label: 'Equipment', value: title.equipment || '—', w: 0.6 }, { label: 'Site', value: title.site || '—', w: 0.4 }] },
-		{ h, cells: [{ label: 'Fluid', value: title.fluid, w: 0.45 }, { label: 'System', value: title.system, w: 0.55 }] },
-		{ h, cells: [{ label: 'Formulation', value: title.formulation, w: 1 }] },
-		{ h, cells: [{ label: 'Designed', value: person(title.designer), w: 1 }] },
-		{ h, cells: [{ label: 'Checked', value: person(title.checker), w: 1 }] },
-		{ h, cells: [{ label: 'Approved', value: person(title.approver), w: 0.65 }, { label: 'Issued', value: isoDate(title.issued), w: 0.35, mono: true }] }
+		{ label: title.team ? `Sheet · ${title.team}` : 'Sheet', value: title.sheet, big: true },
+		{ label: 'Revision', value: join([title.revision, title.status, title.documentNumber, `issued ${isoDate(title.issued)}`]) },
+		...(equipment ? [{ label: 'Equipment', value: equipment }] : []),
+		{ label: 'Fluid and system', value: `${title.fluid}, ${title.formulation}; ${title.system}` },
+		{ label: 'Sign-off', value: signOff || 'Not signed' },
+		{ label: 'Units', value: title.units, mono: true }
 	];
 }
 
@@ -285,38 +287,43 @@ export function composeMemoFigure(input: MemoInput): MemoFigure {
 		drawingsBottom = M + drawings.reduce((m, d) => Math.max(m, d.height), 0);
 	}
 	const inner = width - 2 * M;
-	const rows = column ? columnRows(title) : wideRows(title);
-
 	let y = drawingsBottom + 14;
 	const blockTop = y;
 	const block: string[] = [];
-	for (const row of rows) {
-		let cx = M;
-		for (const [i, c] of row.cells.entries()) {
-			const cw = i === row.cells.length - 1 ? M + inner - cx : Math.round(inner * c.w);
-			const size = c.big ? L.big : c.mono ? L.mono * 1.12 : L.value;
+	if (column) {
+		for (const f of columnFields(title)) {
+			const size = f.big ? L.big : f.mono ? L.mono * 1.12 : L.value;
+			const line = Math.max(L.noteLine, size * 1.2);
+			const lines = wrapText(f.value, inner - 12, size);
 			block.push(
-				`<g class="swm-cell" transform="translate(${cx},${y})">` +
-					(i > 0 ? `<line x1="0" y1="0" x2="0" y2="${row.h}" class="swm-rule"/>` : '') +
-					`<text x="6" y="${L.labelY}" class="swm-label">${escapeXml(fitText(c.label.toUpperCase(), cw - 12, L.label * 1.25))}</text>` +
-					`<text x="6" y="${row.h - L.valueInset}" class="swm-value${c.mono ? ' swm-mono' : ''}${c.big ? ' swm-big' : ''}">${escapeXml(fitText(c.value, cw - 12, size))}</text>` +
+				`<g class="swm-cell" transform="translate(${M},${y})">` +
+					`<text x="6" y="${L.labelY}" class="swm-label">${escapeXml(fitText(f.label.toUpperCase(), inner - 12, L.label * 1.25))}</text>` +
+					`<text class="swm-value${f.mono ? ' swm-mono' : ''}${f.big ? ' swm-big' : ''}">${lines.map((l, i) => `<tspan x="6" y="${(L.labelY + (i + 1) * line).toFixed(1)}">${escapeXml(l)}</tspan>`).join('')}</text>` +
 					`</g>`
 			);
-			cx += cw;
+			y += L.labelY + lines.length * line + 6;
+			block.push(`<line x1="${M}" y1="${y}" x2="${M + inner}" y2="${y}" class="swm-rule"/>`);
 		}
-		y += row.h;
-		block.push(`<line x1="${M}" y1="${y}" x2="${M + inner}" y2="${y}" class="swm-rule"/>`);
-	}
-	block.pop();
-	if (column) {
-		// the units, wrapped under the title block's frame
-		const unitLines = wrapText(title.units, inner - 12, L.mono * 1.12);
-		const top = y;
-		y += L.labelY;
-		block.push(`<line x1="${M}" y1="${top}" x2="${M + inner}" y2="${top}" class="swm-rule"/>`);
-		block.push(`<text x="${M + 6}" y="${y}" class="swm-label">UNITS</text>`);
-		block.push(`<text class="swm-value swm-mono">${unitLines.map((l, i) => `<tspan x="${M + 6}" y="${y + (i + 1) * L.noteLine}">${escapeXml(l)}</tspan>`).join('')}</text>`);
-		y += unitLines.length * L.noteLine + 7;
+		block.pop();
+	} else {
+		for (const row of wideRows(title)) {
+			let cx = M;
+			for (const [i, c] of row.cells.entries()) {
+				const cw = i === row.cells.length - 1 ? M + inner - cx : Math.round(inner * c.w);
+				const size = c.big ? L.big : L.value;
+				block.push(
+					`<g class="swm-cell" transform="translate(${cx},${y})">` +
+						(i > 0 ? `<line x1="0" y1="0" x2="0" y2="${row.h}" class="swm-rule"/>` : '') +
+						`<text x="8" y="${L.labelY}" class="swm-label">${escapeXml(c.label.toUpperCase())}</text>` +
+						`<text x="8" y="${row.h - L.valueInset}" class="swm-value${c.mono ? ' swm-mono' : ''}${c.big ? ' swm-big' : ''}">${escapeXml(fitText(c.value, cw - 16, c.mono ? size * 1.12 : size))}</text>` +
+						`</g>`
+				);
+				cx += cw;
+			}
+			y += row.h;
+			block.push(`<line x1="${M}" y1="${y}" x2="${M + inner}" y2="${y}" class="swm-rule"/>`);
+		}
+		block.pop();
 	}
 	const blockHeight = y - blockTop;
 	const frame = `<rect x="${M}" y="${blockTop}" width="${inner}" height="${blockHeight}" class="swm-frame"/>`;
