@@ -209,17 +209,23 @@ describe('sign-off workflow', () => {
 		await expectAppError(moveRevision(db(), checker, sheet, 1, 'check', { override: '   ' }), 400, 'invalid-override');
 		await expectAppError(moveRevision(db(), await w.access(w.people.designer), sheet, 1, 'withdraw', { override: 'x' }), 400, 'invalid-override');
 		expect((await readRevision(db(), checker, sheet, 1)).status).toBe('in-check'); // nothing moved
-		await moveRevision(db(), checker, sheet, 1, 'check', { override: ' Both notes are for Rev 2; the figures of Rev 1 stand. ', note: 'Checked.' });
+		await moveRevision(db(), checker, sheet, 1, 'check', { override: ' Both notes are for Rev 2; the figures of Rev 1 stand. ', note: 'Checked.' }, w.ctx);
 		// one note resolved: the approval still needs a reason, for the one left open
 		await setNoteState(db(), checker, sheet, n1.id, true);
 		const owner = await w.access(w.people.owner);
 		await expectAppError(moveRevision(db(), owner, sheet, 1, 'approve'), 409, 'open-notes');
-		await moveRevision(db(), owner, sheet, 1, 'approve', { override: 'Datasheet follows with Rev 2.' });
+		await moveRevision(db(), owner, sheet, 1, 'approve', { override: 'Datasheet follows with Rev 2.' }, w.ctx);
 		const { events } = await listRevisions(db(), await w.access(w.people.viewer), sheet);
 		const by = (k: string) => events.find((x) => x.kind === k)!;
 		expect(by('checked')).toMatchObject({ note: 'Checked.', override: { reason: 'Both notes are for Rev 2; the figures of Rev 1 stand.', openNotes: 2 } });
 		expect(by('approved').override).toEqual({ reason: 'Datasheet follows with Rev 2.', openNotes: 1 });
 		expect(by('submitted').override).toBeNull();
+		// the designer's mails say so too
+		const mails = await w.mail(w.people.designer);
+		const checked = mails.find((m) => m.subject === 'Rev 1 of V-204 fire case was checked')!;
+		expect(checked.text).toContain('over 2 open review notes');
+		expect(checked.text).toContain('Both notes are for Rev 2; the figures of Rev 1 stand.');
+		expect(mails.find((m) => m.subject === 'Rev 1 of V-204 fire case was approved')?.text).toContain('over 1 open review note,');
 	});
 
 	it('signs off without a word when every note is resolved (an override given then is not recorded)', async () => {

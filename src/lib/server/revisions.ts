@@ -338,6 +338,7 @@ export async function moveRevision(
 	const members = await listMembers(db, access.team.id);
 	const by = access.actor;
 
+	let overridden: { reason: string; openNotes: number } | null = null;
 	const updated = await db.transaction().execute(async (trx) => {
 		const row = await getRevision(trx, sheet.id, number);
 		if (!row) revisionNotFound(number);
@@ -359,7 +360,6 @@ export async function moveRevision(
 		if (action === 'return' && isAuthor) throw new AppError(403, 'self-return', `You saved Rev ${number}; withdraw it from checking instead of returning it.`);
 
 		// document control: no sign-off over open review notes without a recorded reason
-		let overridden: { reason: string; openNotes: number } | null = null;
 		if (action === 'check' || action === 'approve') {
 			const open = await countOpenNotes(trx, sheet.id);
 			if (open > 0 && override.data === undefined) throw new OpenNotesError(number, action, open);
@@ -390,7 +390,7 @@ export async function moveRevision(
 		return (await getRevision(trx, sheet.id, number))!;
 	});
 
-	await mailFor(db, ctx, access, by.label, sheet, updated, action, note.data, members);
+	await mailFor(db, ctx, access, by.label, sheet, updated, action, note.data, members, overridden);
 	return summaryOf(updated, number);
 }
 
@@ -398,7 +398,18 @@ function recipient(m: Member): Recipient {
 	return { id: m.user_id, name: m.name, email: m.email };
 }
 
-async function mailFor(db: DB, ctx: NotifyContext | undefined, access: TeamAccess, actorName: string, sheet: SheetRow, rev: SheetRevisionRow, action: Action, note: string, members: Member[]): Promise<void> {
+async function mailFor(
+	db: DB,
+	ctx: NotifyContext | undefined,
+	access: TeamAccess,
+	actorName: string,
+	sheet: SheetRow,
+	rev: SheetRevisionRow,
+	action: Action,
+	note: string,
+	members: Member[],
+	override: { reason: string; openNotes: number } | null
+): Promise<void> {
 	if (!ctx || action === 'withdraw') return;
 	const base = {
 		actorName,
@@ -419,10 +430,10 @@ async function mailFor(db: DB, ctx: NotifyContext | undefined, access: TeamAcces
 	const concerned = members.filter((m) => m.user_id === rev.author_id || m.user_id === rev.submitted_by).map(recipient);
 	if (action === 'check') {
 		const url = `${ctx.origin}${revisionPath(access.team.slug, sheet.id, rev.number)}`;
-		await notify(db, ctx, 'checked', concerned, actorId, (r) => checkedMail({ ...base, name: r.name, text: note, url }));
+		await notify(db, ctx, 'checked', concerned, actorId, (r) => checkedMail({ ...base, name: r.name, text: note, url, override }));
 	} else if (action === 'approve') {
 		const url = `${ctx.origin}${revisionPath(access.team.slug, sheet.id, rev.number)}`;
-		await notify(db, ctx, 'approved', concerned, actorId, (r) => approvedMail({ ...base, name: r.name, text: note, url }));
+		await notify(db, ctx, 'approved', concerned, actorId, (r) => approvedMail({ ...base, name: r.name, text: note, url, override }));
 	} else if (action === 'return') {
 		const url = `${ctx.origin}${sheetPath(access.team.slug, sheet.id)}`;
 		await notify(db, ctx, 'returned', concerned, actorId, (r) => returnedMail({ ...base, name: r.name, text: note, url }));
