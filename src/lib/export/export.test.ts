@@ -5,7 +5,7 @@ import { unitPrefs } from '../units';
 import { composeMemoFigure, escapeXml, fitText, wrapText, type MemoFont, type MemoTitle } from './memo';
 import { sheetTable, tableMarkdown } from './table';
 import { tableCsv } from './table-csv';
-import { chemical, memoTitle, shortFormulation, unitsText } from './title';
+import { chemical, memoTitle, shortFormulation, signOffOverrides, unitsText } from './title';
 import { pngSize } from './png';
 import { vesselDoc } from '../revisions/test-fixtures';
 import { CAUTION_TITLE, LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
@@ -305,6 +305,22 @@ describe('memo figure', () => {
 		const wide = { svg: '<svg xmlns="http://www.w3.org/2000/svg" width="608" height="400"></svg>', width: 608, height: 400 };
 		const fig = composeMemoFigure({ drawings: [wide], title, caution: 'c', fonts, layout: 'column' });
 		expect(fig.svg).toMatch(/scale\(0\.5000\)/);
+	});
+
+	it('names a sign-off over open review notes in the figure', () => {
+		const events = [
+			{ number: 2, kind: 'approved', actor: 'Maren Okafor', at: Date.UTC(2026, 0, 7), override: { reason: 'Datasheet follows with Rev 3.', openNotes: 1 } },
+			{ number: 2, kind: 'checked', actor: 'Priya Ramanathan', at: Date.UTC(2026, 0, 6), override: { reason: 'Both notes are for Rev 3.', openNotes: 2 } },
+			{ number: 2, kind: 'submitted', actor: 'Tobias Lindqvist', at: Date.UTC(2026, 0, 5), override: null },
+			{ number: 1, kind: 'checked', actor: 'Priya Ramanathan', at: Date.UTC(2026, 0, 1), override: { reason: 'older', openNotes: 1 } }
+		];
+		const lines = signOffOverrides(events, 2);
+		expect(lines).toEqual([
+			'Marked checked by Priya Ramanathan on 2026-01-06 over 2 open review notes: “Both notes are for Rev 3.”',
+			'Approved by Maren Okafor on 2026-01-07 over 1 open review note: “Datasheet follows with Rev 3.”'
+		]);
+		const fig = composeMemoFigure({ drawings: [], title: { ...title, overrides: lines }, caution: 'c', fonts });
+		expect(fig.svg).toContain('Marked checked by Priya Ramanathan on 2026-01-06 over 2 open review');
 	});
 
 	it('wraps and shortens text to the space it has', () => {

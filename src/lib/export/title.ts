@@ -77,7 +77,7 @@ export interface SignOffEvent {
 	kind: string;
 	actor: string;
 	at: number;
-	override: { reason: string; openNotes: number } | null;
+	override?: { reason: string; openNotes: number } | null;
 }
 
 /**

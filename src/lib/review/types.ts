@@ -49,7 +49,7 @@ export interface RevisionEvent {
 	actor: string;
 	note: string | null;
 	/** checked or approved over open review notes: the reason given and how many were open */
-	override: { reason: string; openNotes: number } | null;
+	override?: { reason: string; openNotes: number } | null;
 	at: number;
 }
 
