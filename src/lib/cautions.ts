@@ -8,5 +8,8 @@ export const PRESSURE_EQUIPMENT_CAUTION =
 	'ISO 4126 or API 520/521 for overpressure protection and relief devices) and local regulations, by a qualified ' +
 	'engineer. Statewright supplies states and warnings, never relief sizes.';
 
-export const LIQUID_FULL_CAUTION =
-	'Heating a liquid-full sealed vessel raises its pressure very fast: this leg crosses the saturated-liquid line toward the liquid side.';
+/** Said with every liquid-full warning, whether the leg crosses into liquid or starts liquid-full. */
+export const LIQUID_FULL_CAUTION = 'Heating a liquid-full sealed vessel raises its pressure very fast.';
+
+/** The heading the pressure-equipment caution goes under, on the screen and in every export. */
+export const CAUTION_TITLE = 'Design exploration, not a design approval';

@@ -4,7 +4,7 @@ import plex400i from '@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-400-it
 import plex600 from '@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-600-normal.woff2?url';
 import mono400 from '@fontsource/jetbrains-mono/files/jetbrains-mono-latin-400-normal.woff2?url';
 import mono600 from '@fontsource/jetbrains-mono/files/jetbrains-mono-latin-600-normal.woff2?url';
-import { composeMemoFigure, PAPER_THEME, type MemoDrawing, type MemoFigure, type MemoFont, type MemoTitle } from './memo';
+import { composeMemoFigure, MEMO_COLUMN, PAPER_THEME, type MemoDrawing, type MemoFigure, type MemoFont, type MemoTitle } from './memo';
 
 /*
  * The browser half of the memo exports: serialise the live chart drawing, load the shipped fonts
@@ -60,17 +60,46 @@ export function serializeDrawing(el: SVGSVGElement): MemoDrawing {
 	return { svg: new XMLSerializer().serializeToString(clone), width, height };
 }
 
-/** Composes the memo figure from live drawings. */
-export async function memoFigure(drawings: SVGSVGElement[], title: MemoTitle, caution: string): Promise<MemoFigure> {
+const frame = () => new Promise<void>((resolve) => requestAnimationFrame(() => resolve()));
+
+/**
+ * The live charts redrawn at `width` px and serialised: their container is narrowed for a moment
+ * (the charts stack and redraw at that width, with their text at its on-screen size), then put
+ * back. Waits, frame by frame, until every drawing has the new width; at most ~2 s.
+ */
+export async function drawingsAtWidth(get: () => SVGSVGElement[], width: number): Promise<MemoDrawing[]> {
+	const first = get()[0];
+	const host = first?.closest<HTMLElement>('[data-testid="sheet-charts"], [data-testid="path-charts"]');
+	if (!host) return get().map(serializeDrawing);
+	const saved = host.style.cssText;
+	host.style.width = `${width}px`;
+	host.style.maxWidth = `${width}px`;
+	try {
+		for (let i = 0; i < 120; i++) {
+			await frame();
+			const els = get();
+			if (els.length && els.every((el) => Math.round(el.getBoundingClientRect().width) <= width)) break;
+		}
+		await frame();
+		return get().map(serializeDrawing);
+	} finally {
+		host.style.cssText = saved;
+	}
+}
+
+/** Composes the memo figure from live drawings: side by side as on screen, or stacked in a memo column. */
+export async function memoFigure(drawings: () => SVGSVGElement[], title: MemoTitle, caution: string, findings: string[] = [], layout: 'wide' | 'column' = 'wide'): Promise<MemoFigure> {
 	const fonts = await loadMemoFonts();
-	return composeMemoFigure({ drawings: drawings.map(serializeDrawing), title, caution, fonts });
+	const d = layout === 'column' ? await drawingsAtWidth(drawings, MEMO_COLUMN.widthPx - 16) : drawings().map(serializeDrawing);
+	return composeMemoFigure({ drawings: d, title, caution, findings, fonts, layout });
 }
 
 /**
- * The figure as PNG at `pixelRatio` × its size (2 for documents, 4 for print), rendered by
- * html-to-image from an off-screen copy so the page's theme cannot reach it.
+ * The figure as PNG at `pixelRatio` × its size (2 for documents, 4 for print, MEMO_COLUMN_PIXEL_RATIO
+ * for a column figure: 1004 px, 85 mm at 300 dpi), rendered by html-to-image from an off-screen
+ * copy so the page's theme cannot reach it.
  */
-export async function memoPng(figure: MemoFigure, pixelRatio: 2 | 4): Promise<Blob> {
+export async function memoPng(figure: MemoFigure, pixelRatio: number): Promise<Blob> {
 	const host = document.createElement('div');
 	host.setAttribute('aria-hidden', 'true');
 	host.style.cssText = `position:fixed;left:-100000px;top:0;width:${figure.width}px;height:${figure.height}px;${Object.entries(PAPER_THEME)
@@ -97,3 +126,4 @@ export async function memoPng(figure: MemoFigure, pixelRatio: 2 | 4): Promise<Bl
 }
 
 export { download, fileStem } from './names';
+export { MEMO_COLUMN_PIXEL_RATIO } from './memo';

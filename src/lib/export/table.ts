@@ -2,12 +2,16 @@ import type { PathResult } from '../thermo/types';
 import { displayUnit, formatNumber, formatQuantity, type Quantity, type UnitPrefs } from '../units';
 import { phaseName } from '../charts/describe';
 import { processStyle } from '../charts/encoding';
+import { tidy } from '../sheets/format';
+import { severityWord, type MemoFindings } from './findings';
 
 /**
  * The state and leg table of a computed path in the sheet's display units, for the memo: as CSV
  * (papaparse) and as a Markdown table. Headers carry their units ("T [°C]", "P [kPa g]"); numbers
  * are the numbers the screen shows (5 significant figures, temperatures to 0.01, quality to 4
- * decimals), in plain ASCII for CSV so spreadsheets read them as numbers.
+ * decimals), in plain ASCII for CSV so spreadsheets read them as numbers. Per-leg energies and
+ * entropy changes below the round-off floor the screen uses (sheets/format.ts `tidy`) are written
+ * as 0, as the screen shows them; a total is 0 when its per-kg value is.
  */
 
 export interface TableColumn {
@@ -86,6 +90,9 @@ export function sheetTable(result: PathResult, prefs: UnitPrefs, options: TableO
 	const totalUnit = unitLabel(totalQuantity, prefs, magnitudes);
 	const eU = unitLabel('specificEnergy', prefs);
 	const labelOf = (id: string) => stateLabel(result.states.findIndex((s) => s.id === id));
+	// round-off to zero exactly as the screen does (an isentropic leg's q, an isochoric leg's w, …)
+	const e = (si: number) => tidy(si, 'specificEnergy');
+	const tot = (perKg: number, si: number) => (e(perKg) === 0 ? 0 : tidy(si, 'total'));
 	const legs = {
 		columns: [
 			{ key: 'leg', header: 'Leg', numeric: false },
@@ -103,11 +110,11 @@ export function sheetTable(result: PathResult, prefs: UnitPrefs, options: TableO
 			labelOf(pl.from),
 			labelOf(pl.to),
 			processText(pl.leg.process, pl.leg.n),
-			q(flow ? pl.leg.qFlow : pl.leg.q, 'specificEnergy'),
-			q(flow ? pl.leg.wShaft : pl.leg.w, 'specificEnergy'),
-			q(pl.leg.ds, 'specificEntropy'),
-			q(flow ? pl.totals.QFlow : pl.totals.Q, totalQuantity, magnitudes),
-			q(flow ? pl.totals.WShaft : pl.totals.W, totalQuantity, magnitudes)
+			q(e(flow ? pl.leg.qFlow : pl.leg.q), 'specificEnergy'),
+			q(e(flow ? pl.leg.wShaft : pl.leg.w), 'specificEnergy'),
+			q(tidy(pl.leg.ds, 'specificEntropy'), 'specificEntropy'),
+			q(flow ? tot(pl.leg.qFlow, pl.totals.QFlow) : tot(pl.leg.q, pl.totals.Q), totalQuantity, magnitudes),
+			q(flow ? tot(pl.leg.wShaft, pl.totals.WShaft) : tot(pl.leg.w, pl.totals.W), totalQuantity, magnitudes)
 		])
 	};
 	const note = flow
@@ -116,6 +123,19 @@ export function sheetTable(result: PathResult, prefs: UnitPrefs, options: TableO
 	return { states, legs, note };
 }
 
+/**
+ * Free text for Markdown: HTML's & < > as character references (so a title such as
+ * "<img src=x onerror=…>" stays text in any renderer) and Markdown's own punctuation (\ ` * _ [ ] | ~ #)
+ * behind a backslash; line breaks become spaces.
+ */
+export function mdText(s: string): string {
+	return s
+		.replace(/[\r\n]+/g, ' ')
+		.replace(/[\\`*_[\]|~#]/g, (c) => `\\${c}`)
+		.replace(/[&<>]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;' })[c]!);
+}
+
+/** A cell of our own making (numbers, units, phase and process names): only the pipe is escaped. */
 function mdCell(s: string): string {
 	return s.replace(/\|/g, '\\|').replace(/\n/g, ' ');
 }
@@ -127,11 +147,21 @@ function mdTable(b: SheetTable['states']): string {
 	return [head, rule, ...rows].join('\n');
 }
 
-/** The table as Markdown (GitHub-flavoured pipe tables), with an optional caption paragraph. */
-export function tableMarkdown(result: PathResult, prefs: UnitPrefs, caption: string[] = []): string {
+/** The findings as Markdown: a bulleted list of warnings and the cycle, then the caution. */
+export function findingsMarkdown(f: MemoFindings): string {
+	const items = [...f.warnings.map((w) => `- **${severityWord(w.severity)} — ${mdText(w.title)}:** ${mdText(w.text)}`), ...(f.cycle ? [`- **Cycle:** ${mdText(f.cycle)}`] : [])];
+	return ['**Findings**', items.length ? items.join('\n') : '_No warnings for this path._', `> **${mdText(f.cautionTitle)}.** ${mdText(f.caution)}`].join('\n\n');
+}
+
+/**
+ * The table as Markdown (GitHub-flavoured pipe tables): the caption paragraph (free text, escaped),
+ * the findings (warnings, cycle, caution), then the states and legs.
+ */
+export function tableMarkdown(result: PathResult, prefs: UnitPrefs, caption: string[], findings: MemoFindings): string {
 	const t = sheetTable(result, prefs, { style: 'unicode' });
 	const parts = [];
-	if (caption.length) parts.push(caption.map(mdCell).join('  \n'));
+	if (caption.length) parts.push(caption.map(mdText).join('  \n'));
+	parts.push(findingsMarkdown(findings));
 	parts.push('**States**', mdTable(t.states), '**Legs**', mdTable(t.legs), `_${t.note}_`);
 	return parts.join('\n\n') + '\n';
 }

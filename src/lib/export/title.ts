@@ -1,7 +1,7 @@
 import type { SheetDoc, SheetStatus } from '../sheets/types';
 import { STATUS_LABEL } from '../sheets/types';
 import { displayUnit, formatQuantity, NBSP, type UnitPrefs } from '../units';
-import type { MemoPerson, MemoTitle } from './memo';
+import { isoDate, type MemoPerson, type MemoTitle } from './memo';
 
 /** The fluid facts the title block names (a FluidInfo from GET /api/v1/fluids fits). */
 export interface TitleFluid {
@@ -66,7 +66,32 @@ export interface TitleInput {
 	/** for the working draft: the revision it is based on */
 	basedOn?: number | null;
 	signOff: TitleSignOff;
+	/** sign-off steps taken over open review notes (signOffOverrides) */
+	overrides?: string[];
 	issued: number;
+}
+
+/** A sign-off log entry, as the revisions API lists it. */
+export interface SignOffEvent {
+	number: number;
+	kind: string;
+	actor: string;
+	at: number;
+	override?: { reason: string; openNotes: number } | null;
+}
+
+/**
+ * The checks and approvals of revision `number` taken over open review notes, in words, oldest
+ * first: "Marked checked by Priya Ramanathan on 2026-01-06 over 2 open review notes: “…”".
+ */
+export function signOffOverrides(events: readonly SignOffEvent[], number: number): string[] {
+	return events
+		.filter((e) => e.number === number && e.override)
+		.sort((a, b) => a.at - b.at)
+		.map((e) => {
+			const n = e.override!.openNotes;
+			return `${e.kind === 'approved' ? 'Approved' : 'Marked checked'} by ${e.actor} on ${isoDate(e.at)} over ${n} open review note${n === 1 ? '' : 's'}: “${e.override!.reason}”`;
+		});
 }
 
 /**
@@ -107,6 +132,7 @@ export function memoTitle(input: TitleInput): MemoTitle {
 		tag: tb.tag,
 		documentNumber: tb.documentNumber,
 		site: tb.site,
+		overrides: input.overrides ?? [],
 		issued: input.issued
 	};
 }

@@ -30,7 +30,7 @@ export function reviewApi(team: string, sheet: string, f: Fetch = fetch) {
 		revision: (n: number) => apiCall<{ revision: RevisionFull }>(f, `${base}/revisions/${n}`).then((r) => r.revision),
 		saveRevision: (input: { message: string; baseRevision: number | null; draftVersion?: number; doc?: SheetDoc }) =>
 			post<{ revision: RevisionFull }>('/revisions', input).then((r) => r.revision),
-		step: (n: number, action: 'submit' | 'withdraw' | 'check' | 'return' | 'approve', input: { note?: string; checkerId?: string | null } = {}) =>
+		step: (n: number, action: 'submit' | 'withdraw' | 'check' | 'return' | 'approve', input: { note?: string; checkerId?: string | null; override?: string } = {}) =>
 			post<{ revision: RevisionSummary }>(`/revisions/${n}/${action}`, input).then((r) => r.revision),
 		restore: (n: number, version: number) => post<{ version: number; updatedAt: number; updatedBy: string; doc: SheetDoc }>(`/revisions/${n}/restore`, { version }),
 		compare: (a: number | 'draft', b: number | 'draft') => apiCall<{ diff: RevisionDiff; before: CompareSide; after: CompareSide }>(f, `${base}/revisions/compare?a=${a}&b=${b}`),

@@ -10,7 +10,7 @@ import type { SheetDoc, SheetStatus } from '../sheets/types';
 import type { FluidInfo } from '../thermo/types';
 import { chartTrace } from '../traces/chart';
 import { sameContent } from '../revisions/same';
-import { memoTitle } from '../export/title';
+import { memoTitle, signOffOverrides } from '../export/title';
 import type { MemoTitle } from '../export/memo';
 
 export interface ReviewInit {
@@ -126,6 +126,7 @@ export class SheetReview {
 			fluid,
 			revision: same ? { number: l.number, status: l.status } : null,
 			basedOn: l?.number ?? null,
+			overrides: same ? signOffOverrides(this.events, l.number) : [],
 			signOff: same
 				? {
 						designer: { name: l.author.name, at: l.author.at },

@@ -48,6 +48,8 @@ export interface RevisionEvent {
 	kind: string;
 	actor: string;
 	note: string | null;
+	/** checked or approved over open review notes: the reason given and how many were open */
+	override?: { reason: string; openNotes: number } | null;
 	at: number;
 }
 

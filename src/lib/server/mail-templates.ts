@@ -171,6 +171,14 @@ export interface RevisionMailInput {
 	text: string;
 	url: string;
 	settingsUrl: string;
+	/** checked or approved over open review notes: the reason given and how many were open */
+	override?: { reason: string; openNotes: number } | null;
+}
+
+function overrideLines(input: RevisionMailInput): string[] {
+	const o = input.override;
+	if (!o) return [];
+	return [`This was done over <strong>${o.openNotes} open review note${o.openNotes === 1 ? '' : 's'}</strong>, for this reason:`, quote(o.reason)];
 }
 
 export function submittedMail(input: RevisionMailInput): Composed {
@@ -195,7 +203,8 @@ export function checkedMail(input: RevisionMailInput): Composed {
 		[
 			`Hello ${esc(input.name)},`,
 			`${esc(input.actorName)} marked <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}) as checked. It now waits for an owner's approval.`,
-			...(input.text ? [quote(input.text)] : [])
+			...(input.text ? [quote(input.text)] : []),
+			...overrideLines(input)
 		],
 		{ label: `Open Rev ${input.revision}`, url: input.url },
 		settingsNote(input.settingsUrl)
@@ -209,7 +218,8 @@ export function approvedMail(input: RevisionMailInput): Composed {
 		[
 			`Hello ${esc(input.name)},`,
 			`${esc(input.actorName)} approved <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}). The revision is now locked; further edits start a new draft based on it.`,
-			...(input.text ? [quote(input.text)] : [])
+			...(input.text ? [quote(input.text)] : []),
+			...overrideLines(input)
 		],
 		{ label: `Open Rev ${input.revision}`, url: input.url },
 		settingsNote(input.settingsUrl)

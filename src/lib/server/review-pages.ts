@@ -15,6 +15,7 @@ import { listTraces } from './traces';
 import { checkDoc } from './sheets';
 import { getSheet } from './db/sheets';
 import { engineSpec } from '$lib/sheets/doc';
+import { signOffOverrides } from '$lib/export/title';
 
 /*
  * Data the read-only pages (a revision, a comparison, the print view) need to draw a path without
@@ -149,10 +150,11 @@ export async function printPageData(db: DB, access: TeamAccess, sheetId: string,
 		result = computed;
 		revision = summary;
 	}
-	const [{ notes }, traces] = await Promise.all([listNotes(db, access, sheetId, rev === 'draft' ? null : rev), listTraces(db, access, sheetId, { points: 'chart' })]);
+	const [{ notes }, traces, { events }] = await Promise.all([listNotes(db, access, sheetId, rev === 'draft' ? null : rev), listTraces(db, access, sheetId, { points: 'chart' }), listRevisions(db, access, sheetId)]);
 	return {
 		...ctx,
 		rev,
+		overrides: revision ? signOffOverrides(events, revision.number) : [],
 		doc,
 		result,
 		revision,

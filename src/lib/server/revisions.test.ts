@@ -2,7 +2,8 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { sql } from 'kysely';
 import { expectAppError, linkIn } from './testing';
 import { reviewWorld, type ReviewWorld } from './revisions.test-support';
-import { compareRevisions, listRevisions, moveRevision, readRevision, restoreRevision, RevisionConflictError, saveRevision } from './revisions';
+import { compareRevisions, listRevisions, moveRevision, OpenNotesError, readRevision, restoreRevision, RevisionConflictError, saveRevision } from './revisions';
+import { createNote, setNoteState } from './notes';
 import { readSheet, saveDraft } from './sheets';
 import { getSheet } from './db/sheets';
 import { setNotificationSettings, DEFAULT_NOTIFICATION_SETTINGS } from './db/notification-settings';
@@ -192,6 +193,51 @@ describe('sign-off workflow', () => {
 		expect(r.submitted?.checkerId).toBe(w.people.checker.id);
 		expect(r.approved!.at).toBeGreaterThanOrEqual(r.checked!.at);
 		await expectAppError(step(w.people.checker, sheet, 1, 'return', 'too late'), 409, 'wrong-status');
+	});
+
+	it('refuses a check or an approval over open review notes unless a reason is given, and logs the override', async () => {
+		const sheet = await w.newSheet();
+		await save(w.people.designer, sheet, null);
+		await step(w.people.designer, sheet, 1, 'submit');
+		const checker = await w.access(w.people.checker);
+		const n1 = await createNote(db(), checker, sheet, { anchor: { kind: 'sheet' }, body: 'Where does the design temperature come from?', revision: 1 });
+		await createNote(db(), checker, sheet, { anchor: { kind: 'sheet' }, body: 'Name the relief valve datasheet.', revision: 1 });
+		const e = await expectAppError(moveRevision(db(), checker, sheet, 1, 'check', {}), 409, 'open-notes');
+		expect(e).toBeInstanceOf(OpenNotesError);
+		expect((e as OpenNotesError).openNotes).toBe(2);
+		expect(e.message).toMatch(/2 review notes are still open/);
+		await expectAppError(moveRevision(db(), checker, sheet, 1, 'check', { override: '   ' }), 400, 'invalid-override');
+		await expectAppError(moveRevision(db(), await w.access(w.people.designer), sheet, 1, 'withdraw', { override: 'x' }), 400, 'invalid-override');
+		expect((await readRevision(db(), checker, sheet, 1)).status).toBe('in-check'); // nothing moved
+		await moveRevision(db(), checker, sheet, 1, 'check', { override: ' Both notes are for Rev 2; the figures of Rev 1 stand. ', note: 'Checked.' }, w.ctx);
+		// one note resolved: the approval still needs a reason, for the one left open
+		await setNoteState(db(), checker, sheet, n1.id, true);
+		const owner = await w.access(w.people.owner);
+		await expectAppError(moveRevision(db(), owner, sheet, 1, 'approve'), 409, 'open-notes');
+		await moveRevision(db(), owner, sheet, 1, 'approve', { override: 'Datasheet follows with Rev 2.' }, w.ctx);
+		const { events } = await listRevisions(db(), await w.access(w.people.viewer), sheet);
+		const by = (k: string) => events.find((x) => x.kind === k)!;
+		expect(by('checked')).toMatchObject({ note: 'Checked.', override: { reason: 'Both notes are for Rev 2; the figures of Rev 1 stand.', openNotes: 2 } });
+		expect(by('approved').override).toEqual({ reason: 'Datasheet follows with Rev 2.', openNotes: 1 });
+		expect(by('submitted').override).toBeNull();
+		// the designer's mails say so too
+		const mails = await w.mail(w.people.designer);
+		const checked = mails.find((m) => m.subject === 'Rev 1 of V-204 fire case was checked')!;
+		expect(checked.text).toContain('over 2 open review notes');
+		expect(checked.text).toContain('Both notes are for Rev 2; the figures of Rev 1 stand.');
+		expect(mails.find((m) => m.subject === 'Rev 1 of V-204 fire case was approved')?.text).toContain('over 1 open review note,');
+	});
+
+	it('signs off without a word when every note is resolved (an override given then is not recorded)', async () => {
+		const sheet = await w.newSheet();
+		await save(w.people.designer, sheet, null);
+		await step(w.people.designer, sheet, 1, 'submit');
+		const checker = await w.access(w.people.checker);
+		const n = await createNote(db(), checker, sheet, { anchor: { kind: 'sheet' }, body: 'Check the fill ratio.', revision: 1 });
+		await setNoteState(db(), checker, sheet, n.id, true);
+		await moveRevision(db(), checker, sheet, 1, 'check', { override: 'not needed' });
+		const { events } = await listRevisions(db(), checker, sheet);
+		expect(events.find((x) => x.kind === 'checked')?.override).toBeNull();
 	});
 
 	it('refuses to ask a checker who cannot check, or the author', async () => {

@@ -16,6 +16,7 @@ import {
 	type RevisionListRow
 } from './db/revisions';
 import { listMembers, type Member } from './db/memberships';
+import { countOpenNotes } from './db/notes';
 import { checkDoc, DraftConflictError, SHEET_ID, type SaveResult } from './sheets';
 import { approvedMail, checkedMail, returnedMail, submittedMail } from './mail-templates';
 import { notify, revisionPath, sheetPath, SETTINGS_PATH, type NotifyContext, type Recipient } from './notifications';
@@ -65,6 +66,31 @@ export const noteSchema = z
 	.optional()
 	.transform((s) => (s ?? '').trim())
 	.pipe(z.string().max(2000, { error: 'Use at most 2000 characters for the note.' }));
+
+export const overrideSchema = z
+	.string()
+	.optional()
+	.transform((s) => (s === undefined ? undefined : s.trim()))
+	.pipe(
+		z
+			.string()
+			.min(1, { error: 'Give the reason for signing off over the open review notes (a line is enough), or leave override out and resolve the notes first.' })
+			.max(2000, { error: 'Use at most 2000 characters for the override reason.' })
+			.optional()
+	);
+
+/** A check or approval refused because review notes are still open (409 open-notes). */
+export class OpenNotesError extends AppError {
+	readonly openNotes: number;
+	constructor(number: number, action: 'check' | 'approve', openNotes: number) {
+		super(
+			409,
+			'open-notes',
+			`${openNotes === 1 ? '1 review note is' : `${openNotes} review notes are`} still open on this sheet, so Rev ${number} is not ${action === 'check' ? 'marked checked' : 'approved'} yet. Resolve ${openNotes === 1 ? 'it' : 'them'} first, or ${action === 'check' ? 'check' : 'approve'} over ${openNotes === 1 ? 'it' : 'them'} by giving the reason as override; the reason is recorded in the sign-off log.`
+		);
+		this.openNotes = openNotes;
+	}
+}
 
 function sig(id: string | null, label: string | null, at: number | null): Signature | null {
 	return label !== null && at !== null ? { id, name: label, at } : null;
@@ -223,7 +249,14 @@ export async function listRevisions(db: DB, access: TeamAccess, sheetId: string)
 	const events = await listRevisionEvents(db, sheet.id);
 	return {
 		revisions: rows.map((r) => summaryOf(r, latest)),
-		events: events.map((e) => ({ number: e.number, kind: e.kind, actor: e.actor_label, note: e.note, at: e.created_at }))
+		events: events.map((e) => ({
+			number: e.number,
+			kind: e.kind,
+			actor: e.actor_label,
+			note: e.note,
+			override: e.override_reason !== null ? { reason: e.override_reason, openNotes: e.open_notes ?? 0 } : null,
+			at: e.created_at
+		}))
 	};
 }
 
@@ -271,6 +304,12 @@ const STATUS_WORDS: Record<SheetStatusValue, string> = { draft: 'a draft', 'in-c
 export interface WorkflowInput {
 	/** a note with the step (required to return a revision) */
 	note?: string;
+	/**
+	 * check and approve only: the reason for signing off while review notes are still open. Without
+	 * it such a step is refused (409 open-notes); with it the step goes ahead and the reason and the
+	 * number of open notes are recorded in the sign-off log.
+	 */
+	override?: string;
 	/** submit only: the member asked to check (default: every checker of the team) */
 	checkerId?: string | null;
 }
@@ -291,10 +330,15 @@ export async function moveRevision(
 	const note = noteSchema.safeParse(input.note);
 	if (!note.success) throw new AppError(400, 'invalid-note', note.error.issues[0].message, 'note');
 	if (action === 'return' && !note.data) throw new AppError(400, 'invalid-note', 'Say why the revision goes back: the designer reads this note.', 'note');
+	const override = overrideSchema.safeParse(input.override);
+	if (!override.success) throw new AppError(400, 'invalid-override', override.error.issues[0].message, 'override');
+	if (override.data !== undefined && action !== 'check' && action !== 'approve')
+		throw new AppError(400, 'invalid-override', 'override applies only to check and approve (signing off over open review notes); leave it out for this step.', 'override');
 	const sheet = await loadSheet(db, access, sheetId);
 	const members = await listMembers(db, access.team.id);
 	const by = access.actor;
 
+	let overridden: { reason: string; openNotes: number } | null = null;
 	const updated = await db.transaction().execute(async (trx) => {
 		const row = await getRevision(trx, sheet.id, number);
 		if (!row) revisionNotFound(number);
@@ -315,6 +359,13 @@ export async function moveRevision(
 			throw new AppError(403, 'self-approve', `You saved Rev ${number}, so you cannot approve it: a revision is approved by someone other than its designer.`);
 		if (action === 'return' && isAuthor) throw new AppError(403, 'self-return', `You saved Rev ${number}; withdraw it from checking instead of returning it.`);
 
+		// document control: no sign-off over open review notes without a recorded reason
+		if (action === 'check' || action === 'approve') {
+			const open = await countOpenNotes(trx, sheet.id);
+			if (open > 0 && override.data === undefined) throw new OpenNotesError(number, action, open);
+			if (open > 0) overridden = { reason: override.data!, openNotes: open };
+		}
+
 		let checkerId: string | null = null;
 		if (action === 'submit' && input.checkerId) {
 			const m = members.find((x) => x.user_id === input.checkerId);
@@ -334,12 +385,12 @@ export async function moveRevision(
 		if (!(await updateRevisionStatus(trx, row.id, row.status, patch)))
 			throw new AppError(409, 'wrong-status', `Rev ${number} changed while you were looking at it. Reload to see its status.`);
 		const eventNote = action === 'withdraw' ? `Withdrawn from checking${note.data ? `: ${note.data}` : ''}` : note.data || null;
-		await logRevisionEvent(trx, { revisionId: row.id, sheetId: sheet.id, kind: step.event, actor: by, note: eventNote }, now);
+		await logRevisionEvent(trx, { revisionId: row.id, sheetId: sheet.id, kind: step.event, actor: by, note: eventNote, override: overridden }, now);
 		await syncSheetStatus(trx, sheet.id);
 		return (await getRevision(trx, sheet.id, number))!;
 	});
 
-	await mailFor(db, ctx, access, by.label, sheet, updated, action, note.data, members);
+	await mailFor(db, ctx, access, by.label, sheet, updated, action, note.data, members, overridden);
 	return summaryOf(updated, number);
 }
 
@@ -347,7 +398,18 @@ function recipient(m: Member): Recipient {
 	return { id: m.user_id, name: m.name, email: m.email };
 }
 
-async function mailFor(db: DB, ctx: NotifyContext | undefined, access: TeamAccess, actorName: string, sheet: SheetRow, rev: SheetRevisionRow, action: Action, note: string, members: Member[]): Promise<void> {
+async function mailFor(
+	db: DB,
+	ctx: NotifyContext | undefined,
+	access: TeamAccess,
+	actorName: string,
+	sheet: SheetRow,
+	rev: SheetRevisionRow,
+	action: Action,
+	note: string,
+	members: Member[],
+	override: { reason: string; openNotes: number } | null
+): Promise<void> {
 	if (!ctx || action === 'withdraw') return;
 	const base = {
 		actorName,
@@ -368,10 +430,10 @@ async function mailFor(db: DB, ctx: NotifyContext | undefined, access: TeamAcces
 	const concerned = members.filter((m) => m.user_id === rev.author_id || m.user_id === rev.submitted_by).map(recipient);
 	if (action === 'check') {
 		const url = `${ctx.origin}${revisionPath(access.team.slug, sheet.id, rev.number)}`;
-		await notify(db, ctx, 'checked', concerned, actorId, (r) => checkedMail({ ...base, name: r.name, text: note, url }));
+		await notify(db, ctx, 'checked', concerned, actorId, (r) => checkedMail({ ...base, name: r.name, text: note, url, override }));
 	} else if (action === 'approve') {
 		const url = `${ctx.origin}${revisionPath(access.team.slug, sheet.id, rev.number)}`;
-		await notify(db, ctx, 'approved', concerned, actorId, (r) => approvedMail({ ...base, name: r.name, text: note, url }));
+		await notify(db, ctx, 'approved', concerned, actorId, (r) => approvedMail({ ...base, name: r.name, text: note, url, override }));
 	} else if (action === 'return') {
 		const url = `${ctx.origin}${sheetPath(access.team.slug, sheet.id)}`;
 		await notify(db, ctx, 'returned', concerned, actorId, (r) => returnedMail({ ...base, name: r.name, text: note, url }));

@@ -3,7 +3,7 @@ import { computePath, getFluid } from '$lib/thermo';
 import { engineSpec } from './doc';
 import { workedExample } from './templates';
 import { sheetWarnings } from './warnings';
-import { PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
+import { LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
 
 function run(id: string, patch?: (d: ReturnType<NonNullable<ReturnType<typeof workedExample>>['build']>) => void) {
 	const doc = workedExample(id)!.build();
@@ -32,6 +32,24 @@ describe('warnings under the table', () => {
 		expect(warnings.map((w) => rank[w.severity])).toEqual([...warnings.map((w) => rank[w.severity])].sort());
 		// no engine text in SI or with raw leg ids survives
 		for (const w of warnings) expect(w.text).not.toMatch(/L[a-z2-9]{6}/);
+	});
+
+	it('a sealed 50 L vessel that starts liquid-full: the caution without any design limits, with (∂P/∂T)ᵥ in the sheet’s units', () => {
+		// the tried-as-a-new-user case: water at 20 °C and 0 bar g, heated shut-in at constant volume to 40 °C
+		const { warnings } = run('vessel-v204-fire', (d) => {
+			d.spec.system = { kind: 'closed', volume: 0.05 };
+			d.spec.start = { T: 293.15, P: 101_325 };
+			d.spec.legs[0].target = { T: 313.15 };
+			d.spec.limits = {};
+			d.units = { ...d.units, pressureUnit: 'bar', pressureReference: 'gauge' };
+		});
+		const full = warnings.find((w) => w.code === 'liquid-full')!;
+		expect(full.severity).toBe('caution');
+		expect(full.text).toMatch(/^L1 \(isochoric\) heats a closed system that is liquid-full from the leg’s start \(compressed liquid at 20\.00\s°C and 0\sbar g\)/);
+		expect(full.text).toContain(LIQUID_FULL_CAUTION);
+		// (∂P/∂T)ᵥ = 450 643.7 Pa/K at 20 °C, 1 atm: python3-iapws 1.5.2 (Debian), IAPWS95, tests/reference/iapws-liquid-full.json → 4.51 bar per K
+		expect(full.text).toMatch(/Here about 4\.51 bar per K at constant volume/);
+		expect(warnings[0].code).toBe('liquid-full');
 	});
 
 	it('R-310 on a US sheet: pressures in psig, densities in lbm/ft³, and the liquid-full-ahead note', () => {

@@ -4,7 +4,7 @@
  * met, then notes on how to read the numbers. Built from the engine's PathWarnings and
  * LimitEvents; where the engine's text is in SI (it always is), it is rewritten in display units.
  */
-import { LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
+import { CAUTION_TITLE, LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
 import type { ChartSelection } from '../charts/types';
 import type { DesignLimitName, FluidInfo, LimitEvent, PathResult, PathWarning, State } from '../thermo/types';
 import { displayUnit, formatQuantity, unitById, type UnitPrefs } from '../units';
@@ -37,11 +37,8 @@ function at(s: State, prefs: UnitPrefs): string {
 	return `${formatQuantity(s.T, 'temperature', prefs).full} and ${formatQuantity(s.P, 'pressure', prefs).full}`;
 }
 
-/** (∂P/∂T)ᵥ in the sheet's pressure unit per temperature-difference unit, from the engine's MPa/K. */
-function rateText(message: string, prefs: UnitPrefs): string | null {
-	const m = /about ([\d.]+(?:e[+-]?\d+)?) MPa per kelvin/.exec(message);
-	if (!m) return null;
-	const paPerK = Number(m[1]) * 1e6;
+/** (∂P/∂T)ᵥ (Pa/K) in the sheet's pressure unit per temperature-difference unit, 3 significant figures. */
+export function rateText(paPerK: number, prefs: UnitPrefs): string {
 	const p = displayUnit('pressure', { ...prefs, pressureReference: 'absolute' }, { magnitude: paPerK });
 	const dT = unitById(prefs.system === 'us' ? 'dF' : 'dK');
 	const value = p.fromSI(paPerK, 0) / dT.fromSI(1, 0);
@@ -62,17 +59,21 @@ export function sheetWarnings(result: PathResult, legs: readonly SheetLegSpec[],
 		const i = legIndex(w.leg);
 		switch (w.code) {
 			case 'pressure-equipment-caution':
-				out.push({ key: w.code, code: w.code, severity: 'caution', title: 'Design exploration, not a design approval', text: PRESSURE_EQUIPMENT_CAUTION, target: null });
+				out.push({ key: w.code, code: w.code, severity: 'caution', title: CAUTION_TITLE, text: PRESSURE_EQUIPMENT_CAUTION, target: null });
 				break;
 			case 'liquid-full': {
 				const where = w.at ? ` at ${at(w.at, prefs)}` : '';
-				const rate = rateText(w.message, prefs);
+				const rate = w.dPdT !== undefined && Number.isFinite(w.dPdT) && w.dPdT > 0 ? rateText(w.dPdT, prefs) : null;
+				const what =
+					w.onset === 'start'
+						? `${name(w.leg)} heats a closed system that is liquid-full from the leg’s start (compressed liquid${where}), at constant volume.`
+						: `${name(w.leg)} fills the closed system with liquid${where}. It crosses the saturated-liquid line toward the liquid side.`;
 				out.push({
 					key: `${w.code}:${w.leg}`,
 					code: w.code,
 					severity: 'caution',
 					title: 'Liquid-full',
-					text: `${name(w.leg)} fills the closed system with liquid${where}. ${LIQUID_FULL_CAUTION}${rate ? ` Here ${rate} at constant volume.` : ''}`,
+					text: `${what} ${LIQUID_FULL_CAUTION}${rate ? ` Here ${rate} at constant volume.` : ''}`,
 					target: legTarget(w.leg)
 				});
 				break;

@@ -127,7 +127,7 @@ export function computeLeg(spec: LegSpec): Leg {
  * leg, per-state extras (superheat, subcooling, volume fractions) and warnings with stable codes
  * (solvers/path.ts). Throws ThermoError (`invalid-path`, or a leg's error prefixed with its id).
  */
-export { computePath, PRESSURE_EQUIPMENT_CAUTION, CYCLE_TOLERANCE, MAX_LEGS } from './solvers/path.ts';
+export { computePath, PRESSURE_EQUIPMENT_CAUTION, LIQUID_FULL_CAUTION, CYCLE_TOLERANCE, MAX_LEGS } from './solvers/path.ts';
 
 /** Degrees of superheat/subcooling against saturation at the state's P, and liquid/vapor volume fractions. */
 export function stateExtras(state: State): import('./types.ts').StateExtras {

@@ -306,6 +306,10 @@ export interface PathWarning {
 	state?: string;
 	/** the state where it happens (e.g. where the vessel goes liquid-full) */
 	at?: State;
+	/** liquid-full: the pressure rise per kelvin at constant volume, (∂P/∂T)ᵥ at `at`, in Pa/K */
+	dPdT?: number;
+	/** liquid-full: the leg crosses the saturated-liquid line ('crossing') or heats a liquid that is compressed from the leg's start ('start') */
+	onset?: 'crossing' | 'start';
 }
 
 export interface PathResult {

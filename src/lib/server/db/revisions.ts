@@ -107,12 +107,30 @@ export async function updateRevisionStatus(
 
 export async function logRevisionEvent(
 	db: DB,
-	e: { revisionId: string; sheetId: string; kind: RevisionEventKind; actor: { id: string | null; label: string }; note?: string | null },
+	e: {
+		revisionId: string;
+		sheetId: string;
+		kind: RevisionEventKind;
+		actor: { id: string | null; label: string };
+		note?: string | null;
+		/** signed off over open review notes: the reason and how many were open */
+		override?: { reason: string; openNotes: number } | null;
+	},
 	now = Date.now()
 ): Promise<void> {
 	await db
 		.insertInto('sheet_revision_events')
-		.values({ revision_id: e.revisionId, sheet_id: e.sheetId, kind: e.kind, actor_id: e.actor.id, actor_label: e.actor.label, note: e.note ?? null, created_at: now })
+		.values({
+			revision_id: e.revisionId,
+			sheet_id: e.sheetId,
+			kind: e.kind,
+			actor_id: e.actor.id,
+			actor_label: e.actor.label,
+			note: e.note ?? null,
+			override_reason: e.override?.reason ?? null,
+			open_notes: e.override?.openNotes ?? null,
+			created_at: now
+		})
 		.execute();
 }
 

@@ -186,6 +186,9 @@ export interface SheetRevisionEventsTable {
 	actor_id: string | null;
 	actor_label: string;
 	note: string | null;
+	/** a check or approval over open review notes: the reason given, and how many were open */
+	override_reason: string | null;
+	open_notes: number | null;
 	created_at: number;
 }
 

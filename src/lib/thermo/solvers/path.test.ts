@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fixture from '../../../../tests/reference/iapws-legs.json';
-import { PRESSURE_EQUIPMENT_CAUTION as APP_CAUTION } from '../../cautions.ts';
-import { PRESSURE_EQUIPMENT_CAUTION, ThermoError, computeLeg, computePath, fixState, saturationAtT, stateExtras, type PathSpec } from '../index.ts';
+import liquidFull from '../../../../tests/reference/iapws-liquid-full.json';
+import { LIQUID_FULL_CAUTION as APP_LIQUID_FULL, PRESSURE_EQUIPMENT_CAUTION as APP_CAUTION } from '../../cautions.ts';
+import { LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION, ThermoError, computeLeg, computePath, fixState, saturationAtT, stateExtras, type PathSpec } from '../index.ts';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
@@ -56,6 +57,8 @@ describe('computePath: the sealed vessel heated until liquid-full', () => {
 		expect(w?.at).toBe(c[0].state);
 		expect(w?.message).toMatch(/pressure very fast/);
 		expect(w?.message).toMatch(/MPa per kelvin/);
+		expect(w?.onset).toBe('crossing');
+		expect(w?.dPdT).toBeGreaterThan(0);
 	});
 
 	it('finds each design limit exactly at the first state along the leg where it is reached', () => {
@@ -82,6 +85,7 @@ describe('computePath: the sealed vessel heated until liquid-full', () => {
 
 	it('carries the brief’s code-deferral caution, word for word the app’s', () => {
 		expect(PRESSURE_EQUIPMENT_CAUTION).toBe(APP_CAUTION);
+		expect(LIQUID_FULL_CAUTION).toBe(APP_LIQUID_FULL);
 		const c = r.warnings.find((w) => w.code === 'pressure-equipment-caution');
 		expect(c?.message).toBe(APP_CAUTION);
 		expect(c?.message).toMatch(/ASME BPVC Section VIII or EN 13445/);
@@ -89,6 +93,43 @@ describe('computePath: the sealed vessel heated until liquid-full', () => {
 	});
 
 	it('is not a cycle', () => expect(r.cycle).toBeNull());
+});
+
+describe('computePath: a vessel that starts liquid-full', () => {
+	// python3-iapws 1.5.2 (Debian), IAPWS95: tests/reference/make-iapws-liquid-full.py — start density from
+	// the library's (T, P) call, (∂P/∂T)ᵥ from its derivative and a central difference, end from (T, ρ)
+	for (const c of liquidFull.cases) {
+		it(`warns when a sealed vessel of liquid water is heated: ${c.name}`, () => {
+			const r = computePath({ fluid: 'water', system: { kind: 'closed', volume: 0.05 }, start: { T: c.start.T, P: c.start.P }, legs: [{ id: 'heat', process: 'isochoric', target: { T: c.end.T } }] });
+			expect(rel(r.states[0].state.rho, c.start.rho)).toBeLessThan(1e-9);
+			expect(rel(r.states[1].state.P, c.end.P)).toBeLessThan(1e-7);
+			const w = r.warnings.find((x) => x.code === 'liquid-full');
+			expect(w).toBeDefined();
+			expect(w?.severity).toBe('caution');
+			expect(w?.onset).toBe('start');
+			expect(w?.leg).toBe('heat');
+			expect(w?.at).toBe(r.states[0].state);
+			expect(rel(w!.dPdT!, c.dPdT_v)).toBeLessThan(1e-7);
+			expect(w?.message).toMatch(/about [\d.]+ MPa per kelvin at constant volume/);
+			expect(w?.message).toMatch(/starts as compressed liquid/);
+			expect(w?.message).toContain(LIQUID_FULL_CAUTION);
+			// no design limits set: the liquid-full caution is there regardless
+			expect(r.limitEvents).toEqual([]);
+		});
+	}
+	it('says nothing for a liquid cooled at constant volume, or heated at constant pressure', () => {
+		const c = liquidFull.cases[0];
+		const cooled = computePath({ fluid: 'water', system: { kind: 'closed', mass: 1 }, start: { T: c.end.T, P: 2e6 }, legs: [{ process: 'isochoric', target: { T: c.start.T } }] });
+		expect(cooled.warnings.map((w) => w.code)).not.toContain('liquid-full');
+		const isobaric = computePath({ fluid: 'water', system: { kind: 'closed', mass: 1 }, start: { T: c.start.T, P: c.start.P }, legs: [{ process: 'isobaric', target: { T: c.end.T } }] });
+		expect(isobaric.warnings.map((w) => w.code)).not.toContain('liquid-full');
+	});
+	it('warns on a later leg that heats the liquid left by an earlier one', () => {
+		const r = computePath({ fluid: 'water', system: { kind: 'closed', mass: 1 }, start: { T: 293.15, P: 101325 }, legs: [{ id: 'press', process: 'isothermal', target: { P: 5e6 } }, { id: 'heat', process: 'isochoric', target: { T: 303.15 } }] });
+		const w = r.warnings.filter((x) => x.code === 'liquid-full');
+		expect(w.map((x) => x.leg)).toEqual(['heat']);
+		expect(w[0].at).toBe(r.states[1].state);
+	});
 });
 
 describe('computePath: cycles', () => {

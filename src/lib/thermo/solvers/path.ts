@@ -12,7 +12,9 @@
  * - below-minimum-temperature: a leg reaches a temperature at or below the minimum temperature.
  * - relief-set-above-design-pressure: the relief set pressure is above the design pressure.
  * - liquid-full: a closed-system leg crosses the saturated-liquid line from the two-phase side into
- *   compressed liquid (or ends on it from inside the dome): the state where it goes liquid-full.
+ *   compressed liquid (or ends on it from inside the dome): the state where it goes liquid-full
+ *   (onset 'crossing'); or an isochoric leg heats a closed system that is compressed liquid at the
+ *   leg's start (onset 'start'). Both carry (∂P/∂T)ᵥ at that state (dPdT, Pa/K).
  * - liquid-full-ahead: a closed-system isochoric heating leg that stays two-phase with a mean density
  *   above the critical density: heated further it would end liquid-full (info).
  * - throttling-irreversible: an isenthalpic leg (info).
@@ -52,6 +54,9 @@ export const PRESSURE_EQUIPMENT_CAUTION =
 	'under the applicable code (for example ASME BPVC Section VIII or EN 13445 for vessels; ASME BPVC Section XIII, ' +
 	'ISO 4126 or API 520/521 for overpressure protection and relief devices) and local regulations, by a qualified ' +
 	'engineer. Statewright supplies states and warnings, never relief sizes.';
+
+/** Said with every liquid-full warning (same words as LIQUID_FULL_CAUTION in src/lib/cautions.ts). */
+export const LIQUID_FULL_CAUTION = 'Heating a liquid-full sealed vessel raises its pressure very fast.';
 
 const LIMIT_NAMES: DesignLimitName[] = ['designPressure', 'reliefSetPressure', 'designTemperature', 'minimumTemperature'];
 const LIMIT_LABEL: Record<DesignLimitName, string> = {
@@ -228,27 +233,38 @@ export function computePath(spec: PathSpec): PathResult {
 			limitEvents.push({ limit: k, value: limits[k] as number, leg: id, kind: 'reached', exceeded, state: at });
 		}
 
-		// liquid-full: a closed system crossing into compressed liquid from the dome
+		// liquid-full: a closed system crossing into compressed liquid from the dome, or heating a
+		// compressed liquid at constant volume from the leg's start
 		if (closed) {
 			let full: State | null = null;
+			let onset: 'crossing' | 'start' = 'crossing';
 			leg.crossings.forEach((c, j) => {
 				const [before, after] = trace.sides[j];
 				if (!full && c.line === 'saturated-liquid' && before && !after) full = c.state;
 			});
 			if (!full && trace.endsFromDome && leg.end.phase === 'saturated-liquid') full = leg.end;
+			if (!full && ls.process === 'isochoric' && leg.start.phase === 'compressed-liquid' && leg.end.T > leg.start.T) {
+				full = leg.start;
+				onset = 'start';
+			}
 			if (full) {
 				const f: State = full;
 				const p = evalPoint(fl, f.T, f.rho, new Point(), 2);
 				const rate = p.dPdT;
+				const known = Number.isFinite(rate) && rate > 0;
 				warnings.push({
 					code: 'liquid-full',
 					severity: 'caution',
 					leg: id,
 					at: f,
+					onset,
+					...(known ? { dPdT: rate } : {}),
 					message:
-						`Leg ${id} (${ls.process}) fills the closed system with liquid at T = ${kel(f.T)}, P = ${pa(f.P)}: it crosses the saturated-liquid line toward the liquid side. ` +
-						`Heating a liquid-full sealed vessel raises its pressure very fast` +
-						(Number.isFinite(rate) && rate > 0 ? ` — here about ${fmt(rate / 1e6)} MPa per kelvin at constant volume ((∂P/∂T)ᵥ of the liquid).` : '.')
+						(onset === 'crossing'
+							? `Leg ${id} (${ls.process}) fills the closed system with liquid at T = ${kel(f.T)}, P = ${pa(f.P)}: it crosses the saturated-liquid line toward the liquid side. `
+							: `Leg ${id} (${ls.process}) heats a liquid-full closed system at constant volume: it starts as compressed liquid at T = ${kel(f.T)}, P = ${pa(f.P)}. `) +
+						LIQUID_FULL_CAUTION +
+						(known ? ` Here about ${fmt(rate / 1e6)} MPa per kelvin at constant volume ((∂P/∂T)ᵥ of the liquid).` : '')
 				});
 			} else if (ls.process === 'isochoric' && leg.end.phase === 'saturated-mixture' && leg.end.T > leg.start.T && leg.end.rho > fl.rhoc) {
 				warnings.push({

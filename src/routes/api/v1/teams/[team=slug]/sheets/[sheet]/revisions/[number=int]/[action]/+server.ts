@@ -4,21 +4,23 @@ import { getDb } from '$lib/server/db';
 import { apiRoute, jsonError, readJson } from '$lib/server/api';
 import { requireTeam } from '$lib/server/guard';
 import { flowContext } from '$lib/server/request';
-import { moveRevision, parseRevisionNumber, restoreRevision } from '$lib/server/revisions';
+import { moveRevision, OpenNotesError, parseRevisionNumber, restoreRevision } from '$lib/server/revisions';
 import { DraftConflictError } from '$lib/server/sheets';
 
 /*
  * Sign-off steps on the newest revision, and restoring any revision as the working draft.
  *   POST …/submit   { checkerId?, note? }  designers, owners       draft → in-check (mails the checker)
  *   POST …/withdraw { note? }              designers, owners       in-check → draft
- *   POST …/check    { note? }              checkers, owners; not the author   in-check → checked
+ *   POST …/check    { note?, override? }   checkers, owners; not the author   in-check → checked
  *   POST …/return   { note }               checkers, owners (owners only once checked) → draft
- *   POST …/approve  { note? }              owners; not the author  checked → approved (locked)
+ *   POST …/approve  { note?, override? }   owners; not the author  checked → approved (locked)
+ *   check and approve while review notes are open: 409 open-notes { openNotes } unless `override`
+ *   gives the reason, which the sign-off log records with the number of open notes.
  *   POST …/restore  { version }            designers, owners: the revision's document becomes the
  *                                          working draft (409 draft-conflict if `version` is stale)
  *   → 200 { revision } (restore: { version, updatedAt, updatedBy, doc })
  *   403 forbidden / self-check / self-approve / self-return; 409 not-latest / wrong-status;
- *   400 invalid-note / invalid-checker; 404 unknown step or revision.
+ *   409 open-notes; 400 invalid-note / invalid-checker / invalid-override; 404 unknown step or revision.
  */
 
 const ACTIONS = ['submit', 'withdraw', 'check', 'return', 'approve'] as const;
@@ -26,7 +28,8 @@ const ACTIONS = ['submit', 'withdraw', 'check', 'return', 'approve'] as const;
 const stepBody = z.strictObject(
 	{
 		note: z.string({ error: 'note must be text.' }).optional(),
-		checkerId: z.string({ error: 'checkerId must be the id of a team member.' }).nullable().optional()
+		checkerId: z.string({ error: 'checkerId must be the id of a team member.' }).nullable().optional(),
+		override: z.string({ error: 'override must be text: the reason for signing off over open review notes.' }).optional()
 	},
 	{ error: 'Send a JSON object, e.g. { "note": "…" }.' }
 );
@@ -55,6 +58,11 @@ export const POST: RequestHandler = apiRoute(async (event) => {
 	if (!(ACTIONS as readonly string[]).includes(action))
 		return jsonError(404, 'not-found', `There is no step "${action}". Use one of: ${ACTIONS.join(', ')}, restore.`);
 	const input = await bodyOf(event.request, stepBody);
-	const revision = await moveRevision(getDb(), access, event.params.sheet, number, action as (typeof ACTIONS)[number], input, flowContext(event));
-	return { revision };
+	try {
+		const revision = await moveRevision(getDb(), access, event.params.sheet, number, action as (typeof ACTIONS)[number], input, flowContext(event));
+		return { revision };
+	} catch (e) {
+		if (e instanceof OpenNotesError) return jsonError(409, e.code, e.message, { openNotes: e.openNotes });
+		throw e;
+	}
 });
