@@ -1,18 +1,26 @@
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
-import { sendVerification, verifyEmail } from '$lib/server/auth';
+import { sendVerification, startSession, verifyEmail } from '$lib/server/auth';
 import { requireUser } from '$lib/server/guard';
 import { runAction } from '$lib/server/forms';
-import { flowContext } from '$lib/server/request';
+import { clientMeta, flowContext } from '$lib/server/request';
 import { isAppError } from '$lib/server/errors';
 
 // Following the e-mailed link confirms the address (the link is single-use and expires).
-export const load: PageServerLoad = async ({ url, locals }) => {
+export const load: PageServerLoad = async (event) => {
+	const { url, locals } = event;
 	const token = url.searchParams.get('token');
 	if (token === null) return { result: null, signedIn: !!locals.user, verified: locals.user?.emailVerified ?? false, email: locals.user?.email ?? null };
 	try {
-		const { user, alreadyVerified } = await verifyEmail(getDb(), token);
-		return { result: { ok: true as const, email: user.email, alreadyVerified }, signedIn: !!locals.user, verified: true, email: user.email };
+		const db = getDb();
+		const { user, alreadyVerified } = await verifyEmail(db, token);
+		// the first use of the link finishes a sign-up: it proves the address, so it signs its holder in
+		let signedIn = !!locals.user;
+		if (!alreadyVerified && !signedIn) {
+			await startSession(db, event, user.id, clientMeta(event));
+			signedIn = true;
+		}
+		return { result: { ok: true as const, email: user.email, alreadyVerified }, signedIn, verified: true, email: user.email };
 	} catch (e) {
 		if (!isAppError(e)) throw e;
 		return { result: { ok: false as const, message: e.message }, signedIn: !!locals.user, verified: locals.user?.emailVerified ?? false, email: locals.user?.email ?? null };
