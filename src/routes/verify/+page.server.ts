@@ -1,3 +1,4 @@
+import { redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { sendVerification, startSession, verifyEmail } from '$lib/server/auth';
@@ -10,17 +11,20 @@ import { isAppError } from '$lib/server/errors';
 export const load: PageServerLoad = async (event) => {
 	const { url, locals } = event;
 	const token = url.searchParams.get('token');
+	if (token === null && url.searchParams.has('confirmed') && locals.user?.emailVerified) {
+		return { result: { ok: true as const, email: locals.user.email, alreadyVerified: false }, signedIn: true, verified: true, email: locals.user.email };
+	}
 	if (token === null) return { result: null, signedIn: !!locals.user, verified: locals.user?.emailVerified ?? false, email: locals.user?.email ?? null };
 	try {
 		const db = getDb();
 		const { user, alreadyVerified } = await verifyEmail(db, token);
 		// the first use of the link finishes a sign-up: it proves the address, so it signs its holder in
-		let signedIn = !!locals.user;
-		if (!alreadyVerified && !signedIn) {
+		if (!alreadyVerified && !locals.user) {
 			await startSession(db, event, user.id, clientMeta(event));
-			signedIn = true;
+			// a fresh request, so the whole page (its header too) is drawn signed in
+			redirect(303, '/verify?confirmed');
 		}
-		return { result: { ok: true as const, email: user.email, alreadyVerified }, signedIn, verified: true, email: user.email };
+		return { result: { ok: true as const, email: user.email, alreadyVerified }, signedIn: !!locals.user, verified: true, email: user.email };
 	} catch (e) {
 		if (!isAppError(e)) throw e;
 		return { result: { ok: false as const, message: e.message }, signedIn: !!locals.user, verified: locals.user?.emailVerified ?? false, email: locals.user?.email ?? null };
