@@ -1,8 +1,11 @@
+import { spawn } from 'node:child_process';
+import { mkdirSync, rmSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import {
 	BASE,
 	DEMO,
 	FORM,
+	PORT,
 	TEAM,
 	freshEmail,
 	lastMailId,
@@ -223,5 +226,42 @@ test.describe('hardening: mail, enumeration, lock-out', () => {
 		await signInPage(page, email, 'the right password');
 		// and one wrong try of the owner's is just a wrong password, not a lock
 		expect((await postFrom('127.0.0.68', '/signin', { email, password: 'a typo of mine' })).status).toBe(400);
+	});
+
+	test('whoever runs the server reads every caught message on its console: recipient, subject, links', async ({ playwright }) => {
+		// a second copy of the built app, started as the README's `npm start` runs it: no NODE_ENV, no SMTP_URL
+		// (ORIGIN set, as for any plain-http use: without it adapter-node assumes https)
+		const port = PORT + 800;
+		const base = `http://127.0.0.1:${port}`;
+		const dir = `tmp/e2e-console-${port}`;
+		rmSync(dir, { recursive: true, force: true });
+		mkdirSync(dir, { recursive: true });
+		const env: Record<string, string | undefined> = { ...process.env, PORT: String(port), HOST: '127.0.0.1', ORIGIN: base, DATABASE_PATH: `${dir}/statewright.db`, SEED_DEMO: '0' };
+		for (const k of ['NODE_ENV', 'SMTP_URL', 'STATEWRIGHT_DEV_TOOLS']) delete env[k];
+		const child = spawn(process.execPath, ['build/index.js'], { env, stdio: ['ignore', 'pipe', 'pipe'] });
+		let out = '';
+		child.stdout!.on('data', (c: Buffer) => (out += c.toString('utf8')));
+		child.stderr!.on('data', (c: Buffer) => (out += c.toString('utf8')));
+		const api = await playwright.request.newContext({ baseURL: base });
+		try {
+			await expect.poll(async () => (await api.get('/healthz').catch(() => null))?.status(), { timeout: 30_000 }).toBe(200);
+			expect(out).toContain('printed here, each message with its links');
+			const email = freshEmail('operator');
+			const form = { name: 'Op Erator', email, password: 'an operator password' };
+			expect((await api.post('/signup', { form, headers: { origin: base, accept: 'text/html' } })).status()).toBe(200);
+			await expect.poll(() => out, { timeout: 20_000 }).toContain(`[statewright] mail caught for ${email}: Confirm your e-mail address for Statewright`);
+			expect(out).toMatch(new RegExp(`\\n  link: ${base.replace(/[.]/g, '\\.')}/verify\\?token=[A-Za-z0-9_-]{43}\\n`));
+			expect((await api.post('/reset?/request', { form: { email }, headers: { origin: base, accept: 'text/html' } })).status()).toBe(200);
+			await expect.poll(() => out, { timeout: 20_000 }).toContain(`[statewright] mail caught for ${email}: Reset your Statewright password`);
+			const printed = out.match(/\n {2}link: (\S+\/reset\?token=\S+)\n/)?.[1];
+			expect(printed).toBeDefined();
+			// the printed link is the real one: it opens the form to choose a new password
+			const page = await api.get(printed!);
+			expect(await page.text()).toContain('Choose a new password');
+		} finally {
+			await api.dispose();
+			if (child.exitCode === null) await new Promise((r) => child.once('exit', r).kill('SIGTERM'));
+			rmSync(dir, { recursive: true, force: true });
+		}
 	});
 });
