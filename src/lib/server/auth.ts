@@ -7,7 +7,7 @@ import { createUser, getUserByEmail, getUserById, markEmailVerified, normalizeEm
 import { getEmailToken, insertEmailToken, markEmailTokenUsed, retireEmailTokens } from './db/email-tokens';
 import { AppError } from './errors';
 import { newSecret, sha256 } from './secrets';
-import { mailLimits, retryAfterSeconds, signInLimits, takeAll, type Backoff, type Limiter } from './rate-limit';
+import { addressKey, mailLimits, retryAfterSeconds, signInLimits, takeAll, type Backoff, type Limiter } from './rate-limit';
 import { afterResponse } from './background';
 import { passwordChangedMail, resetPasswordMail, signUpAttemptMail, verifyEmailMail } from './mail-templates';
 import type { MailMessage } from './mail';
@@ -259,7 +259,7 @@ async function deliver(ctx: FlowContext, message: MailMessage): Promise<void> {
 function limitMail(email: string, ip: string | null, what: string): void {
 	const r = takeAll([
 		[mailLimits.perAddress, normalizeEmail(email)],
-		[mailLimits.perIp, ip ?? 'unknown']
+		[mailLimits.perIp, addressKey(ip)]
 	]);
 	if (!r.allowed) throw tooMany(r, what);
 }
@@ -322,7 +322,7 @@ export async function signIn(
 	ip: string | null,
 	limits: SignInLimits = signInLimits
 ): Promise<User> {
-	const client = ip ?? 'unknown';
+	const client = addressKey(ip);
 	const pairKey = `${normalizeEmail(input.email)} ${client}`;
 	const fromIp = limits.perIp.take(client);
 	if (!fromIp.allowed) throw tooMany(fromIp, 'sign-in attempts from this address');

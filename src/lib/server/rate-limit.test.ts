@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createBackoff, createLimiter, refundAll, retryAfterSeconds, takeAll } from './rate-limit';
+import { addressKey, createBackoff, createLimiter, refundAll, retryAfterSeconds, takeAll } from './rate-limit';
 
 function clock(start = 1_000_000) {
 	let t = start;
@@ -156,5 +156,21 @@ describe('createBackoff', () => {
 		const b = createBackoff({ ...options, maxKeys: 100, now: () => 0 });
 		for (let i = 0; i < 1000; i++) b.attempt(`k${i}`);
 		expect(b.size).toBe(100);
+	});
+});
+
+describe('addressKey', () => {
+	it('keeps IPv4 as it is, unwraps IPv4-mapped IPv6, and counts IPv6 by its /64', () => {
+		expect(addressKey('198.51.100.7')).toBe('198.51.100.7');
+		expect(addressKey('::ffff:198.51.100.7')).toBe('198.51.100.7');
+		expect(addressKey(null)).toBe('unknown');
+		// two addresses of one /64 are one client; the next /64 is another
+		expect(addressKey('2001:db8:1:2:aaaa::1')).toBe('2001:db8:1:2::/64');
+		expect(addressKey('2001:DB8:1:2:bbbb:cccc:dddd:eeee')).toBe('2001:db8:1:2::/64');
+		expect(addressKey('2001:db8:1:3::1')).toBe('2001:db8:1:3::/64');
+		expect(addressKey('2001:db8::1')).toBe('2001:db8:0:0::/64');
+		expect(addressKey('::1')).toBe('0:0:0:0::/64');
+		expect(addressKey('fe80::1%eth0')).toBe('fe80:0:0:0::/64');
+		expect(addressKey('2001:0db8:0001:0002::')).toBe('2001:db8:1:2::/64');
 	});
 });

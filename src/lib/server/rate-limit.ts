@@ -140,6 +140,27 @@ export function refundAll(pairs: ReadonlyArray<readonly [Limiter, string]>): voi
 	for (const [l, k] of pairs) l.refund(k);
 }
 
+/**
+ * The key a client address is counted under. IPv4 as it is (also when written IPv4-mapped);
+ * IPv6 by its /64 prefix, since one subscriber or host usually holds a whole /64 and could
+ * otherwise step to a fresh address, and a fresh budget, at will.
+ */
+export function addressKey(ip: string | null): string {
+	if (!ip) return 'unknown';
+	const mapped = /^::ffff:(\d{1,3}(?:\.\d{1,3}){3})$/i.exec(ip);
+	if (mapped) return mapped[1];
+	if (!ip.includes(':')) return ip;
+	const bare = ip.split('%')[0].toLowerCase();
+	const [head, tail] = bare.split('::');
+	const h = head ? head.split(':') : [];
+	const t = tail === undefined ? [] : tail ? tail.split(':') : [];
+	const groups = tail === undefined ? h : [...h, ...Array<string>(Math.max(0, 8 - h.length - t.length)).fill('0'), ...t];
+	return `${groups
+		.slice(0, 4)
+		.map((g) => (parseInt(g, 16) || 0).toString(16))
+		.join(':')}::/64`;
+}
+
 export interface BackoffOptions {
 	/** failures allowed before any wait */
 	free: number;
