@@ -1,7 +1,10 @@
+import { request as httpRequest } from 'node:http';
+import Database from 'better-sqlite3';
 import { expect, request as playwrightRequest, type APIRequestContext, type Page } from '@playwright/test';
 
 // The demo team seeded on the fresh e2e database (scripts/e2e-server.mjs sets SEED_DEMO=1).
-export const BASE = `http://127.0.0.1:${process.env.E2E_PORT ?? 4317}`;
+export const PORT = Number(process.env.E2E_PORT ?? 4317);
+export const BASE = `http://127.0.0.1:${PORT}`;
 export const DEMO_PASSWORD = 'statewright-demo';
 export const TEAM = 'brindlemoor';
 export const DEMO = {
@@ -30,15 +33,38 @@ export async function signedInRequest(email: string, password = DEMO_PASSWORD): 
 	return ctx;
 }
 
-/** Creates an account through the sign-up form; returns a request context signed in as it. */
+/**
+ * Creates an account through the sign-up form and confirms it with the link mailed to it (which
+ * signs it in); returns a request context signed in as it.
+ */
 export async function signedUpRequest(name: string, email: string, password = 'a long e2e password'): Promise<APIRequestContext> {
 	const ctx = await playwrightRequest.newContext({ baseURL: BASE });
+	const after = await lastMailId(email);
 	const res = await ctx.post('/signup', { form: { name, email, password, next: '/' }, headers: FORM, maxRedirects: 0 });
-	expect(res.status(), `sign up ${email}`).toBe(303);
+	expect(res.status(), `sign up ${email}`).toBe(200);
+	expect(await res.text()).toContain('Check your mail');
+	const mail = await waitForMail(email, 'Confirm your e-mail address', after);
+	const confirmed = await ctx.get(linkIn(mail, `${BASE}/verify?token=`));
+	expect(confirmed.status(), `confirm ${email}`).toBe(200);
+	expect((await ctx.get('/account', { maxRedirects: 0 })).status(), `signed in as ${email}`).toBe(200);
 	return ctx;
 }
 
-let outboxReader: APIRequestContext | undefined;
+/** Signs up through the sign-up page in `page`, follows the confirmation link and lands on the home page, signed in. */
+export async function signUpPage(page: Page, name: string, email: string, password = 'a long enough password'): Promise<void> {
+	const after = await lastMailId(email);
+	await page.goto('/signup');
+	await page.getByLabel('Name').fill(name);
+	await page.getByLabel('E-mail').fill(email);
+	await page.getByLabel('Password').fill(password);
+	await page.getByRole('button', { name: 'Create account' }).click();
+	await expect(page.getByText('Check your mail')).toBeVisible();
+	const mail = await waitForMail(email, 'Confirm your e-mail address', after);
+	await page.goto(linkIn(mail, `${BASE}/verify?token=`));
+	await expect(page.getByText('Address confirmed')).toBeVisible();
+	await page.goto('/');
+	await expect(page.getByRole('heading', { name: 'Your teams' })).toBeVisible();
+}
 
 export interface Mail {
 	id: number;
@@ -47,26 +73,77 @@ export interface Mail {
 	text: string;
 }
 
+/*
+ * Caught mail is read the way whoever runs the server reads it, not through any route a client of
+ * the server could use: straight from the e2e server's SQLite file (scripts/e2e-server.mjs puts it
+ * under tmp/e2e-<port>/), read-only. /dev/outbox shows each person only their own mail.
+ */
+let caught: Database.Database | undefined;
+function caughtMail(): Database.Database {
+	caught ??= new Database(`tmp/e2e-${PORT}/statewright.db`, { readonly: true, fileMustExist: true });
+	return caught;
+}
+
+/** Every caught mail to `to` (exact address), newest first. */
+export function mailTo(to: string): Mail[] {
+	const rows = caughtMail()
+		.prepare(
+			`select id, envelope_to, subject, text from outbox
+			 where exists (select 1 from json_each(outbox.envelope_to) where json_each.value = ?) order by id desc`
+		)
+		.all(to.trim().toLowerCase()) as Array<{ id: number; envelope_to: string; subject: string; text: string }>;
+	return rows.map((r) => ({ id: r.id, to: JSON.parse(r.envelope_to) as string[], subject: r.subject, text: r.text }));
+}
+
+/** The id of the newest caught mail to `to` (0 when none): pass it as `after` to wait for the next one. */
+export async function lastMailId(to: string): Promise<number> {
+	return mailTo(to)[0]?.id ?? 0;
+}
+
 /**
- * Waits for a mail to `to` (optionally with a subject containing `subject`) in the fake SMTP
- * server's outbox, read through /dev/outbox.json as the demo owner.
+ * Waits for a mail to `to` (optionally with a subject containing `subject`, and newer than the mail
+ * id `after`) among the mail the e2e server's local SMTP catcher caught.
  */
 export async function waitForMail(to: string, subject?: string, after = 0): Promise<Mail> {
-	outboxReader ??= await signedInRequest(DEMO.owner);
 	let found: Mail | undefined;
 	await expect
 		.poll(
 			async () => {
-				const res = await outboxReader!.get(`/dev/outbox.json?to=${encodeURIComponent(to)}`);
-				expect(res.status()).toBe(200);
-				const { messages } = (await res.json()) as { messages: Mail[] };
-				found = messages.find((m) => m.id > after && (!subject || m.subject.includes(subject)));
+				found = mailTo(to).find((m) => m.id > after && (!subject || m.subject.includes(subject)));
 				return found !== undefined;
 			},
 			{ message: `mail to ${to}${subject ? ` about "${subject}"` : ''}`, timeout: 20_000 }
 		)
 		.toBe(true);
 	return found!;
+}
+
+/**
+ * A plain form post over HTTP from a chosen local source address (127.0.0.0/8 all reaches the
+ * server on 127.0.0.1), so a test can be a second client address: the server sees `from` as the
+ * client's address. Returns the status, headers and body, and the time until the full answer.
+ */
+export function postFrom(from: string, path: string, form: Record<string, string>): Promise<{ status: number; headers: Record<string, string | string[] | undefined>; body: string; ms: number }> {
+	const body = new URLSearchParams(form).toString();
+	return new Promise((resolve, reject) => {
+		const start = performance.now();
+		const req = httpRequest(
+			`${BASE}${path}`,
+			{
+				method: 'POST',
+				localAddress: from,
+				headers: { ...FORM, 'content-type': 'application/x-www-form-urlencoded', 'content-length': Buffer.byteLength(body) }
+			},
+			(res) => {
+				const chunks: Buffer[] = [];
+				res.on('data', (c: Buffer) => chunks.push(c));
+				res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks).toString('utf8'), ms: performance.now() - start }));
+				res.on('error', reject);
+			}
+		);
+		req.on('error', reject);
+		req.end(body);
+	});
 }
 
 /** The first link in a mail that starts with `prefix` (e.g. `${BASE}/reset?token=`). */

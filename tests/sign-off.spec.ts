@@ -1,5 +1,5 @@
 import { expect, test, type Browser, type Page } from '@playwright/test';
-import { BASE, DEMO, TEAM, linkIn, signedInRequest, waitForMail } from './helpers';
+import { BASE, DEMO, TEAM, lastMailId, linkIn, signedInRequest, waitForMail } from './helpers';
 
 // The review journey of a sheet, end to end in Chromium with the real mail catcher: a designer
 // saves Rev 1 and submits it; the checker gets the mail, opens its link, writes a note on a leg
@@ -23,13 +23,6 @@ async function signIn(browser: Browser, email: string): Promise<Page> {
 
 async function waitSaved(page: Page) {
 	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved', { timeout: 20_000 });
-}
-
-async function lastMailId(to: string): Promise<number> {
-	const owner = await signedInRequest(DEMO.owner);
-	const res = await owner.get(`/dev/outbox.json?to=${encodeURIComponent(to)}`);
-	const { messages } = (await res.json()) as { messages: Array<{ id: number }> };
-	return messages.reduce((m, x) => Math.max(m, x.id), 0);
 }
 
 const title = `V-204 review journey ${Date.now().toString(36)}`;

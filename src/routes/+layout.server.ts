@@ -9,6 +9,7 @@ export const load: LayoutServerLoad = async ({ locals }) => {
 	return {
 		user: locals.user,
 		teams: teams.map((t) => ({ slug: t.slug, name: t.name, role: t.role, memberCount: Number(t.member_count) })),
-		showOutbox: config().devTools && teams.some((t) => t.role === 'owner')
+		// the outbox holds only the signed-in person's own mail
+		showOutbox: config().devTools
 	};
 };

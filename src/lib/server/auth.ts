@@ -7,8 +7,9 @@ import { createUser, getUserByEmail, getUserById, markEmailVerified, normalizeEm
 import { getEmailToken, insertEmailToken, markEmailTokenUsed, retireEmailTokens } from './db/email-tokens';
 import { AppError } from './errors';
 import { newSecret, sha256 } from './secrets';
-import { mailLimits, refundAll, retryAfterSeconds, signInLimits, takeAll, type Limiter } from './rate-limit';
-import { passwordChangedMail, resetPasswordMail, verifyEmailMail } from './mail-templates';
+import { addressKey, mailLimits, retryAfterSeconds, signInLimits, takeAll, type Backoff, type Limiter } from './rate-limit';
+import { afterResponse } from './background';
+import { passwordChangedMail, resetPasswordMail, signUpAttemptMail, verifyEmailMail } from './mail-templates';
 import type { MailMessage } from './mail';
 
 /*
@@ -258,54 +259,84 @@ async function deliver(ctx: FlowContext, message: MailMessage): Promise<void> {
 function limitMail(email: string, ip: string | null, what: string): void {
 	const r = takeAll([
 		[mailLimits.perAddress, normalizeEmail(email)],
-		[mailLimits.perIp, ip ?? 'unknown']
+		[mailLimits.perIp, addressKey(ip)]
 	]);
 	if (!r.allowed) throw tooMany(r, what);
 }
 
+/**
+ * What a sign-up did. The caller answers both alike ("check your mail"), so the form never tells
+ * whether an address has an account: a new address gets an account and a confirmation link; a
+ * taken one gets a mail telling its owner that someone tried, with a way to reset the password.
+ */
+export type SignUpOutcome = { created: true; user: User } | { created: false; user: null };
+
 export async function signUp(
 	db: DB,
 	input: { name: string; email: string; password: string },
-	ctx: FlowContext
-): Promise<User> {
+	ctx: FlowContext,
+	options: { verified?: boolean } = {}
+): Promise<SignUpOutcome> {
 	const problem = passwordProblem(input.password, input.email);
 	if (problem) throw new AppError(400, 'weak-password', problem, 'password');
 	limitMail(input.email, ctx.ip, 'sign-ups from this address');
-	if (await getUserByEmail(db, input.email)) {
-		throw new AppError(409, 'email-taken', 'An account with this e-mail address already exists. Sign in, or reset its password.', 'email');
-	}
+	// hashed either way, so a taken address answers in the time a new one takes
 	const passwordHash = await hashPassword(input.password);
-	let user: User;
-	try {
-		user = await createUser(db, { email: input.email, name: input.name, passwordHash });
-	} catch (e) {
-		// two sign-ups racing for one address: the unique index decides
-		if (String(e).includes('UNIQUE')) throw new AppError(409, 'email-taken', 'An account with this e-mail address already exists.', 'email');
-		throw e;
+	const existing = await getUserByEmail(db, input.email);
+	let user: User | undefined;
+	if (!existing) {
+		try {
+			user = await createUser(db, { email: input.email, name: input.name, passwordHash, emailVerified: options.verified });
+		} catch (e) {
+			// two sign-ups racing for one address: the unique index decides, the loser is told by mail
+			if (!String(e).includes('UNIQUE')) throw e;
+		}
 	}
-	// the account stands even if the mail does not go out: the user can ask for it again
-	await sendVerification(db, user, ctx, { limited: false }).catch(() => {});
-	return user;
+	if (user) {
+		const created = user;
+		// the account stands even if the mail does not go out: the user can ask for it again
+		if (!options.verified) afterResponse('confirmation mail', () => sendVerification(db, created, ctx, { limited: false }));
+		return { created: true, user };
+	}
+	const email = input.email;
+	afterResponse('sign-up notice', async () => {
+		const owner = await getUserByEmail(db, email);
+		if (owner) await deliver(ctx, { to: owner.email, ...signUpAttemptMail({ name: owner.name, url: `${ctx.origin}/reset` }) });
+	});
+	return { created: false, user: null };
 }
 
-/** Checks e-mail and password under the per-account and per-IP limits. */
+export interface SignInLimits {
+	perAccountAndIp: Backoff;
+	perIp: Limiter;
+}
+
+/**
+ * Checks e-mail and password. Failures slow down this account from this client address only
+ * (growing delays), and this client address across accounts; never the account as a whole, so
+ * nobody can keep its owner out by guessing wrong on purpose.
+ */
 export async function signIn(
 	db: DB,
 	input: { email: string; password: string },
 	ip: string | null,
-	limits: { perAccount: Limiter; perIp: Limiter } = signInLimits
+	limits: SignInLimits = signInLimits
 ): Promise<User> {
-	const keys = [
-		[limits.perAccount, normalizeEmail(input.email)],
-		[limits.perIp, ip ?? 'unknown']
-	] as const;
-	const r = takeAll(keys);
-	if (!r.allowed) throw tooMany(r, 'sign-in attempts');
+	const client = addressKey(ip);
+	const pairKey = `${normalizeEmail(input.email)} ${client}`;
+	const fromIp = limits.perIp.take(client);
+	if (!fromIp.allowed) throw tooMany(fromIp, 'sign-in attempts from this address');
+	const pair = limits.perAccountAndIp.attempt(pairKey);
+	if (!pair.allowed) {
+		limits.perIp.refund(client);
+		throw tooMany(pair, 'sign-in attempts');
+	}
 	const user = await getUserByEmail(db, input.email);
 	if (!user) {
 		await burnTime(input.password);
 	} else if (await verifyPassword(user.password_hash, input.password)) {
-		refundAll(keys);
+		limits.perAccountAndIp.succeed(pairKey);
+		limits.perIp.refund(client);
 		return user;
 	}
 	throw new AppError(400, 'wrong-credentials', 'That e-mail address and password do not match an account. Check both, or reset the password.');
@@ -348,9 +379,18 @@ export async function verifyEmail(db: DB, token: string): Promise<{ user: User; 
 	return { user: (await getUserById(db, user.id))!, alreadyVerified: false };
 }
 
-/** Sends a reset link if the address has an account. Says nothing either way (no account probing). */
+/**
+ * Answers alike whether or not the address has an account: only the limits (keyed by the address
+ * as typed, never by whether it exists) run on the request. Looking the account up, making the
+ * link and sending the mail happen after the answer has gone out, so neither the answer nor its
+ * timing tells a caller anything. A mail that fails is logged; the person can ask again.
+ */
 export async function requestPasswordReset(db: DB, email: string, ctx: FlowContext): Promise<void> {
 	limitMail(email, ctx.ip, 'reset requests');
+	afterResponse('reset mail', () => sendResetLink(db, email, ctx));
+}
+
+async function sendResetLink(db: DB, email: string, ctx: FlowContext): Promise<void> {
 	const user = await getUserByEmail(db, email);
 	if (!user) return;
 	const token = newSecret();

@@ -3,7 +3,7 @@ import { can, ROLE_LABEL, type Capability, type Role } from '../roles';
 import type { DB, Team } from './db/schema';
 import { getDb } from './db';
 import { getTeamBySlug } from './db/teams';
-import { getMembership, ownsAnyTeam } from './db/memberships';
+import { getMembership } from './db/memberships';
 import type { SessionUser } from './auth';
 import type { TokenPrincipal } from './api-tokens';
 
@@ -127,11 +127,4 @@ export async function requireTeam(event: GuardEvent, teamSlug: string, capabilit
 	if (!access) notFound();
 	requireCapability(access, capability);
 	return access;
-}
-
-/** Owners of at least one team (the dev outbox is theirs to read). */
-export async function requireAnyOwner(event: GuardEvent, db: DB = getDb()): Promise<SessionUser> {
-	const user = requireUser(event);
-	if (!(await ownsAnyTeam(db, user.id))) error(403, { code: 'forbidden', message: 'Only team owners can read the outbox.' });
-	return user;
 }

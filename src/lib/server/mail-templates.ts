@@ -71,6 +71,20 @@ export function resetPasswordMail(input: { name: string; url: string; expiresAt:
 	);
 }
 
+export function signUpAttemptMail(input: { name: string; url: string }): Composed {
+	return compose(
+		'Someone tried to sign up to Statewright with your address',
+		'A sign-up with your address',
+		[
+			`Hello ${esc(input.name)},`,
+			'someone just tried to create a Statewright account with this e-mail address. It already has an account — yours — so nothing was created and nothing about your account changed.',
+			'If that was you, you do not need a second account: sign in, or if you have forgotten the password, reset it with the link below.'
+		],
+		{ label: 'Reset your password', url: input.url },
+		'If it was not you, ignore this mail: your password stays as it is, and nobody was told that the address has an account.'
+	);
+}
+
 export function inviteMail(input: {
 	teamName: string;
 	inviterName: string;

@@ -1,8 +1,8 @@
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Kysely } from 'kysely';
 import { createTestDb } from './db';
 import type { Database } from './db/schema';
-import { createMailer, startFakeSmtp, type Mailer } from './mail';
+import { caughtSummary, createMailer, startFakeSmtp, type Mailer } from './mail';
 import { getOutboxMessage, listOutboxMessages } from './db/outbox';
 import { inviteMail } from './mail-templates';
 
@@ -15,6 +15,32 @@ afterEach(async () => {
 });
 
 describe('mail through the local fake SMTP server', () => {
+	it('prints each caught message on the console: recipients, subject and its links', async () => {
+		db = await createTestDb();
+		const logged = vi.spyOn(console, 'log').mockImplementation(() => {});
+		try {
+			// the app's default: no printer given, so the console
+			mailer = await createMailer({ db, from: 'Statewright <no-reply@statewright.test>' });
+			await mailer.send({
+				to: 'Someone@Example.com',
+				subject: 'Reset your Statewright password',
+				text: 'Follow https://statewright.test/reset?token=abc_DEF-123 within the hour.\nOr https://statewright.test/signin.'
+			});
+			const printed = logged.mock.calls.map((c) => String(c[0])).join('\n');
+			expect(printed).toContain('[statewright] mail caught for someone@example.com: Reset your Statewright password');
+			expect(printed).toContain('  link: https://statewright.test/reset?token=abc_DEF-123');
+			expect(printed).toMatch(/  link: https:\/\/statewright.test\/signin$/m);
+		} finally {
+			logged.mockRestore();
+		}
+	});
+
+	it('summarises a message for the console, each link once', () => {
+		expect(caughtSummary({ envelopeTo: ['a@x.example', 'b@x.example'], subject: 'Hi', text: 'see http://h/a and http://h/a, then <http://h/b>' })).toBe(
+			['[statewright] mail caught for a@x.example, b@x.example: Hi', '  link: http://h/a', '  link: http://h/b'].join('\n')
+		);
+	});
+
 	it('delivers over SMTP and stores the parsed message before send() resolves', async () => {
 		db = await createTestDb();
 		mailer = await createMailer({ db, from: 'Statewright <no-reply@statewright.test>' });

@@ -9,7 +9,9 @@ import { insertOutboxMessage } from './db/outbox';
  * Outgoing mail. With SMTP_URL set, nodemailer sends through that server. Without it
  * (development, the demo, tests) a real SMTP server from `smtp-server` listens on 127.0.0.1 on a
  * free port, nodemailer delivers to it over TCP like to any other server, and every message it
- * receives is parsed and stored in the `outbox` table, where /dev/outbox and the tests read it.
+ * receives is parsed and stored in the `outbox` table. Whoever runs the server reads it on the
+ * console: the catcher prints each message's recipients, subject and links. /dev/outbox shows a
+ * signed-in person only the mail addressed to their own address.
  */
 
 export interface MailMessage {
@@ -33,8 +35,23 @@ function addressesText(a: AddressObject | AddressObject[] | undefined): string {
 	return (Array.isArray(a) ? a : [a]).map((x) => x.text).join(', ');
 }
 
-/** Starts the local fake SMTP server that stores what it receives in `db`'s outbox. */
-export async function startFakeSmtp(db: DB): Promise<{ port: number; close(): Promise<void> }> {
+/** Where the catcher prints what it caught: the server's console unless told otherwise. */
+export type CaughtPrinter = (text: string) => void;
+
+const LINK = /https?:\/\/[^\s<>"]+/g;
+
+/** The console lines for one caught message: recipients, subject and every link in its text. */
+export function caughtSummary(m: { envelopeTo: string[]; subject: string; text: string }): string {
+	// a full stop or comma after a link ends the sentence, not the link
+	const links = [...new Set((m.text.match(LINK) ?? []).map((l) => l.replace(/[.,;:!?)\]]+$/, '')))];
+	return [`[statewright] mail caught for ${m.envelopeTo.join(', ')}: ${m.subject}`, ...links.map((l) => `  link: ${l}`)].join('\n');
+}
+
+/**
+ * Starts the local fake SMTP server that stores what it receives in `db`'s outbox and prints
+ * each message with `print`.
+ */
+export async function startFakeSmtp(db: DB, print: CaughtPrinter = (t) => console.log(t)): Promise<{ port: number; close(): Promise<void> }> {
 	const server = new SMTPServer({
 		secure: false,
 		authOptional: true,
@@ -48,12 +65,13 @@ export async function startFakeSmtp(db: DB): Promise<{ port: number; close(): Pr
 			stream.on('error', callback);
 			stream.on('end', () => {
 				const raw = Buffer.concat(chunks);
+				const envelopeTo = session.envelope.rcptTo.map((r) => r.address.toLowerCase());
 				simpleParser(raw)
-					.then((parsed) =>
-						insertOutboxMessage(db, {
+					.then(async (parsed) => {
+						await insertOutboxMessage(db, {
 							message_id: parsed.messageId ?? null,
 							envelope_from: session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
-							envelope_to: JSON.stringify(session.envelope.rcptTo.map((r) => r.address.toLowerCase())),
+							envelope_to: JSON.stringify(envelopeTo),
 							from_header: addressesText(parsed.from),
 							to_header: addressesText(parsed.to),
 							subject: parsed.subject ?? '',
@@ -61,8 +79,9 @@ export async function startFakeSmtp(db: DB): Promise<{ port: number; close(): Pr
 							html: typeof parsed.html === 'string' ? parsed.html : null,
 							raw: raw.toString('utf8'),
 							received_at: Date.now()
-						})
-					)
+						});
+						print(caughtSummary({ envelopeTo, subject: parsed.subject ?? '', text: parsed.text ?? '' }));
+					})
 					// answer 250 only once the message is stored, so a sent mail is readable at once
 					.then(() => callback(), (e: unknown) => callback(e instanceof Error ? e : new Error(String(e))));
 			});
@@ -78,13 +97,13 @@ export async function startFakeSmtp(db: DB): Promise<{ port: number; close(): Pr
 	return { port, close: () => new Promise<void>((resolve) => server.close(() => resolve())) };
 }
 
-export async function createMailer(options: { db: DB; smtpUrl?: string; from: string }): Promise<Mailer> {
+export async function createMailer(options: { db: DB; smtpUrl?: string; from: string; print?: CaughtPrinter }): Promise<Mailer> {
 	let transport: Transporter;
 	let fake: Awaited<ReturnType<typeof startFakeSmtp>> | undefined;
 	if (options.smtpUrl) {
 		transport = nodemailer.createTransport(options.smtpUrl);
 	} else {
-		fake = await startFakeSmtp(options.db);
+		fake = await startFakeSmtp(options.db, options.print);
 		transport = nodemailer.createTransport({ host: '127.0.0.1', port: fake.port, secure: false, ignoreTLS: true });
 	}
 	return {

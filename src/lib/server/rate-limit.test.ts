@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { createLimiter, refundAll, retryAfterSeconds, takeAll } from './rate-limit';
+import { addressKey, createBackoff, createLimiter, refundAll, retryAfterSeconds, takeAll } from './rate-limit';
 
 function clock(start = 1_000_000) {
 	let t = start;
@@ -108,5 +108,69 @@ describe('takeAll', () => {
 		expect(a.available('x')).toBe(4);
 		refundAll([[b, 'y']]);
 		expect(b.available('y')).toBe(1);
+	});
+});
+
+describe('createBackoff', () => {
+	const options = { free: 3, baseMs: 500, maxMs: 4000, forgetMs: 60_000 };
+
+	it('lets the free failures through, then doubles the wait after each further one, up to the cap', () => {
+		const c = clock();
+		const b = createBackoff({ ...options, now: c.now });
+		for (let i = 0; i < 3; i++) expect(b.attempt('k').allowed).toBe(true);
+		const waits: number[] = [];
+		for (let i = 0; i < 6; i++) {
+			const r = b.attempt('k');
+			expect(r.allowed).toBe(false);
+			const wait = (r as { retryAfterMs: number }).retryAfterMs;
+			waits.push(wait);
+			c.advance(wait - 1);
+			expect(b.attempt('k').allowed).toBe(false);
+			c.advance(1);
+			expect(b.attempt('k').allowed).toBe(true);
+		}
+		expect(waits).toEqual([500, 1000, 2000, 4000, 4000, 4000]);
+	});
+
+	it('keeps keys apart, forgets a success at once and a quiet key after forgetMs', () => {
+		const c = clock();
+		const b = createBackoff({ ...options, now: c.now });
+		for (let i = 0; i < 3; i++) expect(b.attempt('guessed from A').allowed).toBe(true);
+		expect(b.attempt('guessed from A').allowed).toBe(false);
+		expect(b.attempt('guessed from B').allowed).toBe(true);
+		b.succeed('guessed from B');
+		expect(b.failures('guessed from B')).toBe(0);
+		expect(b.failures('guessed from A')).toBe(3);
+		c.advance(60_000);
+		expect(b.failures('guessed from A')).toBe(0);
+		expect(b.attempt('guessed from A').allowed).toBe(true);
+	});
+
+	it('counts attempts up front, so a burst sent at once cannot all slip through', () => {
+		const b = createBackoff({ ...options, now: () => 0 });
+		const allowed = Array.from({ length: 20 }, () => b.attempt('k')).filter((r) => r.allowed).length;
+		expect(allowed).toBe(options.free);
+	});
+
+	it('keeps at most maxKeys keys', () => {
+		const b = createBackoff({ ...options, maxKeys: 100, now: () => 0 });
+		for (let i = 0; i < 1000; i++) b.attempt(`k${i}`);
+		expect(b.size).toBe(100);
+	});
+});
+
+describe('addressKey', () => {
+	it('keeps IPv4 as it is, unwraps IPv4-mapped IPv6, and counts IPv6 by its /64', () => {
+		expect(addressKey('198.51.100.7')).toBe('198.51.100.7');
+		expect(addressKey('::ffff:198.51.100.7')).toBe('198.51.100.7');
+		expect(addressKey(null)).toBe('unknown');
+		// two addresses of one /64 are one client; the next /64 is another
+		expect(addressKey('2001:db8:1:2:aaaa::1')).toBe('2001:db8:1:2::/64');
+		expect(addressKey('2001:DB8:1:2:bbbb:cccc:dddd:eeee')).toBe('2001:db8:1:2::/64');
+		expect(addressKey('2001:db8:1:3::1')).toBe('2001:db8:1:3::/64');
+		expect(addressKey('2001:db8::1')).toBe('2001:db8:0:0::/64');
+		expect(addressKey('::1')).toBe('0:0:0:0::/64');
+		expect(addressKey('fe80::1%eth0')).toBe('fe80:0:0:0::/64');
+		expect(addressKey('2001:0db8:0001:0002::')).toBe('2001:db8:1:2::/64');
 	});
 });

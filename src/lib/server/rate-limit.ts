@@ -141,14 +141,117 @@ export function refundAll(pairs: ReadonlyArray<readonly [Limiter, string]>): voi
 }
 
 /**
- * Sign-in attempts. Every attempt takes a token from its account's bucket (keyed by the
- * normalised e-mail, whether or not such an account exists, so the limit reveals nothing) and
- * from its IP's bucket; a successful sign-in gives both back, so only failures count.
- * Five failures lock an account for about a minute per further try; thirty failures from one
- * address slow that address to one try every ten seconds.
+ * The key a client address is counted under. IPv4 as it is (also when written IPv4-mapped);
+ * IPv6 by its /64 prefix, since one subscriber or host usually holds a whole /64 and could
+ * otherwise step to a fresh address, and a fresh budget, at will.
+ */
+export function addressKey(ip: string | null): string {
+	if (!ip) return 'unknown';
+	const mapped = /^::ffff:(\d{1,3}(?:\.\d{1,3}){3})$/i.exec(ip);
+	if (mapped) return mapped[1];
+	if (!ip.includes(':')) return ip;
+	const bare = ip.split('%')[0].toLowerCase();
+	const [head, tail] = bare.split('::');
+	const h = head ? head.split(':') : [];
+	const t = tail === undefined ? [] : tail ? tail.split(':') : [];
+	const groups = tail === undefined ? h : [...h, ...Array<string>(Math.max(0, 8 - h.length - t.length)).fill('0'), ...t];
+	return `${groups
+		.slice(0, 4)
+		.map((g) => (parseInt(g, 16) || 0).toString(16))
+		.join(':')}::/64`;
+}
+
+export interface BackoffOptions {
+	/** failures allowed before any wait */
+	free: number;
+	/** the first wait; each further failure doubles it */
+	baseMs: number;
+	/** the longest wait */
+	maxMs: number;
+	/** a key quiet this long starts afresh */
+	forgetMs: number;
+	/** keys kept at most (default 50 000; least recently used go first) */
+	maxKeys?: number;
+	/** clock in ms, for tests */
+	now?: () => number;
+}
+
+export interface Backoff {
+	/**
+	 * Counts one attempt for `key` as a failure, or refuses it while the key must wait. The failure
+	 * is counted up front, so attempts sent at once cannot slip past it; `succeed` forgets the key.
+	 */
+	attempt(key: string): TakeResult;
+	/** a successful attempt: the key starts afresh */
+	succeed(key: string): void;
+	/** failures counted for a key (0 once forgotten) */
+	failures(key: string): number;
+	reset(key?: string): void;
+	readonly size: number;
+}
+
+/**
+ * Growing delays per key: `free` failures cost nothing, then each failure makes the key wait
+ * `baseMs`, 2·`baseMs`, 4·`baseMs`, … up to `maxMs` before its next attempt. Refused attempts do
+ * not count. A key never gets locked for good: it waits at most `maxMs`.
+ */
+export function createBackoff(options: BackoffOptions): Backoff {
+	const { free, baseMs, maxMs, forgetMs } = options;
+	const maxKeys = options.maxKeys ?? 50_000;
+	const now = options.now ?? Date.now;
+	const entries = new Map<string, { failures: number; at: number }>();
+
+	const waitAfter = (failures: number) => (failures < free ? 0 : Math.min(maxMs, baseMs * 2 ** Math.min(failures - free, 40)));
+	function current(key: string, t: number) {
+		const e = entries.get(key);
+		if (e && t - e.at >= forgetMs) {
+			entries.delete(key);
+			return undefined;
+		}
+		return e;
+	}
+
+	return {
+		get size() {
+			return entries.size;
+		},
+		attempt(key) {
+			const t = now();
+			const e = current(key, t);
+			const failures = e?.failures ?? 0;
+			if (e) {
+				const readyAt = e.at + waitAfter(failures);
+				if (t < readyAt) return { allowed: false, retryAfterMs: readyAt - t };
+			}
+			entries.delete(key);
+			entries.set(key, { failures: failures + 1, at: t });
+			if (entries.size > maxKeys) entries.delete(entries.keys().next().value as string);
+			return { allowed: true, remaining: Math.max(0, free - failures - 1) };
+		},
+		succeed(key) {
+			entries.delete(key);
+		},
+		failures(key) {
+			return current(key, now())?.failures ?? 0;
+		},
+		reset(key) {
+			if (key === undefined) entries.clear();
+			else entries.delete(key);
+		}
+	};
+}
+
+/**
+ * Sign-in attempts. Failures count per (account, client address) with growing delays: five free,
+ * then 1 s, 2 s, 4 s, … up to 15 minutes between tries from that address for that account. The
+ * account itself is never locked: its owner signing in from another address is not slowed at all
+ * by someone guessing elsewhere. Each client address also has a budget across all accounts (thirty
+ * failures, then one try every ten seconds), which bounds guessing at many accounts from one place.
+ * The account key is the normalised e-mail whether or not such an account exists, so the limits
+ * reveal nothing.
  */
 export const signInLimits = {
-	perAccount: createLimiter({ ratePerSecond: 1 / 60, burst: 5 }),
+	perAccountAndIp: createBackoff({ free: 5, baseMs: 1000, maxMs: 15 * 60_000, forgetMs: 24 * 3600_000 }),
 	perIp: createLimiter({ ratePerSecond: 1 / 10, burst: 30 })
 };
 

@@ -1,6 +1,7 @@
 import { config } from './config';
 import { getDb, migrateAppDatabase } from './db';
 import { getMailer } from './mail';
+import { backgroundSettled } from './background';
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_TEAM, seedDemo } from './demo';
 import { getTeamBySlug } from './db/teams';
 import { deleteExpiredSessions } from './db/sessions';
@@ -22,7 +23,10 @@ export async function startApp(options: { dev?: boolean } = {}): Promise<void> {
 	// adapter-node emits this after it stopped taking requests (SIGINT/SIGTERM)
 	process.once('sveltekit:shutdown', () => {
 		clearInterval(timer);
-		void mailer.close().finally(() => db.destroy());
+		// mail queued after an answer (reset links, sign-up notices) goes out before the catcher stops
+		void backgroundSettled()
+			.then(() => mailer.close())
+			.finally(() => db.destroy());
 	});
 
 	const shownHost = c.host === '0.0.0.0' || c.host === '::' ? 'localhost' : c.host;
@@ -34,7 +38,7 @@ export async function startApp(options: { dev?: boolean } = {}): Promise<void> {
 		url ? `  ${url}` : '  (development server)',
 		`  database  ${c.databasePath}${applied.length ? `  (applied ${applied.length} migration${applied.length > 1 ? 's' : ''})` : ''}`,
 		mailer.catching
-			? `  mail      caught by the local SMTP server on 127.0.0.1:${mailer.port}${c.devTools ? `; read it at ${url}/dev/outbox` : ' (SMTP_URL unset: mail is not delivered)'}`
+			? `  mail      caught by the local SMTP server on 127.0.0.1:${mailer.port} and printed here, each message with its links${c.devTools ? `; signed-in people read their own at ${url}/dev/outbox` : ' (SMTP_URL unset: mail is not delivered)'}`
 			: '  mail      sent through SMTP_URL'
 	];
 	if (seed.seeded || (await getTeamBySlug(db, DEMO_TEAM.slug))) {

@@ -7,6 +7,7 @@ import { createMailer, type Mailer } from './mail';
 import type { FlowContext } from './auth';
 import { listOutboxMessages } from './db/outbox';
 import { mailLimits, signInLimits, inviteLimits } from './rate-limit';
+import { backgroundSettled } from './background';
 
 /**
  * For integration tests: a fresh migrated in-memory database and a real local fake SMTP server
@@ -16,18 +17,27 @@ export async function setupIntegration(origin = 'http://statewright.test'): Prom
 	db: Kysely<Database>;
 	mailer: Mailer;
 	ctx: FlowContext;
+	/** the mail caught for an address, once the mail sent after earlier answers has gone out */
 	mailTo(address: string): Promise<Array<{ subject: string; text: string }>>;
+	/** what the catcher printed on the console, one entry per caught message */
+	printed: string[];
 	close(): Promise<void>;
 }> {
 	const db = await createTestDb();
-	const mailer = await createMailer({ db, from: 'Statewright <no-reply@statewright.test>' });
-	for (const l of [mailLimits.perAddress, mailLimits.perIp, signInLimits.perAccount, signInLimits.perIp, inviteLimits]) l.reset();
+	const printed: string[] = [];
+	const mailer = await createMailer({ db, from: 'Statewright <no-reply@statewright.test>', print: (t) => printed.push(t) });
+	for (const l of [mailLimits.perAddress, mailLimits.perIp, signInLimits.perAccountAndIp, signInLimits.perIp, inviteLimits]) l.reset();
 	return {
 		db,
 		mailer,
 		ctx: { origin, send: (m) => mailer.send(m), ip: '192.0.2.10' },
-		mailTo: (address) => listOutboxMessages(db, { to: address }),
+		async mailTo(address) {
+			await backgroundSettled();
+			return listOutboxMessages(db, { to: address });
+		},
+		printed,
 		async close() {
+			await backgroundSettled();
 			await mailer.close();
 			await db.destroy();
 		}

@@ -3,6 +3,7 @@ import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { PASSWORD_MIN, signUp, startSession } from '$lib/server/auth';
+import { normalizeEmail } from '$lib/server/db/users';
 import { fields, parseForm, runAction, safeNext, readFormData } from '$lib/server/forms';
 import { clientMeta, flowContext } from '$lib/server/request';
 import { inspectInvite } from '$lib/server/teams';
@@ -28,14 +29,21 @@ export const actions: Actions = {
 	default: async (event) => {
 		const parsed = parseForm(schema, await readFormData(event.request), ['name', 'email', 'next', 'invite']);
 		if (!parsed.ok) return parsed.failure;
-		const { name, email, password, next, invite } = parsed.data;
+		const { name, email, password, invite } = parsed.data;
 		return runAction(
 			parsed.values,
 			async () => {
 				const db = getDb();
-				const user = await signUp(db, { name, email, password }, flowContext(event));
-				await startSession(db, event, user.id, clientMeta(event));
-				redirect(303, invite ? `/invite/${encodeURIComponent(invite)}` : safeNext(next));
+				// an open invitation for this very address proves the address: the invitee joins at once
+				const view = invite ? await inspectInvite(db, invite) : null;
+				const invited = view?.state === 'open' && normalizeEmail(view.invite.email) === normalizeEmail(email);
+				const outcome = await signUp(db, { name, email, password }, flowContext(event), { verified: invited });
+				if (outcome.created && invited) {
+					await startSession(db, event, outcome.user.id, clientMeta(event));
+					redirect(303, `/invite/${encodeURIComponent(invite!)}`);
+				}
+				// a new address and a taken one get the same answer: the rest happens by mail
+				return { sent: true as const, email: normalizeEmail(email) };
 			},
 			event
 		);

@@ -12,7 +12,7 @@ import { createUser, getUserByEmail, markEmailVerified } from './users';
 import { createTeam, getTeamBySlug, listTeamsForUser, slugify, SLUG_PATTERN } from './teams';
 import { addMember, countOwners, getMembership, listMembers, ownsAnyTeam } from './memberships';
 import { insertSession, getSessionAndUser, deleteExpiredSessions } from './sessions';
-import { insertOutboxMessage, listOutboxMessages } from './outbox';
+import { clearMailFor, getMailFor, insertOutboxMessage, listMailFor, listOutboxMessages } from './outbox';
 import { logTeamEvent, listTeamEvents } from './team-events';
 import { match as slugMatcher } from '../../../params/slug';
 
@@ -165,5 +165,23 @@ describe('sessions and outbox', () => {
 		expect(await listOutboxMessages(db, { to: 'A@example.com' })).toHaveLength(1);
 		expect(await listOutboxMessages(db, { to: '%' })).toHaveLength(0);
 		expect(await listOutboxMessages(db)).toHaveLength(2);
+	});
+
+	it("hands a person only their own mail: exact address, since their account was made, and clears only that", async () => {
+		db = await createTestDb();
+		const base = { message_id: null, envelope_from: 'f@x', from_header: 'f@x', to_header: '', subject: 's', text: 't', html: null, raw: 'r' };
+		const mine = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['a_b@example.com']), received_at: 2000 });
+		const before = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['a_b@example.com']), received_at: 999 });
+		// addresses that a LIKE pattern, or a stripped one, would have matched
+		const lookalike = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['axb@example.com']), received_at: 2000 });
+		const stripped = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['ab@example.com']), received_at: 2000 });
+		const shared = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['a_b@example.com', 'c@example.com']), received_at: 2000 });
+		expect((await listMailFor(db, 'A_B@example.com', 1000)).map((m) => m.id)).toEqual([shared, mine]);
+		expect(await getMailFor(db, mine, 'a_b@example.com', 1000)).toBeDefined();
+		for (const id of [before, lookalike, stripped]) expect(await getMailFor(db, id, 'a_b@example.com', 1000)).toBeUndefined();
+		expect(await listMailFor(db, '%', 0)).toEqual([]);
+		expect(await listMailFor(db, 'a%b@example.com', 0)).toEqual([]);
+		expect(await clearMailFor(db, 'a_b@example.com')).toBe(2);
+		expect((await listOutboxMessages(db)).map((m) => m.id).sort((x, y) => x - y)).toEqual([lookalike, stripped, shared]);
 	});
 });

@@ -1,3 +1,4 @@
+import { sql } from 'kysely';
 import type { DB, OutboxMessage } from './schema';
 
 export type NewOutboxMessage = Omit<OutboxMessage, 'id'>;
@@ -27,6 +28,37 @@ export async function getOutboxMessage(db: DB, id: number): Promise<OutboxMessag
 	return db.selectFrom('outbox').selectAll().where('id', '=', id).executeTakeFirst();
 }
 
-export async function clearOutbox(db: DB): Promise<void> {
-	await db.deleteFrom('outbox').execute();
+/*
+ * One person's mail. An address matches only exactly (against the JSON array of envelope
+ * recipients, never with LIKE), and only mail received since `since` (when the account was made:
+ * mail sent to an address before anyone held it is not handed to whoever signs up with it later).
+ */
+function addressedTo(address: string) {
+	return sql<boolean>`exists (select 1 from json_each(outbox.envelope_to) where json_each.value = ${address.trim().toLowerCase()})`;
+}
+
+/** Newest first: the mail whose envelope names `address`, received at or after `since`. */
+export async function listMailFor(db: DB, address: string, since: number, limit = 200): Promise<OutboxSummary[]> {
+	return db
+		.selectFrom('outbox')
+		.select(['id', 'message_id', 'envelope_from', 'envelope_to', 'from_header', 'to_header', 'subject', 'text', 'received_at'])
+		.where(addressedTo(address))
+		.where('received_at', '>=', since)
+		.orderBy('id', 'desc')
+		.limit(Math.min(Math.max(limit, 1), 500))
+		.execute();
+}
+
+/** One message, only if it is addressed to `address` and arrived at or after `since`. */
+export async function getMailFor(db: DB, id: number, address: string, since: number): Promise<OutboxMessage | undefined> {
+	return db.selectFrom('outbox').selectAll().where('id', '=', id).where(addressedTo(address)).where('received_at', '>=', since).executeTakeFirst();
+}
+
+/** Deletes the mail addressed to `address` alone; mail that also went to others stays. Returns how many. */
+export async function clearMailFor(db: DB, address: string): Promise<number> {
+	const r = await db
+		.deleteFrom('outbox')
+		.where('envelope_to', '=', JSON.stringify([address.trim().toLowerCase()]))
+		.executeTakeFirst();
+	return Number(r.numDeletedRows);
 }

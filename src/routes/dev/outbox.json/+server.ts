@@ -1,15 +1,15 @@
 import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { getDb } from '$lib/server/db';
-import { listOutboxMessages } from '$lib/server/db/outbox';
+import { listMailFor } from '$lib/server/db/outbox';
 import { requireOutbox } from '../guard';
 
-/** The outbox as JSON for tests and scripts: ?to=<address> filters, newest first. */
+/** The signed-in person's own caught mail as JSON, newest first. Nobody else's, whatever is asked. */
 export const GET: RequestHandler = async (event) => {
-	await requireOutbox(event);
-	const to = event.url.searchParams.get('to') ?? undefined;
-	const messages = await listOutboxMessages(getDb(), { to, limit: 200 });
+	const me = await requireOutbox(event);
+	const messages = await listMailFor(getDb(), me.address, me.since);
 	return json({
+		address: me.address,
 		messages: messages.map((m) => ({
 			id: m.id,
 			to: JSON.parse(m.envelope_to) as string[],
