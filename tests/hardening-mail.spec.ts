@@ -229,16 +229,16 @@ test.describe('hardening: mail, enumeration, lock-out', () => {
 	});
 
 	test('whoever runs the server reads every caught message on its console: recipient, subject, links', async ({ playwright }) => {
-		// a second copy of the built app, started as the README's `npm start` runs it: no NODE_ENV, no SMTP_URL
-		// (ORIGIN set, as for any plain-http use: without it adapter-node assumes https)
+		// a second copy of the built app, started as the README's `npm start` runs it (scripts/start.mjs):
+		// no NODE_ENV, no SMTP_URL, no ORIGIN — plain http on whatever address it is reached by
 		const port = PORT + 800;
 		const base = `http://127.0.0.1:${port}`;
 		const dir = `tmp/e2e-console-${port}`;
 		rmSync(dir, { recursive: true, force: true });
 		mkdirSync(dir, { recursive: true });
-		const env: Record<string, string | undefined> = { ...process.env, PORT: String(port), HOST: '127.0.0.1', ORIGIN: base, DATABASE_PATH: `${dir}/statewright.db`, SEED_DEMO: '0' };
-		for (const k of ['NODE_ENV', 'SMTP_URL', 'STATEWRIGHT_DEV_TOOLS']) delete env[k];
-		const child = spawn(process.execPath, ['build/index.js'], { env, stdio: ['ignore', 'pipe', 'pipe'] });
+		const env: Record<string, string | undefined> = { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATABASE_PATH: `${dir}/statewright.db`, SEED_DEMO: '0' };
+		for (const k of ['NODE_ENV', 'SMTP_URL', 'STATEWRIGHT_DEV_TOOLS', 'ORIGIN', 'PROTOCOL_HEADER']) delete env[k];
+		const child = spawn(process.execPath, ['scripts/start.mjs'], { env, stdio: ['ignore', 'pipe', 'pipe'] });
 		let out = '';
 		child.stdout!.on('data', (c: Buffer) => (out += c.toString('utf8')));
 		child.stderr!.on('data', (c: Buffer) => (out += c.toString('utf8')));
@@ -258,6 +258,16 @@ test.describe('hardening: mail, enumeration, lock-out', () => {
 			// the printed link is the real one: it opens the form to choose a new password
 			const page = await api.get(printed!);
 			expect(await page.text()).toContain('Choose a new password');
+			// plain http without ORIGIN: a browser's own form post is not taken for a cross-site one, and
+			// the session cookie is not marked Secure (a browser would drop it on http)
+			const signin = await api.post('/signin', { form: { email, password: form.password }, headers: { origin: base, accept: 'text/html' }, maxRedirects: 0 });
+			expect(signin.status()).toBe(303);
+			const cookie = signin.headers()['set-cookie'] ?? '';
+			expect(cookie).toMatch(/^statewright_session=/);
+			expect(cookie).not.toMatch(/;\s*Secure/i);
+			// a client cannot talk the server into https by sending the header itself
+			const spoofed = await api.post('/signin', { form: { email, password: form.password }, headers: { origin: base, accept: 'text/html', 'x-statewright-scheme': 'https' }, maxRedirects: 0 });
+			expect(spoofed.headers()['set-cookie'] ?? '').toMatch(/^statewright_session=/);
 		} finally {
 			await api.dispose();
 			if (child.exitCode === null) await new Promise((r) => child.once('exit', r).kill('SIGTERM'));
