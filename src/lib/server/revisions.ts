@@ -27,6 +27,7 @@ import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
 import { diffRevisions, type RevisionDiff } from '$lib/revisions/diff';
 import type { TitleSignOff } from '$lib/export/title';
 import type { RevisionEvent, RevisionFull, RevisionSummary, Signature } from '$lib/review/types';
+import { plainText } from '$lib/plain-text';
 
 export type { RevisionEvent, RevisionFull, RevisionSummary, Signature };
 
@@ -55,13 +56,11 @@ export type { RevisionEvent, RevisionFull, RevisionSummary, Signature };
  *   message) comes back in the error, so nothing is lost and it can be compared and merged.
  */
 
-export const messageSchema = z
-	.string({ error: 'Describe what changed in this revision.' })
+export const messageSchema = plainText('The revision message', 'lines', 'Describe what changed in this revision.')
 	.transform((s) => s.trim())
 	.pipe(z.string().min(1, { error: 'Describe what changed in this revision (a line is enough).' }).max(2000, { error: 'Use at most 2000 characters for the revision message.' }));
 
-export const noteSchema = z
-	.string()
+export const noteSchema = plainText('The note', 'lines', 'note must be text.')
 	.optional()
 	.transform((s) => (s ?? '').trim())
 	.pipe(z.string().max(2000, { error: 'Use at most 2000 characters for the note.' }));

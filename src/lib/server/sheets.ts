@@ -10,6 +10,7 @@ import { fixState, ThermoError } from '$lib/thermo';
 import { parseSheetDoc } from '$lib/sheets/schema';
 import { workedExample } from '$lib/sheets/templates';
 import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
+import { controlCharProblem, plainText } from '$lib/plain-text';
 
 /*
  * Sheets: create (blank, from a worked example, or from a document a script sends), read, list
@@ -21,8 +22,7 @@ import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
 /** A sheet id as it appears in URLs: 16 symbols of the id alphabet. */
 export const SHEET_ID = /^[a-z2-9]{16}$/;
 
-export const titleSchema = z
-	.string({ error: 'Enter a title for the sheet.' })
+export const titleSchema = plainText('The title', 'line', 'Enter a title for the sheet.')
 	.transform((s) => s.replace(/\s+/g, ' ').trim())
 	.pipe(z.string().min(1, { error: 'Enter a title for the sheet.' }).max(120, { error: 'Use at most 120 characters for the title.' }));
 
@@ -167,6 +167,8 @@ export async function readSheet(db: DB, access: TeamAccess, id: string): Promise
 
 export async function listTeamSheets(db: DB, access: TeamAccess, options: { q?: string; limit?: number; offset?: number } = {}): Promise<{ sheets: SheetSummary[]; total: number }> {
 	const q = (options.q ?? '').slice(0, 200);
+	const problem = controlCharProblem(q, 'The search text (q)');
+	if (problem) throw new AppError(400, 'invalid-query', problem, 'q');
 	const [rows, total] = await Promise.all([listSheets(db, access.team.id, { ...options, q }), countSheets(db, access.team.id, q)]);
 	return { sheets: rows.map(summaryOf), total };
 }

@@ -16,6 +16,7 @@ import { PROCESSES, fluids } from '../thermo';
 import { DEFAULT_UNIT_PREFS } from '../units/prefs';
 import { DEFAULT_CHART, EMPTY_TITLE_BLOCK, INVARIANT, LEG_ID_PATTERN, MAX_SHEET_LEGS, START, newLegId } from './doc';
 import { SHEET_DOC_VERSION, type SheetDoc } from './types';
+import { plainText, type TextKind } from '../plain-text';
 
 const INPUT_NAMES = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'] as const;
 const UNIT: Record<(typeof INPUT_NAMES)[number], string> = { T: 'K', P: 'Pa (absolute)', v: 'm³/kg', rho: 'kg/m³', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)', x: '0…1' };
@@ -109,7 +110,7 @@ const unitsSchema = z.strictObject(
 	{ error: 'units must be an object { system, pressureUnit, pressureReference, usPower, atmosphere }.' }
 );
 
-const text = (name: string, max: number) => z.string({ error: `${name} must be text.` }).max(max, { error: `${name} must be at most ${max} characters.` });
+const text = (name: string, max: number, kind: TextKind = 'line') => plainText(name, kind).max(max, { error: `${name} must be at most ${max} characters.` });
 
 const titleBlockSchema = z.strictObject(
 	{
@@ -155,7 +156,7 @@ export const sheetDocSchema = z
 	.strictObject(
 		{
 			version: z.literal(SHEET_DOC_VERSION, { error: `version must be ${SHEET_DOC_VERSION}.` }),
-			description: text('The description', 2000),
+			description: text('The description', 2000, 'lines'),
 			spec: specSchema,
 			units: unitsSchema,
 			chart: z.strictObject(
