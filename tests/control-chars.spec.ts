@@ -63,20 +63,24 @@ interface Row {
 	send(v: string): Promise<APIResponse>;
 	/** a form action: SvelteKit answers a refused form with its page (HTML) */
 	form?: boolean;
+	/** the value goes into a multipart header line, where a raw line break ends the header */
+	multipartHeader?: boolean;
+	/** refused already before this rule (a pattern or a list of ids): any clear 4xx will do */
+	refusedBefore?: boolean;
 }
 
 const rows: Row[] = [
 	// JSON API
 	{ field: 'POST sheets title', line: true, send: (v) => api.post(`/api/v1/teams/${slug}/sheets`, { data: { title: v, doc } }) },
 	{ field: 'POST sheets example title', line: true, send: (v) => api.post(`/api/v1/teams/${slug}/sheets`, { data: { example: 'vessel-v204-fire', title: v } }) },
-	{ field: 'POST sheets example', line: true, send: (v) => api.post(`/api/v1/teams/${slug}/sheets`, { data: { example: v } }) },
+	{ field: 'POST sheets example', line: true, refusedBefore: true, send: (v) => api.post(`/api/v1/teams/${slug}/sheets`, { data: { example: v } }) },
 	{ field: 'POST sheets doc.description', line: false, send: (v) => api.post(`/api/v1/teams/${slug}/sheets`, { data: { title: 'x', doc: withDoc((d) => (d.description = v)) } }) },
 	{ field: 'PATCH sheet title', line: true, send: (v) => api.patch(S(), { data: { title: v } }) },
 	...(['project', 'equipment', 'tag', 'documentNumber', 'site'] as const).map(
 		(k): Row => ({ field: `PUT draft doc.titleBlock.${k}`, line: true, send: (v) => api.put(`${S()}/draft`, { data: { version, doc: withDoc((d) => (d.titleBlock[k] = v)) } }) })
 	),
 	{ field: 'PUT draft doc.description', line: false, send: (v) => api.put(`${S()}/draft`, { data: { version, doc: withDoc((d) => (d.description = v)) } }) },
-	{ field: 'PUT draft leg id', line: true, send: (v) => api.put(`${S()}/draft`, { data: { version, doc: withDoc((d) => (d.spec.legs[0].id = v)) } }) },
+	{ field: 'PUT draft leg id', line: true, refusedBefore: true, send: (v) => api.put(`${S()}/draft`, { data: { version, doc: withDoc((d) => (d.spec.legs[0].id = v)) } }) },
 	{ field: 'POST revisions message', line: false, send: (v) => api.post(`${S()}/revisions`, { data: { message: v, baseRevision: 1 } }) },
 	{ field: 'POST revisions doc.titleBlock.tag', line: true, send: (v) => api.post(`${S()}/revisions`, { data: { message: 'm', baseRevision: 1, doc: withDoc((d) => (d.titleBlock.tag = v)) } }) },
 	{ field: 'POST submit note', line: false, send: (v) => api.post(`${S()}/revisions/1/submit`, { data: { note: v } }) },
@@ -89,8 +93,8 @@ const rows: Row[] = [
 	{ field: 'POST traces (csv) name', line: true, send: (v) => api.post(`${S()}/traces?filename=a.csv&name=${encodeURIComponent(v)}`, { data: csv, headers: { 'content-type': 'text/csv' } }) },
 	{ field: 'POST traces (csv) filename', line: true, send: (v) => api.post(`${S()}/traces?filename=${encodeURIComponent(v)}`, { data: csv, headers: { 'content-type': 'text/csv' } }) },
 	{ field: 'POST traces (multipart) name', line: true, send: (v) => api.post(`${S()}/traces`, { multipart: { file: { name: 'a.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) }, name: v } }) },
-	{ field: 'POST traces (multipart) file name', line: true, send: (v) => api.post(`${S()}/traces`, { headers: { 'content-type': 'multipart/form-data; boundary=zz' }, data: multipart(v) }) },
-	{ field: 'POST traces (multipart) field name', line: true, send: (v) => api.post(`${S()}/traces`, { headers: { 'content-type': 'multipart/form-data; boundary=zz' }, data: multipart('a.csv', v) }) },
+	{ field: 'POST traces (multipart) file name', line: true, multipartHeader: true, send: (v) => api.post(`${S()}/traces`, { headers: { 'content-type': 'multipart/form-data; boundary=zz' }, data: multipart(v) }) },
+	{ field: 'POST traces (multipart) field name', line: true, multipartHeader: true, send: (v) => api.post(`${S()}/traces`, { headers: { 'content-type': 'multipart/form-data; boundary=zz' }, data: multipart('a.csv', v) }) },
 	{ field: 'GET sheets q', line: true, send: (v) => api.get(`/api/v1/teams/${slug}/sheets?q=${encodeURIComponent(v)}`) },
 	// forms and pages, as a browser posts them
 	{ field: 'team page search q', line: true, form: true, send: (v) => owner.get(`/t/${slug}?q=${encodeURIComponent(v)}`) },
@@ -106,7 +110,7 @@ const rows: Row[] = [
 	{ field: 'new sheet size (blank)', line: true, form: true, send: (v) => owner.post(`/t/${slug}/sheets/new?/blank`, { form: blank({ sizeValue: v }), headers: FORM, maxRedirects: 0 }) },
 	{ field: 'new sheet atmosphere (blank)', line: true, form: true, send: (v) => owner.post(`/t/${slug}/sheets/new?/blank`, { form: blank({ atmosphere: v }), headers: FORM, maxRedirects: 0 }) },
 	{ field: 'new sheet title (example)', line: true, form: true, send: (v) => owner.post(`/t/${slug}/sheets/new?/example`, { form: { example: 'vessel-v204-fire', title: v }, headers: FORM, maxRedirects: 0 }) },
-	{ field: 'new sheet example id', line: true, form: true, send: (v) => owner.post(`/t/${slug}/sheets/new?/example`, { form: { example: v }, headers: FORM, maxRedirects: 0 }) },
+	{ field: 'new sheet example id', line: true, refusedBefore: true, form: true, send: (v) => owner.post(`/t/${slug}/sheets/new?/example`, { form: { example: v }, headers: FORM, maxRedirects: 0 }) },
 	{ field: 'sheet page rename title', line: true, form: true, send: (v) => owner.post(`/t/${slug}/sheets/${sheet}?/rename`, { form: { title: v }, headers: FORM }) },
 	{ field: 'form field name', line: true, form: true, send: (v) => owner.post(`/t/${slug}/settings?/rename`, { form: { name: 'Fine name', description: '', [v]: '1' }, headers: FORM }) }
 ];
@@ -165,15 +169,17 @@ test('every text field refuses control characters with a 4xx naming them, and st
 				continue;
 			}
 			refused++;
+			let message = text;
 			if (!row.form) {
 				expect(res.headers()['content-type'], label).toMatch(/application\/json/);
 				const body = JSON.parse(text) as { error: { code: string; message: string } };
 				expect(typeof body.error.code, label).toBe('string');
-				// the leg id and the example id were refused before (a pattern; an unknown id): any clear 4xx
-				if (!/leg id|example/.test(row.field)) expect(body.error.message, label).toMatch(/control character U\+00[0-9A-F]{2}/);
-			} else if (!/example id/.test(row.field)) {
-				expect(text, label).toMatch(/control character U\+00[0-9A-F]{2}/);
+				message = body.error.message;
 			}
+			// already refused before (a leg id's pattern, an unknown example id, a line break that
+			// breaks a multipart header's framing): any clear 4xx will do; the rest must name the character
+			const before = row.refusedBefore || (row.multipartHeader && /[\r\n]/.test(value));
+			if (!before && !/control character U\+00[0-9A-F]{2}/.test(message)) wrong.push(`${label} ${message.slice(0, 160)}`);
 		}
 	}
 	expect(wrong).toEqual([]);
@@ -181,6 +187,7 @@ test('every text field refuses control characters with a 4xx naming them, and st
 	const after = stored();
 	expect(after.counts).toEqual(before.counts);
 	expect(after.controlled).toEqual([]);
+	console.log(`control characters: ${refused} requests over ${rows.length} fields, all refused with a 4xx; rows stored before/after ${JSON.stringify(after.counts)}`);
 });
 
 test('multi-line fields keep their line breaks and tabs', async () => {
