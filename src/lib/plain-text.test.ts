@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { controlCharProblem, describeControlChar, findControlChar, hasControlChars, plainText, withoutControlChars } from './plain-text';
+import { cleanText, controlCharProblem, describeControlChar, findControlChar, hasControlChars, plainText, withoutControlChars } from './plain-text';
 
 describe('control characters in text', () => {
 	it('refuses every C0 control and DEL on one line, naming the field, the character and what to send', () => {
@@ -47,5 +47,14 @@ describe('control characters in text', () => {
 		expect(r.error?.issues.map((i) => i.message)).toEqual([expect.stringMatching(/^The title contains the control character U\+0000/)]);
 		expect(title.safeParse(5).error?.issues[0].message).toBe('Enter a title.');
 		expect(title.parse('Flash tank')).toBe('Flash tank');
+	});
+
+	it('cleans text stored before the rule the way the rule would have let it in', () => {
+		expect(cleanText('a\u0000b\tc\r\nd\u007f', 'line')).toBe('ab c  d');
+		expect(cleanText('a\u0000b\tc\r\nd\u007f', 'lines')).toBe('ab\tc\r\nd');
+		fc.assert(
+			fc.property(fc.string({ unit: 'binary', maxLength: 30 }), fc.constantFrom('line' as const, 'lines' as const), (s, kind) => findControlChar(cleanText(s, kind), kind) === null),
+			{ seed: 20261202, numRuns: 300 }
+		);
 	});
 });

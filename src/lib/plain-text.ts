@@ -55,6 +55,14 @@ export function withoutControlChars(value: string): string {
 }
 
 /**
+ * `value` as the rule would have let it in, for text stored before the rule: in a one-line field
+ * tabs and line breaks become spaces; every other refused character is dropped.
+ */
+export function cleanText(value: string, kind: TextKind = 'line'): string {
+	return kind === 'lines' ? value.replace(new RegExp(IN_LINES.source, 'g'), '') : value.replace(/[\t\n\r]/g, ' ').replace(ALL_CONTROLS, '');
+}
+
+/**
  * A zod string that refuses control characters (see the module comment); `typeError` is the
  * message for a value that is not text at all. Chain trimming, lengths and the rest after it.
  */

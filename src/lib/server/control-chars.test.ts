@@ -71,4 +71,17 @@ describe('control characters at the services', () => {
 		await expectAppError(renameTeamSheet(w.env.db, a, sheet, 'two\nlines'), 400, 'invalid-title');
 		await expectAppError(uploadTrace(w.env.db, a, sheet, { bytes: csv, filename: 'a\tb.csv' }), 400, 'invalid-filename');
 	});
+
+	it('still open sheets whose stored draft holds control characters from before the rule, cleaned', async () => {
+		const a = await w.access(w.people.designer);
+		const legacy = { ...vesselDoc(), description: 'old\u0000 text\nkept', titleBlock: { ...vesselDoc().titleBlock, tag: 'V-204\u0007', site: 'North\tyard' } };
+		await w.env.db.updateTable('sheets').set({ draft: JSON.stringify(legacy) }).where('id', '=', sheet).execute();
+		const read = await readSheet(w.env.db, a, sheet);
+		expect(read.doc.description).toBe('old text\nkept');
+		expect(read.doc.titleBlock.tag).toBe('V-204');
+		expect(read.doc.titleBlock.site).toBe('North yard');
+		// sent back as it was read, it saves; sent with the control characters, it is refused
+		await expectAppError(saveDraft(w.env.db, a, sheet, { version: read.version, doc: legacy }), 400, 'invalid-sheet');
+		expect((await saveDraft(w.env.db, a, sheet, { version: read.version, doc: read.doc })).version).toBe(read.version + 1);
+	});
 });

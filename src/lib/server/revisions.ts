@@ -175,7 +175,7 @@ export async function saveRevision(db: DB, access: TeamAccess, sheetId: string, 
 		throw new AppError(400, 'invalid-base', 'baseRevision must be the number of the revision the draft started from, or null before Rev 1.', 'baseRevision');
 	const sheet = await loadSheet(db, access, sheetId);
 	let doc: SheetDoc;
-	if (input.doc !== undefined) doc = checkDoc(input.doc).doc;
+	if (input.doc !== undefined) doc = checkDoc(input.doc, 'sent').doc;
 	else {
 		if (input.draftVersion !== undefined && input.draftVersion !== sheet.draft_version) throw new DraftConflictError(sheet);
 		doc = checkDoc(parseJson(sheet.draft, 'draft')).doc;

@@ -85,9 +85,13 @@ function notFound(): never {
 	throw new AppError(404, 'sheet-not-found', 'There is no such sheet in this team. It may have been mistyped; the team page lists its sheets.');
 }
 
-/** The document checked and, if older, migrated; a 400 naming the first problem otherwise. */
-export function checkDoc(raw: unknown): { doc: SheetDoc; migratedFrom: number | null } {
-	const r = parseSheetDoc(raw);
+/**
+ * The document checked and, if older, migrated; a 400 naming the first problem otherwise. `sent`
+ * for a document a client sends (control characters refused); stored documents are read as they
+ * were written (older text cleaned, see parseSheetDoc).
+ */
+export function checkDoc(raw: unknown, from: 'stored' | 'sent' = 'stored'): { doc: SheetDoc; migratedFrom: number | null } {
+	const r = parseSheetDoc(raw, { stored: from === 'stored' });
 	if (!r.ok) throw new AppError(400, 'invalid-sheet', r.message, 'doc');
 	return { doc: r.doc, migratedFrom: r.migratedFrom };
 }
@@ -122,7 +126,7 @@ export async function createSheet(db: DB, access: TeamAccess, input: CreateInput
 	requireEdit(access);
 	const t = titleSchema.safeParse(input.title);
 	if (!t.success) throw new AppError(400, 'invalid-title', t.error.issues[0].message, 'title');
-	const { doc } = checkDoc(input.doc);
+	const { doc } = checkDoc(input.doc, 'sent');
 	checkStart(doc);
 	const row = await db.transaction().execute((trx) =>
 		insertSheet(
@@ -257,7 +261,7 @@ export async function saveDraft(db: DB, access: TeamAccess, id: string, input: {
 	requireEdit(access);
 	if (!SHEET_ID.test(id)) notFound();
 	if (!Number.isInteger(input.version) || input.version < 1) throw new AppError(400, 'invalid-version', 'version must be the whole number the sheet was read with (1 or more).', 'version');
-	const { doc } = checkDoc(input.doc);
+	const { doc } = checkDoc(input.doc, 'sent');
 	return db.transaction().execute(async (trx) => {
 		const row = await getSheet(trx, access.team.id, id);
 		if (!row) notFound();
