@@ -1,13 +1,15 @@
 import { expect, request as playwrightRequest, test, type APIRequestContext } from '@playwright/test';
 import fc from 'fast-check';
-import { BASE, DEMO, FORM, createToken, signedInRequest } from './helpers';
+import { BASE, DEMO, FORM, TEAM, createToken, signedInRequest } from './helpers';
 
 // A seeded property-based fuzz of every team API route (me, team, members, sheets, sheet, draft,
 // revisions, one revision, its steps and restore, compare, notes, one note, replies, traces, one
 // trace) with real owner and viewer tokens on the built app and its migrated database. Requests
 // are valid ones with a few fields replaced by arbitrary JSON or text, random path ids, query
 // strings and content types. Property: never a 5xx, and every error is the API's JSON shape
-// { error: { code, message } }. Hand-picked junk lives in team-api-junk.spec.ts; this one draws.
+// { error: { code, message } }. One request in six is sent across teams (the demo team's slug, or
+// one of its sheet ids under the fuzz team): never a success, nor a 409 or an owner's 403 (which
+// would tell the sheet exists), and the demo team's sheet is unchanged afterwards. Hand-picked junk lives in team-api-junk.spec.ts; this one draws.
 // A fixed seed and a fixed number of requests keep it repeatable and bounded (well under a minute).
 
 // FUZZ_SEED and FUZZ_RUNS explore further (e.g. FUZZ_SEED=7 FUZZ_RUNS=5000); the suite runs the fixed seed
@@ -17,7 +19,7 @@ const RUNS = Number(process.env.FUZZ_RUNS ?? 600);
 let owner: APIRequestContext;
 let tokens: APIRequestContext[] = [];
 let slug = '';
-const ids = { sheet: '', note: '', trace: '', member: '' };
+const ids = { sheet: '', note: '', trace: '', member: '', foreignSheet: '' };
 let doc: Record<string, unknown> = {};
 
 test.beforeAll(async () => {
@@ -39,6 +41,8 @@ test.beforeAll(async () => {
 	const up = await api.post(`${T}/sheets/${ids.sheet}/traces?filename=f.csv`, { data: CSV, headers: { 'content-type': 'text/csv' } });
 	ids.trace = ((await up.json()) as { trace: { id: string } }).trace.id;
 	ids.member = ((await (await api.get(`${T}/members`)).json()) as { members: Array<{ id: string }> }).members[0].id;
+	// a sheet of another team (the demo team), read with the owner's session
+	ids.foreignSheet = ((await (await owner.get(`/api/v1/teams/${TEAM}/sheets`)).json()) as { sheets: Array<{ id: string }> }).sheets[0].id;
 });
 test.afterAll(async () => {
 	for (const t of tokens) await t.dispose();
@@ -109,6 +113,8 @@ interface Req {
 	body?: string;
 	type?: string;
 	as: number;
+	/** sent to another team's resources */
+	cross: boolean;
 }
 
 const T = () => `/api/v1/teams/${slug}`;
@@ -162,14 +168,38 @@ const request: fc.Arbitrary<Req> = fc
 			}),
 			get(fc.tuple(sheetSeg, seg(() => ids.trace)).map(([s, t]) => `${S(s)}/traces/${t}`))
 		),
-		fc.nat({ max: 4 })
+		fc.nat({ max: 4 }),
+		fc.nat({ max: 11 })
 	)
-	// four in five as the owner (who may do everything), the rest as a viewer
-	.map(([r, who]) => ({ ...r, as: who === 0 ? 1 : 0 }));
+	// four in five as the owner (who may do everything), the rest as a viewer; one in six across teams
+	.map(([r, who, cross]) => {
+		let path = r.path;
+		if (cross === 0 && path.includes(`/teams/${slug}`)) path = path.replace(`/teams/${slug}`, `/teams/${TEAM}`);
+		else if (cross === 1 && path.includes(`/sheets/${ids.sheet}`)) path = path.replace(`/sheets/${ids.sheet}`, `/sheets/${ids.foreignSheet}`);
+		return { ...r, path, as: who === 0 ? 1 : 0, cross: path !== r.path };
+	});
+
+/** What the fuzz must not change in the other team's sheet, read with the owner's session. */
+async function foreignState(ctx: APIRequestContext) {
+	const base = `/api/v1/teams/${TEAM}/sheets/${ids.foreignSheet}`;
+	const read = async (path: string) => {
+		const res = await ctx.get(`${base}${path}`);
+		expect(res.status()).toBe(200);
+		return res.json();
+	};
+	const { sheet } = (await read('')) as { sheet: { version: number; title: string; updatedAt: number } };
+	const { revisions } = (await read('/revisions')) as { revisions: Array<{ number: number; status: string }> };
+	const { notes } = (await read('/notes')) as { notes: Array<{ id: string; resolved: unknown; replies: unknown[] }> };
+	const { traces } = (await read('/traces')) as { traces: Array<{ id: string }> };
+	return { sheet, revisions, notes: notes.map((n) => [n.id, n.resolved, n.replies.length]), traces: traces.map((t) => t.id) };
+}
 
 test('seeded fuzz: no team API route answers a 5xx, every error has the JSON shape', async () => {
 	test.setTimeout(Math.max(120_000, RUNS * 150));
 	const statuses: Record<string, number> = {};
+	let crossTeam = 0;
+	const foreign = () => foreignState(owner);
+	const foreignBefore = await foreign();
 	const started = Date.now();
 	await fc.assert(
 		fc.asyncProperty(request, async (r) => {
@@ -180,6 +210,12 @@ test('seeded fuzz: no team API route answers a 5xx, every error has the JSON sha
 			statuses[status] = (statuses[status] ?? 0) + 1;
 			const what = `${r.method} ${r.path} ${r.type ?? ''} ${(r.body ?? '').slice(0, 200)} → ${status}`;
 			expect(status, what).toBeLessThan(500);
+			if (r.cross) {
+				crossTeam++;
+				expect(status, what).toBeGreaterThanOrEqual(400);
+				// a viewer is refused writes by role before any sheet is looked up (403 either way)
+				expect(r.as === 1 ? [409] : [403, 409], what).not.toContain(status);
+			}
 			if (status >= 400 && r.method !== 'HEAD') {
 				expect(res.headers()['content-type'], what).toMatch(/application\/json/);
 				const body = (await res.json()) as { error?: { code?: unknown; message?: unknown } };
@@ -191,12 +227,14 @@ test('seeded fuzz: no team API route answers a 5xx, every error has the JSON sha
 		{ seed: SEED, numRuns: RUNS, endOnFailure: true }
 	);
 	const seconds = (Date.now() - started) / 1000;
-	console.log(`team API fuzz: seed ${SEED}, ${RUNS} requests in ${seconds.toFixed(1)} s; statuses ${JSON.stringify(statuses)}`);
+	console.log(`team API fuzz: seed ${SEED}, ${RUNS} requests in ${seconds.toFixed(1)} s; statuses ${JSON.stringify(statuses)}; ${crossTeam} sent across teams, all refused`);
 	// the fuzz reached past the validation into the services, and was refused often too
 	const ok = Object.entries(statuses).filter(([s]) => Number(s) < 300).reduce((n, [, c]) => n + c, 0);
 	const refused = Object.entries(statuses).filter(([s]) => Number(s) >= 400).reduce((n, [, c]) => n + c, 0);
 	expect(ok).toBeGreaterThan(RUNS / 10);
 	expect(refused).toBeGreaterThan(RUNS / 4);
+	expect(crossTeam).toBeGreaterThan(RUNS / 20);
+	expect(await foreign()).toEqual(foreignBefore);
 	// the target is still readable
 	expect((await tokens[0].get(S(ids.sheet))).status()).toBe(200);
 });
