@@ -18,10 +18,10 @@ const DB_PATH = `${DIR}/statewright.db`;
 const TEAM = 'brindlemoor';
 /** acknowledged saves before the kill, per cycle; and how long (ms) the last save is in flight before it */
 const CYCLES: Array<{ saves: number; killAfterMs: number }> = [
-	{ saves: 17, killAfterMs: 0 },
-	{ saves: 23, killAfterMs: 2 },
-	{ saves: 12, killAfterMs: 5 },
-	{ saves: 28, killAfterMs: 1 }
+	{ saves: 9, killAfterMs: 0 },
+	{ saves: 13, killAfterMs: 2 },
+	{ saves: 6, killAfterMs: 5 },
+	{ saves: 14, killAfterMs: 1 }
 ];
 
 let server: ChildProcess | null = null;
