@@ -30,6 +30,21 @@ describe('parseForm', () => {
 		expect(r.failure.data.values).toEqual({ email: 'not-an-address', name: '' });
 	});
 
+	it('refuses control characters in values and field names, echoing the value without them', () => {
+		const r = parseForm(schema, form({ email: 'a@example.com', name: '\u0000Ada', password: 'pw', role: 'viewer' }), ['name']);
+		expect(r.ok).toBe(false);
+		if (r.ok) return;
+		expect(r.failure.status).toBe(400);
+		expect(r.failure.data.errors.name).toMatch(/^The name contains the control character U\+0000 \(NUL\) at character 1\. Send plain text/);
+		expect(r.failure.data.values).toEqual({ name: 'Ada' });
+		const named = parseForm(schema, form({ email: 'a@example.com', name: 'Ada', password: 'pw', role: 'viewer', 'x\u0007': '1' }));
+		expect(!named.ok && named.failure.data.message).toMatch(/^A form field’s name contains the control character U\+0007 \(BEL\)/);
+		const team = z.object({ name: fields.teamName, description: fields.description });
+		expect(team.safeParse({ name: 'Heat\tWorks', description: '' }).success).toBe(false);
+		expect(team.safeParse({ name: 'Heat Works', description: 'two\nlines\ttabbed' }).success).toBe(true);
+		expect(team.safeParse({ name: 'Heat Works', description: 'bell\u0007' }).error?.issues[0].message).toMatch(/^The description contains the control character U\+0007/);
+	});
+
 	it('refuses a missing field and a file where text belongs', () => {
 		const f = form({ name: 'x', password: 'p', role: 'viewer' });
 		f.set('email', new Blob(['a']), 'a.txt');

@@ -3,6 +3,7 @@ import { retryAfterSeconds } from './rate-limit';
 import { z } from 'zod';
 import { isAppError } from './errors';
 import { ROLES } from '../roles';
+import { controlCharProblem, plainText, withoutControlChars } from '../plain-text';
 
 /*
  * Form actions: validate with zod, answer problems with
@@ -41,7 +42,12 @@ export function parseForm<S extends z.ZodType>(schema: S, form: FormData, echo: 
 	const values: Record<string, string> = {};
 	for (const key of echo) {
 		const v = raw[key];
-		if (typeof v === 'string') values[key] = v.slice(0, 500);
+		// echoed into the page again: never with the control characters that may have been refused
+		if (typeof v === 'string') values[key] = withoutControlChars(v.slice(0, 500));
+	}
+	for (const key of Object.keys(raw)) {
+		const problem = controlCharProblem(key, 'A form field’s name', 'line', 'Name form fields in plain text (letters, digits, "-" and "_").');
+		if (problem) return { ok: false, failure: formFailure(400, problem, {}, values) };
 	}
 	const r = schema.safeParse(raw);
 	if (r.success) return { ok: true, data: r.data, values };
@@ -74,25 +80,23 @@ export async function runAction<T>(
 }
 
 // shared field rules (the messages say what to give instead)
-const text = (label: string) =>
-	z.string({ error: `Enter ${label}.` }).transform((s) => s.replace(/\s+/g, ' ').trim());
+// one-line text: control characters refused (plain-text.ts), runs of spaces collapsed
+const text = (label: string, field: string) => plainText(field, 'line', `Enter ${label}.`).transform((s) => s.replace(/\s+/g, ' ').trim());
 
 export const fields = {
-	email: z
-		.string({ error: 'Enter an e-mail address.' })
+	email: plainText('The e-mail address', 'line', 'Enter an e-mail address.')
 		.trim()
 		.min(1, 'Enter an e-mail address.')
 		.max(254, 'That e-mail address is too long.')
 		.pipe(z.email('Enter an e-mail address like name@example.com.'))
 		.transform((s) => s.toLowerCase()),
-	personName: text('your name').pipe(
+	personName: text('your name', 'The name').pipe(
 		z.string().min(1, 'Enter your name as colleagues know it.').max(80, 'Use at most 80 characters for the name.')
 	),
-	teamName: text('a team name').pipe(
+	teamName: text('a team name', 'The team name').pipe(
 		z.string().min(2, 'Use at least 2 characters for the team name.').max(60, 'Use at most 60 characters for the team name.')
 	),
-	description: z
-		.string()
+	description: plainText('The description', 'lines')
 		.optional()
 		.transform((s) => (s ?? '').trim())
 		.pipe(z.string().max(500, 'Use at most 500 characters for the description.')),
@@ -100,7 +104,7 @@ export const fields = {
 	password: z.string({ error: 'Enter a password.' }).min(1, 'Enter a password.').max(256, 'Use at most 256 characters for the password.'),
 	role: z.enum(ROLES, { error: `Choose a role: ${ROLES.join(', ')}.` }),
 	id: z.string({ error: 'Missing id.' }).regex(/^[a-z2-9]{16}$/, 'That id is not valid.'),
-	tokenName: text('a token name').pipe(z.string().min(1, 'Name the token after the script that will use it.').max(60, 'Use at most 60 characters for the token name.'))
+	tokenName: text('a token name', 'The token name').pipe(z.string().min(1, 'Name the token after the script that will use it.').max(60, 'Use at most 60 characters for the token name.'))
 };
 
 /** A same-site path to go to after signing in; anything else becomes '/'. */

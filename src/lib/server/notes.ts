@@ -15,6 +15,7 @@ import { mentionedIds } from '$lib/notes/mentions';
 import { processText } from '$lib/export/table';
 import type { Anchor, SheetDoc } from '$lib/sheets/types';
 import type { NoteView, ReplyView } from '$lib/review/types';
+import { plainText } from '$lib/plain-text';
 
 export type { NoteView, ReplyView };
 
@@ -27,12 +28,11 @@ export type { NoteView, ReplyView };
  * write notes but cannot edit the path. @mentions of team members and replies are mailed.
  */
 
-export const bodySchema = z
-	.string({ error: 'Write the note.' })
+export const bodySchema = plainText('The text', 'lines', 'Write the note.')
 	.transform((s) => s.replace(/\r\n?/g, '\n').trim())
 	.pipe(z.string().min(1, { error: 'Write the note (it cannot be empty).' }).max(4000, { error: 'Use at most 4000 characters for a note.' }));
 
-const idText = z.string({ error: 'Give the id as a string, e.g. "L4k9xq2" for a leg or "start" for the start state.' }).min(1, { error: 'The id is empty; give a leg id, or "start" for the start state.' }).max(40, { error: 'Ids are at most 40 characters.' });
+const idText = plainText('The anchor’s id', 'line', 'Give the id as a string, e.g. "L4k9xq2" for a leg or "start" for the start state.').min(1, { error: 'The id is empty; give a leg id, or "start" for the start state.' }).max(40, { error: 'Ids are at most 40 characters.' });
 export const anchorSchema = z.discriminatedUnion(
 	'kind',
 	[

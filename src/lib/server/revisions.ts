@@ -28,6 +28,7 @@ import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
 import { diffRevisions, type RevisionDiff } from '$lib/revisions/diff';
 import type { TitleSignOff } from '$lib/export/title';
 import type { RevisionEvent, RevisionFull, RevisionSummary, Signature } from '$lib/review/types';
+import { plainText } from '$lib/plain-text';
 
 export type { RevisionEvent, RevisionFull, RevisionSummary, Signature };
 
@@ -56,13 +57,11 @@ export type { RevisionEvent, RevisionFull, RevisionSummary, Signature };
  *   message) comes back in the error, so nothing is lost and it can be compared and merged.
  */
 
-export const messageSchema = z
-	.string({ error: 'Describe what changed in this revision.' })
+export const messageSchema = plainText('The revision message', 'lines', 'Describe what changed in this revision.')
 	.transform((s) => s.trim())
 	.pipe(z.string().min(1, { error: 'Describe what changed in this revision (a line is enough).' }).max(2000, { error: 'Use at most 2000 characters for the revision message.' }));
 
-export const noteSchema = z
-	.string()
+export const noteSchema = plainText('The note', 'lines', 'note must be text.')
 	.optional()
 	.transform((s) => (s ?? '').trim())
 	.pipe(z.string().max(2000, { error: 'Use at most 2000 characters for the note.' }));
@@ -202,7 +201,7 @@ export async function saveRevision(db: DB, access: TeamAccess, sheetId: string, 
 		throw new AppError(400, 'invalid-base', 'baseRevision must be the number of the revision the draft started from, or null before Rev 1.', 'baseRevision');
 	const sheet = await loadSheet(db, access, sheetId);
 	let doc: SheetDoc;
-	if (input.doc !== undefined) doc = checkDoc(input.doc).doc;
+	if (input.doc !== undefined) doc = checkDoc(input.doc, 'sent').doc;
 	else {
 		if (input.draftVersion !== undefined && input.draftVersion !== sheet.draft_version) throw new DraftConflictError(sheet);
 		doc = checkDoc(parseJson(sheet.draft, 'draft')).doc;

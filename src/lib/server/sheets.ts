@@ -10,6 +10,7 @@ import { fixState, ThermoError } from '$lib/thermo';
 import { parseSheetDoc } from '$lib/sheets/schema';
 import { workedExample } from '$lib/sheets/templates';
 import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
+import { controlCharProblem, plainText } from '$lib/plain-text';
 
 /*
  * Sheets: create (blank, from a worked example, or from a document a script sends), read, list
@@ -21,8 +22,7 @@ import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
 /** A sheet id as it appears in URLs: 16 symbols of the id alphabet. */
 export const SHEET_ID = /^[a-z2-9]{16}$/;
 
-export const titleSchema = z
-	.string({ error: 'Enter a title for the sheet.' })
+export const titleSchema = plainText('The title', 'line', 'Enter a title for the sheet.')
 	.transform((s) => s.replace(/\s+/g, ' ').trim())
 	.pipe(z.string().min(1, { error: 'Enter a title for the sheet.' }).max(120, { error: 'Use at most 120 characters for the title.' }));
 
@@ -85,9 +85,13 @@ function notFound(): never {
 	throw new AppError(404, 'sheet-not-found', 'There is no such sheet in this team. It may have been mistyped; the team page lists its sheets.');
 }
 
-/** The document checked and, if older, migrated; a 400 naming the first problem otherwise. */
-export function checkDoc(raw: unknown): { doc: SheetDoc; migratedFrom: number | null } {
-	const r = parseSheetDoc(raw);
+/**
+ * The document checked and, if older, migrated; a 400 naming the first problem otherwise. `sent`
+ * for a document a client sends (control characters refused); stored documents are read as they
+ * were written (older text cleaned, see parseSheetDoc).
+ */
+export function checkDoc(raw: unknown, from: 'stored' | 'sent' = 'stored'): { doc: SheetDoc; migratedFrom: number | null } {
+	const r = parseSheetDoc(raw, { stored: from === 'stored' });
 	if (!r.ok) throw new AppError(400, 'invalid-sheet', r.message, 'doc');
 	return { doc: r.doc, migratedFrom: r.migratedFrom };
 }
@@ -122,7 +126,7 @@ export async function createSheet(db: DB, access: TeamAccess, input: CreateInput
 	requireEdit(access);
 	const t = titleSchema.safeParse(input.title);
 	if (!t.success) throw new AppError(400, 'invalid-title', t.error.issues[0].message, 'title');
-	const { doc } = checkDoc(input.doc);
+	const { doc } = checkDoc(input.doc, 'sent');
 	checkStart(doc);
 	const row = await db.transaction().execute((trx) =>
 		insertSheet(
@@ -167,6 +171,8 @@ export async function readSheet(db: DB, access: TeamAccess, id: string): Promise
 
 export async function listTeamSheets(db: DB, access: TeamAccess, options: { q?: string; limit?: number; offset?: number } = {}): Promise<{ sheets: SheetSummary[]; total: number }> {
 	const q = (options.q ?? '').slice(0, 200);
+	const problem = controlCharProblem(q, 'The search text (q)');
+	if (problem) throw new AppError(400, 'invalid-query', problem, 'q');
 	const [rows, total] = await Promise.all([listSheets(db, access.team.id, { ...options, q }), countSheets(db, access.team.id, q)]);
 	return { sheets: rows.map(summaryOf), total };
 }
@@ -255,7 +261,7 @@ export async function saveDraft(db: DB, access: TeamAccess, id: string, input: {
 	requireEdit(access);
 	if (!SHEET_ID.test(id)) notFound();
 	if (!Number.isInteger(input.version) || input.version < 1) throw new AppError(400, 'invalid-version', 'version must be the whole number the sheet was read with (1 or more).', 'version');
-	const { doc } = checkDoc(input.doc);
+	const { doc } = checkDoc(input.doc, 'sent');
 	return db.transaction().execute(async (trx) => {
 		const row = await getSheet(trx, access.team.id, id);
 		if (!row) notFound();

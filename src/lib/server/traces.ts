@@ -13,6 +13,7 @@ import { DEFAULT_SATURATION_TOLERANCE, MAX_SATURATION_TOLERANCE } from '$lib/tra
 import { MAX_TRACE_BYTES } from '$lib/traces/csv';
 import type { RejectedLine, TraceColumn, TracePoint, TraceRefusalCode } from '$lib/traces/types';
 import type { TraceSummary, TraceWithPoints } from '$lib/review/types';
+import { controlCharProblem, plainText } from '$lib/plain-text';
 
 export type { TraceSummary, TraceWithPoints };
 
@@ -30,8 +31,7 @@ export const MAX_TRACES_PER_SHEET = 20;
 export const CHART_POINTS = 2000;
 
 export const traceOptionsSchema = z.object({
-	name: z
-		.string()
+	name: plainText('The trace name', 'line', 'name must be text.')
 		.optional()
 		.transform((s) => (s ?? '').replace(/\s+/g, ' ').trim())
 		.pipe(z.string().max(80, { error: 'Use at most 80 characters for the trace name.' })),
@@ -106,6 +106,8 @@ export async function uploadTrace(db: DB, access: TeamAccess, sheetId: string, i
 	requireEdit(access);
 	const sheet = await loadSheet(db, access, sheetId);
 	const doc = checkDoc(JSON.parse(sheet.draft)).doc;
+	const badName = controlCharProblem(input.filename, 'The file name', 'line', 'Rename the file using letters, digits, spaces, "-", "_" and "." (e.g. boiler-log.csv) and upload it again.');
+	if (badName) throw new AppError(400, 'invalid-filename', badName, 'filename');
 	const filename = (input.filename || 'trace.csv').replace(/[\\/]/g, '_').slice(0, 255);
 	if (input.bytes.byteLength === 0) throw new TraceRefusedError('empty', 'The file is empty. Upload a CSV with a header line such as time [s],P [kPa g],T [°C] and one line per reading.', [], 0);
 	if (input.bytes.byteLength > MAX_TRACE_BYTES)
@@ -195,6 +197,10 @@ export async function readUpload(request: Request, url: URL): Promise<UploadInpu
 			form = await new Request('http://upload.invalid/', { method: 'POST', body: new Blob([raw as Uint8Array<ArrayBuffer>]), headers: { 'content-type': type } }).formData();
 		} catch {
 			throw new AppError(400, 'unreadable-upload', 'The form could not be read. Send multipart/form-data with the CSV in a field named "file".');
+		}
+		for (const key of new Set(form.keys())) {
+			const problem = controlCharProblem(key, 'A form field’s name', 'line', 'Name the fields file, name, tolerance and allowRejected.');
+			if (problem) throw new AppError(400, 'invalid-field-name', problem);
 		}
 		const file = form.get('file');
 		if (!(file instanceof File)) throw new AppError(400, 'no-file', 'Choose a CSV file to upload (form field "file").', 'file');

@@ -8,6 +8,9 @@
  *   chart preferences, title block and description get their defaults (the atmosphere from
  *   `atmosphericPressure`); legs without an id, or with a duplicate one, get fresh ids.
  * - a version newer than this server knows is refused, never guessed at.
+ * - stored documents (`{ stored: true }`) written before control characters were refused in text
+ *   fields: those characters are dropped on reading (tabs and line breaks in the title block
+ *   become spaces), so such a sheet still opens. Documents a client sends are refused instead.
  *
  * Messages say what to give instead. Everything physical is SI (K, Pa absolute, m³/kg, J/kg).
  */
@@ -16,6 +19,7 @@ import { PROCESSES, fluids } from '../thermo';
 import { DEFAULT_UNIT_PREFS } from '../units/prefs';
 import { DEFAULT_CHART, EMPTY_TITLE_BLOCK, INVARIANT, LEG_ID_PATTERN, MAX_SHEET_LEGS, START, newLegId } from './doc';
 import { SHEET_DOC_VERSION, type SheetDoc } from './types';
+import { cleanText, plainText, type TextKind } from '../plain-text';
 
 const INPUT_NAMES = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'] as const;
 const UNIT: Record<(typeof INPUT_NAMES)[number], string> = { T: 'K', P: 'Pa (absolute)', v: 'm³/kg', rho: 'kg/m³', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)', x: '0…1' };
@@ -109,7 +113,7 @@ const unitsSchema = z.strictObject(
 	{ error: 'units must be an object { system, pressureUnit, pressureReference, usPower, atmosphere }.' }
 );
 
-const text = (name: string, max: number) => z.string({ error: `${name} must be text.` }).max(max, { error: `${name} must be at most ${max} characters.` });
+const text = (name: string, max: number, kind: TextKind = 'line') => plainText(name, kind).max(max, { error: `${name} must be at most ${max} characters.` });
 
 const titleBlockSchema = z.strictObject(
 	{
@@ -155,7 +159,7 @@ export const sheetDocSchema = z
 	.strictObject(
 		{
 			version: z.literal(SHEET_DOC_VERSION, { error: `version must be ${SHEET_DOC_VERSION}.` }),
-			description: text('The description', 2000),
+			description: text('The description', 2000, 'lines'),
 			spec: specSchema,
 			units: unitsSchema,
 			chart: z.strictObject(
@@ -209,8 +213,20 @@ function fromUnversioned(raw: Record<string, unknown>): unknown {
 	};
 }
 
-/** Validate a stored or sent document, migrating older shapes first (see the module comment). */
-export function parseSheetDoc(raw: unknown): ParsedDoc {
+/** The description and title block of a stored document without control characters (see the module comment). */
+function cleanStored(doc: unknown): unknown {
+	if (!isObject(doc)) return doc;
+	const out: Record<string, unknown> = { ...doc };
+	if (typeof out.description === 'string') out.description = cleanText(out.description, 'lines');
+	if (isObject(out.titleBlock)) out.titleBlock = Object.fromEntries(Object.entries(out.titleBlock).map(([k, v]) => [k, typeof v === 'string' ? cleanText(v, 'line') : v]));
+	return out;
+}
+
+/**
+ * Validate a sent document (`stored: false`, the default: control characters refused) or a stored
+ * one (`stored: true`), migrating older shapes first (see the module comment).
+ */
+export function parseSheetDoc(raw: unknown, { stored = false }: { stored?: boolean } = {}): ParsedDoc {
 	if (!isObject(raw)) return { ok: false, message: 'A sheet document must be a JSON object.', issues: [{ path: '', message: 'A sheet document must be a JSON object.' }] };
 	let input: unknown = raw;
 	let migratedFrom: number | null = null;
@@ -224,7 +240,7 @@ export function parseSheetDoc(raw: unknown): ParsedDoc {
 		const message = `This document has version ${raw.version}, newer than this server reads (${SHEET_DOC_VERSION}). Update Statewright, or send a version-${SHEET_DOC_VERSION} document.`;
 		return { ok: false, message, issues: [{ path: 'version', message }] };
 	}
-	const r = sheetDocSchema.safeParse(input);
+	const r = sheetDocSchema.safeParse(stored ? cleanStored(input) : input);
 	if (!r.success) {
 		const issues = r.error.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
 		const first = issues[0];

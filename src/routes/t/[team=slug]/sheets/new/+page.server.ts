@@ -4,7 +4,8 @@ import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
 import { requireTeam } from '$lib/server/guard';
 import { formFailure, parseForm, readFormData, runAction } from '$lib/server/forms';
-import { createFromExample, createSheet } from '$lib/server/sheets';
+import { createFromExample, createSheet, titleSchema } from '$lib/server/sheets';
+import { plainText } from '$lib/plain-text';
 import { listFluids } from '$lib/thermo';
 import { WORKED_EXAMPLES } from '$lib/sheets/templates';
 import { makeDoc } from '$lib/sheets/doc';
@@ -23,14 +24,11 @@ const PROPS = ['T', 'P', 'v', 'u', 'h', 's', 'x'] as const;
 const QUANTITY: Record<(typeof PROPS)[number], Quantity> = { T: 'temperature', P: 'pressure', v: 'specificVolume', u: 'specificEnergy', h: 'specificEnergy', s: 'specificEntropy', x: 'quality' };
 const fluidIds = listFluids().map((f) => f.id) as [string, ...string[]];
 
-const text = (what: string, max = 60) => z.string({ error: `Enter ${what}.` }).trim().max(max, { error: `That is too long for ${what}.` });
+const text = (what: string, max = 60) => plainText(`The ${what.replace(/^the /, '')}`, 'line', `Enter ${what}.`).trim().max(max, { error: `That is too long for ${what}.` });
 
 const blankForm = z
 	.object({
-		title: z
-			.string({ error: 'Enter a title for the sheet.' })
-			.transform((s) => s.replace(/\s+/g, ' ').trim())
-			.pipe(z.string().min(1, { error: 'Enter a title for the sheet.' }).max(120, { error: 'Use at most 120 characters for the title.' })),
+		title: titleSchema,
 		fluid: z.enum(fluidIds, { error: `Choose a fluid: ${fluidIds.join(', ')}.` }),
 		size: z.enum(['mass', 'volume', 'perkg', 'flow'], { error: 'Choose what sizes the system: a mass, a volume, per kg, or a mass flow.' }),
 		sizeValue: text('the size').optional(),
@@ -53,7 +51,7 @@ const ECHO = ['title', 'fluid', 'size', 'sizeValue', 'propA', 'valueA', 'propB',
 export const actions: Actions = {
 	example: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'sheet:edit');
-		const parsed = parseForm(z.object({ example: z.string({ error: 'Pick a worked example.' }), title: z.string().optional() }), await readFormData(event.request), ['example']);
+		const parsed = parseForm(z.object({ example: plainText('The worked example', 'line', 'Pick a worked example.'), title: plainText('The title').optional() }), await readFormData(event.request), ['example']);
 		if (!parsed.ok) return parsed.failure;
 		const r = await runAction(parsed.values, () => createFromExample(getDb(), access, parsed.data.example, parsed.data.title));
 		if ('id' in r) redirect(303, `/t/${access.team.slug}/sheets/${r.id}`);

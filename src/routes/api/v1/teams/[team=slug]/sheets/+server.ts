@@ -5,6 +5,7 @@ import { getDb } from '$lib/server/db';
 import { apiRoute, readJson } from '$lib/server/api';
 import { requireTeam } from '$lib/server/guard';
 import { createFromExample, createSheet, listTeamSheets } from '$lib/server/sheets';
+import { plainText } from '$lib/plain-text';
 
 /*
  * A team's sheets.
@@ -17,7 +18,7 @@ import { createFromExample, createSheet, listTeamSheets } from '$lib/server/shee
 
 const listQuery = z.strictObject(
 	{
-		q: z.string().max(200, { error: 'q must be at most 200 characters.' }).optional(),
+		q: plainText('The search text (q)').max(200, { error: 'q must be at most 200 characters.' }).optional(),
 		limit: z.coerce.number({ error: 'limit must be a whole number.' }).int({ error: 'limit must be a whole number.' }).min(1, { error: 'limit must be 1 to 200.' }).max(200, { error: 'limit must be 1 to 200.' }).optional(),
 		offset: z.coerce.number({ error: 'offset must be a whole number.' }).int({ error: 'offset must be a whole number.' }).min(0, { error: 'offset must be 0 or more.' }).optional()
 	},
@@ -27,7 +28,7 @@ const listQuery = z.strictObject(
 const createBody = z.union(
 	[
 		z.strictObject({ title: z.string({ error: 'title must be text.' }), doc: z.unknown().refine((d) => d !== undefined, { message: 'doc is required.' }) }),
-		z.strictObject({ example: z.string({ error: 'example must be a worked example id.' }), title: z.string({ error: 'title must be text.' }).optional() })
+		z.strictObject({ example: plainText('example', 'line', 'example must be a worked example id.'), title: z.string({ error: 'title must be text.' }).optional() })
 	],
 	{ error: 'Send { "title", "doc" } (a sheet document or a path spec), or { "example", "title"? }.' }
 );

@@ -6,6 +6,7 @@ import { requireTeam } from '$lib/server/guard';
 import { flowContext } from '$lib/server/request';
 import { moveRevision, OpenNotesError, parseRevisionNumber, restoreRevision } from '$lib/server/revisions';
 import { DraftConflictError } from '$lib/server/sheets';
+import { plainText } from '$lib/plain-text';
 
 /*
  * Sign-off steps on the newest revision, and restoring any revision as the working draft.
@@ -28,8 +29,8 @@ const ACTIONS = ['submit', 'withdraw', 'check', 'return', 'approve'] as const;
 const stepBody = z.strictObject(
 	{
 		note: z.string({ error: 'note must be text.' }).optional(),
-		checkerId: z.string({ error: 'checkerId must be the id of a team member.' }).nullable().optional(),
-		override: z.string({ error: 'override must be text: the reason for signing off over open review notes.' }).optional()
+		checkerId: plainText('checkerId', 'line', 'checkerId must be the id of a team member.').nullable().optional(),
+		override: plainText('override', 'lines', 'override must be text: the reason for signing off over open review notes.').optional()
 	},
 	{ error: 'Send a JSON object, e.g. { "note": "…" }.' }
 );
