@@ -4,6 +4,7 @@ import { clampCoords } from './clamp';
 import { isPressureLimit, legAriaLabel, LIMIT_ORDER, limitText, stateAriaLabel } from './describe';
 import { LEG_STROKE, LIMIT_STROKE, processStyle } from './encoding';
 import { KEY, keyEntries, layoutKey } from './key';
+import { stackOffsets } from './stack';
 import { levelAnchors, ObstacleIndex, placeEdgeLabels, placeNear, textWidth, type LabelRequest } from './labels';
 import { axisTicks, axisUnit, compactNumber, fitDomain, makeXScale, makeYScale, thinLabels, yScaleType, type Scale, type Tick } from './scales';
 import { DRAWING_CSS, OVERLAY_CSS } from './style';
@@ -154,6 +155,13 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	let plot: Rect = { x: 0, y: 0, width: 0, height: 0 };
 	let dragging: { id: string; moved: boolean } | null = null;
 	let pathRev = 0;
+	/** discs moved beside an earlier state they would hide (a cycle's last state on its first) */
+	let stateShift = new Map<string, Point>();
+	const shifted = (d: ChartState): Point => {
+		const p = project(d.state);
+		const o = stateShift.get(d.id);
+		return o ? { x: p.x + o.x, y: p.y + o.y } : p;
+	};
 
 	// ---- drawing skeleton
 	const svg = select(drawing).classed('swc-drawing', true);
@@ -210,7 +218,12 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	}
 
 	function currentKeyEntries() {
-		return keyEntries(path.legs, { limits: drawnLimits().length > 0, traces: (path.traces ?? []).some((t) => t.points.some((p) => p.v)) });
+		const drawn = (path.traces ?? []).filter((t) => t.points.some((p) => p.v));
+		return keyEntries(path.legs, {
+			limits: drawnLimits().length > 0,
+			traces: drawn.some((t) => t.kind !== 'revision'),
+			revisions: drawn.filter((t) => t.kind === 'revision').map((t) => t.label)
+		});
 	}
 
 	/** Limits that can be drawn on this chart kind: straight rules, or curves when points are given. */
@@ -448,6 +461,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		}
 		const sel = path.selection;
 		const legPts = new Map(path.legs.map((l) => [l.id, l.points.map(project)]));
+		stateShift = stackOffsets(path.states.map((s) => ({ id: s.id, ...project(s.state) })), STATE_R);
 
 		gLegs
 			.selectAll<SVGGElement, ChartLeg>('g.swc-leg')
@@ -485,6 +499,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 
 		const traces = (path.traces ?? []).map((t) => ({
 			id: t.id,
+			revision: t.kind === 'revision',
 			pts: t.points.filter((p) => p.v && p.v > 0).map((p) => ({ ...project({ v: p.v!, T: p.T, P: p.P }), inDome: !!p.inDome }))
 		}));
 		gTraces
@@ -498,7 +513,11 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			})
 			.each(function (d) {
 				const g = select(this);
-				g.select('.swc-trace-line').attr('d', polylineD(d.pts));
+				g.select('.swc-trace-line').attr('class', d.revision ? 'swc-trace-line swc-revision-line' : 'swc-trace-line').attr('d', polylineD(d.pts));
+				if (d.revision) {
+					g.select('.swc-trace-mark').attr('d', null);
+					return;
+				}
 				const every = Math.max(1, Math.ceil(d.pts.length / 120));
 				const marks = d.pts
 					.filter((_, i) => i % every === 0)
@@ -523,7 +542,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			})
 			.classed('is-selected', (d) => sel?.kind === 'state' && sel.id === d.id)
 			.attr('transform', (d) => {
-				const p = project(d.state);
+				const p = shifted(d);
 				return `translate(${p.x.toFixed(1)},${p.y.toFixed(1)})`;
 			})
 			.each(function (d) {
@@ -543,7 +562,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const obstacles = new ObstacleIndex(32);
 		for (const pts of legPts.values()) obstacles.addPolyline(pts);
 		for (const s of path.states) {
-			const p = project(s.state);
+			const p = shifted(s);
 			obstacles.addBox({ x: p.x - STATE_R - 3, y: p.y - STATE_R - 3, width: 2 * STATE_R + 6, height: 2 * STATE_R + 6 });
 		}
 		for (const p of crossingPts) obstacles.addBox({ x: p.x - 5, y: p.y - 5, width: 10, height: 10 });
@@ -621,6 +640,8 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 					sample.attr('class', 'sample swc-crossing').attr('d', `M${KEY.sample / 2},-4.5l4.5,4.5l-4.5,4.5l-4.5,-4.5Z`);
 				} else if (e.kind === 'limit') {
 					sample.attr('class', 'sample swc-limit').attr('d', `M0,0h${KEY.sample}`).attr('stroke-width', LIMIT_STROKE.width).attr('stroke-dasharray', '9 4');
+				} else if (e.kind === 'revision') {
+					sample.attr('class', 'sample swc-trace-line swc-revision-line').attr('d', `M3,0h${KEY.sample - 6}`);
 				} else {
 					sample.attr('class', 'sample swc-trace-mark').attr('d', `M3,0h20M${KEY.sample / 2 - 2.5},0h5M${KEY.sample / 2},-2.5v5`);
 				}
@@ -666,8 +687,8 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 					.call(stateDrag)
 			)
 			.classed('is-locked', (d) => !interaction.canDrag(d.id))
-			.attr('cx', (d) => project(d.state).x)
-			.attr('cy', (d) => project(d.state).y)
+			.attr('cx', (d) => shifted(d).x)
+			.attr('cy', (d) => shifted(d).y)
 			.attr('aria-label', (d) => stateAriaLabel(d, f.units))
 			.attr('aria-pressed', (d) => String(sel?.kind === 'state' && sel.id === d.id));
 	}
@@ -680,7 +701,8 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		})
 		.on('drag', (ev, d) => {
 			if (!dragging || !interaction.canDrag(d.id)) return;
-			const { coords, reason } = clamp(dataAt(ev.x, ev.y));
+			const o = stateShift.get(d.id);
+			const { coords, reason } = clamp(dataAt(ev.x - (o?.x ?? 0), ev.y - (o?.y ?? 0)));
 			const e: StateDragEvent = { stateId: d.id, coords, reason };
 			const g = toScreen(coords);
 			ghost.style('display', null).classed('is-clamped', reason !== null);
@@ -696,7 +718,8 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			dragging = null;
 			ghost.style('display', 'none');
 			if (was?.moved) {
-				const { coords, reason } = clamp(dataAt(ev.x, ev.y));
+				const o = stateShift.get(d.id);
+				const { coords, reason } = clamp(dataAt(ev.x - (o?.x ?? 0), ev.y - (o?.y ?? 0)));
 				handlers.dragEnd({ stateId: d.id, coords, reason });
 			} else handlers.select({ kind: 'state', id: d.id });
 		});

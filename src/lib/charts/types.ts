@@ -97,6 +97,11 @@ export interface MeasuredTrace {
 	id: string;
 	label: string;
 	points: TracePoint[];
+	/**
+	 * `measured` (default): logger data, a hairline with small crosses, keyed "measured".
+	 * `revision`: another revision's computed path (Compare), a wide faint band keyed by its label.
+	 */
+	kind?: 'measured' | 'revision';
 }
 
 /** A position on the chart in SI: v always, and T (T–v) or P (P–v, absolute Pa). */

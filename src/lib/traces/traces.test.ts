@@ -109,6 +109,34 @@ describe('malformed files', () => {
 		expect(r.rejected[0].text).toBe('5,abc,21');
 	});
 
+	it('names every problem of a malformed file in one answer: each header fault and each bad line, with line numbers', () => {
+		// a bare pressure unit, an unknown temperature unit, no time unit, and three bad data lines
+		const text = ['# logger 7', 'time,P [kPa],T [degC-ish]', '0,200,20', '5,2,0,21', '10,abc,22', '15,,23', '20,230,24'].join('\n');
+		const r = refused(read(text));
+		expect(r.rejectedCount).toBe(6);
+		expect(r.rejected.map((x) => x.line)).toEqual([2, 2, 2, 4, 5, 6]);
+		expect(r.rejected[0].reason).toMatch(/"time" on line 2 has no unit/);
+		expect(r.rejected[1].reason).toMatch(/absolute or gauge/);
+		expect(r.rejected[2].reason).toMatch(/"degC-ish".*not a unit of temperature/);
+		expect(r.rejected[3].reason).toMatch(/4 values where the header has 3 columns/);
+		expect(r.rejected[4].reason).toMatch(/"abc" in P \[kPa\] is not a number/);
+		expect(r.rejected[5].reason).toMatch(/no P \[kPa\] value/);
+		// the message itself says all of it, not only the first
+		expect(r.message).toMatch(/^The file has 6 problems; nothing was saved\. The header has 3: /);
+		for (const bit of ['has no unit', 'absolute or gauge', 'degC-ish', 'line 4: 4 values', 'line 5: "abc"', 'line 6: no P']) expect(r.message).toContain(bit);
+	});
+
+	it('spells out up to five unreadable lines in the message and counts the rest', () => {
+		const lines = ['time [s],P [kPa a],T [°C]'];
+		for (let i = 0; i < 8; i++) lines.push(`${i},x${i},20`);
+		const r = refused(read(lines.join('\n')));
+		expect(r.rejectedCount).toBe(8);
+		expect(r.rejected).toHaveLength(8);
+		for (const n of [2, 3, 4, 5, 6]) expect(r.message).toContain(`line ${n}: "x${n - 2}"`);
+		expect(r.message).not.toContain('line 7:');
+		expect(r.message).toContain('and 3 more, each listed with its line number');
+	});
+
 	it('keeps the readable lines only when asked to leave the others out', () => {
 		const r = ok(read('time [s],P [kPa a],T [°C]\n0,200,20\n5,abc,21\n10,210,22\n', { allowRejected: true }));
 		expect(r.points.map((p) => p.line)).toEqual([2, 4]);
