@@ -36,3 +36,89 @@ test('a closed cycle shows its last state beside its first on both charts, not o
 		expect(Math.abs(s1.y - s5.y)).toBeLessThan(1);
 	}
 });
+
+test('a sealed 50 L vessel started by fill level: 80 % liquid at 20 °C, kept as such over a reload and in the API', async ({ page }) => {
+	await signInPage(page, DEMO.designer);
+	const title = `Fill V-50 ${Date.now().toString(36)}`;
+	await page.goto(`/t/${TEAM}/sheets/new`);
+	await page.getByLabel('Title').fill(title);
+	await page.getByLabel('Sized by').selectOption('volume');
+	await page.getByLabel('Volume').fill('50 L');
+	await page.locator('#f-valueA').fill('20 °C');
+	await page.locator('#f-valueB').fill('0.5');
+	await page.getByRole('button', { name: 'Create sheet' }).click();
+	await expect(page.getByTestId('sheet-title')).toHaveText(title);
+	await page.getByRole('tab', { name: /Setup/ }).click();
+	const fill = page.getByTestId('setup-fill');
+	await fill.getByLabel('Liquid fill, % of the volume').fill('80');
+	await fill.getByLabel('At a temperature or pressure').fill('20 °C');
+	await fill.getByRole('button', { name: 'Set S1 by fill level' }).click();
+	await expect(fill.getByTestId('start-fill-current')).toContainText('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
+	await page.getByRole('tab', { name: /States/ }).click();
+	await expect(page.getByTestId('start-fill')).toHaveText('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
+	await expect(page.getByTestId('phase-S1')).toContainText('saturated mixture');
+	await expect(page.getByTestId('phase-S1')).toContainText('liquid 80.00');
+	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved');
+	const url = page.url();
+	await page.reload();
+	await expect(page.getByTestId('start-fill')).toHaveText('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
+	const id = url.split('/').pop()!;
+	const res = await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`);
+	const { sheet } = (await res.json()) as { sheet: { doc: { startSpec: unknown; spec: { start: { T: number; v: number } } } } };
+	expect(sheet.doc.startSpec).toEqual({ kind: 'fill', fraction: 0.8, T: 293.15 });
+	// python3-iapws 1.5.2 (Debian): IAPWS95(T=293.15, x=0).rho = 998.16180134, x=1: 0.017314008205 → v = 1/(0.8 ρ′ + 0.2 ρ″)
+	expect(Math.abs(sheet.doc.spec.start.v / 0.0012522965492665402 - 1)).toBeLessThan(1e-6);
+	// typing a property of S1 replaces the fill by two properties
+	const tCell = page.locator('tr[data-label="S1"] [data-prop="T"]');
+	await tCell.fill('25 °C');
+	await tCell.press('Enter');
+	await expect(page.getByTestId('start-fill')).toHaveCount(0);
+	await expect(page.getByTestId('phase-S1')).toContainText('saturated mixture');
+});
+
+test('40 °C typed in a pressure cell sets the saturation pressure at 40 °C, and the cell says so', async ({ page }) => {
+	await signInPage(page, DEMO.designer);
+	await page.goto(`/t/${TEAM}/sheets/new`);
+	await page.getByLabel('Title').fill(`Psat typed ${Date.now().toString(36)}`);
+	await page.getByLabel('Sized by').selectOption('perkg');
+	await page.locator('#f-valueA').fill('20 °C');
+	await page.locator('#f-valueB').fill('0.5');
+	await page.getByRole('button', { name: 'Create sheet' }).click();
+	await expect(page.getByTestId('phase-S1')).toContainText('saturated mixture');
+	const p = page.locator('tr[data-label="S1"] [data-prop="P"]');
+	await p.fill('40 °C');
+	await p.press('Enter');
+	await expect(page.locator('tr[data-label="S1"] .cell-note')).toContainText('40.00\u00a0°C typed as a pressure: the saturation pressure at 40.00\u00a0°C');
+	// S1 is now fixed by x and P = Psat(40 °C): its temperature reads 40.00 °C
+	await expect(page.locator('tr[data-label="S1"] [data-prop="T"]')).toHaveValue('40.00');
+	// python3-iapws 1.5.2 (Debian): IAPWS95(T=313.15, x=0).P = 7.384938 kPa
+	expect(Math.abs(Number((await p.inputValue()).replace(/\s.*$/, '')) / 7.384938 - 1)).toBeLessThan(2e-4);
+	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved');
+});
+
+test('a sealed vessel heated shut in, "to saturation": the leg ends liquid-full at the liquid line', async ({ page }) => {
+	await signInPage(page, DEMO.designer);
+	const doc = {
+		version: 1,
+		description: '',
+		startSpec: { kind: 'fill', fraction: 0.8, T: 293.15 },
+		spec: { fluid: 'water', system: { kind: 'closed', volume: 0.05 }, start: { T: 293.15, x: 0.5 }, legs: [{ id: 'Lheat01', process: 'isochoric', target: { T: 473.15 } }] },
+		units: { system: 'si', pressureUnit: 'MPa', pressureReference: 'absolute', usPower: 'Btu/h', atmosphere: 101325 },
+		chart: { view: 'both', pressureScale: 'log', isolines: false },
+		titleBlock: { project: '', equipment: '', tag: '', documentNumber: '', site: '' }
+	};
+	const made = await page.request.post(`/api/v1/teams/${TEAM}/sheets`, { data: { title: `Heat-up ${Date.now().toString(36)}`, doc } });
+	expect(made.status(), await made.text()).toBe(201);
+	const id = ((await made.json()) as { sheet: { id: string } }).sheet.id;
+	await page.goto(`/t/${TEAM}/sheets/${id}`);
+	await expect(page.getByTestId('start-fill')).toContainText('fill 80');
+	await page.getByRole('button', { name: 'End leg L1 on the saturation line' }).click();
+	await expect(page.getByTestId('leg-to-saturation')).toHaveText('to saturation (saturated liquid, x = 0)');
+	await expect(page.getByTestId('phase-S2')).toContainText('saturated liquid');
+	// python3-iapws 1.5.2 (Debian): bisection on IAPWS95(T, x=0).rho = 1/v₁ → T = 523.393 K = 250.24 °C, P = 3.9925 MPa
+	await expect(page.locator('tr[data-label="S2"] [data-prop="T"]')).toHaveValue(/^250\.2[34]$/);
+	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved');
+	const res = await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`);
+	const { sheet } = (await res.json()) as { sheet: { doc: { spec: { legs: { to?: string; target: unknown }[] } } } };
+	expect(sheet.doc.spec.legs[0]).toMatchObject({ to: 'saturation', target: { x: 0 } });
+});

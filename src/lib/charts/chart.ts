@@ -222,6 +222,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		return keyEntries(path.legs, {
 			limits: drawnLimits().length > 0,
 			traces: drawn.some((t) => t.kind !== 'revision'),
+			bands: (path.traces ?? []).some((t) => t.kind !== 'revision' && t.points.some((p) => p.vBand)),
 			revisions: drawn.filter((t) => t.kind === 'revision').map((t) => t.label)
 		});
 	}
@@ -500,7 +501,10 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const traces = (path.traces ?? []).map((t) => ({
 			id: t.id,
 			revision: t.kind === 'revision',
-			pts: t.points.filter((p) => p.v && p.v > 0).map((p) => ({ ...project({ v: p.v!, T: p.T, P: p.P }), inDome: !!p.inDome }))
+			pts: t.points.filter((p) => p.v && p.v > 0).map((p) => ({ ...project({ v: p.v!, T: p.T, P: p.P }), inDome: !!p.inDome })),
+			bands: t.points
+				.filter((p) => p.vBand && !(p.v && p.v > 0))
+				.map((p) => ({ a: project({ v: p.vBand![0], T: p.T, P: p.P }), b: project({ v: p.vBand![1], T: p.T, P: p.P }) }))
 		}));
 		gTraces
 			.selectAll<SVGGElement, (typeof traces)[number]>('g')
@@ -509,11 +513,21 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 				const g = enter.append('g');
 				g.append('path').attr('class', 'swc-trace-line');
 				g.append('path').attr('class', 'swc-trace-mark');
+				g.append('path').attr('class', 'swc-trace-band');
 				return g;
 			})
 			.each(function (d) {
 				const g = select(this);
 				g.select('.swc-trace-line').attr('class', d.revision ? 'swc-trace-line swc-revision-line' : 'swc-trace-line').attr('d', polylineD(d.pts));
+				// readings on the saturation line: a band from v′ to v″ at their T or P (a few hundred at most)
+				const bandEvery = Math.max(1, Math.ceil(d.bands.length / 200));
+				g.select('.swc-trace-band').attr(
+					'd',
+					d.bands
+						.filter((_, i) => i % bandEvery === 0)
+						.map((b) => `M${b.a.x.toFixed(1)},${b.a.y.toFixed(1)}L${b.b.x.toFixed(1)},${b.b.y.toFixed(1)}`)
+						.join('') || null
+				);
 				if (d.revision) {
 					g.select('.swc-trace-mark').attr('d', null);
 					return;
@@ -640,6 +654,8 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 					sample.attr('class', 'sample swc-crossing').attr('d', `M${KEY.sample / 2},-4.5l4.5,4.5l-4.5,4.5l-4.5,-4.5Z`);
 				} else if (e.kind === 'limit') {
 					sample.attr('class', 'sample swc-limit').attr('d', `M0,0h${KEY.sample}`).attr('stroke-width', LIMIT_STROKE.width).attr('stroke-dasharray', '9 4');
+				} else if (e.kind === 'trace-band') {
+					sample.attr('class', 'sample swc-trace-band').attr('d', `M3,0h${KEY.sample - 6}`);
 				} else if (e.kind === 'revision') {
 					sample.attr('class', 'sample swc-trace-line swc-revision-line').attr('d', `M3,0h${KEY.sample - 6}`);
 				} else {

@@ -91,6 +91,11 @@ export interface TracePoint {
 	v?: number | null;
 	/** the logger or the engine says the point is inside the vapor dome */
 	inDome?: boolean;
+	/**
+	 * P and T on the saturation line without a v: [v′, v″] at that pressure. Drawn as a band across
+	 * the dome at its T (T–v) or P (P–v): the reading is somewhere on it, v not determined.
+	 */
+	vBand?: [number, number] | null;
 }
 
 export interface MeasuredTrace {
