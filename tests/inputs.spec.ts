@@ -1,5 +1,5 @@
-import { expect, test } from '@playwright/test';
-import { DEMO, TEAM, signInPage } from './helpers';
+import { expect, test, type Page } from '@playwright/test';
+import { BASE, DEMO, TEAM, signInPage } from './helpers';
 
 test.describe('new sheet form', () => {
 	test('a directly loaded new-sheet page keeps the title when the pressure unit changes, and creates the sheet', async ({ page }) => {
@@ -96,9 +96,8 @@ test('40 °C typed in a pressure cell sets the saturation pressure at 40 °C, an
 	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved');
 });
 
-test('a sealed vessel heated shut in, "to saturation": the leg ends liquid-full at the liquid line', async ({ page }) => {
-	await signInPage(page, DEMO.designer);
-	const doc = {
+function sealedVesselDoc() {
+	return {
 		version: 1,
 		description: '',
 		startSpec: { kind: 'fill', fraction: 0.8, T: 293.15 },
@@ -107,10 +106,19 @@ test('a sealed vessel heated shut in, "to saturation": the leg ends liquid-full 
 		chart: { view: 'both', pressureScale: 'log', isolines: false },
 		titleBlock: { project: '', equipment: '', tag: '', documentNumber: '', site: '' }
 	};
-	const made = await page.request.post(`/api/v1/teams/${TEAM}/sheets`, { data: { title: `Heat-up ${Date.now().toString(36)}`, doc } });
+}
+
+async function openSealedVessel(page: Page): Promise<string> {
+	const made = await page.request.post(`/api/v1/teams/${TEAM}/sheets`, { data: { title: `Heat-up ${Date.now().toString(36)}`, doc: sealedVesselDoc() } });
 	expect(made.status(), await made.text()).toBe(201);
 	const id = ((await made.json()) as { sheet: { id: string } }).sheet.id;
 	await page.goto(`/t/${TEAM}/sheets/${id}`);
+	return id;
+}
+
+test('a sealed vessel heated shut in, "to saturation": the leg ends liquid-full at the liquid line', async ({ page }) => {
+	await signInPage(page, DEMO.designer);
+	const id = await openSealedVessel(page);
 	await expect(page.getByTestId('start-fill')).toContainText('fill 80');
 	await page.getByRole('button', { name: 'End leg L1 on the saturation line' }).click();
 	await expect(page.getByTestId('leg-to-saturation')).toHaveText('to saturation (saturated liquid, x = 0)');
@@ -121,4 +129,92 @@ test('a sealed vessel heated shut in, "to saturation": the leg ends liquid-full 
 	const res = await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`);
 	const { sheet } = (await res.json()) as { sheet: { doc: { spec: { legs: { to?: string; target: unknown }[] } } } };
 	expect(sheet.doc.spec.legs[0]).toMatchObject({ to: 'saturation', target: { x: 0 } });
+});
+
+test('logger readings on the saturation line are drawn across the dome (v open, said in the key); a malformed log names every problem', async ({ page }) => {
+	await signInPage(page, DEMO.designer);
+	await openSealedVessel(page);
+	await page.getByRole('tab', { name: /Traces/ }).click();
+	const panel = page.getByTestId('trace-panel');
+	// a sealed heat-up: P and T on the saturation line all the way (python3-iapws 1.5.2 (Debian), IAPWS95(T, x=0).P)
+	await panel.getByLabel(/Logger file/).setInputFiles({
+		name: 'heat-up.csv',
+		mimeType: 'text/csv',
+		buffer: Buffer.from('time [min],P [kPa a],T [°C]\n0,19.946,60\n10,101.418,100\n20,361.539,140\n30,1002.811,180\n')
+	});
+	await panel.getByRole('button', { name: 'Upload trace' }).click();
+	await expect(panel.getByTestId('trace-item')).toContainText('4 on the saturation line');
+	await expect(panel).toContainText('no v is assumed');
+	for (const kind of ['T-v', 'P-v']) {
+		const band = page.locator(`[data-chart="${kind}"] path.swc-trace-band`).first();
+		// one segment across the dome per reading, none joined into a sweep in v
+		await expect(band).toHaveAttribute('d', /^(M[\d.]+,[\d.]+L[\d.]+,[\d.]+){4}$/);
+		const d = (await band.getAttribute('d'))!;
+		for (const seg of d.split('M').filter(Boolean)) {
+			const [[, y1], [, y2]] = seg.split('L').map((p) => p.split(',').map(Number));
+			expect(Math.abs(y1 - y2), `${kind}: a band is level (one T or one P)`).toBeLessThan(0.2);
+		}
+		await expect(page.locator(`[data-chart="${kind}"] .swc-key-text`, { hasText: 'measured at saturation (v not fixed by P, T)' })).toHaveCount(1);
+	}
+
+	await panel.getByLabel(/Logger file/).setInputFiles({ name: 'broken.csv', mimeType: 'text/csv', buffer: Buffer.from('time,P [kPa],T [°C]\n0,100,20\n5,abc,21\n') });
+	await panel.getByRole('button', { name: 'Upload trace' }).click();
+	const refusal = page.getByTestId('trace-refusal');
+	await expect(refusal).toContainText('The file has 3 problems; nothing was saved.');
+	await expect(refusal).toContainText('has no unit');
+	await expect(refusal).toContainText('absolute or gauge');
+	await expect(refusal).toContainText('line 3: "abc"');
+	const lines = await refusal.getByTestId('trace-rejected').locator('tbody tr td:first-child').allTextContents();
+	expect(lines.map(Number)).toEqual([1, 1, 3]);
+});
+
+test('Compare draws the older revision as its own band, keyed by its label, not as "measured"', async ({ page }) => {
+	await signInPage(page, DEMO.designer);
+	const id = await openSealedVessel(page);
+	const rev = await page.request.post(`/api/v1/teams/${TEAM}/sheets/${id}/revisions`, { data: { message: 'First issue', baseRevision: null }, headers: { origin: BASE } });
+	expect(rev.status(), await rev.text()).toBe(201);
+	await page.goto(`/t/${TEAM}/sheets/${id}/compare?a=1&b=draft`);
+	await expect(page.getByTestId('compare-page')).toBeVisible();
+	for (const kind of ['T-v', 'P-v']) {
+		const chart = page.locator(`[data-chart="${kind}"]`);
+		await expect(chart.locator('path.swc-revision-line').first()).toHaveAttribute('d', /^M/);
+		await expect(chart.locator('.swc-key-text', { hasText: 'Rev 1' })).toHaveCount(1);
+		await expect(chart.locator('.swc-key-text', { hasText: 'measured' })).toHaveCount(0);
+	}
+});
+
+test('the new-sheet form takes a liquid fill with a temperature, and a temperature given for P as the saturation pressure', async ({ page }) => {
+	await signInPage(page, DEMO.designer);
+	await page.goto(`/t/${TEAM}/sheets/new`);
+	await page.getByLabel('Title').fill(`Form fill ${Date.now().toString(36)}`);
+	await page.getByLabel('Volume').fill('50 L');
+	await page.locator('#f-propA').selectOption('fill');
+	await page.locator('#f-valueA').fill('80');
+	await page.locator('#f-propB').selectOption('T');
+	await page.locator('#f-valueB').fill('20 °C');
+	await page.getByRole('button', { name: 'Create sheet' }).click();
+	await expect(page.getByTestId('start-fill')).toHaveText('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
+
+	await page.goto(`/t/${TEAM}/sheets/new`);
+	await page.getByLabel('Title').fill(`Form Psat ${Date.now().toString(36)}`);
+	await page.getByLabel('Sized by').selectOption('perkg');
+	await page.locator('#f-propA').selectOption('P');
+	await page.locator('#f-valueA').fill('40 °C');
+	await page.locator('#f-propB').selectOption('x');
+	await page.locator('#f-valueB').fill('0.5');
+	await page.getByRole('button', { name: 'Create sheet' }).click();
+	await expect(page.getByTestId('phase-S1')).toContainText('saturated mixture');
+	await expect(page.locator('tr[data-label="S1"] [data-prop="T"]')).toHaveValue('40.00');
+
+	// a fill with a property other than T or P is refused beside the field, nothing created
+	await page.goto(`/t/${TEAM}/sheets/new`);
+	await page.getByLabel('Title').fill('Never made');
+	await page.getByLabel('Sized by').selectOption('perkg');
+	await page.locator('#f-propA').selectOption('fill');
+	await page.locator('#f-valueA').fill('80');
+	await page.locator('#f-propB').selectOption('h');
+	await page.locator('#f-valueB').fill('100 kJ/kg');
+	await page.getByRole('button', { name: 'Create sheet' }).click();
+	await expect(page.locator('.field-error')).toContainText('A liquid fill goes with a temperature or a pressure');
+	await expect(page).toHaveURL(/\/sheets\/new/);
 });
