@@ -153,7 +153,8 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	let x: Scale | null = null;
 	let y: Scale | null = null;
 	let plot: Rect = { x: 0, y: 0, width: 0, height: 0 };
-	let dragging: { id: string; moved: boolean } | null = null;
+	/** `off`: the disc's stacking offset when the drag began (kept, so the state does not jump as it leaves the stack) */
+	let dragging: { id: string; moved: boolean; off: Point } | null = null;
 	let pathRev = 0;
 	/** discs moved beside an earlier state they would hide (a cycle's last state on its first) */
 	let stateShift = new Map<string, Point>();
@@ -657,7 +658,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 				} else if (e.kind === 'trace-band') {
 					sample.attr('class', 'sample swc-trace-band').attr('d', `M3,0h${KEY.sample - 6}`);
 				} else if (e.kind === 'revision') {
-					sample.attr('class', 'sample swc-trace-line swc-revision-line').attr('d', `M3,0h${KEY.sample - 6}`);
+					sample.attr('class', 'sample swc-revision-line').attr('d', `M3,0h${KEY.sample - 6}`);
 				} else {
 					sample.attr('class', 'sample swc-trace-mark').attr('d', `M3,0h20M${KEY.sample / 2 - 2.5},0h5M${KEY.sample / 2},-2.5v5`);
 				}
@@ -713,12 +714,11 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		.container(() => overlay as unknown as SVGGElement)
 		.subject((ev: { x: number; y: number }) => ({ x: ev.x, y: ev.y }))
 		.on('start', (_ev, d) => {
-			dragging = { id: d.id, moved: false };
+			dragging = { id: d.id, moved: false, off: stateShift.get(d.id) ?? { x: 0, y: 0 } };
 		})
 		.on('drag', (ev, d) => {
 			if (!dragging || !interaction.canDrag(d.id)) return;
-			const o = stateShift.get(d.id);
-			const { coords, reason } = clamp(dataAt(ev.x - (o?.x ?? 0), ev.y - (o?.y ?? 0)));
+			const { coords, reason } = clamp(dataAt(ev.x - dragging.off.x, ev.y - dragging.off.y));
 			const e: StateDragEvent = { stateId: d.id, coords, reason };
 			const g = toScreen(coords);
 			ghost.style('display', null).classed('is-clamped', reason !== null);
@@ -734,8 +734,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			dragging = null;
 			ghost.style('display', 'none');
 			if (was?.moved) {
-				const o = stateShift.get(d.id);
-				const { coords, reason } = clamp(dataAt(ev.x - (o?.x ?? 0), ev.y - (o?.y ?? 0)));
+				const { coords, reason } = clamp(dataAt(ev.x - was.off.x, ev.y - was.off.y));
 				handlers.dragEnd({ stateId: d.id, coords, reason });
 			} else handlers.select({ kind: 'state', id: d.id });
 		});

@@ -39,14 +39,6 @@ export function fillStart(engine: SaturationSource, fluid: string, fill: FillSpe
 	return { T: sat.T, v: fillVolume(fill.fraction, sat.liquid.rho, sat.vapor.rho) };
 }
 
-/** Same start pair within rounding (the server rewrites `spec.start` from the fill; this tells an edit from a round trip). */
-export function sameStart(a: Inputs, b: Inputs): boolean {
-	const ka = Object.keys(a).filter((k) => a[k as keyof Inputs] !== undefined).sort();
-	const kb = Object.keys(b).filter((k) => b[k as keyof Inputs] !== undefined).sort();
-	if (ka.join() !== kb.join()) return false;
-	return ka.every((k) => Math.abs(a[k as keyof Inputs]! - b[k as keyof Inputs]!) <= 1e-9 * Math.abs(b[k as keyof Inputs]!));
-}
-
 /** A fill level in words, in the sheet's units: "fill 80 % liquid by volume at 20.00 °C". */
 export function fillText(fill: FillSpec, prefs: UnitPrefs): string {
 	const pct = String(Number((fill.fraction * 100).toPrecision(4)));
