@@ -34,6 +34,8 @@ test('a closed cycle shows its last state beside its first on both charts, not o
 		const apart = Math.abs(s1.x - s5.x) >= s1.width - 1 || Math.abs(s1.y - s5.y) >= s1.height - 1;
 		expect(apart, `${kind}: S1 at ${s1.x},${s1.y}, S5 at ${s5.x},${s5.y}`).toBe(true);
 		expect(Math.abs(s1.y - s5.y)).toBeLessThan(1);
+		// and a screen reader hears where it is
+		await expect(page.locator(`[data-chart="${kind}"] circle.swc-hit-state[aria-label^="State S5,"]`)).toHaveAttribute('aria-label', /the same point as S1, drawn beside it$/);
 	}
 });
 
@@ -129,6 +131,16 @@ test('a sealed vessel heated shut in, "to saturation": the leg ends liquid-full 
 	const res = await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`);
 	const { sheet } = (await res.json()) as { sheet: { doc: { spec: { legs: { to?: string; target: unknown }[] } } } };
 	expect(sheet.doc.spec.legs[0]).toMatchObject({ to: 'saturation', target: { x: 0 } });
+	// typing another end makes it an ordinary leg again
+	const t2 = page.locator('tr[data-label="S2"] [data-prop="T"]');
+	await t2.fill('200 °C');
+	await t2.press('Enter');
+	await expect(page.getByTestId('leg-to-saturation')).toHaveCount(0);
+	await expect(page.getByRole('button', { name: 'End leg L1 on the saturation line' })).toBeVisible();
+	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved');
+	const after = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json()) as { sheet: { doc: { spec: { legs: { to?: string; target: { T?: number } }[] } } } };
+	expect(after.sheet.doc.spec.legs[0].to).toBeUndefined();
+	expect(after.sheet.doc.spec.legs[0].target.T).toBeCloseTo(473.15, 6);
 });
 
 test('logger readings on the saturation line are drawn across the dome (v open, said in the key); a malformed log names every problem', async ({ page }) => {

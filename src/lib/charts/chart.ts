@@ -157,7 +157,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	let dragging: { id: string; moved: boolean; off: Point } | null = null;
 	let pathRev = 0;
 	/** discs moved beside an earlier state they would hide (a cycle's last state on its first) */
-	let stateShift = new Map<string, Point>();
+	let stateShift = new Map<string, Point & { beside?: string }>();
 	const shifted = (d: ChartState): Point => {
 		const p = project(d.state);
 		const o = stateShift.get(d.id);
@@ -706,7 +706,11 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			.classed('is-locked', (d) => !interaction.canDrag(d.id))
 			.attr('cx', (d) => shifted(d).x)
 			.attr('cy', (d) => shifted(d).y)
-			.attr('aria-label', (d) => stateAriaLabel(d, f.units))
+			.attr('aria-label', (d) => {
+				const beside = stateShift.get(d.id)?.beside;
+				const other = beside ? path.states.find((s) => s.id === beside)?.label : undefined;
+				return stateAriaLabel(d, f.units) + (other ? `; the same point as ${other}, drawn beside it` : '');
+			})
 			.attr('aria-pressed', (d) => String(sel?.kind === 'state' && sel.id === d.id));
 	}
 

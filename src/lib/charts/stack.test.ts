@@ -13,6 +13,7 @@ describe('stackOffsets', () => {
 		expect(o.get('start')).toEqual({ x: 0, y: 0 });
 		expect(o.get('L1')).toEqual({ x: 0, y: 0 });
 		const last = o.get('L3')!;
+		expect(last.beside).toBe('start');
 		// drawn one disc width (plus the gap) to the right of the first state, at its height
 		expect(100.4 + last.x).toBeCloseTo(100 + 2 * 9.5 + 2, 9);
 		expect(199.7 + last.y).toBeCloseTo(200, 9);
@@ -29,6 +30,7 @@ describe('stackOffsets', () => {
 			9.5
 		);
 		expect([o.get('a')!.x, o.get('b')!.x, o.get('c')!.x]).toEqual([0, 21, 42]);
+		expect(o.get('c')!.beside).toBe('a');
 		expect(o.get('d')).toEqual({ x: 0, y: 0 });
 	});
 });
