@@ -4,6 +4,7 @@ import { clampCoords } from './clamp';
 import { isPressureLimit, legAriaLabel, LIMIT_ORDER, limitText, stateAriaLabel } from './describe';
 import { LEG_STROKE, LIMIT_STROKE, processStyle } from './encoding';
 import { KEY, keyEntries, layoutKey } from './key';
+import { stackOffsets } from './stack';
 import { levelAnchors, ObstacleIndex, placeEdgeLabels, placeNear, textWidth, type LabelRequest } from './labels';
 import { axisTicks, axisUnit, compactNumber, fitDomain, makeXScale, makeYScale, thinLabels, yScaleType, type Scale, type Tick } from './scales';
 import { DRAWING_CSS, OVERLAY_CSS } from './style';
@@ -152,8 +153,16 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	let x: Scale | null = null;
 	let y: Scale | null = null;
 	let plot: Rect = { x: 0, y: 0, width: 0, height: 0 };
-	let dragging: { id: string; moved: boolean } | null = null;
+	/** `off`: the disc's stacking offset when the drag began (kept, so the state does not jump as it leaves the stack) */
+	let dragging: { id: string; moved: boolean; off: Point } | null = null;
 	let pathRev = 0;
+	/** discs moved beside an earlier state they would hide (a cycle's last state on its first) */
+	let stateShift = new Map<string, Point & { beside?: string }>();
+	const shifted = (d: ChartState): Point => {
+		const p = project(d.state);
+		const o = stateShift.get(d.id);
+		return o ? { x: p.x + o.x, y: p.y + o.y } : p;
+	};
 
 	// ---- drawing skeleton
 	const svg = select(drawing).classed('swc-drawing', true);
@@ -210,7 +219,13 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	}
 
 	function currentKeyEntries() {
-		return keyEntries(path.legs, { limits: drawnLimits().length > 0, traces: (path.traces ?? []).some((t) => t.points.some((p) => p.v)) });
+		const drawn = (path.traces ?? []).filter((t) => t.points.some((p) => p.v));
+		return keyEntries(path.legs, {
+			limits: drawnLimits().length > 0,
+			traces: drawn.some((t) => t.kind !== 'revision'),
+			bands: (path.traces ?? []).some((t) => t.kind !== 'revision' && t.points.some((p) => p.vBand)),
+			revisions: drawn.filter((t) => t.kind === 'revision').map((t) => t.label)
+		});
 	}
 
 	/** Limits that can be drawn on this chart kind: straight rules, or curves when points are given. */
@@ -448,6 +463,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		}
 		const sel = path.selection;
 		const legPts = new Map(path.legs.map((l) => [l.id, l.points.map(project)]));
+		stateShift = stackOffsets(path.states.map((s) => ({ id: s.id, ...project(s.state) })), STATE_R);
 
 		gLegs
 			.selectAll<SVGGElement, ChartLeg>('g.swc-leg')
@@ -485,7 +501,11 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 
 		const traces = (path.traces ?? []).map((t) => ({
 			id: t.id,
-			pts: t.points.filter((p) => p.v && p.v > 0).map((p) => ({ ...project({ v: p.v!, T: p.T, P: p.P }), inDome: !!p.inDome }))
+			revision: t.kind === 'revision',
+			pts: t.points.filter((p) => p.v && p.v > 0).map((p) => ({ ...project({ v: p.v!, T: p.T, P: p.P }), inDome: !!p.inDome })),
+			bands: t.points
+				.filter((p) => p.vBand && !(p.v && p.v > 0))
+				.map((p) => ({ a: project({ v: p.vBand![0], T: p.T, P: p.P }), b: project({ v: p.vBand![1], T: p.T, P: p.P }) }))
 		}));
 		gTraces
 			.selectAll<SVGGElement, (typeof traces)[number]>('g')
@@ -494,11 +514,25 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 				const g = enter.append('g');
 				g.append('path').attr('class', 'swc-trace-line');
 				g.append('path').attr('class', 'swc-trace-mark');
+				g.append('path').attr('class', 'swc-trace-band');
 				return g;
 			})
 			.each(function (d) {
 				const g = select(this);
-				g.select('.swc-trace-line').attr('d', polylineD(d.pts));
+				g.select('.swc-trace-line').attr('class', d.revision ? 'swc-trace-line swc-revision-line' : 'swc-trace-line').attr('d', polylineD(d.pts));
+				// readings on the saturation line: a band from v′ to v″ at their T or P (a few hundred at most)
+				const bandEvery = Math.max(1, Math.ceil(d.bands.length / 200));
+				g.select('.swc-trace-band').attr(
+					'd',
+					d.bands
+						.filter((_, i) => i % bandEvery === 0)
+						.map((b) => `M${b.a.x.toFixed(1)},${b.a.y.toFixed(1)}L${b.b.x.toFixed(1)},${b.b.y.toFixed(1)}`)
+						.join('') || null
+				);
+				if (d.revision) {
+					g.select('.swc-trace-mark').attr('d', null);
+					return;
+				}
 				const every = Math.max(1, Math.ceil(d.pts.length / 120));
 				const marks = d.pts
 					.filter((_, i) => i % every === 0)
@@ -523,7 +557,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			})
 			.classed('is-selected', (d) => sel?.kind === 'state' && sel.id === d.id)
 			.attr('transform', (d) => {
-				const p = project(d.state);
+				const p = shifted(d);
 				return `translate(${p.x.toFixed(1)},${p.y.toFixed(1)})`;
 			})
 			.each(function (d) {
@@ -543,7 +577,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const obstacles = new ObstacleIndex(32);
 		for (const pts of legPts.values()) obstacles.addPolyline(pts);
 		for (const s of path.states) {
-			const p = project(s.state);
+			const p = shifted(s);
 			obstacles.addBox({ x: p.x - STATE_R - 3, y: p.y - STATE_R - 3, width: 2 * STATE_R + 6, height: 2 * STATE_R + 6 });
 		}
 		for (const p of crossingPts) obstacles.addBox({ x: p.x - 5, y: p.y - 5, width: 10, height: 10 });
@@ -621,6 +655,10 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 					sample.attr('class', 'sample swc-crossing').attr('d', `M${KEY.sample / 2},-4.5l4.5,4.5l-4.5,4.5l-4.5,-4.5Z`);
 				} else if (e.kind === 'limit') {
 					sample.attr('class', 'sample swc-limit').attr('d', `M0,0h${KEY.sample}`).attr('stroke-width', LIMIT_STROKE.width).attr('stroke-dasharray', '9 4');
+				} else if (e.kind === 'trace-band') {
+					sample.attr('class', 'sample swc-trace-band').attr('d', `M3,0h${KEY.sample - 6}`);
+				} else if (e.kind === 'revision') {
+					sample.attr('class', 'sample swc-revision-line').attr('d', `M3,0h${KEY.sample - 6}`);
 				} else {
 					sample.attr('class', 'sample swc-trace-mark').attr('d', `M3,0h20M${KEY.sample / 2 - 2.5},0h5M${KEY.sample / 2},-2.5v5`);
 				}
@@ -666,9 +704,13 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 					.call(stateDrag)
 			)
 			.classed('is-locked', (d) => !interaction.canDrag(d.id))
-			.attr('cx', (d) => project(d.state).x)
-			.attr('cy', (d) => project(d.state).y)
-			.attr('aria-label', (d) => stateAriaLabel(d, f.units))
+			.attr('cx', (d) => shifted(d).x)
+			.attr('cy', (d) => shifted(d).y)
+			.attr('aria-label', (d) => {
+				const beside = stateShift.get(d.id)?.beside;
+				const other = beside ? path.states.find((s) => s.id === beside)?.label : undefined;
+				return stateAriaLabel(d, f.units) + (other ? `; the same point as ${other}, drawn beside it` : '');
+			})
 			.attr('aria-pressed', (d) => String(sel?.kind === 'state' && sel.id === d.id));
 	}
 
@@ -676,11 +718,11 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		.container(() => overlay as unknown as SVGGElement)
 		.subject((ev: { x: number; y: number }) => ({ x: ev.x, y: ev.y }))
 		.on('start', (_ev, d) => {
-			dragging = { id: d.id, moved: false };
+			dragging = { id: d.id, moved: false, off: stateShift.get(d.id) ?? { x: 0, y: 0 } };
 		})
 		.on('drag', (ev, d) => {
 			if (!dragging || !interaction.canDrag(d.id)) return;
-			const { coords, reason } = clamp(dataAt(ev.x, ev.y));
+			const { coords, reason } = clamp(dataAt(ev.x - dragging.off.x, ev.y - dragging.off.y));
 			const e: StateDragEvent = { stateId: d.id, coords, reason };
 			const g = toScreen(coords);
 			ghost.style('display', null).classed('is-clamped', reason !== null);
@@ -696,7 +738,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			dragging = null;
 			ghost.style('display', 'none');
 			if (was?.moved) {
-				const { coords, reason } = clamp(dataAt(ev.x, ev.y));
+				const { coords, reason } = clamp(dataAt(ev.x - was.off.x, ev.y - was.off.y));
 				handlers.dragEnd({ stateId: d.id, coords, reason });
 			} else handlers.select({ kind: 'state', id: d.id });
 		});

@@ -42,6 +42,8 @@ export const DRAWING_CSS = `
 .swc-drawing .swc-limit-label .swc-unit { font-family: ${MONO}; font-weight: 400; }
 .swc-drawing .swc-trace-line { fill: none; stroke: ${v.inkSoft}; stroke-width: 1; stroke-opacity: 0.8; }
 .swc-drawing .swc-trace-mark { fill: none; stroke: ${v.inkSoft}; stroke-width: 1; }
+.swc-drawing .swc-trace-band { fill: none; stroke: ${v.ink}; stroke-width: 1.75; stroke-dasharray: 0 3.5; stroke-linecap: round; stroke-opacity: 0.75; }
+.swc-drawing .swc-revision-line { fill: none; stroke: ${v.inkSoft}; stroke-width: 6; stroke-opacity: 0.28; stroke-linecap: round; stroke-linejoin: round; }
 .swc-drawing .swc-leg-casing { fill: none; stroke: ${v.sheet}; stroke-linecap: round; stroke-linejoin: round; }
 .swc-drawing .swc-leg.is-selected .swc-leg-casing { stroke: ${v.accentWash}; }
 .swc-drawing .swc-leg-line { fill: none; stroke-linecap: round; stroke-linejoin: round; }

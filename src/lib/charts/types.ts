@@ -91,12 +91,22 @@ export interface TracePoint {
 	v?: number | null;
 	/** the logger or the engine says the point is inside the vapor dome */
 	inDome?: boolean;
+	/**
+	 * P and T on the saturation line without a v: [v′, v″] at that pressure. Drawn as a band across
+	 * the dome at its T (T–v) or P (P–v): the reading is somewhere on it, v not determined.
+	 */
+	vBand?: [number, number] | null;
 }
 
 export interface MeasuredTrace {
 	id: string;
 	label: string;
 	points: TracePoint[];
+	/**
+	 * `measured` (default): logger data, a hairline with small crosses, keyed "measured".
+	 * `revision`: another revision's computed path (Compare), a wide faint band keyed by its label.
+	 */
+	kind?: 'measured' | 'revision';
 }
 
 /** A position on the chart in SI: v always, and T (T–v) or P (P–v, absolute Pa). */

@@ -128,6 +128,15 @@ describe('pathOverlay', () => {
 		expect(o.points[o.points.length - 1].v).toBe(r.states[r.states.length - 1].state.v);
 		expect(o.label).toBe('Rev 1');
 	});
+
+	it('is a revision overlay, keyed by its label and not as a measured trace', async () => {
+		const { pathOverlay } = await import('./overlay');
+		const { keyEntries } = await import('../charts/key');
+		const o = pathOverlay(computePath(vesselDoc().spec), 'rev-1', 'Rev 1');
+		expect(o.kind).toBe('revision');
+		const entries = keyEntries([], { limits: false, traces: false, revisions: [o.label] });
+		expect(entries).toEqual([{ kind: 'revision', text: 'Rev 1' }]);
+	});
 });
 
 describe('sameContent', () => {

@@ -2,9 +2,9 @@ import type { MeasuredTrace } from '../charts/types';
 import type { PathResult } from '../thermo/types';
 
 /**
- * Another revision's path as a thin overlay line on the chart (drawn like a measured trace: a
- * hairline with small crosses), so two revisions can be read on one diagram: the compared path
- * in full colour, the other as the overlay. Every leg's points, in order, state to state.
+ * Another revision's path as an overlay on the chart (kind `revision`: a wide faint band keyed by
+ * the revision's label, not the measured-trace hairline), so two revisions can be read on one
+ * diagram: the compared path in full colour, the other as the band. Every leg's points, in order.
  */
 export function pathOverlay(result: PathResult, id: string, label: string): MeasuredTrace {
 	const points: MeasuredTrace['points'] = [];
@@ -19,5 +19,5 @@ export function pathOverlay(result: PathResult, id: string, label: string): Meas
 		const s = result.states[0].state;
 		points.push({ T: s.T, P: s.P, v: s.v, inDome: false });
 	}
-	return { id, label, points };
+	return { id, label, points, kind: 'revision' };
 }

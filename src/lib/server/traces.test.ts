@@ -82,10 +82,11 @@ describe('uploading a logger file', () => {
 describe('refusing malformed files, line by line, storing nothing', () => {
 	const big = 'time [s],P [kPa a],T [°C]\n' + '0,200,20\n'.repeat(60_000);
 	const many = 'time [s],P [kPa a],T [°C]\n' + Array.from({ length: 10_001 }, (_, i) => `${i},200,20`).join('\n');
+	// header faults are listed too, each on the header's line, with every bad data line
 	const cases: Array<[string, string | Uint8Array, number, string, number[]]> = [
 		['wrong header (numbers)', '0,200,20\n1,200,21\n', 422, 'no-header', [1]],
-		['wrong header (no T column)', 'time [s],P [kPa a],flow [kg/s]\n0,200,1\n', 422, 'bad-header', []],
-		['unknown unit', 'time [s],P [kPa a],T [Celsius-ish]\n0,200,20\n', 422, 'unknown-unit', []],
+		['wrong header (no T column)', 'time [s],P [kPa a],flow [kg/s]\n0,200,1\n', 422, 'bad-header', [1]],
+		['unknown unit', 'time [s],P [kPa a],T [Celsius-ish]\n0,200,20\n', 422, 'unknown-unit', [1]],
 		['non-numeric values', 'time [s],P [kPa a],T [°C]\n0,200,20\n5,two hundred,21\n10,210,n/a\n', 422, 'rejected-lines', [3, 4]],
 		['too many rows', many, 422, 'too-many-rows', []],
 		['too big', big, 413, 'too-large', []],
@@ -93,7 +94,7 @@ describe('refusing malformed files, line by line, storing nothing', () => {
 		['only a header', 'time [s],P [kPa a],T [°C]\n', 422, 'no-points', []],
 		['semicolons with decimal commas', 'time [s];P [bar g];T [°C]\n0;1,5;20\n', 422, 'rejected-lines', [2]],
 		['semicolon line in a comma file', 'time [s],P [kPa a],T [°C]\n0;200;20\n', 422, 'rejected-lines', [2]],
-		['pressure neither gauge nor absolute', 'time [s],P [bar],T [°C]\n0,1.5,20\n', 422, 'pressure-reference', []],
+		['pressure neither gauge nor absolute', 'time [s],P [bar],T [°C]\n0,1.5,20\n', 422, 'pressure-reference', [1]],
 		['gauge reading below vacuum', 'time [s],P [kPa g],T [°C]\n0,-150,20\n', 422, 'rejected-lines', [2]],
 		['UTF-16 text', new Uint8Array([0xff, 0xfe, 0x74, 0x00, 0x69, 0x00]), 422, 'not-utf8', []],
 		['below the triple point', 'time [s],P [kPa a],T [°C]\n0,100,20\n5,100,-20\n', 422, 'rejected-lines', [3]]

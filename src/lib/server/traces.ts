@@ -9,7 +9,7 @@ import { checkDoc } from './sheets';
 import { loadSheet } from './revisions';
 import { ROLE_LABEL } from '../roles';
 import { readTraceCsv } from '$lib/traces/read';
-import { DEFAULT_SATURATION_TOLERANCE, MAX_SATURATION_TOLERANCE } from '$lib/traces/fix';
+import { DEFAULT_SATURATION_TOLERANCE, MAX_SATURATION_TOLERANCE, openSaturationPoints } from '$lib/traces/fix';
 import { MAX_TRACE_BYTES } from '$lib/traces/csv';
 import type { RejectedLine, TraceColumn, TracePoint, TraceRefusalCode } from '$lib/traces/types';
 import type { TraceSummary, TraceWithPoints } from '$lib/review/types';
@@ -153,7 +153,7 @@ export async function listTraces(db: DB, access: TeamAccess, sheetId: string, op
 	if ((options.points ?? 'none') === 'none') return (await listTraceRows(db, sheet.id)).map((r) => summaryOf(r, fluid));
 	const rows = await listTraceRowsWithPoints(db, sheet.id);
 	return rows.map((r) => {
-		const points = JSON.parse(r.points) as TracePoint[];
+		const points = openSaturationPoints(fluid, JSON.parse(r.points) as TracePoint[]);
 		return { ...summaryOf(r, fluid), points: options.points === 'chart' ? thin(points) : points };
 	});
 }
@@ -162,7 +162,7 @@ export async function readTrace(db: DB, access: TeamAccess, sheetId: string, tra
 	const sheet = await loadSheet(db, access, sheetId);
 	const row = await getTraceRow(db, sheet.id, traceId);
 	if (!row) throw new AppError(404, 'trace-not-found', 'There is no such measured trace on this sheet.');
-	return { ...summaryOf(row, sheet.fluid), points: JSON.parse(row.points) as TracePoint[] };
+	return { ...summaryOf(row, sheet.fluid), points: openSaturationPoints(sheet.fluid, JSON.parse(row.points) as TracePoint[]) };
 }
 
 export async function deleteTrace(db: DB, access: TeamAccess, sheetId: string, traceId: string): Promise<void> {

@@ -26,4 +26,14 @@ describe('what differs between two drafts', () => {
 		expect(find('Leg L4', 'added')?.b).toContain('isothermal');
 		expect(find('Title block', 'Tag')).toMatchObject({ a: 'HP-410', b: 'HP-411' });
 	});
+
+	it('a start by fill level and a leg to saturation read as such', () => {
+		const a = workedExample('vessel-v204-fire')!.build();
+		const b = cloneDoc(a);
+		b.startSpec = { kind: 'fill', fraction: 0.8, T: 293.15 };
+		b.spec.legs[0] = { ...b.spec.legs[0], target: { x: 0 }, to: 'saturation' };
+		const rows = diffDocs(a, b);
+		expect(rows.find((r) => r.section === 'Start state S1')?.b).toBe('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
+		expect(rows.find((r) => r.section === 'Leg L1' && r.field === 'target')?.b).toBe('saturation (liquid line)');
+	});
 });

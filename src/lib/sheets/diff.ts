@@ -8,6 +8,7 @@ import { formatQuantity, PROPERTY_QUANTITY, type UnitPrefs } from '../units';
 import type { Inputs, TargetName } from '../thermo/types';
 import { legLabel, TITLE_BLOCK_LABELS } from './doc';
 import type { SheetDoc, SheetLegSpec } from './types';
+import { fillText } from './fill';
 
 export interface DiffRow {
 	/** where: "Start state", "Leg L2", "Design limits", … */
@@ -33,7 +34,7 @@ function inputsText(i: Inputs | Partial<Record<TargetName, number>>, prefs: Unit
 
 function legText(l: SheetLegSpec | undefined, prefs: UnitPrefs): { process: string; target: string } {
 	if (!l) return { process: '', target: '' };
-	return { process: l.process + (l.n !== undefined ? ` (n = ${l.n})` : ''), target: inputsText(l.target, prefs) };
+	return { process: l.process + (l.n !== undefined ? ` (n = ${l.n})` : ''), target: l.to === 'saturation' ? `saturation (${l.target.x === 0 ? 'liquid' : 'vapor'} line)` : inputsText(l.target, prefs) };
 }
 
 function systemText(d: SheetDoc, prefs: UnitPrefs): string {
@@ -60,7 +61,8 @@ export function diffDocs(a: SheetDoc, b: SheetDoc, prefs: UnitPrefs = a.units): 
 	add('Sheet', 'fluid', a.spec.fluid, b.spec.fluid);
 	add('Sheet', 'system', systemText(a, prefs), systemText(b, prefs));
 	add('Sheet', 'description', a.description, b.description);
-	add('Start state S1', 'fixed by', inputsText(a.spec.start, prefs), inputsText(b.spec.start, prefs));
+	const startText = (d: SheetDoc) => (d.startSpec?.kind === 'fill' ? fillText(d.startSpec, prefs) : inputsText(d.spec.start, prefs));
+	add('Start state S1', 'fixed by', startText(a), startText(b));
 
 	const ids = [...new Set([...a.spec.legs.map((l) => l.id), ...b.spec.legs.map((l) => l.id)])];
 	for (const id of ids) {

@@ -39,6 +39,9 @@ import { History } from './history';
 import { isobarValues, isothermValues } from './isolines';
 import { defaultTargetKind, projectOntoLeg, targetFor, valueOf, type FixFn, type ScreenMetric } from './targets';
 import type { ChartPrefs, SheetDoc, SheetLegSpec, SheetStatus, TitleBlockFields } from './types';
+import { fillStart, type FillSpec } from './fill';
+import { readAcrossSaturation, type SaturationReading } from './saturation-input';
+import { saturationTarget } from './saturation-target';
 
 type Engine = typeof import('../thermo');
 
@@ -87,6 +90,15 @@ interface Drag {
 interface Candidate {
 	doc: SheetDoc;
 	note: string | null;
+}
+
+/** A leg marked "to saturation" whose target was changed since (typed, dragged) is an ordinary leg again. */
+function keepSaturationMarks(doc: SheetDoc): SheetDoc {
+	const stale = (l: SheetLegSpec) => l.to === 'saturation' && !(Object.keys(l.target).length === 1 && (l.target.x === 0 || l.target.x === 1));
+	if (!doc.spec.legs.some(stale)) return doc;
+	const next = cloneDoc(doc);
+	for (const l of next.spec.legs) if (stale(l)) delete l.to;
+	return next;
 }
 
 function messageOf(e: unknown, legs: readonly { id: string }[]): string {
@@ -294,6 +306,7 @@ export class SheetEditor {
 	 * with the same spec (title block, units, chart settings) need no computing.
 	 */
 	commit(next: SheetDoc): Promise<Outcome> {
+		next = keepSaturationMarks(next);
 		return this.#serial(async () => {
 			if (!this.canEdit) return { ok: false, message: 'Your role can read this sheet but not edit it.' };
 			if (sameDoc(next, this.doc)) return { ok: true };
@@ -383,6 +396,7 @@ export class SheetEditor {
 		if (drag.kind === 'state' && drag.key === 'start') {
 			const next = cloneDoc(base);
 			next.spec.start = drag.chart === 'T-v' ? { T: coords.T!, v: coords.v } : { P: coords.P!, v: coords.v };
+			delete next.startSpec;
 			return { doc: next, note: null };
 		}
 		if (!fix) return { error: 'The property engine is still loading; try again in a moment.' };
@@ -557,7 +571,32 @@ export class SheetEditor {
 		const [older, newer] = Object.keys(start);
 		const keep = prop === newer ? older : newer;
 		next.spec.start = { [keep]: start[keep], [prop]: si };
+		delete next.startSpec;
 		return this.commit(next);
+	}
+
+	/**
+	 * Fix S1 by a fill level: liquid volume fraction at a temperature or pressure (fill.ts). The
+	 * document keeps the fill (shown as such) and the T and v it gives for the engine; typing or
+	 * dragging S1 afterwards replaces it with two properties again.
+	 */
+	async setStartFill(fill: FillSpec): Promise<Outcome> {
+		if (this.doc.spec.system.kind !== 'closed') return { ok: false, message: 'A start by fill level is for a closed system (a vessel); set the system to closed first.' };
+		const e = await this.loadEngine();
+		const next = cloneDoc(this.doc);
+		try {
+			next.spec.start = fillStart(e, next.spec.fluid, fill);
+		} catch (err) {
+			return { ok: false, message: `No fill level there: ${messageOf(err, [])} Give a temperature or pressure between the triple point and the critical point.` };
+		}
+		next.startSpec = { ...fill };
+		return this.commit(next);
+	}
+
+	/** A temperature typed in a P cell (or a pressure in a T cell): the saturation value there, with a note (saturation-input.ts). */
+	async readAcrossSaturation(column: 'T' | 'P', typed: string): Promise<SaturationReading> {
+		const e = await this.loadEngine();
+		return readAcrossSaturation(e, this.doc.spec.fluid, column, typed, this.doc.units);
 	}
 
 	/** Replace the start pair at once (the table's "fixed by" picker). */
@@ -569,7 +608,25 @@ export class SheetEditor {
 		if (va === null || vb === null) return Promise.resolve({ ok: false, message: 'S1 has no quality outside the vapor dome; pick other properties.' });
 		const next = cloneDoc(this.doc);
 		next.spec.start = { [a]: va, [b]: vb };
+		delete next.startSpec;
 		return this.commit(next);
+	}
+
+	/**
+	 * End leg `index` where its process first meets the saturation line (saturation-target.ts):
+	 * target x = 0 or 1, the leg marked `to: 'saturation'`. The outcome says which line.
+	 */
+	async setTargetSaturation(index: number): Promise<Outcome & { line?: 'liquid' | 'vapor' }> {
+		const leg = this.doc.spec.legs[index];
+		const start = this.view?.states[index]?.state;
+		if (!leg || !start) return { ok: false, message: 'That leg is no longer on the sheet.' };
+		const e = await this.loadEngine();
+		const r = saturationTarget(e, this.doc.spec.fluid, start, leg.process, leg.n);
+		if (!r.ok) return { ok: false, message: r.message };
+		const next = cloneDoc(this.doc);
+		next.spec.legs[index] = { ...leg, target: { x: r.x }, to: 'saturation' };
+		const out = await this.commit(next);
+		return out.ok ? { ok: true, line: r.x === 0 ? 'liquid' : 'vapor' } : out;
 	}
 
 	/** End leg `index` exactly on a typed property of its end state. */
@@ -579,6 +636,7 @@ export class SheetEditor {
 		if (INVARIANT[leg.process] === prop) return Promise.resolve({ ok: false, message: `An ${leg.process} leg keeps ${prop} constant; type another property of this state.` });
 		const next = cloneDoc(this.doc);
 		next.spec.legs[index] = { ...leg, target: { [prop]: si } as Partial<Record<TargetName, number>> };
+		delete next.spec.legs[index].to;
 		return this.commit(next);
 	}
 
@@ -642,6 +700,8 @@ export class SheetEditor {
 	setSystem(system: SheetDoc['spec']['system']): Promise<Outcome> {
 		const next = cloneDoc(this.doc);
 		next.spec.system = system;
+		// a fill level belongs to a vessel: a flow device keeps the start's two properties
+		if (system.kind !== 'closed') delete next.startSpec;
 		return this.commit(next);
 	}
 
@@ -694,6 +754,14 @@ export class SheetEditor {
 		if (id === this.doc.spec.fluid) return { ok: true };
 		const next = cloneDoc(this.doc);
 		next.spec.fluid = id;
+		if (next.startSpec) {
+			// the same fill level in the other fluid
+			try {
+				next.spec.start = fillStart(await this.loadEngine(), id, next.startSpec);
+			} catch (err) {
+				return { ok: false, message: `The fill level cannot be kept for ${info.name}: ${messageOf(err, [])} Change the start state first.` };
+			}
+		}
 		let sat: SaturationCurve;
 		try {
 			sat = await getSaturation(id);

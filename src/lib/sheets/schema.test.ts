@@ -112,3 +112,30 @@ describe('migrating older documents', () => {
 		expectRefused({ fluid: 'water', system: { kind: 'closed' }, start: { T: 300 }, legs: [] }, /exactly two properties/);
 	});
 });
+
+describe('start by fill level in the document', () => {
+	it('keeps the fill spec and writes the T and v it gives into spec.start', () => {
+		const d = { ...doc(), startSpec: { kind: 'fill', fraction: 0.8, T: 450 } };
+		d.spec.start = { T: 300, x: 0.5 }; // stale: the fill wins
+		const r = parseSheetDoc(JSON.parse(JSON.stringify(d)));
+		expect(r.ok).toBe(true);
+		if (!r.ok) return;
+		expect(r.doc.startSpec).toEqual({ kind: 'fill', fraction: 0.8, T: 450 });
+		// IAPWS R6-95(2018), Table 8, T = 450 K: ρ′ = 890.341250, ρ″ = 4.81200360 kg/m³
+		expect(r.doc.spec.start.T).toBe(450);
+		expect(Math.abs(r.doc.spec.start.v! * (0.8 * 890.34125 + 0.2 * 4.8120036) - 1)).toBeLessThan(1e-8);
+		expect(Object.keys(r.doc.spec.start).sort()).toEqual(['T', 'v']);
+		// and it round-trips unchanged
+		const again = parseSheetDoc(JSON.parse(JSON.stringify(r.doc)));
+		expect(again.ok && again.doc).toEqual(r.doc);
+	});
+
+	it('refuses a fill that cannot be: out of 0…1, both T and P, above the critical point, a flow device', () => {
+		const base = doc();
+		expectRefused({ ...base, startSpec: { kind: 'fill', fraction: 80, T: 300 } }, /from 0 \(all vapor\) to 1/);
+		expectRefused({ ...base, startSpec: { kind: 'fill', fraction: 0.8, T: 300, P: 1e5 } }, /one of them, not both/);
+		expectRefused({ ...base, startSpec: { kind: 'fill', fraction: 0.8, T: 700 } }, /No fill level there: .*critical/);
+		expectRefused({ ...base, startSpec: { kind: 'level', fraction: 0.8, T: 300 } }, /kind must be "fill"/);
+		expectRefused({ ...base, spec: { ...base.spec, system: { kind: 'flow', massFlow: 1 } }, startSpec: { kind: 'fill', fraction: 0.8, T: 300 } }, /closed system/);
+	});
+});

@@ -15,7 +15,9 @@
  * Messages say what to give instead. Everything physical is SI (K, Pa absolute, m³/kg, J/kg).
  */
 import { z } from 'zod';
-import { PROCESSES, fluids } from '../thermo';
+import * as engine from '../thermo';
+import { PROCESSES, ThermoError, fluids } from '../thermo';
+import { fillStart } from './fill';
 import { DEFAULT_UNIT_PREFS } from '../units/prefs';
 import { DEFAULT_CHART, EMPTY_TITLE_BLOCK, INVARIANT, LEG_ID_PATTERN, MAX_SHEET_LEGS, START, newLegId } from './doc';
 import { SHEET_DOC_VERSION, type SheetDoc } from './types';
@@ -63,15 +65,18 @@ const legSchema = z
 			n: finite('n', 'dimensionless')
 				.refine((n) => Math.abs(n) <= 50, { message: 'n must be from −50 to 50.' })
 				.optional(),
-			samples: z.number().int().min(20).max(1000).optional()
+			samples: z.number().int().min(20).max(1000).optional(),
+			to: z.literal('saturation', { error: 'A leg\'s "to" can only be "saturation" (ending on the saturation line, with target x 0 or 1).' }).optional()
 		},
-		{ error: 'A leg must be an object { id, process, target, n? }.' }
+		{ error: 'A leg must be an object { id, process, target, n?, to? }.' }
 	)
 	.superRefine((l, ctx) => {
 		if (l.process === 'polytropic' && l.n === undefined) ctx.addIssue({ code: 'custom', path: ['n'], message: 'A polytropic leg needs n (P·vⁿ = const), e.g. 1.3.' });
 		if (l.process !== 'polytropic' && l.n !== undefined) ctx.addIssue({ code: 'custom', path: ['n'], message: `n belongs to polytropic legs only; remove it from this ${l.process} leg.` });
 		const inv = INVARIANT[l.process as keyof typeof INVARIANT];
 		const keys = present(l.target);
+		if (l.to === 'saturation' && !(keys.length === 1 && keys[0] === 'x' && (l.target.x === 0 || l.target.x === 1)))
+			ctx.addIssue({ code: 'custom', path: ['target'], message: 'A leg "to saturation" ends on the saturated-liquid (x = 0) or saturated-vapor line (x = 1): give target { "x": 0 } or { "x": 1 }.' });
 		if (inv && (keys.includes(inv) || (inv === 'v' && keys.includes('rho'))))
 			ctx.addIssue({ code: 'custom', path: ['target'], message: `An ${l.process} leg keeps ${inv} constant, so it cannot end on ${inv}; give another target property.` });
 	});
@@ -155,10 +160,25 @@ const specSchema = z
 		});
 	});
 
+const startSpecSchema = z
+	.strictObject(
+		{
+			kind: z.literal('fill', { error: 'startSpec.kind must be "fill" (a liquid volume fraction at a temperature or pressure).' }),
+			fraction: finite('startSpec.fraction', '0…1, liquid volume / vessel volume').refine((f) => f >= 0 && f <= 1, {
+				message: 'startSpec.fraction is the liquid volume fraction, from 0 (all vapor) to 1 (all liquid), e.g. 0.8 for 80 % full.'
+			}),
+			T: positive('startSpec.T', 'K').optional(),
+			P: positive('startSpec.P', 'Pa (absolute)').optional()
+		},
+		{ error: 'startSpec must be an object { kind: "fill", fraction, T or P }.' }
+	)
+	.refine((f) => (f.T === undefined) !== (f.P === undefined), { message: 'startSpec gives the fill at a temperature T or at a pressure P: one of them, not both.' });
+
 export const sheetDocSchema = z
 	.strictObject(
 		{
 			version: z.literal(SHEET_DOC_VERSION, { error: `version must be ${SHEET_DOC_VERSION}.` }),
+			startSpec: startSpecSchema.optional(),
 			description: text('The description', 2000, 'lines'),
 			spec: specSchema,
 			units: unitsSchema,
@@ -174,8 +194,23 @@ export const sheetDocSchema = z
 		},
 		{ error: 'A sheet document must be an object { version, description, spec, units, chart, titleBlock }.' }
 	)
-	// the spec carries the sheet's atmosphere for the engine; the units are its one source
-	.transform((d) => ({ ...d, spec: { ...d.spec, atmosphericPressure: d.units.atmosphere } }));
+	.superRefine((d, ctx) => {
+		if (!d.startSpec) return;
+		if (d.spec.system.kind !== 'closed') ctx.addIssue({ code: 'custom', path: ['startSpec'], message: 'A start by fill level is for a closed system (a vessel); a steady-flow device starts from two properties.' });
+		try {
+			fillStart(engine, d.spec.fluid, d.startSpec);
+		} catch (e) {
+			if (!(e instanceof ThermoError || e instanceof RangeError)) throw e;
+			ctx.addIssue({ code: 'custom', path: ['startSpec'], message: `No fill level there: ${e.message} Give a temperature or pressure between the triple point and the critical point.` });
+		}
+	})
+	// the spec carries the sheet's atmosphere for the engine; the units are its one source. A fill
+	// spec fixes the start: its T and v are written into spec.start (the engine reads two properties)
+	.transform((d) => {
+		const spec = { ...d.spec, atmosphericPressure: d.units.atmosphere };
+		if (d.startSpec) spec.start = fillStart(engine, d.spec.fluid, d.startSpec);
+		return { ...d, spec };
+	});
 
 export interface DocIssue {
 	path: string;

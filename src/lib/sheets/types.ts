@@ -10,8 +10,12 @@ import type { UnitPrefs } from '../units/prefs';
 /** Bumped when the document's shape changes; readers migrate older documents forward. */
 export const SHEET_DOC_VERSION = 1 as const;
 
-/** A leg as stored on a sheet: its id is required and never reused within the sheet. */
-export type SheetLegSpec = PathLegSpec & { id: string };
+/**
+ * A leg as stored on a sheet: its id is required and never reused within the sheet. `to:
+ * 'saturation'` marks a leg that ends where its process first meets the saturation line (chosen
+ * with saturation-target.ts); its target is then { x: 0 } or { x: 1 }, which the engine reads.
+ */
+export type SheetLegSpec = PathLegSpec & { id: string; to?: 'saturation' };
 
 /** The path spec as stored on a sheet (leg ids always present). */
 export type SheetPathSpec = Omit<PathSpec, 'legs'> & { legs: SheetLegSpec[] };
@@ -39,8 +43,19 @@ export interface ChartPrefs {
 	isolines: boolean;
 }
 
+/**
+ * How S1 was specified when it was not by two properties. `fill`: a vessel holding saturated
+ * liquid and vapor, given by its liquid volume fraction φ = V_liquid / V (0…1, what a level gauge
+ * shows) at a temperature T (K) or a pressure P (Pa absolute) — exactly one of them. The engine
+ * still reads two properties: `spec.start` holds the T and v this gives (`fillStart` in fill.ts),
+ * rewritten by the server from the fill whenever the document is saved.
+ */
+export type StartSpec = { kind: 'fill'; fraction: number; T?: number; P?: number };
+
 export interface SheetDoc {
 	version: typeof SHEET_DOC_VERSION;
+	/** how S1 was given, when not by two properties (absent: `spec.start` is what was typed) */
+	startSpec?: StartSpec;
 	/** free-text design intent shown under the title */
 	description: string;
 	spec: SheetPathSpec;

@@ -2,13 +2,14 @@ import type { MeasuredTrace } from '../charts/types';
 import type { TracePoint } from './types';
 
 /**
- * A stored trace as the chart draws it: points with a v (fixed, logged or estimated), in-dome
- * points flagged so they show as open circles. Client-safe (no engine, no CSV reader).
+ * A stored trace as the chart draws it: points with a v (from P and T, or logged) on its line;
+ * readings on the saturation line without a logged v as a band across the dome from v′ to v″ at
+ * their T and P (their v is not determined). Client-safe (no engine, no CSV reader).
  */
 export function chartTrace(trace: { id: string; name: string; points: readonly TracePoint[] }): MeasuredTrace {
 	return {
 		id: trace.id,
 		label: trace.name,
-		points: trace.points.map((p) => ({ T: p.T, P: p.P, v: p.v, inDome: p.inDome }))
+		points: trace.points.map((p) => (p.vRange && p.vLogged === null ? { T: p.T, P: p.P, v: null, inDome: true, vBand: p.vRange } : { T: p.T, P: p.P, v: p.vFrom === 'estimated' ? null : p.v, inDome: p.inDome }))
 	};
 }

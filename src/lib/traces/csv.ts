@@ -140,6 +140,59 @@ export function decodeTraceFile(input: string | Uint8Array, maxBytes = MAX_TRACE
 	}
 }
 
+/** Most problems spelled out in a refusal's message (all are listed in `rejected`, up to MAX_LISTED_REJECTIONS). */
+export const MAX_PROBLEMS_IN_MESSAGE = 5;
+
+/** "N problems: line 1: …; line 4: …; … and K more (all listed)" for a refusal message. */
+export function problemSummary(list: readonly RejectedLine[], total: number): string {
+	const shown = list.slice(0, MAX_PROBLEMS_IN_MESSAGE).map((r) => `line ${r.line}: ${r.reason.replace(/\.$/, '')}`);
+	const more = total - shown.length;
+	return `${shown.join('; ')}${more > 0 ? `; and ${more} more, each listed with its line number` : ''}`;
+}
+
+/**
+ * A header that cannot be read: every header problem, and, so the file can be mended in one go,
+ * every data line whose values are not numbers or do not match the header's column count (the
+ * columns that were recognised, whether or not their unit was).
+ */
+function refuseHeader(
+	problems: readonly { code: TraceRefusalCode; message: string }[],
+	ctx: { headerNo: number; headerLine: string; lines: readonly string[]; headerIndex: number; delimiter: string; headerCells: readonly string[]; columns: readonly { kind: TraceColumnKind; index: number; header: string; unit?: string }[]; maxRows: number }
+): TraceRefusal {
+	const rejected: RejectedLine[] = problems.map((p) => ({ line: ctx.headerNo, reason: p.message, text: excerpt(ctx.headerLine) }));
+	let count = rejected.length;
+	const needed = ctx.columns.length ? Math.max(...ctx.columns.map((c) => c.index)) + 1 : ctx.headerCells.length;
+	let rows = 0;
+	for (let li = ctx.headerIndex + 1; li < ctx.lines.length && rows < ctx.maxRows; li++) {
+		const raw = ctx.lines[li];
+		if (raw.trim() === '' || raw.trimStart().startsWith('#')) continue;
+		rows++;
+		const cells = raw.includes('"') ? (Papa.parse<string[]>(raw, { delimiter: ctx.delimiter }).data[0] ?? []) : raw.split(ctx.delimiter);
+		const reasons: string[] = [];
+		if (cells.length < needed) reasons.push(`${cells.length} value${cells.length === 1 ? '' : 's'} where the header has ${needed} columns`);
+		else if (cells.slice(ctx.headerCells.length).some((c) => c.trim() !== '')) reasons.push(`${cells.length} values where the header has ${ctx.headerCells.length} columns`);
+		else
+			for (const c of ctx.columns) {
+				const v = (cells[c.index] ?? '').trim();
+				if (c.kind === 'time' && c.unit === 'iso') continue;
+				if (v === '') reasons.push(`no ${c.header} value`);
+				else if (DECIMAL_COMMA.test(v)) reasons.push(`"${v}" in ${c.header} uses a decimal comma; write ${v.replace(',', '.')}`);
+				else if (!NUMBER.test(v) && !(c.kind === 'time' && ISO.test(v))) reasons.push(`"${v}" in ${c.header} is not a number`);
+			}
+		if (reasons.length) {
+			count++;
+			if (rejected.length < MAX_LISTED_REJECTIONS) rejected.push({ line: li + 1, reason: reasons.join('; '), text: excerpt(raw) });
+		}
+	}
+	if (count === 1) return refuse(problems[0].code, problems[0].message, rejected, count);
+	const dataCount = count - problems.length;
+	const message =
+		`The file has ${count} problems; nothing was saved. ` +
+		`${problems.length === 1 ? 'The header' : `The header has ${problems.length}`}: ${problems.map((p) => p.message).join(' ')}` +
+		(dataCount > 0 ? ` ${dataCount === 1 ? 'One data line' : `${dataCount} data lines`} cannot be read either: ${problemSummary(rejected.slice(problems.length), dataCount)}.` : '');
+	return refuse(problems[0].code, message, rejected, count);
+}
+
 /**
  * Reads a logger CSV (see README.md): the first line that is neither blank nor a # comment is the
  * header naming each column and its unit; the delimiter is taken from the header (semicolon if it
@@ -171,6 +224,11 @@ export function parseTraceCsv(input: string | Uint8Array, options: TraceCsvOptio
 
 	const columns: TraceColumn[] = [];
 	const notes: string[] = [];
+	// every problem of the header is collected, so one answer names them all
+	const headerProblems: { code: TraceRefusalCode; message: string }[] = [];
+	const problem = (code: TraceRefusalCode, message: string) => headerProblems.push({ code, message });
+	/** columns recognised but not usable (no or unknown unit): their values are still checked as numbers */
+	const unusable: { kind: TraceColumnKind; index: number; header: string }[] = [];
 	for (let i = 0; i < headerCells.length; i++) {
 		const cell = headerCells[i].trim();
 		if (cell === '') continue;
@@ -180,37 +238,49 @@ export function parseTraceCsv(input: string | Uint8Array, options: TraceCsvOptio
 			notes.push(`Column ${i + 1} "${cell}" is not one Statewright reads (time, P, T, v or rho); it was left out.`);
 			continue;
 		}
-		if (columns.some((c) => c.kind === kind))
-			return refuse('bad-header', `The header on line ${headerNo} names ${COLUMN_NAME[kind]} twice (column ${i + 1} "${cell}"). Keep one column per quantity.`);
+		if (columns.some((c) => c.kind === kind) || unusable.some((c) => c.kind === kind)) {
+			problem('bad-header', `The header on line ${headerNo} names ${COLUMN_NAME[kind]} twice (column ${i + 1} "${cell}"). Keep one column per quantity.`);
+			continue;
+		}
 		if (unit === null || unit.trim() === '') {
 			const hint = kind === 'time' ? `${name} [s]` : kind === 'P' ? `${name} [kPa g] or ${name} [bar a]` : kind === 'T' ? `${name} [°C]` : kind === 'v' ? `${name} [m³/kg]` : `${name} [kg/m³]`;
-			return refuse('bad-header', `Column ${i + 1} "${cell}" on line ${headerNo} has no unit. Put the unit in brackets after the name, e.g. ${hint}.`);
+			problem('bad-header', `Column ${i + 1} "${cell}" on line ${headerNo} has no unit. Put the unit in brackets after the name, e.g. ${hint}.`);
+			unusable.push({ kind, index: i, header: cell });
+			continue;
 		}
 		if (kind === 'time') {
 			const t = TIME_UNITS[normaliseUnitText(unit).toLowerCase()];
-			if (!t)
-				return refuse('unknown-unit', `"${unit}" in column ${i + 1} "${cell}" is not a time unit Statewright reads. Use s, min, h or ms for elapsed time, or iso for ISO 8601 timestamps (2026-01-05T09:30:00Z).`);
+			if (!t) {
+				problem('unknown-unit', `"${unit}" in column ${i + 1} "${cell}" is not a time unit Statewright reads. Use s, min, h or ms for elapsed time, or iso for ISO 8601 timestamps (2026-01-05T09:30:00Z).`);
+				unusable.push({ kind, index: i, header: cell });
+				continue;
+			}
 			columns.push({ kind, index: i, header: cell, unit: t.id, unitText: unit });
 			continue;
 		}
 		const quantity = PROPERTY_QUANTITY[kind];
-		if (kind === 'P' && normaliseUnitText(unit) in BARE_PRESSURE)
-			return refuse(
+		if (kind === 'P' && normaliseUnitText(unit) in BARE_PRESSURE) {
+			problem(
 				'pressure-reference',
 				`Column ${i + 1} "${cell}" does not say whether the pressures are absolute or gauge. Write ${unit} a or ${unit} g${unit.toLowerCase() === 'psi' ? ' (psia or psig)' : ''}, as the instrument reads; gauge readings are turned into absolute with the sheet's atmospheric pressure of ${fmt(atmosphere / 1000)} kPa a.`
 			);
+			unusable.push({ kind, index: i, header: cell });
+			continue;
+		}
 		const found: UnitDef[] = lookupUnit(unit, quantity);
 		if (found.length === 0) {
 			const known = [...new Set(unitsOf(quantity).map((u) => u.label).filter(Boolean))].join(', ');
-			return refuse('unknown-unit', `"${unit}" in column ${i + 1} "${cell}" is not a unit of ${quantity === 'specificVolume' ? 'specific volume' : quantity} Statewright knows. Use one of: ${known}.`);
+			problem('unknown-unit', `"${unit}" in column ${i + 1} "${cell}" is not a unit of ${quantity === 'specificVolume' ? 'specific volume' : quantity} Statewright knows. Use one of: ${known}.`);
+			unusable.push({ kind, index: i, header: cell });
+			continue;
 		}
 		columns.push({ kind, index: i, header: cell, unit: found[0].id, unitText: unit });
 	}
-	const missing = (['time', 'P', 'T'] as const).filter((k) => !columns.some((c) => c.kind === k));
-	if (missing.length)
-		return refuse('bad-header', `The header on line ${headerNo} has no ${missing.map((k) => COLUMN_NAME[k]).join(', no ')} column. Name the columns with their units, e.g. ${EXAMPLE_HEADER}.`);
-	if (columns.some((c) => c.kind === 'v') && columns.some((c) => c.kind === 'rho'))
-		return refuse('bad-header', `The header on line ${headerNo} has both a v and a rho column. Keep one of them: they say the same thing.`);
+	const missing = (['time', 'P', 'T'] as const).filter((k) => !columns.some((c) => c.kind === k) && !unusable.some((c) => c.kind === k));
+	if (missing.length) problem('bad-header', `The header on line ${headerNo} has no ${missing.map((k) => COLUMN_NAME[k]).join(', no ')} column. Name the columns with their units, e.g. ${EXAMPLE_HEADER}.`);
+	const has = (k: TraceColumnKind) => columns.some((c) => c.kind === k) || unusable.some((c) => c.kind === k);
+	if (has('v') && has('rho')) problem('bad-header', `The header on line ${headerNo} has both a v and a rho column. Keep one of them: they say the same thing.`);
+	if (headerProblems.length) return refuseHeader(headerProblems, { headerNo, headerLine, lines, headerIndex, delimiter, headerCells, columns: [...columns, ...unusable], maxRows });
 
 	const byKind = new Map(columns.map((c) => [c.kind, c]));
 	const unitOf = (k: TraceColumnKind) => unitById(byKind.get(k)!.unit);

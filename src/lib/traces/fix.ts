@@ -23,9 +23,9 @@ export interface FixOptions {
  * saturation temperature Tsat(P) is found (equal P and Gibbs energy of both phases); when
  * |T − Tsat| ≤ tolerance the pair is flagged `inDome` and its state is left open, unless the logger
  * also gave v (then the state is fixed from (P, v), with its quality). Otherwise the state is fixed
- * from (T, P) and v comes from the engine. A flagged point without a logged v is placed for drawing
- * at a v interpolated in time between the nearest placed neighbours and clamped to [v′, v″] at its
- * pressure (`vFrom: 'estimated'`): an estimate for the picture, never a property.
+ * from (T, P) and v comes from the engine. A flagged point without a logged v keeps v = null and
+ * carries `vRange` = [v′, v″] at its pressure: the measurement puts it on that segment of the
+ * isobar across the dome and says nothing more, so nothing more is drawn or assumed.
  * Points the engine cannot fix (below the triple point, beyond the formulation's range) are returned
  * as rejected lines with the engine's reason.
  */
@@ -34,7 +34,6 @@ export function fixTracePoints(fluid: string, raw: readonly RawTracePoint[], opt
 	const info = getFluid(fluid);
 	const points: TracePoint[] = [];
 	const rejected: RejectedLine[] = [];
-	const bounds = new Map<number, [number, number]>();
 
 	for (const r of raw) {
 		try {
@@ -49,10 +48,7 @@ export function fixTracePoints(fluid: string, raw: readonly RawTracePoint[], opt
 				if (r.v !== null) {
 					const st = fixState(fluid, { P: r.P, v: r.v });
 					points.push({ line: r.line, t: r.t, P: r.P, T: r.T, vLogged: r.v, v: r.v, vFrom: 'logged', phase: st.phase, x: st.x, inDome: true, dTsat });
-				} else {
-					bounds.set(points.length, [sat.vl, sat.vv]);
-					points.push({ line: r.line, t: r.t, P: r.P, T: r.T, vLogged: null, v: null, vFrom: null, phase: null, x: null, inDome: true, dTsat });
-				}
+				} else points.push({ line: r.line, t: r.t, P: r.P, T: r.T, vLogged: null, v: null, vFrom: null, phase: null, x: null, inDome: true, dTsat, vRange: [sat.vl, sat.vv] });
 				continue;
 			}
 			const st = fixState(fluid, { T: r.T, P: r.P });
@@ -62,25 +58,22 @@ export function fixTracePoints(fluid: string, raw: readonly RawTracePoint[], opt
 			rejected.push({ line: r.line, reason: `${info.name} cannot be fixed there: ${e.message}`, text: r.text });
 		}
 	}
-
-	// place flagged points without a logged v between their placed neighbours, for drawing only
-	for (const [i, [vl, vv]] of bounds) {
-		let before: TracePoint | undefined;
-		let after: TracePoint | undefined;
-		for (let j = i - 1; j >= 0 && !before; j--) if (points[j].v !== null && points[j].vFrom !== 'estimated') before = points[j];
-		for (let j = i + 1; j < points.length && !after; j++) if (points[j].v !== null && points[j].vFrom !== 'estimated' && !bounds.has(j)) after = points[j];
-		let v: number | null = null;
-		const p = points[i];
-		if (before && after) {
-			const span = after.t - before.t;
-			// interpolate in log v: the chart's v axis is logarithmic
-			const f = span > 0 ? (p.t - before.t) / span : 0.5;
-			v = Math.exp(Math.log(before.v!) + f * (Math.log(after.v!) - Math.log(before.v!)));
-		} else if (before || after) v = (before ?? after)!.v;
-		if (v !== null) {
-			p.v = Math.min(vv, Math.max(vl, v));
-			p.vFrom = 'estimated';
-		}
-	}
 	return { points, rejected };
+}
+
+/**
+ * Stored points as they are read back: a saturation-line point without a logged v has v open and
+ * its [v′, v″] (older uploads stored an interpolated "estimated" v and no range: both are put right
+ * here, so no guessed v is ever drawn).
+ */
+export function openSaturationPoints(fluid: string, points: TracePoint[]): TracePoint[] {
+	return points.map((p) => {
+		if (!p.inDome || p.vLogged !== null || (p.vRange && p.v === null)) return p;
+		try {
+			const s = saturationAtP(fluid, p.P);
+			return { ...p, v: null, vFrom: null, vRange: [s.liquid.v, s.vapor.v] };
+		} catch {
+			return { ...p, v: null, vFrom: null, vRange: null };
+		}
+	});
 }

@@ -1,4 +1,4 @@
-import { MAX_LISTED_REJECTIONS, parseTraceCsv, type TraceCsvOptions } from './csv';
+import { MAX_LISTED_REJECTIONS, parseTraceCsv, problemSummary, type TraceCsvOptions } from './csv';
 import { DEFAULT_SATURATION_TOLERANCE, fixTracePoints, MAX_SATURATION_TOLERANCE } from './fix';
 import type { TraceResult } from './types';
 
@@ -30,13 +30,12 @@ export function readTraceCsv(input: string | Uint8Array, options: ReadTraceOptio
 	const rejectedCount = parsed.rejectedCount + fixed.rejected.length;
 
 	if (rejectedCount > 0 && !options.allowRejected) {
-		const first = rejected[0];
 		return {
 			ok: false,
 			code: 'rejected-lines',
 			message:
-				`${rejectedCount} line${rejectedCount === 1 ? '' : 's'} of the file could not be read` +
-				` (the first is line ${first.line}: ${first.reason}). Nothing was saved. Correct ${rejectedCount === 1 ? 'it' : 'them'} and upload again, or upload again leaving ${rejectedCount === 1 ? 'it' : 'them'} out.`,
+				`${rejectedCount} line${rejectedCount === 1 ? '' : 's'} of the file could not be read — ${problemSummary(rejected, rejectedCount)}.` +
+				` Nothing was saved. Correct ${rejectedCount === 1 ? 'it' : 'them'} and upload again, or upload again leaving ${rejectedCount === 1 ? 'it' : 'them'} out.`,
 			rejected,
 			rejectedCount
 		};

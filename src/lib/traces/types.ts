@@ -51,7 +51,10 @@ export type VolumeSource =
 	| 'P-T'
 	/** the logger's own v (or rho) column, used where P and T cannot fix the state */
 	| 'logged'
-	/** on the saturation line with no logged v: interpolated in time between neighbours, clamped to [v′, v″] */
+	/**
+	 * older uploads only: on the saturation line with no logged v, interpolated in time between
+	 * neighbours. No longer made, and read back as v open (null) with its `vRange`.
+	 */
 	| 'estimated';
 
 /** A stored point of a measured trace, SI. */
@@ -65,8 +68,14 @@ export interface TracePoint {
 	T: number;
 	/** m³/kg as logged, or null */
 	vLogged: number | null;
-	/** m³/kg used to draw the point; null when it cannot be placed */
+	/** m³/kg used to draw the point; null when P and T do not fix it (on the saturation line, no logged v) */
 	v: number | null;
+	/**
+	 * on the saturation line without a logged v: [v′, v″] at the logged pressure, m³/kg. The reading
+	 * is somewhere on that segment (saturated liquid, a mixture or saturated vapor); the chart draws
+	 * it across the dome there, never at one guessed v.
+	 */
+	vRange?: [number, number] | null;
 	vFrom: VolumeSource | null;
 	/** the engine's phase; null for a pair on the saturation line without a logged v */
 	phase: Phase | null;

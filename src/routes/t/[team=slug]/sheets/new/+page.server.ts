@@ -6,7 +6,11 @@ import { requireTeam } from '$lib/server/guard';
 import { formFailure, parseForm, readFormData, runAction } from '$lib/server/forms';
 import { createFromExample, createSheet, titleSchema } from '$lib/server/sheets';
 import { plainText } from '$lib/plain-text';
+import * as engine from '$lib/thermo';
 import { listFluids } from '$lib/thermo';
+import { fillStart } from '$lib/sheets/fill';
+import { readAcrossSaturation } from '$lib/sheets/saturation-input';
+import type { StartSpec } from '$lib/sheets/types';
 import { WORKED_EXAMPLES } from '$lib/sheets/templates';
 import { makeDoc } from '$lib/sheets/doc';
 import { parseQuantity, unitPrefs, type Quantity } from '$lib/units';
@@ -20,8 +24,9 @@ export const load: PageServerLoad = async (event) => {
 	};
 };
 
-const PROPS = ['T', 'P', 'v', 'u', 'h', 's', 'x'] as const;
-const QUANTITY: Record<(typeof PROPS)[number], Quantity> = { T: 'temperature', P: 'pressure', v: 'specificVolume', u: 'specificEnergy', h: 'specificEnergy', s: 'specificEntropy', x: 'quality' };
+// `fill`: the liquid's share of a vessel's volume, with T or P (saturation there) — fill.ts
+const PROPS = ['T', 'P', 'v', 'u', 'h', 's', 'x', 'fill'] as const;
+const QUANTITY: Record<(typeof PROPS)[number], Quantity> = { T: 'temperature', P: 'pressure', v: 'specificVolume', u: 'specificEnergy', h: 'specificEnergy', s: 'specificEntropy', x: 'quality', fill: 'fraction' };
 const fluidIds = listFluids().map((f) => f.id) as [string, ...string[]];
 
 const text = (what: string, max = 60) => plainText(`The ${what.replace(/^the /, '')}`, 'line', `Enter ${what}.`).trim().max(max, { error: `That is too long for ${what}.` });
@@ -43,6 +48,12 @@ const blankForm = z
 	})
 	.superRefine((f, ctx) => {
 		if (f.propA === f.propB) ctx.addIssue({ code: 'custom', path: ['propB'], message: 'Pick two different properties to fix the start state.' });
+		else if (f.propA === 'fill' || f.propB === 'fill') {
+			const other = f.propA === 'fill' ? f.propB : f.propA;
+			const at: 'propA' | 'propB' = f.propA === 'fill' ? 'propB' : 'propA';
+			if (other !== 'T' && other !== 'P') ctx.addIssue({ code: 'custom', path: [at], message: 'A liquid fill goes with a temperature or a pressure (where liquid and vapor are saturated), e.g. 80 % at 20 °C.' });
+			if (f.size === 'flow') ctx.addIssue({ code: 'custom', path: ['size'], message: 'A liquid fill is for a closed vessel; a steady-flow device starts from two properties.' });
+		}
 		if (f.size !== 'perkg' && !f.sizeValue) ctx.addIssue({ code: 'custom', path: ['sizeValue'], message: f.size === 'flow' ? 'Enter the mass flow, e.g. 0.5 kg/s.' : f.size === 'mass' ? 'Enter the mass, e.g. 12 kg.' : 'Enter the volume, e.g. 0.5 m³.' });
 	});
 
@@ -73,9 +84,14 @@ export const actions: Actions = {
 			else prefs.atmosphere = atm.si;
 		}
 		const read = (field: 'valueA' | 'valueB', prop: (typeof PROPS)[number], value: string) => {
-			const r = parseQuantity(value, QUANTITY[prop], { atmosphere: prefs.atmosphere, bareReference: prefs.pressureReference });
+			// a fill reads "80" as 80 %; elsewhere a bare number needs its unit
+			const typed = prop === 'fill' && /^\s*[\d.]+\s*$/.test(value) ? `${value.trim()} %` : value;
+			const r = parseQuantity(typed, QUANTITY[prop], { atmosphere: prefs.atmosphere, bareReference: prefs.pressureReference });
 			if (!r.ok) {
-				errors[field] = r.error.message;
+				// 40 °C given for P: the saturation pressure at 40 °C (and a pressure for T likewise)
+				const sat = r.error.code === 'wrong-quantity' && (prop === 'T' || prop === 'P') ? readAcrossSaturation(engine, f.fluid, prop, value, prefs) : null;
+				if (sat?.ok) return sat.si;
+				errors[field] = sat ? sat.message : prop === 'fill' ? `Liquid fill: ${r.error.message}` : r.error.message;
 				return NaN;
 			}
 			return r.si;
@@ -93,7 +109,20 @@ export const actions: Actions = {
 			const list = Object.values(errors);
 			return formFailure(400, list.length === 1 ? list[0] : 'Some fields need attention: see the notes beside them.', errors, parsed.values);
 		}
-		const doc = makeDoc({ spec: { fluid: f.fluid, system, start: { [f.propA]: a, [f.propB]: b }, legs: [] }, units: prefs });
+		let start: Record<string, number> = { [f.propA]: a, [f.propB]: b };
+		let startSpec: StartSpec | undefined;
+		if (f.propA === 'fill' || f.propB === 'fill') {
+			const [fraction, otherProp, otherValue] = f.propA === 'fill' ? [a, f.propB, b] : [b, f.propA, a];
+			startSpec = { kind: 'fill', fraction, ...(otherProp === 'T' ? { T: otherValue } : { P: otherValue }) };
+			try {
+				start = fillStart(engine, f.fluid, startSpec);
+			} catch (e) {
+				const field = f.propA === 'fill' ? 'valueB' : 'valueA';
+				return formFailure(400, `No fill level there: ${(e as Error).message}`, { [field]: `No fill level there: ${(e as Error).message}` }, parsed.values);
+			}
+		}
+		const doc = makeDoc({ spec: { fluid: f.fluid, system, start, legs: [] }, units: prefs });
+		if (startSpec) doc.startSpec = startSpec;
 		const r = await runAction(parsed.values, () => createSheet(getDb(), access, { title: f.title, doc }));
 		if ('id' in r) redirect(303, `/t/${access.team.slug}/sheets/${r.id}`);
 		// the engine's reason belongs beside the start state's fields
