@@ -4,7 +4,7 @@
  */
 import type { RequestEvent } from '@sveltejs/kit';
 
-type Handler = (event: never) => Promise<Response> | Response;
+export type Handler = (event: never) => Promise<Response> | Response;
 
 export function computeEvent(url: string, init: { method?: string; body?: string; headers?: Record<string, string>; params?: Record<string, string>; client?: string } = {}): RequestEvent {
 	const u = new URL(url, 'http://127.0.0.1');
