@@ -8,6 +8,7 @@ import { clearSessionCookie, sessionCookieName, setSessionCookie, validateSessio
 import { authenticateToken } from '$lib/server/api-tokens';
 import { codeForStatus, jsonError } from '$lib/server/api';
 import { crossSiteFormRefusal } from '$lib/server/csrf';
+import { drainUnread } from '$lib/server/body';
 
 /** Migrations, mail and the demo seed, before the first request. */
 export const init: ServerInit = async () => {
@@ -90,6 +91,9 @@ function tooLargeMessage(): string {
 const crossSiteForms: Handle = async ({ event, resolve }) =>
 	crossSiteFormRefusal(event.request, event.url, event.cookies.get(sessionCookieName(event.url)) !== undefined) ?? resolve(event);
 
+/** A body left unread by an early answer (413, 405, 401…) is drained, so the kept-alive connection stays usable. */
+const drainUnreadBody: Handle = async ({ event, resolve }) => drainUnread(event.request, await resolve(event));
+
 const securityHeaders: Handle = async ({ event, resolve }) => {
 	const response = await resolve(event);
 	const h = response.headers;
@@ -104,7 +108,7 @@ const securityHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-export const handle = sequence(securityHeaders, crossSiteForms, apiErrorShape, authenticateApiToken, authenticateSession);
+export const handle = sequence(drainUnreadBody, securityHeaders, crossSiteForms, apiErrorShape, authenticateApiToken, authenticateSession);
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	// 4xx here are the framework's own answers to bad requests (unknown route, wrong content type)

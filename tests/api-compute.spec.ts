@@ -109,7 +109,7 @@ const BAD: Row[] = [
 	{ name: 'paths: limit as a string', path: '/api/v1/paths', body: with_(PATH, { limits: { designPressure: '16 bar' } }), status: 400, code: 'invalid-input', message: /designPressure must be a number in Pa/ },
 	{ name: 'paths: a bad leg deep inside', path: '/api/v1/paths', body: with_(PATH, { legs: [{ process: 'isobaric', target: { T: 400 } }, { process: 'polytropic', target: { P: 1e6 } }] }), status: 400, code: 'invalid-input', message: /legs\.1\.n/ },
 	{ name: 'paths: an unreachable second leg', path: '/api/v1/paths', body: with_(PATH, { legs: [{ process: 'isobaric', target: { T: 400 } }, { process: 'isobaric', target: { T: 100 } }] }), status: 422, code: 'unreachable-target', message: /Leg L2/ },
-	{ name: 'paths: too many points', path: '/api/v1/paths', body: with_(PATH, { samples: 1000, legs: new Array(11).fill({ process: 'isobaric', target: { T: 400 } }) }), status: 400, code: 'invalid-input', message: /at most 10000/ },
+	{ name: 'paths: too many points', path: '/api/v1/paths', body: with_(PATH, { samples: 1000, legs: new Array(11).fill({ process: 'isobaric', target: { T: 400 } }) }), status: 400, code: 'invalid-input', message: /11000 points .*at most 4000 per request/ },
 	{ name: 'paths: GET', method: 'GET', path: '/api/v1/paths', status: 405, code: 'method-not-allowed' },
 	// ---- GET /api/v1/fluids, saturation, isolines
 	{ name: 'fluids: unexpected query', path: '/api/v1/fluids?units=US', status: 400, code: 'invalid-input', message: /Unknown field "units"/ },
@@ -125,6 +125,7 @@ const BAD: Row[] = [
 	{ name: 'isolines: values not numbers', path: '/api/v1/fluids/water/isolines?kind=isobar&values=1bar,2bar', status: 400, code: 'invalid-input', message: /"1bar" is not one/ },
 	{ name: 'isolines: negative value', path: '/api/v1/fluids/water/isolines?kind=isobar&values=-1e5', status: 400, code: 'invalid-input', message: /positive/ },
 	{ name: 'isolines: too many values', path: `/api/v1/fluids/water/isolines?kind=isotherm&values=${new Array(41).fill(400).join(',')}`, status: 400, code: 'invalid-input', message: /At most 40 values/ },
+	{ name: 'isolines: values × points past the cap', path: `/api/v1/fluids/water/isolines?kind=isochore&points=2000&values=${new Array(40).fill(0.01).join(',')}`, status: 400, code: 'invalid-input', message: /at most 4000 per request \(values × points\)/ },
 	{ name: 'isolines: absurd points', path: '/api/v1/fluids/water/isolines?kind=isobar&values=1e5&points=1000000', status: 400, code: 'invalid-input', message: /at most 2000/ },
 	{ name: 'isolines: too few points', path: '/api/v1/fluids/water/isolines?kind=isobar&values=1e5&points=3', status: 400, code: 'invalid-input', message: /at least 20/ },
 	{ name: 'isolines: repeated parameter', path: '/api/v1/fluids/water/isolines?kind=isobar&kind=isotherm&values=1e5', status: 400, code: 'invalid-input', message: /more than once/ },

@@ -5,6 +5,7 @@
  */
 import type { Isoline, IsolineKind, PathResult, PathSpec, SaturationCurve } from '../thermo/types';
 import type { SheetDoc } from './types';
+import { fitPathPoints } from '../compute-limits';
 
 export class ApiError extends Error {
 	readonly status: number;
@@ -56,9 +57,9 @@ export async function apiCall<T>(f: Fetch, url: string, init: RequestInit = {}):
 	return body as T;
 }
 
-/** POST /api/v1/paths: the whole path for a spec. */
+/** POST /api/v1/paths: the whole path for a spec (its sampling thinned to the API's cap, for drawing). */
 export async function postPath(spec: PathSpec, f: Fetch = fetch): Promise<PathResult> {
-	const r = await apiCall<{ path: PathResult }>(f, '/api/v1/paths', { method: 'POST', body: JSON.stringify(spec) });
+	const r = await apiCall<{ path: PathResult }>(f, '/api/v1/paths', { method: 'POST', body: JSON.stringify(fitPathPoints(spec)) });
 	return r.path;
 }
 

@@ -6,6 +6,7 @@ import { issueText, jsonError, readJson } from '$lib/server/api';
 import { AppError } from '$lib/server/errors';
 import { createLimiter, retryAfterSeconds, type Limiter } from '$lib/server/rate-limit';
 import { clientIp } from '$lib/server/request';
+import { createAnswerCache } from './answer-cache';
 
 /*
  * Glue between the compute routes (/api/v1/fluids, /states, /legs, /paths) and the engine.
@@ -27,8 +28,13 @@ import { clientIp } from '$lib/server/request';
  *        out-of-range, below-triple-point, two-phase-pressure-temperature, inconsistent-inputs,
  *        ambiguous-state, no-convergence… — also any unexpected failure while computing
  *        (code `compute-failed`, logged with a reference): never a 5xx for what a client sends
- *   429  over COMPUTE_RATE_LIMIT requests per second from one client (bursts of twice that),
- *        with Retry-After in seconds (code `rate-limited`)
+ *   429  over COMPUTE_RATE_LIMIT units of work per second from one client (bursts of twice that),
+ *        with Retry-After in seconds (code `rate-limited`). A request costs one unit per
+ *        WORK_UNIT_POINTS points it asks for (begun), at least one: a state, the fluid list or a
+ *        leg of up to 100 points is one unit; a path of 50 legs × 40 points is 20.
+ *
+ * Work caps (points × lines, legs × points) are checked by the schemas (schemas.ts) and refused
+ * with a 400 naming the cap; docs/compute-limits.md explains them.
  */
 
 /** Largest request body, bytes. */
@@ -52,19 +58,79 @@ export function thermoStatus(code: ThermoErrorCode): number {
 	return BAD_REQUEST_CODES.has(code) ? 400 : 422;
 }
 
-let limiter: Limiter | undefined;
+/** Points computed per unit of work charged against the rate limit. */
+export const WORK_UNIT_POINTS = 100;
 
-/** The compute limiter: COMPUTE_RATE_LIMIT requests/s per client (default 100, bursts 2×, 0 = off). */
-export function computeLimiter(): Limiter {
+/** Units of work for a request that asks for `points` points: one per WORK_UNIT_POINTS begun, at least 1. */
+export function workUnits(points: number): number {
+	return Number.isFinite(points) && points > WORK_UNIT_POINTS ? Math.ceil(points / WORK_UNIT_POINTS) : 1;
+}
+
+let limiter: { limiter: Limiter; rate: number; burst: number } | undefined;
+
+let clock: (() => number) | undefined;
+
+function computeBucket(): { limiter: Limiter; rate: number; burst: number } {
 	if (!limiter) {
 		const raw = process.env.COMPUTE_RATE_LIMIT;
 		const rate = raw === undefined || raw.trim() === '' ? 100 : Number(raw);
 		const ok = Number.isFinite(rate) && rate >= 0;
 		if (!ok) console.warn(`[statewright] COMPUTE_RATE_LIMIT="${raw}" is not a number ≥ 0; using 100.`);
 		const r = ok ? rate : 100;
-		limiter = createLimiter({ ratePerSecond: r, burst: Math.max(1, 2 * r) });
+		const burst = Math.max(1, 2 * r);
+		limiter = { limiter: createLimiter({ ratePerSecond: r, burst, now: clock }), rate: r, burst };
 	}
 	return limiter;
+}
+
+/** The compute limiter: COMPUTE_RATE_LIMIT units of work per second per client (default 100, bursts 2×, 0 = off). */
+export function computeLimiter(): Limiter {
+	return computeBucket().limiter;
+}
+
+/** Forget the limiter so the next request reads COMPUTE_RATE_LIMIT again, with `now` as its clock (tests). */
+export function resetComputeLimiter(now?: () => number): void {
+	limiter = undefined;
+	clock = now;
+}
+
+const clientKey = (event: RequestEvent) => clientIp(event) ?? 'unknown';
+
+function rateLimitedError(retryAfterMs: number, units: number): AppError {
+	const { rate, burst } = computeBucket();
+	const after = retryAfterSeconds({ retryAfterMs });
+	const cost = units > 1 ? ` This request costs ${units} units (one per ${WORK_UNIT_POINTS} points asked for); fewer points cost less.` : '';
+	return new AppError(
+		429,
+		'rate-limited',
+		`Too many compute requests: at most ${rate} units of work per second from one client (bursts of ${burst}); a small request is one unit.${cost} Retry after ${after} s.`,
+		undefined,
+		{ retryAfterMs }
+	);
+}
+
+/** Units charged so far to each request in flight (the GET cache keeps them with the answer). */
+const charged = new WeakMap<RequestEvent, number>();
+
+/**
+ * Charge a request for the `points` it asks for, once its shape is checked: it paid one unit on
+ * arrival, this takes the rest (capped at the burst, so any request within the work caps can pass
+ * after a wait). Throws a 429 AppError with the wait when the client's bucket cannot pay.
+ */
+export function chargeWork(event: RequestEvent, points: number): void {
+	const units = workUnits(points);
+	chargeUnits(event, units);
+}
+
+function chargeUnits(event: RequestEvent, units: number): void {
+	const { limiter: l, burst } = computeBucket();
+	if (!l.enabled) return;
+	const target = Math.min(units, burst);
+	const due = target - (charged.get(event) ?? 0);
+	if (due <= 0) return;
+	const r = l.take(clientKey(event), due);
+	if (!r.allowed) throw rateLimitedError(r.retryAfterMs, units);
+	charged.set(event, target);
 }
 
 /** Turn anything thrown while computing into the error shape; never a 5xx. */
@@ -90,12 +156,14 @@ export function computeError(e: unknown, event: RequestEvent): Response {
 	return jsonError(422, 'compute-failed', `This request could not be computed (reference ${ref}). Please report it with the request body.`);
 }
 
+/** The unit every request pays on arrival, before its body or query is read. */
 function rateLimited(event: RequestEvent): Response | null {
-	const r = computeLimiter().take(clientIp(event) ?? 'unknown');
-	if (r.allowed) return null;
-	const after = retryAfterSeconds(r);
-	const rate = process.env.COMPUTE_RATE_LIMIT?.trim() || '100';
-	return jsonError(429, 'rate-limited', `Too many compute requests: at most ${rate} per second from one client (bursts of twice that). Retry after ${after} s.`, {}, { 'retry-after': after });
+	const r = computeLimiter().take(clientKey(event));
+	if (r.allowed) {
+		charged.set(event, 1);
+		return null;
+	}
+	return computeError(rateLimitedError(r.retryAfterMs, 1), event);
 }
 
 /** Read a JSON body: application/json, at most MAX_BODY_BYTES, parsed and checked by `schema`. */
@@ -126,36 +194,38 @@ export function computePost<E extends RequestEvent>(handler: (event: E) => Promi
 	};
 }
 
-const cache = new Map<string, { body: string; etag: string }>();
-const CACHE_MAX = 300;
+/** The GET answer cache's bounds: a typical sheet's isolines answer is about 40 kB. */
+export const CACHE_MAX_BYTES = 16 * 1024 * 1024;
+export const CACHE_MAX_ENTRIES = 500;
+const utf8 = new TextEncoder();
+export const answerCache = createAnswerCache({ maxBytes: CACHE_MAX_BYTES, maxEntries: CACHE_MAX_ENTRIES });
 
 /**
  * A cache-friendly GET compute route: the answer depends only on the URL (and the engine's
- * version), so it is memoised (least recently used of CACHE_MAX kept), served with a strong ETag
- * and `Cache-Control: public, max-age=86400`, and answered 304 on a matching If-None-Match.
+ * version), so it is memoised (answerCache: least recently used out, bounded in bytes and
+ * entries), served with a strong ETag and `Cache-Control: public, max-age=86400`, and answered
+ * 304 on a matching If-None-Match. A cached answer is charged the units it cost to compute.
  */
 export function computeGet<E extends RequestEvent>(handler: (event: E) => Promise<unknown> | unknown) {
 	return async (event: E): Promise<Response> => {
 		const limited = rateLimited(event);
 		if (limited) return limited;
 		const key = event.url.pathname + event.url.search;
-		let hit = cache.get(key);
-		if (!hit) {
-			try {
-				const body = JSON.stringify(await handler(event));
-				hit = { body, etag: `"${createHash('sha1').update(body).digest('base64url').slice(0, 27)}"` };
-			} catch (e) {
-				return computeError(e, event);
+		let hit = answerCache.get(key);
+		try {
+			if (hit) chargeUnits(event, hit.units);
+			else {
+				const body = utf8.encode(JSON.stringify(await handler(event)));
+				hit = { body, etag: `"${createHash('sha1').update(body).digest('base64url').slice(0, 27)}"`, units: charged.get(event) ?? 1 };
+				answerCache.set(key, hit);
 			}
-			cache.set(key, hit);
-			if (cache.size > CACHE_MAX) cache.delete(cache.keys().next().value as string);
-		} else {
-			cache.delete(key);
-			cache.set(key, hit);
+		} catch (e) {
+			return computeError(e, event);
 		}
 		const headers = { etag: hit.etag, 'cache-control': 'public, max-age=86400', vary: 'accept-encoding' };
 		const inm = event.request.headers.get('if-none-match');
-		if (inm && inm.split(',').some((t) => t.trim() === hit.etag || t.trim() === `W/${hit.etag}`)) return new Response(null, { status: 304, headers });
+		const etag = hit.etag;
+		if (inm && inm.split(',').some((t) => t.trim() === etag || t.trim() === `W/${etag}`)) return new Response(null, { status: 304, headers });
 		return new Response(hit.body, { headers: { ...headers, 'content-type': 'application/json' } });
 	};
 }

@@ -56,7 +56,8 @@ describe('compute request schemas', () => {
 		['flow without massFlow', pathRequestSchema, { ...PATH, system: { kind: 'flow' } }, /massFlow is required/],
 		['no legs', pathRequestSchema, { ...PATH, legs: [] }, /at least one leg/],
 		['too many legs', pathRequestSchema, { ...PATH, legs: new Array(51).fill({ process: 'isobaric', target: { T: 400 } }) }, /at most 50 legs/],
-		['too many points', pathRequestSchema, { ...PATH, samples: 1000, legs: new Array(11).fill({ process: 'isobaric', target: { T: 400 } }) }, /at most 10000/],
+		['too many points', pathRequestSchema, { ...PATH, samples: 1000, legs: new Array(11).fill({ process: 'isobaric', target: { T: 400 } }) }, /11000 points .*at most 4000 per request \(legs × points\).*at most 363 each/],
+		['50 legs of 200 points', pathRequestSchema, { ...PATH, samples: 200, legs: new Array(50).fill({ process: 'isobaric', target: { T: 400 } }) }, /10000 points .*at most 4000.*at most 80 each/],
 		['duplicate leg ids', pathRequestSchema, { ...PATH, legs: [{ id: 'a', process: 'isobaric', target: { T: 400 } }, { id: 'a', process: 'isobaric', target: { T: 450 } }] }, /Two legs have the id "a"/],
 		['negative limit', pathRequestSchema, { ...PATH, limits: { designPressure: -1 } }, /positive/],
 		['unknown limit', pathRequestSchema, { ...PATH, limits: { burstPressure: 1 } }, /Unknown field "burstPressure" in limits/]
@@ -73,6 +74,10 @@ describe('compute request schemas', () => {
 		expect(issues(isolineQuerySchema, { kind: 'isobar', values: '1e5,-3' })).toMatch(/positive/);
 		expect(issues(isolineQuerySchema, { kind: 'isobar', values: new Array(41).fill('1e5').join(',') })).toMatch(/At most 40 values/);
 		expect(issues(isolineQuerySchema, { kind: 'isobar', values: '1e5', points: '999999' })).toMatch(/at most 2000/);
+		// values × points: 40 × 2000 asked for 80 000 points
+		expect(issues(isolineQuerySchema, { kind: 'isochore', values: new Array(40).fill('0.01').join(','), points: '2000' })).toMatch(/40 lines × 2000 points = 80000 points; at most 4000 .*points=100 or less/);
+		expect(isolineQuerySchema.parse({ kind: 'isobar', values: new Array(40).fill('1e5').join(',') }).points).toBe(100);
+		expect(isolineQuerySchema.parse({ kind: 'isobar', values: '1e5,2e5', points: '2000' }).points).toBe(2000);
 		expect(issues(isolineQuerySchema, { kind: 'isobar', values: '1e5', points: 'lots' })).toMatch(/whole number/);
 		expect(issues(isolineQuerySchema, { kind: 'isobar', values: '1e5', colour: 'red' })).toMatch(/colour/);
 		expect(saturationQuerySchema.parse({ points: '50' })).toEqual({ points: 50 });

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { ISOLINE_KINDS, ISOLINE_POINTS_DEFAULT, ISOLINE_POINTS_MAX, ISOLINE_POINTS_MIN, ISOLINE_VALUES_MAX, MAX_LEGS, N_MAX, PROCESSES, TARGET_NAMES } from '$lib/thermo';
+import { API_ISOLINE_POINTS_MAX, API_PATH_POINTS_MAX, API_SAMPLES_MAX, API_SATURATION_POINTS_MAX, pathPoints } from '$lib/compute-limits';
+import { ISOLINE_KINDS, ISOLINE_POINTS_DEFAULT, ISOLINE_POINTS_MAX, ISOLINE_POINTS_MIN, ISOLINE_VALUES_MAX, MAX_LEGS, N_MAX, PROCESSES, SAMPLES_DEFAULT, TARGET_NAMES } from '$lib/thermo';
 
 /*
  * Request shapes of the compute API (API.md), checked before the engine sees them. Everything is SI:
@@ -7,11 +8,8 @@ import { ISOLINE_KINDS, ISOLINE_POINTS_DEFAULT, ISOLINE_POINTS_MAX, ISOLINE_POIN
  * unknown field is refused by name, so a typo ("temp", "Pa") never passes silently.
  */
 
-/** Points per leg over HTTP (the engine allows up to 2000; responses stay small). */
-export const API_SAMPLES_MAX = 1000;
-/** Points per leg summed over a path. */
-export const API_PATH_POINTS_MAX = 10000;
-export const API_SATURATION_POINTS_MAX = 1000;
+// Work caps (points × lines, legs × points), shared with the browser's API client.
+export { API_ISOLINE_POINTS_MAX, API_PATH_POINTS_MAX, API_SAMPLES_MAX, API_SATURATION_POINTS_MAX, pathPoints } from '$lib/compute-limits';
 
 const UNITS: Record<string, string> = { T: 'K', P: 'Pa (absolute)', v: 'm³/kg', rho: 'kg/m³', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)', x: '(0…1)' };
 const ABSOLUTE = new Set(['T', 'P', 'v', 'rho']);
@@ -163,8 +161,15 @@ export const pathRequestSchema = z
 		{ error: objectError('the body', '{ "fluid": "water", "system": { "kind": "closed", "volume": 0.5 }, "start": {…}, "legs": […] }', ['fluid', 'system', 'start', 'legs', 'limits', 'atmosphericPressure', 'samples']) }
 	)
 	.superRefine((p, ctx) => {
-		const total = p.legs.reduce((a, l) => a + (l.samples ?? p.samples ?? 40), 0);
-		if (total > API_PATH_POINTS_MAX) ctx.addIssue({ code: 'custom', path: ['legs'], message: `The path asks for ${total} points in all; at most ${API_PATH_POINTS_MAX}. Lower samples.` });
+		const total = pathPoints(p);
+		if (total > API_PATH_POINTS_MAX) {
+			const fit = Math.max(20, Math.floor(API_PATH_POINTS_MAX / p.legs.length));
+			ctx.addIssue({
+				code: 'custom',
+				path: ['legs'],
+				message: `The path asks for ${total} points (${p.legs.length} legs × their samples); at most ${API_PATH_POINTS_MAX} per request (legs × points). Lower samples (for ${p.legs.length} legs, at most ${fit} each; leave it out for ${SAMPLES_DEFAULT}) or split the path.`
+			});
+		}
 		const ids = p.legs.map((l, i) => l.id ?? `L${i + 1}`);
 		const dup = ids.find((id, i) => ids.indexOf(id) !== i);
 		if (dup) ctx.addIssue({ code: 'custom', path: ['legs'], message: `Two legs have the id "${dup}"; give every leg its own id.` });
@@ -185,7 +190,7 @@ export const saturationQuerySchema = z.strictObject(
 
 const NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
-/** Query of GET …/isolines: kind, values (comma-separated SI numbers), points. */
+/** Query of GET …/isolines: kind, values (comma-separated SI numbers), points; values × points ≤ API_ISOLINE_POINTS_MAX. */
 export const isolineQuerySchema = z.strictObject(
 	{
 		kind: z.enum(ISOLINE_KINDS as unknown as [string, ...string[]], { error: (iss) => `kind must be one of ${ISOLINE_KINDS.join(', ')}; got ${got(iss.input)}.` }),
@@ -222,7 +227,17 @@ export const isolineQuerySchema = z.strictObject(
 			.default(ISOLINE_POINTS_DEFAULT)
 	},
 	{ error: objectError('the query', '?kind=isobar&values=1e5,1e6', ['kind', 'values', 'points']) }
-);
+).superRefine((q, ctx) => {
+	const total = q.values.length * q.points;
+	if (total > API_ISOLINE_POINTS_MAX) {
+		const fit = Math.floor(API_ISOLINE_POINTS_MAX / q.values.length);
+		ctx.addIssue({
+			code: 'custom',
+			path: ['points'],
+			message: `This asks for ${q.values.length} lines × ${q.points} points = ${total} points; at most ${API_ISOLINE_POINTS_MAX} per request (values × points). Send points=${fit} or less for ${q.values.length} lines, or fewer values per request.`
+		});
+	}
+});
 
 export type LegRequest = z.infer<typeof legRequestSchema>;
 export type PathRequest = z.infer<typeof pathRequestSchema>;

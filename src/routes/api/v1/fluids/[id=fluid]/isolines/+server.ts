@@ -1,6 +1,6 @@
 import type { RequestHandler } from './$types';
 import { isolines } from '$lib/thermo';
-import { computeGet, readQuery } from '$lib/server/compute/http';
+import { chargeWork, computeGet, readQuery } from '$lib/server/compute/http';
 import { fluidFromParam } from '$lib/server/compute/fluids';
 import { isolineQuerySchema } from '$lib/server/compute/schemas';
 
@@ -10,6 +10,7 @@ const UNIT = { isobar: 'Pa', isotherm: 'K', isochore: 'm³/kg' } as const;
 export const GET: RequestHandler = computeGet((event) => {
 	const fluid = fluidFromParam(event.params.id);
 	const q = readQuery(event.url, isolineQuerySchema);
+	chargeWork(event, q.values.length * q.points);
 	const kind = q.kind as keyof typeof UNIT;
 	return { fluid: fluid.id, kind, unit: UNIT[kind], lines: isolines(fluid.id, kind, q.values, q.points) };
 });

@@ -1,6 +1,6 @@
 import type { RequestHandler } from './$types';
 import { saturationCurve } from '$lib/thermo';
-import { computeGet, readQuery } from '$lib/server/compute/http';
+import { chargeWork, computeGet, readQuery } from '$lib/server/compute/http';
 import { fluidFromParam } from '$lib/server/compute/fluids';
 import { saturationQuerySchema } from '$lib/server/compute/schemas';
 
@@ -8,5 +8,7 @@ import { saturationQuerySchema } from '$lib/server/compute/schemas';
 export const GET: RequestHandler = computeGet((event) => {
 	const fluid = fluidFromParam(event.params.id);
 	const q = readQuery(event.url, saturationQuerySchema);
-	return saturationCurve(fluid.id, q.points ?? 100);
+	const points = q.points ?? 100;
+	chargeWork(event, 2 * points);
+	return saturationCurve(fluid.id, points);
 });
