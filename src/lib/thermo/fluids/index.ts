@@ -4,6 +4,7 @@ import { ammonia } from './ammonia.ts';
 import { carbonDioxide } from './carbon-dioxide.ts';
 import { r134a } from './r134a.ts';
 import { nitrogen } from './nitrogen.ts';
+import { propane } from './propane.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -16,4 +17,5 @@ export const fluidData: FluidData[] = [
 	carbonDioxide,
 	r134a,
 	nitrogen,
+	propane,
 ];

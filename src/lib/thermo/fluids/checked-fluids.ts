@@ -1,0 +1,5 @@
+import type { FluidChecks } from './checks.ts';
+import { propaneChecks } from './propane.checks.ts';
+
+/** Every fluid's published check values (run by published-checks.test.ts); one line per fluid. */
+export const checkedFluids: FluidChecks[] = [propaneChecks];
