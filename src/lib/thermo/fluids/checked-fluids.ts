@@ -1,5 +1,6 @@
 import type { FluidChecks } from './checks.ts';
 import { propaneChecks } from './propane.checks.ts';
+import { r32Checks } from './r32.checks.ts';
 
 /** Every fluid's published check values (run by published-checks.test.ts); one line per fluid. */
-export const checkedFluids: FluidChecks[] = [propaneChecks];
+export const checkedFluids: FluidChecks[] = [propaneChecks, r32Checks];

@@ -5,6 +5,7 @@ import { carbonDioxide } from './carbon-dioxide.ts';
 import { r134a } from './r134a.ts';
 import { nitrogen } from './nitrogen.ts';
 import { propane } from './propane.ts';
+import { r32 } from './r32.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -18,4 +19,5 @@ export const fluidData: FluidData[] = [
 	r134a,
 	nitrogen,
 	propane,
+	r32,
 ];
