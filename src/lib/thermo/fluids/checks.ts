@@ -41,7 +41,8 @@ export interface CheckTable {
 	rows: string[][];
 	/**
 	 * How printed u, h and s compare: `absolute` when the table uses the fluid's declared reference
-	 * state; `differences` (from the table's first row) when it uses another convention.
+	 * state; `differences` when it uses another convention: each value less the first row's value of the
+	 * same energy (its first such column: h′ for both h′ and h″), against the same difference printed.
 	 */
 	energies: 'absolute' | 'differences';
 	/** relative slack accepted beyond the printed digits, with the reason (default none) */

@@ -6,6 +6,7 @@ import { r134a } from './r134a.ts';
 import { nitrogen } from './nitrogen.ts';
 import { propane } from './propane.ts';
 import { r32 } from './r32.ts';
+import { argon } from './argon.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -20,4 +21,5 @@ export const fluidData: FluidData[] = [
 	nitrogen,
 	propane,
 	r32,
+	argon,
 ];

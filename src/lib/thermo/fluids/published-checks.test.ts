@@ -93,10 +93,12 @@ function runTable(id: string, M: number, table: CheckTable): string[] {
 			let expected = toSI(text, c, M);
 			let tol = halfUnit(text, f) + rel * Math.abs(expected);
 			if (table.energies === 'differences' && ENERGY.has(c.name)) {
-				const base = table.rows[0][k];
-				actual -= computed(c.name, first);
-				expected -= toSI(base, c, M);
-				tol += halfUnit(base, f);
+				// from the first row's first column of the same energy (h′ of the first row for h′ and h″)
+				const b = cols.findIndex((o) => o.name[0] === c.name[0] && ENERGY.has(o.name));
+				const base = table.rows[0][b];
+				actual -= computed(cols[b].name, first);
+				expected -= toSI(base, cols[b], M);
+				tol += halfUnit(base, factor(cols[b].unit, M));
 			}
 			tol *= 1 + 1e-9;
 			if (!(Math.abs(actual - expected) <= tol))
