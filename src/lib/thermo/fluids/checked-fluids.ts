@@ -2,6 +2,7 @@ import type { FluidChecks } from './checks.ts';
 import { propaneChecks } from './propane.checks.ts';
 import { r32Checks } from './r32.checks.ts';
 import { argonChecks } from './argon.checks.ts';
+import { methaneChecks } from './methane.checks.ts';
 
 /** Every fluid's published check values (run by published-checks.test.ts); one line per fluid. */
-export const checkedFluids: FluidChecks[] = [propaneChecks, r32Checks, argonChecks];
+export const checkedFluids: FluidChecks[] = [propaneChecks, r32Checks, argonChecks, methaneChecks];

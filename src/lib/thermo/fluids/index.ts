@@ -7,6 +7,7 @@ import { nitrogen } from './nitrogen.ts';
 import { propane } from './propane.ts';
 import { r32 } from './r32.ts';
 import { argon } from './argon.ts';
+import { methane } from './methane.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -22,4 +23,5 @@ export const fluidData: FluidData[] = [
 	propane,
 	r32,
 	argon,
+	methane,
 ];
