@@ -3,6 +3,7 @@ import { propaneChecks } from './propane.checks.ts';
 import { r32Checks } from './r32.checks.ts';
 import { argonChecks } from './argon.checks.ts';
 import { methaneChecks } from './methane.checks.ts';
+import { isobutaneChecks } from './isobutane.checks.ts';
 
 /** Every fluid's published check values (run by published-checks.test.ts); one line per fluid. */
-export const checkedFluids: FluidChecks[] = [propaneChecks, r32Checks, argonChecks, methaneChecks];
+export const checkedFluids: FluidChecks[] = [propaneChecks, r32Checks, argonChecks, methaneChecks, isobutaneChecks];

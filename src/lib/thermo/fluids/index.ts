@@ -8,6 +8,7 @@ import { propane } from './propane.ts';
 import { r32 } from './r32.ts';
 import { argon } from './argon.ts';
 import { methane } from './methane.ts';
+import { isobutane } from './isobutane.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -24,4 +25,5 @@ export const fluidData: FluidData[] = [
 	r32,
 	argon,
 	methane,
+	isobutane,
 ];

@@ -96,10 +96,22 @@ export function grid(id: string, Tc: number, rhoc: number, Tt: number, Tmax: num
 		add(`saturated vapor at ${T.toFixed(2)} K`, fixState(id, { T, x: 1 }));
 		add(`mixture x = 0.4 at ${T.toFixed(2)} K`, fixState(id, { T, x: 0.4 }));
 	}
-	add('compressed liquid', fixState(id, { T: T1, rho: 1.05 * fixState(id, { T: T1, x: 0 }).rho }));
+	// the first of several densities that lies within the formulation's pressure limit
+	const inRange = (T: number, rhos: number[]): State =>
+		rhos
+			.map((rho) => {
+				try {
+					return fixState(id, { T, rho });
+				} catch {
+					return null;
+				}
+			})
+			.find((st) => st !== null)!;
+	const rhoL1 = fixState(id, { T: T1, x: 0 }).rho;
+	add('compressed liquid', inRange(T1, [1.05 * rhoL1, 1.03 * rhoL1, 1.01 * rhoL1]));
 	const Thot = Math.min(1.4 * Tc, Tc + 0.8 * (Tmax - Tc));
 	add('superheated vapor', fixState(id, { T: Thot, rho: 0.2 * rhoc }));
-	add('supercritical, dense', fixState(id, { T: Math.min(1.2 * Tc, Thot), rho: 2 * rhoc }));
+	add('supercritical, dense', inRange(Math.min(1.2 * Tc, Thot), [2, 1.8, 1.6, 1.4].map((k) => k * rhoc)));
 	add('near critical, above', fixState(id, { T: 1.005 * Tc, rho: 1.1 * rhoc }));
 	add('near critical, in the dome', fixState(id, { T: 0.995 * Tc, x: 0.5 }));
 	return out;
