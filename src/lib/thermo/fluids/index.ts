@@ -9,6 +9,7 @@ import { r32 } from './r32.ts';
 import { argon } from './argon.ts';
 import { methane } from './methane.ts';
 import { isobutane } from './isobutane.ts';
+import { r1234zeE } from './r1234ze-e.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -26,4 +27,5 @@ export const fluidData: FluidData[] = [
 	argon,
 	methane,
 	isobutane,
+	r1234zeE,
 ];
