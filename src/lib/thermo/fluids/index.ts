@@ -10,6 +10,7 @@ import { argon } from './argon.ts';
 import { methane } from './methane.ts';
 import { isobutane } from './isobutane.ts';
 import { r1234zeE } from './r1234ze-e.ts';
+import { hydrogen } from './hydrogen.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -28,4 +29,5 @@ export const fluidData: FluidData[] = [
 	methane,
 	isobutane,
 	r1234zeE,
+	hydrogen,
 ];
