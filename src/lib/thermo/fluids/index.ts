@@ -11,6 +11,7 @@ import { methane } from './methane.ts';
 import { isobutane } from './isobutane.ts';
 import { r1234zeE } from './r1234ze-e.ts';
 import { hydrogen } from './hydrogen.ts';
+import { r1234yf } from './r1234yf.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -30,4 +31,5 @@ export const fluidData: FluidData[] = [
 	isobutane,
 	r1234zeE,
 	hydrogen,
+	r1234yf,
 ];
