@@ -17,6 +17,7 @@ export const argon: FluidData = {
 	name: 'Argon',
 	formula: 'Ar',
 	aliases: ['ar', 'r740', 'r-740', 'lar', 'liquid argon'],
+	group: 'cryogen',
 	formulation: {
 		name: 'Tegeler–Span–Wagner (1999)',
 		reference:

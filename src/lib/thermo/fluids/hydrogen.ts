@@ -19,6 +19,7 @@ export const hydrogen: FluidData = {
 	name: 'Hydrogen (normal)',
 	formula: 'H2',
 	aliases: ['h2', 'lh2', 'gh2', 'normal hydrogen', 'n-h2', 'r702', 'r-702', 'liquid hydrogen'],
+	group: 'cryogen',
 	formulation: {
 		name: 'Leachman–Jacobsen–Penoncello–Lemmon (2009)',
 		reference:

@@ -17,6 +17,7 @@ export const isobutane: FluidData = {
 	name: 'Isobutane',
 	formula: 'CH(CH3)3',
 	aliases: ['r600a', 'r-600a', 'hc-600a', 'i-butane', '2-methylpropane', 'c4h10'],
+	group: 'hydrocarbon',
 	formulation: {
 		name: 'Bücker–Wagner (2006)',
 		reference:

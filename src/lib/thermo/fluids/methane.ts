@@ -17,7 +17,8 @@ export const methane: FluidData = {
 	id: 'methane',
 	name: 'Methane',
 	formula: 'CH4',
-	aliases: ['ch4', 'r50', 'r-50', 'lng', 'natural gas (as methane)', 'liquefied natural gas'],
+	aliases: ['ch4', 'r50', 'r-50', 'lng', 'liquefied natural gas'],
+	group: 'cryogen',
 	formulation: {
 		name: 'Setzmann–Wagner (1991)',
 		reference:

@@ -17,6 +17,7 @@ export const propane: FluidData = {
 	name: 'Propane',
 	formula: 'C3H8',
 	aliases: ['r290', 'r-290', 'hc-290', 'c3h8', 'lpg', 'n-propane'],
+	group: 'hydrocarbon',
 	formulation: {
 		name: 'Lemmon–McLinden–Wagner (2009)',
 		reference:

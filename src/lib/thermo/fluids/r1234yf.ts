@@ -18,6 +18,7 @@ export const r1234yf: FluidData = {
 	name: 'R-1234yf',
 	formula: 'CH2=CFCF3',
 	aliases: ['r-1234yf', 'hfo-1234yf', 'hfo1234yf', '2,3,3,3-tetrafluoropropene', '2,3,3,3-tetrafluoroprop-1-ene'],
+	group: 'refrigerant',
 	formulation: {
 		name: 'Lemmon–Akasaka (2022)',
 		reference:

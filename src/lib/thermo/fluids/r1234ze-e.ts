@@ -18,6 +18,7 @@ export const r1234zeE: FluidData = {
 	name: 'R-1234ze(E)',
 	formula: 'CHF=CHCF3',
 	aliases: ['r1234ze(e)', 'r-1234ze(e)', 'r1234ze', 'r-1234ze', 'r1234zee', 'hfo-1234ze(e)', 'hfo-1234ze', 'trans-1,3,3,3-tetrafluoropropene'],
+	group: 'refrigerant',
 	formulation: {
 		name: 'Thol–Lemmon (2016)',
 		reference:

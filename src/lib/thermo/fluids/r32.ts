@@ -17,6 +17,7 @@ export const r32: FluidData = {
 	name: 'R-32',
 	formula: 'CH2F2',
 	aliases: ['r-32', 'hfc-32', 'hfc32', 'difluoromethane', 'methylene fluoride'],
+	group: 'refrigerant',
 	formulation: {
 		name: 'Tillner-Roth–Yokozeki (1997)',
 		reference:
