@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { listFluids } from './thermo';
 import { FLUID_GROUPS } from './thermo/fluids/schema';
-import { PICKER_GROUPS, groupFluids, normalize, searchFluids } from './fluid-picker';
+import { PICKER_GROUPS, groupFluids, normalize, notCarried, searchFluids } from './fluid-picker';
 
 const fluids = listFluids();
 const first = (q: string) => searchFluids(fluids, q)[0]?.id;
@@ -49,6 +49,18 @@ describe('fluid picker search', () => {
 	it('lists every fluid for an empty query and none for nonsense', () => {
 		expect(searchFluids(fluids, '').map((f) => f.id)).toEqual(fluids.map((f) => f.id));
 		expect(searchFluids(fluids, 'unobtainium')).toEqual([]);
+	});
+
+	it('says when a query names a fluid Statewright does not carry', () => {
+		expect(notCarried('O2')).toBe('Oxygen');
+		expect(notCarried('LOX')).toBe('Oxygen');
+		expect(notCarried('air')).toBe('Air');
+		expect(notCarried('R-729')).toBe('Air');
+		expect(notCarried('He')).toBe('Helium');
+		expect(notCarried('CO2')).toBeNull();
+		expect(notCarried('propane')).toBeNull();
+		// none of them is a carried fluid's name
+		for (const q of ['o2', 'air', 'he']) expect(searchFluids(fluids, q).some((f) => normalize(f.name) === q)).toBe(false);
 	});
 
 	it('ranks an exact formula above one that merely contains it', () => {

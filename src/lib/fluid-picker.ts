@@ -56,3 +56,19 @@ export function searchFluids<F extends PickableFluid>(fluids: F[], query: string
 export function groupFluids<F extends PickableFluid>(fluids: F[]): { id: PickableFluid['group']; label: string; fluids: F[] }[] {
 	return PICKER_GROUPS.map((g) => ({ ...g, fluids: fluids.filter((f) => f.group === g.id) })).filter((g) => g.fluids.length > 0);
 }
+
+/**
+ * Fluids engineers ask for that Statewright does not carry (yet): a query naming one exactly is
+ * told so, rather than only shown near matches (O2 would otherwise offer CO2).
+ */
+const NOT_CARRIED: { label: string; names: string[] }[] = [
+	{ label: 'Oxygen', names: ['oxygen', 'o2', 'lox', 'gox', 'r732', 'liquid oxygen'] },
+	{ label: 'Air', names: ['air', 'r729', 'liquid air', 'compressed air'] },
+	{ label: 'Helium', names: ['helium', 'he', 'he4', 'helium4', 'lhe', 'r704', 'liquid helium'] }
+];
+
+/** The fluid a query names exactly when Statewright does not carry it, else null. */
+export function notCarried(query: string): string | null {
+	const q = normalize(query);
+	return NOT_CARRIED.find((f) => f.names.some((n) => normalize(n) === q))?.label ?? null;
+}
