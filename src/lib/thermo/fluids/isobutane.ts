@@ -31,7 +31,7 @@ export const isobutane: FluidData = {
 			'digits in an independent Modelica transcription (HelmholtzMedia) — CoolProp stores them rounded to 9 decimals ' +
 			'(0.951277902…). Molar mass 58.1222 g/mol, R = 8.314472 J/(mol·K), reducing point 407.81 K, 225.5 kg/m³. Checked in ' +
 			'published-checks.test.ts with isobutane.checks.ts: the paper’s verification and saturation values as transcribed by ' +
-			'pychemqt, energies as differences (the paper’s own convention). Published scientific data (facts), transcribed; no code copied.'
+			'pychemqt, energies as differences (the paper’s own convention). Triple-point pressure 0.0229 Pa: the equation’s own saturation pressure at 113.73 K, rounded. Published scientific data (facts), transcribed; no code copied.'
 	},
 	molarMass: M,
 	// R = Rm/M with Rm = 8.314472 J/(mol·K) as used by the paper

@@ -30,7 +30,7 @@ export const propane: FluidData = {
 			'7.922 with u = 393, 1237, 1984, 4351 K, written here as u/Tc; CoolProp stores u/Tc rounded to 7 digits). Molar ' +
 			'mass 44.09562 g/mol, R = 8.314472 J/(mol·K), reducing point 369.89 K, 5.00 mol/dm³ (both sources). ' +
 			'Checked in published-checks.test.ts with propane.checks.ts: the paper’s Table 5 (computer-program verification) and ' +
-			'Table A1 (saturation, IIR convention). Published scientific data (facts), transcribed; no code copied.'
+			'Table A1 (saturation, IIR convention). Triple-point pressure 1.72e-4 Pa: the equation’s own saturation pressure at 85.525 K, rounded. Published scientific data (facts), transcribed; no code copied.'
 	},
 	molarMass: M,
 	// R = Rm/M with Rm = 8.314472 J/(mol·K) as used by the paper

@@ -136,6 +136,11 @@ describe.each(checkedFluids.map((c): [string, FluidChecks] => [c.fluid, c]))('%s
 		expect(Math.abs(T - Number(nbp.T)), `T_b = ${T} (${nbp.source})`).toBeLessThanOrEqual(halfUnit(nbp.T, 1) * (1 + 1e-9));
 	});
 
+	it('lists the triple-point pressure its equation gives (to its rounding, 5e-4)', () => {
+		const P = fixState(id, { T: data.triple.T, x: 0 }).P;
+		expect(Math.abs(P / data.triple.P - 1), `p_t = ${P} Pa`).toBeLessThan(5e-4);
+	});
+
 	it('has its declared reference state', () => {
 		const rs = data.referenceState;
 		if (rs.kind === 'as-published') return;

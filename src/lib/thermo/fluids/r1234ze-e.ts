@@ -32,7 +32,7 @@ export const r1234zeE: FluidData = {
 			'(CoolProp carries 8.314472): the paper’s Table 3 values, printed to 7 digits, are reproduced with 8.3144621 and not with ' +
 			'8.314472. Checked in published-checks.test.ts with r1234ze-e.checks.ts: Table 3 (computer-program verification). No ' +
 			'saturation table of the paper was available in a public transcription: saturation is checked at the critical and normal ' +
-			'boiling points only. Limits 420 K and 100 MPa as the paper states them (from memory). Published scientific data (facts), transcribed; no code copied.'
+			'boiling points only. Limits 420 K and 100 MPa as the paper states them (from memory). Triple-point pressure 218.6 Pa: the equation’s own saturation pressure at 168.62 K, rounded. Published scientific data (facts), transcribed; no code copied.'
 	},
 	molarMass: M,
 	// R = Rm/M with Rm = 8.3144621 J/(mol·K) as used by the paper
