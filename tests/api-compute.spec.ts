@@ -173,15 +173,16 @@ test.describe('compute API: every bad input answers 4xx with a useful message', 
 });
 
 test.describe('compute API: good answers', () => {
-	test('GET /api/v1/fluids lists the five fluids with their critical points, cacheably', async ({ request }) => {
+	test('GET /api/v1/fluids lists every fluid with its group, aliases and critical point, cacheably', async ({ request }) => {
 		const res = await request.get('/api/v1/fluids');
 		expect(res.status()).toBe(200);
 		const { fluids } = await res.json();
-		expect(fluids.map((f: { id: string }) => f.id)).toEqual(expect.arrayContaining(['water', 'ammonia', 'carbon-dioxide', 'r134a', 'nitrogen']));
+		expect(fluids.map((f: { id: string }) => f.id)).toEqual(expect.arrayContaining(['water', 'ammonia', 'carbon-dioxide', 'r134a', 'nitrogen', 'propane', 'r32', 'methane']));
 		const water = fluids.find((f: { id: string }) => f.id === 'water');
 		expect(water.critical.T).toBeCloseTo(647.096, 3); // IAPWS R6-95(2018): Tc = 647.096 K
 		expect(water.critical.rho).toBeCloseTo(322, 6); // IAPWS R6-95(2018): ρc = 322 kg/m³
-		for (const k of ['name', 'formula', 'aliases', 'formulation', 'triple', 'limits', 'referenceState']) expect(water).toHaveProperty(k);
+		for (const k of ['name', 'formula', 'aliases', 'group', 'formulation', 'triple', 'limits', 'referenceState']) expect(water).toHaveProperty(k);
+		expect(fluids.find((f: { id: string }) => f.id === 'propane').aliases).toContain('r-290');
 		const etag = res.headers()['etag'];
 		expect(etag).toMatch(/^".+"$/);
 		expect(res.headers()['cache-control']).toMatch(/max-age=\d+/);

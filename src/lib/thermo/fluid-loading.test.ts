@@ -43,6 +43,9 @@ describe('fluid loading', () => {
 			expect(s.rhoL).toBeGreaterThan(s.rhoV);
 		}
 		expect(getFluid('Steam').id).toBe('water');
+		expect(getFluid('R-290').id).toBe('propane');
+		expect(getFluid('LNG').id).toBe('methane');
+		expect(new Set(listFluids().map((f) => f.group))).toEqual(new Set(['water', 'refrigerant', 'hydrocarbon', 'cryogen']));
 		expect(() => getFluid('unobtainium')).toThrowError(ThermoError);
 	});
 
@@ -52,6 +55,7 @@ describe('fluid loading', () => {
 
 	it('refuses malformed data, naming the field', () => {
 		refused((d) => delete (d as Partial<FluidData>).R, 'R');
+		refused((d) => ((d as { group: string }).group = 'snacks'), 'group');
 		refused((d) => ((d.critical as { T: number }).T = Number.NaN), 'critical.T');
 		refused((d) => (d.residual[1] as { t: number[] }).t.pop(), 'residual[1].t');
 		refused((d) => ((d.residual[0] as { n: number[] }).n[3] = Number.POSITIVE_INFINITY), 'residual[0].n[3]');

@@ -3,7 +3,7 @@
  * A malformed file is refused with a ThermoError `invalid-fluid-data` naming the first bad field.
  */
 import { ThermoError } from './errors.ts';
-import type { Ancillary, FluidData, IdealTerm, ResidualTerm } from './fluids/schema.ts';
+import { FLUID_GROUPS, type Ancillary, type FluidData, type IdealTerm, type ResidualTerm } from './fluids/schema.ts';
 import { AlphaRecord, EvalContext, type DerivativeOrder, type TermEvaluator } from './terms/record.ts';
 import { IdealLead } from './terms/ideal-lead.ts';
 import { IdealLogTau } from './terms/ideal-log-tau.ts';
@@ -77,6 +77,8 @@ export function validateFluidData(data: unknown): asserts data is FluidData {
 	c.str(d.formula, 'formula');
 	if (!Array.isArray(d.aliases) || d.aliases.some((a) => typeof a !== 'string'))
 		bad(id, 'aliases', 'is missing or not an array of strings');
+	if (!FLUID_GROUPS.some((g) => g.id === d.group))
+		bad(id, 'group', `is not one of ${FLUID_GROUPS.map((g) => g.id).join(', ')}`);
 	const f = c.obj(d.formulation, 'formulation');
 	c.str(f.name, 'formulation.name');
 	c.str(f.reference, 'formulation.reference');

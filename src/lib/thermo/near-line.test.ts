@@ -11,6 +11,7 @@ import { describe, expect, it } from 'vitest';
 import { fixState, listFluids, saturationAtT } from './index.ts';
 import { solveLike } from './pairs.test-support.ts';
 import { getCompiledFluid } from './registry.ts';
+import { P_ROUNDOFF } from './state.ts';
 import type { InputName, State } from './types.ts';
 import fixture from '../../../tests/reference/iapws-near-line.json';
 
@@ -89,11 +90,18 @@ describe('states just off the saturation line, every fluid (internal consistency
 			const fl = getCompiledFluid(id);
 			const Ts = [fl.Tt + 0.02, ...[0.1, 0.5, 0.8, 0.95].map((f) => fl.Tt + f * (fl.Tc - fl.Tt)), fl.Tc - 0.5, fl.Tc - 0.05];
 			let n = 0;
+			let skipped = 0;
 			for (const T of Ts) {
 				const Psat = saturationAtT(id, T).P;
+				// a step below the line's round-off band (P_ROUNDOFF·ρ′RT, state.ts) is on the line by design: where
+				// Psat is tiny (propane, isobutane, R-1234yf near their triple points, Psat < 1 Pa) the steps are
+				// raised to ten times that band, and the vapor side keeps only steps below half of Psat
+				const floor = 10 * P_ROUNDOFF * saturationAtT(id, T).liquid.rho * fl.R * T;
 				for (const side of ['liquid', 'vapor'] as const) {
 					const phase = side === 'liquid' ? 'compressed-liquid' : 'superheated-vapor';
-					for (const dP of [1, 1e-4 * Psat, 1e-2 * Psat]) {
+					const steps = [1, 1e-4 * Psat, 1e-2 * Psat].map((d) => Math.max(d, floor)).filter((d) => side === 'liquid' || d < 0.5 * Psat);
+					skipped += 3 - steps.length;
+					for (const dP of steps) {
 						const P = side === 'liquid' ? Psat + dP : Psat - dP;
 						const where = `${id} ${side} ${dP} Pa off Psat at T = ${T}`;
 						const st = fixState(id, { T, P });
@@ -110,7 +118,8 @@ describe('states just off the saturation line, every fluid (internal consistency
 					}
 				}
 			}
-			expect(n).toBe(Ts.length * 6);
+			expect(n + skipped).toBe(Ts.length * 6);
+			expect(skipped).toBeLessThanOrEqual(6); // at most the vapor side at the two lowest temperatures
 		});
 	}
 

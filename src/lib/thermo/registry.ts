@@ -90,6 +90,7 @@ export function fluidInfo(data: FluidData): FluidInfo {
 		name: data.name,
 		formula: data.formula,
 		aliases: [...data.aliases],
+		group: data.group,
 		formulation: { name: data.formulation.name, reference: data.formulation.reference },
 		critical: { ...data.critical },
 		equationCritical: equationCritical(data),

@@ -136,9 +136,12 @@ describe('saturation next to the equation’s own critical point (every register
 				expect(s.rhoV).toBeLessThan(fl.rhoc);
 				if (prev && dT >= 1e-5) {
 					// exponent between 0.3 and 0.7 (an analytic equation tends to ½ at its critical point, a
-					// scaled one to about ⅓; closer than 10 µK round-off blurs the gap; common practice)
+					// scaled one to about ⅓; closer than 10 µK round-off blurs the gap; common practice). R-1234ze(E)'s
+					// equation (Thol & Lemmon 2016) has a very flat critical isotherm: its exponent dips to 0.265 between
+					// 1 K and 1 mK below Tc and reaches ½ only closer in (its (∂P/∂ρ)_T vanishes at Tc, and it reproduces
+					// the paper's near-critical verification point, 383 K and 4.29 mol/dm³, to 7 digits): 0.25 for it
 					const e = Math.log(gap / prev.gap) / Math.log(theta / prev.theta);
-					expect(e, `${info.id} gap exponent at Tc − ${dT}`).toBeGreaterThan(0.3);
+					expect(e, `${info.id} gap exponent at Tc − ${dT}`).toBeGreaterThan(info.id === 'r1234ze-e' ? 0.25 : 0.3);
 					expect(e, `${info.id} gap exponent at Tc − ${dT}`).toBeLessThan(0.7);
 				}
 				prev = { gap, theta };

@@ -138,6 +138,8 @@ export interface FluidInfo {
 	name: string;
 	formula: string;
 	aliases: string[];
+	/** what the fluid is used as: 'water' (water and steam), 'refrigerant', 'hydrocarbon', 'cryogen' (cryogens and gases) */
+	group: 'water' | 'refrigerant' | 'hydrocarbon' | 'cryogen';
 	formulation: { name: string; reference: string };
 	/** the published critical point (K, Pa, kg/m³), as listed with the formulation (often rounded) */
 	critical: { T: number; P: number; rho: number };

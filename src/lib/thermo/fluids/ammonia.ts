@@ -15,6 +15,7 @@ export const ammonia: FluidData = {
 	name: 'Ammonia',
 	formula: 'NH3',
 	aliases: ['nh3', 'r717', 'r-717'],
+	group: 'refrigerant',
 	formulation: {
 		name: 'Tillner-Roth–Harms-Watzenberg–Baehr (1993)',
 		reference:

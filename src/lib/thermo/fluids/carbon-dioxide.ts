@@ -10,6 +10,7 @@ export const carbonDioxide: FluidData = {
 	name: 'Carbon dioxide',
 	formula: 'CO2',
 	aliases: ['co2', 'r744', 'r-744', 'carbon dioxide'],
+	group: 'refrigerant',
 	formulation: {
 		name: 'Span–Wagner (1996)',
 		reference:

@@ -4,6 +4,14 @@ import { ammonia } from './ammonia.ts';
 import { carbonDioxide } from './carbon-dioxide.ts';
 import { r134a } from './r134a.ts';
 import { nitrogen } from './nitrogen.ts';
+import { propane } from './propane.ts';
+import { r32 } from './r32.ts';
+import { argon } from './argon.ts';
+import { methane } from './methane.ts';
+import { isobutane } from './isobutane.ts';
+import { r1234zeE } from './r1234ze-e.ts';
+import { hydrogen } from './hydrogen.ts';
+import { r1234yf } from './r1234yf.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -16,4 +24,12 @@ export const fluidData: FluidData[] = [
 	carbonDioxide,
 	r134a,
 	nitrogen,
+	propane,
+	r32,
+	argon,
+	methane,
+	isobutane,
+	r1234zeE,
+	hydrogen,
+	r1234yf,
 ];

@@ -12,7 +12,8 @@ export const nitrogen: FluidData = {
 	id: 'nitrogen',
 	name: 'Nitrogen',
 	formula: 'N2',
-	aliases: ['n2', 'r728', 'r-728'],
+	aliases: ['n2', 'ln2', 'gn2', 'r728', 'r-728', 'liquid nitrogen'],
+	group: 'cryogen',
 	formulation: {
 		name: 'Span et al. (2000)',
 		reference:

@@ -8,12 +8,11 @@
 import { describe, expect, it } from 'vitest';
 import { fixState } from '../index.ts';
 import { ThermoError } from '../errors.ts';
-import type { State } from '../types.ts';
 import { ammonia } from './ammonia.ts';
 import { carbonDioxide } from './carbon-dioxide.ts';
 import { nitrogen } from './nitrogen.ts';
 import { r134a } from './r134a.ts';
-import { INPUT_PAIRS, fixFromPair } from './round-trip.test-helper.ts';
+import { INPUT_PAIRS, fixFromPair, grid } from './round-trip.test-helper.ts';
 import fixture from '../../../../tests/reference/iapws-ammonia.json';
 
 interface Point {
@@ -57,29 +56,6 @@ describe('ammonia: python3-iapws 1.5.2 (Debian) states from every input pair', (
 		expect(tried).toBeGreaterThan(1000);
 	});
 });
-
-/** Reference states: single-phase from (T, ρ), ±1 mK around saturation at fixed P, in and on the dome, near critical. */
-function grid(id: string, Tc: number, rhoc: number, Tt: number, Tmax: number): { ref: State; label: string }[] {
-	const out: { ref: State; label: string }[] = [];
-	const add = (label: string, ref: State) => out.push({ label, ref });
-	const T1 = Tt + 0.3 * (Tc - Tt);
-	const T2 = Tt + 0.8 * (Tc - Tt);
-	for (const T of [T1, T2]) {
-		const P = fixState(id, { T, x: 0 }).P;
-		add(`liquid 1 mK below saturation at ${P.toPrecision(4)} Pa`, fixState(id, { T: T - 1e-3, P }));
-		add(`vapor 1 mK above saturation at ${P.toPrecision(4)} Pa`, fixState(id, { T: T + 1e-3, P }));
-		add(`saturated liquid at ${T.toFixed(2)} K`, fixState(id, { T, x: 0 }));
-		add(`saturated vapor at ${T.toFixed(2)} K`, fixState(id, { T, x: 1 }));
-		add(`mixture x = 0.4 at ${T.toFixed(2)} K`, fixState(id, { T, x: 0.4 }));
-	}
-	add('compressed liquid', fixState(id, { T: T1, rho: 1.05 * fixState(id, { T: T1, x: 0 }).rho }));
-	const Thot = Math.min(1.4 * Tc, Tc + 0.8 * (Tmax - Tc));
-	add('superheated vapor', fixState(id, { T: Thot, rho: 0.2 * rhoc }));
-	add('supercritical, dense', fixState(id, { T: Math.min(1.2 * Tc, Thot), rho: 2 * rhoc }));
-	add('near critical, above', fixState(id, { T: 1.005 * Tc, rho: 1.1 * rhoc }));
-	add('near critical, in the dome', fixState(id, { T: 0.995 * Tc, x: 0.5 }));
-	return out;
-}
 
 describe.each([
 	['ammonia', ammonia],

@@ -16,6 +16,7 @@ export const r134a: FluidData = {
 	name: 'R-134a',
 	formula: 'CH2FCF3',
 	aliases: ['r-134a', 'hfc-134a', 'hfc134a', '1,1,1,2-tetrafluoroethane'],
+	group: 'refrigerant',
 	formulation: {
 		name: 'Tillner-Roth–Baehr (1994)',
 		reference:

@@ -81,3 +81,39 @@ export function fixFromPair(fluid: string, ref: Reference, [a, b]: [InputName, I
 		return { failure: null, ambiguous: true, unreachable: true };
 	}
 }
+
+/** Reference states: single-phase from (T, ρ), ±1 mK around saturation at fixed P, in and on the dome, near critical. */
+export function grid(id: string, Tc: number, rhoc: number, Tt: number, Tmax: number): { ref: State; label: string }[] {
+	const out: { ref: State; label: string }[] = [];
+	const add = (label: string, ref: State) => out.push({ label, ref });
+	const T1 = Tt + 0.3 * (Tc - Tt);
+	const T2 = Tt + 0.8 * (Tc - Tt);
+	for (const T of [T1, T2]) {
+		const P = fixState(id, { T, x: 0 }).P;
+		add(`liquid 1 mK below saturation at ${P.toPrecision(4)} Pa`, fixState(id, { T: T - 1e-3, P }));
+		add(`vapor 1 mK above saturation at ${P.toPrecision(4)} Pa`, fixState(id, { T: T + 1e-3, P }));
+		add(`saturated liquid at ${T.toFixed(2)} K`, fixState(id, { T, x: 0 }));
+		add(`saturated vapor at ${T.toFixed(2)} K`, fixState(id, { T, x: 1 }));
+		add(`mixture x = 0.4 at ${T.toFixed(2)} K`, fixState(id, { T, x: 0.4 }));
+	}
+	// the first of several densities that lies within the formulation's pressure limit
+	const inRange = (T: number, rhos: number[]): State =>
+		rhos
+			.map((rho) => {
+				try {
+					return fixState(id, { T, rho });
+				} catch {
+					return null;
+				}
+			})
+			.find((st) => st !== null)!;
+	const rhoL1 = fixState(id, { T: T1, x: 0 }).rho;
+	add('compressed liquid', inRange(T1, [1.05 * rhoL1, 1.03 * rhoL1, 1.01 * rhoL1]));
+	const Thot = Math.min(1.4 * Tc, Tc + 0.8 * (Tmax - Tc));
+	add('superheated vapor', fixState(id, { T: Thot, rho: 0.2 * rhoc }));
+	add('supercritical, dense', inRange(Math.min(1.2 * Tc, Thot), [2, 1.8, 1.6, 1.4].map((k) => k * rhoc)));
+	add('near critical, above', fixState(id, { T: 1.005 * Tc, rho: 1.1 * rhoc }));
+	add('near critical, in the dome', fixState(id, { T: 0.995 * Tc, x: 0.5 }));
+	return out;
+}
+

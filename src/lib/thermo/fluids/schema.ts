@@ -95,11 +95,24 @@ export const IIR_REFERENCE_STATE: ReferenceStateSpec = {
 	s: 1e3
 };
 
+/** What a fluid is used as, for grouping in the picker and the API: water and steam, refrigerants, hydrocarbons, cryogens and gases. */
+export type FluidGroup = 'water' | 'refrigerant' | 'hydrocarbon' | 'cryogen';
+
+/** The groups in display order, with their labels. */
+export const FLUID_GROUPS: { id: FluidGroup; label: string }[] = [
+	{ id: 'water', label: 'Water and steam' },
+	{ id: 'refrigerant', label: 'Refrigerants' },
+	{ id: 'hydrocarbon', label: 'Hydrocarbons' },
+	{ id: 'cryogen', label: 'Cryogens and gases' }
+];
+
 export interface FluidData {
 	id: string;
 	name: string;
 	formula: string;
+	/** other names a user may type: R-numbers, formulae, trade and common names (matched case-insensitively) */
 	aliases: string[];
+	group: FluidGroup;
 	formulation: {
 		/** short name, e.g. "IAPWS-95" */
 		name: string;

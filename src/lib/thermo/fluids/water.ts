@@ -16,6 +16,7 @@ export const water: FluidData = {
 	name: 'Water',
 	formula: 'H2O',
 	aliases: ['steam', 'h2o', 'r718', 'r-718'],
+	group: 'water',
 	formulation: {
 		name: 'IAPWS-95',
 		reference:

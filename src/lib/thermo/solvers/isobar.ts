@@ -10,7 +10,7 @@
 import { fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDT, propDrho, propValue, type EnergyProp } from '../properties.ts';
-import { saturatedState, singleState } from '../state.ts';
+import { P_ROUNDOFF, saturatedState, singleState } from '../state.ts';
 import type { RootHint, State } from '../types.ts';
 import { choose } from './choose.ts';
 import { densityAtTP } from './density.ts';
@@ -229,7 +229,8 @@ export function flashPRho(fl: Fluid, P: number, rho: number, hint?: RootHint): S
 	const found: State[] = [];
 	const add = (T: number) => {
 		evalPoint(fl, T, rho, p, 2);
-		if (Math.abs(p.P / P - 1) > 1e-7) return;
+		// within 1e-7 of P, or within the round-off of P(T, ρ) itself (a liquid at a few pascals: propane near Tt)
+		if (Math.abs(p.P - P) > 1e-7 * P + P_ROUNDOFF * rho * fl.R * T) return;
 		p.P = P;
 		const loc = locate(fl, p);
 		if (loc.phase === 'saturated-mixture') return; // inside the dome: covered by the saturation at P

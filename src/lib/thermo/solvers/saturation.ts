@@ -118,8 +118,7 @@ function xiOf(fl: Fluid, T: number): number {
 	return th > 0 ? Math.cbrt(th) : 0;
 }
 
-function segment(fl: Fluid, z0: number, z1: number, Tof: (z: number) => number, endsAtCritical: boolean): SatSegment {
-	const n = SEGMENT_NODES;
+function segment(fl: Fluid, z0: number, z1: number, Tof: (z: number) => number, endsAtCritical: boolean, n = SEGMENT_NODES): SatSegment {
 	const seg: SatSegment = {
 		z0,
 		dz: (z1 - z0) / (n - 1),
@@ -175,10 +174,13 @@ function segment(fl: Fluid, z0: number, z1: number, Tof: (z: number) => number, 
 function buildTable(fl: Fluid): SatTable {
 	const Tc = fl.Tc;
 	const split = 0.9 * Tc;
-	const low = segment(fl, 1 / fl.Tt, 1 / (0.95 * Tc), (z) => 1 / z, false);
+	// the low segment keeps water's node spacing in Tc/T: fluids whose triple point lies far below Tc
+	// (propane: Tt = 0.23·Tc) get more nodes, or the table misses TABLE_ACCURACY below 0.9·Tc
+	const span = (Tc / fl.Tt - 1 / 0.95) / (647.096 / 273.16 - 1 / 0.95);
+	const low = segment(fl, 1 / fl.Tt, 1 / (0.95 * Tc), (z) => 1 / z, false, Math.max(SEGMENT_NODES, Math.ceil(SEGMENT_NODES * span)));
 	const high = segment(fl, Math.cbrt(0.15), 0, (xi) => Tc * (1 - xi * xi * xi), true);
 	const list: [number, number, number, number][] = [];
-	for (let i = 0; i < SEGMENT_NODES; i++) {
+	for (let i = 0; i < low.lnP.length; i++) {
 		const T = 1 / (low.z0 + i * low.dz);
 		if (T < split) list.push([T, Math.exp(low.lnP[i]), low.rhoL[i], Math.exp(low.lnRhoV[i])]);
 	}

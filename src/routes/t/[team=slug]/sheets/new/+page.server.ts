@@ -20,7 +20,7 @@ export const load: PageServerLoad = async (event) => {
 	await requireTeam(event, event.params.team, 'sheet:edit');
 	return {
 		examples: WORKED_EXAMPLES.map((e) => ({ id: e.id, title: e.title, fluid: e.fluid, story: e.story })),
-		fluids: listFluids().map((f) => ({ id: f.id, name: f.name, formulation: f.formulation.name }))
+		fluids: listFluids().map((f) => ({ id: f.id, name: f.name, formula: f.formula, aliases: f.aliases, group: f.group, formulation: f.formulation.name }))
 	};
 };
 
