@@ -4,7 +4,7 @@ import { clampCoords } from './clamp';
 import { isPressureLimit, legAriaLabel, LIMIT_ORDER, limitText, stateAriaLabel } from './describe';
 import { LEG_STROKE, LIMIT_STROKE, processStyle } from './encoding';
 import { KEY, keyEntries, layoutKey } from './key';
-import { levelAnchors, ObstacleIndex, placeEdgeLabels, placeNear, textWidth, type LabelRequest } from './labels';
+import { levelAnchors, placeChartLabels, textWidth, type LabelPlacement, type LabelRequest } from './labels';
 import { axisTicks, axisUnit, compactNumber, fitDomain, makeXScale, makeYScale, thinLabels, yScaleType, type Scale, type Tick } from './scales';
 import { DRAWING_CSS, OVERLAY_CSS } from './style';
 import type {
@@ -128,6 +128,15 @@ function polylineD(points: readonly Point[]): string {
 	return d;
 }
 
+/**
+ * d3-zoom's transform is in the overlay's px (the pointer's), the scales map into the plot's own
+ * px (0 at the plot's corner): shift it by (k − 1)·offset so that the point under the pointer stays
+ * under it while zooming.
+ */
+export function plotTransform(t: ZoomTransform, plot: { x: number; y: number }): ZoomTransform {
+	return zoomIdentity.translate(t.x + (t.k - 1) * plot.x, t.y + (t.k - 1) * plot.y).scale(t.k);
+}
+
 function diamond(size: number): string {
 	return `M0,${-size}L${size},0L0,${size}L${-size},0Z`;
 }
@@ -192,6 +201,13 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	const hitStates = oroot.append('g');
 	const ghost = oroot.append('circle').attr('class', 'swc-ghost').attr('r', STATE_R + 3).style('display', 'none');
 
+	// labels are placed with measured text boxes: place them again once the web fonts are in
+	let destroyed = false;
+	if (typeof document !== 'undefined' && document.fonts && document.fonts.status !== 'loaded')
+		void document.fonts.ready.then(() => {
+			if (!destroyed && frame) drawFrame();
+		});
+
 	const yOf = (p: { T: number; P: number }) => (frame!.kind === 'T-v' ? p.T : p.P);
 	const project = (p: { v: number; T: number; P: number }): Point => ({ x: plot.x + x!(p.v), y: plot.y + y!(yOf(p)) });
 	const dataAt = (px: number, py: number): ChartCoords => {
@@ -247,8 +263,9 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		plot = { x: m.left, y: m.top, width: Math.max(10, f.width - m.left - m.right), height: Math.max(10, f.height - m.top - m.bottom) };
 		const x0 = makeXScale(baseDomain!, plot.width);
 		const y0 = makeYScale(f.kind, f.pressureScale, baseDomain!, plot.height);
-		x = transform.rescaleX(x0);
-		y = transform.rescaleY(y0);
+		const local = plotTransform(transform, plot);
+		x = local.rescaleX(x0);
+		y = local.rescaleY(y0);
 	}
 
 	// ---- frame drawing
@@ -538,61 +555,95 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		ov.attr('data-path-rev', ++pathRev).attr('data-path-ms', (performance.now() - started).toFixed(2));
 	}
 
+	/**
+	 * A label's box as the browser draws it: width and height of the text's bounding box and how
+	 * far its top sits above the baseline. Outside a browser (or before layout) an estimate.
+	 */
+	const measured = new Map<string, { width: number; height: number; ascent: number }>();
+	function measure(text: string, cls: string, fontSize: number, mono: boolean) {
+		const key = `${cls}|${text}`;
+		const hit = measured.get(key);
+		if (hit) return hit;
+		const estimate = { width: textWidth(text, fontSize, mono) + (mono ? 0 : text.length * 0.05 * fontSize), height: Math.ceil(fontSize * 1.32), ascent: fontSize * 1.02 };
+		let out = estimate;
+		const el = gLabels.append('text').attr('class', cls).attr('visibility', 'hidden').text(text);
+		const node = el.node() as SVGTextElement & { getBBox?: () => DOMRect };
+		try {
+			const b = typeof node.getBBox === 'function' ? node.getBBox() : null;
+			if (b && b.width > 0 && b.height > 0) out = { width: b.width, height: b.height, ascent: -b.y };
+		} catch {
+			// not laid out (a detached or hidden drawing): keep the estimate
+		}
+		el.remove();
+		// widths measured before the web fonts arrive would be the fallback font's: keep only final ones
+		if (out !== estimate && (typeof document === 'undefined' || document.fonts?.status === 'loaded')) measured.set(key, out);
+		return out;
+	}
+
 	function drawLabels(legPts: Map<string, Point[]>, crossingPts: Point[]) {
 		const f = frame!;
-		const obstacles = new ObstacleIndex(32);
-		for (const pts of legPts.values()) obstacles.addPolyline(pts);
+		const marks: Rect[] = [];
 		for (const s of path.states) {
 			const p = project(s.state);
-			obstacles.addBox({ x: p.x - STATE_R - 3, y: p.y - STATE_R - 3, width: 2 * STATE_R + 6, height: 2 * STATE_R + 6 });
+			marks.push({ x: p.x - STATE_R - 3, y: p.y - STATE_R - 3, width: 2 * STATE_R + 6, height: 2 * STATE_R + 6 });
 		}
-		for (const p of crossingPts) obstacles.addBox({ x: p.x - 5, y: p.y - 5, width: 10, height: 10 });
-		if (f.saturation) {
-			const c = project(f.saturation.critical);
-			obstacles.addBox({ x: c.x - 4, y: c.y - 4, width: 8, height: 8 });
-		}
+		for (const p of crossingPts) marks.push({ x: p.x - 5, y: p.y - 5, width: 10, height: 10 });
+		const sat = f.saturation && f.saturation.liquid.length > 1 && f.saturation.vapor.length > 1 ? f.saturation : null;
+		const cpAt = sat ? project(sat.critical) : null;
+		if (cpAt) marks.push({ x: cpAt.x - 4.5, y: cpAt.y - 4.5, width: 9, height: 9 });
 
 		const lims = drawnLimits();
 		const limLines = lims.map((l) => (l.straight ? limitLine(l.value) : l.points!.map(project)));
+		const iso = f.isolines ?? [];
+		const isoLines = iso.map((l) => l.points.map(project));
+		const lines: Point[][] = [...isoLines, ...limLines];
+		if (sat) {
+			lines.push([...sat.liquid, sat.critical, ...[...sat.vapor].reverse()].map(project));
+			lines.push([project(sat.liquid[0]), project(sat.vapor[0])]);
+		}
+		for (const t of path.traces ?? []) lines.push(t.points.filter((p) => p.v && p.v > 0).map((p) => project({ v: p.v!, T: p.T, P: p.P })));
+
+		const limText = lims.map((l) => limitText(l.name, l.value, f.units));
+		const limSize = limText.map((t) => measure(t, 'swc-limit-label', 10.5, false));
 		const limReqs: LabelRequest[] = lims.map((l, i) => {
-			const text = limitText(l.name, l.value, f.units);
-			const width = textWidth(text, 10.5, false) + 8;
+			const { width, height } = limSize[i];
 			const line = limLines[i];
-			const avoid = limLines.filter((_, j) => j !== i);
-			return { id: l.name, width, height: 12, line, prefer: 'end', anchors: l.straight ? [] : levelAnchors(line, width), avoid };
+			return { id: l.name, width: width + 2, height, line, prefer: 'end', anchors: l.straight ? [] : levelAnchors(line, width + 2) };
 		});
-		const limitPlaced = placeEdgeLabels(limReqs, plot, obstacles, { maxSlide: plot.width, step: 16 });
+		const isoText = iso.map((l) => isolineLabel(l));
+		const isoSize = isoText.map((t) => measure(t, 'swc-iso-label', 9.5, true));
+		const isoReqs: LabelRequest[] = iso.map((_, i) => ({ id: `${i}`, width: isoSize[i].width + 2, height: isoSize[i].height, line: isoLines[i], prefer: 'end' }));
+		const cpSize = measure('c.p.', 'swc-cp-label', 10.5, false);
+		const cpInside = cpAt && cpAt.x >= plot.x && cpAt.x <= plot.x + plot.width && cpAt.y >= plot.y && cpAt.y <= plot.y + plot.height;
+
+		const placed = placeChartLabels(
+			{ plot, lines, path: [...legPts.values()], marks },
+			{ limits: limReqs, near: cpInside ? { point: cpAt!, width: cpSize.width + 2, height: cpSize.height } : null, edges: isoReqs }
+		);
+
+		// text drawn so that its bounding box is the placed box: 1 px in from the left, top at the box's top
 		gLabels
-			.selectAll<SVGTextElement, (typeof limitPlaced)[number]>('text.swc-limit-label')
-			.data(limitPlaced, (d) => d.id)
+			.selectAll<SVGTextElement, LabelPlacement>('text.swc-limit-label')
+			.data(placed.limits, (d) => d.id)
 			.join('text')
 			.attr('class', 'swc-limit-label')
-			.attr('x', (d) => d.box.x)
-			.attr('y', (d) => d.box.y + d.box.height - 2)
-			.text((d) => limitText(d.id as DesignLimitName, lims.find((l) => l.name === d.id)!.value, f.units));
+			.attr('data-label', (d) => d.id)
+			.attr('x', (d) => d.box.x + 1)
+			.attr('y', (d) => d.box.y + limSize[lims.findIndex((l) => l.name === d.id)].ascent)
+			.text((d) => limText[lims.findIndex((l) => l.name === d.id)]);
 
-		if (f.saturation) {
-			const c = project(f.saturation.critical);
-			const inside = c.x >= plot.x && c.x <= plot.x + plot.width && c.y >= plot.y && c.y <= plot.y + plot.height;
-			const box = inside ? placeNear(c, 22, 11, plot, obstacles) : null;
-			cpLabel.attr('visibility', box ? null : 'hidden');
-			if (box) cpLabel.attr('x', box.x).attr('y', box.y + box.height - 2);
-		} else cpLabel.attr('visibility', 'hidden');
+		const cpBox = placed.near;
+		cpLabel.attr('visibility', cpBox ? null : 'hidden');
+		if (cpBox) cpLabel.attr('x', cpBox.x + 1).attr('y', cpBox.y + cpSize.ascent);
 
-		const iso = f.isolines ?? [];
-		const isoReqs: LabelRequest[] = iso.map((l, i) => {
-			const text = isolineLabel(l);
-			return { id: `${i}`, width: textWidth(text, 9.5) + 2, height: 11, line: l.points.map(project), prefer: 'end' };
-		});
-		const isoPlaced = placeEdgeLabels(isoReqs, plot, obstacles);
 		gLabels
-			.selectAll<SVGTextElement, (typeof isoPlaced)[number]>('text.swc-iso-label')
-			.data(isoPlaced, (d) => d.id)
+			.selectAll<SVGTextElement, LabelPlacement>('text.swc-iso-label')
+			.data(placed.edges, (d) => d.id)
 			.join('text')
 			.attr('class', 'swc-iso-label')
 			.attr('x', (d) => d.box.x + 1)
-			.attr('y', (d) => d.box.y + d.box.height - 2)
-			.text((d) => isolineLabel(iso[Number(d.id)]));
+			.attr('y', (d) => d.box.y + isoSize[Number(d.id)].ascent)
+			.text((d) => isoText[Number(d.id)]);
 	}
 
 	function drawKey() {
@@ -744,6 +795,10 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		.on('zoom', (ev) => {
 			transform = ev.transform;
 			drawFrame();
+			// the readout follows: the data under a still pointer changed
+			const src = ev.sourceEvent as MouseEvent | null;
+			if (src && 'clientX' in src) lastPointer = pointer(src, overlay);
+			if (lastPointer) hoverAt(lastPointer[0], lastPointer[1]);
 		});
 	ov.call(zoomer).on('dblclick.zoom', null);
 	ov.on('dblclick', (ev: MouseEvent) => {
@@ -755,9 +810,19 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		if (interaction.mode === 'add-leg') handlers.add(clamp(dataAt(px, py)));
 		else handlers.select(null);
 	});
+	let lastPointer: [number, number] | null = null;
 	ov.on('pointermove', (ev: PointerEvent) => {
 		if (!frame || !x) return;
-		const [px, py] = pointer(ev, overlay);
+		lastPointer = pointer(ev, overlay);
+		hoverAt(lastPointer[0], lastPointer[1]);
+	});
+	ov.on('pointerleave', () => {
+		lastPointer = null;
+		hideHover();
+	});
+
+	function hoverAt(px: number, py: number) {
+		if (!frame || !x) return;
 		const inside = px >= plot.x && px <= plot.x + plot.width && py >= plot.y && py <= plot.y + plot.height;
 		if (!inside) {
 			hideHover();
@@ -767,8 +832,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		crossH.style('display', null).attr('y1', py).attr('y2', py).attr('x1', plot.x).attr('x2', plot.x + plot.width);
 		const raw = dataAt(px, py);
 		handlers.hover({ coords: raw, reason: clamp(raw).reason });
-	});
-	ov.on('pointerleave', hideHover);
+	}
 
 	function hideHover() {
 		crossV.style('display', 'none');
@@ -808,6 +872,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		plotRect: () => ({ ...plot }),
 		toScreen,
 		destroy() {
+			destroyed = true;
 			ov.on('.zoom', null).on('pointermove', null).on('pointerleave', null).on('dblclick', null);
 			svg.selectAll('*:not(title):not(desc)').remove();
 			ov.selectAll('*').remove();
