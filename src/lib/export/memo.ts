@@ -38,6 +38,8 @@ export interface MemoTitle {
 	site?: string;
 	/** when the figure was made, Unix ms */
 	issued: number;
+	/** what that date is called: "Issued" for a revision, "Date" for the working draft (which is not issued) */
+	dateLabel?: string;
 }
 
 export interface MemoDrawing {
@@ -188,7 +190,7 @@ export function composeMemoFigure(input: MemoInput): MemoFigure {
 				{ label: 'Fluid', value: title.fluid, w: 0.2 },
 				{ label: 'Formulation', value: title.formulation, w: 0.38 },
 				{ label: 'System', value: title.system, w: 0.24 },
-				{ label: 'Issued', value: isoDate(title.issued), w: 0.18, mono: true }
+				{ label: title.dateLabel ?? 'Issued', value: isoDate(title.issued), w: 0.18, mono: true }
 			]
 		},
 		{ h: 36, cells: [{ label: 'Units', value: title.units, w: 1, mono: true }] },
