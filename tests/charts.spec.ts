@@ -24,6 +24,8 @@ interface Geometry {
 	marks: { cls: string; box: Box }[];
 	labels: { cls: string; text: string; box: Box }[];
 	texts: { cls: string; text: string; box: Box }[];
+	/** where the isolines are cut away (under design-limit and c.p. labels) */
+	holes: Box[];
 }
 
 /** Reads one drawing: its plot frame, every line as segments, marks, label boxes and all text boxes. */
@@ -61,7 +63,8 @@ async function geometry(drawing: Locator): Promise<Geometry> {
 		const visible = (t: Element) => t.getAttribute('visibility') !== 'hidden' && (t.textContent ?? '').trim() !== '';
 		const labels = [...svg.querySelectorAll('text.swc-iso-label, text.swc-limit-label, text.swc-cp-label')].filter(visible).map((t) => ({ cls: t.getAttribute('class')!, text: t.textContent ?? '', box: bbox(t as SVGGraphicsElement) }));
 		const texts = [...svg.querySelectorAll('text')].filter(visible).map((t) => ({ cls: t.getAttribute('class') ?? '', text: t.textContent ?? '', box: bbox(t as SVGGraphicsElement) }));
-		return { plot, viewport: { x: vb.x, y: vb.y, width: vb.width, height: vb.height }, segs, marks, labels, texts };
+		const holes = [...svg.querySelectorAll('mask rect.swc-mask-hole')].map((r) => ({ x: num(r, 'x'), y: num(r, 'y'), width: num(r, 'width'), height: num(r, 'height') }));
+		return { plot, viewport: { x: vb.x, y: vb.y, width: vb.width, height: vb.height }, segs, marks, labels, texts, holes };
 	});
 }
 
@@ -99,7 +102,10 @@ function problems(g: Geometry): string[] {
 	for (const l of g.labels) {
 		const b = shrink(l.box);
 		if (!inPlot(l.box)) out.push(`"${l.text}" sticks out of the plot`);
-		for (const s of g.segs) if (segHitsBox(s.seg, b)) out.push(`"${l.text}" is crossed by ${s.cls}`);
+		// an isoline under a limit or c.p. label is cut there (a hole in its mask): no line is drawn over the label
+		const inHole = g.holes.some((h) => h.x <= b.x && h.y <= b.y && h.x + h.width >= b.x + b.width && h.y + h.height >= b.y + b.height);
+		if (l.cls === 'swc-iso-label' && inHole) out.push(`"${l.text}" is an isoline label in a mask hole`);
+		for (const s of g.segs) if (segHitsBox(s.seg, b) && !(s.cls === 'swc-isoline' && inHole)) out.push(`"${l.text}" is crossed by ${s.cls}`);
 		for (const m of g.marks) if (overlap(b, m.box)) out.push(`"${l.text}" covers ${m.cls}`);
 		for (const k of g.labels) if (k !== l && overlap(b, shrink(k.box))) out.push(`"${l.text}" overlaps "${k.text}"`);
 	}

@@ -168,13 +168,17 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	const svg = select(drawing).classed('swc-drawing', true);
 	svg.selectAll('*:not(title):not(desc)').remove();
 	svg.append('style').text(DRAWING_CSS);
-	const clipRect = svg.append('defs').append('clipPath').attr('id', `${uid}-clip`).append('rect');
+	const defs = svg.append('defs');
+	const clipRect = defs.append('clipPath').attr('id', `${uid}-clip`).append('rect');
+	// isolines are cut where a design-limit or c.p. label sits over them (see placeChartLabels)
+	const isoMask = defs.append('mask').attr('id', `${uid}-isomask`).attr('maskUnits', 'userSpaceOnUse');
+	const isoMaskAll = isoMask.append('rect').attr('fill', 'white');
 	const plate = svg.append('rect').attr('class', 'swc-plate');
 	const root = svg.append('g');
 	const gGrid = root.append('g').attr('class', 'swc-grid');
 	const clipped = root.append('g').attr('clip-path', `url(#${uid}-clip)`);
 	const domeFill = clipped.append('path').attr('class', 'swc-dome-fill');
-	const gIso = clipped.append('g');
+	const gIso = clipped.append('g').attr('mask', `url(#${uid}-isomask)`);
 	const domeLine = clipped.append('path').attr('class', 'swc-dome-line');
 	const tripleLine = clipped.append('line').attr('class', 'swc-triple');
 	const gLimits = clipped.append('g');
@@ -205,6 +209,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	let destroyed = false;
 	if (typeof document !== 'undefined' && document.fonts && document.fonts.status !== 'loaded')
 		void document.fonts.ready.then(() => {
+			measured.clear();
 			if (!destroyed && frame) drawFrame();
 		});
 
@@ -556,28 +561,30 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	}
 
 	/**
-	 * A label's box as the browser draws it: width and height of the text's bounding box and how
-	 * far its top sits above the baseline. Outside a browser (or before layout) an estimate.
+	 * Labels' boxes as the browser draws them: width and height of each text's bounding box and how
+	 * far its top sits above the baseline; outside a browser (or before layout) an estimate. New
+	 * texts are measured together (one layout), then remembered; the memory is cleared when the web
+	 * fonts arrive.
 	 */
 	const measured = new Map<string, { width: number; height: number; ascent: number }>();
-	function measure(text: string, cls: string, fontSize: number, mono: boolean) {
-		const key = `${cls}|${text}`;
-		const hit = measured.get(key);
-		if (hit) return hit;
-		const estimate = { width: textWidth(text, fontSize, mono) + (mono ? 0 : text.length * 0.05 * fontSize), height: Math.ceil(fontSize * 1.32), ascent: fontSize * 1.02 };
-		let out = estimate;
-		const el = gLabels.append('text').attr('class', cls).attr('visibility', 'hidden').text(text);
-		const node = el.node() as SVGTextElement & { getBBox?: () => DOMRect };
-		try {
-			const b = typeof node.getBBox === 'function' ? node.getBBox() : null;
-			if (b && b.width > 0 && b.height > 0) out = { width: b.width, height: b.height, ascent: -b.y };
-		} catch {
-			// not laid out (a detached or hidden drawing): keep the estimate
+	function measureAll(items: { text: string; cls: string; fontSize: number; mono: boolean }[]) {
+		const key = (i: { text: string; cls: string }) => `${i.cls}|${i.text}`;
+		const missing = items.filter((i) => !measured.has(key(i)));
+		if (missing.length) {
+			const els = missing.map((i) => gLabels.append('text').attr('class', i.cls).attr('visibility', 'hidden').text(i.text).node() as SVGTextElement & { getBBox?: () => DOMRect });
+			missing.forEach((i, n) => {
+				let out = { width: textWidth(i.text, i.fontSize, i.mono) + (i.mono ? 0 : i.text.length * 0.05 * i.fontSize), height: Math.ceil(i.fontSize * 1.32), ascent: i.fontSize * 1.02 };
+				try {
+					const b = typeof els[n].getBBox === 'function' ? els[n].getBBox!() : null;
+					if (b && b.width > 0 && b.height > 0) out = { width: b.width, height: b.height, ascent: -b.y };
+				} catch {
+					// not laid out (a detached or hidden drawing): keep the estimate
+				}
+				measured.set(key(i), out);
+			});
+			for (const el of els) el.remove();
 		}
-		el.remove();
-		// widths measured before the web fonts arrive would be the fallback font's: keep only final ones
-		if (out !== estimate && (typeof document === 'undefined' || document.fonts?.status === 'loaded')) measured.set(key, out);
-		return out;
+		return items.map((i) => measured.get(key(i))!);
 	}
 
 	function drawLabels(legPts: Map<string, Point[]>, crossingPts: Point[]) {
@@ -596,7 +603,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const limLines = lims.map((l) => (l.straight ? limitLine(l.value) : l.points!.map(project)));
 		const iso = f.isolines ?? [];
 		const isoLines = iso.map((l) => l.points.map(project));
-		const lines: Point[][] = [...isoLines, ...limLines];
+		const lines: Point[][] = [...limLines];
 		if (sat) {
 			lines.push([...sat.liquid, sat.critical, ...[...sat.vapor].reverse()].map(project));
 			lines.push([project(sat.liquid[0]), project(sat.vapor[0])]);
@@ -604,22 +611,39 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		for (const t of path.traces ?? []) lines.push(t.points.filter((p) => p.v && p.v > 0).map((p) => project({ v: p.v!, T: p.T, P: p.P })));
 
 		const limText = lims.map((l) => limitText(l.name, l.value, f.units));
-		const limSize = limText.map((t) => measure(t, 'swc-limit-label', 10.5, false));
+		const isoText = iso.map((l) => isolineLabel(l));
+		const sizes = measureAll([
+			{ text: 'c.p.', cls: 'swc-cp-label', fontSize: 10.5, mono: false },
+			...limText.map((text) => ({ text, cls: 'swc-limit-label', fontSize: 10.5, mono: false })),
+			...isoText.map((text) => ({ text, cls: 'swc-iso-label', fontSize: 9.5, mono: true }))
+		]);
+		const cpSize = sizes[0];
+		const limSize = sizes.slice(1, 1 + limText.length);
+		const isoSize = sizes.slice(1 + limText.length);
 		const limReqs: LabelRequest[] = lims.map((l, i) => {
 			const { width, height } = limSize[i];
 			const line = limLines[i];
 			return { id: l.name, width: width + 2, height, line, prefer: 'end', anchors: l.straight ? [] : levelAnchors(line, width + 2) };
 		});
-		const isoText = iso.map((l) => isolineLabel(l));
-		const isoSize = isoText.map((t) => measure(t, 'swc-iso-label', 9.5, true));
 		const isoReqs: LabelRequest[] = iso.map((_, i) => ({ id: `${i}`, width: isoSize[i].width + 2, height: isoSize[i].height, line: isoLines[i], prefer: 'end' }));
-		const cpSize = measure('c.p.', 'swc-cp-label', 10.5, false);
 		const cpInside = cpAt && cpAt.x >= plot.x && cpAt.x <= plot.x + plot.width && cpAt.y >= plot.y && cpAt.y <= plot.y + plot.height;
 
 		const placed = placeChartLabels(
-			{ plot, lines, path: [...legPts.values()], marks },
+			{ plot, lines, background: isoLines, path: [...legPts.values()], marks },
 			{ limits: limReqs, near: cpInside ? { point: cpAt!, width: cpSize.width + 2, height: cpSize.height } : null, edges: isoReqs }
 		);
+
+		isoMaskAll.attr('x', 0).attr('y', 0).attr('width', f.width).attr('height', f.height);
+		isoMask
+			.selectAll<SVGRectElement, Rect>('rect.swc-mask-hole')
+			.data(placed.masks)
+			.join('rect')
+			.attr('class', 'swc-mask-hole')
+			.attr('fill', 'black')
+			.attr('x', (d) => d.x)
+			.attr('y', (d) => d.y)
+			.attr('width', (d) => d.width)
+			.attr('height', (d) => d.height);
 
 		// text drawn so that its bounding box is the placed box: 1 px in from the left, top at the box's top
 		gLabels

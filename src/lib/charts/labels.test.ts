@@ -192,14 +192,17 @@ describe('the chart label placer (placeChartLabels)', () => {
 			fc.property(fc.array(poly, { maxLength: 8 }), fc.array(poly, { maxLength: 3 }), fc.array(box, { maxLength: 5 }), fc.array(poly, { minLength: 1, maxLength: 4 }), fc.array(poly, { maxLength: 8 }), (lines, legs, marks, limitLines, isoLines) => {
 				const limits = limitLines.map((line, i) => ({ id: `l${i}`, width: 90, height: 13, line, anchors: levelAnchors(line, 90) }));
 				const edges = isoLines.map((line, i) => ({ id: `i${i}`, width: 48, height: 12, line }));
-				const all = [...lines, ...limitLines, ...isoLines];
-				const r = placeChartLabels({ plot, lines: all, path: legs, marks }, { limits, near: { point: { x: 250, y: 150 }, width: 22, height: 13 }, edges });
+				const r = placeChartLabels({ plot, lines: [...lines, ...limitLines], background: isoLines, path: legs, marks }, { limits, near: { point: { x: 250, y: 150 }, width: 22, height: 13 }, edges });
 				const boxes = [...r.limits.map((p) => p.box), ...r.edges.map((p) => p.box), ...(r.near ? [r.near] : [])];
+				const masked = (b: Rect) => r.masks.some((m) => m.x <= b.x && m.y <= b.y && m.x + m.width >= b.x + b.width && m.y + m.height >= b.y + b.height);
 				for (const b of boxes) {
 					expect(inside(b)).toBe(true);
-					for (const l of [...all, ...legs]) expect(touchesPolyline(b, l)).toBe(false);
+					for (const l of [...lines, ...limitLines, ...legs]) expect(touchesPolyline(b, l)).toBe(false);
+					// a background line under a label is cut there; isoline labels never sit on one
+					for (const l of isoLines) if (touchesPolyline(b, l)) expect(masked(b)).toBe(true);
 					for (const m of marks) expect(rectsOverlap(b, m)).toBe(false);
 				}
+				for (const p of r.edges) for (const l of isoLines) expect(touchesPolyline(p.box, l)).toBe(false);
 				for (let i = 0; i < boxes.length; i++) for (let j = i + 1; j < boxes.length; j++) expect(rectsOverlap(boxes[i], boxes[j])).toBe(false);
 				for (const p of [...r.limits, ...r.edges]) expect(distanceToRect(p.anchor, p.box)).toBeLessThanOrEqual(8 + 1e-9);
 			}),

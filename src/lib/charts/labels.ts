@@ -299,15 +299,19 @@ function insidePlot(b: Rect, plot: Rect, inset = 2): boolean {
  * down-left, the first spot that is inside the plot and free. Null when none is.
  */
 export function placeNear(p: Point, w: number, h: number, plot: Rect, obstacles: ObstacleIndex, gap = 5): Rect | null {
-	const spots: Point[] = [
-		{ x: p.x + gap, y: p.y - h - gap },
-		{ x: p.x + gap, y: p.y + gap },
-		{ x: p.x - w - gap, y: p.y - h - gap },
-		{ x: p.x - w - gap, y: p.y + gap },
-		{ x: p.x - w / 2, y: p.y - h - gap - 2 },
-		{ x: p.x + gap + 2, y: p.y - h / 2 },
-		{ x: p.x - w - gap - 2, y: p.y - h / 2 }
-	];
+	// the four corners first, then straight above, below, right and left; each a little further out if taken
+	const spots: Point[] = [];
+	for (const g of [gap, gap + 4, gap + 9])
+		spots.push(
+			{ x: p.x + g, y: p.y - h - g },
+			{ x: p.x + g, y: p.y + g },
+			{ x: p.x - w - g, y: p.y - h - g },
+			{ x: p.x - w - g, y: p.y + g },
+			{ x: p.x - w / 2, y: p.y - h - g },
+			{ x: p.x - w / 2, y: p.y + g },
+			{ x: p.x + g, y: p.y - h / 2 },
+			{ x: p.x - w - g, y: p.y - h / 2 }
+		);
 	for (const s of spots) {
 		const box = { x: s.x, y: s.y, width: w, height: h };
 		if (insidePlot(box, plot) && !obstacles.hits(inflate(box, 1))) {
@@ -351,8 +355,13 @@ export function levelAnchors(line: readonly Point[], width: number, step = 12, m
 /** What a chart's labels must keep off, in screen px. */
 export interface LabelScene {
 	plot: Rect;
-	/** every drawn line: isolines, the dome, the triple line, design limits, measured traces */
+	/** every drawn line: the dome, the triple line, design limits, measured traces */
 	lines: readonly (readonly Point[])[];
+	/**
+	 * background hairlines (isolines): design-limit and `c.p.` labels may sit over them, and the
+	 * chart then leaves a gap in them under the label (`masks`); isoline labels keep off them
+	 */
+	background?: readonly (readonly Point[])[];
 	/** the path's legs */
 	path: readonly (readonly Point[])[];
 	/** marks drawn as boxes: state discs, crossing diamonds, the critical point's circle */
@@ -372,21 +381,28 @@ export interface ScenePlacement {
 	limits: LabelPlacement[];
 	near: Rect | null;
 	edges: LabelPlacement[];
+	/** where the background lines are cut away: each limit and `c.p.` label box grown by `pad` */
+	masks: Rect[];
 }
 
 /**
  * The chart's label placer, used by the on-screen chart and so by every export of its drawing:
  * each label box lands inside the plot (2 px in from the frame), touching no line, no leg, no mark
  * and no other label (with `pad` px to spare), its own line included; a label with no such spot
- * near its line is left out.
+ * near its line is left out. Design-limit and `c.p.` labels outrank the background isolines: they
+ * may be placed over them, and the returned `masks` say where the chart must cut those lines.
  */
 export function placeChartLabels(scene: LabelScene, labels: SceneLabels, pad = 2): ScenePlacement {
 	const obstacles = new ObstacleIndex(32);
 	for (const line of scene.lines) obstacles.addPolyline(line, scene.plot);
 	for (const leg of scene.path) obstacles.addPolyline(leg, scene.plot);
 	for (const m of scene.marks) obstacles.addBox(m);
+	// limits and c.p. first, over the background hairlines (which are then cut under them)
 	const limits = placeEdgeLabels(labels.limits, scene.plot, obstacles, { maxSlide: scene.plot.width + scene.plot.height, step: 8, pad });
 	const near = labels.near ? placeNear(labels.near.point, labels.near.width, labels.near.height, scene.plot, obstacles) : null;
+	const masks = [...limits.map((l) => inflate(l.box, pad)), ...(near ? [inflate(near, pad)] : [])];
+	// isoline labels keep off every line, background included
+	for (const line of scene.background ?? []) obstacles.addPolyline(line, scene.plot);
 	const edges = placeEdgeLabels(labels.edges, scene.plot, obstacles, { pad, step: 6 });
-	return { limits, near, edges };
+	return { limits, near, edges, masks };
 }
