@@ -567,6 +567,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	 * fonts arrive.
 	 */
 	const measured = new Map<string, { width: number; height: number; ascent: number }>();
+	let lastMaskKey = '';
 	function measureAll(items: { text: string; cls: string; fontSize: number; mono: boolean }[]) {
 		const key = (i: { text: string; cls: string }) => `${i.cls}|${i.text}`;
 		const missing = items.filter((i) => !measured.has(key(i)));
@@ -633,8 +634,12 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			{ limits: limReqs, near: cpInside ? { point: cpAt!, width: cpSize.width + 2, height: cpSize.height } : null, edges: isoReqs }
 		);
 
-		isoMaskAll.attr('x', 0).attr('y', 0).attr('width', f.width).attr('height', f.height);
-		isoMask
+		// the mask is touched only when a hole moves (a masked group is costly to repaint while dragging)
+		const maskKey = `${f.width}x${f.height}:` + placed.masks.map((m) => `${m.x.toFixed(1)},${m.y.toFixed(1)},${m.width.toFixed(1)},${m.height.toFixed(1)}`).join(';');
+		if (maskKey !== lastMaskKey) {
+			lastMaskKey = maskKey;
+			isoMaskAll.attr('x', 0).attr('y', 0).attr('width', f.width).attr('height', f.height);
+			isoMask
 			.selectAll<SVGRectElement, Rect>('rect.swc-mask-hole')
 			.data(placed.masks)
 			.join('rect')
@@ -644,6 +649,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			.attr('y', (d) => d.y)
 			.attr('width', (d) => d.width)
 			.attr('height', (d) => d.height);
+		}
 
 		// text drawn so that its bounding box is the placed box: 1 px in from the left, top at the box's top
 		gLabels

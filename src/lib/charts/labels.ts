@@ -270,13 +270,16 @@ export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, o
 		const edges = req.prefer === 'start' ? [startRun, endRun] : [endRun, startRun];
 		const inside = (p: Point) => p.x >= plot.x && p.x <= plot.x + plot.width && p.y >= plot.y && p.y <= plot.y + plot.height;
 		const order = [(req.anchors ?? []).filter(inside), ...edges.map((run) => pointsAlong(run, step, maxSlide))];
+		// its own line, indexed once: each candidate box is then tested against the few segments near it
+		const own = new ObstacleIndex(32);
+		own.addPolyline(req.line, plot);
 		let done = false;
 		for (const candidates of order) {
 			for (const p of candidates) {
 				const box = candidateBoxes(p, req.width, req.height, plot, maxGap).find((b) => {
 					const padded = inflate(b, pad);
 					// never struck through by its own line, nor touching anything else
-					return insidePlot(b, plot) && !polylineHits(req.line, padded) && !obstacles.hits(padded) && !req.avoid?.some((line) => polylineHits(line, padded));
+					return insidePlot(b, plot) && !own.hits(padded) && !obstacles.hits(padded) && !req.avoid?.some((line) => polylineHits(line, padded));
 				});
 				if (!box) continue;
 				placed.push({ id: req.id, box, anchor: p });
