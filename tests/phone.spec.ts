@@ -139,4 +139,53 @@ test.describe('sheet screen details', () => {
 		expect((await chart.boundingBox())!.y).toBeCloseTo(before, 0);
 		await page.keyboard.press('Escape');
 	});
+
+	for (const width of [1440, 390]) {
+		test(`nothing is cut short at ${width} px: Setup selects, header fields, heat and work, a cell's message`, async ({ page }) => {
+			await page.setViewportSize({ width, height: 900 });
+			await signInPage(page, DEMO.designer);
+			const s = await sheets(page);
+			await page.goto(`/t/${TEAM}/sheets/${s['HP-410'].id}`);
+
+			// the sheet header's fields show their whole text
+			for (const dd of await page.locator('[data-testid="sheet-header"] dd').all()) {
+				const clipped = await dd.evaluate((e) => e.scrollWidth > e.clientWidth + 1);
+				expect(clipped, `header field "${await dd.innerText()}"`).toBe(false);
+			}
+
+			// heat and work go together: in every pair both values sit on one line
+			const pairs = page.locator('[data-testid="state-table"] .pair');
+			expect(await pairs.count()).toBeGreaterThan(0);
+			for (const pair of await pairs.all()) {
+				const tops = await pair.evaluate((e) => [...e.children].map((c) => Math.round(c.getBoundingClientRect().top)));
+				expect(new Set(tops).size, `pair ${await pair.innerText()}`).toBe(1);
+			}
+
+			// a cell's error message is shown whole, inside the table, even under the left-most column
+			const t = page.locator('tr[data-label="S1"] [data-prop="T"]');
+			await t.fill('-300 °C');
+			await t.press('Enter');
+			const alert = page.locator('[data-testid="state-table"] .cell-error');
+			await expect(alert).toContainText('absolute zero');
+			const [a, wrap] = [(await alert.boundingBox())!, (await page.getByTestId('state-table').boundingBox())!];
+			expect(a.x).toBeGreaterThanOrEqual(wrap.x - 0.5);
+			expect(a.x + a.width).toBeLessThanOrEqual(Math.min(wrap.x + wrap.width, width) + 0.5);
+			await t.press('Escape');
+
+			// Setup: the fluid's whole name and formulation fit in its select
+			await page.getByRole('tab', { name: /Setup/ }).click();
+			for (const id of ['#setup-fluid', '#setup-basis']) {
+				const fit = await page.locator(id).evaluate((el) => {
+					const sel = el as HTMLSelectElement;
+					const cs = getComputedStyle(sel);
+					const ctx = document.createElement('canvas').getContext('2d')!;
+					ctx.font = `${cs.fontWeight} ${cs.fontSize} ${cs.fontFamily}`;
+					const text = sel.options[sel.selectedIndex].text;
+					const room = sel.clientWidth - parseFloat(cs.paddingLeft) - parseFloat(cs.paddingRight);
+					return { text, need: ctx.measureText(text).width, room };
+				});
+				expect(fit.need, `"${fit.text}" in ${id}`).toBeLessThanOrEqual(fit.room);
+			}
+		});
+	}
 });
