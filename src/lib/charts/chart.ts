@@ -5,7 +5,7 @@ import { isPressureLimit, legAriaLabel, LIMIT_ORDER, limitText, stateAriaLabel }
 import { LEG_STROKE, LIMIT_STROKE, processStyle } from './encoding';
 import { KEY, keyEntries, layoutKey } from './key';
 import { stackOffsets } from './stack';
-import { levelAnchors, ObstacleIndex, placeEdgeLabels, placeNear, textWidth, type LabelRequest } from './labels';
+import { levelAnchors, placeChartLabels, textWidth, type LabelPlacement, type LabelRequest } from './labels';
 import { axisTicks, axisUnit, compactNumber, fitDomain, makeXScale, makeYScale, thinLabels, yScaleType, type Scale, type Tick } from './scales';
 import { DRAWING_CSS, OVERLAY_CSS } from './style';
 import type {
@@ -129,6 +129,15 @@ function polylineD(points: readonly Point[]): string {
 	return d;
 }
 
+/**
+ * d3-zoom's transform is in the overlay's px (the pointer's), the scales map into the plot's own
+ * px (0 at the plot's corner): shift it by (k − 1)·offset so that the point under the pointer stays
+ * under it while zooming.
+ */
+export function plotTransform(t: ZoomTransform, plot: { x: number; y: number }): ZoomTransform {
+	return zoomIdentity.translate(t.x + (t.k - 1) * plot.x, t.y + (t.k - 1) * plot.y).scale(t.k);
+}
+
 function diamond(size: number): string {
 	return `M0,${-size}L${size},0L0,${size}L${-size},0Z`;
 }
@@ -168,13 +177,17 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	const svg = select(drawing).classed('swc-drawing', true);
 	svg.selectAll('*:not(title):not(desc)').remove();
 	svg.append('style').text(DRAWING_CSS);
-	const clipRect = svg.append('defs').append('clipPath').attr('id', `${uid}-clip`).append('rect');
+	const defs = svg.append('defs');
+	const clipRect = defs.append('clipPath').attr('id', `${uid}-clip`).append('rect');
+	// isolines are cut where a design-limit or c.p. label sits over them (see placeChartLabels)
+	const isoMask = defs.append('mask').attr('id', `${uid}-isomask`).attr('maskUnits', 'userSpaceOnUse');
+	const isoMaskAll = isoMask.append('rect').attr('fill', 'white');
 	const plate = svg.append('rect').attr('class', 'swc-plate');
 	const root = svg.append('g');
 	const gGrid = root.append('g').attr('class', 'swc-grid');
 	const clipped = root.append('g').attr('clip-path', `url(#${uid}-clip)`);
 	const domeFill = clipped.append('path').attr('class', 'swc-dome-fill');
-	const gIso = clipped.append('g');
+	const gIso = clipped.append('g').attr('mask', `url(#${uid}-isomask)`);
 	const domeLine = clipped.append('path').attr('class', 'swc-dome-line');
 	const tripleLine = clipped.append('line').attr('class', 'swc-triple');
 	const gLimits = clipped.append('g');
@@ -200,6 +213,14 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	const hitLegs = oroot.append('g');
 	const hitStates = oroot.append('g');
 	const ghost = oroot.append('circle').attr('class', 'swc-ghost').attr('r', STATE_R + 3).style('display', 'none');
+
+	// labels are placed with measured text boxes: place them again once the web fonts are in
+	let destroyed = false;
+	if (typeof document !== 'undefined' && document.fonts && document.fonts.status !== 'loaded')
+		void document.fonts.ready.then(() => {
+			measured.clear();
+			if (!destroyed && frame) drawFrame();
+		});
 
 	const yOf = (p: { T: number; P: number }) => (frame!.kind === 'T-v' ? p.T : p.P);
 	const project = (p: { v: number; T: number; P: number }): Point => ({ x: plot.x + x!(p.v), y: plot.y + y!(yOf(p)) });
@@ -262,8 +283,9 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		plot = { x: m.left, y: m.top, width: Math.max(10, f.width - m.left - m.right), height: Math.max(10, f.height - m.top - m.bottom) };
 		const x0 = makeXScale(baseDomain!, plot.width);
 		const y0 = makeYScale(f.kind, f.pressureScale, baseDomain!, plot.height);
-		x = transform.rescaleX(x0);
-		y = transform.rescaleY(y0);
+		const local = plotTransform(transform, plot);
+		x = local.rescaleX(x0);
+		y = local.rescaleY(y0);
 	}
 
 	// ---- frame drawing
@@ -572,61 +594,120 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		ov.attr('data-path-rev', ++pathRev).attr('data-path-ms', (performance.now() - started).toFixed(2));
 	}
 
+	/**
+	 * Labels' boxes as the browser draws them: width and height of each text's bounding box and how
+	 * far its top sits above the baseline; outside a browser (or before layout) an estimate. New
+	 * texts are measured together (one layout), then remembered; the memory is cleared when the web
+	 * fonts arrive.
+	 */
+	const measured = new Map<string, { width: number; height: number; ascent: number }>();
+	let lastMaskKey = '';
+	function measureAll(items: { text: string; cls: string; fontSize: number; mono: boolean }[]) {
+		const key = (i: { text: string; cls: string }) => `${i.cls}|${i.text}`;
+		const missing = items.filter((i) => !measured.has(key(i)));
+		if (missing.length) {
+			const els = missing.map((i) => gLabels.append('text').attr('class', i.cls).attr('visibility', 'hidden').text(i.text).node() as SVGTextElement & { getBBox?: () => DOMRect });
+			missing.forEach((i, n) => {
+				let out = { width: textWidth(i.text, i.fontSize, i.mono) + (i.mono ? 0 : i.text.length * 0.05 * i.fontSize), height: Math.ceil(i.fontSize * 1.32), ascent: i.fontSize * 1.02 };
+				try {
+					const b = typeof els[n].getBBox === 'function' ? els[n].getBBox!() : null;
+					if (b && b.width > 0 && b.height > 0) out = { width: b.width, height: b.height, ascent: -b.y };
+				} catch {
+					// not laid out (a detached or hidden drawing): keep the estimate
+				}
+				measured.set(key(i), out);
+			});
+			for (const el of els) el.remove();
+		}
+		return items.map((i) => measured.get(key(i))!);
+	}
+
 	function drawLabels(legPts: Map<string, Point[]>, crossingPts: Point[]) {
 		const f = frame!;
-		const obstacles = new ObstacleIndex(32);
-		for (const pts of legPts.values()) obstacles.addPolyline(pts);
+		const marks: Rect[] = [];
 		for (const s of path.states) {
 			const p = shifted(s);
-			obstacles.addBox({ x: p.x - STATE_R - 3, y: p.y - STATE_R - 3, width: 2 * STATE_R + 6, height: 2 * STATE_R + 6 });
+			marks.push({ x: p.x - STATE_R - 3, y: p.y - STATE_R - 3, width: 2 * STATE_R + 6, height: 2 * STATE_R + 6 });
 		}
-		for (const p of crossingPts) obstacles.addBox({ x: p.x - 5, y: p.y - 5, width: 10, height: 10 });
-		if (f.saturation) {
-			const c = project(f.saturation.critical);
-			obstacles.addBox({ x: c.x - 4, y: c.y - 4, width: 8, height: 8 });
-		}
+		for (const p of crossingPts) marks.push({ x: p.x - 5, y: p.y - 5, width: 10, height: 10 });
+		const sat = f.saturation && f.saturation.liquid.length > 1 && f.saturation.vapor.length > 1 ? f.saturation : null;
+		const cpAt = sat ? project(sat.critical) : null;
+		if (cpAt) marks.push({ x: cpAt.x - 4.5, y: cpAt.y - 4.5, width: 9, height: 9 });
 
 		const lims = drawnLimits();
 		const limLines = lims.map((l) => (l.straight ? limitLine(l.value) : l.points!.map(project)));
+		const iso = f.isolines ?? [];
+		const isoLines = iso.map((l) => l.points.map(project));
+		const lines: Point[][] = [...limLines];
+		if (sat) {
+			lines.push([...sat.liquid, sat.critical, ...[...sat.vapor].reverse()].map(project));
+			lines.push([project(sat.liquid[0]), project(sat.vapor[0])]);
+		}
+		for (const t of path.traces ?? []) lines.push(t.points.filter((p) => p.v && p.v > 0).map((p) => project({ v: p.v!, T: p.T, P: p.P })));
+
+		const limText = lims.map((l) => limitText(l.name, l.value, f.units));
+		const isoText = iso.map((l) => isolineLabel(l));
+		const sizes = measureAll([
+			{ text: 'c.p.', cls: 'swc-cp-label', fontSize: 10.5, mono: false },
+			...limText.map((text) => ({ text, cls: 'swc-limit-label', fontSize: 10.5, mono: false })),
+			...isoText.map((text) => ({ text, cls: 'swc-iso-label', fontSize: 9.5, mono: true }))
+		]);
+		const cpSize = sizes[0];
+		const limSize = sizes.slice(1, 1 + limText.length);
+		const isoSize = sizes.slice(1 + limText.length);
 		const limReqs: LabelRequest[] = lims.map((l, i) => {
-			const text = limitText(l.name, l.value, f.units);
-			const width = textWidth(text, 10.5, false) + 8;
+			const { width, height } = limSize[i];
 			const line = limLines[i];
-			const avoid = limLines.filter((_, j) => j !== i);
-			return { id: l.name, width, height: 12, line, prefer: 'end', anchors: l.straight ? [] : levelAnchors(line, width), avoid };
+			return { id: l.name, width: width + 2, height, line, prefer: 'end', anchors: l.straight ? [] : levelAnchors(line, width + 2) };
 		});
-		const limitPlaced = placeEdgeLabels(limReqs, plot, obstacles, { maxSlide: plot.width, step: 16 });
+		const isoReqs: LabelRequest[] = iso.map((_, i) => ({ id: `${i}`, width: isoSize[i].width + 2, height: isoSize[i].height, line: isoLines[i], prefer: 'end' }));
+		const cpInside = cpAt && cpAt.x >= plot.x && cpAt.x <= plot.x + plot.width && cpAt.y >= plot.y && cpAt.y <= plot.y + plot.height;
+
+		const placed = placeChartLabels(
+			{ plot, lines, background: isoLines, path: [...legPts.values()], marks },
+			{ limits: limReqs, near: cpInside ? { point: cpAt!, width: cpSize.width + 2, height: cpSize.height } : null, edges: isoReqs }
+		);
+
+		// the mask is touched only when a hole moves (a masked group is costly to repaint while dragging)
+		const maskKey = `${f.width}x${f.height}:` + placed.masks.map((m) => `${m.x.toFixed(1)},${m.y.toFixed(1)},${m.width.toFixed(1)},${m.height.toFixed(1)}`).join(';');
+		if (maskKey !== lastMaskKey) {
+			lastMaskKey = maskKey;
+			isoMaskAll.attr('x', 0).attr('y', 0).attr('width', f.width).attr('height', f.height);
+			isoMask
+			.selectAll<SVGRectElement, Rect>('rect.swc-mask-hole')
+			.data(placed.masks)
+			.join('rect')
+			.attr('class', 'swc-mask-hole')
+			.attr('fill', 'black')
+			.attr('x', (d) => d.x)
+			.attr('y', (d) => d.y)
+			.attr('width', (d) => d.width)
+			.attr('height', (d) => d.height);
+		}
+
+		// text drawn so that its bounding box is the placed box: 1 px in from the left, top at the box's top
 		gLabels
-			.selectAll<SVGTextElement, (typeof limitPlaced)[number]>('text.swc-limit-label')
-			.data(limitPlaced, (d) => d.id)
+			.selectAll<SVGTextElement, LabelPlacement>('text.swc-limit-label')
+			.data(placed.limits, (d) => d.id)
 			.join('text')
 			.attr('class', 'swc-limit-label')
-			.attr('x', (d) => d.box.x)
-			.attr('y', (d) => d.box.y + d.box.height - 2)
-			.text((d) => limitText(d.id as DesignLimitName, lims.find((l) => l.name === d.id)!.value, f.units));
+			.attr('data-label', (d) => d.id)
+			.attr('x', (d) => d.box.x + 1)
+			.attr('y', (d) => d.box.y + limSize[lims.findIndex((l) => l.name === d.id)].ascent)
+			.text((d) => limText[lims.findIndex((l) => l.name === d.id)]);
 
-		if (f.saturation) {
-			const c = project(f.saturation.critical);
-			const inside = c.x >= plot.x && c.x <= plot.x + plot.width && c.y >= plot.y && c.y <= plot.y + plot.height;
-			const box = inside ? placeNear(c, 22, 11, plot, obstacles) : null;
-			cpLabel.attr('visibility', box ? null : 'hidden');
-			if (box) cpLabel.attr('x', box.x).attr('y', box.y + box.height - 2);
-		} else cpLabel.attr('visibility', 'hidden');
+		const cpBox = placed.near;
+		cpLabel.attr('visibility', cpBox ? null : 'hidden');
+		if (cpBox) cpLabel.attr('x', cpBox.x + 1).attr('y', cpBox.y + cpSize.ascent);
 
-		const iso = f.isolines ?? [];
-		const isoReqs: LabelRequest[] = iso.map((l, i) => {
-			const text = isolineLabel(l);
-			return { id: `${i}`, width: textWidth(text, 9.5) + 2, height: 11, line: l.points.map(project), prefer: 'end' };
-		});
-		const isoPlaced = placeEdgeLabels(isoReqs, plot, obstacles);
 		gLabels
-			.selectAll<SVGTextElement, (typeof isoPlaced)[number]>('text.swc-iso-label')
-			.data(isoPlaced, (d) => d.id)
+			.selectAll<SVGTextElement, LabelPlacement>('text.swc-iso-label')
+			.data(placed.edges, (d) => d.id)
 			.join('text')
 			.attr('class', 'swc-iso-label')
 			.attr('x', (d) => d.box.x + 1)
-			.attr('y', (d) => d.box.y + d.box.height - 2)
-			.text((d) => isolineLabel(iso[Number(d.id)]));
+			.attr('y', (d) => d.box.y + isoSize[Number(d.id)].ascent)
+			.text((d) => isoText[Number(d.id)]);
 	}
 
 	function drawKey() {
@@ -786,6 +867,10 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		.on('zoom', (ev) => {
 			transform = ev.transform;
 			drawFrame();
+			// the readout follows: the data under a still pointer changed
+			const src = ev.sourceEvent as MouseEvent | null;
+			if (src && 'clientX' in src) lastPointer = pointer(src, overlay);
+			if (lastPointer) hoverAt(lastPointer[0], lastPointer[1]);
 		});
 	ov.call(zoomer).on('dblclick.zoom', null);
 	ov.on('dblclick', (ev: MouseEvent) => {
@@ -797,9 +882,19 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		if (interaction.mode === 'add-leg') handlers.add(clamp(dataAt(px, py)));
 		else handlers.select(null);
 	});
+	let lastPointer: [number, number] | null = null;
 	ov.on('pointermove', (ev: PointerEvent) => {
 		if (!frame || !x) return;
-		const [px, py] = pointer(ev, overlay);
+		lastPointer = pointer(ev, overlay);
+		hoverAt(lastPointer[0], lastPointer[1]);
+	});
+	ov.on('pointerleave', () => {
+		lastPointer = null;
+		hideHover();
+	});
+
+	function hoverAt(px: number, py: number) {
+		if (!frame || !x) return;
 		const inside = px >= plot.x && px <= plot.x + plot.width && py >= plot.y && py <= plot.y + plot.height;
 		if (!inside) {
 			hideHover();
@@ -809,8 +904,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		crossH.style('display', null).attr('y1', py).attr('y2', py).attr('x1', plot.x).attr('x2', plot.x + plot.width);
 		const raw = dataAt(px, py);
 		handlers.hover({ coords: raw, reason: clamp(raw).reason });
-	});
-	ov.on('pointerleave', hideHover);
+	}
 
 	function hideHover() {
 		crossV.style('display', 'none');
@@ -850,6 +944,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		plotRect: () => ({ ...plot }),
 		toScreen,
 		destroy() {
+			destroyed = true;
 			ov.on('.zoom', null).on('pointermove', null).on('pointerleave', null).on('dblclick', null);
 			svg.selectAll('*:not(title):not(desc)').remove();
 			ov.selectAll('*').remove();

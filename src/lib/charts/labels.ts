@@ -106,8 +106,14 @@ export class ObstacleIndex {
 		for (const k of this.keys(box)) this.bucket(k).segs.push([a, b]);
 	}
 
-	addPolyline(points: readonly Point[]): void {
-		for (let i = 1; i < points.length; i++) this.addSegment(points[i - 1], points[i]);
+	/**
+	 * Index a polyline. With `clip`, only its parts inside that rectangle (grown by 8 px) are kept:
+	 * a zoomed chart projects lines far outside the plot, and those cannot touch a label.
+	 */
+	addPolyline(points: readonly Point[], clip?: Rect): void {
+		const finite = points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
+		const runs = clip ? clipPolyline(finite, inflate(clip, 8)) : [finite];
+		for (const run of runs) for (let i = 1; i < run.length; i++) this.addSegment(run[i - 1], run[i]);
 	}
 
 	addBox(r: Rect): void {
@@ -154,6 +160,8 @@ export interface PlaceOptions {
 	step?: number;
 	/** clearance kept around each label, px */
 	pad?: number;
+	/** how far a label box may sit from the point of its line it belongs to, px */
+	maxGap?: number;
 }
 
 function pointsAlong(run: readonly Point[], step: number, maxSlide: number): Point[] {
@@ -205,6 +213,37 @@ export function boxesAt(p: Point, w: number, h: number, plot: Rect): [Rect, Rect
 	return [primary, clampBox(after, above < plot.y + 2 ? above : below, w, h, plot)];
 }
 
+/** Distance from a point to a rectangle (0 inside). */
+export function distanceToRect(p: Point, r: Rect): number {
+	const dx = Math.max(r.x - p.x, 0, p.x - (r.x + r.width));
+	const dy = Math.max(r.y - p.y, 0, p.y - (r.y + r.height));
+	return Math.hypot(dx, dy);
+}
+
+/**
+ * Every box tried for an anchor, best first: the two of `boxesAt`, then the other corners and the
+ * spots straight above and below the point. Boxes the plot edge pushed further than `maxGap` px from
+ * the anchor are dropped — a label that far away no longer reads as its line's.
+ */
+export function candidateBoxes(p: Point, w: number, h: number, plot: Rect, maxGap = 8): Rect[] {
+	const [a, b] = boxesAt(p, w, h, plot);
+	const more = [
+		clampBox(p.x + 4, p.y - h - 3, w, h, plot),
+		clampBox(p.x + 4, p.y + 3, w, h, plot),
+		clampBox(p.x - 4 - w, p.y - h - 3, w, h, plot),
+		clampBox(p.x - 4 - w, p.y + 3, w, h, plot),
+		clampBox(p.x - w / 2, p.y - h - 3, w, h, plot),
+		clampBox(p.x - w / 2, p.y + 3, w, h, plot)
+	];
+	const out: Rect[] = [];
+	for (const r of [a, b, ...more]) {
+		if (distanceToRect(p, r) > maxGap) continue;
+		if (out.some((o) => o.x === r.x && o.y === r.y)) continue;
+		out.push(r);
+	}
+	return out;
+}
+
 /** The preferred label box for an anchor (see `boxesAt`). */
 export function boxAt(p: Point, w: number, h: number, plot: Rect): Rect {
 	return boxesAt(p, w, h, plot)[0];
@@ -221,6 +260,7 @@ export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, o
 	const step = options.step ?? 10;
 	const maxSlide = options.maxSlide ?? 160;
 	const pad = options.pad ?? 2;
+	const maxGap = options.maxGap ?? 8;
 	const placed: LabelPlacement[] = [];
 	for (const req of requests) {
 		const runs = clipPolyline(req.line, plot);
@@ -230,12 +270,16 @@ export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, o
 		const edges = req.prefer === 'start' ? [startRun, endRun] : [endRun, startRun];
 		const inside = (p: Point) => p.x >= plot.x && p.x <= plot.x + plot.width && p.y >= plot.y && p.y <= plot.y + plot.height;
 		const order = [(req.anchors ?? []).filter(inside), ...edges.map((run) => pointsAlong(run, step, maxSlide))];
+		// its own line, indexed once: each candidate box is then tested against the few segments near it
+		const own = new ObstacleIndex(32);
+		own.addPolyline(req.line, plot);
 		let done = false;
 		for (const candidates of order) {
 			for (const p of candidates) {
-				const box = boxesAt(p, req.width, req.height, plot).find((b) => {
+				const box = candidateBoxes(p, req.width, req.height, plot, maxGap).find((b) => {
 					const padded = inflate(b, pad);
-					return !obstacles.hits(padded) && !req.avoid?.some((line) => polylineHits(line, padded));
+					// never struck through by its own line, nor touching anything else
+					return insidePlot(b, plot) && !own.hits(padded) && !obstacles.hits(padded) && !req.avoid?.some((line) => polylineHits(line, padded));
 				});
 				if (!box) continue;
 				placed.push({ id: req.id, box, anchor: p });
@@ -249,21 +293,31 @@ export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, o
 	return placed;
 }
 
+function insidePlot(b: Rect, plot: Rect, inset = 2): boolean {
+	return b.x >= plot.x + inset - 1e-9 && b.y >= plot.y + inset - 1e-9 && b.x + b.width <= plot.x + plot.width - inset + 1e-9 && b.y + b.height <= plot.y + plot.height - inset + 1e-9;
+}
+
 /**
  * A small label beside a point (the critical point's "c.p."): up-right, down-right, up-left,
  * down-left, the first spot that is inside the plot and free. Null when none is.
  */
 export function placeNear(p: Point, w: number, h: number, plot: Rect, obstacles: ObstacleIndex, gap = 5): Rect | null {
-	const spots: Point[] = [
-		{ x: p.x + gap, y: p.y - h - gap },
-		{ x: p.x + gap, y: p.y + gap },
-		{ x: p.x - w - gap, y: p.y - h - gap },
-		{ x: p.x - w - gap, y: p.y + gap }
-	];
+	// the four corners first, then straight above, below, right and left; each a little further out if taken
+	const spots: Point[] = [];
+	for (const g of [gap, gap + 4, gap + 9])
+		spots.push(
+			{ x: p.x + g, y: p.y - h - g },
+			{ x: p.x + g, y: p.y + g },
+			{ x: p.x - w - g, y: p.y - h - g },
+			{ x: p.x - w - g, y: p.y + g },
+			{ x: p.x - w / 2, y: p.y - h - g },
+			{ x: p.x - w / 2, y: p.y + g },
+			{ x: p.x + g, y: p.y - h / 2 },
+			{ x: p.x - w - g, y: p.y - h / 2 }
+		);
 	for (const s of spots) {
 		const box = { x: s.x, y: s.y, width: w, height: h };
-		const inside = box.x >= plot.x && box.y >= plot.y && box.x + w <= plot.x + plot.width && box.y + h <= plot.y + plot.height;
-		if (inside && !obstacles.hits(box)) {
+		if (insidePlot(box, plot) && !obstacles.hits(inflate(box, 1))) {
 			obstacles.addBox(box);
 			return box;
 		}
@@ -299,4 +353,59 @@ export function levelAnchors(line: readonly Point[], width: number, step = 12, m
 	const out: Point[] = [];
 	for (let x = right - width - 8; x >= left; x -= step) out.push({ x, y });
 	return out.length ? out : [{ x: left, y }];
+}
+
+/** What a chart's labels must keep off, in screen px. */
+export interface LabelScene {
+	plot: Rect;
+	/** every drawn line: the dome, the triple line, design limits, measured traces */
+	lines: readonly (readonly Point[])[];
+	/**
+	 * background hairlines (isolines): design-limit and `c.p.` labels may sit over them, and the
+	 * chart then leaves a gap in them under the label (`masks`); isoline labels keep off them
+	 */
+	background?: readonly (readonly Point[])[];
+	/** the path's legs */
+	path: readonly (readonly Point[])[];
+	/** marks drawn as boxes: state discs, crossing diamonds, the critical point's circle */
+	marks: readonly Rect[];
+}
+
+export interface SceneLabels {
+	/** design-limit labels: placed first, free to slide the whole length of their line */
+	limits: readonly LabelRequest[];
+	/** one label beside a point (the critical point's "c.p."), or none */
+	near?: { point: Point; width: number; height: number } | null;
+	/** isoline value labels: at the edge where their line leaves the plot, sliding inward */
+	edges: readonly LabelRequest[];
+}
+
+export interface ScenePlacement {
+	limits: LabelPlacement[];
+	near: Rect | null;
+	edges: LabelPlacement[];
+	/** where the background lines are cut away: each limit and `c.p.` label box grown by `pad` */
+	masks: Rect[];
+}
+
+/**
+ * The chart's label placer, used by the on-screen chart and so by every export of its drawing:
+ * each label box lands inside the plot (2 px in from the frame), touching no line, no leg, no mark
+ * and no other label (with `pad` px to spare), its own line included; a label with no such spot
+ * near its line is left out. Design-limit and `c.p.` labels outrank the background isolines: they
+ * may be placed over them, and the returned `masks` say where the chart must cut those lines.
+ */
+export function placeChartLabels(scene: LabelScene, labels: SceneLabels, pad = 2): ScenePlacement {
+	const obstacles = new ObstacleIndex(32);
+	for (const line of scene.lines) obstacles.addPolyline(line, scene.plot);
+	for (const leg of scene.path) obstacles.addPolyline(leg, scene.plot);
+	for (const m of scene.marks) obstacles.addBox(m);
+	// limits and c.p. first, over the background hairlines (which are then cut under them)
+	const limits = placeEdgeLabels(labels.limits, scene.plot, obstacles, { maxSlide: scene.plot.width + scene.plot.height, step: 8, pad });
+	const near = labels.near ? placeNear(labels.near.point, labels.near.width, labels.near.height, scene.plot, obstacles) : null;
+	const masks = [...limits.map((l) => inflate(l.box, pad)), ...(near ? [inflate(near, pad)] : [])];
+	// isoline labels keep off every line, background included
+	for (const line of scene.background ?? []) obstacles.addPolyline(line, scene.plot);
+	const edges = placeEdgeLabels(labels.edges, scene.plot, obstacles, { pad, step: 6 });
+	return { limits, near, edges, masks };
 }

@@ -5,7 +5,7 @@ import { unitPrefs } from '../units';
 import { composeMemoFigure, escapeXml, fitText, wrapText, type MemoFont, type MemoTitle } from './memo';
 import { sheetTable, tableMarkdown } from './table';
 import { tableCsv } from './table-csv';
-import { chemical, memoTitle, shortFormulation, signOffOverrides, unitsText } from './title';
+import { chemical, memoTitle, shortFormulation, signOffOverrides, unitsText, type TitleInput } from './title';
 import { pngSize } from './png';
 import { vesselDoc } from '../revisions/test-fixtures';
 import { CAUTION_TITLE, LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
@@ -211,7 +211,7 @@ describe('memo figure', () => {
 	const fonts: MemoFont[] = [
 		{ family: 'IBM Plex Sans', weight: 400, style: 'normal', dataUrl: `data:font/woff2;base64,${readFileSync('node_modules/@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-400-normal.woff2').toString('base64')}` }
 	];
-	const title: MemoTitle = memoTitle({
+	const titleInput = (): TitleInput => ({
 		sheetName: 'V-204 fire case <draft & check>',
 		teamName: 'Brindlemoor Thermal Works',
 		doc: vesselDoc(),
@@ -223,6 +223,18 @@ describe('memo figure', () => {
 			approver: { name: 'Maren Okafor', at: Date.UTC(2026, 0, 7) }
 		},
 		issued: Date.UTC(2026, 0, 8)
+	});
+	const title: MemoTitle = memoTitle(titleInput());
+
+	it('a working draft is called one, and its date is not called an issue date', () => {
+		const draft = memoTitle({ ...titleInput(), revision: null, basedOn: 2 });
+		expect(draft.status).toBe('Working draft');
+		expect(draft.dateLabel).toBe('Date');
+		expect(draft.revision).toBe('Working draft (after Rev 2)');
+		expect(title.dateLabel).toBe('Issued');
+		const { svg } = composeMemoFigure({ drawings: [{ svg: '<svg width="10" height="10"></svg>', width: 10, height: 10 }], title: draft, caution: 'c', fonts: [] });
+		expect(svg).toContain('>DATE<');
+		expect(svg).not.toContain('>ISSUED<');
 	});
 
 	it('builds the title block from the sheet, the revision and the sign-off', () => {

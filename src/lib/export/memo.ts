@@ -40,6 +40,8 @@ export interface MemoTitle {
 	overrides?: string[];
 	/** when the figure was made, Unix ms */
 	issued: number;
+	/** what that date is called: "Issued" for a revision, "Date" for the working draft (which is not issued) */
+	dateLabel?: string;
 }
 
 export interface MemoDrawing {
@@ -221,7 +223,7 @@ function wideRows(title: MemoTitle): { h: number; cells: Cell[] }[] {
 				{ label: 'Fluid', value: title.fluid, w: 0.2 },
 				{ label: 'Formulation', value: title.formulation, w: 0.38 },
 				{ label: 'System', value: title.system, w: 0.24 },
-				{ label: 'Issued', value: isoDate(title.issued), w: 0.18, mono: true }
+				{ label: title.dateLabel ?? 'Issued', value: isoDate(title.issued), w: 0.18, mono: true }
 			]
 		},
 		{ h: 36, cells: [{ label: 'Units', value: title.units, w: 1, mono: true }] },

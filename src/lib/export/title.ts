@@ -119,7 +119,9 @@ export function memoTitle(input: TitleInput): MemoTitle {
 		sheet: input.sheetName,
 		team: input.teamName,
 		revision: revisionText(input.revision, input.basedOn),
-		status: input.revision ? STATUS_LABEL[input.revision.status] : 'Not issued',
+		// a working draft is not issued: its status says so and its date is not called an issue date
+		status: input.revision ? STATUS_LABEL[input.revision.status] : 'Working draft',
+		dateLabel: input.revision ? 'Issued' : 'Date',
 		fluid: `${fluid.name} (${chemical(fluid.formula)})`,
 		formulation: shortFormulation(fluid),
 		system: systemText(doc, doc.units),

@@ -43,6 +43,11 @@ export interface RevisionFull extends RevisionSummary {
 	result: PathResult;
 }
 
+/** A revision back in draft because someone other than its author returned it (a withdrawal is the author's own). */
+export function wasReturned(r: Pick<RevisionSummary, 'status' | 'returned' | 'author'>): boolean {
+	return r.status === 'draft' && r.returned !== null && r.returned.id !== r.author.id;
+}
+
 export interface RevisionEvent {
 	number: number;
 	kind: string;

@@ -7,6 +7,8 @@ import { listRevisions } from './revisions';
 import { listNotes } from './notes';
 import { listTraces } from './traces';
 import { countUsers } from './db/users';
+import { listMembers } from './db/memberships';
+import { listTeamEvents } from './db/team-events';
 import { listOutboxMessages } from './db/outbox';
 
 let env: Awaited<ReturnType<typeof setupIntegration>>;
@@ -61,5 +63,26 @@ describe('demo seed', () => {
 	it('V-204 and R-310 stay plain drafts, and seeding sends no mail', async () => {
 		for (const tag of ['V-204', 'R-310']) expect((await listRevisions(env.db, viewer, sheetId[tag])).revisions).toHaveLength(0);
 		expect(await listOutboxMessages(env.db, {})).toHaveLength(0);
+	});
+
+	it('one clock: people and the team come before the first sheet, every event after it and before now', async () => {
+		const sheets = (await listTeamSheets(env.db, viewer)).sheets as { createdAt: number; updatedAt: number }[];
+		const firstSheet = Math.min(...sheets.map((s) => s.createdAt));
+		const team = await env.db.selectFrom('teams').select(['id', 'created_at']).where('slug', '=', DEMO_TEAM.slug).executeTakeFirstOrThrow();
+		const members = await listMembers(env.db, team.id);
+		expect(members).toHaveLength(DEMO_PEOPLE.length);
+		const users = await env.db.selectFrom('users').select(['created_at']).execute();
+		const now = Date.now();
+		for (const at of [team.created_at, ...members.map((m) => m.created_at), ...users.map((u) => u.created_at)]) {
+			expect(at).toBeLessThan(firstSheet);
+			expect(at).toBeGreaterThan(firstSheet - 3 * 3_600_000);
+		}
+		const events = await listTeamEvents(env.db, team.id, 500);
+		expect(events.find((e) => e.kind === 'team.created')!.created_at).toBe(team.created_at);
+		for (const e of events.filter((e) => e.kind !== 'team.created')) {
+			expect(e.created_at, e.kind).toBeGreaterThanOrEqual(firstSheet);
+			expect(e.created_at, e.kind).toBeLessThanOrEqual(now);
+		}
+		for (const s of sheets) expect(s.updatedAt).toBeLessThanOrEqual(now);
 	});
 });

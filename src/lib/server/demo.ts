@@ -85,21 +85,25 @@ export async function seedDemo(db: DB): Promise<SeedResult> {
 	const passwordHash = await hashPassword(DEMO_PASSWORD);
 	const ids: Partial<Record<Role, string>> = {};
 	const sheets = new Map<string, { id: string; doc: SheetDoc; at: number }>();
+	// one clock for the whole story: the people and the team come first, then the sheets an hour
+	// apart, then their reviews — so members' "since", the activity log and the sheets agree
+	const hour = 3_600_000;
+	const t0 = Date.now() - WORKED_EXAMPLES.length * hour;
+	const founded = t0 - hour;
 	const seeded = await db.transaction().execute(async (trx) => {
 		if ((await countUsers(trx)) > 0) return false;
-		for (const p of DEMO_PEOPLE) {
-			ids[p.role] = (await createUser(trx, { email: p.email, name: p.name, passwordHash, emailVerified: true })).id;
+		for (const [i, p] of DEMO_PEOPLE.entries()) {
+			ids[p.role] = (await createUser(trx, { email: p.email, name: p.name, passwordHash, emailVerified: true }, founded - 10 * 60_000 + i * 60_000)).id;
 		}
-		const team = await createTeam(trx, { name: DEMO_TEAM.name, description: DEMO_TEAM.description, slug: DEMO_TEAM.slug, ownerId: ids.owner! });
-		await logTeamEvent(trx, { teamId: team.id, actorId: ids.owner!, actorLabel: DEMO_PEOPLE[0].name, kind: 'team.created', detail: { name: team.name } });
-		for (const p of DEMO_PEOPLE) if (p.role !== 'owner') await addMember(trx, team.id, ids[p.role]!, p.role);
+		const team = await createTeam(trx, { name: DEMO_TEAM.name, description: DEMO_TEAM.description, slug: DEMO_TEAM.slug, ownerId: ids.owner! }, founded);
+		await logTeamEvent(trx, { teamId: team.id, actorId: ids.owner!, actorLabel: DEMO_PEOPLE[0].name, kind: 'team.created', detail: { name: team.name } }, founded);
+		for (const [i, p] of DEMO_PEOPLE.entries()) if (p.role !== 'owner') await addMember(trx, team.id, ids[p.role]!, p.role, founded + i * 5 * 60_000);
 		// the worked examples as the designer's sheets, oldest first
 		const designer = DEMO_PEOPLE.find((p) => p.role === 'designer')!;
-		const t0 = Date.now() - WORKED_EXAMPLES.length * 3_600_000;
 		for (const [i, ex] of WORKED_EXAMPLES.entries()) {
 			const doc = ex.build();
 			const id = newId();
-			const at = t0 + i * 3_600_000;
+			const at = t0 + i * hour;
 			await insertSheet(trx, { id, teamId: team.id, title: ex.title, fluid: doc.spec.fluid, systemKind: doc.spec.system.kind, example: ex.id, draft: JSON.stringify(doc), actor: { id: ids.designer!, label: designer.name } }, at);
 			sheets.set(ex.id, { id, doc, at });
 		}

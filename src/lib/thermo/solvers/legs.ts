@@ -57,7 +57,7 @@ const INVARIANT_KEYS: Record<Process, TargetName[]> = {
 };
 
 export const THROTTLING_NOTE =
-	'Throttling is irreversible: no reversible heat or work belongs to it, so q, w, wShaft and qFlow are reported as 0; h is unchanged and the entropy rises by ds.';
+	'Throttling is irreversible: no reversible heat or work belongs to it, so its heat and work (boundary and shaft) are reported as 0; its enthalpy is unchanged and its entropy rises.';
 
 function invalid(message: string, hint: string): ThermoError {
 	return new ThermoError('invalid-leg', message, hint);

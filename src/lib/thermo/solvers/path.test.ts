@@ -168,6 +168,10 @@ describe('computePath: cycles', () => {
 		expect(rel(chiller.states[3].state.T, valve.end.T)).toBeLessThan(1e-9);
 		expect(rel(chiller.states[3].state.P, valve.end.P)).toBeLessThan(1e-7);
 		expect(chiller.warnings.map((w) => w.code)).toContain('throttling-irreversible');
+		// said in words, not in the engine's field names
+		const throttling = chiller.warnings.find((w) => w.code === 'throttling-irreversible')!.message;
+		expect(throttling).toMatch(/heat and work \(boundary and shaft\) are reported as 0/);
+		expect(throttling).not.toMatch(/\b(wShaft|qFlow|q, w)\b/);
 		expect(chiller.states[1].extras.superheat).toBeGreaterThan(0);
 		expect(chiller.states[2].extras.subcooling).toBe(0);
 	});
