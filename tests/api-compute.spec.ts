@@ -131,7 +131,7 @@ const BAD: Row[] = [
 	{ name: 'isolines: repeated parameter', path: '/api/v1/fluids/water/isolines?kind=isobar&kind=isotherm&values=1e5', status: 400, code: 'invalid-input', message: /more than once/ },
 	{ name: 'isolines: isotherm below the triple point', path: '/api/v1/fluids/water/isolines?kind=isotherm&values=100', status: 422, code: 'out-of-range', message: /273\.16/ },
 	{ name: 'isolines: isobar above the range', path: '/api/v1/fluids/water/isolines?kind=isobar&values=1e12', status: 422, code: 'out-of-range' },
-	{ name: 'isolines: unknown fluid', path: '/api/v1/fluids/argon/isolines?kind=isobar&values=1e5', status: 404, code: 'unknown-fluid' }
+	{ name: 'isolines: unknown fluid', path: '/api/v1/fluids/helium-3/isolines?kind=isobar&values=1e5', status: 404, code: 'unknown-fluid' }
 ];
 
 test.describe('compute API: every bad input answers 4xx with a useful message', () => {

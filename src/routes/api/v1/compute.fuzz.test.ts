@@ -29,7 +29,7 @@ afterAll(() => {
 	answerCache.clear();
 });
 
-const FLUIDS = ['water', 'ammonia', 'carbon-dioxide', 'r134a', 'nitrogen', 'steam', 'CO2', 'r-134a', 'argon', '', ' water '];
+const FLUIDS = ['water', 'ammonia', 'carbon-dioxide', 'r134a', 'nitrogen', 'steam', 'CO2', 'r-134a', 'argon', 'propane', 'helium-3', '', ' water '];
 const PROPS = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'] as const;
 const PROCESSES = ['isobaric', 'isochoric', 'isothermal', 'isentropic', 'isenthalpic', 'polytropic'];
 const EXTREMES = [0, -0, -1, 1, 1e-300, 5e-324, 1e300, Number.MAX_VALUE, -Number.MAX_VALUE, 0.5, 1 - 1e-12, 1 + 1e-12];
