@@ -1,5 +1,5 @@
 import { expect, test, type Locator, type Page } from '@playwright/test';
-import { DEMO, signInPage, TEAM } from './helpers';
+import { createToken, DEMO, FORM, freshEmail, signedInRequest, signInPage, TEAM } from './helpers';
 
 /*
  * A checker reads and comments on a phone: every signed-in page fits a 390 px wide screen in every
@@ -43,6 +43,15 @@ const signOut = (page: Page) => page.getByRole('banner').getByRole('button', { n
 
 test.describe('on a 390 px phone', () => {
 	test.use({ viewport: PHONE });
+
+	// the settings page as a team in use has it: a pending invitation and an API token with long names
+	test.beforeAll(async () => {
+		const owner = await signedInRequest(DEMO.owner);
+		const invite = await owner.post(`/t/${TEAM}/settings?/invite`, { form: { email: freshEmail('a-rather-long-colleague-address-for-the-phone'), role: 'checker' }, headers: FORM });
+		expect(invite.status(), 'invitation sent').toBe(200);
+		await createToken(owner, TEAM, 'nightly memo export for the plant historian', 'viewer');
+		await owner.dispose();
+	});
 
 	for (const role of ['owner', 'designer', 'checker', 'viewer'] as const) {
 		test(`every signed-in page fits, as ${role}`, async ({ page }) => {
@@ -91,6 +100,8 @@ test.describe('on a 390 px phone', () => {
 				await pressable(row.getByLabel(/^Role of/), 'owner: role of the checker');
 				await pressable(row.getByRole('button', { name: 'Set' }), 'owner: Set role');
 				await pressable(row.getByRole('button', { name: /Remove/ }), 'owner: Remove member');
+				await pressable(page.getByTestId('invites').getByRole('button', { name: 'Withdraw' }).first(), 'owner: Withdraw an invitation');
+				await pressable(page.getByTestId('tokens').getByRole('button', { name: 'Revoke' }).first(), 'owner: Revoke a token');
 			}
 		});
 	}
