@@ -140,9 +140,9 @@ function checkValue(fl: Fluid, k: InputName, val: unknown): number {
 	if (typeof val !== 'number' || !Number.isFinite(val))
 		throw new ThermoError('non-finite-input', `${k} must be a finite number (got ${String(val)}).`, `Give ${k} as a finite number in ${unit(k) || 'SI units'}.`);
 	if ((k === 'T' || k === 'P' || k === 'v' || k === 'rho') && !(val > 0))
-		throw new ThermoError('non-positive-input', `${k} must be positive (got ${fmt(val)}); the engine uses absolute values.`, `Give ${k} in ${unit(k)} as a positive absolute value (for example kelvin, not °C; absolute, not gauge pressure).`);
+		throw new ThermoError('non-positive-input', `${k} must be positive (got ${fmt(val, 0)}); the engine uses absolute values.`, `Give ${k} in ${unit(k)} as a positive absolute value (for example kelvin, not °C; absolute, not gauge pressure).`);
 	if (k === 'x' && !(val >= 0 && val <= 1))
-		throw new ThermoError('quality-out-of-range', `The quality x must lie between 0 and 1 (got ${fmt(val)}).`, 'Give x as a mass fraction of vapor from 0 (saturated liquid) to 1 (saturated vapor), or give the state by two other properties.');
+		throw new ThermoError('quality-out-of-range', `The quality x must lie between 0 and 1 (got ${fmt(val, 0, 1)}).`, 'Give x as a mass fraction of vapor from 0 (saturated liquid) to 1 (saturated vapor), or give the state by two other properties.');
 	if (k === 'T') checkT(fl, val);
 	if (k === 'P') checkP(fl, val);
 	return k === 'v' ? 1 / val : val;
