@@ -43,6 +43,23 @@ export interface State {
 	cv: number | null;
 	/** speed of sound, m/s; null inside the dome */
 	w: number | null;
+	// Derived properties (from the same Helmholtz derivatives; properties.ts). The engine always
+	// sets them; they are optional in the type only so that states stored before they existed
+	// (revisions, fixtures) still type-check.
+	/** compressibility factor Z = P·v/(R·T), dimensionless */
+	Z?: number | null;
+	/** isothermal compressibility κ_T = −(1/v)(∂v/∂P)_T = 1/(ρ·(∂P/∂ρ)_T), 1/Pa; null inside the dome */
+	kappaT?: number | null;
+	/** volume expansivity α_V = (1/v)(∂v/∂T)_P = (∂P/∂T)_ρ/(ρ·(∂P/∂ρ)_T), 1/K; null inside the dome */
+	alphaV?: number | null;
+	/** Joule–Thomson coefficient μ_JT = (∂T/∂P)_h = (T·α_V − 1)/(ρ·cp), K/Pa; null inside the dome */
+	muJT?: number | null;
+	/** isentropic exponent γ_s = −(v/P)(∂P/∂v)_s = ρ·w²/P (cp/cv for an ideal gas), dimensionless; null inside the dome */
+	gammaS?: number | null;
+	/** (∂P/∂T)_v, Pa/K; inside the dome the slope of the saturation curve dPs/dT (Clapeyron) */
+	dPdT?: number | null;
+	/** latent heat of vaporization h'' − h' at the state's temperature, J/kg; only on and inside the dome, else null */
+	hfg?: number | null;
 }
 
 /**
