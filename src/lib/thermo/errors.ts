@@ -20,6 +20,8 @@ export type ThermoErrorCode =
 	| 'non-positive-input'
 	/** temperature below the triple point, or pressure below the triple-point pressure where only solid or vapor exists */
 	| 'below-triple-point'
+	/** beyond the melting curve: the substance is solid there (a fluid-only engine refuses it) */
+	| 'solid-region'
 	/** outside the formulation's range of validity (T above Tmax, P above Pmax, or the state these inputs imply lies outside) */
 	| 'out-of-range'
 	/** T and P given on the saturation line: they are not independent there */

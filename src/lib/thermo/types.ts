@@ -60,6 +60,19 @@ export interface State {
 	dPdT?: number | null;
 	/** latent heat of vaporization h'' − h' at the state's temperature, J/kg; only on and inside the dome, else null */
 	hfg?: number | null;
+	/**
+	 * How well the two inputs determine the state (fixState answers only): the relative
+	 * uncertainty of T, P and v that the pair's conditioning implies in double precision
+	 * (solvers/precision.ts). 2.2e−16 for a perfectly conditioned pair; up to 1.
+	 */
+	precision?: Precision;
+}
+
+/** Relative uncertainties (dimensionless) of T, P and v; see State.precision. */
+export interface Precision {
+	T: number;
+	P: number;
+	v: number;
 }
 
 /**

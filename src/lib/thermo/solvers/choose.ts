@@ -5,6 +5,7 @@
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { FixOptions, RootHint, State } from '../types.ts';
+import { isSolid, solidError } from './solid.ts';
 
 /** The `near` option of the fixState call in progress (set by fixStateOf; engine calls are synchronous). */
 let currentNear: FixOptions['near'] | undefined;
@@ -57,8 +58,11 @@ function key(hint: RootHint): (s: State) => number {
  * throws `noneError()` when there are none.
  */
 export function choose(fl: Fluid, found: State[], hint: RootHint | undefined, what: string, noneError: () => ThermoError): State {
-	const c = dedupe(found);
-	if (c.length === 0) throw noneError();
+	const all = dedupe(found);
+	if (all.length === 0) throw noneError();
+	// candidates beyond the melting curve are solid, not states of the fluid (solid.ts)
+	const c = all.filter((s) => !isSolid(fl, s.T, s.P));
+	if (c.length === 0) throw solidError(fl, all[0].T, all[0].P, what);
 	if (c.length === 1) return c[0];
 	const near = currentNear;
 	if (!hint && near && (near.T !== undefined || near.P !== undefined)) {

@@ -27,6 +27,8 @@ import { flashVS } from './flash-v-s.ts';
 import { flashVU } from './flash-v-u.ts';
 import { flashVX } from './flash-v-x.ts';
 import { checkP, checkT } from './range.ts';
+import { precisionOf } from './precision.ts';
+import { assertFluid } from './solid.ts';
 
 /** Canonical property keys after v → rho: order used to name pairs. */
 export type Key = 'T' | 'P' | 'rho' | 'u' | 'h' | 's' | 'x';
@@ -160,11 +162,18 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 	}
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
 	const flash = BY_RANK[KEY_RANK[ka] * 7 + KEY_RANK[kb]];
-	if (near === undefined) return flash(fl, a, b, options);
-	setNear(near);
-	try {
-		return flash(fl, a, b, options);
-	} finally {
-		setNear(undefined);
+	// beyond the melting curve the substance is solid: refused (solid.ts), never answered as a fluid
+	let st: State;
+	if (near === undefined) st = flash(fl, a, b, options);
+	else {
+		setNear(near);
+		try {
+			st = flash(fl, a, b, options);
+		} finally {
+			setNear(undefined);
+		}
 	}
+	assertFluid(fl, st);
+	st.precision = precisionOf(fl, st, ka, a, kb, b);
+	return st;
 }
