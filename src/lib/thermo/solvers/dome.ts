@@ -242,6 +242,16 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		const [, , db] = fn(Tb);
 		// |G| must fall leaving Ta and rise arriving at Tb
 		if (!(da < 0 === Ga > 0) || !(db < 0 === Gb < 0)) return;
+		// the cubic through both ends' values and slopes (accurate to h⁴ on these node spacings)
+		// bounds the extremum: clearly short of zero, there is nothing to look for
+		const h = Tb - Ta;
+		let ext = Ga < 0 ? -Infinity : Infinity;
+		for (let k = 1; k < 16; k++) {
+			const t = k / 16, t2 = t * t, t3 = t2 * t;
+			const G = (2 * t3 - 3 * t2 + 1) * Ga + (t3 - 2 * t2 + t) * h * da + (-2 * t3 + 3 * t2) * Gb + (t3 - t2) * h * db;
+			ext = Ga < 0 ? Math.max(ext, G) : Math.min(ext, G);
+		}
+		if (ext < 0 === Ga < 0 && Math.abs(ext) > 0.05 * Math.min(Math.abs(Ga), Math.abs(Gb))) return;
 		let lo = Ta, hi = Tb, m = 0.5 * (lo + hi);
 		for (let k = 0; k < 80; k++) {
 			m = 0.5 * (lo + hi);
