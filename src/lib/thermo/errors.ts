@@ -30,6 +30,8 @@ export type ThermoErrorCode =
 	| 'quality-out-of-range'
 	/** no fluid state has both inputs (e.g. a quality above the critical temperature) */
 	| 'inconsistent-inputs'
+	/** every state with these inputs lies outside the requested window (options.window) */
+	| 'outside-window'
 	/** two states have these inputs; `candidates` names them, `options.hint` chooses */
 	| 'ambiguous-state'
 	/** an unknown value of an option (e.g. `hint`) */

@@ -95,6 +95,20 @@ export interface FixOptions {
 	 * of a previous state (e.g. while dragging). Three or more candidates can only be told apart this way.
 	 */
 	near?: { T?: number; P?: number };
+	/**
+	 * Where to look: candidates outside these bounds (T in K, P in Pa, each optional) are not
+	 * answers. The default is the formulation's whole range, so nothing is excluded silently; a
+	 * window that excludes every state is refused with `outside-window` naming what lies outside.
+	 */
+	window?: StateWindow;
+}
+
+/** Bounds on the answer of fixState (see FixOptions.window). */
+export interface StateWindow {
+	Tmin?: number;
+	Tmax?: number;
+	Pmin?: number;
+	Pmax?: number;
 }
 
 /** Saturation at one temperature: the saturated liquid and vapor states (phase saturated-liquid / -vapor). */

@@ -4,7 +4,7 @@
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { FixOptions, InputName, Inputs, State } from '../types.ts';
-import { ROOT_HINTS, setNear } from './choose.ts';
+import { ROOT_HINTS, inWindow, outsideWindow, setNear, windowText } from './choose.ts';
 import { flashHS } from './flash-h-s.ts';
 import { flashHX } from './flash-h-x.ts';
 import { flashPH } from './flash-p-h.ts';
@@ -160,13 +160,21 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 		if (typeof near !== 'object' || near === null || !ok(near.T) || !ok(near.P))
 			throw new ThermoError('invalid-option', 'options.near must hold a positive T (K) and/or P (Pa).', 'Give near as { T, P } of the state to stay close to, or leave it out.');
 	}
+	const win = options.window;
+	if (win !== undefined) {
+		const ok = (v: unknown) => v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
+		if (typeof win !== 'object' || win === null || !ok(win.Tmin) || !ok(win.Tmax) || !ok(win.Pmin) || !ok(win.Pmax))
+			throw new ThermoError('invalid-option', 'options.window must hold positive Tmin, Tmax (K) and/or Pmin, Pmax (Pa).', 'Give window as { Tmin, Tmax, Pmin, Pmax } (any of them), or leave it out to search the whole range.');
+		if ((win.Tmin !== undefined && win.Tmax !== undefined && win.Tmin > win.Tmax) || (win.Pmin !== undefined && win.Pmax !== undefined && win.Pmin > win.Pmax))
+			throw new ThermoError('invalid-option', `options.window is empty: ${windowText(win)}.`, 'Give each lower bound below its upper bound.');
+	}
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
 	const flash = BY_RANK[KEY_RANK[ka] * 7 + KEY_RANK[kb]];
 	// beyond the melting curve the substance is solid: refused (solid.ts), never answered as a fluid
 	let st: State;
-	if (near === undefined) st = flash(fl, a, b, options);
+	if (near === undefined && win === undefined) st = flash(fl, a, b, options);
 	else {
-		setNear(near);
+		setNear(near, win);
 		try {
 			st = flash(fl, a, b, options);
 		} finally {
@@ -174,6 +182,8 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 		}
 	}
 	assertFluid(fl, st);
+	// a flash with one answer does not go through choose: the window applies here
+	if (win !== undefined && !inWindow(st, win)) throw outsideWindow(fl, `${ka} = ${fmt(a)} and ${kb} = ${fmt(b)}`, [st], win);
 	st.precision = precisionOf(fl, st, ka, a, kb, b);
 	return st;
 }

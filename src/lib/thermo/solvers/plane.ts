@@ -384,7 +384,10 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 	// state — except for (u, h), whose dilute-vapor cells are degenerate and only reached that way
 	const degenerate = (a === 'u' && b === 'h') || (a === 'h' && b === 'u');
 	const contour = degenerate ? (a === 'u' ? contourRootsUH(fl, A, B) : contourRootsUH(fl, B, A)) : [];
-	const queue: [number, number][] = [...contour, ...bracketStarts(fl, a, A, b, B), ...st.inside, ...st.nearest, ...(degenerate ? st.centres : [])];
+	const bracketed = bracketStarts(fl, a, A, b, B);
+	// a cell-interior start beside a bracketed one is the same cell's root: run it once
+	const inside = st.inside.filter(([T0, z0]) => !bracketed.some(([T, z]) => Math.abs(T - T0) < 0.5 * dT && Math.abs(z - z0) < 0.25));
+	const queue: [number, number][] = [...contour, ...bracketed, ...inside, ...st.nearest, ...(degenerate ? st.centres : [])];
 	let centresQueued = degenerate;
 	let runs = 0;
 	while (runs < MAX_RUNS) {

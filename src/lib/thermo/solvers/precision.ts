@@ -52,14 +52,24 @@ function clamp(r: number): number {
 type Rows = Record<Key, [number, number]>;
 
 function singleRows(fl: Fluid, s: State): Rows {
-	evalPoint(fl, s.T, s.rho, p, 2);
+	// the state already carries what the rows need: cv, (∂P/∂T)_ρ and, through κ_T, (∂P/∂ρ)_T
+	let cv = s.cv, dPdT = s.dPdT, dPdrho = s.kappaT ? 1 / (s.rho * s.kappaT) : null;
+	if (cv === null || dPdT === null || dPdT === undefined || dPdrho === null) {
+		evalPoint(fl, s.T, s.rho, p, 2);
+		cv = p.cv;
+		dPdT = p.dPdT;
+		dPdrho = p.dPdrho;
+	}
+	const T = s.T, rho = s.rho, P = s.P, r2 = rho * rho;
+	// (∂u/∂ρ)_T = (P − T(∂P/∂T)_ρ)/ρ², h = u + P/ρ, (∂s/∂ρ)_T = −(∂P/∂T)_ρ/ρ²
+	const duDrho = (P - T * dPdT) / r2;
 	return {
 		T: [1, 0],
-		P: [p.dPdT, p.dPdrho],
+		P: [dPdT, dPdrho],
 		rho: [0, 1],
-		u: [propDT(p, 'u'), propDrho(p, 'u')],
-		h: [propDT(p, 'h'), propDrho(p, 'h')],
-		s: [propDT(p, 's'), propDrho(p, 's')],
+		u: [cv, duDrho],
+		h: [cv + dPdT / rho, duDrho + dPdrho / rho - P / r2],
+		s: [cv / T, -dPdT / r2],
 		x: [0, 0]
 	};
 }

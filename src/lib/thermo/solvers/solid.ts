@@ -45,7 +45,13 @@ export function piecePressure(p: SolidLinePiece, T: number): number {
 
 function pieceAt(pieces: SolidLinePiece[], T: number, T0: number): SolidLinePiece | undefined {
 	// at or above the triple temperature the curve bounding fluid states (water: not ice Ih or III)
-	return pieces.find((p) => T >= p.Tmin && T <= p.Tmax && p.Tmax > T0) ?? pieces.find((p) => T >= p.Tmin && T <= p.Tmax);
+	let any: SolidLinePiece | undefined;
+	for (const p of pieces) {
+		if (!(T >= p.Tmin && T <= p.Tmax)) continue;
+		if (p.Tmax > T0) return p;
+		any ??= p;
+	}
+	return any;
 }
 
 /** Melting pressure (Pa) at T and the solid beyond it, or null where the fluid has no melting curve at T. */
@@ -67,9 +73,14 @@ const MELT_TOL = 1e-9;
 
 /** Whether (T, P) lies in the solid region (see the module comment). */
 export function isSolid(fl: Fluid, T: number, P: number): boolean {
-	const m = meltingAt(fl, T);
-	if (!m) return false;
-	return P > Math.max(m.P, triplePressure(fl)) * (1 + MELT_TOL);
+	const lines = solidLines(fl);
+	if (!lines) return false;
+	// the solid region starts above the triple-point pressure: gas below it is never solid here
+	const Pt = triplePressure(fl);
+	if (P <= Pt) return false;
+	const p = pieceAt(lines.melting.pieces, T, fl.Tt);
+	if (!p) return false;
+	return P > Math.max(piecePressure(p, T), Pt) * (1 + MELT_TOL);
 }
 
 export function solidError(fl: Fluid, T: number, P: number, what?: string): ThermoError {
