@@ -134,6 +134,9 @@ export function criticalState(fl: Fluid): State {
 
 const sL = new Point();
 const sV = new Point();
+/** what sL and sV hold (saturatedState) */
+let memoFluid: Fluid | null = null;
+let memoT = 0, memoL = 0, memoV = 0;
 
 /**
  * State on or inside the dome at a solved saturation point, quality x ∈ [0, 1]:
@@ -147,8 +150,17 @@ const sV = new Point();
 export function saturatedState(fl: Fluid, sat: SatPoint, x: number, pL?: Point, pV?: Point): State {
 	if (sat.rhoL === sat.rhoV) return criticalState(fl);
 	const T = sat.T;
-	const L = pL ?? evalPoint(fl, T, sat.rhoL, sL, 2);
-	const V = pV ?? evalPoint(fl, T, sat.rhoV, sV, 2);
+	// both phases are needed on either line (hfg); the liquid and vapor of one saturation asked
+	// for one after the other (saturationAtT, a leg's crossings) are evaluated once
+	const again = !pL && !pV && memoFluid === fl && memoT === T && memoL === sat.rhoL && memoV === sat.rhoV;
+	const L = pL ?? (again ? sL : evalPoint(fl, T, sat.rhoL, sL, 2));
+	const V = pV ?? (again ? sV : evalPoint(fl, T, sat.rhoV, sV, 2));
+	if (!pL && !pV) {
+		memoFluid = fl;
+		memoT = T;
+		memoL = sat.rhoL;
+		memoV = sat.rhoV;
+	} else memoFluid = null;
 	const hfg = finiteOrNull(V.h - L.h);
 	if (x <= 0) return { ...singleState(fl, L, 'saturated-liquid', 0, sat.P), hfg };
 	if (x >= 1) return { ...singleState(fl, V, 'saturated-vapor', 1, sat.P), hfg };

@@ -100,6 +100,29 @@ const ACCEPT = 1e-7;
 /** G at a turning point this close to zero (same scale) is a double root, not a near miss */
 const TOUCH = 1e-10;
 
+/**
+ * Whether the cubic through nodes i−1 … i+2 (shifted at the ends) keeps clearly away from zero on
+ * [T_i, T_i+1]: its extremum there stays on G's side by more than a quarter of the smaller end value.
+ */
+function nodeCubicClear(T: Float64Array, G: Float64Array, i: number, n: number): boolean {
+	if (n < 4) return false;
+	const k0 = Math.min(Math.max(i - 1, 0), n - 4);
+	const Ga = G[i], Gb = G[i + 1];
+	let ext = Ga;
+	for (let q = 1; q < 16; q++) {
+		const t = T[i] + ((T[i + 1] - T[i]) * q) / 16;
+		let v = 0;
+		for (let j = k0; j < k0 + 4; j++) {
+			let w = G[j];
+			for (let m = k0; m < k0 + 4; m++) if (m !== j) w *= (t - T[m]) / (T[j] - T[m]);
+			v += w;
+		}
+		if (v < 0 !== Ga < 0) return false;
+		if (Math.abs(v) < Math.abs(ext)) ext = v;
+	}
+	return Math.abs(ext) > 0.25 * Math.min(Math.abs(Ga), Math.abs(Gb));
+}
+
 /** Whether |G| has a local minimum at node i (an end node counts with its one neighbour) that is small against G's local change. */
 function dipsAt(G: Float64Array, i: number, n: number): boolean {
 	const g = Math.abs(G[i]);
@@ -288,6 +311,9 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		// dG/dT finds the extremum: G crossing there gives two roots, G touching zero (within
 		// round-off) the double root of a tangent pair (x or a property at its extreme on the line)
 		if (!(dipsAt(G, i, n) || dipsAt(G, i + 1, n))) continue;
+		// first from the table alone: the cubic through four nodes around the interval; only an
+		// extremum that comes near zero is worth the exact slopes (two saturation solves)
+		if (nodeCubicClear(nodes.T, G, i, n)) continue;
 		turning(Ta, Ga, Tb, Gb);
 	}
 	return roots;

@@ -235,6 +235,12 @@ export function bracketStarts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp
 		for (let cell = 0; cell < cells; cell++) {
 			const o = cell * 4;
 			if (A < box[o] || A > box[o + 1]) continue;
+			// the interpolated residual at the edges lies within the cell's range of y_b: B outside
+			// it (widened by round-off) leaves one sign at every crossing, so no bracket
+			if (!pv) {
+				const wb = 1e-9 * Math.abs(B) + 1e-6 * (box[o + 3] - box[o + 2]);
+				if (B < box[o + 2] - wb || B > box[o + 3] + wb) continue;
+			}
 			const i = (cell / (nj - 1)) | 0, j = cell - i * (nj - 1);
 			const c0 = i * nj + j, c1 = c0 + 1, c3 = c0 + nj, c2 = c3 + 1;
 			cross.length = 0;
@@ -389,6 +395,7 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 	const inside = st.inside.filter(([T0, z0]) => !bracketed.some(([T, z]) => Math.abs(T - T0) < 0.5 * dT && Math.abs(z - z0) < 0.25));
 	const queue: [number, number][] = [...contour, ...bracketed, ...inside, ...st.nearest, ...(degenerate ? st.centres : [])];
 	let centresQueued = degenerate;
+	const centreSet = new Set(st.centres.map(([T, z]) => T * 1e3 + z));
 	let runs = 0;
 	while (runs < MAX_RUNS) {
 		if (queue.length === 0) {
@@ -399,8 +406,10 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		}
 		const [T0, z0] = queue.shift() as [number, number];
 		// a start right beside an accepted state leads to the same state; anything farther may not
-		// (two roots of a pair can share a grid cell)
-		if (accepted.some(([T, z]) => Math.abs(T - T0) < SAME_START * dT && Math.abs(z - z0) < SAME_START)) continue;
+		// (two roots of a pair can share a grid cell). Cell centres are a fallback (or, for (u, h),
+		// a supplement to the contour scan): one within a cell of an accepted state is not run.
+		const near = centreSet.has(T0 * 1e3 + z0) ? [dT, 0.5] : [SAME_START * dT, SAME_START];
+		if (accepted.some(([T, z]) => Math.abs(T - T0) < near[0] && Math.abs(z - z0) < near[1])) continue;
 		runs++;
 		const q = newton2(fl, a, A, b, B, T0, z0, p);
 		if (!q) continue;

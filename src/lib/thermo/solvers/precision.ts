@@ -3,7 +3,8 @@
  * conditioning implies in double precision — the Jacobian of the inputs with respect to the
  * state's own variables, inverted, times each input's rounding:
  *   single phase, variables (T, ρ):   δy = |∂y/∂a|·δa + |∂y/∂b|·δb,  ∂(T, ρ)/∂(a, b) = J⁻¹,
- *   J = [[∂a/∂T, ∂a/∂ρ], [∂b/∂T, ∂b/∂ρ]] from the Helmholtz derivatives (properties.ts);
+ *   J = [[∂a/∂T, ∂a/∂ρ], [∂b/∂T, ∂b/∂ρ]] from the state's own derivatives:
+ *   (∂u/∂T)_ρ = cv, (∂u/∂ρ)_T = (P − T(∂P/∂T)_ρ)/ρ², h = u + P/ρ, (∂s/∂T)_ρ = cv/T, (∂s/∂ρ)_T = −(∂P/∂T)_ρ/ρ²;
  *   on and inside the dome, variables (T, x): ∂y/∂T along the saturation lines (Clapeyron slope,
  *   as dome.ts) and ∂y/∂x = y'' − y'.
  * Rounding of an input: one ulp of T, P, ρ (relative 2⁻⁵²); for u, h, s one ulp of the value or
@@ -29,6 +30,9 @@ const p = new Point();
 const pL = new Point();
 const pV = new Point();
 const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
+/** derivative rows [∂y/∂T, ∂y/∂z] of T, P, ρ, u, h, s, x (in that order) in the state's variables */
+const D = new Float64Array(14);
+const ORDER: Record<Key, number> = { T: 0, P: 1, rho: 2, u: 3, h: 4, s: 5, x: 6 };
 
 function inputRounding(fl: Fluid, k: Key, value: number, T: number): number {
 	switch (k) {
@@ -48,34 +52,29 @@ function clamp(r: number): number {
 	return Number.isFinite(r) ? Math.min(1, Math.max(EPS, r)) : 1;
 }
 
-/** Rows [∂y/∂T, ∂y/∂z] of T, P, ρ, u, h, s, x in the state's variables z (ρ single-phase, x two-phase). */
-type Rows = Record<Key, [number, number]>;
-
-function singleRows(fl: Fluid, s: State): Rows {
-	// the state already carries what the rows need: cv, (∂P/∂T)_ρ and, through κ_T, (∂P/∂ρ)_T
-	let cv = s.cv, dPdT = s.dPdT, dPdrho = s.kappaT ? 1 / (s.rho * s.kappaT) : null;
-	if (cv === null || dPdT === null || dPdT === undefined || dPdrho === null) {
+/** Rows in (T, ρ) from the state (re-evaluated only where it lacks cv, (∂P/∂T)_ρ or κ_T). */
+function singleRows(fl: Fluid, s: State): void {
+	let cv = s.cv, dPdT = s.dPdT ?? null, dPdrho = s.kappaT ? 1 / (s.rho * s.kappaT) : null;
+	if (cv === null || dPdT === null || dPdrho === null) {
 		evalPoint(fl, s.T, s.rho, p, 2);
 		cv = p.cv;
 		dPdT = p.dPdT;
 		dPdrho = p.dPdrho;
 	}
 	const T = s.T, rho = s.rho, P = s.P, r2 = rho * rho;
-	// (∂u/∂ρ)_T = (P − T(∂P/∂T)_ρ)/ρ², h = u + P/ρ, (∂s/∂ρ)_T = −(∂P/∂T)_ρ/ρ²
 	const duDrho = (P - T * dPdT) / r2;
-	return {
-		T: [1, 0],
-		P: [dPdT, dPdrho],
-		rho: [0, 1],
-		u: [cv, duDrho],
-		h: [cv + dPdT / rho, duDrho + dPdrho / rho - P / r2],
-		s: [cv / T, -dPdT / r2],
-		x: [0, 0]
-	};
+	D[0] = 1; D[1] = 0;
+	D[2] = dPdT; D[3] = dPdrho;
+	D[4] = 0; D[5] = 1;
+	D[6] = cv; D[7] = duDrho;
+	D[8] = cv + dPdT / rho; D[9] = duDrho + dPdrho / rho - P / r2;
+	D[10] = cv / T; D[11] = -dPdT / r2;
+	D[12] = 0; D[13] = 0;
 }
 
-function twoPhaseRows(fl: Fluid, s: State): Rows | null {
-	if (s.T >= fl.Tc * (1 - 1e-6)) return null;
+/** Rows in (T, x) along the saturation lines (table densities: slopes need no more accuracy). */
+function twoPhaseRows(fl: Fluid, s: State): boolean {
+	if (s.T >= fl.Tc * (1 - 1e-6)) return false;
 	satGuess(fl, s.T, g);
 	evalPoint(fl, s.T, g.rhoL, pL, 2);
 	evalPoint(fl, s.T, g.rhoV, pV, 2);
@@ -83,35 +82,39 @@ function twoPhaseRows(fl: Fluid, s: State): Rows | null {
 	const vL = 1 / g.rhoL, vV = 1 / g.rhoV;
 	const dPs = (pV.s - pL.s) / (vV - vL);
 	const dL = (dPs - pL.dPdT) / pL.dPdrho, dV = (dPs - pV.dPdT) / pV.dPdrho;
-	const along = (yL: number, yV: number, dyL: number, dyV: number): [number, number] => [(1 - x) * dyL + x * dyV, yV - yL];
-	const v = along(vL, vV, -dL * vL * vL, -dV * vV * vV);
 	const vm = vL + x * (vV - vL);
-	const row = (k: 'u' | 'h' | 's') => along(pL[k], pV[k], propDT(pL, k) + propDrho(pL, k) * dL, propDT(pV, k) + propDrho(pV, k) * dV);
-	return {
-		T: [1, 0],
-		P: [dPs, 0],
-		rho: [-v[0] / (vm * vm), -v[1] / (vm * vm)],
-		u: row('u'),
-		h: row('h'),
-		s: row('s'),
-		x: [0, 1]
-	};
+	const dvT = -(1 - x) * dL * vL * vL - x * dV * vV * vV, dvx = vV - vL;
+	D[0] = 1; D[1] = 0;
+	D[2] = dPs; D[3] = 0;
+	D[4] = -dvT / (vm * vm); D[5] = -dvx / (vm * vm);
+	let i = 6;
+	for (const k of ['u', 'h', 's'] as const) {
+		D[i] = (1 - x) * (propDT(pL, k) + propDrho(pL, k) * dL) + x * (propDT(pV, k) + propDrho(pV, k) * dV);
+		D[i + 1] = pV[k] - pL[k];
+		i += 2;
+	}
+	D[12] = 0; D[13] = 1;
+	return true;
 }
+
+const UNKNOWN: Precision = { T: 1, P: 1, v: 1 };
 
 /** Relative uncertainty of T, P and v of a state fixed from inputs ka = a, kb = b. */
 export function precisionOf(fl: Fluid, s: State, ka: Key, a: number, kb: Key, b: number): Precision {
-	const rows = s.x !== null ? twoPhaseRows(fl, s) : singleRows(fl, s);
-	if (!rows) return { T: 1, P: 1, v: 1 };
-	const [a1, a2] = rows[ka], [b1, b2] = rows[kb];
+	if (s.x !== null) {
+		if (!twoPhaseRows(fl, s)) return { ...UNKNOWN };
+	} else singleRows(fl, s);
+	const ia = 2 * ORDER[ka], ib = 2 * ORDER[kb];
+	const a1 = D[ia], a2 = D[ia + 1], b1 = D[ib], b2 = D[ib + 1];
 	const det = a1 * b2 - a2 * b1;
-	if (!(det !== 0 && Number.isFinite(det))) return { T: 1, P: 1, v: 1 };
+	if (!(det !== 0 && Number.isFinite(det))) return { ...UNKNOWN };
 	// ∂(T, z)/∂a and ∂(T, z)/∂b
 	const Ta = b2 / det, Tb = -a2 / det, za = -b1 / det, zb = a1 / det;
 	const da = inputRounding(fl, ka, a, s.T), db = inputRounding(fl, kb, b, s.T);
-	const spread = (row: [number, number]) => Math.abs(row[0] * Ta + row[1] * za) * da + Math.abs(row[0] * Tb + row[1] * zb) * db;
+	const spread = (i: number) => Math.abs(D[i] * Ta + D[i + 1] * za) * da + Math.abs(D[i] * Tb + D[i + 1] * zb) * db;
 	return {
-		T: ka === 'T' ? EPS : clamp(spread(rows.T) / s.T),
-		P: ka === 'P' ? EPS : clamp(spread(rows.P) / s.P),
-		v: clamp(spread(rows.rho) / s.rho)
+		T: ka === 'T' ? EPS : clamp(spread(0) / s.T),
+		P: ka === 'P' ? EPS : clamp(spread(2) / s.P),
+		v: clamp(spread(4) / s.rho)
 	};
 }
