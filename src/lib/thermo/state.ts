@@ -138,6 +138,11 @@ const sV = new Point();
 let memoFluid: Fluid | null = null;
 let memoT = 0, memoL = 0, memoV = 0;
 
+/** The saturated liquid and vapor points (order 2) the last saturatedState call evaluated at T, if that was for this fluid and T. */
+export function lastSaturatedPhases(fl: Fluid, T: number): [Point, Point] | null {
+	return memoFluid === fl && memoT === T ? [sL, sV] : null;
+}
+
 /**
  * State on or inside the dome at a solved saturation point, quality x ∈ [0, 1]:
  * v, u, h, s mass-weighted; P = Psat. cv of the two-phase system (Δ = vapor − liquid,

@@ -16,6 +16,7 @@ import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDT, propDrho } from '../properties.ts';
 import type { Precision, State } from '../types.ts';
 import type { Key } from './fix-state.ts';
+import { lastSaturatedPhases } from '../state.ts';
 import { satGuess, type SatGuess } from './saturation.ts';
 
 const EPS = Number.EPSILON;
@@ -32,6 +33,7 @@ const pV = new Point();
 const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
 /** derivative rows [∂y/∂T, ∂y/∂z] of T, P, ρ, u, h, s, x (in that order) in the state's variables */
 const D = new Float64Array(14);
+const ENERGY = ['u', 'h', 's'] as const;
 const ORDER: Record<Key, number> = { T: 0, P: 1, rho: 2, u: 3, h: 4, s: 5, x: 6 };
 
 function inputRounding(fl: Fluid, k: Key, value: number, T: number): number {
@@ -63,37 +65,55 @@ function singleRows(fl: Fluid, s: State): void {
 	}
 	const T = s.T, rho = s.rho, P = s.P, r2 = rho * rho;
 	const duDrho = (P - T * dPdT) / r2;
-	D[0] = 1; D[1] = 0;
-	D[2] = dPdT; D[3] = dPdrho;
-	D[4] = 0; D[5] = 1;
-	D[6] = cv; D[7] = duDrho;
-	D[8] = cv + dPdT / rho; D[9] = duDrho + dPdrho / rho - P / r2;
-	D[10] = cv / T; D[11] = -dPdT / r2;
-	D[12] = 0; D[13] = 0;
+	D[0] = 1;
+	D[1] = 0;
+	D[2] = dPdT;
+	D[3] = dPdrho;
+	D[4] = 0;
+	D[5] = 1;
+	D[6] = cv;
+	D[7] = duDrho;
+	D[8] = cv + dPdT / rho;
+	D[9] = duDrho + dPdrho / rho - P / r2;
+	D[10] = cv / T;
+	D[11] = -dPdT / r2;
+	D[12] = 0;
+	D[13] = 0;
 }
 
 /** Rows in (T, x) along the saturation lines (table densities: slopes need no more accuracy). */
 function twoPhaseRows(fl: Fluid, s: State): boolean {
 	if (s.T >= fl.Tc * (1 - 1e-6)) return false;
-	satGuess(fl, s.T, g);
-	evalPoint(fl, s.T, g.rhoL, pL, 2);
-	evalPoint(fl, s.T, g.rhoV, pV, 2);
+	// the phases the state was just built from, else the table's densities (slopes need no more)
+	const last = lastSaturatedPhases(fl, s.T);
+	let L = pL, V = pV;
+	if (last) [L, V] = last;
+	else {
+		satGuess(fl, s.T, g);
+		evalPoint(fl, s.T, g.rhoL, pL, 2);
+		evalPoint(fl, s.T, g.rhoV, pV, 2);
+	}
+	const rL = L.rho, rV = V.rho;
 	const x = s.x ?? 0;
-	const vL = 1 / g.rhoL, vV = 1 / g.rhoV;
-	const dPs = (pV.s - pL.s) / (vV - vL);
-	const dL = (dPs - pL.dPdT) / pL.dPdrho, dV = (dPs - pV.dPdT) / pV.dPdrho;
+	const vL = 1 / rL, vV = 1 / rV;
+	const dPs = (V.s - L.s) / (vV - vL);
+	const dL = (dPs - L.dPdT) / L.dPdrho, dV = (dPs - V.dPdT) / V.dPdrho;
 	const vm = vL + x * (vV - vL);
 	const dvT = -(1 - x) * dL * vL * vL - x * dV * vV * vV, dvx = vV - vL;
-	D[0] = 1; D[1] = 0;
-	D[2] = dPs; D[3] = 0;
-	D[4] = -dvT / (vm * vm); D[5] = -dvx / (vm * vm);
+	D[0] = 1;
+	D[1] = 0;
+	D[2] = dPs;
+	D[3] = 0;
+	D[4] = -dvT / (vm * vm);
+	D[5] = -dvx / (vm * vm);
 	let i = 6;
-	for (const k of ['u', 'h', 's'] as const) {
-		D[i] = (1 - x) * (propDT(pL, k) + propDrho(pL, k) * dL) + x * (propDT(pV, k) + propDrho(pV, k) * dV);
-		D[i + 1] = pV[k] - pL[k];
+	for (const k of ENERGY) {
+		D[i] = (1 - x) * (propDT(L, k) + propDrho(L, k) * dL) + x * (propDT(V, k) + propDrho(V, k) * dV);
+		D[i + 1] = V[k] - L[k];
 		i += 2;
 	}
-	D[12] = 0; D[13] = 1;
+	D[12] = 0;
+	D[13] = 1;
 	return true;
 }
 

@@ -72,12 +72,24 @@ export function sublimationAt(fl: Fluid, T: number): number | null {
 const MELT_TOL = 1e-9;
 
 /** Whether (T, P) lies in the solid region (see the module comment). */
+interface SolidCache {
+	lines: SolidLines | undefined;
+	Pt: number;
+}
+
+function cached(fl: Fluid): SolidCache {
+	let c = fl.cache.solid as SolidCache | undefined;
+	if (!c) {
+		c = { lines: solidLines(fl), Pt: triplePressure(fl) };
+		fl.cache.solid = c;
+	}
+	return c;
+}
+
 export function isSolid(fl: Fluid, T: number, P: number): boolean {
-	const lines = solidLines(fl);
-	if (!lines) return false;
-	// the solid region starts above the triple-point pressure: gas below it is never solid here
-	const Pt = triplePressure(fl);
-	if (P <= Pt) return false;
+	const { lines, Pt } = cached(fl);
+	// no curve, or below the triple-point pressure (gas): never solid here
+	if (!lines || P <= Pt) return false;
 	const p = pieceAt(lines.melting.pieces, T, fl.Tt);
 	if (!p) return false;
 	return P > Math.max(piecePressure(p, T), Pt) * (1 + MELT_TOL);
