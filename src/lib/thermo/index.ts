@@ -17,7 +17,7 @@ import { computeLeg as computeLegImpl } from './solvers/legs.ts';
 import { stateExtras as stateExtrasOf } from './solvers/path.ts';
 import { checkSaturationP } from './solvers/range.ts';
 import { satAtP, satAtT } from './solvers/saturation.ts';
-import { isSolid, meltingAt, sublimationAt } from './solvers/solid.ts';
+import { isSolid, meltingAt, meltingLine, sublimationAt } from './solvers/solid.ts';
 import { fmt } from './errors.ts';
 import type { FixOptions, FluidInfo, Inputs, Leg, LegSpec, Saturation, SaturationCurve, State } from './types.ts';
 
@@ -158,4 +158,8 @@ export function sublimationPressure(fluid: string, T: number): number | null {
 /** Whether (T, P) is beyond the melting curve (solid): fixState refuses such states with `solid-region`. */
 export function isSolidAt(fluid: string, T: number, P: number): boolean {
 	return isSolid(getCompiledFluid(fluid), T, P);
+}
+/** Liquid states along the melting curve (for drawing it on T–v and P–v), up to the formulation's Pmax; [] without a curve. */
+export function meltingCurve(fluid: string, points = 60): State[] {
+	return meltingLine(getCompiledFluid(fluid), points);
 }

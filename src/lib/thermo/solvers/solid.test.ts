@@ -3,7 +3,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from '../errors.ts';
-import { fixState, isSolidAt, meltingPressure, sublimationPressure } from '../index.ts';
+import { fixState, isSolidAt, meltingCurve, meltingPressure, sublimationPressure } from '../index.ts';
 import { getCompiledFluid } from '../registry.ts';
 import { choose } from './choose.ts';
 import { piecePressure, solidLines } from './solid.ts';
@@ -102,5 +102,24 @@ describe('other fluids', () => {
 		const none = () => new ThermoError('inconsistent-inputs', 'none', 'none');
 		expect(choose(fl, [liquid, ice], undefined, 'test inputs', none)).toBe(liquid);
 		expect(() => choose(fl, [ice], undefined, 'test inputs', none)).toThrow(/solid, not a fluid/);
+	});
+});
+
+describe('meltingCurve (for drawing)', () => {
+	it('water: compressed liquid just below the ice V/VI melting pressure up to the 1 GPa limit', () => {
+		const line = meltingCurve('water', 20);
+		expect(line.length).toBeGreaterThan(15);
+		for (const s of line) {
+			expect(s.phase).toBe('compressed-liquid');
+			expect(s.P).toBeLessThanOrEqual(1e9);
+			expect(isSolidAt('water', s.T, s.P * 1.001)).toBe(true);
+		}
+		// IAPWS R14-08(2011) eq. (4): ice VI melts at 1 GPa near 300 K (python3-iapws 1.5.2 (Debian): _Melting_Pressure(300) = 996.1095 MPa)
+		expect(line[line.length - 1].T).toBeGreaterThan(295);
+		expect(line[line.length - 1].T).toBeLessThan(305);
+	});
+
+	it('is empty for R-134a, which has no melting curve', () => {
+		expect(meltingCurve('r134a', 10)).toEqual([]);
 	});
 });

@@ -10,6 +10,7 @@ import type { Fluid } from '../fluid.ts';
 import { SOLID_LINES } from '../fluids/solid-lines.ts';
 import type { SolidLinePiece, SolidLines } from '../fluids/schema.ts';
 import type { State } from '../types.ts';
+import { fixStateOf } from './fix-state.ts';
 import { triplePressure } from './saturation.ts';
 
 /** The fluid's solid lines, if it has any. */
@@ -110,4 +111,37 @@ export function solidError(fl: Fluid, T: number, P: number, what?: string): Ther
 export function assertFluid(fl: Fluid, s: State, what?: string): State {
 	if (isSolid(fl, s.T, s.P)) throw solidError(fl, s.T, s.P, what);
 	return s;
+}
+
+/**
+ * The liquid along the melting curve, for drawing: `points` states at temperatures from the
+ * triple point up to where the melting pressure reaches the formulation's Pmax (or the curve or
+ * Tmax ends), each the fluid just below its melting pressure. Empty for a fluid without a curve.
+ */
+export function meltingLine(fl: Fluid, points: number): State[] {
+	const lines = cached(fl).lines;
+	if (!lines) return [];
+	// highest temperature with a melting pressure inside the range: bisection on P_m(T) = Pmax
+	let lo = fl.Tt, hi = fl.Tmax;
+	const Pm = (T: number) => meltingAt(fl, T)?.P ?? Infinity;
+	if (Pm(hi) <= fl.Pmax) lo = hi;
+	else
+		for (let k = 0; k < 60; k++) {
+			const m = 0.5 * (lo + hi);
+			if (Pm(m) <= fl.Pmax) lo = m;
+			else hi = m;
+		}
+	const out: State[] = [];
+	const Pt = cached(fl).Pt;
+	for (let i = 0; i < points; i++) {
+		const T = fl.Tt + ((lo - fl.Tt) * i) / Math.max(1, points - 1);
+		const P = Math.max(Pm(T), Pt) * (1 - 1e-9);
+		if (!(P > Pt * (1 + 1e-9)) || !Number.isFinite(P)) continue;
+		try {
+			out.push(fixStateOf(fl, { T, P }));
+		} catch {
+			// a point the equation cannot place (at its limits) is left out of the drawing
+		}
+	}
+	return out;
 }
