@@ -129,6 +129,8 @@ export interface SaturationCurve {
 	vapor: State[];
 	/** the equation's own critical point (FluidInfo.equationCritical), where both curves end */
 	critical: State;
+	/** the liquid along the melting curve from the triple point up to the formulation's Pmax, for drawing; empty for a fluid without one */
+	melting?: State[];
 }
 
 export type Process = 'isobaric' | 'isochoric' | 'isothermal' | 'isentropic' | 'isenthalpic' | 'polytropic';

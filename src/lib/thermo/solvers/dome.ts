@@ -102,7 +102,8 @@ const TOUCH = 1e-10;
 
 /**
  * Whether the cubic through nodes i−1 … i+2 (shifted at the ends) keeps clearly away from zero on
- * [T_i, T_i+1]: its extremum there stays on G's side by more than a quarter of the smaller end value.
+ * [T_i, T_i+1]: its extremum there stays on G's side by more than a quarter of the smaller end value
+ * and more than the interpolation can be off (1 % of the larger).
  */
 function nodeCubicClear(T: Float64Array, G: Float64Array, i: number, n: number): boolean {
 	if (n < 4) return false;
@@ -120,7 +121,8 @@ function nodeCubicClear(T: Float64Array, G: Float64Array, i: number, n: number):
 		if (v < 0 !== Ga < 0) return false;
 		if (Math.abs(v) < Math.abs(ext)) ext = v;
 	}
-	return Math.abs(ext) > 0.25 * Math.min(Math.abs(Ga), Math.abs(Gb));
+	// clear only when short of zero beyond the interpolation's own error (a fraction of G's size)
+	return Math.abs(ext) > 0.25 * Math.min(Math.abs(Ga), Math.abs(Gb)) && Math.abs(ext) > 1e-2 * Math.max(Math.abs(Ga), Math.abs(Gb));
 }
 
 /** Whether |G| has a local minimum at node i (an end node counts with its one neighbour) that is small against G's local change. */
@@ -266,15 +268,27 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		// |G| must fall leaving Ta and rise arriving at Tb
 		if (!(da < 0 === Ga > 0) || !(db < 0 === Gb < 0)) return;
 		// the cubic through both ends' values and slopes (accurate to h⁴ on these node spacings)
-		// bounds the extremum: clearly short of zero, there is nothing to look for
+		// bounds the extremum: clearly short of zero, there is nothing to look for. Its extremum
+		// from G'(t) = c1 + 2c2·t + 3c3·t² = 0 on 0 < t < 1.
 		const h = Tb - Ta;
-		let ext = Ga < 0 ? -Infinity : Infinity;
-		for (let k = 1; k < 16; k++) {
-			const t = k / 16, t2 = t * t, t3 = t2 * t;
-			const G = (2 * t3 - 3 * t2 + 1) * Ga + (t3 - 2 * t2 + t) * h * da + (-2 * t3 + 3 * t2) * Gb + (t3 - t2) * h * db;
-			ext = Ga < 0 ? Math.max(ext, G) : Math.min(ext, G);
+		const c1 = h * da, c2 = 3 * (Gb - Ga) - h * (2 * da + db), c3 = 2 * (Ga - Gb) + h * (da + db);
+		let ext = Ga;
+		const at = (t: number) => {
+			if (t > 0 && t < 1) {
+				const G = Ga + t * (c1 + t * (c2 + t * c3));
+				if (Math.abs(G) < Math.abs(ext) || G < 0 !== Ga < 0) ext = G;
+			}
+		};
+		if (c3 === 0) at(-c1 / (2 * c2));
+		else {
+			const disc = c2 * c2 - 3 * c3 * c1;
+			if (disc >= 0) {
+				const r = Math.sqrt(disc);
+				at((-c2 + r) / (3 * c3));
+				at((-c2 - r) / (3 * c3));
+			}
 		}
-		if (ext < 0 === Ga < 0 && Math.abs(ext) > 0.05 * Math.min(Math.abs(Ga), Math.abs(Gb))) return;
+		if (ext < 0 === Ga < 0 && Math.abs(ext) > 0.05 * Math.min(Math.abs(Ga), Math.abs(Gb)) && Math.abs(ext) > 1e-3 * Math.max(Math.abs(Ga), Math.abs(Gb))) return;
 		let lo = Ta, hi = Tb, m = 0.5 * (lo + hi);
 		for (let k = 0; k < 80; k++) {
 			m = 0.5 * (lo + hi);

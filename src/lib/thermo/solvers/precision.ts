@@ -25,10 +25,10 @@ const EPS = Number.EPSILON;
  * An estimate (the ideal and residual parts of α and their τ-derivatives reach tens of R·T in a
  * dense liquid); the round-trip tests check that answers stay within the stated precision.
  */
-const ENERGY_TERMS = 64;
+const ENERGY_TERMS = 256;
 /**
  * The same for s, whose sum (τα_τ − α) cancels harder in a cold liquid: a larger allowance, set so
- * that the seeded region-mix runs (25,000 re-fixes) stay within their stated precision.
+ * that the seeded region-mix runs (125,000 re-fixes) stay within their stated precision.
  */
 const ENTROPY_TERMS = 1024;
 

@@ -3,7 +3,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from '../errors.ts';
-import { fixState, isSolidAt, meltingCurve, meltingPressure, sublimationPressure } from '../index.ts';
+import { fixState, isSolidAt, meltingCurve, meltingPressure, saturationCurve, sublimationPressure } from '../index.ts';
 import { getCompiledFluid } from '../registry.ts';
 import { choose } from './choose.ts';
 import { piecePressure, solidLines } from './solid.ts';
@@ -121,5 +121,14 @@ describe('meltingCurve (for drawing)', () => {
 
 	it('is empty for R-134a, which has no melting curve', () => {
 		expect(meltingCurve('r134a', 10)).toEqual([]);
+	});
+});
+
+describe('saturationCurve carries the melting curve for the charts', () => {
+	it('water: liquid states along ice V/VI up to 1 GPa; R-134a: none', () => {
+		const w = saturationCurve('water', 10).melting ?? [];
+		expect(w.length).toBeGreaterThan(20);
+		expect(w.every((s) => s.phase === 'compressed-liquid' && s.P > 6e8)).toBe(true);
+		expect(saturationCurve('r134a', 10).melting).toEqual([]);
 	});
 });
