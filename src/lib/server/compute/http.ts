@@ -120,7 +120,7 @@ function refuseQuery(url: URL): void {
 		throw new AppError(
 			400,
 			'invalid-input',
-			`Unknown query parameter${names.length > 1 ? 's' : ''} ${names.map((n) => `"${n.slice(0, 40)}"`).join(', ')}: this route takes its request in the JSON body, in SI units only.`
+			`Unknown field${names.length > 1 ? 's' : ''} ${names.map((n) => `"${n.slice(0, 40)}"`).join(', ')} in the query: this route takes its request in the JSON body, in SI units only.`
 		);
 }
 

@@ -255,6 +255,6 @@ export const noQuerySchema = z.strictObject(
 	{},
 	{
 		error: (iss: { code?: string; keys?: string[] }) =>
-			`Unknown query parameter${(iss.keys?.length ?? 0) > 1 ? 's' : ''} ${(iss.keys ?? []).map((k) => `"${k.slice(0, 40)}"`).join(', ')}: this route takes none (every answer is SI).`
+			`Unknown field${(iss.keys?.length ?? 0) > 1 ? 's' : ''} ${(iss.keys ?? []).map((k) => `"${k.slice(0, 40)}"`).join(', ')} in the query: this route takes no query parameters (every answer is SI).`
 	}
 );
