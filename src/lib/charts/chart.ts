@@ -190,6 +190,7 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	const gIso = clipped.append('g').attr('mask', `url(#${uid}-isomask)`);
 	const domeLine = clipped.append('path').attr('class', 'swc-dome-line');
 	const tripleLine = clipped.append('line').attr('class', 'swc-triple');
+	const meltingLine = clipped.append('path').attr('class', 'swc-melting');
 	const gLimits = clipped.append('g');
 	const gLegs = clipped.append('g');
 	const gTraces = clipped.append('g');
@@ -411,6 +412,9 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 
 	function drawDome() {
 		const sat = frame!.saturation;
+		// the fluid ends at the melting curve: drawn where it falls in view (clipped like the dome)
+		const melt = sat?.melting ?? [];
+		meltingLine.attr('d', melt.length > 1 ? polylineD(melt.map(project)) : null);
 		if (!sat || sat.liquid.length < 2 || sat.vapor.length < 2) {
 			domeFill.attr('d', null);
 			domeLine.attr('d', null);

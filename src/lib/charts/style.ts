@@ -35,6 +35,7 @@ export const DRAWING_CSS = `
 .swc-drawing .swc-dome-fill { fill: ${v.dome}; stroke: none; }
 .swc-drawing .swc-dome-line { fill: none; stroke: ${v.ink}; stroke-width: 1.5; stroke-linejoin: round; }
 .swc-drawing .swc-triple { stroke: ${v.inkSoft}; stroke-width: 0.9; stroke-dasharray: 1 3; stroke-linecap: round; }
+.swc-drawing .swc-melting { fill: none; stroke: ${v.inkSoft}; stroke-width: 1; stroke-dasharray: 5 2 1 2; stroke-linejoin: round; }
 .swc-drawing .swc-isoline { fill: none; stroke: ${v.inkFaint}; stroke-width: 0.7; }
 .swc-drawing .swc-iso-label { font-family: ${MONO}; font-size: 9.5px; fill: ${v.inkSoft}; ${halo} }
 .swc-drawing .swc-limit { fill: none; stroke: ${v.caution}; stroke-linecap: butt; }

@@ -9,6 +9,8 @@ export interface SaturationCurve {
 	liquid: State[];
 	vapor: State[];
 	critical: State;
+	/** the liquid along the melting curve (drawn where it falls in view); absent or empty without one */
+	melting?: State[];
 }
 
 export interface TriplePoint {

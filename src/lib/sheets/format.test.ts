@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { unitPrefs } from '$lib/units';
-import { cellText, columnUnitLabel, compactQuantity, specificEnergy, specificEntropy, tidy, total, totalUnit } from './format';
+import { cellText, columnUnitLabel, compactQuantity, precisionNotes, specificEnergy, specificEntropy, tidy, total, totalUnit } from './format';
 import type { State } from '$lib/thermo/types';
 
 const state: State = { fluid: 'water', phase: 'superheated-vapor', T: 453.15, P: 1e6, v: 0.19444, rho: 5.143, u: 2583.9e3, h: 2778.3e3, s: 6.5864e3, x: null, cp: 2.6e3, cv: 1.7e3, w: 500 };
@@ -33,5 +33,14 @@ describe('table formatting', () => {
 	it('prose quantities drop trailing zeros', () => {
 		expect(compactQuantity(0.5, 'volume', unitPrefs())).toBe('0.5\u00a0m³');
 		expect(compactQuantity(0.04, 'massFlow', unitPrefs())).toBe('0.04\u00a0kg/s');
+	});
+});
+
+describe('precisionNotes', () => {
+	it('says how loosely the inputs fix T, P or v only past 1 ppm', () => {
+		expect(precisionNotes(undefined)).toEqual([]);
+		expect(precisionNotes({ T: 2e-16, P: 5e-7, v: 1e-9 })).toEqual([]);
+		expect(precisionNotes({ T: 4.9e-11, P: 0.011175, v: 4.5e-9 })).toEqual(['P uncertain by ±1.1 % (the given pair barely fixes it)']);
+		expect(precisionNotes({ T: 2e-6, P: 1, v: 3e-5 }).map((s) => s.split(' ')[0])).toEqual(['T', 'P', 'v']);
 	});
 });

@@ -96,6 +96,17 @@ export function phaseText(p: Phase): string {
 	return PHASE[p];
 }
 
+/** Relative uncertainty past which the state table says how loosely the inputs fix T, P or v. */
+export const PRECISION_SHOWN = 1e-6;
+
+/** "P uncertain by ±0.89 % (…)" for each of T, P, v the state's inputs fix worse than PRECISION_SHOWN. */
+export function precisionNotes(precision: State['precision']): string[] {
+	if (!precision) return [];
+	return (['T', 'P', 'v'] as const)
+		.filter((k) => precision[k] > PRECISION_SHOWN)
+		.map((k) => `${k} uncertain by ±${Number((precision[k] * 100).toPrecision(2))} % (the given pair barely fixes it)`);
+}
+
 /** A value with its unit, trailing zeros trimmed ("0.5 m³", "12 kg", "0.04 kg/s"): for prose, not for tables. */
 export function compactQuantity(si: number, q: Quantity, prefs: UnitPrefs): string {
 	const f = formatQuantity(si, q, prefs, { sig: 4 });

@@ -3,7 +3,7 @@
  * and never a NaN or Infinity in a returned state (random inputs through every pair).
  */
 import { describe, expect, it } from 'vitest';
-import { ThermoError, type ThermoErrorCode } from './errors.ts';
+import { ThermoError, fmt, type ThermoErrorCode } from './errors.ts';
 import { fixState, getFluid, saturationAtP, saturationAtT, saturationCurve } from './index.ts';
 import { water } from './fluids/water.ts';
 import { expectFinite, PAIRS } from './pairs.test-support.ts';
@@ -138,5 +138,40 @@ describe('no NaN or Infinity ever returned', () => {
 		}
 		expect(states).toBeGreaterThan(50);
 		expect(refusals).toBeGreaterThan(50);
+	});
+});
+
+describe('message numbers never contradict the message', () => {
+	function message(f: () => unknown): string {
+		try {
+			f();
+		} catch (e) {
+			return (e as Error).message + ' ' + (e as ThermoError).hint;
+		}
+		throw new Error('expected a ThermoError');
+	}
+
+	it('prints as many digits as it takes to differ from the bound it is compared with', () => {
+		expect(fmt(1 + 1e-12, 0, 1)).not.toBe('1');
+		expect(fmt(101325)).toBe('101325');
+		expect(fmt(1 + 1e-12, 0, 1)).toBe(String(1 + 1e-12));
+		expect(fmt(2.5e7)).toBe('2.5e+7');
+		expect(fmt(1.0000001e9, 1e9)).toBe('1.0000001e+9');
+	});
+
+	it('a quality just above 1, a T just below the triple point, a P just above the limit', () => {
+		const x = 1 + 2 ** -40;
+		expect(message(() => fixState('water', { T: 300, x }))).toContain(`got ${fmt(x)}`);
+		expect(message(() => fixState('water', { T: 300, x }))).not.toMatch(/got 1\)/);
+		const T = 273.16 * (1 - 1e-11);
+		const m = message(() => fixState('water', { T, P: 1e5 }));
+		// the given T and the triple-point T print differently
+		const printed = [...m.matchAll(/T = ([0-9.e+-]+) K/g)].map((r) => r[1]);
+		expect(printed.length).toBeGreaterThan(0);
+		expect(m).toContain('273.16 K');
+		expect(printed[0]).not.toBe('273.16');
+		const P = 1e9 * (1 + 1e-10);
+		const mp = message(() => fixState('water', { T: 300, P }));
+		expect(mp).not.toMatch(/P = 1e\+9 Pa is above/);
 	});
 });

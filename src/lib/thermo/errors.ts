@@ -20,6 +20,8 @@ export type ThermoErrorCode =
 	| 'non-positive-input'
 	/** temperature below the triple point, or pressure below the triple-point pressure where only solid or vapor exists */
 	| 'below-triple-point'
+	/** beyond the melting curve: the substance is solid there (a fluid-only engine refuses it) */
+	| 'solid-region'
 	/** outside the formulation's range of validity (T above Tmax, P above Pmax, or the state these inputs imply lies outside) */
 	| 'out-of-range'
 	/** T and P given on the saturation line: they are not independent there */
@@ -28,6 +30,8 @@ export type ThermoErrorCode =
 	| 'quality-out-of-range'
 	/** no fluid state has both inputs (e.g. a quality above the critical temperature) */
 	| 'inconsistent-inputs'
+	/** every state with these inputs lies outside the requested window (options.window) */
+	| 'outside-window'
 	/** two states have these inputs; `candidates` names them, `options.hint` chooses */
 	| 'ambiguous-state'
 	/** an unknown value of an option (e.g. `hint`) */
@@ -97,10 +101,23 @@ export class ThermoError extends Error {
 	}
 }
 
-/** Short number formatting for messages (4 significant digits, SI). */
-export function fmt(x: number): string {
+/**
+ * Numbers for messages, the one formatter of the engine: 6 significant digits (101325 Pa stays
+ * 101325), exponent form outside 1e−3…1e6 — and as many more digits (up to the 17 that identify
+ * a double) as it takes to print x differently from each number in `distinctFrom` that differs
+ * from it, so a message never contradicts itself ("x must lie between 0 and 1 (got 1)").
+ */
+export function fmt(x: number, ...distinctFrom: number[]): string {
+	if (!Number.isFinite(x)) return String(x);
+	for (let digits = 6; ; digits++) {
+		const s = fmtDigits(x, digits);
+		if (digits >= 17 || !distinctFrom.some((y) => y !== x && fmtDigits(y, digits) === s)) return s;
+	}
+}
+
+function fmtDigits(x: number, digits: number): string {
 	if (!Number.isFinite(x)) return String(x);
 	const a = Math.abs(x);
-	if (a !== 0 && (a >= 1e6 || a < 1e-3)) return x.toPrecision(4);
-	return Number(x.toPrecision(5)).toString();
+	if (a !== 0 && (a >= 1e6 || a < 1e-3)) return x.toExponential(digits - 1).replace(/\.?0+e/, 'e');
+	return Number(x.toPrecision(digits)).toString();
 }

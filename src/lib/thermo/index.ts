@@ -17,6 +17,7 @@ import { computeLeg as computeLegImpl } from './solvers/legs.ts';
 import { stateExtras as stateExtrasOf } from './solvers/path.ts';
 import { checkSaturationP } from './solvers/range.ts';
 import { satAtP, satAtT } from './solvers/saturation.ts';
+import { isSolid, meltingAt, meltingLine, sublimationAt } from './solvers/solid.ts';
 import { fmt } from './errors.ts';
 import type { FixOptions, FluidInfo, Inputs, Leg, LegSpec, Saturation, SaturationCurve, State } from './types.ts';
 
@@ -142,3 +143,23 @@ export { PROCESSES, TARGET_NAMES, SAMPLES_DEFAULT, SAMPLES_MIN, SAMPLES_MAX, N_M
  * the dome (solvers/isolines.ts).
  */
 export { isolines, ISOLINE_KINDS, ISOLINE_POINTS_DEFAULT, ISOLINE_POINTS_MIN, ISOLINE_POINTS_MAX, ISOLINE_VALUES_MAX } from './solvers/isolines.ts';
+
+/**
+ * Melting pressure (Pa) of `fluid` at T (K) and the solid beyond it — the curve bounding fluid
+ * states from above (published melting equations, fluids/solid-lines.ts) — or null where the
+ * fluid has no melting curve at T. Sublimation pressure below the triple point likewise.
+ */
+export function meltingPressure(fluid: string, T: number): { P: number; solid: string } | null {
+	return meltingAt(getCompiledFluid(fluid), T);
+}
+export function sublimationPressure(fluid: string, T: number): number | null {
+	return sublimationAt(getCompiledFluid(fluid), T);
+}
+/** Whether (T, P) is beyond the melting curve (solid): fixState refuses such states with `solid-region`. */
+export function isSolidAt(fluid: string, T: number, P: number): boolean {
+	return isSolid(getCompiledFluid(fluid), T, P);
+}
+/** Liquid states along the melting curve (for drawing it on T–v and P–v), up to the formulation's Pmax; [] without a curve. */
+export function meltingCurve(fluid: string, points = 60): State[] {
+	return meltingLine(getCompiledFluid(fluid), points);
+}

@@ -82,11 +82,19 @@ export function isCriticalPoint(fl: Fluid, T: number, rho: number): boolean {
 	return Math.abs(T / fl.Tc - 1) <= CRITICAL_BAND && Math.abs(rho / fl.rhoc - 1) <= 1e-7;
 }
 
-/** State of a single-phase point (evaluated at order 2). */
+/**
+ * State of a single-phase point (evaluated at order 2). Derived properties (types.ts State):
+ *   Z = P/(ρRT),  κ_T = 1/(ρ(∂P/∂ρ)_T),  α_V = (∂P/∂T)_ρ/(ρ(∂P/∂ρ)_T),
+ *   μ_JT = (T·α_V − 1)/(ρ·cp),  γ_s = ρw²/P,  (∂P/∂T)_v = (∂P/∂T)_ρ
+ * (IAPWS R6-95(2018), Table 3 relations). `hfg` is set by saturatedState on the lines.
+ */
 export function singleState(fl: Fluid, p: Point, phase: Phase, x: number | null = null, P = p.P): State {
 	const crit = isCriticalPoint(fl, p.T, p.rho);
 	const cp = crit || !(p.cp > 0) ? null : finiteOrNull(p.cp);
 	const w = crit ? null : finiteOrNull(p.w);
+	const stable = !crit && p.dPdrho > 0;
+	const kappaT = stable ? finiteOrNull(1 / (p.rho * p.dPdrho)) : null;
+	const alphaV = stable ? finiteOrNull(p.dPdT / (p.rho * p.dPdrho)) : null;
 	return assertFinite(fl, {
 		fluid: fl.id,
 		phase,
@@ -100,7 +108,14 @@ export function singleState(fl: Fluid, p: Point, phase: Phase, x: number | null 
 		x,
 		cp,
 		cv: crit ? null : finiteOrNull(p.cv),
-		w
+		w,
+		Z: finiteOrNull(P / (p.rho * fl.R * p.T)),
+		kappaT,
+		alphaV,
+		muJT: alphaV !== null && cp !== null ? finiteOrNull((p.T * alphaV - 1) / (p.rho * cp)) : null,
+		gammaS: w !== null && P > 0 ? finiteOrNull((p.rho * w * w) / P) : null,
+		dPdT: crit ? null : finiteOrNull(p.dPdT),
+		hfg: null
 	});
 }
 
@@ -119,6 +134,14 @@ export function criticalState(fl: Fluid): State {
 
 const sL = new Point();
 const sV = new Point();
+/** what sL and sV hold (saturatedState) */
+let memoFluid: Fluid | null = null;
+let memoT = 0, memoL = 0, memoV = 0;
+
+/** The saturated liquid and vapor points (order 2) the last saturatedState call evaluated at T, if that was for this fluid and T. */
+export function lastSaturatedPhases(fl: Fluid, T: number): [Point, Point] | null {
+	return memoFluid === fl && memoT === T ? [sL, sV] : null;
+}
 
 /**
  * State on or inside the dome at a solved saturation point, quality x ∈ [0, 1]:
@@ -132,10 +155,20 @@ const sV = new Point();
 export function saturatedState(fl: Fluid, sat: SatPoint, x: number, pL?: Point, pV?: Point): State {
 	if (sat.rhoL === sat.rhoV) return criticalState(fl);
 	const T = sat.T;
-	if (x <= 0) return singleState(fl, pL ?? evalPoint(fl, T, sat.rhoL, sL, 2), 'saturated-liquid', 0, sat.P);
-	if (x >= 1) return singleState(fl, pV ?? evalPoint(fl, T, sat.rhoV, sV, 2), 'saturated-vapor', 1, sat.P);
-	const L = pL ?? evalPoint(fl, T, sat.rhoL, sL, 2);
-	const V = pV ?? evalPoint(fl, T, sat.rhoV, sV, 2);
+	// both phases are needed on either line (hfg); the liquid and vapor of one saturation asked
+	// for one after the other (saturationAtT, a leg's crossings) are evaluated once
+	const again = !pL && !pV && memoFluid === fl && memoT === T && memoL === sat.rhoL && memoV === sat.rhoV;
+	const L = pL ?? (again ? sL : evalPoint(fl, T, sat.rhoL, sL, 2));
+	const V = pV ?? (again ? sV : evalPoint(fl, T, sat.rhoV, sV, 2));
+	if (!pL && !pV) {
+		memoFluid = fl;
+		memoT = T;
+		memoL = sat.rhoL;
+		memoV = sat.rhoV;
+	} else memoFluid = null;
+	const hfg = finiteOrNull(V.h - L.h);
+	if (x <= 0) return { ...singleState(fl, L, 'saturated-liquid', 0, sat.P), hfg };
+	if (x >= 1) return { ...singleState(fl, V, 'saturated-vapor', 1, sat.P), hfg };
 	const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
 	const v = vL + x * (vV - vL);
 	const dPs = (V.s - L.s) / (vV - vL);
@@ -157,7 +190,14 @@ export function saturatedState(fl: Fluid, sat: SatPoint, x: number, pL?: Point, 
 		x,
 		cp: null,
 		cv: finiteOrNull(cv),
-		w: null
+		w: null,
+		Z: finiteOrNull((sat.P * v) / (fl.R * T)),
+		kappaT: null,
+		alphaV: null,
+		muJT: null,
+		gammaS: null,
+		dPdT: finiteOrNull(dPs),
+		hfg
 	});
 }
 

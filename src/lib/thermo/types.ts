@@ -43,6 +43,36 @@ export interface State {
 	cv: number | null;
 	/** speed of sound, m/s; null inside the dome */
 	w: number | null;
+	// Derived properties (from the same Helmholtz derivatives; properties.ts). The engine always
+	// sets them; they are optional in the type only so that states stored before they existed
+	// (revisions, fixtures) still type-check.
+	/** compressibility factor Z = P·v/(R·T), dimensionless */
+	Z?: number | null;
+	/** isothermal compressibility κ_T = −(1/v)(∂v/∂P)_T = 1/(ρ·(∂P/∂ρ)_T), 1/Pa; null inside the dome */
+	kappaT?: number | null;
+	/** volume expansivity α_V = (1/v)(∂v/∂T)_P = (∂P/∂T)_ρ/(ρ·(∂P/∂ρ)_T), 1/K; null inside the dome */
+	alphaV?: number | null;
+	/** Joule–Thomson coefficient μ_JT = (∂T/∂P)_h = (T·α_V − 1)/(ρ·cp), K/Pa; null inside the dome */
+	muJT?: number | null;
+	/** isentropic exponent γ_s = −(v/P)(∂P/∂v)_s = ρ·w²/P (cp/cv for an ideal gas), dimensionless; null inside the dome */
+	gammaS?: number | null;
+	/** (∂P/∂T)_v, Pa/K; inside the dome the slope of the saturation curve dPs/dT (Clapeyron) */
+	dPdT?: number | null;
+	/** latent heat of vaporization h'' − h' at the state's temperature, J/kg; only on and inside the dome, else null */
+	hfg?: number | null;
+	/**
+	 * How well the two inputs determine the state (fixState answers only): the relative
+	 * uncertainty of T, P and v that the pair's conditioning implies in double precision
+	 * (solvers/precision.ts). 2.2e−16 for a perfectly conditioned pair; up to 1.
+	 */
+	precision?: Precision;
+}
+
+/** Relative uncertainties (dimensionless) of T, P and v; see State.precision. */
+export interface Precision {
+	T: number;
+	P: number;
+	v: number;
 }
 
 /**
@@ -65,6 +95,20 @@ export interface FixOptions {
 	 * of a previous state (e.g. while dragging). Three or more candidates can only be told apart this way.
 	 */
 	near?: { T?: number; P?: number };
+	/**
+	 * Where to look: candidates outside these bounds (T in K, P in Pa, each optional) are not
+	 * answers. The default is the formulation's whole range, so nothing is excluded silently; a
+	 * window that excludes every state is refused with `outside-window` naming what lies outside.
+	 */
+	window?: StateWindow;
+}
+
+/** Bounds on the answer of fixState (see FixOptions.window). */
+export interface StateWindow {
+	Tmin?: number;
+	Tmax?: number;
+	Pmin?: number;
+	Pmax?: number;
 }
 
 /** Saturation at one temperature: the saturated liquid and vapor states (phase saturated-liquid / -vapor). */
@@ -85,6 +129,8 @@ export interface SaturationCurve {
 	vapor: State[];
 	/** the equation's own critical point (FluidInfo.equationCritical), where both curves end */
 	critical: State;
+	/** the liquid along the melting curve from the triple point up to the formulation's Pmax, for drawing; empty for a fluid without one */
+	melting?: State[];
 }
 
 export type Process = 'isobaric' | 'isochoric' | 'isothermal' | 'isentropic' | 'isenthalpic' | 'polytropic';

@@ -7,7 +7,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from './errors.ts';
-import { fixState } from './index.ts';
+import { fixState, isSolidAt } from './index.ts';
 import { PAIRS, expectFinite, inputsFrom, relErr, solveLike, spread } from './pairs.test-support.ts';
 import type { Phase } from './types.ts';
 
@@ -59,6 +59,10 @@ function phaseOf(r: Row): Phase | null {
 	return null;
 }
 
+/** rows beyond the melting curve (python3-iapws does not check it) are ice: refused, tested below */
+const fluidRows = fixture.singlePhase.filter((r) => !isSolidAt('water', r.T, r.P));
+const solidRows = fixture.singlePhase.filter((r) => isSolidAt('water', r.T, r.P));
+
 describe('water against python3-iapws (fixture)', () => {
 	it('has a fixture of a few hundred rows over every region', () => {
 		expect(fixture.source).toMatch(/python3-iapws/);
@@ -69,7 +73,7 @@ describe('water against python3-iapws (fixture)', () => {
 	});
 
 	it('matches every single-phase row from (T, rho): P, u, h, s, cv, cp, w to 1e-9 and the phase', () => {
-		for (const r of fixture.singlePhase) {
+		for (const r of fluidRows) {
 			const st = fixState('water', { T: r.T, rho: r.rho });
 			expectFinite(st);
 			const where = `${r.region} T=${r.T} rho=${r.rho}`;
@@ -84,7 +88,7 @@ describe('water against python3-iapws (fixture)', () => {
 
 	it('returns every single-phase row through all 21 input pairs (1e-6 relative)', () => {
 		let hinted = 0;
-		for (const r of fixture.singlePhase) {
+		for (const r of fluidRows) {
 			for (const [a, b] of PAIRS) {
 				if (a === 'x' || b === 'x') continue;
 				const where = `${r.region} T=${r.T} P=${r.P} from (${a}, ${b})`;
@@ -158,5 +162,12 @@ describe('water against python3-iapws (fixture)', () => {
 				expect(Math.abs((st.x as number) - r.x), `${where} x`).toBeLessThan(1e-5);
 			}
 		}
+	});
+});
+
+describe('water fixture rows beyond the melting curve', () => {
+	it('are refused as solid (IAPWS R14-08(2011) melting curves of ices V, VI, VII)', () => {
+		expect(solidRows.length).toBeGreaterThan(0);
+		for (const r of solidRows) expect(() => fixState('water', { T: r.T, rho: r.rho }), `T=${r.T} P=${r.P}`).toThrow(/solid, not a fluid/);
 	});
 });

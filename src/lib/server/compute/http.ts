@@ -181,12 +181,24 @@ export function readQuery<S extends z.ZodType>(url: URL, schema: S): z.infer<S> 
 	return schema.parse(obj);
 }
 
+/** POST compute routes take everything in the JSON body: a query parameter is refused by name, never ignored. */
+function refuseQuery(url: URL): void {
+	const names = [...new Set(url.searchParams.keys())];
+	if (names.length > 0)
+		throw new AppError(
+			400,
+			'invalid-input',
+			`Unknown field${names.length > 1 ? 's' : ''} ${names.map((n) => `"${n.slice(0, 40)}"`).join(', ')} in the query: this route takes its request in the JSON body, in SI units only.`
+		);
+}
+
 /** A POST compute route: rate limit, then the handler's object as JSON, errors in the shape. */
 export function computePost<E extends RequestEvent>(handler: (event: E) => Promise<unknown> | unknown) {
 	return async (event: E): Promise<Response> => {
 		const limited = rateLimited(event);
 		if (limited) return limited;
 		try {
+			refuseQuery(event.url);
 			return json(await handler(event));
 		} catch (e) {
 			return computeError(e, event);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ZodError } from 'zod';
-import { isolineQuerySchema, legRequestSchema, pathRequestSchema, saturationQuerySchema, stateRequestSchema } from './schemas';
+import { isolineQuerySchema, legRequestSchema, noQuerySchema, pathRequestSchema, saturationQuerySchema, stateRequestSchema } from './schemas';
 import { MAX_BODY_BYTES, readBody, readQuery, thermoStatus } from './http';
 import { AppError } from '$lib/server/errors';
 
@@ -124,5 +124,18 @@ describe('compute body and query reading', () => {
 		expect(thermoStatus('target-is-invariant')).toBe(422);
 		expect(thermoStatus('two-phase-pressure-temperature')).toBe(422);
 		expect(thermoStatus('no-convergence')).toBe(422);
+	});
+});
+
+describe('query parameters are never ignored', () => {
+	it('a route without parameters refuses any, by name', () => {
+		let message = '';
+		try {
+			readQuery(new URL('http://127.0.0.1/api/v1/fluids?units=us'), noQuerySchema);
+		} catch (e) {
+			message = (e as ZodError).issues.map((i) => i.message).join(' ');
+		}
+		expect(message).toMatch(/"units"/);
+		expect(readQuery(new URL('http://127.0.0.1/api/v1/fluids'), noQuerySchema)).toEqual({});
 	});
 });

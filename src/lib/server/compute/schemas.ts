@@ -92,13 +92,38 @@ function needsN(o: { process: string; n?: number }, ctx: z.RefinementCtx) {
 	if (o.process !== 'polytropic' && o.n !== undefined) ctx.addIssue({ code: 'custom', path: ['n'], message: `n belongs to polytropic legs only; remove it for an ${o.process} leg.` });
 }
 
+const positive = (name: string, unit: string) => num(name, unit).positive({ error: `${name} must be positive (${unit}).` });
+
+/** `near`: the state to stay close to where several have the inputs (T K and/or P Pa). */
+const nearSchema = z.strictObject(
+	{ T: positive('near.T', 'K').optional(), P: positive('near.P', 'Pa, absolute').optional() },
+	{ error: objectError('near', '{ "T": 300, "P": 1e6 }', ['T', 'P']) }
+);
+
+/** `window`: bounds on the answer (T K, P Pa); roots outside are not answers. */
+const windowSchema = z
+	.strictObject(
+		{
+			Tmin: positive('window.Tmin', 'K').optional(),
+			Tmax: positive('window.Tmax', 'K').optional(),
+			Pmin: positive('window.Pmin', 'Pa, absolute').optional(),
+			Pmax: positive('window.Pmax', 'Pa, absolute').optional()
+		},
+		{ error: objectError('window', '{ "Pmin": 1e5, "Pmax": 1e7 }', ['Tmin', 'Tmax', 'Pmin', 'Pmax']) }
+	)
+	.refine((w) => !(w.Tmin !== undefined && w.Tmax !== undefined && w.Tmin > w.Tmax) && !(w.Pmin !== undefined && w.Pmax !== undefined && w.Pmin > w.Pmax), {
+		message: 'window is empty: give each lower bound (Tmin, Pmin) below its upper bound (Tmax, Pmax).'
+	});
+
 export const stateRequestSchema = z.strictObject(
 	{
 		fluid: fluidSchema,
 		inputs: inputsSchema,
-		hint: z.enum(['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'], { error: 'hint must be one of lower-T, higher-T, lower-P, higher-P, liquid-side, vapor-side.' }).optional()
+		hint: z.enum(['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'], { error: 'hint must be one of lower-T, higher-T, lower-P, higher-P, liquid-side, vapor-side.' }).optional(),
+		near: nearSchema.optional(),
+		window: windowSchema.optional()
 	},
-	{ error: objectError('the body', '{ "fluid": "water", "inputs": { "T": 450, "P": 1e6 } }', ['fluid', 'inputs', 'hint']) }
+	{ error: objectError('the body', '{ "fluid": "water", "inputs": { "T": 450, "P": 1e6 } }', ['fluid', 'inputs', 'hint', 'near', 'window']) }
 );
 
 export const legRequestSchema = z
@@ -107,8 +132,6 @@ export const legRequestSchema = z
 		{ error: objectError('the body', '{ "fluid": "water", "start": { "T": 300, "P": 101325 }, "process": "isobaric", "target": { "T": 500 } }', ['fluid', 'start', 'process', 'target', 'n', 'samples']) }
 	)
 	.superRefine(needsN);
-
-const positive = (name: string, unit: string) => num(name, unit).positive({ error: `${name} must be positive (${unit}).` });
 
 const systemSchema = z.discriminatedUnion(
 	'kind',
@@ -241,3 +264,12 @@ export const isolineQuerySchema = z.strictObject(
 
 export type LegRequest = z.infer<typeof legRequestSchema>;
 export type PathRequest = z.infer<typeof pathRequestSchema>;
+
+/** A GET route without query parameters: any given is refused by name. */
+export const noQuerySchema = z.strictObject(
+	{},
+	{
+		error: (iss: { code?: string; keys?: string[] }) =>
+			`Unknown field${(iss.keys?.length ?? 0) > 1 ? 's' : ''} ${(iss.keys ?? []).map((k) => `"${k.slice(0, 40)}"`).join(', ')} in the query: this route takes no query parameters (every answer is SI).`
+	}
+);

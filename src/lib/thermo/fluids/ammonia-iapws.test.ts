@@ -4,7 +4,7 @@
  * calls only, NH3(T, rho) and NH3(T, x); it is made by tests/reference/make-iapws-ammonia.py.
  */
 import { describe, expect, it } from 'vitest';
-import { fixState } from '../index.ts';
+import { fixState, isSolidAt } from '../index.ts';
 import fixture from '../../../../tests/reference/iapws-ammonia.json';
 
 interface Point {
@@ -23,7 +23,9 @@ interface Point {
 	w?: number;
 }
 
-const points = fixture.points as Point[];
+/** rows beyond the melting curve (python3-iapws does not check it) are solid: refused, tested below */
+const points = (fixture.points as Point[]).filter((p) => !isSolidAt('ammonia', p.T, p.P));
+const solidPoints = (fixture.points as Point[]).filter((p) => isSolidAt('ammonia', p.T, p.P));
 
 /*
  * Reference states. python3-iapws keeps the equation's published ideal-gas constants a1, a2;
@@ -77,4 +79,10 @@ describe('ammonia vs python3-iapws 1.5.2 (Debian), iapws.ammonia.NH3', () => {
 		expect(worst).toBeLessThan(1e-5);
 	});
 
+});
+
+describe('ammonia fixture rows beyond the melting curve', () => {
+	it('are refused as solid (Haar & Gallagher 1978 melting curve)', () => {
+		for (const p of solidPoints) expect(() => fixState('ammonia', { T: p.T, rho: p.rho }), `T=${p.T} P=${p.P}`).toThrow(/solid, not a fluid/);
+	});
 });

@@ -135,4 +135,34 @@ export interface FluidData {
 	ideal: IdealTerm[];
 	residual: ResidualTerm[];
 	ancillaries: { pSat: Ancillary; rhoLiquid: Ancillary; rhoVapor: Ancillary };
+	/** melting and sublimation curves (optional here; solid-lines.ts holds them for the first fluids) */
+	solid?: SolidLines;
+}
+
+/**
+ * One piece of a melting or sublimation curve, θ = T/Tref, P in Pa:
+ * - `power-sum`:       P/Pref = 1 + Σ aᵢ·(θ^bᵢ − 1)
+ * - `delta-power-sum`: P/Pref = 1 + Σ aᵢ·(θ − 1)^bᵢ
+ * - `exp-sum`:         ln(P/Pref) = Σ aᵢ·(1 − θ^bᵢ)
+ * - `log-theta`:       P/Pref = Σ aᵢ·(ln θ)^bᵢ
+ * - `exp-theta-sum`:   ln(P/Pref) = θ⁻¹·Σ aᵢ·θ^bᵢ
+ * - `exp-theta-delta`: ln(P/Pref) = θ⁻¹·Σ aᵢ·(1 − θ)^bᵢ
+ */
+export interface SolidLinePiece {
+	form: 'power-sum' | 'delta-power-sum' | 'exp-sum' | 'log-theta' | 'exp-theta-sum' | 'exp-theta-delta';
+	/** the solid phase on the other side (e.g. "ice VI"; "solid" where the publication names none) */
+	solid: string;
+	/** temperature range of this piece, K */
+	Tmin: number;
+	Tmax: number;
+	Tref: number;
+	Pref: number;
+	a: number[];
+	b: number[];
+}
+
+/** Melting and sublimation curves of a fluid, each naming the publication its numbers come from. */
+export interface SolidLines {
+	melting: { pieces: SolidLinePiece[]; source: string };
+	sublimation?: { pieces: SolidLinePiece[]; source: string };
 }

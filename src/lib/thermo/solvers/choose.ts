@@ -4,12 +4,45 @@
  */
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
-import type { FixOptions, RootHint, State } from '../types.ts';
+import type { FixOptions, RootHint, State, StateWindow } from '../types.ts';
+import { isSolid, solidError } from './solid.ts';
 
-/** The `near` option of the fixState call in progress (set by fixStateOf; engine calls are synchronous). */
+/** The `near` and `window` options of the fixState call in progress (set by fixStateOf; engine calls are synchronous). */
 let currentNear: FixOptions['near'] | undefined;
-export function setNear(near: FixOptions['near'] | undefined): void {
+let currentWindow: StateWindow | undefined;
+export function setNear(near: FixOptions['near'] | undefined, window?: StateWindow): void {
 	currentNear = near;
+	currentWindow = window;
+}
+
+/** Whether a state lies inside a window (bounds inclusive, to round-off). */
+export function inWindow(s: { T: number; P: number }, w: StateWindow | undefined): boolean {
+	if (!w) return true;
+	const tol = 1e-12;
+	return (
+		(w.Tmin === undefined || s.T >= w.Tmin * (1 - tol)) &&
+		(w.Tmax === undefined || s.T <= w.Tmax * (1 + tol)) &&
+		(w.Pmin === undefined || s.P >= w.Pmin * (1 - tol)) &&
+		(w.Pmax === undefined || s.P <= w.Pmax * (1 + tol))
+	);
+}
+
+export function windowText(w: StateWindow): string {
+	const part = (lo: number | undefined, hi: number | undefined, name: string, unit: string) =>
+		lo !== undefined && hi !== undefined ? `${fmt(lo)}–${fmt(hi)} ${unit}` : lo !== undefined ? `${name} ≥ ${fmt(lo)} ${unit}` : hi !== undefined ? `${name} ≤ ${fmt(hi)} ${unit}` : '';
+	const t = part(w.Tmin, w.Tmax, 'T', 'K'), p = part(w.Pmin, w.Pmax, 'P', 'Pa');
+	return [t && (t.startsWith('T') ? t : `T ${t}`), p && (p.startsWith('P') ? p : `P ${p}`)].filter(Boolean).join(', ');
+}
+
+/** The refusal when every state with the inputs lies outside the window. */
+export function outsideWindow(fl: Fluid, what: string, outside: State[], w: StateWindow): ThermoError {
+	const list = outside.map((s) => `${s.phase} at T = ${fmt(s.T)} K, P = ${fmt(s.P)} Pa`).join('; ');
+	return new ThermoError(
+		'outside-window',
+		`No ${fl.id} state with ${what} lies in the requested window (${windowText(w)}); outside it: ${list}.`,
+		'Widen the window (or leave it out to search the whole range), or give a different pair of properties.',
+		{ candidates: outside.map((s) => ({ T: s.T, P: s.P, rho: s.rho, phase: s.phase })) }
+	);
 }
 
 /** Hints accepted by fixState (see RootHint in types.ts). */
@@ -57,8 +90,15 @@ function key(hint: RootHint): (s: State) => number {
  * throws `noneError()` when there are none.
  */
 export function choose(fl: Fluid, found: State[], hint: RootHint | undefined, what: string, noneError: () => ThermoError): State {
-	const c = dedupe(found);
-	if (c.length === 0) throw noneError();
+	const all = dedupe(found);
+	if (all.length === 0) throw noneError();
+	// candidates beyond the melting curve are solid, not states of the fluid (solid.ts)
+	const fluid = all.filter((s) => !isSolid(fl, s.T, s.P));
+	if (fluid.length === 0) throw solidError(fl, all[0].T, all[0].P, what);
+	// the requested window excludes roots outside it
+	const win = currentWindow;
+	const c = win ? fluid.filter((s) => inWindow(s, win)) : fluid;
+	if (c.length === 0 && win) throw outsideWindow(fl, what, fluid, win);
 	if (c.length === 1) return c[0];
 	const near = currentNear;
 	if (!hint && near && (near.T !== undefined || near.P !== undefined)) {

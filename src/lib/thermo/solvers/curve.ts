@@ -4,11 +4,15 @@ import type { Fluid } from '../fluid.ts';
 import { criticalState, saturatedState } from '../state.ts';
 import type { SaturationCurve } from '../types.ts';
 import { satAtT } from './saturation.ts';
+import { meltingLine } from './solid.ts';
+
+/** points drawn along the melting curve */
+const MELTING_POINTS = 40;
 
 /**
  * `points` saturated liquid and vapor states at Tᵢ = Tc − (Tc − Tt)·(1 − i/points)³, i = 0…points−1
  * (from the triple point, denser toward the critical point: the last lies (Tc − Tt)/points³ below
- * Tc), plus the critical state.
+ * Tc), plus the critical state and the liquid along the melting curve (solid.ts meltingLine).
  */
 export function curveOf(fl: Fluid, points: number): SaturationCurve {
 	if (!Number.isInteger(points) || points < 2 || points > 5000)
@@ -26,5 +30,5 @@ export function curveOf(fl: Fluid, points: number): SaturationCurve {
 		liquid.push(saturatedState(fl, sat, 0));
 		vapor.push(saturatedState(fl, sat, 1));
 	}
-	return { liquid, vapor, critical: criticalState(fl) };
+	return { liquid, vapor, critical: criticalState(fl), melting: meltingLine(fl, MELTING_POINTS) };
 }

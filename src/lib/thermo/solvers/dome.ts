@@ -2,7 +2,8 @@
  * Two-phase states with a given pair: find the temperatures on the saturation curve where a mixture
  * has the pair. Quality comes from the fixed member (x itself, or x = (A − a')/(a'' − a') for a
  * property A), and G(T) = b' + x·(b'' − b') − B must vanish for the other member B. The saturation
- * table's nodes give every sign change of G (and near-misses by a parabola through three nodes),
+ * table's nodes give every sign change of G (and turning points that cross or touch zero, found
+ * on the exact slope dG/dT),
  * then Newton with the exact derivative along the saturation line refines each root:
  *   dPs/dT = (s'' − s')/(v'' − v')  (Clapeyron),  dρ/dT|sat = (dPs/dT − (∂P/∂T)_ρ)/(∂P/∂ρ)_T,
  *   dy/dT|sat = (∂y/∂T)_ρ + (∂y/∂ρ)_T·dρ/dT|sat for y = v, u, h, s of each phase.
@@ -94,6 +95,46 @@ function gOf(
 	return [x, G, dG];
 }
 
+/** a mixture meets the inputs when G is within this fraction of |B| + |b'' − b'| */
+const ACCEPT = 1e-7;
+/** G at a turning point this close to zero (same scale) is a double root, not a near miss */
+const TOUCH = 1e-10;
+
+/**
+ * Whether the cubic through nodes i−1 … i+2 (shifted at the ends) keeps clearly away from zero on
+ * [T_i, T_i+1]: its extremum there stays on G's side by more than a quarter of the smaller end value
+ * and more than the interpolation can be off (1 % of the larger).
+ */
+function nodeCubicClear(T: Float64Array, G: Float64Array, i: number, n: number): boolean {
+	if (n < 4) return false;
+	const k0 = Math.min(Math.max(i - 1, 0), n - 4);
+	const Ga = G[i], Gb = G[i + 1];
+	let ext = Ga;
+	for (let q = 1; q < 16; q++) {
+		const t = T[i] + ((T[i + 1] - T[i]) * q) / 16;
+		let v = 0;
+		for (let j = k0; j < k0 + 4; j++) {
+			let w = G[j];
+			for (let m = k0; m < k0 + 4; m++) if (m !== j) w *= (t - T[m]) / (T[j] - T[m]);
+			v += w;
+		}
+		if (v < 0 !== Ga < 0) return false;
+		if (Math.abs(v) < Math.abs(ext)) ext = v;
+	}
+	// clear only when short of zero beyond the interpolation's own error (a fraction of G's size)
+	return Math.abs(ext) > 0.25 * Math.min(Math.abs(Ga), Math.abs(Gb)) && Math.abs(ext) > 1e-2 * Math.max(Math.abs(Ga), Math.abs(Gb));
+}
+
+/** Whether |G| has a local minimum at node i (an end node counts with its one neighbour) that is small against G's local change. */
+function dipsAt(G: Float64Array, i: number, n: number): boolean {
+	const g = Math.abs(G[i]);
+	const left = i > 0 ? Math.abs(G[i - 1]) : Infinity, right = i < n - 1 ? Math.abs(G[i + 1]) : Infinity;
+	if (!(g <= left && g <= right)) return false;
+	let change = 0;
+	for (let k = Math.max(1, i - 1); k <= Math.min(n - 1, i + 2); k++) change = Math.max(change, Math.abs(G[k] - G[k - 1]));
+	return g <= 4 * change;
+}
+
 /**
  * All two-phase solutions with quality fixed by `spec` and property `target` = `value`. Quality
  * may overshoot 0…1 by round-off (up to 1e−6 near Tc); place each with twoPhaseAt.
@@ -118,6 +159,8 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		if (G[i] < 0 !== G[i - 1] < 0) any = true;
 		else if (i < n - 1 && Math.abs(G[i]) < Math.abs(G[i - 1]) && Math.abs(G[i]) < Math.abs(G[i + 1])) any = true;
 	}
+	// a turning point inside the first or last interval shows as |G| falling toward the end node
+	if (!any && n > 2 && (dipsAt(G, 0, n) || dipsAt(G, n - 1, n))) any = true;
 	if (!any && !(Math.abs(G[0]) <= 1e-6 * Math.abs(G[1] - G[0])) && !(Math.abs(G[n - 1]) <= 1e-6 * Math.abs(G[n - 2] - G[n - 1])))
 		return [];
 	const line = new SatLine();
@@ -165,6 +208,9 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 	const accept = (x: number) => {
 		// keep round-off overshoots; callers place the state (twoPhaseAt) and drop real outsiders
 		if (!(x >= -1e-6 && x <= 1 + 1e-6)) return;
+		// a candidate must meet the inputs: an unconverged refinement (steep G beside Tc) is no root
+		const [, gLine] = gOf(spec, b, value, line.yL, line.yV);
+		if (!(Math.abs(gLine) <= ACCEPT * (Math.abs(value) + Math.abs(line.yV[b] - line.yL[b])))) return;
 		const sat = line.sat;
 		// next to a saturation line G can be nearly tangent to zero (for (h, s), dh = T·ds + v·dP
 		// makes the mixtures' h(T) touch the line's): there solve the line itself, a' (T) = A
@@ -215,6 +261,51 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		const xa = xAt(i), xb = xAt(j);
 		return (xa < -0.01 && xb < -0.01) || (xa > 1.01 && xb > 1.01);
 	};
+	/** extremum of G in [Ta, Tb] (same sign at both ends): two roots if it crosses zero, one if it touches */
+	const turning = (Ta: number, Ga: number, Tb: number, Gb: number) => {
+		const [, , da] = fn(Ta);
+		const [, , db] = fn(Tb);
+		// |G| must fall leaving Ta and rise arriving at Tb
+		if (!(da < 0 === Ga > 0) || !(db < 0 === Gb < 0)) return;
+		// the cubic through both ends' values and slopes (accurate to h⁴ on these node spacings)
+		// bounds the extremum: clearly short of zero, there is nothing to look for. Its extremum
+		// from G'(t) = c1 + 2c2·t + 3c3·t² = 0 on 0 < t < 1.
+		const h = Tb - Ta;
+		const c1 = h * da, c2 = 3 * (Gb - Ga) - h * (2 * da + db), c3 = 2 * (Ga - Gb) + h * (da + db);
+		let ext = Ga;
+		const at = (t: number) => {
+			if (t > 0 && t < 1) {
+				const G = Ga + t * (c1 + t * (c2 + t * c3));
+				if (Math.abs(G) < Math.abs(ext) || G < 0 !== Ga < 0) ext = G;
+			}
+		};
+		if (c3 === 0) at(-c1 / (2 * c2));
+		else {
+			const disc = c2 * c2 - 3 * c3 * c1;
+			if (disc >= 0) {
+				const r = Math.sqrt(disc);
+				at((-c2 + r) / (3 * c3));
+				at((-c2 - r) / (3 * c3));
+			}
+		}
+		if (ext < 0 === Ga < 0 && Math.abs(ext) > 0.05 * Math.min(Math.abs(Ga), Math.abs(Gb)) && Math.abs(ext) > 1e-3 * Math.max(Math.abs(Ga), Math.abs(Gb))) return;
+		let lo = Ta, hi = Tb, m = 0.5 * (lo + hi);
+		for (let k = 0; k < 80; k++) {
+			m = 0.5 * (lo + hi);
+			const [, g, dg] = fn(m);
+			if (g === 0) return accept(line.sat ? gOf(spec, b, value, line.yL, line.yV)[0] : 0);
+			if (g < 0 !== Ga < 0) {
+				refine(Ta, Ga, m, g, 0.5 * (Ta + m));
+				refine(m, g, Tb, Gb, 0.5 * (m + Tb));
+				return;
+			}
+			if (dg < 0 === da < 0) lo = m;
+			else hi = m;
+			if (hi - lo <= 1e-13 * m) break;
+		}
+		const [x, g] = fn(m);
+		if (Math.abs(g) <= TOUCH * (Math.abs(value) + Math.abs(line.yV[b] - line.yL[b]))) accept(x);
+	};
 	for (let i = 0; i < n - 1; i++) {
 		const Ga = G[i], Gb = G[i + 1];
 		if (!Number.isFinite(Ga) || !Number.isFinite(Gb)) continue;
@@ -228,33 +319,16 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 			refine(Ta, Ga, Tb, Gb, start(i));
 			continue;
 		}
-		// near-miss: a turning point between nodes may cross zero; test the parabola through three nodes
-		if (i > 0 && Math.abs(Ga) < Math.abs(G[i - 1]) && Math.abs(Ga) < Math.abs(Gb)) {
-			const T0 = nodes.T[i - 1], G0 = G[i - 1];
-			const d1 = (Ga - G0) / (Ta - T0), d2 = (Gb - Ga) / (Tb - Ta);
-			const c2 = (d2 - d1) / (Tb - T0);
-			const c1 = d1 - c2 * (T0 + Ta);
-			const Tv = -c1 / (2 * c2);
-			const Gv = Ga + (Tv - Ta) * (d1 + c2 * (Tv - T0));
-			if (Tv > T0 && Tv < Tb && Gv < 0 !== Ga < 0) {
-				// locate the true turning point by secant on dG/dT, then refine both sides
-				let lo = T0, hi = Tb, m = Tv;
-				let gm = 0;
-				for (let k = 0; k < 40; k++) {
-					const [, g, dg] = fn(m);
-					gm = g;
-					if (g < 0 !== Ga < 0) break;
-					if (dg < 0 === Ga > 0) lo = m;
-					else hi = m;
-					m = 0.5 * (lo + hi);
-					if (hi - lo < 1e-10 * m) break;
-				}
-				if (gm < 0 !== Ga < 0) {
-					refine(T0, G0, m, gm, 0.5 * (T0 + m));
-					refine(m, gm, Tb, Gb, 0.5 * (m + Tb));
-				}
-			}
-		}
+		// same sign at both nodes: a turning point of G between them may cross or touch zero. Only
+		// intervals beside a local minimum of |G| that is small against G's change over the
+		// neighbouring nodes can hold one; the exact slopes at both nodes decide, then bisection on
+		// dG/dT finds the extremum: G crossing there gives two roots, G touching zero (within
+		// round-off) the double root of a tangent pair (x or a property at its extreme on the line)
+		if (!(dipsAt(G, i, n) || dipsAt(G, i + 1, n))) continue;
+		// first from the table alone: the cubic through four nodes around the interval; only an
+		// extremum that comes near zero is worth the exact slopes (two saturation solves)
+		if (nodeCubicClear(nodes.T, G, i, n)) continue;
+		turning(Ta, Ga, Tb, Gb);
 	}
 	return roots;
 }

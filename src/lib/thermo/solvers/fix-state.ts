@@ -4,58 +4,53 @@
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { FixOptions, InputName, Inputs, State } from '../types.ts';
-import { ROOT_HINTS, setNear } from './choose.ts';
-import { flashHS } from './flash-h-s.ts';
-import { flashHX } from './flash-h-x.ts';
-import { flashPH } from './flash-p-h.ts';
-import { flashPS } from './flash-p-s.ts';
-import { flashPU } from './flash-p-u.ts';
-import { flashPV } from './flash-p-v.ts';
+import { ROOT_HINTS, inWindow, outsideWindow, setNear, windowText } from './choose.ts';
 import { flashPX } from './flash-p-x.ts';
-import { flashSX } from './flash-s-x.ts';
-import { flashTH } from './flash-t-h.ts';
 import { flashTP } from './flash-t-p.ts';
-import { flashTS } from './flash-t-s.ts';
-import { flashTU } from './flash-t-u.ts';
 import { flashTRho } from './flash-t-v.ts';
 import { flashTX } from './flash-t-x.ts';
-import { flashUH } from './flash-u-h.ts';
-import { flashUS } from './flash-u-s.ts';
-import { flashUX } from './flash-u-x.ts';
-import { flashVH } from './flash-v-h.ts';
-import { flashVS } from './flash-v-s.ts';
-import { flashVU } from './flash-v-u.ts';
-import { flashVX } from './flash-v-x.ts';
+import { flashXY } from './flash-x.ts';
+import { flashPRho, flashPY } from './isobar.ts';
+import { flashRhoY } from './isochore.ts';
+import { flashTY } from './isotherm.ts';
+import { flashYY } from './plane.ts';
 import { checkP, checkT } from './range.ts';
+import { precisionOf } from './precision.ts';
+import { assertFluid } from './solid.ts';
 
 /** Canonical property keys after v → rho: order used to name pairs. */
 export type Key = 'T' | 'P' | 'rho' | 'u' | 'h' | 's' | 'x';
 
 export type Flash = (fl: Fluid, a: number, b: number, options: FixOptions) => State;
 
-/** Flash for each of the 21 pairs, keyed "A,B" in ORDER (T, P, rho, u, h, s, x). */
+/**
+ * Flash for each of the 21 pairs, keyed "A,B" in ORDER (T, P, rho, u, h, s, x): along the
+ * isotherm (isotherm.ts), the isobar (isobar.ts), the isochore and across the dome (isochore.ts),
+ * the saturation curve (flash-x.ts, dome.ts), or on the (T, ln ρ) plane for two of u, h, s
+ * (plane.ts; in dilute vapor (u, h) hardly fixes P: h − u = Pv ≈ RT).
+ */
 export const FLASHES: Record<string, Flash> = {
 	'T,P': (fl, T, P, o) => flashTP(fl, T, P, o.hint),
 	'T,rho': (fl, T, rho) => flashTRho(fl, T, rho),
-	'T,u': (fl, T, u, o) => flashTU(fl, T, u, o.hint),
-	'T,h': (fl, T, h, o) => flashTH(fl, T, h, o.hint),
-	'T,s': (fl, T, s, o) => flashTS(fl, T, s, o.hint),
+	'T,u': (fl, T, u, o) => flashTY(fl, T, 'u', u, o.hint),
+	'T,h': (fl, T, h, o) => flashTY(fl, T, 'h', h, o.hint),
+	'T,s': (fl, T, s, o) => flashTY(fl, T, 's', s, o.hint),
 	'T,x': (fl, T, x) => flashTX(fl, T, x),
-	'P,rho': (fl, P, rho, o) => flashPV(fl, P, rho, o.hint),
-	'P,u': (fl, P, u) => flashPU(fl, P, u),
-	'P,h': (fl, P, h) => flashPH(fl, P, h),
-	'P,s': (fl, P, s) => flashPS(fl, P, s),
+	'P,rho': (fl, P, rho, o) => flashPRho(fl, P, rho, o.hint),
+	'P,u': (fl, P, u) => flashPY(fl, P, 'u', u),
+	'P,h': (fl, P, h) => flashPY(fl, P, 'h', h),
+	'P,s': (fl, P, s) => flashPY(fl, P, 's', s),
 	'P,x': (fl, P, x) => flashPX(fl, P, x),
-	'rho,u': (fl, rho, u, o) => flashVU(fl, rho, u, o.hint),
-	'rho,h': (fl, rho, h, o) => flashVH(fl, rho, h, o.hint),
-	'rho,s': (fl, rho, s, o) => flashVS(fl, rho, s, o.hint),
-	'rho,x': (fl, rho, x, o) => flashVX(fl, rho, x, o.hint),
-	'u,h': (fl, u, h, o) => flashUH(fl, u, h, o.hint),
-	'u,s': (fl, u, s, o) => flashUS(fl, u, s, o.hint),
-	'u,x': (fl, u, x, o) => flashUX(fl, u, x, o.hint),
-	'h,s': (fl, h, s, o) => flashHS(fl, h, s, o.hint),
-	'h,x': (fl, h, x, o) => flashHX(fl, h, x, o.hint),
-	's,x': (fl, s, x, o) => flashSX(fl, s, x, o.hint)
+	'rho,u': (fl, rho, u, o) => flashRhoY(fl, rho, 'u', u, o.hint),
+	'rho,h': (fl, rho, h, o) => flashRhoY(fl, rho, 'h', h, o.hint),
+	'rho,s': (fl, rho, s, o) => flashRhoY(fl, rho, 's', s, o.hint),
+	'rho,x': (fl, rho, x, o) => flashXY(fl, x, 'v', 1 / rho, o.hint),
+	'u,h': (fl, u, h, o) => flashYY(fl, 'u', u, 'h', h, o.hint),
+	'u,s': (fl, u, s, o) => flashYY(fl, 's', s, 'u', u, o.hint),
+	'u,x': (fl, u, x, o) => flashXY(fl, x, 'u', u, o.hint),
+	'h,s': (fl, h, s, o) => flashYY(fl, 's', s, 'h', h, o.hint),
+	'h,x': (fl, h, x, o) => flashXY(fl, x, 'h', h, o.hint),
+	's,x': (fl, s, x, o) => flashXY(fl, x, 's', s, o.hint)
 };
 
 const KEY_RANK: Record<Key, number> = { T: 0, P: 1, rho: 2, u: 3, h: 4, s: 5, x: 6 };
@@ -140,9 +135,9 @@ function checkValue(fl: Fluid, k: InputName, val: unknown): number {
 	if (typeof val !== 'number' || !Number.isFinite(val))
 		throw new ThermoError('non-finite-input', `${k} must be a finite number (got ${String(val)}).`, `Give ${k} as a finite number in ${unit(k) || 'SI units'}.`);
 	if ((k === 'T' || k === 'P' || k === 'v' || k === 'rho') && !(val > 0))
-		throw new ThermoError('non-positive-input', `${k} must be positive (got ${fmt(val)}); the engine uses absolute values.`, `Give ${k} in ${unit(k)} as a positive absolute value (for example kelvin, not °C; absolute, not gauge pressure).`);
+		throw new ThermoError('non-positive-input', `${k} must be positive (got ${fmt(val, 0)}); the engine uses absolute values.`, `Give ${k} in ${unit(k)} as a positive absolute value (for example kelvin, not °C; absolute, not gauge pressure).`);
 	if (k === 'x' && !(val >= 0 && val <= 1))
-		throw new ThermoError('quality-out-of-range', `The quality x must lie between 0 and 1 (got ${fmt(val)}).`, 'Give x as a mass fraction of vapor from 0 (saturated liquid) to 1 (saturated vapor), or give the state by two other properties.');
+		throw new ThermoError('quality-out-of-range', `The quality x must lie between 0 and 1 (got ${fmt(val, 0, 1)}).`, 'Give x as a mass fraction of vapor from 0 (saturated liquid) to 1 (saturated vapor), or give the state by two other properties.');
 	if (k === 'T') checkT(fl, val);
 	if (k === 'P') checkP(fl, val);
 	return k === 'v' ? 1 / val : val;
@@ -158,13 +153,30 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 		if (typeof near !== 'object' || near === null || !ok(near.T) || !ok(near.P))
 			throw new ThermoError('invalid-option', 'options.near must hold a positive T (K) and/or P (Pa).', 'Give near as { T, P } of the state to stay close to, or leave it out.');
 	}
+	const win = options.window;
+	if (win !== undefined) {
+		const ok = (v: unknown) => v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
+		if (typeof win !== 'object' || win === null || !ok(win.Tmin) || !ok(win.Tmax) || !ok(win.Pmin) || !ok(win.Pmax))
+			throw new ThermoError('invalid-option', 'options.window must hold positive Tmin, Tmax (K) and/or Pmin, Pmax (Pa).', 'Give window as { Tmin, Tmax, Pmin, Pmax } (any of them), or leave it out to search the whole range.');
+		if ((win.Tmin !== undefined && win.Tmax !== undefined && win.Tmin > win.Tmax) || (win.Pmin !== undefined && win.Pmax !== undefined && win.Pmin > win.Pmax))
+			throw new ThermoError('invalid-option', `options.window is empty: ${windowText(win)}.`, 'Give each lower bound below its upper bound.');
+	}
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
 	const flash = BY_RANK[KEY_RANK[ka] * 7 + KEY_RANK[kb]];
-	if (near === undefined) return flash(fl, a, b, options);
-	setNear(near);
-	try {
-		return flash(fl, a, b, options);
-	} finally {
-		setNear(undefined);
+	// beyond the melting curve the substance is solid: refused (solid.ts), never answered as a fluid
+	let st: State;
+	if (near === undefined && win === undefined) st = flash(fl, a, b, options);
+	else {
+		setNear(near, win);
+		try {
+			st = flash(fl, a, b, options);
+		} finally {
+			setNear(undefined);
+		}
 	}
+	assertFluid(fl, st);
+	// a flash with one answer does not go through choose: the window applies here
+	if (win !== undefined && !inWindow(st, win)) throw outsideWindow(fl, `${ka} = ${fmt(a)} and ${kb} = ${fmt(b)}`, [st], win);
+	st.precision = precisionOf(fl, st, ka, a, kb, b);
+	return st;
 }

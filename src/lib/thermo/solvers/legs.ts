@@ -21,21 +21,13 @@
  * length on T–v and P–v with log v (and linear or log P), with extra points where the curve turns,
  * up to 1.5 × samples — and exactly through each crossing.
  */
-import { ThermoError } from '../errors.ts';
+import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { getCompiledFluid } from '../registry.ts';
 import type { Crossing, Leg, LegSpec, Process, State, TargetName } from '../types.ts';
 import { Curve, cptOfState, paramOf, stateOf, type CPt, type Invariant, type Segment } from './leg-curve.ts';
 import { fixStateOf } from './fix-state.ts';
 import { integrate } from './quadrature.ts';
-
-/** Numbers for messages: 6 significant digits (101325 Pa stays 101325), exponent outside 1e−3…1e6. */
-export function fmt(x: number): string {
-	if (!Number.isFinite(x)) return String(x);
-	const a = Math.abs(x);
-	if (a !== 0 && (a >= 1e6 || a < 1e-3)) return x.toExponential(5).replace(/\.?0+e/, 'e');
-	return Number(x.toPrecision(6)).toString();
-}
 
 export const PROCESSES: readonly Process[] = ['isobaric', 'isochoric', 'isothermal', 'isentropic', 'isenthalpic', 'polytropic'];
 export const TARGET_NAMES: readonly TargetName[] = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'];

@@ -20,7 +20,7 @@
  * - throttling-irreversible: an isenthalpic leg (info).
  * - per-kg-totals: a closed system without mass or volume: totals are per 1 kg (info).
  */
-import { ThermoError } from '../errors.ts';
+import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point } from '../properties.ts';
 import { getCompiledFluid } from '../registry.ts';
@@ -39,7 +39,7 @@ import type {
 	StateExtras
 } from '../types.ts';
 import { fixStateOf } from './fix-state.ts';
-import { THROTTLING_NOTE, fmt, traceLeg } from './legs.ts';
+import { THROTTLING_NOTE, traceLeg } from './legs.ts';
 import { satAtP, satAtT, triplePressure } from './saturation.ts';
 
 /** Most legs in one path. */

@@ -5,7 +5,7 @@
  * state grid whose image contains the target (barycentric interpolation gives the start).
  * The grid follows each isotherm on two branches that meet the saturation line (or, above Tc, the
  * critical isobar) at their ends, so no cell straddles the dome:
- *   vapor-like: ln P uniform from Pt/100 up to Psat(T) (or Pc); liquid-like: from Psat(T) (or Pc) to Pmax.
+ *   vapor-like: ln P uniform from Pt·1e−5 up to Psat(T) (or Pc); liquid-like: from Psat(T) (or Pc) to Pmax.
  * Every converged candidate is checked to be single-phase and in range; duplicates are merged.
  */
 import { fmt } from '../errors.ts';
@@ -17,13 +17,22 @@ import { densityAtTP } from './density.ts';
 import { domeRoots } from './dome.ts';
 import { locate, placedState, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
+import { scanRoots, type FD } from './roots.ts';
 import { satAtT, triplePressure } from './saturation.ts';
 
 const NT_UNIFORM = 40;
 /** relative offsets from Tc of extra isotherms (the map from (T, ρ) to u, h, s bends sharply there) */
 const NEAR_CRITICAL = [-0.03, -0.01, -0.003, -0.001, 0.001, 0.003, 0.01, 0.03];
-const NV = 18;
+const NV = 26;
 const NL = 18;
+/** at most this many Newton runs per pair */
+const MAX_RUNS = 48;
+/** samples of the (u, h) contour scan in ln ρ */
+const CONTOUR_SAMPLES = 160;
+/** a start within this fraction of a grid cell (in T, and in ln ρ) of an accepted state is not run */
+const SAME_START = 0.02;
+/** scaled residual below which a point between two candidates shows them to be one state */
+const VALLEY = 1e-10;
 const UNIT: Record<EnergyProp, string> = { u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)' };
 
 interface Grid {
@@ -37,7 +46,8 @@ interface Grid {
 
 function buildGrid(fl: Fluid): Grid {
 	const Pt = triplePressure(fl);
-	const Plo = Pt / 100;
+	// dilute gas well below the triple-point pressure (to about Pt·1e−5) is in range and in the grid
+	const Plo = Pt * 1e-5;
 	// uniform in T, plus nodes closing in on the critical temperature from both sides
 	const span = fl.Tmax - fl.Tmin;
 	const set = new Set<number>();
@@ -201,6 +211,118 @@ export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: nu
 }
 
 /**
+ * Starting points bracketed along the grid lines: in every cell that the curve y_a = A crosses
+ * (found on the cell's edges — two isotherms and two lines of constant pressure fraction — by
+ * interpolation in ln ρ), the other residual is interpolated at each edge crossing; where it has
+ * opposite signs at two crossings of one cell a root of the pair lies on the curve between them,
+ * started at the interpolated point. Each root the grid resolves is bracketed this way, also when
+ * its cell holds another root or the curve leaves the grid through its low-pressure edge.
+ */
+export function bracketStarts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number): [number, number][] {
+	const g = grid(fl);
+	const ia = YI[a], ib = YI[b];
+	const pv = a === 'u' && b === 'h';
+	const bx = boxes(g, a, b);
+	const out: [number, number][] = [];
+	const cross: number[] = [];
+	for (let bi = 0; bi < g.branches.length; bi++) {
+		const br = g.branches[bi];
+		const nj = br.nj;
+		const Ya = br.y[ia], Yb = br.y[ib];
+		const box = bx[bi];
+		const rb = (q: number) => (pv ? Yb[q] - Ya[q] - (B - A) : Yb[q] - B);
+		const cells = (g.nt - 1) * (nj - 1);
+		for (let cell = 0; cell < cells; cell++) {
+			const o = cell * 4;
+			if (A < box[o] || A > box[o + 1]) continue;
+			// the interpolated residual at the edges lies within the cell's range of y_b: B outside
+			// it (widened by round-off) leaves one sign at every crossing, so no bracket
+			if (!pv) {
+				const wb = 1e-9 * Math.abs(B) + 1e-6 * (box[o + 3] - box[o + 2]);
+				if (B < box[o + 2] - wb || B > box[o + 3] + wb) continue;
+			}
+			const i = (cell / (nj - 1)) | 0, j = cell - i * (nj - 1);
+			const c0 = i * nj + j, c1 = c0 + 1, c3 = c0 + nj, c2 = c3 + 1;
+			cross.length = 0;
+			for (const [p, q] of [
+				[c0, c1],
+				[c1, c2],
+				[c2, c3],
+				[c3, c0]
+			]) {
+				const fp = Ya[p] - A, fq = Ya[q] - A;
+				if (fp === 0 || (fp < 0 !== fq < 0 && fq !== 0)) {
+					const w = fp === 0 ? 0 : fp / (fp - fq);
+					cross.push(br.T[p] + w * (br.T[q] - br.T[p]), br.lnRho[p] + w * (br.lnRho[q] - br.lnRho[p]), rb(p) + w * (rb(q) - rb(p)));
+				}
+			}
+			for (let m = 0; m < cross.length; m += 3)
+				for (let n = m + 3; n < cross.length; n += 3) {
+					const r0 = cross[m + 2], r1 = cross[n + 2];
+					if (r0 === 0 || r0 < 0 !== r1 < 0) {
+						const w = r0 === 0 ? 0 : r0 / (r0 - r1);
+						out.push([cross[m] + w * (cross[n] - cross[m]), cross[m + 1] + w * (cross[n + 1] - cross[m + 1])]);
+					}
+				}
+		}
+	}
+	return out;
+}
+
+/**
+ * Roots of (u, h) along the curve u = U, scanned in ln ρ: at fixed ρ, u rises strictly with T
+ * (cv > 0), so each density has at most one T(ρ) with u = U, and every state with the pair is a
+ * zero of R(ln ρ) = P/ρ − (H − U) at (T(ρ), ρ). Sampling R and its exact slope (scanRoots) brackets
+ * each zero, turning points included — in dilute gas, where the grid's interpolation error is
+ * larger than R itself, this is the only way to see them.
+ */
+export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number][] {
+	const g = grid(fl);
+	let zMax = -Infinity, zMin = Infinity;
+	for (const br of g.branches)
+		for (let q = 0; q < br.lnRho.length; q++) {
+			zMax = Math.max(zMax, br.lnRho[q]);
+			zMin = Math.min(zMin, br.lnRho[q]);
+		}
+	const p = new Point();
+	let Tlast = 0.5 * (fl.Tmin + fl.Tmax);
+	const Tat = (z: number): number => {
+		const rho = Math.exp(z);
+		let T = Tlast;
+		for (let it = 0; it < 40; it++) {
+			evalPoint(fl, T, rho, p, 2);
+			const step = (p.u - U) / p.cv;
+			if (!Number.isFinite(step)) return NaN;
+			T = Math.min(Math.max(T - step, 0.5 * T), 2 * T);
+			if (Math.abs(step) <= 1e-12 * T) break;
+		}
+		if (!(T >= fl.Tmin * (1 - 1e-9) && T <= fl.Tmax * (1 + 1e-9))) return NaN;
+		evalPoint(fl, T, rho, p, 2);
+		Tlast = T;
+		return T;
+	};
+	const fn = (z: number, out: FD) => {
+		const T = Tat(z);
+		if (!Number.isFinite(T)) {
+			out.f = NaN;
+			out.df = NaN;
+			return;
+		}
+		const rho = p.rho;
+		const dudz = propDrho(p, 'u') * rho;
+		const dTdz = -dudz / p.cv;
+		out.f = (p.P / rho - (H - U)) / (fl.R * fl.Tc);
+		out.df = ((p.dPdT / rho) * dTdz + (p.dPdrho - p.P / rho)) / (fl.R * fl.Tc);
+	};
+	const out: [number, number][] = [];
+	for (const z of scanRoots(fn, zMin, zMax, CONTOUR_SAMPLES, 1e-12)) {
+		const T = Tat(z);
+		if (Number.isFinite(T)) out.push([T, z]);
+	}
+	return out;
+}
+
+/**
  * 2-D Newton in (T, ln ρ) on y_a = A, y_b = B (for (u, h): u = U and P/ρ = H − U); returns the
  * converged point or null.
  */
@@ -267,10 +389,15 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 	// cells holding the target first; centres of the other candidate cells only if none gave a
 	// state — except for (u, h), whose dilute-vapor cells are degenerate and only reached that way
 	const degenerate = (a === 'u' && b === 'h') || (a === 'h' && b === 'u');
-	const queue: [number, number][] = [...st.inside, ...st.nearest, ...(degenerate ? st.centres : [])];
+	const contour = degenerate ? (a === 'u' ? contourRootsUH(fl, A, B) : contourRootsUH(fl, B, A)) : [];
+	const bracketed = bracketStarts(fl, a, A, b, B);
+	// a cell-interior start beside a bracketed one is the same cell's root: run it once
+	const inside = st.inside.filter(([T0, z0]) => !bracketed.some(([T, z]) => Math.abs(T - T0) < 0.5 * dT && Math.abs(z - z0) < 0.25));
+	const queue: [number, number][] = [...contour, ...bracketed, ...inside, ...st.nearest, ...(degenerate ? st.centres : [])];
 	let centresQueued = degenerate;
+	const centreSet = new Set(st.centres.map(([T, z]) => T * 1e3 + z));
 	let runs = 0;
-	while (runs < 24) {
+	while (runs < MAX_RUNS) {
 		if (queue.length === 0) {
 			if (centresQueued || accepted.length > 0) break;
 			queue.push(...st.centres);
@@ -278,8 +405,11 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 			if (queue.length === 0) break;
 		}
 		const [T0, z0] = queue.shift() as [number, number];
-		// a start within a grid cell of an accepted state leads to the same state
-		if (accepted.some(([T, z]) => Math.abs(T - T0) < dT && Math.abs(z - z0) < 0.5)) continue;
+		// a start right beside an accepted state leads to the same state; anything farther may not
+		// (two roots of a pair can share a grid cell). Cell centres are a fallback (or, for (u, h),
+		// a supplement to the contour scan): one within a cell of an accepted state is not run.
+		const near = centreSet.has(T0 * 1e3 + z0) ? [dT, 0.5] : [SAME_START * dT, SAME_START];
+		if (accepted.some(([T, z]) => Math.abs(T - T0) < near[0] && Math.abs(z - z0) < near[1])) continue;
 		runs++;
 		const q = newton2(fl, a, A, b, B, T0, z0, p);
 		if (!q) continue;
@@ -298,5 +428,39 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		accepted.push([q.T, Math.log(q.rho)]);
 		found.push(placedState(fl, q, loc));
 	}
-	return choose(fl, found, hint, what, () => noStateInRange(fl, what));
+	return choose(fl, mergeConnected(fl, a, A, b, B, found), hint, what, () => noStateInRange(fl, what));
+}
+
+/** Scaled residual norm of the pair at (T, ρ) (as newton2 measures it). */
+function residual(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, T: number, rho: number, p: Point): number {
+	const sa = a === 's' ? fl.R : fl.R * fl.Tc;
+	const sb = b === 's' ? fl.R : fl.R * fl.Tc;
+	evalPoint(fl, T, rho, p, 1);
+	const rb = a === 'u' && b === 'h' ? (p.P / rho - (B - A)) / sb : (propValue(p, b) - B) / sb;
+	return Math.abs((propValue(p, a) - A) / sa) + Math.abs(rb);
+}
+
+/**
+ * Single-phase candidates joined by a valley of the residual are one ill-determined state, not
+ * several (in dilute gas (u, h) fixes T but hardly P): two candidates are merged when the residual
+ * stays at round-off level at three points between them. Two-phase candidates are kept as found.
+ */
+function mergeConnected(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, found: State[]): State[] {
+	if (found.length < 2) return found;
+	const p = new Point();
+	const out: State[] = [];
+	for (const s of found) {
+		const twin =
+			s.x === null &&
+			out.some((o) => {
+				if (o.x !== null) return false;
+				for (const f of [0.25, 0.5, 0.75]) {
+					const T = o.T + f * (s.T - o.T), rho = o.rho * Math.pow(s.rho / o.rho, f);
+					if (!(residual(fl, a, A, b, B, T, rho, p) <= VALLEY)) return false;
+				}
+				return true;
+			});
+		if (!twin) out.push(s);
+	}
+	return out;
 }

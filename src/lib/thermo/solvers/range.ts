@@ -12,24 +12,24 @@ import { triplePressure } from './saturation.ts';
 export function belowTriple(fl: Fluid, T: number): ThermoError {
 	return new ThermoError(
 		'below-triple-point',
-		`T = ${fmt(T)} K is below the triple point of ${fl.id} (${fmt(fl.Tmin)} K); the engine covers fluid states from the triple point up.`,
-		`Give a temperature of at least ${fmt(fl.Tmin)} K.`
+		`T = ${fmt(T, fl.Tmin)} K is below the triple point of ${fl.id} (${fmt(fl.Tmin, T)} K); the engine covers fluid states from the triple point up.`,
+		`Give a temperature of at least ${fmt(fl.Tmin, T)} K.`
 	);
 }
 
 export function aboveTmax(fl: Fluid, T: number): ThermoError {
 	return new ThermoError(
 		'out-of-range',
-		`T = ${fmt(T)} K is above the range of the ${fl.data.formulation.name} formulation for ${fl.id} (up to ${fmt(fl.Tmax)} K).`,
-		`Give a temperature of at most ${fmt(fl.Tmax)} K.`
+		`T = ${fmt(T, fl.Tmax)} K is above the range of the ${fl.data.formulation.name} formulation for ${fl.id} (up to ${fmt(fl.Tmax, T)} K).`,
+		`Give a temperature of at most ${fmt(fl.Tmax, T)} K.`
 	);
 }
 
 export function abovePmax(fl: Fluid, P: number): ThermoError {
 	return new ThermoError(
 		'out-of-range',
-		`P = ${fmt(P)} Pa is above the range of the ${fl.data.formulation.name} formulation for ${fl.id} (up to ${fmt(fl.Pmax)} Pa).`,
-		`Give a pressure of at most ${fmt(fl.Pmax)} Pa.`
+		`P = ${fmt(P, fl.Pmax)} Pa is above the range of the ${fl.data.formulation.name} formulation for ${fl.id} (up to ${fmt(fl.Pmax, P)} Pa).`,
+		`Give a pressure of at most ${fmt(fl.Pmax, P)} Pa.`
 	);
 }
 
@@ -57,8 +57,8 @@ export function checkSaturationP(fl: Fluid, P: number): void {
 	if (P < Pt * (1 - 1e-9))
 		throw new ThermoError(
 			'below-triple-point',
-			`P = ${fmt(P)} Pa is below the triple-point pressure of ${fl.id} (${fmt(Pt)} Pa): no liquid exists there, so there is no saturation.`,
-			`Give a pressure of at least ${fmt(Pt)} Pa with a quality, or give the state by two other properties.`
+			`P = ${fmt(P, Pt)} Pa is below the triple-point pressure of ${fl.id} (${fmt(Pt, P)} Pa): no liquid exists there, so there is no saturation.`,
+			`Give a pressure of at least ${fmt(Pt, P)} Pa with a quality, or give the state by two other properties.`
 		);
 }
 

@@ -1,0 +1,109 @@
+/**
+ * Pairs with more than one state, or with one state that sits where the residual only touches zero
+ * (a quality or a property at its extreme along the saturation line), or far below the triple-point
+ * pressure. Each case is an input an audit of the engine reported (issue 11), with the state it was
+ * generated from; the expected T and P are the audit's figures, rounded as it printed them. An
+ * answer must be the right state or name every genuine candidate — each one reproducing the
+ * inputs — and never a refusal when a state exists.
+ */
+import { describe, expect, it } from 'vitest';
+import { ThermoError } from '../errors.ts';
+import { fixState } from '../index.ts';
+import type { Inputs, State } from '../types.ts';
+
+interface Case {
+	fluid: string;
+	inputs: Inputs;
+	/** states that must be answered or named (T in K, P in Pa when the audit gave it) */
+	expect: { T: number; P?: number }[];
+	/** what the engine did wrong before */
+	was: string;
+}
+
+const CASES: Case[] = [
+	{ fluid: 'ammonia', inputs: { u: 2128176.6420585867, h: 2450203.1347223665 }, expect: [{ T: 689.34, P: 11.0e6 }, { T: 698.49, P: 15.7e6 }], was: 'silent wrong root' },
+	{ fluid: 'r134a', inputs: { u: 210261.44946158602, h: 217949.71408896055 }, expect: [{ T: 284.84 }, { T: 170.54, P: 421 }], was: 'silent wrong root' },
+	{ fluid: 'nitrogen', inputs: { s: 1470.7996522623748, x: 0.5760206412523985 }, expect: [{ T: 85.2 }, { T: 108.35 }], was: 'silent wrong root' },
+	{ fluid: 'water', inputs: { h: 2536016.9279289735, s: 11546.249393804384 }, expect: [{ T: 291.73, P: 4.5 }], was: 'false out-of-range below 5 Pa' },
+	{ fluid: 'ammonia', inputs: { u: 1243384.2793952678, x: 0.8568622586317359 }, expect: [{ T: 355.555 }], was: 'false inconsistent-inputs' },
+	{ fluid: 'nitrogen', inputs: { u: 168253.0387632135, x: 0.8568622586317362 }, expect: [{ T: 111.164 }], was: 'false inconsistent-inputs' },
+	{ fluid: 'carbon-dioxide', inputs: { v: 0.0019167245727986612, x: 0.20324253780584423 }, expect: [{ T: 301.813 }], was: 'false inconsistent-inputs' },
+	{ fluid: 'water', inputs: { h: 2359677.196880071, x: 0.7220160171855242 }, expect: [{ T: 578.746 }], was: 'false inconsistent-inputs' },
+	{ fluid: 'ammonia', inputs: { u: 1352696.3584300978, h: 1481463.8358483308 }, expect: [{ T: 264.014, P: 5894 }], was: 'candidate list missing a state' },
+	{ fluid: 'water', inputs: { u: 2015016.6567527356, x: 0.4413501522503793 }, expect: [], was: 'candidate list naming a state off the inputs' }
+];
+
+/** The answer, or every candidate of an ambiguous-state refusal as a full state. */
+function answers(fluid: string, inputs: Inputs): State[] {
+	try {
+		return [fixState(fluid, inputs)];
+	} catch (e) {
+		if (!(e instanceof ThermoError) || e.code !== 'ambiguous-state' || !e.candidates) throw e;
+		// each candidate as the engine answers it when asked for the one nearest its own T and P
+		return e.candidates.map((c) => fixState(fluid, inputs, { near: { T: c.T, P: c.P } }));
+	}
+}
+
+/** Relative miss of each input (x absolute; v through rho). */
+function miss(s: State, inputs: Inputs): number {
+	let worst = 0;
+	for (const [k, want] of Object.entries(inputs) as [keyof Inputs, number][]) {
+		const got = k === 'x' ? (s.x ?? NaN) : k === 'v' ? s.v : (s[k as 'T' | 'P' | 'u' | 'h' | 's'] as number);
+		const e = k === 'x' ? Math.abs(got - want) : Math.abs(got - want) / Math.abs(want);
+		worst = Math.max(worst, Number.isNaN(e) ? Infinity : e);
+	}
+	return worst;
+}
+
+describe('pairs with several, touching or dilute-gas states (issue 11 audit inputs)', () => {
+	for (const c of CASES) {
+		it(`${c.fluid} ${JSON.stringify(c.inputs)} (was: ${c.was})`, () => {
+			const found = answers(c.fluid, c.inputs);
+			expect(found.length).toBeGreaterThan(0);
+			// every answer or candidate is genuine: it reproduces both inputs
+			for (const s of found) expect(miss(s, c.inputs)).toBeLessThan(1e-6);
+			// and the state the inputs came from is among them
+			for (const want of c.expect) {
+				const hit = found.find((s) => Math.abs(s.T - want.T) <= 6e-3 + 1e-4 * want.T && (want.P === undefined || Math.abs(s.P - want.P) <= 0.01 * want.P));
+				expect(hit, `T ≈ ${want.T} K${want.P ? `, P ≈ ${want.P} Pa` : ''}`).toBeDefined();
+			}
+			// no state named twice
+			for (let i = 0; i < found.length; i++)
+				for (let j = i + 1; j < found.length; j++)
+					expect(Math.abs(found[i].T - found[j].T) > 1e-6 * found[i].T || Math.abs(found[i].P - found[j].P) > 1e-3 * found[i].P).toBe(true);
+		});
+	}
+
+	it('names each dilute-gas water state once for (u, h)', () => {
+		for (const [T, P] of [
+			[400, 50],
+			[500, 1],
+			[300, 10]
+		]) {
+			const ref = fixState('water', { T, P });
+			const found = answers('water', { u: ref.u, h: ref.h });
+			// the generating state is named, and no other within 1 K of it (one state, not copies)
+			const near = found.filter((s) => Math.abs(s.T - T) < 1);
+			expect(near.length).toBe(1);
+			expect(near[0].P).toBeCloseTo(P, 3);
+		}
+	});
+
+	it('finds water from (h, s) in gas at 0.1–10 Pa, far below the triple-point pressure', () => {
+		let refused = 0;
+		for (const T of [273.5, 291.73, 320, 353]) {
+			for (const P of [0.1, 0.5, 1, 4.5, 10]) {
+				const ref = fixState('water', { T, P });
+				for (const pair of [{ h: ref.h, s: ref.s }, { u: ref.u, s: ref.s }] as Inputs[]) {
+					try {
+						const s = fixState('water', pair);
+						expect(s.T).toBeCloseTo(T, 6);
+					} catch {
+						refused++;
+					}
+				}
+			}
+		}
+		expect(refused).toBe(0);
+	});
+});
