@@ -44,7 +44,7 @@ export function cycleText(result: PathResult, prefs: UnitPrefs, style: 'unicode'
 	const c = result.cycle;
 	if (!c) return null;
 	const e = (si: number) => formatQuantity(tidy(si, 'specificEnergy'), 'specificEnergy', prefs, { style }).full.replace(/\u00a0/g, ' ');
-	const flows = `heat added ${e(c.heatAdded)}, heat rejected ${e(c.heatRejected)}, net work by the fluid ${e(c.netWork)} per kg`;
+	const flows = `heat added ${e(c.heatAdded)}, heat rejected ${e(c.heatRejected)}, net work by the fluid ${e(c.netWork)}`;
 	if (c.kind === 'power') {
 		const eta = formatQuantity(c.thermalEfficiency ?? 0, 'fraction', prefs, { style }).full.replace(/\u00a0/g, ' ');
 		return `Power cycle: thermal efficiency ${eta}; ${flows}.`;

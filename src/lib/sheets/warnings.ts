@@ -146,12 +146,16 @@ export function sheetWarnings(result: PathResult, legs: readonly SheetLegSpec[],
 function fromEngine(w: PathWarning, legs: readonly SheetLegSpec[]): SheetWarning {
 	const titles: Record<string, string> = { 'throttling-irreversible': 'Throttling is irreversible', 'per-kg-totals': 'Totals per kilogram' };
 	const i = w.leg ? legs.findIndex((l) => l.id === w.leg) : -1;
+	const title = titles[w.code] ?? w.code;
+	// the engine's message may open with the same words as the title ("Leg L3: Throttling is
+	// irreversible: …"); shown under the title they would be said twice
+	const text = labelIds(w.message, legs).replace(/^((?:Leg \S+: )?)(.*?): /, (all, leg: string, head: string) => (head === title ? leg : all));
 	return {
 		key: `${w.code}:${w.leg ?? ''}`,
 		code: w.code,
 		severity: w.severity,
-		title: titles[w.code] ?? w.code,
-		text: labelIds(w.message, legs),
+		title,
+		text,
 		target: i >= 0 ? { kind: 'leg', id: w.leg! } : w.state ? { kind: 'state', id: stateKey(legs, Number(w.state.slice(1)) - 1) } : null
 	};
 }
