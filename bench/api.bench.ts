@@ -1,6 +1,6 @@
 /**
  * HTTP benchmark of the compute API: POST /api/v1/legs under load, against the budget of
- * ENGINEERING.md (≥ 800 requests/s, p99 ≤ 30 ms with 10 connections on the 2-core machine).
+ * docs/performance.md (≥ 800 requests/s, p99 ≤ 30 ms with 10 connections on the 2-core machine).
  * Prints figures; never fails on time.
  *
  * Run: npm run bench:api   (builds nothing: run `npx vite build` first)

@@ -1,6 +1,6 @@
 /**
  * Property-engine benchmark: median time per call for water (IAPWS-95) by input pair, against the
- * performance budget (ENGINEERING.md), and python3-iapws on the same states when Debian's
+ * performance budget (docs/performance.md), and python3-iapws on the same states when Debian's
  * /usr/bin/python3 can import it. Prints a table; never fails on time.
  *
  * Run: npm run bench
@@ -101,7 +101,7 @@ const cases: Case[] = [
 	},
 	{
 		// dragging isentropic and isenthalpic legs on the chart fixes states from (s, v) and (h, v):
-		// target ≤ 100 µs (not in ENGINEERING.md's table)
+		// target ≤ 100 µs (not in docs/performance.md's table)
 		name: 'state from (s, v)',
 		budget: 100,
 		inputs: all.map((s) => ({ s: s.s, v: s.v })),
@@ -235,4 +235,4 @@ console.log(fmtRow(head));
 console.log(widths.map((w) => '─'.repeat(w)).join('  '));
 for (const l of lines) console.log(fmtRow(l));
 if (!python) console.log('python3-iapws not available (/usr/bin/python3 -c "import iapws" failed): no comparison.');
-console.log('Budgets are compared with the CPU-time median (ENGINEERING.md, performance budget). Never fails on time.');
+console.log('Budgets are compared with the CPU-time median (docs/performance.md, performance budget). Never fails on time.');

@@ -1,7 +1,7 @@
 /**
  * Per-fluid engine benchmark: median CPU µs per call for (T, ρ), (P, T), (P, h) and saturation at T,
  * for every registered fluid (or those named: `npx tsx bench/fluids.bench.ts propane argon`, or
- * BENCH_FLUIDS=propane,argon), against the budgets the water figures meet (ENGINEERING.md's
+ * BENCH_FLUIDS=propane,argon), against the budgets the water figures meet (docs/performance.md's
  * performance budget; the same numbers as engine.bench.ts). Prints a table; never fails on time.
  *
  * States per fluid: single-phase points between the triple and 1.6× the critical temperature at
@@ -90,4 +90,4 @@ console.log(
 console.log(fmtRow(head));
 console.log(widths.map((w) => '─'.repeat(w)).join('  '));
 for (const l of lines) console.log(fmtRow(l));
-console.log('Median CPU µs per call / budget µs (the water figures’ budgets, ENGINEERING.md). Never fails on time.');
+console.log('Median CPU µs per call / budget µs (the water figures’ budgets, docs/performance.md). Never fails on time.');

@@ -1,6 +1,6 @@
 /**
  * Leg benchmark: median time to compute a 200-point leg with its saturation crossings, per process
- * kind, against the budget of ENGINEERING.md (≤ 3 ms). Prints a table; never fails on time.
+ * kind, against the budget of docs/performance.md (≤ 3 ms). Prints a table; never fails on time.
  *
  * Run: npm run bench (after the engine bench), or npx tsx bench/legs.bench.ts
  *

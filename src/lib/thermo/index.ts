@@ -112,7 +112,7 @@ export function getFluid(id: string): FluidInfo {
 }
 
 /**
- * A process leg between a start state and a target (API.md): points along the path, crossings of
+ * A process leg between a start state and a target (docs/compute-api.md): points along the path, crossings of
  * the saturation lines, w = ∫P dv, q = Δu + w, wShaft = −∫v dP, qFlow = Δh + wShaft (J/kg).
  * The leg runs until the target first takes its value along the process curve (solvers/legs.ts;
  * integrals by Gauss–Kronrod quadrature per piece between crossings, or exactly where P or v is

@@ -161,7 +161,7 @@ describe('saturation next to the equation’s own critical point (every register
 describe('the equation’s own critical point (FluidInfo.equationCritical, saturationCurve().critical)', () => {
 	it('ammonia: 405.50 K and 11.359 MPa from the equation, beside the published 405.40 K and 11.333 MPa', () => {
 		const info = getFluid('ammonia');
-		// Tillner-Roth, Harms-Watzenberg & Baehr (1993), as listed in REFERENCE-VALUES.md
+		// Tillner-Roth, Harms-Watzenberg & Baehr (1993), as listed in docs/reference-values.md
 		expect(info.critical).toEqual({ T: 405.4, P: 11.333e6, rho: 225 });
 		// python3-iapws 1.5.2 (Debian), ammonia.NH3: (∂P/∂ρ)_T = (∂²P/∂ρ²)_T = 0 solved over direct
 		// (T, rho) calls (dpdrho_T): T = 405.5001629673764 K, ρ = 224.777509627 kg/m³, P = 11359196.24 Pa

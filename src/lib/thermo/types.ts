@@ -231,7 +231,7 @@ export interface DesignLimits {
 
 export type DesignLimitName = keyof DesignLimits;
 
-/** A whole path: the sheet's spec (PRODUCT.md "What a sheet holds"). */
+/** A whole path: the sheet's spec (docs/compute-api.md, "A path"). */
 export interface PathSpec {
 	fluid: string;
 	system: PathSystem;

@@ -1,6 +1,6 @@
 /**
  * Water against the check values printed in IAPWS R6-95(2018) (Revised Release on the IAPWS
- * Formulation 1995), as transcribed in /work/shared/REFERENCE-VALUES.md: Table 6 (α⁰, αʳ and
+ * Formulation 1995), as transcribed in docs/reference-values.md: Table 6 (α⁰, αʳ and
  * derivatives), Table 7 (single-phase points), Table 8 (saturation). Each value is compared to
  * within half a unit in the last printed digit.
  */

@@ -3,7 +3,7 @@ import { API_ISOLINE_POINTS_MAX, API_PATH_POINTS_MAX, API_SAMPLES_MAX, API_SATUR
 import { ISOLINE_KINDS, ISOLINE_POINTS_DEFAULT, ISOLINE_POINTS_MAX, ISOLINE_POINTS_MIN, ISOLINE_VALUES_MAX, MAX_LEGS, N_MAX, PROCESSES, SAMPLES_DEFAULT, TARGET_NAMES } from '$lib/thermo';
 
 /*
- * Request shapes of the compute API (API.md), checked before the engine sees them. Everything is SI:
+ * Request shapes of the compute API (docs/compute-api.md), checked before the engine sees them. Everything is SI:
  * T K, P Pa (absolute), v m³/kg, rho kg/m³, u h J/kg, s J/(kg·K), x 0…1. Objects are strict: an
  * unknown field is refused by name, so a typo ("temp", "Pa") never passes silently.
  */

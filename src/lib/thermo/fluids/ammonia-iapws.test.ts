@@ -30,7 +30,7 @@ const solidPoints = (fixture.points as Point[]).filter((p) => isSolidAt('ammonia
 /*
  * Reference states. python3-iapws keeps the equation's published ideal-gas constants a1, a2;
  * Statewright shifts them so that the saturated liquid at 273.15 K has h = 200 kJ/kg and
- * s = 1 kJ/(kg·K) (IIR, API.md). Changing a1 and a2 adds a constant to u and h and another to s
+ * s = 1 kJ/(kg·K) (IIR, docs/compute-api.md). Changing a1 and a2 adds a constant to u and h and another to s
  * (α⁰ gains c1 + c2·τ: h and u gain R·Tr·c2, s gains −R·c1), so the two conventions differ by
  * constants, computed here from the library's own saturated liquid at 273.15 K.
  */

@@ -53,7 +53,7 @@ describe('fluid data files', () => {
 		expect(r134a.critical.rho).toBe(511.9);
 	});
 
-	it('declare the reference states of API.md', () => {
+	it('declare the reference states of docs/compute-api.md', () => {
 		for (const f of [ammonia, carbonDioxide, r134a]) {
 			expect(f.referenceState).toMatchObject({ kind: 'saturated-liquid-at-T', T: 273.15, h: 200e3, s: 1e3 });
 		}
@@ -76,7 +76,7 @@ describe('carbon dioxide, Span & Wagner (1996)', () => {
 	});
 
 	// Span & Wagner (1996), Table 34 (p. 1560): T/K, p_s/MPa, ρ′, ρ″/(kg/m³); h′, h″/(kJ/kg), s′, s″/(kJ/(kg·K))
-	// (p, ρ as in REFERENCE-VALUES.md; h, s as quoted from Table 34 in pychemqt's tests, lib/mEoS/CO2.py)
+	// (p, ρ as in docs/reference-values.md; h, s as quoted from Table 34 in pychemqt's tests, lib/mEoS/CO2.py)
 	const table34 = [
 		['216.592', '0.51796', '1178.46', '13.761', '-426.74', '-76.364', '-2.2177', '-0.59999'],
 		['240', '1.2825', '1088.87', '33.295', '-379.94', '-70.293', '-2.0155', '-0.72532'],
@@ -127,7 +127,7 @@ describe('carbon dioxide, Span & Wagner (1996)', () => {
 	});
 
 	it('agrees with round-°C saturation values', () => {
-		// from memory: a standards body's online fluid tables (REFERENCE-VALUES.md); −20 / 0 / 20 °C
+		// from memory: a standards body's online fluid tables (docs/reference-values.md); −20 / 0 / 20 °C
 		const rows = [
 			['253.15', '1.9696', '1031.66', '51.700'],
 			['273.15', '3.4851', '927.43', '97.647'],
@@ -160,12 +160,12 @@ describe('R-134a, Tillner-Roth & Baehr (1994)', () => {
 	});
 
 	it('has the triple-point pressure', () => {
-		// REFERENCE-VALUES.md: R-134a triple point 169.85 K, 389.56 Pa (from the equation)
+		// docs/reference-values.md: R-134a triple point 169.85 K, 389.56 Pa (from the equation)
 		expectPrinted(fixState(id, { T: 169.85, x: 0 }).P, '389.56', 1, 0, 'p_t');
 	});
 
 	// Tillner-Roth & Baehr (1994), Table 8 (p. 696): T/K, p_s/MPa, ρ′, ρ″; h′, h″/(kJ/kg); s′, s″/(kJ/(kg·K)), IIR convention
-	// (p, ρ as in REFERENCE-VALUES.md; h, s as quoted from Table 8 in pychemqt's tests, lib/mEoS/R134a.py)
+	// (p, ρ as in docs/reference-values.md; h, s as quoted from Table 8 in pychemqt's tests, lib/mEoS/R134a.py)
 	const table8 = [
 		['200', '0.00631', '1510.5', '0.38977', '107.39', '353.06', '0.6073', '1.8356'],
 		['250', '0.11561', '1367.9', '5.9546', '169.57', '384.60', '0.8841', '1.7443'],
@@ -238,7 +238,7 @@ describe('R-134a, Tillner-Roth & Baehr (1994)', () => {
 	});
 
 	it('agrees with round-°C saturation values', () => {
-		// from memory: a standards body's online fluid tables (REFERENCE-VALUES.md); −20 / 0 / 20 °C
+		// from memory: a standards body's online fluid tables (docs/reference-values.md); −20 / 0 / 20 °C
 		const rows = [
 			['253.15', '0.13273', '1358.27', '6.7845'],
 			['273.15', '0.29280', '1294.78', '14.428'],
@@ -266,7 +266,7 @@ describe('ammonia, Tillner-Roth, Harms-Watzenberg & Baehr (1993)', () => {
 	});
 
 	it('has the triple-point pressure', () => {
-		// REFERENCE-VALUES.md: ammonia triple point 195.495 K, 6.0912 kPa (from the equation)
+		// docs/reference-values.md: ammonia triple point 195.495 K, 6.0912 kPa (from the equation)
 		expectPrinted(fixState(id, { T: 195.495, x: 0 }).P, '6.0912', kJ, 0, 'p_t');
 	});
 
@@ -331,7 +331,7 @@ describe('nitrogen, Span et al. (2000)', () => {
 	});
 
 	it('has the triple-point pressure', () => {
-		// REFERENCE-VALUES.md: nitrogen triple point 63.151 K, 12.5198 kPa (from the equation)
+		// docs/reference-values.md: nitrogen triple point 63.151 K, 12.5198 kPa (from the equation)
 		expectPrinted(fixState(id, { T: 63.151, x: 0 }).P, '12.5198', kJ, 0, 'p_t');
 	});
 
@@ -340,7 +340,7 @@ describe('nitrogen, Span et al. (2000)', () => {
 		// Span et al. (2000), saturation table p. 1403 (as quoted in pychemqt's tests): T_b = 77.355 K;
 		// also from memory: handbook normal boiling point of nitrogen 77.355 K
 		expectPrinted(liq.T, '77.355', 1, 0, 'T_b');
-		// reference state (API.md): h = 0, s = 0 for saturated liquid at 101.325 kPa
+		// reference state (docs/compute-api.md): h = 0, s = 0 for saturated liquid at 101.325 kPa
 		expect(Math.abs(liq.h)).toBeLessThan(1e-6);
 		expect(Math.abs(liq.s)).toBeLessThan(1e-9);
 		// Span et al. (2000), p. 1403: ρ′ = 28.775, ρ″ = 0.16464 mol/dm³ at the normal boiling point
@@ -410,7 +410,7 @@ describe.each([
 	['r134a', 'IIR']
 ])('%s reference state (%s)', (id) => {
 	it('gives h = 200 kJ/kg, s = 1 kJ/(kg·K) for saturated liquid at 0 °C', () => {
-		// API.md / IIR convention
+		// docs/compute-api.md / IIR convention
 		const liq = fixState(id, { T: 273.15, x: 0 });
 		expect(Math.abs(liq.h - 200e3)).toBeLessThan(1e-6);
 		expect(Math.abs(liq.s - 1e3)).toBeLessThan(1e-9);

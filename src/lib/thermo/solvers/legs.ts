@@ -1,7 +1,7 @@
 /**
  * Process legs (isobaric, isochoric, isothermal, isentropic, isenthalpic, polytropic) from a start
  * state to a target, with the crossings of the saturation lines, boundary work w = ∫P dv,
- * q = Δu + w, shaft work wShaft = −∫v dP and qFlow = Δh + wShaft (see the compute contract, API.md).
+ * q = Δu + w, shaft work wShaft = −∫v dP and qFlow = Δh + wShaft (see the compute contract, docs/compute-api.md).
  *
  * The leg follows the process curve (leg-curve.ts) from the start until the target property first
  * takes the target value, in whichever direction along the curve reaches it first (both are
@@ -149,7 +149,7 @@ function valueOf(c: CPt, key: TargetName): number {
 	}
 }
 
-/** Compute a leg (see the module comment and API.md). Throws ThermoError for anything it cannot answer. */
+/** Compute a leg (see the module comment and docs/compute-api.md). Throws ThermoError for anything it cannot answer. */
 export function computeLeg(spec: LegSpec): Leg {
 	return traceLeg(spec).leg;
 }

@@ -1,5 +1,5 @@
 /**
- * Paths: a chain of legs from a start state (the sheet spec of PRODUCT.md), with totals for the
+ * Paths: a chain of legs from a start state (the sheet spec, docs/compute-api.md), with totals for the
  * system's size, the cycle analysis when the path closes, design-limit events found exactly along
  * each leg, per-state extras practitioners read, and warnings with stable codes.
  *

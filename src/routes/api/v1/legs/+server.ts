@@ -3,7 +3,7 @@ import { computeLeg, SAMPLES_DEFAULT, type Process } from '$lib/thermo';
 import { chargeWork, computePost, readBody } from '$lib/server/compute/http';
 import { legRequestSchema } from '$lib/server/compute/schemas';
 
-/** One process leg from a start state to a target: { leg } per API.md. */
+/** One process leg from a start state to a target: { leg } per docs/compute-api.md. */
 export const POST: RequestHandler = computePost(async (event) => {
 	const b = await readBody(event.request, legRequestSchema);
 	chargeWork(event, b.samples ?? SAMPLES_DEFAULT);
