@@ -218,7 +218,7 @@ test.describe('compute API: good answers', () => {
 		for (const k of ['q', 'du', 'dh', 'ds', 'wShaft', 'qFlow']) expect(Number.isFinite(leg[k])).toBe(true);
 	});
 
-	test('POST /api/v1/legs: every process answers, with the compute contract's fields', async ({ request }) => {
+	test('POST /api/v1/legs: every process answers, with the compute contract’s fields', async ({ request }) => {
 		for (const [process, target, n] of [
 			['isobaric', { T: 600 }],
 			['isochoric', { T: 600 }],
