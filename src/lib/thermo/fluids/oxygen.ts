@@ -38,7 +38,8 @@ export const oxygen: FluidData = {
 			'text, its Table 2.3.2). CoolProp and pychemqt carry other ideal-gas equations (a refit; Stewart, Jacobsen & Wagner ' +
 			'1991), not used here. The ideal part reproduces the ideal-gas cp⁰ printed by Stewart, Jacobsen & Wagner (1991), ' +
 			'Table 9, at 60, 200, 500, 1000 and 2000 K to all printed digits (oxygen.test.ts). Molar mass 31.9988 g/mol, ' +
-			'R = 8.31434 J/(mol·K) (pychemqt, CoolProp), critical point 154.581 K, 5.043 MPa, 13.63 mol/dm³. ' +
+			'R = 8.31434 J/(mol·K) (pychemqt, CoolProp), critical point 154.581 K, 5.043 MPa, 13.63 mol/dm³. Range served: ' +
+			'54.361–300 K up to 80 MPa, as CoolProp states it (pychemqt allows 2000 K and 82 MPa; the narrower is kept). ' +
 			'Published scientific data (facts), transcribed; no code copied.'
 	},
 	molarMass: M,
