@@ -62,7 +62,6 @@ export function groupFluids<F extends PickableFluid>(fluids: F[]): { id: Pickabl
  * told so, rather than only shown near matches (O2 would otherwise offer CO2).
  */
 const NOT_CARRIED: { label: string; names: string[] }[] = [
-	{ label: 'Oxygen', names: ['oxygen', 'o2', 'lox', 'gox', 'r732', 'liquid oxygen'] },
 	{ label: 'Air', names: ['air', 'r729', 'liquid air', 'compressed air'] },
 	{ label: 'Helium', names: ['helium', 'he', 'he4', 'helium4', 'lhe', 'r704', 'liquid helium'] }
 ];

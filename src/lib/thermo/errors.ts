@@ -26,6 +26,8 @@ export type ThermoErrorCode =
 	| 'out-of-range'
 	/** T and P given on the saturation line: they are not independent there */
 	| 'two-phase-pressure-temperature'
+	/** a state of a pseudo-pure mixture (air) between its bubble and dew lines, where liquid and vapor of different compositions coexist */
+	| 'mixture-two-phase'
 	/** x outside 0…1 */
 	| 'quality-out-of-range'
 	/** no fluid state has both inputs (e.g. a quality above the critical temperature) */

@@ -9,6 +9,7 @@ import { IdealLead } from './terms/ideal-lead.ts';
 import { IdealLogTau } from './terms/ideal-log-tau.ts';
 import { IdealPower } from './terms/ideal-power.ts';
 import { IdealPlanckEinstein } from './terms/ideal-planck-einstein.ts';
+import { IdealLogCPlusExp } from './terms/ideal-log-c-plus-exp.ts';
 import { ResidualPolynomial } from './terms/residual-polynomial.ts';
 import { ResidualExponential } from './terms/residual-exponential.ts';
 import { ResidualGaussian } from './terms/residual-gaussian.ts';
@@ -145,8 +146,15 @@ export function validateFluidData(data: unknown): asserts data is FluidData {
 				g.forEach((x, j) => c.num(x, `${p}.gamma[${j}]`, true));
 				break;
 			}
+			case 'log-c-plus-exp': {
+				const n = c.nums(o.n, `${p}.n`);
+				const cs = c.nums(o.c, `${p}.c`, n.length);
+				cs.forEach((x, j) => c.num(x, `${p}.c[${j}]`, true));
+				c.nums(o.gamma, `${p}.gamma`, n.length);
+				break;
+			}
 			default:
-				bad(id, `${p}.kind`, 'is not one of lead, log-tau, power, planck-einstein');
+				bad(id, `${p}.kind`, 'is not one of lead, log-tau, power, planck-einstein, log-c-plus-exp');
 		}
 	});
 	if (leads !== 1) bad(id, 'ideal', `must hold exactly one lead term (has ${leads})`);
@@ -246,6 +254,8 @@ function compileIdeal(t: IdealTerm, a1a2?: { a1: number; a2: number }): TermEval
 			return new IdealPower(t.n, t.t);
 		case 'planck-einstein':
 			return new IdealPlanckEinstein(t.n, t.gamma);
+		case 'log-c-plus-exp':
+			return new IdealLogCPlusExp(t.n, t.c, t.gamma);
 	}
 }
 

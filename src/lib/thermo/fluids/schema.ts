@@ -16,7 +16,9 @@ export type IdealTerm =
 	/** Σ nᵢ·τ^tᵢ */
 	| { kind: 'power'; n: number[]; t: number[] }
 	/** Σ nᵢ·ln(1 − exp(−γᵢ·τ)) */
-	| { kind: 'planck-einstein'; n: number[]; gamma: number[] };
+	| { kind: 'planck-einstein'; n: number[]; gamma: number[] }
+	/** Σ nᵢ·ln(cᵢ + exp(γᵢ·τ)), cᵢ > 0 (air, Lemmon et al. 2000: c = 2/3) */
+	| { kind: 'log-c-plus-exp'; n: number[]; c: number[]; gamma: number[] };
 
 /** Residual part αʳ terms. */
 export type ResidualTerm =

@@ -24,6 +24,10 @@ export function densityAtTP(fl: Fluid, T: number, P: number, guess: number, lo =
 		if (f < 0) lo = rho;
 		else hi = rho;
 		let next = df > 0 ? rho - f / df : NaN;
+		// converged: a Newton step below round-off lands on rho itself, i.e. on a bracket end; taking that
+		// for "left the bracket" would throw the root away for 2ρ (with an open bracket), from where a
+		// stiff liquid's isotherm (oxygen near its triple point) need not lead back
+		if (Math.abs(next - rho) <= 1e-14 * rho) return next;
 		// with an open bracket, grow by at most a factor 4 per step (flat isotherms near Tc)
 		if (!Number.isFinite(hi) && next > 4 * rho) next = 4 * rho;
 		// rtsafe rule: bisect when Newton leaves the bracket, or stops halving once bracketed

@@ -80,7 +80,9 @@ function buildGrid(fl: Fluid): Grid {
 				if (sat && b === 0 && j === nj - 1) rho = sat.rhoV;
 				else if (sat && b === 1 && j === 0) rho = sat.rhoL;
 				else if (sat && b === 0) rho = densityAtTP(fl, T, P, Math.min(rho, sat.rhoV), 0, sat.rhoV);
-				else if (sat && b === 1) rho = densityAtTP(fl, T, P, Math.max(rho, sat.rhoL), sat.rhoL);
+				// start strictly inside the bracket: a guess equal to its bound would be replaced by 2·ρ' (density.ts),
+				// from which Newton need not come back on a stiff liquid isotherm (oxygen near its triple point)
+				else if (sat && b === 1) rho = densityAtTP(fl, T, P, Math.max(rho, sat.rhoL * (1 + 1e-12)), sat.rhoL);
 				else rho = densityAtTP(fl, T, P, rho);
 				const idx = i * nj + j;
 				evalPoint(fl, T, rho, p, 1);

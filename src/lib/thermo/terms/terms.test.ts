@@ -9,6 +9,7 @@ import { IdealLead } from './ideal-lead.ts';
 import { IdealLogTau } from './ideal-log-tau.ts';
 import { IdealPower } from './ideal-power.ts';
 import { IdealPlanckEinstein } from './ideal-planck-einstein.ts';
+import { IdealLogCPlusExp } from './ideal-log-c-plus-exp.ts';
 import { ResidualPolynomial } from './residual-polynomial.ts';
 import { ResidualExponential } from './residual-exponential.ts';
 import { ResidualGaussian } from './residual-gaussian.ts';
@@ -33,6 +34,7 @@ const cases: [string, TermEvaluator][] = [
 	['ideal log-tau', new IdealLogTau(3.00632)],
 	['ideal power', new IdealPower([1.2, -0.7, 0.3], [-0.5, 1.5, 2])],
 	['ideal Planck–Einstein', new IdealPlanckEinstein([0.97, 1.28], [3.5, 7.7])],
+	['ideal ln(c + exp(γτ))', new IdealLogCPlusExp([-0.2, 0.7], [2 / 3, 1.5], [0.9, 2.4])],
 	['residual polynomial (t in eighths: one root)', new ResidualPolynomial([0.0125, 7.9, -0.3], [1, 2, 4], [-0.5, 0.875, 1])],
 	['residual polynomial (general exponents)', new ResidualPolynomial([0.3, -0.2, 0.05], [1.5, 2, 3], [0.3, 1.7, -0.9])],
 	['residual exponential (integer exponents)', new ResidualExponential([-0.67, 0.2, 0.016, -0.02], [1, 2, 5, 3], [4, 6, 1, 10], [1, 2, 2, 6])],
@@ -131,5 +133,25 @@ describe('Helmholtz terms: far bells skipped without effect', () => {
 			// the skip does happen over most of the range
 			expect(skipped).toBeGreaterThan(1000);
 		}
+	});
+});
+
+describe('Helmholtz terms: ln(c + exp(γτ)) value', () => {
+	it('equals n·ln(c + e^(γτ)) written out directly, and stays finite where e^(γτ) overflows', () => {
+		// the defining formula, evaluated directly with Math.log/Math.exp (no shared code with the term)
+		for (const [n, c, g, tau] of [
+			[-0.197938904, 2 / 3, 87.31279, 1.2],
+			[0.5, 1.5, 2.4, 0.6],
+			[1.3, 0.1, 0.9, 2.6]
+		]) {
+			const r = evaluate(new IdealLogCPlusExp([n], [c], [g]), 1, tau, 0);
+			const direct = n * Math.log(c + Math.exp(g * tau));
+			expect(Math.abs(r.a - direct)).toBeLessThan(1e-13 * Math.max(1, Math.abs(direct)));
+		}
+		// γτ = 800: e^(γτ) is Infinity in doubles, the term is n·γτ plus a negligible ln(1 + c·e^(−γτ))
+		const far = evaluate(new IdealLogCPlusExp([2], [2 / 3], [400]), 1, 2, 3);
+		expect(far.a).toBeCloseTo(1600, 9);
+		expect(far.t1).toBeCloseTo(1600, 9);
+		expect(Math.abs(far.t2)).toBeLessThan(1e-300);
 	});
 });
