@@ -14,7 +14,7 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { loadavg } from 'node:os';
-import { fixState, saturationAtP, saturationAtT } from '../src/lib/thermo/index.ts';
+import { fixState, if97State, if97StatePh, if97StatePs, saturationAtP, saturationAtT } from '../src/lib/thermo/index.ts';
 import type { Inputs } from '../src/lib/thermo/types.ts';
 
 interface Case {
@@ -63,6 +63,35 @@ const cases: Case[] = [
 		inputs: single.map((s) => ({ T: s.T, P: s.P })),
 		run: (i) => fixState('water', i),
 		py: 'IAPWS95(T=d["T"], P=d["P"]/1e6)'
+	},
+	{
+		// IAPWS-IF97, the industrial formulation, on the same states, beside the IAPWS-95 figure above
+		name: 'IF97 state from (P, T)',
+		budget: 1,
+		inputs: single.map((s) => ({ T: s.T, P: s.P })),
+		run: (i) => if97State(i.P as number, i.T as number),
+		py: 'IAPWS97(T=d["T"], P=d["P"]/1e6)'
+	},
+	{
+		name: 'IF97 state from (P, T), regions 1, 2, 5 only',
+		budget: 1,
+		inputs: single.filter((s) => s.T < 623.15 || s.T > 863.15 || s.P < 16.5e6).map((s) => ({ T: s.T, P: s.P })),
+		run: (i) => if97State(i.P as number, i.T as number),
+		py: 'IAPWS97(T=d["T"], P=d["P"]/1e6)'
+	},
+	{
+		name: 'IF97 state from (P, h)',
+		budget: 10,
+		inputs: all.map((s) => ({ P: s.P, h: s.h })),
+		run: (i) => if97StatePh(i.P as number, i.h as number),
+		py: 'IAPWS97(P=d["P"]/1e6, h=d["h"]/1e3)'
+	},
+	{
+		name: 'IF97 state from (P, s)',
+		budget: 10,
+		inputs: all.map((s) => ({ P: s.P, s: s.s })),
+		run: (i) => if97StatePs(i.P as number, i.s as number),
+		py: 'IAPWS97(P=d["P"]/1e6, s=d["s"]/1e3)'
 	},
 	{
 		name: 'saturation at T',
@@ -184,7 +213,7 @@ function timePython(): Map<string, number> | null {
 	const script = `
 import json, sys, time, warnings
 warnings.filterwarnings('ignore')
-from iapws import IAPWS95
+from iapws import IAPWS95, IAPWS97
 jobs = json.load(sys.stdin)
 out = {}
 for job in jobs:
