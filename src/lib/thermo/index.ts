@@ -35,6 +35,9 @@ export {
 	if97Boundaries
 } from './if97/state.ts';
 export type { If97State, If97Region, If97Options } from './if97/state.ts';
+/** Viscosity, thermal conductivity, Prandtl number and surface tension of a state (water so far): see transport/index.ts. */
+export { transport } from './transport/index.ts';
+export type { Transport, TransportAbsence, TransportName } from './transport/index.ts';
 export type { ThermoErrorCode, StateCandidate } from './errors.ts';
 
 /**
