@@ -240,7 +240,8 @@ export function if97State(P: number, T: number, options: If97Options = {}): If97
 function onSide(P: number, T: number, side: 'liquid' | 'vapor'): If97State {
 	const p = P / 1e6;
 	if (T > T_25) return fromGibbs(gibbs5(T, p), T, P, 5);
-	if (T <= T_13) return side === 'liquid' && p >= psat(T) ? fromGibbs(gibbs1(T, p), T, P, 1) : fromGibbs(gibbs2(T, p), T, P, 2);
+	// the caller keeps T on its side of Tsat(P), so round-off of Eqs. 30/31 at the line cannot flip the region
+	if (T <= T_13) return side === 'liquid' ? fromGibbs(gibbs1(T, p), T, P, 1) : fromGibbs(gibbs2(T, p), T, P, 2);
 	if (p <= pB23(T)) return fromGibbs(gibbs2(T, p), T, P, 2);
 	return fromHelmholtz(rho3(p, T, T < TC && side === 'vapor' ? 'vapor' : 'liquid'), T, P);
 }
@@ -338,6 +339,7 @@ function fromPressureAnd(P: number, key: Target, value: number): If97State {
 			`Give ${key} from ${fmt(lo[key])} to ${fmt(hi[key])}.`
 		);
 	let out: If97State;
+	let branch: 'liquid' | 'vapor' | null = null;
 	if (P >= PC * 1e6 || P < P_SAT_MIN) {
 		const side = P < P_SAT_MIN ? 'vapor' : 'liquid';
 		const lo = onSide(P, T_MIN, side);
@@ -349,22 +351,33 @@ function fromPressureAnd(P: number, key: Target, value: number): If97State {
 		const sat = saturatedAtP(P);
 		if (value >= sat.liquid[key] && value <= sat.vapor[key]) {
 			const x = (value - sat.liquid[key]) / (sat.vapor[key] - sat.liquid[key]);
-			if (x === 0) return sat.liquid;
-			if (x === 1) return sat.vapor;
+			// within round-off of a saturated state (the line's Eqs. 30/31 agree to ~1e−15): that state
+			if (x <= 1e-11) return sat.liquid;
+			if (x >= 1 - 1e-11) return sat.vapor;
 			return mixture(P, sat.T, sat.liquid, sat.vapor, x);
 		}
 		if (value < sat.liquid[key]) {
 			const lo = onSide(P, T_MIN, 'liquid');
 			if (below(value, lo[key])) throw rangeError(lo, onSide(P, Tmax, 'vapor'));
 			out = solveT(P, key, value, T_MIN, sat.T, sat.T <= T_13 ? guessLiquid(sat.T) : sat.T - 1, 'liquid');
+			branch = 'liquid';
 		} else {
 			const hi = onSide(P, Tmax, 'vapor');
 			if (above(value, hi[key])) throw rangeError(onSide(P, T_MIN, 'liquid'), hi);
 			out = solveT(P, key, value, sat.T, Tmax, guessVapor(sat.T), 'vapor');
+			branch = 'vapor';
 		}
 	}
-	const ps = out.T < TC ? psat(out.T) * 1e6 : null;
-	out.phase = phaseOf(out.T, P, ps);
+	if (branch === null) {
+		out.phase = phaseOf(out.T, P, out.T < TC ? psat(out.T) * 1e6 : null);
+		return out;
+	}
+	// below Pc the branch (liquid below Tsat(P), vapor above) names the phase; on the line, within
+	// round-off of Eqs. 30/31, the saturated phase of that branch
+	const saturated = onLine(P / 1e6, psat(Math.min(out.T, TC)));
+	if (branch === 'liquid') out.phase = saturated ? 'saturated-liquid' : 'compressed-liquid';
+	else out.phase = saturated ? 'saturated-vapor' : 'superheated-vapor';
+	if (saturated) out.x = branch === 'liquid' ? 0 : 1;
 	return out;
 }
 
