@@ -1,5 +1,5 @@
 /**
- * Property-engine benchmark: median time per call for water (IAPWS-95) by input pair, against the
+ * Property-engine benchmark: median time per call for water (IAPWS-95; IF97 rows named so) by input pair, against the
  * performance budget (ENGINEERING.md), and python3-iapws on the same states when Debian's
  * /usr/bin/python3 can import it. Prints a table; never fails on time.
  *
@@ -14,8 +14,8 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { loadavg } from 'node:os';
-import { fixState, if97State, if97StatePh, if97StatePs, saturationAtP, saturationAtT } from '../src/lib/thermo/index.ts';
-import type { Inputs } from '../src/lib/thermo/types.ts';
+import { fixState, if97State, if97StatePh, if97StatePs, saturationAtP, saturationAtT, transport } from '../src/lib/thermo/index.ts';
+import type { Inputs, State } from '../src/lib/thermo/types.ts';
 
 interface Case {
 	name: string;
@@ -41,6 +41,8 @@ const seeds: Inputs[] = [
 const single = seeds.map((s) => fixState('water', s));
 const mixed = [300, 373.15, 450, 520, 600].flatMap((T) => [0.1, 0.6].map((x) => fixState('water', { T, x })));
 const all = [...single, ...mixed];
+const transportInputs: Inputs[] = single.map((s) => ({ T: s.T, P: s.P }));
+const transportStates = new Map<Inputs, State>(transportInputs.map((i) => [i, if97State(i.P as number, i.T as number)]));
 
 const cases: Case[] = [
 	{
@@ -92,6 +94,13 @@ const cases: Case[] = [
 		inputs: all.map((s) => ({ P: s.P, s: s.s })),
 		run: (i) => if97StatePs(i.P as number, i.s as number),
 		py: 'IAPWS97(P=d["P"]/1e6, s=d["s"]/1e3)'
+	},
+	{
+		// the correlations alone, on IF97 states fixed beforehand
+		name: 'transport(state), single-phase',
+		budget: null,
+		inputs: transportInputs,
+		run: (i) => transport(transportStates.get(i) as State)
 	},
 	{
 		name: 'saturation at T',
@@ -239,7 +248,7 @@ print(json.dumps(out))
 const rows = cases.map((c) => ({ c, t: time(c) }));
 const python = timePython();
 
-const head = ['case (water, IAPWS-95)', 'states', 'median µs (CPU)', 'median µs (wall)', 'best µs (CPU)', 'budget µs', 'python3-iapws µs', 'iapws / ours'];
+const head = ['case (water: IAPWS-95 unless IF97 named)', 'states', 'median µs (CPU)', 'median µs (wall)', 'best µs (CPU)', 'budget µs', 'python3-iapws µs', 'iapws / ours'];
 const lines = rows.map(({ c, t }) => {
 	const p = python?.get(c.name);
 	return [
