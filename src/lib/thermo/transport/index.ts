@@ -33,7 +33,7 @@ export interface Transport {
 }
 
 const SOURCES = {
-	mu: 'IAPWS R12-08 (critical enhancement omitted, as for industrial use)',
+	mu: 'IAPWS R12-08 (critical enhancement only near the critical point, as for industrial use)',
 	k: 'IAPWS R15-11 (critical enhancement with the industrial reference of Eq. 25)',
 	Pr: 'μ·cp/k',
 	sigma: 'IAPWS R1-76(2014)'
@@ -75,16 +75,19 @@ export function transport(state: State): Transport {
 			};
 		return out;
 	}
-	const mu = waterViscosity(rho, T);
+	const { cp, cv, w } = state;
+	const thermo = cp !== null && cv !== null && w !== null && cp > 0 && cv > 0 && w > 0;
+	// (∂ρ/∂p)_T = ρ κ_T = (cp/cv)/w², for both critical enhancements
+	const drhodP = thermo ? cp / cv / (w * w) : undefined;
+	const mu = waterViscosity(rho, T, drhodP);
 	out.mu = mu;
 	out.sources.mu = SOURCES.mu;
-	const { cp, cv, w } = state;
-	if (cp === null || cv === null || w === null || !(cp > 0 && cv > 0 && w > 0)) {
+	if (!thermo) {
 		for (const name of ['k', 'Pr'] as const)
 			out.absent[name] = { code: 'out-of-range', reason: `This state has no cp, cv or speed of sound, which the ${describe(name)} needs.` };
 		return out;
 	}
-	const k = waterConductivity(rho, T, cp, cv, cp / cv / (w * w), mu);
+	const k = waterConductivity(rho, T, cp as number, cv as number, drhodP as number, mu);
 	out.k = k;
 	out.sources.k = SOURCES.k;
 	out.Pr = (mu * cp) / k;

@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import fixture from '../../../../tests/reference/water-transport.json';
 import { fixState, if97State, transport } from '../index.ts';
-import { waterConductivityBackground, waterSurfaceTension, waterViscosity } from './water.ts';
+import { viscosityCriticalRegion, waterConductivityBackground, waterSurfaceTension, waterViscosity } from './water.ts';
 
 function printed(actual: number, text: string, what: string): void {
 	const [mant, exp] = text.toLowerCase().split('e');
@@ -37,6 +37,34 @@ describe('water viscosity, IAPWS R12-08 (μ̄2 = 1)', () => {
 	});
 });
 
+describe('near the critical point: IAPWS-95 states at 647.35 K (R12-08 and R15-11, Table 5 of each)', () => {
+	// from memory: IAPWS R12-08, Table 5 (μ, μPa·s) and IAPWS R15-11, Table 5 (λ, mW/(m·K)), both computed
+	// with IAPWS-95; python3-iapws 1.5.2 (Debian), IAPWS95(T=647.35, rho=ρ).mu and .k print the same digits
+	const rows: [number, string, string][] = [
+		[122, '25.520677', '130.922885'],
+		[222, '31.337589', '367.787459'],
+		[272, '36.228143', '757.959776'],
+		[322, '42.961579', '1443.75556'],
+		[372, '45.688204', '650.319402'],
+		[422, '49.436256', '448.883487']
+	];
+	it('inside R12-08\'s critical region (245.8 to 405.3 kg/m³) μ̄2 is applied: μ to 1e−7 and λ to 1e−6', () => {
+		for (const [rho, mu, k] of rows.filter(([r]) => r > 245.8 && r < 405.3)) {
+			const t = transport(fixState('water', { T: 647.35, rho }));
+			// to 1e−7: the reference (∂ρ/∂p)_T at 1.5 Tc comes from R15-11's industrial Eq. 25, not IAPWS-95
+			expect(Math.abs(t.mu! * 1e6 - Number(mu)) / Number(mu), `μ at ${rho} kg/m³`).toBeLessThan(1e-7);
+			expect(Math.abs(t.k! * 1e3 - Number(k)) / Number(k), `λ at ${rho} kg/m³`).toBeLessThan(1e-6);
+		}
+	});
+	it('outside it μ̄2 = 1, as industrial use allows: μ within 1 % and λ within 0.5 % of the printed values', () => {
+		for (const [rho, mu, k] of rows.filter(([r]) => r < 245.8 || r > 405.3)) {
+			const t = transport(fixState('water', { T: 647.35, rho }));
+			expect(Math.abs(t.mu! * 1e6 - Number(mu)) / Number(mu), `μ at ${rho} kg/m³`).toBeLessThan(1e-2);
+			expect(Math.abs(t.k! * 1e3 - Number(k)) / Number(k), `λ at ${rho} kg/m³`).toBeLessThan(5e-3);
+		}
+	});
+});
+
 describe('water thermal conductivity, IAPWS R15-11', () => {
 	it('matches the release\'s verification values without the critical enhancement (Table 4), mW/(m·K)', () => {
 		// IAPWS R15-11, Table 4 (λ̄2 = 0), as transcribed in python3-iapws 1.5.2 (_ThCond docstring)
@@ -63,10 +91,14 @@ describe('water surface tension, IAPWS R1-76(2014)', () => {
 
 describe('transport(state) against python3-iapws 1.5.2 (Debian), IAPWS97 class', () => {
 	it('single-phase IF97 states: μ, k and Pr to 1e−9', () => {
-		// python3-iapws 1.5.2 (Debian), IAPWS97(P, T): mu, k, Prandt
+		// python3-iapws 1.5.2 (Debian), IAPWS97(P, T): mu, k, Prandt (its IAPWS97 class never applies μ̄2; no
+		// grid state lies in R12-08's critical region, where ours does)
 		expect(fixture.points.length).toBeGreaterThan(150);
 		for (const p of fixture.points) {
-			const t = transport(if97State(p.P, p.T));
+			const st = if97State(p.P, p.T);
+			const c = viscosityCriticalRegion;
+			expect(st.T > c.Tmin && st.T < c.Tmax && st.rho > c.rhoMin && st.rho < c.rhoMax).toBe(false);
+			const t = transport(st);
 			const where = `region ${p.region}, ${p.T} K, ${p.P} Pa`;
 			expect(Math.abs(t.mu! - p.mu) / p.mu, `μ at ${where}`).toBeLessThan(1e-9);
 			expect(Math.abs(t.k! - p.k) / p.k, `k at ${where}`).toBeLessThan(1e-9);

@@ -1,8 +1,9 @@
 /**
  * Water's transport and interface properties, SI units:
- * - viscosity μ (Pa·s), IAPWS R12-08, Eq. 10 with μ̄2 = 1: the critical enhancement left out, as the
- *   release allows for industrial use (it matters only very near the critical point, roughly
- *   645.91 K < T < 650.77 K and 245.8 kg/m³ < ρ < 405.3 kg/m³ — from memory of the release);
+ * - viscosity μ (Pa·s), IAPWS R12-08, Eq. 10. The critical enhancement μ̄2 (Eqs. 13–21) is computed
+ *   inside the region where the release says it cannot be neglected — 645.91 K < T < 650.77 K and
+ *   245.8 kg/m³ < ρ < 405.3 kg/m³ (from memory of the release) — and set to 1 elsewhere, as the
+ *   release allows for industrial use; its reference (∂ρ/∂p)_T at 1.5 Tc comes from R15-11's Eq. 25;
  * - thermal conductivity λ (W/(m·K)), IAPWS R15-11, Eq. 10 with the critical enhancement λ̄2 (Eqs. 18–22)
  *   and the reference ζ̄(T̄_R) of the release's industrial form (Eq. 25, Table 6);
  * - surface tension σ (N/m), IAPWS R1-76(2014): σ = B τ^μ (1 + b τ), τ = 1 − T/Tc, on the saturation line.
@@ -17,11 +18,15 @@ const P_STAR = 22.064e6;
 /** R15-11, Eq. 18: specific gas constant 0.46151805 kJ/(kg·K) (that of IAPWS-95), in J/(kg·K) */
 const R_95 = 461.51805;
 
+/** R12-08: the region where μ̄2 cannot be neglected (from memory of the release). */
+export const viscosityCriticalRegion = { Tmin: 645.91, Tmax: 650.77, rhoMin: 245.8, rhoMax: 405.3 } as const;
+
 /**
  * Viscosity of water, Pa·s, at density ρ (kg/m³) and temperature T (K): IAPWS R12-08, Eq. 10 with
- * μ̄0 from Eq. 11 and μ̄1 from Eq. 12, μ̄2 = 1 (industrial use).
+ * μ̄0 from Eq. 11 and μ̄1 from Eq. 12; μ̄2 from Eqs. 13–21 when `drhodP` ((∂ρ/∂p)_T in kg/m³ per Pa)
+ * is given and (ρ, T) lies in viscosityCriticalRegion, else 1.
  */
-export function waterViscosity(rho: number, T: number): number {
+export function waterViscosity(rho: number, T: number, drhodP?: number): number {
 	const Tr = T / T_STAR;
 	const d = rho / RHO_STAR;
 	let den = 0;
@@ -33,7 +38,38 @@ export function waterViscosity(rho: number, T: number): number {
 	const { I, J, H } = viscosityH1;
 	for (let k = 0; k < H.length; k++) sum += H[k] * x ** I[k] * y ** J[k];
 	const mu1 = Math.exp(d * sum);
-	return mu0 * mu1 * 1e-6;
+	const c = viscosityCriticalRegion;
+	const critical = drhodP !== undefined && T > c.Tmin && T < c.Tmax && rho > c.rhoMin && rho < c.rhoMax;
+	return mu0 * mu1 * (critical ? viscosityEnhancement(d, Tr, drhodP as number) : 1) * 1e-6;
+}
+
+/**
+ * μ̄2 = exp(x_μ Y), IAPWS R12-08, Eqs. 14–21: x_μ = 0.068, q_C⁻¹ = 1.9 nm, q_D⁻¹ = 1.1 nm, ξ from
+ * Eq. 20 (ξ0 = 0.13 nm, Γ0 = 0.06, ν = 0.630, γ = 1.239), Δχ̄ from Eq. 21 with T̄_R = 1.5.
+ */
+function viscosityEnhancement(d: number, Tr: number, drhodP: number): number {
+	const dchi = d * ((P_STAR / RHO_STAR) * drhodP - (zetaRef(d) * 1.5) / Tr);
+	if (!(dchi > 0)) return 1;
+	const xi = 0.13 * (dchi / 0.06) ** (0.63 / 1.239);
+	const qc = 1 / 1.9;
+	const qd = 1 / 1.1;
+	let Y: number;
+	if (xi <= 0.3817016416) {
+		// Eq. 15
+		Y = (qc / 5) * xi * (qd * xi) ** 5 * (1 - qc * xi + (qc * xi) ** 2 - (765 / 504) * (qd * xi) ** 2);
+	} else {
+		const psiD = Math.acos((1 + qd * qd * xi * xi) ** -0.5); // Eq. 17
+		const w = Math.sqrt(Math.abs((qc * xi - 1) / (qc * xi + 1))) * Math.tan(psiD / 2); // Eq. 19
+		const Lw = qc * xi > 1 ? Math.log((1 + w) / (1 - w)) : 2 * Math.atan(Math.abs(w)); // Eq. 18
+		const q = qc * xi;
+		// Eq. 16
+		Y =
+			Math.sin(3 * psiD) / 12 -
+			Math.sin(2 * psiD) / (4 * q) +
+			((1 - (5 / 4) * q * q) / (q * q)) * Math.sin(psiD) -
+			((1 - (3 / 2) * q * q) * psiD - Math.abs(q * q - 1) ** 1.5 * Lw) / q ** 3;
+	}
+	return Math.exp(0.068 * Y);
 }
 
 /** λ̄0·λ̄1 of R15-11 (Eqs. 16, 17), W/(m·K): the conductivity without its critical enhancement. */
