@@ -29,6 +29,7 @@ export {
 	if97StatePh,
 	if97StatePs,
 	if97Region,
+	if97Region3State,
 	if97SaturationPressure,
 	if97SaturationTemperature,
 	if97Limits,

@@ -9,7 +9,7 @@
 import { describe, expect, it } from 'vitest';
 import fixture from '../../../../tests/reference/if97-water.json';
 import { t1ph, t1ps, t2ph, t2ps, pB23, tB23, pB2bc, hB2bc, psat, tsat } from './regions.ts';
-import { if97Region, if97State, if97StatePh, if97StatePs, if97SaturationPressure, if97SaturationTemperature } from './state.ts';
+import { if97Region, if97Region3State, if97State, if97StatePh, if97StatePs, if97SaturationPressure, if97SaturationTemperature } from './state.ts';
 import { ThermoError } from '../errors.ts';
 
 function halfUnit(text: string): number {
@@ -59,6 +59,21 @@ describe('IF97 basic equations: the release\'s verification values', () => {
 		printed(if97State(0.0035 * MPa, 300).w!, '427.920172', 'w(300 K, 3.5 kPa)');
 		expect(if97State(30 * MPa, 700).region).toBe(2);
 		expect(if97State(0.0035 * MPa, 300).region).toBe(2);
+	});
+	it('region 3, Eq. 28, in (ρ, T) (R7-97(2012), Table 33)', () => {
+		// IAPWS R7-97(2012), Table 33, as transcribed in python3-iapws 1.5.2 (_Region3 docstring)
+		const a = if97Region3State(500, 650);
+		printed(a.P / MPa, '25.5837018', 'p(500 kg/m³, 650 K)');
+		printed(a.h / kJ, '1863.43019', 'h(500 kg/m³, 650 K)');
+		printed(a.u / kJ, '1812.26279', 'u(500 kg/m³, 650 K)');
+		const b = if97Region3State(200, 650);
+		printed(b.s / kJ, '4.85438792', 's(200 kg/m³, 650 K)');
+		printed(b.cp! / kJ, '44.6579342', 'cp(200 kg/m³, 650 K)');
+		printed(b.cv! / kJ, '4.04118076', 'cv(200 kg/m³, 650 K)');
+		printed(b.w!, '383.444594', 'w(200 kg/m³, 650 K)');
+		// from memory: the rest of R7-97(2012) Table 33
+		printed(b.P / MPa, '22.2930643', 'p(200 kg/m³, 650 K)');
+		printed(if97Region3State(500, 750).P / MPa, '78.3095639', 'p(500 kg/m³, 750 K)');
 	});
 	it('region 3, Eq. 28, reached from (P, T) by the density iteration (R7-97(2012), Table 33)', () => {
 		// IAPWS R7-97(2012), Table 33, as transcribed in python3-iapws 1.5.2 (_Region3 docstring):

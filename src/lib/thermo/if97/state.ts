@@ -414,6 +414,17 @@ export function if97SaturationTemperature(P: number): number {
 	return tsat(P / 1e6);
 }
 
+/**
+ * Region 3 state straight from density ρ (kg/m³) and temperature T (K), IAPWS R7-97(2012), Eq. 28, for
+ * 623.15 K ≤ T and p(ρ, T) above B23 (not checked here: the caller's (ρ, T) must lie in region 3).
+ */
+export function if97Region3State(rho: number, T: number): If97State {
+	const { p } = pressure3(rho, T);
+	const st = fromHelmholtz(rho, T, p * 1e6);
+	st.phase = phaseOf(T, st.P, T < TC ? psat(T) * 1e6 : null);
+	return st;
+}
+
 /** Re-export of the boundary equations (SI) for checks and charts. */
 export const if97Boundaries = {
 	/** B23: P(T), Pa (Eq. 5) */
