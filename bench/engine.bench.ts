@@ -1,6 +1,6 @@
 /**
- * Property-engine benchmark: median time per call for water (IAPWS-95) by input pair, against the
- * performance budget (docs/performance.md), and python3-iapws on the same states when Debian's
+ * Property-engine benchmark: median time per call for water (IAPWS-95; IF97 rows named so) by input pair,
+ * against the performance budget (docs/performance.md), and python3-iapws on the same states when Debian's
  * /usr/bin/python3 can import it. Prints a table; never fails on time.
  *
  * Run: npm run bench
@@ -14,8 +14,8 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { loadavg } from 'node:os';
-import { fixState, saturationAtP, saturationAtT } from '../src/lib/thermo/index.ts';
-import type { Inputs } from '../src/lib/thermo/types.ts';
+import { fixState, if97State, if97StatePh, if97StatePs, saturationAtP, saturationAtT, transport } from '../src/lib/thermo/index.ts';
+import type { Inputs, State } from '../src/lib/thermo/types.ts';
 
 interface Case {
 	name: string;
@@ -41,6 +41,8 @@ const seeds: Inputs[] = [
 const single = seeds.map((s) => fixState('water', s));
 const mixed = [300, 373.15, 450, 520, 600].flatMap((T) => [0.1, 0.6].map((x) => fixState('water', { T, x })));
 const all = [...single, ...mixed];
+const transportInputs: Inputs[] = single.map((s) => ({ T: s.T, P: s.P }));
+const transportStates = new Map<Inputs, State>(transportInputs.map((i) => [i, if97State(i.P as number, i.T as number)]));
 
 const cases: Case[] = [
 	{
@@ -63,6 +65,42 @@ const cases: Case[] = [
 		inputs: single.map((s) => ({ T: s.T, P: s.P })),
 		run: (i) => fixState('water', i),
 		py: 'IAPWS95(T=d["T"], P=d["P"]/1e6)'
+	},
+	{
+		// IAPWS-IF97, the industrial formulation, on the same states, beside the IAPWS-95 figure above
+		name: 'IF97 state from (P, T)',
+		budget: 1,
+		inputs: single.map((s) => ({ T: s.T, P: s.P })),
+		run: (i) => if97State(i.P as number, i.T as number),
+		py: 'IAPWS97(T=d["T"], P=d["P"]/1e6)'
+	},
+	{
+		name: 'IF97 state from (P, T), regions 1, 2, 5 only',
+		budget: 1,
+		inputs: single.filter((s) => s.T < 623.15 || s.T > 863.15 || s.P < 16.5e6).map((s) => ({ T: s.T, P: s.P })),
+		run: (i) => if97State(i.P as number, i.T as number),
+		py: 'IAPWS97(T=d["T"], P=d["P"]/1e6)'
+	},
+	{
+		name: 'IF97 state from (P, h)',
+		budget: 10,
+		inputs: all.map((s) => ({ P: s.P, h: s.h })),
+		run: (i) => if97StatePh(i.P as number, i.h as number),
+		py: 'IAPWS97(P=d["P"]/1e6, h=d["h"]/1e3)'
+	},
+	{
+		name: 'IF97 state from (P, s)',
+		budget: 10,
+		inputs: all.map((s) => ({ P: s.P, s: s.s })),
+		run: (i) => if97StatePs(i.P as number, i.s as number),
+		py: 'IAPWS97(P=d["P"]/1e6, s=d["s"]/1e3)'
+	},
+	{
+		// the correlations alone, on IF97 states fixed beforehand
+		name: 'transport(state), single-phase',
+		budget: null,
+		inputs: transportInputs,
+		run: (i) => transport(transportStates.get(i) as State)
 	},
 	{
 		name: 'saturation at T',
@@ -184,7 +222,7 @@ function timePython(): Map<string, number> | null {
 	const script = `
 import json, sys, time, warnings
 warnings.filterwarnings('ignore')
-from iapws import IAPWS95
+from iapws import IAPWS95, IAPWS97
 jobs = json.load(sys.stdin)
 out = {}
 for job in jobs:
@@ -210,7 +248,7 @@ print(json.dumps(out))
 const rows = cases.map((c) => ({ c, t: time(c) }));
 const python = timePython();
 
-const head = ['case (water, IAPWS-95)', 'states', 'median µs (CPU)', 'median µs (wall)', 'best µs (CPU)', 'budget µs', 'python3-iapws µs', 'iapws / ours'];
+const head = ['case (water: IAPWS-95 unless IF97 named)', 'states', 'median µs (CPU)', 'median µs (wall)', 'best µs (CPU)', 'budget µs', 'python3-iapws µs', 'iapws / ours'];
 const lines = rows.map(({ c, t }) => {
 	const p = python?.get(c.name);
 	return [

@@ -24,6 +24,22 @@ import type { FixOptions, FluidInfo, Inputs, Leg, LegSpec, Saturation, Saturatio
 export type * from './types.ts';
 export type { FluidData } from './fluids/schema.ts';
 export { ThermoError } from './errors.ts';
+/** Water by IAPWS-IF97 (IAPWS R7-97(2012)), the industrial formulation: see if97/state.ts. */
+export {
+	if97State,
+	if97StatePh,
+	if97StatePs,
+	if97Region,
+	if97Region3State,
+	if97SaturationPressure,
+	if97SaturationTemperature,
+	if97Limits,
+	if97Boundaries
+} from './if97/state.ts';
+export type { If97State, If97Region, If97Options } from './if97/state.ts';
+/** Viscosity, thermal conductivity, Prandtl number and surface tension of a state (water so far): see transport/index.ts. */
+export { transport } from './transport/index.ts';
+export type { Transport, TransportAbsence, TransportName } from './transport/index.ts';
 export type { ThermoErrorCode, StateCandidate } from './errors.ts';
 
 /**
