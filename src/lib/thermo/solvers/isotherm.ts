@@ -72,7 +72,8 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 		}
 		const { rhoL, rhoV } = line.sat;
 		if (rhoMax > rhoL) {
-			for (const r of scanRoots(fn(false), rhoL, rhoMax, 10, 1e-13 * rhoMax))
+			// to round-off in ρ: a liquid's P moves ~1e−4 Pa per 1e−13·ρ, all of P a few mPa above Psat
+			for (const r of scanRoots(fn(false), rhoL, rhoMax, 10, 4 * Number.EPSILON * rhoMax))
 				if (r > rhoL) single(r, 'liquid', line);
 		}
 		for (const z of scanRoots(fn(true), Math.log(rhoFloor), Math.log(rhoV), 12, 1e-13))
