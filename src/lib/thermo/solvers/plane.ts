@@ -452,9 +452,10 @@ function rounding(fl: Fluid, k: EnergyProp, y: number, T: number): number {
 function withinRounding(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, T: number, rho: number, p: Point): boolean {
 	evalPoint(fl, T, rho, p, 1);
 	const da = rounding(fl, a, A, T), db = rounding(fl, b, B, T);
-	if (!(Math.abs(propValue(p, a) - A) <= 2 * da)) return false;
-	if (a === 'u' && b === 'h') return Math.abs(p.P / rho - (B - A)) <= 2 * (da + db);
-	return Math.abs(propValue(p, b) - B) <= 2 * db;
+	// a few roundings: the equation's own evaluation noise in a cold liquid is of that size
+	if (!(Math.abs(propValue(p, a) - A) <= 4 * da)) return false;
+	if (a === 'u' && b === 'h') return Math.abs(p.P / rho - (B - A)) <= 4 * (da + db);
+	return Math.abs(propValue(p, b) - B) <= 4 * db;
 }
 
 /**
