@@ -54,8 +54,16 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 	const rhoFloor = RHO_FLOOR * fl.rhoc;
 	const rhoLow = Math.min(rhoFloor, (DILUTE_FRACTION * triplePressure(fl)) / (fl.R * T));
 	// roots below the fixed floor: the gas there is near-ideal and y monotonic in ln ρ
+	// (y monotonic there: a root only where y(ρlow) − y and y(ρfloor) − y differ in sign)
+	const ends: FD = { f: 0, df: 0 };
 	const dilute = (add: (rho: number) => void) => {
-		if (rhoLow < rhoFloor) for (const z of scanRoots(fn(true), Math.log(rhoLow), Math.log(rhoFloor), 4, 1e-13)) add(Math.exp(z));
+		if (!(rhoLow < rhoFloor)) return;
+		const zl = Math.log(rhoLow), zf = Math.log(rhoFloor);
+		fn(true)(zl, ends);
+		const fl0 = ends.f;
+		fn(true)(zf, ends);
+		if (fl0 !== 0 && ends.f !== 0 && fl0 < 0 === ends.f < 0) return;
+		for (const z of scanRoots(fn(true), zl, zf, 4, 1e-13)) add(Math.exp(z));
 	};
 	if (subcritical) {
 		const line = evalSatLine(fl, T, new SatLine());
