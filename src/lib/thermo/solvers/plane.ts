@@ -467,13 +467,15 @@ function withinRounding(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
  * rounding (as precision.ts reckons it), it stands for the candidate, the
  * lowest-pressure state of the valley; its stated precision says P is unresolved (precision.ts).
  * A candidate that meets the inputs within their rounding and resolves P (stated precision of P
- * below 1/2) is kept; one that does not (an unresolved P, or a run stopped short in the valley) is
+ * below 1/10) is kept; one that does not (an unresolved P, or a run stopped short in the valley) is
  * replaced.
  */
 function toLine(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, c: State, p: Point): State {
 	if (c.phase !== 'compressed-liquid' || c.T >= fl.Tc * (1 - CRITICAL_BAND)) return c;
 	// a candidate that meets the inputs within their rounding and resolves P stays as it is
-	if (withinRounding(fl, a, A, b, B, c.T, c.rho, p) && precisionOf(fl, c, a, A, b, B).P < 0.5) return c;
+	// (stated P precision below 1/10: the valley meeting the inputs within four roundings reaches
+	// up to about twice the P at which the linearized precision is 1/2, where it is 1/8)
+	if (withinRounding(fl, a, A, b, B, c.T, c.rho, p) && precisionOf(fl, c, a, A, b, B).P < 0.1) return c;
 	const ia = YIDX[a];
 	const line = new SatLine();
 	let T = c.T;
