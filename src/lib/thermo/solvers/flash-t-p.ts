@@ -34,7 +34,10 @@ export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State
 	let rho: number;
 	let sat: SatPoint | null = null;
 	if (T >= fl.Tc * (1 - CRITICAL_BAND)) {
-		rho = densityAtTP(fl, T, P, P / (fl.R * T));
+		// start no denser than 2ρc: at hundreds of MPa the ideal-gas guess P/(RT) can lie beyond the
+		// physical root, where Newton may settle on a spurious one of the equation (methane at
+		// 580 K, 444 MPa: P/(RT) ≈ 1480 kg/m³ led to a root at 1938 kg/m³ with cv < 0)
+		rho = densityAtTP(fl, T, P, Math.min(P / (fl.R * T), 2 * fl.rhoc));
 	} else {
 		satGuess(fl, T, g);
 		let side: 'liquid' | 'vapor';

@@ -206,7 +206,16 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 			return { T, rho: r, f: propValue(p, which) - y };
 		});
 		const [a, b] = ends;
-		if (!(a.f <= 0 && b.f >= 0)) throw none();
+		if (!(a.f <= 0 && b.f >= 0)) {
+			// y above the target at both ends yet falling at the low end: cp < 0 there (the equation
+			// outside its physical domain, e.g. hydrogen near 14 K above ~0.2 GPa), so the isobar
+			// turns and may cross the target twice: scanned, every root listed
+			if (a.f > 0 && b.f > 0) {
+				evalPoint(fl, a.T, a.rho, p, 2);
+				if (propDT(p, which) - (propDrho(p, which) * p.dPdT) / p.dPdrho < 0) return choose(fl, scanIsobar(fl, P, which, y, branch, a.T, b.T, a.rho), undefined, what, none);
+			}
+			throw none();
+		}
 		const T0 = a.T - (a.f * (b.T - a.T)) / (b.f - a.f);
 		result = solveAlongIsobar(fl, P, which, y, branch, a.T, a.f, b.T, b.f, T0, T0 < fl.Tc ? a.rho : b.rho);
 	}
@@ -215,6 +224,37 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 	const loc = locate(fl, result);
 	if (!loc.sat && (result.T < fl.Tmin * (1 - 1e-9) || result.T > fl.Tmax * (1 + 1e-9))) throw none();
 	return placedState(fl, result, loc, true);
+}
+
+/** Every state on the isobar (one branch) with y, from a scan in T (for an isobar along which y turns). */
+function scanIsobar(fl: Fluid, P: number, which: EnergyProp, y: number, branch: Branch, Ta: number, Tb: number, rho0: number): State[] {
+	const p = new Point();
+	const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
+	let rho = rho0;
+	const fn = (T: number, out: FD) => {
+		const r = rhoOnBranch(fl, T, P, branch, rho, g);
+		if (!(r > 0)) {
+			out.f = NaN;
+			out.df = NaN;
+			return;
+		}
+		rho = r;
+		evalPoint(fl, T, r, p, 2);
+		out.f = propValue(p, which) - y;
+		out.df = propDT(p, which) - (propDrho(p, which) * p.dPdT) / p.dPdrho;
+	};
+	const out: FD = { f: 0, df: 0 };
+	const found: State[] = [];
+	for (const T of scanRoots(fn, Ta, Tb, 48, 1e-13 * Tb)) {
+		fn(T, out);
+		if (!Number.isFinite(out.f)) continue;
+		if (T < fl.Tmin * (1 - 1e-9) || T > fl.Tmax * (1 + 1e-9)) continue;
+		p.P = P;
+		const loc = locate(fl, p);
+		if (loc.phase === 'saturated-mixture') continue;
+		found.push(placedState(fl, p, loc, true));
+	}
+	return found;
 }
 
 /** States at fixed P and ρ: the mixture if ρ'' ≤ ρ ≤ ρ', else every root of P(T, ρ) = P on the branch. */

@@ -1,7 +1,9 @@
 /**
  * States at fixed density with a given u, h or s. Along an isochore u, h and s all rise with T
  * (du = cv·dT, ds = cv/T·dT, dh = (cv + v(∂P/∂T)_v)dT in one phase, likewise across the dome), so
- * there is one answer: the single-phase stretches of the isochore (outside the dome, from the
+ * there is one answer — except where the equation gives cv < 0 (outside its physical domain, e.g.
+ * hydrogen at 14 K above ~0.2 GPa, where the real substance is solid): a stretch whose y falls at
+ * its low end is scanned and every root listed. The single-phase stretches of the isochore (outside the dome, from the
  * saturation table's densities) are searched first, and only if none holds it the two-phase part
  * (domeRoots with the quality fixed by v).
  */
@@ -54,6 +56,9 @@ export function flashRhoY(fl: Fluid, rho: number, which: EnergyProp, y: number, 
 	for (const [Ta, Tb] of singlePhaseIntervals(fl, rho)) {
 		fn(Ta, out);
 		const fa = out.f;
+		// y falling with T at the low end: cv < 0 there (the equation outside its physical domain,
+		// e.g. hydrogen near 14 K above ~0.2 GPa, where the real substance is solid), so y may turn
+		const turns = out.df < 0;
 		fn(Tb, out);
 		const fb = out.f;
 		const tiny = 1e-12 * (Math.abs(y) + fl.R * Tb);
@@ -66,7 +71,9 @@ export function flashRhoY(fl: Fluid, rho: number, which: EnergyProp, y: number, 
 						? [newtonBracket(fn, Ta, fa, Tb, fb, 1e-13 * Tb)]
 						: Tb < fl.Tc
 							? scanRoots(fn, Ta, Tb, 6, 1e-13 * Tb)
-							: [];
+							: turns
+								? scanRoots(fn, Ta, Tb, 24, 1e-13 * Tb)
+								: [];
 		for (const T of roots) {
 			evalPoint(fl, T, rho, p, 2);
 			const loc = locate(fl, p);

@@ -17,13 +17,19 @@ import { evalSatLine, SatLine } from './dome.ts';
 import { locate, locateWithSat, placedState, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
 import { scanRoots, type FD } from './roots.ts';
-import { CRITICAL_BAND } from './saturation.ts';
+import { CRITICAL_BAND, triplePressure } from './saturation.ts';
 
 const IDX: Record<EnergyProp, number> = { u: 1, h: 2, s: 3 };
 const UNIT: Record<EnergyProp, string> = { u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)' };
 
 /** Lowest density searched on vapor branches, relative to the critical density. */
 const RHO_FLOOR = 1e-10;
+/**
+ * Dilute gas is in range down to well below the triple-point pressure, which for some fluids
+ * (propane ~1.7e−4 Pa) lies far under RHO_FLOOR·ρc: the vapor scan reaches down to the density of
+ * an ideal gas at this fraction of the triple-point pressure as well (the state grid's floor, plane.ts).
+ */
+const DILUTE_FRACTION = 1e-5;
 
 export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint?: RootHint): State {
 	const p = new Point();
@@ -45,7 +51,20 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 		found.push(placedState(fl, p, loc));
 	};
 	const subcritical = T < fl.Tc * (1 - CRITICAL_BAND);
-	const rhoLow = RHO_FLOOR * fl.rhoc;
+	const rhoFloor = RHO_FLOOR * fl.rhoc;
+	const rhoLow = Math.min(rhoFloor, (DILUTE_FRACTION * triplePressure(fl)) / (fl.R * T));
+	// roots below the fixed floor: the gas there is near-ideal and y monotonic in ln ρ
+	// (y monotonic there: a root only where y(ρlow) − y and y(ρfloor) − y differ in sign)
+	const ends: FD = { f: 0, df: 0 };
+	const dilute = (add: (rho: number) => void) => {
+		if (!(rhoLow < rhoFloor)) return;
+		const zl = Math.log(rhoLow), zf = Math.log(rhoFloor);
+		fn(true)(zl, ends);
+		const fl0 = ends.f;
+		fn(true)(zf, ends);
+		if (fl0 !== 0 && ends.f !== 0 && fl0 < 0 === ends.f < 0) return;
+		for (const z of scanRoots(fn(true), zl, zf, 4, 1e-13)) add(Math.exp(z));
+	};
 	if (subcritical) {
 		const line = evalSatLine(fl, T, new SatLine());
 		const rhoMax = densityAtTP(fl, T, fl.Pmax * (1 + 1e-6), line.sat.rhoL * 1.01, line.sat.rhoL);
@@ -61,15 +80,18 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 		}
 		const { rhoL, rhoV } = line.sat;
 		if (rhoMax > rhoL) {
-			for (const r of scanRoots(fn(false), rhoL, rhoMax, 10, 1e-13 * rhoMax))
+			// to round-off in ρ: a liquid's P moves ~1e−4 Pa per 1e−13·ρ, all of P a few mPa above Psat
+			for (const r of scanRoots(fn(false), rhoL, rhoMax, 10, 4 * Number.EPSILON * rhoMax))
 				if (r > rhoL) single(r, 'liquid', line);
 		}
-		for (const z of scanRoots(fn(true), Math.log(rhoLow), Math.log(rhoV), 12, 1e-13))
+		for (const z of scanRoots(fn(true), Math.log(rhoFloor), Math.log(rhoV), 12, 1e-13))
 			if (Math.exp(z) < rhoV) single(Math.exp(z), 'vapor', line);
+		dilute((r) => single(r, 'vapor', line));
 		if (which === 's') extendDilute(fl, T, y, rhoLow, fn(true), (r) => single(r, 'vapor', line));
 	} else {
 		const rhoMax = densityAtTP(fl, T, fl.Pmax * (1 + 1e-6), 2 * fl.rhoc);
-		for (const z of scanRoots(fn(true), Math.log(rhoLow), Math.log(rhoMax), 24, 1e-13)) single(Math.exp(z), 'any', null);
+		for (const z of scanRoots(fn(true), Math.log(rhoFloor), Math.log(rhoMax), 24, 1e-13)) single(Math.exp(z), 'any', null);
+		dilute((r) => single(r, 'any', null));
 		if (which === 's') extendDilute(fl, T, y, rhoLow, fn(true), (r) => single(r, 'any', null));
 	}
 	return choose(fl, found, hint, `T = ${fmt(T)} K and ${which} = ${fmt(y)} ${UNIT[which]}`, () =>

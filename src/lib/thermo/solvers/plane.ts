@@ -14,11 +14,13 @@ import { evalPoint, Point, propDT, propDrho, propValue, type EnergyProp } from '
 import type { RootHint, State } from '../types.ts';
 import { choose } from './choose.ts';
 import { densityAtTP } from './density.ts';
-import { domeRoots } from './dome.ts';
+import { domeRoots, evalSatLine, SatLine } from './dome.ts';
 import { locate, placedState, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
 import { scanRoots, type FD } from './roots.ts';
-import { satAtT, triplePressure } from './saturation.ts';
+import { CRITICAL_BAND, satAtT, triplePressure } from './saturation.ts';
+import { saturatedState } from '../state.ts';
+import { precisionOf } from './precision.ts';
 
 const NT_UNIFORM = 40;
 /** relative offsets from Tc of extra isotherms (the map from (T, ρ) to u, h, s bends sharply there) */
@@ -354,8 +356,16 @@ export function newton2(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		dT /= m;
 		dz /= m;
 		// converged when the steps are at round-off, or have stopped shrinking once tiny (noise)
-		const tiny = Math.abs(dT) <= 1e-14 * T && Math.abs(dz) <= 1e-13;
-		const stuck = norm < 1e-11 && Math.abs(dT) >= 0.5 * lastDT && Math.abs(dz) >= 0.5 * lastDz;
+		// (ln ρ to a few ulps: in a liquid P moves by (∂P/∂ln ρ)_T·Δz, ~1e−4 Pa for Δz = 1e−13)
+		const tiny = Math.abs(dT) <= 1e-14 * T && Math.abs(dz) <= 4e-15;
+		// (both residuals at their inputs' rounding: for (u, h) the whole of Pv can lie below 1e−11
+		// of R·Tc in a liquid at a few mPa, so the norm alone would stop anywhere along the isotherm)
+		const stuck =
+			norm < 1e-11 &&
+			Math.abs(ra * sa) <= 8 * rounding(fl, a, A, T) &&
+			Math.abs(rb * sb) <= 8 * (pv ? rounding(fl, a, A, T) + rounding(fl, b, B, T) : rounding(fl, b, B, T)) &&
+			Math.abs(dT) >= 0.5 * lastDT &&
+			Math.abs(dz) >= 0.5 * lastDz;
 		noisy = stuck ? noisy + 1 : 0;
 		lastDT = Math.abs(dT);
 		lastDz = Math.abs(dz);
@@ -430,7 +440,62 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		accepted.push([q.T, Math.log(q.rho)]);
 		found.push(placedState(fl, q, loc));
 	}
-	return choose(fl, mergeConnected(fl, a, A, b, B, found), hint, what, () => noStateInRange(fl, what));
+	return choose(fl, mergeConnected(fl, a, A, b, B, found.map((c) => toLine(fl, a, A, b, B, c, p))), hint, what, () => noStateInRange(fl, what));
+}
+
+const YIDX: Record<EnergyProp, number> = { u: 1, h: 2, s: 3 };
+
+/** Rounding of u, h or s as precision.ts reckons it (the sums behind them: 256·R·T, 1024·R). */
+function rounding(fl: Fluid, k: EnergyProp, y: number, T: number): number {
+	return Number.EPSILON * Math.max(Math.abs(y), k === 's' ? 1024 * fl.R : 256 * fl.R * T);
+}
+
+/** Whether (T, ρ) meets both inputs within their rounding (for (u, h): u and Pv = h − u). */
+function withinRounding(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, T: number, rho: number, p: Point): boolean {
+	evalPoint(fl, T, rho, p, 1);
+	const da = rounding(fl, a, A, T), db = rounding(fl, b, B, T);
+	// a few roundings: the equation's own evaluation noise in a cold liquid is of that size
+	if (!(Math.abs(propValue(p, a) - A) <= 4 * da)) return false;
+	if (a === 'u' && b === 'h') return Math.abs(p.P / rho - (B - A)) <= 4 * (da + db);
+	return Math.abs(propValue(p, b) - B) <= 4 * db;
+}
+
+/**
+ * A compressed liquid that the pair cannot tell from the saturated liquid is answered as the
+ * saturated liquid. At constant s, du = −P·dv: where P is tiny (liquids of fluids whose triple-point
+ * pressure is far below a pascal, e.g. propane at 86 K) u and s — likewise u and h, h − u = Pv —
+ * hold still over pascals, so the Newton run stops anywhere along a valley that reaches down to the
+ * saturation line. When the saturated liquid with the same first property meets both inputs within their
+ * rounding (as precision.ts reckons it), it stands for the candidate, the
+ * lowest-pressure state of the valley; its stated precision says P is unresolved (precision.ts).
+ * A candidate that meets the inputs within their rounding and resolves P (stated precision of P
+ * below 1/10) is kept; one that does not (an unresolved P, or a run stopped short in the valley) is
+ * replaced.
+ */
+function toLine(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, c: State, p: Point): State {
+	if (c.phase !== 'compressed-liquid' || c.T >= fl.Tc * (1 - CRITICAL_BAND)) return c;
+	// a candidate that meets the inputs within their rounding and resolves P stays as it is
+	// (stated P precision below 1/10: the valley meeting the inputs within four roundings reaches
+	// up to about twice the P at which the linearized precision is 1/2, where it is 1/8)
+	if (withinRounding(fl, a, A, b, B, c.T, c.rho, p) && precisionOf(fl, c, a, A, b, B).P < 0.1) return c;
+	const ia = YIDX[a];
+	const line = new SatLine();
+	let T = c.T;
+	for (let it = 0; it < 30; it++) {
+		evalSatLine(fl, T, line);
+		const f = line.yL[ia] - A, d = line.dL[ia];
+		const step = f / d;
+		if (!Number.isFinite(step)) return c;
+		T = Math.min(Math.max(T - step, fl.Tmin), fl.Tc * (1 - CRITICAL_BAND));
+		if (Math.abs(step) <= 1e-13 * T) break;
+	}
+	evalSatLine(fl, T, line);
+	// along such a valley T hardly moves; the saturated liquid meeting both inputs within their
+	// rounding is then a state with the pair, and the only one there (at constant s, u turns once,
+	// at P = 0; at constant u, h − u = Pv and at constant s, h rise with P)
+	if (Math.abs(T - c.T) > 1e-4 * c.T) return c;
+	if (!withinRounding(fl, a, A, b, B, T, line.sat.rhoL, p)) return c;
+	return saturatedState(fl, line.sat, 0);
 }
 
 /** Scaled residual norm of the pair at (T, ρ) (as newton2 measures it). */

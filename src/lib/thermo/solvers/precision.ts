@@ -16,7 +16,7 @@ import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDT, propDrho } from '../properties.ts';
 import type { Precision, State } from '../types.ts';
 import type { Key } from './fix-state.ts';
-import { lastSaturatedPhases } from '../state.ts';
+import { lastSaturatedPhases, P_ROUNDOFF } from '../state.ts';
 import { satGuess, type SatGuess } from './saturation.ts';
 
 const EPS = Number.EPSILON;
@@ -68,7 +68,11 @@ function singleRows(fl: Fluid, s: State): void {
 		dPdT = p.dPdT;
 		dPdrho = p.dPdrho;
 	}
-	const T = s.T, rho = s.rho, P = s.P, r2 = rho * rho;
+	singleRowsAt(s.T, s.rho, s.P, cv, dPdT, dPdrho);
+}
+
+function singleRowsAt(T: number, rho: number, P: number, cv: number, dPdT: number, dPdrho: number): void {
+	const r2 = rho * rho;
 	const duDrho = (P - T * dPdT) / r2;
 	D[0] = 1;
 	D[1] = 0;
@@ -124,9 +128,25 @@ function twoPhaseRows(fl: Fluid, s: State): boolean {
 
 const UNKNOWN: Precision = { T: 1, P: 1, v: 1 };
 
-/** Relative uncertainty of T, P and v of a state fixed from inputs ka = a, kb = b. */
+/**
+ * Relative uncertainty of T, P and v of a state fixed from inputs ka = a, kb = b. A saturated
+ * liquid or vapor (x = 0 or 1) fixed without x borders its single phase: the pair's uncertainty
+ * there counts too (u and s of a liquid at a few mPa leave P unresolved on both sides of the line).
+ */
 export function precisionOf(fl: Fluid, s: State, ka: Key, a: number, kb: Key, b: number): Precision {
-	if (s.x !== null) {
+	const own = precisionIn(fl, s, ka, a, kb, b, false);
+	if ((s.x === 0 || s.x === 1) && ka !== 'x' && kb !== 'x') {
+		const side = precisionIn(fl, s, ka, a, kb, b, true);
+		return { T: Math.max(own.T, side.T), P: Math.max(own.P, side.P), v: Math.max(own.v, side.v) };
+	}
+	return own;
+}
+
+function precisionIn(fl: Fluid, s: State, ka: Key, a: number, kb: Key, b: number, singleSide: boolean): Precision {
+	if (singleSide) {
+		evalPoint(fl, s.T, s.rho, p, 2);
+		singleRowsAt(s.T, s.rho, s.P, p.cv, p.dPdT, p.dPdrho);
+	} else if (s.x !== null) {
 		if (!twoPhaseRows(fl, s)) return { ...UNKNOWN };
 	} else singleRows(fl, s);
 	const ia = 2 * ORDER[ka], ib = 2 * ORDER[kb];
@@ -137,9 +157,13 @@ export function precisionOf(fl: Fluid, s: State, ka: Key, a: number, kb: Key, b:
 	const Ta = b2 / det, Tb = -a2 / det, za = -b1 / det, zb = a1 / det;
 	const da = inputRounding(fl, ka, a, s.T), db = inputRounding(fl, kb, b, s.T);
 	const spread = (i: number) => Math.abs(D[i] * Ta + D[i + 1] * za) * da + Math.abs(D[i] * Tb + D[i + 1] * zb) * db;
+	// a single phase's P carries the equation's own round-off (state.ts P_ROUNDOFF·ρRT): in a cold
+	// liquid at mPa (propane near its triple point) that alone is a few per cent of P
+	// (P given: exact)
+	const floorP = kb !== 'P' && (singleSide || s.x === null) ? (P_ROUNDOFF * s.rho * fl.R * s.T) / s.P : 0;
 	return {
 		T: ka === 'T' ? EPS : clamp(spread(0) / s.T),
-		P: ka === 'P' ? EPS : clamp(spread(2) / s.P),
+		P: ka === 'P' ? EPS : clamp(Math.max(spread(2) / s.P, floorP)),
 		v: clamp(spread(4) / s.rho)
 	};
 }
