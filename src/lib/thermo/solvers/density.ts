@@ -28,8 +28,12 @@ export function densityAtTP(fl: Fluid, T: number, P: number, guess: number, lo =
 		// for "left the bracket" would throw the root away for 2ρ (with an open bracket), from where a
 		// stiff liquid's isotherm (oxygen near its triple point) need not lead back
 		if (Math.abs(next - rho) <= 1e-14 * rho) return next;
-		// with an open bracket, grow by at most a factor 4 per step (flat isotherms near Tc)
-		if (!Number.isFinite(hi) && next > 4 * rho) next = 4 * rho;
+		// with an open bracket, grow by at most a factor 4 per step (flat isotherms near Tc), and by 1.25
+		// in a liquid: a near-critical liquid's flat isotherm sends Newton from ρ' to several times ρc,
+		// where an equation of state may turn unphysical (negative P) and never close the bracket
+		// (oxygen at 150 K toward 80 MPa)
+		const grow = rho > fl.rhoc ? 1.25 : 4;
+		if (!Number.isFinite(hi) && next > grow * rho) next = grow * rho;
 		// rtsafe rule: bisect when Newton leaves the bracket, or stops halving once bracketed
 		const slow = Number.isFinite(hi) && Math.abs(next - rho) > 0.5 * dxOld;
 		dxOld = dx;
