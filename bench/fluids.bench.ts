@@ -90,4 +90,4 @@ console.log(
 console.log(fmtRow(head));
 console.log(widths.map((w) => '─'.repeat(w)).join('  '));
 for (const l of lines) console.log(fmtRow(l));
-console.log('Median CPU µs per call / budget µs (the water figures’ budgets, docs/performance.md). Never fails on time.');
+console.log('Median CPU µs per call / budget µs (the current budgets for every fluid, docs/performance.md). Never fails on time.');
