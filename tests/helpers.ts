@@ -1,6 +1,6 @@
 import { request as httpRequest } from 'node:http';
 import Database from 'better-sqlite3';
-import { expect, request as playwrightRequest, type APIRequestContext, type Page } from '@playwright/test';
+import { expect, request as playwrightRequest, type APIRequestContext, type Browser, type Page } from '@playwright/test';
 
 // The demo team seeded on the fresh e2e database (scripts/e2e-server.mjs sets SEED_DEMO=1).
 export const PORT = Number(process.env.E2E_PORT ?? 4317);
@@ -177,4 +177,17 @@ export async function createToken(ctx: APIRequestContext, team: string, name: st
 	const token = (await res.text()).match(/swt_[A-Za-z0-9_-]{43}/)?.[0];
 	if (!token) throw new Error('no token in the page');
 	return token;
+}
+
+/** A new browser context (downloads on, a desktop window) signed in as `email`; page errors are logged. */
+export async function signedInPage(browser: Browser, email: string, password = DEMO_PASSWORD): Promise<Page> {
+	const ctx = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 900 } });
+	const page = await ctx.newPage();
+	page.on('pageerror', (e) => console.log(`[${email}] page error: ${e.message}`));
+	await page.goto('/signin');
+	await page.getByLabel('E-mail').fill(email);
+	await page.getByLabel('Password').fill(password);
+	await page.getByRole('button', { name: 'Sign in' }).click();
+	await expect(page.getByRole('heading', { name: 'Your teams' })).toBeVisible();
+	return page;
 }

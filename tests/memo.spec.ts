@@ -1,5 +1,5 @@
-import { expect, test, type Browser, type Download, type Page } from '@playwright/test';
-import { DEMO, TEAM, signedInRequest } from './helpers';
+import { expect, test, type Download, type Page } from '@playwright/test';
+import { DEMO, TEAM, signedInRequest, signedInPage } from './helpers';
 
 // The memo carries the findings: a sealed 50 L vessel of water that starts liquid-full gets its
 // caution on the screen, in the print view and in every export, with the same words; a memo-column
@@ -8,17 +8,6 @@ import { DEMO, TEAM, signedInRequest } from './helpers';
 
 test.describe.configure({ mode: 'serial' });
 
-async function signIn(browser: Browser, email: string): Promise<Page> {
-	const ctx = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 900 } });
-	const page = await ctx.newPage();
-	page.on('pageerror', (e) => console.log(`[${email}] page error: ${e.message}`));
-	await page.goto('/signin');
-	await page.getByLabel('E-mail').fill(email);
-	await page.getByLabel('Password').fill('statewright-demo');
-	await page.getByRole('button', { name: 'Sign in' }).click();
-	await expect(page.getByRole('heading', { name: 'Your teams' })).toBeVisible();
-	return page;
-}
 
 async function readDownload(d: Download, encoding: BufferEncoding = 'utf8'): Promise<string> {
 	const { readFile } = await import('node:fs/promises');
@@ -56,7 +45,7 @@ test('a vessel that starts liquid-full: one caution, the same words on the scree
 	expect(made.status(), await made.text()).toBe(201);
 	sheetId = ((await made.json()) as { sheet: { id: string } }).sheet.id;
 
-	const page = await signIn(browser, DEMO.designer);
+	const page = await signedInPage(browser, DEMO.designer);
 	await page.goto(`/t/${TEAM}/sheets/${sheetId}`);
 	const warning = page.getByTestId('warnings').locator('[data-code="liquid-full"]');
 	await expect(warning).toContainText('heats a closed system that is liquid-full from the leg’s start');
@@ -127,7 +116,7 @@ test('the R-134a heat pump in print: the cycle’s COP, and round-off shown as 0
 	const made = await api.post(`/api/v1/teams/${TEAM}/sheets`, { data: { example: 'heat-pump-hp410', title: `HP-410 memo ${Date.now().toString(36)}` } });
 	expect(made.status()).toBe(201);
 	const id = ((await made.json()) as { sheet: { id: string } }).sheet.id;
-	const page = await signIn(browser, DEMO.designer);
+	const page = await signedInPage(browser, DEMO.designer);
 	await page.goto(`/t/${TEAM}/sheets/${id}/print?rev=draft`);
 	await expect(page.getByTestId('print-cycle')).toContainText(/Reverse cycle: COP heating \d\.\d\d, COP cooling \d\.\d\d/);
 	const table = page.getByTestId('path-table');
@@ -155,7 +144,7 @@ test('signing off over open review notes asks for a reason; the log, the print v
 	expect((await checkerApi.post(`${R}/1/check`, { data: { override: '  ' } })).status()).toBe(400);
 
 	// the checker in the browser: Mark checked → asked for the reason → checked over the note
-	const checker = await signIn(browser, DEMO.checker);
+	const checker = await signedInPage(browser, DEMO.checker);
 	await checker.goto(`/t/${TEAM}/sheets/${sheetId}/revisions/1`);
 	await checker.getByRole('tab', { name: /Sign-off/ }).click();
 	await checker.getByTestId('check-revision').click();

@@ -1,5 +1,5 @@
-import { expect, test, type Browser, type Page } from '@playwright/test';
-import { BASE, DEMO, TEAM, lastMailId, linkIn, signedInRequest, waitForMail } from './helpers';
+import { expect, test, type Page } from '@playwright/test';
+import { BASE, DEMO, TEAM, lastMailId, linkIn, signedInRequest, waitForMail, signedInPage } from './helpers';
 
 // The review journey of a sheet, end to end in Chromium with the real mail catcher: a designer
 // saves Rev 1 and submits it; the checker gets the mail, opens its link, writes a note on a leg
@@ -9,17 +9,6 @@ import { BASE, DEMO, TEAM, lastMailId, linkIn, signedInRequest, waitForMail } fr
 
 test.describe.configure({ mode: 'serial' });
 
-async function signIn(browser: Browser, email: string): Promise<Page> {
-	const ctx = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 900 } });
-	const page = await ctx.newPage();
-	page.on('pageerror', (e) => console.log(`[${email}] page error: ${e.message}`));
-	await page.goto('/signin');
-	await page.getByLabel('E-mail').fill(email);
-	await page.getByLabel('Password').fill('statewright-demo');
-	await page.getByRole('button', { name: 'Sign in' }).click();
-	await expect(page.getByRole('heading', { name: 'Your teams' })).toBeVisible();
-	return page;
-}
 
 async function waitSaved(page: Page) {
 	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved', { timeout: 20_000 });
@@ -38,7 +27,7 @@ test('designer saves Rev 1, checker notes and returns it, designer fixes the leg
 	const sheetUrl = `/t/${TEAM}/sheets/${sheetId}`;
 
 	// ---- the designer saves Rev 1 and submits it to the checker
-	const designer = await signIn(browser, DEMO.designer);
+	const designer = await signedInPage(browser, DEMO.designer);
 	await designer.goto(sheetUrl);
 	await expect(designer.getByTestId('sheet-title')).toHaveText(title);
 	await designer.getByTestId('open-save-revision-header').click();
@@ -59,7 +48,7 @@ test('designer saves Rev 1, checker notes and returns it, designer fixes the leg
 	const ask = await waitForMail(DEMO.checker, 'ready for your check', checkerAfter);
 	expect(ask.subject).toBe(`Rev 1 of ${title} is ready for your check`);
 	const link = linkIn(ask, `${BASE}/t/${TEAM}/sheets/${sheetId}/revisions/1`);
-	const checker = await signIn(browser, DEMO.checker);
+	const checker = await signedInPage(browser, DEMO.checker);
 	await checker.goto(link);
 	await expect(checker.getByTestId('revision-page')).toHaveAttribute('data-number', '1');
 	await checker.locator('[data-chart="T-v"] path.swc-hit-leg').first().focus();
@@ -125,7 +114,7 @@ test('designer saves Rev 1, checker notes and returns it, designer fixes the leg
 	await checker.getByRole('tab', { name: /Sign-off/ }).click();
 	await checker.getByTestId('check-revision').click();
 	await expect(checker.getByTestId('signoff-state')).toContainText('Checked by Priya Ramanathan');
-	const owner = await signIn(browser, DEMO.owner);
+	const owner = await signedInPage(browser, DEMO.owner);
 	await owner.goto(`/t/${TEAM}/sheets/${sheetId}/revisions/2`);
 	await owner.getByRole('tab', { name: /Sign-off/ }).click();
 	await owner.getByTestId('approve-revision').click();
@@ -189,7 +178,7 @@ test('designer saves Rev 1, checker notes and returns it, designer fixes the leg
 
 test('a measured trace uploads and shows on the chart; a malformed file is refused with its line numbers', async ({ browser }) => {
 	expect(sheetId, 'runs after the journey').not.toBe('');
-	const designer = await signIn(browser, DEMO.designer);
+	const designer = await signedInPage(browser, DEMO.designer);
 	await designer.goto(`/t/${TEAM}/sheets/${sheetId}`);
 	await designer.getByRole('tab', { name: /Traces/ }).click();
 	const panel = designer.getByTestId('trace-panel');
@@ -226,7 +215,7 @@ test('a save based on an old revision is refused with the conflict screen: compa
 	const sheet = ((await made.json()) as { sheet: { id: string; doc: { spec: { legs: Array<{ target: Record<string, number> }> } } } }).sheet;
 	expect((await api.post(`/api/v1/teams/${TEAM}/sheets/${sheet.id}/revisions`, { data: { message: 'First issue', baseRevision: null } })).status()).toBe(201);
 
-	const designer = await signIn(browser, DEMO.designer);
+	const designer = await signedInPage(browser, DEMO.designer);
 	await designer.goto(`/t/${TEAM}/sheets/${sheet.id}`);
 	await expect(designer.getByTestId('draft-base')).toHaveText('Rev 1');
 
@@ -264,7 +253,7 @@ test('a save based on an old revision is refused with the conflict screen: compa
 });
 
 test('each person can turn a kind of review mail off on the account page', async ({ browser }) => {
-	const owner = await signIn(browser, DEMO.owner);
+	const owner = await signedInPage(browser, DEMO.owner);
 	await owner.goto('/account');
 	const settings = owner.getByTestId('notification-settings');
 	const mention = settings.getByLabel(/Someone mentions me/);

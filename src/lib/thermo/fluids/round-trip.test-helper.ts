@@ -117,3 +117,38 @@ export function grid(id: string, Tc: number, rhoc: number, Tt: number, Tmax: num
 	return out;
 }
 
+
+/**
+ * Fixes every state of the fluid's `grid` again from each of the 21 input pairs (x only on and inside
+ * the dome; (T, P) on the dome must be refused, T and P being one property there). Returns the
+ * failures as "label from (a, b): why" (skipping those `known` lists) and the pairs tried.
+ */
+export function gridPairFailures(
+	id: string,
+	data: { critical: { T: number; rho: number }; triple: { T: number }; limits: { Tmax: number } },
+	known: ReadonlySet<string> = new Set()
+): { failures: string[]; pairsTried: number } {
+	const failures: string[] = [];
+	const seen = new Set<string>();
+	for (const { label, ref } of grid(id, data.critical.T, data.critical.rho, data.triple.T, data.limits.Tmax)) {
+		const inDome = ref.x !== null;
+		const rel = inDome ? 1e-5 : 1e-6;
+		for (const pair of INPUT_PAIRS) {
+			const [a, b] = pair;
+			if (!inDome && (a === 'x' || b === 'x')) continue;
+			seen.add(`${a},${b}`);
+			if (inDome && a === 'T' && b === 'P') {
+				try {
+					fixState(id, { T: ref.T, P: ref.P });
+					failures.push(`${label} from (T, P): answered on the dome, where T and P are one property`);
+				} catch (e) {
+					if (!(e instanceof ThermoError)) throw e;
+				}
+				continue;
+			}
+			const out = fixFromPair(id, ref, pair, rel);
+			if (out.failure && !known.has(`${id}: ${label} from (${a}, ${b})`)) failures.push(`${label} from (${a}, ${b}): ${out.failure}`);
+		}
+	}
+	return { failures, pairsTried: seen.size };
+}
