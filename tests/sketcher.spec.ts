@@ -41,10 +41,21 @@ function cell(page: Page, state: string, prop: string): Locator {
 	return page.locator(`tr[data-label="${state}"] [data-prop="${prop}"]`);
 }
 
+/** A cell's shown value, once it shows one (right after a drag the input is refilled when the server's answer arrives). */
 async function cellText(page: Page, state: string, prop: string): Promise<string> {
 	const c = cell(page, state, prop);
-	const tag = await c.evaluate((e) => e.tagName);
-	return tag === 'INPUT' ? await c.inputValue() : ((await c.textContent()) ?? '').trim();
+	let text = '';
+	await expect
+		.poll(
+			async () => {
+				const tag = await c.evaluate((e) => e.tagName);
+				text = tag === 'INPUT' ? await c.inputValue() : ((await c.textContent()) ?? '').trim();
+				return text;
+			},
+			{ message: `${state} ${prop} shows a value` }
+		)
+		.not.toBe('');
+	return text;
 }
 
 const num = (t: string) => Number(t.replace('−', '-').replace(/\s.*$/, ''));
@@ -162,6 +173,8 @@ test.describe('the sketcher', () => {
 		for (let i = 1; i <= 10; i++) await page.mouse.move(s2.x, s2.y + ((g.yOf(200) - s2.y) * i) / 10);
 		await page.mouse.up();
 		await expect(page.getByTestId('phase-S2')).toContainText('superheated vapor');
+		// the drag's end is computed and saved before its value is read (not a preview on the way)
+		await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved', { timeout: 20_000 });
 		const second = await cellText(page, 'S2', 'T');
 		await page.locator('body').click({ position: { x: 5, y: 300 } });
 		await page.keyboard.press('Control+z');
