@@ -37,8 +37,8 @@ const PROVENANCE =
 	'pychemqt and a second Python transcription that lists Table 10 by position: 0.5, 1, 2.5, 4). The paper’s printed ' +
 	'Table A1 decides: with 0.5, 1, 2.5, 4 every printed dew pressure is reproduced, with CoolProp’s the 59.75 K one is ' +
 	'off by a factor 4 (air.test.ts). Bubble- and dew-point densities (Eqs. 2, 3): pychemqt and the second Python ' +
-	'transcription agree. Maxcondenbar point 132.6035 K, 3.7891 MPa, 11.0948 mol/dm³ (CoolProp; a MATLAB transcription ' +
-	'by C. F. Edwards); critical point of the mixture 132.5306 K, 3.7860 MPa, 11.8308 mol/dm³ (CoolProp; fprops). ' +
+	'transcription agree. Maxcondenbar point 132.6035 K, 3.7891 MPa, 11.0948 mol/dm³ (CoolProp); ' +
+	'critical point of the mixture 132.5306 K, 3.7860 MPa, 11.8308 mol/dm³ (CoolProp; fprops). ' +
 	'Published scientific data (facts), transcribed; no code copied.';
 
 /**

@@ -23,11 +23,11 @@ export const argon: FluidData = {
 		reference:
 			'Ch. Tegeler, R. Span, W. Wagner, "A New Equation of State for Argon Covering the Fluid Region for Temperatures From the Melting Line to 700 K at Pressures up to 1000 MPa", J. Phys. Chem. Ref. Data 28 (1999) 779–850, doi:10.1063/1.556037',
 		provenance:
-			'Residual coefficients (Table 30 of the paper, 14 significant digits) transcribed from the public CoolProp data file ' +
-			'(CoolProp/CoolProp, dev/fluids/Argon.json) and compared term by term by script with an independent transcription of ' +
-			'Table 30 (a MATLAB data file by C. F. Edwards, 2007, in a public repository): all 41 terms identical digit for digit ' +
-			'(n, d, t, l and the Gaussian η, β, γ, ε). pychemqt (jjgomera/pychemqt, lib/mEoS/Ar.py) carries the same numbers ' +
-			'rounded to 12 significant digits (all 41 agree at that precision). Ideal part a1 = 8.31666243, a2 = −4.94651164, ' +
+			'Residual coefficients (Table 30 of the paper, 14 significant digits) copied from the public CoolProp data file ' +
+			'(CoolProp/CoolProp, dev/fluids/Argon.json) and compared term by term by script with an independent copy, ' +
+			'pychemqt (jjgomera/pychemqt, lib/mEoS/Ar.py), which carries the same numbers rounded to 12 significant digits: all ' +
+			'41 terms (n, d, t, l and the Gaussian η, β, γ, ε) agree at that precision, and the 14-digit values reproduce the ' +
+			'paper’s printed Tables 33 and 34 to their printed digits. Ideal part a1 = 8.31666243, a2 = −4.94651164, ' +
 			'1.5 ln τ (CoolProp, pychemqt: identical). Molar mass 39.948 g/mol, R = 8.31451 J/(mol·K), reducing point 150.687 K, ' +
 			'535.6 kg/m³. Checked in published-checks.test.ts with argon.checks.ts: the paper’s Table 33 (saturation) and ' +
 			'Table 34 (single phase), as energy differences (the paper’s own convention differs from the NBP one by constants). ' +

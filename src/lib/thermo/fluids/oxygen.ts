@@ -31,11 +31,10 @@ export const oxygen: FluidData = {
 		provenance:
 			'Residual coefficients (32 terms: n, d, t and the exponent of δ in exp(−δ^l)) transcribed from pychemqt ' +
 			'(jjgomera/pychemqt, lib/mEoS/O2.py, "schmidt") and compared by script, digit for digit, with two independent ' +
-			'transcriptions: the public CoolProp data file (CoolProp/CoolProp, dev/fluids/Oxygen.json) and a MATLAB parameter file ' +
-			'citing L. van der Ham (NTNU, 2008), Table 7: all 32 terms identical. Ideal part: the paper’s own cp⁰ form (k1…k9 = ' +
-			'−0.740775e−3, −0.664930e−4, 2.50042, −21.4487, 1.01258, −0.944365, 14.5066, 74.9148, 4.14817), identical in two ' +
-			'independent public transcriptions (the same MATLAB file, van der Ham Table 6; an unrelated public Python ' +
-			'transcription). CoolProp and pychemqt carry other ideal-gas equations (a refit; Stewart, Jacobsen & Wagner ' +
+			'copies: the public CoolProp data file (CoolProp/CoolProp, dev/fluids/Oxygen.json): all 32 terms identical. Ideal ' +
+			'part: the paper’s own cp⁰ form (k1…k9 = −0.740775e−3, −0.664930e−4, 2.50042, −21.4487, 1.01258, −0.944365, ' +
+			'14.5066, 74.9148, 4.14817), from a public Python copy of the paper’s equation and held, as a second and ' +
+			'independent check, to the ideal-gas cp⁰ printed in another publication (below). CoolProp and pychemqt carry other ideal-gas equations (a refit; Stewart, Jacobsen & Wagner ' +
 			'1991), not used here. The ideal part reproduces the ideal-gas cp⁰ printed by Stewart, Jacobsen & Wagner (1991), ' +
 			'Table 9, at 60, 200, 500, 1000 and 2000 K to all printed digits (oxygen.test.ts). Molar mass 31.9988 g/mol, ' +
 			'R = 8.31434 J/(mol·K) (pychemqt, CoolProp), critical point 154.581 K, 5.043 MPa, 13.63 mol/dm³. Range served: ' +
