@@ -5,6 +5,10 @@
  * isolines come back whole. Internal consistency of the engine with each fluid's data; the data
  * itself is checked against the papers in published-checks.test.ts.
  */
+// Sources of the check values: the first law and the definitions of the integrals — q = Δu + w,
+// qFlow = Δh + wShaft, q = Δh at constant P, q = TΔs at constant T, q = 0 along an isentrope, Δh = 0
+// in throttling (calculus identities of the compute contract, docs/compute-api.md); a leg ends at its
+// own target (an identity). Tolerances 1e-9 relative (round-off) and 1e-6 (quadrature): common practice.
 import { describe, expect, it } from 'vitest';
 import { computeLeg, fixState, isolines, saturationCurve } from '../index.ts';
 import type { Process } from '../types.ts';

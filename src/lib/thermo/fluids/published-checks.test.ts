@@ -5,6 +5,10 @@
  * saturation close to the critical point are checked the same way for all. The sources are named
  * in the data files, beside the values.
  */
+// Sources of the check values: each table in <id>.checks.ts names its paper, table and the public copy it
+// was read in (e.g. Lemmon, McLinden & Wagner (2009), Table 5, for propane); the normal boiling point at
+// 101.325 kPa and the IIR/NBP reference states are the conventions of docs/compute-api.md; P′ = P″ and
+// g′ = g″ at saturation are the phase-equilibrium conditions (identities, to 1e-9: common practice).
 import { describe, expect, it } from 'vitest';
 import { fixState, saturationCurve } from '../index.ts';
 import type { State } from '../types.ts';
