@@ -30,7 +30,12 @@ export default defineConfig({
 			args: chromiumArgs
 		}
 	},
-	projects: [{ name: 'chromium', use: { ...devices['Desktop Chrome'], viewport: { width: 1280, height: 800 } } }],
+	projects: [
+		{
+			name: 'chromium',
+			use: { ...devices['Desktop Chrome'], viewport: { width: 1280, height: 800 } }
+		}
+	],
 	webServer: {
 		// the built app (vite build runs before playwright in `npm test`) on a fresh database
 		command: 'node scripts/e2e-server.mjs',

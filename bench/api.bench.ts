@@ -21,7 +21,9 @@ const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
 const CONNECTIONS = 10;
 
 if (!existsSync('build/index.js')) {
-	console.error('No build/index.js: run `npx vite build` first (this benchmark builds nothing itself).');
+	console.error(
+		'No build/index.js: run `npx vite build` first (this benchmark builds nothing itself).'
+	);
 	process.exit(1);
 }
 
@@ -30,7 +32,9 @@ function freePort(): Promise<number> {
 		const srv = createServer();
 		srv.listen(0, '127.0.0.1', () => {
 			const addr = srv.address();
-			srv.close(() => (typeof addr === 'object' && addr ? resolve(addr.port) : reject(new Error('no port'))));
+			srv.close(() =>
+				typeof addr === 'object' && addr ? resolve(addr.port) : reject(new Error('no port'))
+			);
 		});
 	});
 }
@@ -51,7 +55,14 @@ async function waitFor(url: string, ms = 30_000): Promise<void> {
 function run(url: string, body: object, seconds: number): Promise<autocannon.Result> {
 	return new Promise((resolve, reject) => {
 		autocannon(
-			{ url, method: 'POST', connections: CONNECTIONS, duration: seconds, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) },
+			{
+				url,
+				method: 'POST',
+				connections: CONNECTIONS,
+				duration: seconds,
+				headers: { 'content-type': 'application/json' },
+				body: JSON.stringify(body)
+			},
 			(err, res) => (err ? reject(err) : resolve(res))
 		);
 	});
@@ -85,16 +96,43 @@ try {
 	const base = `http://127.0.0.1:${port}`;
 	await waitFor(`${base}/healthz`);
 	const url = `${base}/api/v1/legs`;
-	const leg = { fluid: 'water', start: { T: 393.15, x: 0.3 }, process: 'isochoric', target: { T: 450 } };
-	const check = await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(leg) });
+	const leg = {
+		fluid: 'water',
+		start: { T: 393.15, x: 0.3 },
+		process: 'isochoric',
+		target: { T: 450 }
+	};
+	const check = await fetch(url, {
+		method: 'POST',
+		headers: { 'content-type': 'application/json' },
+		body: JSON.stringify(leg)
+	});
 	const sample = (await check.json()) as { leg: { points: unknown[]; crossings: unknown[] } };
 	const bytes = JSON.stringify(sample).length;
-	console.log(`Statewright compute API benchmark — POST /api/v1/legs, ${CONNECTIONS} connections, ${SECONDS} s (budget ≥ 800 req/s, p99 ≤ 30 ms)`);
-	console.log(`node ${process.version}, load average ${loadavg().map((l) => l.toFixed(2)).join(' ')}, COMPUTE_RATE_LIMIT=0\n`);
+	console.log(
+		`Statewright compute API benchmark — POST /api/v1/legs, ${CONNECTIONS} connections, ${SECONDS} s (budget ≥ 800 req/s, p99 ≤ 30 ms)`
+	);
+	console.log(
+		`node ${process.version}, load average ${loadavg()
+			.map((l) => l.toFixed(2))
+			.join(' ')}, COMPUTE_RATE_LIMIT=0\n`
+	);
 	await run(url, leg, 3); // warm-up
 	for (const [name, body] of [
-		[`typical leg (isochoric, ${sample.leg.points.length} points, ${sample.leg.crossings.length} crossing, ${(bytes / 1024).toFixed(1)} kB answer)`, leg],
-		['200-point leg (isentropic through the dome)', { fluid: 'water', start: { T: 800, P: 1e7 }, process: 'isentropic', target: { P: 1e4 }, samples: 200 }]
+		[
+			`typical leg (isochoric, ${sample.leg.points.length} points, ${sample.leg.crossings.length} crossing, ${(bytes / 1024).toFixed(1)} kB answer)`,
+			leg
+		],
+		[
+			'200-point leg (isentropic through the dome)',
+			{
+				fluid: 'water',
+				start: { T: 800, P: 1e7 },
+				process: 'isentropic',
+				target: { P: 1e4 },
+				samples: 200
+			}
+		]
 	] as const) {
 		const r = await run(url, body, SECONDS);
 		const ok = r.requests.average >= 800 && r.latency.p99 <= 30;

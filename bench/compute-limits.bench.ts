@@ -27,22 +27,36 @@ function cpuMs(f: () => unknown): { ms: number; bytes: number } {
 	return { ms: (d.user + d.system) / 1000, bytes: Buffer.byteLength(body) };
 }
 
-const fmt = (r: { ms: number; bytes: number }) => `${r.ms.toFixed(0).padStart(5)} ms CPU, ${(r.bytes / 1024).toFixed(0).padStart(5)} kB`;
-const isochores = (n: number, k = 0) => Array.from({ length: n }, (_, i) => Number((0.0012 * 1.25 ** i * (1 + k * 1e-4)).toPrecision(8)));
+const fmt = (r: { ms: number; bytes: number }) =>
+	`${r.ms.toFixed(0).padStart(5)} ms CPU, ${(r.bytes / 1024).toFixed(0).padStart(5)} kB`;
+const isochores = (n: number, k = 0) =>
+	Array.from({ length: n }, (_, i) => Number((0.0012 * 1.25 ** i * (1 + k * 1e-4)).toPrecision(8)));
 const path = (legs: number, samples: number): PathSpec =>
 	({
 		fluid: 'water',
 		system: { kind: 'closed', mass: 1 },
 		start: { T: 800, P: 1e7 },
-		legs: Array.from({ length: legs }, (_, i) => (i % 2 === 0 ? { process: 'isentropic', target: { P: 1e4 } } : { process: 'isothermal', target: { P: 1e7 } })),
+		legs: Array.from({ length: legs }, (_, i) =>
+			i % 2 === 0
+				? { process: 'isentropic', target: { P: 1e4 } }
+				: { process: 'isothermal', target: { P: 1e7 } }
+		),
 		samples
 	}) as PathSpec;
 
 console.log('Statewright compute caps — engine cost of one request (CPU ms, answer size)\n');
-console.log(`before  isochores 40 × 2000 points    ${fmt(cpuMs(() => isolines('water', 'isochore', isochores(40), 2000)))}`);
-console.log(`now     isochores 40 × 100 points     ${fmt(cpuMs(() => isolines('water', 'isochore', isochores(40), 100)))}`);
-console.log(`now     isochores 2 × 2000 points     ${fmt(cpuMs(() => isolines('water', 'isochore', isochores(2), 2000)))}`);
-console.log(`before  path 50 legs × 200 points     ${fmt(cpuMs(() => computePath(path(50, 200))))}`);
+console.log(
+	`before  isochores 40 × 2000 points    ${fmt(cpuMs(() => isolines('water', 'isochore', isochores(40), 2000)))}`
+);
+console.log(
+	`now     isochores 40 × 100 points     ${fmt(cpuMs(() => isolines('water', 'isochore', isochores(40), 100)))}`
+);
+console.log(
+	`now     isochores 2 × 2000 points     ${fmt(cpuMs(() => isolines('water', 'isochore', isochores(2), 2000)))}`
+);
+console.log(
+	`before  path 50 legs × 200 points     ${fmt(cpuMs(() => computePath(path(50, 200))))}`
+);
 console.log(`now     path 50 legs × 80 points      ${fmt(cpuMs(() => computePath(path(50, 80))))}`);
 console.log(`sheet   path 50 legs × 40 points      ${fmt(cpuMs(() => computePath(path(50, 40))))}`);
 
@@ -56,7 +70,9 @@ function freePort(): Promise<number> {
 		const srv = createServer();
 		srv.listen(0, '127.0.0.1', () => {
 			const addr = srv.address();
-			srv.close(() => (typeof addr === 'object' && addr ? resolve(addr.port) : reject(new Error('no port'))));
+			srv.close(() =>
+				typeof addr === 'object' && addr ? resolve(addr.port) : reject(new Error('no port'))
+			);
 		});
 	});
 }
@@ -65,7 +81,16 @@ const port = Number(process.env.BENCH_PORT ?? (await freePort()));
 const dir = mkdtempSync(join(tmpdir(), 'statewright-limits-'));
 const server = spawn(process.execPath, ['build/index.js'], {
 	stdio: ['ignore', 'ignore', 'inherit'],
-	env: { ...process.env, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1', ORIGIN: `http://127.0.0.1:${port}`, DATABASE_PATH: join(dir, 'bench.db'), SEED_DEMO: '0', COMPUTE_RATE_LIMIT: '0' }
+	env: {
+		...process.env,
+		NODE_ENV: 'production',
+		PORT: String(port),
+		HOST: '127.0.0.1',
+		ORIGIN: `http://127.0.0.1:${port}`,
+		DATABASE_PATH: join(dir, 'bench.db'),
+		SEED_DEMO: '0',
+		COMPUTE_RATE_LIMIT: '0'
+	}
 });
 const stop = () => {
 	server.kill('SIGTERM');
@@ -75,7 +100,8 @@ const stop = () => {
 /** The server's resident memory now and at its peak (MB), and its CPU time so far (ms), from /proc. */
 function proc(): { rss: number; peak: number; cpu: number } {
 	const status = readFileSync(`/proc/${server.pid}/status`, 'utf8');
-	const kb = (name: string) => Number(new RegExp(`^${name}:\\s+(\\d+)`, 'm').exec(status)?.[1] ?? NaN);
+	const kb = (name: string) =>
+		Number(new RegExp(`^${name}:\\s+(\\d+)`, 'm').exec(status)?.[1] ?? NaN);
 	const stat = readFileSync(`/proc/${server.pid}/stat`, 'utf8').split(') ')[1].split(' ');
 	const ticks = Number(stat[11]) + Number(stat[12]); // utime + stime, in clock ticks (100 per second on Linux)
 	return { rss: kb('VmRSS') / 1024, peak: kb('VmHWM') / 1024, cpu: ticks * 10 };
@@ -94,27 +120,42 @@ try {
 		if ((await fetch(`${base}/healthz`).catch(() => null))?.ok) break;
 		await new Promise((r) => setTimeout(r, 200));
 	}
-	const refused = await timed(`${base}/api/v1/fluids/water/isolines?kind=isochore&points=2000&values=${isochores(40).join(',')}`);
+	const refused = await timed(
+		`${base}/api/v1/fluids/water/isolines?kind=isochore&points=2000&values=${isochores(40).join(',')}`
+	);
 	console.log(`\nserver on 127.0.0.1:${port}, COMPUTE_RATE_LIMIT=0`);
-	console.log(`the old worst isolines request now: ${refused.status} in ${refused.ms.toFixed(1)} ms, ${refused.bytes} bytes`);
+	console.log(
+		`the old worst isolines request now: ${refused.status} in ${refused.ms.toFixed(1)} ms, ${refused.bytes} bytes`
+	);
 	for (let i = 0; i < 20; i++) await timed(`${base}/healthz`);
 	const before = proc();
 	const health: number[] = [];
 	const times: number[] = [];
 	let bytes = 0;
 	for (let k = 0; k < REQUESTS; k++) {
-		const r = await timed(`${base}/api/v1/fluids/water/isolines?kind=isochore&points=100&values=${isochores(40, k + 1).join(',')}`);
+		const r = await timed(
+			`${base}/api/v1/fluids/water/isolines?kind=isochore&points=100&values=${isochores(40, k + 1).join(',')}`
+		);
 		if (r.status !== 200) throw new Error(`isolines answered ${r.status}`);
 		times.push(r.ms);
 		bytes += r.bytes;
 		if (k % 5 === 0) health.push((await timed(`${base}/healthz`)).ms);
 	}
 	const after = proc();
-	const p = (xs: number[], q: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(q * xs.length))];
-	console.log(`${REQUESTS} distinct isolines requests at the cap (isochores 40 × 100), one at a time:`);
-	console.log(`  answer ${(bytes / REQUESTS / 1024).toFixed(0)} kB each; latency p50 ${p(times, 0.5).toFixed(1)} ms, p95 ${p(times, 0.95).toFixed(1)} ms; server CPU ${((after.cpu - before.cpu) / REQUESTS).toFixed(1)} ms a request`);
-	console.log(`  server memory: RSS ${before.rss.toFixed(0)} MB before, ${after.rss.toFixed(0)} MB after, peak ${after.peak.toFixed(0)} MB (answer cache bounded at 16 MB)`);
-	console.log(`  /healthz between them: p50 ${p(health, 0.5).toFixed(1)} ms, p95 ${p(health, 0.95).toFixed(1)} ms`);
+	const p = (xs: number[], q: number) =>
+		[...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(q * xs.length))];
+	console.log(
+		`${REQUESTS} distinct isolines requests at the cap (isochores 40 × 100), one at a time:`
+	);
+	console.log(
+		`  answer ${(bytes / REQUESTS / 1024).toFixed(0)} kB each; latency p50 ${p(times, 0.5).toFixed(1)} ms, p95 ${p(times, 0.95).toFixed(1)} ms; server CPU ${((after.cpu - before.cpu) / REQUESTS).toFixed(1)} ms a request`
+	);
+	console.log(
+		`  server memory: RSS ${before.rss.toFixed(0)} MB before, ${after.rss.toFixed(0)} MB after, peak ${after.peak.toFixed(0)} MB (answer cache bounded at 16 MB)`
+	);
+	console.log(
+		`  /healthz between them: p50 ${p(health, 0.5).toFixed(1)} ms, p95 ${p(health, 0.95).toFixed(1)} ms`
+	);
 } finally {
 	stop();
 }

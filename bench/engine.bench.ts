@@ -14,7 +14,15 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { loadavg } from 'node:os';
-import { fixState, if97State, if97StatePh, if97StatePs, saturationAtP, saturationAtT, transport } from '../src/lib/thermo/index.ts';
+import {
+	fixState,
+	if97State,
+	if97StatePh,
+	if97StatePs,
+	saturationAtP,
+	saturationAtT,
+	transport
+} from '../src/lib/thermo/index.ts';
 import type { Inputs, State } from '../src/lib/thermo/types.ts';
 
 interface Case {
@@ -39,10 +47,14 @@ const seeds: Inputs[] = [
 	{ T: 650, P: 22.5e6 }
 ];
 const single = seeds.map((s) => fixState('water', s));
-const mixed = [300, 373.15, 450, 520, 600].flatMap((T) => [0.1, 0.6].map((x) => fixState('water', { T, x })));
+const mixed = [300, 373.15, 450, 520, 600].flatMap((T) =>
+	[0.1, 0.6].map((x) => fixState('water', { T, x }))
+);
 const all = [...single, ...mixed];
 const transportInputs: Inputs[] = single.map((s) => ({ T: s.T, P: s.P }));
-const transportStates = new Map<Inputs, State>(transportInputs.map((i) => [i, if97State(i.P as number, i.T as number)]));
+const transportStates = new Map<Inputs, State>(
+	transportInputs.map((i) => [i, if97State(i.P as number, i.T as number)])
+);
 
 const cases: Case[] = [
 	{
@@ -77,7 +89,9 @@ const cases: Case[] = [
 	{
 		name: 'IF97 state from (P, T), regions 1, 2, 5 only',
 		budget: 1,
-		inputs: single.filter((s) => s.T < 623.15 || s.T > 863.15 || s.P < 16.5e6).map((s) => ({ T: s.T, P: s.P })),
+		inputs: single
+			.filter((s) => s.T < 623.15 || s.T > 863.15 || s.P < 16.5e6)
+			.map((s) => ({ T: s.T, P: s.P })),
 		run: (i) => if97State(i.P as number, i.T as number),
 		py: 'IAPWS97(T=d["T"], P=d["P"]/1e6)'
 	},
@@ -200,7 +214,8 @@ function time(c: Case): { wall: number; cpu: number; best: number } {
 	while (warm < 5000 || performance.now() - w0 < 300) calls[warm++ % n]();
 	const perCall = (performance.now() - w0) / warm;
 	const per = Math.max(n, Math.ceil(0.5 / perCall / n) * n);
-	const walls: number[] = [], cpus: number[] = [];
+	const walls: number[] = [],
+		cpus: number[] = [];
 	const deadline = performance.now() + 1500;
 	while (walls.length < 15 || (performance.now() < deadline && walls.length < 200)) {
 		const c0 = process.cpuUsage();
@@ -217,8 +232,11 @@ function time(c: Case): { wall: number; cpu: number; best: number } {
 /** python3-iapws on the same inputs: median µs per call (CPU time), or null if unavailable. */
 function timePython(): Map<string, number> | null {
 	const py = '/usr/bin/python3';
-	if (!existsSync(py) || spawnSync(py, ['-c', 'import iapws'], { encoding: 'utf8' }).status !== 0) return null;
-	const jobs = cases.filter((c) => c.py).map((c) => ({ name: c.name, expr: c.py, inputs: c.inputs }));
+	if (!existsSync(py) || spawnSync(py, ['-c', 'import iapws'], { encoding: 'utf8' }).status !== 0)
+		return null;
+	const jobs = cases
+		.filter((c) => c.py)
+		.map((c) => ({ name: c.name, expr: c.py, inputs: c.inputs }));
 	const script = `
 import json, sys, time, warnings
 warnings.filterwarnings('ignore')
@@ -240,7 +258,11 @@ for job in jobs:
     out[job['name']] = times[len(times) // 2] * 1e6
 print(json.dumps(out))
 `;
-	const res = spawnSync(py, ['-c', script], { input: JSON.stringify(jobs), encoding: 'utf8', timeout: 300_000 });
+	const res = spawnSync(py, ['-c', script], {
+		input: JSON.stringify(jobs),
+		encoding: 'utf8',
+		timeout: 300_000
+	});
 	if (res.status !== 0) return null;
 	return new Map(Object.entries(JSON.parse(res.stdout) as Record<string, number>));
 }
@@ -248,7 +270,16 @@ print(json.dumps(out))
 const rows = cases.map((c) => ({ c, t: time(c) }));
 const python = timePython();
 
-const head = ['case (water: IAPWS-95 unless IF97 named)', 'states', 'median µs (CPU)', 'median µs (wall)', 'best µs (CPU)', 'budget µs', 'python3-iapws µs', 'iapws / ours'];
+const head = [
+	'case (water: IAPWS-95 unless IF97 named)',
+	'states',
+	'median µs (CPU)',
+	'median µs (wall)',
+	'best µs (CPU)',
+	'budget µs',
+	'python3-iapws µs',
+	'iapws / ours'
+];
 const lines = rows.map(({ c, t }) => {
 	const p = python?.get(c.name);
 	return [
@@ -263,7 +294,8 @@ const lines = rows.map(({ c, t }) => {
 	];
 });
 const widths = head.map((h, k) => Math.max(h.length, ...lines.map((l) => l[k].length)));
-const fmtRow = (r: string[]) => r.map((x, k) => (k === 0 ? x.padEnd(widths[k]) : x.padStart(widths[k]))).join('  ');
+const fmtRow = (r: string[]) =>
+	r.map((x, k) => (k === 0 ? x.padEnd(widths[k]) : x.padStart(widths[k]))).join('  ');
 console.log(
 	`Statewright engine benchmark — node ${process.version}, ${new Date().toISOString()}, load average ${loadavg()
 		.map((x) => x.toFixed(1))
@@ -272,5 +304,10 @@ console.log(
 console.log(fmtRow(head));
 console.log(widths.map((w) => '─'.repeat(w)).join('  '));
 for (const l of lines) console.log(fmtRow(l));
-if (!python) console.log('python3-iapws not available (/usr/bin/python3 -c "import iapws" failed): no comparison.');
-console.log('Budgets are compared with the CPU-time median (docs/performance.md, performance budget). Never fails on time.');
+if (!python)
+	console.log(
+		'python3-iapws not available (/usr/bin/python3 -c "import iapws" failed): no comparison.'
+	);
+console.log(
+	'Budgets are compared with the CPU-time median (docs/performance.md, performance budget). Never fails on time.'
+);

@@ -42,7 +42,12 @@ function states(f: FluidInfo): { single: State[]; mixed: State[] } {
 	const rhoc = f.equationCritical.rho;
 	const Tt = f.triple.T;
 	const single: State[] = [];
-	for (const T of [Tt + 0.4 * (Tc - Tt), Tt + 0.8 * (Tc - Tt), 1.1 * Tc, Math.min(1.6 * Tc, f.limits.Tmax)]) {
+	for (const T of [
+		Tt + 0.4 * (Tc - Tt),
+		Tt + 0.8 * (Tc - Tt),
+		1.1 * Tc,
+		Math.min(1.6 * Tc, f.limits.Tmax)
+	]) {
 		for (const r of [0.2, 1, 3]) {
 			try {
 				const st = fixState(f.id, { T, rho: r * rhoc });
@@ -52,11 +57,15 @@ function states(f: FluidInfo): { single: State[]; mixed: State[] } {
 			}
 		}
 	}
-	const mixed = [0.3, 0.6, 0.9].flatMap((k) => [0.1, 0.6].map((x) => fixState(f.id, { T: Tt + k * (Tc - Tt), x })));
+	const mixed = [0.3, 0.6, 0.9].flatMap((k) =>
+		[0.1, 0.6].map((x) => fixState(f.id, { T: Tt + k * (Tc - Tt), x }))
+	);
 	return { single, mixed };
 }
 
-const wanted = [...process.argv.slice(2), ...(process.env.BENCH_FLUIDS ?? '').split(',')].filter(Boolean);
+const wanted = [...process.argv.slice(2), ...(process.env.BENCH_FLUIDS ?? '').split(',')].filter(
+	Boolean
+);
 const fluids = listFluids().filter((f) => wanted.length === 0 || wanted.includes(f.id));
 const head = ['fluid', 'T, rho µs', 'P, T µs', 'P, h µs', 'sat at T µs'];
 const lines: string[][] = [];
@@ -70,7 +79,9 @@ for (const f of fluids) {
 		'T, rho': time(single.map((s) => call({ T: s.T, rho: s.rho }))),
 		'P, T': time(single.map((s) => call({ T: s.T, P: s.P }))),
 		'P, h': time(all.map((s) => call({ P: s.P, h: s.h }))),
-		'sat at T': time([0.2, 0.4, 0.6, 0.8, 0.95, 0.99].map((k) => () => saturationAtT(f.id, Tt + k * (Tc - Tt))))
+		'sat at T': time(
+			[0.2, 0.4, 0.6, 0.8, 0.95, 0.99].map((k) => () => saturationAtT(f.id, Tt + k * (Tc - Tt)))
+		)
 	};
 	lines.push([
 		f.id,
@@ -81,7 +92,8 @@ for (const f of fluids) {
 	]);
 }
 const widths = head.map((h, k) => Math.max(h.length, ...lines.map((l) => l[k].length)));
-const fmtRow = (r: string[]) => r.map((x, k) => (k === 0 ? x.padEnd(widths[k]) : x.padStart(widths[k]))).join('  ');
+const fmtRow = (r: string[]) =>
+	r.map((x, k) => (k === 0 ? x.padEnd(widths[k]) : x.padStart(widths[k]))).join('  ');
 console.log(
 	`Statewright per-fluid engine benchmark — node ${process.version}, ${new Date().toISOString()}, load average ${loadavg()
 		.map((x) => x.toFixed(1))
@@ -90,4 +102,6 @@ console.log(
 console.log(fmtRow(head));
 console.log(widths.map((w) => '─'.repeat(w)).join('  '));
 for (const l of lines) console.log(fmtRow(l));
-console.log('Median CPU µs per call / budget µs (the current budgets for every fluid, docs/performance.md). Never fails on time.');
+console.log(
+	'Median CPU µs per call / budget µs (the current budgets for every fluid, docs/performance.md). Never fails on time.'
+);

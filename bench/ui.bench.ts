@@ -28,7 +28,10 @@ function startServer(): ChildProcess {
 		console.error('No build found: run `npx vite build` first.');
 		process.exit(1);
 	}
-	return spawn(process.execPath, ['scripts/e2e-server.mjs'], { env: { ...process.env, PORT: String(PORT) }, stdio: ['ignore', 'ignore', 'inherit'] });
+	return spawn(process.execPath, ['scripts/e2e-server.mjs'], {
+		env: { ...process.env, PORT: String(PORT) },
+		stdio: ['ignore', 'ignore', 'inherit']
+	});
 }
 
 async function waitHealthy() {
@@ -73,7 +76,8 @@ async function sheetUrl(page: Page, name: RegExp): Promise<string> {
 async function firstLoad(page: Page, url: string) {
 	const bodies = new Map<string, Buffer | null>();
 	page.on('response', async (r) => {
-		if (r.request().resourceType() === 'script') bodies.set(r.url(), await r.body().catch(() => null));
+		if (r.request().resourceType() === 'script')
+			bodies.set(r.url(), await r.body().catch(() => null));
 	});
 	await page.goto(url, { waitUntil: 'load' });
 	await page.waitForSelector('[data-testid="sheet-screen"]');
@@ -82,9 +86,13 @@ async function firstLoad(page: Page, url: string) {
 	// the sheet screen marks its mount; scripts requested after it are the lazily imported ones
 	const timing = await page.evaluate(() => ({
 		mounted: performance.getEntriesByName('sheet-mounted')[0]?.startTime ?? Infinity,
-		resources: (performance.getEntriesByType('resource') as PerformanceResourceTiming[]).filter((r) => r.initiatorType === 'script' || r.name.endsWith('.js')).map((r) => ({ url: r.name, start: r.startTime }))
+		resources: (performance.getEntriesByType('resource') as PerformanceResourceTiming[])
+			.filter((r) => r.initiatorType === 'script' || r.name.endsWith('.js'))
+			.map((r) => ({ url: r.name, start: r.startTime }))
 	}));
-	const scripts = timing.resources.filter((r) => r.url.endsWith('.js')).map((r) => ({ ...r, size: gzSize(r.url, bodies.get(r.url) ?? null) }));
+	const scripts = timing.resources
+		.filter((r) => r.url.endsWith('.js'))
+		.map((r) => ({ ...r, size: gzSize(r.url, bodies.get(r.url) ?? null) }));
 	const sum = (l: typeof scripts) => l.reduce((a, s) => a + s.size, 0);
 	return {
 		initial: sum(scripts.filter((s) => s.start < timing.mounted)),
@@ -100,7 +108,10 @@ async function instrument(page: Page) {
 		w.__redraws = [];
 		w.__moves = [];
 		const overlay = document.querySelector('[data-chart="T-v"] svg.swc-overlay')!;
-		new MutationObserver(() => w.__redraws.push(performance.now())).observe(overlay, { attributes: true, attributeFilter: ['data-path-rev'] });
+		new MutationObserver(() => w.__redraws.push(performance.now())).observe(overlay, {
+			attributes: true,
+			attributeFilter: ['data-path-rev']
+		});
 		window.addEventListener('pointermove', (e) => w.__moves.push(e.timeStamp), { capture: true });
 	});
 }
@@ -109,13 +120,18 @@ async function discOf(page: Page, index: number) {
 	const chart = page.locator('[data-chart="T-v"]');
 	const box = (await chart.locator('svg.swc-overlay').boundingBox())!;
 	const c = chart.locator('circle.swc-hit-state').nth(index);
-	return { x: box.x + Number(await c.getAttribute('cx')), y: box.y + Number(await c.getAttribute('cy')) };
+	return {
+		x: box.x + Number(await c.getAttribute('cx')),
+		y: box.y + Number(await c.getAttribute('cy'))
+	};
 }
 
 async function drag(page: Page, mode: 'sequential' | 'continuous'): Promise<number[]> {
 	await page.reload();
 	await page.waitForSelector('[data-chart="T-v"] circle.swc-hit-state');
-	await page.waitForFunction(() => document.querySelector('[data-chart="T-v"] svg.swc-overlay')?.getAttribute('data-path-rev'));
+	await page.waitForFunction(() =>
+		document.querySelector('[data-chart="T-v"] svg.swc-overlay')?.getAttribute('data-path-rev')
+	);
 	await page.waitForTimeout(800);
 	await instrument(page);
 	const s2 = await discOf(page, 1);
@@ -124,14 +140,21 @@ async function drag(page: Page, mode: 'sequential' | 'continuous'): Promise<numb
 	await page.mouse.move(s2.x, s2.y + 3);
 	await page.waitForTimeout(300);
 	const latencies: number[] = [];
-	const rev = () => page.evaluate(() => (window as unknown as { __redraws: number[] }).__redraws.length);
+	const rev = () =>
+		page.evaluate(() => (window as unknown as { __redraws: number[] }).__redraws.length);
 	// a vertical sweep of ±40 px around the disc (the isochore is vertical on T–v)
 	const yAt = (i: number) => s2.y + 3 + 40 * Math.sin((i / MOVES) * 2 * Math.PI) + (i % 2);
 	if (mode === 'sequential') {
 		for (let i = 0; i < MOVES; i++) {
 			const before = await rev();
 			await page.mouse.move(s2.x, yAt(i));
-			await page.waitForFunction((n) => (window as unknown as { __redraws: number[] }).__redraws.length > n, before, { timeout: 5000 }).catch(() => null);
+			await page
+				.waitForFunction(
+					(n) => (window as unknown as { __redraws: number[] }).__redraws.length > n,
+					before,
+					{ timeout: 5000 }
+				)
+				.catch(() => null);
 		}
 	} else {
 		for (let i = 0; i < MOVES; i++) {
@@ -161,14 +184,24 @@ async function main() {
 		await waitHealthy();
 		const browser = await chromium.launch({
 			executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-			args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run']
+			args: [
+				'--no-sandbox',
+				'--disable-gpu',
+				'--disable-background-networking',
+				'--disable-component-update',
+				'--disable-sync',
+				'--no-first-run'
+			]
 		});
 		const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
 		const page = await context.newPage();
 		await signIn(page);
 		const url = await sheetUrl(page, /V-204/);
 
-		const fresh = await browser.newContext({ viewport: { width: 1280, height: 800 }, storageState: await context.storageState() });
+		const fresh = await browser.newContext({
+			viewport: { width: 1280, height: 800 },
+			storageState: await context.storageState()
+		});
 		const loadPage = await fresh.newPage();
 		const js = await firstLoad(loadPage, url);
 		await fresh.close();
@@ -178,14 +211,26 @@ async function main() {
 		const cont = await drag(page, 'continuous');
 		await browser.close();
 
-		console.log(`\nStatewright sketcher benchmark (built app, Debian Chromium 1280×800, load ${loadavg()[0].toFixed(2)} on this machine)\n`);
+		console.log(
+			`\nStatewright sketcher benchmark (built app, Debian Chromium 1280×800, load ${loadavg()[0].toFixed(2)} on this machine)\n`
+		);
 		console.log('First load of a sheet page (V-204), JS gzipped:');
 		console.log(`  render and hydrate      ${kB(js.initial).padStart(9)}`);
 		console.log(`  lazy after load (engine) ${kB(js.lazy).padStart(8)}`);
-		console.log(`  total                   ${kB(js.initial + js.lazy).padStart(9)}   budget ≤ 250 kB   ${js.initial + js.lazy <= 250 * 1024 ? 'within' : 'OVER'}`);
-		console.log(`  (${js.count} scripts; largest: ${js.biggest.map((b) => `${new URL(b.url).pathname.split('/').pop()} ${kB(b.size)}`).join(', ')})`);
+		console.log(
+			`  total                   ${kB(js.initial + js.lazy).padStart(9)}   budget ≤ 250 kB   ${js.initial + js.lazy <= 250 * 1024 ? 'within' : 'OVER'}`
+		);
+		console.log(
+			`  (${js.count} scripts; largest: ${js.biggest.map((b) => `${new URL(b.url).pathname.split('/').pop()} ${kB(b.size)}`).join(', ')})`
+		);
 		const line = (name: string, l: number[]) =>
-			console.log(`  ${name.padEnd(26)} n=${String(l.length).padStart(3)}  p50 ${pct(l, 50).toFixed(1).padStart(6)} ms  p95 ${pct(l, 95).toFixed(1).padStart(6)} ms  max ${Math.max(...l).toFixed(1).padStart(6)} ms   budget p95 ≤ 50 ms   ${pct(l, 95) <= 50 ? 'within' : 'OVER'}`);
+			console.log(
+				`  ${name.padEnd(26)} n=${String(l.length).padStart(3)}  p50 ${pct(l, 50).toFixed(1).padStart(6)} ms  p95 ${pct(l, 95).toFixed(1).padStart(6)} ms  max ${Math.max(
+					...l
+				)
+					.toFixed(1)
+					.padStart(6)} ms   budget p95 ≤ 50 ms   ${pct(l, 95) <= 50 ? 'within' : 'OVER'}`
+			);
 		console.log('\nPointer move → redrawn path while dragging S2 (POST /api/v1/paths per answer):');
 		line('one move at a time', seq);
 		line('continuous, ~60 moves/s', cont);

@@ -81,7 +81,11 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('used_at', 'integer')
 		.addCheckConstraint('email_tokens_purpose', sql`purpose in ('verify-email', 'reset-password')`)
 		.execute();
-	await db.schema.createIndex('email_tokens_user_id').on('email_tokens').column('user_id').execute();
+	await db.schema
+		.createIndex('email_tokens_user_id')
+		.on('email_tokens')
+		.column('user_id')
+		.execute();
 
 	await db.schema
 		.createTable('api_tokens')
@@ -124,11 +128,25 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('detail', 'text', (c) => c.notNull().defaultTo('{}'))
 		.addColumn('created_at', 'integer', (c) => c.notNull())
 		.execute();
-	await db.schema.createIndex('team_events_team_time').on('team_events').columns(['team_id', 'created_at']).execute();
+	await db.schema
+		.createIndex('team_events_team_time')
+		.on('team_events')
+		.columns(['team_id', 'created_at'])
+		.execute();
 }
 
 export async function down(db: Kysely<any>): Promise<void> {
-	for (const table of ['team_events', 'outbox', 'api_tokens', 'email_tokens', 'invites', 'memberships', 'teams', 'sessions', 'users']) {
+	for (const table of [
+		'team_events',
+		'outbox',
+		'api_tokens',
+		'email_tokens',
+		'invites',
+		'memberships',
+		'teams',
+		'sessions',
+		'users'
+	]) {
 		await db.schema.dropTable(table).execute();
 	}
 }

@@ -26,12 +26,19 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('updated_by_label', 'text', (c) => c.notNull())
 		.addColumn('updated_at', 'integer', (c) => c.notNull())
 		.addUniqueConstraint('sheets_team_number', ['team_id', 'number'])
-		.addCheckConstraint('sheets_status', sql`status in ('draft', 'in-check', 'checked', 'approved')`)
+		.addCheckConstraint(
+			'sheets_status',
+			sql`status in ('draft', 'in-check', 'checked', 'approved')`
+		)
 		.addCheckConstraint('sheets_system_kind', sql`system_kind in ('closed', 'flow')`)
 		.addCheckConstraint('sheets_draft_version', sql`draft_version >= 1`)
 		.addCheckConstraint('sheets_title', sql`length(title) between 1 and 120`)
 		.execute();
-	await db.schema.createIndex('sheets_team_updated').on('sheets').columns(['team_id', 'updated_at']).execute();
+	await db.schema
+		.createIndex('sheets_team_updated')
+		.on('sheets')
+		.columns(['team_id', 'updated_at'])
+		.execute();
 }
 
 export async function down(db: Kysely<any>): Promise<void> {

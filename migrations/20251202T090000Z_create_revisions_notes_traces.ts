@@ -42,11 +42,18 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('returned_at', 'integer')
 		.addUniqueConstraint('sheet_revisions_sheet_number', ['sheet_id', 'number'])
 		.addCheckConstraint('sheet_revisions_number', sql`number >= 1`)
-		.addCheckConstraint('sheet_revisions_based_on', sql`based_on is null or (based_on >= 1 and based_on < number)`)
+		.addCheckConstraint(
+			'sheet_revisions_based_on',
+			sql`based_on is null or (based_on >= 1 and based_on < number)`
+		)
 		.addCheckConstraint('sheet_revisions_status', statusCheck)
 		.addCheckConstraint('sheet_revisions_message', sql`length(message) between 1 and 2000`)
 		.execute();
-	await db.schema.createIndex('sheet_revisions_team').on('sheet_revisions').column('team_id').execute();
+	await db.schema
+		.createIndex('sheet_revisions_team')
+		.on('sheet_revisions')
+		.column('team_id')
+		.execute();
 
 	// What a revision holds never changes (user ids may still be cleared when an account goes).
 	await sql`create trigger sheet_revisions_content_immutable
@@ -61,16 +68,25 @@ export async function up(db: Kysely<any>): Promise<void> {
 	await db.schema
 		.createTable('sheet_revision_events')
 		.addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
-		.addColumn('revision_id', 'text', (c) => c.notNull().references('sheet_revisions.id').onDelete('cascade'))
+		.addColumn('revision_id', 'text', (c) =>
+			c.notNull().references('sheet_revisions.id').onDelete('cascade')
+		)
 		.addColumn('sheet_id', 'text', (c) => c.notNull().references('sheets.id').onDelete('cascade'))
 		.addColumn('kind', 'text', (c) => c.notNull())
 		.addColumn('actor_id', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('actor_label', 'text', (c) => c.notNull())
 		.addColumn('note', 'text')
 		.addColumn('created_at', 'integer', (c) => c.notNull())
-		.addCheckConstraint('sheet_revision_events_kind', sql`kind in ('saved', 'submitted', 'returned', 'checked', 'approved', 'restored')`)
+		.addCheckConstraint(
+			'sheet_revision_events_kind',
+			sql`kind in ('saved', 'submitted', 'returned', 'checked', 'approved', 'restored')`
+		)
 		.execute();
-	await db.schema.createIndex('sheet_revision_events_sheet').on('sheet_revision_events').columns(['sheet_id', 'id']).execute();
+	await db.schema
+		.createIndex('sheet_revision_events_sheet')
+		.on('sheet_revision_events')
+		.columns(['sheet_id', 'id'])
+		.execute();
 
 	await db.schema
 		.createTable('review_notes')
@@ -95,15 +111,24 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('resolved_by_label', 'text')
 		.addColumn('last_activity_at', 'integer', (c) => c.notNull())
 		.addCheckConstraint('review_notes_anchor_kind', sql`anchor_kind in ('sheet', 'leg', 'state')`)
-		.addCheckConstraint('review_notes_anchor_id', sql`(anchor_kind = 'sheet') = (anchor_id is null)`)
+		.addCheckConstraint(
+			'review_notes_anchor_id',
+			sql`(anchor_kind = 'sheet') = (anchor_id is null)`
+		)
 		.addCheckConstraint('review_notes_body', sql`length(body) between 1 and 4000`)
 		.execute();
-	await db.schema.createIndex('review_notes_sheet').on('review_notes').columns(['sheet_id', 'created_at']).execute();
+	await db.schema
+		.createIndex('review_notes_sheet')
+		.on('review_notes')
+		.columns(['sheet_id', 'created_at'])
+		.execute();
 
 	await db.schema
 		.createTable('review_note_replies')
 		.addColumn('id', 'text', (c) => c.primaryKey())
-		.addColumn('note_id', 'text', (c) => c.notNull().references('review_notes.id').onDelete('cascade'))
+		.addColumn('note_id', 'text', (c) =>
+			c.notNull().references('review_notes.id').onDelete('cascade')
+		)
 		// a reply, or a line in the thread saying who resolved or reopened it
 		.addColumn('kind', 'text', (c) => c.notNull())
 		.addColumn('body', 'text', (c) => c.notNull())
@@ -111,19 +136,34 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('author_label', 'text', (c) => c.notNull())
 		.addColumn('created_at', 'integer', (c) => c.notNull())
 		.addCheckConstraint('review_note_replies_kind', sql`kind in ('reply', 'resolved', 'reopened')`)
-		.addCheckConstraint('review_note_replies_body', sql`(kind = 'reply' and length(body) between 1 and 4000) or (kind <> 'reply' and length(body) <= 4000)`)
+		.addCheckConstraint(
+			'review_note_replies_body',
+			sql`(kind = 'reply' and length(body) between 1 and 4000) or (kind <> 'reply' and length(body) <= 4000)`
+		)
 		.execute();
-	await db.schema.createIndex('review_note_replies_note').on('review_note_replies').columns(['note_id', 'created_at']).execute();
+	await db.schema
+		.createIndex('review_note_replies_note')
+		.on('review_note_replies')
+		.columns(['note_id', 'created_at'])
+		.execute();
 
 	await db.schema
 		.createTable('review_note_mentions')
 		.addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
-		.addColumn('note_id', 'text', (c) => c.notNull().references('review_notes.id').onDelete('cascade'))
-		.addColumn('reply_id', 'text', (c) => c.references('review_note_replies.id').onDelete('cascade'))
+		.addColumn('note_id', 'text', (c) =>
+			c.notNull().references('review_notes.id').onDelete('cascade')
+		)
+		.addColumn('reply_id', 'text', (c) =>
+			c.references('review_note_replies.id').onDelete('cascade')
+		)
 		.addColumn('user_id', 'text', (c) => c.notNull().references('users.id').onDelete('cascade'))
 		.addColumn('created_at', 'integer', (c) => c.notNull())
 		.execute();
-	await db.schema.createIndex('review_note_mentions_user').on('review_note_mentions').columns(['user_id', 'created_at']).execute();
+	await db.schema
+		.createIndex('review_note_mentions_user')
+		.on('review_note_mentions')
+		.columns(['user_id', 'created_at'])
+		.execute();
 
 	await db.schema
 		.createTable('notification_settings')
@@ -165,13 +205,28 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('uploaded_by_label', 'text', (c) => c.notNull())
 		.addColumn('uploaded_at', 'integer', (c) => c.notNull())
 		.addCheckConstraint('sheet_traces_name', sql`length(name) between 1 and 80`)
-		.addCheckConstraint('sheet_traces_counts', sql`point_count >= 1 and in_dome_count >= 0 and rejected_count >= 0`)
+		.addCheckConstraint(
+			'sheet_traces_counts',
+			sql`point_count >= 1 and in_dome_count >= 0 and rejected_count >= 0`
+		)
 		.execute();
-	await db.schema.createIndex('sheet_traces_sheet').on('sheet_traces').columns(['sheet_id', 'uploaded_at']).execute();
+	await db.schema
+		.createIndex('sheet_traces_sheet')
+		.on('sheet_traces')
+		.columns(['sheet_id', 'uploaded_at'])
+		.execute();
 }
 
 export async function down(db: Kysely<any>): Promise<void> {
-	for (const table of ['sheet_traces', 'notification_settings', 'review_note_mentions', 'review_note_replies', 'review_notes', 'sheet_revision_events', 'sheet_revisions']) {
+	for (const table of [
+		'sheet_traces',
+		'notification_settings',
+		'review_note_mentions',
+		'review_note_replies',
+		'review_notes',
+		'sheet_revision_events',
+		'sheet_revisions'
+	]) {
 		await db.schema.dropTable(table).execute();
 	}
 }

@@ -6,11 +6,17 @@ import { pathToFileURL } from 'node:url';
 import { Migrator, type Migration } from 'kysely';
 import { readConfig } from '../src/lib/server/config.ts';
 import { openDatabase } from '../src/lib/server/db/connection.ts';
-import { migrateToLatest, migrationName, type MigrationModules } from '../src/lib/server/db/migrate.ts';
+import {
+	migrateToLatest,
+	migrationName,
+	type MigrationModules
+} from '../src/lib/server/db/migrate.ts';
 
 const dir = resolve(import.meta.dirname, '..', 'migrations');
 const modules: MigrationModules = {};
-for (const file of readdirSync(dir).filter((f) => f.endsWith('.ts')).sort()) {
+for (const file of readdirSync(dir)
+	.filter((f) => f.endsWith('.ts'))
+	.sort()) {
 	modules[migrationName(file)] = (await import(pathToFileURL(join(dir, file)).href)) as Migration;
 }
 
@@ -22,11 +28,17 @@ try {
 		const { error, results } = await migrator.migrateDown();
 		if (error) throw error;
 		const name = results?.[0]?.migrationName;
-		console.log(name ? `reverted ${name} in ${databasePath}` : `nothing to revert in ${databasePath}`);
+		console.log(
+			name ? `reverted ${name} in ${databasePath}` : `nothing to revert in ${databasePath}`
+		);
 	} else {
 		const results = await migrateToLatest(db, modules);
 		const applied = results.filter((r) => r.status === 'Success').map((r) => r.migrationName);
-		console.log(applied.length ? `applied to ${databasePath}:\n  ${applied.join('\n  ')}` : `${databasePath} is up to date (${Object.keys(modules).length} migrations)`);
+		console.log(
+			applied.length
+				? `applied to ${databasePath}:\n  ${applied.join('\n  ')}`
+				: `${databasePath} is up to date (${Object.keys(modules).length} migrations)`
+		);
 	}
 } finally {
 	await db.destroy();

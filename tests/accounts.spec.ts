@@ -1,8 +1,21 @@
 import { expect, test } from '@playwright/test';
-import { BASE, DEMO, DEMO_PASSWORD, freshEmail, lastMailId, linkIn, FORM, signInPage, signUpPage, waitForMail } from './helpers';
+import {
+	BASE,
+	DEMO,
+	DEMO_PASSWORD,
+	freshEmail,
+	lastMailId,
+	linkIn,
+	FORM,
+	signInPage,
+	signUpPage,
+	waitForMail
+} from './helpers';
 
 test.describe('accounts', () => {
-	test('sign up, confirm the address from the mail (which signs in), sign out and sign in again', async ({ page }) => {
+	test('sign up, confirm the address from the mail (which signs in), sign out and sign in again', async ({
+		page
+	}) => {
 		const email = freshEmail('ines');
 		await page.goto('/signup');
 		await page.getByLabel('Name').fill('Ines Duarte');
@@ -34,7 +47,9 @@ test.describe('accounts', () => {
 		await expect(page.getByRole('heading', { name: 'Ines Duarte' })).toBeVisible();
 	});
 
-	test('sign-up refuses a bad address and a short password, keeping what was typed, and answers a taken address as a new one', async ({ page }) => {
+	test('sign-up refuses a bad address and a short password, keeping what was typed, and answers a taken address as a new one', async ({
+		page
+	}) => {
 		await page.goto('/signup');
 		await page.getByLabel('Name').fill('Short Pass');
 		await page.getByLabel('E-mail').fill(freshEmail('short'));
@@ -42,13 +57,17 @@ test.describe('accounts', () => {
 		// the browser's own minlength check would stop a real user; submit past it to reach the server
 		await page.locator('form').evaluate((f: HTMLFormElement) => f.setAttribute('novalidate', ''));
 		await page.getByRole('button', { name: 'Create account' }).click();
-		await expect(page.getByText('Use at least 10 characters for the password.').first()).toBeVisible();
+		await expect(
+			page.getByText('Use at least 10 characters for the password.').first()
+		).toBeVisible();
 		await expect(page.getByLabel('Name')).toHaveValue('Short Pass');
 
 		await page.getByLabel('E-mail').fill('not-an-address');
 		await page.getByLabel('Password').fill('a long enough password');
 		await page.getByRole('button', { name: 'Create account' }).click();
-		await expect(page.getByText('Enter an e-mail address like name@example.com.').first()).toBeVisible();
+		await expect(
+			page.getByText('Enter an e-mail address like name@example.com.').first()
+		).toBeVisible();
 
 		const after = await lastMailId(DEMO.viewer);
 		await page.getByLabel('E-mail').fill(DEMO.viewer);
@@ -65,12 +84,17 @@ test.describe('accounts', () => {
 		await page.getByLabel('E-mail').fill(DEMO.checker);
 		await page.getByLabel('Password').fill('not the demo password');
 		await page.getByRole('button', { name: 'Sign in' }).click();
-		await expect(page.getByRole('alert')).toContainText('That e-mail address and password do not match an account');
+		await expect(page.getByRole('alert')).toContainText(
+			'That e-mail address and password do not match an account'
+		);
 		await expect(page).toHaveURL(/\/signin$/);
 		await expect(page.getByLabel('E-mail')).toHaveValue(DEMO.checker);
 	});
 
-	test('reset the password by e-mail: follow the link, set a new password, the old one stops working', async ({ page, browser }) => {
+	test('reset the password by e-mail: follow the link, set a new password, the old one stops working', async ({
+		page,
+		browser
+	}) => {
 		const email = freshEmail('forgetful');
 		const other = await browser.newContext();
 		const otherPage = await other.newPage();
@@ -113,8 +137,13 @@ test.describe('accounts', () => {
 		await expect(page.getByRole('heading', { name: 'Your teams' })).toBeVisible();
 	});
 
-	test('a reset request for an unknown address looks the same and sends nothing', async ({ request }) => {
-		const res = await request.post('/reset?/request', { form: { email: freshEmail('ghost') }, headers: FORM });
+	test('a reset request for an unknown address looks the same and sends nothing', async ({
+		request
+	}) => {
+		const res = await request.post('/reset?/request', {
+			form: { email: freshEmail('ghost') },
+			headers: FORM
+		});
 		expect(res.status()).toBe(200);
 		expect(await res.text()).toContain('a reset link is on its way');
 	});
@@ -141,8 +170,14 @@ test.describe('accounts', () => {
 		await second.close();
 	});
 
-	test('the session cookie is HttpOnly and SameSite=Lax; without https it is not Secure', async ({ request }) => {
-		const res = await request.post('/signin', { form: { email: DEMO.viewer, password: DEMO_PASSWORD }, headers: FORM, maxRedirects: 0 });
+	test('the session cookie is HttpOnly and SameSite=Lax; without https it is not Secure', async ({
+		request
+	}) => {
+		const res = await request.post('/signin', {
+			form: { email: DEMO.viewer, password: DEMO_PASSWORD },
+			headers: FORM,
+			maxRedirects: 0
+		});
 		const cookie = res.headers()['set-cookie'];
 		expect(cookie).toMatch(/^statewright_session=[a-z0-9]{40};/);
 		expect(cookie).toMatch(/HttpOnly/i);

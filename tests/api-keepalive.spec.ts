@@ -19,9 +19,18 @@ for (const [name, method, path, status] of [
 		try {
 			const first = await exchange(socket, rawRequest(method, path, BIG));
 			expect(first.status).toBe(status);
-			expect(JSON.parse(first.body).error.code).toBe(status === 413 ? 'too-large' : 'method-not-allowed');
+			expect(JSON.parse(first.body).error.code).toBe(
+				status === 413 ? 'too-large' : 'method-not-allowed'
+			);
 			expect(first.headers.connection).not.toBe('close');
-			const second = await exchange(socket, rawRequest('POST', '/api/v1/states', JSON.stringify({ fluid: 'water', inputs: { T: 450, P: 1e6 } })));
+			const second = await exchange(
+				socket,
+				rawRequest(
+					'POST',
+					'/api/v1/states',
+					JSON.stringify({ fluid: 'water', inputs: { T: 450, P: 1e6 } })
+				)
+			);
 			expect(second.status).toBe(200);
 			expect(JSON.parse(second.body).state.phase).toBe('compressed-liquid');
 			const third = await exchange(socket, rawRequest('GET', '/api/v1/fluids'));

@@ -30,7 +30,17 @@ let log = '';
 async function start(): Promise<void> {
 	const child = spawn(process.execPath, ['build/index.js'], {
 		stdio: ['ignore', 'pipe', 'pipe'],
-		env: { ...process.env, NODE_ENV: 'test', PORT: String(PORT), HOST: '127.0.0.1', ORIGIN, DATABASE_PATH: DB_PATH, SEED_DEMO: '1', STATEWRIGHT_DEV_TOOLS: '0', SMTP_URL: '' }
+		env: {
+			...process.env,
+			NODE_ENV: 'test',
+			PORT: String(PORT),
+			HOST: '127.0.0.1',
+			ORIGIN,
+			DATABASE_PATH: DB_PATH,
+			SEED_DEMO: '1',
+			STATEWRIGHT_DEV_TOOLS: '0',
+			SMTP_URL: ''
+		}
 	});
 	child.stdout!.on('data', (d) => (log += d));
 	child.stderr!.on('data', (d) => (log += d));
@@ -44,7 +54,9 @@ async function start(): Promise<void> {
 			}
 		};
 		child.stdout!.on('data', onData);
-		child.once('exit', (code) => reject(new Error(`the server exited (${code}) before listening:\n${log.slice(-2000)}`)));
+		child.once('exit', (code) =>
+			reject(new Error(`the server exited (${code}) before listening:\n${log.slice(-2000)}`))
+		);
 	});
 	expect((await fetch(`${ORIGIN}/healthz`)).status).toBe(200);
 }
@@ -63,7 +75,9 @@ function integrity(): string {
 	// opened read-write like the server does, so a crash's WAL is recovered as on a restart
 	const db = new Database(DB_PATH);
 	try {
-		return (db.pragma('integrity_check') as Array<{ integrity_check: string }>).map((r) => r.integrity_check).join('; ');
+		return (db.pragma('integrity_check') as Array<{ integrity_check: string }>)
+			.map((r) => r.integrity_check)
+			.join('; ');
 	} finally {
 		db.close();
 	}
@@ -72,11 +86,27 @@ function integrity(): string {
 /** A session cookie from the sign-in form, then an owner token from the team settings form. */
 async function ownerToken(): Promise<string> {
 	const form = (o: Record<string, string>) => new URLSearchParams(o).toString();
-	const headers = { origin: ORIGIN, accept: 'text/html', 'content-type': 'application/x-www-form-urlencoded' };
-	const signin = await fetch(`${ORIGIN}/signin`, { method: 'POST', redirect: 'manual', headers, body: form({ email: DEMO.owner, password: DEMO_PASSWORD, next: '/' }) });
+	const headers = {
+		origin: ORIGIN,
+		accept: 'text/html',
+		'content-type': 'application/x-www-form-urlencoded'
+	};
+	const signin = await fetch(`${ORIGIN}/signin`, {
+		method: 'POST',
+		redirect: 'manual',
+		headers,
+		body: form({ email: DEMO.owner, password: DEMO_PASSWORD, next: '/' })
+	});
 	expect(signin.status).toBe(303);
-	const cookie = signin.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-	const made = await fetch(`${ORIGIN}/t/${TEAM}/settings?/createToken`, { method: 'POST', headers: { ...headers, cookie }, body: form({ name: 'durability probe', role: 'owner' }) });
+	const cookie = signin.headers
+		.getSetCookie()
+		.map((c) => c.split(';')[0])
+		.join('; ');
+	const made = await fetch(`${ORIGIN}/t/${TEAM}/settings?/createToken`, {
+		method: 'POST',
+		headers: { ...headers, cookie },
+		body: form({ name: 'durability probe', role: 'owner' })
+	});
 	expect(made.status).toBe(200);
 	const token = (await made.text()).match(/swt_[A-Za-z0-9_-]{43}/)?.[0];
 	expect(token).toBeTruthy();
@@ -100,9 +130,13 @@ test('revisions acknowledged before a SIGKILL survive it, and the file stays int
 			headers: { authorization: `Bearer ${token}`, 'content-type': 'application/json' },
 			body: init.body === undefined ? undefined : JSON.stringify(init.body)
 		});
-	const made = await api('/sheets', { method: 'POST', body: { example: 'vessel-v204-fire', title: 'Durability probe' } });
+	const made = await api('/sheets', {
+		method: 'POST',
+		body: { example: 'vessel-v204-fire', title: 'Durability probe' }
+	});
 	expect(made.status).toBe(201);
-	const sheet = ((await made.json()) as { sheet: { id: string; doc: Record<string, unknown> } }).sheet;
+	const sheet = ((await made.json()) as { sheet: { id: string; doc: Record<string, unknown> } })
+		.sheet;
 	const R = `/sheets/${sheet.id}/revisions`;
 
 	const acknowledged = new Map<number, string>();
@@ -110,7 +144,11 @@ test('revisions acknowledged before a SIGKILL survive it, and the file stays int
 	let serial = 0;
 	let inFlightCommitted = 0;
 	let raceRounds = 0;
-	const save = (message: string, base: number | null) => api(R, { method: 'POST', body: { message, baseRevision: base, doc: { ...sheet.doc, description: message } } });
+	const save = (message: string, base: number | null) =>
+		api(R, {
+			method: 'POST',
+			body: { message, baseRevision: base, doc: { ...sheet.doc, description: message } }
+		});
 	const record = async (res: Response, message: string) => {
 		expect(res.status, message).toBe(201);
 		const { revision } = (await res.json()) as { revision: { number: number; message: string } };
@@ -122,7 +160,9 @@ test('revisions acknowledged before a SIGKILL survive it, and the file stays int
 	const present = async () => {
 		const res = await api(R);
 		expect(res.status).toBe(200);
-		const { revisions } = (await res.json()) as { revisions: Array<{ number: number; message: string }> };
+		const { revisions } = (await res.json()) as {
+			revisions: Array<{ number: number; message: string }>;
+		};
 		const stored = new Map(revisions.map((r) => [r.number, r.message]));
 		const lost = [...acknowledged].filter(([n, m]) => stored.get(n) !== m);
 		return { lost, stored };

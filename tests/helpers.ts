@@ -1,6 +1,12 @@
 import { request as httpRequest } from 'node:http';
 import Database from 'better-sqlite3';
-import { expect, request as playwrightRequest, type APIRequestContext, type Browser, type Page } from '@playwright/test';
+import {
+	expect,
+	request as playwrightRequest,
+	type APIRequestContext,
+	type Browser,
+	type Page
+} from '@playwright/test';
 
 // The demo team seeded on the fresh e2e database (scripts/e2e-server.mjs sets SEED_DEMO=1).
 export const PORT = Number(process.env.E2E_PORT ?? 4317);
@@ -26,9 +32,16 @@ export function freshEmail(label: string): string {
 export const FORM = { origin: BASE, accept: 'text/html' };
 
 /** A request context signed in as `email` through the real sign-in form. */
-export async function signedInRequest(email: string, password = DEMO_PASSWORD): Promise<APIRequestContext> {
+export async function signedInRequest(
+	email: string,
+	password = DEMO_PASSWORD
+): Promise<APIRequestContext> {
 	const ctx = await playwrightRequest.newContext({ baseURL: BASE });
-	const res = await ctx.post('/signin', { form: { email, password, next: '/' }, headers: FORM, maxRedirects: 0 });
+	const res = await ctx.post('/signin', {
+		form: { email, password, next: '/' },
+		headers: FORM,
+		maxRedirects: 0
+	});
 	expect(res.status(), `sign in as ${email}`).toBe(303);
 	return ctx;
 }
@@ -37,21 +50,36 @@ export async function signedInRequest(email: string, password = DEMO_PASSWORD): 
  * Creates an account through the sign-up form and confirms it with the link mailed to it (which
  * signs it in); returns a request context signed in as it.
  */
-export async function signedUpRequest(name: string, email: string, password = 'a long e2e password'): Promise<APIRequestContext> {
+export async function signedUpRequest(
+	name: string,
+	email: string,
+	password = 'a long e2e password'
+): Promise<APIRequestContext> {
 	const ctx = await playwrightRequest.newContext({ baseURL: BASE });
 	const after = await lastMailId(email);
-	const res = await ctx.post('/signup', { form: { name, email, password, next: '/' }, headers: FORM, maxRedirects: 0 });
+	const res = await ctx.post('/signup', {
+		form: { name, email, password, next: '/' },
+		headers: FORM,
+		maxRedirects: 0
+	});
 	expect(res.status(), `sign up ${email}`).toBe(200);
 	expect(await res.text()).toContain('Check your mail');
 	const mail = await waitForMail(email, 'Confirm your e-mail address', after);
 	const confirmed = await ctx.get(linkIn(mail, `${BASE}/verify?token=`));
 	expect(confirmed.status(), `confirm ${email}`).toBe(200);
-	expect((await ctx.get('/account', { maxRedirects: 0 })).status(), `signed in as ${email}`).toBe(200);
+	expect((await ctx.get('/account', { maxRedirects: 0 })).status(), `signed in as ${email}`).toBe(
+		200
+	);
 	return ctx;
 }
 
 /** Signs up through the sign-up page in `page`, follows the confirmation link and lands on the home page, signed in. */
-export async function signUpPage(page: Page, name: string, email: string, password = 'a long enough password'): Promise<void> {
+export async function signUpPage(
+	page: Page,
+	name: string,
+	email: string,
+	password = 'a long enough password'
+): Promise<void> {
 	const after = await lastMailId(email);
 	await page.goto('/signup');
 	await page.getByLabel('Name').fill(name);
@@ -80,7 +108,10 @@ export interface Mail {
  */
 let caught: Database.Database | undefined;
 function caughtMail(): Database.Database {
-	caught ??= new Database(`tmp/e2e-${PORT}/statewright.db`, { readonly: true, fileMustExist: true });
+	caught ??= new Database(`tmp/e2e-${PORT}/statewright.db`, {
+		readonly: true,
+		fileMustExist: true
+	});
 	return caught;
 }
 
@@ -91,8 +122,18 @@ export function mailTo(to: string): Mail[] {
 			`select id, envelope_to, subject, text from outbox
 			 where exists (select 1 from json_each(outbox.envelope_to) where json_each.value = ?) order by id desc`
 		)
-		.all(to.trim().toLowerCase()) as Array<{ id: number; envelope_to: string; subject: string; text: string }>;
-	return rows.map((r) => ({ id: r.id, to: JSON.parse(r.envelope_to) as string[], subject: r.subject, text: r.text }));
+		.all(to.trim().toLowerCase()) as Array<{
+		id: number;
+		envelope_to: string;
+		subject: string;
+		text: string;
+	}>;
+	return rows.map((r) => ({
+		id: r.id,
+		to: JSON.parse(r.envelope_to) as string[],
+		subject: r.subject,
+		text: r.text
+	}));
 }
 
 /** The id of the newest caught mail to `to` (0 when none): pass it as `after` to wait for the next one. */
@@ -123,7 +164,16 @@ export async function waitForMail(to: string, subject?: string, after = 0): Prom
  * server on 127.0.0.1), so a test can be a second client address: the server sees `from` as the
  * client's address. Returns the status, headers and body, and the time until the full answer.
  */
-export function postFrom(from: string, path: string, form: Record<string, string>): Promise<{ status: number; headers: Record<string, string | string[] | undefined>; body: string; ms: number }> {
+export function postFrom(
+	from: string,
+	path: string,
+	form: Record<string, string>
+): Promise<{
+	status: number;
+	headers: Record<string, string | string[] | undefined>;
+	body: string;
+	ms: number;
+}> {
 	const body = new URLSearchParams(form).toString();
 	return new Promise((resolve, reject) => {
 		const start = performance.now();
@@ -132,12 +182,23 @@ export function postFrom(from: string, path: string, form: Record<string, string
 			{
 				method: 'POST',
 				localAddress: from,
-				headers: { ...FORM, 'content-type': 'application/x-www-form-urlencoded', 'content-length': Buffer.byteLength(body) }
+				headers: {
+					...FORM,
+					'content-type': 'application/x-www-form-urlencoded',
+					'content-length': Buffer.byteLength(body)
+				}
 			},
 			(res) => {
 				const chunks: Buffer[] = [];
 				res.on('data', (c: Buffer) => chunks.push(c));
-				res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks).toString('utf8'), ms: performance.now() - start }));
+				res.on('end', () =>
+					resolve({
+						status: res.statusCode ?? 0,
+						headers: res.headers,
+						body: Buffer.concat(chunks).toString('utf8'),
+						ms: performance.now() - start
+					})
+				);
 				res.on('error', reject);
 			}
 		);
@@ -149,11 +210,16 @@ export function postFrom(from: string, path: string, form: Record<string, string
 /** The first link in a mail that starts with `prefix` (e.g. `${BASE}/reset?token=`). */
 export function linkIn(mail: Mail, prefix: string): string {
 	const link = mail.text.match(/https?:\/\/\S+/g)?.find((u) => u.startsWith(prefix));
-	if (!link) throw new Error(`no link starting with ${prefix} in mail "${mail.subject}":\n${mail.text}`);
+	if (!link)
+		throw new Error(`no link starting with ${prefix} in mail "${mail.subject}":\n${mail.text}`);
 	return link;
 }
 
-export async function signInPage(page: Page, email: string, password = DEMO_PASSWORD): Promise<void> {
+export async function signInPage(
+	page: Page,
+	email: string,
+	password = DEMO_PASSWORD
+): Promise<void> {
 	await page.goto('/signin');
 	await page.getByLabel('E-mail').fill(email);
 	await page.getByLabel('Password').fill(password);
@@ -162,7 +228,11 @@ export async function signInPage(page: Page, email: string, password = DEMO_PASS
 }
 
 /** The id of a member row in team settings (the hidden id of its role form). */
-export async function memberId(ctx: APIRequestContext, team: string, email: string): Promise<string> {
+export async function memberId(
+	ctx: APIRequestContext,
+	team: string,
+	email: string
+): Promise<string> {
 	const html = await (await ctx.get(`/t/${team}/settings`)).text();
 	const row = html.split('<tr').find((r) => r.includes(`data-member="${email}"`));
 	const id = row?.match(/name="id" value="([a-z2-9]{16})"/)?.[1];
@@ -171,8 +241,16 @@ export async function memberId(ctx: APIRequestContext, team: string, email: stri
 }
 
 /** Creates an API token through team settings and returns the secret shown once. */
-export async function createToken(ctx: APIRequestContext, team: string, name: string, role: string): Promise<string> {
-	const res = await ctx.post(`/t/${team}/settings?/createToken`, { form: { name, role }, headers: FORM });
+export async function createToken(
+	ctx: APIRequestContext,
+	team: string,
+	name: string,
+	role: string
+): Promise<string> {
+	const res = await ctx.post(`/t/${team}/settings?/createToken`, {
+		form: { name, role },
+		headers: FORM
+	});
 	expect(res.status(), `create ${role} token`).toBe(200);
 	const token = (await res.text()).match(/swt_[A-Za-z0-9_-]{43}/)?.[0];
 	if (!token) throw new Error('no token in the page');
@@ -180,8 +258,15 @@ export async function createToken(ctx: APIRequestContext, team: string, name: st
 }
 
 /** A new browser context (downloads on, a desktop window) signed in as `email`; page errors are logged. */
-export async function signedInPage(browser: Browser, email: string, password = DEMO_PASSWORD): Promise<Page> {
-	const ctx = await browser.newContext({ acceptDownloads: true, viewport: { width: 1400, height: 900 } });
+export async function signedInPage(
+	browser: Browser,
+	email: string,
+	password = DEMO_PASSWORD
+): Promise<Page> {
+	const ctx = await browser.newContext({
+		acceptDownloads: true,
+		viewport: { width: 1400, height: 900 }
+	});
 	const page = await ctx.newPage();
 	page.on('pageerror', (e) => console.log(`[${email}] page error: ${e.message}`));
 	await page.goto('/signin');

@@ -2,7 +2,9 @@ import { expect, test, type Page } from '@playwright/test';
 import { BASE, DEMO, TEAM, signInPage } from './helpers';
 
 test.describe('new sheet form', () => {
-	test('a directly loaded new-sheet page keeps the title when the pressure unit changes, and creates the sheet', async ({ page }) => {
+	test('a directly loaded new-sheet page keeps the title when the pressure unit changes, and creates the sheet', async ({
+		page
+	}) => {
 		await signInPage(page, DEMO.designer);
 		await page.goto(`/t/${TEAM}/sheets/new`);
 		const title = page.getByLabel('Title');
@@ -20,7 +22,9 @@ test.describe('new sheet form', () => {
 	});
 });
 
-test('a closed cycle shows its last state beside its first on both charts, not over it', async ({ page }) => {
+test('a closed cycle shows its last state beside its first on both charts, not over it', async ({
+	page
+}) => {
 	await signInPage(page, DEMO.designer);
 	await page.goto(`/t/${TEAM}/sheets/new`);
 	await page.getByRole('button', { name: /Start a sheet from HP-410/ }).click();
@@ -28,18 +32,26 @@ test('a closed cycle shows its last state beside its first on both charts, not o
 	for (const kind of ['T-v', 'P-v']) {
 		const discs = page.locator(`[data-chart="${kind}"] g.swc-state`);
 		await expect(discs.filter({ hasText: /^S5$/ })).toHaveCount(1);
-		const box = async (label: string) => (await discs.filter({ hasText: new RegExp(`^${label}$`) }).locator('circle.swc-state-disc').boundingBox())!;
+		const box = async (label: string) =>
+			(await discs
+				.filter({ hasText: new RegExp(`^${label}$`) })
+				.locator('circle.swc-state-disc')
+				.boundingBox())!;
 		const [s1, s5] = [await box('S1'), await box('S5')];
 		// side by side: the discs do not overlap, and they sit at the same height
 		const apart = Math.abs(s1.x - s5.x) >= s1.width - 1 || Math.abs(s1.y - s5.y) >= s1.height - 1;
 		expect(apart, `${kind}: S1 at ${s1.x},${s1.y}, S5 at ${s5.x},${s5.y}`).toBe(true);
 		expect(Math.abs(s1.y - s5.y)).toBeLessThan(1);
 		// and a screen reader hears where it is
-		await expect(page.locator(`[data-chart="${kind}"] circle.swc-hit-state[aria-label^="State S5,"]`)).toHaveAttribute('aria-label', /the same point as S1, drawn beside it$/);
+		await expect(
+			page.locator(`[data-chart="${kind}"] circle.swc-hit-state[aria-label^="State S5,"]`)
+		).toHaveAttribute('aria-label', /the same point as S1, drawn beside it$/);
 	}
 });
 
-test('a sealed 50 L vessel started by fill level: 80 % liquid at 20 °C, kept as such over a reload and in the API', async ({ page }) => {
+test('a sealed 50 L vessel started by fill level: 80 % liquid at 20 °C, kept as such over a reload and in the API', async ({
+	page
+}) => {
 	await signInPage(page, DEMO.designer);
 	const title = `Fill V-50 ${Date.now().toString(36)}`;
 	await page.goto(`/t/${TEAM}/sheets/new`);
@@ -55,18 +67,26 @@ test('a sealed 50 L vessel started by fill level: 80 % liquid at 20 °C, kept as
 	await fill.getByLabel('Liquid fill, % of the volume').fill('80');
 	await fill.getByLabel('At a temperature or pressure').fill('20 °C');
 	await fill.getByRole('button', { name: 'Set S1 by fill level' }).click();
-	await expect(fill.getByTestId('start-fill-current')).toContainText('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
+	await expect(fill.getByTestId('start-fill-current')).toContainText(
+		'fill 80\u00a0% liquid by volume at 20.00\u00a0°C'
+	);
 	await page.getByRole('tab', { name: /States/ }).click();
-	await expect(page.getByTestId('start-fill')).toHaveText('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
+	await expect(page.getByTestId('start-fill')).toHaveText(
+		'fill 80\u00a0% liquid by volume at 20.00\u00a0°C'
+	);
 	await expect(page.getByTestId('phase-S1')).toContainText('saturated mixture');
 	await expect(page.getByTestId('phase-S1')).toContainText('liquid 80.00');
 	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved');
 	const url = page.url();
 	await page.reload();
-	await expect(page.getByTestId('start-fill')).toHaveText('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
+	await expect(page.getByTestId('start-fill')).toHaveText(
+		'fill 80\u00a0% liquid by volume at 20.00\u00a0°C'
+	);
 	const id = url.split('/').pop()!;
 	const res = await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`);
-	const { sheet } = (await res.json()) as { sheet: { doc: { startSpec: unknown; spec: { start: { T: number; v: number } } } } };
+	const { sheet } = (await res.json()) as {
+		sheet: { doc: { startSpec: unknown; spec: { start: { T: number; v: number } } } };
+	};
 	expect(sheet.doc.startSpec).toEqual({ kind: 'fill', fraction: 0.8, T: 293.15 });
 	// python3-iapws 1.5.2 (Debian): IAPWS95(T=293.15, x=0).rho = 998.16180134, x=1: 0.017314008205 → v = 1/(0.8 ρ′ + 0.2 ρ″)
 	expect(Math.abs(sheet.doc.spec.start.v / 0.0012522965492665402 - 1)).toBeLessThan(1e-6);
@@ -78,7 +98,9 @@ test('a sealed 50 L vessel started by fill level: 80 % liquid at 20 °C, kept as
 	await expect(page.getByTestId('phase-S1')).toContainText('saturated mixture');
 });
 
-test('40 °C typed in a pressure cell sets the saturation pressure at 40 °C, and the cell says so', async ({ page }) => {
+test('40 °C typed in a pressure cell sets the saturation pressure at 40 °C, and the cell says so', async ({
+	page
+}) => {
 	await signInPage(page, DEMO.designer);
 	await page.goto(`/t/${TEAM}/sheets/new`);
 	await page.getByLabel('Title').fill(`Psat typed ${Date.now().toString(36)}`);
@@ -90,11 +112,15 @@ test('40 °C typed in a pressure cell sets the saturation pressure at 40 °C, an
 	const p = page.locator('tr[data-label="S1"] [data-prop="P"]');
 	await p.fill('40 °C');
 	await p.press('Enter');
-	await expect(page.locator('tr[data-label="S1"] .cell-note')).toContainText('40.00\u00a0°C typed as a pressure: the saturation pressure at 40.00\u00a0°C');
+	await expect(page.locator('tr[data-label="S1"] .cell-note')).toContainText(
+		'40.00\u00a0°C typed as a pressure: the saturation pressure at 40.00\u00a0°C'
+	);
 	// S1 is now fixed by x and P = Psat(40 °C): its temperature reads 40.00 °C
 	await expect(page.locator('tr[data-label="S1"] [data-prop="T"]')).toHaveValue('40.00');
 	// python3-iapws 1.5.2 (Debian): IAPWS95(T=313.15, x=0).P = 7.384938 kPa
-	expect(Math.abs(Number((await p.inputValue()).replace(/\s.*$/, '')) / 7.384938 - 1)).toBeLessThan(2e-4);
+	expect(Math.abs(Number((await p.inputValue()).replace(/\s.*$/, '')) / 7.384938 - 1)).toBeLessThan(
+		2e-4
+	);
 	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved');
 });
 
@@ -103,47 +129,72 @@ function sealedVesselDoc() {
 		version: 1,
 		description: '',
 		startSpec: { kind: 'fill', fraction: 0.8, T: 293.15 },
-		spec: { fluid: 'water', system: { kind: 'closed', volume: 0.05 }, start: { T: 293.15, x: 0.5 }, legs: [{ id: 'Lheat01', process: 'isochoric', target: { T: 473.15 } }] },
-		units: { system: 'si', pressureUnit: 'MPa', pressureReference: 'absolute', usPower: 'Btu/h', atmosphere: 101325 },
+		spec: {
+			fluid: 'water',
+			system: { kind: 'closed', volume: 0.05 },
+			start: { T: 293.15, x: 0.5 },
+			legs: [{ id: 'Lheat01', process: 'isochoric', target: { T: 473.15 } }]
+		},
+		units: {
+			system: 'si',
+			pressureUnit: 'MPa',
+			pressureReference: 'absolute',
+			usPower: 'Btu/h',
+			atmosphere: 101325
+		},
 		chart: { view: 'both', pressureScale: 'log', isolines: false },
 		titleBlock: { project: '', equipment: '', tag: '', documentNumber: '', site: '' }
 	};
 }
 
 async function openSealedVessel(page: Page): Promise<string> {
-	const made = await page.request.post(`/api/v1/teams/${TEAM}/sheets`, { data: { title: `Heat-up ${Date.now().toString(36)}`, doc: sealedVesselDoc() } });
+	const made = await page.request.post(`/api/v1/teams/${TEAM}/sheets`, {
+		data: { title: `Heat-up ${Date.now().toString(36)}`, doc: sealedVesselDoc() }
+	});
 	expect(made.status(), await made.text()).toBe(201);
 	const id = ((await made.json()) as { sheet: { id: string } }).sheet.id;
 	await page.goto(`/t/${TEAM}/sheets/${id}`);
 	return id;
 }
 
-test('a sealed vessel heated shut in, "to saturation": the leg ends liquid-full at the liquid line', async ({ page }) => {
+test('a sealed vessel heated shut in, "to saturation": the leg ends liquid-full at the liquid line', async ({
+	page
+}) => {
 	await signInPage(page, DEMO.designer);
 	const id = await openSealedVessel(page);
 	await expect(page.getByTestId('start-fill')).toContainText('fill 80');
 	await page.getByRole('button', { name: 'End leg L1 on the saturation line' }).click();
-	await expect(page.getByTestId('leg-to-saturation')).toHaveText('to saturation (saturated liquid, x = 0)');
+	await expect(page.getByTestId('leg-to-saturation')).toHaveText(
+		'to saturation (saturated liquid, x = 0)'
+	);
 	await expect(page.getByTestId('phase-S2')).toContainText('saturated liquid');
 	// python3-iapws 1.5.2 (Debian): bisection on IAPWS95(T, x=0).rho = 1/v₁ → T = 523.393 K = 250.24 °C, P = 3.9925 MPa
 	await expect(page.locator('tr[data-label="S2"] [data-prop="T"]')).toHaveValue(/^250\.2[34]$/);
 	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved');
 	const res = await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`);
-	const { sheet } = (await res.json()) as { sheet: { doc: { spec: { legs: { to?: string; target: unknown }[] } } } };
+	const { sheet } = (await res.json()) as {
+		sheet: { doc: { spec: { legs: { to?: string; target: unknown }[] } } };
+	};
 	expect(sheet.doc.spec.legs[0]).toMatchObject({ to: 'saturation', target: { x: 0 } });
 	// typing another end makes it an ordinary leg again
 	const t2 = page.locator('tr[data-label="S2"] [data-prop="T"]');
 	await t2.fill('200 °C');
 	await t2.press('Enter');
 	await expect(page.getByTestId('leg-to-saturation')).toHaveCount(0);
-	await expect(page.getByRole('button', { name: 'End leg L1 on the saturation line' })).toBeVisible();
+	await expect(
+		page.getByRole('button', { name: 'End leg L1 on the saturation line' })
+	).toBeVisible();
 	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved');
-	const after = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json()) as { sheet: { doc: { spec: { legs: { to?: string; target: { T?: number } }[] } } } };
+	const after = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json()) as {
+		sheet: { doc: { spec: { legs: { to?: string; target: { T?: number } }[] } } };
+	};
 	expect(after.sheet.doc.spec.legs[0].to).toBeUndefined();
 	expect(after.sheet.doc.spec.legs[0].target.T).toBeCloseTo(473.15, 6);
 });
 
-test('logger readings on the saturation line are drawn across the dome (v open, said in the key); a malformed log names every problem', async ({ page }) => {
+test('logger readings on the saturation line are drawn across the dome (v open, said in the key); a malformed log names every problem', async ({
+	page
+}) => {
 	await signInPage(page, DEMO.designer);
 	await openSealedVessel(page);
 	await page.getByRole('tab', { name: /Traces/ }).click();
@@ -152,7 +203,9 @@ test('logger readings on the saturation line are drawn across the dome (v open, 
 	await panel.getByLabel(/Logger file/).setInputFiles({
 		name: 'heat-up.csv',
 		mimeType: 'text/csv',
-		buffer: Buffer.from('time [min],P [kPa a],T [°C]\n0,19.946,60\n10,101.418,100\n20,361.539,140\n30,1002.811,180\n')
+		buffer: Buffer.from(
+			'time [min],P [kPa a],T [°C]\n0,19.946,60\n10,101.418,100\n20,361.539,140\n30,1002.811,180\n'
+		)
 	});
 	await panel.getByRole('button', { name: 'Upload trace' }).click();
 	await expect(panel.getByTestId('trace-item')).toContainText('4 on the saturation line');
@@ -166,24 +219,42 @@ test('logger readings on the saturation line are drawn across the dome (v open, 
 			const [[, y1], [, y2]] = seg.split('L').map((p) => p.split(',').map(Number));
 			expect(Math.abs(y1 - y2), `${kind}: a band is level (one T or one P)`).toBeLessThan(0.2);
 		}
-		await expect(page.locator(`[data-chart="${kind}"] .swc-key-text`, { hasText: 'measured at saturation (v not fixed by P, T)' })).toHaveCount(1);
+		await expect(
+			page.locator(`[data-chart="${kind}"] .swc-key-text`, {
+				hasText: 'measured at saturation (v not fixed by P, T)'
+			})
+		).toHaveCount(1);
 	}
 
-	await panel.getByLabel(/Logger file/).setInputFiles({ name: 'broken.csv', mimeType: 'text/csv', buffer: Buffer.from('time,P [kPa],T [°C]\n0,100,20\n5,abc,21\n') });
+	await panel
+		.getByLabel(/Logger file/)
+		.setInputFiles({
+			name: 'broken.csv',
+			mimeType: 'text/csv',
+			buffer: Buffer.from('time,P [kPa],T [°C]\n0,100,20\n5,abc,21\n')
+		});
 	await panel.getByRole('button', { name: 'Upload trace' }).click();
 	const refusal = page.getByTestId('trace-refusal');
 	await expect(refusal).toContainText('The file has 3 problems; nothing was saved.');
 	await expect(refusal).toContainText('has no unit');
 	await expect(refusal).toContainText('absolute or gauge');
 	await expect(refusal).toContainText('line 3: "abc"');
-	const lines = await refusal.getByTestId('trace-rejected').locator('tbody tr td:first-child').allTextContents();
+	const lines = await refusal
+		.getByTestId('trace-rejected')
+		.locator('tbody tr td:first-child')
+		.allTextContents();
 	expect(lines.map(Number)).toEqual([1, 1, 3]);
 });
 
-test('Compare draws the older revision as its own band, keyed by its label, not as "measured"', async ({ page }) => {
+test('Compare draws the older revision as its own band, keyed by its label, not as "measured"', async ({
+	page
+}) => {
 	await signInPage(page, DEMO.designer);
 	const id = await openSealedVessel(page);
-	const rev = await page.request.post(`/api/v1/teams/${TEAM}/sheets/${id}/revisions`, { data: { message: 'First issue', baseRevision: null }, headers: { origin: BASE } });
+	const rev = await page.request.post(`/api/v1/teams/${TEAM}/sheets/${id}/revisions`, {
+		data: { message: 'First issue', baseRevision: null },
+		headers: { origin: BASE }
+	});
 	expect(rev.status(), await rev.text()).toBe(201);
 	await page.goto(`/t/${TEAM}/sheets/${id}/compare?a=1&b=draft`);
 	await expect(page.getByTestId('compare-page')).toBeVisible();
@@ -195,7 +266,9 @@ test('Compare draws the older revision as its own band, keyed by its label, not 
 	}
 });
 
-test('the new-sheet form takes a liquid fill with a temperature, and a temperature given for P as the saturation pressure', async ({ page }) => {
+test('the new-sheet form takes a liquid fill with a temperature, and a temperature given for P as the saturation pressure', async ({
+	page
+}) => {
 	await signInPage(page, DEMO.designer);
 	await page.goto(`/t/${TEAM}/sheets/new`);
 	await page.getByLabel('Title').fill(`Form fill ${Date.now().toString(36)}`);
@@ -205,7 +278,9 @@ test('the new-sheet form takes a liquid fill with a temperature, and a temperatu
 	await page.locator('#f-propB').selectOption('T');
 	await page.locator('#f-valueB').fill('20 °C');
 	await page.getByRole('button', { name: 'Create sheet' }).click();
-	await expect(page.getByTestId('start-fill')).toHaveText('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
+	await expect(page.getByTestId('start-fill')).toHaveText(
+		'fill 80\u00a0% liquid by volume at 20.00\u00a0°C'
+	);
 
 	await page.goto(`/t/${TEAM}/sheets/new`);
 	await page.getByLabel('Title').fill(`Form Psat ${Date.now().toString(36)}`);
@@ -227,6 +302,8 @@ test('the new-sheet form takes a liquid fill with a temperature, and a temperatu
 	await page.locator('#f-propB').selectOption('h');
 	await page.locator('#f-valueB').fill('100 kJ/kg');
 	await page.getByRole('button', { name: 'Create sheet' }).click();
-	await expect(page.locator('.field-error')).toContainText('A liquid fill goes with a temperature or a pressure');
+	await expect(page.locator('.field-error')).toContainText(
+		'A liquid fill goes with a temperature or a pressure'
+	);
 	await expect(page).toHaveURL(/\/sheets\/new/);
 });

@@ -47,7 +47,10 @@ test.describe('on a 390 px phone', () => {
 	// the settings page as a team in use has it: a pending invitation and an API token with long names
 	test.beforeAll(async () => {
 		const owner = await signedInRequest(DEMO.owner);
-		const invite = await owner.post(`/t/${TEAM}/settings?/invite`, { form: { email: freshEmail('a-rather-long-colleague-address-for-the-phone'), role: 'checker' }, headers: FORM });
+		const invite = await owner.post(`/t/${TEAM}/settings?/invite`, {
+			form: { email: freshEmail('a-rather-long-colleague-address-for-the-phone'), role: 'checker' },
+			headers: FORM
+		});
 		expect(invite.status(), 'invitation sent').toBe(200);
 		await createToken(owner, TEAM, 'nightly memo export for the plant historian', 'viewer');
 		await owner.dispose();
@@ -81,7 +84,11 @@ test.describe('on a 390 px phone', () => {
 			// the sheet: the state table's s and x columns, and the Setup tab
 			await page.goto(`/t/${TEAM}/sheets/${draft.id}`);
 			await fits(page, `${role}: sheet`);
-			for (const col of ['s', 'x']) await pressable(page.locator(`[data-testid="state-table"] th[data-col="${col}"]`), `${role}: state table column ${col}`);
+			for (const col of ['s', 'x'])
+				await pressable(
+					page.locator(`[data-testid="state-table"] th[data-col="${col}"]`),
+					`${role}: state table column ${col}`
+				);
 			const setup = page.getByRole('tab', { name: /Setup/ });
 			await pressable(setup, `${role}: Setup tab`);
 			await setup.click();
@@ -100,8 +107,14 @@ test.describe('on a 390 px phone', () => {
 				await pressable(row.getByLabel(/^Role of/), 'owner: role of the checker');
 				await pressable(row.getByRole('button', { name: 'Set' }), 'owner: Set role');
 				await pressable(row.getByRole('button', { name: /Remove/ }), 'owner: Remove member');
-				await pressable(page.getByTestId('invites').getByRole('button', { name: 'Withdraw' }).first(), 'owner: Withdraw an invitation');
-				await pressable(page.getByTestId('tokens').getByRole('button', { name: 'Revoke' }).first(), 'owner: Revoke a token');
+				await pressable(
+					page.getByTestId('invites').getByRole('button', { name: 'Withdraw' }).first(),
+					'owner: Withdraw an invitation'
+				);
+				await pressable(
+					page.getByTestId('tokens').getByRole('button', { name: 'Revoke' }).first(),
+					'owner: Revoke a token'
+				);
 			}
 		});
 	}
@@ -120,7 +133,9 @@ test.describe('on a 390 px phone', () => {
 });
 
 test.describe('sheet screen details', () => {
-	test('a viewer’s Setup: fields that cannot change look unlike the two that can', async ({ page }) => {
+	test('a viewer’s Setup: fields that cannot change look unlike the two that can', async ({
+		page
+	}) => {
 		await signInPage(page, DEMO.viewer);
 		const s = await sheets(page);
 		await page.goto(`/t/${TEAM}/sheets/${s['V-204'].id}`);
@@ -129,7 +144,11 @@ test.describe('sheet screen details', () => {
 		const units = page.locator('#setup-system-units');
 		await expect(fluid).toBeDisabled();
 		await expect(units).toBeEnabled();
-		const look = (l: Locator) => l.evaluate((e) => ({ border: getComputedStyle(e).borderTopStyle, background: getComputedStyle(e).backgroundColor }));
+		const look = (l: Locator) =>
+			l.evaluate((e) => ({
+				border: getComputedStyle(e).borderTopStyle,
+				background: getComputedStyle(e).backgroundColor
+			}));
 		const [fixed, live] = [await look(fluid), await look(units)];
 		expect(fixed.border).toBe('dashed');
 		expect(live.border).toBe('solid');
@@ -152,7 +171,9 @@ test.describe('sheet screen details', () => {
 	});
 
 	for (const width of [1440, 390]) {
-		test(`nothing is cut short at ${width} px: Setup selects, header fields, heat and work, a cell's message`, async ({ page }) => {
+		test(`nothing is cut short at ${width} px: Setup selects, header fields, heat and work, a cell's message`, async ({
+			page
+		}) => {
 			await page.setViewportSize({ width, height: 900 });
 			await signInPage(page, DEMO.designer);
 			const s = await sheets(page);
@@ -168,7 +189,9 @@ test.describe('sheet screen details', () => {
 			const pairs = page.locator('[data-testid="state-table"] .pair');
 			expect(await pairs.count()).toBeGreaterThan(0);
 			for (const pair of await pairs.all()) {
-				const tops = await pair.evaluate((e) => [...e.children].map((c) => Math.round(c.getBoundingClientRect().top)));
+				const tops = await pair.evaluate((e) =>
+					[...e.children].map((c) => Math.round(c.getBoundingClientRect().top))
+				);
 				expect(new Set(tops).size, `pair ${await pair.innerText()}`).toBe(1);
 			}
 
@@ -178,7 +201,10 @@ test.describe('sheet screen details', () => {
 			await t.press('Enter');
 			const alert = page.locator('[data-testid="state-table"] .cell-error');
 			await expect(alert).toContainText('absolute zero');
-			const [a, wrap] = [(await alert.boundingBox())!, (await page.getByTestId('state-table').boundingBox())!];
+			const [a, wrap] = [
+				(await alert.boundingBox())!,
+				(await page.getByTestId('state-table').boundingBox())!
+			];
 			expect(a.x).toBeGreaterThanOrEqual(wrap.x - 0.5);
 			expect(a.x + a.width).toBeLessThanOrEqual(Math.min(wrap.x + wrap.width, width) + 0.5);
 			await t.press('Escape');

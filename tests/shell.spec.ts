@@ -28,7 +28,9 @@ test.describe('the shell', () => {
 		await page.getByTestId('team-list').getByRole('link').first().click();
 		await page.getByRole('searchbox', { name: 'Search sheets' }).fill('R-310');
 		await page.getByRole('button', { name: 'Search' }).click();
-		await expect(page.getByTestId('sheet-list')).toContainText('R-310 ammonia receiver on a hot day');
+		await expect(page.getByTestId('sheet-list')).toContainText(
+			'R-310 ammonia receiver on a hot day'
+		);
 	});
 
 	test('a new user starts a team and becomes its owner', async ({ page }) => {
@@ -57,7 +59,9 @@ test.describe('the shell', () => {
 		await expect(page.locator('html')).toHaveAttribute('data-theme', 'light');
 		await page.getByTestId('theme-toggle').click();
 		await expect(page.locator('html')).toHaveAttribute('data-theme', 'dark');
-		const bg = await page.evaluate(() => getComputedStyle(document.documentElement).backgroundColor);
+		const bg = await page.evaluate(
+			() => getComputedStyle(document.documentElement).backgroundColor
+		);
 		expect(bg).toBe('rgb(26, 32, 39)');
 		await page.reload();
 		await expect(page.locator('html')).toHaveAttribute('data-theme', 'dark');
@@ -65,7 +69,10 @@ test.describe('the shell', () => {
 
 	test('numbers are set in JetBrains Mono', async ({ page }) => {
 		await signInPage(page, DEMO.owner);
-		const family = await page.locator('.num').first().evaluate((el) => getComputedStyle(el).fontFamily);
+		const family = await page
+			.locator('.num')
+			.first()
+			.evaluate((el) => getComputedStyle(el).fontFamily);
 		expect(family).toContain('JetBrains Mono');
 		expect(await page.evaluate(() => document.fonts.check('12px "JetBrains Mono"'))).toBe(true);
 	});
@@ -100,7 +107,10 @@ test.describe('the shell', () => {
 		}
 	});
 
-	test('the outbox is each signed-in person\'s own mailbox, whatever their role', async ({ browser, page }) => {
+	test("the outbox is each signed-in person's own mailbox, whatever their role", async ({
+		browser,
+		page
+	}) => {
 		await page.goto('/dev/outbox');
 		await expect(page).toHaveURL(/\/signin\?next=%2Fdev%2Foutbox$/);
 		for (const who of ['viewer', 'owner'] as const) {

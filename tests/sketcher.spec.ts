@@ -4,7 +4,11 @@ import { readFileSync } from 'node:fs';
 
 // python3-iapws 1.5.2 (Debian), IAPWS95, direct calls: tests/reference/make-iapws-sketcher.py
 const reference = JSON.parse(readFileSync('tests/reference/iapws-sketcher.json', 'utf8')) as {
-	isochore: { v: number; points: { T: number; P: number; x: number | null }[]; saturatedVapor: { T: number; P: number } };
+	isochore: {
+		v: number;
+		points: { T: number; P: number; x: number | null }[];
+		saturatedVapor: { T: number; P: number };
+	};
 	vesselV204: { at523_15: { T: number; P: number } };
 };
 
@@ -22,17 +26,36 @@ async function chartGeometry(page: Page, kind: 'T-v' | 'P-v') {
 	const chart = page.locator(`[data-chart="${kind}"]`);
 	const drawing = chart.locator('svg.swc-drawing');
 	const box = (await drawing.boundingBox())!;
-	const ticks = await drawing.locator('text.yl').evaluateAll((els) =>
-		els.map((e) => ({ value: Number((e.textContent ?? '').replace('−', '-')), y: Number(e.getAttribute('y')) })).filter((t) => Number.isFinite(t.value))
-	);
+	const ticks = await drawing
+		.locator('text.yl')
+		.evaluateAll((els) =>
+			els
+				.map((e) => ({
+					value: Number((e.textContent ?? '').replace('−', '-')),
+					y: Number(e.getAttribute('y'))
+				}))
+				.filter((t) => Number.isFinite(t.value))
+		);
 	expect(ticks.length).toBeGreaterThan(1);
 	const [a, b] = [ticks[0], ticks[ticks.length - 1]];
 	const slope = (b.y - a.y) / (b.value - a.value);
-	const states = await chart.locator('circle.swc-hit-state').evaluateAll((els) => els.map((e) => ({ x: Number(e.getAttribute('cx')), y: Number(e.getAttribute('cy')), label: e.getAttribute('aria-label') ?? '' })));
+	const states = await chart
+		.locator('circle.swc-hit-state')
+		.evaluateAll((els) =>
+			els.map((e) => ({
+				x: Number(e.getAttribute('cx')),
+				y: Number(e.getAttribute('cy')),
+				label: e.getAttribute('aria-label') ?? ''
+			}))
+		);
 	return {
 		/** page y of a temperature (°C on an SI sheet) */
 		yOf: (value: number) => box.y + a.y + (value - a.value) * slope,
-		state: (i: number) => ({ x: box.x + states[i].x, y: box.y + states[i].y, label: states[i].label }),
+		state: (i: number) => ({
+			x: box.x + states[i].x,
+			y: box.y + states[i].y,
+			label: states[i].label
+		}),
 		count: states.length
 	};
 }
@@ -61,7 +84,9 @@ async function cellText(page: Page, state: string, prop: string): Promise<string
 const num = (t: string) => Number(t.replace('−', '-').replace(/\s.*$/, ''));
 
 async function waitSaved(page: Page) {
-	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved', { timeout: 20_000 });
+	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved', {
+		timeout: 20_000
+	});
 }
 
 async function newBlankWaterSheet(page: Page, title: string) {
@@ -81,7 +106,9 @@ async function newBlankWaterSheet(page: Page, title: string) {
 }
 
 test.describe('the sketcher', () => {
-	test('designer: draw an isochoric leg from a wet state, drag it across the saturated-vapor line, type, undo, reload', async ({ page }) => {
+	test('designer: draw an isochoric leg from a wet state, drag it across the saturated-vapor line, type, undo, reload', async ({
+		page
+	}) => {
 		await signInPage(page, DEMO.designer);
 		const title = `Isochoric heating ${stamp()}`;
 		await newBlankWaterSheet(page, title);
@@ -106,7 +133,8 @@ test.describe('the sketcher', () => {
 		await page.mouse.move(s2.x, s2.y);
 		await page.mouse.down();
 		const target = g.yOf(180);
-		for (let i = 1; i <= 12; i++) await page.mouse.move(s2.x + 1, s2.y + ((target - s2.y) * i) / 12, { steps: 2 });
+		for (let i = 1; i <= 12; i++)
+			await page.mouse.move(s2.x + 1, s2.y + ((target - s2.y) * i) / 12, { steps: 2 });
 		await page.mouse.up();
 		await expect(page.getByTestId('phase-S2')).toContainText('superheated vapor');
 		await waitSaved(page);
@@ -118,7 +146,9 @@ test.describe('the sketcher', () => {
 		expect(leg.process).toBe('isochoric');
 		const tEnd = leg.target.T as number;
 		expect(tEnd - 273.15).toBeGreaterThan(reference.isochore.saturatedVapor.T - 273.15);
-		const res = await api.post('/api/v1/states', { data: { fluid: 'water', inputs: { T: tEnd, v: 0.5 } } });
+		const res = await api.post('/api/v1/states', {
+			data: { fluid: 'water', inputs: { T: tEnd, v: 0.5 } }
+		});
 		expect(res.status()).toBe(200);
 		const { state } = await res.json();
 		expect(state.phase).toBe('superheated-vapor');
@@ -170,11 +200,14 @@ test.describe('the sketcher', () => {
 		const s2 = g.state(1);
 		await page.mouse.move(s2.x, s2.y);
 		await page.mouse.down();
-		for (let i = 1; i <= 10; i++) await page.mouse.move(s2.x, s2.y + ((g.yOf(200) - s2.y) * i) / 10);
+		for (let i = 1; i <= 10; i++)
+			await page.mouse.move(s2.x, s2.y + ((g.yOf(200) - s2.y) * i) / 10);
 		await page.mouse.up();
 		await expect(page.getByTestId('phase-S2')).toContainText('superheated vapor');
 		// the drag's end is computed and saved before its value is read (not a preview on the way)
-		await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved', { timeout: 20_000 });
+		await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved', {
+			timeout: 20_000
+		});
 		const second = await cellText(page, 'S2', 'T');
 		await page.locator('body').click({ position: { x: 5, y: 300 } });
 		await page.keyboard.press('Control+z');
@@ -197,7 +230,9 @@ test.describe('the sketcher', () => {
 		await expect(page.locator('tr[data-label="S2"]')).toHaveCount(1);
 	});
 
-	test('the start moves freely: dragged on P–v it is fixed by the pointer’s P and v', async ({ page }) => {
+	test('the start moves freely: dragged on P–v it is fixed by the pointer’s P and v', async ({
+		page
+	}) => {
 		await signInPage(page, DEMO.designer);
 		await newBlankWaterSheet(page, `Free start ${stamp()}`);
 		const id = page.url().split('/').pop()!;
@@ -214,21 +249,31 @@ test.describe('the sketcher', () => {
 		await page.mouse.up();
 		await expect.poll(() => cellText(page, 'S1', 'P')).not.toBe(before);
 		await waitSaved(page);
-		const sheet = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json()).sheet;
+		const sheet = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json())
+			.sheet;
 		expect(Object.keys(sheet.doc.spec.start).sort()).toEqual(['P', 'v']);
 		expect(sheet.doc.spec.start.v).toBeGreaterThan(0.5);
 		// the table's S1 shows what the API gives for that start
-		const { state } = await (await page.request.post('/api/v1/states', { data: { fluid: 'water', inputs: sheet.doc.spec.start } })).json();
-		expect(Math.abs(num(await cellText(page, 'S1', 'P')) * 1e3 / state.P - 1)).toBeLessThan(2e-4);
+		const { state } = await (
+			await page.request.post('/api/v1/states', {
+				data: { fluid: 'water', inputs: sheet.doc.spec.start }
+			})
+		).json();
+		expect(Math.abs((num(await cellText(page, 'S1', 'P')) * 1e3) / state.P - 1)).toBeLessThan(2e-4);
 		await expect(page.getByTestId('phase-S1')).toContainText(state.phase.replace('-', ' '));
 	});
 
-	test('a checker reads the sheet but cannot drag or type, and the server refuses a draft save (403)', async ({ page }) => {
+	test('a checker reads the sheet but cannot drag or type, and the server refuses a draft save (403)', async ({
+		page
+	}) => {
 		await signInPage(page, DEMO.checker);
 		await page.goto(`/t/${TEAM}`);
 		await page.getByRole('link', { name: /V-204/ }).first().click();
 		await expect(page.getByTestId('sheet-screen')).toHaveAttribute('data-can-edit', 'false');
-		await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'read-only');
+		await expect(page.locator('[data-save-status]')).toHaveAttribute(
+			'data-save-status',
+			'read-only'
+		);
 		await expect(page.getByTestId('add-leg')).toHaveCount(0);
 		await expect(page.getByRole('button', { name: /Undo/ })).toHaveCount(0);
 		await expect(cell(page, 'S2', 'T')).toHaveJSProperty('tagName', 'TD');
@@ -246,8 +291,11 @@ test.describe('the sketcher', () => {
 		expect(await cellText(page, 'S2', 'T')).toBe(before);
 		// the server refuses the checker's save, whatever the page shows
 		const id = page.url().split('/').pop()!;
-		const sheet = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json()).sheet;
-		const put = await page.request.put(`/api/v1/teams/${TEAM}/sheets/${id}/draft`, { data: { version: sheet.version, doc: sheet.doc } });
+		const sheet = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json())
+			.sheet;
+		const put = await page.request.put(`/api/v1/teams/${TEAM}/sheets/${id}/draft`, {
+			data: { version: sheet.version, doc: sheet.doc }
+		});
 		expect(put.status()).toBe(403);
 		expect((await put.json()).error.code).toBe('forbidden');
 	});
@@ -274,7 +322,12 @@ test.describe('the sketcher', () => {
 		await expect(list).toContainText('No sheet matches');
 		// recent sheets on the signed-in home: newest first, as on the team page, at most eight
 		await page.goto(`/t/${TEAM}`);
-		const newest = (await page.getByTestId('sheet-list').locator('tbody tr').first().locator('a').textContent())!.trim();
+		const newest = (await page
+			.getByTestId('sheet-list')
+			.locator('tbody tr')
+			.first()
+			.locator('a')
+			.textContent())!.trim();
 		await page.goto('/');
 		const recent = page.getByTestId('recent-sheets').locator('tbody tr');
 		await expect(recent.first()).toContainText(newest);
@@ -285,24 +338,36 @@ test.describe('the sketcher', () => {
 		await signInPage(page, DEMO.designer);
 		await page.goto(`/t/${TEAM}/sheets/new`);
 		await page.getByRole('button', { name: /Start a sheet from V-204/ }).click();
-		await expect(page.getByTestId('sheet-title')).toHaveText('V-204 sealed expansion vessel in a fire case');
+		await expect(page.getByTestId('sheet-title')).toHaveText(
+			'V-204 sealed expansion vessel in a fire case'
+		);
 		const warnings = page.getByTestId('warnings');
 		await expect(warnings).toContainText('Design exploration, not a design approval');
 		await expect(warnings).toContainText('ASME BPVC Section VIII');
-		await expect(warnings.locator('[data-code="liquid-full"]')).toContainText('Heating a liquid-full sealed vessel raises its pressure very fast');
-		await expect(warnings.locator('[data-code="limit-designPressure"]')).toContainText('design pressure');
+		await expect(warnings.locator('[data-code="liquid-full"]')).toContainText(
+			'Heating a liquid-full sealed vessel raises its pressure very fast'
+		);
+		await expect(warnings.locator('[data-code="limit-designPressure"]')).toContainText(
+			'design pressure'
+		);
 		await expect(page.getByTestId('phase-S2')).toContainText('compressed liquid');
 		// python3-iapws 1.5.2 (Debian): IAPWS95(T=523.15, rho=800).P = 4.9265 MPa
-		expect(Math.abs(num(await cellText(page, 'S2', 'P')) * 1e6 / reference.vesselV204.at523_15.P - 1)).toBeLessThan(1e-4);
+		expect(
+			Math.abs((num(await cellText(page, 'S2', 'P')) * 1e6) / reference.vesselV204.at523_15.P - 1)
+		).toBeLessThan(1e-4);
 		// both charts, with the design limits drawn and labelled
 		await expect(page.locator('[data-chart="T-v"] .swc-limit-label')).toHaveCount(3);
 		await expect(page.locator('[data-chart="P-v"] .swc-limit-label')).toHaveCount(3);
 	});
 
-	test('a designer deletes a sheet they started from its Setup tab; an approved sheet says why it stays', async ({ page }) => {
+	test('a designer deletes a sheet they started from its Setup tab; an approved sheet says why it stays', async ({
+		page
+	}) => {
 		await signInPage(page, DEMO.designer);
 		const title = `Scratch R-310 ${Date.now().toString(36)}`;
-		const made = await page.request.post(`/api/v1/teams/${TEAM}/sheets`, { data: { example: 'receiver-r310-hot-day', title } });
+		const made = await page.request.post(`/api/v1/teams/${TEAM}/sheets`, {
+			data: { example: 'receiver-r310-hot-day', title }
+		});
 		expect(made.status(), await made.text()).toBe(201);
 		const id = ((await made.json()) as { sheet: { id: string } }).sheet.id;
 		await page.goto(`/t/${TEAM}/sheets/${id}`);
@@ -318,14 +383,20 @@ test.describe('the sketcher', () => {
 		await expect(page.locator('[data-notice="ok"]')).toContainText(`Sheet “${title}” was deleted.`);
 		expect((await page.request.get(`/t/${TEAM}/sheets/${id}`)).status()).toBe(404);
 		// the seeded K-101 holds an approved revision: the designer reads why it cannot be deleted
-		const k101 = ((await (await page.request.get(`/api/v1/teams/${TEAM}/sheets?q=K-101`)).json()) as { sheets: Array<{ id: string }> }).sheets[0];
+		const k101 = (
+			(await (await page.request.get(`/api/v1/teams/${TEAM}/sheets?q=K-101`)).json()) as {
+				sheets: Array<{ id: string }>;
+			}
+		).sheets[0];
 		await page.goto(`/t/${TEAM}/sheets/${k101.id}`);
 		await page.getByRole('tab', { name: /Setup/ }).click();
 		await expect(page.getByTestId('sheet-delete-reason')).toContainText('approved');
 		await expect(page.getByTestId('sheet-delete-start')).toHaveCount(0);
 	});
 
-	test('two windows: the second save is refused with 409, said on screen, and offered compare, load or keep', async ({ browser }) => {
+	test('two windows: the second save is refused with 409, said on screen, and offered compare, load or keep', async ({
+		browser
+	}) => {
 		const ctx = await browser.newContext();
 		const a = await ctx.newPage();
 		await signInPage(a, DEMO.designer);
@@ -362,16 +433,27 @@ test.describe('the sketcher', () => {
 		await ctx.close();
 	});
 
-	test('offline: edits are kept in the browser, the screen says so, and they are saved when the connection returns', async ({ page, context }) => {
+	test('offline: edits are kept in the browser, the screen says so, and they are saved when the connection returns', async ({
+		page,
+		context
+	}) => {
 		await signInPage(page, DEMO.designer);
 		await newBlankWaterSheet(page, `Offline ${stamp()}`);
 		await page.getByRole('tab', { name: 'Setup' }).click();
 		await context.setOffline(true);
 		await page.getByTestId('tb-project').fill('Offline edit');
 		await page.getByTestId('tb-project').press('Tab');
-		await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'offline', { timeout: 20_000 });
+		await expect(page.locator('[data-save-status]')).toHaveAttribute(
+			'data-save-status',
+			'offline',
+			{ timeout: 20_000 }
+		);
 		await expect(page.locator('[data-save-status]')).toContainText('kept in this browser');
-		const local = await page.evaluate(() => Object.keys(localStorage).filter((k) => k.startsWith('sw:draft:')).map((k) => JSON.parse(localStorage.getItem(k)!).doc.titleBlock.project));
+		const local = await page.evaluate(() =>
+			Object.keys(localStorage)
+				.filter((k) => k.startsWith('sw:draft:'))
+				.map((k) => JSON.parse(localStorage.getItem(k)!).doc.titleBlock.project)
+		);
 		expect(local).toContain('Offline edit');
 		await context.setOffline(false);
 		await waitSaved(page);
@@ -385,20 +467,29 @@ test.describe('the sketcher', () => {
 		await newBlankWaterSheet(page, `Replay ${stamp()}`);
 		const id = page.url().split('/').pop()!;
 		// as if the window closed before autosave ran: the local copy holds an edit the server lacks
-		const sheet = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json()).sheet;
+		const sheet = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json())
+			.sheet;
 		const doc = { ...sheet.doc, titleBlock: { ...sheet.doc.titleBlock, tag: 'R-99' } };
-		await page.evaluate(([k, v]) => localStorage.setItem(k, v), [`sw:draft:${id}`, JSON.stringify({ doc, baseVersion: sheet.version, changedAt: Date.now() })]);
+		await page.evaluate(
+			([k, v]) => localStorage.setItem(k, v),
+			[`sw:draft:${id}`, JSON.stringify({ doc, baseVersion: sheet.version, changedAt: Date.now() })]
+		);
 		await page.reload();
-		await expect(page.getByRole('status').filter({ hasText: 'Restored edits kept in this browser' })).toBeVisible();
+		await expect(
+			page.getByRole('status').filter({ hasText: 'Restored edits kept in this browser' })
+		).toBeVisible();
 		await waitSaved(page);
-		const after = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json()).sheet;
+		const after = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json())
+			.sheet;
 		expect(after.doc.titleBlock.tag).toBe('R-99');
 		expect(after.version).toBe(sheet.version + 1);
 	});
 });
 
 test.describe('sheet pages refuse what they should', () => {
-	test('the new-sheet form says what is wrong beside the field and creates nothing', async ({ page }) => {
+	test('the new-sheet form says what is wrong beside the field and creates nothing', async ({
+		page
+	}) => {
 		await signInPage(page, DEMO.designer);
 		await page.goto(`/t/${TEAM}/sheets/new`);
 		const title = `Refused ${stamp()}`;

@@ -9,7 +9,8 @@ export const PRESSURE_EQUIPMENT_CAUTION =
 	'engineer. Statewright supplies states and warnings, never relief sizes.';
 
 /** Said with every liquid-full warning, whether the leg crosses into liquid or starts liquid-full. */
-export const LIQUID_FULL_CAUTION = 'Heating a liquid-full sealed vessel raises its pressure very fast.';
+export const LIQUID_FULL_CAUTION =
+	'Heating a liquid-full sealed vessel raises its pressure very fast.';
 
 /** The heading the pressure-equipment caution goes under, on the screen and in every export. */
 export const CAUTION_TITLE = 'Design exploration, not a design approval';

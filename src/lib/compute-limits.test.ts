@@ -1,10 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import { SAMPLES_DEFAULT, SAMPLES_MIN } from './thermo';
 import { MAX_SHEET_LEGS } from './sheets/doc';
-import { API_PATH_POINTS_MAX, DEFAULT_LEG_POINTS, fitPathPoints, MIN_LEG_POINTS, pathPoints } from './compute-limits';
+import {
+	API_PATH_POINTS_MAX,
+	DEFAULT_LEG_POINTS,
+	fitPathPoints,
+	MIN_LEG_POINTS,
+	pathPoints
+} from './compute-limits';
 import { pathRequestSchema } from './server/compute/schemas';
 
-const leg = (samples?: number) => ({ process: 'isobaric', target: { T: 400 }, ...(samples ? { samples } : {}) });
+const leg = (samples?: number) => ({
+	process: 'isobaric',
+	target: { T: 400 },
+	...(samples ? { samples } : {})
+});
 
 describe('compute work caps shared with the browser', () => {
 	it('agree with the engine on default and least points per leg', () => {
@@ -22,7 +32,13 @@ describe('compute work caps shared with the browser', () => {
 	});
 
 	it('thin a sheet that asks for more than the cap to one sample count that fits, and leave the rest alone', () => {
-		const heavy = { fluid: 'water', system: { kind: 'closed', mass: 1 }, start: { T: 400, P: 1e5 }, samples: 200, legs: Array.from({ length: 50 }, (_, i) => leg(i === 0 ? 1000 : undefined)) };
+		const heavy = {
+			fluid: 'water',
+			system: { kind: 'closed', mass: 1 },
+			start: { T: 400, P: 1e5 },
+			samples: 200,
+			legs: Array.from({ length: 50 }, (_, i) => leg(i === 0 ? 1000 : undefined))
+		};
 		expect(pathRequestSchema.safeParse(heavy).success).toBe(false);
 		const fitted = fitPathPoints(heavy);
 		expect(fitted.samples).toBe(80);

@@ -62,7 +62,8 @@ describe('fluid picker search', () => {
 		expect(notCarried('CO2')).toBeNull();
 		expect(notCarried('propane')).toBeNull();
 		// none of them is a carried fluid's name
-		for (const q of ['air', 'he']) expect(searchFluids(fluids, q).some((f) => normalize(f.name) === q)).toBe(false);
+		for (const q of ['air', 'he'])
+			expect(searchFluids(fluids, q).some((f) => normalize(f.name) === q)).toBe(false);
 	});
 
 	it('ranks an exact formula above one that merely contains it', () => {
@@ -76,7 +77,12 @@ describe('fluid picker groups', () => {
 	it('groups every fluid by use, in the engine’s group order', () => {
 		expect(PICKER_GROUPS).toEqual(FLUID_GROUPS);
 		const groups = groupFluids(fluids);
-		expect(groups.map((g) => g.label)).toEqual(['Water and steam', 'Refrigerants', 'Hydrocarbons', 'Cryogens and gases']);
+		expect(groups.map((g) => g.label)).toEqual([
+			'Water and steam',
+			'Refrigerants',
+			'Hydrocarbons',
+			'Cryogens and gases'
+		]);
 		expect(groups.flatMap((g) => g.fluids).length).toBe(fluids.length);
 		const of = (id: string) => groups.find((g) => g.fluids.some((f) => f.id === id))?.id;
 		expect(of('water')).toBe('water');

@@ -53,8 +53,13 @@ export function searchFluids<F extends PickableFluid>(fluids: F[], query: string
 }
 
 /** Fluids by group, groups in display order, empty groups left out; each group keeps the given order. */
-export function groupFluids<F extends PickableFluid>(fluids: F[]): { id: PickableFluid['group']; label: string; fluids: F[] }[] {
-	return PICKER_GROUPS.map((g) => ({ ...g, fluids: fluids.filter((f) => f.group === g.id) })).filter((g) => g.fluids.length > 0);
+export function groupFluids<F extends PickableFluid>(
+	fluids: F[]
+): { id: PickableFluid['group']; label: string; fluids: F[] }[] {
+	return PICKER_GROUPS.map((g) => ({
+		...g,
+		fluids: fluids.filter((f) => f.group === g.id)
+	})).filter((g) => g.fluids.length > 0);
 }
 
 /**

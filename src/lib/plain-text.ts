@@ -18,10 +18,22 @@ const IN_LINE = /[\u0000-\u001f\u007f]/;
 const IN_LINES = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
 const ALL_CONTROLS = /[\u0000-\u001f\u007f]/g;
 
-const NAMES: Record<number, string> = { 0: 'NUL', 7: 'BEL', 8: 'backspace', 9: 'tab', 10: 'line break', 13: 'carriage return', 27: 'ESC', 127: 'DEL' };
+const NAMES: Record<number, string> = {
+	0: 'NUL',
+	7: 'BEL',
+	8: 'backspace',
+	9: 'tab',
+	10: 'line break',
+	13: 'carriage return',
+	27: 'ESC',
+	127: 'DEL'
+};
 
 /** The first refused control character in `value`: its position (from 0) and code, or null. */
-export function findControlChar(value: string, kind: TextKind = 'line'): { index: number; code: number } | null {
+export function findControlChar(
+	value: string,
+	kind: TextKind = 'line'
+): { index: number; code: number } | null {
 	const m = (kind === 'lines' ? IN_LINES : IN_LINE).exec(value);
 	return m ? { index: m.index, code: m[0].charCodeAt(0) } : null;
 }
@@ -37,10 +49,19 @@ export function describeControlChar(code: number): string {
  * the field as the reader knows it ("The title", "body", "The file name"); `instead` replaces the
  * sentence saying what to send.
  */
-export function controlCharProblem(value: string, label: string, kind: TextKind = 'line', instead?: string): string | null {
+export function controlCharProblem(
+	value: string,
+	label: string,
+	kind: TextKind = 'line',
+	instead?: string
+): string | null {
 	const found = findControlChar(value, kind);
 	if (!found) return null;
-	const allowed = instead ?? (kind === 'lines' ? 'Send plain text: letters, digits, punctuation, spaces, tabs and line breaks.' : 'Send plain text on one line: letters, digits, punctuation and spaces.');
+	const allowed =
+		instead ??
+		(kind === 'lines'
+			? 'Send plain text: letters, digits, punctuation, spaces, tabs and line breaks.'
+			: 'Send plain text on one line: letters, digits, punctuation and spaces.');
 	return `${label} contains the control character ${describeControlChar(found.code)} at character ${found.index + 1}. ${allowed}`;
 }
 
@@ -59,14 +80,20 @@ export function withoutControlChars(value: string): string {
  * tabs and line breaks become spaces; every other refused character is dropped.
  */
 export function cleanText(value: string, kind: TextKind = 'line'): string {
-	return kind === 'lines' ? value.replace(new RegExp(IN_LINES.source, 'g'), '') : value.replace(/[\t\n\r]/g, ' ').replace(ALL_CONTROLS, '');
+	return kind === 'lines'
+		? value.replace(new RegExp(IN_LINES.source, 'g'), '')
+		: value.replace(/[\t\n\r]/g, ' ').replace(ALL_CONTROLS, '');
 }
 
 /**
  * A zod string that refuses control characters (see the module comment); `typeError` is the
  * message for a value that is not text at all. Chain trimming, lengths and the rest after it.
  */
-export function plainText(label: string, kind: TextKind = 'line', typeError = `${label} must be text.`) {
+export function plainText(
+	label: string,
+	kind: TextKind = 'line',
+	typeError = `${label} must be text.`
+) {
 	return z.string({ error: typeError }).superRefine((s, ctx) => {
 		const problem = controlCharProblem(s, label, kind);
 		if (problem) ctx.addIssue({ code: 'custom', message: problem, input: s, continue: false });

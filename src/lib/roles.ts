@@ -20,7 +20,15 @@ export const CAPABILITIES = [
 export type Capability = (typeof CAPABILITIES)[number];
 
 const GRANTS: Record<Role, readonly Capability[]> = {
-	owner: ['read', 'sheet:edit', 'sheet:check', 'sheet:approve', 'note:write', 'token:create', 'team:manage'],
+	owner: [
+		'read',
+		'sheet:edit',
+		'sheet:check',
+		'sheet:approve',
+		'note:write',
+		'token:create',
+		'team:manage'
+	],
 	designer: ['read', 'sheet:edit', 'note:write', 'token:create'],
 	checker: ['read', 'sheet:check', 'note:write'],
 	viewer: ['read']

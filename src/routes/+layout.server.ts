@@ -8,7 +8,12 @@ export const load: LayoutServerLoad = async ({ locals }) => {
 	const teams = await listTeamsForUser(getDb(), locals.user.id);
 	return {
 		user: locals.user,
-		teams: teams.map((t) => ({ slug: t.slug, name: t.name, role: t.role, memberCount: Number(t.member_count) })),
+		teams: teams.map((t) => ({
+			slug: t.slug,
+			name: t.name,
+			role: t.role,
+			memberCount: Number(t.member_count)
+		})),
 		// the outbox holds only the signed-in person's own mail
 		showOutbox: config().devTools
 	};

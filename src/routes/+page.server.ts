@@ -10,11 +10,23 @@ import { summaryOf } from '$lib/server/sheets';
 import { listFluids } from '$lib/thermo';
 
 export const load: PageServerLoad = async ({ locals }) => {
-	if (!locals.user) return { recentSheets: [], sheetCounts: {} as Record<string, number>, fluidNames: {} as Record<string, string> };
+	if (!locals.user)
+		return {
+			recentSheets: [],
+			sheetCounts: {} as Record<string, number>,
+			fluidNames: {} as Record<string, string>
+		};
 	const db = getDb();
-	const [recent, counts] = await Promise.all([listRecentSheetsForUser(db, locals.user.id, 8), sheetCountsForUser(db, locals.user.id)]);
+	const [recent, counts] = await Promise.all([
+		listRecentSheetsForUser(db, locals.user.id, 8),
+		sheetCountsForUser(db, locals.user.id)
+	]);
 	return {
-		recentSheets: recent.map((r) => ({ ...summaryOf(r), teamSlug: r.team_slug, teamName: r.team_name })),
+		recentSheets: recent.map((r) => ({
+			...summaryOf(r),
+			teamSlug: r.team_slug,
+			teamName: r.team_name
+		})),
 		sheetCounts: Object.fromEntries(counts),
 		fluidNames: Object.fromEntries(listFluids().map((f) => [f.id, f.name]))
 	};

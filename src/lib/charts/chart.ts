@@ -1,12 +1,38 @@
-import { drag, pointer, select, zoom, zoomIdentity, type Selection, type ZoomBehavior, type ZoomTransform } from 'd3';
+import {
+	drag,
+	pointer,
+	select,
+	zoom,
+	zoomIdentity,
+	type Selection,
+	type ZoomBehavior,
+	type ZoomTransform
+} from 'd3';
 import type { UnitPrefs } from '$lib/units';
 import { clampCoords } from './clamp';
 import { isPressureLimit, legAriaLabel, LIMIT_ORDER, limitText, stateAriaLabel } from './describe';
 import { LEG_STROKE, LIMIT_STROKE, processStyle } from './encoding';
 import { KEY, keyEntries, layoutKey } from './key';
 import { stackOffsets } from './stack';
-import { levelAnchors, placeChartLabels, textWidth, type LabelPlacement, type LabelRequest } from './labels';
-import { axisTicks, axisUnit, compactNumber, fitDomain, makeXScale, makeYScale, thinLabels, yScaleType, type Scale, type Tick } from './scales';
+import {
+	levelAnchors,
+	placeChartLabels,
+	textWidth,
+	type LabelPlacement,
+	type LabelRequest
+} from './labels';
+import {
+	axisTicks,
+	axisUnit,
+	compactNumber,
+	fitDomain,
+	makeXScale,
+	makeYScale,
+	thinLabels,
+	yScaleType,
+	type Scale,
+	type Tick
+} from './scales';
 import { DRAWING_CSS, OVERLAY_CSS } from './style';
 import type {
 	ChartCoords,
@@ -149,7 +175,11 @@ function diamond(size: number): string {
  * updates the legs, states, crossings, traces, key and the labels that must avoid them, with
  * keyed joins.
  */
-export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, handlers: ChartHandlers): ChartController {
+export function createChart(
+	drawing: SVGSVGElement,
+	overlay: SVGSVGElement,
+	handlers: ChartHandlers
+): ChartController {
 	const uid = `swc${++instances}`;
 	let frame: ChartFrame | null = null;
 	let path: ChartPath = { states: [], legs: [], selection: null, traces: [] };
@@ -180,7 +210,10 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	const defs = svg.append('defs');
 	const clipRect = defs.append('clipPath').attr('id', `${uid}-clip`).append('rect');
 	// isolines are cut where a design-limit or c.p. label sits over them (see placeChartLabels)
-	const isoMask = defs.append('mask').attr('id', `${uid}-isomask`).attr('maskUnits', 'userSpaceOnUse');
+	const isoMask = defs
+		.append('mask')
+		.attr('id', `${uid}-isomask`)
+		.attr('maskUnits', 'userSpaceOnUse');
 	const isoMaskAll = isoMask.append('rect').attr('fill', 'white');
 	const plate = svg.append('rect').attr('class', 'swc-plate');
 	const root = svg.append('g');
@@ -213,7 +246,11 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 	const crossH = oroot.append('line').attr('class', 'swc-cross').style('display', 'none');
 	const hitLegs = oroot.append('g');
 	const hitStates = oroot.append('g');
-	const ghost = oroot.append('circle').attr('class', 'swc-ghost').attr('r', STATE_R + 3).style('display', 'none');
+	const ghost = oroot
+		.append('circle')
+		.attr('class', 'swc-ghost')
+		.attr('r', STATE_R + 3)
+		.style('display', 'none');
 
 	// labels are placed with measured text boxes: place them again once the web fonts are in
 	let destroyed = false;
@@ -224,13 +261,22 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		});
 
 	const yOf = (p: { T: number; P: number }) => (frame!.kind === 'T-v' ? p.T : p.P);
-	const project = (p: { v: number; T: number; P: number }): Point => ({ x: plot.x + x!(p.v), y: plot.y + y!(yOf(p)) });
+	const project = (p: { v: number; T: number; P: number }): Point => ({
+		x: plot.x + x!(p.v),
+		y: plot.y + y!(yOf(p))
+	});
 	const dataAt = (px: number, py: number): ChartCoords => {
 		const v = x!.invert(px - plot.x);
 		const q = y!.invert(py - plot.y);
 		return frame!.kind === 'T-v' ? { T: q, v } : { P: q, v };
 	};
-	const clamp = (c: ChartCoords) => clampCoords(frame!.kind, c, { triple: frame!.triple, range: frame!.range, saturation: frame!.saturation }, frame!.units);
+	const clamp = (c: ChartCoords) =>
+		clampCoords(
+			frame!.kind,
+			c,
+			{ triple: frame!.triple, range: frame!.range, saturation: frame!.saturation },
+			frame!.units
+		);
 
 	function margins() {
 		return { top: 16 + Math.max(1, keyRows) * KEY.row, ...MARGIN };
@@ -245,13 +291,20 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		return keyEntries(path.legs, {
 			limits: drawnLimits().length > 0,
 			traces: drawn.some((t) => t.kind !== 'revision'),
-			bands: (path.traces ?? []).some((t) => t.kind !== 'revision' && t.points.some((p) => p.vBand)),
+			bands: (path.traces ?? []).some(
+				(t) => t.kind !== 'revision' && t.points.some((p) => p.vBand)
+			),
 			revisions: drawn.filter((t) => t.kind === 'revision').map((t) => t.label)
 		});
 	}
 
 	/** Limits that can be drawn on this chart kind: straight rules, or curves when points are given. */
-	function drawnLimits(): { name: DesignLimitName; value: number; points?: readonly CurvePoint[]; straight: boolean }[] {
+	function drawnLimits(): {
+		name: DesignLimitName;
+		value: number;
+		points?: readonly CurvePoint[];
+		straight: boolean;
+	}[] {
 		if (!frame?.limits) return [];
 		const out = [];
 		for (const name of LIMIT_ORDER) {
@@ -259,7 +312,8 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			if (!lim) continue;
 			const straight = (frame.kind === 'T-v') !== isPressureLimit(name);
 			if (straight) out.push({ name, value: lim.value, straight });
-			else if (lim.points && lim.points.length > 1) out.push({ name, value: lim.value, points: lim.points, straight });
+			else if (lim.points && lim.points.length > 1)
+				out.push({ name, value: lim.value, points: lim.points, straight });
 		}
 		return out;
 	}
@@ -270,7 +324,15 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const changed = key.length !== domainKey.length || key.some((k, i) => k !== domainKey[i]);
 		if (changed || !baseDomain) {
 			domainKey = key;
-			baseDomain = f.domain ?? fitDomain(f.kind, f.pressureScale, { saturation: f.saturation, triple: f.triple, states: path.states, legs: path.legs, limits: f.limits });
+			baseDomain =
+				f.domain ??
+				fitDomain(f.kind, f.pressureScale, {
+					saturation: f.saturation,
+					triple: f.triple,
+					states: path.states,
+					legs: path.legs,
+					limits: f.limits
+				});
 			fittedWithPath = path.states.length > 0;
 			transform = zoomIdentity;
 			ov.property('__zoom', zoomIdentity);
@@ -281,7 +343,12 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const f = frame!;
 		keyRows = computeKeyRows(f.width);
 		const m = margins();
-		plot = { x: m.left, y: m.top, width: Math.max(10, f.width - m.left - m.right), height: Math.max(10, f.height - m.top - m.bottom) };
+		plot = {
+			x: m.left,
+			y: m.top,
+			width: Math.max(10, f.width - m.left - m.right),
+			height: Math.max(10, f.height - m.top - m.bottom)
+		};
 		const x0 = makeXScale(baseDomain!, plot.width);
 		const y0 = makeYScale(f.kind, f.pressureScale, baseDomain!, plot.height);
 		const local = plotTransform(transform, plot);
@@ -295,11 +362,24 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		ensureDomain();
 		layout();
 		const f = frame;
-		svg.attr('width', f.width).attr('height', f.height).attr('viewBox', `0 0 ${f.width} ${f.height}`);
-		ov.attr('width', f.width).attr('height', f.height).attr('viewBox', `0 0 ${f.width} ${f.height}`);
+		svg
+			.attr('width', f.width)
+			.attr('height', f.height)
+			.attr('viewBox', `0 0 ${f.width} ${f.height}`);
+		ov.attr('width', f.width)
+			.attr('height', f.height)
+			.attr('viewBox', `0 0 ${f.width} ${f.height}`);
 		plate.attr('width', f.width).attr('height', f.height);
-		clipRect.attr('x', plot.x).attr('y', plot.y).attr('width', plot.width).attr('height', plot.height);
-		frameRect.attr('x', plot.x).attr('y', plot.y).attr('width', plot.width).attr('height', plot.height);
+		clipRect
+			.attr('x', plot.x)
+			.attr('y', plot.y)
+			.attr('width', plot.width)
+			.attr('height', plot.height);
+		frameRect
+			.attr('x', plot.x)
+			.attr('y', plot.y)
+			.attr('width', plot.width)
+			.attr('height', plot.height);
 		bg.attr('x', plot.x).attr('y', plot.y).attr('width', plot.width).attr('height', plot.height);
 		drawAxes();
 		drawDome();
@@ -316,8 +396,24 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const yDomain = y!.domain() as [number, number];
 		const yUnit = axisUnit(yAxis, f.units, f.pressureScale, yDomain);
 		const xDomain = x!.domain() as [number, number];
-		const xt = thinLabels(axisTicks('log', xDomain, vUnit, atm), (s) => x!(s), 8, (l) => textWidth(l, 10));
-		const yt = thinLabels(axisTicks(yScaleType(f.kind, f.pressureScale), yDomain, yUnit, atm, Math.max(3, Math.round(plot.height / 60))), (s) => -y!(s), 4, () => 11);
+		const xt = thinLabels(
+			axisTicks('log', xDomain, vUnit, atm),
+			(s) => x!(s),
+			8,
+			(l) => textWidth(l, 10)
+		);
+		const yt = thinLabels(
+			axisTicks(
+				yScaleType(f.kind, f.pressureScale),
+				yDomain,
+				yUnit,
+				atm,
+				Math.max(3, Math.round(plot.height / 60))
+			),
+			(s) => -y!(s),
+			4,
+			() => 11
+		);
 		const inX = (t: Tick) => x!(t.value) >= -0.5 && x!(t.value) <= plot.width + 0.5;
 		const inY = (t: Tick) => y!(t.value) >= -0.5 && y!(t.value) <= plot.height + 0.5;
 		const xs = xt.filter(inX);
@@ -379,7 +475,15 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			.text((t) => t.label);
 
 		const titles = [
-			{ cls: 'xt', sym: 'v', word: 'specific volume', unit: `${vUnit.label}, log`, x: plot.x + plot.width / 2, y: plot.y + plot.height + 36, rotate: false },
+			{
+				cls: 'xt',
+				sym: 'v',
+				word: 'specific volume',
+				unit: `${vUnit.label}, log`,
+				x: plot.x + plot.width / 2,
+				y: plot.y + plot.height + 36,
+				rotate: false
+			},
 			{
 				cls: 'yt',
 				sym: yAxis,
@@ -401,7 +505,9 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 				return t;
 			})
 			.attr('class', (d) => `swc-title ${d.cls}`)
-			.attr('transform', (d) => (d.rotate ? `translate(${d.x},${d.y}) rotate(-90)` : `translate(${d.x},${d.y})`))
+			.attr('transform', (d) =>
+				d.rotate ? `translate(${d.x},${d.y}) rotate(-90)` : `translate(${d.x},${d.y})`
+			)
 			.each(function (d) {
 				const t = select(this);
 				t.select('tspan.w').text(`${d.word} `);
@@ -430,7 +536,12 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		cp.style('display', null).attr('cx', c.x).attr('cy', c.y);
 		const a = project(sat.liquid[0]);
 		const b = project(sat.vapor[0]);
-		tripleLine.style('display', null).attr('x1', a.x).attr('y1', a.y).attr('x2', b.x).attr('y2', b.y);
+		tripleLine
+			.style('display', null)
+			.attr('x1', a.x)
+			.attr('y1', a.y)
+			.attr('x2', b.x)
+			.attr('y2', b.y);
 	}
 
 	function drawIsolines() {
@@ -452,7 +563,9 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			.attr('class', 'swc-limit')
 			.attr('stroke-width', LIMIT_STROKE.width)
 			.attr('stroke-dasharray', LIMIT_STROKE.dash)
-			.attr('d', (l) => (l.straight ? polylineD(limitLine(l.value)) : polylineD(l.points!.map(project))));
+			.attr('d', (l) =>
+				l.straight ? polylineD(limitLine(l.value)) : polylineD(l.points!.map(project))
+			);
 	}
 
 	function limitLine(value: number): Point[] {
@@ -489,7 +602,10 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		}
 		const sel = path.selection;
 		const legPts = new Map(path.legs.map((l) => [l.id, l.points.map(project)]));
-		stateShift = stackOffsets(path.states.map((s) => ({ id: s.id, ...project(s.state) })), STATE_R);
+		stateShift = stackOffsets(
+			path.states.map((s) => ({ id: s.id, ...project(s.state) })),
+			STATE_R
+		);
 
 		gLegs
 			.selectAll<SVGGElement, ChartLeg>('g.swc-leg')
@@ -516,7 +632,9 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 					.attr('stroke-dasharray', st.dash || null);
 			});
 
-		const crossings = path.legs.flatMap((l) => l.crossings.map((c, i) => ({ key: `${l.id}:${i}`, p: project(c.state) })));
+		const crossings = path.legs.flatMap((l) =>
+			l.crossings.map((c, i) => ({ key: `${l.id}:${i}`, p: project(c.state) }))
+		);
 		gCross
 			.selectAll<SVGPathElement, (typeof crossings)[number]>('path')
 			.data(crossings, (d) => d.key)
@@ -528,10 +646,15 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const traces = (path.traces ?? []).map((t) => ({
 			id: t.id,
 			revision: t.kind === 'revision',
-			pts: t.points.filter((p) => p.v && p.v > 0).map((p) => ({ ...project({ v: p.v!, T: p.T, P: p.P }), inDome: !!p.inDome })),
+			pts: t.points
+				.filter((p) => p.v && p.v > 0)
+				.map((p) => ({ ...project({ v: p.v!, T: p.T, P: p.P }), inDome: !!p.inDome })),
 			bands: t.points
 				.filter((p) => p.vBand && !(p.v && p.v > 0))
-				.map((p) => ({ a: project({ v: p.vBand![0], T: p.T, P: p.P }), b: project({ v: p.vBand![1], T: p.T, P: p.P }) }))
+				.map((p) => ({
+					a: project({ v: p.vBand![0], T: p.T, P: p.P }),
+					b: project({ v: p.vBand![1], T: p.T, P: p.P })
+				}))
 		}));
 		gTraces
 			.selectAll<SVGGElement, (typeof traces)[number]>('g')
@@ -545,14 +668,19 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			})
 			.each(function (d) {
 				const g = select(this);
-				g.select('.swc-trace-line').attr('class', d.revision ? 'swc-trace-line swc-revision-line' : 'swc-trace-line').attr('d', polylineD(d.pts));
+				g.select('.swc-trace-line')
+					.attr('class', d.revision ? 'swc-trace-line swc-revision-line' : 'swc-trace-line')
+					.attr('d', polylineD(d.pts));
 				// readings on the saturation line: a band from v′ to v″ at their T or P (a few hundred at most)
 				const bandEvery = Math.max(1, Math.ceil(d.bands.length / 200));
 				g.select('.swc-trace-band').attr(
 					'd',
 					d.bands
 						.filter((_, i) => i % bandEvery === 0)
-						.map((b) => `M${b.a.x.toFixed(1)},${b.a.y.toFixed(1)}L${b.b.x.toFixed(1)},${b.b.y.toFixed(1)}`)
+						.map(
+							(b) =>
+								`M${b.a.x.toFixed(1)},${b.a.y.toFixed(1)}L${b.b.x.toFixed(1)},${b.b.y.toFixed(1)}`
+						)
 						.join('') || null
 				);
 				if (d.revision) {
@@ -576,7 +704,9 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			.data(path.states, (d) => d.id)
 			.join((enter) => {
 				const g = enter.append('g').attr('class', 'swc-state');
-				g.append('circle').attr('class', 'swc-state-ring').attr('r', STATE_R + 3.5);
+				g.append('circle')
+					.attr('class', 'swc-state-ring')
+					.attr('r', STATE_R + 3.5);
 				g.append('circle').attr('class', 'swc-state-disc').attr('r', STATE_R);
 				g.append('text').attr('class', 'swc-state-text').attr('dy', '0.36em');
 				return g;
@@ -588,14 +718,21 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			})
 			.each(function (d) {
 				const t = select(this).select('text');
-				if (t.text() !== d.label) t.text(d.label).attr('font-size', d.label.length > 2 ? 7.5 : null);
+				if (t.text() !== d.label)
+					t.text(d.label).attr('font-size', d.label.length > 2 ? 7.5 : null);
 			});
 
-		drawLabels(legPts, crossings.map((c) => c.p));
+		drawLabels(
+			legPts,
+			crossings.map((c) => c.p)
+		);
 		drawKey();
 		drawOverlay(legPts);
 		// for benchmarks and tests: a redraw counter and its cost, on the overlay (never exported)
-		ov.attr('data-path-rev', ++pathRev).attr('data-path-ms', (performance.now() - started).toFixed(2));
+		ov.attr('data-path-rev', ++pathRev).attr(
+			'data-path-ms',
+			(performance.now() - started).toFixed(2)
+		);
 	}
 
 	/**
@@ -610,12 +747,27 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const key = (i: { text: string; cls: string }) => `${i.cls}|${i.text}`;
 		const missing = items.filter((i) => !measured.has(key(i)));
 		if (missing.length) {
-			const els = missing.map((i) => gLabels.append('text').attr('class', i.cls).attr('visibility', 'hidden').text(i.text).node() as SVGTextElement & { getBBox?: () => DOMRect });
+			const els = missing.map(
+				(i) =>
+					gLabels
+						.append('text')
+						.attr('class', i.cls)
+						.attr('visibility', 'hidden')
+						.text(i.text)
+						.node() as SVGTextElement & { getBBox?: () => DOMRect }
+			);
 			missing.forEach((i, n) => {
-				let out = { width: textWidth(i.text, i.fontSize, i.mono) + (i.mono ? 0 : i.text.length * 0.05 * i.fontSize), height: Math.ceil(i.fontSize * 1.32), ascent: i.fontSize * 1.02 };
+				let out = {
+					width:
+						textWidth(i.text, i.fontSize, i.mono) +
+						(i.mono ? 0 : i.text.length * 0.05 * i.fontSize),
+					height: Math.ceil(i.fontSize * 1.32),
+					ascent: i.fontSize * 1.02
+				};
 				try {
 					const b = typeof els[n].getBBox === 'function' ? els[n].getBBox!() : null;
-					if (b && b.width > 0 && b.height > 0) out = { width: b.width, height: b.height, ascent: -b.y };
+					if (b && b.width > 0 && b.height > 0)
+						out = { width: b.width, height: b.height, ascent: -b.y };
 				} catch {
 					// not laid out (a detached or hidden drawing): keep the estimate
 				}
@@ -631,10 +783,18 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const marks: Rect[] = [];
 		for (const s of path.states) {
 			const p = shifted(s);
-			marks.push({ x: p.x - STATE_R - 3, y: p.y - STATE_R - 3, width: 2 * STATE_R + 6, height: 2 * STATE_R + 6 });
+			marks.push({
+				x: p.x - STATE_R - 3,
+				y: p.y - STATE_R - 3,
+				width: 2 * STATE_R + 6,
+				height: 2 * STATE_R + 6
+			});
 		}
 		for (const p of crossingPts) marks.push({ x: p.x - 5, y: p.y - 5, width: 10, height: 10 });
-		const sat = f.saturation && f.saturation.liquid.length > 1 && f.saturation.vapor.length > 1 ? f.saturation : null;
+		const sat =
+			f.saturation && f.saturation.liquid.length > 1 && f.saturation.vapor.length > 1
+				? f.saturation
+				: null;
 		const cpAt = sat ? project(sat.critical) : null;
 		if (cpAt) marks.push({ x: cpAt.x - 4.5, y: cpAt.y - 4.5, width: 9, height: 9 });
 
@@ -647,7 +807,10 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			lines.push([...sat.liquid, sat.critical, ...[...sat.vapor].reverse()].map(project));
 			lines.push([project(sat.liquid[0]), project(sat.vapor[0])]);
 		}
-		for (const t of path.traces ?? []) lines.push(t.points.filter((p) => p.v && p.v > 0).map((p) => project({ v: p.v!, T: p.T, P: p.P })));
+		for (const t of path.traces ?? [])
+			lines.push(
+				t.points.filter((p) => p.v && p.v > 0).map((p) => project({ v: p.v!, T: p.T, P: p.P }))
+			);
 
 		const limText = lims.map((l) => limitText(l.name, l.value, f.units));
 		const isoText = iso.map((l) => isolineLabel(l));
@@ -662,31 +825,59 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const limReqs: LabelRequest[] = lims.map((l, i) => {
 			const { width, height } = limSize[i];
 			const line = limLines[i];
-			return { id: l.name, width: width + 2, height, line, prefer: 'end', anchors: l.straight ? [] : levelAnchors(line, width + 2) };
+			return {
+				id: l.name,
+				width: width + 2,
+				height,
+				line,
+				prefer: 'end',
+				anchors: l.straight ? [] : levelAnchors(line, width + 2)
+			};
 		});
-		const isoReqs: LabelRequest[] = iso.map((_, i) => ({ id: `${i}`, width: isoSize[i].width + 2, height: isoSize[i].height, line: isoLines[i], prefer: 'end' }));
-		const cpInside = cpAt && cpAt.x >= plot.x && cpAt.x <= plot.x + plot.width && cpAt.y >= plot.y && cpAt.y <= plot.y + plot.height;
+		const isoReqs: LabelRequest[] = iso.map((_, i) => ({
+			id: `${i}`,
+			width: isoSize[i].width + 2,
+			height: isoSize[i].height,
+			line: isoLines[i],
+			prefer: 'end'
+		}));
+		const cpInside =
+			cpAt &&
+			cpAt.x >= plot.x &&
+			cpAt.x <= plot.x + plot.width &&
+			cpAt.y >= plot.y &&
+			cpAt.y <= plot.y + plot.height;
 
 		const placed = placeChartLabels(
 			{ plot, lines, background: isoLines, path: [...legPts.values()], marks },
-			{ limits: limReqs, near: cpInside ? { point: cpAt!, width: cpSize.width + 2, height: cpSize.height } : null, edges: isoReqs }
+			{
+				limits: limReqs,
+				near: cpInside ? { point: cpAt!, width: cpSize.width + 2, height: cpSize.height } : null,
+				edges: isoReqs
+			}
 		);
 
 		// the mask is touched only when a hole moves (a masked group is costly to repaint while dragging)
-		const maskKey = `${f.width}x${f.height}:` + placed.masks.map((m) => `${m.x.toFixed(1)},${m.y.toFixed(1)},${m.width.toFixed(1)},${m.height.toFixed(1)}`).join(';');
+		const maskKey =
+			`${f.width}x${f.height}:` +
+			placed.masks
+				.map(
+					(m) => `${m.x.toFixed(1)},${m.y.toFixed(1)},${m.width.toFixed(1)},${m.height.toFixed(1)}`
+				)
+				.join(';');
 		if (maskKey !== lastMaskKey) {
 			lastMaskKey = maskKey;
 			isoMaskAll.attr('x', 0).attr('y', 0).attr('width', f.width).attr('height', f.height);
 			isoMask
-			.selectAll<SVGRectElement, Rect>('rect.swc-mask-hole')
-			.data(placed.masks)
-			.join('rect')
-			.attr('class', 'swc-mask-hole')
-			.attr('fill', 'black')
-			.attr('x', (d) => d.x)
-			.attr('y', (d) => d.y)
-			.attr('width', (d) => d.width)
-			.attr('height', (d) => d.height);
+				.selectAll<SVGRectElement, Rect>('rect.swc-mask-hole')
+				.data(placed.masks)
+				.join('rect')
+				.attr('class', 'swc-mask-hole')
+				.attr('fill', 'black')
+				.attr('x', (d) => d.x)
+				.attr('y', (d) => d.y)
+				.attr('width', (d) => d.width)
+				.attr('height', (d) => d.height);
 		}
 
 		// text drawn so that its bounding box is the placed box: 1 px in from the left, top at the box's top
@@ -732,22 +923,44 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 				const g = select(this);
 				const sample = g.select('path.sample');
 				const e = d.entry;
-				sample.attr('class', 'sample').attr('stroke', null).attr('stroke-dasharray', null).attr('stroke-width', null).attr('fill', null).attr('stroke-linecap', null);
+				sample
+					.attr('class', 'sample')
+					.attr('stroke', null)
+					.attr('stroke-dasharray', null)
+					.attr('stroke-width', null)
+					.attr('fill', null)
+					.attr('stroke-linecap', null);
 				if (e.kind === 'process') {
 					const st = processStyle(e.process);
-					sample.attr('d', `M1,0h${KEY.sample - 2}`).attr('fill', 'none').attr('stroke', st.colour).attr('stroke-width', LEG_STROKE.width).attr('stroke-linecap', 'round').attr('stroke-dasharray', st.dash || null);
+					sample
+						.attr('d', `M1,0h${KEY.sample - 2}`)
+						.attr('fill', 'none')
+						.attr('stroke', st.colour)
+						.attr('stroke-width', LEG_STROKE.width)
+						.attr('stroke-linecap', 'round')
+						.attr('stroke-dasharray', st.dash || null);
 				} else if (e.kind === 'crossing') {
-					sample.attr('class', 'sample swc-crossing').attr('d', `M${KEY.sample / 2},-4.5l4.5,4.5l-4.5,4.5l-4.5,-4.5Z`);
+					sample
+						.attr('class', 'sample swc-crossing')
+						.attr('d', `M${KEY.sample / 2},-4.5l4.5,4.5l-4.5,4.5l-4.5,-4.5Z`);
 				} else if (e.kind === 'limit') {
-					sample.attr('class', 'sample swc-limit').attr('d', `M0,0h${KEY.sample}`).attr('stroke-width', LIMIT_STROKE.width).attr('stroke-dasharray', '9 4');
+					sample
+						.attr('class', 'sample swc-limit')
+						.attr('d', `M0,0h${KEY.sample}`)
+						.attr('stroke-width', LIMIT_STROKE.width)
+						.attr('stroke-dasharray', '9 4');
 				} else if (e.kind === 'trace-band') {
 					sample.attr('class', 'sample swc-trace-band').attr('d', `M3,0h${KEY.sample - 6}`);
 				} else if (e.kind === 'revision') {
 					sample.attr('class', 'sample swc-revision-line').attr('d', `M3,0h${KEY.sample - 6}`);
 				} else {
-					sample.attr('class', 'sample swc-trace-mark').attr('d', `M3,0h20M${KEY.sample / 2 - 2.5},0h5M${KEY.sample / 2},-2.5v5`);
+					sample
+						.attr('class', 'sample swc-trace-mark')
+						.attr('d', `M3,0h20M${KEY.sample / 2 - 2.5},0h5M${KEY.sample / 2},-2.5v5`);
 				}
-				g.select('text').attr('x', KEY.sample + KEY.gap).text(e.text);
+				g.select('text')
+					.attr('x', KEY.sample + KEY.gap)
+					.text(e.text);
 			});
 	}
 
@@ -794,7 +1007,10 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 			.attr('aria-label', (d) => {
 				const beside = stateShift.get(d.id)?.beside;
 				const other = beside ? path.states.find((s) => s.id === beside)?.label : undefined;
-				return stateAriaLabel(d, f.units) + (other ? `; the same point as ${other}, drawn beside it` : '');
+				return (
+					stateAriaLabel(d, f.units) +
+					(other ? `; the same point as ${other}, drawn beside it` : '')
+				);
 			})
 			.attr('aria-pressed', (d) => String(sel?.kind === 'state' && sel.id === d.id));
 	}
@@ -829,7 +1045,12 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		});
 
 	function onKey(ev: KeyboardEvent, target: ChartSelection) {
-		const dirs: Record<string, NudgeEvent['direction']> = { ArrowLeft: 'left', ArrowRight: 'right', ArrowUp: 'up', ArrowDown: 'down' };
+		const dirs: Record<string, NudgeEvent['direction']> = {
+			ArrowLeft: 'left',
+			ArrowRight: 'right',
+			ArrowUp: 'up',
+			ArrowDown: 'down'
+		};
 		if (ev.key === 'Enter' || ev.key === ' ') {
 			ev.preventDefault();
 			handlers.select(target);
@@ -842,13 +1063,17 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		const direction = dirs[ev.key];
 		if (!direction) return;
 		ev.preventDefault();
-		const stateId = target.kind === 'state' ? target.id : path.legs.find((l) => l.id === target.id)?.to;
+		const stateId =
+			target.kind === 'state' ? target.id : path.legs.find((l) => l.id === target.id)?.to;
 		const st = path.states.find((s) => s.id === stateId);
 		if (!st || !stateId) return;
 		const step: NudgeEvent['step'] = ev.altKey ? 'fine' : ev.shiftKey ? 'coarse' : 'normal';
 		const p = project(st.state);
 		const d = NUDGE_PX[step];
-		const moved = { x: p.x + (direction === 'left' ? -d : direction === 'right' ? d : 0), y: p.y + (direction === 'up' ? -d : direction === 'down' ? d : 0) };
+		const moved = {
+			x: p.x + (direction === 'left' ? -d : direction === 'right' ? d : 0),
+			y: p.y + (direction === 'up' ? -d : direction === 'down' ? d : 0)
+		};
 		const { coords, reason } = clamp(dataAt(moved.x, moved.y));
 		handlers.nudge({ target, stateId, direction, step, coords, reason });
 	}
@@ -899,13 +1124,24 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 
 	function hoverAt(px: number, py: number) {
 		if (!frame || !x) return;
-		const inside = px >= plot.x && px <= plot.x + plot.width && py >= plot.y && py <= plot.y + plot.height;
+		const inside =
+			px >= plot.x && px <= plot.x + plot.width && py >= plot.y && py <= plot.y + plot.height;
 		if (!inside) {
 			hideHover();
 			return;
 		}
-		crossV.style('display', null).attr('x1', px).attr('x2', px).attr('y1', plot.y).attr('y2', plot.y + plot.height);
-		crossH.style('display', null).attr('y1', py).attr('y2', py).attr('x1', plot.x).attr('x2', plot.x + plot.width);
+		crossV
+			.style('display', null)
+			.attr('x1', px)
+			.attr('x2', px)
+			.attr('y1', plot.y)
+			.attr('y2', plot.y + plot.height);
+		crossH
+			.style('display', null)
+			.attr('y1', py)
+			.attr('y2', py)
+			.attr('x1', plot.x)
+			.attr('x2', plot.x + plot.width);
 		const raw = dataAt(px, py);
 		handlers.hover({ coords: raw, reason: clamp(raw).reason });
 	}
@@ -918,7 +1154,15 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 
 	function resetView() {
 		if (!frame) return;
-		baseDomain = frame.domain ?? fitDomain(frame.kind, frame.pressureScale, { saturation: frame.saturation, triple: frame.triple, states: path.states, legs: path.legs, limits: frame.limits });
+		baseDomain =
+			frame.domain ??
+			fitDomain(frame.kind, frame.pressureScale, {
+				saturation: frame.saturation,
+				triple: frame.triple,
+				states: path.states,
+				legs: path.legs,
+				limits: frame.limits
+			});
 		transform = zoomIdentity;
 		ov.property('__zoom', zoomIdentity);
 		drawFrame();
@@ -932,9 +1176,22 @@ export function createChart(drawing: SVGSVGElement, overlay: SVGSVGElement, hand
 		setPath(next) {
 			path = next;
 			if (!frame) return;
-			if (!fittedWithPath && next.states.length > 0 && !frame.domain && transform.k === 1 && transform.x === 0 && transform.y === 0) {
+			if (
+				!fittedWithPath &&
+				next.states.length > 0 &&
+				!frame.domain &&
+				transform.k === 1 &&
+				transform.x === 0 &&
+				transform.y === 0
+			) {
 				fittedWithPath = true;
-				baseDomain = fitDomain(frame.kind, frame.pressureScale, { saturation: frame.saturation, triple: frame.triple, states: path.states, legs: path.legs, limits: frame.limits });
+				baseDomain = fitDomain(frame.kind, frame.pressureScale, {
+					saturation: frame.saturation,
+					triple: frame.triple,
+					states: path.states,
+					legs: path.legs,
+					limits: frame.limits
+				});
 				drawFrame();
 				return;
 			}

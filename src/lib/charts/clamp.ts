@@ -1,5 +1,12 @@
 import { formatQuantity, type UnitPrefs } from '$lib/units';
-import type { ChartCoords, ChartKind, ClampResult, FluidRange, SaturationCurve, TriplePoint } from './types';
+import type {
+	ChartCoords,
+	ChartKind,
+	ClampResult,
+	FluidRange,
+	SaturationCurve,
+	TriplePoint
+} from './types';
 
 export interface ClampBounds {
 	triple?: TriplePoint | null;
@@ -20,7 +27,12 @@ export interface ClampBounds {
  *   liquid at the triple point (water near 4 °C), so no cheap bound is safe there.
  * Reasons name the limit in the sheet's units.
  */
-export function clampCoords(kind: ChartKind, coords: ChartCoords, bounds: ClampBounds, prefs: UnitPrefs): ClampResult {
+export function clampCoords(
+	kind: ChartKind,
+	coords: ChartCoords,
+	bounds: ClampBounds,
+	prefs: UnitPrefs
+): ClampResult {
 	const out: ChartCoords = { ...coords };
 	const reasons: string[] = [];
 	const T = (k: number) => formatQuantity(k, 'temperature', prefs).full;
@@ -58,7 +70,9 @@ export function clampCoords(kind: ChartKind, coords: ChartCoords, bounds: ClampB
 			const vMin = (vgTriple * triple.P) / out.P;
 			if (out.v < vMin) {
 				out.v = vMin;
-				reasons.push(`Below the triple-point pressure (${P(triple.P)}) only vapor exists: the state is kept on the vapor side.`);
+				reasons.push(
+					`Below the triple-point pressure (${P(triple.P)}) only vapor exists: the state is kept on the vapor side.`
+				);
 			}
 		}
 	}

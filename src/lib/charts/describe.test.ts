@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { unitPrefs } from '$lib/units';
-import { chartDescription, chartSummary, legAriaLabel, limitText, stateAriaLabel } from './describe';
+import {
+	chartDescription,
+	chartSummary,
+	legAriaLabel,
+	limitText,
+	stateAriaLabel
+} from './describe';
 import { chartState } from './test-fixtures';
 import type { ChartLeg, ChartState } from './types';
 
@@ -14,7 +20,9 @@ const legs: ChartLeg[] = [
 		id: 'l1',
 		process: 'isochoric',
 		points: states.map((s) => s.state),
-		crossings: [{ line: 'saturated-vapor', state: chartState(420, 4e5, 0.2683, 'saturated-vapor', 1) }],
+		crossings: [
+			{ line: 'saturated-vapor', state: chartState(420, 4e5, 0.2683, 'saturated-vapor', 1) }
+		],
 		from: 'a',
 		to: 'b'
 	}
@@ -22,16 +30,24 @@ const legs: ChartLeg[] = [
 
 describe('accessible names', () => {
 	it('a state says its label, phase, temperature and pressure in display units', () => {
-		expect(stateAriaLabel(states[1], si)).toBe('State S2, superheated vapor, 180.0\u00a0°C, 1000\u00a0kPa a');
-		expect(stateAriaLabel(states[1], unitPrefs({ pressureUnit: 'MPa', pressureReference: 'gauge' }))).toBe(
-			'State S2, superheated vapor, 180.0\u00a0°C, 0.8987\u00a0MPa g'
+		expect(stateAriaLabel(states[1], si)).toBe(
+			'State S2, superheated vapor, 180.0\u00a0°C, 1000\u00a0kPa a'
 		);
-		expect(stateAriaLabel(states[0], si)).toMatch(/saturated mixture, 120\.0\u00a0°C, 198\.7\u00a0kPa a, quality 0\.300$/);
+		expect(
+			stateAriaLabel(states[1], unitPrefs({ pressureUnit: 'MPa', pressureReference: 'gauge' }))
+		).toBe('State S2, superheated vapor, 180.0\u00a0°C, 0.8987\u00a0MPa g');
+		expect(stateAriaLabel(states[0], si)).toMatch(
+			/saturated mixture, 120\.0\u00a0°C, 198\.7\u00a0kPa a, quality 0\.300$/
+		);
 	});
 
 	it('a leg says its ends, process and crossings', () => {
-		expect(legAriaLabel(legs[0], states)).toBe('Leg S1 to S2, isochoric, crosses the saturated-vapor line');
-		expect(legAriaLabel({ ...legs[0], process: 'polytropic', n: 1.3, crossings: [] }, states)).toBe('Leg S1 to S2, polytropic with n = 1.3');
+		expect(legAriaLabel(legs[0], states)).toBe(
+			'Leg S1 to S2, isochoric, crosses the saturated-vapor line'
+		);
+		expect(legAriaLabel({ ...legs[0], process: 'polytropic', n: 1.3, crossings: [] }, states)).toBe(
+			'Leg S1 to S2, polytropic with n = 1.3'
+		);
 	});
 
 	it('limits read with name and value', () => {
@@ -43,7 +59,13 @@ describe('accessible names', () => {
 		expect(chartSummary({ kind: 'T-v', fluidName: 'water', states, legs, prefs: si })).toBe(
 			'Temperature–specific volume diagram of water, with the vapor dome and 2 states and 1 leg.'
 		);
-		const d = chartDescription({ kind: 'P-v', states, legs, prefs: si, limits: { designPressure: { value: 1.1e6 } } });
+		const d = chartDescription({
+			kind: 'P-v',
+			states,
+			legs,
+			prefs: si,
+			limits: { designPressure: { value: 1.1e6 } }
+		});
 		expect(d).toContain('State S1');
 		expect(d).toContain('Leg S1 to S2');
 		expect(d).toContain('Design limit: design pressure');

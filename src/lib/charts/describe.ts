@@ -23,7 +23,12 @@ export const LIMIT_NAMES: Record<DesignLimitName, string> = {
 	minimumTemperature: 'minimum temperature'
 };
 
-export const LIMIT_ORDER: readonly DesignLimitName[] = ['reliefSetPressure', 'designPressure', 'designTemperature', 'minimumTemperature'];
+export const LIMIT_ORDER: readonly DesignLimitName[] = [
+	'reliefSetPressure',
+	'designPressure',
+	'designTemperature',
+	'minimumTemperature'
+];
 
 export function isPressureLimit(name: DesignLimitName): boolean {
 	return name === 'designPressure' || name === 'reliefSetPressure';
@@ -43,7 +48,8 @@ export function shortV(v: number, prefs: UnitPrefs): string {
 /** "superheated vapor, 180.0 °C, 1000 kPa a" (with quality inside the dome) */
 export function stateSummary(s: State, prefs: UnitPrefs): string {
 	const parts = [phaseName(s.phase), shortT(s.T, prefs), shortP(s.P, prefs)];
-	if (s.x !== null && s.phase === 'saturated-mixture') parts.push(`quality ${formatQuantity(s.x, 'quality', prefs, { decimals: 3 }).full}`);
+	if (s.x !== null && s.phase === 'saturated-mixture')
+		parts.push(`quality ${formatQuantity(s.x, 'quality', prefs, { decimals: 3 }).full}`);
 	return parts.join(', ');
 }
 
@@ -58,7 +64,9 @@ export function legAriaLabel(leg: ChartLeg, states: readonly ChartState[]): stri
 	const style = processStyle(leg.process);
 	const n = leg.process === 'polytropic' && leg.n !== undefined ? ` with n = ${leg.n}` : '';
 	const lines = [...new Set(leg.crossings.map((c) => c.line))];
-	const crossings = lines.length ? `, crosses the ${lines.join(' and ')} line${lines.length > 1 ? 's' : ''}` : '';
+	const crossings = lines.length
+		? `, crosses the ${lines.join(' and ')} line${lines.length > 1 ? 's' : ''}`
+		: '';
 	return `Leg ${name(leg.from)} to ${name(leg.to)}, ${style.name}${n}${crossings}`;
 }
 
@@ -88,12 +96,23 @@ export function chartSummary(input: ChartSummaryInput): string {
 /** Longer text for the SVG's <desc>: dome, each state, each leg, each limit. */
 export function chartDescription(input: ChartSummaryInput): string {
 	const lines: string[] = [];
-	if (input.critical) lines.push(`Critical point at ${shortT(input.critical.T, input.prefs)} and ${shortP(input.critical.P, input.prefs)}.`);
+	if (input.critical)
+		lines.push(
+			`Critical point at ${shortT(input.critical.T, input.prefs)} and ${shortP(input.critical.P, input.prefs)}.`
+		);
 	for (const s of input.states) lines.push(`${stateAriaLabel(s, input.prefs)}.`);
 	for (const l of input.legs) lines.push(`${legAriaLabel(l, input.states)}.`);
-	const used = PROCESS_ORDER.filter((p) => input.legs.some((l) => l.process === p)).map(processStyle);
-	if (used.length) lines.push(`Legs are drawn by process: ${used.map((s) => `${s.name} as a ${s.colourName} ${s.pattern} line`).join('; ')}.`);
-	for (const [name, limit] of Object.entries(input.limits ?? {}) as [DesignLimitName, { value: number } | null | undefined][]) {
+	const used = PROCESS_ORDER.filter((p) => input.legs.some((l) => l.process === p)).map(
+		processStyle
+	);
+	if (used.length)
+		lines.push(
+			`Legs are drawn by process: ${used.map((s) => `${s.name} as a ${s.colourName} ${s.pattern} line`).join('; ')}.`
+		);
+	for (const [name, limit] of Object.entries(input.limits ?? {}) as [
+		DesignLimitName,
+		{ value: number } | null | undefined
+	][]) {
 		if (limit) lines.push(`Design limit: ${limitText(name, limit.value, input.prefs)}.`);
 	}
 	return lines.join(' ');

@@ -7,7 +7,16 @@ import type { ChartLeg } from './types';
 
 const styles = Object.values(PROCESS_STYLES);
 // Okabe & Ito (2008), "Color Universal Design": the eight-colour palette (from memory)
-const OKABE_ITO = ['#000000', '#E69F00', '#56B4E9', '#009E73', '#F0E442', '#0072B2', '#D55E00', '#CC79A7'];
+const OKABE_ITO = [
+	'#000000',
+	'#E69F00',
+	'#56B4E9',
+	'#009E73',
+	'#F0E442',
+	'#0072B2',
+	'#D55E00',
+	'#CC79A7'
+];
 
 describe('process encoding', () => {
 	it('covers every process kind', () => {
@@ -45,19 +54,32 @@ const leg = (id: string, process: ChartLeg['process'], crossing = false): ChartL
 	id,
 	process,
 	points: [chartState(300, 1e5, 1), chartState(400, 1e5, 2)],
-	crossings: crossing ? [{ line: 'saturated-vapor', state: chartState(372.8, 1e5, 1.69, 'saturated-vapor', 1) }] : [],
+	crossings: crossing
+		? [{ line: 'saturated-vapor', state: chartState(372.8, 1e5, 1.69, 'saturated-vapor', 1) }]
+		: [],
 	from: 'a',
 	to: 'b'
 });
 
 describe('key', () => {
 	it('lists the processes used, in a fixed order, then the marks present', () => {
-		const entries = keyEntries([leg('1', 'isenthalpic'), leg('2', 'isobaric', true), leg('3', 'isobaric')], { limits: true, traces: false });
-		expect(entries.map((e) => e.text)).toEqual(['isobaric', 'isenthalpic (throttling)', 'saturation crossing', 'design limit']);
+		const entries = keyEntries(
+			[leg('1', 'isenthalpic'), leg('2', 'isobaric', true), leg('3', 'isobaric')],
+			{ limits: true, traces: false }
+		);
+		expect(entries.map((e) => e.text)).toEqual([
+			'isobaric',
+			'isenthalpic (throttling)',
+			'saturation crossing',
+			'design limit'
+		]);
 	});
 
 	it('wraps onto more rows when narrow', () => {
-		const entries = keyEntries(PROCESS_ORDER.map((p, i) => leg(String(i), p)), { limits: true, traces: true });
+		const entries = keyEntries(
+			PROCESS_ORDER.map((p, i) => leg(String(i), p)),
+			{ limits: true, traces: true }
+		);
 		expect(layoutKey(entries, 2000).rows).toBe(1);
 		const narrow = layoutKey(entries, 300);
 		expect(narrow.rows).toBeGreaterThan(2);

@@ -34,16 +34,71 @@ export interface ProcessStyle {
 }
 
 export const PROCESS_STYLES: Readonly<Record<Process, ProcessStyle>> = Object.freeze({
-	isobaric: { process: 'isobaric', token: 'leg.1', colour: '#0072B2', dash: '', pattern: 'unbroken', colourName: 'blue', name: 'isobaric' },
-	isochoric: { process: 'isochoric', token: 'leg.2', colour: '#D55E00', dash: '13 5', pattern: 'long dash', colourName: 'vermillion', name: 'isochoric' },
-	isothermal: { process: 'isothermal', token: 'leg.3', colour: '#009E73', dash: '0 4.5', pattern: 'dots', colourName: 'bluish green', name: 'isothermal' },
-	isentropic: { process: 'isentropic', token: 'leg.4', colour: '#CC79A7', dash: '10 4 0 4', pattern: 'dash–dot', colourName: 'reddish purple', name: 'isentropic' },
-	isenthalpic: { process: 'isenthalpic', token: 'leg.5', colour: '#E69F00', dash: '5 4', pattern: 'short dash', colourName: 'orange', name: 'isenthalpic (throttling)' },
-	polytropic: { process: 'polytropic', token: 'leg.6', colour: '#56B4E9', dash: '10 4 0 4 0 4', pattern: 'dash–dot–dot', colourName: 'sky blue', name: 'polytropic' }
+	isobaric: {
+		process: 'isobaric',
+		token: 'leg.1',
+		colour: '#0072B2',
+		dash: '',
+		pattern: 'unbroken',
+		colourName: 'blue',
+		name: 'isobaric'
+	},
+	isochoric: {
+		process: 'isochoric',
+		token: 'leg.2',
+		colour: '#D55E00',
+		dash: '13 5',
+		pattern: 'long dash',
+		colourName: 'vermillion',
+		name: 'isochoric'
+	},
+	isothermal: {
+		process: 'isothermal',
+		token: 'leg.3',
+		colour: '#009E73',
+		dash: '0 4.5',
+		pattern: 'dots',
+		colourName: 'bluish green',
+		name: 'isothermal'
+	},
+	isentropic: {
+		process: 'isentropic',
+		token: 'leg.4',
+		colour: '#CC79A7',
+		dash: '10 4 0 4',
+		pattern: 'dash–dot',
+		colourName: 'reddish purple',
+		name: 'isentropic'
+	},
+	isenthalpic: {
+		process: 'isenthalpic',
+		token: 'leg.5',
+		colour: '#E69F00',
+		dash: '5 4',
+		pattern: 'short dash',
+		colourName: 'orange',
+		name: 'isenthalpic (throttling)'
+	},
+	polytropic: {
+		process: 'polytropic',
+		token: 'leg.6',
+		colour: '#56B4E9',
+		dash: '10 4 0 4 0 4',
+		pattern: 'dash–dot–dot',
+		colourName: 'sky blue',
+		name: 'polytropic'
+	}
 });
 
 /** Processes in key order. */
-export const PROCESS_ORDER: readonly Process[] = ['isobaric', 'isochoric', 'isothermal', 'isentropic', 'isenthalpic', 'polytropic'];
+export const PROCESS_ORDER: readonly Process[] = [
+	'isobaric',
+	'isochoric',
+	'isothermal',
+	'isentropic',
+	'isenthalpic',
+	'polytropic'
+];
 
 export function processStyle(process: Process): ProcessStyle {
 	return PROCESS_STYLES[process];
@@ -58,6 +113,9 @@ export const LEG_STROKE = { width: 2.25, casing: 6 } as const;
 /** Stroke-pattern signature for comparing patterns: dash and gap lengths over one period. */
 export function dashSignature(dash: string): number[] {
 	if (dash.trim() === '') return [];
-	const parts = dash.trim().split(/[\s,]+/).map(Number);
+	const parts = dash
+		.trim()
+		.split(/[\s,]+/)
+		.map(Number);
 	return parts.length % 2 === 1 ? [...parts, ...parts] : parts;
 }

@@ -15,14 +15,23 @@ export type KeyEntry =
  * What the key lists: the processes the path uses (in a fixed order), then the marks present; an
  * overlaid revision (Compare) by its own label, never as "measured".
  */
-export function keyEntries(legs: readonly ChartLeg[], extras: { limits: boolean; traces: boolean; bands?: boolean; revisions?: readonly string[] }): KeyEntry[] {
+export function keyEntries(
+	legs: readonly ChartLeg[],
+	extras: { limits: boolean; traces: boolean; bands?: boolean; revisions?: readonly string[] }
+): KeyEntry[] {
 	const used = new Set(legs.map((l) => l.process));
-	const out: KeyEntry[] = PROCESS_ORDER.filter((p) => used.has(p)).map((p) => ({ kind: 'process', process: p, text: processStyle(p).name }));
-	if (legs.some((l) => l.crossings.length > 0)) out.push({ kind: 'crossing', text: 'saturation crossing' });
+	const out: KeyEntry[] = PROCESS_ORDER.filter((p) => used.has(p)).map((p) => ({
+		kind: 'process',
+		process: p,
+		text: processStyle(p).name
+	}));
+	if (legs.some((l) => l.crossings.length > 0))
+		out.push({ kind: 'crossing', text: 'saturation crossing' });
 	if (extras.limits) out.push({ kind: 'limit', text: 'design limit' });
 	if (extras.traces) out.push({ kind: 'trace', text: 'measured' });
 	// readings on the saturation line: P and T put them on the isobar across the dome, v open
-	if (extras.bands) out.push({ kind: 'trace-band', text: 'measured at saturation (v not fixed by P, T)' });
+	if (extras.bands)
+		out.push({ kind: 'trace-band', text: 'measured at saturation (v not fixed by P, T)' });
 	for (const text of extras.revisions ?? []) out.push({ kind: 'revision', text });
 	return out;
 }
@@ -36,7 +45,10 @@ export interface KeySlot {
 }
 
 /** Lay key entries out left to right, wrapping at `maxWidth`. */
-export function layoutKey(entries: readonly KeyEntry[], maxWidth: number): { slots: KeySlot[]; rows: number } {
+export function layoutKey(
+	entries: readonly KeyEntry[],
+	maxWidth: number
+): { slots: KeySlot[]; rows: number } {
 	const slots: KeySlot[] = [];
 	let x = 0;
 	let row = 0;

@@ -63,7 +63,10 @@ export function clipPolyline(line: readonly Point[], r: Rect): Point[][] {
 			continue;
 		}
 		const [p, q] = seg;
-		const continues = run !== null && run.length > 0 && Math.hypot(run[run.length - 1].x - p.x, run[run.length - 1].y - p.y) < 1e-9;
+		const continues =
+			run !== null &&
+			run.length > 0 &&
+			Math.hypot(run[run.length - 1].x - p.x, run[run.length - 1].y - p.y) < 1e-9;
 		if (!continues) {
 			run = [p];
 			runs.push(run);
@@ -89,7 +92,8 @@ export class ObstacleIndex {
 	private *keys(r: Rect) {
 		const c = this.cell;
 		for (let i = Math.floor(r.x / c); i <= Math.floor((r.x + r.width) / c); i++)
-			for (let j = Math.floor(r.y / c); j <= Math.floor((r.y + r.height) / c); j++) yield `${i},${j}`;
+			for (let j = Math.floor(r.y / c); j <= Math.floor((r.y + r.height) / c); j++)
+				yield `${i},${j}`;
 	}
 
 	private bucket(k: string) {
@@ -102,7 +106,12 @@ export class ObstacleIndex {
 	}
 
 	addSegment(a: Point, b: Point): void {
-		const box = { x: Math.min(a.x, b.x), y: Math.min(a.y, b.y), width: Math.abs(a.x - b.x), height: Math.abs(a.y - b.y) };
+		const box = {
+			x: Math.min(a.x, b.x),
+			y: Math.min(a.y, b.y),
+			width: Math.abs(a.x - b.x),
+			height: Math.abs(a.y - b.y)
+		};
 		for (const k of this.keys(box)) this.bucket(k).segs.push([a, b]);
 	}
 
@@ -113,7 +122,8 @@ export class ObstacleIndex {
 	addPolyline(points: readonly Point[], clip?: Rect): void {
 		const finite = points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
 		const runs = clip ? clipPolyline(finite, inflate(clip, 8)) : [finite];
-		for (const run of runs) for (let i = 1; i < run.length; i++) this.addSegment(run[i - 1], run[i]);
+		for (const run of runs)
+			for (let i = 1; i < run.length; i++) this.addSegment(run[i - 1], run[i]);
 	}
 
 	addBox(r: Rect): void {
@@ -205,10 +215,17 @@ export function boxesAt(p: Point, w: number, h: number, plot: Rect): [Rect, Rect
 	const below = p.y + 3;
 	const after = p.x + 4 + w > right - 2 ? p.x - 4 - w : p.x + 4;
 	const before = p.x - 4 - w < plot.x + 2 ? p.x + 4 : p.x - 4 - w;
-	if (Math.abs(p.y - plot.y) < e) return [clampBox(after, plot.y + 3, w, h, plot), clampBox(before, plot.y + 3, w, h, plot)];
-	if (Math.abs(p.y - bottom) < e) return [clampBox(after, bottom - h - 3, w, h, plot), clampBox(before, bottom - h - 3, w, h, plot)];
-	if (Math.abs(p.x - right) < e) return [clampBox(right - w - 3, above, w, h, plot), clampBox(right - w - 3, below, w, h, plot)];
-	if (Math.abs(p.x - plot.x) < e) return [clampBox(plot.x + 3, above, w, h, plot), clampBox(plot.x + 3, below, w, h, plot)];
+	if (Math.abs(p.y - plot.y) < e)
+		return [clampBox(after, plot.y + 3, w, h, plot), clampBox(before, plot.y + 3, w, h, plot)];
+	if (Math.abs(p.y - bottom) < e)
+		return [
+			clampBox(after, bottom - h - 3, w, h, plot),
+			clampBox(before, bottom - h - 3, w, h, plot)
+		];
+	if (Math.abs(p.x - right) < e)
+		return [clampBox(right - w - 3, above, w, h, plot), clampBox(right - w - 3, below, w, h, plot)];
+	if (Math.abs(p.x - plot.x) < e)
+		return [clampBox(plot.x + 3, above, w, h, plot), clampBox(plot.x + 3, below, w, h, plot)];
 	const primary = clampBox(after, above < plot.y + 2 ? below : above, w, h, plot);
 	return [primary, clampBox(after, above < plot.y + 2 ? above : below, w, h, plot)];
 }
@@ -256,7 +273,12 @@ export function boxAt(p: Point, w: number, h: number, plot: Rect): Rect {
  * important ones first); a label with no free spot is left out rather than drawn over the path.
  * Placed labels are added to `obstacles`.
  */
-export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, obstacles: ObstacleIndex, options: PlaceOptions = {}): LabelPlacement[] {
+export function placeEdgeLabels(
+	requests: readonly LabelRequest[],
+	plot: Rect,
+	obstacles: ObstacleIndex,
+	options: PlaceOptions = {}
+): LabelPlacement[] {
 	const step = options.step ?? 10;
 	const maxSlide = options.maxSlide ?? 160;
 	const pad = options.pad ?? 2;
@@ -268,8 +290,12 @@ export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, o
 		const endRun = [...runs[runs.length - 1]].reverse();
 		const startRun = runs[0];
 		const edges = req.prefer === 'start' ? [startRun, endRun] : [endRun, startRun];
-		const inside = (p: Point) => p.x >= plot.x && p.x <= plot.x + plot.width && p.y >= plot.y && p.y <= plot.y + plot.height;
-		const order = [(req.anchors ?? []).filter(inside), ...edges.map((run) => pointsAlong(run, step, maxSlide))];
+		const inside = (p: Point) =>
+			p.x >= plot.x && p.x <= plot.x + plot.width && p.y >= plot.y && p.y <= plot.y + plot.height;
+		const order = [
+			(req.anchors ?? []).filter(inside),
+			...edges.map((run) => pointsAlong(run, step, maxSlide))
+		];
 		// its own line, indexed once: each candidate box is then tested against the few segments near it
 		const own = new ObstacleIndex(32);
 		own.addPolyline(req.line, plot);
@@ -279,7 +305,12 @@ export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, o
 				const box = candidateBoxes(p, req.width, req.height, plot, maxGap).find((b) => {
 					const padded = inflate(b, pad);
 					// never struck through by its own line, nor touching anything else
-					return insidePlot(b, plot) && !own.hits(padded) && !obstacles.hits(padded) && !req.avoid?.some((line) => polylineHits(line, padded));
+					return (
+						insidePlot(b, plot) &&
+						!own.hits(padded) &&
+						!obstacles.hits(padded) &&
+						!req.avoid?.some((line) => polylineHits(line, padded))
+					);
 				});
 				if (!box) continue;
 				placed.push({ id: req.id, box, anchor: p });
@@ -294,14 +325,26 @@ export function placeEdgeLabels(requests: readonly LabelRequest[], plot: Rect, o
 }
 
 function insidePlot(b: Rect, plot: Rect, inset = 2): boolean {
-	return b.x >= plot.x + inset - 1e-9 && b.y >= plot.y + inset - 1e-9 && b.x + b.width <= plot.x + plot.width - inset + 1e-9 && b.y + b.height <= plot.y + plot.height - inset + 1e-9;
+	return (
+		b.x >= plot.x + inset - 1e-9 &&
+		b.y >= plot.y + inset - 1e-9 &&
+		b.x + b.width <= plot.x + plot.width - inset + 1e-9 &&
+		b.y + b.height <= plot.y + plot.height - inset + 1e-9
+	);
 }
 
 /**
  * A small label beside a point (the critical point's "c.p."): up-right, down-right, up-left,
  * down-left, the first spot that is inside the plot and free. Null when none is.
  */
-export function placeNear(p: Point, w: number, h: number, plot: Rect, obstacles: ObstacleIndex, gap = 5): Rect | null {
+export function placeNear(
+	p: Point,
+	w: number,
+	h: number,
+	plot: Rect,
+	obstacles: ObstacleIndex,
+	gap = 5
+): Rect | null {
 	// the four corners first, then straight above, below, right and left; each a little further out if taken
 	const spots: Point[] = [];
 	for (const g of [gap, gap + 4, gap + 9])
@@ -331,7 +374,12 @@ export function placeNear(p: Point, w: number, h: number, plot: Rect, obstacles:
  * a limit isotherm's on P–v. Ordered right to left (just the stretch's left end when the label is
  * longer than the stretch); empty when no stretch is as long as `minLength` px.
  */
-export function levelAnchors(line: readonly Point[], width: number, step = 12, minLength = 48): Point[] {
+export function levelAnchors(
+	line: readonly Point[],
+	width: number,
+	step = 12,
+	minLength = 48
+): Point[] {
 	let best: [number, number] | null = null;
 	let i = 0;
 	while (i < line.length - 1) {
@@ -401,8 +449,14 @@ export function placeChartLabels(scene: LabelScene, labels: SceneLabels, pad = 2
 	for (const leg of scene.path) obstacles.addPolyline(leg, scene.plot);
 	for (const m of scene.marks) obstacles.addBox(m);
 	// limits and c.p. first, over the background hairlines (which are then cut under them)
-	const limits = placeEdgeLabels(labels.limits, scene.plot, obstacles, { maxSlide: scene.plot.width + scene.plot.height, step: 8, pad });
-	const near = labels.near ? placeNear(labels.near.point, labels.near.width, labels.near.height, scene.plot, obstacles) : null;
+	const limits = placeEdgeLabels(labels.limits, scene.plot, obstacles, {
+		maxSlide: scene.plot.width + scene.plot.height,
+		step: 8,
+		pad
+	});
+	const near = labels.near
+		? placeNear(labels.near.point, labels.near.width, labels.near.height, scene.plot, obstacles)
+		: null;
 	const masks = [...limits.map((l) => inflate(l.box, pad)), ...(near ? [inflate(near, pad)] : [])];
 	// isoline labels keep off every line, background included
 	for (const line of scene.background ?? []) obstacles.addPolyline(line, scene.plot);

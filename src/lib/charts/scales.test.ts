@@ -1,6 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import { unitById, unitPrefs } from '$lib/units';
-import { axisTicks, axisUnit, compactNumber, decadeLabel, fitDomain, linearTicks, logTicks, makeXScale, makeYScale, thinLabels, yScaleType } from './scales';
+import {
+	axisTicks,
+	axisUnit,
+	compactNumber,
+	decadeLabel,
+	fitDomain,
+	linearTicks,
+	logTicks,
+	makeXScale,
+	makeYScale,
+	thinLabels,
+	yScaleType
+} from './scales';
 import { chartState } from './test-fixtures';
 import type { SaturationCurve } from './types';
 
@@ -10,8 +22,14 @@ const us = unitPrefs({ system: 'us' });
 
 // A coarse dome shape for domain tests only (values rounded, from memory: handbook steam table).
 const dome: SaturationCurve = {
-	liquid: [chartState(273.16, 611.7, 0.001, 'saturated-liquid'), chartState(473.15, 1.555e6, 0.001157, 'saturated-liquid')],
-	vapor: [chartState(273.16, 611.7, 206, 'saturated-vapor'), chartState(473.15, 1.555e6, 0.1272, 'saturated-vapor')],
+	liquid: [
+		chartState(273.16, 611.7, 0.001, 'saturated-liquid'),
+		chartState(473.15, 1.555e6, 0.001157, 'saturated-liquid')
+	],
+	vapor: [
+		chartState(273.16, 611.7, 206, 'saturated-vapor'),
+		chartState(473.15, 1.555e6, 0.1272, 'saturated-vapor')
+	],
 	critical: chartState(647.096, 22.064e6, 1 / 322, 'supercritical-fluid') // IAPWS R6-95(2018): Tc, pc, ρc
 };
 
@@ -47,7 +65,10 @@ describe('domains', () => {
 			limits: { designTemperature: { value: 1000 } }
 		});
 		expect(d.y[1]).toBeGreaterThan(1000);
-		const p = fitDomain('P-v', 'log', { saturation: dome, limits: { reliefSetPressure: { value: 40e6 } } });
+		const p = fitDomain('P-v', 'log', {
+			saturation: dome,
+			limits: { reliefSetPressure: { value: 40e6 } }
+		});
 		expect(p.y[1]).toBeGreaterThan(40e6);
 	});
 
@@ -86,7 +107,8 @@ describe('log ticks', () => {
 		// 1e-3 m³/kg = 0.016 ft³/lbm, 10 m³/kg = 160 ft³/lbm
 		expect(majors.map((x) => x.label)).toEqual(['0.1', '1', '10', '100']);
 		// NIST SP 811 (2008), App. B.8: 1 ft³/lb = 6.242 796 E-02 m³/kg (from memory; exact from ft and lb)
-		for (const m of majors) expect(m.value / m.display).toBeCloseTo(0.028316846592 / 0.45359237, 12);
+		for (const m of majors)
+			expect(m.value / m.display).toBeCloseTo(0.028316846592 / 0.45359237, 12);
 	});
 
 	it('a narrow window labels 2 and 5, or every tick', () => {
@@ -115,7 +137,17 @@ describe('linear ticks', () => {
 	it('temperature ticks at round °C, placed in kelvin', () => {
 		const t = linearTicks([273.15, 673.15], unitById('degC'), atm, 8);
 		const majors = t.filter((x) => x.major);
-		expect(majors.map((x) => x.label)).toEqual(['0', '50', '100', '150', '200', '250', '300', '350', '400']);
+		expect(majors.map((x) => x.label)).toEqual([
+			'0',
+			'50',
+			'100',
+			'150',
+			'200',
+			'250',
+			'300',
+			'350',
+			'400'
+		]);
 		expect(majors[2].value).toBeCloseTo(373.15, 9);
 		expect(t.filter((x) => !x.major).length).toBeGreaterThan(majors.length * 3); // minors between
 	});
@@ -142,24 +174,42 @@ describe('linear ticks', () => {
 
 	it('a log pressure axis is absolute even when the sheet shows gauge', () => {
 		expect(axisUnit('P', unitPrefs({ pressureReference: 'gauge' }), 'log').label).toBe('kPa a');
-		expect(axisUnit('P', unitPrefs({ system: 'us', pressureReference: 'gauge' }), 'log').label).toBe('psia');
-		expect(axisUnit('P', unitPrefs({ pressureUnit: 'auto' }), 'log', [600, 22e6]).label).toBe('MPa a');
+		expect(
+			axisUnit('P', unitPrefs({ system: 'us', pressureReference: 'gauge' }), 'log').label
+		).toBe('psia');
+		expect(axisUnit('P', unitPrefs({ pressureUnit: 'auto' }), 'log', [600, 22e6]).label).toBe(
+			'MPa a'
+		);
 	});
 
 	it('axis units follow the system', () => {
 		expect(axisUnit('v', us, 'log').label).toBe('ft³/lbm');
 		expect(axisUnit('T', us, 'log').label).toBe('°F');
 		expect(axisUnit('T', si, 'log').label).toBe('°C');
-		expect(axisTicks('linear', [273.15, 373.15], axisUnit('T', us, 'log'), atm, 5).filter((t) => t.major)[0].label).toBe('50');
+		expect(
+			axisTicks('linear', [273.15, 373.15], axisUnit('T', us, 'log'), atm, 5).filter(
+				(t) => t.major
+			)[0].label
+		).toBe('50');
 	});
 });
 
 describe('label thinning and compact numbers', () => {
 	it('drops labels that would touch their neighbours', () => {
 		const ticks = logTicks([1e-3, 1e3], unitById('m3/kg'), atm);
-		const wide = thinLabels(ticks, (v) => Math.log10(v) * 100, 8, (l) => l.length * 6);
+		const wide = thinLabels(
+			ticks,
+			(v) => Math.log10(v) * 100,
+			8,
+			(l) => l.length * 6
+		);
 		expect(wide.filter((t) => t.label).length).toBe(7);
-		const tight = thinLabels(ticks, (v) => Math.log10(v) * 20, 8, (l) => l.length * 6);
+		const tight = thinLabels(
+			ticks,
+			(v) => Math.log10(v) * 20,
+			8,
+			(l) => l.length * 6
+		);
 		const kept = tight.filter((t) => t.label);
 		expect(kept.length).toBeLessThan(7);
 		expect(kept.length).toBeGreaterThan(1);

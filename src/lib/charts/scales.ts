@@ -1,6 +1,21 @@
-import { scaleLinear, scaleLog, tickStep, ticks as linearTickValues, type ScaleContinuousNumeric } from 'd3';
+import {
+	scaleLinear,
+	scaleLog,
+	tickStep,
+	ticks as linearTickValues,
+	type ScaleContinuousNumeric
+} from 'd3';
 import { displayUnit, exponentText, formatNumber, type UnitDef, type UnitPrefs } from '$lib/units';
-import type { ChartKind, ChartLeg, ChartState, DesignLimits, Domain, PressureScale, SaturationCurve, TriplePoint } from './types';
+import type {
+	ChartKind,
+	ChartLeg,
+	ChartState,
+	DesignLimits,
+	Domain,
+	PressureScale,
+	SaturationCurve,
+	TriplePoint
+} from './types';
 
 export type Scale = ScaleContinuousNumeric<number, number>;
 
@@ -21,8 +36,15 @@ export function makeXScale(domain: Domain, width: number): Scale {
 	return scaleLog().domain(domain.x).range([0, width]);
 }
 
-export function makeYScale(kind: ChartKind, pressureScale: PressureScale, domain: Domain, height: number): Scale {
-	return (yScaleType(kind, pressureScale) === 'log' ? scaleLog() : scaleLinear()).domain(domain.y).range([height, 0]);
+export function makeYScale(
+	kind: ChartKind,
+	pressureScale: PressureScale,
+	domain: Domain,
+	height: number
+): Scale {
+	return (yScaleType(kind, pressureScale) === 'log' ? scaleLog() : scaleLinear())
+		.domain(domain.y)
+		.range([height, 0]);
 }
 
 /**
@@ -30,7 +52,12 @@ export function makeYScale(kind: ChartKind, pressureScale: PressureScale, domain
  * P in the preferred pressure unit, absolute on a log axis (gauge values can be zero or
  * negative, which a log axis cannot show), else the preferred reference.
  */
-export function axisUnit(axis: 'v' | 'T' | 'P', prefs: UnitPrefs, pressureScale: PressureScale, domainSI?: [number, number]): UnitDef {
+export function axisUnit(
+	axis: 'v' | 'T' | 'P',
+	prefs: UnitPrefs,
+	pressureScale: PressureScale,
+	domainSI?: [number, number]
+): UnitDef {
 	if (axis === 'v') return displayUnit('specificVolume', prefs);
 	if (axis === 'T') return displayUnit('temperature', prefs);
 	return displayUnit('pressure', prefs, {
@@ -90,18 +117,26 @@ function* pointsOf(inputs: DomainInputs) {
  * limits, padded; v and log P by a fraction of a decade, T and linear P by a share of the span.
  * Linear pressure starts at zero absolute at the lowest.
  */
-export function fitDomain(kind: ChartKind, pressureScale: PressureScale, inputs: DomainInputs): Domain {
+export function fitDomain(
+	kind: ChartKind,
+	pressureScale: PressureScale,
+	inputs: DomainInputs
+): Domain {
 	const pts = [...pointsOf(inputs)];
 	const v = extent(pts.map((p) => p.v).filter((x) => x > 0));
 	const x = v ? padLog(v) : ([1e-3, 10] as [number, number]);
 	const lim = inputs.limits ?? {};
 	if (kind === 'T-v') {
-		const limitT = [lim.designTemperature?.value, lim.minimumTemperature?.value].filter((t): t is number => t !== undefined);
+		const limitT = [lim.designTemperature?.value, lim.minimumTemperature?.value].filter(
+			(t): t is number => t !== undefined
+		);
 		const T = extent([...pts.map((p) => p.T), ...limitT]);
 		const floor = inputs.triple ? inputs.triple.T - 10 : 0;
 		return { x, y: T ? padLinear(T, Math.max(0, floor)) : [273.15, 673.15] };
 	}
-	const limitP = [lim.designPressure?.value, lim.reliefSetPressure?.value].filter((p): p is number => p !== undefined);
+	const limitP = [lim.designPressure?.value, lim.reliefSetPressure?.value].filter(
+		(p): p is number => p !== undefined
+	);
 	const P = extent([...pts.map((p) => p.P), ...limitP].filter((p) => p > 0));
 	if (pressureScale === 'log') return { x, y: P ? padLog(P) : [1e3, 1e7] };
 	return { x, y: P ? padLinear([0, P[1]], 0) : [0, 1e7] };
@@ -118,7 +153,12 @@ export function compactNumber(value: number, sig = 4): string {
  * positioned in SI. Majors are labelled with just enough decimals for the step; four minor
  * ticks (or one, for a step of 2·10ⁿ) fall between.
  */
-export function linearTicks(domainSI: [number, number], unit: UnitDef, atmosphere: number, count = 7): Tick[] {
+export function linearTicks(
+	domainSI: [number, number],
+	unit: UnitDef,
+	atmosphere: number,
+	count = 7
+): Tick[] {
 	const d0 = unit.fromSI(domainSI[0], atmosphere);
 	const d1 = unit.fromSI(domainSI[1], atmosphere);
 	const [lo, hi] = d0 <= d1 ? [d0, d1] : [d1, d0];
@@ -146,7 +186,8 @@ export function linearTicks(domainSI: [number, number], unit: UnitDef, atmospher
 
 /** A decade label: plain for 10⁻⁴…10⁵ ("0.001", "2000"), a power of ten outside ("10⁻⁵", "2×10⁶"). */
 export function decadeLabel(exp: number, mantissa = 1): string {
-	if (exp >= -4 && exp <= 5) return formatNumber(Number(`${mantissa}e${exp}`), { decimals: Math.max(0, -exp) });
+	if (exp >= -4 && exp <= 5)
+		return formatNumber(Number(`${mantissa}e${exp}`), { decimals: Math.max(0, -exp) });
 	return mantissa === 1 ? exponentText(exp).slice(1) : `${mantissa}${exponentText(exp)}`;
 }
 
@@ -169,7 +210,8 @@ export function logTicks(domainSI: [number, number], unit: UnitDef, atmosphere: 
 	for (let e = e0; e <= e1; e++) {
 		for (let m = 1; m <= 9; m++) {
 			const display = Number(`${m}e${e}`);
-			if (display >= lo * (1 - 1e-12) && display <= hi * (1 + 1e-12)) candidates.push({ display, exp: e, m });
+			if (display >= lo * (1 - 1e-12) && display <= hi * (1 + 1e-12))
+				candidates.push({ display, exp: e, m });
 		}
 	}
 	const decades = candidates.filter((c) => c.m === 1).length;
@@ -177,21 +219,41 @@ export function logTicks(domainSI: [number, number], unit: UnitDef, atmosphere: 
 	if (span < 1 / 3 || candidates.filter((c) => labelled(c.m)).length < 2) labelled = () => true;
 	return candidates.map(({ display, exp, m }) => {
 		const major = labelled(m);
-		return { value: unit.toSI(display, atmosphere), display, label: major ? decadeLabel(exp, m) : '', major };
+		return {
+			value: unit.toSI(display, atmosphere),
+			display,
+			label: major ? decadeLabel(exp, m) : '',
+			major
+		};
 	});
 }
 
 /** Ticks for either scale type. */
-export function axisTicks(type: 'log' | 'linear', domainSI: [number, number], unit: UnitDef, atmosphere: number, count?: number): Tick[] {
-	return type === 'log' ? logTicks(domainSI, unit, atmosphere) : linearTicks(domainSI, unit, atmosphere, count);
+export function axisTicks(
+	type: 'log' | 'linear',
+	domainSI: [number, number],
+	unit: UnitDef,
+	atmosphere: number,
+	count?: number
+): Tick[] {
+	return type === 'log'
+		? logTicks(domainSI, unit, atmosphere)
+		: linearTicks(domainSI, unit, atmosphere, count);
 }
 
 /**
  * Drop labels that would crowd their neighbours on screen: walking in order, a label is kept
  * only if it starts `minGap` px after the last kept one ends (labels `widthOf` px wide, centred).
  */
-export function thinLabels(ticks: Tick[], position: (si: number) => number, minGap: number, widthOf: (label: string) => number): Tick[] {
-	const majors = ticks.filter((t) => t.label !== '').sort((a, b) => position(a.value) - position(b.value));
+export function thinLabels(
+	ticks: Tick[],
+	position: (si: number) => number,
+	minGap: number,
+	widthOf: (label: string) => number
+): Tick[] {
+	const majors = ticks
+		.filter((t) => t.label !== '')
+		.sort((a, b) => position(a.value) - position(b.value));
 	let lastEnd = -Infinity;
 	const keep = new Set<Tick>();
 	for (const t of majors) {

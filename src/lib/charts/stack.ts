@@ -7,7 +7,11 @@ import type { Point } from './types';
  * plus a gap per earlier state there), so both labels show. The first of a stack stays on its point.
  * Offsets are for drawing and picking only: the state keeps its coordinates.
  */
-export function stackOffsets(points: readonly (Point & { id: string })[], radius: number, gap = 2): Map<string, Point & { beside?: string }> {
+export function stackOffsets(
+	points: readonly (Point & { id: string })[],
+	radius: number,
+	gap = 2
+): Map<string, Point & { beside?: string }> {
 	const out = new Map<string, Point & { beside?: string }>();
 	const anchors: { id: string; x: number; y: number; count: number }[] = [];
 	for (const p of points) {

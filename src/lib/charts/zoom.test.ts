@@ -14,7 +14,10 @@ describe('wheel zoom keeps the point under the pointer (plotTransform)', () => {
 			const x = plotTransform(t, plot).rescaleX(x0);
 			expect(plot.x + x(v)).toBeCloseTo(pointer, 9);
 			// without the shift the point drifts by (k − 1)·plot.x
-			expect(Math.abs(plot.x + t.rescaleX(x0)(v) - pointer)).toBeCloseTo(Math.abs(k - 1) * plot.x, 6);
+			expect(Math.abs(plot.x + t.rescaleX(x0)(v) - pointer)).toBeCloseTo(
+				Math.abs(k - 1) * plot.x,
+				6
+			);
 		}
 	});
 });

@@ -15,8 +15,12 @@ describe('ProcessChart (server render)', () => {
 				legs: []
 			}
 		});
-		expect(body).toMatch(/<svg[^>]*role="img"[^>]*aria-label="Temperature–specific volume diagram of water, with the vapor dome and 1 state and 0 legs\."/);
-		expect(body).toMatch(/<desc id="pc-[^"]+-desc">[^<]*State S1, superheated vapor, 180\.0.°C, 1000.kPa a/);
+		expect(body).toMatch(
+			/<svg[^>]*role="img"[^>]*aria-label="Temperature–specific volume diagram of water, with the vapor dome and 1 state and 0 legs\."/
+		);
+		expect(body).toMatch(
+			/<desc id="pc-[^"]+-desc">[^<]*State S1, superheated vapor, 180\.0.°C, 1000.kPa a/
+		);
 		expect(body).toMatch(/role="group"/);
 		expect(body).toContain('Scroll or pinch to zoom');
 	});

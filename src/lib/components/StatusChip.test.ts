@@ -10,6 +10,8 @@ describe('StatusChip', () => {
 		expect(returned).not.toContain('Draft');
 		expect(render(StatusChip, { props: { status: 'draft' } }).body).toContain('Draft');
 		// only a draft can read as returned
-		expect(render(StatusChip, { props: { status: 'in-check', returned: true } }).body).toContain('In check');
+		expect(render(StatusChip, { props: { status: 'in-check', returned: true } }).body).toContain(
+			'In check'
+		);
 	});
 });

@@ -8,7 +8,9 @@ export function keepInside(node: HTMLElement): void {
 		node.style.transform = '';
 		const box = node.getBoundingClientRect();
 		const scroller = node.closest<HTMLElement>('[data-popover-bounds]');
-		const bounds = scroller ? scroller.getBoundingClientRect() : { left: 0, right: window.innerWidth };
+		const bounds = scroller
+			? scroller.getBoundingClientRect()
+			: { left: 0, right: window.innerWidth };
 		const left = Math.max(bounds.left, 0) + 4;
 		const right = Math.min(bounds.right, window.innerWidth) - 4;
 		let dx = 0;

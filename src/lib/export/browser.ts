@@ -4,7 +4,15 @@ import plex400i from '@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-400-it
 import plex600 from '@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-600-normal.woff2?url';
 import mono400 from '@fontsource/jetbrains-mono/files/jetbrains-mono-latin-400-normal.woff2?url';
 import mono600 from '@fontsource/jetbrains-mono/files/jetbrains-mono-latin-600-normal.woff2?url';
-import { composeMemoFigure, MEMO_COLUMN, PAPER_THEME, type MemoDrawing, type MemoFigure, type MemoFont, type MemoTitle } from './memo';
+import {
+	composeMemoFigure,
+	MEMO_COLUMN,
+	PAPER_THEME,
+	type MemoDrawing,
+	type MemoFigure,
+	type MemoFont,
+	type MemoTitle
+} from './memo';
 
 /*
  * The browser half of the memo exports: serialise the live chart drawing, load the shipped fonts
@@ -25,7 +33,8 @@ let fontsLoading: Promise<MemoFont[]> | undefined;
 function base64(buffer: ArrayBuffer): string {
 	const bytes = new Uint8Array(buffer);
 	let binary = '';
-	for (let i = 0; i < bytes.length; i += 0x8000) binary += String.fromCharCode(...bytes.subarray(i, i + 0x8000));
+	for (let i = 0; i < bytes.length; i += 0x8000)
+		binary += String.fromCharCode(...bytes.subarray(i, i + 0x8000));
 	return btoa(binary);
 }
 
@@ -67,9 +76,14 @@ const frame = () => new Promise<void>((resolve) => requestAnimationFrame(() => r
  * (the charts stack and redraw at that width, with their text at its on-screen size), then put
  * back. Waits, frame by frame, until every drawing has the new width; at most ~2 s.
  */
-export async function drawingsAtWidth(get: () => SVGSVGElement[], width: number): Promise<MemoDrawing[]> {
+export async function drawingsAtWidth(
+	get: () => SVGSVGElement[],
+	width: number
+): Promise<MemoDrawing[]> {
 	const first = get()[0];
-	const host = first?.closest<HTMLElement>('[data-testid="sheet-charts"], [data-testid="path-charts"]');
+	const host = first?.closest<HTMLElement>(
+		'[data-testid="sheet-charts"], [data-testid="path-charts"]'
+	);
 	if (!host) return get().map(serializeDrawing);
 	const saved = host.style.cssText;
 	host.style.width = `${width}px`;
@@ -78,7 +92,8 @@ export async function drawingsAtWidth(get: () => SVGSVGElement[], width: number)
 		for (let i = 0; i < 120; i++) {
 			await frame();
 			const els = get();
-			if (els.length && els.every((el) => Math.round(el.getBoundingClientRect().width) <= width)) break;
+			if (els.length && els.every((el) => Math.round(el.getBoundingClientRect().width) <= width))
+				break;
 		}
 		await frame();
 		return get().map(serializeDrawing);
@@ -88,9 +103,18 @@ export async function drawingsAtWidth(get: () => SVGSVGElement[], width: number)
 }
 
 /** Composes the memo figure from live drawings: side by side as on screen, or stacked in a memo column. */
-export async function memoFigure(drawings: () => SVGSVGElement[], title: MemoTitle, caution: string, findings: string[] = [], layout: 'wide' | 'column' = 'wide'): Promise<MemoFigure> {
+export async function memoFigure(
+	drawings: () => SVGSVGElement[],
+	title: MemoTitle,
+	caution: string,
+	findings: string[] = [],
+	layout: 'wide' | 'column' = 'wide'
+): Promise<MemoFigure> {
 	const fonts = await loadMemoFonts();
-	const d = layout === 'column' ? await drawingsAtWidth(drawings, MEMO_COLUMN.widthPx - 16) : drawings().map(serializeDrawing);
+	const d =
+		layout === 'column'
+			? await drawingsAtWidth(drawings, MEMO_COLUMN.widthPx - 16)
+			: drawings().map(serializeDrawing);
 	return composeMemoFigure({ drawings: d, title, caution, findings, fonts, layout });
 }
 
@@ -102,7 +126,9 @@ export async function memoFigure(drawings: () => SVGSVGElement[], title: MemoTit
 export async function memoPng(figure: MemoFigure, pixelRatio: number): Promise<Blob> {
 	const host = document.createElement('div');
 	host.setAttribute('aria-hidden', 'true');
-	host.style.cssText = `position:fixed;left:-100000px;top:0;width:${figure.width}px;height:${figure.height}px;${Object.entries(PAPER_THEME)
+	host.style.cssText = `position:fixed;left:-100000px;top:0;width:${figure.width}px;height:${figure.height}px;${Object.entries(
+		PAPER_THEME
+	)
 		.map(([k, v]) => `${k}:${v}`)
 		.join(';')}`;
 	host.innerHTML = figure.svg;

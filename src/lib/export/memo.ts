@@ -80,7 +80,13 @@ export interface MemoInput {
  * 1004 / 320 = 3.1375 pixels per CSS px, so 1 CSS px prints as 85/320 mm and the smallest text
  * (minFontPx, 9.5 px) as 9.5 × 85/320 mm = 7.15 pt (1 pt = 25.4/72 mm).
  */
-export const MEMO_COLUMN = { widthPx: 320, widthMm: 85, dpi: 300, outputPx: 1004, minFontPx: 9.5 } as const;
+export const MEMO_COLUMN = {
+	widthPx: 320,
+	widthMm: 85,
+	dpi: 300,
+	outputPx: 1004,
+	minFontPx: 9.5
+} as const;
 export const MEMO_COLUMN_PIXEL_RATIO = MEMO_COLUMN.outputPx / MEMO_COLUMN.widthPx;
 
 /** The printed size in points of `px` CSS px of a column figure placed at its column width. */
@@ -123,7 +129,10 @@ const SANS = `'IBM Plex Sans', system-ui, sans-serif`;
 const MONO = `'JetBrains Mono', ui-monospace, monospace`;
 
 export function escapeXml(s: string): string {
-	return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c]!);
+	return s.replace(
+		/[&<>"']/g,
+		(c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' })[c]!
+	);
 }
 
 /** ISO date (UTC) of a Unix ms time, as engineering documents date things. */
@@ -134,7 +143,10 @@ export function isoDate(ms: number | null): string {
 /** @font-face rules for embedded fonts. */
 export function fontFaceCss(fonts: readonly MemoFont[]): string {
 	return fonts
-		.map((f) => `@font-face{font-family:'${f.family}';font-style:${f.style};font-weight:${f.weight};font-display:block;src:url(${f.dataUrl}) format('woff2');}`)
+		.map(
+			(f) =>
+				`@font-face{font-family:'${f.family}';font-style:${f.style};font-weight:${f.weight};font-display:block;src:url(${f.dataUrl}) format('woff2');}`
+		)
 		.join('\n');
 }
 
@@ -194,15 +206,40 @@ interface LayoutStyle {
 	valueInset: number;
 }
 
-const WIDE: LayoutStyle = { margin: MARGIN, label: 7.5, value: 11.5, mono: 10.5, big: 15, note: 10, noteLine: 13, labelY: 12, valueInset: 9 };
-const COLUMN: LayoutStyle = { margin: 8, label: MEMO_COLUMN.minFontPx, value: 10.5, mono: 10, big: 12.5, note: MEMO_COLUMN.minFontPx, noteLine: 12.5, labelY: 12, valueInset: 7 };
+const WIDE: LayoutStyle = {
+	margin: MARGIN,
+	label: 7.5,
+	value: 11.5,
+	mono: 10.5,
+	big: 15,
+	note: 10,
+	noteLine: 13,
+	labelY: 12,
+	valueInset: 9
+};
+const COLUMN: LayoutStyle = {
+	margin: 8,
+	label: MEMO_COLUMN.minFontPx,
+	value: 10.5,
+	mono: 10,
+	big: 12.5,
+	note: MEMO_COLUMN.minFontPx,
+	noteLine: 12.5,
+	labelY: 12,
+	valueInset: 7
+};
 
 function wideRows(title: MemoTitle): { h: number; cells: Cell[] }[] {
 	return [
 		{
 			h: 46,
 			cells: [
-				{ label: title.team ? `Sheet · ${title.team}` : 'Sheet', value: title.sheet, w: 0.5, big: true },
+				{
+					label: title.team ? `Sheet · ${title.team}` : 'Sheet',
+					value: title.sheet,
+					w: 0.5,
+					big: true
+				},
 				{ label: 'Revision', value: title.revision, w: 0.2 },
 				{ label: 'Status', value: title.status, w: 0.12 },
 				{ label: 'Document no.', value: title.documentNumber || '—', w: 0.18, mono: true }
@@ -242,14 +279,32 @@ function wideRows(title: MemoTitle): { h: number; cells: Cell[] }[] {
  * The title block for a column: one full-width field a row, its value wrapped rather than cut, so
  * the text keeps its size; fields that say nothing are left out.
  */
-function columnFields(title: MemoTitle): { label: string; value: string; mono?: boolean; big?: boolean }[] {
-	const join = (parts: Array<string | undefined>, sep = ' · ') => parts.filter((p) => p && p !== '—').join(sep);
+function columnFields(
+	title: MemoTitle
+): { label: string; value: string; mono?: boolean; big?: boolean }[] {
+	const join = (parts: Array<string | undefined>, sep = ' · ') =>
+		parts.filter((p) => p && p !== '—').join(sep);
 	const signed = (what: string, p: MemoPerson) => (p.name ? `${what} ${person(p)}` : '');
 	const equipment = join([title.tag, title.equipment, title.project, title.site]);
-	const signOff = join([signed('Designed', title.designer), signed('checked', title.checker), signed('approved', title.approver)], '; ');
+	const signOff = join(
+		[
+			signed('Designed', title.designer),
+			signed('checked', title.checker),
+			signed('approved', title.approver)
+		],
+		'; '
+	);
 	return [
 		{ label: title.team ? `Sheet · ${title.team}` : 'Sheet', value: title.sheet, big: true },
-		{ label: 'Revision', value: join([title.revision, title.status, title.documentNumber, `issued ${isoDate(title.issued)}`]) },
+		{
+			label: 'Revision',
+			value: join([
+				title.revision,
+				title.status,
+				title.documentNumber,
+				`issued ${isoDate(title.issued)}`
+			])
+		},
 		...(equipment ? [{ label: 'Equipment', value: equipment }] : []),
 		{ label: 'Fluid and system', value: `${title.fluid}, ${title.formulation}; ${title.system}` },
 		{ label: 'Sign-off', value: signOff || 'Not signed' },
@@ -274,12 +329,15 @@ export function composeMemoFigure(input: MemoInput): MemoFigure {
 		for (const d of drawings) {
 			const k = Math.min(1, inner / d.width);
 			const x = M + (inner - d.width * k) / 2;
-			parts.push(`<g class="swm-drawing" transform="translate(${x.toFixed(1)},${y.toFixed(1)})${k < 1 ? ` scale(${k.toFixed(4)})` : ''}">${d.svg}</g>`);
+			parts.push(
+				`<g class="swm-drawing" transform="translate(${x.toFixed(1)},${y.toFixed(1)})${k < 1 ? ` scale(${k.toFixed(4)})` : ''}">${d.svg}</g>`
+			);
 			y += d.height * k + GAP;
 		}
 		drawingsBottom = drawings.length ? y - GAP : M;
 	} else {
-		const drawingsWidth = drawings.reduce((s, d) => s + d.width, 0) + GAP * Math.max(0, drawings.length - 1);
+		const drawingsWidth =
+			drawings.reduce((s, d) => s + d.width, 0) + GAP * Math.max(0, drawings.length - 1);
 		width = Math.round(Math.max(MIN_WIDTH, drawingsWidth + 2 * M));
 		let x = M + (width - 2 * M - drawingsWidth) / 2;
 		for (const d of drawings) {
@@ -335,11 +393,15 @@ export function composeMemoFigure(input: MemoInput): MemoFigure {
 	const notes: string[] = [];
 	for (const para of [...(title.overrides ?? []), ...(input.findings ?? [])]) {
 		const lines = wrapText(para, inner, L.note);
-		notes.push(`<text class="swm-finding">${lines.map((l, i) => `<tspan x="${M}" y="${y + i * L.noteLine}">${escapeXml(l)}</tspan>`).join('')}</text>`);
+		notes.push(
+			`<text class="swm-finding">${lines.map((l, i) => `<tspan x="${M}" y="${y + i * L.noteLine}">${escapeXml(l)}</tspan>`).join('')}</text>`
+		);
 		y += lines.length * L.noteLine + 4;
 	}
 	const cautionLines = wrapText(input.caution, inner, L.note);
-	const caution = cautionLines.map((l, i) => `<tspan x="${M}" y="${y + i * L.noteLine}">${escapeXml(l)}</tspan>`).join('');
+	const caution = cautionLines
+		.map((l, i) => `<tspan x="${M}" y="${y + i * L.noteLine}">${escapeXml(l)}</tspan>`)
+		.join('');
 	const height = Math.round(y + (cautionLines.length - 1) * L.noteLine + M);
 
 	const vars = Object.entries(PAPER_THEME)

@@ -12,7 +12,11 @@ export function fileStem(name: string): string {
 }
 
 /** Offers a blob (or text) as a download with this file name. */
-export function download(data: Blob | string, filename: string, type = 'text/plain;charset=utf-8'): void {
+export function download(
+	data: Blob | string,
+	filename: string,
+	type = 'text/plain;charset=utf-8'
+): void {
 	const blob = typeof data === 'string' ? new Blob([data], { type }) : data;
 	const url = URL.createObjectURL(blob);
 	const a = document.createElement('a');

@@ -30,12 +30,20 @@ const textRows = (rows: string[][]) => rows.map((r) => r.map((c) => csvCell(c)))
  * heading, text), then a "States" block and a "Legs" block, separated by blank lines. Free text is
  * neutralised against formulas (csvCell); numbers stay numbers.
  */
-export function tableCsv(result: PathResult, prefs: UnitPrefs, caption: string[], findings: MemoFindings): string {
+export function tableCsv(
+	result: PathResult,
+	prefs: UnitPrefs,
+	caption: string[],
+	findings: MemoFindings
+): string {
 	const t = sheetTable(result, prefs, { style: 'ascii' });
 	const block = (title: string, b: SheetTable['states']) =>
 		Papa.unparse({ fields: [title, ...b.columns.slice(1).map(() => '')], data: [] }) +
 		'\r\n' +
-		Papa.unparse({ fields: b.columns.map((c) => csvCell(c.header)), data: b.rows.map((r) => r.map((c, j) => csvCell(c, b.columns[j].numeric))) });
+		Papa.unparse({
+			fields: b.columns.map((c) => csvCell(c.header)),
+			data: b.rows.map((r) => r.map((c, j) => csvCell(c, b.columns[j].numeric)))
+		});
 	const head = caption.length ? Papa.unparse(textRows(caption.map((c) => [c]))) + '\r\n\r\n' : '';
 	const found = Papa.unparse({
 		fields: ['Findings', 'Heading', 'Text'],
@@ -45,5 +53,15 @@ export function tableCsv(result: PathResult, prefs: UnitPrefs, caption: string[]
 			['Caution', findings.cautionTitle, findings.caution]
 		])
 	});
-	return head + found + '\r\n\r\n' + block('States', t.states) + '\r\n\r\n' + block('Legs', t.legs) + '\r\n\r\n' + Papa.unparse(textRows([[t.note]])) + '\r\n';
+	return (
+		head +
+		found +
+		'\r\n\r\n' +
+		block('States', t.states) +
+		'\r\n\r\n' +
+		block('Legs', t.legs) +
+		'\r\n\r\n' +
+		Papa.unparse(textRows([[t.note]])) +
+		'\r\n'
+	);
 }

@@ -44,10 +44,16 @@ export const stateLabel = (index: number) => `S${index + 1}`;
 
 export function processText(process: string, n?: number): string {
 	const name = processStyle(process as Parameters<typeof processStyle>[0])?.name ?? process;
-	return process === 'polytropic' && n !== undefined ? `${name}, n = ${formatNumber(n, { sig: 4 })}` : name;
+	return process === 'polytropic' && n !== undefined
+		? `${name}, n = ${formatNumber(n, { sig: 4 })}`
+		: name;
 }
 
-export function sheetTable(result: PathResult, prefs: UnitPrefs, options: TableOptions = {}): SheetTable {
+export function sheetTable(
+	result: PathResult,
+	prefs: UnitPrefs,
+	options: TableOptions = {}
+): SheetTable {
 	const style = options.style ?? 'unicode';
 	const q = (si: number | null | undefined, quantity: Quantity, magnitude?: number[]): string => {
 		if (si === null || si === undefined || !Number.isFinite(si)) return '';
@@ -66,8 +72,16 @@ export function sheetTable(result: PathResult, prefs: UnitPrefs, options: TableO
 			{ key: 'h', header: `h [${unitLabel('specificEnergy', prefs)}]`, numeric: true },
 			{ key: 's', header: `s [${unitLabel('specificEntropy', prefs)}]`, numeric: true },
 			{ key: 'x', header: 'x [–]', numeric: true },
-			{ key: 'superheat', header: `superheat [${unitLabel('temperatureDifference', prefs)}]`, numeric: true },
-			{ key: 'subcooling', header: `subcooling [${unitLabel('temperatureDifference', prefs)}]`, numeric: true }
+			{
+				key: 'superheat',
+				header: `superheat [${unitLabel('temperatureDifference', prefs)}]`,
+				numeric: true
+			},
+			{
+				key: 'subcooling',
+				header: `subcooling [${unitLabel('temperatureDifference', prefs)}]`,
+				numeric: true
+			}
 		],
 		rows: result.states.map((ps, i) => [
 			stateLabel(i),
@@ -86,7 +100,9 @@ export function sheetTable(result: PathResult, prefs: UnitPrefs, options: TableO
 
 	const flow = result.system.kind === 'flow';
 	const totalQuantity: Quantity = flow ? 'power' : 'energy';
-	const magnitudes = result.legs.flatMap((l) => (flow ? [l.totals.QFlow, l.totals.WShaft] : [l.totals.Q, l.totals.W]));
+	const magnitudes = result.legs.flatMap((l) =>
+		flow ? [l.totals.QFlow, l.totals.WShaft] : [l.totals.Q, l.totals.W]
+	);
 	const totalUnit = unitLabel(totalQuantity, prefs, magnitudes);
 	const eU = unitLabel('specificEnergy', prefs);
 	const labelOf = (id: string) => stateLabel(result.states.findIndex((s) => s.id === id));
@@ -113,8 +129,16 @@ export function sheetTable(result: PathResult, prefs: UnitPrefs, options: TableO
 			q(e(flow ? pl.leg.qFlow : pl.leg.q), 'specificEnergy'),
 			q(e(flow ? pl.leg.wShaft : pl.leg.w), 'specificEnergy'),
 			q(tidy(pl.leg.ds, 'specificEntropy'), 'specificEntropy'),
-			q(flow ? tot(pl.leg.qFlow, pl.totals.QFlow) : tot(pl.leg.q, pl.totals.Q), totalQuantity, magnitudes),
-			q(flow ? tot(pl.leg.wShaft, pl.totals.WShaft) : tot(pl.leg.w, pl.totals.W), totalQuantity, magnitudes)
+			q(
+				flow ? tot(pl.leg.qFlow, pl.totals.QFlow) : tot(pl.leg.q, pl.totals.Q),
+				totalQuantity,
+				magnitudes
+			),
+			q(
+				flow ? tot(pl.leg.wShaft, pl.totals.WShaft) : tot(pl.leg.w, pl.totals.W),
+				totalQuantity,
+				magnitudes
+			)
 		])
 	};
 	const note = flow
@@ -149,15 +173,29 @@ function mdTable(b: SheetTable['states']): string {
 
 /** The findings as Markdown: a bulleted list of warnings and the cycle, then the caution. */
 export function findingsMarkdown(f: MemoFindings): string {
-	const items = [...f.warnings.map((w) => `- **${severityWord(w.severity)} — ${mdText(w.title)}:** ${mdText(w.text)}`), ...(f.cycle ? [`- **Cycle:** ${mdText(f.cycle)}`] : [])];
-	return ['**Findings**', items.length ? items.join('\n') : '_No warnings for this path._', `> **${mdText(f.cautionTitle)}.** ${mdText(f.caution)}`].join('\n\n');
+	const items = [
+		...f.warnings.map(
+			(w) => `- **${severityWord(w.severity)} — ${mdText(w.title)}:** ${mdText(w.text)}`
+		),
+		...(f.cycle ? [`- **Cycle:** ${mdText(f.cycle)}`] : [])
+	];
+	return [
+		'**Findings**',
+		items.length ? items.join('\n') : '_No warnings for this path._',
+		`> **${mdText(f.cautionTitle)}.** ${mdText(f.caution)}`
+	].join('\n\n');
 }
 
 /**
  * The table as Markdown (GitHub-flavoured pipe tables): the caption paragraph (free text, escaped),
  * the findings (warnings, cycle, caution), then the states and legs.
  */
-export function tableMarkdown(result: PathResult, prefs: UnitPrefs, caption: string[], findings: MemoFindings): string {
+export function tableMarkdown(
+	result: PathResult,
+	prefs: UnitPrefs,
+	caption: string[],
+	findings: MemoFindings
+): string {
 	const t = sheetTable(result, prefs, { style: 'unicode' });
 	const parts = [];
 	if (caption.length) parts.push(caption.map(mdText).join('  \n'));

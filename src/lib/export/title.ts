@@ -17,17 +17,31 @@ export interface TitleSignOff {
 	approver: MemoPerson;
 }
 
-const SUBSCRIPT: Record<string, string> = { '0': '₀', '1': '₁', '2': '₂', '3': '₃', '4': '₄', '5': '₅', '6': '₆', '7': '₇', '8': '₈', '9': '₉' };
+const SUBSCRIPT: Record<string, string> = {
+	'0': '₀',
+	'1': '₁',
+	'2': '₂',
+	'3': '₃',
+	'4': '₄',
+	'5': '₅',
+	'6': '₆',
+	'7': '₇',
+	'8': '₈',
+	'9': '₉'
+};
 
 /** "H2O" → "H₂O", "CO2" → "CO₂" (digits after a letter or bracket). */
 export function chemical(formula: string): string {
-	return formula.replace(/(?<=[A-Za-z)\]])(\d+)/g, (d) => [...d].map((c) => SUBSCRIPT[c] ?? c).join(''));
+	return formula.replace(/(?<=[A-Za-z)\]])(\d+)/g, (d) =>
+		[...d].map((c) => SUBSCRIPT[c] ?? c).join('')
+	);
 }
 
 /** A size as typed: 5 significant figures without trailing zeros ("0.5 m³", "12.25 kg"). */
 function size(si: number, quantity: 'volume' | 'mass' | 'massFlow', prefs: UnitPrefs): string {
 	const f = formatQuantity(si, quantity, prefs, { unit: displayUnit(quantity, prefs) });
-	const text = f.text.includes('.') && !f.text.includes('×') ? f.text.replace(/\.?0+$/, '') : f.text;
+	const text =
+		f.text.includes('.') && !f.text.includes('×') ? f.text.replace(/\.?0+$/, '') : f.text;
 	return `${text}${NBSP}${f.unit.label}`;
 }
 
@@ -44,7 +58,10 @@ export function systemText(doc: Pick<SheetDoc, 'spec'>, prefs: UnitPrefs): strin
 export function unitsText(prefs: UnitPrefs): string {
 	const l = (q: Parameters<typeof displayUnit>[0]) => displayUnit(q, prefs).label;
 	const p = l('pressure');
-	const atm = formatQuantity(prefs.atmosphere, 'pressure', prefs, { reference: 'absolute', sig: 5 }).full;
+	const atm = formatQuantity(prefs.atmosphere, 'pressure', prefs, {
+		reference: 'absolute',
+		sig: 5
+	}).full;
 	const gauge = displayUnit('pressure', prefs).reference === 'gauge';
 	return [
 		prefs.system === 'si' ? 'SI' : 'US customary',

@@ -4,7 +4,15 @@
  * (RevisionHistory, ReviewNotes, TracePanel, SaveRevisionDialog, NoteMarkers, ExportMenu) read
  * and update it.
  */
-import { reviewApi, type NoteView, type ReviewApi, type RevisionEvent, type RevisionFull, type RevisionSummary, type TraceSummary } from './client';
+import {
+	reviewApi,
+	type NoteView,
+	type ReviewApi,
+	type RevisionEvent,
+	type RevisionFull,
+	type RevisionSummary,
+	type TraceSummary
+} from './client';
 import type { MeasuredTrace } from '../charts/types';
 import type { SheetDoc, SheetStatus } from '../sheets/types';
 import type { FluidInfo } from '../thermo/types';
@@ -91,7 +99,9 @@ export class SheetReview {
 
 	/** The traces drawn over the path. */
 	chartTraces(): MeasuredTrace[] {
-		return this.traces.filter((t) => this.shown.includes(t.id) && !t.stale && t.points).map((t) => chartTrace({ id: t.id, name: t.name, points: t.points ?? [] }));
+		return this.traces
+			.filter((t) => this.shown.includes(t.id) && !t.stale && t.points)
+			.map((t) => chartTrace({ id: t.id, name: t.name, points: t.points ?? [] }));
 	}
 
 	/** Whether the working draft differs from the newest revision. */
@@ -133,7 +143,11 @@ export class SheetReview {
 						checker: { name: l.checked?.name ?? null, at: l.checked?.at ?? null },
 						approver: { name: l.approved?.name ?? null, at: l.approved?.at ?? null }
 					}
-				: { designer: { name: null, at: null }, checker: { name: null, at: null }, approver: { name: null, at: null } },
+				: {
+						designer: { name: null, at: null },
+						checker: { name: null, at: null },
+						approver: { name: null, at: null }
+					},
 			issued: Date.now()
 		});
 	}

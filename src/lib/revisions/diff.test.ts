@@ -6,7 +6,11 @@ import { diffRevisions, isEmptyDiff, mergedLegOrder, type DiffSide } from './dif
 import { formatDelta, formatRelative, formatValue } from './format';
 import { vesselDoc } from './test-fixtures';
 
-const side = (label: string, doc = vesselDoc()): DiffSide => ({ label, doc, result: computePath(doc.spec) });
+const side = (label: string, doc = vesselDoc()): DiffSide => ({
+	label,
+	doc,
+	result: computePath(doc.spec)
+});
 
 describe('mergedLegOrder', () => {
 	it('keeps the later order and puts removed legs after their old predecessor', () => {
@@ -74,18 +78,31 @@ describe('diffRevisions', () => {
 		const vent = d.states.find((s) => s.anchor === 'vent')!;
 		expect(vent.status).toBe('removed');
 		expect(vent.props.find((p) => p.key === 'T')!.after).toBeNull();
-		expect(d.states.find((s) => s.anchor === 'warm')!).toMatchObject({ status: 'added', before: null, after: 'S2' });
+		expect(d.states.find((s) => s.anchor === 'warm')!).toMatchObject({
+			status: 'added',
+			before: null,
+			after: 'S2'
+		});
 		expect(d.summary).toMatchObject({ legsAdded: 1, legsRemoved: 1 });
 	});
 
 	it('lists spec fields and presentation changes separately', () => {
 		const a = side('Rev 1');
 		const doc = vesselDoc();
-		doc.spec = { ...doc.spec, system: { kind: 'closed', volume: 0.6 }, limits: { designPressure: 1_201_325, reliefSetPressure: 1_101_325 } };
+		doc.spec = {
+			...doc.spec,
+			system: { kind: 'closed', volume: 0.6 },
+			limits: { designPressure: 1_201_325, reliefSetPressure: 1_101_325 }
+		};
 		doc.titleBlock = { ...doc.titleBlock, tag: 'V-204A' };
 		const d = diffRevisions(a, side('Rev 2', doc));
-		expect(d.spec.filter((c) => c.changed).map((c) => c.key)).toEqual(['system.volume', 'limits.designPressure']);
-		expect(d.presentation.map((c) => [c.key, c.before, c.after])).toEqual([['titleBlock.tag', 'V-204', 'V-204A']]);
+		expect(d.spec.filter((c) => c.changed).map((c) => c.key)).toEqual([
+			'system.volume',
+			'limits.designPressure'
+		]);
+		expect(d.presentation.map((c) => [c.key, c.before, c.after])).toEqual([
+			['titleBlock.tag', 'V-204', 'V-204A']
+		]);
 		// the same per-kg path in a larger vessel: per-kg values equal, totals scale with the mass
 		const heat = d.legs.find((l) => l.id === 'heat')!;
 		expect(heat.energy.find((c) => c.key === 'q')!.changed).toBe(false);
@@ -95,7 +112,11 @@ describe('diffRevisions', () => {
 
 	it('copes with a side whose spec could not be computed', () => {
 		const a = side('Rev 1');
-		const d = diffRevisions(a, { label: 'Working draft', doc: vesselDoc(), result: null as PathResult | null });
+		const d = diffRevisions(a, {
+			label: 'Working draft',
+			doc: vesselDoc(),
+			result: null as PathResult | null
+		});
 		expect(d.states[1].props.find((p) => p.key === 'T')!.after).toBeNull();
 		expect(d.states[1].status).toBe('changed');
 	});
@@ -104,16 +125,46 @@ describe('diffRevisions', () => {
 describe('formatting differences in display units', () => {
 	const prefs = unitPrefs({ pressureReference: 'gauge' });
 	it('gives temperature differences in K and pressure differences without a or g', () => {
-		const t = { key: 'T', label: 'T', quantity: 'temperature' as const, before: 453.15, after: 443.15, delta: -10, changed: true };
+		const t = {
+			key: 'T',
+			label: 'T',
+			quantity: 'temperature' as const,
+			before: 453.15,
+			after: 443.15,
+			delta: -10,
+			changed: true
+		};
 		expect(formatValue(t, 'before', prefs)).toBe('180.00\u00a0°C');
 		expect(formatDelta(t, prefs)).toBe('−10.00\u00a0K');
-		const p = { key: 'P', label: 'P', quantity: 'pressure' as const, before: 201_325, after: 301_325, delta: 100_000, changed: true };
+		const p = {
+			key: 'P',
+			label: 'P',
+			quantity: 'pressure' as const,
+			before: 201_325,
+			after: 301_325,
+			delta: 100_000,
+			changed: true
+		};
 		// shown gauge on the sheet: 201 325 Pa a − 101 325 Pa = 100 kPa g (definition of gauge pressure)
 		expect(formatValue(p, 'before', prefs)).toBe('100.00\u00a0kPa g');
 		expect(formatDelta(p, prefs)).toBe('+100.0\u00a0kPa');
 		expect(formatRelative(p)).toBe('+49.7 %');
 		expect(formatDelta({ ...p, changed: false }, prefs)).toBe('');
-		expect(formatValue({ key: 'phase', label: 'phase', quantity: null, before: 'saturated-mixture', after: null, delta: null, changed: true }, 'before', prefs)).toBe('saturated mixture');
+		expect(
+			formatValue(
+				{
+					key: 'phase',
+					label: 'phase',
+					quantity: null,
+					before: 'saturated-mixture',
+					after: null,
+					delta: null,
+					changed: true
+				},
+				'before',
+				prefs
+			)
+		).toBe('saturated mixture');
 	});
 });
 
@@ -143,7 +194,16 @@ describe('sameContent', () => {
 	it('ignores key order and sees any changed value', async () => {
 		const { sameContent } = await import('./same');
 		const a = vesselDoc();
-		const b = JSON.parse(JSON.stringify({ titleBlock: a.titleBlock, chart: a.chart, units: a.units, spec: a.spec, description: a.description, version: a.version }));
+		const b = JSON.parse(
+			JSON.stringify({
+				titleBlock: a.titleBlock,
+				chart: a.chart,
+				units: a.units,
+				spec: a.spec,
+				description: a.description,
+				version: a.version
+			})
+		);
 		expect(sameContent(a, b)).toBe(true);
 		b.spec.legs[0].target.T = 450;
 		expect(sameContent(a, b)).toBe(false);

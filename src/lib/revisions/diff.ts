@@ -63,7 +63,14 @@ export interface RevisionDiff {
 	states: StateDiff[];
 	/** description, title-block fields, units and chart preferences */
 	presentation: ValueChange[];
-	summary: { spec: number; legsAdded: number; legsRemoved: number; legsChanged: number; statesChanged: number; presentation: number };
+	summary: {
+		spec: number;
+		legsAdded: number;
+		legsRemoved: number;
+		legsChanged: number;
+		statesChanged: number;
+		presentation: number;
+	};
 }
 
 /** Relative tolerance below which two computed numbers count as equal (round-off across runs). */
@@ -75,7 +82,13 @@ export function sameNumber(a: number, b: number): boolean {
 	return Math.abs(a - b) <= DIFF_TOLERANCE * scale + 1e-12;
 }
 
-function change(key: string, label: string, quantity: Quantity | null, before: number | string | null | undefined, after: number | string | null | undefined): ValueChange {
+function change(
+	key: string,
+	label: string,
+	quantity: Quantity | null,
+	before: number | string | null | undefined,
+	after: number | string | null | undefined
+): ValueChange {
 	const b = before ?? null;
 	const a = after ?? null;
 	const numeric = typeof b === 'number' && typeof a === 'number';
@@ -97,33 +110,83 @@ function specChanges(a: SheetDoc, b: SheetDoc): ValueChange[] {
 	const sa = a.spec;
 	const sb = b.spec;
 	out.push(change('fluid', 'fluid', null, sa.fluid, sb.fluid));
-	out.push(change('system.kind', 'system', null, sa.system.kind === 'flow' ? 'steady-flow device' : 'closed system', sb.system.kind === 'flow' ? 'steady-flow device' : 'closed system'));
-	const sys = (d: SheetDoc, k: 'mass' | 'volume' | 'massFlow') => (d.spec.system as Record<string, unknown>)[k] as number | undefined;
+	out.push(
+		change(
+			'system.kind',
+			'system',
+			null,
+			sa.system.kind === 'flow' ? 'steady-flow device' : 'closed system',
+			sb.system.kind === 'flow' ? 'steady-flow device' : 'closed system'
+		)
+	);
+	const sys = (d: SheetDoc, k: 'mass' | 'volume' | 'massFlow') =>
+		(d.spec.system as Record<string, unknown>)[k] as number | undefined;
 	out.push(change('system.mass', 'mass', 'mass', sys(a, 'mass'), sys(b, 'mass')));
 	out.push(change('system.volume', 'volume', 'volume', sys(a, 'volume'), sys(b, 'volume')));
-	out.push(change('system.massFlow', 'mass flow', 'massFlow', sys(a, 'massFlow'), sys(b, 'massFlow')));
-	for (const n of INPUT_NAMES) out.push(change(`start.${n}`, `start ${n}`, PROPERTY_QUANTITY[n], sa.start[n], sb.start[n]));
-	for (const [k, label, q] of LIMITS) out.push(change(`limits.${k}`, label, q, sa.limits?.[k], sb.limits?.[k]));
-	out.push(change('atmosphericPressure', 'atmospheric pressure', 'pressure', sa.atmosphericPressure ?? a.units.atmosphere, sb.atmosphericPressure ?? b.units.atmosphere));
+	out.push(
+		change('system.massFlow', 'mass flow', 'massFlow', sys(a, 'massFlow'), sys(b, 'massFlow'))
+	);
+	for (const n of INPUT_NAMES)
+		out.push(change(`start.${n}`, `start ${n}`, PROPERTY_QUANTITY[n], sa.start[n], sb.start[n]));
+	for (const [k, label, q] of LIMITS)
+		out.push(change(`limits.${k}`, label, q, sa.limits?.[k], sb.limits?.[k]));
+	out.push(
+		change(
+			'atmosphericPressure',
+			'atmospheric pressure',
+			'pressure',
+			sa.atmosphericPressure ?? a.units.atmosphere,
+			sb.atmosphericPressure ?? b.units.atmosphere
+		)
+	);
 	// leave out fields absent on both sides
 	return out.filter((c) => c.before !== null || c.after !== null);
 }
 
 function presentationChanges(a: SheetDoc, b: SheetDoc): ValueChange[] {
-	const out: ValueChange[] = [change('description', 'description', null, a.description, b.description)];
+	const out: ValueChange[] = [
+		change('description', 'description', null, a.description, b.description)
+	];
 	for (const k of ['project', 'equipment', 'tag', 'documentNumber', 'site'] as const) {
-		const label = { project: 'project', equipment: 'equipment', tag: 'tag', documentNumber: 'document number', site: 'site' }[k];
+		const label = {
+			project: 'project',
+			equipment: 'equipment',
+			tag: 'tag',
+			documentNumber: 'document number',
+			site: 'site'
+		}[k];
 		out.push(change(`titleBlock.${k}`, label, null, a.titleBlock[k], b.titleBlock[k]));
 	}
 	out.push(change('units.system', 'unit system', null, a.units.system, b.units.system));
-	out.push(change('units.pressureUnit', 'pressure unit', null, a.units.pressureUnit, b.units.pressureUnit));
-	out.push(change('units.pressureReference', 'pressures shown as', null, a.units.pressureReference, b.units.pressureReference));
+	out.push(
+		change('units.pressureUnit', 'pressure unit', null, a.units.pressureUnit, b.units.pressureUnit)
+	);
+	out.push(
+		change(
+			'units.pressureReference',
+			'pressures shown as',
+			null,
+			a.units.pressureReference,
+			b.units.pressureReference
+		)
+	);
 	out.push(change('chart.view', 'chart view', null, a.chart.view, b.chart.view));
-	out.push(change('chart.pressureScale', 'pressure axis', null, a.chart.pressureScale, b.chart.pressureScale));
+	out.push(
+		change(
+			'chart.pressureScale',
+			'pressure axis',
+			null,
+			a.chart.pressureScale,
+			b.chart.pressureScale
+		)
+	);
 	return out.filter((c) => c.changed);
 }
 
-function targetOf(t: Partial<Record<TargetName, number>>): { name: string | null; value: number | null } {
+function targetOf(t: Partial<Record<TargetName, number>>): {
+	name: string | null;
+	value: number | null;
+} {
 	const name = (Object.keys(t) as TargetName[]).find((k) => t[k] !== undefined) ?? null;
 	return { name, value: name ? (t[name] as number) : null };
 }
@@ -185,22 +248,74 @@ export function diffRevisions(before: DiffSide, after: DiffSide): RevisionDiff {
 		const tb = sb ? targetOf(sb.target) : { name: null, value: null };
 		const spec = [change('process', 'process', null, sa?.process, sb?.process)];
 		const sameTarget = ta.name === tb.name;
-		if (sameTarget && ta.name) spec.push(change(`target.${ta.name}`, `target ${ta.name}`, PROPERTY_QUANTITY[ta.name as TargetName], ta.value, tb.value));
+		if (sameTarget && ta.name)
+			spec.push(
+				change(
+					`target.${ta.name}`,
+					`target ${ta.name}`,
+					PROPERTY_QUANTITY[ta.name as TargetName],
+					ta.value,
+					tb.value
+				)
+			);
 		else {
 			spec.push(change('target', 'target property', null, ta.name, tb.name));
-			if (ta.name) spec.push(change(`target.${ta.name}`, `target ${ta.name}`, PROPERTY_QUANTITY[ta.name as TargetName], ta.value, null));
-			if (tb.name) spec.push(change(`target.${tb.name}`, `target ${tb.name}`, PROPERTY_QUANTITY[tb.name as TargetName], null, tb.value));
+			if (ta.name)
+				spec.push(
+					change(
+						`target.${ta.name}`,
+						`target ${ta.name}`,
+						PROPERTY_QUANTITY[ta.name as TargetName],
+						ta.value,
+						null
+					)
+				);
+			if (tb.name)
+				spec.push(
+					change(
+						`target.${tb.name}`,
+						`target ${tb.name}`,
+						PROPERTY_QUANTITY[tb.name as TargetName],
+						null,
+						tb.value
+					)
+				);
 		}
-		if (sa?.process === 'polytropic' || sb?.process === 'polytropic') spec.push(change('n', 'n', null, sa?.n ?? null, sb?.n ?? null));
+		if (sa?.process === 'polytropic' || sb?.process === 'polytropic')
+			spec.push(change('n', 'n', null, sa?.n ?? null, sb?.n ?? null));
 		const la = legAt(before.result, id);
 		const lb = legAt(after.result, id);
 		const energyUnit: Quantity = flowB || (!sb && flowA) ? 'power' : 'energy';
 		const energy = [
-			change('q', 'q', 'specificEnergy', la ? (flowA ? la.leg.qFlow : la.leg.q) : null, lb ? (flowB ? lb.leg.qFlow : lb.leg.q) : null),
-			change('w', flowB ? 'w shaft' : 'w', 'specificEnergy', la ? (flowA ? la.leg.wShaft : la.leg.w) : null, lb ? (flowB ? lb.leg.wShaft : lb.leg.w) : null),
+			change(
+				'q',
+				'q',
+				'specificEnergy',
+				la ? (flowA ? la.leg.qFlow : la.leg.q) : null,
+				lb ? (flowB ? lb.leg.qFlow : lb.leg.q) : null
+			),
+			change(
+				'w',
+				flowB ? 'w shaft' : 'w',
+				'specificEnergy',
+				la ? (flowA ? la.leg.wShaft : la.leg.w) : null,
+				lb ? (flowB ? lb.leg.wShaft : lb.leg.w) : null
+			),
 			change('ds', 'Δs', 'specificEntropy', la?.leg.ds ?? null, lb?.leg.ds ?? null),
-			change('Q', flowB ? 'Q̇' : 'Q', energyUnit, la ? (flowA ? la.totals.QFlow : la.totals.Q) : null, lb ? (flowB ? lb.totals.QFlow : lb.totals.Q) : null),
-			change('W', flowB ? 'Ẇ shaft' : 'W', energyUnit, la ? (flowA ? la.totals.WShaft : la.totals.W) : null, lb ? (flowB ? lb.totals.WShaft : lb.totals.W) : null)
+			change(
+				'Q',
+				flowB ? 'Q̇' : 'Q',
+				energyUnit,
+				la ? (flowA ? la.totals.QFlow : la.totals.Q) : null,
+				lb ? (flowB ? lb.totals.QFlow : lb.totals.Q) : null
+			),
+			change(
+				'W',
+				flowB ? 'Ẇ shaft' : 'W',
+				energyUnit,
+				la ? (flowA ? la.totals.WShaft : la.totals.W) : null,
+				lb ? (flowB ? lb.totals.WShaft : lb.totals.W) : null
+			)
 		];
 		return {
 			id,
@@ -262,5 +377,7 @@ export function diffRevisions(before: DiffSide, after: DiffSide): RevisionDiff {
 /** True when nothing at all differs. */
 export function isEmptyDiff(d: RevisionDiff): boolean {
 	const s = d.summary;
-	return s.spec + s.legsAdded + s.legsRemoved + s.legsChanged + s.statesChanged + s.presentation === 0;
+	return (
+		s.spec + s.legsAdded + s.legsRemoved + s.legsChanged + s.statesChanged + s.presentation === 0
+	);
 }

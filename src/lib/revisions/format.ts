@@ -20,7 +20,8 @@ export function formatDelta(c: ValueChange, prefs: UnitPrefs): string {
 	if (c.delta === null || !c.changed) return '';
 	const sign = c.delta > 0 ? '+' : '';
 	if (!c.quantity) return `${sign}${formatNumber(c.delta, { sig: 4 })}`;
-	if (c.quantity === 'temperature') return sign + formatQuantity(c.delta, 'temperatureDifference', prefs, { decimals: 2 }).full;
+	if (c.quantity === 'temperature')
+		return sign + formatQuantity(c.delta, 'temperatureDifference', prefs, { decimals: 2 }).full;
 	if (c.quantity === 'pressure') {
 		const unit = displayUnit('pressure', prefs, { reference: 'absolute' });
 		const label = unit.label.replace(/\s?a$/, '').replace(/^psia$/, 'psi');
@@ -32,7 +33,14 @@ export function formatDelta(c: ValueChange, prefs: UnitPrefs): string {
 
 /** Relative change in percent, where it means something (both sides non-zero numbers). */
 export function formatRelative(c: ValueChange): string {
-	if (!c.changed || typeof c.before !== 'number' || typeof c.after !== 'number' || c.before === 0 || c.quantity === 'temperature') return '';
+	if (
+		!c.changed ||
+		typeof c.before !== 'number' ||
+		typeof c.after !== 'number' ||
+		c.before === 0 ||
+		c.quantity === 'temperature'
+	)
+		return '';
 	const r = (c.after - c.before) / Math.abs(c.before);
 	return `${r > 0 ? '+' : ''}${formatNumber(r * 100, { sig: 3 })} %`;
 }

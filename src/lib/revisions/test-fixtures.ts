@@ -22,7 +22,13 @@ export function vesselDoc(legs?: SheetLegSpec[], overrides: Partial<SheetDoc> = 
 		},
 		units: unitPrefs({ pressureReference: 'gauge' }),
 		chart: { view: 'both', pressureScale: 'log', isolines: true },
-		titleBlock: { project: 'Northgate district heating', equipment: 'Expansion vessel', tag: 'V-204', documentNumber: 'BTW-CALC-0417', site: 'Northgate plant room' },
+		titleBlock: {
+			project: 'Northgate district heating',
+			equipment: 'Expansion vessel',
+			tag: 'V-204',
+			documentNumber: 'BTW-CALC-0417',
+			site: 'Northgate plant room'
+		},
 		...overrides
 	};
 }

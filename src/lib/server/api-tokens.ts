@@ -1,6 +1,12 @@
 import { roleWithin, ROLE_LABEL, type Role } from '../roles';
 import type { ApiToken, DB, Team } from './db/schema';
-import { getLiveApiTokenByHash, getTeamApiToken, insertApiToken, revokeApiToken, touchApiToken } from './db/api-tokens';
+import {
+	getLiveApiTokenByHash,
+	getTeamApiToken,
+	insertApiToken,
+	revokeApiToken,
+	touchApiToken
+} from './db/api-tokens';
 import { getTeamById } from './db/teams';
 import { logTeamEvent } from './db/team-events';
 import { AppError } from './errors';
@@ -41,7 +47,8 @@ export async function createTeamToken(
 	access: TeamAccess,
 	input: { name: string; role: Role }
 ): Promise<{ token: string; row: ApiToken }> {
-	if (access.principal.kind !== 'user') throw new AppError(403, 'forbidden', 'API tokens are created by people, not by other tokens.');
+	if (access.principal.kind !== 'user')
+		throw new AppError(403, 'forbidden', 'API tokens are created by people, not by other tokens.');
 	const creator = access.principal.user.id;
 	if (!grantableTokenRoles(access.role).includes(input.role)) {
 		throw new AppError(
@@ -61,35 +68,66 @@ export async function createTeamToken(
 			role: input.role,
 			createdBy: creator
 		});
-		await logTeamEvent(trx, { teamId: access.team.id, actorId: access.actor.id, actorLabel: access.actor.label, kind: 'token.created', detail: { name: row.name, role: row.role } });
+		await logTeamEvent(trx, {
+			teamId: access.team.id,
+			actorId: access.actor.id,
+			actorLabel: access.actor.label,
+			kind: 'token.created',
+			detail: { name: row.name, role: row.role }
+		});
 		return row;
 	});
 	return { token, row };
 }
 
 /** Owners revoke any token of the team; designers their own. */
-export async function revokeTeamToken(db: DB, access: TeamAccess, tokenId: string): Promise<ApiToken> {
+export async function revokeTeamToken(
+	db: DB,
+	access: TeamAccess,
+	tokenId: string
+): Promise<ApiToken> {
 	const row = await getTeamApiToken(db, access.team.id, tokenId);
-	if (!row || row.revoked_at !== null) throw new AppError(404, 'not-found', 'No such token in this team (it may already be revoked).');
+	if (!row || row.revoked_at !== null)
+		throw new AppError(404, 'not-found', 'No such token in this team (it may already be revoked).');
 	const own = access.principal.kind === 'user' && row.created_by === access.actor.id;
 	if (!own && !can(access.role, 'team:manage')) {
 		throw new AppError(403, 'forbidden', 'Only owners can revoke tokens other people created.');
 	}
 	await db.transaction().execute(async (trx) => {
 		await revokeApiToken(trx, access.team.id, row.id);
-		await logTeamEvent(trx, { teamId: access.team.id, actorId: access.actor.id, actorLabel: access.actor.label, kind: 'token.revoked', detail: { name: row.name } });
+		await logTeamEvent(trx, {
+			teamId: access.team.id,
+			actorId: access.actor.id,
+			actorLabel: access.actor.label,
+			kind: 'token.revoked',
+			detail: { name: row.name }
+		});
 	});
 	return row;
 }
 
 /** The principal for an `Authorization: Bearer …` value, or null if it is not a live token. */
-export async function authenticateToken(db: DB, bearer: string): Promise<{ principal: TokenPrincipal; team: Team } | null> {
+export async function authenticateToken(
+	db: DB,
+	bearer: string
+): Promise<{ principal: TokenPrincipal; team: Team } | null> {
 	if (!TOKEN_PATTERN.test(bearer)) return null;
 	const row = await getLiveApiTokenByHash(db, sha256(bearer));
 	if (!row) return null;
 	const team = await getTeamById(db, row.team_id);
 	if (!team) return null;
 	const now = Date.now();
-	if (row.last_used_at === null || now - row.last_used_at > LAST_USED_RESOLUTION_MS) await touchApiToken(db, row.id, now);
-	return { principal: { id: row.id, name: row.name, role: row.role, teamId: row.team_id, createdBy: row.created_by, createdByName: row.created_by_name }, team };
+	if (row.last_used_at === null || now - row.last_used_at > LAST_USED_RESOLUTION_MS)
+		await touchApiToken(db, row.id, now);
+	return {
+		principal: {
+			id: row.id,
+			name: row.name,
+			role: row.role,
+			teamId: row.team_id,
+			createdBy: row.created_by,
+			createdByName: row.created_by_name
+		},
+		team
+	};
 }

@@ -1,15 +1,46 @@
 import { hash, verify } from '@node-rs/argon2';
-import { Lucia, TimeSpan, generateIdFromEntropySize, type Adapter, type DatabaseSession } from 'lucia';
+import {
+	Lucia,
+	TimeSpan,
+	generateIdFromEntropySize,
+	type Adapter,
+	type DatabaseSession
+} from 'lucia';
 import type { Cookies } from '@sveltejs/kit';
 import type { DB, SessionRow, User } from './db/schema';
 import * as sessions from './db/sessions';
-import { createUser, getUserByEmail, getUserById, markEmailVerified, normalizeEmail, setPasswordHash } from './db/users';
-import { getEmailToken, insertEmailToken, markEmailTokenUsed, retireEmailTokens } from './db/email-tokens';
+import {
+	createUser,
+	getUserByEmail,
+	getUserById,
+	markEmailVerified,
+	normalizeEmail,
+	setPasswordHash
+} from './db/users';
+import {
+	getEmailToken,
+	insertEmailToken,
+	markEmailTokenUsed,
+	retireEmailTokens
+} from './db/email-tokens';
 import { AppError } from './errors';
 import { newSecret, sha256 } from './secrets';
-import { addressKey, mailLimits, retryAfterSeconds, signInLimits, takeAll, type Backoff, type Limiter } from './rate-limit';
+import {
+	addressKey,
+	mailLimits,
+	retryAfterSeconds,
+	signInLimits,
+	takeAll,
+	type Backoff,
+	type Limiter
+} from './rate-limit';
 import { afterResponse } from './background';
-import { passwordChangedMail, resetPasswordMail, signUpAttemptMail, verifyEmailMail } from './mail-templates';
+import {
+	passwordChangedMail,
+	resetPasswordMail,
+	signUpAttemptMail,
+	verifyEmailMail
+} from './mail-templates';
 import type { MailMessage } from './mail';
 
 /*
@@ -49,9 +80,12 @@ async function burnTime(password: string): Promise<void> {
 
 /** Why a password is unacceptable, or null. */
 export function passwordProblem(password: string, email?: string): string | null {
-	if (password.length < PASSWORD_MIN) return `Use at least ${PASSWORD_MIN} characters for the password.`;
-	if (password.length > PASSWORD_MAX) return `Use at most ${PASSWORD_MAX} characters for the password.`;
-	if (email && password.trim().toLowerCase() === normalizeEmail(email)) return 'The password must not be your e-mail address.';
+	if (password.length < PASSWORD_MIN)
+		return `Use at least ${PASSWORD_MIN} characters for the password.`;
+	if (password.length > PASSWORD_MAX)
+		return `Use at most ${PASSWORD_MAX} characters for the password.`;
+	if (email && password.trim().toLowerCase() === normalizeEmail(email))
+		return 'The password must not be your e-mail address.';
 	if (/^(.)\1*$/.test(password)) return 'The password must not be one character repeated.';
 	return null;
 }
@@ -70,7 +104,12 @@ function adapterFor(db: DB): Adapter {
 		id: row.id,
 		userId: row.user_id,
 		expiresAt: new Date(row.expires_at),
-		attributes: { created_at: row.created_at, last_seen_at: row.last_seen_at, ip: row.ip, user_agent: row.user_agent }
+		attributes: {
+			created_at: row.created_at,
+			last_seen_at: row.last_seen_at,
+			ip: row.ip,
+			user_agent: row.user_agent
+		}
 	});
 	return {
 		async getSessionAndUser(token) {
@@ -79,7 +118,14 @@ function adapterFor(db: DB): Adapter {
 			if (!user) return [toLucia(session), null];
 			return [
 				toLucia(session),
-				{ id: user.id, attributes: { email: user.email, name: user.name, email_verified_at: user.email_verified_at } }
+				{
+					id: user.id,
+					attributes: {
+						email: user.email,
+						name: user.name,
+						email_verified_at: user.email_verified_at
+					}
+				}
 			];
 		},
 		async getUserSessions(userId) {
@@ -117,7 +163,11 @@ function makeLucia(db: DB) {
 		sessionExpiresIn: new TimeSpan(SESSION_DAYS, 'd'),
 		sessionCookie: { attributes: { sameSite: 'lax', path: '/' } },
 		getSessionAttributes: (a) => a,
-		getUserAttributes: (a) => ({ email: a.email, name: a.name, emailVerified: a.email_verified_at !== null })
+		getUserAttributes: (a) => ({
+			email: a.email,
+			name: a.name,
+			emailVerified: a.email_verified_at !== null
+		})
 	});
 }
 
@@ -158,12 +208,21 @@ export interface ClientMeta {
 	userAgent: string | null;
 }
 
-export async function createSession(db: DB, userId: string, meta: ClientMeta): Promise<{ token: string; expiresAt: number }> {
+export async function createSession(
+	db: DB,
+	userId: string,
+	meta: ClientMeta
+): Promise<{ token: string; expiresAt: number }> {
 	const now = Date.now();
 	const token = generateIdFromEntropySize(25);
 	const s = await lucia(db).createSession(
 		userId,
-		{ created_at: now, last_seen_at: now, ip: meta.ip, user_agent: meta.userAgent?.slice(0, 300) ?? null },
+		{
+			created_at: now,
+			last_seen_at: now,
+			ip: meta.ip,
+			user_agent: meta.userAgent?.slice(0, 300) ?? null
+		},
 		{ sessionId: token }
 	);
 	return { token, expiresAt: s.expiresAt.getTime() };
@@ -172,7 +231,10 @@ export async function createSession(db: DB, userId: string, meta: ClientMeta): P
 const TOUCH_EVERY_MS = 5 * 60_000;
 
 /** The user and session for a cookie token, renewing it when due; null if invalid or expired. */
-export async function validateSession(db: DB, token: string): Promise<{ user: SessionUser; session: SessionInfo } | null> {
+export async function validateSession(
+	db: DB,
+	token: string
+): Promise<{ user: SessionUser; session: SessionInfo } | null> {
 	if (!/^[a-z0-9]{20,64}$/.test(token)) return null;
 	const { user, session } = await lucia(db).validateSession(token);
 	if (!user || !session) return null;
@@ -189,7 +251,11 @@ export async function invalidateSession(db: DB, token: string): Promise<void> {
 }
 
 /** Signs a user out everywhere, or everywhere but the session `exceptId` (a session row id). */
-export async function invalidateUserSessions(db: DB, userId: string, exceptId?: string): Promise<number> {
+export async function invalidateUserSessions(
+	db: DB,
+	userId: string,
+	exceptId?: string
+): Promise<number> {
 	if (exceptId) return sessions.deleteUserSessions(db, userId, exceptId);
 	await lucia(db).invalidateUserSessions(userId);
 	return 0;
@@ -204,7 +270,12 @@ export function sessionCookieName(url: URL): string {
 	return url.protocol === 'https:' ? '__Host-statewright_session' : 'statewright_session';
 }
 
-export function setSessionCookie(cookies: Cookies, url: URL, token: string, expiresAt: number): void {
+export function setSessionCookie(
+	cookies: Cookies,
+	url: URL,
+	token: string,
+	expiresAt: number
+): void {
 	cookies.set(sessionCookieName(url), token, {
 		path: '/',
 		httpOnly: true,
@@ -218,7 +289,12 @@ export function setSessionCookie(cookies: Cookies, url: URL, token: string, expi
  * Signs a user in on this request: ends the session the browser still carried (no fixation),
  * creates a new one and sets its cookie.
  */
-export async function startSession(db: DB, event: { cookies: Cookies; url: URL }, userId: string, meta: ClientMeta): Promise<void> {
+export async function startSession(
+	db: DB,
+	event: { cookies: Cookies; url: URL },
+	userId: string,
+	meta: ClientMeta
+): Promise<void> {
 	const previous = event.cookies.get(sessionCookieName(event.url));
 	if (previous) await invalidateSession(db, previous);
 	const { token, expiresAt } = await createSession(db, userId, meta);
@@ -226,7 +302,12 @@ export async function startSession(db: DB, event: { cookies: Cookies; url: URL }
 }
 
 export function clearSessionCookie(cookies: Cookies, url: URL): void {
-	cookies.delete(sessionCookieName(url), { path: '/', httpOnly: true, sameSite: 'lax', secure: url.protocol === 'https:' });
+	cookies.delete(sessionCookieName(url), {
+		path: '/',
+		httpOnly: true,
+		sameSite: 'lax',
+		secure: url.protocol === 'https:'
+	});
 }
 
 // ---------------------------------------------------------------- account flows
@@ -243,7 +324,9 @@ export interface FlowContext {
 function tooMany(r: { retryAfterMs: number }, what: string): AppError {
 	const s = Number(retryAfterSeconds(r));
 	const wait = s >= 90 ? `${Math.ceil(s / 60)} minutes` : `${s} seconds`;
-	return new AppError(429, 'rate-limited', `Too many ${what}. Try again in ${wait}.`, undefined, { retryAfterMs: r.retryAfterMs });
+	return new AppError(429, 'rate-limited', `Too many ${what}. Try again in ${wait}.`, undefined, {
+		retryAfterMs: r.retryAfterMs
+	});
 }
 
 /** Sends through the context; an unreachable mail server is a 503 the user can retry, not a crash. */
@@ -252,7 +335,11 @@ async function deliver(ctx: FlowContext, message: MailMessage): Promise<void> {
 		await ctx.send(message);
 	} catch (e) {
 		console.error('[statewright] mail to', message.to, 'failed:', e);
-		throw new AppError(503, 'mail-unavailable', 'The mail could not be sent just now. Try again in a few minutes.');
+		throw new AppError(
+			503,
+			'mail-unavailable',
+			'The mail could not be sent just now. Try again in a few minutes.'
+		);
 	}
 }
 
@@ -286,7 +373,12 @@ export async function signUp(
 	let user: User | undefined;
 	if (!existing) {
 		try {
-			user = await createUser(db, { email: input.email, name: input.name, passwordHash, emailVerified: options.verified });
+			user = await createUser(db, {
+				email: input.email,
+				name: input.name,
+				passwordHash,
+				emailVerified: options.verified
+			});
 		} catch (e) {
 			// two sign-ups racing for one address: the unique index decides, the loser is told by mail
 			if (!String(e).includes('UNIQUE')) throw e;
@@ -295,13 +387,20 @@ export async function signUp(
 	if (user) {
 		const created = user;
 		// the account stands even if the mail does not go out: the user can ask for it again
-		if (!options.verified) afterResponse('confirmation mail', () => sendVerification(db, created, ctx, { limited: false }));
+		if (!options.verified)
+			afterResponse('confirmation mail', () =>
+				sendVerification(db, created, ctx, { limited: false })
+			);
 		return { created: true, user };
 	}
 	const email = input.email;
 	afterResponse('sign-up notice', async () => {
 		const owner = await getUserByEmail(db, email);
-		if (owner) await deliver(ctx, { to: owner.email, ...signUpAttemptMail({ name: owner.name, url: `${ctx.origin}/reset` }) });
+		if (owner)
+			await deliver(ctx, {
+				to: owner.email,
+				...signUpAttemptMail({ name: owner.name, url: `${ctx.origin}/reset` })
+			});
 	});
 	return { created: false, user: null };
 }
@@ -339,7 +438,11 @@ export async function signIn(
 		limits.perIp.refund(client);
 		return user;
 	}
-	throw new AppError(400, 'wrong-credentials', 'That e-mail address and password do not match an account. Check both, or reset the password.');
+	throw new AppError(
+		400,
+		'wrong-credentials',
+		'That e-mail address and password do not match an account. Check both, or reset the password.'
+	);
 }
 
 export async function sendVerification(
@@ -353,24 +456,47 @@ export async function sendVerification(
 	const expiresAt = Date.now() + VERIFY_LINK_HOURS * 3600_000;
 	await db.transaction().execute(async (trx) => {
 		await retireEmailTokens(trx, user.id, 'verify-email');
-		await insertEmailToken(trx, { userId: user.id, purpose: 'verify-email', tokenHash: sha256(token), email: user.email, expiresAt });
+		await insertEmailToken(trx, {
+			userId: user.id,
+			purpose: 'verify-email',
+			tokenHash: sha256(token),
+			email: user.email,
+			expiresAt
+		});
 	});
 	const url = `${ctx.origin}/verify?token=${encodeURIComponent(token)}`;
 	await deliver(ctx, { to: user.email, ...verifyEmailMail({ name: user.name, url, expiresAt }) });
 }
 
 /** Confirms an address from its link. Returns the user; throws when the link is unusable. */
-export async function verifyEmail(db: DB, token: string): Promise<{ user: User; alreadyVerified: boolean }> {
+export async function verifyEmail(
+	db: DB,
+	token: string
+): Promise<{ user: User; alreadyVerified: boolean }> {
 	const row = await getEmailToken(db, 'verify-email', sha256(token));
-	const unusable = new AppError(400, 'link-invalid', 'This confirmation link is not valid. Ask for a new one from your account page.');
+	const unusable = new AppError(
+		400,
+		'link-invalid',
+		'This confirmation link is not valid. Ask for a new one from your account page.'
+	);
 	if (!row) throw unusable;
 	const user = await getUserById(db, row.user_id);
 	if (!user) throw unusable;
 	if (row.used_at !== null) {
-		if (user.email_verified_at !== null && user.email === row.email) return { user, alreadyVerified: true };
-		throw new AppError(400, 'link-used', 'This confirmation link was already used or replaced by a newer one. Ask for a new one from your account page.');
+		if (user.email_verified_at !== null && user.email === row.email)
+			return { user, alreadyVerified: true };
+		throw new AppError(
+			400,
+			'link-used',
+			'This confirmation link was already used or replaced by a newer one. Ask for a new one from your account page.'
+		);
 	}
-	if (row.expires_at <= Date.now()) throw new AppError(400, 'link-expired', 'This confirmation link has expired. Ask for a new one from your account page.');
+	if (row.expires_at <= Date.now())
+		throw new AppError(
+			400,
+			'link-expired',
+			'This confirmation link has expired. Ask for a new one from your account page.'
+		);
 	if (row.email !== user.email) throw unusable;
 	await db.transaction().execute(async (trx) => {
 		await markEmailTokenUsed(trx, row.id);
@@ -397,7 +523,13 @@ async function sendResetLink(db: DB, email: string, ctx: FlowContext): Promise<v
 	const expiresAt = Date.now() + RESET_LINK_MINUTES * 60_000;
 	await db.transaction().execute(async (trx) => {
 		await retireEmailTokens(trx, user.id, 'reset-password');
-		await insertEmailToken(trx, { userId: user.id, purpose: 'reset-password', tokenHash: sha256(token), email: user.email, expiresAt });
+		await insertEmailToken(trx, {
+			userId: user.id,
+			purpose: 'reset-password',
+			tokenHash: sha256(token),
+			email: user.email,
+			expiresAt
+		});
 	});
 	const url = `${ctx.origin}/reset?token=${encodeURIComponent(token)}`;
 	await deliver(ctx, { to: user.email, ...resetPasswordMail({ name: user.name, url, expiresAt }) });
@@ -406,11 +538,23 @@ async function sendResetLink(db: DB, email: string, ctx: FlowContext): Promise<v
 /** The account a reset link belongs to, if the link can still be used. */
 export async function checkResetToken(db: DB, token: string): Promise<User> {
 	const row = await getEmailToken(db, 'reset-password', sha256(token));
-	if (!row) throw new AppError(400, 'link-invalid', 'This reset link is not valid. Ask for a new one.');
-	if (row.used_at !== null) throw new AppError(400, 'link-used', 'This reset link was already used or replaced by a newer one. Ask for a new one.');
-	if (row.expires_at <= Date.now()) throw new AppError(400, 'link-expired', `This reset link has expired (links last ${RESET_LINK_MINUTES} minutes). Ask for a new one.`);
+	if (!row)
+		throw new AppError(400, 'link-invalid', 'This reset link is not valid. Ask for a new one.');
+	if (row.used_at !== null)
+		throw new AppError(
+			400,
+			'link-used',
+			'This reset link was already used or replaced by a newer one. Ask for a new one.'
+		);
+	if (row.expires_at <= Date.now())
+		throw new AppError(
+			400,
+			'link-expired',
+			`This reset link has expired (links last ${RESET_LINK_MINUTES} minutes). Ask for a new one.`
+		);
 	const user = await getUserById(db, row.user_id);
-	if (!user || user.email !== row.email) throw new AppError(400, 'link-invalid', 'This reset link is not valid. Ask for a new one.');
+	if (!user || user.email !== row.email)
+		throw new AppError(400, 'link-invalid', 'This reset link is not valid. Ask for a new one.');
 	return user;
 }
 
@@ -456,6 +600,9 @@ export async function changePassword(
 		await retireEmailTokens(trx, row.id, 'reset-password');
 		return sessions.deleteUserSessions(trx, row.id, input.keepSessionId);
 	});
-	await deliver(ctx, { to: row.email, ...passwordChangedMail({ name: row.name, url: `${ctx.origin}/reset` }) }).catch(() => {});
+	await deliver(ctx, {
+		to: row.email,
+		...passwordChangedMail({ name: row.name, url: `${ctx.origin}/reset` })
+	}).catch(() => {});
 	return ended;
 }

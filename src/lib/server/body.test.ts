@@ -13,7 +13,10 @@ import { exchange, openSocket, rawRequest } from './testing-http';
  */
 let server: Server | undefined;
 
-async function serve(route: (request: Request) => Promise<Response>, bodySizeLimit = 512 * 1024): Promise<number> {
+async function serve(
+	route: (request: Request) => Promise<Response>,
+	bodySizeLimit = 512 * 1024
+): Promise<number> {
 	server = createServer(async (req, res) => {
 		const request = await getRequest({ request: req, base: 'http://127.0.0.1', bodySizeLimit });
 		const response = await route(request);
@@ -31,13 +34,19 @@ afterEach(async () => {
 	await new Promise((r) => s.close(r));
 });
 
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
+const json = (status: number, body: unknown) =>
+	new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
 
 /** A route that refuses a body on its declared size without reading it (as readJson does), and answers GETs. */
 async function earlyRefusal(request: Request): Promise<Response> {
 	if (request.method === 'GET') return json(200, { ok: true });
 	try {
-		await readCapped(request, 64 * 1024, () => Object.assign(new Error('too large'), { status: 413 }), () => new Error('unreadable'));
+		await readCapped(
+			request,
+			64 * 1024,
+			() => Object.assign(new Error('too large'), { status: 413 }),
+			() => new Error('unreadable')
+		);
 		return json(200, { read: true });
 	} catch {
 		return json(413, { error: { code: 'too-large', message: 'The body is larger than 64 kB.' } });
@@ -58,9 +67,15 @@ describe('drainUnread: the connection after an early refusal', () => {
 	});
 
 	it('a body the route never looked at (a 405) is drained too', async () => {
-		const port = await serve(async (request) => (request.method === 'GET' ? json(200, { ok: true }) : json(405, { error: { code: 'method-not-allowed', message: 'Use GET.' } })));
+		const port = await serve(async (request) =>
+			request.method === 'GET'
+				? json(200, { ok: true })
+				: json(405, { error: { code: 'method-not-allowed', message: 'Use GET.' } })
+		);
 		const socket = await openSocket(port);
-		expect((await exchange(socket, rawRequest('PUT', '/x', Buffer.alloc(300 * 1024, 'b')))).status).toBe(405);
+		expect(
+			(await exchange(socket, rawRequest('PUT', '/x', Buffer.alloc(300 * 1024, 'b')))).status
+		).toBe(405);
 		expect((await exchange(socket, rawRequest('GET', '/y'))).status).toBe(200);
 		socket.destroy();
 	});
@@ -76,11 +91,23 @@ describe('drainUnread: the connection after an early refusal', () => {
 	});
 
 	it('a body past the drain cap or refused by the server limit gets Connection: close instead', async () => {
-		const response = await drainUnread(new Request('http://x/', { method: 'POST', body: 'x'.repeat(2000) }), json(405, {}), 1000);
+		const response = await drainUnread(
+			new Request('http://x/', { method: 'POST', body: 'x'.repeat(2000) }),
+			json(405, {}),
+			1000
+		);
 		expect(response.headers.get('connection')).toBe('close');
-		const small = await drainUnread(new Request('http://x/', { method: 'POST', body: 'x'.repeat(999) }), json(405, {}), 1000);
+		const small = await drainUnread(
+			new Request('http://x/', { method: 'POST', body: 'x'.repeat(999) }),
+			json(405, {}),
+			1000
+		);
 		expect(small.headers.get('connection')).toBeNull();
-		const failing = new Request('http://x/', { method: 'POST', body: new ReadableStream({ start: (c) => c.error(new Error('over the server limit')) }), duplex: 'half' } as RequestInit);
+		const failing = new Request('http://x/', {
+			method: 'POST',
+			body: new ReadableStream({ start: (c) => c.error(new Error('over the server limit')) }),
+			duplex: 'half'
+		} as RequestInit);
 		expect((await drainUnread(failing, json(413, {}))).headers.get('connection')).toBe('close');
 	});
 });

@@ -6,7 +6,12 @@
  * answer is ready. A dropped upload throws `unreadable()`; the server's own body limit counts as
  * too large.
  */
-export async function readCapped(request: Request, max: number, tooLarge: () => Error, unreadable: () => Error): Promise<Buffer> {
+export async function readCapped(
+	request: Request,
+	max: number,
+	tooLarge: () => Error,
+	unreadable: () => Error
+): Promise<Buffer> {
 	const declared = Number(request.headers.get('content-length'));
 	if (Number.isFinite(declared) && declared > max) throw tooLarge();
 	if (!request.body) return Buffer.alloc(0);
@@ -39,7 +44,11 @@ export const DRAIN_MAX_BYTES = 1024 * 1024;
  * refuses or one past `max` instead gets `Connection: close` on the answer, so the client opens a
  * fresh connection for its next request.
  */
-export async function drainUnread(request: Request, response: Response, max = DRAIN_MAX_BYTES): Promise<Response> {
+export async function drainUnread(
+	request: Request,
+	response: Response,
+	max = DRAIN_MAX_BYTES
+): Promise<Response> {
 	const body = request.body;
 	// a body a route began reading, it read to the end (readCapped, request.json(), formData())
 	if (!body || request.bodyUsed || body.locked) return response;

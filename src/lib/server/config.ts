@@ -8,7 +8,9 @@ import { z } from 'zod';
 const flag = z
 	.enum(['0', '1', 'true', 'false', 'yes', 'no', 'on', 'off', ''])
 	.optional()
-	.transform((v) => (v === undefined || v === '' ? undefined : ['1', 'true', 'yes', 'on'].includes(v)));
+	.transform((v) =>
+		v === undefined || v === '' ? undefined : ['1', 'true', 'yes', 'on'].includes(v)
+	);
 
 const schema = z.object({
 	DATABASE_PATH: z.string().min(1).default('data/statewright.db'),
@@ -23,7 +25,10 @@ const schema = z.object({
 	SEED_DEMO: flag,
 	STATEWRIGHT_DEV_TOOLS: flag,
 	NODE_ENV: z.string().optional(),
-	ORIGIN: z.url().optional().or(z.literal('').transform(() => undefined)),
+	ORIGIN: z
+		.url()
+		.optional()
+		.or(z.literal('').transform(() => undefined)),
 	PORT: z.coerce.number().int().min(0).max(65535).default(3000),
 	HOST: z.string().default('0.0.0.0')
 });

@@ -10,10 +10,29 @@ function req(url: URL, method: string, headers: Record<string, string>): Request
 
 describe('cross-site form submissions', () => {
 	it('lets same-origin forms, JSON bodies and safe methods through', () => {
-		expect(crossSiteFormRefusal(req(URL_PAGE, 'POST', { 'content-type': 'application/x-www-form-urlencoded', origin: 'http://app.test' }), URL_PAGE, true)).toBeNull();
-		expect(crossSiteFormRefusal(req(URL_API, 'POST', { 'content-type': 'application/json', origin: 'http://evil.test' }), URL_API, true)).toBeNull();
-		expect(crossSiteFormRefusal(req(URL_API, 'GET', { 'content-type': 'text/plain' }), URL_API, true)).toBeNull();
-		expect(crossSiteFormRefusal(req(URL_API, 'POST', { 'content-type': 'text/csv' }), URL_API, true)).toBeNull();
+		expect(
+			crossSiteFormRefusal(
+				req(URL_PAGE, 'POST', {
+					'content-type': 'application/x-www-form-urlencoded',
+					origin: 'http://app.test'
+				}),
+				URL_PAGE,
+				true
+			)
+		).toBeNull();
+		expect(
+			crossSiteFormRefusal(
+				req(URL_API, 'POST', { 'content-type': 'application/json', origin: 'http://evil.test' }),
+				URL_API,
+				true
+			)
+		).toBeNull();
+		expect(
+			crossSiteFormRefusal(req(URL_API, 'GET', { 'content-type': 'text/plain' }), URL_API, true)
+		).toBeNull();
+		expect(
+			crossSiteFormRefusal(req(URL_API, 'POST', { 'content-type': 'text/csv' }), URL_API, true)
+		).toBeNull();
 	});
 
 	it('refuses a form post from another origin, or with none, as plain text on pages', async () => {
@@ -27,8 +46,16 @@ describe('cross-site form submissions', () => {
 	});
 
 	it('answers an API refusal in the API error shape', async () => {
-		for (const type of ['application/x-www-form-urlencoded', 'multipart/form-data; boundary=x', 'text/plain;charset=utf-8']) {
-			const res = crossSiteFormRefusal(req(URL_API, 'DELETE', { 'content-type': type, origin: 'http://evil.test' }), URL_API, true);
+		for (const type of [
+			'application/x-www-form-urlencoded',
+			'multipart/form-data; boundary=x',
+			'text/plain;charset=utf-8'
+		]) {
+			const res = crossSiteFormRefusal(
+				req(URL_API, 'DELETE', { 'content-type': type, origin: 'http://evil.test' }),
+				URL_API,
+				true
+			);
 			expect(res?.status).toBe(403);
 			const body = (await res?.json()) as { error: { code: string; message: string } };
 			expect(body.error.code).toBe('cross-site-form');
@@ -37,18 +64,30 @@ describe('cross-site form submissions', () => {
 	});
 
 	it('on the API, a request without a session cookie has nothing to forge: it goes on (and meets 401 where sign-in is needed)', () => {
-		const headers = { 'content-type': 'multipart/form-data; boundary=x', origin: 'http://evil.test' };
+		const headers = {
+			'content-type': 'multipart/form-data; boundary=x',
+			origin: 'http://evil.test'
+		};
 		expect(crossSiteFormRefusal(req(URL_API, 'POST', headers), URL_API, false)).toBeNull();
 		// pages stay strict without a session too (a forged sign-in)
 		expect(crossSiteFormRefusal(req(URL_PAGE, 'POST', headers), URL_PAGE, false)?.status).toBe(403);
 	});
 
 	it('lets a token-carrying API request through without an Origin (a script, not a browser form)', () => {
-		const headers = { 'content-type': 'multipart/form-data; boundary=x', authorization: 'Bearer swt_abc' };
+		const headers = {
+			'content-type': 'multipart/form-data; boundary=x',
+			authorization: 'Bearer swt_abc'
+		};
 		expect(crossSiteFormRefusal(req(URL_API, 'POST', headers), URL_API, true)).toBeNull();
 		// but not on pages: tokens mean nothing there
 		expect(crossSiteFormRefusal(req(URL_PAGE, 'POST', headers), URL_PAGE, true)?.status).toBe(403);
 		// and a malformed Authorization header does not count as one
-		expect(crossSiteFormRefusal(req(URL_API, 'POST', { ...headers, authorization: 'Basic abc' }), URL_API, true)?.status).toBe(403);
+		expect(
+			crossSiteFormRefusal(
+				req(URL_API, 'POST', { ...headers, authorization: 'Basic abc' }),
+				URL_API,
+				true
+			)?.status
+		).toBe(403);
 	});
 });

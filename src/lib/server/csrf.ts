@@ -15,7 +15,12 @@ import { jsonError } from './api';
  */
 
 // the types an HTML form (or SvelteKit's own binary form encoding) sends without a preflight
-const FORM_TYPES = new Set(['application/x-www-form-urlencoded', 'multipart/form-data', 'text/plain', 'application/x-sveltekit-formdata']);
+const FORM_TYPES = new Set([
+	'application/x-www-form-urlencoded',
+	'multipart/form-data',
+	'text/plain',
+	'application/x-sveltekit-formdata'
+]);
 const UNSAFE = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
 function formContentType(request: Request): boolean {
@@ -28,7 +33,11 @@ function formContentType(request: Request): boolean {
  * the request carries a session cookie. On the API a request without one has nothing to forge (it
  * goes on, and is answered 401 where sign-in is needed); pages stay strict (sign-in forms too).
  */
-export function crossSiteFormRefusal(request: Request, url: URL, hasSession: boolean): Response | null {
+export function crossSiteFormRefusal(
+	request: Request,
+	url: URL,
+	hasSession: boolean
+): Response | null {
 	if (!UNSAFE.has(request.method) || !formContentType(request)) return null;
 	if (request.headers.get('origin') === url.origin) return null;
 	const api = url.pathname.startsWith('/api/');
@@ -36,5 +45,8 @@ export function crossSiteFormRefusal(request: Request, url: URL, hasSession: boo
 	if (api && /^Bearer\s+\S+\s*$/i.test(request.headers.get('authorization') ?? '')) return null;
 	const message = `Cross-site ${request.method} form submissions are refused. Submit the form from ${url.origin}, or from a script send "Authorization: Bearer <team API token>".`;
 	if (api) return jsonError(403, 'cross-site-form', message);
-	return new Response(message, { status: 403, headers: { 'content-type': 'text/plain; charset=utf-8' } });
+	return new Response(message, {
+		status: 403,
+		headers: { 'content-type': 'text/plain; charset=utf-8' }
+	});
 }

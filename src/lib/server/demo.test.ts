@@ -19,9 +19,18 @@ beforeAll(async () => {
 	env = await setupIntegration();
 	expect((await seedDemo(env.db)).seeded).toBe(true);
 	const p = DEMO_PEOPLE.find((x) => x.role === 'viewer')!;
-	const user = await env.db.selectFrom('users').select(['id', 'email', 'name']).where('email', '=', p.email).executeTakeFirstOrThrow();
-	viewer = (await resolveTeamAccess(env.db, { kind: 'user', user: { ...user, emailVerified: true } }, DEMO_TEAM.slug))!;
-	for (const s of (await listTeamSheets(env.db, viewer)).sheets) sheetId[s.title.split(' ')[0]] = s.id;
+	const user = await env.db
+		.selectFrom('users')
+		.select(['id', 'email', 'name'])
+		.where('email', '=', p.email)
+		.executeTakeFirstOrThrow();
+	viewer = (await resolveTeamAccess(
+		env.db,
+		{ kind: 'user', user: { ...user, emailVerified: true } },
+		DEMO_TEAM.slug
+	))!;
+	for (const s of (await listTeamSheets(env.db, viewer)).sheets)
+		sheetId[s.title.split(' ')[0]] = s.id;
 }, 60_000);
 afterAll(() => env.close());
 
@@ -37,7 +46,11 @@ describe('demo seed', () => {
 		expect(revisions).toHaveLength(1);
 		const r = revisions[0];
 		expect(r.status).toBe('approved');
-		expect([r.author.name, r.checked?.name, r.approved?.name]).toEqual(['Tobias Lindqvist', 'Priya Ramanathan', 'Maren Okafor']);
+		expect([r.author.name, r.checked?.name, r.approved?.name]).toEqual([
+			'Tobias Lindqvist',
+			'Priya Ramanathan',
+			'Maren Okafor'
+		]);
 		expect(r.author.at).toBeLessThan(r.checked!.at);
 		expect(r.approved!.at).toBeLessThan(Date.now());
 		const traces = await listTraces(env.db, viewer, sheetId['K-101']);
@@ -61,19 +74,31 @@ describe('demo seed', () => {
 	});
 
 	it('V-204 and R-310 stay plain drafts, and seeding sends no mail', async () => {
-		for (const tag of ['V-204', 'R-310']) expect((await listRevisions(env.db, viewer, sheetId[tag])).revisions).toHaveLength(0);
+		for (const tag of ['V-204', 'R-310'])
+			expect((await listRevisions(env.db, viewer, sheetId[tag])).revisions).toHaveLength(0);
 		expect(await listOutboxMessages(env.db, {})).toHaveLength(0);
 	});
 
 	it('one clock: people and the team come before the first sheet, every event after it and before now', async () => {
-		const sheets = (await listTeamSheets(env.db, viewer)).sheets as { createdAt: number; updatedAt: number }[];
+		const sheets = (await listTeamSheets(env.db, viewer)).sheets as {
+			createdAt: number;
+			updatedAt: number;
+		}[];
 		const firstSheet = Math.min(...sheets.map((s) => s.createdAt));
-		const team = await env.db.selectFrom('teams').select(['id', 'created_at']).where('slug', '=', DEMO_TEAM.slug).executeTakeFirstOrThrow();
+		const team = await env.db
+			.selectFrom('teams')
+			.select(['id', 'created_at'])
+			.where('slug', '=', DEMO_TEAM.slug)
+			.executeTakeFirstOrThrow();
 		const members = await listMembers(env.db, team.id);
 		expect(members).toHaveLength(DEMO_PEOPLE.length);
 		const users = await env.db.selectFrom('users').select(['created_at']).execute();
 		const now = Date.now();
-		for (const at of [team.created_at, ...members.map((m) => m.created_at), ...users.map((u) => u.created_at)]) {
+		for (const at of [
+			team.created_at,
+			...members.map((m) => m.created_at),
+			...users.map((u) => u.created_at)
+		]) {
 			expect(at).toBeLessThan(firstSheet);
 			expect(at).toBeGreaterThan(firstSheet - 3 * 3_600_000);
 		}

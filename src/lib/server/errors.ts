@@ -10,7 +10,13 @@ export class AppError extends Error {
 	/** for 429: when to try again */
 	readonly retryAfterMs: number | undefined;
 
-	constructor(status: number, code: string, message: string, field?: string, options: { retryAfterMs?: number } = {}) {
+	constructor(
+		status: number,
+		code: string,
+		message: string,
+		field?: string,
+		options: { retryAfterMs?: number } = {}
+	) {
 		super(message);
 		this.name = 'AppError';
 		this.status = status;

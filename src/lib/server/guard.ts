@@ -19,7 +19,8 @@ import type { TokenPrincipal } from './api-tokens';
  * On /api/v1/* an API token is a principal too: it reaches only its own team, with its role.
  */
 
-export type Principal = { kind: 'user'; user: SessionUser } | { kind: 'token'; token: TokenPrincipal };
+export type Principal =
+	{ kind: 'user'; user: SessionUser } | { kind: 'token'; token: TokenPrincipal };
 
 export interface TeamAccess {
 	team: Team;
@@ -58,7 +59,10 @@ export function principalOf(locals: App.Locals): Principal | null {
 
 function unauthenticated(url: URL): never {
 	if (isApi(url)) {
-		error(401, { code: 'unauthenticated', message: 'Sign in, or send an API token as "Authorization: Bearer swt_…".' });
+		error(401, {
+			code: 'unauthenticated',
+			message: 'Sign in, or send an API token as "Authorization: Bearer swt_…".'
+		});
 	}
 	redirect(303, `/signin?next=${encodeURIComponent(url.pathname + url.search)}`);
 }
@@ -84,7 +88,10 @@ export function forbidden(role: Role, capability: Capability): never {
 }
 
 export function notFound(what = 'team'): never {
-	error(404, { code: 'not-found', message: `There is no such ${what} here, or you are not a member of it.` });
+	error(404, {
+		code: 'not-found',
+		message: `There is no such ${what} here, or you are not a member of it.`
+	});
 }
 
 /**
@@ -92,7 +99,11 @@ export function notFound(what = 'team'): never {
  * team does not exist or the principal may not see it. Exposed for tests and for code that
  * answers a missing team differently.
  */
-export async function resolveTeamAccess(db: DB, principal: Principal, teamSlug: string): Promise<TeamAccess | null> {
+export async function resolveTeamAccess(
+	db: DB,
+	principal: Principal,
+	teamSlug: string
+): Promise<TeamAccess | null> {
 	const team = await getTeamBySlug(db, teamSlug);
 	if (!team) return null;
 	let role: Role;
@@ -122,7 +133,12 @@ export function requireCapability(access: TeamAccess, capability: Capability): v
  * The one check for anything under a team: resolves the principal's membership and asserts the
  * capability. 404 for non-members, 403 for members without the capability.
  */
-export async function requireTeam(event: GuardEvent, teamSlug: string, capability: Capability = 'read', db: DB = getDb()): Promise<TeamAccess> {
+export async function requireTeam(
+	event: GuardEvent,
+	teamSlug: string,
+	capability: Capability = 'read',
+	db: DB = getDb()
+): Promise<TeamAccess> {
 	const access = await resolveTeamAccess(db, requirePrincipal(event), teamSlug);
 	if (!access) notFound();
 	requireCapability(access, capability);

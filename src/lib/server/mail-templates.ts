@@ -12,14 +12,22 @@ export interface Composed {
 }
 
 function esc(s: string): string {
-	return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+	return s.replace(
+		/[&<>"']/g,
+		(c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!
+	);
 }
 
 function when(ms: number): string {
 	return new Date(ms).toISOString().replace('T', ' ').slice(0, 16) + ' UTC';
 }
 
-function layout(title: string, paragraphs: string[], action: { label: string; url: string }, footnote: string): string {
+function layout(
+	title: string,
+	paragraphs: string[],
+	action: { label: string; url: string },
+	footnote: string
+): string {
 	const body = paragraphs.map((p) => `<p style="margin:0 0 14px">${p}</p>`).join('');
 	return `<!doctype html><html><body style="margin:0;background:#f4efe4;font-family:'IBM Plex Sans',Segoe UI,Helvetica,Arial,sans-serif;color:#2a2825">
 <table role="presentation" width="100%" cellpadding="0" cellspacing="0" style="padding:28px 12px"><tr><td align="center">
@@ -34,13 +42,45 @@ function layout(title: string, paragraphs: string[], action: { label: string; ur
 </table></td></tr></table></body></html>`;
 }
 
-function plain(title: string, paragraphs: string[], action: { label: string; url: string }, footnote: string): string {
-	const strip = (s: string) => s.replace(/<[^>]+>/g, '').replace(/&amp;/g, '&').replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&#39;/g, "'");
-	return [title, '', ...paragraphs.map(strip).flatMap((p) => [p, '']), `${action.label}:`, action.url, '', '— ', footnote, ''].join('\n');
+function plain(
+	title: string,
+	paragraphs: string[],
+	action: { label: string; url: string },
+	footnote: string
+): string {
+	const strip = (s: string) =>
+		s
+			.replace(/<[^>]+>/g, '')
+			.replace(/&amp;/g, '&')
+			.replace(/&lt;/g, '<')
+			.replace(/&gt;/g, '>')
+			.replace(/&quot;/g, '"')
+			.replace(/&#39;/g, "'");
+	return [
+		title,
+		'',
+		...paragraphs.map(strip).flatMap((p) => [p, '']),
+		`${action.label}:`,
+		action.url,
+		'',
+		'— ',
+		footnote,
+		''
+	].join('\n');
 }
 
-function compose(subject: string, title: string, paragraphs: string[], action: { label: string; url: string }, footnote: string): Composed {
-	return { subject, text: plain(title, paragraphs, action, footnote), html: layout(title, paragraphs, action, footnote) };
+function compose(
+	subject: string,
+	title: string,
+	paragraphs: string[],
+	action: { label: string; url: string },
+	footnote: string
+): Composed {
+	return {
+		subject,
+		text: plain(title, paragraphs, action, footnote),
+		html: layout(title, paragraphs, action, footnote)
+	};
 }
 
 export function verifyEmailMail(input: { name: string; url: string; expiresAt: number }): Composed {
@@ -57,7 +97,11 @@ export function verifyEmailMail(input: { name: string; url: string; expiresAt: n
 	);
 }
 
-export function resetPasswordMail(input: { name: string; url: string; expiresAt: number }): Composed {
+export function resetPasswordMail(input: {
+	name: string;
+	url: string;
+	expiresAt: number;
+}): Composed {
 	return compose(
 		'Reset your Statewright password',
 		'Reset your password',
@@ -192,7 +236,10 @@ export interface RevisionMailInput {
 function overrideLines(input: RevisionMailInput): string[] {
 	const o = input.override;
 	if (!o) return [];
-	return [`This was done over <strong>${o.openNotes} open review note${o.openNotes === 1 ? '' : 's'}</strong>, for this reason:`, quote(o.reason)];
+	return [
+		`This was done over <strong>${o.openNotes} open review note${o.openNotes === 1 ? '' : 's'}</strong>, for this reason:`,
+		quote(o.reason)
+	];
 }
 
 export function submittedMail(input: RevisionMailInput): Composed {

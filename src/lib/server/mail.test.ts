@@ -27,7 +27,9 @@ describe('mail through the local fake SMTP server', () => {
 				text: 'Follow https://statewright.test/reset?token=abc_DEF-123 within the hour.\nOr https://statewright.test/signin.'
 			});
 			const printed = logged.mock.calls.map((c) => String(c[0])).join('\n');
-			expect(printed).toContain('[statewright] mail caught for someone@example.com: Reset your Statewright password');
+			expect(printed).toContain(
+				'[statewright] mail caught for someone@example.com: Reset your Statewright password'
+			);
 			expect(printed).toContain('  link: https://statewright.test/reset?token=abc_DEF-123');
 			expect(printed).toMatch(/  link: https:\/\/statewright.test\/signin$/m);
 		} finally {
@@ -36,8 +38,18 @@ describe('mail through the local fake SMTP server', () => {
 	});
 
 	it('summarises a message for the console, each link once', () => {
-		expect(caughtSummary({ envelopeTo: ['a@x.example', 'b@x.example'], subject: 'Hi', text: 'see http://h/a and http://h/a, then <http://h/b>' })).toBe(
-			['[statewright] mail caught for a@x.example, b@x.example: Hi', '  link: http://h/a', '  link: http://h/b'].join('\n')
+		expect(
+			caughtSummary({
+				envelopeTo: ['a@x.example', 'b@x.example'],
+				subject: 'Hi',
+				text: 'see http://h/a and http://h/a, then <http://h/b>'
+			})
+		).toBe(
+			[
+				'[statewright] mail caught for a@x.example, b@x.example: Hi',
+				'  link: http://h/a',
+				'  link: http://h/b'
+			].join('\n')
 		);
 	});
 
@@ -70,7 +82,11 @@ describe('mail through the local fake SMTP server', () => {
 		db = await createTestDb();
 		const target = await startFakeSmtp(db);
 		try {
-			mailer = await createMailer({ db, from: 'no-reply@statewright.test', smtpUrl: `smtp://127.0.0.1:${target.port}` });
+			mailer = await createMailer({
+				db,
+				from: 'no-reply@statewright.test',
+				smtpUrl: `smtp://127.0.0.1:${target.port}`
+			});
 			expect(mailer.catching).toBe(false);
 			await mailer.send({ to: 'x@example.com', subject: 'via url', text: 'hello' });
 			expect((await listOutboxMessages(db, { to: 'x@example.com' }))[0]?.subject).toBe('via url');
@@ -80,7 +96,13 @@ describe('mail through the local fake SMTP server', () => {
 	});
 
 	it('keeps plain and HTML versions of a template in step and escapes names', () => {
-		const m = inviteMail({ teamName: 'A <b> & Co', inviterName: 'Eve "E"', role: 'checker', url: 'https://s.test/invite/abc', expiresAt: Date.UTC(2030, 0, 2, 3, 4) });
+		const m = inviteMail({
+			teamName: 'A <b> & Co',
+			inviterName: 'Eve "E"',
+			role: 'checker',
+			url: 'https://s.test/invite/abc',
+			expiresAt: Date.UTC(2030, 0, 2, 3, 4)
+		});
 		expect(m.subject).toBe('Eve "E" invited you to A <b> & Co on Statewright');
 		expect(m.html).toContain('A &lt;b&gt; &amp; Co');
 		expect(m.html).not.toContain('<b> &');

@@ -44,14 +44,20 @@ const LINK = /https?:\/\/[^\s<>"]+/g;
 export function caughtSummary(m: { envelopeTo: string[]; subject: string; text: string }): string {
 	// a full stop or comma after a link ends the sentence, not the link
 	const links = [...new Set((m.text.match(LINK) ?? []).map((l) => l.replace(/[.,;:!?)\]]+$/, '')))];
-	return [`[statewright] mail caught for ${m.envelopeTo.join(', ')}: ${m.subject}`, ...links.map((l) => `  link: ${l}`)].join('\n');
+	return [
+		`[statewright] mail caught for ${m.envelopeTo.join(', ')}: ${m.subject}`,
+		...links.map((l) => `  link: ${l}`)
+	].join('\n');
 }
 
 /**
  * Starts the local fake SMTP server that stores what it receives in `db`'s outbox and prints
  * each message with `print`.
  */
-export async function startFakeSmtp(db: DB, print: CaughtPrinter = (t) => console.log(t)): Promise<{ port: number; close(): Promise<void> }> {
+export async function startFakeSmtp(
+	db: DB,
+	print: CaughtPrinter = (t) => console.log(t)
+): Promise<{ port: number; close(): Promise<void> }> {
 	const server = new SMTPServer({
 		secure: false,
 		authOptional: true,
@@ -80,10 +86,15 @@ export async function startFakeSmtp(db: DB, print: CaughtPrinter = (t) => consol
 							raw: raw.toString('utf8'),
 							received_at: Date.now()
 						});
-						print(caughtSummary({ envelopeTo, subject: parsed.subject ?? '', text: parsed.text ?? '' }));
+						print(
+							caughtSummary({ envelopeTo, subject: parsed.subject ?? '', text: parsed.text ?? '' })
+						);
 					})
 					// answer 250 only once the message is stored, so a sent mail is readable at once
-					.then(() => callback(), (e: unknown) => callback(e instanceof Error ? e : new Error(String(e))));
+					.then(
+						() => callback(),
+						(e: unknown) => callback(e instanceof Error ? e : new Error(String(e)))
+					);
 			});
 		}
 	});
@@ -97,14 +108,24 @@ export async function startFakeSmtp(db: DB, print: CaughtPrinter = (t) => consol
 	return { port, close: () => new Promise<void>((resolve) => server.close(() => resolve())) };
 }
 
-export async function createMailer(options: { db: DB; smtpUrl?: string; from: string; print?: CaughtPrinter }): Promise<Mailer> {
+export async function createMailer(options: {
+	db: DB;
+	smtpUrl?: string;
+	from: string;
+	print?: CaughtPrinter;
+}): Promise<Mailer> {
 	let transport: Transporter;
 	let fake: Awaited<ReturnType<typeof startFakeSmtp>> | undefined;
 	if (options.smtpUrl) {
 		transport = nodemailer.createTransport(options.smtpUrl);
 	} else {
 		fake = await startFakeSmtp(options.db, options.print);
-		transport = nodemailer.createTransport({ host: '127.0.0.1', port: fake.port, secure: false, ignoreTLS: true });
+		transport = nodemailer.createTransport({
+			host: '127.0.0.1',
+			port: fake.port,
+			secure: false,
+			ignoreTLS: true
+		});
 	}
 	return {
 		catching: fake !== undefined,

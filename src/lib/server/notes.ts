@@ -3,13 +3,28 @@ import type { DB, ReviewNoteReplyRow, ReviewNoteRow } from './db/schema';
 import { AppError } from './errors';
 import { newId } from './secrets';
 import type { TeamAccess } from './guard';
-import { getNoteRow, insertMentions, insertNote, insertReply, listMentionRows, listNoteRows, listReplyRows, setNoteResolved } from './db/notes';
+import {
+	getNoteRow,
+	insertMentions,
+	insertNote,
+	insertReply,
+	listMentionRows,
+	listNoteRows,
+	listReplyRows,
+	setNoteResolved
+} from './db/notes';
 import { getRevision } from './db/revisions';
 import { listMembers, type Member } from './db/memberships';
 import { checkDoc } from './sheets';
 import { loadSheet } from './revisions';
 import { mentionMail, replyMail } from './mail-templates';
-import { notePath, notify, SETTINGS_PATH, type NotifyContext, type Recipient } from './notifications';
+import {
+	notePath,
+	notify,
+	SETTINGS_PATH,
+	type NotifyContext,
+	type Recipient
+} from './notifications';
 import { ROLE_LABEL } from '../roles';
 import { mentionedIds } from '$lib/notes/mentions';
 import { processText } from '$lib/export/table';
@@ -30,9 +45,20 @@ export type { NoteView, ReplyView };
 
 export const bodySchema = plainText('The text', 'lines', 'Write the note.')
 	.transform((s) => s.replace(/\r\n?/g, '\n').trim())
-	.pipe(z.string().min(1, { error: 'Write the note (it cannot be empty).' }).max(4000, { error: 'Use at most 4000 characters for a note.' }));
+	.pipe(
+		z
+			.string()
+			.min(1, { error: 'Write the note (it cannot be empty).' })
+			.max(4000, { error: 'Use at most 4000 characters for a note.' })
+	);
 
-const idText = plainText('The anchor’s id', 'line', 'Give the id as a string, e.g. "L4k9xq2" for a leg or "start" for the start state.').min(1, { error: 'The id is empty; give a leg id, or "start" for the start state.' }).max(40, { error: 'Ids are at most 40 characters.' });
+const idText = plainText(
+	'The anchor’s id',
+	'line',
+	'Give the id as a string, e.g. "L4k9xq2" for a leg or "start" for the start state.'
+)
+	.min(1, { error: 'The id is empty; give a leg id, or "start" for the start state.' })
+	.max(40, { error: 'Ids are at most 40 characters.' });
 export const anchorSchema = z.discriminatedUnion(
 	'kind',
 	[
@@ -40,7 +66,10 @@ export const anchorSchema = z.discriminatedUnion(
 		z.strictObject({ kind: z.literal('leg'), legId: idText }),
 		z.strictObject({ kind: z.literal('state'), at: idText })
 	],
-	{ error: 'anchor must be { "kind": "sheet" }, { "kind": "leg", "legId": "…" } or { "kind": "state", "at": "start" | "<leg id>" }.' }
+	{
+		error:
+			'anchor must be { "kind": "sheet" }, { "kind": "leg", "legId": "…" } or { "kind": "state", "at": "start" | "<leg id>" }.'
+	}
 );
 
 /** The label an anchor has in a document, or null when the document does not have it. */
@@ -71,7 +100,12 @@ export function anchorText(doc: SheetDoc | null, anchor: Anchor, fallback: strin
 export function noteContextOf(url: URL): number | null {
 	const r = url.searchParams.get('revision');
 	if (r === null || r === '' || r === 'draft') return null;
-	if (!/^[1-9]\d{0,8}$/.test(r)) throw new AppError(400, 'invalid-revision', 'revision must be a revision number (1, 2, …) or "draft".');
+	if (!/^[1-9]\d{0,8}$/.test(r))
+		throw new AppError(
+			400,
+			'invalid-revision',
+			'revision must be a revision number (1, 2, …) or "draft".'
+		);
 	return Number(r);
 }
 
@@ -85,12 +119,20 @@ function parseDoc(text: string): SheetDoc {
 	try {
 		return checkDoc(JSON.parse(text)).doc;
 	} catch {
-		throw new AppError(422, 'unreadable-draft', 'The stored sheet cannot be read. Please report it.');
+		throw new AppError(
+			422,
+			'unreadable-draft',
+			'The stored sheet cannot be read. Please report it.'
+		);
 	}
 }
 
 /** The document notes are written against or shown against: a revision, or the working draft. */
-async function contextDoc(db: DB, sheet: { id: string; draft: string }, revision: number | null): Promise<SheetDoc> {
+async function contextDoc(
+	db: DB,
+	sheet: { id: string; draft: string },
+	revision: number | null
+): Promise<SheetDoc> {
 	if (revision === null) return parseDoc(sheet.draft);
 	const row = await getRevision(db, sheet.id, revision);
 	if (!row) throw new AppError(404, 'revision-not-found', `This sheet has no Rev ${revision}.`);
@@ -99,14 +141,23 @@ async function contextDoc(db: DB, sheet: { id: string; draft: string }, revision
 
 function requireWrite(access: TeamAccess): void {
 	if (!access.can('note:write'))
-		throw new AppError(403, 'forbidden', `Your role in this team is ${ROLE_LABEL[access.role].toLowerCase()}, which cannot write review notes (owners, designers and checkers can).`);
+		throw new AppError(
+			403,
+			'forbidden',
+			`Your role in this team is ${ROLE_LABEL[access.role].toLowerCase()}, which cannot write review notes (owners, designers and checkers can).`
+		);
 }
 
 function noteNotFound(): never {
 	throw new AppError(404, 'note-not-found', 'There is no such review note on this sheet.');
 }
 
-function view(row: ReviewNoteRow, replies: ReviewNoteReplyRow[], mentions: Array<{ note_id: string; reply_id: string | null; user_id: string }>, doc: SheetDoc): NoteView {
+function view(
+	row: ReviewNoteRow,
+	replies: ReviewNoteReplyRow[],
+	mentions: Array<{ note_id: string; reply_id: string | null; user_id: string }>,
+	doc: SheetDoc
+): NoteView {
 	const anchor = anchorOf(row);
 	const label = anchorLabel(doc, anchor);
 	return {
@@ -119,8 +170,11 @@ function view(row: ReviewNoteRow, replies: ReviewNoteReplyRow[], mentions: Array
 		body: row.body,
 		author: { id: row.author_id, name: row.author_label },
 		at: row.created_at,
-		mentions: mentions.filter((m) => m.note_id === row.id && m.reply_id === null).map((m) => m.user_id),
-		resolved: row.resolved_at !== null ? { by: row.resolved_by_label ?? '', at: row.resolved_at } : null,
+		mentions: mentions
+			.filter((m) => m.note_id === row.id && m.reply_id === null)
+			.map((m) => m.user_id),
+		resolved:
+			row.resolved_at !== null ? { by: row.resolved_by_label ?? '', at: row.resolved_at } : null,
 		replies: replies
 			.filter((r) => r.note_id === row.id)
 			.map((r) => ({
@@ -139,21 +193,39 @@ function view(row: ReviewNoteRow, replies: ReviewNoteReplyRow[], mentions: Array
  * The sheet's review notes, shown against `context` (a revision number, or null for the working
  * draft): each says whether its anchor still exists there.
  */
-export async function listNotes(db: DB, access: TeamAccess, sheetId: string, context: number | null = null): Promise<{ notes: NoteView[]; open: number; outdated: number }> {
+export async function listNotes(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	context: number | null = null
+): Promise<{ notes: NoteView[]; open: number; outdated: number }> {
 	const sheet = await loadSheet(db, access, sheetId);
 	const doc = await contextDoc(db, sheet, context);
 	const rows = await listNoteRows(db, sheet.id);
 	const ids = rows.map((r) => r.id);
 	const [replies, mentions] = await Promise.all([listReplyRows(db, ids), listMentionRows(db, ids)]);
 	const notes = rows.map((r) => view(r, replies, mentions, doc));
-	return { notes, open: notes.filter((n) => !n.resolved).length, outdated: notes.filter((n) => n.outdated).length };
+	return {
+		notes,
+		open: notes.filter((n) => !n.resolved).length,
+		outdated: notes.filter((n) => n.outdated).length
+	};
 }
 
-export async function getNote(db: DB, access: TeamAccess, sheetId: string, noteId: string, context: number | null = null): Promise<NoteView> {
+export async function getNote(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	noteId: string,
+	context: number | null = null
+): Promise<NoteView> {
 	const sheet = await loadSheet(db, access, sheetId);
 	const row = await getNoteRow(db, sheet.id, noteId);
 	if (!row) noteNotFound();
-	const [replies, mentions] = await Promise.all([listReplyRows(db, [row.id]), listMentionRows(db, [row.id])]);
+	const [replies, mentions] = await Promise.all([
+		listReplyRows(db, [row.id]),
+		listMentionRows(db, [row.id])
+	]);
 	return view(row, replies, mentions, await contextDoc(db, sheet, context));
 }
 
@@ -173,12 +245,20 @@ function recipient(m: Member): Recipient {
 }
 
 /** Writes a new thread; mails the members it mentions. */
-export async function createNote(db: DB, access: TeamAccess, sheetId: string, input: NewNoteInput, ctx?: NotifyContext, now = Date.now()): Promise<NoteView> {
+export async function createNote(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	input: NewNoteInput,
+	ctx?: NotifyContext,
+	now = Date.now()
+): Promise<NoteView> {
 	requireWrite(access);
 	const body = bodySchema.safeParse(input.body);
 	if (!body.success) throw new AppError(400, 'invalid-body', body.error.issues[0].message, 'body');
 	const anchor = anchorSchema.safeParse(input.anchor);
-	if (!anchor.success) throw new AppError(400, 'invalid-anchor', anchor.error.issues[0].message, 'anchor');
+	if (!anchor.success)
+		throw new AppError(400, 'invalid-anchor', anchor.error.issues[0].message, 'anchor');
 	const sheet = await loadSheet(db, access, sheetId);
 	const revision = input.revision ?? null;
 	const doc = await contextDoc(db, sheet, revision);
@@ -204,7 +284,12 @@ export async function createNote(db: DB, access: TeamAccess, sheetId: string, in
 				sheetId: sheet.id,
 				teamId: access.team.id,
 				anchorKind: anchor.data.kind,
-				anchorId: anchor.data.kind === 'leg' ? anchor.data.legId : anchor.data.kind === 'state' ? anchor.data.at : null,
+				anchorId:
+					anchor.data.kind === 'leg'
+						? anchor.data.legId
+						: anchor.data.kind === 'state'
+							? anchor.data.at
+							: null,
 				anchorLabel: label,
 				revisionNumber: revision,
 				draftVersion: revision === null ? sheet.draft_version : null,
@@ -225,14 +310,37 @@ export async function createNote(db: DB, access: TeamAccess, sheetId: string, in
 			'mention',
 			members.filter((m) => mentioned.includes(m.user_id)).map(recipient),
 			access.actor.id,
-			(r) => mentionMail({ name: r.name, authorName: author.label, sheetTitle: sheet.title, teamName: access.team.name, anchorText: where, body: body.data, url, settingsUrl: `${ctx.origin}${SETTINGS_PATH}` })
+			(r) =>
+				mentionMail({
+					name: r.name,
+					authorName: author.label,
+					sheetTitle: sheet.title,
+					teamName: access.team.name,
+					anchorText: where,
+					body: body.data,
+					url,
+					settingsUrl: `${ctx.origin}${SETTINGS_PATH}`
+				})
 		);
 	}
-	return view(row, [], mentioned.map((u) => ({ note_id: id, reply_id: null, user_id: u })), doc);
+	return view(
+		row,
+		[],
+		mentioned.map((u) => ({ note_id: id, reply_id: null, user_id: u })),
+		doc
+	);
 }
 
 /** Replies in a thread; mails the thread's author (a reply) and anyone mentioned (a mention). */
-export async function replyToNote(db: DB, access: TeamAccess, sheetId: string, noteId: string, input: { body: string }, ctx?: NotifyContext, now = Date.now()): Promise<NoteView> {
+export async function replyToNote(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	noteId: string,
+	input: { body: string },
+	ctx?: NotifyContext,
+	now = Date.now()
+): Promise<NoteView> {
 	requireWrite(access);
 	const body = bodySchema.safeParse(input.body);
 	if (!body.success) throw new AppError(400, 'invalid-body', body.error.issues[0].message, 'body');
@@ -244,7 +352,11 @@ export async function replyToNote(db: DB, access: TeamAccess, sheetId: string, n
 	const author = access.actor;
 	const replyId = newId();
 	await db.transaction().execute(async (trx) => {
-		await insertReply(trx, { id: replyId, noteId: note.id, kind: 'reply', body: body.data, author }, now);
+		await insertReply(
+			trx,
+			{ id: replyId, noteId: note.id, kind: 'reply', body: body.data, author },
+			now
+		);
 		await insertMentions(trx, note.id, replyId, mentioned, now);
 	});
 	if (ctx) {
@@ -260,16 +372,29 @@ export async function replyToNote(db: DB, access: TeamAccess, sheetId: string, n
 			settingsUrl: `${ctx.origin}${SETTINGS_PATH}`
 		};
 		const mentionedMembers = members.filter((m) => mentioned.includes(m.user_id));
-		await notify(db, ctx, 'mention', mentionedMembers.map(recipient), access.actor.id, (r) => mentionMail({ ...common, name: r.name }));
+		await notify(db, ctx, 'mention', mentionedMembers.map(recipient), access.actor.id, (r) =>
+			mentionMail({ ...common, name: r.name })
+		);
 		// the thread's author gets one mail: the mention if they were mentioned, else the reply
-		const threadAuthor = members.filter((m) => m.user_id === note.author_id && !mentioned.includes(m.user_id));
-		await notify(db, ctx, 'reply', threadAuthor.map(recipient), access.actor.id, (r) => replyMail({ ...common, name: r.name }));
+		const threadAuthor = members.filter(
+			(m) => m.user_id === note.author_id && !mentioned.includes(m.user_id)
+		);
+		await notify(db, ctx, 'reply', threadAuthor.map(recipient), access.actor.id, (r) =>
+			replyMail({ ...common, name: r.name })
+		);
 	}
 	return getNote(db, access, sheetId, noteId);
 }
 
 /** Resolves or reopens a thread (a line in the thread records who and when). */
-export async function setNoteState(db: DB, access: TeamAccess, sheetId: string, noteId: string, resolved: boolean, now = Date.now()): Promise<NoteView> {
+export async function setNoteState(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	noteId: string,
+	resolved: boolean,
+	now = Date.now()
+): Promise<NoteView> {
 	requireWrite(access);
 	const sheet = await loadSheet(db, access, sheetId);
 	const note = await getNoteRow(db, sheet.id, noteId);
@@ -277,8 +402,23 @@ export async function setNoteState(db: DB, access: TeamAccess, sheetId: string, 
 	const by = access.actor;
 	await db.transaction().execute(async (trx) => {
 		const changed = await setNoteResolved(trx, note.id, resolved ? by : null, now);
-		if (!changed) throw new AppError(409, resolved ? 'already-resolved' : 'already-open', resolved ? 'This thread is already resolved.' : 'This thread is already open.');
-		await insertReply(trx, { id: newId(), noteId: note.id, kind: resolved ? 'resolved' : 'reopened', body: '', author: by }, now);
+		if (!changed)
+			throw new AppError(
+				409,
+				resolved ? 'already-resolved' : 'already-open',
+				resolved ? 'This thread is already resolved.' : 'This thread is already open.'
+			);
+		await insertReply(
+			trx,
+			{
+				id: newId(),
+				noteId: note.id,
+				kind: resolved ? 'resolved' : 'reopened',
+				body: '',
+				author: by
+			},
+			now
+		);
 	});
 	return getNote(db, access, sheetId, noteId);
 }

@@ -1,7 +1,12 @@
 import type { DB } from './db/schema';
 import type { FlowContext } from './auth';
 import type { Composed } from './mail-templates';
-import { NOTIFICATION_KINDS, wantsMail, type NotificationKind, type NotificationSettings } from './db/notification-settings';
+import {
+	NOTIFICATION_KINDS,
+	wantsMail,
+	type NotificationKind,
+	type NotificationSettings
+} from './db/notification-settings';
 
 /*
  * Review and sign-off mails: who gets one, honouring each person's settings, and the links in
@@ -55,7 +60,9 @@ export async function notify(
 	compose: (r: Recipient) => Composed
 ): Promise<NotifyOutcome> {
 	const outcome: NotifyOutcome = { sent: [], optedOut: [], failed: [] };
-	const unique = [...new Map(recipients.filter((r) => r.id !== actorId).map((r) => [r.id, r])).values()];
+	const unique = [
+		...new Map(recipients.filter((r) => r.id !== actorId).map((r) => [r.id, r])).values()
+	];
 	if (!ctx || unique.length === 0) return outcome;
 	const wanted = await wantsMail(
 		db,
@@ -92,5 +99,7 @@ export const NOTIFICATION_LABELS: Record<NotificationKind, { label: string; hint
 
 /** The account page's form: a checkbox per kind, present when on. */
 export function settingsFromForm(form: FormData): NotificationSettings {
-	return Object.fromEntries(NOTIFICATION_KINDS.map((k) => [k, form.get(k) === 'on' || form.get(k) === '1'])) as NotificationSettings;
+	return Object.fromEntries(
+		NOTIFICATION_KINDS.map((k) => [k, form.get(k) === 'on' || form.get(k) === '1'])
+	) as NotificationSettings;
 }

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { addressKey, createBackoff, createLimiter, refundAll, retryAfterSeconds, takeAll } from './rate-limit';
+import {
+	addressKey,
+	createBackoff,
+	createLimiter,
+	refundAll,
+	retryAfterSeconds,
+	takeAll
+} from './rate-limit';
 
 function clock(start = 1_000_000) {
 	let t = start;
@@ -101,8 +108,16 @@ describe('takeAll', () => {
 		const c = clock();
 		const a = createLimiter({ ratePerSecond: 0.001, burst: 5, now: c.now });
 		const b = createLimiter({ ratePerSecond: 0.001, burst: 1, now: c.now });
-		expect(takeAll([[a, 'x'], [b, 'y']]).allowed).toBe(true);
-		const r = takeAll([[a, 'x'], [b, 'y']]);
+		expect(
+			takeAll([
+				[a, 'x'],
+				[b, 'y']
+			]).allowed
+		).toBe(true);
+		const r = takeAll([
+			[a, 'x'],
+			[b, 'y']
+		]);
 		expect(r.allowed).toBe(false);
 		// a's token was given back because b refused
 		expect(a.available('x')).toBe(4);
@@ -148,7 +163,9 @@ describe('createBackoff', () => {
 
 	it('counts attempts up front, so a burst sent at once cannot all slip through', () => {
 		const b = createBackoff({ ...options, now: () => 0 });
-		const allowed = Array.from({ length: 20 }, () => b.attempt('k')).filter((r) => r.allowed).length;
+		const allowed = Array.from({ length: 20 }, () => b.attempt('k')).filter(
+			(r) => r.allowed
+		).length;
 		expect(allowed).toBe(options.free);
 	});
 

@@ -16,7 +16,8 @@
  *   if (!r.allowed) return new Response(..., { status: 429, headers: { 'retry-after': retryAfterSeconds(r) } });
  */
 
-export type TakeResult = { allowed: true; remaining: number } | { allowed: false; retryAfterMs: number };
+export type TakeResult =
+	{ allowed: true; remaining: number } | { allowed: false; retryAfterMs: number };
 
 export interface LimiterOptions {
 	/** tokens added per second; <= 0 turns the limiter off */
@@ -48,7 +49,8 @@ interface Bucket {
 
 export function createLimiter(options: LimiterOptions): Limiter {
 	const { ratePerSecond, burst } = options;
-	if (!(burst >= 1) || !Number.isFinite(burst)) throw new RangeError('burst must be a finite number >= 1');
+	if (!(burst >= 1) || !Number.isFinite(burst))
+		throw new RangeError('burst must be a finite number >= 1');
 	if (!Number.isFinite(ratePerSecond)) throw new RangeError('ratePerSecond must be finite');
 	const enabled = ratePerSecond > 0;
 	const maxKeys = options.maxKeys ?? 50_000;
@@ -154,7 +156,10 @@ export function addressKey(ip: string | null): string {
 	const [head, tail] = bare.split('::');
 	const h = head ? head.split(':') : [];
 	const t = tail === undefined ? [] : tail ? tail.split(':') : [];
-	const groups = tail === undefined ? h : [...h, ...Array<string>(Math.max(0, 8 - h.length - t.length)).fill('0'), ...t];
+	const groups =
+		tail === undefined
+			? h
+			: [...h, ...Array<string>(Math.max(0, 8 - h.length - t.length)).fill('0'), ...t];
 	return `${groups
 		.slice(0, 4)
 		.map((g) => (parseInt(g, 16) || 0).toString(16))
@@ -201,7 +206,8 @@ export function createBackoff(options: BackoffOptions): Backoff {
 	const now = options.now ?? Date.now;
 	const entries = new Map<string, { failures: number; at: number }>();
 
-	const waitAfter = (failures: number) => (failures < free ? 0 : Math.min(maxMs, baseMs * 2 ** Math.min(failures - free, 40)));
+	const waitAfter = (failures: number) =>
+		failures < free ? 0 : Math.min(maxMs, baseMs * 2 ** Math.min(failures - free, 40));
 	function current(key: string, t: number) {
 		const e = entries.get(key);
 		if (e && t - e.at >= forgetMs) {
@@ -251,7 +257,12 @@ export function createBackoff(options: BackoffOptions): Backoff {
  * reveal nothing.
  */
 export const signInLimits = {
-	perAccountAndIp: createBackoff({ free: 5, baseMs: 1000, maxMs: 15 * 60_000, forgetMs: 24 * 3600_000 }),
+	perAccountAndIp: createBackoff({
+		free: 5,
+		baseMs: 1000,
+		maxMs: 15 * 60_000,
+		forgetMs: 24 * 3600_000
+	}),
 	perIp: createLimiter({ ratePerSecond: 1 / 10, burst: 30 })
 };
 

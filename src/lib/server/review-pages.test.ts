@@ -1,7 +1,13 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { expectAppError } from './testing';
 import { reviewWorld, type ReviewWorld } from './revisions.test-support';
-import { chartFrame, comparePageData, printPageData, revisionPageData, revisionParam } from './review-pages';
+import {
+	chartFrame,
+	comparePageData,
+	printPageData,
+	revisionPageData,
+	revisionParam
+} from './review-pages';
 import { saveRevision } from './revisions';
 import { createNote } from './notes';
 import { vesselDoc } from '$lib/revisions/test-fixtures';
@@ -33,20 +39,39 @@ describe('read-only page data', () => {
 
 	it('gives a revision page its notes against that revision, sign-off and history', async () => {
 		const sheet = await w.newSheet();
-		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, { message: 'First', baseRevision: null });
-		await createNote(w.env.db, await w.access(w.people.checker), sheet, { anchor: { kind: 'leg', legId: 'vent' }, body: 'Why 200 kPa?', revision: 1 });
+		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, {
+			message: 'First',
+			baseRevision: null
+		});
+		await createNote(w.env.db, await w.access(w.people.checker), sheet, {
+			anchor: { kind: 'leg', legId: 'vent' },
+			body: 'Why 200 kPa?',
+			revision: 1
+		});
 		const d = await revisionPageData(w.env.db, await w.access(w.people.checker), sheet, 1);
 		expect(d.revision.number).toBe(1);
 		expect(d.notes.map((n) => n.label)).toEqual(['L2']);
 		expect(d.signOff.designer.name).toBe('Arlo Brandt');
-		expect(d).toMatchObject({ canCheck: true, canEdit: false, canWrite: true, latest: { number: 1, status: 'draft' } });
+		expect(d).toMatchObject({
+			canCheck: true,
+			canEdit: false,
+			canWrite: true,
+			latest: { number: 1, status: 'draft' }
+		});
 		expect(d.members.map((m) => m.name)).toContain('Priya Nandakumar');
-		await expectAppError(revisionPageData(w.env.db, await w.access(w.people.checker), sheet, 2), 404, 'revision-not-found');
+		await expectAppError(
+			revisionPageData(w.env.db, await w.access(w.people.checker), sheet, 2),
+			404,
+			'revision-not-found'
+		);
 	});
 
 	it('compares two sides and prints a revision or the draft', async () => {
 		const sheet = await w.newSheet();
-		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, { message: 'First', baseRevision: null });
+		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, {
+			message: 'First',
+			baseRevision: null
+		});
 		const c = await comparePageData(w.env.db, await w.access(w.people.viewer), sheet, 1, 'draft');
 		expect(c.before.label).toBe('Rev 1');
 		expect(c.after.label).toBe('Working draft');
@@ -75,13 +100,31 @@ describe('the sheet page’s review data', () => {
 		const { uploadTrace } = await import('./traces');
 		const sheet = await w.newSheet();
 		const empty = await sheetReviewData(w.env.db, await w.access(w.people.viewer), sheet);
-		expect(empty).toMatchObject({ revisions: [], notes: [], traces: [], latestDoc: null, canEdit: false, canWrite: false });
-		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, { message: 'First', baseRevision: null });
-		await uploadTrace(w.env.db, await w.access(w.people.designer), sheet, { bytes: new TextEncoder().encode('time [s],P [kPa a],T [°C]\n0,200,20\n'), filename: 'a.csv' });
+		expect(empty).toMatchObject({
+			revisions: [],
+			notes: [],
+			traces: [],
+			latestDoc: null,
+			canEdit: false,
+			canWrite: false
+		});
+		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, {
+			message: 'First',
+			baseRevision: null
+		});
+		await uploadTrace(w.env.db, await w.access(w.people.designer), sheet, {
+			bytes: new TextEncoder().encode('time [s],P [kPa a],T [°C]\n0,200,20\n'),
+			filename: 'a.csv'
+		});
 		const d = await sheetReviewData(w.env.db, await w.access(w.people.designer), sheet);
 		expect(d.revisions.map((r) => r.number)).toEqual([1]);
 		expect(d.latestDoc?.spec.legs.map((l) => l.id)).toEqual(['heat', 'vent']);
 		expect(d.traces[0].points).toHaveLength(1);
-		expect(d).toMatchObject({ canEdit: true, canWrite: true, canCheck: false, me: w.people.designer.id });
+		expect(d).toMatchObject({
+			canEdit: true,
+			canWrite: true,
+			canCheck: false,
+			me: w.people.designer.id
+		});
 	});
 });

@@ -1,7 +1,13 @@
 import type { DB } from './db/schema';
 import { AppError } from './errors';
 import type { TeamAccess } from './guard';
-import { computePath, getFluid, isolines as engineIsolines, saturationCurve, ThermoError } from '$lib/thermo';
+import {
+	computePath,
+	getFluid,
+	isolines as engineIsolines,
+	saturationCurve,
+	ThermoError
+} from '$lib/thermo';
 import type { Isoline, PathResult, SaturationCurve } from '$lib/thermo/types';
 import type { ChartFrame } from '$lib/review/types';
 import type { SheetDoc } from '$lib/sheets/types';
@@ -9,7 +15,15 @@ import { isobarValues, isothermValues } from '$lib/sheets/isolines';
 import type { DesignLimits as ChartLimits, CurvePoint } from '$lib/charts/types';
 import { listMembers } from './db/memberships';
 import { latestRevision } from './db/revisions';
-import { compareRevisions, listRevisions, loadSheet, readRevision, signOffOf, type CompareSide, type RevisionSummary } from './revisions';
+import {
+	compareRevisions,
+	listRevisions,
+	loadSheet,
+	readRevision,
+	signOffOf,
+	type CompareSide,
+	type RevisionSummary
+} from './revisions';
 import { listNotes } from './notes';
 import { listTraces } from './traces';
 import { checkDoc } from './sheets';
@@ -53,20 +67,55 @@ export function chartFrame(doc: SheetDoc, results: Array<PathResult | null>): Ch
 	const maxP = Math.max(f.critical.P, ...states.map((s) => s.P));
 	const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.P));
 	const maxT = Math.max(f.critical.T, ...states.map((s) => s.T));
-	const isobars = doc.chart.isolines ? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units).filter((v) => v <= f.limits.Pmax) : [];
-	const isotherms = doc.chart.isolines ? isothermValues({ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) }, doc.units).filter((v) => v >= f.limits.Tmin && v <= f.limits.Tmax) : [];
+	const isobars = doc.chart.isolines
+		? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units).filter(
+				(v) => v <= f.limits.Pmax
+			)
+		: [];
+	const isotherms = doc.chart.isolines
+		? isothermValues(
+				{ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) },
+				doc.units
+			).filter((v) => v >= f.limits.Tmin && v <= f.limits.Tmax)
+		: [];
 	const lim = doc.spec.limits ?? {};
-	const pLimits = [lim.designPressure, lim.reliefSetPressure].filter((v): v is number => typeof v === 'number' && v <= f.limits.Pmax);
-	const tLimits = [lim.designTemperature, lim.minimumTemperature].filter((v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax);
+	const pLimits = [lim.designPressure, lim.reliefSetPressure].filter(
+		(v): v is number => typeof v === 'number' && v <= f.limits.Pmax
+	);
+	const tLimits = [lim.designTemperature, lim.minimumTemperature].filter(
+		(v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax
+	);
 	const limitIsobars = lines(f.id, 'isobar', pLimits);
 	const limitIsotherms = lines(f.id, 'isotherm', tLimits);
-	const curve = (list: Isoline[], value: number | undefined): CurvePoint[] | undefined => list.find((l) => Math.abs(l.value / (value ?? NaN) - 1) < 1e-9)?.points;
+	const curve = (list: Isoline[], value: number | undefined): CurvePoint[] | undefined =>
+		list.find((l) => Math.abs(l.value / (value ?? NaN) - 1) < 1e-9)?.points;
 	const limits: ChartLimits = {};
-	if (lim.designPressure !== undefined) limits.designPressure = { value: lim.designPressure, points: curve(limitIsobars, lim.designPressure) };
-	if (lim.reliefSetPressure !== undefined) limits.reliefSetPressure = { value: lim.reliefSetPressure, points: curve(limitIsobars, lim.reliefSetPressure) };
-	if (lim.designTemperature !== undefined) limits.designTemperature = { value: lim.designTemperature, points: curve(limitIsotherms, lim.designTemperature) };
-	if (lim.minimumTemperature !== undefined) limits.minimumTemperature = { value: lim.minimumTemperature, points: curve(limitIsotherms, lim.minimumTemperature) };
-	return { fluid: f, saturation: dome(f.id), isolines: { tv: lines(f.id, 'isobar', isobars), pv: lines(f.id, 'isotherm', isotherms) }, limits };
+	if (lim.designPressure !== undefined)
+		limits.designPressure = {
+			value: lim.designPressure,
+			points: curve(limitIsobars, lim.designPressure)
+		};
+	if (lim.reliefSetPressure !== undefined)
+		limits.reliefSetPressure = {
+			value: lim.reliefSetPressure,
+			points: curve(limitIsobars, lim.reliefSetPressure)
+		};
+	if (lim.designTemperature !== undefined)
+		limits.designTemperature = {
+			value: lim.designTemperature,
+			points: curve(limitIsotherms, lim.designTemperature)
+		};
+	if (lim.minimumTemperature !== undefined)
+		limits.minimumTemperature = {
+			value: lim.minimumTemperature,
+			points: curve(limitIsotherms, lim.minimumTemperature)
+		};
+	return {
+		fluid: f,
+		saturation: dome(f.id),
+		isolines: { tv: lines(f.id, 'isobar', isobars), pv: lines(f.id, 'isotherm', isotherms) },
+		limits
+	};
 }
 
 /** The sheet, its team's members (for mentions and checkers) and the newest revision number. */
@@ -75,7 +124,13 @@ export async function sheetContext(db: DB, access: TeamAccess, sheetId: string) 
 	const members = await listMembers(db, access.team.id);
 	const latest = await latestRevision(db, sheet.id);
 	return {
-		sheet: { id: sheet.id, number: sheet.number, title: sheet.title, status: sheet.status, version: sheet.draft_version },
+		sheet: {
+			id: sheet.id,
+			number: sheet.number,
+			title: sheet.title,
+			status: sheet.status,
+			version: sheet.draft_version
+		},
 		members: members.map((m) => ({ id: m.user_id, name: m.name, role: m.role })),
 		latest: latest ? { number: latest.number, status: latest.status } : null
 	};
@@ -86,20 +141,38 @@ export function revisionParam(value: string | null, latest: number | null): numb
 	if (value === null || value === '') return latest ?? 'draft';
 	if (value === 'draft') return 'draft';
 	if (/^[1-9]\d{0,8}$/.test(value)) return Number(value);
-	throw new AppError(400, 'invalid-revision', 'rev must be a revision number (1, 2, …) or "draft".');
+	throw new AppError(
+		400,
+		'invalid-revision',
+		'rev must be a revision number (1, 2, …) or "draft".'
+	);
 }
 
 // ---- page data -----------------------------------------------------------------------------------
 
 function capabilities(access: TeamAccess) {
-	return { canEdit: access.can('sheet:edit'), canCheck: access.can('sheet:check'), canApprove: access.can('sheet:approve'), canWrite: access.can('note:write') };
+	return {
+		canEdit: access.can('sheet:edit'),
+		canCheck: access.can('sheet:check'),
+		canApprove: access.can('sheet:approve'),
+		canWrite: access.can('note:write')
+	};
 }
 
 /** The read-only page of one revision: its path, notes shown against it, sign-off and history. */
-export async function revisionPageData(db: DB, access: TeamAccess, sheetId: string, number: number) {
+export async function revisionPageData(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	number: number
+) {
 	const ctx = await sheetContext(db, access, sheetId);
 	const revision = await readRevision(db, access, sheetId, number);
-	const [{ notes }, traces, history] = await Promise.all([listNotes(db, access, sheetId, number), listTraces(db, access, sheetId, { points: 'chart' }), listRevisions(db, access, sheetId)]);
+	const [{ notes }, traces, history] = await Promise.all([
+		listNotes(db, access, sheetId, number),
+		listTraces(db, access, sheetId, { points: 'chart' }),
+		listRevisions(db, access, sheetId)
+	]);
 	return {
 		...ctx,
 		revision,
@@ -115,7 +188,13 @@ export async function revisionPageData(db: DB, access: TeamAccess, sheetId: stri
 }
 
 /** The comparison page: both sides with their paths, the diff, and the revision list for the pickers. */
-export async function comparePageData(db: DB, access: TeamAccess, sheetId: string, a: CompareSide, b: CompareSide) {
+export async function comparePageData(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	a: CompareSide,
+	b: CompareSide
+) {
 	const ctx = await sheetContext(db, access, sheetId);
 	const c = await compareRevisions(db, access, sheetId, a, b);
 	const history = await listRevisions(db, access, sheetId);
@@ -125,12 +204,21 @@ export async function comparePageData(db: DB, access: TeamAccess, sheetId: strin
 		b,
 		...c,
 		frame: chartFrame(c.after.doc, [c.after.result, c.before.result]),
-		revisions: history.revisions.map((r: RevisionSummary) => ({ number: r.number, status: r.status, message: r.message }))
+		revisions: history.revisions.map((r: RevisionSummary) => ({
+			number: r.number,
+			status: r.status,
+			message: r.message
+		}))
 	};
 }
 
 /** The print view of a revision or of the working draft. */
-export async function printPageData(db: DB, access: TeamAccess, sheetId: string, rev: number | 'draft') {
+export async function printPageData(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	rev: number | 'draft'
+) {
 	const ctx = await sheetContext(db, access, sheetId);
 	let doc;
 	let result: PathResult | null;
@@ -145,12 +233,20 @@ export async function printPageData(db: DB, access: TeamAccess, sheetId: string,
 			result = null;
 		}
 	} else {
-		const { doc: frozen, result: computed, ...summary } = await readRevision(db, access, sheetId, rev);
+		const {
+			doc: frozen,
+			result: computed,
+			...summary
+		} = await readRevision(db, access, sheetId, rev);
 		doc = frozen;
 		result = computed;
 		revision = summary;
 	}
-	const [{ notes }, traces, { events }] = await Promise.all([listNotes(db, access, sheetId, rev === 'draft' ? null : rev), listTraces(db, access, sheetId, { points: 'chart' }), listRevisions(db, access, sheetId)]);
+	const [{ notes }, traces, { events }] = await Promise.all([
+		listNotes(db, access, sheetId, rev === 'draft' ? null : rev),
+		listTraces(db, access, sheetId, { points: 'chart' }),
+		listRevisions(db, access, sheetId)
+	]);
 	return {
 		...ctx,
 		rev,
@@ -158,7 +254,13 @@ export async function printPageData(db: DB, access: TeamAccess, sheetId: string,
 		doc,
 		result,
 		revision,
-		signOff: revision ? signOffOf(revision) : { designer: { name: null, at: null }, checker: { name: null, at: null }, approver: { name: null, at: null } },
+		signOff: revision
+			? signOffOf(revision)
+			: {
+					designer: { name: null, at: null },
+					checker: { name: null, at: null },
+					approver: { name: null, at: null }
+				},
 		frame: chartFrame(doc, [result]),
 		notes,
 		traces,
@@ -173,8 +275,14 @@ export async function printPageData(db: DB, access: TeamAccess, sheetId: string,
  */
 export async function sheetReviewData(db: DB, access: TeamAccess, sheetId: string) {
 	const ctx = await sheetContext(db, access, sheetId);
-	const [history, { notes }, traces] = await Promise.all([listRevisions(db, access, sheetId), listNotes(db, access, sheetId, null), listTraces(db, access, sheetId, { points: 'chart' })]);
-	const latestDoc = ctx.latest ? (await readRevision(db, access, sheetId, ctx.latest.number)).doc : null;
+	const [history, { notes }, traces] = await Promise.all([
+		listRevisions(db, access, sheetId),
+		listNotes(db, access, sheetId, null),
+		listTraces(db, access, sheetId, { points: 'chart' })
+	]);
+	const latestDoc = ctx.latest
+		? (await readRevision(db, access, sheetId, ctx.latest.number)).doc
+		: null;
 	return {
 		revisions: history.revisions,
 		events: history.events,

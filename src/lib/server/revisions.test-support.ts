@@ -30,7 +30,12 @@ export interface ReviewWorld {
 export async function reviewWorld(): Promise<ReviewWorld> {
 	const env = await setupIntegration('http://statewright.test');
 	const person = async (email: string, name: string): Promise<SessionUser> => {
-		const u = await createUser(env.db, { email, name, passwordHash: 'unused', emailVerified: true });
+		const u = await createUser(env.db, {
+			email,
+			name,
+			passwordHash: 'unused',
+			emailVerified: true
+		});
 		return { id: u.id, email: u.email, name: u.name, emailVerified: true };
 	};
 	const owner = await person('hale.owner@example.com', 'Ines Hale');

@@ -19,7 +19,14 @@ import { listMembers, type Member } from './db/memberships';
 import { countOpenNotes } from './db/notes';
 import { checkDoc, DraftConflictError, SHEET_ID, type SaveResult } from './sheets';
 import { approvedMail, checkedMail, returnedMail, submittedMail } from './mail-templates';
-import { notify, revisionPath, sheetPath, SETTINGS_PATH, type NotifyContext, type Recipient } from './notifications';
+import {
+	notify,
+	revisionPath,
+	sheetPath,
+	SETTINGS_PATH,
+	type NotifyContext,
+	type Recipient
+} from './notifications';
 import { can, ROLE_LABEL, type Capability } from '../roles';
 import { computePath, ThermoError } from '$lib/thermo';
 import type { PathResult } from '$lib/thermo/types';
@@ -57,9 +64,18 @@ export type { RevisionEvent, RevisionFull, RevisionSummary, Signature };
  *   message) comes back in the error, so nothing is lost and it can be compared and merged.
  */
 
-export const messageSchema = plainText('The revision message', 'lines', 'Describe what changed in this revision.')
+export const messageSchema = plainText(
+	'The revision message',
+	'lines',
+	'Describe what changed in this revision.'
+)
 	.transform((s) => s.trim())
-	.pipe(z.string().min(1, { error: 'Describe what changed in this revision (a line is enough).' }).max(2000, { error: 'Use at most 2000 characters for the revision message.' }));
+	.pipe(
+		z
+			.string()
+			.min(1, { error: 'Describe what changed in this revision (a line is enough).' })
+			.max(2000, { error: 'Use at most 2000 characters for the revision message.' })
+	);
 
 export const noteSchema = plainText('The note', 'lines', 'note must be text.')
 	.optional()
@@ -73,7 +89,10 @@ export const overrideSchema = z
 	.pipe(
 		z
 			.string()
-			.min(1, { error: 'Give the reason for signing off over the open review notes (a line is enough), or leave override out and resolve the notes first.' })
+			.min(1, {
+				error:
+					'Give the reason for signing off over the open review notes (a line is enough), or leave override out and resolve the notes first.'
+			})
 			.max(2000, { error: 'Use at most 2000 characters for the override reason.' })
 			.optional()
 	);
@@ -113,7 +132,9 @@ export function summaryOf(r: RevisionListRow, latestNumber: number): RevisionSum
 }
 
 /** Designer, checker and approver with their dates, for the title block. */
-export function signOffOf(r: Pick<RevisionSummary, 'author' | 'checked' | 'approved'>): TitleSignOff {
+export function signOffOf(
+	r: Pick<RevisionSummary, 'author' | 'checked' | 'approved'>
+): TitleSignOff {
 	return {
 		designer: { name: r.author.name, at: r.author.at },
 		checker: { name: r.checked?.name ?? null, at: r.checked?.at ?? null },
@@ -128,11 +149,20 @@ const DOING: Partial<Record<Capability, string>> = {
 };
 
 function requireCap(access: TeamAccess, cap: Capability): void {
-	if (!access.can(cap)) throw new AppError(403, 'forbidden', `Your role in this team is ${ROLE_LABEL[access.role].toLowerCase()}, which cannot ${DOING[cap] ?? cap}.`);
+	if (!access.can(cap))
+		throw new AppError(
+			403,
+			'forbidden',
+			`Your role in this team is ${ROLE_LABEL[access.role].toLowerCase()}, which cannot ${DOING[cap] ?? cap}.`
+		);
 }
 
 function sheetNotFound(): never {
-	throw new AppError(404, 'sheet-not-found', 'There is no such sheet in this team. It may have been mistyped; the team page lists its sheets.');
+	throw new AppError(
+		404,
+		'sheet-not-found',
+		'There is no such sheet in this team. It may have been mistyped; the team page lists its sheets.'
+	);
 }
 
 /** The sheet row of this team (404 otherwise). */
@@ -144,14 +174,22 @@ export async function loadSheet(db: DB, access: TeamAccess, sheetId: string): Pr
 }
 
 function revisionNotFound(n: number): never {
-	throw new AppError(404, 'revision-not-found', `This sheet has no Rev ${n}. The history lists its revisions.`);
+	throw new AppError(
+		404,
+		'revision-not-found',
+		`This sheet has no Rev ${n}. The history lists its revisions.`
+	);
 }
 
 function parseJson<T>(text: string, what: string): T {
 	try {
 		return JSON.parse(text) as T;
 	} catch {
-		throw new AppError(422, 'unreadable-revision', `The stored ${what} cannot be read. Please report it.`);
+		throw new AppError(
+			422,
+			'unreadable-revision',
+			`The stored ${what} cannot be read. Please report it.`
+		);
 	}
 }
 
@@ -161,7 +199,11 @@ export function computeDoc(doc: SheetDoc): PathResult {
 		return computePath(engineSpec(doc));
 	} catch (e) {
 		if (e instanceof ThermoError)
-			throw new AppError(422, 'path-not-computable', `A revision holds the computed path, and this one cannot be computed: ${e.message}${e.hint ? ` ${e.hint}` : ''}`);
+			throw new AppError(
+				422,
+				'path-not-computable',
+				`A revision holds the computed path, and this one cannot be computed: ${e.message}${e.hint ? ` ${e.hint}` : ''}`
+			);
 		throw e;
 	}
 }
@@ -170,7 +212,10 @@ export function computeDoc(doc: SheetDoc): PathResult {
 export class RevisionConflictError extends AppError {
 	readonly latest: RevisionSummary;
 	readonly yours: { doc: SheetDoc; message: string; baseRevision: number | null };
-	constructor(latest: RevisionSummary, yours: { doc: SheetDoc; message: string; baseRevision: number | null }) {
+	constructor(
+		latest: RevisionSummary,
+		yours: { doc: SheetDoc; message: string; baseRevision: number | null }
+	) {
 		const when = new Date(latest.author.at).toISOString().replace('T', ' ').slice(0, 16);
 		super(
 			409,
@@ -193,17 +238,33 @@ export interface SaveRevisionInput {
 }
 
 /** Saves a new revision. */
-export async function saveRevision(db: DB, access: TeamAccess, sheetId: string, input: SaveRevisionInput, now = Date.now()): Promise<RevisionFull> {
+export async function saveRevision(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	input: SaveRevisionInput,
+	now = Date.now()
+): Promise<RevisionFull> {
 	requireCap(access, 'sheet:edit');
 	const message = messageSchema.safeParse(input.message);
-	if (!message.success) throw new AppError(400, 'invalid-message', message.error.issues[0].message, 'message');
-	if (input.baseRevision !== null && !(Number.isInteger(input.baseRevision) && input.baseRevision >= 1))
-		throw new AppError(400, 'invalid-base', 'baseRevision must be the number of the revision the draft started from, or null before Rev 1.', 'baseRevision');
+	if (!message.success)
+		throw new AppError(400, 'invalid-message', message.error.issues[0].message, 'message');
+	if (
+		input.baseRevision !== null &&
+		!(Number.isInteger(input.baseRevision) && input.baseRevision >= 1)
+	)
+		throw new AppError(
+			400,
+			'invalid-base',
+			'baseRevision must be the number of the revision the draft started from, or null before Rev 1.',
+			'baseRevision'
+		);
 	const sheet = await loadSheet(db, access, sheetId);
 	let doc: SheetDoc;
 	if (input.doc !== undefined) doc = checkDoc(input.doc, 'sent').doc;
 	else {
-		if (input.draftVersion !== undefined && input.draftVersion !== sheet.draft_version) throw new DraftConflictError(sheet);
+		if (input.draftVersion !== undefined && input.draftVersion !== sheet.draft_version)
+			throw new DraftConflictError(sheet);
 		doc = checkDoc(parseJson(sheet.draft, 'draft')).doc;
 	}
 	const result = computeDoc(doc);
@@ -213,8 +274,17 @@ export async function saveRevision(db: DB, access: TeamAccess, sheetId: string, 
 		const latest = await latestRevision(trx, sheet.id);
 		const latestNumber = latest?.number ?? null;
 		if (latestNumber !== input.baseRevision) {
-			if (!latest) throw new AppError(409, 'revision-conflict', `This sheet has no revisions yet, so the draft cannot be based on Rev ${input.baseRevision}. Save again with baseRevision null.`);
-			throw new RevisionConflictError(summaryOf(latest, latest.number), { doc, message: message.data, baseRevision: input.baseRevision });
+			if (!latest)
+				throw new AppError(
+					409,
+					'revision-conflict',
+					`This sheet has no revisions yet, so the draft cannot be based on Rev ${input.baseRevision}. Save again with baseRevision null.`
+				);
+			throw new RevisionConflictError(summaryOf(latest, latest.number), {
+				doc,
+				message: message.data,
+				baseRevision: input.baseRevision
+			});
 		}
 		if (latest?.status === 'in-check')
 			throw new AppError(
@@ -225,23 +295,46 @@ export async function saveRevision(db: DB, access: TeamAccess, sheetId: string, 
 		if (latest) {
 			const prev = await getRevision(trx, sheet.id, latest.number);
 			if (prev && sameDoc(checkDoc(parseJson(prev.doc, 'revision')).doc, doc))
-				throw new AppError(422, 'unchanged', `The draft is the same as Rev ${latest.number}; there is nothing new to save. Edit the sheet first.`);
+				throw new AppError(
+					422,
+					'unchanged',
+					`The draft is the same as Rev ${latest.number}; there is nothing new to save. Edit the sheet first.`
+				);
 		}
 		const number = (latestNumber ?? 0) + 1;
 		const id = newId();
 		await insertRevision(
 			trx,
-			{ id, sheetId: sheet.id, teamId: access.team.id, number, basedOn: latestNumber, title: sheet.title, doc: JSON.stringify(doc), result: JSON.stringify(result), message: message.data, author },
+			{
+				id,
+				sheetId: sheet.id,
+				teamId: access.team.id,
+				number,
+				basedOn: latestNumber,
+				title: sheet.title,
+				doc: JSON.stringify(doc),
+				result: JSON.stringify(result),
+				message: message.data,
+				author
+			},
 			now
 		);
-		await logRevisionEvent(trx, { revisionId: id, sheetId: sheet.id, kind: 'saved', actor: author, note: message.data }, now);
+		await logRevisionEvent(
+			trx,
+			{ revisionId: id, sheetId: sheet.id, kind: 'saved', actor: author, note: message.data },
+			now
+		);
 		await syncSheetStatus(trx, sheet.id);
 		const row = (await latestRevision(trx, sheet.id))!;
 		return { ...summaryOf(row, number), doc, result };
 	});
 }
 
-export async function listRevisions(db: DB, access: TeamAccess, sheetId: string): Promise<{ revisions: RevisionSummary[]; events: RevisionEvent[] }> {
+export async function listRevisions(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string
+): Promise<{ revisions: RevisionSummary[]; events: RevisionEvent[] }> {
 	const sheet = await loadSheet(db, access, sheetId);
 	const rows = await listRevisionRows(db, sheet.id);
 	const latest = rows[0]?.number ?? 0;
@@ -253,7 +346,10 @@ export async function listRevisions(db: DB, access: TeamAccess, sheetId: string)
 			kind: e.kind,
 			actor: e.actor_label,
 			note: e.note,
-			override: e.override_reason !== null ? { reason: e.override_reason, openNotes: e.open_notes ?? 0 } : null,
+			override:
+				e.override_reason !== null
+					? { reason: e.override_reason, openNotes: e.open_notes ?? 0 }
+					: null,
 			at: e.created_at
 		}))
 	};
@@ -261,11 +357,21 @@ export async function listRevisions(db: DB, access: TeamAccess, sheetId: string)
 
 export function parseRevisionNumber(text: string): number {
 	const n = Number(text);
-	if (!/^[1-9]\d{0,8}$/.test(text) || !Number.isSafeInteger(n)) throw new AppError(404, 'revision-not-found', `"${text}" is not a revision number; revisions are numbered 1, 2, 3 …`);
+	if (!/^[1-9]\d{0,8}$/.test(text) || !Number.isSafeInteger(n))
+		throw new AppError(
+			404,
+			'revision-not-found',
+			`"${text}" is not a revision number; revisions are numbered 1, 2, 3 …`
+		);
 	return n;
 }
 
-export async function readRevision(db: DB, access: TeamAccess, sheetId: string, number: number): Promise<RevisionFull> {
+export async function readRevision(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	number: number
+): Promise<RevisionFull> {
 	const sheet = await loadSheet(db, access, sheetId);
 	const row = await getRevision(db, sheet.id, number);
 	if (!row) revisionNotFound(number);
@@ -291,14 +397,49 @@ interface Step {
 }
 
 const STEPS: Record<Action, Step> = {
-	submit: { cap: 'sheet:edit', from: ['draft'], to: 'in-check', event: 'submitted', verb: 'submit for checking' },
-	withdraw: { cap: 'sheet:edit', from: ['in-check'], to: 'draft', event: 'returned', verb: 'withdraw from checking' },
-	check: { cap: 'sheet:check', from: ['in-check'], to: 'checked', event: 'checked', verb: 'mark checked' },
-	return: { cap: 'sheet:check', from: ['in-check', 'checked'], to: 'draft', event: 'returned', verb: 'return to the designer' },
-	approve: { cap: 'sheet:approve', from: ['checked'], to: 'approved', event: 'approved', verb: 'approve' }
+	submit: {
+		cap: 'sheet:edit',
+		from: ['draft'],
+		to: 'in-check',
+		event: 'submitted',
+		verb: 'submit for checking'
+	},
+	withdraw: {
+		cap: 'sheet:edit',
+		from: ['in-check'],
+		to: 'draft',
+		event: 'returned',
+		verb: 'withdraw from checking'
+	},
+	check: {
+		cap: 'sheet:check',
+		from: ['in-check'],
+		to: 'checked',
+		event: 'checked',
+		verb: 'mark checked'
+	},
+	return: {
+		cap: 'sheet:check',
+		from: ['in-check', 'checked'],
+		to: 'draft',
+		event: 'returned',
+		verb: 'return to the designer'
+	},
+	approve: {
+		cap: 'sheet:approve',
+		from: ['checked'],
+		to: 'approved',
+		event: 'approved',
+		verb: 'approve'
+	}
 };
 
-const STATUS_WORDS: Record<SheetStatusValue, string> = { draft: 'a draft', 'in-check': 'in check', checked: 'checked', approved: 'approved (and locked)' };
+const STATUS_WORDS: Record<SheetStatusValue, string> = {
+	draft: 'a draft',
+	'in-check': 'in check',
+	checked: 'checked',
+	approved: 'approved (and locked)'
+};
 
 export interface WorkflowInput {
 	/** a note with the step (required to return a revision) */
@@ -328,11 +469,23 @@ export async function moveRevision(
 	requireCap(access, step.cap);
 	const note = noteSchema.safeParse(input.note);
 	if (!note.success) throw new AppError(400, 'invalid-note', note.error.issues[0].message, 'note');
-	if (action === 'return' && !note.data) throw new AppError(400, 'invalid-note', 'Say why the revision goes back: the designer reads this note.', 'note');
+	if (action === 'return' && !note.data)
+		throw new AppError(
+			400,
+			'invalid-note',
+			'Say why the revision goes back: the designer reads this note.',
+			'note'
+		);
 	const override = overrideSchema.safeParse(input.override);
-	if (!override.success) throw new AppError(400, 'invalid-override', override.error.issues[0].message, 'override');
+	if (!override.success)
+		throw new AppError(400, 'invalid-override', override.error.issues[0].message, 'override');
 	if (override.data !== undefined && action !== 'check' && action !== 'approve')
-		throw new AppError(400, 'invalid-override', 'override applies only to check and approve (signing off over open review notes); leave it out for this step.', 'override');
+		throw new AppError(
+			400,
+			'invalid-override',
+			'override applies only to check and approve (signing off over open review notes); leave it out for this step.',
+			'override'
+		);
 	const sheet = await loadSheet(db, access, sheetId);
 	const members = await listMembers(db, access.team.id);
 	const by = access.actor;
@@ -343,7 +496,11 @@ export async function moveRevision(
 		if (!row) revisionNotFound(number);
 		const latest = (await latestRevision(trx, sheet.id))!;
 		if (latest.number !== number)
-			throw new AppError(409, 'not-latest', `Rev ${number} has been superseded by Rev ${latest.number}; only the newest revision moves through sign-off.`);
+			throw new AppError(
+				409,
+				'not-latest',
+				`Rev ${number} has been superseded by Rev ${latest.number}; only the newest revision moves through sign-off.`
+			);
 		if (!step.from.includes(row.status))
 			throw new AppError(
 				409,
@@ -353,10 +510,23 @@ export async function moveRevision(
 		if (action === 'return' && row.status === 'checked') requireCap(access, 'sheet:approve');
 		const isAuthor = access.actor.id !== null && access.actor.id === row.author_id;
 		if (action === 'check' && isAuthor)
-			throw new AppError(403, 'self-check', `You saved Rev ${number}, so you cannot check it: a revision is checked by someone other than its designer.`);
+			throw new AppError(
+				403,
+				'self-check',
+				`You saved Rev ${number}, so you cannot check it: a revision is checked by someone other than its designer.`
+			);
 		if (action === 'approve' && isAuthor)
-			throw new AppError(403, 'self-approve', `You saved Rev ${number}, so you cannot approve it: a revision is approved by someone other than its designer.`);
-		if (action === 'return' && isAuthor) throw new AppError(403, 'self-return', `You saved Rev ${number}; withdraw it from checking instead of returning it.`);
+			throw new AppError(
+				403,
+				'self-approve',
+				`You saved Rev ${number}, so you cannot approve it: a revision is approved by someone other than its designer.`
+			);
+		if (action === 'return' && isAuthor)
+			throw new AppError(
+				403,
+				'self-return',
+				`You saved Rev ${number}; withdraw it from checking instead of returning it.`
+			);
 
 		// document control: no sign-off over open review notes without a recorded reason
 		if (action === 'check' || action === 'approve') {
@@ -368,23 +538,73 @@ export async function moveRevision(
 		let checkerId: string | null = null;
 		if (action === 'submit' && input.checkerId) {
 			const m = members.find((x) => x.user_id === input.checkerId);
-			if (!m || !can(m.role, 'sheet:check')) throw new AppError(400, 'invalid-checker', 'Ask a member of this team who can check revisions (a checker or an owner).', 'checkerId');
-			if (m.user_id === row.author_id) throw new AppError(400, 'invalid-checker', `${m.name} saved Rev ${number}; ask someone else to check it.`, 'checkerId');
+			if (!m || !can(m.role, 'sheet:check'))
+				throw new AppError(
+					400,
+					'invalid-checker',
+					'Ask a member of this team who can check revisions (a checker or an owner).',
+					'checkerId'
+				);
+			if (m.user_id === row.author_id)
+				throw new AppError(
+					400,
+					'invalid-checker',
+					`${m.name} saved Rev ${number}; ask someone else to check it.`,
+					'checkerId'
+				);
 			checkerId = m.user_id;
 		}
 
 		const patch =
 			action === 'submit'
-				? { status: step.to, submitted_by: by.id, submitted_by_label: by.label, submitted_at: now, check_requested_from: checkerId, checked_by: null, checked_by_label: null, checked_at: null, returned_by: null, returned_by_label: null, returned_at: null }
+				? {
+						status: step.to,
+						submitted_by: by.id,
+						submitted_by_label: by.label,
+						submitted_at: now,
+						check_requested_from: checkerId,
+						checked_by: null,
+						checked_by_label: null,
+						checked_at: null,
+						returned_by: null,
+						returned_by_label: null,
+						returned_at: null
+					}
 				: action === 'check'
 					? { status: step.to, checked_by: by.id, checked_by_label: by.label, checked_at: now }
 					: action === 'approve'
 						? { status: step.to, approved_by: by.id, approved_by_label: by.label, approved_at: now }
-						: { status: step.to, returned_by: by.id, returned_by_label: by.label, returned_at: now, checked_by: null, checked_by_label: null, checked_at: null };
+						: {
+								status: step.to,
+								returned_by: by.id,
+								returned_by_label: by.label,
+								returned_at: now,
+								checked_by: null,
+								checked_by_label: null,
+								checked_at: null
+							};
 		if (!(await updateRevisionStatus(trx, row.id, row.status, patch)))
-			throw new AppError(409, 'wrong-status', `Rev ${number} changed while you were looking at it. Reload to see its status.`);
-		const eventNote = action === 'withdraw' ? `Withdrawn from checking${note.data ? `: ${note.data}` : ''}` : note.data || null;
-		await logRevisionEvent(trx, { revisionId: row.id, sheetId: sheet.id, kind: step.event, actor: by, note: eventNote, override: overridden }, now);
+			throw new AppError(
+				409,
+				'wrong-status',
+				`Rev ${number} changed while you were looking at it. Reload to see its status.`
+			);
+		const eventNote =
+			action === 'withdraw'
+				? `Withdrawn from checking${note.data ? `: ${note.data}` : ''}`
+				: note.data || null;
+		await logRevisionEvent(
+			trx,
+			{
+				revisionId: row.id,
+				sheetId: sheet.id,
+				kind: step.event,
+				actor: by,
+				note: eventNote,
+				override: overridden
+			},
+			now
+		);
 		await syncSheetStatus(trx, sheet.id);
 		return (await getRevision(trx, sheet.id, number))!;
 	});
@@ -419,23 +639,35 @@ async function mailFor(
 	};
 	const actorId = access.actor.id;
 	if (action === 'submit') {
-		let to = rev.check_requested_from ? members.filter((m) => m.user_id === rev.check_requested_from) : members.filter((m) => m.role === 'checker');
+		let to = rev.check_requested_from
+			? members.filter((m) => m.user_id === rev.check_requested_from)
+			: members.filter((m) => m.role === 'checker');
 		if (to.length === 0) to = members.filter((m) => m.role === 'owner');
 		to = to.filter((m) => m.user_id !== rev.author_id);
 		const url = `${ctx.origin}${revisionPath(access.team.slug, sheet.id, rev.number)}`;
-		await notify(db, ctx, 'submitted', to.map(recipient), actorId, (r) => submittedMail({ ...base, name: r.name, text: rev.message, url }));
+		await notify(db, ctx, 'submitted', to.map(recipient), actorId, (r) =>
+			submittedMail({ ...base, name: r.name, text: rev.message, url })
+		);
 		return;
 	}
-	const concerned = members.filter((m) => m.user_id === rev.author_id || m.user_id === rev.submitted_by).map(recipient);
+	const concerned = members
+		.filter((m) => m.user_id === rev.author_id || m.user_id === rev.submitted_by)
+		.map(recipient);
 	if (action === 'check') {
 		const url = `${ctx.origin}${revisionPath(access.team.slug, sheet.id, rev.number)}`;
-		await notify(db, ctx, 'checked', concerned, actorId, (r) => checkedMail({ ...base, name: r.name, text: note, url, override }));
+		await notify(db, ctx, 'checked', concerned, actorId, (r) =>
+			checkedMail({ ...base, name: r.name, text: note, url, override })
+		);
 	} else if (action === 'approve') {
 		const url = `${ctx.origin}${revisionPath(access.team.slug, sheet.id, rev.number)}`;
-		await notify(db, ctx, 'approved', concerned, actorId, (r) => approvedMail({ ...base, name: r.name, text: note, url, override }));
+		await notify(db, ctx, 'approved', concerned, actorId, (r) =>
+			approvedMail({ ...base, name: r.name, text: note, url, override })
+		);
 	} else if (action === 'return') {
 		const url = `${ctx.origin}${sheetPath(access.team.slug, sheet.id)}`;
-		await notify(db, ctx, 'returned', concerned, actorId, (r) => returnedMail({ ...base, name: r.name, text: note, url }));
+		await notify(db, ctx, 'returned', concerned, actorId, (r) =>
+			returnedMail({ ...base, name: r.name, text: note, url })
+		);
 	}
 }
 
@@ -444,9 +676,22 @@ async function mailFor(
  * editor holds (409 if the draft moved on). The next save is based on the newest revision, as
  * any save is; restoring changes no revision.
  */
-export async function restoreRevision(db: DB, access: TeamAccess, sheetId: string, number: number, version: number, now = Date.now()): Promise<SaveResult & { doc: SheetDoc }> {
+export async function restoreRevision(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	number: number,
+	version: number,
+	now = Date.now()
+): Promise<SaveResult & { doc: SheetDoc }> {
 	requireCap(access, 'sheet:edit');
-	if (!Number.isInteger(version) || version < 1) throw new AppError(400, 'invalid-version', 'version must be the whole number the sheet was read with (1 or more).', 'version');
+	if (!Number.isInteger(version) || version < 1)
+		throw new AppError(
+			400,
+			'invalid-version',
+			'version must be the whole number the sheet was read with (1 or more).',
+			'version'
+		);
 	const sheet = await loadSheet(db, access, sheetId);
 	const by = access.actor;
 	return db.transaction().execute(async (trx) => {
@@ -455,9 +700,32 @@ export async function restoreRevision(db: DB, access: TeamAccess, sheetId: strin
 		const doc = checkDoc(parseJson(row.doc, 'revision')).doc;
 		const fresh = (await getSheet(trx, access.team.id, sheet.id))!;
 		if (fresh.draft_version !== version) throw new DraftConflictError(fresh);
-		const next = await writeDraft(trx, access.team.id, sheet.id, { draft: JSON.stringify(doc), fluid: doc.spec.fluid, systemKind: doc.spec.system.kind, baseVersion: version, actor: access.actor }, now);
-		if (next === null) throw new DraftConflictError((await getSheet(trx, access.team.id, sheet.id))!);
-		await logRevisionEvent(trx, { revisionId: row.id, sheetId: sheet.id, kind: 'restored', actor: by, note: `Rev ${number} restored as the working draft` }, now);
+		const next = await writeDraft(
+			trx,
+			access.team.id,
+			sheet.id,
+			{
+				draft: JSON.stringify(doc),
+				fluid: doc.spec.fluid,
+				systemKind: doc.spec.system.kind,
+				baseVersion: version,
+				actor: access.actor
+			},
+			now
+		);
+		if (next === null)
+			throw new DraftConflictError((await getSheet(trx, access.team.id, sheet.id))!);
+		await logRevisionEvent(
+			trx,
+			{
+				revisionId: row.id,
+				sheetId: sheet.id,
+				kind: 'restored',
+				actor: by,
+				note: `Rev ${number} restored as the working draft`
+			},
+			now
+		);
 		return { version: next, updatedAt: now, updatedBy: access.actor.label, doc };
 	});
 }
@@ -465,7 +733,11 @@ export async function restoreRevision(db: DB, access: TeamAccess, sheetId: strin
 /** One side of a comparison: a revision number, or the working draft. */
 export type CompareSide = number | 'draft';
 
-async function sideOf(db: DB, sheet: SheetRow, side: CompareSide): Promise<{ label: string; doc: SheetDoc; result: PathResult | null }> {
+async function sideOf(
+	db: DB,
+	sheet: SheetRow,
+	side: CompareSide
+): Promise<{ label: string; doc: SheetDoc; result: PathResult | null }> {
 	if (side === 'draft') {
 		const doc = checkDoc(parseJson(sheet.draft, 'draft')).doc;
 		let result: PathResult | null = null;
@@ -478,13 +750,22 @@ async function sideOf(db: DB, sheet: SheetRow, side: CompareSide): Promise<{ lab
 	}
 	const row = await getRevision(db, sheet.id, side);
 	if (!row) revisionNotFound(side);
-	return { label: `Rev ${side}`, doc: checkDoc(parseJson(row.doc, 'revision')).doc, result: parseJson<PathResult>(row.result, 'result') };
+	return {
+		label: `Rev ${side}`,
+		doc: checkDoc(parseJson(row.doc, 'revision')).doc,
+		result: parseJson<PathResult>(row.result, 'result')
+	};
 }
 
 export function parseCompareSide(text: string | null, name: string): CompareSide {
 	if (text === 'draft') return 'draft';
 	if (text && /^[1-9]\d{0,8}$/.test(text)) return Number(text);
-	throw new AppError(400, 'invalid-compare', `${name} must be a revision number (1, 2, …) or "draft".`, name);
+	throw new AppError(
+		400,
+		'invalid-compare',
+		`${name} must be a revision number (1, 2, …) or "draft".`,
+		name
+	);
 }
 
 /** What changed from `a` to `b` (each a revision number or the working draft), with both paths. */
@@ -494,7 +775,11 @@ export async function compareRevisions(
 	sheetId: string,
 	a: CompareSide,
 	b: CompareSide
-): Promise<{ diff: RevisionDiff; before: { label: string; doc: SheetDoc; result: PathResult | null }; after: { label: string; doc: SheetDoc; result: PathResult | null } }> {
+): Promise<{
+	diff: RevisionDiff;
+	before: { label: string; doc: SheetDoc; result: PathResult | null };
+	after: { label: string; doc: SheetDoc; result: PathResult | null };
+}> {
 	const sheet = await loadSheet(db, access, sheetId);
 	const before = await sideOf(db, sheet, a);
 	const after = await sideOf(db, sheet, b);

@@ -1,6 +1,15 @@
 import { z } from 'zod';
 import type { DB, SheetRow } from './db/schema';
-import { getSheet, insertSheet, listSheets, renameSheet, writeDraft, countSheets, deleteSheetRow, type SheetListItem } from './db/sheets';
+import {
+	getSheet,
+	insertSheet,
+	listSheets,
+	renameSheet,
+	writeDraft,
+	countSheets,
+	deleteSheetRow,
+	type SheetListItem
+} from './db/sheets';
 import { listRevisionRows } from './db/revisions';
 import { logTeamEvent } from './db/team-events';
 import { AppError } from './errors';
@@ -24,7 +33,12 @@ export const SHEET_ID = /^[a-z2-9]{16}$/;
 
 export const titleSchema = plainText('The title', 'line', 'Enter a title for the sheet.')
 	.transform((s) => s.replace(/\s+/g, ' ').trim())
-	.pipe(z.string().min(1, { error: 'Enter a title for the sheet.' }).max(120, { error: 'Use at most 120 characters for the title.' }));
+	.pipe(
+		z
+			.string()
+			.min(1, { error: 'Enter a title for the sheet.' })
+			.max(120, { error: 'Use at most 120 characters for the title.' })
+	);
 
 export interface SheetMeta {
 	id: string;
@@ -73,16 +87,30 @@ function meta(row: SheetRow | SheetListItem): SheetMeta {
 }
 
 export function summaryOf(row: SheetListItem): SheetSummary {
-	return { ...meta(row), tag: row.tag, equipment: row.equipment, project: row.project, legCount: Number(row.leg_count) };
+	return {
+		...meta(row),
+		tag: row.tag,
+		equipment: row.equipment,
+		project: row.project,
+		legCount: Number(row.leg_count)
+	};
 }
 
 function requireEdit(access: TeamAccess): void {
 	if (!access.can('sheet:edit'))
-		throw new AppError(403, 'forbidden', `Your role in this team is ${access.role}, which cannot edit sheets (designers and owners can).`);
+		throw new AppError(
+			403,
+			'forbidden',
+			`Your role in this team is ${access.role}, which cannot edit sheets (designers and owners can).`
+		);
 }
 
 function notFound(): never {
-	throw new AppError(404, 'sheet-not-found', 'There is no such sheet in this team. It may have been mistyped; the team page lists its sheets.');
+	throw new AppError(
+		404,
+		'sheet-not-found',
+		'There is no such sheet in this team. It may have been mistyped; the team page lists its sheets.'
+	);
 }
 
 /**
@@ -90,7 +118,10 @@ function notFound(): never {
  * for a document a client sends (control characters refused); stored documents are read as they
  * were written (older text cleaned, see parseSheetDoc).
  */
-export function checkDoc(raw: unknown, from: 'stored' | 'sent' = 'stored'): { doc: SheetDoc; migratedFrom: number | null } {
+export function checkDoc(
+	raw: unknown,
+	from: 'stored' | 'sent' = 'stored'
+): { doc: SheetDoc; migratedFrom: number | null } {
 	const r = parseSheetDoc(raw, { stored: from === 'stored' });
 	if (!r.ok) throw new AppError(400, 'invalid-sheet', r.message, 'doc');
 	return { doc: r.doc, migratedFrom: r.migratedFrom };
@@ -101,7 +132,13 @@ export function checkStart(doc: SheetDoc): void {
 	try {
 		fixState(doc.spec.fluid, doc.spec.start);
 	} catch (e) {
-		if (e instanceof ThermoError) throw new AppError(422, e.code, `The start state cannot be fixed: ${e.message}${e.hint ? ` ${e.hint}` : ''}`, 'start');
+		if (e instanceof ThermoError)
+			throw new AppError(
+				422,
+				e.code,
+				`The start state cannot be fixed: ${e.message}${e.hint ? ` ${e.hint}` : ''}`,
+				'start'
+			);
 		throw e;
 	}
 }
@@ -122,7 +159,12 @@ export interface CreateInput {
 }
 
 /** Create a sheet from a document: validated, the start state checked, in one transaction. */
-export async function createSheet(db: DB, access: TeamAccess, input: CreateInput, now = Date.now()): Promise<SheetWithDraft> {
+export async function createSheet(
+	db: DB,
+	access: TeamAccess,
+	input: CreateInput,
+	now = Date.now()
+): Promise<SheetWithDraft> {
 	requireEdit(access);
 	const t = titleSchema.safeParse(input.title);
 	if (!t.success) throw new AppError(400, 'invalid-title', t.error.issues[0].message, 'title');
@@ -148,10 +190,27 @@ export async function createSheet(db: DB, access: TeamAccess, input: CreateInput
 }
 
 /** Create a sheet from one of the worked examples (templates.ts). */
-export async function createFromExample(db: DB, access: TeamAccess, exampleId: string, title?: string, now = Date.now()): Promise<SheetWithDraft> {
+export async function createFromExample(
+	db: DB,
+	access: TeamAccess,
+	exampleId: string,
+	title?: string,
+	now = Date.now()
+): Promise<SheetWithDraft> {
 	const ex = workedExample(exampleId);
-	if (!ex) throw new AppError(400, 'unknown-example', 'There is no such worked example; pick one from the list.', 'example');
-	return createSheet(db, access, { title: title?.trim() ? title : ex.title, doc: ex.build(), example: ex.id }, now);
+	if (!ex)
+		throw new AppError(
+			400,
+			'unknown-example',
+			'There is no such worked example; pick one from the list.',
+			'example'
+		);
+	return createSheet(
+		db,
+		access,
+		{ title: title?.trim() ? title : ex.title, doc: ex.build(), example: ex.id },
+		now
+	);
 }
 
 /** A sheet with its working draft (older drafts migrated on the way out). */
@@ -163,21 +222,38 @@ export async function readSheet(db: DB, access: TeamAccess, id: string): Promise
 	try {
 		raw = JSON.parse(row.draft);
 	} catch {
-		throw new AppError(422, 'unreadable-draft', 'The stored draft of this sheet cannot be read. Please report it.');
+		throw new AppError(
+			422,
+			'unreadable-draft',
+			'The stored draft of this sheet cannot be read. Please report it.'
+		);
 	}
 	const { doc, migratedFrom } = checkDoc(raw);
 	return { ...meta(row), doc, migratedFrom };
 }
 
-export async function listTeamSheets(db: DB, access: TeamAccess, options: { q?: string; limit?: number; offset?: number } = {}): Promise<{ sheets: SheetSummary[]; total: number }> {
+export async function listTeamSheets(
+	db: DB,
+	access: TeamAccess,
+	options: { q?: string; limit?: number; offset?: number } = {}
+): Promise<{ sheets: SheetSummary[]; total: number }> {
 	const q = (options.q ?? '').slice(0, 200);
 	const problem = controlCharProblem(q, 'The search text (q)');
 	if (problem) throw new AppError(400, 'invalid-query', problem, 'q');
-	const [rows, total] = await Promise.all([listSheets(db, access.team.id, { ...options, q }), countSheets(db, access.team.id, q)]);
+	const [rows, total] = await Promise.all([
+		listSheets(db, access.team.id, { ...options, q }),
+		countSheets(db, access.team.id, q)
+	]);
 	return { sheets: rows.map(summaryOf), total };
 }
 
-export async function renameTeamSheet(db: DB, access: TeamAccess, id: string, title: string, now = Date.now()): Promise<SheetMeta> {
+export async function renameTeamSheet(
+	db: DB,
+	access: TeamAccess,
+	id: string,
+	title: string,
+	now = Date.now()
+): Promise<SheetMeta> {
 	requireEdit(access);
 	const t = titleSchema.safeParse(title);
 	if (!t.success) throw new AppError(400, 'invalid-title', t.error.issues[0].message, 'title');
@@ -193,8 +269,18 @@ export async function renameTeamSheet(db: DB, access: TeamAccess, id: string, ti
  * sheet holding one is never deleted (it can be superseded by a new revision). Otherwise owners may
  * delete any sheet, and designers a sheet they started that has no revisions yet (a scratch sheet).
  */
-export function deletion(access: TeamAccess, sheet: { created_by: string | null }, revisions: ReadonlyArray<{ number: number; status: string }>): { allowed: true } | { allowed: false; status: 403 | 409; code: string; message: string } {
-	if (!access.can('sheet:edit')) return { allowed: false, status: 403, code: 'forbidden', message: `Your role in this team is ${access.role}, which cannot delete sheets.` };
+export function deletion(
+	access: TeamAccess,
+	sheet: { created_by: string | null },
+	revisions: ReadonlyArray<{ number: number; status: string }>
+): { allowed: true } | { allowed: false; status: 403 | 409; code: string; message: string } {
+	if (!access.can('sheet:edit'))
+		return {
+			allowed: false,
+			status: 403,
+			code: 'forbidden',
+			message: `Your role in this team is ${access.role}, which cannot delete sheets.`
+		};
 	const approved = revisions.filter((r) => r.status === 'approved').map((r) => r.number);
 	if (approved.length)
 		return {
@@ -204,8 +290,20 @@ export function deletion(access: TeamAccess, sheet: { created_by: string | null 
 			message: `Rev ${approved.join(', Rev ')} of this sheet ${approved.length === 1 ? 'is' : 'are'} approved. Approved revisions are kept as the design record, so the sheet cannot be deleted; save a new revision to supersede it.`
 		};
 	if (access.role === 'owner') return { allowed: true };
-	if (sheet.created_by !== access.actor.id) return { allowed: false, status: 403, code: 'forbidden', message: 'Designers delete only sheets they started; ask an owner to delete this one.' };
-	if (revisions.length) return { allowed: false, status: 403, code: 'forbidden', message: 'This sheet has revisions, so only an owner can delete it.' };
+	if (sheet.created_by !== access.actor.id)
+		return {
+			allowed: false,
+			status: 403,
+			code: 'forbidden',
+			message: 'Designers delete only sheets they started; ask an owner to delete this one.'
+		};
+	if (revisions.length)
+		return {
+			allowed: false,
+			status: 403,
+			code: 'forbidden',
+			message: 'This sheet has revisions, so only an owner can delete it.'
+		};
 	return { allowed: true };
 }
 
@@ -218,9 +316,15 @@ async function judgeDeletion(db: DB, access: TeamAccess, id: string) {
 }
 
 /** Whether this caller may delete the sheet now (for the page: the DELETE route checks again). */
-export async function sheetDeletion(db: DB, access: TeamAccess, id: string): Promise<{ allowed: boolean; message: string | null }> {
+export async function sheetDeletion(
+	db: DB,
+	access: TeamAccess,
+	id: string
+): Promise<{ allowed: boolean; message: string | null }> {
 	const { verdict } = await judgeDeletion(db, access, id);
-	return verdict.allowed ? { allowed: true, message: null } : { allowed: false, message: verdict.message };
+	return verdict.allowed
+		? { allowed: true, message: null }
+		: { allowed: false, message: verdict.message };
 }
 
 /** Deletes a sheet with its draft, revisions, notes and traces (rules in `deletion`), logged in the team's activity. */
@@ -230,7 +334,13 @@ export async function deleteTeamSheet(db: DB, access: TeamAccess, id: string): P
 		const { row, revisions, verdict } = await judgeDeletion(trx, access, id);
 		if (!verdict.allowed) throw new AppError(verdict.status, verdict.code, verdict.message);
 		if (!(await deleteSheetRow(trx, access.team.id, id))) notFound();
-		await logTeamEvent(trx, { teamId: access.team.id, actorId: access.actor.id, actorLabel: access.actor.label, kind: 'sheet.deleted', detail: { number: row.number, title: row.title, revisions: revisions.length } });
+		await logTeamEvent(trx, {
+			teamId: access.team.id,
+			actorId: access.actor.id,
+			actorLabel: access.actor.label,
+			kind: 'sheet.deleted',
+			detail: { number: row.number, title: row.title, revisions: revisions.length }
+		});
 	});
 }
 
@@ -243,7 +353,11 @@ export class DraftConflictError extends AppError {
 			'draft-conflict',
 			`${row.updated_by_label} saved this sheet since you opened it (now version ${row.draft_version}). Your edits were not saved over theirs: reload to see their draft, or compare and keep yours.`
 		);
-		this.current = { version: row.draft_version, updatedAt: row.updated_at, updatedBy: row.updated_by_label };
+		this.current = {
+			version: row.draft_version,
+			updatedAt: row.updated_at,
+			updatedBy: row.updated_by_label
+		};
 	}
 }
 
@@ -257,10 +371,22 @@ export interface SaveResult {
  * Save the working draft. `version` is the version the editor started from: if the stored draft
  * moved on since, nothing is written and a DraftConflictError (409) says who saved when.
  */
-export async function saveDraft(db: DB, access: TeamAccess, id: string, input: { version: number; doc: unknown }, now = Date.now()): Promise<SaveResult> {
+export async function saveDraft(
+	db: DB,
+	access: TeamAccess,
+	id: string,
+	input: { version: number; doc: unknown },
+	now = Date.now()
+): Promise<SaveResult> {
 	requireEdit(access);
 	if (!SHEET_ID.test(id)) notFound();
-	if (!Number.isInteger(input.version) || input.version < 1) throw new AppError(400, 'invalid-version', 'version must be the whole number the sheet was read with (1 or more).', 'version');
+	if (!Number.isInteger(input.version) || input.version < 1)
+		throw new AppError(
+			400,
+			'invalid-version',
+			'version must be the whole number the sheet was read with (1 or more).',
+			'version'
+		);
 	const { doc } = checkDoc(input.doc, 'sent');
 	return db.transaction().execute(async (trx) => {
 		const row = await getSheet(trx, access.team.id, id);
@@ -271,7 +397,13 @@ export async function saveDraft(db: DB, access: TeamAccess, id: string, input: {
 			trx,
 			access.team.id,
 			id,
-			{ draft: JSON.stringify(doc), fluid: doc.spec.fluid, systemKind: doc.spec.system.kind, baseVersion: input.version, actor: access.actor },
+			{
+				draft: JSON.stringify(doc),
+				fluid: doc.spec.fluid,
+				systemKind: doc.spec.system.kind,
+				baseVersion: input.version,
+				actor: access.actor
+			},
 			now
 		);
 		if (version === null) throw new DraftConflictError((await getSheet(trx, access.team.id, id))!);

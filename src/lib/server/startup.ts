@@ -43,11 +43,16 @@ export async function startApp(options: { dev?: boolean } = {}): Promise<void> {
 	];
 	if (seed.seeded || (await getTeamBySlug(db, DEMO_TEAM.slug))) {
 		const note = seed.seeded ? 'seeded' : 'present';
-		lines.push('', `  Demo team "${DEMO_TEAM.name}" ${note}. Password ${DEMO_PASSWORD}${seed.seeded ? '' : ' (unless changed)'} for:`);
+		lines.push(
+			'',
+			`  Demo team "${DEMO_TEAM.name}" ${note}. Password ${DEMO_PASSWORD}${seed.seeded ? '' : ' (unless changed)'} for:`
+		);
 		for (const p of DEMO_PEOPLE) lines.push(`    ${p.role.padEnd(9)} ${p.email}`);
 	}
 	console.log(lines.join('\n') + '\n');
 	if (c.production && mailer.catching) {
-		console.warn('  Warning: NODE_ENV=production without SMTP_URL — invitations and reset links are not delivered.\n');
+		console.warn(
+			'  Warning: NODE_ENV=production without SMTP_URL — invitations and reset links are not delivered.\n'
+		);
 	}
 }

@@ -20,7 +20,12 @@ export function openSocket(port: number, host = '127.0.0.1'): Promise<Socket> {
 }
 
 /** The request head for `method path` with a body of `bodyBytes` bytes (JSON content type), kept alive. */
-export function rawRequest(method: string, path: string, body: Buffer | string = '', extra: Record<string, string> = {}): Buffer {
+export function rawRequest(
+	method: string,
+	path: string,
+	body: Buffer | string = '',
+	extra: Record<string, string> = {}
+): Buffer {
 	const b = typeof body === 'string' ? Buffer.from(body) : body;
 	const headers: Record<string, string> = { host: '127.0.0.1', connection: 'keep-alive', ...extra };
 	if (b.length) {
@@ -40,20 +45,25 @@ function parse(data: Buffer): RawAnswer | null {
 	const lines = data.subarray(0, end).toString('latin1').split('\r\n');
 	const status = Number(lines[0].split(' ')[1]);
 	const headers: Record<string, string> = {};
-	for (const l of lines.slice(1)) headers[l.slice(0, l.indexOf(':')).trim().toLowerCase()] = l.slice(l.indexOf(':') + 1).trim();
+	for (const l of lines.slice(1))
+		headers[l.slice(0, l.indexOf(':')).trim().toLowerCase()] = l.slice(l.indexOf(':') + 1).trim();
 	const rest = data.subarray(end + 4);
 	if (headers['content-length'] !== undefined) {
 		const n = Number(headers['content-length']);
 		return rest.length < n ? null : { status, headers, body: rest.subarray(0, n).toString('utf8') };
 	}
-	if (!/chunked/i.test(headers['transfer-encoding'] ?? '')) return status === 304 || status === 204 ? { status, headers, body: '' } : null;
+	if (!/chunked/i.test(headers['transfer-encoding'] ?? ''))
+		return status === 304 || status === 204 ? { status, headers, body: '' } : null;
 	const chunks: Buffer[] = [];
 	let i = 0;
 	for (;;) {
 		const nl = rest.indexOf('\r\n', i);
 		if (nl < 0) return null;
 		const n = parseInt(rest.subarray(i, nl).toString('latin1'), 16);
-		if (n === 0) return rest.length < nl + 4 ? null : { status, headers, body: Buffer.concat(chunks).toString('utf8') };
+		if (n === 0)
+			return rest.length < nl + 4
+				? null
+				: { status, headers, body: Buffer.concat(chunks).toString('utf8') };
 		if (rest.length < nl + 2 + n + 2) return null;
 		chunks.push(rest.subarray(nl + 2, nl + 2 + n));
 		i = nl + 4 + n;
@@ -86,7 +96,11 @@ export function exchange(socket: Socket, request: Buffer): Promise<RawAnswer> {
 		};
 		const onClose = () => {
 			done();
-			reject(new Error(`the server closed the connection before answering (${data.length} bytes received)`));
+			reject(
+				new Error(
+					`the server closed the connection before answering (${data.length} bytes received)`
+				)
+			);
 		};
 		socket.on('data', onData);
 		socket.on('error', onError);

@@ -25,8 +25,19 @@ export async function setupIntegration(origin = 'http://statewright.test'): Prom
 }> {
 	const db = await createTestDb();
 	const printed: string[] = [];
-	const mailer = await createMailer({ db, from: 'Statewright <no-reply@statewright.test>', print: (t) => printed.push(t) });
-	for (const l of [mailLimits.perAddress, mailLimits.perIp, signInLimits.perAccountAndIp, signInLimits.perIp, inviteLimits]) l.reset();
+	const mailer = await createMailer({
+		db,
+		from: 'Statewright <no-reply@statewright.test>',
+		print: (t) => printed.push(t)
+	});
+	for (const l of [
+		mailLimits.perAddress,
+		mailLimits.perIp,
+		signInLimits.perAccountAndIp,
+		signInLimits.perIp,
+		inviteLimits
+	])
+		l.reset();
 	return {
 		db,
 		mailer,
@@ -45,7 +56,11 @@ export async function setupIntegration(origin = 'http://statewright.test'): Prom
 }
 
 /** Awaits a promise that must reject with an AppError of this status (and code); returns the error. */
-export async function expectAppError(p: Promise<unknown>, status: number, code?: string): Promise<AppError> {
+export async function expectAppError(
+	p: Promise<unknown>,
+	status: number,
+	code?: string
+): Promise<AppError> {
 	const e = await p.then(
 		() => null,
 		(err: unknown) => err

@@ -5,7 +5,12 @@ import { createUser } from './db/users';
 import { addMember } from './db/memberships';
 import { listApiTokens } from './db/api-tokens';
 import { createTeamFor } from './teams';
-import { authenticateToken, createTeamToken, grantableTokenRoles, revokeTeamToken } from './api-tokens';
+import {
+	authenticateToken,
+	createTeamToken,
+	grantableTokenRoles,
+	revokeTeamToken
+} from './api-tokens';
 import { requireTeam, requireUser, resolveTeamAccess, type GuardEvent } from './guard';
 import type { SessionUser } from './auth';
 import type { TokenPrincipal } from './api-tokens';
@@ -22,10 +27,14 @@ async function person(email: string): Promise<SessionUser> {
 	const u = await createUser(env.db, { email, name: email.split('@')[0], passwordHash: 'unused' });
 	return { id: u.id, email: u.email, name: u.name, emailVerified: false };
 }
-const access = async (u: SessionUser, t = team) => (await resolveTeamAccess(env.db, { kind: 'user', user: u }, t.slug))!;
+const access = async (u: SessionUser, t = team) =>
+	(await resolveTeamAccess(env.db, { kind: 'user', user: u }, t.slug))!;
 
 function event(path: string, locals: Partial<App.Locals>): GuardEvent {
-	return { url: new URL(`http://statewright.test${path}`), locals: { user: null, session: null, token: null, ...locals } };
+	return {
+		url: new URL(`http://statewright.test${path}`),
+		locals: { user: null, session: null, token: null, ...locals }
+	};
 }
 
 async function thrown(p: Promise<unknown> | (() => unknown)) {
@@ -54,16 +63,26 @@ afterEach(async () => {
 
 describe('API tokens', () => {
 	it('are shown once, stored hashed, and authenticate with their team and role', async () => {
-		const { token, row } = await createTeamToken(env.db, await access(people.designer), { name: 'nightly export', role: 'viewer' });
+		const { token, row } = await createTeamToken(env.db, await access(people.designer), {
+			name: 'nightly export',
+			role: 'viewer'
+		});
 		expect(token).toMatch(/^swt_[A-Za-z0-9_-]{43}$/);
 		expect(row.token_hash).not.toContain(token.slice(4));
 		expect(row.prefix).toBe(token.slice(0, 10));
 		const found = await authenticateToken(env.db, token);
-		expect(found?.principal).toMatchObject({ name: 'nightly export', role: 'viewer', teamId: team.id, createdBy: people.designer.id });
+		expect(found?.principal).toMatchObject({
+			name: 'nightly export',
+			role: 'viewer',
+			teamId: team.id,
+			createdBy: people.designer.id
+		});
 		const [listed] = await listApiTokens(env.db, team.id);
 		expect(listed.last_used_at).not.toBeNull();
 		expect('token_hash' in listed).toBe(false);
-		expect(await authenticateToken(env.db, token.slice(0, -1) + (token.endsWith('A') ? 'B' : 'A'))).toBeNull();
+		expect(
+			await authenticateToken(env.db, token.slice(0, -1) + (token.endsWith('A') ? 'B' : 'A'))
+		).toBeNull();
 		expect(await authenticateToken(env.db, 'swt_short')).toBeNull();
 	});
 
@@ -72,34 +91,56 @@ describe('API tokens', () => {
 		expect(grantableTokenRoles('designer')).toEqual(['designer', 'viewer']);
 		expect(grantableTokenRoles('checker')).toEqual([]);
 		expect(grantableTokenRoles('viewer')).toEqual([]);
-		const e = await thrown(createTeamToken(env.db, await access(people.designer), { name: 'sneaky', role: 'owner' }));
+		const e = await thrown(
+			createTeamToken(env.db, await access(people.designer), { name: 'sneaky', role: 'owner' })
+		);
 		expect(e).toBeInstanceOf(AppError);
 		expect((e as AppError).status).toBe(403);
 		expect(await listApiTokens(env.db, team.id)).toEqual([]);
 	});
 
 	it('are revoked by their creator or an owner, and then stop working', async () => {
-		const mine = await createTeamToken(env.db, await access(people.designer), { name: 'mine', role: 'designer' });
-		const owners = await createTeamToken(env.db, await access(people.owner), { name: 'owners', role: 'viewer' });
+		const mine = await createTeamToken(env.db, await access(people.designer), {
+			name: 'mine',
+			role: 'designer'
+		});
+		const owners = await createTeamToken(env.db, await access(people.owner), {
+			name: 'owners',
+			role: 'viewer'
+		});
 		const e = await thrown(revokeTeamToken(env.db, await access(people.designer), owners.row.id));
 		expect((e as AppError).status).toBe(403);
 		await revokeTeamToken(env.db, await access(people.designer), mine.row.id);
 		await revokeTeamToken(env.db, await access(people.owner), owners.row.id);
 		expect(await authenticateToken(env.db, mine.token)).toBeNull();
 		expect(await authenticateToken(env.db, owners.token)).toBeNull();
-		expect(((await thrown(revokeTeamToken(env.db, await access(people.owner), mine.row.id))) as AppError).status).toBe(404);
+		expect(
+			((await thrown(revokeTeamToken(env.db, await access(people.owner), mine.row.id))) as AppError)
+				.status
+		).toBe(404);
 	});
 
 	it('cannot be revoked across teams by id', async () => {
-		const theirs = await createTeamToken(env.db, await access(people.outsider, otherTeam), { name: 'theirs', role: 'viewer' });
-		expect(((await thrown(revokeTeamToken(env.db, await access(people.owner), theirs.row.id))) as AppError).status).toBe(404);
+		const theirs = await createTeamToken(env.db, await access(people.outsider, otherTeam), {
+			name: 'theirs',
+			role: 'viewer'
+		});
+		expect(
+			(
+				(await thrown(
+					revokeTeamToken(env.db, await access(people.owner), theirs.row.id)
+				)) as AppError
+			).status
+		).toBe(404);
 		expect(await authenticateToken(env.db, theirs.token)).not.toBeNull();
 	});
 });
 
 describe('guard', () => {
 	it('answers non-members 404 and members without the capability 403', async () => {
-		const cases: Array<[keyof typeof people, 'read' | 'sheet:edit' | 'sheet:check' | 'team:manage', number | 'ok']> = [
+		const cases: Array<
+			[keyof typeof people, 'read' | 'sheet:edit' | 'sheet:check' | 'team:manage', number | 'ok']
+		> = [
 			['owner', 'team:manage', 'ok'],
 			['designer', 'sheet:edit', 'ok'],
 			['designer', 'sheet:check', 403],
@@ -111,7 +152,9 @@ describe('guard', () => {
 			['outsider', 'read', 404]
 		];
 		for (const [who, capability, expected] of cases) {
-			const e = await thrown(requireTeam(event(`/t/${team.slug}`, { user: people[who] }), team.slug, capability, env.db));
+			const e = await thrown(
+				requireTeam(event(`/t/${team.slug}`, { user: people[who] }), team.slug, capability, env.db)
+			);
 			if (expected === 'ok') expect(e, `${who} ${capability}`).toBeNull();
 			else {
 				expect(isHttpError(e), `${who} ${capability}`).toBe(true);
@@ -119,28 +162,58 @@ describe('guard', () => {
 			}
 		}
 		// a missing team looks exactly like someone else's
-		const missing = await thrown(requireTeam(event('/t/nope', { user: people.owner }), 'nope', 'read', env.db));
+		const missing = await thrown(
+			requireTeam(event('/t/nope', { user: people.owner }), 'nope', 'read', env.db)
+		);
 		expect((missing as { status: number }).status).toBe(404);
 	});
 
 	it('sends nobody to sign-in on pages and answers 401 on the API', async () => {
-		const page = await thrown(requireTeam(event(`/t/${team.slug}/settings?x=1`, {}), team.slug, 'read', env.db));
+		const page = await thrown(
+			requireTeam(event(`/t/${team.slug}/settings?x=1`, {}), team.slug, 'read', env.db)
+		);
 		expect(isRedirect(page)).toBe(true);
-		expect((page as { location: string }).location).toBe(`/signin?next=${encodeURIComponent(`/t/${team.slug}/settings?x=1`)}`);
-		const api = await thrown(requireTeam(event(`/api/v1/teams/${team.slug}`, {}), team.slug, 'read', env.db));
+		expect((page as { location: string }).location).toBe(
+			`/signin?next=${encodeURIComponent(`/t/${team.slug}/settings?x=1`)}`
+		);
+		const api = await thrown(
+			requireTeam(event(`/api/v1/teams/${team.slug}`, {}), team.slug, 'read', env.db)
+		);
 		expect((api as { status: number }).status).toBe(401);
 		expect(isRedirect(await thrown(() => requireUser(event('/account', {}))))).toBe(true);
 	});
 
 	it('lets a token reach only its own team, with its own role', async () => {
-		const { token } = await createTeamToken(env.db, await access(people.owner), { name: 'ci', role: 'checker' });
+		const { token } = await createTeamToken(env.db, await access(people.owner), {
+			name: 'ci',
+			role: 'checker'
+		});
 		const principal = (await authenticateToken(env.db, token))!.principal as TokenPrincipal;
-		const ok = await requireTeam(event(`/api/v1/teams/${team.slug}`, { token: principal }), team.slug, 'sheet:check', env.db);
+		const ok = await requireTeam(
+			event(`/api/v1/teams/${team.slug}`, { token: principal }),
+			team.slug,
+			'sheet:check',
+			env.db
+		);
 		expect(ok.role).toBe('checker');
 		expect(ok.actor).toEqual({ id: people.owner.id, label: `${people.owner.name} (token “ci”)` });
-		const edit = await thrown(requireTeam(event(`/api/v1/teams/${team.slug}`, { token: principal }), team.slug, 'sheet:edit', env.db));
+		const edit = await thrown(
+			requireTeam(
+				event(`/api/v1/teams/${team.slug}`, { token: principal }),
+				team.slug,
+				'sheet:edit',
+				env.db
+			)
+		);
 		expect((edit as { status: number }).status).toBe(403);
-		const other = await thrown(requireTeam(event(`/api/v1/teams/${otherTeam.slug}`, { token: principal }), otherTeam.slug, 'read', env.db));
+		const other = await thrown(
+			requireTeam(
+				event(`/api/v1/teams/${otherTeam.slug}`, { token: principal }),
+				otherTeam.slug,
+				'read',
+				env.db
+			)
+		);
 		expect((other as { status: number }).status).toBe(404);
 	});
 });

@@ -2,7 +2,15 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { expectAppError } from './testing';
 import { reviewWorld, type ReviewWorld } from './revisions.test-support';
-import { deleteTrace, listTraces, readTrace, thin, TraceRefusedError, uploadTrace, MAX_TRACES_PER_SHEET } from './traces';
+import {
+	deleteTrace,
+	listTraces,
+	readTrace,
+	thin,
+	TraceRefusedError,
+	uploadTrace,
+	MAX_TRACES_PER_SHEET
+} from './traces';
 import { vesselDoc } from '$lib/revisions/test-fixtures';
 import { unitPrefs } from '$lib/units';
 import type { SessionUser } from './auth';
@@ -25,8 +33,16 @@ afterEach(async () => {
 const db = () => w.env.db;
 const bytes = (s: string) => new TextEncoder().encode(s);
 
-async function upload(text: string | Uint8Array, who: SessionUser = w.people.designer, extra: { allowRejected?: boolean; tolerance?: number; name?: string } = {}) {
-	return uploadTrace(db(), await w.access(who), sheet, { bytes: typeof text === 'string' ? bytes(text) : text, filename: 'k101-log.csv', ...extra });
+async function upload(
+	text: string | Uint8Array,
+	who: SessionUser = w.people.designer,
+	extra: { allowRejected?: boolean; tolerance?: number; name?: string } = {}
+) {
+	return uploadTrace(db(), await w.access(who), sheet, {
+		bytes: typeof text === 'string' ? bytes(text) : text,
+		filename: 'k101-log.csv',
+		...extra
+	});
 }
 
 describe('uploading a logger file', () => {
@@ -34,10 +50,23 @@ describe('uploading a logger file', () => {
 		// a heating run off the saturation line, then two readings on it (water at its saturation pressure)
 		const s = ref.saturation[3]; // 393.15 K
 		const lines = ['# K-101 jacket logger', 'time [s],P [kPa a],T [°C]'];
-		ref.offsets.forEach((o, i) => lines.push(`${i * 10},${(o.P / 1000).toPrecision(12)},${(o.T - 273.15).toFixed(6)}`));
-		lines.push(`500,${(s.P / 1000).toPrecision(12)},${(s.T - 273.15 + 0.2).toFixed(6)}`, `510,${(s.P / 1000).toPrecision(12)},${(s.T - 273.15 - 0.2).toFixed(6)}`);
+		ref.offsets.forEach((o, i) =>
+			lines.push(`${i * 10},${(o.P / 1000).toPrecision(12)},${(o.T - 273.15).toFixed(6)}`)
+		);
+		lines.push(
+			`500,${(s.P / 1000).toPrecision(12)},${(s.T - 273.15 + 0.2).toFixed(6)}`,
+			`510,${(s.P / 1000).toPrecision(12)},${(s.T - 273.15 - 0.2).toFixed(6)}`
+		);
 		const t = await upload(lines.join('\n'), w.people.designer, { name: 'K-101 heat-up' });
-		expect(t).toMatchObject({ name: 'K-101 heat-up', filename: 'k101-log.csv', fluid: 'water', pointCount: ref.offsets.length + 2, inDomeCount: 2, rejectedCount: 0, stale: false });
+		expect(t).toMatchObject({
+			name: 'K-101 heat-up',
+			filename: 'k101-log.csv',
+			fluid: 'water',
+			pointCount: ref.offsets.length + 2,
+			inDomeCount: 2,
+			rejectedCount: 0,
+			stale: false
+		});
 		expect(t.uploadedBy).toBe('Arlo Brandt');
 		t.points.slice(0, ref.offsets.length).forEach((p, i) => {
 			// python3-iapws 1.5.2 (Debian), IAPWS95(T, P)
@@ -45,18 +74,27 @@ describe('uploading a logger file', () => {
 			expect(p.inDome).toBe(false);
 		});
 		expect(t.points.slice(-2).every((p) => p.inDome && p.phase === null)).toBe(true);
-		const listed = await listTraces(db(), await w.access(w.people.viewer), sheet, { points: 'chart' });
+		const listed = await listTraces(db(), await w.access(w.people.viewer), sheet, {
+			points: 'chart'
+		});
 		expect(listed).toHaveLength(1);
 		expect(listed[0].points).toHaveLength(t.pointCount);
-		expect((await listTraces(db(), await w.access(w.people.viewer), sheet))[0].points).toBeUndefined();
+		expect(
+			(await listTraces(db(), await w.access(w.people.viewer), sheet))[0].points
+		).toBeUndefined();
 		const read = await readTrace(db(), await w.access(w.people.checker), sheet, t.id);
 		expect(read.points[0].line).toBe(3);
 		expect(read.notes).toEqual(['1 comment line (starting with #) left out.']);
 	});
 
 	it('reads gauge columns with the sheet’s own atmospheric pressure', async () => {
-		const high = await w.newSheet(vesselDoc(undefined, { units: unitPrefs({ atmosphere: 85_000, pressureReference: 'gauge' }) }));
-		const t = await uploadTrace(db(), await w.access(w.people.designer), high, { bytes: bytes('time [s],P [kPa g],T [°C]\n0,100,20\n'), filename: 'alt.csv' });
+		const high = await w.newSheet(
+			vesselDoc(undefined, { units: unitPrefs({ atmosphere: 85_000, pressureReference: 'gauge' }) })
+		);
+		const t = await uploadTrace(db(), await w.access(w.people.designer), high, {
+			bytes: bytes('time [s],P [kPa g],T [°C]\n0,100,20\n'),
+			filename: 'alt.csv'
+		});
 		// gauge + site atmosphere (85 kPa a, set on the sheet) = absolute
 		expect(t.points[0].P).toBeCloseTo(185_000, 6);
 		expect(t.atmosphere).toBe(85_000);
@@ -70,34 +108,83 @@ describe('uploading a logger file', () => {
 		await expectAppError(deleteTrace(db(), await w.access(w.people.checker), sheet, t.id), 403);
 		await deleteTrace(db(), await w.access(w.people.designer), sheet, t.id);
 		expect(await listTraces(db(), await w.access(w.people.viewer), sheet)).toHaveLength(0);
-		await expectAppError(deleteTrace(db(), await w.access(w.people.designer), sheet, t.id), 404, 'trace-not-found');
+		await expectAppError(
+			deleteTrace(db(), await w.access(w.people.designer), sheet, t.id),
+			404,
+			'trace-not-found'
+		);
 	});
 
 	it(`keeps at most ${MAX_TRACES_PER_SHEET} traces per sheet`, async () => {
-		for (let i = 0; i < MAX_TRACES_PER_SHEET; i++) await upload(`time [s],P [kPa a],T [°C]\n0,200,${20 + i}\n`);
+		for (let i = 0; i < MAX_TRACES_PER_SHEET; i++)
+			await upload(`time [s],P [kPa a],T [°C]\n0,200,${20 + i}\n`);
 		await expectAppError(upload('time [s],P [kPa a],T [°C]\n0,200,20\n'), 409, 'too-many-traces');
 	});
 });
 
 describe('refusing malformed files, line by line, storing nothing', () => {
 	const big = 'time [s],P [kPa a],T [°C]\n' + '0,200,20\n'.repeat(60_000);
-	const many = 'time [s],P [kPa a],T [°C]\n' + Array.from({ length: 10_001 }, (_, i) => `${i},200,20`).join('\n');
+	const many =
+		'time [s],P [kPa a],T [°C]\n' +
+		Array.from({ length: 10_001 }, (_, i) => `${i},200,20`).join('\n');
 	// header faults are listed too, each on the header's line, with every bad data line
 	const cases: Array<[string, string | Uint8Array, number, string, number[]]> = [
 		['wrong header (numbers)', '0,200,20\n1,200,21\n', 422, 'no-header', [1]],
-		['wrong header (no T column)', 'time [s],P [kPa a],flow [kg/s]\n0,200,1\n', 422, 'bad-header', [1]],
+		[
+			'wrong header (no T column)',
+			'time [s],P [kPa a],flow [kg/s]\n0,200,1\n',
+			422,
+			'bad-header',
+			[1]
+		],
 		['unknown unit', 'time [s],P [kPa a],T [Celsius-ish]\n0,200,20\n', 422, 'unknown-unit', [1]],
-		['non-numeric values', 'time [s],P [kPa a],T [°C]\n0,200,20\n5,two hundred,21\n10,210,n/a\n', 422, 'rejected-lines', [3, 4]],
+		[
+			'non-numeric values',
+			'time [s],P [kPa a],T [°C]\n0,200,20\n5,two hundred,21\n10,210,n/a\n',
+			422,
+			'rejected-lines',
+			[3, 4]
+		],
 		['too many rows', many, 422, 'too-many-rows', []],
 		['too big', big, 413, 'too-large', []],
 		['empty', '', 422, 'empty', []],
 		['only a header', 'time [s],P [kPa a],T [°C]\n', 422, 'no-points', []],
-		['semicolons with decimal commas', 'time [s];P [bar g];T [°C]\n0;1,5;20\n', 422, 'rejected-lines', [2]],
-		['semicolon line in a comma file', 'time [s],P [kPa a],T [°C]\n0;200;20\n', 422, 'rejected-lines', [2]],
-		['pressure neither gauge nor absolute', 'time [s],P [bar],T [°C]\n0,1.5,20\n', 422, 'pressure-reference', [1]],
-		['gauge reading below vacuum', 'time [s],P [kPa g],T [°C]\n0,-150,20\n', 422, 'rejected-lines', [2]],
+		[
+			'semicolons with decimal commas',
+			'time [s];P [bar g];T [°C]\n0;1,5;20\n',
+			422,
+			'rejected-lines',
+			[2]
+		],
+		[
+			'semicolon line in a comma file',
+			'time [s],P [kPa a],T [°C]\n0;200;20\n',
+			422,
+			'rejected-lines',
+			[2]
+		],
+		[
+			'pressure neither gauge nor absolute',
+			'time [s],P [bar],T [°C]\n0,1.5,20\n',
+			422,
+			'pressure-reference',
+			[1]
+		],
+		[
+			'gauge reading below vacuum',
+			'time [s],P [kPa g],T [°C]\n0,-150,20\n',
+			422,
+			'rejected-lines',
+			[2]
+		],
 		['UTF-16 text', new Uint8Array([0xff, 0xfe, 0x74, 0x00, 0x69, 0x00]), 422, 'not-utf8', []],
-		['below the triple point', 'time [s],P [kPa a],T [°C]\n0,100,20\n5,100,-20\n', 422, 'rejected-lines', [3]]
+		[
+			'below the triple point',
+			'time [s],P [kPa a],T [°C]\n0,100,20\n5,100,-20\n',
+			422,
+			'rejected-lines',
+			[3]
+		]
 	];
 	for (const [what, text, status, code, lines] of cases) {
 		it(what, async () => {
@@ -111,7 +198,11 @@ describe('refusing malformed files, line by line, storing nothing', () => {
 
 	it('accepts a byte order mark, semicolons with decimal points, and a file with rejected lines left out on request', async () => {
 		expect((await upload(bytes('\ufefftime [s];P [bar g];T [°C]\n0;1.5;20\n'))).pointCount).toBe(1);
-		const t = await upload('time [s],P [kPa a],T [°C]\n0,200,20\n5,bad,21\n10,210,22\n', w.people.designer, { allowRejected: true });
+		const t = await upload(
+			'time [s],P [kPa a],T [°C]\n0,200,20\n5,bad,21\n10,210,22\n',
+			w.people.designer,
+			{ allowRejected: true }
+		);
 		expect(t).toMatchObject({ pointCount: 2, rejectedCount: 1 });
 		expect(t.rejected[0]).toMatchObject({ line: 3 });
 		const stored = await readTrace(db(), await w.access(w.people.viewer), sheet, t.id);

@@ -4,12 +4,24 @@ import { AppError } from './errors';
 import { newId } from './secrets';
 import { readCapped } from './body';
 import type { TeamAccess } from './guard';
-import { countTraces, deleteTraceRow, getTraceRow, insertTrace, listTraceRows, listTraceRowsWithPoints, type TraceListRow } from './db/traces';
+import {
+	countTraces,
+	deleteTraceRow,
+	getTraceRow,
+	insertTrace,
+	listTraceRows,
+	listTraceRowsWithPoints,
+	type TraceListRow
+} from './db/traces';
 import { checkDoc } from './sheets';
 import { loadSheet } from './revisions';
 import { ROLE_LABEL } from '../roles';
 import { readTraceCsv } from '$lib/traces/read';
-import { DEFAULT_SATURATION_TOLERANCE, MAX_SATURATION_TOLERANCE, openSaturationPoints } from '$lib/traces/fix';
+import {
+	DEFAULT_SATURATION_TOLERANCE,
+	MAX_SATURATION_TOLERANCE,
+	openSaturationPoints
+} from '$lib/traces/fix';
 import { MAX_TRACE_BYTES } from '$lib/traces/csv';
 import type { RejectedLine, TraceColumn, TracePoint, TraceRefusalCode } from '$lib/traces/types';
 import type { TraceSummary, TraceWithPoints } from '$lib/review/types';
@@ -38,7 +50,9 @@ export const traceOptionsSchema = z.object({
 	tolerance: z.coerce
 		.number({ error: `Give the saturation tolerance in K (0 to ${MAX_SATURATION_TOLERANCE}).` })
 		.min(0, { error: 'The saturation tolerance cannot be negative.' })
-		.max(MAX_SATURATION_TOLERANCE, { error: `Use a saturation tolerance of at most ${MAX_SATURATION_TOLERANCE} K.` })
+		.max(MAX_SATURATION_TOLERANCE, {
+			error: `Use a saturation tolerance of at most ${MAX_SATURATION_TOLERANCE} K.`
+		})
 		.optional(),
 	allowRejected: z
 		.union([z.boolean(), z.enum(['1', '0', 'true', 'false', 'on', 'off', ''])])
@@ -50,13 +64,17 @@ export const traceOptionsSchema = z.object({
 export class TraceRefusedError extends AppError {
 	readonly rejected: RejectedLine[];
 	readonly rejectedCount: number;
-	constructor(code: TraceRefusalCode, message: string, rejected: RejectedLine[], rejectedCount: number) {
+	constructor(
+		code: TraceRefusalCode,
+		message: string,
+		rejected: RejectedLine[],
+		rejectedCount: number
+	) {
 		super(code === 'too-large' ? 413 : 422, code, message, 'file');
 		this.rejected = rejected;
 		this.rejectedCount = rejectedCount;
 	}
 }
-
 
 function summaryOf(r: TraceListRow, sheetFluid: string): TraceSummary {
 	return {
@@ -90,7 +108,11 @@ export function thin<T>(points: readonly T[], max = CHART_POINTS): T[] {
 
 function requireEdit(access: TeamAccess): void {
 	if (!access.can('sheet:edit'))
-		throw new AppError(403, 'forbidden', `Your role in this team is ${ROLE_LABEL[access.role].toLowerCase()}, which cannot upload or remove measured traces (designers and owners can).`);
+		throw new AppError(
+			403,
+			'forbidden',
+			`Your role in this team is ${ROLE_LABEL[access.role].toLowerCase()}, which cannot upload or remove measured traces (designers and owners can).`
+		);
 }
 
 export interface UploadInput {
@@ -102,22 +124,50 @@ export interface UploadInput {
 }
 
 /** Reads, checks, fixes and stores a logger file; a refused file stores nothing. */
-export async function uploadTrace(db: DB, access: TeamAccess, sheetId: string, input: UploadInput, now = Date.now()): Promise<TraceWithPoints> {
+export async function uploadTrace(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	input: UploadInput,
+	now = Date.now()
+): Promise<TraceWithPoints> {
 	requireEdit(access);
 	const sheet = await loadSheet(db, access, sheetId);
 	const doc = checkDoc(JSON.parse(sheet.draft)).doc;
-	const badName = controlCharProblem(input.filename, 'The file name', 'line', 'Rename the file using letters, digits, spaces, "-", "_" and "." (e.g. boiler-log.csv) and upload it again.');
+	const badName = controlCharProblem(
+		input.filename,
+		'The file name',
+		'line',
+		'Rename the file using letters, digits, spaces, "-", "_" and "." (e.g. boiler-log.csv) and upload it again.'
+	);
 	if (badName) throw new AppError(400, 'invalid-filename', badName, 'filename');
 	const filename = (input.filename || 'trace.csv').replace(/[\\/]/g, '_').slice(0, 255);
-	if (input.bytes.byteLength === 0) throw new TraceRefusedError('empty', 'The file is empty. Upload a CSV with a header line such as time [s],P [kPa g],T [°C] and one line per reading.', [], 0);
+	if (input.bytes.byteLength === 0)
+		throw new TraceRefusedError(
+			'empty',
+			'The file is empty. Upload a CSV with a header line such as time [s],P [kPa g],T [°C] and one line per reading.',
+			[],
+			0
+		);
 	if (input.bytes.byteLength > MAX_TRACE_BYTES)
-		throw new TraceRefusedError('too-large', `The file is ${Math.ceil(input.bytes.byteLength / 1024)} kB; the limit is ${MAX_TRACE_BYTES / 1024} kB. Split the log into shorter periods or thin it out before uploading.`, [], 0);
+		throw new TraceRefusedError(
+			'too-large',
+			`The file is ${Math.ceil(input.bytes.byteLength / 1024)} kB; the limit is ${MAX_TRACE_BYTES / 1024} kB. Split the log into shorter periods or thin it out before uploading.`,
+			[],
+			0
+		);
 	const atmosphere = doc.spec.atmosphericPressure ?? doc.units.atmosphere;
 	const tolerance = input.tolerance ?? DEFAULT_SATURATION_TOLERANCE;
-	const r = readTraceCsv(input.bytes, { fluid: doc.spec.fluid, atmosphere, toleranceK: tolerance, allowRejected: input.allowRejected ?? false });
+	const r = readTraceCsv(input.bytes, {
+		fluid: doc.spec.fluid,
+		atmosphere,
+		toleranceK: tolerance,
+		allowRejected: input.allowRejected ?? false
+	});
 	if (!r.ok) throw new TraceRefusedError(r.code, r.message, r.rejected, r.rejectedCount);
 	const by = access.actor;
-	const name = input.name?.trim() || filename.replace(/\.[^.]*$/, '').slice(0, 80) || 'Measured trace';
+	const name =
+		input.name?.trim() || filename.replace(/\.[^.]*$/, '').slice(0, 80) || 'Measured trace';
 	const row: SheetTraceRow = {
 		id: newId(),
 		sheet_id: sheet.id,
@@ -141,16 +191,26 @@ export async function uploadTrace(db: DB, access: TeamAccess, sheetId: string, i
 	};
 	await db.transaction().execute(async (trx) => {
 		if ((await countTraces(trx, sheet.id)) >= MAX_TRACES_PER_SHEET)
-			throw new AppError(409, 'too-many-traces', `A sheet keeps at most ${MAX_TRACES_PER_SHEET} measured traces. Remove one before uploading another.`);
+			throw new AppError(
+				409,
+				'too-many-traces',
+				`A sheet keeps at most ${MAX_TRACES_PER_SHEET} measured traces. Remove one before uploading another.`
+			);
 		await insertTrace(trx, row);
 	});
 	return { ...summaryOf(row, doc.spec.fluid), points: r.points };
 }
 
-export async function listTraces(db: DB, access: TeamAccess, sheetId: string, options: { points?: 'all' | 'chart' | 'none' } = {}): Promise<Array<TraceSummary & { points?: TracePoint[] }>> {
+export async function listTraces(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	options: { points?: 'all' | 'chart' | 'none' } = {}
+): Promise<Array<TraceSummary & { points?: TracePoint[] }>> {
 	const sheet = await loadSheet(db, access, sheetId);
 	const fluid = sheet.fluid;
-	if ((options.points ?? 'none') === 'none') return (await listTraceRows(db, sheet.id)).map((r) => summaryOf(r, fluid));
+	if ((options.points ?? 'none') === 'none')
+		return (await listTraceRows(db, sheet.id)).map((r) => summaryOf(r, fluid));
 	const rows = await listTraceRowsWithPoints(db, sheet.id);
 	return rows.map((r) => {
 		const points = openSaturationPoints(fluid, JSON.parse(r.points) as TracePoint[]);
@@ -158,17 +218,32 @@ export async function listTraces(db: DB, access: TeamAccess, sheetId: string, op
 	});
 }
 
-export async function readTrace(db: DB, access: TeamAccess, sheetId: string, traceId: string): Promise<TraceWithPoints> {
+export async function readTrace(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	traceId: string
+): Promise<TraceWithPoints> {
 	const sheet = await loadSheet(db, access, sheetId);
 	const row = await getTraceRow(db, sheet.id, traceId);
-	if (!row) throw new AppError(404, 'trace-not-found', 'There is no such measured trace on this sheet.');
-	return { ...summaryOf(row, sheet.fluid), points: openSaturationPoints(sheet.fluid, JSON.parse(row.points) as TracePoint[]) };
+	if (!row)
+		throw new AppError(404, 'trace-not-found', 'There is no such measured trace on this sheet.');
+	return {
+		...summaryOf(row, sheet.fluid),
+		points: openSaturationPoints(sheet.fluid, JSON.parse(row.points) as TracePoint[])
+	};
 }
 
-export async function deleteTrace(db: DB, access: TeamAccess, sheetId: string, traceId: string): Promise<void> {
+export async function deleteTrace(
+	db: DB,
+	access: TeamAccess,
+	sheetId: string,
+	traceId: string
+): Promise<void> {
 	requireEdit(access);
 	const sheet = await loadSheet(db, access, sheetId);
-	if (!(await deleteTraceRow(db, sheet.id, traceId))) throw new AppError(404, 'trace-not-found', 'There is no such measured trace on this sheet.');
+	if (!(await deleteTraceRow(db, sheet.id, traceId)))
+		throw new AppError(404, 'trace-not-found', 'There is no such measured trace on this sheet.');
 }
 
 /** Room for the multipart framing and the small fields around the file. */
@@ -178,8 +253,15 @@ function readLimited(request: Request, max: number): Promise<Buffer> {
 	return readCapped(
 		request,
 		max,
-		() => new TraceRefusedError('too-large', `The upload is larger than ${MAX_TRACE_BYTES / 1024} kB. Split the log into shorter periods or thin it out before uploading.`, [], 0),
-		() => new AppError(400, 'unreadable-upload', 'The upload could not be read completely. Try again.')
+		() =>
+			new TraceRefusedError(
+				'too-large',
+				`The upload is larger than ${MAX_TRACE_BYTES / 1024} kB. Split the log into shorter periods or thin it out before uploading.`,
+				[],
+				0
+			),
+		() =>
+			new AppError(400, 'unreadable-upload', 'The upload could not be read completely. Try again.')
 	);
 }
 
@@ -194,28 +276,67 @@ export async function readUpload(request: Request, url: URL): Promise<UploadInpu
 		const raw = await readLimited(request, MAX_TRACE_BYTES + FRAMING);
 		let form: FormData;
 		try {
-			form = await new Request('http://upload.invalid/', { method: 'POST', body: new Blob([raw as Uint8Array<ArrayBuffer>]), headers: { 'content-type': type } }).formData();
+			form = await new Request('http://upload.invalid/', {
+				method: 'POST',
+				body: new Blob([raw as Uint8Array<ArrayBuffer>]),
+				headers: { 'content-type': type }
+			}).formData();
 		} catch {
-			throw new AppError(400, 'unreadable-upload', 'The form could not be read. Send multipart/form-data with the CSV in a field named "file".');
+			throw new AppError(
+				400,
+				'unreadable-upload',
+				'The form could not be read. Send multipart/form-data with the CSV in a field named "file".'
+			);
 		}
 		for (const key of new Set(form.keys())) {
-			const problem = controlCharProblem(key, 'A form field’s name', 'line', 'Name the fields file, name, tolerance and allowRejected.');
+			const problem = controlCharProblem(
+				key,
+				'A form field’s name',
+				'line',
+				'Name the fields file, name, tolerance and allowRejected.'
+			);
 			if (problem) throw new AppError(400, 'invalid-field-name', problem);
 		}
 		const file = form.get('file');
-		if (!(file instanceof File)) throw new AppError(400, 'no-file', 'Choose a CSV file to upload (form field "file").', 'file');
+		if (!(file instanceof File))
+			throw new AppError(
+				400,
+				'no-file',
+				'Choose a CSV file to upload (form field "file").',
+				'file'
+			);
 		const opts = traceOptionsSchema.parse({
 			name: form.get('name') ?? undefined,
 			tolerance: (form.get('tolerance') as string | null) || undefined,
 			allowRejected: form.get('allowRejected') ?? undefined
 		});
-		return { bytes: new Uint8Array(await file.arrayBuffer()), filename: file.name, name: opts.name, tolerance: opts.tolerance, allowRejected: opts.allowRejected };
+		return {
+			bytes: new Uint8Array(await file.arrayBuffer()),
+			filename: file.name,
+			name: opts.name,
+			tolerance: opts.tolerance,
+			allowRejected: opts.allowRejected
+		};
 	}
 	if (/^text\/(csv|plain)\b/i.test(type)) {
 		const bytes = await readLimited(request, MAX_TRACE_BYTES);
 		const q = url.searchParams;
-		const opts = traceOptionsSchema.parse({ name: q.get('name') ?? undefined, tolerance: q.get('tolerance') || undefined, allowRejected: q.get('allowRejected') ?? undefined });
-		return { bytes, filename: (q.get('filename') ?? 'trace.csv').slice(0, 255), name: opts.name, tolerance: opts.tolerance, allowRejected: opts.allowRejected };
+		const opts = traceOptionsSchema.parse({
+			name: q.get('name') ?? undefined,
+			tolerance: q.get('tolerance') || undefined,
+			allowRejected: q.get('allowRejected') ?? undefined
+		});
+		return {
+			bytes,
+			filename: (q.get('filename') ?? 'trace.csv').slice(0, 255),
+			name: opts.name,
+			tolerance: opts.tolerance,
+			allowRejected: opts.allowRejected
+		};
 	}
-	throw new AppError(415, 'unsupported-media-type', 'Send the logger file as multipart/form-data (field "file") or as the body with "Content-Type: text/csv".');
+	throw new AppError(
+		415,
+		'unsupported-media-type',
+		'Send the logger file as multipart/form-data (field "file") or as the body with "Content-Type: text/csv".'
+	);
 }

@@ -26,16 +26,23 @@ function server() {
 		latency: 100,
 		save(doc: Doc, base: number) {
 			s.saves.push({ doc, base });
-			return new Promise<{ version: number; updatedAt: number; updatedBy: string }>((resolve, reject) =>
-				setTimeout(() => {
-					if (s.mode === 'offline') return reject(new OfflineError(new TypeError('fetch failed')));
-					if (s.mode === 'fault') return reject(new ApiError(503, 'unavailable', 'Busy.'));
-					if (s.mode === 'forbidden') return reject(new ApiError(403, 'forbidden', 'Checkers cannot edit sheets.'));
-					if (s.mode === 'conflict' || base !== s.version)
-						return reject(new ApiError(409, 'draft-conflict', 'Maren saved this sheet.', { current: { version: s.version, updatedAt: 42, updatedBy: 'Maren' } }));
-					s.version++;
-					resolve({ version: s.version, updatedAt: Date.now(), updatedBy: 'me' });
-				}, s.latency)
+			return new Promise<{ version: number; updatedAt: number; updatedBy: string }>(
+				(resolve, reject) =>
+					setTimeout(() => {
+						if (s.mode === 'offline')
+							return reject(new OfflineError(new TypeError('fetch failed')));
+						if (s.mode === 'fault') return reject(new ApiError(503, 'unavailable', 'Busy.'));
+						if (s.mode === 'forbidden')
+							return reject(new ApiError(403, 'forbidden', 'Checkers cannot edit sheets.'));
+						if (s.mode === 'conflict' || base !== s.version)
+							return reject(
+								new ApiError(409, 'draft-conflict', 'Maren saved this sheet.', {
+									current: { version: s.version, updatedAt: 42, updatedBy: 'Maren' }
+								})
+							);
+						s.version++;
+						resolve({ version: s.version, updatedAt: Date.now(), updatedBy: 'me' });
+					}, s.latency)
 			);
 		}
 	};
@@ -52,7 +59,14 @@ beforeEach(() => {
 afterEach(() => vi.useRealTimers());
 
 function make(srv: ReturnType<typeof server>, version = 1) {
-	return new Autosave<Doc>(version, { save: (d, v) => srv.save(d, v), storage: store, key: 'k', onState: (s) => states.push(s), delay: 800, retryDelay: 1000 });
+	return new Autosave<Doc>(version, {
+		save: (d, v) => srv.save(d, v),
+		storage: store,
+		key: 'k',
+		onState: (s) => states.push(s),
+		delay: 800,
+		retryDelay: 1000
+	});
 }
 const last = () => states[states.length - 1];
 
@@ -100,7 +114,10 @@ describe('autosave', () => {
 		const a = make(srv, 1);
 		a.change({ n: 7 });
 		await vi.advanceTimersByTimeAsync(900);
-		expect(last()).toMatchObject({ status: 'conflict', conflict: { version: 5, updatedBy: 'Maren' } });
+		expect(last()).toMatchObject({
+			status: 'conflict',
+			conflict: { version: 5, updatedBy: 'Maren' }
+		});
 		a.change({ n: 8 });
 		await vi.advanceTimersByTimeAsync(5000);
 		expect(srv.saves).toHaveLength(1);

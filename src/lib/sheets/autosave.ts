@@ -59,7 +59,13 @@ export function readLocalCopy<D>(storage: KeyValueStore | null, key: string): Lo
 		const raw = storage.getItem(key);
 		if (!raw) return null;
 		const v = JSON.parse(raw) as LocalCopy<D>;
-		if (typeof v !== 'object' || v === null || typeof v.baseVersion !== 'number' || typeof v.doc !== 'object') return null;
+		if (
+			typeof v !== 'object' ||
+			v === null ||
+			typeof v.baseVersion !== 'number' ||
+			typeof v.doc !== 'object'
+		)
+			return null;
 		return v;
 	} catch {
 		return null;
@@ -103,7 +109,14 @@ export class Autosave<D> {
 
 	#writeLocal(doc: D) {
 		try {
-			this.#o.storage?.setItem(this.#o.key, JSON.stringify({ doc, baseVersion: this.#state.version, changedAt: this.#now() } satisfies LocalCopy<D>));
+			this.#o.storage?.setItem(
+				this.#o.key,
+				JSON.stringify({
+					doc,
+					baseVersion: this.#state.version,
+					changedAt: this.#now()
+				} satisfies LocalCopy<D>)
+			);
 		} catch {
 			// storage full or disabled: the server copy is still the goal
 		}
@@ -130,14 +143,24 @@ export class Autosave<D> {
 		this.#seq++;
 		this.#writeLocal(doc);
 		if (this.#state.status === 'conflict') return;
-		if (this.#state.status !== 'offline' && this.#state.status !== 'saving') this.#set({ status: 'unsaved', message: this.#state.status === 'error' ? this.#state.message : null });
+		if (this.#state.status !== 'offline' && this.#state.status !== 'saving')
+			this.#set({
+				status: 'unsaved',
+				message: this.#state.status === 'error' ? this.#state.message : null
+			});
 		if (!this.#inFlight) this.#schedule(this.#o.delay ?? AUTOSAVE_DELAY);
 	}
 
 	/** Send what is pending now (also on leaving the page, and when the connection returns). */
 	async flush(): Promise<void> {
 		clearTimeout(this.#timer);
-		if (this.#disposed || this.#inFlight || this.#pending === null || this.#state.status === 'conflict') return;
+		if (
+			this.#disposed ||
+			this.#inFlight ||
+			this.#pending === null ||
+			this.#state.status === 'conflict'
+		)
+			return;
 		const doc = this.#pending;
 		const seq = this.#seq;
 		const epoch = this.#epoch;
@@ -165,7 +188,10 @@ export class Autosave<D> {
 				const c = (e.body.current ?? null) as ConflictInfo | null;
 				this.#set({ status: 'conflict', conflict: c, message: e.message });
 			} else if (e instanceof OfflineError) {
-				this.#set({ status: 'offline', message: 'No connection: edits are kept in this browser and saved when it returns.' });
+				this.#set({
+					status: 'offline',
+					message: 'No connection: edits are kept in this browser and saved when it returns.'
+				});
 				this.#backoff();
 			} else if (e instanceof ApiError && (e.status >= 500 || e.status === 429)) {
 				this.#set({ status: 'error', message: `${e.message} Retrying.` });

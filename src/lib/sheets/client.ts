@@ -38,7 +38,14 @@ export async function apiCall<T>(f: Fetch, url: string, init: RequestInit = {}):
 	let res: Response;
 	const json = typeof init.body === 'string';
 	try {
-		res = await f(url, { ...init, headers: { accept: 'application/json', ...(json ? { 'content-type': 'application/json' } : {}), ...(init.headers ?? {}) } });
+		res = await f(url, {
+			...init,
+			headers: {
+				accept: 'application/json',
+				...(json ? { 'content-type': 'application/json' } : {}),
+				...(init.headers ?? {})
+			}
+		});
 	} catch (e) {
 		if (e instanceof DOMException && e.name === 'AbortError') throw e;
 		throw new OfflineError(e);
@@ -52,27 +59,50 @@ export async function apiCall<T>(f: Fetch, url: string, init: RequestInit = {}):
 	}
 	if (!res.ok) {
 		const err = (body as { error?: { code?: string; message?: string } } | null)?.error;
-		throw new ApiError(res.status, err?.code ?? `http-${res.status}`, err?.message ?? `The server answered ${res.status}.`, (err ?? {}) as Record<string, unknown>);
+		throw new ApiError(
+			res.status,
+			err?.code ?? `http-${res.status}`,
+			err?.message ?? `The server answered ${res.status}.`,
+			(err ?? {}) as Record<string, unknown>
+		);
 	}
 	return body as T;
 }
 
 /** POST /api/v1/paths: the whole path for a spec (its sampling thinned to the API's cap, for drawing). */
 export async function postPath(spec: PathSpec, f: Fetch = fetch): Promise<PathResult> {
-	const r = await apiCall<{ path: PathResult }>(f, '/api/v1/paths', { method: 'POST', body: JSON.stringify(fitPathPoints(spec)) });
+	const r = await apiCall<{ path: PathResult }>(f, '/api/v1/paths', {
+		method: 'POST',
+		body: JSON.stringify(fitPathPoints(spec))
+	});
 	return r.path;
 }
 
 /** GET /api/v1/fluids/{id}/isolines (cached by the browser: the answer depends on the URL only). */
-export async function getIsolines(fluid: string, kind: IsolineKind, values: number[], f: Fetch = fetch): Promise<Isoline[]> {
+export async function getIsolines(
+	fluid: string,
+	kind: IsolineKind,
+	values: number[],
+	f: Fetch = fetch
+): Promise<Isoline[]> {
 	if (!values.length) return [];
 	const q = values.map((v) => Number(v.toPrecision(12))).join(',');
-	const r = await apiCall<{ lines: Isoline[] }>(f, `/api/v1/fluids/${encodeURIComponent(fluid)}/isolines?kind=${kind}&values=${q}&points=80`);
+	const r = await apiCall<{ lines: Isoline[] }>(
+		f,
+		`/api/v1/fluids/${encodeURIComponent(fluid)}/isolines?kind=${kind}&values=${q}&points=80`
+	);
 	return r.lines;
 }
 
-export async function getSaturation(fluid: string, points = 100, f: Fetch = fetch): Promise<SaturationCurve> {
-	return apiCall<SaturationCurve>(f, `/api/v1/fluids/${encodeURIComponent(fluid)}/saturation?points=${points}`);
+export async function getSaturation(
+	fluid: string,
+	points = 100,
+	f: Fetch = fetch
+): Promise<SaturationCurve> {
+	return apiCall<SaturationCurve>(
+		f,
+		`/api/v1/fluids/${encodeURIComponent(fluid)}/saturation?points=${points}`
+	);
 }
 
 export interface SavedDraft {
@@ -82,8 +112,18 @@ export interface SavedDraft {
 }
 
 /** PUT …/sheets/{id}/draft. A 409 is an ApiError with `body.current` naming who saved. */
-export async function putDraft(team: string, sheet: string, version: number, doc: SheetDoc, f: Fetch = fetch): Promise<SavedDraft> {
-	return apiCall<SavedDraft>(f, `/api/v1/teams/${encodeURIComponent(team)}/sheets/${encodeURIComponent(sheet)}/draft`, { method: 'PUT', body: JSON.stringify({ version, doc }) });
+export async function putDraft(
+	team: string,
+	sheet: string,
+	version: number,
+	doc: SheetDoc,
+	f: Fetch = fetch
+): Promise<SavedDraft> {
+	return apiCall<SavedDraft>(
+		f,
+		`/api/v1/teams/${encodeURIComponent(team)}/sheets/${encodeURIComponent(sheet)}/draft`,
+		{ method: 'PUT', body: JSON.stringify({ version, doc }) }
+	);
 }
 
 export interface ServerSheet {
@@ -95,7 +135,14 @@ export interface ServerSheet {
 	doc: SheetDoc;
 }
 
-export async function getSheetDraft(team: string, sheet: string, f: Fetch = fetch): Promise<ServerSheet> {
-	const r = await apiCall<{ sheet: ServerSheet }>(f, `/api/v1/teams/${encodeURIComponent(team)}/sheets/${encodeURIComponent(sheet)}`);
+export async function getSheetDraft(
+	team: string,
+	sheet: string,
+	f: Fetch = fetch
+): Promise<ServerSheet> {
+	const r = await apiCall<{ sheet: ServerSheet }>(
+		f,
+		`/api/v1/teams/${encodeURIComponent(team)}/sheets/${encodeURIComponent(sheet)}`
+	);
 	return r.sheet;
 }

@@ -6,7 +6,12 @@ function fakeServer(latency: number) {
 	const calls: number[] = [];
 	const run = (input: number) => {
 		calls.push(input);
-		return new Promise<number>((resolve, reject) => setTimeout(() => (input < 0 ? reject(new Error(`bad ${input}`)) : resolve(input * 2)), latency));
+		return new Promise<number>((resolve, reject) =>
+			setTimeout(
+				() => (input < 0 ? reject(new Error(`bad ${input}`)) : resolve(input * 2)),
+				latency
+			)
+		);
 	};
 	return { calls, run };
 }
@@ -22,7 +27,10 @@ describe('request coalescer', () => {
 	it('sends at most one request at a time; moves meanwhile collapse to the newest', async () => {
 		const server = fakeServer(30);
 		const results: Array<[number, number]> = [];
-		const c = createCoalescer(server.run, { result: (o, i) => results.push([i, o]), error: () => {} });
+		const c = createCoalescer(server.run, {
+			result: (o, i) => results.push([i, o]),
+			error: () => {}
+		});
 		for (let i = 1; i <= 10; i++) {
 			c.submit(i);
 			await vi.advanceTimersByTimeAsync(5); // pointer moves every 5 ms, the server takes 30
@@ -44,7 +52,10 @@ describe('request coalescer', () => {
 	it('delivers each answer the moment it lands, in order', async () => {
 		const server = fakeServer(20);
 		const seen: Array<[number, number]> = [];
-		const c = createCoalescer(server.run, { result: (o) => seen.push([Date.now(), o]), error: () => {} });
+		const c = createCoalescer(server.run, {
+			result: (o) => seen.push([Date.now(), o]),
+			error: () => {}
+		});
 		const t0 = Date.now();
 		c.submit(1);
 		c.submit(2);
@@ -77,7 +88,10 @@ describe('request coalescer', () => {
 		const server = fakeServer(10);
 		const errors: number[] = [];
 		const results: number[] = [];
-		const c = createCoalescer(server.run, { result: (o) => results.push(o), error: (_e, i) => errors.push(i) });
+		const c = createCoalescer(server.run, {
+			result: (o) => results.push(o),
+			error: (_e, i) => errors.push(i)
+		});
 		c.submit(-1);
 		c.submit(5);
 		let idle = false;

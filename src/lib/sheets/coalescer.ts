@@ -25,7 +25,10 @@ export interface CoalescerHandlers<I, O> {
 	error(error: unknown, input: I): void;
 }
 
-export function createCoalescer<I, O>(run: (input: I) => Promise<O>, handlers: CoalescerHandlers<I, O>): Coalescer<I> {
+export function createCoalescer<I, O>(
+	run: (input: I) => Promise<O>,
+	handlers: CoalescerHandlers<I, O>
+): Coalescer<I> {
 	let inFlight = false;
 	let waiting: { input: I } | null = null;
 	let generation = 0;

@@ -19,8 +19,12 @@ describe('what differs between two drafts', () => {
 		b.spec.legs.push({ id: 'Lnew234', process: 'isothermal', target: { v: 0.1 } });
 		b.titleBlock.tag = 'HP-411';
 		const rows = diffDocs(a, b);
-		const find = (section: string, field: string) => rows.find((r) => r.section === section && r.field === field);
-		expect(find('Leg L1', 'target')).toMatchObject({ a: 'P = 1400.0\u00a0kPa a', b: 'P = 1600.0\u00a0kPa a' });
+		const find = (section: string, field: string) =>
+			rows.find((r) => r.section === section && r.field === field);
+		expect(find('Leg L1', 'target')).toMatchObject({
+			a: 'P = 1400.0\u00a0kPa a',
+			b: 'P = 1600.0\u00a0kPa a'
+		});
 		expect(find('Leg L4 → L2', 'position')).toMatchObject({ a: 'L4', b: 'L2' });
 		expect(find('Leg L2', 'deleted')?.a).toContain('isobaric');
 		expect(find('Leg L4', 'added')?.b).toContain('isothermal');
@@ -33,7 +37,11 @@ describe('what differs between two drafts', () => {
 		b.startSpec = { kind: 'fill', fraction: 0.8, T: 293.15 };
 		b.spec.legs[0] = { ...b.spec.legs[0], target: { x: 0 }, to: 'saturation' };
 		const rows = diffDocs(a, b);
-		expect(rows.find((r) => r.section === 'Start state S1')?.b).toBe('fill 80\u00a0% liquid by volume at 20.00\u00a0°C');
-		expect(rows.find((r) => r.section === 'Leg L1' && r.field === 'target')?.b).toBe('saturation (liquid line)');
+		expect(rows.find((r) => r.section === 'Start state S1')?.b).toBe(
+			'fill 80\u00a0% liquid by volume at 20.00\u00a0°C'
+		);
+		expect(rows.find((r) => r.section === 'Leg L1' && r.field === 'target')?.b).toBe(
+			'saturation (liquid line)'
+		);
 	});
 });

@@ -32,14 +32,24 @@ function inputsText(i: Inputs | Partial<Record<TargetName, number>>, prefs: Unit
 		.join(', ');
 }
 
-function legText(l: SheetLegSpec | undefined, prefs: UnitPrefs): { process: string; target: string } {
+function legText(
+	l: SheetLegSpec | undefined,
+	prefs: UnitPrefs
+): { process: string; target: string } {
 	if (!l) return { process: '', target: '' };
-	return { process: l.process + (l.n !== undefined ? ` (n = ${l.n})` : ''), target: l.to === 'saturation' ? `saturation (${l.target.x === 0 ? 'liquid' : 'vapor'} line)` : inputsText(l.target, prefs) };
+	return {
+		process: l.process + (l.n !== undefined ? ` (n = ${l.n})` : ''),
+		target:
+			l.to === 'saturation'
+				? `saturation (${l.target.x === 0 ? 'liquid' : 'vapor'} line)`
+				: inputsText(l.target, prefs)
+	};
 }
 
 function systemText(d: SheetDoc, prefs: UnitPrefs): string {
 	const s = d.spec.system;
-	if (s.kind === 'flow') return `steady flow, ${formatQuantity(s.massFlow, 'massFlow', prefs).full}`;
+	if (s.kind === 'flow')
+		return `steady flow, ${formatQuantity(s.massFlow, 'massFlow', prefs).full}`;
 	if (s.mass !== undefined) return `closed, ${formatQuantity(s.mass, 'mass', prefs).full}`;
 	if (s.volume !== undefined) return `closed, ${formatQuantity(s.volume, 'volume', prefs).full}`;
 	return 'closed, per kg';
@@ -61,18 +71,27 @@ export function diffDocs(a: SheetDoc, b: SheetDoc, prefs: UnitPrefs = a.units): 
 	add('Sheet', 'fluid', a.spec.fluid, b.spec.fluid);
 	add('Sheet', 'system', systemText(a, prefs), systemText(b, prefs));
 	add('Sheet', 'description', a.description, b.description);
-	const startText = (d: SheetDoc) => (d.startSpec?.kind === 'fill' ? fillText(d.startSpec, prefs) : inputsText(d.spec.start, prefs));
+	const startText = (d: SheetDoc) =>
+		d.startSpec?.kind === 'fill' ? fillText(d.startSpec, prefs) : inputsText(d.spec.start, prefs);
 	add('Start state S1', 'fixed by', startText(a), startText(b));
 
 	const ids = [...new Set([...a.spec.legs.map((l) => l.id), ...b.spec.legs.map((l) => l.id)])];
 	for (const id of ids) {
 		const ia = a.spec.legs.findIndex((l) => l.id === id);
 		const ib = b.spec.legs.findIndex((l) => l.id === id);
-		const name = ia >= 0 && ib >= 0 && ia !== ib ? `Leg ${legLabel(ia)} → ${legLabel(ib)}` : `Leg ${legLabel(ia >= 0 ? ia : ib)}`;
+		const name =
+			ia >= 0 && ib >= 0 && ia !== ib
+				? `Leg ${legLabel(ia)} → ${legLabel(ib)}`
+				: `Leg ${legLabel(ia >= 0 ? ia : ib)}`;
 		const la = legText(a.spec.legs[ia], prefs);
 		const lb = legText(b.spec.legs[ib], prefs);
 		if (ia < 0 || ib < 0) {
-			add(name, ia < 0 ? 'added' : 'deleted', ia < 0 ? '' : `${la.process} to ${la.target}`, ib < 0 ? '' : `${lb.process} to ${lb.target}`);
+			add(
+				name,
+				ia < 0 ? 'added' : 'deleted',
+				ia < 0 ? '' : `${la.process} to ${la.target}`,
+				ib < 0 ? '' : `${lb.process} to ${lb.target}`
+			);
 			continue;
 		}
 		if (ia !== ib) add(name, 'position', legLabel(ia), legLabel(ib));
@@ -83,11 +102,23 @@ export function diffDocs(a: SheetDoc, b: SheetDoc, prefs: UnitPrefs = a.units): 
 	for (const [key, label, q] of LIMITS) {
 		const x = a.spec.limits?.[key];
 		const y = b.spec.limits?.[key];
-		add('Design limits', label, x === undefined ? '' : formatQuantity(x, q, prefs).full, y === undefined ? '' : formatQuantity(y, q, prefs).full);
+		add(
+			'Design limits',
+			label,
+			x === undefined ? '' : formatQuantity(x, q, prefs).full,
+			y === undefined ? '' : formatQuantity(y, q, prefs).full
+		);
 	}
-	const unitsText = (u: UnitPrefs) => `${u.system === 'si' ? 'SI' : 'US customary'}, ${u.system === 'si' ? u.pressureUnit : 'psi'} ${u.pressureReference}`;
+	const unitsText = (u: UnitPrefs) =>
+		`${u.system === 'si' ? 'SI' : 'US customary'}, ${u.system === 'si' ? u.pressureUnit : 'psi'} ${u.pressureReference}`;
 	add('Units', 'display', unitsText(a.units), unitsText(b.units));
-	add('Units', 'atmospheric pressure', formatQuantity(a.units.atmosphere, 'pressure', prefs, { reference: 'absolute' }).full, formatQuantity(b.units.atmosphere, 'pressure', prefs, { reference: 'absolute' }).full);
-	for (const k of Object.keys(TITLE_BLOCK_LABELS) as (keyof typeof TITLE_BLOCK_LABELS)[]) add('Title block', TITLE_BLOCK_LABELS[k], a.titleBlock[k], b.titleBlock[k]);
+	add(
+		'Units',
+		'atmospheric pressure',
+		formatQuantity(a.units.atmosphere, 'pressure', prefs, { reference: 'absolute' }).full,
+		formatQuantity(b.units.atmosphere, 'pressure', prefs, { reference: 'absolute' }).full
+	);
+	for (const k of Object.keys(TITLE_BLOCK_LABELS) as (keyof typeof TITLE_BLOCK_LABELS)[])
+		add('Title block', TITLE_BLOCK_LABELS[k], a.titleBlock[k], b.titleBlock[k]);
 	return rows;
 }

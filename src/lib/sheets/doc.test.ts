@@ -1,5 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import { allowedTargets, engineSpec, labelIds, makeDoc, newLegId, sameSpec, startPair, stateIndex, stateKey, targetOf, viewOf } from './doc';
+import {
+	allowedTargets,
+	engineSpec,
+	labelIds,
+	makeDoc,
+	newLegId,
+	sameSpec,
+	startPair,
+	stateIndex,
+	stateKey,
+	targetOf,
+	viewOf
+} from './doc';
 import { computePath } from '$lib/thermo';
 import { WORKED_EXAMPLES } from './templates';
 
@@ -30,7 +42,16 @@ describe('sheet document helpers', () => {
 	});
 
 	it('the engine spec carries the atmosphere and only the engine’s fields', () => {
-		const d = makeDoc({ spec: { fluid: 'water', system: { kind: 'flow', massFlow: 1 }, start: { T: 300, P: 1e5 }, legs: [], limits: { designPressure: undefined } }, units: { atmosphere: 97_000 } });
+		const d = makeDoc({
+			spec: {
+				fluid: 'water',
+				system: { kind: 'flow', massFlow: 1 },
+				start: { T: 300, P: 1e5 },
+				legs: [],
+				limits: { designPressure: undefined }
+			},
+			units: { atmosphere: 97_000 }
+		});
 		const s = engineSpec(d);
 		expect(s.atmosphericPressure).toBe(97_000);
 		expect(s.limits).toBeUndefined();
@@ -41,7 +62,9 @@ describe('sheet document helpers', () => {
 
 	it('engine messages name legs by their labels, each id replaced once', () => {
 		const legs = [{ id: 'L2' }, { id: 'Lx7k2mq' }];
-		expect(labelIds('Leg L2 (isobaric) then Leg Lx7k2mq fails', legs)).toBe('Leg L1 (isobaric) then Leg L2 fails');
+		expect(labelIds('Leg L2 (isobaric) then Leg Lx7k2mq fails', legs)).toBe(
+			'Leg L1 (isobaric) then Leg L2 fails'
+		);
 	});
 
 	it('every worked example computes, and its chart marks are keyed by anchors', () => {
@@ -50,8 +73,12 @@ describe('sheet document helpers', () => {
 			const r = computePath(engineSpec(d));
 			const view = viewOf(d.spec, r);
 			expect(view.states.map((s) => s.id)).toEqual(['start', ...d.spec.legs.map((l) => l.id)]);
-			expect(view.states.map((s) => s.label)).toEqual(d.spec.legs.map((_, i) => `S${i + 1}`).concat(`S${d.spec.legs.length + 1}`));
-			expect(view.legs.every((l, i) => l.from === view.states[i].id && l.to === view.states[i + 1].id)).toBe(true);
+			expect(view.states.map((s) => s.label)).toEqual(
+				d.spec.legs.map((_, i) => `S${i + 1}`).concat(`S${d.spec.legs.length + 1}`)
+			);
+			expect(
+				view.legs.every((l, i) => l.from === view.states[i].id && l.to === view.states[i + 1].id)
+			).toBe(true);
 		}
 	});
 });

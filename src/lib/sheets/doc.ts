@@ -3,13 +3,38 @@
  * engine reads, and the view of a computed path that the chart and the table draw. Client-safe.
  */
 import type { ChartLeg, ChartState } from '../charts/types';
-import type { Inputs, PathResult, PathSpec, Process, State, StateExtras, TargetName } from '../thermo/types';
+import type {
+	Inputs,
+	PathResult,
+	PathSpec,
+	Process,
+	State,
+	StateExtras,
+	TargetName
+} from '../thermo/types';
 import { DEFAULT_UNIT_PREFS, type UnitPrefs } from '../units/prefs';
-import { SHEET_DOC_VERSION, type ChartPrefs, type SheetDoc, type SheetLegSpec, type SheetPathSpec, type TitleBlockFields } from './types';
+import {
+	SHEET_DOC_VERSION,
+	type ChartPrefs,
+	type SheetDoc,
+	type SheetLegSpec,
+	type SheetPathSpec,
+	type TitleBlockFields
+} from './types';
 
-export const DEFAULT_CHART: Readonly<ChartPrefs> = Object.freeze({ view: 'both', pressureScale: 'log', isolines: true });
+export const DEFAULT_CHART: Readonly<ChartPrefs> = Object.freeze({
+	view: 'both',
+	pressureScale: 'log',
+	isolines: true
+});
 
-export const EMPTY_TITLE_BLOCK: Readonly<TitleBlockFields> = Object.freeze({ project: '', equipment: '', tag: '', documentNumber: '', site: '' });
+export const EMPTY_TITLE_BLOCK: Readonly<TitleBlockFields> = Object.freeze({
+	project: '',
+	equipment: '',
+	tag: '',
+	documentNumber: '',
+	site: ''
+});
 
 export const TITLE_BLOCK_LABELS: Record<keyof TitleBlockFields, string> = {
 	project: 'Project',
@@ -76,7 +101,9 @@ export function targetOf(target: Partial<Record<TargetName, number>>): [Editable
 
 /** The two properties of a start state, in the order they were set (the first is the older). */
 export function startPair(start: Inputs): [EditableProp, EditableProp] {
-	const keys = Object.keys(start).filter((k) => start[k as keyof Inputs] !== undefined) as (keyof Inputs)[];
+	const keys = Object.keys(start).filter(
+		(k) => start[k as keyof Inputs] !== undefined
+	) as (keyof Inputs)[];
 	return keys.map((k) => (k === 'rho' ? 'v' : k)) as [EditableProp, EditableProp];
 }
 
@@ -117,7 +144,9 @@ export function engineSpec(doc: SheetDoc): PathSpec {
 		}),
 		atmosphericPressure: doc.units.atmosphere
 	};
-	const limits = Object.fromEntries(Object.entries(s.limits ?? {}).filter(([, v]) => v !== undefined && v !== null));
+	const limits = Object.fromEntries(
+		Object.entries(s.limits ?? {}).filter(([, v]) => v !== undefined && v !== null)
+	);
 	if (Object.keys(limits).length) spec.limits = limits;
 	if (s.samples !== undefined) spec.samples = s.samples;
 	return spec;
@@ -172,9 +201,20 @@ export interface PathView {
 /** Chart marks for a result of `spec` (the result's legs are in the spec's order). */
 export function viewOf(spec: SheetPathSpec, result: PathResult): PathView {
 	const keys = result.states.map((_, i) => stateKey(spec.legs, i));
-	const states: ChartState[] = result.states.map((s, i) => ({ id: keys[i], label: stateLabel(i), state: s.state }));
+	const states: ChartState[] = result.states.map((s, i) => ({
+		id: keys[i],
+		label: stateLabel(i),
+		state: s.state
+	}));
 	const legs: ChartLeg[] = result.legs.map((l, i) => {
-		const leg: ChartLeg = { id: l.id, process: l.leg.process, points: l.leg.points, crossings: l.leg.crossings, from: keys[i], to: keys[i + 1] };
+		const leg: ChartLeg = {
+			id: l.id,
+			process: l.leg.process,
+			points: l.leg.points,
+			crossings: l.leg.crossings,
+			from: keys[i],
+			to: keys[i + 1]
+		};
 		const n = spec.legs[i]?.n;
 		if (n !== undefined) leg.n = n;
 		return leg;
@@ -188,8 +228,13 @@ export function viewOf(spec: SheetPathSpec, result: PathResult): PathView {
  */
 export function startOnlyResult(doc: SheetDoc, start: State, extras: StateExtras): PathResult {
 	const s = doc.spec;
-	const limits = Object.fromEntries(Object.entries(s.limits ?? {}).filter(([, v]) => typeof v === 'number')) as PathResult['limits'];
-	const m = s.system.kind === 'closed' ? (s.system.mass ?? (s.system.volume !== undefined ? s.system.volume / start.v : 1)) : s.system.massFlow;
+	const limits = Object.fromEntries(
+		Object.entries(s.limits ?? {}).filter(([, v]) => typeof v === 'number')
+	) as PathResult['limits'];
+	const m =
+		s.system.kind === 'closed'
+			? (s.system.mass ?? (s.system.volume !== undefined ? s.system.volume / start.v : 1))
+			: s.system.massFlow;
 	const unit: 'J' | 'W' = s.system.kind === 'closed' ? 'J' : 'W';
 	const limitEvents: PathResult['limitEvents'] = [];
 	const beyond = {
@@ -202,15 +247,31 @@ export function startOnlyResult(doc: SheetDoc, start: State, extras: StateExtras
 		const v = limits[k];
 		if (v === undefined) continue;
 		const d = g(v);
-		if (d >= -1e-9 * v) limitEvents.push({ limit: k, value: v, leg: null, kind: 'start-beyond', exceeded: d > 1e-9 * v, state: start });
+		if (d >= -1e-9 * v)
+			limitEvents.push({
+				limit: k,
+				value: v,
+				leg: null,
+				kind: 'start-beyond',
+				exceeded: d > 1e-9 * v,
+				state: start
+			});
 	}
 	const warnings: PathResult['warnings'] = [];
-	if (Object.keys(limits).length) warnings.push({ code: 'pressure-equipment-caution', severity: 'caution', message: '' });
+	if (Object.keys(limits).length)
+		warnings.push({ code: 'pressure-equipment-caution', severity: 'caution', message: '' });
 	if (s.system.kind === 'closed' && s.system.mass === undefined && s.system.volume === undefined)
-		warnings.push({ code: 'per-kg-totals', severity: 'info', message: 'No mass or volume is given for this closed system: the totals are for 1 kg.' });
+		warnings.push({
+			code: 'per-kg-totals',
+			severity: 'info',
+			message: 'No mass or volume is given for this closed system: the totals are for 1 kg.'
+		});
 	return {
 		fluid: s.fluid,
-		system: s.system.kind === 'closed' ? { kind: 'closed', mass: m, volume: m * start.v } : { kind: 'flow', massFlow: m },
+		system:
+			s.system.kind === 'closed'
+				? { kind: 'closed', mass: m, volume: m * start.v }
+				: { kind: 'flow', massFlow: m },
 		atmosphericPressure: doc.units.atmosphere,
 		limits,
 		states: [{ id: 'S1', state: start, extras }],
@@ -227,7 +288,12 @@ export function startOnlyResult(doc: SheetDoc, start: State, extras: StateExtras
 export function labelIds(message: string, legs: readonly { id: string }[]): string {
 	if (legs.length === 0) return message;
 	const label = new Map(legs.map((l, i) => [l.id, legLabel(i)]));
-	const ids = [...label.keys()].sort((a, b) => b.length - a.length).map((id) => id.replace(/[.*+?^${}()|[\]\\]/g, '\\$&'));
+	const ids = [...label.keys()]
+		.sort((a, b) => b.length - a.length)
+		.map((id) => id.replace(/[.*+?^${}()|[\]\\]/g, '\\$&'));
 	// one pass, so an id that looks like another leg's label is never replaced twice
-	return message.replace(new RegExp(`(?<![\\w.-])(?:${ids.join('|')})(?![\\w-])`, 'g'), (m) => label.get(m) ?? m);
+	return message.replace(
+		new RegExp(`(?<![\\w.-])(?:${ids.join('|')})(?![\\w-])`, 'g'),
+		(m) => label.get(m) ?? m
+	);
 }

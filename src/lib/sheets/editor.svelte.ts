@@ -12,11 +12,28 @@
  */
 import type { AddPointEvent, NudgeEvent, StateDragEvent } from '../charts/chart';
 import { fitDomain } from '../charts/scales';
-import type { ChartCoords, ChartKind, ChartSelection, CurvePoint, DesignLimits as ChartLimits, Isoline, MeasuredTrace, SaturationCurve } from '../charts/types';
+import type {
+	ChartCoords,
+	ChartKind,
+	ChartSelection,
+	CurvePoint,
+	DesignLimits as ChartLimits,
+	Isoline,
+	MeasuredTrace,
+	SaturationCurve
+} from '../charts/types';
 import type { FluidInfo, Inputs, PathResult, Process, State, TargetName } from '../thermo/types';
 import type { UnitPrefs } from '../units/prefs';
 import { Autosave, readLocalCopy, type AutosaveState, type KeyValueStore } from './autosave';
-import { ApiError, getIsolines, getSaturation, getSheetDraft, OfflineError, postPath, putDraft } from './client';
+import {
+	ApiError,
+	getIsolines,
+	getSaturation,
+	getSheetDraft,
+	OfflineError,
+	postPath,
+	putDraft
+} from './client';
 import { createCoalescer, type Coalescer } from './coalescer';
 import {
 	cloneDoc,
@@ -37,7 +54,14 @@ import {
 } from './doc';
 import { History } from './history';
 import { isobarValues, isothermValues } from './isolines';
-import { defaultTargetKind, projectOntoLeg, targetFor, valueOf, type FixFn, type ScreenMetric } from './targets';
+import {
+	defaultTargetKind,
+	projectOntoLeg,
+	targetFor,
+	valueOf,
+	type FixFn,
+	type ScreenMetric
+} from './targets';
 import type { ChartPrefs, SheetDoc, SheetLegSpec, SheetStatus, TitleBlockFields } from './types';
 import { fillStart, type FillSpec } from './fill';
 import { readAcrossSaturation, type SaturationReading } from './saturation-input';
@@ -94,7 +118,9 @@ interface Candidate {
 
 /** A leg marked "to saturation" whose target was changed since (typed, dragged) is an ordinary leg again. */
 function keepSaturationMarks(doc: SheetDoc): SheetDoc {
-	const stale = (l: SheetLegSpec) => l.to === 'saturation' && !(Object.keys(l.target).length === 1 && (l.target.x === 0 || l.target.x === 1));
+	const stale = (l: SheetLegSpec) =>
+		l.to === 'saturation' &&
+		!(Object.keys(l.target).length === 1 && (l.target.x === 0 || l.target.x === 1));
 	if (!doc.spec.legs.some(stale)) return doc;
 	const next = cloneDoc(doc);
 	for (const l of next.spec.legs) if (stale(l)) delete l.to;
@@ -102,7 +128,8 @@ function keepSaturationMarks(doc: SheetDoc): SheetDoc {
 }
 
 function messageOf(e: unknown, legs: readonly { id: string }[]): string {
-	if (e instanceof OfflineError) return 'No connection to the server: the path cannot be computed right now, so the edit was not applied.';
+	if (e instanceof OfflineError)
+		return 'No connection to the server: the path cannot be computed right now, so the edit was not applied.';
 	if (e instanceof ApiError) return labelIds(e.message, legs);
 	if (e instanceof Error) return labelIds(e.message, legs);
 	return String(e);
@@ -131,7 +158,10 @@ export class SheetEditor {
 	fluid = $state.raw<FluidInfo>(null as unknown as FluidInfo);
 	saturation = $state.raw<SaturationCurve | null>(null);
 	isolines = $state.raw<{ tv: Isoline[]; pv: Isoline[] }>({ tv: [], pv: [] });
-	limitCurves = $state.raw<{ isobars: Isoline[]; isotherms: Isoline[] }>({ isobars: [], isotherms: [] });
+	limitCurves = $state.raw<{ isobars: Isoline[]; isotherms: Isoline[] }>({
+		isobars: [],
+		isotherms: []
+	});
 
 	selection = $state<ChartSelection | null>(null);
 	mode = $state<'select' | 'add-leg'>('select');
@@ -143,13 +173,24 @@ export class SheetEditor {
 	notice = $state<{ text: string; kind: 'ok' | 'info' | 'caution' } | null>(null);
 	dragging = $state(false);
 
-	save = $state<AutosaveState>({ status: 'saved', version: 1, savedAt: null, message: null, conflict: null });
+	save = $state<AutosaveState>({
+		status: 'saved',
+		version: 1,
+		savedAt: null,
+		message: null,
+		conflict: null
+	});
 	updatedAt = $state(0);
 	updatedBy = $state('');
 	/** a local copy from an older version than the server's, waiting for the person to decide */
 	recovery = $state.raw<{ doc: SheetDoc; baseVersion: number; changedAt: number } | null>(null);
 	/** theirs, when comparing after a conflict */
-	theirs = $state.raw<{ doc: SheetDoc; version: number; updatedAt: number; updatedBy: string } | null>(null);
+	theirs = $state.raw<{
+		doc: SheetDoc;
+		version: number;
+		updatedAt: number;
+		updatedBy: string;
+	} | null>(null);
 
 	/** drawn over the path on both charts (measured traces, a revision to compare with …) */
 	traces = $state.raw<MeasuredTrace[]>([]);
@@ -179,13 +220,23 @@ export class SheetEditor {
 		this.saturation = init.saturation;
 		this.updatedAt = init.updatedAt;
 		this.updatedBy = init.updatedBy;
-		this.save = { status: 'saved', version: init.version, savedAt: null, message: null, conflict: null };
+		this.save = {
+			status: 'saved',
+			version: init.version,
+			savedAt: null,
+			message: null,
+			conflict: null
+		};
 		if (init.result) {
 			this.view = viewOf(init.doc.spec, init.result);
 			this.committedView = this.view;
 		}
 		this.computeError = init.resultError;
-		if (!init.saturation) this.notice = { kind: 'caution', text: `The engine could not trace the vapor dome of ${init.fluid.name} just now, so the charts are drawn without it. The states and legs are computed as usual.` };
+		if (!init.saturation)
+			this.notice = {
+				kind: 'caution',
+				text: `The engine could not trace the vapor dome of ${init.fluid.name} just now, so the charts are drawn without it. The states and legs are computed as usual.`
+			};
 		this.#history = new History(init.doc, { limit: 200, same: sameDoc });
 		this.#coalescer = createCoalescer<Candidate, { view: PathView; candidate: Candidate }>(
 			async (c) => ({ view: await this.#compute(c.doc, DRAG_SAMPLES), candidate: c }),
@@ -199,7 +250,10 @@ export class SheetEditor {
 				},
 				error: (e) => {
 					if (!this.#drag) return;
-					this.#note(`Not there: ${messageOf(e, this.#drag.base.spec.legs)} The last valid path stays drawn.`, 'caution');
+					this.#note(
+						`Not there: ${messageOf(e, this.#drag.base.spec.legs)} The last valid path stays drawn.`,
+						'caution'
+					);
 				}
 			}
 		);
@@ -255,7 +309,11 @@ export class SheetEditor {
 
 	async #replay(doc: SheetDoc) {
 		const r = await this.commit(doc);
-		if (r.ok) this.notice = { kind: 'info', text: 'Restored edits kept in this browser that had not reached the server; saving them now.' };
+		if (r.ok)
+			this.notice = {
+				kind: 'info',
+				text: 'Restored edits kept in this browser that had not reached the server; saving them now.'
+			};
 		else this.recovery = { doc, baseVersion: this.save.version, changedAt: Date.now() };
 	}
 
@@ -266,10 +324,19 @@ export class SheetEditor {
 		if (doc.spec.legs.length === 0) {
 			const e = await this.loadEngine();
 			const start = e.fixState(doc.spec.fluid, doc.spec.start);
-			return { result: startOnlyResult(doc, start, e.stateExtras(start)), states: [{ id: 'start', label: 'S1', state: start }], legs: [] };
+			return {
+				result: startOnlyResult(doc, start, e.stateExtras(start)),
+				states: [{ id: 'start', label: 'S1', state: start }],
+				legs: []
+			};
 		}
 		const spec = engineSpec(doc);
-		if (samples !== undefined && spec.samples === undefined && spec.legs.every((l) => l.samples === undefined)) spec.samples = samples;
+		if (
+			samples !== undefined &&
+			spec.samples === undefined &&
+			spec.legs.every((l) => l.samples === undefined)
+		)
+			spec.samples = samples;
 		const result = await postPath(spec);
 		return viewOf(doc.spec, result);
 	}
@@ -308,7 +375,8 @@ export class SheetEditor {
 	commit(next: SheetDoc): Promise<Outcome> {
 		next = keepSaturationMarks(next);
 		return this.#serial(async () => {
-			if (!this.canEdit) return { ok: false, message: 'Your role can read this sheet but not edit it.' };
+			if (!this.canEdit)
+				return { ok: false, message: 'Your role can read this sheet but not edit it.' };
 			if (sameDoc(next, this.doc)) return { ok: true };
 			if (sameSpec(next, this.doc) && this.view) {
 				this.#apply(next, this.view);
@@ -341,7 +409,8 @@ export class SheetEditor {
 		const s = this.selection;
 		if (!s) return;
 		const legs = this.doc.spec.legs;
-		if (s.kind === 'leg' ? !legs.some((l) => l.id === s.id) : stateIndex(legs, s.id) < 0) this.selection = null;
+		if (s.kind === 'leg' ? !legs.some((l) => l.id === s.id) : stateIndex(legs, s.id) < 0)
+			this.selection = null;
 	}
 
 	// ---- undo / redo --------------------------------------------------------------------------
@@ -395,7 +464,8 @@ export class SheetEditor {
 		const fix = this.#fix();
 		if (drag.kind === 'state' && drag.key === 'start') {
 			const next = cloneDoc(base);
-			next.spec.start = drag.chart === 'T-v' ? { T: coords.T!, v: coords.v } : { P: coords.P!, v: coords.v };
+			next.spec.start =
+				drag.chart === 'T-v' ? { T: coords.T!, v: coords.v } : { P: coords.P!, v: coords.v };
 			delete next.startSpec;
 			return { doc: next, note: null };
 		}
@@ -406,7 +476,12 @@ export class SheetEditor {
 		let leg: SheetLegSpec;
 		if (drag.kind === 'new-leg') {
 			i = legs.length;
-			leg = { id: drag.key, process: this.addProcess, target: {}, ...(this.addProcess === 'polytropic' ? { n: this.addN } : {}) };
+			leg = {
+				id: drag.key,
+				process: this.addProcess,
+				target: {},
+				...(this.addProcess === 'polytropic' ? { n: this.addN } : {})
+			};
 		} else {
 			i = stateIndex(legs, drag.key) - 1;
 			if (i < 0) return { error: 'That state is no longer on the sheet.' };
@@ -430,7 +505,8 @@ export class SheetEditor {
 		if (!this.canEdit || this.busy) return;
 		const legs = this.doc.spec.legs;
 		const index = stateIndex(legs, e.stateId);
-		const pullNewLeg = this.mode === 'add-leg' && index === legs.length && legs.length < MAX_SHEET_LEGS;
+		const pullNewLeg =
+			this.mode === 'add-leg' && index === legs.length && legs.length < MAX_SHEET_LEGS;
 		const key = pullNewLeg ? newLegId(legs.map((l) => l.id)) : e.stateId;
 		const leg = !pullNewLeg && index > 0 ? legs[index - 1] : null;
 		this.#coalescer.cancel();
@@ -488,7 +564,8 @@ export class SheetEditor {
 	async addLegAt(e: AddPointEvent, chart: ChartKind, metric: ScreenMetric): Promise<Outcome> {
 		if (!this.canEdit) return { ok: false, message: 'Your role cannot edit this sheet.' };
 		const legs = this.doc.spec.legs;
-		if (legs.length >= MAX_SHEET_LEGS) return { ok: false, message: `A sheet holds at most ${MAX_SHEET_LEGS} legs.` };
+		if (legs.length >= MAX_SHEET_LEGS)
+			return { ok: false, message: `A sheet holds at most ${MAX_SHEET_LEGS} legs.` };
 		const fix = this.#fix() ?? (await this.loadEngine(), this.#fix()!);
 		const from = this.view?.states[this.view.states.length - 1]?.state;
 		if (!from) return { ok: false, message: 'The path has to compute before a leg can be added.' };
@@ -503,7 +580,12 @@ export class SheetEditor {
 		const value = valueOf(end, kind);
 		const id = newLegId(legs.map((l) => l.id));
 		const next = cloneDoc(this.doc);
-		next.spec.legs.push({ id, process, target: { [value === null ? 'v' : kind]: value ?? end.v }, ...(n !== undefined ? { n } : {}) });
+		next.spec.legs.push({
+			id,
+			process,
+			target: { [value === null ? 'v' : kind]: value ?? end.v },
+			...(n !== undefined ? { n } : {})
+		});
 		const r = await this.commit(next);
 		if (r.ok) {
 			this.selection = { kind: 'leg', id };
@@ -518,8 +600,15 @@ export class SheetEditor {
 		const legs = this.doc.spec.legs;
 		const index = stateIndex(legs, e.stateId);
 		if (index < 0) return;
-		if (index > 0 && legs[index - 1].process === 'isochoric' && (e.direction === 'left' || e.direction === 'right')) {
-			this.#note('The end of an isochoric leg moves only up and down: its v is fixed by the state before it.', 'info');
+		if (
+			index > 0 &&
+			legs[index - 1].process === 'isochoric' &&
+			(e.direction === 'left' || e.direction === 'right')
+		) {
+			this.#note(
+				'The end of an isochoric leg moves only up and down: its v is fixed by the state before it.',
+				'info'
+			);
 			return;
 		}
 		await this.loadEngine();
@@ -551,7 +640,11 @@ export class SheetEditor {
 		const e = this.engine;
 		if (!e) return null;
 		try {
-			return e.fixState(this.doc.spec.fluid, chart === 'T-v' ? { T: c.T!, v: c.v } : { P: c.P!, v: c.v }, { near: this.view?.states[0]?.state });
+			return e.fixState(
+				this.doc.spec.fluid,
+				chart === 'T-v' ? { T: c.T!, v: c.v } : { P: c.P!, v: c.v },
+				{ near: this.view?.states[0]?.state }
+			);
 		} catch {
 			return null;
 		}
@@ -567,7 +660,8 @@ export class SheetEditor {
 		const next = cloneDoc(this.doc);
 		const start: Record<string, number> = {};
 		// rho is shown and typed as v
-		for (const [k, v] of Object.entries(next.spec.start)) if (v !== undefined) start[k === 'rho' ? 'v' : k] = k === 'rho' ? 1 / v : v;
+		for (const [k, v] of Object.entries(next.spec.start))
+			if (v !== undefined) start[k === 'rho' ? 'v' : k] = k === 'rho' ? 1 / v : v;
 		const [older, newer] = Object.keys(start);
 		const keep = prop === newer ? older : newer;
 		next.spec.start = { [keep]: start[keep], [prop]: si };
@@ -581,13 +675,21 @@ export class SheetEditor {
 	 * dragging S1 afterwards replaces it with two properties again.
 	 */
 	async setStartFill(fill: FillSpec): Promise<Outcome> {
-		if (this.doc.spec.system.kind !== 'closed') return { ok: false, message: 'A start by fill level is for a closed system (a vessel); set the system to closed first.' };
+		if (this.doc.spec.system.kind !== 'closed')
+			return {
+				ok: false,
+				message:
+					'A start by fill level is for a closed system (a vessel); set the system to closed first.'
+			};
 		const e = await this.loadEngine();
 		const next = cloneDoc(this.doc);
 		try {
 			next.spec.start = fillStart(e, next.spec.fluid, fill);
 		} catch (err) {
-			return { ok: false, message: `No fill level there: ${messageOf(err, [])} Give a temperature or pressure between the triple point and the critical point.` };
+			return {
+				ok: false,
+				message: `No fill level there: ${messageOf(err, [])} Give a temperature or pressure between the triple point and the critical point.`
+			};
 		}
 		next.startSpec = { ...fill };
 		return this.commit(next);
@@ -602,10 +704,15 @@ export class SheetEditor {
 	/** Replace the start pair at once (the table's "fixed by" picker). */
 	setStartPair(a: EditableProp, b: EditableProp): Promise<Outcome> {
 		const s = this.view?.states[0]?.state;
-		if (!s || a === b) return Promise.resolve({ ok: false, message: 'Pick two different properties.' });
+		if (!s || a === b)
+			return Promise.resolve({ ok: false, message: 'Pick two different properties.' });
 		const va = valueOf(s, a);
 		const vb = valueOf(s, b);
-		if (va === null || vb === null) return Promise.resolve({ ok: false, message: 'S1 has no quality outside the vapor dome; pick other properties.' });
+		if (va === null || vb === null)
+			return Promise.resolve({
+				ok: false,
+				message: 'S1 has no quality outside the vapor dome; pick other properties.'
+			});
 		const next = cloneDoc(this.doc);
 		next.spec.start = { [a]: va, [b]: vb };
 		delete next.startSpec;
@@ -633,9 +740,16 @@ export class SheetEditor {
 	setTarget(index: number, prop: EditableProp, si: number): Promise<Outcome> {
 		const leg = this.doc.spec.legs[index];
 		if (!leg) return Promise.resolve({ ok: false, message: 'That leg is no longer on the sheet.' });
-		if (INVARIANT[leg.process] === prop) return Promise.resolve({ ok: false, message: `An ${leg.process} leg keeps ${prop} constant; type another property of this state.` });
+		if (INVARIANT[leg.process] === prop)
+			return Promise.resolve({
+				ok: false,
+				message: `An ${leg.process} leg keeps ${prop} constant; type another property of this state.`
+			});
 		const next = cloneDoc(this.doc);
-		next.spec.legs[index] = { ...leg, target: { [prop]: si } as Partial<Record<TargetName, number>> };
+		next.spec.legs[index] = {
+			...leg,
+			target: { [prop]: si } as Partial<Record<TargetName, number>>
+		};
 		delete next.spec.legs[index].to;
 		return this.commit(next);
 	}
@@ -647,7 +761,14 @@ export class SheetEditor {
 		const end = this.view?.states[index + 1]?.state;
 		const [kind, value] = targetOf(leg.target);
 		let target: Partial<Record<TargetName, number>> = { [kind]: value };
-		if (INVARIANT[process] === kind && end) target = targetFor(process, end, kind, 'T-v', process === 'polytropic' ? this.addN : undefined).target;
+		if (INVARIANT[process] === kind && end)
+			target = targetFor(
+				process,
+				end,
+				kind,
+				'T-v',
+				process === 'polytropic' ? this.addN : undefined
+			).target;
 		else if (INVARIANT[process] === kind) target = { T: value };
 		const next = cloneDoc(this.doc);
 		const changed: SheetLegSpec = { id: leg.id, process, target };
@@ -658,8 +779,13 @@ export class SheetEditor {
 
 	setN(index: number, n: number): Promise<Outcome> {
 		const leg = this.doc.spec.legs[index];
-		if (!leg || leg.process !== 'polytropic') return Promise.resolve({ ok: false, message: 'Only a polytropic leg has n.' });
-		if (!Number.isFinite(n) || Math.abs(n) > 50) return Promise.resolve({ ok: false, message: 'n must be a number from −50 to 50, e.g. 1.3.' });
+		if (!leg || leg.process !== 'polytropic')
+			return Promise.resolve({ ok: false, message: 'Only a polytropic leg has n.' });
+		if (!Number.isFinite(n) || Math.abs(n) > 50)
+			return Promise.resolve({
+				ok: false,
+				message: 'n must be a number from −50 to 50, e.g. 1.3.'
+			});
 		const next = cloneDoc(this.doc);
 		next.spec.legs[index] = { ...leg, n };
 		return this.commit(next);
@@ -692,8 +818,13 @@ export class SheetEditor {
 		const s = this.selection;
 		if (!s) return Promise.resolve({ ok: false, message: 'Select a leg first.' });
 		const legs = this.doc.spec.legs;
-		const index = s.kind === 'leg' ? legs.findIndex((l) => l.id === s.id) : stateIndex(legs, s.id) - 1;
-		if (index < 0) return Promise.resolve({ ok: false, message: 'The first state cannot be deleted; change it instead.' });
+		const index =
+			s.kind === 'leg' ? legs.findIndex((l) => l.id === s.id) : stateIndex(legs, s.id) - 1;
+		if (index < 0)
+			return Promise.resolve({
+				ok: false,
+				message: 'The first state cannot be deleted; change it instead.'
+			});
 		return this.deleteLeg(index);
 	}
 
@@ -707,7 +838,9 @@ export class SheetEditor {
 
 	setLimits(limits: NonNullable<SheetDoc['spec']['limits']>): Promise<Outcome> {
 		const next = cloneDoc(this.doc);
-		const clean = Object.fromEntries(Object.entries(limits).filter(([, v]) => typeof v === 'number' && Number.isFinite(v)));
+		const clean = Object.fromEntries(
+			Object.entries(limits).filter(([, v]) => typeof v === 'number' && Number.isFinite(v))
+		);
 		if (Object.keys(clean).length) next.spec.limits = clean;
 		else delete next.spec.limits;
 		return this.commit(next);
@@ -759,7 +892,10 @@ export class SheetEditor {
 			try {
 				next.spec.start = fillStart(await this.loadEngine(), id, next.startSpec);
 			} catch (err) {
-				return { ok: false, message: `The fill level cannot be kept for ${info.name}: ${messageOf(err, [])} Change the start state first.` };
+				return {
+					ok: false,
+					message: `The fill level cannot be kept for ${info.name}: ${messageOf(err, [])} Change the start state first.`
+				};
 			}
 		}
 		let sat: SaturationCurve;
@@ -772,7 +908,11 @@ export class SheetEditor {
 		if (r.ok) {
 			this.fluid = info;
 			this.saturation = sat;
-		} else return { ok: false, message: `The path cannot be computed for ${info.name}: ${r.message} Change the start state or the targets first.` };
+		} else
+			return {
+				ok: false,
+				message: `The path cannot be computed for ${info.name}: ${r.message} Change the start state or the targets first.`
+			};
 		return r;
 	}
 
@@ -782,7 +922,12 @@ export class SheetEditor {
 	async fetchTheirs(): Promise<Outcome> {
 		try {
 			const s = await getSheetDraft(this.team, this.sheetId);
-			this.theirs = { doc: s.doc, version: s.version, updatedAt: s.updatedAt, updatedBy: s.updatedBy };
+			this.theirs = {
+				doc: s.doc,
+				version: s.version,
+				updatedAt: s.updatedAt,
+				updatedBy: s.updatedBy
+			};
 			return { ok: true };
 		} catch (e) {
 			return { ok: false, message: messageOf(e, []) };
@@ -829,7 +974,10 @@ export class SheetEditor {
 		const r = await this.commit(rec.doc);
 		if (r.ok) {
 			this.recovery = null;
-			this.notice = { kind: 'info', text: 'Restored the copy from this browser; it replaces the saved draft.' };
+			this.notice = {
+				kind: 'info',
+				text: 'Restored the copy from this browser; it replaces the saved draft.'
+			};
 		}
 		return r;
 	}
@@ -850,26 +998,40 @@ export class SheetEditor {
 		const maxP = Math.max(f.critical.P, ...states.map((s) => s.state.P));
 		const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.state.P));
 		const maxT = Math.max(f.critical.T, ...states.map((s) => s.state.T));
-		const isobars = doc.chart.isolines ? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units) : [];
-		const isotherms = doc.chart.isolines ? isothermValues({ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) }, doc.units) : [];
+		const isobars = doc.chart.isolines
+			? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units)
+			: [];
+		const isotherms = doc.chart.isolines
+			? isothermValues({ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) }, doc.units)
+			: [];
 		const key = JSON.stringify([f.id, isobars, isotherms]);
 		if (key !== this.#isoKey) {
 			this.#isoKey = key;
 			try {
-				const [tv, pv] = await Promise.all([getIsolines(f.id, 'isobar', isobars), getIsolines(f.id, 'isotherm', isotherms)]);
+				const [tv, pv] = await Promise.all([
+					getIsolines(f.id, 'isobar', isobars),
+					getIsolines(f.id, 'isotherm', isotherms)
+				]);
 				if (this.#isoKey === key) this.isolines = { tv, pv };
 			} catch {
 				this.#isoKey = '';
 			}
 		}
 		const lim = doc.spec.limits ?? {};
-		const pLimits = [lim.designPressure, lim.reliefSetPressure].filter((v): v is number => typeof v === 'number' && v <= f.limits.Pmax);
-		const tLimits = [lim.designTemperature, lim.minimumTemperature].filter((v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax);
+		const pLimits = [lim.designPressure, lim.reliefSetPressure].filter(
+			(v): v is number => typeof v === 'number' && v <= f.limits.Pmax
+		);
+		const tLimits = [lim.designTemperature, lim.minimumTemperature].filter(
+			(v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax
+		);
 		const lkey = JSON.stringify([f.id, pLimits, tLimits]);
 		if (lkey !== this.#limitKey) {
 			this.#limitKey = lkey;
 			try {
-				const [isobars, isotherms] = await Promise.all([getIsolines(f.id, 'isobar', pLimits), getIsolines(f.id, 'isotherm', tLimits)]);
+				const [isobars, isotherms] = await Promise.all([
+					getIsolines(f.id, 'isobar', pLimits),
+					getIsolines(f.id, 'isotherm', tLimits)
+				]);
 				if (this.#limitKey === lkey) this.limitCurves = { isobars, isotherms };
 			} catch {
 				this.#limitKey = '';
@@ -880,12 +1042,29 @@ export class SheetEditor {
 	/** Design limits for the chart, with the curves a limit needs on the other diagram. */
 	chartLimits(): ChartLimits {
 		const lim = this.doc.spec.limits ?? {};
-		const curve = (list: Isoline[], value: number | undefined): CurvePoint[] | undefined => list.find((l) => Math.abs(l.value / (value ?? NaN) - 1) < 1e-9)?.points;
+		const curve = (list: Isoline[], value: number | undefined): CurvePoint[] | undefined =>
+			list.find((l) => Math.abs(l.value / (value ?? NaN) - 1) < 1e-9)?.points;
 		const out: ChartLimits = {};
-		if (lim.designPressure !== undefined) out.designPressure = { value: lim.designPressure, points: curve(this.limitCurves.isobars, lim.designPressure) };
-		if (lim.reliefSetPressure !== undefined) out.reliefSetPressure = { value: lim.reliefSetPressure, points: curve(this.limitCurves.isobars, lim.reliefSetPressure) };
-		if (lim.designTemperature !== undefined) out.designTemperature = { value: lim.designTemperature, points: curve(this.limitCurves.isotherms, lim.designTemperature) };
-		if (lim.minimumTemperature !== undefined) out.minimumTemperature = { value: lim.minimumTemperature, points: curve(this.limitCurves.isotherms, lim.minimumTemperature) };
+		if (lim.designPressure !== undefined)
+			out.designPressure = {
+				value: lim.designPressure,
+				points: curve(this.limitCurves.isobars, lim.designPressure)
+			};
+		if (lim.reliefSetPressure !== undefined)
+			out.reliefSetPressure = {
+				value: lim.reliefSetPressure,
+				points: curve(this.limitCurves.isobars, lim.reliefSetPressure)
+			};
+		if (lim.designTemperature !== undefined)
+			out.designTemperature = {
+				value: lim.designTemperature,
+				points: curve(this.limitCurves.isotherms, lim.designTemperature)
+			};
+		if (lim.minimumTemperature !== undefined)
+			out.minimumTemperature = {
+				value: lim.minimumTemperature,
+				points: curve(this.limitCurves.isotherms, lim.minimumTemperature)
+			};
 		return out;
 	}
 
@@ -899,7 +1078,13 @@ export class SheetEditor {
 			legs: v?.legs ?? [],
 			limits: this.chartLimits()
 		});
-		return { kind, pressureScale: this.doc.chart.pressureScale, ySpan: d.y, vSpan: d.x, aspect: Math.max(0.3, (width - 84) / Math.max(60, height - 90)) };
+		return {
+			kind,
+			pressureScale: this.doc.chart.pressureScale,
+			ySpan: d.y,
+			vSpan: d.x,
+			aspect: Math.max(0.3, (width - 84) / Math.max(60, height - 90))
+		};
 	}
 
 	/** Anchor key of the state at a position (for the table and notes). */

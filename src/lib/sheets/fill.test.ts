@@ -34,10 +34,20 @@ describe('start by fill level', () => {
 
 	it('ends are saturated liquid and vapor; nonsense is refused with a reason', () => {
 		// IAPWS R6-95(2018), Table 8, T = 450 K
-		expect(fillStart(engine, 'water', { kind: 'fill', fraction: 1, T: 450 }).v * 890.34125).toBeCloseTo(1, 8);
-		expect(fillStart(engine, 'water', { kind: 'fill', fraction: 0, T: 450 }).v * 4.8120036).toBeCloseTo(1, 8);
-		expect(() => fillStart(engine, 'water', { kind: 'fill', fraction: 1.2, T: 450 })).toThrow(/0 to 100 %/);
-		expect(() => fillStart(engine, 'water', { kind: 'fill', fraction: 0.5 })).toThrow(/temperature or at a pressure/);
-		expect(() => fillStart(engine, 'water', { kind: 'fill', fraction: 0.5, T: 700 })).toThrow(engine.ThermoError);
+		expect(
+			fillStart(engine, 'water', { kind: 'fill', fraction: 1, T: 450 }).v * 890.34125
+		).toBeCloseTo(1, 8);
+		expect(
+			fillStart(engine, 'water', { kind: 'fill', fraction: 0, T: 450 }).v * 4.8120036
+		).toBeCloseTo(1, 8);
+		expect(() => fillStart(engine, 'water', { kind: 'fill', fraction: 1.2, T: 450 })).toThrow(
+			/0 to 100 %/
+		);
+		expect(() => fillStart(engine, 'water', { kind: 'fill', fraction: 0.5 })).toThrow(
+			/temperature or at a pressure/
+		);
+		expect(() => fillStart(engine, 'water', { kind: 'fill', fraction: 0.5, T: 700 })).toThrow(
+			engine.ThermoError
+		);
 	});
 });

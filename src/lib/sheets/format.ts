@@ -2,7 +2,15 @@
  * Numbers of the state and leg table in the sheet's display units, with significant figures an
  * engineer expects: temperatures to 0.01, quality to 4 decimals, everything else 5 significant.
  */
-import { chooseUnit, displayUnit, formatQuantity, type Formatted, type Quantity, type UnitDef, type UnitPrefs } from '../units';
+import {
+	chooseUnit,
+	displayUnit,
+	formatQuantity,
+	type Formatted,
+	type Quantity,
+	type UnitDef,
+	type UnitPrefs
+} from '../units';
 import type { Phase, State } from '../thermo/types';
 import type { EditableProp } from './doc';
 
@@ -104,12 +112,16 @@ export function precisionNotes(precision: State['precision']): string[] {
 	if (!precision) return [];
 	return (['T', 'P', 'v'] as const)
 		.filter((k) => precision[k] > PRECISION_SHOWN)
-		.map((k) => `${k} uncertain by ±${Number((precision[k] * 100).toPrecision(2))} % (the given pair barely fixes it)`);
+		.map(
+			(k) =>
+				`${k} uncertain by ±${Number((precision[k] * 100).toPrecision(2))} % (the given pair barely fixes it)`
+		);
 }
 
 /** A value with its unit, trailing zeros trimmed ("0.5 m³", "12 kg", "0.04 kg/s"): for prose, not for tables. */
 export function compactQuantity(si: number, q: Quantity, prefs: UnitPrefs): string {
 	const f = formatQuantity(si, q, prefs, { sig: 4 });
-	const text = f.text.includes('×') || !f.text.includes('.') ? f.text : f.text.replace(/\.?0+$/, '');
+	const text =
+		f.text.includes('×') || !f.text.includes('.') ? f.text : f.text.replace(/\.?0+$/, '');
 	return f.unit.label ? `${text}\u00a0${f.unit.label}` : text;
 }

@@ -18,20 +18,37 @@ describe('isoline values', () => {
 	it('isobars are round in the display unit (kPa a, bar a, psia), returned in Pa absolute', () => {
 		const si = isobarValues({ min: 1000, max: 3e7 }, unitPrefs({ pressureUnit: 'kPa' }));
 		expect(si.length).toBeGreaterThan(3);
-		for (const p of si) expect(Math.log10(p / 1000) % 1 === 0 || [2, 5, 3].some((m) => Math.abs((p / 1000) / (m * 10 ** Math.floor(Math.log10(p / 1000))) - 1) < 1e-9)).toBe(true);
+		for (const p of si)
+			expect(
+				Math.log10(p / 1000) % 1 === 0 ||
+					[2, 5, 3].some(
+						(m) => Math.abs(p / 1000 / (m * 10 ** Math.floor(Math.log10(p / 1000))) - 1) < 1e-9
+					)
+			).toBe(true);
 		// psi is 6894.757 Pa (NIST SP 811, App. B.8): a 100 psia isobar
 		const us = isobarValues({ min: 5e4, max: 2e6 }, unitPrefs({ system: 'us' }));
 		expect(us.some((p) => Math.abs(p - 100 * 6894.757293168) < 1e-3)).toBe(true);
 		// a gauge sheet gets round gauge readings (1, 2, 5, 10 bar g: the label is what the gauge shows), none below atmospheric
-		const g = isobarValues({ min: 5e4, max: 2e6 }, unitPrefs({ pressureUnit: 'bar', pressureReference: 'gauge', atmosphere: 95_000 }));
-		expect(g.map((p) => Math.round((p - 95_000) / 1e3) / 100)).toEqual([0.1, 0.2, 0.5, 1, 2, 5, 10, 20]);
+		const g = isobarValues(
+			{ min: 5e4, max: 2e6 },
+			unitPrefs({ pressureUnit: 'bar', pressureReference: 'gauge', atmosphere: 95_000 })
+		);
+		expect(g.map((p) => Math.round((p - 95_000) / 1e3) / 100)).toEqual([
+			0.1, 0.2, 0.5, 1, 2, 5, 10, 20
+		]);
 	});
 
 	it('isotherms are round °C or °F, returned in K', () => {
 		const c = isothermValues({ min: 273.16, max: 647.1 }, unitPrefs());
-		expect(c.map((k) => Math.round((k - 273.15) * 1e6) / 1e6).every((t) => t % 50 === 0)).toBe(true);
+		expect(c.map((k) => Math.round((k - 273.15) * 1e6) / 1e6).every((t) => t % 50 === 0)).toBe(
+			true
+		);
 		const f = isothermValues({ min: 273.16, max: 647.1 }, unitPrefs({ system: 'us' }));
-		expect(f.map((k) => Math.round((k * 1.8 - 459.67) * 1e6) / 1e6).every((t) => t % 50 === 0 || t % 100 === 0)).toBe(true);
+		expect(
+			f
+				.map((k) => Math.round((k * 1.8 - 459.67) * 1e6) / 1e6)
+				.every((t) => t % 50 === 0 || t % 100 === 0)
+		).toBe(true);
 		expect(c.length).toBeLessThanOrEqual(7);
 	});
 

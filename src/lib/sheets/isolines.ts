@@ -64,10 +64,14 @@ export function isobarValues(span: Span, prefs: UnitPrefs): number[] {
 	const gauge = prefs.pressureReference === 'gauge';
 	const unit = displayUnit('pressure', prefs, { magnitude: span.max });
 	const atm = prefs.atmosphere;
-	const lo = gauge ? Math.max(unit.fromSI(Math.max(span.min, atm), atm), unit.fromSI(atm * 1.01, atm)) : unit.fromSI(span.min, atm);
+	const lo = gauge
+		? Math.max(unit.fromSI(Math.max(span.min, atm), atm), unit.fromSI(atm * 1.01, atm))
+		: unit.fromSI(span.min, atm);
 	const hi = unit.fromSI(span.max, atm) * 1.5;
 	// gauge readings far below the top are all "about atmospheric": start 2.5 decades down
-	return logRoundValues(gauge ? Math.max(lo, hi / 300) : lo * 1.05, hi).map((d) => exactSI(d, unit, atm));
+	return logRoundValues(gauge ? Math.max(lo, hi / 300) : lo * 1.05, hi).map((d) =>
+		exactSI(d, unit, atm)
+	);
 }
 
 /**
@@ -94,5 +98,7 @@ export function isothermValues(span: Span, prefs: UnitPrefs): number[] {
 	const lo = unit.fromSI(span.min, prefs.atmosphere);
 	const hi = unit.fromSI(span.max, prefs.atmosphere);
 	const pad = (hi - lo) * 0.05;
-	return linearRoundValues(lo + pad, hi + pad * 3, 7).map((d) => exactSI(d, unit, prefs.atmosphere));
+	return linearRoundValues(lo + pad, hi + pad * 3, 7).map((d) =>
+		exactSI(d, unit, prefs.atmosphere)
+	);
 }

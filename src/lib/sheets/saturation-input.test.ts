@@ -3,7 +3,12 @@ import * as engine from '$lib/thermo';
 import { DEFAULT_UNIT_PREFS } from '$lib/units';
 import { readAcrossSaturation } from './saturation-input';
 
-const si = { ...DEFAULT_UNIT_PREFS, system: 'si' as const, pressureUnit: 'kPa' as const, pressureReference: 'absolute' as const };
+const si = {
+	...DEFAULT_UNIT_PREFS,
+	system: 'si' as const,
+	pressureUnit: 'kPa' as const,
+	pressureReference: 'absolute' as const
+};
 
 describe('a temperature typed as a pressure (and back) means saturation', () => {
 	it('40 °C in a P cell is the saturation pressure of water at 40 °C, and says so', () => {
@@ -12,7 +17,9 @@ describe('a temperature typed as a pressure (and back) means saturation', () => 
 		if (!r || !r.ok) return;
 		// python3-iapws 1.5.2 (Debian): IAPWS95(T=313.15, x=0).P = 0.007384938 MPa
 		expect(Math.abs(r.si / 7384.938 - 1)).toBeLessThan(1e-5);
-		expect(r.note).toMatch(/^40\.00\u00a0°C typed as a pressure: the saturation pressure at 40\.00\u00a0°C, 7\.38\d*\u00a0kPa a\.$/);
+		expect(r.note).toMatch(
+			/^40\.00\u00a0°C typed as a pressure: the saturation pressure at 40\.00\u00a0°C, 7\.38\d*\u00a0kPa a\.$/
+		);
 	});
 
 	it('1 bar a in a T cell is the saturation temperature at 1 bar', () => {
@@ -32,7 +39,9 @@ describe('a temperature typed as a pressure (and back) means saturation', () => 
 
 	it('no saturation above the critical point: a reason, not a number; other text is not its business', () => {
 		const r = readAcrossSaturation(engine, 'water', 'P', '400 °C', si);
-		expect(r && !r.ok && r.message).toMatch(/400 °C is a temperature; read as "saturation pressure at 400 °C" there is none/);
+		expect(r && !r.ok && r.message).toMatch(
+			/400 °C is a temperature; read as "saturation pressure at 400 °C" there is none/
+		);
 		expect(readAcrossSaturation(engine, 'water', 'P', '3 kJ/kg', si)).toBeNull();
 		expect(readAcrossSaturation(engine, 'water', 'T', '40 °C', si)).toBeNull();
 	});

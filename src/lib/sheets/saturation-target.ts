@@ -17,13 +17,25 @@ export interface LegEngine {
 
 export type SaturationTarget = { ok: true; x: 0 | 1; leg: Leg } | { ok: false; message: string };
 
-export function saturationTarget(engine: LegEngine, fluid: string, start: State, process: Process, n?: number): SaturationTarget {
+export function saturationTarget(
+	engine: LegEngine,
+	fluid: string,
+	start: State,
+	process: Process,
+	n?: number
+): SaturationTarget {
 	const tried: { x: 0 | 1; leg: Leg }[] = [];
 	const reasons: string[] = [];
 	for (const x of [0, 1] as const) {
 		if (start.x === x) continue; // already on that line
 		try {
-			const leg = engine.computeLeg({ fluid, start: { T: start.T, v: start.v }, process, target: { x }, ...(n !== undefined ? { n } : {}) });
+			const leg = engine.computeLeg({
+				fluid,
+				start: { T: start.T, v: start.v },
+				process,
+				target: { x },
+				...(n !== undefined ? { n } : {})
+			});
 			tried.push({ x, leg });
 		} catch (e) {
 			reasons.push((e as Error).message);
@@ -31,9 +43,21 @@ export function saturationTarget(engine: LegEngine, fluid: string, start: State,
 	}
 	const line = (x: 0 | 1) => (x === 0 ? 'saturated-liquid' : 'saturated-vapor');
 	// a leg that meets the other line before its end reaches that line first
-	const first = tried.filter((c) => !c.leg.crossings.some((k) => k.line === line(c.x === 0 ? 1 : 0) && !sameState(k.state, c.leg.end) && !sameState(k.state, c.leg.start)));
+	const first = tried.filter(
+		(c) =>
+			!c.leg.crossings.some(
+				(k) =>
+					k.line === line(c.x === 0 ? 1 : 0) &&
+					!sameState(k.state, c.leg.end) &&
+					!sameState(k.state, c.leg.start)
+			)
+	);
 	const pool = first.length ? first : tried;
-	if (pool.length === 0) return { ok: false, message: `This ${process} leg never reaches the saturation line from its start${reasons.length ? ` (${reasons[0]})` : ''}. Give it another target.` };
+	if (pool.length === 0)
+		return {
+			ok: false,
+			message: `This ${process} leg never reaches the saturation line from its start${reasons.length ? ` (${reasons[0]})` : ''}. Give it another target.`
+		};
 	if (pool.length === 1) return { ok: true, ...pool[0] };
 	const heating = pool.filter((c) => c.leg.q > 0);
 	if (heating.length === 1) return { ok: true, ...heating[0] };

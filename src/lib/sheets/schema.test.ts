@@ -44,23 +44,81 @@ describe('sheet document validation', () => {
 			f(d);
 			return d;
 		};
-		expectRefused(mutate((d) => (d.spec.start = { T: 300 })), /exactly two properties/);
-		expectRefused(mutate((d) => (d.spec.start = { v: 1, rho: 1 })), /same property/);
-		expectRefused(mutate((d) => (d.spec.start = { T: -3, x: 0.5 })), /T must be above zero/);
-		expectRefused(mutate((d) => (d.spec.start = { T: 300, x: 1.5 })), /quality\) must be from 0 to 1/);
-		expectRefused(mutate((d) => (d.spec.fluid = 'unobtainium')), /must be one of water/);
-		expectRefused(mutate((d) => (d.spec.legs[0].target = { v: 0.1 })), /isochoric leg keeps v constant/);
-		expectRefused(mutate((d) => (d.spec.legs[0].target = { T: 400, P: 1e5 })), /exactly one target/);
-		expectRefused(mutate((d) => delete d.spec.legs[1].n), /needs n/);
-		expectRefused(mutate((d) => (d.spec.legs[0].n = 1.2)), /polytropic legs only/);
-		expectRefused(mutate((d) => (d.spec.legs[1].id = 'Laaaaaa')), /Two legs have the id/);
-		expectRefused(mutate((d) => (d.spec.legs[1].id = 'start')), /names the first state/);
-		expectRefused(mutate((d) => (d.spec.legs[1].id = 'bad id!')), /leg id is 1 to 40/);
-		expectRefused(mutate((d) => (d.spec.system = { kind: 'closed', mass: 1, volume: 1 })), /mass or its volume, not both/);
-		expectRefused(mutate((d) => (d.units.atmosphere = 5_000)), /20 to 120 kPa/);
-		expectRefused(mutate((d) => (d.titleBlock.tag = 'x'.repeat(61))), /Tag must be at most 60/);
-		expectRefused(mutate((d) => (d.extra = 1)), /Unrecognized key|unrecognized|sheet document/i);
-		expectRefused(mutate((d) => (d.spec.legs = Array.from({ length: 51 }, (_, i) => ({ id: `L${i}x`, process: 'isobaric' as const, target: { T: 400 } })))), /at most 50 legs/);
+		expectRefused(
+			mutate((d) => (d.spec.start = { T: 300 })),
+			/exactly two properties/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.start = { v: 1, rho: 1 })),
+			/same property/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.start = { T: -3, x: 0.5 })),
+			/T must be above zero/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.start = { T: 300, x: 1.5 })),
+			/quality\) must be from 0 to 1/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.fluid = 'unobtainium')),
+			/must be one of water/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.legs[0].target = { v: 0.1 })),
+			/isochoric leg keeps v constant/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.legs[0].target = { T: 400, P: 1e5 })),
+			/exactly one target/
+		);
+		expectRefused(
+			mutate((d) => delete d.spec.legs[1].n),
+			/needs n/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.legs[0].n = 1.2)),
+			/polytropic legs only/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.legs[1].id = 'Laaaaaa')),
+			/Two legs have the id/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.legs[1].id = 'start')),
+			/names the first state/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.legs[1].id = 'bad id!')),
+			/leg id is 1 to 40/
+		);
+		expectRefused(
+			mutate((d) => (d.spec.system = { kind: 'closed', mass: 1, volume: 1 })),
+			/mass or its volume, not both/
+		);
+		expectRefused(
+			mutate((d) => (d.units.atmosphere = 5_000)),
+			/20 to 120 kPa/
+		);
+		expectRefused(
+			mutate((d) => (d.titleBlock.tag = 'x'.repeat(61))),
+			/Tag must be at most 60/
+		);
+		expectRefused(
+			mutate((d) => (d.extra = 1)),
+			/Unrecognized key|unrecognized|sheet document/i
+		);
+		expectRefused(
+			mutate(
+				(d) =>
+					(d.spec.legs = Array.from({ length: 51 }, (_, i) => ({
+						id: `L${i}x`,
+						process: 'isobaric' as const,
+						target: { T: 400 }
+					})))
+			),
+			/at most 50 legs/
+		);
 		expectRefused('a string', /JSON object/);
 	});
 
@@ -76,7 +134,10 @@ describe('migrating older documents', () => {
 			fluid: 'water',
 			system: { kind: 'closed', volume: 0.5 },
 			start: { T: 393.15, x: 0.0001 },
-			legs: [{ id: 'fire-heating', process: 'isochoric', target: { T: 493.15 } }, { process: 'isochoric', target: { T: 500 } }],
+			legs: [
+				{ id: 'fire-heating', process: 'isochoric', target: { T: 493.15 } },
+				{ process: 'isochoric', target: { T: 500 } }
+			],
 			limits: { designPressure: 1.6e6 },
 			atmosphericPressure: 90_000
 		});
@@ -101,7 +162,13 @@ describe('migrating older documents', () => {
 		const r = parseSheetDoc(old);
 		expect(r.ok).toBe(true);
 		if (!r.ok) return;
-		expect(r.doc.titleBlock).toEqual({ project: '', equipment: '', tag: 'V-1', documentNumber: '', site: '' });
+		expect(r.doc.titleBlock).toEqual({
+			project: '',
+			equipment: '',
+			tag: 'V-1',
+			documentNumber: '',
+			site: ''
+		});
 		expect(r.doc.units.atmosphere).toBe(95_000);
 		const ids = r.doc.spec.legs.map((l) => l.id);
 		expect(ids[0]).toBe('Laaaaaa');
@@ -109,7 +176,10 @@ describe('migrating older documents', () => {
 	});
 
 	it('an unversioned document that is still wrong is refused, not guessed', () => {
-		expectRefused({ fluid: 'water', system: { kind: 'closed' }, start: { T: 300 }, legs: [] }, /exactly two properties/);
+		expectRefused(
+			{ fluid: 'water', system: { kind: 'closed' }, start: { T: 300 }, legs: [] },
+			/exactly two properties/
+		);
 	});
 });
 
@@ -123,7 +193,9 @@ describe('start by fill level in the document', () => {
 		expect(r.doc.startSpec).toEqual({ kind: 'fill', fraction: 0.8, T: 450 });
 		// IAPWS R6-95(2018), Table 8, T = 450 K: ρ′ = 890.341250, ρ″ = 4.81200360 kg/m³
 		expect(r.doc.spec.start.T).toBe(450);
-		expect(Math.abs(r.doc.spec.start.v! * (0.8 * 890.34125 + 0.2 * 4.8120036) - 1)).toBeLessThan(1e-8);
+		expect(Math.abs(r.doc.spec.start.v! * (0.8 * 890.34125 + 0.2 * 4.8120036) - 1)).toBeLessThan(
+			1e-8
+		);
 		expect(Object.keys(r.doc.spec.start).sort()).toEqual(['T', 'v']);
 		// and it round-trips unchanged
 		const again = parseSheetDoc(JSON.parse(JSON.stringify(r.doc)));
@@ -132,10 +204,29 @@ describe('start by fill level in the document', () => {
 
 	it('refuses a fill that cannot be: out of 0…1, both T and P, above the critical point, a flow device', () => {
 		const base = doc();
-		expectRefused({ ...base, startSpec: { kind: 'fill', fraction: 80, T: 300 } }, /from 0 \(all vapor\) to 1/);
-		expectRefused({ ...base, startSpec: { kind: 'fill', fraction: 0.8, T: 300, P: 1e5 } }, /one of them, not both/);
-		expectRefused({ ...base, startSpec: { kind: 'fill', fraction: 0.8, T: 700 } }, /No fill level there: .*critical/);
-		expectRefused({ ...base, startSpec: { kind: 'level', fraction: 0.8, T: 300 } }, /kind must be "fill"/);
-		expectRefused({ ...base, spec: { ...base.spec, system: { kind: 'flow', massFlow: 1 } }, startSpec: { kind: 'fill', fraction: 0.8, T: 300 } }, /closed system/);
+		expectRefused(
+			{ ...base, startSpec: { kind: 'fill', fraction: 80, T: 300 } },
+			/from 0 \(all vapor\) to 1/
+		);
+		expectRefused(
+			{ ...base, startSpec: { kind: 'fill', fraction: 0.8, T: 300, P: 1e5 } },
+			/one of them, not both/
+		);
+		expectRefused(
+			{ ...base, startSpec: { kind: 'fill', fraction: 0.8, T: 700 } },
+			/No fill level there: .*critical/
+		);
+		expectRefused(
+			{ ...base, startSpec: { kind: 'level', fraction: 0.8, T: 300 } },
+			/kind must be "fill"/
+		);
+		expectRefused(
+			{
+				...base,
+				spec: { ...base.spec, system: { kind: 'flow', massFlow: 1 } },
+				startSpec: { kind: 'fill', fraction: 0.8, T: 300 }
+			},
+			/closed system/
+		);
 	});
 });

@@ -19,22 +19,51 @@ import * as engine from '../thermo';
 import { PROCESSES, ThermoError, fluids } from '../thermo';
 import { fillStart } from './fill';
 import { DEFAULT_UNIT_PREFS } from '../units/prefs';
-import { DEFAULT_CHART, EMPTY_TITLE_BLOCK, INVARIANT, LEG_ID_PATTERN, MAX_SHEET_LEGS, START, newLegId } from './doc';
+import {
+	DEFAULT_CHART,
+	EMPTY_TITLE_BLOCK,
+	INVARIANT,
+	LEG_ID_PATTERN,
+	MAX_SHEET_LEGS,
+	START,
+	newLegId
+} from './doc';
 import { SHEET_DOC_VERSION, type SheetDoc } from './types';
 import { cleanText, plainText, type TextKind } from '../plain-text';
 
 const INPUT_NAMES = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'] as const;
-const UNIT: Record<(typeof INPUT_NAMES)[number], string> = { T: 'K', P: 'Pa (absolute)', v: 'm³/kg', rho: 'kg/m³', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)', x: '0…1' };
+const UNIT: Record<(typeof INPUT_NAMES)[number], string> = {
+	T: 'K',
+	P: 'Pa (absolute)',
+	v: 'm³/kg',
+	rho: 'kg/m³',
+	u: 'J/kg',
+	h: 'J/kg',
+	s: 'J/(kg·K)',
+	x: '0…1'
+};
 
 const finite = (name: string, unit: string) =>
-	z.number({ error: (iss) => (iss.input === undefined ? `${name} is required (a number in ${unit}).` : `${name} must be a number in ${unit}.`) }).refine(Number.isFinite, {
-		message: `${name} must be a finite number in ${unit}.`
-	});
-const positive = (name: string, unit: string) => finite(name, unit).refine((v) => v > 0, { message: `${name} must be above zero (${unit}).` });
+	z
+		.number({
+			error: (iss) =>
+				iss.input === undefined
+					? `${name} is required (a number in ${unit}).`
+					: `${name} must be a number in ${unit}.`
+		})
+		.refine(Number.isFinite, {
+			message: `${name} must be a finite number in ${unit}.`
+		});
+const positive = (name: string, unit: string) =>
+	finite(name, unit).refine((v) => v > 0, { message: `${name} must be above zero (${unit}).` });
 
 function property(name: (typeof INPUT_NAMES)[number]) {
-	if (name === 'x') return finite('x', UNIT.x).refine((v) => v >= 0 && v <= 1, { message: 'x (quality) must be from 0 to 1.' });
-	if (name === 'T' || name === 'P' || name === 'v' || name === 'rho') return positive(name, UNIT[name]);
+	if (name === 'x')
+		return finite('x', UNIT.x).refine((v) => v >= 0 && v <= 1, {
+			message: 'x (quality) must be from 0 to 1.'
+		});
+	if (name === 'T' || name === 'P' || name === 'v' || name === 'rho')
+		return positive(name, UNIT[name]);
 	return finite(name, UNIT[name]);
 }
 
@@ -42,51 +71,112 @@ const propertyShape = Object.fromEntries(INPUT_NAMES.map((k) => [k, property(k).
 
 const present = (o: Record<string, unknown>) => Object.keys(o).filter((k) => o[k] !== undefined);
 
-const inputsSchema = z.strictObject(propertyShape, { error: 'The start state must be an object of two properties, e.g. { "T": 373.15, "x": 0.5 }.' }).superRefine((o, ctx) => {
-	const keys = present(o);
-	if (keys.includes('v') && keys.includes('rho')) ctx.addIssue({ code: 'custom', message: 'v and rho are the same property; fix the start state with one of them and another property.' });
-	else if (keys.length !== 2) ctx.addIssue({ code: 'custom', message: `The start state needs exactly two properties (of T, P, v, rho, u, h, s, x); got ${keys.length ? keys.join(', ') : 'none'}.` });
-});
+const inputsSchema = z
+	.strictObject(propertyShape, {
+		error: 'The start state must be an object of two properties, e.g. { "T": 373.15, "x": 0.5 }.'
+	})
+	.superRefine((o, ctx) => {
+		const keys = present(o);
+		if (keys.includes('v') && keys.includes('rho'))
+			ctx.addIssue({
+				code: 'custom',
+				message:
+					'v and rho are the same property; fix the start state with one of them and another property.'
+			});
+		else if (keys.length !== 2)
+			ctx.addIssue({
+				code: 'custom',
+				message: `The start state needs exactly two properties (of T, P, v, rho, u, h, s, x); got ${keys.length ? keys.join(', ') : 'none'}.`
+			});
+	});
 
-const targetSchema = z.strictObject(propertyShape, { error: 'A leg target must be an object of one property, e.g. { "T": 450 }.' }).superRefine((o, ctx) => {
-	const keys = present(o);
-	if (keys.length !== 1) ctx.addIssue({ code: 'custom', message: `A leg ends on exactly one target property; got ${keys.length ? keys.join(' and ') : 'none'}.` });
-});
+const targetSchema = z
+	.strictObject(propertyShape, {
+		error: 'A leg target must be an object of one property, e.g. { "T": 450 }.'
+	})
+	.superRefine((o, ctx) => {
+		const keys = present(o);
+		if (keys.length !== 1)
+			ctx.addIssue({
+				code: 'custom',
+				message: `A leg ends on exactly one target property; got ${keys.length ? keys.join(' and ') : 'none'}.`
+			});
+	});
 
 const legSchema = z
 	.strictObject(
 		{
 			id: z
 				.string({ error: 'Every leg needs an id (text).' })
-				.regex(LEG_ID_PATTERN, { error: 'A leg id is 1 to 40 letters, digits, "_", "." or "-", starting with a letter or digit.' })
-				.refine((id) => id !== START, { message: `"${START}" names the first state; give the leg another id.` }),
-			process: z.enum(PROCESSES as unknown as [string, ...string[]], { error: `process must be one of ${PROCESSES.join(', ')}.` }),
+				.regex(LEG_ID_PATTERN, {
+					error:
+						'A leg id is 1 to 40 letters, digits, "_", "." or "-", starting with a letter or digit.'
+				})
+				.refine((id) => id !== START, {
+					message: `"${START}" names the first state; give the leg another id.`
+				}),
+			process: z.enum(PROCESSES as unknown as [string, ...string[]], {
+				error: `process must be one of ${PROCESSES.join(', ')}.`
+			}),
 			target: targetSchema,
 			n: finite('n', 'dimensionless')
 				.refine((n) => Math.abs(n) <= 50, { message: 'n must be from −50 to 50.' })
 				.optional(),
 			samples: z.number().int().min(20).max(1000).optional(),
-			to: z.literal('saturation', { error: 'A leg\'s "to" can only be "saturation" (ending on the saturation line, with target x 0 or 1).' }).optional()
+			to: z
+				.literal('saturation', {
+					error:
+						'A leg\'s "to" can only be "saturation" (ending on the saturation line, with target x 0 or 1).'
+				})
+				.optional()
 		},
 		{ error: 'A leg must be an object { id, process, target, n?, to? }.' }
 	)
 	.superRefine((l, ctx) => {
-		if (l.process === 'polytropic' && l.n === undefined) ctx.addIssue({ code: 'custom', path: ['n'], message: 'A polytropic leg needs n (P·vⁿ = const), e.g. 1.3.' });
-		if (l.process !== 'polytropic' && l.n !== undefined) ctx.addIssue({ code: 'custom', path: ['n'], message: `n belongs to polytropic legs only; remove it from this ${l.process} leg.` });
+		if (l.process === 'polytropic' && l.n === undefined)
+			ctx.addIssue({
+				code: 'custom',
+				path: ['n'],
+				message: 'A polytropic leg needs n (P·vⁿ = const), e.g. 1.3.'
+			});
+		if (l.process !== 'polytropic' && l.n !== undefined)
+			ctx.addIssue({
+				code: 'custom',
+				path: ['n'],
+				message: `n belongs to polytropic legs only; remove it from this ${l.process} leg.`
+			});
 		const inv = INVARIANT[l.process as keyof typeof INVARIANT];
 		const keys = present(l.target);
-		if (l.to === 'saturation' && !(keys.length === 1 && keys[0] === 'x' && (l.target.x === 0 || l.target.x === 1)))
-			ctx.addIssue({ code: 'custom', path: ['target'], message: 'A leg "to saturation" ends on the saturated-liquid (x = 0) or saturated-vapor line (x = 1): give target { "x": 0 } or { "x": 1 }.' });
+		if (
+			l.to === 'saturation' &&
+			!(keys.length === 1 && keys[0] === 'x' && (l.target.x === 0 || l.target.x === 1))
+		)
+			ctx.addIssue({
+				code: 'custom',
+				path: ['target'],
+				message:
+					'A leg "to saturation" ends on the saturated-liquid (x = 0) or saturated-vapor line (x = 1): give target { "x": 0 } or { "x": 1 }.'
+			});
 		if (inv && (keys.includes(inv) || (inv === 'v' && keys.includes('rho'))))
-			ctx.addIssue({ code: 'custom', path: ['target'], message: `An ${l.process} leg keeps ${inv} constant, so it cannot end on ${inv}; give another target property.` });
+			ctx.addIssue({
+				code: 'custom',
+				path: ['target'],
+				message: `An ${l.process} leg keeps ${inv} constant, so it cannot end on ${inv}; give another target property.`
+			});
 	});
 
 const systemSchema = z.discriminatedUnion(
 	'kind',
 	[
 		z
-			.strictObject({ kind: z.literal('closed'), mass: positive('system.mass', 'kg').optional(), volume: positive('system.volume', 'm³').optional() })
-			.refine((s) => !(s.mass !== undefined && s.volume !== undefined), { message: 'Give the closed system’s mass or its volume, not both.' }),
+			.strictObject({
+				kind: z.literal('closed'),
+				mass: positive('system.mass', 'kg').optional(),
+				volume: positive('system.volume', 'm³').optional()
+			})
+			.refine((s) => !(s.mass !== undefined && s.volume !== undefined), {
+				message: 'Give the closed system’s mass or its volume, not both.'
+			}),
 		z.strictObject({ kind: z.literal('flow'), massFlow: positive('system.massFlow', 'kg/s') })
 	],
 	{ error: 'system must be { kind: "closed", mass? or volume? } or { kind: "flow", massFlow }.' }
@@ -99,7 +189,10 @@ const limitsSchema = z.strictObject(
 		reliefSetPressure: positive('limits.reliefSetPressure', 'Pa, absolute').optional(),
 		minimumTemperature: positive('limits.minimumTemperature', 'K').optional()
 	},
-	{ error: 'limits must be an object of designPressure, designTemperature, reliefSetPressure, minimumTemperature (Pa absolute, K).' }
+	{
+		error:
+			'limits must be an object of designPressure, designTemperature, reliefSetPressure, minimumTemperature (Pa absolute, K).'
+	}
 );
 
 /** Atmospheric pressure a site can have: 20 kPa (far above any plant) to 120 kPa (below sea level, weather). */
@@ -108,17 +201,29 @@ export const ATMOSPHERE_RANGE = { min: 20_000, max: 120_000 } as const;
 const unitsSchema = z.strictObject(
 	{
 		system: z.enum(['si', 'us'], { error: 'units.system must be "si" or "us".' }),
-		pressureUnit: z.enum(['kPa', 'MPa', 'bar', 'auto'], { error: 'units.pressureUnit must be kPa, MPa, bar or auto.' }),
-		pressureReference: z.enum(['absolute', 'gauge'], { error: 'units.pressureReference must be "absolute" or "gauge".' }),
+		pressureUnit: z.enum(['kPa', 'MPa', 'bar', 'auto'], {
+			error: 'units.pressureUnit must be kPa, MPa, bar or auto.'
+		}),
+		pressureReference: z.enum(['absolute', 'gauge'], {
+			error: 'units.pressureReference must be "absolute" or "gauge".'
+		}),
 		usPower: z.enum(['Btu/h', 'hp'], { error: 'units.usPower must be "Btu/h" or "hp".' }),
-		atmosphere: positive('units.atmosphere', 'Pa, absolute').refine((p) => p >= ATMOSPHERE_RANGE.min && p <= ATMOSPHERE_RANGE.max, {
-			message: 'The site’s atmospheric pressure must be from 20 to 120 kPa a (101.325 kPa a at sea level).'
-		})
+		atmosphere: positive('units.atmosphere', 'Pa, absolute').refine(
+			(p) => p >= ATMOSPHERE_RANGE.min && p <= ATMOSPHERE_RANGE.max,
+			{
+				message:
+					'The site’s atmospheric pressure must be from 20 to 120 kPa a (101.325 kPa a at sea level).'
+			}
+		)
 	},
-	{ error: 'units must be an object { system, pressureUnit, pressureReference, usPower, atmosphere }.' }
+	{
+		error:
+			'units must be an object { system, pressureUnit, pressureReference, usPower, atmosphere }.'
+	}
 );
 
-const text = (name: string, max: number, kind: TextKind = 'line') => plainText(name, kind).max(max, { error: `${name} must be at most ${max} characters.` });
+const text = (name: string, max: number, kind: TextKind = 'line') =>
+	plainText(name, kind).max(max, { error: `${name} must be at most ${max} characters.` });
 
 const titleBlockSchema = z.strictObject(
 	{
@@ -135,7 +240,9 @@ const fluidIds = () => fluids.map((f) => f.id);
 
 const fluidSchema = z
 	.string({ error: 'spec.fluid must be a fluid id such as "water".' })
-	.refine((f) => fluidIds().includes(f), { message: `spec.fluid must be one of ${fluidIds().join(', ')}.` });
+	.refine((f) => fluidIds().includes(f), {
+		message: `spec.fluid must be one of ${fluidIds().join(', ')}.`
+	});
 
 const specSchema = z
 	.strictObject(
@@ -155,7 +262,12 @@ const specSchema = z
 	.superRefine((s, ctx) => {
 		const seen = new Set<string>();
 		s.legs.forEach((l, i) => {
-			if (seen.has(l.id)) ctx.addIssue({ code: 'custom', path: ['legs', i, 'id'], message: `Two legs have the id "${l.id}"; every leg needs its own.` });
+			if (seen.has(l.id))
+				ctx.addIssue({
+					code: 'custom',
+					path: ['legs', i, 'id'],
+					message: `Two legs have the id "${l.id}"; every leg needs its own.`
+				});
 			seen.add(l.id);
 		});
 	});
@@ -163,16 +275,26 @@ const specSchema = z
 const startSpecSchema = z
 	.strictObject(
 		{
-			kind: z.literal('fill', { error: 'startSpec.kind must be "fill" (a liquid volume fraction at a temperature or pressure).' }),
-			fraction: finite('startSpec.fraction', '0…1, liquid volume / vessel volume').refine((f) => f >= 0 && f <= 1, {
-				message: 'startSpec.fraction is the liquid volume fraction, from 0 (all vapor) to 1 (all liquid), e.g. 0.8 for 80 % full.'
+			kind: z.literal('fill', {
+				error:
+					'startSpec.kind must be "fill" (a liquid volume fraction at a temperature or pressure).'
 			}),
+			fraction: finite('startSpec.fraction', '0…1, liquid volume / vessel volume').refine(
+				(f) => f >= 0 && f <= 1,
+				{
+					message:
+						'startSpec.fraction is the liquid volume fraction, from 0 (all vapor) to 1 (all liquid), e.g. 0.8 for 80 % full.'
+				}
+			),
 			T: positive('startSpec.T', 'K').optional(),
 			P: positive('startSpec.P', 'Pa (absolute)').optional()
 		},
 		{ error: 'startSpec must be an object { kind: "fill", fraction, T or P }.' }
 	)
-	.refine((f) => (f.T === undefined) !== (f.P === undefined), { message: 'startSpec gives the fill at a temperature T or at a pressure P: one of them, not both.' });
+	.refine((f) => (f.T === undefined) !== (f.P === undefined), {
+		message:
+			'startSpec gives the fill at a temperature T or at a pressure P: one of them, not both.'
+	});
 
 export const sheetDocSchema = z
 	.strictObject(
@@ -184,24 +306,41 @@ export const sheetDocSchema = z
 			units: unitsSchema,
 			chart: z.strictObject(
 				{
-					view: z.enum(['T-v', 'P-v', 'both'], { error: 'chart.view must be "T-v", "P-v" or "both".' }),
-					pressureScale: z.enum(['log', 'linear'], { error: 'chart.pressureScale must be "log" or "linear".' }),
+					view: z.enum(['T-v', 'P-v', 'both'], {
+						error: 'chart.view must be "T-v", "P-v" or "both".'
+					}),
+					pressureScale: z.enum(['log', 'linear'], {
+						error: 'chart.pressureScale must be "log" or "linear".'
+					}),
 					isolines: z.boolean({ error: 'chart.isolines must be true or false.' })
 				},
 				{ error: 'chart must be an object { view, pressureScale, isolines }.' }
 			),
 			titleBlock: titleBlockSchema
 		},
-		{ error: 'A sheet document must be an object { version, description, spec, units, chart, titleBlock }.' }
+		{
+			error:
+				'A sheet document must be an object { version, description, spec, units, chart, titleBlock }.'
+		}
 	)
 	.superRefine((d, ctx) => {
 		if (!d.startSpec) return;
-		if (d.spec.system.kind !== 'closed') ctx.addIssue({ code: 'custom', path: ['startSpec'], message: 'A start by fill level is for a closed system (a vessel); a steady-flow device starts from two properties.' });
+		if (d.spec.system.kind !== 'closed')
+			ctx.addIssue({
+				code: 'custom',
+				path: ['startSpec'],
+				message:
+					'A start by fill level is for a closed system (a vessel); a steady-flow device starts from two properties.'
+			});
 		try {
 			fillStart(engine, d.spec.fluid, d.startSpec);
 		} catch (e) {
 			if (!(e instanceof ThermoError || e instanceof RangeError)) throw e;
-			ctx.addIssue({ code: 'custom', path: ['startSpec'], message: `No fill level there: ${e.message} Give a temperature or pressure between the triple point and the critical point.` });
+			ctx.addIssue({
+				code: 'custom',
+				path: ['startSpec'],
+				message: `No fill level there: ${e.message} Give a temperature or pressure between the triple point and the critical point.`
+			});
 		}
 	})
 	// the spec carries the sheet's atmosphere for the engine; the units are its one source. A fill
@@ -217,7 +356,9 @@ export interface DocIssue {
 	message: string;
 }
 
-export type ParsedDoc = { ok: true; doc: SheetDoc; migratedFrom: number | null } | { ok: false; message: string; issues: DocIssue[] };
+export type ParsedDoc =
+	| { ok: true; doc: SheetDoc; migratedFrom: number | null }
+	| { ok: false; message: string; issues: DocIssue[] };
 
 function isObject(v: unknown): v is Record<string, unknown> {
 	return typeof v === 'object' && v !== null && !Array.isArray(v);
@@ -225,14 +366,30 @@ function isObject(v: unknown): v is Record<string, unknown> {
 
 /** An unversioned document (or a bare PathSpec) in the version-1 shape, defaults filled in. */
 function fromUnversioned(raw: Record<string, unknown>): unknown {
-	const spec: Record<string, unknown> = isObject(raw.spec) ? { ...raw.spec } : Object.fromEntries(['fluid', 'system', 'start', 'legs', 'limits', 'atmosphericPressure', 'samples'].filter((k) => k in raw).map((k) => [k, raw[k]]));
-	const units = { ...DEFAULT_UNIT_PREFS, ...(isObject(raw.units) ? raw.units : {}) } as Record<string, unknown>;
-	if (!isObject(raw.units) && typeof spec.atmosphericPressure === 'number') units.atmosphere = spec.atmosphericPressure;
+	const spec: Record<string, unknown> = isObject(raw.spec)
+		? { ...raw.spec }
+		: Object.fromEntries(
+				['fluid', 'system', 'start', 'legs', 'limits', 'atmosphericPressure', 'samples']
+					.filter((k) => k in raw)
+					.map((k) => [k, raw[k]])
+			);
+	const units = { ...DEFAULT_UNIT_PREFS, ...(isObject(raw.units) ? raw.units : {}) } as Record<
+		string,
+		unknown
+	>;
+	if (!isObject(raw.units) && typeof spec.atmosphericPressure === 'number')
+		units.atmosphere = spec.atmosphericPressure;
 	if (Array.isArray(spec.legs)) {
 		const taken = new Set<string>();
 		spec.legs = spec.legs.map((leg) => {
 			if (!isObject(leg)) return leg;
-			let id = typeof leg.id === 'string' && LEG_ID_PATTERN.test(leg.id) && leg.id !== START && !taken.has(leg.id) ? leg.id : null;
+			let id =
+				typeof leg.id === 'string' &&
+				LEG_ID_PATTERN.test(leg.id) &&
+				leg.id !== START &&
+				!taken.has(leg.id)
+					? leg.id
+					: null;
 			id ??= newLegId(taken);
 			taken.add(id);
 			return { ...leg, id };
@@ -253,7 +410,13 @@ function cleanStored(doc: unknown): unknown {
 	if (!isObject(doc)) return doc;
 	const out: Record<string, unknown> = { ...doc };
 	if (typeof out.description === 'string') out.description = cleanText(out.description, 'lines');
-	if (isObject(out.titleBlock)) out.titleBlock = Object.fromEntries(Object.entries(out.titleBlock).map(([k, v]) => [k, typeof v === 'string' ? cleanText(v, 'line') : v]));
+	if (isObject(out.titleBlock))
+		out.titleBlock = Object.fromEntries(
+			Object.entries(out.titleBlock).map(([k, v]) => [
+				k,
+				typeof v === 'string' ? cleanText(v, 'line') : v
+			])
+		);
 	return out;
 }
 
@@ -261,8 +424,16 @@ function cleanStored(doc: unknown): unknown {
  * Validate a sent document (`stored: false`, the default: control characters refused) or a stored
  * one (`stored: true`), migrating older shapes first (see the module comment).
  */
-export function parseSheetDoc(raw: unknown, { stored = false }: { stored?: boolean } = {}): ParsedDoc {
-	if (!isObject(raw)) return { ok: false, message: 'A sheet document must be a JSON object.', issues: [{ path: '', message: 'A sheet document must be a JSON object.' }] };
+export function parseSheetDoc(
+	raw: unknown,
+	{ stored = false }: { stored?: boolean } = {}
+): ParsedDoc {
+	if (!isObject(raw))
+		return {
+			ok: false,
+			message: 'A sheet document must be a JSON object.',
+			issues: [{ path: '', message: 'A sheet document must be a JSON object.' }]
+		};
 	let input: unknown = raw;
 	let migratedFrom: number | null = null;
 	if (raw.version === undefined) {
@@ -277,9 +448,17 @@ export function parseSheetDoc(raw: unknown, { stored = false }: { stored?: boole
 	}
 	const r = sheetDocSchema.safeParse(stored ? cleanStored(input) : input);
 	if (!r.success) {
-		const issues = r.error.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
+		const issues = r.error.issues.map((i) => ({
+			path: i.path.map(String).join('.'),
+			message: i.message
+		}));
 		const first = issues[0];
-		const message = issues.length === 1 ? (first.path ? `${first.path}: ${first.message}` : first.message) : `${issues.length} problems in the sheet document; the first: ${first.path ? `${first.path}: ` : ''}${first.message}`;
+		const message =
+			issues.length === 1
+				? first.path
+					? `${first.path}: ${first.message}`
+					: first.message
+				: `${issues.length} problems in the sheet document; the first: ${first.path ? `${first.path}: ` : ''}${first.message}`;
 		return { ok: false, message, issues };
 	}
 	return { ok: true, doc: r.data as SheetDoc, migratedFrom };

@@ -1,18 +1,39 @@
 import { describe, expect, it } from 'vitest';
 import { fixState } from '$lib/thermo';
 import type { Inputs, State } from '$lib/thermo/types';
-import { defaultTargetKind, projectOntoLeg, stateAtV, targetFor, type ScreenMetric } from './targets';
+import {
+	defaultTargetKind,
+	projectOntoLeg,
+	stateAtV,
+	targetFor,
+	type ScreenMetric
+} from './targets';
 import reference from '../../../tests/reference/iapws-sketcher.json';
 
 const fix = (inputs: Inputs) => fixState('water', inputs);
-const TV: ScreenMetric = { kind: 'T-v', pressureScale: 'log', ySpan: [263, 673], vSpan: [5e-4, 200], aspect: 1.8 };
-const PV: ScreenMetric = { kind: 'P-v', pressureScale: 'log', ySpan: [500, 3e7], vSpan: [5e-4, 200], aspect: 1.8 };
+const TV: ScreenMetric = {
+	kind: 'T-v',
+	pressureScale: 'log',
+	ySpan: [263, 673],
+	vSpan: [5e-4, 200],
+	aspect: 1.8
+};
+const PV: ScreenMetric = {
+	kind: 'P-v',
+	pressureScale: 'log',
+	ySpan: [500, 3e7],
+	vSpan: [5e-4, 200],
+	aspect: 1.8
+};
 
 /** Distance on screen (plot heights), as the projection measures it. */
 function screenDist(m: ScreenMetric, a: { v: number; y: number }, b: { v: number; y: number }) {
 	const lv = Math.log10(m.vSpan[1] / m.vSpan[0]);
 	const dx = (Math.log10(a.v / b.v) / lv) * m.aspect;
-	const dy = m.kind === 'T-v' ? (a.y - b.y) / (m.ySpan[1] - m.ySpan[0]) : Math.log10(a.y / b.y) / Math.log10(m.ySpan[1] / m.ySpan[0]);
+	const dy =
+		m.kind === 'T-v'
+			? (a.y - b.y) / (m.ySpan[1] - m.ySpan[0])
+			: Math.log10(a.y / b.y) / Math.log10(m.ySpan[1] / m.ySpan[0]);
 	return Math.hypot(dx, dy);
 }
 
@@ -26,7 +47,13 @@ describe('projecting the pointer onto a leg’s constraint line', () => {
 		// python3-iapws 1.5.2 (Debian), IAPWS95(T=523.15, rho=2): tests/reference/iapws-sketcher.json
 		expect(onTv.P / reference.isochore.points[3].P - 1).toBeLessThan(2e-6);
 		expect(onTv.phase).toBe('superheated-vapor');
-		const onPv = projectOntoLeg('isochoric', wet, { P: reference.isochore.points[2].P, v: 0.01 }, PV, fix)!;
+		const onPv = projectOntoLeg(
+			'isochoric',
+			wet,
+			{ P: reference.isochore.points[2].P, v: 0.01 },
+			PV,
+			fix
+		)!;
 		expect(onPv.T).toBeCloseTo(473.15, 3);
 	});
 
@@ -69,7 +96,8 @@ describe('projecting the pointer onto a leg’s constraint line', () => {
 			if (process === 'isentropic') expect(s.s).toBeCloseTo(start.s, 4);
 			if (process === 'isenthalpic') expect(s.h).toBeCloseTo(start.h, 3);
 			if (process === 'isothermal') expect(s.T).toBeCloseTo(start.T, 6);
-			if (process === 'polytropic') expect(s.P * s.v ** 1.3).toBeCloseTo(start.P * start.v ** 1.3, 0);
+			if (process === 'polytropic')
+				expect(s.P * s.v ** 1.3).toBeCloseTo(start.P * start.v ** 1.3, 0);
 			expect(s.v).toBeGreaterThan(start.v);
 		}
 		expect(stateAtV('polytropic', start, start.v * 2, fix, 1).P).toBeCloseTo(start.P / 2, 2);
@@ -101,7 +129,10 @@ describe('choosing the target of a leg', () => {
 	});
 
 	it('keeps the wanted kind where it can hold the end', () => {
-		expect(targetFor('isochoric', superheated, 'P', 'T-v')).toEqual({ target: { P: superheated.P }, note: null });
+		expect(targetFor('isochoric', superheated, 'P', 'T-v')).toEqual({
+			target: { P: superheated.P },
+			note: null
+		});
 		expect(targetFor('isobaric', superheated, 'h', 'T-v').target).toEqual({ h: superheated.h });
 		expect(targetFor('isobaric', mixture, 'x', 'T-v').target).toEqual({ x: mixture.x });
 	});

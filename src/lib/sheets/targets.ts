@@ -32,12 +32,20 @@ function screen(m: ScreenMetric, v: number, y: number): [number, number] {
 	const lv = Math.log10(m.vSpan[1] / m.vSpan[0]) || 1;
 	const sx = (Math.log10(v / m.vSpan[0]) / lv) * m.aspect;
 	const logY = m.kind === 'P-v' && m.pressureScale === 'log';
-	const sy = logY ? Math.log10(y / m.ySpan[0]) / (Math.log10(m.ySpan[1] / m.ySpan[0]) || 1) : (y - m.ySpan[0]) / (m.ySpan[1] - m.ySpan[0] || 1);
+	const sy = logY
+		? Math.log10(y / m.ySpan[0]) / (Math.log10(m.ySpan[1] / m.ySpan[0]) || 1)
+		: (y - m.ySpan[0]) / (m.ySpan[1] - m.ySpan[0] || 1);
 	return [sx, sy];
 }
 
 /** The state on the constraint line of `process` through `from` at specific volume `v`. */
-export function stateAtV(process: Exclude<Process, 'isochoric'>, from: State, v: number, fix: FixFn, n?: number): State {
+export function stateAtV(
+	process: Exclude<Process, 'isochoric'>,
+	from: State,
+	v: number,
+	fix: FixFn,
+	n?: number
+): State {
 	switch (process) {
 		case 'isobaric':
 			return fix({ P: from.P, v });
@@ -69,9 +77,19 @@ function tryState(f: () => State): State | null {
  * a window of v around the pointer and refined by golden-section search. Null when the line has
  * no valid state near the pointer.
  */
-export function projectOntoLeg(process: Process, from: State, coords: ChartCoords, metric: ScreenMetric, fix: FixFn, n?: number, hint?: number): State | null {
+export function projectOntoLeg(
+	process: Process,
+	from: State,
+	coords: ChartCoords,
+	metric: ScreenMetric,
+	fix: FixFn,
+	n?: number,
+	hint?: number
+): State | null {
 	if (process === 'isochoric') {
-		return tryState(() => (metric.kind === 'T-v' ? fix({ T: coords.T!, v: from.v }) : fix({ P: coords.P!, v: from.v })));
+		return tryState(() =>
+			metric.kind === 'T-v' ? fix({ T: coords.T!, v: from.v }) : fix({ P: coords.P!, v: from.v })
+		);
 	}
 	const target = screen(metric, coords.v, metric.kind === 'T-v' ? coords.T! : coords.P!);
 	const dist = (s: State) => {
@@ -123,7 +141,9 @@ export function projectOntoLeg(process: Process, from: State, coords: ChartCoord
 			fd = score(d);
 		}
 	}
-	const refined = [fc, fd].filter((x): x is { s: State; d: number } => x !== null).sort((x, y) => x.d - y.d)[0];
+	const refined = [fc, fd]
+		.filter((x): x is { s: State; d: number } => x !== null)
+		.sort((x, y) => x.d - y.d)[0];
 	return refined && refined.d <= best.d ? refined.s : best.s;
 }
 
@@ -137,7 +157,12 @@ function inDome(s: State): boolean {
  * quality where the end lies in the dome (T and P are flat there); isentropic, isenthalpic and
  * polytropic legs on the pressure they compress or expand to (v for a polytropic n = 0).
  */
-export function defaultTargetKind(process: Process, end: State, kind: ChartKind, n?: number): EditableProp {
+export function defaultTargetKind(
+	process: Process,
+	end: State,
+	kind: ChartKind,
+	n?: number
+): EditableProp {
 	switch (process) {
 		case 'isochoric':
 			return kind === 'T-v' ? 'T' : 'P';
@@ -170,17 +195,29 @@ export interface TargetChoice {
  * leg not inside the dome, where it is flat and the leg would stop at the first saturation line.
  * Otherwise the process's default kind at that end, and a note saying so.
  */
-export function targetFor(process: Process, end: State, wanted: EditableProp, kind: ChartKind, n?: number): TargetChoice {
-	const flat = (process === 'isobaric' && wanted === 'T') || (process === 'isothermal' && wanted === 'P');
-	const ok = wanted !== INVARIANT[process] && valueOf(end, wanted) !== null && !(flat && inDome(end));
+export function targetFor(
+	process: Process,
+	end: State,
+	wanted: EditableProp,
+	kind: ChartKind,
+	n?: number
+): TargetChoice {
+	const flat =
+		(process === 'isobaric' && wanted === 'T') || (process === 'isothermal' && wanted === 'P');
+	const ok =
+		wanted !== INVARIANT[process] && valueOf(end, wanted) !== null && !(flat && inDome(end));
 	if (ok) return { target: { [wanted]: valueOf(end, wanted)! }, note: null };
 	let fallback = defaultTargetKind(process, end, kind, n);
-	if (valueOf(end, fallback) === null || fallback === INVARIANT[process]) fallback = process === 'isochoric' ? (kind === 'T-v' ? 'T' : 'P') : 'v';
+	if (valueOf(end, fallback) === null || fallback === INVARIANT[process])
+		fallback = process === 'isochoric' ? (kind === 'T-v' ? 'T' : 'P') : 'v';
 	const why =
 		wanted === 'x'
 			? 'this end lies outside the vapor dome, where there is no quality'
 			: flat
 				? `${wanted} does not change across the dome on an ${process} leg`
 				: `an ${process} leg keeps ${wanted} constant`;
-	return { target: { [fallback]: valueOf(end, fallback)! }, note: `Ends on ${fallback} here: ${why}.` };
+	return {
+		target: { [fallback]: valueOf(end, fallback)! },
+		note: `Ends on ${fallback} here: ${why}.`
+	};
 }

@@ -15,7 +15,13 @@ describe('worked examples tell the story they claim', () => {
 		expect(Math.abs(full!.at!.T - reference.vesselV204.liquidFull.T)).toBeLessThan(0.01);
 		// python3-iapws 1.5.2 (Debian), IAPWS95(T=523.15, rho=800).P
 		expect(Math.abs(r.states[1].state.P / reference.vesselV204.at523_15.P - 1)).toBeLessThan(1e-5);
-		expect(r.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(['pressure-equipment-caution', 'design-pressure-exceeded', 'relief-set-pressure-exceeded']));
+		expect(r.warnings.map((w) => w.code)).toEqual(
+			expect.arrayContaining([
+				'pressure-equipment-caution',
+				'design-pressure-exceeded',
+				'relief-set-pressure-exceeded'
+			])
+		);
 		// charged about 82 % liquid by volume, as its story says
 		expect(r.states[0].extras.liquidVolumeFraction).toBeGreaterThan(0.8);
 		expect(r.states[0].extras.liquidVolumeFraction).toBeLessThan(0.84);

@@ -38,7 +38,8 @@ export const WORKED_EXAMPLES: readonly WorkedExample[] = [
 			'Header steam at 5 bar g condenses in the jacket of a 300 L cooking kettle at constant pressure; the condensate then flashes through the trap into the 0.5 bar g return line.',
 		build: () =>
 			makeDoc({
-				description: 'Jacket side of K-101. Steam supply 5 bar g, dry saturated at the jacket inlet; 0.04 kg/s at full boil-up. Trap discharges to the condensate return at 0.5 bar g.',
+				description:
+					'Jacket side of K-101. Steam supply 5 bar g, dry saturated at the jacket inlet; 0.04 kg/s at full boil-up. Trap discharges to the condensate return at 0.5 bar g.',
 				spec: {
 					fluid: 'water',
 					system: { kind: 'flow', massFlow: 0.04 },
@@ -47,11 +48,21 @@ export const WORKED_EXAMPLES: readonly WorkedExample[] = [
 						{ process: 'isobaric', target: { x: 0 } },
 						{ process: 'isenthalpic', target: { P: 0.5 * bar + atm } }
 					]),
-					limits: { designPressure: 6 * bar + atm, reliefSetPressure: 6 * bar + atm, designTemperature: 443.15 }
+					limits: {
+						designPressure: 6 * bar + atm,
+						reliefSetPressure: 6 * bar + atm,
+						designTemperature: 443.15
+					}
 				},
 				units: { system: 'si', pressureUnit: 'bar', pressureReference: 'gauge' },
 				chart: { view: 'both', pressureScale: 'log', isolines: true },
-				titleBlock: { project: 'Hollin Vale Creamery — batch kitchen', equipment: 'Jacketed steam kettle, 300 L', tag: 'K-101', documentNumber: 'BTW-CALC-0142', site: 'Hollin Vale, north wing' }
+				titleBlock: {
+					project: 'Hollin Vale Creamery — batch kitchen',
+					equipment: 'Jacketed steam kettle, 300 L',
+					tag: 'K-101',
+					documentNumber: 'BTW-CALC-0142',
+					site: 'Hollin Vale, north wing'
+				}
 			})
 	},
 	{
@@ -69,7 +80,11 @@ export const WORKED_EXAMPLES: readonly WorkedExample[] = [
 					system: { kind: 'closed', volume: 0.5 },
 					start: { T: 353.15, v: 0.00125 },
 					legs: legs([{ process: 'isochoric', target: { T: 523.15 } }]),
-					limits: { designPressure: 10 * bar + atm, reliefSetPressure: 10 * bar + atm, designTemperature: 393.15 }
+					limits: {
+						designPressure: 10 * bar + atm,
+						reliefSetPressure: 10 * bar + atm,
+						designTemperature: 393.15
+					}
 				},
 				units: { system: 'si', pressureUnit: 'MPa', pressureReference: 'absolute' },
 				chart: { view: 'both', pressureScale: 'log', isolines: true },
@@ -90,17 +105,29 @@ export const WORKED_EXAMPLES: readonly WorkedExample[] = [
 			'An isolated 2 m³ receiver, 70 % liquid by volume on a 59 °F night, warms to 113 °F in the afternoon sun at constant volume: the saturation pressure climbs toward the design pressure.',
 		build: () =>
 			makeDoc({
-				description: 'R-310 isolated for maintenance of the downstream valve station, with the charge trapped. Checks the pressure reached on the hottest afternoon on record at the site and how close the liquid comes to filling the shell.',
+				description:
+					'R-310 isolated for maintenance of the downstream valve station, with the charge trapped. Checks the pressure reached on the hottest afternoon on record at the site and how close the liquid comes to filling the shell.',
 				spec: {
 					fluid: 'ammonia',
 					system: { kind: 'closed', volume: 2.0 },
 					start: { T: 288.15, v: 0.0023 },
 					legs: legs([{ process: 'isochoric', target: { T: 318.15 } }]),
-					limits: { designPressure: 20 * bar + atm, reliefSetPressure: 20 * bar + atm, designTemperature: 328.15, minimumTemperature: 244.15 }
+					limits: {
+						designPressure: 20 * bar + atm,
+						reliefSetPressure: 20 * bar + atm,
+						designTemperature: 328.15,
+						minimumTemperature: 244.15
+					}
 				},
 				units: { system: 'us', pressureUnit: 'kPa', pressureReference: 'gauge' },
 				chart: { view: 'both', pressureScale: 'log', isolines: true },
-				titleBlock: { project: 'Gorsebank cold store extension', equipment: 'Ammonia liquid receiver', tag: 'R-310', documentNumber: 'BTW-CALC-0163', site: 'Gorsebank, roof plant deck' }
+				titleBlock: {
+					project: 'Gorsebank cold store extension',
+					equipment: 'Ammonia liquid receiver',
+					tag: 'R-310',
+					documentNumber: 'BTW-CALC-0163',
+					site: 'Gorsebank, roof plant deck'
+				}
 			})
 	},
 	{
@@ -111,7 +138,8 @@ export const WORKED_EXAMPLES: readonly WorkedExample[] = [
 			'A water-to-water heat pump recovering heat for the creamery’s wash water: compression, condensing, expansion valve and evaporator as one closed cycle, with its heating COP.',
 		build: () =>
 			makeDoc({
-				description: 'Ideal vapour-compression loop for HP-410 at its rating point: evaporating at 300 kPa a, condensing at 1.4 MPa a, 0.05 kg/s of R-134a. Compression taken as isentropic for a first look.',
+				description:
+					'Ideal vapour-compression loop for HP-410 at its rating point: evaporating at 300 kPa a, condensing at 1.4 MPa a, 0.05 kg/s of R-134a. Compression taken as isentropic for a first look.',
 				spec: {
 					fluid: 'r134a',
 					system: { kind: 'flow', massFlow: 0.05 },
@@ -126,7 +154,13 @@ export const WORKED_EXAMPLES: readonly WorkedExample[] = [
 				},
 				units: { system: 'si', pressureUnit: 'kPa', pressureReference: 'absolute' },
 				chart: { view: 'both', pressureScale: 'log', isolines: true },
-				titleBlock: { project: 'Hollin Vale Creamery — heat recovery', equipment: 'Water-to-water heat pump', tag: 'HP-410', documentNumber: 'BTW-CALC-0171', site: 'Hollin Vale, plant room' }
+				titleBlock: {
+					project: 'Hollin Vale Creamery — heat recovery',
+					equipment: 'Water-to-water heat pump',
+					tag: 'HP-410',
+					documentNumber: 'BTW-CALC-0171',
+					site: 'Hollin Vale, plant room'
+				}
 			})
 	}
 ];

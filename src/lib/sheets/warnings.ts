@@ -6,7 +6,14 @@
  */
 import { CAUTION_TITLE, LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
 import type { ChartSelection } from '../charts/types';
-import type { DesignLimitName, FluidInfo, LimitEvent, PathResult, PathWarning, State } from '../thermo/types';
+import type {
+	DesignLimitName,
+	FluidInfo,
+	LimitEvent,
+	PathResult,
+	PathWarning,
+	State
+} from '../thermo/types';
 import { displayUnit, formatQuantity, unitById, type UnitPrefs } from '../units';
 import { labelIds, legLabel, stateKey, stateLabel } from './doc';
 import type { SheetLegSpec } from './types';
@@ -30,7 +37,9 @@ const LIMIT_LABEL: Record<DesignLimitName, string> = {
 };
 
 function limitValue(ev: LimitEvent, prefs: UnitPrefs): string {
-	return ev.limit.endsWith('Pressure') ? formatQuantity(ev.value, 'pressure', prefs).full : formatQuantity(ev.value, 'temperature', prefs).full;
+	return ev.limit.endsWith('Pressure')
+		? formatQuantity(ev.value, 'pressure', prefs).full
+		: formatQuantity(ev.value, 'temperature', prefs).full;
 }
 
 function at(s: State, prefs: UnitPrefs): string {
@@ -39,17 +48,28 @@ function at(s: State, prefs: UnitPrefs): string {
 
 /** (∂P/∂T)ᵥ (Pa/K) in the sheet's pressure unit per temperature-difference unit, 3 significant figures. */
 export function rateText(paPerK: number, prefs: UnitPrefs): string {
-	const p = displayUnit('pressure', { ...prefs, pressureReference: 'absolute' }, { magnitude: paPerK });
+	const p = displayUnit(
+		'pressure',
+		{ ...prefs, pressureReference: 'absolute' },
+		{ magnitude: paPerK }
+	);
 	const dT = unitById(prefs.system === 'us' ? 'dF' : 'dK');
 	const value = p.fromSI(paPerK, 0) / dT.fromSI(1, 0);
 	const unit = p.label.replace(/ ?a$/, '').replace(/^psia$/, 'psi');
 	return `about ${Number(value.toPrecision(3))} ${unit} per ${dT.label}`;
 }
 
-export function sheetWarnings(result: PathResult, legs: readonly SheetLegSpec[], prefs: UnitPrefs, fluid: FluidInfo | null): SheetWarning[] {
+export function sheetWarnings(
+	result: PathResult,
+	legs: readonly SheetLegSpec[],
+	prefs: UnitPrefs,
+	fluid: FluidInfo | null
+): SheetWarning[] {
 	const out: SheetWarning[] = [];
-	const legIndex = (id: string | undefined | null) => (id ? legs.findIndex((l) => l.id === id) : -1);
-	const legTarget = (id: string | undefined | null): ChartSelection | null => (id && legIndex(id) >= 0 ? { kind: 'leg', id } : null);
+	const legIndex = (id: string | undefined | null) =>
+		id ? legs.findIndex((l) => l.id === id) : -1;
+	const legTarget = (id: string | undefined | null): ChartSelection | null =>
+		id && legIndex(id) >= 0 ? { kind: 'leg', id } : null;
 	const name = (id: string | undefined | null) => {
 		const i = legIndex(id);
 		return i >= 0 ? `${legLabel(i)} (${legs[i].process})` : 'A leg';
@@ -59,11 +79,21 @@ export function sheetWarnings(result: PathResult, legs: readonly SheetLegSpec[],
 		const i = legIndex(w.leg);
 		switch (w.code) {
 			case 'pressure-equipment-caution':
-				out.push({ key: w.code, code: w.code, severity: 'caution', title: CAUTION_TITLE, text: PRESSURE_EQUIPMENT_CAUTION, target: null });
+				out.push({
+					key: w.code,
+					code: w.code,
+					severity: 'caution',
+					title: CAUTION_TITLE,
+					text: PRESSURE_EQUIPMENT_CAUTION,
+					target: null
+				});
 				break;
 			case 'liquid-full': {
 				const where = w.at ? ` at ${at(w.at, prefs)}` : '';
-				const rate = w.dPdT !== undefined && Number.isFinite(w.dPdT) && w.dPdT > 0 ? rateText(w.dPdT, prefs) : null;
+				const rate =
+					w.dPdT !== undefined && Number.isFinite(w.dPdT) && w.dPdT > 0
+						? rateText(w.dPdT, prefs)
+						: null;
 				const what =
 					w.onset === 'start'
 						? `${name(w.leg)} heats a closed system that is liquid-full from the leg’s start (compressed liquid${where}), at constant volume.`
@@ -140,23 +170,37 @@ export function sheetWarnings(result: PathResult, legs: readonly SheetLegSpec[],
 	}
 
 	const rank = { caution: 0, warning: 1, info: 2 } as const;
-	return out.map((w, i) => ({ w, i })).sort((a, b) => rank[a.w.severity] - rank[b.w.severity] || a.i - b.i).map(({ w }) => w);
+	return out
+		.map((w, i) => ({ w, i }))
+		.sort((a, b) => rank[a.w.severity] - rank[b.w.severity] || a.i - b.i)
+		.map(({ w }) => w);
 }
 
 function fromEngine(w: PathWarning, legs: readonly SheetLegSpec[]): SheetWarning {
-	const titles: Record<string, string> = { 'throttling-irreversible': 'Throttling is irreversible', 'per-kg-totals': 'Totals per kilogram' };
+	const titles: Record<string, string> = {
+		'throttling-irreversible': 'Throttling is irreversible',
+		'per-kg-totals': 'Totals per kilogram'
+	};
 	const i = w.leg ? legs.findIndex((l) => l.id === w.leg) : -1;
 	const title = titles[w.code] ?? w.code;
 	// the engine's message may open with the same words as the title ("Leg L3: Throttling is
 	// irreversible: …"); shown under the title they would be said twice
-	const text = labelIds(w.message, legs).replace(/^((?:Leg \S+: )?)(.*?): /, (all, leg: string, head: string) => (head === title ? leg : all));
+	const text = labelIds(w.message, legs).replace(
+		/^((?:Leg \S+: )?)(.*?): /,
+		(all, leg: string, head: string) => (head === title ? leg : all)
+	);
 	return {
 		key: `${w.code}:${w.leg ?? ''}`,
 		code: w.code,
 		severity: w.severity,
 		title,
 		text,
-		target: i >= 0 ? { kind: 'leg', id: w.leg! } : w.state ? { kind: 'state', id: stateKey(legs, Number(w.state.slice(1)) - 1) } : null
+		target:
+			i >= 0
+				? { kind: 'leg', id: w.leg! }
+				: w.state
+					? { kind: 'state', id: stateKey(legs, Number(w.state.slice(1)) - 1) }
+					: null
 	};
 }
 

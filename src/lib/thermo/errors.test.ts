@@ -32,7 +32,9 @@ describe('ThermoError codes', () => {
 		expect(code(() => getFluid('plasma'))).toBe('unknown-fluid');
 	});
 	it('input shape: unknown-input, wrong-input-count, duplicate-property', () => {
-		expect(code(() => fixState('water', { T: 300, Q: 1 } as unknown as Inputs))).toBe('unknown-input');
+		expect(code(() => fixState('water', { T: 300, Q: 1 } as unknown as Inputs))).toBe(
+			'unknown-input'
+		);
 		expect(code(() => fixState('water', { T: 300 }))).toBe('wrong-input-count');
 		expect(code(() => fixState('water', { T: 300, P: 1e5, h: 1e5 }))).toBe('wrong-input-count');
 		expect(code(() => fixState('water', null as unknown as Inputs))).toBe('wrong-input-count');
@@ -40,8 +42,12 @@ describe('ThermoError codes', () => {
 	});
 	it('values: non-finite-input, non-positive-input, quality-out-of-range', () => {
 		expect(code(() => fixState('water', { T: Number.NaN, P: 1e5 }))).toBe('non-finite-input');
-		expect(code(() => fixState('water', { T: 300, P: Number.POSITIVE_INFINITY }))).toBe('non-finite-input');
-		expect(code(() => fixState('water', { T: 300, P: '1e5' as unknown as number }))).toBe('non-finite-input');
+		expect(code(() => fixState('water', { T: 300, P: Number.POSITIVE_INFINITY }))).toBe(
+			'non-finite-input'
+		);
+		expect(code(() => fixState('water', { T: 300, P: '1e5' as unknown as number }))).toBe(
+			'non-finite-input'
+		);
 		expect(code(() => fixState('water', { T: -5, P: 1e5 }))).toBe('non-positive-input');
 		expect(code(() => fixState('water', { T: 300, v: 0 }))).toBe('non-positive-input');
 		expect(code(() => fixState('water', { T: 300, x: 1.2 }))).toBe('quality-out-of-range');
@@ -59,9 +65,15 @@ describe('ThermoError codes', () => {
 	});
 	it('two-phase-pressure-temperature, and the hints that pick a saturated end', () => {
 		const sat = saturationAtT('water', 373.15);
-		expect(code(() => fixState('water', { T: 373.15, P: sat.P }))).toBe('two-phase-pressure-temperature');
-		expect(fixState('water', { T: 373.15, P: sat.P }, { hint: 'liquid-side' }).phase).toBe('saturated-liquid');
-		expect(fixState('water', { T: 373.15, P: sat.P }, { hint: 'vapor-side' }).phase).toBe('saturated-vapor');
+		expect(code(() => fixState('water', { T: 373.15, P: sat.P }))).toBe(
+			'two-phase-pressure-temperature'
+		);
+		expect(fixState('water', { T: 373.15, P: sat.P }, { hint: 'liquid-side' }).phase).toBe(
+			'saturated-liquid'
+		);
+		expect(fixState('water', { T: 373.15, P: sat.P }, { hint: 'vapor-side' }).phase).toBe(
+			'saturated-vapor'
+		);
 	});
 	it('inconsistent-inputs: a quality above the critical point', () => {
 		expect(code(() => fixState('water', { T: 700, x: 0.5 }))).toBe('inconsistent-inputs');
@@ -89,8 +101,12 @@ describe('ThermoError codes', () => {
 		expect(fixState('water', { P: 1e6, v: s.v }, { near: { T: 280 } }).T).toBe(hi.T);
 	});
 	it('invalid-option', () => {
-		expect(code(() => fixState('water', { T: 300, P: 1e5 }, { hint: 'colder' as never }))).toBe('invalid-option');
-		expect(code(() => fixState('water', { T: 300, P: 1e5 }, { near: { T: -1 } }))).toBe('invalid-option');
+		expect(code(() => fixState('water', { T: 300, P: 1e5 }, { hint: 'colder' as never }))).toBe(
+			'invalid-option'
+		);
+		expect(code(() => fixState('water', { T: 300, P: 1e5 }, { near: { T: -1 } }))).toBe(
+			'invalid-option'
+		);
 		expect(code(() => saturationCurve('water', 1.5))).toBe('invalid-option');
 	});
 	it('no-convergence: an equation with no phase change has no saturation', () => {
@@ -123,7 +139,8 @@ describe('no NaN or Infinity ever returned', () => {
 			s: () => -500 + rnd() * 12000,
 			x: () => -0.1 + rnd() * 1.2
 		};
-		let states = 0, refusals = 0;
+		let states = 0,
+			refusals = 0;
 		for (let k = 0; k < 420; k++) {
 			const [a, b] = PAIRS[k % PAIRS.length];
 			const inputs = { [a]: draw[a](), [b]: draw[b]() } as Inputs;

@@ -91,8 +91,20 @@ export class ThermoError extends Error {
 	}
 
 	/** Plain JSON shape for the HTTP layer: `{ code, message, hint, field?, candidates? }`. */
-	toJSON(): { code: ThermoErrorCode; message: string; hint: string; field?: string; candidates?: StateCandidate[] } {
-		const out: { code: ThermoErrorCode; message: string; hint: string; field?: string; candidates?: StateCandidate[] } = {
+	toJSON(): {
+		code: ThermoErrorCode;
+		message: string;
+		hint: string;
+		field?: string;
+		candidates?: StateCandidate[];
+	} {
+		const out: {
+			code: ThermoErrorCode;
+			message: string;
+			hint: string;
+			field?: string;
+			candidates?: StateCandidate[];
+		} = {
 			code: this.code,
 			message: this.message,
 			hint: this.hint

@@ -45,7 +45,9 @@ describe('fluid loading', () => {
 		expect(getFluid('Steam').id).toBe('water');
 		expect(getFluid('R-290').id).toBe('propane');
 		expect(getFluid('LNG').id).toBe('methane');
-		expect(new Set(listFluids().map((f) => f.group))).toEqual(new Set(['water', 'refrigerant', 'hydrocarbon', 'cryogen']));
+		expect(new Set(listFluids().map((f) => f.group))).toEqual(
+			new Set(['water', 'refrigerant', 'hydrocarbon', 'cryogen'])
+		);
 		expect(() => getFluid('unobtainium')).toThrowError(ThermoError);
 	});
 
@@ -58,15 +60,27 @@ describe('fluid loading', () => {
 		refused((d) => ((d as { group: string }).group = 'snacks'), 'group');
 		refused((d) => ((d.critical as { T: number }).T = Number.NaN), 'critical.T');
 		refused((d) => (d.residual[1] as { t: number[] }).t.pop(), 'residual[1].t');
-		refused((d) => ((d.residual[0] as { n: number[] }).n[3] = Number.POSITIVE_INFINITY), 'residual[0].n[3]');
+		refused(
+			(d) => ((d.residual[0] as { n: number[] }).n[3] = Number.POSITIVE_INFINITY),
+			'residual[0].n[3]'
+		);
 		refused((d) => ((d.residual[2] as { kind: string }).kind = 'spline'), 'residual[2].kind');
 		refused((d) => d.ideal.push({ kind: 'lead', a1: 0, a2: 0 }), 'ideal');
-		refused((d) => ((d.ancillaries.pSat as { form: string }).form = 'cubic'), 'ancillaries.pSat.form');
-		refused((d) => ((d.referenceState as { kind: string }).kind = 'whatever'), 'referenceState.kind');
+		refused(
+			(d) => ((d.ancillaries.pSat as { form: string }).form = 'cubic'),
+			'ancillaries.pSat.form'
+		);
+		refused(
+			(d) => ((d.referenceState as { kind: string }).kind = 'whatever'),
+			'referenceState.kind'
+		);
 		refused((d) => (d.limits.Pmax = 1e6), 'limits.Pmax');
 		refused((d) => ((d as { formulation: unknown }).formulation = undefined), 'formulation');
 		refused((d) => ((d.ideal[2] as { gamma: number[] }).gamma[0] = -1), 'ideal[2].gamma[0]');
-		refused((d) => ((d.ancillaries.rhoVapor as { Tr: unknown }).Tr = 'hot'), 'ancillaries.rhoVapor.Tr');
+		refused(
+			(d) => ((d.ancillaries.rhoVapor as { Tr: unknown }).Tr = 'hot'),
+			'ancillaries.rhoVapor.Tr'
+		);
 		refused((d) => (d.ancillaries.pSat.Tr = 200), 'ancillaries.pSat.Tr');
 	});
 
@@ -95,8 +109,10 @@ describe('fluid loading', () => {
 		expect(Math.abs(liq.h - 100e3)).toBeLessThan(1e-6);
 		expect(Math.abs(liq.s - 350)).toBeLessThan(1e-9);
 		// differences between states, and everything but u, h, s, are unchanged
-		const a = fixStateOf(shifted, { T: 500, P: 1e5 }), b = fixStateOf(base, { T: 500, P: 1e5 });
-		const a0 = fixStateOf(shifted, { T: 300, P: 1e5 }), b0 = fixStateOf(base, { T: 300, P: 1e5 });
+		const a = fixStateOf(shifted, { T: 500, P: 1e5 }),
+			b = fixStateOf(base, { T: 500, P: 1e5 });
+		const a0 = fixStateOf(shifted, { T: 300, P: 1e5 }),
+			b0 = fixStateOf(base, { T: 300, P: 1e5 });
 		expect(Math.abs(a.h - a0.h - (b.h - b0.h))).toBeLessThan(1e-6);
 		expect(Math.abs(a.s - a0.s - (b.s - b0.s))).toBeLessThan(1e-9);
 		expect(a.rho).toBeCloseTo(b.rho, 10);

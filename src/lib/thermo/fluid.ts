@@ -3,8 +3,19 @@
  * A malformed file is refused with a ThermoError `invalid-fluid-data` naming the first bad field.
  */
 import { ThermoError } from './errors.ts';
-import { FLUID_GROUPS, type Ancillary, type FluidData, type IdealTerm, type ResidualTerm } from './fluids/schema.ts';
-import { AlphaRecord, EvalContext, type DerivativeOrder, type TermEvaluator } from './terms/record.ts';
+import {
+	FLUID_GROUPS,
+	type Ancillary,
+	type FluidData,
+	type IdealTerm,
+	type ResidualTerm
+} from './fluids/schema.ts';
+import {
+	AlphaRecord,
+	EvalContext,
+	type DerivativeOrder,
+	type TermEvaluator
+} from './terms/record.ts';
 import { IdealLead } from './terms/ideal-lead.ts';
 import { IdealLogTau } from './terms/ideal-log-tau.ts';
 import { IdealPower } from './terms/ideal-power.ts';
@@ -35,11 +46,13 @@ class Checker {
 		return v;
 	}
 	str(v: unknown, field: string): string {
-		if (typeof v !== 'string' || v.trim() === '') bad(this.id, field, 'is missing or not a non-empty string');
+		if (typeof v !== 'string' || v.trim() === '')
+			bad(this.id, field, 'is missing or not a non-empty string');
 		return v;
 	}
 	num(v: unknown, field: string, positive = false): number {
-		if (typeof v !== 'number' || !Number.isFinite(v)) bad(this.id, field, 'is missing or not a finite number');
+		if (typeof v !== 'number' || !Number.isFinite(v))
+			bad(this.id, field, 'is missing or not a finite number');
 		if (positive && !(v > 0)) bad(this.id, field, 'must be positive');
 		return v;
 	}
@@ -60,7 +73,8 @@ function checkAncillary(c: Checker, v: unknown, field: string, Tt: number): void
 	const n = c.nums(a.n, `${field}.n`);
 	c.nums(a.t, `${field}.t`, n.length);
 	c.num(a.yc, `${field}.yc`, true);
-	if (a.Tr !== undefined && !(c.num(a.Tr, `${field}.Tr`, true) > Tt)) bad(c.id, `${field}.Tr`, 'must lie above triple.T');
+	if (a.Tr !== undefined && !(c.num(a.Tr, `${field}.Tr`, true) > Tt))
+		bad(c.id, `${field}.Tr`, 'must lie above triple.T');
 	c.str(a.source, `${field}.source`);
 }
 
@@ -109,16 +123,22 @@ export function validateFluidData(data: unknown): asserts data is FluidData {
 	c.str(rs.label, 'referenceState.label');
 	if (rs.kind === 'saturated-liquid-at-T') {
 		const T = c.num(rs.T, 'referenceState.T', true);
-		if (!(T >= Tt && T < Tc)) bad(id, 'referenceState.T', 'must lie between the triple and critical temperatures');
+		if (!(T >= Tt && T < Tc))
+			bad(id, 'referenceState.T', 'must lie between the triple and critical temperatures');
 		c.num(rs.h, 'referenceState.h');
 		c.num(rs.s, 'referenceState.s');
 	} else if (rs.kind === 'saturated-liquid-at-P') {
 		const P = c.num(rs.P, 'referenceState.P', true);
-		if (!(P >= Pt && P < Pc)) bad(id, 'referenceState.P', 'must lie between the triple and critical pressures');
+		if (!(P >= Pt && P < Pc))
+			bad(id, 'referenceState.P', 'must lie between the triple and critical pressures');
 		c.num(rs.h, 'referenceState.h');
 		c.num(rs.s, 'referenceState.s');
 	} else if (rs.kind !== 'as-published') {
-		bad(id, 'referenceState.kind', 'is not one of as-published, saturated-liquid-at-T, saturated-liquid-at-P');
+		bad(
+			id,
+			'referenceState.kind',
+			'is not one of as-published, saturated-liquid-at-T, saturated-liquid-at-P'
+		);
 	}
 
 	if (!Array.isArray(d.ideal) || d.ideal.length === 0) bad(id, 'ideal', 'is missing or empty');
@@ -159,7 +179,8 @@ export function validateFluidData(data: unknown): asserts data is FluidData {
 	});
 	if (leads !== 1) bad(id, 'ideal', `must hold exactly one lead term (has ${leads})`);
 
-	if (!Array.isArray(d.residual) || d.residual.length === 0) bad(id, 'residual', 'is missing or empty');
+	if (!Array.isArray(d.residual) || d.residual.length === 0)
+		bad(id, 'residual', 'is missing or empty');
 	d.residual.forEach((t: unknown, i: number) => {
 		const p = `residual[${i}]`;
 		const o = c.obj(t, p);
@@ -231,7 +252,8 @@ export class AncillaryEq {
 	}
 	/** T at which y(T) = y, by bisection on the (monotonic) ancillary between T1 and T2 */
 	inverse(y: number, T1: number, T2: number): number {
-		let lo = T1, hi = T2;
+		let lo = T1,
+			hi = T2;
 		const ylo = this.value(lo);
 		const rising = this.value(hi) > ylo;
 		for (let i = 0; i < 60; i++) {
@@ -324,7 +346,8 @@ export class Fluid {
 		this.a2 = lead ? lead.a2 : leadTerm.a2;
 		this.ideal = data.ideal.map((t) => compileIdeal(t, { a1: this.a1, a2: this.a2 }));
 		this.residual = data.residual.map(compileResidual);
-		let maxD = 0, maxT = 0;
+		let maxD = 0,
+			maxT = 0;
 		for (const t of [...this.ideal, ...this.residual]) {
 			maxD = Math.max(maxD, t.maxD);
 			maxT = Math.max(maxT, t.maxT);

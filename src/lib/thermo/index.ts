@@ -19,7 +19,16 @@ import { checkSaturationP } from './solvers/range.ts';
 import { satAtP, satAtT } from './solvers/saturation.ts';
 import { isSolid, meltingAt, meltingLine, sublimationAt } from './solvers/solid.ts';
 import { fmt } from './errors.ts';
-import type { FixOptions, FluidInfo, Inputs, Leg, LegSpec, Saturation, SaturationCurve, State } from './types.ts';
+import type {
+	FixOptions,
+	FluidInfo,
+	Inputs,
+	Leg,
+	LegSpec,
+	Saturation,
+	SaturationCurve,
+	State
+} from './types.ts';
 
 export type * from './types.ts';
 export type { FluidData } from './fluids/schema.ts';
@@ -64,7 +73,11 @@ export function fixState(fluid: string, inputs: Inputs, options: FixOptions = {}
 
 function finite(name: string, value: number): void {
 	if (typeof value !== 'number' || !Number.isFinite(value))
-		throw new ThermoError('non-finite-input', `${name} must be a finite number (got ${String(value)}).`, `Give ${name} as a finite number in SI units.`);
+		throw new ThermoError(
+			'non-finite-input',
+			`${name} must be a finite number (got ${String(value)}).`,
+			`Give ${name} as a finite number in SI units.`
+		);
 }
 
 /**
@@ -76,9 +89,17 @@ export function saturationAtT(fluid: string, T: number): Saturation {
 	const fl = getCompiledFluid(fluid);
 	finite('T', T);
 	if (T < fl.Tt)
-		throw new ThermoError('below-triple-point', `T = ${fmt(T)} K is below the triple point of ${fl.id} (${fmt(fl.Tt)} K).`, `Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`);
+		throw new ThermoError(
+			'below-triple-point',
+			`T = ${fmt(T)} K is below the triple point of ${fl.id} (${fmt(fl.Tt)} K).`,
+			`Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`
+		);
 	if (T > fl.Tc)
-		throw new ThermoError('inconsistent-inputs', `There is no saturation above the critical temperature of ${fl.id} (${fmt(fl.Tc)} K); T = ${fmt(T)} K.`, `Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`);
+		throw new ThermoError(
+			'inconsistent-inputs',
+			`There is no saturation above the critical temperature of ${fl.id} (${fmt(fl.Tc)} K); T = ${fmt(T)} K.`,
+			`Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`
+		);
 	const sat = satAtT(fl, T);
 	return { T, P: sat.P, liquid: saturatedState(fl, sat, 0), vapor: saturatedState(fl, sat, 1) };
 }
@@ -91,9 +112,17 @@ export function saturationAtP(fluid: string, P: number): Saturation {
 	const fl = getCompiledFluid(fluid);
 	finite('P', P);
 	if (!(P > 0))
-		throw new ThermoError('non-positive-input', `P must be positive (got ${fmt(P)}).`, 'Give an absolute pressure in Pa.');
+		throw new ThermoError(
+			'non-positive-input',
+			`P must be positive (got ${fmt(P)}).`,
+			'Give an absolute pressure in Pa.'
+		);
 	if (P > fl.Pc)
-		throw new ThermoError('inconsistent-inputs', `There is no saturation above the critical pressure of ${fl.id} (${fmt(fl.Pc)} Pa); P = ${fmt(P)} Pa.`, `Give a pressure up to ${fmt(fl.Pc)} Pa.`);
+		throw new ThermoError(
+			'inconsistent-inputs',
+			`There is no saturation above the critical pressure of ${fl.id} (${fmt(fl.Pc)} Pa); P = ${fmt(P)} Pa.`,
+			`Give a pressure up to ${fmt(fl.Pc)} Pa.`
+		);
 	checkSaturationP(fl, P);
 	const sat = satAtP(fl, P);
 	return { T: sat.T, P, liquid: saturatedState(fl, sat, 0), vapor: saturatedState(fl, sat, 1) };
@@ -122,8 +151,15 @@ export function listFluids(): FluidInfo[] {
 /** Metadata of one fluid by id or alias (case-insensitive); throws ThermoError `unknown-fluid`. */
 export function getFluid(id: string): FluidInfo {
 	const key = typeof id === 'string' ? id.trim().toLowerCase() : '';
-	const data = fluidData.find((f) => f.id === key || f.aliases.some((a) => a.toLowerCase() === key));
-	if (!data) throw new ThermoError('unknown-fluid', `Unknown fluid "${String(id)}".`, `Use one of: ${fluidIds().join(', ')}.`);
+	const data = fluidData.find(
+		(f) => f.id === key || f.aliases.some((a) => a.toLowerCase() === key)
+	);
+	if (!data)
+		throw new ThermoError(
+			'unknown-fluid',
+			`Unknown fluid "${String(id)}".`,
+			`Use one of: ${fluidIds().join(', ')}.`
+		);
 	return fluidInfo(data);
 }
 
@@ -144,7 +180,13 @@ export function computeLeg(spec: LegSpec): Leg {
  * leg, per-state extras (superheat, subcooling, volume fractions) and warnings with stable codes
  * (solvers/path.ts). Throws ThermoError (`invalid-path`, or a leg's error prefixed with its id).
  */
-export { computePath, PRESSURE_EQUIPMENT_CAUTION, LIQUID_FULL_CAUTION, CYCLE_TOLERANCE, MAX_LEGS } from './solvers/path.ts';
+export {
+	computePath,
+	PRESSURE_EQUIPMENT_CAUTION,
+	LIQUID_FULL_CAUTION,
+	CYCLE_TOLERANCE,
+	MAX_LEGS
+} from './solvers/path.ts';
 
 /** Degrees of superheat/subcooling against saturation at the state's P, and liquid/vapor volume fractions. */
 export function stateExtras(state: State): import('./types.ts').StateExtras {
@@ -152,13 +194,27 @@ export function stateExtras(state: State): import('./types.ts').StateExtras {
 }
 
 /** Leg limits and names for validators (process names, target names, samples range, |n| bound). */
-export { PROCESSES, TARGET_NAMES, SAMPLES_DEFAULT, SAMPLES_MIN, SAMPLES_MAX, N_MAX } from './solvers/legs.ts';
+export {
+	PROCESSES,
+	TARGET_NAMES,
+	SAMPLES_DEFAULT,
+	SAMPLES_MIN,
+	SAMPLES_MAX,
+	N_MAX
+} from './solvers/legs.ts';
 
 /**
  * Background isolines (isobars Pa, isotherms K, isochores m³/kg) across the drawable range, through
  * the dome (solvers/isolines.ts).
  */
-export { isolines, ISOLINE_KINDS, ISOLINE_POINTS_DEFAULT, ISOLINE_POINTS_MIN, ISOLINE_POINTS_MAX, ISOLINE_VALUES_MAX } from './solvers/isolines.ts';
+export {
+	isolines,
+	ISOLINE_KINDS,
+	ISOLINE_POINTS_DEFAULT,
+	ISOLINE_POINTS_MIN,
+	ISOLINE_POINTS_MAX,
+	ISOLINE_VALUES_MAX
+} from './solvers/isolines.ts';
 
 /**
  * Melting pressure (Pa) of `fluid` at T (K) and the solid beyond it — the curve bounding fluid

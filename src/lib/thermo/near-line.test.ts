@@ -36,7 +36,9 @@ function expectSameAsTRho(fluid: string, st: State, where: string): void {
 	const e = fixState(fluid, { T: st.T, rho: st.rho });
 	expect(e.phase, `${where}: (T, ρ) phase`).toBe(st.phase);
 	// a cold liquid's equation-of-state pressure carries round-off of a few 1e−13·ρRT
-	expect(Math.abs(e.P - st.P), `${where}: (T, ρ) P ${e.P} vs ${st.P}`).toBeLessThanOrEqual(1e-10 * st.P + 1e-11 * st.rho * fl.R * st.T);
+	expect(Math.abs(e.P - st.P), `${where}: (T, ρ) P ${e.P} vs ${st.P}`).toBeLessThanOrEqual(
+		1e-10 * st.P + 1e-11 * st.rho * fl.R * st.T
+	);
 	for (const k of ['u', 'h', 's'] as const) expect(e[k], `${where}: (T, ρ) ${k}`).toBe(st[k]);
 }
 
@@ -52,7 +54,10 @@ function throughPPairs(fluid: string, ref: Ref, phase: string, where: string, re
 		expect(rel(st.T, ref.T), `${w}: T ${st.T} vs ${ref.T}`).toBeLessThanOrEqual(relT);
 		const own = st[y as 'v' | 'u' | 'h' | 's'];
 		const floor = y === 'v' ? 0 : y === 's' ? RT / ref.T : RT;
-		expect(rel(own, ref[y as keyof Ref], floor), `${w}: ${y} ${own} vs ${ref[y as keyof Ref]}`).toBeLessThanOrEqual(1e-10);
+		expect(
+			rel(own, ref[y as keyof Ref], floor),
+			`${w}: ${y} ${own} vs ${ref[y as keyof Ref]}`
+		).toBeLessThanOrEqual(1e-10);
 		expectSameAsTRho(fluid, st, w);
 	}
 }
@@ -60,7 +65,8 @@ function throughPPairs(fluid: string, ref: Ref, phase: string, where: string, re
 describe('states just off the saturation line, against python3-iapws 1.5.2 (Debian)', () => {
 	// python3-iapws's ammonia energies differ from the IIR convention by constants
 	const nh3 = fixture.ammoniaSaturatedLiquidAt273_15;
-	const shift = (f: string) => (f === 'ammonia' ? { dh: 200e3 - nh3.h, ds: 1e3 - nh3.s } : { dh: 0, ds: 0 });
+	const shift = (f: string) =>
+		f === 'ammonia' ? { dh: 200e3 - nh3.h, ds: 1e3 - nh3.s } : { dh: 0, ds: 0 };
 
 	it('are single-phase with the given P from (T, P) and from every pair holding P', () => {
 		let n = 0;
@@ -88,7 +94,12 @@ describe('states just off the saturation line, every fluid (internal consistency
 	for (const { id } of listFluids()) {
 		it(`${id}: 1 Pa, 0.01 % and 1 % above and below Psat(T) from the triple point to near Tc`, () => {
 			const fl = getCompiledFluid(id);
-			const Ts = [fl.Tt + 0.02, ...[0.1, 0.5, 0.8, 0.95].map((f) => fl.Tt + f * (fl.Tc - fl.Tt)), fl.Tc - 0.5, fl.Tc - 0.05];
+			const Ts = [
+				fl.Tt + 0.02,
+				...[0.1, 0.5, 0.8, 0.95].map((f) => fl.Tt + f * (fl.Tc - fl.Tt)),
+				fl.Tc - 0.5,
+				fl.Tc - 0.05
+			];
 			let n = 0;
 			let skipped = 0;
 			for (const T of Ts) {
@@ -99,7 +110,9 @@ describe('states just off the saturation line, every fluid (internal consistency
 				const floor = 10 * P_ROUNDOFF * saturationAtT(id, T).liquid.rho * fl.R * T;
 				for (const side of ['liquid', 'vapor'] as const) {
 					const phase = side === 'liquid' ? 'compressed-liquid' : 'superheated-vapor';
-					const steps = [1, 1e-4 * Psat, 1e-2 * Psat].map((d) => Math.max(d, floor)).filter((d) => side === 'liquid' || d < 0.5 * Psat);
+					const steps = [1, 1e-4 * Psat, 1e-2 * Psat]
+						.map((d) => Math.max(d, floor))
+						.filter((d) => side === 'liquid' || d < 0.5 * Psat);
 					skipped += 3 - steps.length;
 					for (const dP of steps) {
 						const P = side === 'liquid' ? Psat + dP : Psat - dP;
@@ -128,8 +141,11 @@ describe('states just off the saturation line, every fluid (internal consistency
 			const fl = getCompiledFluid(id);
 			const T = fl.Tt + 0.5 * (fl.Tc - fl.Tt);
 			const P = saturationAtT(id, T).P * (1 + 5e-10);
-			expect(() => fixState(id, { T, P }), id).toThrowError(expect.objectContaining({ code: 'two-phase-pressure-temperature' }));
-			const liq = fixState(id, { T, P }, { hint: 'liquid-side' }), vap = fixState(id, { T, P }, { hint: 'vapor-side' });
+			expect(() => fixState(id, { T, P }), id).toThrowError(
+				expect.objectContaining({ code: 'two-phase-pressure-temperature' })
+			);
+			const liq = fixState(id, { T, P }, { hint: 'liquid-side' }),
+				vap = fixState(id, { T, P }, { hint: 'vapor-side' });
 			expect([liq.phase, liq.x, liq.P, liq.T]).toEqual(['saturated-liquid', 0, P, T]);
 			expect([vap.phase, vap.x, vap.P, vap.T]).toEqual(['saturated-vapor', 1, P, T]);
 		}

@@ -12,9 +12,17 @@ import type { InputName, Inputs, RootHint, State } from './types.ts';
 /** The 21 independent pairs of T, P, v (= 1/rho), u, h, s, x. */
 export const PAIRS: [InputName, InputName][] = [];
 const NAMES: InputName[] = ['T', 'P', 'v', 'u', 'h', 's', 'x'];
-for (let i = 0; i < NAMES.length; i++) for (let j = i + 1; j < NAMES.length; j++) PAIRS.push([NAMES[i], NAMES[j]]);
+for (let i = 0; i < NAMES.length; i++)
+	for (let j = i + 1; j < NAMES.length; j++) PAIRS.push([NAMES[i], NAMES[j]]);
 
-export const HINTS: RootHint[] = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'];
+export const HINTS: RootHint[] = [
+	'lower-T',
+	'higher-T',
+	'lower-P',
+	'higher-P',
+	'liquid-side',
+	'vapor-side'
+];
 
 export interface RefState {
 	T: number;
@@ -27,7 +35,8 @@ export interface RefState {
 }
 
 export function inputsFrom(ref: RefState, a: InputName, b: InputName): Inputs {
-	const pick = (k: InputName): number => (k === 'x' ? (ref.x as number) : k === 'rho' ? 1 / ref.v : ref[k]);
+	const pick = (k: InputName): number =>
+		k === 'x' ? (ref.x as number) : k === 'rho' ? 1 / ref.v : ref[k];
 	return { [a]: pick(a), [b]: pick(b) } as Inputs;
 }
 
@@ -37,7 +46,11 @@ export function inputsFrom(ref: RefState, a: InputName, b: InputName): Inputs {
  * and a hint (or, for a middle one of three, `near`) must return exactly that candidate. Returns
  * the state and whether a hint was needed.
  */
-export function solveLike(fluid: string, inputs: Inputs, ref: RefState): { state: State; hinted: boolean } {
+export function solveLike(
+	fluid: string,
+	inputs: Inputs,
+	ref: RefState
+): { state: State; hinted: boolean } {
 	try {
 		return { state: fixState(fluid, inputs), hinted: false };
 	} catch (e) {
@@ -45,11 +58,14 @@ export function solveLike(fluid: string, inputs: Inputs, ref: RefState): { state
 		const cands = e.candidates ?? [];
 		expect(cands.length, `${e.message}`).toBeGreaterThanOrEqual(2);
 		const dist = (c: { T: number; P: number; rho: number }) =>
-			Math.abs(Math.log(c.T / ref.T)) + Math.abs(Math.log(c.P / ref.P)) + Math.abs(Math.log(c.rho * ref.v));
+			Math.abs(Math.log(c.T / ref.T)) +
+			Math.abs(Math.log(c.P / ref.P)) +
+			Math.abs(Math.log(c.rho * ref.v));
 		const best = [...cands].sort((a, b) => dist(a) - dist(b))[0];
 		if (!(Math.abs(best.T / ref.T - 1) < 1e-6 && Math.abs(best.P / ref.P - 1) < 1e-3))
 			throw new Error(`reference not among candidates: ${e.message}`);
-		const same = (st: State) => Math.abs(st.T / best.T - 1) < 1e-12 && Math.abs(st.rho / best.rho - 1) < 1e-9;
+		const same = (st: State) =>
+			Math.abs(st.T / best.T - 1) < 1e-12 && Math.abs(st.rho / best.rho - 1) < 1e-9;
 		for (const hint of HINTS) {
 			try {
 				const st = fixState(fluid, inputs, { hint });
@@ -69,15 +85,23 @@ export function solveLike(fluid: string, inputs: Inputs, ref: RefState): { state
  * Relative difference, against the magnitude of the value or, for u, h, s near the reference
  * state's zero, against a floor (0.1 % of R·T for u and h, 0.1 % of R for s).
  */
-export function relErr(key: 'T' | 'P' | 'v' | 'u' | 'h' | 's', got: number, want: number, R: number, T: number): number {
+export function relErr(
+	key: 'T' | 'P' | 'v' | 'u' | 'h' | 's',
+	got: number,
+	want: number,
+	R: number,
+	T: number
+): number {
 	const floor = key === 'u' || key === 'h' ? 1e-3 * R * T : key === 's' ? 1e-3 * R : 0;
 	return Math.abs(got - want) / Math.max(Math.abs(want), floor);
 }
 
 /** Every number of a state is finite (or null where the contract allows null). */
 export function expectFinite(s: State): void {
-	for (const k of ['T', 'P', 'v', 'rho', 'u', 'h', 's'] as const) expect(Number.isFinite(s[k]), `${k} = ${s[k]}`).toBe(true);
-	for (const k of ['x', 'cp', 'cv', 'w'] as const) expect(s[k] === null || Number.isFinite(s[k]), `${k} = ${s[k]}`).toBe(true);
+	for (const k of ['T', 'P', 'v', 'rho', 'u', 'h', 's'] as const)
+		expect(Number.isFinite(s[k]), `${k} = ${s[k]}`).toBe(true);
+	for (const k of ['x', 'cp', 'cv', 'w'] as const)
+		expect(s[k] === null || Number.isFinite(s[k]), `${k} = ${s[k]}`).toBe(true);
 }
 
 /**
@@ -100,9 +124,20 @@ export function spread(
 	const pt = new Point();
 	const val = (T: number, rho: number, k: InputName): number => {
 		evalPoint(fl, T, rho, pt, 2);
-		return k === 'T' ? T : k === 'P' ? pt.P : k === 'v' ? 1 / rho : k === 'u' ? pt.u : k === 'h' ? pt.h : pt.s;
+		return k === 'T'
+			? T
+			: k === 'P'
+				? pt.P
+				: k === 'v'
+					? 1 / rho
+					: k === 'u'
+						? pt.u
+						: k === 'h'
+							? pt.h
+							: pt.s;
 	};
-	const dT = 1e-6 * r.T, dz = 1e-6;
+	const dT = 1e-6 * r.T,
+		dz = 1e-6;
 	const d = (k: InputName): [number, number] => [
 		(val(r.T + dT, r.rho, k) - val(r.T - dT, r.rho, k)) / (2 * dT),
 		(val(r.T, r.rho * Math.exp(dz), k) - val(r.T, r.rho * Math.exp(-dz), k)) / (2 * dz)
@@ -113,10 +148,16 @@ export function spread(
 	const noise = (k: InputName): number => {
 		const ours = val(r.T, r.rho, k);
 		const ref = k === 'v' ? r.v : (r[k as 'T' | 'P' | 'u' | 'h' | 's'] as number);
-		const floor = k === 'u' || k === 'h' ? 1e-14 * (Math.abs(ours) + R * r.T) : k === 's' ? 1e-14 * (Math.abs(ours) + R) : 1e-15 * Math.abs(ours);
+		const floor =
+			k === 'u' || k === 'h'
+				? 1e-14 * (Math.abs(ours) + R * r.T)
+				: k === 's'
+					? 1e-14 * (Math.abs(ours) + R)
+					: 1e-15 * Math.abs(ours);
 		return Math.abs(ours - ref) + floor;
 	};
-	const da = noise(a), db = noise(b);
+	const da = noise(a),
+		db = noise(b);
 	const det = Ja[0] * Jb[1] - Ja[1] * Jb[0];
 	const eT = (Math.abs(Jb[1]) * da + Math.abs(Ja[1]) * db) / Math.abs(det);
 	const ez = (Math.abs(Jb[0]) * da + Math.abs(Ja[0]) * db) / Math.abs(det);

@@ -39,7 +39,12 @@ export function evalPoint(fl: Fluid, T: number, rho: number, out: Point, order: 
 	const delta = rho / fl.rhor;
 	const tau = fl.Tr / T;
 	const r = fl.residualAt(delta, tau, order);
-	const ar = r.a, d1 = r.d1, t1r = r.t1, d2 = r.d2, t2r = r.t2, dt = r.dt;
+	const ar = r.a,
+		d1 = r.d1,
+		t1r = r.t1,
+		d2 = r.d2,
+		t2r = r.t2,
+		dt = r.dt;
 	const i = fl.idealAt(delta, tau, order);
 	const R = fl.R;
 	const RT = R * T;

@@ -14,7 +14,11 @@ import { ThermoError } from './errors.ts';
 // the constructor compiles the saturation ancillaries of a pure fluid; no saturation solver is called here
 const data: FluidData = {
 	...airEquation,
-	ancillaries: { pSat: airBoundaries.bubblePressure, rhoLiquid: airBoundaries.dewDensity, rhoVapor: airBoundaries.dewDensity }
+	ancillaries: {
+		pSat: airBoundaries.bubblePressure,
+		rhoLiquid: airBoundaries.dewDensity,
+		rhoVapor: airBoundaries.dewDensity
+	}
 };
 const fl = new Fluid(data);
 const band = new MixtureBand(fl, airBoundaries);
@@ -70,11 +74,15 @@ describe('air: the band between the bubble and dew lines', () => {
 
 	it('bubble- and dew-point densities: on the liquid and vapor branches, within 1 % of the paper’s Eqs. (2) and (3)', () => {
 		for (const T of [60, 70, 80, 90, 100, 110, 120, 125, 130, 132, 132.5, 132.6]) {
-			const rL = band.bubbleRho(T), rV = band.dewRho(T);
+			const rL = band.bubbleRho(T),
+				rV = band.dewRho(T);
 			// the ancillaries represent the mixture model to a fraction of a percent (1 %: common practice)
-			expect(Math.abs(rL / band.bubbleDensityGuess(T) - 1), `bubble ρ at ${T} K`).toBeLessThan(0.01);
+			expect(Math.abs(rL / band.bubbleDensityGuess(T) - 1), `bubble ρ at ${T} K`).toBeLessThan(
+				0.01
+			);
 			expect(rV).toBeLessThan(rL);
-			const pL = evalPoint(fl, T, rL, new Point()), pV = evalPoint(fl, T, rV, new Point());
+			const pL = evalPoint(fl, T, rL, new Point()),
+				pV = evalPoint(fl, T, rV, new Point());
 			expect(pL.dPdrho).toBeGreaterThan(0);
 			expect(pV.dPdrho).toBeGreaterThan(0);
 			expect(band.insideTRho(T, 0.5 * (rL + rV))).toBe(true);

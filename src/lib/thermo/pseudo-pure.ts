@@ -112,8 +112,15 @@ export class MixtureBand {
  * (down in density for the liquid, up for the vapor) in 2 % steps until the pressure crosses P while
  * (∂P/∂ρ)_T stays positive, then solve inside that bracket. NaN if the branch has no such root.
  */
-export function branchRoot(fl: Fluid, T: number, P: number, guess: number, branch: 'liquid' | 'vapor'): number {
-	const tau = fl.Tr / T, RT = fl.R * T;
+export function branchRoot(
+	fl: Fluid,
+	T: number,
+	P: number,
+	guess: number,
+	branch: 'liquid' | 'vapor'
+): number {
+	const tau = fl.Tr / T,
+		RT = fl.R * T;
 	const f = (rho: number) => {
 		const r = fl.residualAt(rho / fl.rhor, tau, 2);
 		return { f: rho * RT * (1 + r.d1) - P, df: RT * (1 + 2 * r.d1 + r.d2) };
@@ -135,6 +142,7 @@ export function branchRoot(fl: Fluid, T: number, P: number, guess: number, branc
 		if (branch === 'liquid' ? fb.f < 0 : fb.f > 0) break;
 		if (i === 399) return NaN;
 	}
-	const lo = Math.min(a, b), hi = Math.max(a, b);
+	const lo = Math.min(a, b),
+		hi = Math.max(a, b);
 	return densityAtTP(fl, T, P, 0.5 * (lo + hi), lo, hi);
 }

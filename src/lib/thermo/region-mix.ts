@@ -16,7 +16,8 @@ import type { FluidInfo, InputName, Inputs, State } from './types.ts';
 export const PAIR_LIST: [InputName, InputName][] = [];
 {
 	const names: InputName[] = ['T', 'P', 'v', 'u', 'h', 's', 'x'];
-	for (let i = 0; i < names.length; i++) for (let j = i + 1; j < names.length; j++) PAIR_LIST.push([names[i], names[j]]);
+	for (let i = 0; i < names.length; i++)
+		for (let j = i + 1; j < names.length; j++) PAIR_LIST.push([names[i], names[j]]);
 }
 
 const NO_X_PAIRS = PAIR_LIST.filter(([a, b]) => a !== 'x' && b !== 'x');
@@ -50,7 +51,9 @@ function logUniform(r: () => number, lo: number, hi: number): number {
 
 /** One reference state of a region (null when the draw lands on a solid or a refusal; the caller draws again). */
 export function drawState(f: FluidInfo, region: Region, r: () => number): State | null {
-	const Tt = f.limits.Tmin, Tc = f.equationCritical?.T ?? f.critical.T, Pt = f.triple.P;
+	const Tt = f.limits.Tmin,
+		Tc = f.equationCritical?.T ?? f.critical.T,
+		Pt = f.triple.P;
 	let inputs: Inputs;
 	switch (region) {
 		case 'single':
@@ -61,7 +64,10 @@ export function drawState(f: FluidInfo, region: Region, r: () => number): State 
 			break;
 		case 'near-critical': {
 			const T = Tc * (1 + (r() * 2 - 1) * 0.01);
-			inputs = r() < 0.3 && T < Tc * 0.9999 ? { T, x: r() } : { T, P: logUniform(r, 0.5 * f.critical.P, 2 * f.critical.P) };
+			inputs =
+				r() < 0.3 && T < Tc * 0.9999
+					? { T, x: r() }
+					: { T, P: logUniform(r, 0.5 * f.critical.P, 2 * f.critical.P) };
 			break;
 		}
 		case 'near-triple': {
@@ -110,7 +116,14 @@ function inputMiss(st: State, inputs: Inputs, R: number): number {
 	let worst = 0;
 	for (const [k, want] of Object.entries(inputs) as [InputName, number][]) {
 		const got = k === 'x' ? (st.x ?? NaN) : (st[k as 'T'] as number);
-		const scale = k === 'x' ? 1 : k === 'u' || k === 'h' ? Math.max(Math.abs(want), 1e-3 * R * st.T) : k === 's' ? Math.max(Math.abs(want), 1e-3 * R) : Math.abs(want);
+		const scale =
+			k === 'x'
+				? 1
+				: k === 'u' || k === 'h'
+					? Math.max(Math.abs(want), 1e-3 * R * st.T)
+					: k === 's'
+						? Math.max(Math.abs(want), 1e-3 * R)
+						: Math.abs(want);
 		const e = Math.abs(got - want) / scale;
 		worst = Math.max(worst, Number.isNaN(e) ? Infinity : e);
 	}
@@ -120,9 +133,16 @@ function inputMiss(st: State, inputs: Inputs, R: number): number {
 /** A single-phase reference within the pair's resolution of its saturation line may come back as the saturated phase. */
 function lineStandIn(got: State, ref: State): boolean {
 	if (got.x === null || ref.x !== null) return false;
-	if (!((got.x === 0 && ref.phase === 'compressed-liquid') || (got.x === 1 && ref.phase !== 'compressed-liquid'))) return false;
+	if (!(
+		(got.x === 0 && ref.phase === 'compressed-liquid') ||
+		(got.x === 1 && ref.phase !== 'compressed-liquid')
+	))
+		return false;
 	const sat = saturationAtT(ref.fluid, ref.T);
-	return Math.abs(got.T - ref.T) <= 1e-6 * ref.T && Math.abs(ref.P - sat.P) <= Math.max(1e-6, PRECISION_FACTOR * (got.precision?.P ?? 0)) * ref.P;
+	return (
+		Math.abs(got.T - ref.T) <= 1e-6 * ref.T &&
+		Math.abs(ref.P - sat.P) <= Math.max(1e-6, PRECISION_FACTOR * (got.precision?.P ?? 0)) * ref.P
+	);
 }
 
 export interface Failure {
@@ -135,10 +155,23 @@ export interface Failure {
 }
 
 /** Re-fix `ref` from pair (a, b) and judge the answer; null when it passes. */
-export function check(f: FluidInfo, region: Region, ref: State, a: InputName, b: InputName): Failure | null {
+export function check(
+	f: FluidInfo,
+	region: Region,
+	ref: State,
+	a: InputName,
+	b: InputName
+): Failure | null {
 	if ((a === 'x' || b === 'x') && ref.x === null) return null;
 	const inputs = inputsOf(ref, a, b);
-	const fail = (why: string): Failure => ({ fluid: f.id, region, pair: `${a},${b}`, inputs, ref: { T: ref.T, P: ref.P, phase: ref.phase }, why });
+	const fail = (why: string): Failure => ({
+		fluid: f.id,
+		region,
+		pair: `${a},${b}`,
+		inputs,
+		ref: { T: ref.T, P: ref.P, phase: ref.phase },
+		why
+	});
 	// (T, P) cannot fix a mixture: the true answer is that refusal
 	if (a === 'T' && b === 'P' && ref.phase === 'saturated-mixture') {
 		try {
@@ -157,16 +190,28 @@ export function check(f: FluidInfo, region: Region, ref: State, a: InputName, b:
 		if (!(e instanceof ThermoError)) return fail(`threw ${(e as Error).message}`);
 		if (e.code !== 'ambiguous-state' || !e.candidates) return fail(`${e.code}: ${e.message}`);
 		const cands = e.candidates.map((c) => fixState(f.id, inputs, { near: { T: c.T, P: c.P } }));
-		for (const c of cands) if (inputMiss(c, inputs, R) > 1e-6) return fail(`candidate at T = ${c.T}, P = ${c.P} misses the inputs by ${inputMiss(c, inputs, R)}`);
-		if (!cands.some((c) => miss(c, ref) <= 1 || lineStandIn(c, ref))) return fail(`reference not among candidates: ${e.message}`);
+		for (const c of cands)
+			if (inputMiss(c, inputs, R) > 1e-6)
+				return fail(
+					`candidate at T = ${c.T}, P = ${c.P} misses the inputs by ${inputMiss(c, inputs, R)}`
+				);
+		if (!cands.some((c) => miss(c, ref) <= 1 || lineStandIn(c, ref)))
+			return fail(`reference not among candidates: ${e.message}`);
 		return null;
 	}
 	if (miss(got, ref) <= 1 || lineStandIn(got, ref)) return null;
-	return fail(`answered ${got.phase} at T = ${got.T}, P = ${got.P} (precision ${JSON.stringify(got.precision)})`);
+	return fail(
+		`answered ${got.phase} at T = ${got.T}, P = ${got.P} (precision ${JSON.stringify(got.precision)})`
+	);
 }
 
 /** Run n states per fluid (one random pair each, or every pair with allPairs). */
-export function runMix(seed: number, n: number, allPairs = false, only?: string): { tried: number; failures: Failure[] } {
+export function runMix(
+	seed: number,
+	n: number,
+	allPairs = false,
+	only?: string
+): { tried: number; failures: Failure[] } {
 	const failures: Failure[] = [];
 	let tried = 0;
 	for (const f of listFluids()) {

@@ -46,12 +46,20 @@ function findData(id: string): FluidData | undefined {
 /** The compiled fluid for an id or alias; throws ThermoError `unknown-fluid`. */
 export function getCompiledFluid(id: string): Fluid {
 	if (typeof id !== 'string')
-		throw new ThermoError('unknown-fluid', 'The fluid must be given as a string id.', `Use one of: ${fluidIds().join(', ')}.`);
+		throw new ThermoError(
+			'unknown-fluid',
+			'The fluid must be given as a string id.',
+			`Use one of: ${fluidIds().join(', ')}.`
+		);
 	const hit = compiled.get(id);
 	if (hit) return hit;
 	const data = findData(id);
 	if (!data)
-		throw new ThermoError('unknown-fluid', `Unknown fluid "${id}".`, `Use one of: ${fluidIds().join(', ')}.`);
+		throw new ThermoError(
+			'unknown-fluid',
+			`Unknown fluid "${id}".`,
+			`Use one of: ${fluidIds().join(', ')}.`
+		);
 	let fl = compiled.get(data.id);
 	if (!fl) {
 		fl = loadFluid(data);

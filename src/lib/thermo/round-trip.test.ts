@@ -7,7 +7,14 @@
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from './errors.ts';
 import { fixState, saturationAtP, saturationAtT } from './index.ts';
-import { PAIRS, expectFinite, inputsFrom, relErr, solveLike, spread } from './pairs.test-support.ts';
+import {
+	PAIRS,
+	expectFinite,
+	inputsFrom,
+	relErr,
+	solveLike,
+	spread
+} from './pairs.test-support.ts';
 import type { Inputs, State } from './types.ts';
 
 const R = 461.51805; // IAPWS R6-95(2018)
@@ -54,9 +61,15 @@ function roundTrip(seed: Inputs): number {
 		const base = dome ? 1e-5 : 1e-6;
 		for (const k of KEYS) {
 			const tol = base + (k === 'T' || k === 'P' || k === 'v' ? sp[k] : 0);
-			expect(relErr(k, st[k], ref[k], R, ref.T), `${where} ${k}: ${st[k]} vs ${ref[k]}`).toBeLessThan(tol);
+			expect(
+				relErr(k, st[k], ref[k], R, ref.T),
+				`${where} ${k}: ${st[k]} vs ${ref[k]}`
+			).toBeLessThan(tol);
 		}
-		if (!dome) expect(st.phase, where).toBe(nearLine(ref, sp.P) && st.phase === adjacentLine(ref) ? adjacentLine(ref) : ref.phase);
+		if (!dome)
+			expect(st.phase, where).toBe(
+				nearLine(ref, sp.P) && st.phase === adjacentLine(ref) ? adjacentLine(ref) : ref.phase
+			);
 		checked++;
 	}
 	return checked;
@@ -75,7 +88,8 @@ describe('water round trips through all 21 pairs', () => {
 				}
 				if (ok) n += roundTrip({ T, P });
 			}
-		for (const T of [290, 420, 560, 640]) for (const x of [0, 0.02, 0.5, 1]) n += roundTrip({ T, x });
+		for (const T of [290, 420, 560, 640])
+			for (const x of [0, 0.02, 0.5, 1]) n += roundTrip({ T, x });
 		expect(n).toBeGreaterThan(900);
 	});
 

@@ -6,7 +6,14 @@
  */
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from './errors.ts';
-import { fixState, getFluid, listFluids, saturationAtP, saturationAtT, saturationCurve } from './index.ts';
+import {
+	fixState,
+	getFluid,
+	listFluids,
+	saturationAtP,
+	saturationAtT,
+	saturationCurve
+} from './index.ts';
 import { evalPoint, Point } from './properties.ts';
 import { getCompiledFluid } from './registry.ts';
 import { TABLE_ACCURACY, satAtT, satGuess } from './solvers/saturation.ts';
@@ -17,7 +24,8 @@ describe('saturation of water', () => {
 	for (let k = 1; k <= 6; k++) Ts.push(647.096 - 10 ** -k * 647.096 * 1e-1); // 64.7 K … 0.065 mK below Tc
 
 	it('has equal P and equal g in both phases from the triple point to within 0.1 mK of Tc', () => {
-		const pL = new Point(), pV = new Point();
+		const pL = new Point(),
+			pV = new Point();
 		for (const T of Ts) {
 			const s = satAtT(fl, T);
 			evalPoint(fl, T, s.rhoL, pL, 2);
@@ -58,7 +66,9 @@ describe('saturation of water', () => {
 
 	it('clapeyron: dPs/dT from neighbouring saturation points equals Δs/Δv', () => {
 		for (const T of [300, 450, 600]) {
-			const a = saturationAtT('water', T - 0.01), b = saturationAtT('water', T + 0.01), m = saturationAtT('water', T);
+			const a = saturationAtT('water', T - 0.01),
+				b = saturationAtT('water', T + 0.01),
+				m = saturationAtT('water', T);
 			const slope = (b.P - a.P) / 0.02;
 			const clap = (m.vapor.s - m.liquid.s) / (m.vapor.v - m.liquid.v);
 			expect(Math.abs(slope / clap - 1)).toBeLessThan(1e-6);
@@ -71,7 +81,8 @@ describe('saturation of water', () => {
 			[600, 0.7]
 		]) {
 			const s = fixState('water', { T, x });
-			const up = fixState('water', { T: T + 0.01, v: s.v }), dn = fixState('water', { T: T - 0.01, v: s.v });
+			const up = fixState('water', { T: T + 0.01, v: s.v }),
+				dn = fixState('water', { T: T - 0.01, v: s.v });
 			expect(up.phase).toBe('saturated-mixture');
 			expect(Math.abs((up.u - dn.u) / 0.02 / (s.cv as number) - 1)).toBeLessThan(1e-5);
 			expect(s.cp).toBeNull();
@@ -108,7 +119,12 @@ describe('saturation table accuracy (every registered fluid)', () => {
 				const T = fl.Tt + ((fl.Tc * 0.9999 - fl.Tt) * i) / 600;
 				const s = satAtT(fl, T);
 				satGuess(fl, T, g);
-				worst = Math.max(worst, Math.abs(g.P / s.P - 1), Math.abs(g.rhoL / s.rhoL - 1), Math.abs(g.rhoV / s.rhoV - 1));
+				worst = Math.max(
+					worst,
+					Math.abs(g.P / s.P - 1),
+					Math.abs(g.rhoL / s.rhoL - 1),
+					Math.abs(g.rhoV / s.rhoV - 1)
+				);
 			}
 			expect(worst).toBeLessThan(TABLE_ACCURACY);
 		});
@@ -119,7 +135,8 @@ describe('saturation next to the equation’s own critical point (every register
 	for (const info of listFluids()) {
 		it(`${info.id}: solves from 1 K to 1 µK below Tc, the dome narrowing as θ^0.3…0.7 down to 10 µK`, () => {
 			const fl = getCompiledFluid(info.id);
-			const pL = new Point(), pV = new Point();
+			const pL = new Point(),
+				pV = new Point();
 			let prev: { gap: number; theta: number } | null = null;
 			for (const dT of [1, 0.3, 0.1, 0.03, 0.01, 3e-3, 1e-3, 3e-4, 1e-4, 3e-5, 1e-5, 3e-6, 1e-6]) {
 				const T = fl.Tc - dT;
@@ -129,9 +146,12 @@ describe('saturation next to the equation’s own critical point (every register
 				const RT = fl.R * T;
 				// the two conditions lose digits as the phases merge (within 0.1 mK one more)
 				const tol = dT >= 1e-4 ? 1 : 10;
-				expect(Math.abs(pL.P - pV.P) / (s.rhoL * RT), `${info.id} P at Tc − ${dT}`).toBeLessThan(1e-12 * tol);
+				expect(Math.abs(pL.P - pV.P) / (s.rhoL * RT), `${info.id} P at Tc − ${dT}`).toBeLessThan(
+					1e-12 * tol
+				);
 				expect(Math.abs(pL.g - pV.g) / RT, `${info.id} g at Tc − ${dT}`).toBeLessThan(1e-11 * tol);
-				const gap = s.rhoL - s.rhoV, theta = dT / fl.Tc;
+				const gap = s.rhoL - s.rhoV,
+					theta = dT / fl.Tc;
 				expect(s.rhoL).toBeGreaterThan(fl.rhoc);
 				expect(s.rhoV).toBeLessThan(fl.rhoc);
 				if (prev && dT >= 1e-5) {
@@ -141,7 +161,9 @@ describe('saturation next to the equation’s own critical point (every register
 					// 1 K and 1 mK below Tc and reaches ½ only closer in (its (∂P/∂ρ)_T vanishes at Tc, and it reproduces
 					// the paper's near-critical verification point, 383 K and 4.29 mol/dm³, to 7 digits): 0.25 for it
 					const e = Math.log(gap / prev.gap) / Math.log(theta / prev.theta);
-					expect(e, `${info.id} gap exponent at Tc − ${dT}`).toBeGreaterThan(info.id === 'r1234ze-e' ? 0.25 : 0.3);
+					expect(e, `${info.id} gap exponent at Tc − ${dT}`).toBeGreaterThan(
+						info.id === 'r1234ze-e' ? 0.25 : 0.3
+					);
 					expect(e, `${info.id} gap exponent at Tc − ${dT}`).toBeLessThan(0.7);
 				}
 				prev = { gap, theta };
@@ -169,7 +191,11 @@ describe('the equation’s own critical point (FluidInfo.equationCritical, satur
 		expect(info.equationCritical.rho).toBeCloseTo(224.777509627, 5);
 		expect(info.equationCritical.P).toBeCloseTo(11359196.24, 1);
 		const c = saturationCurve('ammonia', 50).critical;
-		expect([c.T, c.P, c.rho]).toEqual([info.equationCritical.T, info.equationCritical.P, info.equationCritical.rho]);
+		expect([c.T, c.P, c.rho]).toEqual([
+			info.equationCritical.T,
+			info.equationCritical.P,
+			info.equationCritical.rho
+		]);
 	});
 
 	it('water: the equation’s critical point is the published one', () => {
@@ -187,7 +213,8 @@ describe('the equation’s own critical point (FluidInfo.equationCritical, satur
 			const p = new Point();
 			const Pat = (r: number) => evalPoint(fl, T, r, p, 1).P;
 			const h = 1e-3 * rho;
-			const d1 = (Pat(rho + h) - Pat(rho - h)) / (2 * h), d2 = (Pat(rho + h) - 2 * Pat(rho) + Pat(rho - h)) / (h * h);
+			const d1 = (Pat(rho + h) - Pat(rho - h)) / (2 * h),
+				d2 = (Pat(rho + h) - 2 * Pat(rho) + Pat(rho - h)) / (h * h);
 			// against the scale P/ρ and P/ρ² of each derivative (central differences: O(h²) left)
 			expect(Math.abs(d1) / (P / rho)).toBeLessThan(1e-6);
 			expect(Math.abs(d2) / (P / (rho * rho))).toBeLessThan(1e-3);

@@ -68,7 +68,18 @@ const FINITE_KEYS = ['T', 'P', 'v', 'rho', 'u', 'h', 's'] as const;
 
 function assertFinite(fl: Fluid, s: State): State {
 	// x − x is 0 for a finite x and NaN otherwise: one test for all seven on the common path
-	if (s.T - s.T + (s.P - s.P) + (s.v - s.v) + (s.rho - s.rho) + (s.u - s.u) + (s.h - s.h) + (s.s - s.s) === 0) return s;
+	if (
+		s.T -
+			s.T +
+			(s.P - s.P) +
+			(s.v - s.v) +
+			(s.rho - s.rho) +
+			(s.u - s.u) +
+			(s.h - s.h) +
+			(s.s - s.s) ===
+		0
+	)
+		return s;
 	const k = FINITE_KEYS.find((key) => !Number.isFinite(s[key]));
 	throw new ThermoError(
 		'no-convergence',
@@ -88,7 +99,13 @@ export function isCriticalPoint(fl: Fluid, T: number, rho: number): boolean {
  *   μ_JT = (T·α_V − 1)/(ρ·cp),  γ_s = ρw²/P,  (∂P/∂T)_v = (∂P/∂T)_ρ
  * (IAPWS R6-95(2018), Table 3 relations). `hfg` is set by saturatedState on the lines.
  */
-export function singleState(fl: Fluid, p: Point, phase: Phase, x: number | null = null, P = p.P): State {
+export function singleState(
+	fl: Fluid,
+	p: Point,
+	phase: Phase,
+	x: number | null = null,
+	P = p.P
+): State {
 	const crit = isCriticalPoint(fl, p.T, p.rho);
 	const cp = crit || !(p.cp > 0) ? null : finiteOrNull(p.cp);
 	const w = crit ? null : finiteOrNull(p.w);
@@ -121,7 +138,8 @@ export function singleState(fl: Fluid, p: Point, phase: Phase, x: number | null 
 
 /** Phase of a single-phase state at or above Tc, or at P ≥ Pc (see the rules above). */
 export function phaseAboveCritical(fl: Fluid, T: number, P: number): Phase {
-	if (T >= fl.Tc * (1 - CRITICAL_BAND)) return P >= fl.Pc * (1 - 1e-9) ? 'supercritical-fluid' : 'superheated-vapor';
+	if (T >= fl.Tc * (1 - CRITICAL_BAND))
+		return P >= fl.Pc * (1 - 1e-9) ? 'supercritical-fluid' : 'superheated-vapor';
 	return 'compressed-liquid';
 }
 
@@ -136,7 +154,9 @@ const sL = new Point();
 const sV = new Point();
 /** what sL and sV hold (saturatedState) */
 let memoFluid: Fluid | null = null;
-let memoT = 0, memoL = 0, memoV = 0;
+let memoT = 0,
+	memoL = 0,
+	memoV = 0;
 
 /** The saturated liquid and vapor points (order 2) the last saturatedState call evaluated at T, if that was for this fluid and T. */
 export function lastSaturatedPhases(fl: Fluid, T: number): [Point, Point] | null {
@@ -157,7 +177,8 @@ export function saturatedState(fl: Fluid, sat: SatPoint, x: number, pL?: Point, 
 	const T = sat.T;
 	// both phases are needed on either line (hfg); the liquid and vapor of one saturation asked
 	// for one after the other (saturationAtT, a leg's crossings) are evaluated once
-	const again = !pL && !pV && memoFluid === fl && memoT === T && memoL === sat.rhoL && memoV === sat.rhoV;
+	const again =
+		!pL && !pV && memoFluid === fl && memoT === T && memoL === sat.rhoL && memoV === sat.rhoV;
 	const L = pL ?? (again ? sL : evalPoint(fl, T, sat.rhoL, sL, 2));
 	const V = pV ?? (again ? sV : evalPoint(fl, T, sat.rhoV, sV, 2));
 	if (!pL && !pV) {
@@ -169,13 +190,17 @@ export function saturatedState(fl: Fluid, sat: SatPoint, x: number, pL?: Point, 
 	const hfg = finiteOrNull(V.h - L.h);
 	if (x <= 0) return { ...singleState(fl, L, 'saturated-liquid', 0, sat.P), hfg };
 	if (x >= 1) return { ...singleState(fl, V, 'saturated-vapor', 1, sat.P), hfg };
-	const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
+	const vL = 1 / sat.rhoL,
+		vV = 1 / sat.rhoV;
 	const v = vL + x * (vV - vL);
 	const dPs = (V.s - L.s) / (vV - vL);
 	// d(u, v)/dT along each saturation line
-	const drhoL = (dPs - L.dPdT) / L.dPdrho, drhoV = (dPs - V.dPdT) / V.dPdrho;
-	const duL = L.cv + ((L.P - T * L.dPdT) / (L.rho * L.rho)) * drhoL, dvL = -drhoL / (L.rho * L.rho);
-	const duV = V.cv + ((V.P - T * V.dPdT) / (V.rho * V.rho)) * drhoV, dvV = -drhoV / (V.rho * V.rho);
+	const drhoL = (dPs - L.dPdT) / L.dPdrho,
+		drhoV = (dPs - V.dPdT) / V.dPdrho;
+	const duL = L.cv + ((L.P - T * L.dPdT) / (L.rho * L.rho)) * drhoL,
+		dvL = -drhoL / (L.rho * L.rho);
+	const duV = V.cv + ((V.P - T * V.dPdT) / (V.rho * V.rho)) * drhoV,
+		dvV = -drhoV / (V.rho * V.rho);
 	const cv = (1 - x) * duL + x * duV - ((V.u - L.u) / (vV - vL)) * ((1 - x) * dvL + x * dvV);
 	return assertFinite(fl, {
 		fluid: fl.id,

@@ -85,7 +85,8 @@ export interface Precision {
  * - `liquid-side` / `vapor-side`: the denser / lighter candidate. For (T, P) exactly on the
  *   saturation line these also select the saturated liquid / saturated vapor.
  */
-export type RootHint = 'lower-T' | 'higher-T' | 'lower-P' | 'higher-P' | 'liquid-side' | 'vapor-side';
+export type RootHint =
+	'lower-T' | 'higher-T' | 'lower-P' | 'higher-P' | 'liquid-side' | 'vapor-side';
 
 export interface FixOptions {
 	hint?: RootHint;
@@ -133,7 +134,8 @@ export interface SaturationCurve {
 	melting?: State[];
 }
 
-export type Process = 'isobaric' | 'isochoric' | 'isothermal' | 'isentropic' | 'isenthalpic' | 'polytropic';
+export type Process =
+	'isobaric' | 'isochoric' | 'isothermal' | 'isentropic' | 'isenthalpic' | 'polytropic';
 
 export type TargetName = 'T' | 'P' | 'v' | 'rho' | 'u' | 'h' | 's' | 'x';
 
@@ -208,7 +210,8 @@ export interface FluidInfo {
  * give `mass` (kg) or `volume` (m³, the volume at the start: mass = V / v₁), not both; with neither
  * the totals are per 1 kg. A steady-flow device carries `massFlow` (kg/s).
  */
-export type PathSystem = { kind: 'closed'; mass?: number; volume?: number } | { kind: 'flow'; massFlow: number };
+export type PathSystem =
+	{ kind: 'closed'; mass?: number; volume?: number } | { kind: 'flow'; massFlow: number };
 
 /** One leg of a path: the process, one target property for its end, n for polytropic legs. */
 export interface PathLegSpec {
@@ -368,7 +371,15 @@ export interface PathResult {
 	states: PathState[];
 	legs: PathLeg[];
 	/** sums over the legs: per kg (J/kg; ds J/(kg·K)) and totals */
-	perKg: { q: number; w: number; wShaft: number; qFlow: number; du: number; dh: number; ds: number };
+	perKg: {
+		q: number;
+		w: number;
+		wShaft: number;
+		qFlow: number;
+		du: number;
+		dh: number;
+		ds: number;
+	};
 	totals: PathTotals;
 	/** null unless the path closes into a cycle */
 	cycle: CycleAnalysis | null;

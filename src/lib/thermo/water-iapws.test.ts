@@ -8,7 +8,14 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from './errors.ts';
 import { fixState, isSolidAt } from './index.ts';
-import { PAIRS, expectFinite, inputsFrom, relErr, solveLike, spread } from './pairs.test-support.ts';
+import {
+	PAIRS,
+	expectFinite,
+	inputsFrom,
+	relErr,
+	solveLike,
+	spread
+} from './pairs.test-support.ts';
 import type { Phase } from './types.ts';
 
 interface Row {
@@ -37,7 +44,9 @@ interface SatRow {
 	rhoV: number;
 }
 // python3-iapws 1.5.2 (Debian), IAPWS95 class
-const fixture = JSON.parse(readFileSync(new URL('../../../tests/reference/iapws-water.json', import.meta.url), 'utf8')) as {
+const fixture = JSON.parse(
+	readFileSync(new URL('../../../tests/reference/iapws-water.json', import.meta.url), 'utf8')
+) as {
 	source: string;
 	singlePhase: Row[];
 	saturation: SatRow[];
@@ -67,7 +76,13 @@ describe('water against python3-iapws (fixture)', () => {
 	it('has a fixture of a few hundred rows over every region', () => {
 		expect(fixture.source).toMatch(/python3-iapws/);
 		const regions = new Set(fixture.singlePhase.map((r) => r.region));
-		for (const reg of ['compressed-liquid', 'superheated-vapor', 'supercritical-fluid', 'near-critical']) expect(regions.has(reg)).toBe(true);
+		for (const reg of [
+			'compressed-liquid',
+			'superheated-vapor',
+			'supercritical-fluid',
+			'near-critical'
+		])
+			expect(regions.has(reg)).toBe(true);
 		expect(fixture.singlePhase.length).toBeGreaterThan(200);
 		expect(fixture.saturation.length).toBeGreaterThan(50);
 	});
@@ -77,7 +92,8 @@ describe('water against python3-iapws (fixture)', () => {
 			const st = fixState('water', { T: r.T, rho: r.rho });
 			expectFinite(st);
 			const where = `${r.region} T=${r.T} rho=${r.rho}`;
-			for (const k of ['P', 'u', 'h', 's'] as const) expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}`).toBeLessThan(1e-9);
+			for (const k of ['P', 'u', 'h', 's'] as const)
+				expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}`).toBeLessThan(1e-9);
 			expect(Math.abs((st.cv as number) / r.cv - 1), `${where} cv`).toBeLessThan(1e-9);
 			expect(Math.abs((st.cp as number) / r.cp - 1), `${where} cp`).toBeLessThan(1e-8);
 			expect(Math.abs((st.w as number) / r.w - 1), `${where} w`).toBeLessThan(1e-9);
@@ -104,7 +120,9 @@ describe('water against python3-iapws (fixture)', () => {
 				const sp = spread('water', r, a, b);
 				for (const k of KEYS) {
 					const tol = 1e-6 + (k === 'T' || k === 'P' || k === 'v' ? sp[k] : 0);
-					expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}: ${st[k]} vs ${r[k]}`).toBeLessThan(tol);
+					expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}: ${st[k]} vs ${r[k]}`).toBeLessThan(
+						tol
+					);
 				}
 			}
 		}
@@ -117,8 +135,11 @@ describe('water against python3-iapws (fixture)', () => {
 			const st = fixState('water', { T: r.T, x: r.x });
 			expectFinite(st);
 			const where = `T=${r.T} x=${r.x}`;
-			for (const k of ['P', 'v', 'u', 'h', 's'] as const) expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}`).toBeLessThan(1e-5);
-			expect(st.phase).toBe(r.x === 0 ? 'saturated-liquid' : r.x === 1 ? 'saturated-vapor' : 'saturated-mixture');
+			for (const k of ['P', 'v', 'u', 'h', 's'] as const)
+				expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}`).toBeLessThan(1e-5);
+			expect(st.phase).toBe(
+				r.x === 0 ? 'saturated-liquid' : r.x === 1 ? 'saturated-vapor' : 'saturated-mixture'
+			);
 			const liq = fixState('water', { T: r.T, x: 0 });
 			const vap = fixState('water', { T: r.T, x: 1 });
 			expect(Math.abs(liq.rho / r.rhoL - 1), `${where} rho'`).toBeLessThan(1e-5);
@@ -135,8 +156,11 @@ describe('water against python3-iapws (fixture)', () => {
 					// T and P are not independent on the dome; the hint picks a saturated end
 					expect(() => fixState('water', inputs), where).toThrowError(ThermoError);
 					if (r.x === 0 || r.x === 1) {
-						const st = fixState('water', inputs, { hint: r.x === 0 ? 'liquid-side' : 'vapor-side' });
-						for (const k of KEYS) expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}`).toBeLessThan(1e-5);
+						const st = fixState('water', inputs, {
+							hint: r.x === 0 ? 'liquid-side' : 'vapor-side'
+						});
+						for (const k of KEYS)
+							expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}`).toBeLessThan(1e-5);
 					}
 					continue;
 				}
@@ -153,11 +177,17 @@ describe('water against python3-iapws (fixture)', () => {
 					// pascals, so a compressed liquid that close to the line is the same answer
 					const liq = fixState('water', { T: r.T, rho: r.rho });
 					const row = { ...liq, region: 'saturated-liquid', cv: 0, cp: 0, w: 0 } as unknown as Row;
-					expect(relErr('P', st.P, r.P, R, r.T), where).toBeLessThan(1e-5 + spread('water', row, 'u', 's').P);
-					for (const k of ['T', 'v', 'u', 'h', 's'] as const) expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}`).toBeLessThan(1e-5);
+					expect(relErr('P', st.P, r.P, R, r.T), where).toBeLessThan(
+						1e-5 + spread('water', row, 'u', 's').P
+					);
+					for (const k of ['T', 'v', 'u', 'h', 's'] as const)
+						expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}`).toBeLessThan(1e-5);
 					continue;
 				}
-				for (const k of KEYS) expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}: ${st[k]} vs ${r[k]}`).toBeLessThan(1e-5);
+				for (const k of KEYS)
+					expect(relErr(k, st[k], r[k], R, r.T), `${where} ${k}: ${st[k]} vs ${r[k]}`).toBeLessThan(
+						1e-5
+					);
 				expect(st.x, where).not.toBeNull();
 				expect(Math.abs((st.x as number) - r.x), `${where} x`).toBeLessThan(1e-5);
 			}
@@ -168,6 +198,9 @@ describe('water against python3-iapws (fixture)', () => {
 describe('water fixture rows beyond the melting curve', () => {
 	it('are refused as solid (IAPWS R14-08(2011) melting curves of ices V, VI, VII)', () => {
 		expect(solidRows.length).toBeGreaterThan(0);
-		for (const r of solidRows) expect(() => fixState('water', { T: r.T, rho: r.rho }), `T=${r.T} P=${r.P}`).toThrow(/solid, not a fluid/);
+		for (const r of solidRows)
+			expect(() => fixState('water', { T: r.T, rho: r.rho }), `T=${r.T} P=${r.P}`).toThrow(
+				/solid, not a fluid/
+			);
 	});
 });

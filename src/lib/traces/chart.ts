@@ -6,10 +6,18 @@ import type { TracePoint } from './types';
  * readings on the saturation line without a logged v as a band across the dome from v′ to v″ at
  * their T and P (their v is not determined). Client-safe (no engine, no CSV reader).
  */
-export function chartTrace(trace: { id: string; name: string; points: readonly TracePoint[] }): MeasuredTrace {
+export function chartTrace(trace: {
+	id: string;
+	name: string;
+	points: readonly TracePoint[];
+}): MeasuredTrace {
 	return {
 		id: trace.id,
 		label: trace.name,
-		points: trace.points.map((p) => (p.vRange && p.vLogged === null ? { T: p.T, P: p.P, v: null, inDome: true, vBand: p.vRange } : { T: p.T, P: p.P, v: p.vFrom === 'estimated' ? null : p.v, inDome: p.inDome }))
+		points: trace.points.map((p) =>
+			p.vRange && p.vLogged === null
+				? { T: p.T, P: p.P, v: null, inDome: true, vBand: p.vRange }
+				: { T: p.T, P: p.P, v: p.vFrom === 'estimated' ? null : p.v, inDome: p.inDome }
+		)
 	};
 }

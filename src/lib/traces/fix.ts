@@ -29,7 +29,11 @@ export interface FixOptions {
  * Points the engine cannot fix (below the triple point, beyond the formulation's range) are returned
  * as rejected lines with the engine's reason.
  */
-export function fixTracePoints(fluid: string, raw: readonly RawTracePoint[], options: FixOptions = {}): { points: TracePoint[]; rejected: RejectedLine[] } {
+export function fixTracePoints(
+	fluid: string,
+	raw: readonly RawTracePoint[],
+	options: FixOptions = {}
+): { points: TracePoint[]; rejected: RejectedLine[] } {
 	const tol = options.toleranceK ?? DEFAULT_SATURATION_TOLERANCE;
 	const info = getFluid(fluid);
 	const points: TracePoint[] = [];
@@ -47,15 +51,57 @@ export function fixTracePoints(fluid: string, raw: readonly RawTracePoint[], opt
 			if (dTsat !== null && sat && Math.abs(dTsat) <= tol) {
 				if (r.v !== null) {
 					const st = fixState(fluid, { P: r.P, v: r.v });
-					points.push({ line: r.line, t: r.t, P: r.P, T: r.T, vLogged: r.v, v: r.v, vFrom: 'logged', phase: st.phase, x: st.x, inDome: true, dTsat });
-				} else points.push({ line: r.line, t: r.t, P: r.P, T: r.T, vLogged: null, v: null, vFrom: null, phase: null, x: null, inDome: true, dTsat, vRange: [sat.vl, sat.vv] });
+					points.push({
+						line: r.line,
+						t: r.t,
+						P: r.P,
+						T: r.T,
+						vLogged: r.v,
+						v: r.v,
+						vFrom: 'logged',
+						phase: st.phase,
+						x: st.x,
+						inDome: true,
+						dTsat
+					});
+				} else
+					points.push({
+						line: r.line,
+						t: r.t,
+						P: r.P,
+						T: r.T,
+						vLogged: null,
+						v: null,
+						vFrom: null,
+						phase: null,
+						x: null,
+						inDome: true,
+						dTsat,
+						vRange: [sat.vl, sat.vv]
+					});
 				continue;
 			}
 			const st = fixState(fluid, { T: r.T, P: r.P });
-			points.push({ line: r.line, t: r.t, P: r.P, T: r.T, vLogged: r.v, v: st.v, vFrom: 'P-T', phase: st.phase, x: st.x, inDome: false, dTsat });
+			points.push({
+				line: r.line,
+				t: r.t,
+				P: r.P,
+				T: r.T,
+				vLogged: r.v,
+				v: st.v,
+				vFrom: 'P-T',
+				phase: st.phase,
+				x: st.x,
+				inDome: false,
+				dTsat
+			});
 		} catch (e) {
 			if (!(e instanceof ThermoError)) throw e;
-			rejected.push({ line: r.line, reason: `${info.name} cannot be fixed there: ${e.message}`, text: r.text });
+			rejected.push({
+				line: r.line,
+				reason: `${info.name} cannot be fixed there: ${e.message}`,
+				text: r.text
+			});
 		}
 	}
 	return { points, rejected };

@@ -22,11 +22,14 @@ export interface ReadTraceOptions extends TraceCsvOptions {
  */
 export function readTraceCsv(input: string | Uint8Array, options: ReadTraceOptions): TraceResult {
 	const tol = options.toleranceK ?? DEFAULT_SATURATION_TOLERANCE;
-	if (!(tol >= 0 && tol <= MAX_SATURATION_TOLERANCE)) throw new RangeError(`toleranceK must be within 0…${MAX_SATURATION_TOLERANCE} K`);
+	if (!(tol >= 0 && tol <= MAX_SATURATION_TOLERANCE))
+		throw new RangeError(`toleranceK must be within 0…${MAX_SATURATION_TOLERANCE} K`);
 	const parsed = parseTraceCsv(input, options);
 	if (!parsed.ok) return parsed;
 	const fixed = fixTracePoints(options.fluid, parsed.points, { toleranceK: tol });
-	const rejected = [...parsed.rejected, ...fixed.rejected].sort((a, b) => a.line - b.line).slice(0, MAX_LISTED_REJECTIONS);
+	const rejected = [...parsed.rejected, ...fixed.rejected]
+		.sort((a, b) => a.line - b.line)
+		.slice(0, MAX_LISTED_REJECTIONS);
 	const rejectedCount = parsed.rejectedCount + fixed.rejected.length;
 
 	if (rejectedCount > 0 && !options.allowRejected) {
@@ -44,7 +47,8 @@ export function readTraceCsv(input: string | Uint8Array, options: ReadTraceOptio
 		return {
 			ok: false,
 			code: 'no-points',
-			message: 'The file has a header but no readings below it. Add one line per reading under the header.',
+			message:
+				'The file has a header but no readings below it. Add one line per reading under the header.',
 			rejected,
 			rejectedCount
 		};

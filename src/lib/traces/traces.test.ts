@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { MAX_TRACE_BYTES, MAX_TRACE_ROWS, parseTraceCsv, readTraceCsv, type TraceRefusal, type TraceReading } from './index';
+import {
+	MAX_TRACE_BYTES,
+	MAX_TRACE_ROWS,
+	parseTraceCsv,
+	readTraceCsv,
+	type TraceRefusal,
+	type TraceReading
+} from './index';
 import { chartTrace } from './chart';
 import { openSaturationPoints } from './fix';
 import type { TracePoint } from './types';
@@ -17,11 +24,14 @@ function ok(r: ReturnType<typeof readTraceCsv>): TraceReading {
 	if (!r.ok) throw new Error(`refused: ${r.code} ${r.message} ${JSON.stringify(r.rejected)}`);
 	return r;
 }
-function refused(r: ReturnType<typeof readTraceCsv> | ReturnType<typeof parseTraceCsv>): TraceRefusal {
+function refused(
+	r: ReturnType<typeof readTraceCsv> | ReturnType<typeof parseTraceCsv>
+): TraceRefusal {
 	if (r.ok) throw new Error('accepted a file that should be refused');
 	return r;
 }
-const read = (text: string | Uint8Array, extra: Partial<Parameters<typeof readTraceCsv>[1]> = {}) => readTraceCsv(text, { fluid: 'water', atmosphere: ATM, ...extra });
+const read = (text: string | Uint8Array, extra: Partial<Parameters<typeof readTraceCsv>[1]> = {}) =>
+	readTraceCsv(text, { fluid: 'water', atmosphere: ATM, ...extra });
 
 describe('the header convention', () => {
 	it('reads time, gauge pressure and temperature, converting to SI absolute', () => {
@@ -76,16 +86,26 @@ describe('the header convention', () => {
 		const noHeader = refused(read('0,100,20\n5,150,25\n'));
 		expect(noHeader.code).toBe('no-header');
 		expect(noHeader.rejected[0].line).toBe(1);
-		expect(refused(read('time [s],P [kPa g]\n0,100\n')).message).toMatch(/no temperature \(T\) column/);
-		expect(refused(read('time [s],P [kPa g],T [°C],temperature [K]\n0,1,2,3\n')).message).toMatch(/twice/);
+		expect(refused(read('time [s],P [kPa g]\n0,100\n')).message).toMatch(
+			/no temperature \(T\) column/
+		);
+		expect(refused(read('time [s],P [kPa g],T [°C],temperature [K]\n0,1,2,3\n')).message).toMatch(
+			/twice/
+		);
 		const unitless = refused(read('time [s],P,T [°C]\n0,100,20\n'));
 		expect(unitless.code).toBe('bad-header');
 		expect(unitless.message).toMatch(/has no unit.*P \[kPa g\]/);
-		expect(refused(read('time [s],P [kPa a],T [°C],v [m3/kg],rho [kg/m3]\n0,100,20,1,1\n')).message).toMatch(/both a v and a rho/);
+		expect(
+			refused(read('time [s],P [kPa a],T [°C],v [m3/kg],rho [kg/m3]\n0,100,20,1,1\n')).message
+		).toMatch(/both a v and a rho/);
 	});
 
 	it('leaves unknown columns out with a note, skips comments and blank lines, allows a trailing delimiter', () => {
-		const r = ok(read('# logger K-101 jacket\n# channel 3\ntime [s],flow [kg/s],P [kPa a],T [°C],\n\n0,0.2,200,20,\n# pause\n10,0.3,210,21,\n'));
+		const r = ok(
+			read(
+				'# logger K-101 jacket\n# channel 3\ntime [s],flow [kg/s],P [kPa a],T [°C],\n\n0,0.2,200,20,\n# pause\n10,0.3,210,21,\n'
+			)
+		);
 		expect(r.points.map((p) => p.line)).toEqual([5, 7]);
 		expect(r.notes.join(' ')).toMatch(/"flow \[kg\/s\]".*left out/);
 		expect(r.notes.join(' ')).toMatch(/3 comment lines/);
@@ -94,7 +114,18 @@ describe('the header convention', () => {
 
 describe('malformed files', () => {
 	it('lists every unreadable line with its number and reason, and keeps nothing', () => {
-		const text = ['time [s],P [kPa a],T [°C]', '0,200,20', '5,abc,21', '', '10,210', '15,220,22,9', '20,230,', '25,240,-300', '30,-1,20', '35,"250,20'].join('\n');
+		const text = [
+			'time [s],P [kPa a],T [°C]',
+			'0,200,20',
+			'5,abc,21',
+			'',
+			'10,210',
+			'15,220,22,9',
+			'20,230,',
+			'25,240,-300',
+			'30,-1,20',
+			'35,"250,20'
+		].join('\n');
 		const r = refused(read(text));
 		expect(r.code).toBe('rejected-lines');
 		expect(r.rejectedCount).toBe(7);
@@ -113,7 +144,15 @@ describe('malformed files', () => {
 
 	it('names every problem of a malformed file in one answer: each header fault and each bad line, with line numbers', () => {
 		// a bare pressure unit, an unknown temperature unit, no time unit, and three bad data lines
-		const text = ['# logger 7', 'time,P [kPa],T [degC-ish]', '0,200,20', '5,2,0,21', '10,abc,22', '15,,23', '20,230,24'].join('\n');
+		const text = [
+			'# logger 7',
+			'time,P [kPa],T [degC-ish]',
+			'0,200,20',
+			'5,2,0,21',
+			'10,abc,22',
+			'15,,23',
+			'20,230,24'
+		].join('\n');
 		const r = refused(read(text));
 		expect(r.rejectedCount).toBe(6);
 		expect(r.rejected.map((x) => x.line)).toEqual([2, 2, 2, 4, 5, 6]);
@@ -125,7 +164,15 @@ describe('malformed files', () => {
 		expect(r.rejected[5].reason).toMatch(/no P \[kPa\] value/);
 		// the message itself says all of it, not only the first
 		expect(r.message).toMatch(/^The file has 6 problems; nothing was saved\. The header has 3: /);
-		for (const bit of ['has no unit', 'absolute or gauge', 'degC-ish', 'line 4: 4 values', 'line 5: "abc"', 'line 6: no P']) expect(r.message).toContain(bit);
+		for (const bit of [
+			'has no unit',
+			'absolute or gauge',
+			'degC-ish',
+			'line 4: 4 values',
+			'line 5: "abc"',
+			'line 6: no P'
+		])
+			expect(r.message).toContain(bit);
 	});
 
 	it('spells out up to five unreadable lines in the message and counts the rest', () => {
@@ -140,7 +187,9 @@ describe('malformed files', () => {
 	});
 
 	it('keeps the readable lines only when asked to leave the others out', () => {
-		const r = ok(read('time [s],P [kPa a],T [°C]\n0,200,20\n5,abc,21\n10,210,22\n', { allowRejected: true }));
+		const r = ok(
+			read('time [s],P [kPa a],T [°C]\n0,200,20\n5,abc,21\n10,210,22\n', { allowRejected: true })
+		);
 		expect(r.points.map((p) => p.line)).toEqual([2, 4]);
 		expect(r.rejectedCount).toBe(1);
 		expect(r.rejected[0]).toMatchObject({ line: 3 });
@@ -149,7 +198,12 @@ describe('malformed files', () => {
 	it('strips a UTF-8 byte order mark (spreadsheet exports)', () => {
 		const r = ok(read('\ufefftime [s],P [kPa a],T [°C]\n0,200,20\n'));
 		expect(r.columns[0].kind).toBe('time');
-		const bytes = new Uint8Array([0xef, 0xbb, 0xbf, ...new TextEncoder().encode('time [s],P [kPa a],T [°C]\n0,200,20\n')]);
+		const bytes = new Uint8Array([
+			0xef,
+			0xbb,
+			0xbf,
+			...new TextEncoder().encode('time [s],P [kPa a],T [°C]\n0,200,20\n')
+		]);
 		expect(ok(read(bytes)).points).toHaveLength(1);
 	});
 
@@ -159,14 +213,18 @@ describe('malformed files', () => {
 		expect(r.points[1].P).toBeCloseTo(160_000 + ATM, 6);
 		const commas = refused(read('time [s];P [bar g];T [°C]\n0;1,5;20\n5;1,6;21,5\n'));
 		expect(commas.rejected.map((x) => x.line)).toEqual([2, 3]);
-		expect(commas.rejected[1].reason).toMatch(/"1,6" in P \[bar g\] uses a decimal comma; write 1\.6.*"21,5" in T \[°C\] uses a decimal comma/);
+		expect(commas.rejected[1].reason).toMatch(
+			/"1,6" in P \[bar g\] uses a decimal comma; write 1\.6.*"21,5" in T \[°C\] uses a decimal comma/
+		);
 		const tabs = ok(read('time [s]\tP [kPa a]\tT [°C]\n0\t200\t20\n'));
 		expect(tabs.delimiter).toBe('\t');
 	});
 
 	it('says when a line uses semicolons in a comma file', () => {
 		const r = refused(read('time [s],P [kPa a],T [°C]\n0;200;20\n'));
-		expect(r.rejected[0].reason).toMatch(/1 value where the header has 3 columns separated by commas \(this line uses semicolons/);
+		expect(r.rejected[0].reason).toMatch(
+			/1 value where the header has 3 columns separated by commas \(this line uses semicolons/
+		);
 	});
 
 	it('refuses an empty file, a file of comments, and a header with no readings', () => {
@@ -183,7 +241,10 @@ describe('malformed files', () => {
 		expect(r.code).toBe('too-many-rows');
 		expect(r.message).toContain('10,000');
 		expect(r.message).toContain(`line ${MAX_TRACE_ROWS + 2}`);
-		expect(refused(read('time [s],P [kPa a],T [°C]\n0,200,20\n1,200,20\n2,200,20\n', { maxRows: 2 })).code).toBe('too-many-rows');
+		expect(
+			refused(read('time [s],P [kPa a],T [°C]\n0,200,20\n1,200,20\n2,200,20\n', { maxRows: 2 }))
+				.code
+		).toBe('too-many-rows');
 	});
 
 	it('refuses files over the size limit, and text that is not UTF-8', () => {
@@ -197,8 +258,18 @@ describe('malformed files', () => {
 
 	it('refuses time going backwards, and reads ISO 8601 timestamps as seconds from the first', () => {
 		const back = refused(read('time [s],P [kPa a],T [°C]\n0,200,20\n10,200,20\n5,200,20\n'));
-		expect(back.rejected).toEqual([{ line: 4, reason: expect.stringMatching(/time goes backwards: 5 s is earlier than line 3/), text: '5,200,20' }]);
-		const iso = ok(read('time [iso],P [kPa a],T [°C]\n2026-01-05T09:00:00Z,200,20\n2026-01-05T10:30:15+01:00,200,20\n2026-01-05 09:45,200,20\n'));
+		expect(back.rejected).toEqual([
+			{
+				line: 4,
+				reason: expect.stringMatching(/time goes backwards: 5 s is earlier than line 3/),
+				text: '5,200,20'
+			}
+		]);
+		const iso = ok(
+			read(
+				'time [iso],P [kPa a],T [°C]\n2026-01-05T09:00:00Z,200,20\n2026-01-05T10:30:15+01:00,200,20\n2026-01-05 09:45,200,20\n'
+			)
+		);
 		// 10:30:15+01:00 is 09:30:15Z; a timestamp without a zone is read on the logger's clock
 		expect(iso.points.map((p) => p.t)).toEqual([0, 1815, 2700]);
 		expect(iso.startedAt).toBe('2026-01-05T09:00:00Z');
@@ -212,7 +283,10 @@ describe('fixing points with the engine', () => {
 	const degC = (T: number) => (T - 273.15).toFixed(6);
 
 	it('fixes single-phase pairs from P and T (v and phase against python3-iapws)', () => {
-		const lines = ['time [s],P [kPa a],T [°C]', ...ref.offsets.map((o, i) => `${i},${kPa(o.P)},${degC(o.T)}`)];
+		const lines = [
+			'time [s],P [kPa a],T [°C]',
+			...ref.offsets.map((o, i) => `${i},${kPa(o.P)},${degC(o.T)}`)
+		];
 		const r = ok(read(lines.join('\n')));
 		expect(r.inDomeCount).toBe(0);
 		r.points.forEach((p, i) => {
@@ -231,7 +305,11 @@ describe('fixing points with the engine', () => {
 		const lines = ['time [s],P [kPa a],T [°C]'];
 		ref.saturation.forEach((s, i) => {
 			// python3-iapws 1.5.2 (Debian), IAPWS95(T, x=0): p_s(T)
-			lines.push(`${3 * i},${kPa(s.P)},${degC(s.T + 0.3)}`, `${3 * i + 1},${kPa(s.P)},${degC(s.T - 0.4)}`, `${3 * i + 2},${kPa(s.P)},${degC(s.T + 0.7)}`);
+			lines.push(
+				`${3 * i},${kPa(s.P)},${degC(s.T + 0.3)}`,
+				`${3 * i + 1},${kPa(s.P)},${degC(s.T - 0.4)}`,
+				`${3 * i + 2},${kPa(s.P)},${degC(s.T + 0.7)}`
+			);
 		});
 		const r = ok(read(lines.join('\n')));
 		for (let i = 0; i < ref.saturation.length; i++) {
@@ -249,7 +327,11 @@ describe('fixing points with the engine', () => {
 	it('fixes an in-dome point from a logged v, with its quality', () => {
 		const s = ref.saturation[2]; // 373.15 K
 		const v = s.vl + 0.25 * (s.vv - s.vl);
-		const r = ok(read(`time [s],P [kPa a],T [°C],v [m³/kg]\n0,${kPa(s.P)},${degC(s.T + 0.1)},${v.toPrecision(12)}\n`));
+		const r = ok(
+			read(
+				`time [s],P [kPa a],T [°C],v [m³/kg]\n0,${kPa(s.P)},${degC(s.T + 0.1)},${v.toPrecision(12)}\n`
+			)
+		);
 		const p = r.points[0];
 		expect(p.inDome).toBe(true);
 		expect(p.vFrom).toBe('logged');
@@ -288,7 +370,19 @@ describe('fixing points with the engine', () => {
 
 	it('reads back an older upload’s interpolated v as open, with its [v′, v″]', () => {
 		const s = ref.saturation[3]; // 393.15 K
-		const old: TracePoint = { line: 3, t: 10, P: s.P, T: s.T, vLogged: null, v: 0.05, vFrom: 'estimated', phase: null, x: null, inDome: true, dTsat: 0 };
+		const old: TracePoint = {
+			line: 3,
+			t: 10,
+			P: s.P,
+			T: s.T,
+			vLogged: null,
+			v: 0.05,
+			vFrom: 'estimated',
+			phase: null,
+			x: null,
+			inDome: true,
+			dTsat: 0
+		};
 		const [p] = openSaturationPoints('water', [old]);
 		expect(p.v).toBeNull();
 		expect(p.vFrom).toBeNull();
@@ -309,10 +403,16 @@ describe('fixing points with the engine', () => {
 describe('other fluids', () => {
 	it('flags ammonia readings at its saturation pressure, and fixes those a few kelvin off it', () => {
 		// python3-iapws 1.5.2 (Debian), iapws.ammonia.NH3: saturated liquid at 273.15 K — tests/reference/iapws-ammonia.json
-		const amm = JSON.parse(readFileSync('tests/reference/iapws-ammonia.json', 'utf8')) as { saturatedLiquidAt273_15: { T: number; P: number } };
+		const amm = JSON.parse(readFileSync('tests/reference/iapws-ammonia.json', 'utf8')) as {
+			saturatedLiquidAt273_15: { T: number; P: number };
+		};
 		const { P } = amm.saturatedLiquidAt273_15;
 		const kPaA = (P / 1000).toPrecision(12);
-		const r = ok(readTraceCsv(`time [s],P [kPa a],T [°C]\n0,${kPaA},0.2\n10,${kPaA},-3\n20,${kPaA},3\n`, { fluid: 'ammonia' }));
+		const r = ok(
+			readTraceCsv(`time [s],P [kPa a],T [°C]\n0,${kPaA},0.2\n10,${kPaA},-3\n20,${kPaA},3\n`, {
+				fluid: 'ammonia'
+			})
+		);
 		expect(r.points.map((p) => p.inDome)).toEqual([true, false, false]);
 		expect(r.points[1].phase).toBe('compressed-liquid');
 		expect(r.points[2].phase).toBe('superheated-vapor');

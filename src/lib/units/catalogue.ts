@@ -121,20 +121,67 @@ function add(spec: Spec) {
 
 // temperature (K is the engine's; °C and °F are the display units; °R accepted)
 add({ id: 'K', label: 'K', quantity: 'temperature', system: 'other', aliases: ['kelvin'] });
-add({ id: 'degC', label: '°C', quantity: 'temperature', system: 'si', zero: CELSIUS_OFFSET, aliases: ['C', 'degC', 'celsius'] });
-add({ id: 'degF', label: '°F', quantity: 'temperature', system: 'us', zero: FAHRENHEIT_OFFSET, divisor: 1.8, aliases: ['F', 'degF', 'fahrenheit'] });
-add({ id: 'degR', label: '°R', quantity: 'temperature', system: 'other', divisor: 1.8, aliases: ['R', 'degR', 'rankine'] });
+add({
+	id: 'degC',
+	label: '°C',
+	quantity: 'temperature',
+	system: 'si',
+	zero: CELSIUS_OFFSET,
+	aliases: ['C', 'degC', 'celsius']
+});
+add({
+	id: 'degF',
+	label: '°F',
+	quantity: 'temperature',
+	system: 'us',
+	zero: FAHRENHEIT_OFFSET,
+	divisor: 1.8,
+	aliases: ['F', 'degF', 'fahrenheit']
+});
+add({
+	id: 'degR',
+	label: '°R',
+	quantity: 'temperature',
+	system: 'other',
+	divisor: 1.8,
+	aliases: ['R', 'degR', 'rankine']
+});
 
 // temperature differences: same spellings, no offset; shown as K (SI) and °F (US)
 add({ id: 'dK', label: 'K', quantity: 'temperatureDifference', system: 'si', aliases: ['kelvin'] });
-add({ id: 'dC', label: '°C', quantity: 'temperatureDifference', system: 'other', aliases: ['C', 'degC', 'celsius'] });
-add({ id: 'dF', label: '°F', quantity: 'temperatureDifference', system: 'us', divisor: 1.8, aliases: ['F', 'degF', 'fahrenheit'] });
-add({ id: 'dR', label: '°R', quantity: 'temperatureDifference', system: 'other', divisor: 1.8, aliases: ['R', 'degR', 'rankine'] });
+add({
+	id: 'dC',
+	label: '°C',
+	quantity: 'temperatureDifference',
+	system: 'other',
+	aliases: ['C', 'degC', 'celsius']
+});
+add({
+	id: 'dF',
+	label: '°F',
+	quantity: 'temperatureDifference',
+	system: 'us',
+	divisor: 1.8,
+	aliases: ['F', 'degF', 'fahrenheit']
+});
+add({
+	id: 'dR',
+	label: '°R',
+	quantity: 'temperatureDifference',
+	system: 'other',
+	divisor: 1.8,
+	aliases: ['R', 'degR', 'rankine']
+});
 
 // pressure: every unit exists as absolute and gauge. Label convention (ours, used everywhere):
 // metric units carry a spaced suffix "a" or "g" (kPa a, kPa g, bar g); psi keeps the trade's
 // psia / psig. A pressure is never printed without one of the two.
-const pressureBases: { base: string; factor: number; system: UnitDef['system']; spaced: boolean }[] = [
+const pressureBases: {
+	base: string;
+	factor: number;
+	system: UnitDef['system'];
+	spaced: boolean;
+}[] = [
 	{ base: 'Pa', factor: 1, system: 'other', spaced: true },
 	{ base: 'kPa', factor: 1e3, system: 'si', spaced: true },
 	{ base: 'MPa', factor: 1e6, system: 'si', spaced: true },
@@ -164,68 +211,232 @@ for (const { base, factor, system, spaced } of pressureBases) {
 		aliases: [`${base}g`, `${base}gauge`, `${base}gage`, ...extra.map((e) => `${e}g`)]
 	});
 }
-add({ id: 'atm', label: 'atm', quantity: 'pressure', system: 'other', factor: STANDARD_ATMOSPHERE, reference: 'absolute', aliases: ['atma'] });
+add({
+	id: 'atm',
+	label: 'atm',
+	quantity: 'pressure',
+	system: 'other',
+	factor: STANDARD_ATMOSPHERE,
+	reference: 'absolute',
+	aliases: ['atma']
+});
 
 add({ id: 'm3/kg', label: 'm³/kg', quantity: 'specificVolume', system: 'si' });
-add({ id: 'L/kg', label: 'L/kg', quantity: 'specificVolume', system: 'other', factor: 1e-3, aliases: ['l/kg', 'dm3/kg'] });
-add({ id: 'cm3/g', label: 'cm³/g', quantity: 'specificVolume', system: 'other', factor: 1e-3, aliases: ['ml/g', 'mL/g'] });
-add({ id: 'ft3/lbm', label: 'ft³/lbm', quantity: 'specificVolume', system: 'us', factor: CUBIC_FOOT_PER_LBM, aliases: ['ft3/lb', 'cuft/lb', 'cuft/lbm'] });
+add({
+	id: 'L/kg',
+	label: 'L/kg',
+	quantity: 'specificVolume',
+	system: 'other',
+	factor: 1e-3,
+	aliases: ['l/kg', 'dm3/kg']
+});
+add({
+	id: 'cm3/g',
+	label: 'cm³/g',
+	quantity: 'specificVolume',
+	system: 'other',
+	factor: 1e-3,
+	aliases: ['ml/g', 'mL/g']
+});
+add({
+	id: 'ft3/lbm',
+	label: 'ft³/lbm',
+	quantity: 'specificVolume',
+	system: 'us',
+	factor: CUBIC_FOOT_PER_LBM,
+	aliases: ['ft3/lb', 'cuft/lb', 'cuft/lbm']
+});
 
 add({ id: 'kg/m3', label: 'kg/m³', quantity: 'density', system: 'si' });
-add({ id: 'g/cm3', label: 'g/cm³', quantity: 'density', system: 'other', factor: 1e3, aliases: ['g/ml', 'g/mL', 'kg/L', 'kg/l', 'kg/dm3'] });
-add({ id: 'lbm/ft3', label: 'lbm/ft³', quantity: 'density', system: 'us', factor: LBM_PER_CUBIC_FOOT, aliases: ['lb/ft3', 'lb/cuft', 'lbm/cuft'] });
+add({
+	id: 'g/cm3',
+	label: 'g/cm³',
+	quantity: 'density',
+	system: 'other',
+	factor: 1e3,
+	aliases: ['g/ml', 'g/mL', 'kg/L', 'kg/l', 'kg/dm3']
+});
+add({
+	id: 'lbm/ft3',
+	label: 'lbm/ft³',
+	quantity: 'density',
+	system: 'us',
+	factor: LBM_PER_CUBIC_FOOT,
+	aliases: ['lb/ft3', 'lb/cuft', 'lbm/cuft']
+});
 
 add({ id: 'J/kg', label: 'J/kg', quantity: 'specificEnergy', system: 'other' });
 add({ id: 'kJ/kg', label: 'kJ/kg', quantity: 'specificEnergy', system: 'si', factor: 1e3 });
 add({ id: 'MJ/kg', label: 'MJ/kg', quantity: 'specificEnergy', system: 'other', factor: 1e6 });
-add({ id: 'Btu/lbm', label: 'Btu/lbm', quantity: 'specificEnergy', system: 'us', factor: BTU_PER_LBM, aliases: ['Btu/lb', 'BTU/lb', 'BTU/lbm'] });
+add({
+	id: 'Btu/lbm',
+	label: 'Btu/lbm',
+	quantity: 'specificEnergy',
+	system: 'us',
+	factor: BTU_PER_LBM,
+	aliases: ['Btu/lb', 'BTU/lb', 'BTU/lbm']
+});
 
-add({ id: 'J/(kg·K)', label: 'J/(kg·K)', quantity: 'specificEntropy', system: 'other', aliases: ['J/kg/K', 'J/kgC', 'J/kg/C'] });
-add({ id: 'kJ/(kg·K)', label: 'kJ/(kg·K)', quantity: 'specificEntropy', system: 'si', factor: 1e3, aliases: ['kJ/kg/K', 'kJ/kgC', 'kJ/kg/C'] });
+add({
+	id: 'J/(kg·K)',
+	label: 'J/(kg·K)',
+	quantity: 'specificEntropy',
+	system: 'other',
+	aliases: ['J/kg/K', 'J/kgC', 'J/kg/C']
+});
+add({
+	id: 'kJ/(kg·K)',
+	label: 'kJ/(kg·K)',
+	quantity: 'specificEntropy',
+	system: 'si',
+	factor: 1e3,
+	aliases: ['kJ/kg/K', 'kJ/kgC', 'kJ/kg/C']
+});
 add({
 	id: 'Btu/(lbm·°R)',
 	label: 'Btu/(lbm·°R)',
 	quantity: 'specificEntropy',
 	system: 'us',
 	factor: BTU_PER_LBM_RANKINE,
-	aliases: ['Btu/lbm/R', 'Btu/lbR', 'Btu/lb/R', 'Btu/lbmF', 'Btu/lbF', 'Btu/lb/F', 'Btu/lbm/F', 'BTU/lbR', 'BTU/lbF']
+	aliases: [
+		'Btu/lbm/R',
+		'Btu/lbR',
+		'Btu/lb/R',
+		'Btu/lbmF',
+		'Btu/lbF',
+		'Btu/lb/F',
+		'Btu/lbm/F',
+		'BTU/lbR',
+		'BTU/lbF'
+	]
 });
 
 add({ id: 'kg', label: 'kg', quantity: 'mass', system: 'si' });
 add({ id: 'g', label: 'g', quantity: 'mass', system: 'other', factor: 1e-3 });
 add({ id: 't', label: 't', quantity: 'mass', system: 'other', factor: 1e3, aliases: ['tonne'] });
-add({ id: 'lbm', label: 'lbm', quantity: 'mass', system: 'us', factor: POUND_MASS, aliases: ['lb', 'lbs'] });
+add({
+	id: 'lbm',
+	label: 'lbm',
+	quantity: 'mass',
+	system: 'us',
+	factor: POUND_MASS,
+	aliases: ['lb', 'lbs']
+});
 
 add({ id: 'm3', label: 'm³', quantity: 'volume', system: 'si' });
-add({ id: 'L', label: 'L', quantity: 'volume', system: 'other', factor: 1e-3, aliases: ['l', 'dm3', 'litre', 'liter'] });
-add({ id: 'ft3', label: 'ft³', quantity: 'volume', system: 'us', factor: CUBIC_FOOT, aliases: ['cuft'] });
-add({ id: 'gal', label: 'US gal', quantity: 'volume', system: 'other', factor: US_GALLON, aliases: ['gal', 'USgal'] });
+add({
+	id: 'L',
+	label: 'L',
+	quantity: 'volume',
+	system: 'other',
+	factor: 1e-3,
+	aliases: ['l', 'dm3', 'litre', 'liter']
+});
+add({
+	id: 'ft3',
+	label: 'ft³',
+	quantity: 'volume',
+	system: 'us',
+	factor: CUBIC_FOOT,
+	aliases: ['cuft']
+});
+add({
+	id: 'gal',
+	label: 'US gal',
+	quantity: 'volume',
+	system: 'other',
+	factor: US_GALLON,
+	aliases: ['gal', 'USgal']
+});
 
 add({ id: 'kg/s', label: 'kg/s', quantity: 'massFlow', system: 'si' });
-add({ id: 'kg/h', label: 'kg/h', quantity: 'massFlow', system: 'other', factor: 1 / 3600, aliases: ['kg/hr'] });
-add({ id: 'lbm/h', label: 'lbm/h', quantity: 'massFlow', system: 'us', factor: LBM_PER_HOUR, aliases: ['lb/h', 'lb/hr', 'lbm/hr'] });
-add({ id: 'lbm/s', label: 'lbm/s', quantity: 'massFlow', system: 'other', factor: POUND_MASS, aliases: ['lb/s', 'lb/sec'] });
+add({
+	id: 'kg/h',
+	label: 'kg/h',
+	quantity: 'massFlow',
+	system: 'other',
+	factor: 1 / 3600,
+	aliases: ['kg/hr']
+});
+add({
+	id: 'lbm/h',
+	label: 'lbm/h',
+	quantity: 'massFlow',
+	system: 'us',
+	factor: LBM_PER_HOUR,
+	aliases: ['lb/h', 'lb/hr', 'lbm/hr']
+});
+add({
+	id: 'lbm/s',
+	label: 'lbm/s',
+	quantity: 'massFlow',
+	system: 'other',
+	factor: POUND_MASS,
+	aliases: ['lb/s', 'lb/sec']
+});
 
 add({ id: 'J', label: 'J', quantity: 'energy', system: 'other' });
 add({ id: 'kJ', label: 'kJ', quantity: 'energy', system: 'si', factor: 1e3 });
 add({ id: 'MJ', label: 'MJ', quantity: 'energy', system: 'other', factor: 1e6 });
 add({ id: 'GJ', label: 'GJ', quantity: 'energy', system: 'other', factor: 1e9 });
-add({ id: 'Btu', label: 'Btu', quantity: 'energy', system: 'us', factor: BTU_IT, aliases: ['BTU'] });
-add({ id: 'MMBtu', label: 'MMBtu', quantity: 'energy', system: 'other', factor: BTU_IT * 1e6, aliases: ['MMBTU'] });
+add({
+	id: 'Btu',
+	label: 'Btu',
+	quantity: 'energy',
+	system: 'us',
+	factor: BTU_IT,
+	aliases: ['BTU']
+});
+add({
+	id: 'MMBtu',
+	label: 'MMBtu',
+	quantity: 'energy',
+	system: 'other',
+	factor: BTU_IT * 1e6,
+	aliases: ['MMBTU']
+});
 
 add({ id: 'W', label: 'W', quantity: 'power', system: 'other' });
 add({ id: 'kW', label: 'kW', quantity: 'power', system: 'si', factor: 1e3 });
 add({ id: 'MW', label: 'MW', quantity: 'power', system: 'other', factor: 1e6 });
-add({ id: 'Btu/h', label: 'Btu/h', quantity: 'power', system: 'us', factor: BTU_PER_HOUR, aliases: ['Btu/hr', 'BTU/h', 'BTU/hr'] });
+add({
+	id: 'Btu/h',
+	label: 'Btu/h',
+	quantity: 'power',
+	system: 'us',
+	factor: BTU_PER_HOUR,
+	aliases: ['Btu/hr', 'BTU/h', 'BTU/hr']
+});
 add({ id: 'hp', label: 'hp', quantity: 'power', system: 'us', factor: HORSEPOWER });
 
 add({ id: 'm/s', label: 'm/s', quantity: 'speed', system: 'si' });
-add({ id: 'ft/s', label: 'ft/s', quantity: 'speed', system: 'us', factor: FOOT, aliases: ['fps', 'ft/sec'] });
+add({
+	id: 'ft/s',
+	label: 'ft/s',
+	quantity: 'speed',
+	system: 'us',
+	factor: FOOT,
+	aliases: ['fps', 'ft/sec']
+});
 
 add({ id: 'x1', label: '', quantity: 'quality', system: 'si' });
-add({ id: 'x%', label: '%', quantity: 'quality', system: 'other', factor: 0.01, aliases: ['percent'] });
+add({
+	id: 'x%',
+	label: '%',
+	quantity: 'quality',
+	system: 'other',
+	factor: 0.01,
+	aliases: ['percent']
+});
 add({ id: 'f1', label: '', quantity: 'fraction', system: 'other' });
-add({ id: 'f%', label: '%', quantity: 'fraction', system: 'si', factor: 0.01, aliases: ['percent'] });
+add({
+	id: 'f%',
+	label: '%',
+	quantity: 'fraction',
+	system: 'si',
+	factor: 0.01,
+	aliases: ['percent']
+});
 
 /** Every unit Statewright knows, by id. */
 export const UNITS: Readonly<Record<string, UnitDef>> = Object.freeze(
@@ -309,7 +520,8 @@ export function lookupUnit(text: string, quantity?: Quantity): UnitDef[] {
 	index ??= buildIndex();
 	const key = normaliseUnitText(text);
 	if (key === '') return [];
-	const keep = (list: UnitDef[] | undefined) => (list ?? []).filter((u) => !quantity || u.quantity === quantity);
+	const keep = (list: UnitDef[] | undefined) =>
+		(list ?? []).filter((u) => !quantity || u.quantity === quantity);
 	const exact = keep(index.exact.get(key));
 	if (exact.length) return exact;
 	return keep(index.folded.get(key.toLowerCase()));

@@ -35,8 +35,16 @@ describe('formatQuantity', () => {
 	it('uses the display unit and sensible precision', () => {
 		expect(formatQuantity(453.15, 'temperature', si).full).toBe(`180.00${NBSP}°C`);
 		expect(formatQuantity(453.15, 'temperature', us).full).toBe(`356.00${NBSP}°F`);
-		expect(formatQuantity(1e6, 'pressure', unitPrefs({ pressureUnit: 'MPa' })).full).toBe(`1.0000${NBSP}MPa a`);
-		expect(formatQuantity(1e6, 'pressure', unitPrefs({ pressureUnit: 'MPa', pressureReference: 'gauge' })).full).toBe(`0.89868${NBSP}MPa g`);
+		expect(formatQuantity(1e6, 'pressure', unitPrefs({ pressureUnit: 'MPa' })).full).toBe(
+			`1.0000${NBSP}MPa a`
+		);
+		expect(
+			formatQuantity(
+				1e6,
+				'pressure',
+				unitPrefs({ pressureUnit: 'MPa', pressureReference: 'gauge' })
+			).full
+		).toBe(`0.89868${NBSP}MPa g`);
 		expect(formatQuantity(0.35, 'quality', si).full).toBe('0.3500');
 		expect(formatQuantity(0.625, 'fraction', si).full).toBe(`62.50${NBSP}%`);
 		expect(formatQuantity(5, 'temperatureDifference', us).full).toBe(`9.00${NBSP}°F`);

@@ -14,7 +14,17 @@ export interface NumberFormat {
 export const NBSP = '\u00a0';
 
 const SUPERSCRIPT: Record<string, string> = {
-	'0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹', '-': '⁻'
+	'0': '⁰',
+	'1': '¹',
+	'2': '²',
+	'3': '³',
+	'4': '⁴',
+	'5': '⁵',
+	'6': '⁶',
+	'7': '⁷',
+	'8': '⁸',
+	'9': '⁹',
+	'-': '⁻'
 };
 
 /** Magnitudes shown without an exponent: 10⁻⁴ ≤ |v| < 10⁷. Outside, an exponent is clearer. */
@@ -28,7 +38,13 @@ function minus(text: string, style: 'unicode' | 'ascii'): string {
 /** "10⁻⁵" or "e-5" */
 export function exponentText(exp: number, style: 'unicode' | 'ascii' = 'unicode'): string {
 	if (style === 'ascii') return `e${exp}`;
-	return '×10' + String(exp).split('').map((c) => SUPERSCRIPT[c] ?? c).join('');
+	return (
+		'×10' +
+		String(exp)
+			.split('')
+			.map((c) => SUPERSCRIPT[c] ?? c)
+			.join('')
+	);
 }
 
 /**
@@ -48,7 +64,8 @@ export function formatNumber(value: number, format: NumberFormat = {}): string {
 	if (abs >= PLAIN_MIN && abs < PLAIN_MAX) {
 		const rounded = Number(value.toPrecision(sig));
 		const mag = Math.floor(Math.log10(Math.abs(rounded)));
-		if (Math.abs(rounded) < PLAIN_MAX) return minus(rounded.toFixed(Math.max(0, sig - 1 - mag)), style);
+		if (Math.abs(rounded) < PLAIN_MAX)
+			return minus(rounded.toFixed(Math.max(0, sig - 1 - mag)), style);
 	}
 	const [mant, exp] = value.toExponential(sig - 1).split('e');
 	return minus(mant, style) + exponentText(Number(exp), style);
@@ -87,7 +104,12 @@ export interface QuantityFormat extends NumberFormat {
 }
 
 /** An SI value formatted in the preference's display unit (or `format.unit`). */
-export function formatQuantity(si: number, quantity: Quantity, prefs: UnitPrefs, format: QuantityFormat = {}): Formatted {
+export function formatQuantity(
+	si: number,
+	quantity: Quantity,
+	prefs: UnitPrefs,
+	format: QuantityFormat = {}
+): Formatted {
 	const unit =
 		format.unit === undefined
 			? displayUnit(quantity, prefs, { reference: format.reference })
@@ -96,7 +118,9 @@ export function formatQuantity(si: number, quantity: Quantity, prefs: UnitPrefs,
 				: format.unit;
 	const value = unit.fromSI(si, prefs.atmosphere);
 	const numberFormat =
-		format.sig !== undefined || format.decimals !== undefined ? format : { ...defaultFormat(quantity, unit), style: format.style };
+		format.sig !== undefined || format.decimals !== undefined
+			? format
+			: { ...defaultFormat(quantity, unit), style: format.style };
 	const text = formatNumber(value, numberFormat);
 	return { value, text, unit, full: unit.label ? `${text}${NBSP}${unit.label}` : text };
 }

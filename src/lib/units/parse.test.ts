@@ -12,7 +12,8 @@ function err(r: ParseResult) {
 
 describe('parseQuantity: good input', () => {
 	it('pressures, gauge and absolute, in many spellings', () => {
-		const P = (t: string, atmosphere?: number) => ok(parseQuantity(t, 'pressure', { atmosphere })).si;
+		const P = (t: string, atmosphere?: number) =>
+			ok(parseQuantity(t, 'pressure', { atmosphere })).si;
 		expect(P('250 kPa g')).toBeCloseTo(351325, 6);
 		expect(P('250 kPag')).toBeCloseTo(351325, 6);
 		expect(P('250 kPa(g)')).toBeCloseTo(351325, 6);
@@ -66,15 +67,24 @@ describe('parseQuantity: good input', () => {
 	it('property units in typed forms', () => {
 		expect(ok(parseQuantity('0.1944 m³/kg', 'specificVolume')).si).toBe(0.1944);
 		expect(ok(parseQuantity('0.1944 m3/kg', 'specificVolume')).si).toBe(0.1944);
-		expect(ok(parseQuantity('3.1 ft^3/lb', 'specificVolume')).si).toBeCloseTo(3.1 * 0.0624279606, 9);
+		expect(ok(parseQuantity('3.1 ft^3/lb', 'specificVolume')).si).toBeCloseTo(
+			3.1 * 0.0624279606,
+			9
+		);
 		expect(ok(parseQuantity('59.8 lb/ft3', 'density')).si).toBeCloseTo(59.8 * 16.01846337, 6);
 		expect(ok(parseQuantity('2778 kJ/kg', 'specificEnergy')).si).toBe(2778000);
 		expect(ok(parseQuantity('1194 BTU/lb', 'specificEnergy')).si).toBe(1194 * 2326);
 		expect(ok(parseQuantity('6.58 kJ/kg·K', 'specificEntropy')).si).toBeCloseTo(6580, 9);
 		expect(ok(parseQuantity('6.58 kJ/(kg K)', 'specificEntropy')).si).toBeCloseTo(6580, 9);
 		expect(ok(parseQuantity('6.58 kJ/kg-K', 'specificEntropy')).si).toBeCloseTo(6580, 9);
-		expect(ok(parseQuantity('1.57 Btu/lbm-°R', 'specificEntropy')).si).toBeCloseTo(1.57 * 4186.8, 9);
-		expect(ok(parseQuantity('1.57 Btu/(lb·°F)', 'specificEntropy')).si).toBeCloseTo(1.57 * 4186.8, 9);
+		expect(ok(parseQuantity('1.57 Btu/lbm-°R', 'specificEntropy')).si).toBeCloseTo(
+			1.57 * 4186.8,
+			9
+		);
+		expect(ok(parseQuantity('1.57 Btu/(lb·°F)', 'specificEntropy')).si).toBeCloseTo(
+			1.57 * 4186.8,
+			9
+		);
 		expect(ok(parseQuantity('500 L', 'volume')).si).toBeCloseTo(0.5, 12);
 		expect(ok(parseQuantity('26 lb', 'mass')).si).toBeCloseTo(26 * 0.45359237, 12);
 		expect(ok(parseQuantity('34 hp', 'power')).si).toBeCloseTo(34 * 745.69987158227, 6);
@@ -86,7 +96,10 @@ describe('parseQuantity: good input', () => {
 		const r = ok(parseQuantity('180', 'temperature', { defaultUnit: 'degC' }));
 		expect(r.si).toBeCloseTo(453.15, 12);
 		expect(r.assumed).toBe('unit');
-		expect(ok(parseQuantity('50', 'pressure', { defaultUnit: 'psi_g' })).si).toBeCloseTo(50 * 6894.757293168 + 101325, 4);
+		expect(ok(parseQuantity('50', 'pressure', { defaultUnit: 'psi_g' })).si).toBeCloseTo(
+			50 * 6894.757293168 + 101325,
+			4
+		);
 	});
 });
 
@@ -100,9 +113,24 @@ describe('parseQuantity: clear errors', () => {
 		['1,013 kPa', 'pressure', 'decimal-comma', /no thousands separators/],
 		['250', 'pressure', 'no-unit', /Add a unit to 250, for example 250 kPa g/],
 		['250 furlongs', 'pressure', 'unknown-unit', /"furlongs" is not a unit.*kPa g.*psig/],
-		['120 kPa', 'temperature', 'wrong-quantity', /kPa is a unit of pressure; this field takes a temperature/],
-		['120 °C', 'pressure', 'wrong-quantity', /°C is a unit of temperature; this field takes a pressure/],
-		['5 kJ', 'specificEnergy', 'wrong-quantity', /kJ is a unit of energy; this field takes an energy per unit mass/],
+		[
+			'120 kPa',
+			'temperature',
+			'wrong-quantity',
+			/kPa is a unit of pressure; this field takes a temperature/
+		],
+		[
+			'120 °C',
+			'pressure',
+			'wrong-quantity',
+			/°C is a unit of temperature; this field takes a pressure/
+		],
+		[
+			'5 kJ',
+			'specificEnergy',
+			'wrong-quantity',
+			/kJ is a unit of energy; this field takes an energy per unit mass/
+		],
 		['-300 °C', 'temperature', 'below-absolute-zero', /below absolute zero/],
 		['0 K', 'temperature', 'below-absolute-zero', /absolute zero/],
 		['-150 kPa g', 'pressure', 'below-vacuum', /perfect vacuum.*101\.325 kPa a.*−101\.325 kPa g/],

@@ -1,4 +1,13 @@
-import { BARE_PRESSURE, lookupUnit, normaliseUnitText, unitById, unitsOf, type PressureReference, type Quantity, type UnitDef } from './catalogue';
+import {
+	BARE_PRESSURE,
+	lookupUnit,
+	normaliseUnitText,
+	unitById,
+	unitsOf,
+	type PressureReference,
+	type Quantity,
+	type UnitDef
+} from './catalogue';
 import { DEFAULT_ATMOSPHERE } from './factors';
 import { formatNumber } from './format';
 
@@ -81,10 +90,17 @@ const NAMES: Record<Quantity, string> = {
 	fraction: 'a fraction (0 to 1)'
 };
 
-const POSITIVE: ReadonlySet<Quantity> = new Set(['specificVolume', 'density', 'mass', 'volume', 'massFlow']);
+const POSITIVE: ReadonlySet<Quantity> = new Set([
+	'specificVolume',
+	'density',
+	'mass',
+	'volume',
+	'massFlow'
+]);
 
 // mantissa, then an optional exponent: e5, ×10^5, x10^-5, *10^5, or ×10⁻⁵ (which NFKC turns into ×10-5)
-const NUMBER = /^([+\-−]?(?:\d+(?:\.\d*)?|\.\d+))(?:[eE]([+\-−]?\d+)|\s*[×x*]\s*10\^?([+\-−]?\d+))?/;
+const NUMBER =
+	/^([+\-−]?(?:\d+(?:\.\d*)?|\.\d+))(?:[eE]([+\-−]?\d+)|\s*[×x*]\s*10\^?([+\-−]?\d+))?/;
 
 function fail(code: ParseErrorCode, message: string): ParseResult {
 	return { ok: false, error: { code, message } };
@@ -99,18 +115,33 @@ const fmt = (x: number) => formatNumber(x, { sig: 6 });
  * A pressure unit typed without a or g is read as `bareReference` (default absolute) and the
  * result says so (`assumed: 'reference'`), so the screen can show which it took.
  */
-export function parseQuantity(input: string, quantity: Quantity, options: ParseOptions = {}): ParseResult {
+export function parseQuantity(
+	input: string,
+	quantity: Quantity,
+	options: ParseOptions = {}
+): ParseResult {
 	const atmosphere = options.atmosphere ?? DEFAULT_ATMOSPHERE;
 	const text = input.normalize('NFKC').trim();
 	const example = EXAMPLES[quantity];
 	if (text === '') return fail('empty', `Enter ${NAMES[quantity]}, for example ${example}.`);
 	if (/\d,\d/.test(text))
-		return fail('decimal-comma', `Use a decimal point and no thousands separators: "${text.replace(/,/g, '.')}" rather than "${text}".`);
+		return fail(
+			'decimal-comma',
+			`Use a decimal point and no thousands separators: "${text.replace(/,/g, '.')}" rather than "${text}".`
+		);
 	const m = NUMBER.exec(text);
-	if (!m) return fail('not-a-number', `"${text}" does not start with a number. Give ${NAMES[quantity]} such as ${example}.`);
+	if (!m)
+		return fail(
+			'not-a-number',
+			`"${text}" does not start with a number. Give ${NAMES[quantity]} such as ${example}.`
+		);
 	const exponent = m[2] ?? m[3];
-	const number = Number(`${m[1]}e${(exponent ?? '0')}`.replace(/−/g, '-'));
-	if (!Number.isFinite(number)) return fail('not-a-number', `"${text}" is too large a number. Give ${NAMES[quantity]} such as ${example}.`);
+	const number = Number(`${m[1]}e${exponent ?? '0'}`.replace(/−/g, '-'));
+	if (!Number.isFinite(number))
+		return fail(
+			'not-a-number',
+			`"${text}" is too large a number. Give ${NAMES[quantity]} such as ${example}.`
+		);
 	const unitText = text.slice(m[0].length).trim();
 
 	let unit: UnitDef;
@@ -121,8 +152,12 @@ export function parseQuantity(input: string, quantity: Quantity, options: ParseO
 			if (!bareNumberOk) return fail('no-unit', `Add a unit to ${text}, for example ${example}.`);
 			unit = unitById(quantity === 'quality' ? 'x1' : 'f1');
 		} else {
-			unit = typeof options.defaultUnit === 'string' ? unitById(options.defaultUnit) : options.defaultUnit;
-			if (unit.quantity !== quantity) throw new Error(`defaultUnit ${unit.id} is not a ${quantity} unit`);
+			unit =
+				typeof options.defaultUnit === 'string'
+					? unitById(options.defaultUnit)
+					: options.defaultUnit;
+			if (unit.quantity !== quantity)
+				throw new Error(`defaultUnit ${unit.id} is not a ${quantity} unit`);
 			assumed = 'unit';
 		}
 	} else {
@@ -137,10 +172,22 @@ export function parseQuantity(input: string, quantity: Quantity, options: ParseO
 				const elsewhere = bareBase(unitText) ? 'pressure' : lookupUnit(unitText)[0]?.quantity;
 				if (elsewhere) {
 					const what = NAMES[elsewhere].replace(/^an? /, '');
-					return fail('wrong-quantity', `${unitText} is a unit of ${what}; this field takes ${NAMES[quantity]}, for example ${example}.`);
+					return fail(
+						'wrong-quantity',
+						`${unitText} is a unit of ${what}; this field takes ${NAMES[quantity]}, for example ${example}.`
+					);
 				}
-				const known = [...new Set(unitsOf(quantity).map((u) => u.label).filter(Boolean))].join(', ');
-				return fail('unknown-unit', `"${unitText}" is not a unit Statewright knows for ${NAMES[quantity]}. Use one of: ${known}.`);
+				const known = [
+					...new Set(
+						unitsOf(quantity)
+							.map((u) => u.label)
+							.filter(Boolean)
+					)
+				].join(', ');
+				return fail(
+					'unknown-unit',
+					`"${unitText}" is not a unit Statewright knows for ${NAMES[quantity]}. Use one of: ${known}.`
+				);
 			}
 			unit = found[0];
 		}
@@ -148,7 +195,10 @@ export function parseQuantity(input: string, quantity: Quantity, options: ParseO
 
 	const si = unit.toSI(number, atmosphere);
 	if (quantity === 'temperature' && !(si > 0))
-		return fail('below-absolute-zero', `${text} is at or below absolute zero (0 K = −273.15 °C = −459.67 °F). Give a temperature above it.`);
+		return fail(
+			'below-absolute-zero',
+			`${text} is at or below absolute zero (0 K = −273.15 °C = −459.67 °F). Give a temperature above it.`
+		);
 	if (quantity === 'pressure' && !(si > 0)) {
 		let floor = ' An absolute pressure is above zero.';
 		if (unit.reference === 'gauge') {
@@ -157,9 +207,16 @@ export function parseQuantity(input: string, quantity: Quantity, options: ParseO
 		}
 		return fail('below-vacuum', `${text} is at or below a perfect vacuum.${floor}`);
 	}
-	if (POSITIVE.has(quantity) && !(si > 0)) return fail('not-positive', `${text} must be above zero. Give ${NAMES[quantity]} such as ${example}.`);
+	if (POSITIVE.has(quantity) && !(si > 0))
+		return fail(
+			'not-positive',
+			`${text} must be above zero. Give ${NAMES[quantity]} such as ${example}.`
+		);
 	if ((quantity === 'quality' || quantity === 'fraction') && (si < 0 || si > 1))
-		return fail('out-of-range', `${text} is outside 0 to 1 (0 % to 100 %). Give ${NAMES[quantity]}, for example ${example}.`);
+		return fail(
+			'out-of-range',
+			`${text} is outside 0 to 1 (0 % to 100 %). Give ${NAMES[quantity]}, for example ${example}.`
+		);
 	return assumed ? { ok: true, si, number, unit, assumed } : { ok: true, si, number, unit };
 }
 

@@ -90,7 +90,11 @@ function largest(values: number | readonly number[] | undefined): number | undef
 }
 
 /** The largest unit of a ladder in which the magnitude is still ≥ 1 (else the smallest). */
-function climb(ids: string[], magnitude: number | undefined, idOf: (base: string) => string): string {
+function climb(
+	ids: string[],
+	magnitude: number | undefined,
+	idOf: (base: string) => string
+): string {
 	let pick = ids[0];
 	if (magnitude === undefined) return idOf(pick);
 	for (const base of ids) {
@@ -105,7 +109,11 @@ function climb(ids: string[], magnitude: number | undefined, idOf: (base: string
  * reference (or `options.reference`); quantities with a magnitude ladder use the preference's
  * system default unless `options.magnitude` is given, then the unit that suits that magnitude.
  */
-export function displayUnit(quantity: Quantity, prefs: UnitPrefs, options: DisplayOptions = {}): UnitDef {
+export function displayUnit(
+	quantity: Quantity,
+	prefs: UnitPrefs,
+	options: DisplayOptions = {}
+): UnitDef {
 	const mag = largest(options.magnitude);
 	if (quantity === 'pressure') {
 		const ref = options.reference ?? prefs.pressureReference;
@@ -120,7 +128,8 @@ export function displayUnit(quantity: Quantity, prefs: UnitPrefs, options: Displ
 		return mag === undefined ? unitById('kW') : unitById(climb(LADDERS.power!.si, mag, (b) => b));
 	}
 	const ladder = LADDERS[quantity]?.[prefs.system];
-	if (mag !== undefined && ladder && ladder.length > 1) return unitById(climb(ladder, mag, (b) => b));
+	if (mag !== undefined && ladder && ladder.length > 1)
+		return unitById(climb(ladder, mag, (b) => b));
 	return unitById((prefs.system === 'us' ? US_DISPLAY : SI_DISPLAY)[quantity]);
 }
 
@@ -128,32 +137,57 @@ export function displayUnit(quantity: Quantity, prefs: UnitPrefs, options: Displ
  * A good unit for a magnitude (or the largest of several values, e.g. a table column) where the
  * user has not fixed one: 0.05 m³ → L, 2.5e6 J → MJ, 4e6 Pa → MPa (with pressure unit `auto`).
  */
-export function chooseUnit(quantity: Quantity, siValues: number | readonly number[], prefs: UnitPrefs): UnitDef {
+export function chooseUnit(
+	quantity: Quantity,
+	siValues: number | readonly number[],
+	prefs: UnitPrefs
+): UnitDef {
 	return displayUnit(quantity, prefs, { magnitude: siValues });
 }
 
 /** SI base value → number in `unit`. */
-export function toUnit(si: number, unit: UnitDef | string, atmosphere: number = DEFAULT_ATMOSPHERE): number {
+export function toUnit(
+	si: number,
+	unit: UnitDef | string,
+	atmosphere: number = DEFAULT_ATMOSPHERE
+): number {
 	const u = typeof unit === 'string' ? unitById(unit) : unit;
 	return u.fromSI(si, atmosphere);
 }
 
 /** Number in `unit` → SI base value. */
-export function fromUnit(value: number, unit: UnitDef | string, atmosphere: number = DEFAULT_ATMOSPHERE): number {
+export function fromUnit(
+	value: number,
+	unit: UnitDef | string,
+	atmosphere: number = DEFAULT_ATMOSPHERE
+): number {
 	const u = typeof unit === 'string' ? unitById(unit) : unit;
 	return u.toSI(value, atmosphere);
 }
 
 /** Number in one unit → number in another of the same quantity. */
-export function convert(value: number, from: UnitDef | string, to: UnitDef | string, atmosphere: number = DEFAULT_ATMOSPHERE): number {
+export function convert(
+	value: number,
+	from: UnitDef | string,
+	to: UnitDef | string,
+	atmosphere: number = DEFAULT_ATMOSPHERE
+): number {
 	const f = typeof from === 'string' ? unitById(from) : from;
 	const t = typeof to === 'string' ? unitById(to) : to;
-	if (f.quantity !== t.quantity) throw new Error(`cannot convert ${f.label || f.id} (${f.quantity}) to ${t.label || t.id} (${t.quantity})`);
+	if (f.quantity !== t.quantity)
+		throw new Error(
+			`cannot convert ${f.label || f.id} (${f.quantity}) to ${t.label || t.id} (${t.quantity})`
+		);
 	return t.fromSI(f.toSI(value, atmosphere), atmosphere);
 }
 
 /** SI base value → number in the preference's display unit, with that unit. */
-export function toDisplay(si: number, quantity: Quantity, prefs: UnitPrefs, options: DisplayOptions = {}): { value: number; unit: UnitDef } {
+export function toDisplay(
+	si: number,
+	quantity: Quantity,
+	prefs: UnitPrefs,
+	options: DisplayOptions = {}
+): { value: number; unit: UnitDef } {
 	const unit = displayUnit(quantity, prefs, options);
 	return { value: unit.fromSI(si, prefs.atmosphere), unit };
 }

@@ -67,7 +67,9 @@ describe('conversions to and from SI', () => {
 					const back = u.fromSI(u.toSI(x, atm), atm);
 					// gauge units carry the atmosphere through the sum: allow for its size in the unit
 					const atmInUnit = u.reference === 'gauge' ? Math.abs(u.fromSI(2 * atm, atm)) : 0;
-					expect(Math.abs(back - x), `${u.id} at ${x}`).toBeLessThanOrEqual(1e-12 * (Math.max(1, Math.abs(x)) + atmInUnit));
+					expect(Math.abs(back - x), `${u.id} at ${x}`).toBeLessThanOrEqual(
+						1e-12 * (Math.max(1, Math.abs(x)) + atmInUnit)
+					);
 				}
 			}
 		}
@@ -89,29 +91,54 @@ describe('conversions to and from SI', () => {
 describe('display units', () => {
 	it('SI engineering set and US customary set', () => {
 		const pick = (q: Quantity, p = si) => displayUnit(q, p).label;
-		expect([pick('temperature'), pick('pressure'), pick('specificVolume'), pick('density'), pick('specificEnergy'), pick('specificEntropy')]).toEqual([
-			'°C', 'kPa a', 'm³/kg', 'kg/m³', 'kJ/kg', 'kJ/(kg·K)'
-		]);
-		expect([pick('temperature', us), pick('pressure', us), pick('specificVolume', us), pick('density', us), pick('specificEnergy', us), pick('specificEntropy', us)]).toEqual([
-			'°F', 'psia', 'ft³/lbm', 'lbm/ft³', 'Btu/lbm', 'Btu/(lbm·°R)'
-		]);
-		expect([pick('mass'), pick('volume'), pick('energy'), pick('power'), pick('massFlow')]).toEqual(['kg', 'm³', 'kJ', 'kW', 'kg/s']);
-		expect([pick('mass', us), pick('volume', us), pick('energy', us), pick('power', us), pick('massFlow', us)]).toEqual(['lbm', 'ft³', 'Btu', 'Btu/h', 'lbm/h']);
+		expect([
+			pick('temperature'),
+			pick('pressure'),
+			pick('specificVolume'),
+			pick('density'),
+			pick('specificEnergy'),
+			pick('specificEntropy')
+		]).toEqual(['°C', 'kPa a', 'm³/kg', 'kg/m³', 'kJ/kg', 'kJ/(kg·K)']);
+		expect([
+			pick('temperature', us),
+			pick('pressure', us),
+			pick('specificVolume', us),
+			pick('density', us),
+			pick('specificEnergy', us),
+			pick('specificEntropy', us)
+		]).toEqual(['°F', 'psia', 'ft³/lbm', 'lbm/ft³', 'Btu/lbm', 'Btu/(lbm·°R)']);
+		expect([pick('mass'), pick('volume'), pick('energy'), pick('power'), pick('massFlow')]).toEqual(
+			['kg', 'm³', 'kJ', 'kW', 'kg/s']
+		);
+		expect([
+			pick('mass', us),
+			pick('volume', us),
+			pick('energy', us),
+			pick('power', us),
+			pick('massFlow', us)
+		]).toEqual(['lbm', 'ft³', 'Btu', 'Btu/h', 'lbm/h']);
 		expect(displayUnit('power', unitPrefs({ system: 'us', usPower: 'hp' })).label).toBe('hp');
 	});
 
 	it('pressure labels always say absolute or gauge', () => {
 		for (const pressureUnit of ['kPa', 'MPa', 'bar'] as const) {
 			expect(displayUnit('pressure', unitPrefs({ pressureUnit })).label).toBe(`${pressureUnit} a`);
-			expect(displayUnit('pressure', unitPrefs({ pressureUnit, pressureReference: 'gauge' })).label).toBe(`${pressureUnit} g`);
+			expect(
+				displayUnit('pressure', unitPrefs({ pressureUnit, pressureReference: 'gauge' })).label
+			).toBe(`${pressureUnit} g`);
 		}
-		expect(displayUnit('pressure', unitPrefs({ system: 'us', pressureReference: 'gauge' })).label).toBe('psig');
+		expect(
+			displayUnit('pressure', unitPrefs({ system: 'us', pressureReference: 'gauge' })).label
+		).toBe('psig');
 		for (const u of Object.values(UNITS).filter((u) => u.quantity === 'pressure')) {
 			expect(u.reference, u.id).toBeDefined();
 			expect(u.label, u.id).toMatch(u.reference === 'gauge' ? /(\sg|psig)$/ : /(\sa|psia|atm)$/);
 		}
 		// a log axis asks for absolute even when the sheet shows gauge
-		expect(displayUnit('pressure', unitPrefs({ pressureReference: 'gauge' }), { reference: 'absolute' }).label).toBe('kPa a');
+		expect(
+			displayUnit('pressure', unitPrefs({ pressureReference: 'gauge' }), { reference: 'absolute' })
+				.label
+		).toBe('kPa a');
 	});
 
 	it('chooseUnit picks a unit that suits the magnitude', () => {

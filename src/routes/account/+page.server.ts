@@ -2,13 +2,22 @@ import { redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
-import { changePassword, clearSessionCookie, invalidateUserSessions, PASSWORD_MIN, sendVerification } from '$lib/server/auth';
+import {
+	changePassword,
+	clearSessionCookie,
+	invalidateUserSessions,
+	PASSWORD_MIN,
+	sendVerification
+} from '$lib/server/auth';
 import { requireUser } from '$lib/server/guard';
 import { fields, formFailure, parseForm, runAction, readFormData } from '$lib/server/forms';
 import { flowContext } from '$lib/server/request';
 import { deleteUserSession, listUserSessions } from '$lib/server/db/sessions';
 import { updateUserName } from '$lib/server/db/users';
-import { getNotificationSettings, setNotificationSettings } from '$lib/server/db/notification-settings';
+import {
+	getNotificationSettings,
+	setNotificationSettings
+} from '$lib/server/db/notification-settings';
 import { NOTIFICATION_LABELS, settingsFromForm } from '$lib/server/notifications';
 
 export const load: PageServerLoad = async (event) => {
@@ -17,7 +26,10 @@ export const load: PageServerLoad = async (event) => {
 	return {
 		passwordMin: PASSWORD_MIN,
 		passwordReset: event.url.searchParams.get('password') === 'reset',
-		notifications: { settings: await getNotificationSettings(getDb(), user.id), labels: NOTIFICATION_LABELS },
+		notifications: {
+			settings: await getNotificationSettings(getDb(), user.id),
+			labels: NOTIFICATION_LABELS
+		},
 		sessions: sessions.map((s) => ({
 			id: s.id,
 			current: s.id === event.locals.session?.id,
@@ -31,13 +43,23 @@ export const load: PageServerLoad = async (event) => {
 };
 
 const profileSchema = z.object({ name: fields.personName });
-const passwordSchema = z.object({ current: fields.password, next: fields.password, confirm: z.string() });
-const sessionSchema = z.object({ session: z.string().regex(/^[0-9a-f]{64}$/, 'That session id is not valid.') });
+const passwordSchema = z.object({
+	current: fields.password,
+	next: fields.password,
+	confirm: z.string()
+});
+const sessionSchema = z.object({
+	session: z.string().regex(/^[0-9a-f]{64}$/, 'That session id is not valid.')
+});
 
 export const actions: Actions = {
 	notifications: async (event) => {
 		const user = requireUser(event);
-		await setNotificationSettings(getDb(), user.id, settingsFromForm(await readFormData(event.request)));
+		await setNotificationSettings(
+			getDb(),
+			user.id,
+			settingsFromForm(await readFormData(event.request))
+		);
 		return { saved: 'notifications' };
 	},
 	profile: async (event) => {
@@ -51,12 +73,19 @@ export const actions: Actions = {
 		const user = requireUser(event);
 		const parsed = parseForm(passwordSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
-		if (parsed.data.next !== parsed.data.confirm) return formFailure(400, 'The two new passwords differ.', { confirm: 'Does not match the new password.' });
+		if (parsed.data.next !== parsed.data.confirm)
+			return formFailure(400, 'The two new passwords differ.', {
+				confirm: 'Does not match the new password.'
+			});
 		return runAction({}, async () => {
 			const ended = await changePassword(
 				getDb(),
 				user,
-				{ current: parsed.data.current, next: parsed.data.next, keepSessionId: event.locals.session!.id },
+				{
+					current: parsed.data.current,
+					next: parsed.data.next,
+					keepSessionId: event.locals.session!.id
+				},
 				flowContext(event)
 			);
 			return { saved: 'password', ended };
@@ -66,7 +95,8 @@ export const actions: Actions = {
 		const user = requireUser(event);
 		const parsed = parseForm(sessionSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
-		if (parsed.data.session === event.locals.session?.id) return formFailure(400, 'That is this session: use Sign out instead.');
+		if (parsed.data.session === event.locals.session?.id)
+			return formFailure(400, 'That is this session: use Sign out instead.');
 		const gone = await deleteUserSession(getDb(), user.id, parsed.data.session);
 		if (!gone) return formFailure(404, 'No such session (it may have ended already).');
 		return { saved: 'session' };

@@ -11,7 +11,9 @@ import { requireUser } from '$lib/server/guard';
  * their own address since their account was made — never anyone else's, whatever their role. The
  * whole catch is printed on the server's console for whoever runs it.
  */
-export async function requireOutbox(event: Pick<RequestEvent, 'locals' | 'url'>): Promise<{ address: string; since: number }> {
+export async function requireOutbox(
+	event: Pick<RequestEvent, 'locals' | 'url'>
+): Promise<{ address: string; since: number }> {
 	if (!config().devTools) error(404, { code: 'not-found', message: 'Not found' });
 	const user = requireUser(event);
 	const row = await getUserById(getDb(), user.id);

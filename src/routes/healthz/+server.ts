@@ -9,6 +9,9 @@ export const GET: RequestHandler = async () => {
 		await sql`select 1`.execute(getDb());
 		return json({ ok: true });
 	} catch {
-		return json({ ok: false, error: { code: 'database', message: 'The database does not answer.' } }, { status: 503 });
+		return json(
+			{ ok: false, error: { code: 'database', message: 'The database does not answer.' } },
+			{ status: 503 }
+		);
 	}
 };

@@ -2,7 +2,13 @@ import { redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
 import { getDb } from '$lib/server/db';
-import { checkResetToken, PASSWORD_MIN, requestPasswordReset, resetPassword, startSession } from '$lib/server/auth';
+import {
+	checkResetToken,
+	PASSWORD_MIN,
+	requestPasswordReset,
+	resetPassword,
+	startSession
+} from '$lib/server/auth';
 import { fields, formFailure, parseForm, runAction, readFormData } from '$lib/server/forms';
 import { clientMeta, flowContext } from '$lib/server/request';
 import { isAppError } from '$lib/server/errors';
@@ -20,7 +26,11 @@ export const load: PageServerLoad = async ({ url }) => {
 };
 
 const requestSchema = z.object({ email: fields.email });
-const setSchema = z.object({ token: z.string().min(1).max(100), password: fields.password, confirm: z.string() });
+const setSchema = z.object({
+	token: z.string().min(1).max(100),
+	password: fields.password,
+	confirm: z.string()
+});
 
 export const actions: Actions = {
 	request: async (event) => {
@@ -39,7 +49,10 @@ export const actions: Actions = {
 		const parsed = parseForm(setSchema, await readFormData(event.request));
 		if (!parsed.ok) return parsed.failure;
 		const { token, password, confirm } = parsed.data;
-		if (password !== confirm) return formFailure(400, 'The two passwords differ. Type the same new password twice.', { confirm: 'Does not match the password above.' });
+		if (password !== confirm)
+			return formFailure(400, 'The two passwords differ. Type the same new password twice.', {
+				confirm: 'Does not match the password above.'
+			});
 		return runAction({}, async () => {
 			const db = getDb();
 			const user = await resetPassword(db, token, password);

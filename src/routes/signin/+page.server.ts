@@ -23,11 +23,15 @@ export const actions: Actions = {
 		const parsed = parseForm(schema, await readFormData(event.request), ['email', 'next']);
 		if (!parsed.ok) return parsed.failure;
 		const { email, password, next } = parsed.data;
-		return runAction(parsed.values, async () => {
-			const db = getDb();
-			const user = await signIn(db, { email, password }, clientIp(event));
-			await startSession(db, event, user.id, clientMeta(event));
-			redirect(303, safeNext(next));
-		}, event);
+		return runAction(
+			parsed.values,
+			async () => {
+				const db = getDb();
+				const user = await signIn(db, { email, password }, clientIp(event));
+				await startSession(db, event, user.id, clientMeta(event));
+				redirect(303, safeNext(next));
+			},
+			event
+		);
 	}
 };

@@ -13,7 +13,10 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 	if (locals.user) redirect(303, next);
 	const token = url.searchParams.get('invite');
 	const view = token ? await inspectInvite(getDb(), token) : null;
-	const invite = view && view.state === 'open' ? { token: token!, email: view.invite.email, team: view.team.name, role: view.invite.role } : null;
+	const invite =
+		view && view.state === 'open'
+			? { token: token!, email: view.invite.email, team: view.team.name, role: view.invite.role }
+			: null;
 	return { next, invite, passwordMin: PASSWORD_MIN };
 };
 
@@ -27,7 +30,12 @@ const schema = z.object({
 
 export const actions: Actions = {
 	default: async (event) => {
-		const parsed = parseForm(schema, await readFormData(event.request), ['name', 'email', 'next', 'invite']);
+		const parsed = parseForm(schema, await readFormData(event.request), [
+			'name',
+			'email',
+			'next',
+			'invite'
+		]);
 		if (!parsed.ok) return parsed.failure;
 		const { name, email, password, invite } = parsed.data;
 		return runAction(
@@ -36,8 +44,11 @@ export const actions: Actions = {
 				const db = getDb();
 				// an open invitation for this very address proves the address: the invitee joins at once
 				const view = invite ? await inspectInvite(db, invite) : null;
-				const invited = view?.state === 'open' && normalizeEmail(view.invite.email) === normalizeEmail(email);
-				const outcome = await signUp(db, { name, email, password }, flowContext(event), { verified: invited });
+				const invited =
+					view?.state === 'open' && normalizeEmail(view.invite.email) === normalizeEmail(email);
+				const outcome = await signUp(db, { name, email, password }, flowContext(event), {
+					verified: invited
+				});
 				if (outcome.created && invited) {
 					await startSession(db, event, outcome.user.id, clientMeta(event));
 					redirect(303, `/invite/${encodeURIComponent(invite!)}`);

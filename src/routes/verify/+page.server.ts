@@ -12,9 +12,20 @@ export const load: PageServerLoad = async (event) => {
 	const { url, locals } = event;
 	const token = url.searchParams.get('token');
 	if (token === null && url.searchParams.has('confirmed') && locals.user?.emailVerified) {
-		return { result: { ok: true as const, email: locals.user.email, alreadyVerified: false }, signedIn: true, verified: true, email: locals.user.email };
+		return {
+			result: { ok: true as const, email: locals.user.email, alreadyVerified: false },
+			signedIn: true,
+			verified: true,
+			email: locals.user.email
+		};
 	}
-	if (token === null) return { result: null, signedIn: !!locals.user, verified: locals.user?.emailVerified ?? false, email: locals.user?.email ?? null };
+	if (token === null)
+		return {
+			result: null,
+			signedIn: !!locals.user,
+			verified: locals.user?.emailVerified ?? false,
+			email: locals.user?.email ?? null
+		};
 	try {
 		const db = getDb();
 		const { user, alreadyVerified } = await verifyEmail(db, token);
@@ -24,10 +35,20 @@ export const load: PageServerLoad = async (event) => {
 			// a fresh request, so the whole page (its header too) is drawn signed in
 			redirect(303, '/verify?confirmed');
 		}
-		return { result: { ok: true as const, email: user.email, alreadyVerified }, signedIn: !!locals.user, verified: true, email: user.email };
+		return {
+			result: { ok: true as const, email: user.email, alreadyVerified },
+			signedIn: !!locals.user,
+			verified: true,
+			email: user.email
+		};
 	} catch (e) {
 		if (!isAppError(e)) throw e;
-		return { result: { ok: false as const, message: e.message }, signedIn: !!locals.user, verified: locals.user?.emailVerified ?? false, email: locals.user?.email ?? null };
+		return {
+			result: { ok: false as const, message: e.message },
+			signedIn: !!locals.user,
+			verified: locals.user?.emailVerified ?? false,
+			email: locals.user?.email ?? null
+		};
 	}
 };
 

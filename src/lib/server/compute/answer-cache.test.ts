@@ -1,6 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createAnswerCache, entryBytes, ENTRY_OVERHEAD_BYTES, type CachedAnswer } from './answer-cache';
+import {
+	createAnswerCache,
+	entryBytes,
+	ENTRY_OVERHEAD_BYTES,
+	type CachedAnswer
+} from './answer-cache';
 
 const utf8 = new TextEncoder();
 const answer = (text: string): CachedAnswer => ({ body: utf8.encode(text), etag: '"e"', units: 1 });
@@ -12,7 +17,10 @@ describe('the compute answer cache', () => {
 	});
 
 	it('drops the least recently used answers to stay within its bytes', () => {
-		const c = createAnswerCache({ maxBytes: 4 * (1000 + ENTRY_OVERHEAD_BYTES + 10), maxEntries: 100 });
+		const c = createAnswerCache({
+			maxBytes: 4 * (1000 + ENTRY_OVERHEAD_BYTES + 10),
+			maxEntries: 100
+		});
 		const body = 'x'.repeat(1000);
 		for (const k of ['a', 'b', 'c', 'd']) expect(c.set(k, answer(body))).toBe(true);
 		expect(c.size).toBe(4);
@@ -52,7 +60,15 @@ describe('the compute answer cache', () => {
 			fc.property(
 				fc.integer({ min: 2000, max: 50_000 }),
 				fc.integer({ min: 1, max: 20 }),
-				fc.array(fc.tuple(fc.constantFrom('set', 'get'), fc.string({ maxLength: 30 }), fc.nat({ max: 20_000 }), fc.boolean()), { maxLength: 200 }),
+				fc.array(
+					fc.tuple(
+						fc.constantFrom('set', 'get'),
+						fc.string({ maxLength: 30 }),
+						fc.nat({ max: 20_000 }),
+						fc.boolean()
+					),
+					{ maxLength: 200 }
+				),
 				(maxBytes, maxEntries, ops) => {
 					const c = createAnswerCache({ maxBytes, maxEntries });
 					const model = new Map<string, number>();

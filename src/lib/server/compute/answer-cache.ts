@@ -38,7 +38,8 @@ export function entryBytes(key: string, answer: CachedAnswer): number {
 }
 
 export function createAnswerCache({ maxBytes, maxEntries }: AnswerCacheOptions): AnswerCache {
-	if (!(maxBytes > 0) || !(maxEntries >= 1)) throw new RangeError('maxBytes must be > 0 and maxEntries >= 1');
+	if (!(maxBytes > 0) || !(maxEntries >= 1))
+		throw new RangeError('maxBytes must be > 0 and maxEntries >= 1');
 	const map = new Map<string, { answer: CachedAnswer; bytes: number }>();
 	let bytes = 0;
 
@@ -61,7 +62,8 @@ export function createAnswerCache({ maxBytes, maxEntries }: AnswerCacheOptions):
 			drop(key);
 			const size = entryBytes(key, answer);
 			if (size > maxBytes / 4) return false;
-			while (map.size > 0 && (bytes + size > maxBytes || map.size + 1 > maxEntries)) drop(map.keys().next().value as string);
+			while (map.size > 0 && (bytes + size > maxBytes || map.size + 1 > maxEntries))
+				drop(map.keys().next().value as string);
 			map.set(key, { answer, bytes: size });
 			bytes += size;
 			return true;

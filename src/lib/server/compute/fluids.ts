@@ -6,7 +6,8 @@ export function fluidFromParam(id: string): FluidInfo {
 	try {
 		return getFluid(id);
 	} catch (e) {
-		if (e instanceof ThermoError && e.code === 'unknown-fluid') throw new AppError(404, 'unknown-fluid', `${e.message} ${e.hint}`);
+		if (e instanceof ThermoError && e.code === 'unknown-fluid')
+			throw new AppError(404, 'unknown-fluid', `${e.message} ${e.hint}`);
 		throw e;
 	}
 }

@@ -18,10 +18,14 @@ const path = (legCount: number, samples?: number) =>
 		fluid: 'water',
 		system: { kind: 'closed', mass: 1 },
 		start: { T: 400, P: 1e5 },
-		legs: Array.from({ length: legCount }, (_, i) => ({ process: 'isobaric', target: { T: i % 2 ? 400 : 450 } })),
+		legs: Array.from({ length: legCount }, (_, i) => ({
+			process: 'isobaric',
+			target: { T: i % 2 ? 400 : 450 }
+		})),
 		...(samples ? { samples } : {})
 	});
-const isobars = (n: number, points: number) => `/api/v1/fluids/water/isolines?kind=isobar&values=${Array.from({ length: n }, (_, i) => 1e4 * (i + 1)).join(',')}&points=${points}`;
+const isobars = (n: number, points: number) =>
+	`/api/v1/fluids/water/isolines?kind=isobar&values=${Array.from({ length: n }, (_, i) => 1e4 * (i + 1)).join(',')}&points=${points}`;
 
 let t = 1_000_000;
 const advance = (ms: number) => (t += ms);
@@ -41,7 +45,9 @@ afterAll(() => {
 describe('work units', () => {
 	it('one per 100 points begun, at least one', () => {
 		expect(WORK_UNIT_POINTS).toBe(100);
-		expect([0, 1, 40, 100, 101, 200, 2000, 4000].map(workUnits)).toEqual([1, 1, 1, 1, 2, 2, 20, 40]);
+		expect([0, 1, 40, 100, 101, 200, 2000, 4000].map(workUnits)).toEqual([
+			1, 1, 1, 1, 2, 2, 20, 40
+		]);
 	});
 });
 
@@ -51,7 +57,9 @@ describe('work caps (400 naming the cap)', () => {
 		expect(r.status).toBe(400);
 		const error = (r.body as { error: { code: string; message: string } }).error;
 		expect(error.code).toBe('invalid-input');
-		expect(error.message).toContain(`at most ${API_ISOLINE_POINTS_MAX} per request (values × points)`);
+		expect(error.message).toContain(
+			`at most ${API_ISOLINE_POINTS_MAX} per request (values × points)`
+		);
 		expect(error.message).toContain('40 lines × 2000 points = 80000 points');
 		expect(error.message).toContain('points=100 or less for 40 lines');
 		// exactly at the cap is answered
@@ -83,26 +91,39 @@ describe('rate limit charged by cost', () => {
 		expect(r.headers.get('retry-after')).toBe('1');
 		const error = (r.body as { error: { code: string; message: string } }).error;
 		expect(error.code).toBe('rate-limited');
-		expect(error.message).toMatch(/at most 10 units of work per second .*bursts of 20.*Retry after 1 s/);
+		expect(error.message).toMatch(
+			/at most 10 units of work per second .*bursts of 20.*Retry after 1 s/
+		);
 		advance(100); // one unit back
 		expect((await callRoute(states, '/api/v1/states', { body: STATE })).status).toBe(200);
 		expect((await callRoute(states, '/api/v1/states', { body: STATE })).status).toBe(429);
 	});
 
 	it('small requests cost one unit each: 20 states pass, the 21st waits', async () => {
-		for (let i = 0; i < 20; i++) expect((await callRoute(states, '/api/v1/states', { body: STATE })).status).toBe(200);
+		for (let i = 0; i < 20; i++)
+			expect((await callRoute(states, '/api/v1/states', { body: STATE })).status).toBe(200);
 		expect((await callRoute(states, '/api/v1/states', { body: STATE })).status).toBe(429);
 	});
 
 	it('a costly request waits for enough units and says what it costs; other clients are unaffected', async () => {
 		for (let i = 0; i < 15; i++) await callRoute(states, '/api/v1/states', { body: STATE });
-		const leg = JSON.stringify({ fluid: 'water', start: { T: 300, P: 1e5 }, process: 'isobaric', target: { T: 500 }, samples: 1000 });
+		const leg = JSON.stringify({
+			fluid: 'water',
+			start: { T: 300, P: 1e5 },
+			process: 'isobaric',
+			target: { T: 500 },
+			samples: 1000
+		});
 		const r = await callRoute(legs, '/api/v1/legs', { body: leg });
 		expect(r.status).toBe(429);
-		expect((r.body as { error: { message: string } }).error.message).toContain('This request costs 10 units');
+		expect((r.body as { error: { message: string } }).error.message).toContain(
+			'This request costs 10 units'
+		);
 		// it had 5 units: one was taken on arrival, 9 more are due, 4 remain, so 0.5 s at 10 units/s
 		expect(r.headers.get('retry-after')).toBe('1');
-		expect((await callRoute(legs, '/api/v1/legs', { body: leg, client: '10.0.0.2' })).status).toBe(200);
+		expect((await callRoute(legs, '/api/v1/legs', { body: leg, client: '10.0.0.2' })).status).toBe(
+			200
+		);
 		advance(1000);
 		expect((await callRoute(legs, '/api/v1/legs', { body: leg })).status).toBe(200);
 	});
@@ -123,18 +144,22 @@ describe('rate limit charged by cost', () => {
 		expect(second.text).toBe(first.text);
 		expect(answerCache.size).toBe(1);
 		// 16 of 20 spent: 4 left
-		for (let i = 0; i < 4; i++) expect((await callRoute(states, '/api/v1/states', { body: STATE })).status).toBe(200);
+		for (let i = 0; i < 4; i++)
+			expect((await callRoute(states, '/api/v1/states', { body: STATE })).status).toBe(200);
 		expect((await callRoute(isolines, url)).status).toBe(429);
 	});
 
 	it('saturation is charged for both branches of the dome', async () => {
-		expect((await callRoute(saturation, '/api/v1/fluids/water/saturation?points=1000')).status).toBe(200); // 2000 points, 20 units
+		expect(
+			(await callRoute(saturation, '/api/v1/fluids/water/saturation?points=1000')).status
+		).toBe(200); // 2000 points, 20 units
 		expect((await callRoute(states, '/api/v1/states', { body: STATE })).status).toBe(429);
 	});
 
 	it('COMPUTE_RATE_LIMIT=0 turns the limit off', async () => {
 		process.env.COMPUTE_RATE_LIMIT = '0';
 		resetComputeLimiter(() => t);
-		for (let i = 0; i < 5; i++) expect((await callRoute(paths, '/api/v1/paths', { body: path(50) })).status).toBe(200);
+		for (let i = 0; i < 5; i++)
+			expect((await callRoute(paths, '/api/v1/paths', { body: path(50) })).status).toBe(200);
 	});
 });

@@ -63,7 +63,9 @@ export const WORK_UNIT_POINTS = 100;
 
 /** Units of work for a request that asks for `points` points: one per WORK_UNIT_POINTS begun, at least 1. */
 export function workUnits(points: number): number {
-	return Number.isFinite(points) && points > WORK_UNIT_POINTS ? Math.ceil(points / WORK_UNIT_POINTS) : 1;
+	return Number.isFinite(points) && points > WORK_UNIT_POINTS
+		? Math.ceil(points / WORK_UNIT_POINTS)
+		: 1;
 }
 
 let limiter: { limiter: Limiter; rate: number; burst: number } | undefined;
@@ -75,7 +77,8 @@ function computeBucket(): { limiter: Limiter; rate: number; burst: number } {
 		const raw = process.env.COMPUTE_RATE_LIMIT;
 		const rate = raw === undefined || raw.trim() === '' ? 100 : Number(raw);
 		const ok = Number.isFinite(rate) && rate >= 0;
-		if (!ok) console.warn(`[statewright] COMPUTE_RATE_LIMIT="${raw}" is not a number ≥ 0; using 100.`);
+		if (!ok)
+			console.warn(`[statewright] COMPUTE_RATE_LIMIT="${raw}" is not a number ≥ 0; using 100.`);
 		const r = ok ? rate : 100;
 		const burst = Math.max(1, 2 * r);
 		limiter = { limiter: createLimiter({ ratePerSecond: r, burst, now: clock }), rate: r, burst };
@@ -99,7 +102,10 @@ const clientKey = (event: RequestEvent) => clientIp(event) ?? 'unknown';
 function rateLimitedError(retryAfterMs: number, units: number): AppError {
 	const { rate, burst } = computeBucket();
 	const after = retryAfterSeconds({ retryAfterMs });
-	const cost = units > 1 ? ` This request costs ${units} units (one per ${WORK_UNIT_POINTS} points asked for); fewer points cost less.` : '';
+	const cost =
+		units > 1
+			? ` This request costs ${units} units (one per ${WORK_UNIT_POINTS} points asked for); fewer points cost less.`
+			: '';
 	return new AppError(
 		429,
 		'rate-limited',
@@ -137,7 +143,8 @@ function chargeUnits(event: RequestEvent, units: number): void {
 export function computeError(e: unknown, event: RequestEvent): Response {
 	if (e instanceof AppError) {
 		const headers: Record<string, string> = {};
-		if (e.retryAfterMs !== undefined) headers['retry-after'] = retryAfterSeconds({ retryAfterMs: e.retryAfterMs });
+		if (e.retryAfterMs !== undefined)
+			headers['retry-after'] = retryAfterSeconds({ retryAfterMs: e.retryAfterMs });
 		return jsonError(e.status, e.code, e.message, {}, headers);
 	}
 	if (e instanceof ZodError) {
@@ -153,7 +160,11 @@ export function computeError(e: unknown, event: RequestEvent): Response {
 	}
 	const ref = randomUUID().slice(0, 8);
 	console.error(`[statewright] compute ${ref} ${event.request.method} ${event.url.pathname}`, e);
-	return jsonError(422, 'compute-failed', `This request could not be computed (reference ${ref}). Please report it with the request body.`);
+	return jsonError(
+		422,
+		'compute-failed',
+		`This request could not be computed (reference ${ref}). Please report it with the request body.`
+	);
 }
 
 /** The unit every request pays on arrival, before its body or query is read. */
@@ -168,14 +179,22 @@ function rateLimited(event: RequestEvent): Response | null {
 
 /** Read a JSON body: application/json, at most MAX_BODY_BYTES, parsed and checked by `schema`. */
 export function readBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
-	return readJson(request, schema, { maxBytes: MAX_BODY_BYTES, sizeHint: 'a path of 50 legs fits easily in that.' });
+	return readJson(request, schema, {
+		maxBytes: MAX_BODY_BYTES,
+		sizeHint: 'a path of 50 legs fits easily in that.'
+	});
 }
 
 /** Check URL query parameters against `schema` (each parameter once). */
 export function readQuery<S extends z.ZodType>(url: URL, schema: S): z.infer<S> {
 	const obj: Record<string, string> = {};
 	for (const [k, v] of url.searchParams) {
-		if (k in obj) throw new AppError(400, 'invalid-input', `The query parameter "${k}" is given more than once.`);
+		if (k in obj)
+			throw new AppError(
+				400,
+				'invalid-input',
+				`The query parameter "${k}" is given more than once.`
+			);
 		obj[k] = v;
 	}
 	return schema.parse(obj);
@@ -193,7 +212,9 @@ function refuseQuery(url: URL): void {
 }
 
 /** A POST compute route: rate limit, then the handler's object as JSON, errors in the shape. */
-export function computePost<E extends RequestEvent>(handler: (event: E) => Promise<unknown> | unknown) {
+export function computePost<E extends RequestEvent>(
+	handler: (event: E) => Promise<unknown> | unknown
+) {
 	return async (event: E): Promise<Response> => {
 		const limited = rateLimited(event);
 		if (limited) return limited;
@@ -210,7 +231,10 @@ export function computePost<E extends RequestEvent>(handler: (event: E) => Promi
 export const CACHE_MAX_BYTES = 16 * 1024 * 1024;
 export const CACHE_MAX_ENTRIES = 500;
 const utf8 = new TextEncoder();
-export const answerCache = createAnswerCache({ maxBytes: CACHE_MAX_BYTES, maxEntries: CACHE_MAX_ENTRIES });
+export const answerCache = createAnswerCache({
+	maxBytes: CACHE_MAX_BYTES,
+	maxEntries: CACHE_MAX_ENTRIES
+});
 
 /**
  * A cache-friendly GET compute route: the answer depends only on the URL (and the engine's
@@ -218,7 +242,9 @@ export const answerCache = createAnswerCache({ maxBytes: CACHE_MAX_BYTES, maxEnt
  * entries), served with a strong ETag and `Cache-Control: public, max-age=86400`, and answered
  * 304 on a matching If-None-Match. A cached answer is charged the units it cost to compute.
  */
-export function computeGet<E extends RequestEvent>(handler: (event: E) => Promise<unknown> | unknown) {
+export function computeGet<E extends RequestEvent>(
+	handler: (event: E) => Promise<unknown> | unknown
+) {
 	return async (event: E): Promise<Response> => {
 		const limited = rateLimited(event);
 		if (limited) return limited;
@@ -228,16 +254,25 @@ export function computeGet<E extends RequestEvent>(handler: (event: E) => Promis
 			if (hit) chargeUnits(event, hit.units);
 			else {
 				const body = utf8.encode(JSON.stringify(await handler(event)));
-				hit = { body, etag: `"${createHash('sha1').update(body).digest('base64url').slice(0, 27)}"`, units: charged.get(event) ?? 1 };
+				hit = {
+					body,
+					etag: `"${createHash('sha1').update(body).digest('base64url').slice(0, 27)}"`,
+					units: charged.get(event) ?? 1
+				};
 				answerCache.set(key, hit);
 			}
 		} catch (e) {
 			return computeError(e, event);
 		}
-		const headers = { etag: hit.etag, 'cache-control': 'public, max-age=86400', vary: 'accept-encoding' };
+		const headers = {
+			etag: hit.etag,
+			'cache-control': 'public, max-age=86400',
+			vary: 'accept-encoding'
+		};
 		const inm = event.request.headers.get('if-none-match');
 		const etag = hit.etag;
-		if (inm && inm.split(',').some((t) => t.trim() === etag || t.trim() === `W/${etag}`)) return new Response(null, { status: 304, headers });
+		if (inm && inm.split(',').some((t) => t.trim() === etag || t.trim() === `W/${etag}`))
+			return new Response(null, { status: 304, headers });
 		return new Response(hit.body, { headers: { ...headers, 'content-type': 'application/json' } });
 	};
 }

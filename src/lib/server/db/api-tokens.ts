@@ -4,7 +4,14 @@ import { newId } from '../secrets';
 
 export async function insertApiToken(
 	db: DB,
-	input: { teamId: string; name: string; tokenHash: string; prefix: string; role: Role; createdBy: string },
+	input: {
+		teamId: string;
+		name: string;
+		tokenHash: string;
+		prefix: string;
+		role: Role;
+		createdBy: string;
+	},
 	now = Date.now()
 ): Promise<ApiToken> {
 	const row: ApiToken = {
@@ -25,7 +32,10 @@ export async function insertApiToken(
 
 /** A live (not revoked) token by its hash. */
 /** A live token by its hash, with its creator's name (null when the account is gone). */
-export async function getLiveApiTokenByHash(db: DB, tokenHash: string): Promise<(ApiToken & { created_by_name: string | null }) | undefined> {
+export async function getLiveApiTokenByHash(
+	db: DB,
+	tokenHash: string
+): Promise<(ApiToken & { created_by_name: string | null }) | undefined> {
 	return db
 		.selectFrom('api_tokens')
 		.leftJoin('users', 'users.id', 'api_tokens.created_by')
@@ -36,8 +46,17 @@ export async function getLiveApiTokenByHash(db: DB, tokenHash: string): Promise<
 		.executeTakeFirst();
 }
 
-export async function getTeamApiToken(db: DB, teamId: string, id: string): Promise<ApiToken | undefined> {
-	return db.selectFrom('api_tokens').selectAll().where('team_id', '=', teamId).where('id', '=', id).executeTakeFirst();
+export async function getTeamApiToken(
+	db: DB,
+	teamId: string,
+	id: string
+): Promise<ApiToken | undefined> {
+	return db
+		.selectFrom('api_tokens')
+		.selectAll()
+		.where('team_id', '=', teamId)
+		.where('id', '=', id)
+		.executeTakeFirst();
 }
 
 export interface ListedApiToken extends Omit<ApiToken, 'token_hash'> {
@@ -67,7 +86,12 @@ export async function listApiTokens(db: DB, teamId: string): Promise<ListedApiTo
 		.execute();
 }
 
-export async function revokeApiToken(db: DB, teamId: string, id: string, now = Date.now()): Promise<boolean> {
+export async function revokeApiToken(
+	db: DB,
+	teamId: string,
+	id: string,
+	now = Date.now()
+): Promise<boolean> {
 	const r = await db
 		.updateTable('api_tokens')
 		.set({ revoked_at: now })

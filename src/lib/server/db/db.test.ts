@@ -12,7 +12,13 @@ import { createUser, getUserByEmail, markEmailVerified } from './users';
 import { createTeam, getTeamBySlug, listTeamsForUser, slugify, SLUG_PATTERN } from './teams';
 import { addMember, countOwners, getMembership, listMembers, ownsAnyTeam } from './memberships';
 import { insertSession, getSessionAndUser, deleteExpiredSessions } from './sessions';
-import { clearMailFor, getMailFor, insertOutboxMessage, listMailFor, listOutboxMessages } from './outbox';
+import {
+	clearMailFor,
+	getMailFor,
+	insertOutboxMessage,
+	listMailFor,
+	listOutboxMessages
+} from './outbox';
 import { logTeamEvent, listTeamEvents } from './team-events';
 import { match as slugMatcher } from '../../../params/slug';
 
@@ -38,13 +44,31 @@ describe('migrations', () => {
 			expect(fk.rows[0].foreign_keys).toBe(1);
 			// a second run finds nothing to do
 			expect(await migrateToLatest(db, migrations)).toEqual([]);
-			const tables = await sql<{ name: string }>`select name from sqlite_master where type = 'table' and name not like 'kysely_%' and name not like 'sqlite_%' order by name`.execute(db);
+			const tables = await sql<{
+				name: string;
+			}>`select name from sqlite_master where type = 'table' and name not like 'kysely_%' and name not like 'sqlite_%' order by name`.execute(
+				db
+			);
 			// the foundation's tables (later migrations add their own)
 			expect(tables.rows.map((r) => r.name)).toEqual(
-				expect.arrayContaining(['api_tokens', 'email_tokens', 'invites', 'memberships', 'outbox', 'sessions', 'team_events', 'teams', 'users'])
+				expect.arrayContaining([
+					'api_tokens',
+					'email_tokens',
+					'invites',
+					'memberships',
+					'outbox',
+					'sessions',
+					'team_events',
+					'teams',
+					'users'
+				])
 			);
 			for (const m of Object.values(migrations).reverse()) await m.down!(db);
-			const left = await sql<{ name: string }>`select name from sqlite_master where type = 'table' and name not like 'kysely_%' and name not like 'sqlite_%'`.execute(db);
+			const left = await sql<{
+				name: string;
+			}>`select name from sqlite_master where type = 'table' and name not like 'kysely_%' and name not like 'sqlite_%'`.execute(
+				db
+			);
 			expect(left.rows).toEqual([]);
 		} finally {
 			await db.destroy();
@@ -53,7 +77,8 @@ describe('migrations', () => {
 	});
 
 	it('are named <ISO timestamp>_<verb_object>', () => {
-		for (const name of Object.keys(migrations)) expect(name).toMatch(/^\d{8}T\d{6}Z_[a-z]+(_[a-z]+)+$/);
+		for (const name of Object.keys(migrations))
+			expect(name).toMatch(/^\d{8}T\d{6}Z_[a-z]+(_[a-z]+)+$/);
 	});
 });
 
@@ -69,7 +94,18 @@ describe('users', () => {
 	it('refuses an upper-case address written around the helpers', async () => {
 		db = await createTestDb();
 		await expect(
-			db.insertInto('users').values({ id: 'x', email: 'A@B.C', name: 'n', password_hash: 'h', email_verified_at: null, created_at: 0, updated_at: 0 }).execute()
+			db
+				.insertInto('users')
+				.values({
+					id: 'x',
+					email: 'A@B.C',
+					name: 'n',
+					password_hash: 'h',
+					email_verified_at: null,
+					created_at: 0,
+					updated_at: 0
+				})
+				.execute()
 		).rejects.toThrow(/CHECK/);
 	});
 
@@ -101,12 +137,19 @@ describe('teams and memberships', () => {
 	});
 
 	it('makes URL names the route matcher accepts', () => {
-		for (const name of ['Ünïcødé Wärme', 'x', '---', 'A very long team name that goes on and on and on beyond forty', 'Kältetechnik & Co.']) {
+		for (const name of [
+			'Ünïcødé Wärme',
+			'x',
+			'---',
+			'A very long team name that goes on and on and on beyond forty',
+			'Kältetechnik & Co.'
+		]) {
 			const s = slugify(name);
 			expect(s, name).toMatch(SLUG_PATTERN);
 			expect(slugMatcher(s), name).toBe(true);
 		}
-		for (const bad of ['', 'a', '-ab', 'ab-', 'a--b', 'AB', 'a/b', '../x', 'a'.repeat(41)]) expect(slugMatcher(bad), bad).toBe(false);
+		for (const bad of ['', 'a', '-ab', 'ab-', 'a--b', 'AB', 'a/b', '../x', 'a'.repeat(41)])
+			expect(slugMatcher(bad), bad).toBe(false);
 	});
 
 	it('refuses a role outside the four and a duplicate membership', async () => {
@@ -127,14 +170,25 @@ describe('teams and memberships', () => {
 		await addMember(db, t.id, (await user('v@example.com', 'Ann Viewer')).id, 'viewer');
 		await addMember(db, t.id, (await user('c@example.com', 'Bo Checker')).id, 'checker');
 		await addMember(db, t.id, (await user('d@example.com', 'Cy Designer')).id, 'designer');
-		expect((await listMembers(db, t.id)).map((m) => m.role)).toEqual(['owner', 'designer', 'checker', 'viewer']);
+		expect((await listMembers(db, t.id)).map((m) => m.role)).toEqual([
+			'owner',
+			'designer',
+			'checker',
+			'viewer'
+		]);
 	});
 
 	it('cascades: deleting a team removes its memberships and events', async () => {
 		db = await createTestDb();
 		const o = await user('o@example.com');
 		const t = await createTeam(db, { name: 'Gone', ownerId: o.id });
-		await logTeamEvent(db, { teamId: t.id, actorId: o.id, actorLabel: 'O', kind: 'team.created', detail: { a: 1 } });
+		await logTeamEvent(db, {
+			teamId: t.id,
+			actorId: o.id,
+			actorLabel: 'O',
+			kind: 'team.created',
+			detail: { a: 1 }
+		});
 		expect((await listTeamEvents(db, t.id))[0].detail).toEqual({ a: 1 });
 		await db.deleteFrom('teams').where('id', '=', t.id).execute();
 		expect(await getMembership(db, t.id, o.id)).toBeUndefined();
@@ -159,7 +213,17 @@ describe('sessions and outbox', () => {
 
 	it('filters the outbox by recipient without wildcard tricks', async () => {
 		db = await createTestDb();
-		const base = { message_id: null, envelope_from: 'f@x', from_header: 'f@x', to_header: '', subject: 's', text: 't', html: null, raw: 'r', received_at: 1 };
+		const base = {
+			message_id: null,
+			envelope_from: 'f@x',
+			from_header: 'f@x',
+			to_header: '',
+			subject: 's',
+			text: 't',
+			html: null,
+			raw: 'r',
+			received_at: 1
+		};
 		await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['a@example.com']) });
 		await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['b@example.com']) });
 		expect(await listOutboxMessages(db, { to: 'A@example.com' })).toHaveLength(1);
@@ -167,21 +231,58 @@ describe('sessions and outbox', () => {
 		expect(await listOutboxMessages(db)).toHaveLength(2);
 	});
 
-	it("hands a person only their own mail: exact address, since their account was made, and clears only that", async () => {
+	it('hands a person only their own mail: exact address, since their account was made, and clears only that', async () => {
 		db = await createTestDb();
-		const base = { message_id: null, envelope_from: 'f@x', from_header: 'f@x', to_header: '', subject: 's', text: 't', html: null, raw: 'r' };
-		const mine = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['a_b@example.com']), received_at: 2000 });
-		const before = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['a_b@example.com']), received_at: 999 });
+		const base = {
+			message_id: null,
+			envelope_from: 'f@x',
+			from_header: 'f@x',
+			to_header: '',
+			subject: 's',
+			text: 't',
+			html: null,
+			raw: 'r'
+		};
+		const mine = await insertOutboxMessage(db, {
+			...base,
+			envelope_to: JSON.stringify(['a_b@example.com']),
+			received_at: 2000
+		});
+		const before = await insertOutboxMessage(db, {
+			...base,
+			envelope_to: JSON.stringify(['a_b@example.com']),
+			received_at: 999
+		});
 		// addresses that a LIKE pattern, or a stripped one, would have matched
-		const lookalike = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['axb@example.com']), received_at: 2000 });
-		const stripped = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['ab@example.com']), received_at: 2000 });
-		const shared = await insertOutboxMessage(db, { ...base, envelope_to: JSON.stringify(['a_b@example.com', 'c@example.com']), received_at: 2000 });
-		expect((await listMailFor(db, 'A_B@example.com', 1000)).map((m) => m.id)).toEqual([shared, mine]);
+		const lookalike = await insertOutboxMessage(db, {
+			...base,
+			envelope_to: JSON.stringify(['axb@example.com']),
+			received_at: 2000
+		});
+		const stripped = await insertOutboxMessage(db, {
+			...base,
+			envelope_to: JSON.stringify(['ab@example.com']),
+			received_at: 2000
+		});
+		const shared = await insertOutboxMessage(db, {
+			...base,
+			envelope_to: JSON.stringify(['a_b@example.com', 'c@example.com']),
+			received_at: 2000
+		});
+		expect((await listMailFor(db, 'A_B@example.com', 1000)).map((m) => m.id)).toEqual([
+			shared,
+			mine
+		]);
 		expect(await getMailFor(db, mine, 'a_b@example.com', 1000)).toBeDefined();
-		for (const id of [before, lookalike, stripped]) expect(await getMailFor(db, id, 'a_b@example.com', 1000)).toBeUndefined();
+		for (const id of [before, lookalike, stripped])
+			expect(await getMailFor(db, id, 'a_b@example.com', 1000)).toBeUndefined();
 		expect(await listMailFor(db, '%', 0)).toEqual([]);
 		expect(await listMailFor(db, 'a%b@example.com', 0)).toEqual([]);
 		expect(await clearMailFor(db, 'a_b@example.com')).toBe(2);
-		expect((await listOutboxMessages(db)).map((m) => m.id).sort((x, y) => x - y)).toEqual([lookalike, stripped, shared]);
+		expect((await listOutboxMessages(db)).map((m) => m.id).sort((x, y) => x - y)).toEqual([
+			lookalike,
+			stripped,
+			shared
+		]);
 	});
 });

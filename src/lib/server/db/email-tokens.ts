@@ -4,7 +4,13 @@ import { normalizeEmail } from './users';
 
 export async function insertEmailToken(
 	db: DB,
-	input: { userId: string; purpose: EmailTokenPurpose; tokenHash: string; email: string; expiresAt: number },
+	input: {
+		userId: string;
+		purpose: EmailTokenPurpose;
+		tokenHash: string;
+		email: string;
+		expiresAt: number;
+	},
 	now = Date.now()
 ): Promise<EmailToken> {
 	const row: EmailToken = {
@@ -21,7 +27,11 @@ export async function insertEmailToken(
 	return row;
 }
 
-export async function getEmailToken(db: DB, purpose: EmailTokenPurpose, tokenHash: string): Promise<EmailToken | undefined> {
+export async function getEmailToken(
+	db: DB,
+	purpose: EmailTokenPurpose,
+	tokenHash: string
+): Promise<EmailToken | undefined> {
 	return db
 		.selectFrom('email_tokens')
 		.selectAll()
@@ -42,7 +52,12 @@ export async function markEmailTokenUsed(db: DB, id: string, now = Date.now()): 
 }
 
 /** Retires every unused token of one purpose for a user (a new link, or a finished reset). */
-export async function retireEmailTokens(db: DB, userId: string, purpose: EmailTokenPurpose, now = Date.now()): Promise<void> {
+export async function retireEmailTokens(
+	db: DB,
+	userId: string,
+	purpose: EmailTokenPurpose,
+	now = Date.now()
+): Promise<void> {
 	await db
 		.updateTable('email_tokens')
 		.set({ used_at: now })

@@ -5,7 +5,14 @@ import { normalizeEmail } from './users';
 
 export async function insertInvite(
 	db: DB,
-	input: { teamId: string; email: string; role: Role; tokenHash: string; invitedBy: string | null; expiresAt: number },
+	input: {
+		teamId: string;
+		email: string;
+		role: Role;
+		tokenHash: string;
+		invitedBy: string | null;
+		expiresAt: number;
+	},
 	now = Date.now()
 ): Promise<Invite> {
 	const invite: Invite = {
@@ -26,11 +33,24 @@ export async function insertInvite(
 }
 
 export async function getInviteByTokenHash(db: DB, tokenHash: string): Promise<Invite | undefined> {
-	return db.selectFrom('invites').selectAll().where('token_hash', '=', tokenHash).executeTakeFirst();
+	return db
+		.selectFrom('invites')
+		.selectAll()
+		.where('token_hash', '=', tokenHash)
+		.executeTakeFirst();
 }
 
-export async function getTeamInvite(db: DB, teamId: string, id: string): Promise<Invite | undefined> {
-	return db.selectFrom('invites').selectAll().where('team_id', '=', teamId).where('id', '=', id).executeTakeFirst();
+export async function getTeamInvite(
+	db: DB,
+	teamId: string,
+	id: string
+): Promise<Invite | undefined> {
+	return db
+		.selectFrom('invites')
+		.selectAll()
+		.where('team_id', '=', teamId)
+		.where('id', '=', id)
+		.executeTakeFirst();
 }
 
 export interface PendingInvite extends Invite {
@@ -38,7 +58,11 @@ export interface PendingInvite extends Invite {
 }
 
 /** Invites not yet accepted, revoked or expired, newest first. */
-export async function listPendingInvites(db: DB, teamId: string, now = Date.now()): Promise<PendingInvite[]> {
+export async function listPendingInvites(
+	db: DB,
+	teamId: string,
+	now = Date.now()
+): Promise<PendingInvite[]> {
 	return db
 		.selectFrom('invites as i')
 		.leftJoin('users as u', 'u.id', 'i.invited_by')
@@ -53,7 +77,12 @@ export async function listPendingInvites(db: DB, teamId: string, now = Date.now(
 }
 
 /** Revokes every open invite of `email` to the team (a new invite replaces the old link). */
-export async function revokeOpenInvitesFor(db: DB, teamId: string, email: string, now = Date.now()): Promise<void> {
+export async function revokeOpenInvitesFor(
+	db: DB,
+	teamId: string,
+	email: string,
+	now = Date.now()
+): Promise<void> {
 	await db
 		.updateTable('invites')
 		.set({ revoked_at: now })
@@ -64,7 +93,12 @@ export async function revokeOpenInvitesFor(db: DB, teamId: string, email: string
 		.execute();
 }
 
-export async function revokeInvite(db: DB, teamId: string, id: string, now = Date.now()): Promise<boolean> {
+export async function revokeInvite(
+	db: DB,
+	teamId: string,
+	id: string,
+	now = Date.now()
+): Promise<boolean> {
 	const r = await db
 		.updateTable('invites')
 		.set({ revoked_at: now })
@@ -77,7 +111,12 @@ export async function revokeInvite(db: DB, teamId: string, id: string, now = Dat
 }
 
 /** Marks an open invite accepted; false if someone used or revoked it first. */
-export async function markInviteAccepted(db: DB, id: string, userId: string, now = Date.now()): Promise<boolean> {
+export async function markInviteAccepted(
+	db: DB,
+	id: string,
+	userId: string,
+	now = Date.now()
+): Promise<boolean> {
 	const r = await db
 		.updateTable('invites')
 		.set({ accepted_at: now, accepted_by: userId })

@@ -10,7 +10,11 @@ export interface Member {
 	created_at: number;
 }
 
-export async function getMembership(db: DB, teamId: string, userId: string): Promise<Membership | undefined> {
+export async function getMembership(
+	db: DB,
+	teamId: string,
+	userId: string
+): Promise<Membership | undefined> {
 	return db
 		.selectFrom('memberships')
 		.selectAll()
@@ -34,14 +38,26 @@ function byRoleThenName(a: Member, b: Member): number {
 	return RANK[a.role] - RANK[b.role] || a.name.localeCompare(b.name);
 }
 
-export async function addMember(db: DB, teamId: string, userId: string, role: Role, now = Date.now()): Promise<void> {
+export async function addMember(
+	db: DB,
+	teamId: string,
+	userId: string,
+	role: Role,
+	now = Date.now()
+): Promise<void> {
 	await db
 		.insertInto('memberships')
 		.values({ team_id: teamId, user_id: userId, role, created_at: now, updated_at: now })
 		.execute();
 }
 
-export async function setMemberRole(db: DB, teamId: string, userId: string, role: Role, now = Date.now()): Promise<void> {
+export async function setMemberRole(
+	db: DB,
+	teamId: string,
+	userId: string,
+	role: Role,
+	now = Date.now()
+): Promise<void> {
 	await db
 		.updateTable('memberships')
 		.set({ role, updated_at: now })
@@ -51,7 +67,11 @@ export async function setMemberRole(db: DB, teamId: string, userId: string, role
 }
 
 export async function removeMember(db: DB, teamId: string, userId: string): Promise<void> {
-	await db.deleteFrom('memberships').where('team_id', '=', teamId).where('user_id', '=', userId).execute();
+	await db
+		.deleteFrom('memberships')
+		.where('team_id', '=', teamId)
+		.where('user_id', '=', userId)
+		.execute();
 }
 
 export async function countOwners(db: DB, teamId: string): Promise<number> {

@@ -15,9 +15,12 @@ export async function migrateToLatest(
 	const { error, results } = await migrator.migrateToLatest();
 	if (error) {
 		const failed = results?.find((r) => r.status === 'Error')?.migrationName ?? 'unknown';
-		throw new Error(`Migration ${failed} failed: ${error instanceof Error ? error.message : String(error)}`, {
-			cause: error
-		});
+		throw new Error(
+			`Migration ${failed} failed: ${error instanceof Error ? error.message : String(error)}`,
+			{
+				cause: error
+			}
+		);
 	}
 	return results ?? [];
 }

@@ -1,7 +1,14 @@
 import type { DB } from './schema';
 
 /** The e-mails a person can turn off, one switch each. */
-export const NOTIFICATION_KINDS = ['mention', 'reply', 'submitted', 'checked', 'approved', 'returned'] as const;
+export const NOTIFICATION_KINDS = [
+	'mention',
+	'reply',
+	'submitted',
+	'checked',
+	'approved',
+	'returned'
+] as const;
 export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
 export type NotificationSettings = Record<NotificationKind, boolean>;
 
@@ -24,14 +31,30 @@ const COLUMN = {
 } as const;
 
 /** A person's settings (everything on when they never changed them). */
-export async function getNotificationSettings(db: DB, userId: string): Promise<NotificationSettings> {
-	const row = await db.selectFrom('notification_settings').selectAll().where('user_id', '=', userId).executeTakeFirst();
+export async function getNotificationSettings(
+	db: DB,
+	userId: string
+): Promise<NotificationSettings> {
+	const row = await db
+		.selectFrom('notification_settings')
+		.selectAll()
+		.where('user_id', '=', userId)
+		.executeTakeFirst();
 	if (!row) return { ...DEFAULT_NOTIFICATION_SETTINGS };
-	return Object.fromEntries(NOTIFICATION_KINDS.map((k) => [k, row[COLUMN[k]] === 1])) as NotificationSettings;
+	return Object.fromEntries(
+		NOTIFICATION_KINDS.map((k) => [k, row[COLUMN[k]] === 1])
+	) as NotificationSettings;
 }
 
-export async function setNotificationSettings(db: DB, userId: string, settings: NotificationSettings, now = Date.now()): Promise<void> {
-	const values = Object.fromEntries(NOTIFICATION_KINDS.map((k) => [COLUMN[k], settings[k] ? 1 : 0])) as Record<(typeof COLUMN)[NotificationKind], number>;
+export async function setNotificationSettings(
+	db: DB,
+	userId: string,
+	settings: NotificationSettings,
+	now = Date.now()
+): Promise<void> {
+	const values = Object.fromEntries(
+		NOTIFICATION_KINDS.map((k) => [COLUMN[k], settings[k] ? 1 : 0])
+	) as Record<(typeof COLUMN)[NotificationKind], number>;
 	await db
 		.insertInto('notification_settings')
 		.values({ user_id: userId, ...values, updated_at: now })
@@ -40,7 +63,11 @@ export async function setNotificationSettings(db: DB, userId: string, settings: 
 }
 
 /** Of these people, those who want mails of this kind. */
-export async function wantsMail(db: DB, userIds: readonly string[], kind: NotificationKind): Promise<Set<string>> {
+export async function wantsMail(
+	db: DB,
+	userIds: readonly string[],
+	kind: NotificationKind
+): Promise<Set<string>> {
 	if (userIds.length === 0) return new Set();
 	const off = await db
 		.selectFrom('notification_settings')

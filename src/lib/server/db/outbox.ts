@@ -4,22 +4,46 @@ import type { DB, OutboxMessage } from './schema';
 export type NewOutboxMessage = Omit<OutboxMessage, 'id'>;
 
 export async function insertOutboxMessage(db: DB, message: NewOutboxMessage): Promise<number> {
-	const row = await db.insertInto('outbox').values(message).returning('id').executeTakeFirstOrThrow();
+	const row = await db
+		.insertInto('outbox')
+		.values(message)
+		.returning('id')
+		.executeTakeFirstOrThrow();
 	return row.id;
 }
 
 export type OutboxSummary = Omit<OutboxMessage, 'raw' | 'html'>;
 
 /** Newest first; optionally only messages to one address. */
-export async function listOutboxMessages(db: DB, options: { to?: string; limit?: number } = {}): Promise<OutboxSummary[]> {
+export async function listOutboxMessages(
+	db: DB,
+	options: { to?: string; limit?: number } = {}
+): Promise<OutboxSummary[]> {
 	let q = db
 		.selectFrom('outbox')
-		.select(['id', 'message_id', 'envelope_from', 'envelope_to', 'from_header', 'to_header', 'subject', 'text', 'received_at'])
+		.select([
+			'id',
+			'message_id',
+			'envelope_from',
+			'envelope_to',
+			'from_header',
+			'to_header',
+			'subject',
+			'text',
+			'received_at'
+		])
 		.orderBy('id', 'desc')
 		.limit(Math.min(Math.max(options.limit ?? 100, 1), 500));
 	if (options.to) {
 		// envelope_to is a JSON array of lower-cased addresses
-		q = q.where('envelope_to', 'like', `%"${options.to.trim().toLowerCase().replace(/[%_"\\]/g, '')}"%`);
+		q = q.where(
+			'envelope_to',
+			'like',
+			`%"${options.to
+				.trim()
+				.toLowerCase()
+				.replace(/[%_"\\]/g, '')}"%`
+		);
 	}
 	return q.execute();
 }
@@ -38,10 +62,25 @@ function addressedTo(address: string) {
 }
 
 /** Newest first: the mail whose envelope names `address`, received at or after `since`. */
-export async function listMailFor(db: DB, address: string, since: number, limit = 200): Promise<OutboxSummary[]> {
+export async function listMailFor(
+	db: DB,
+	address: string,
+	since: number,
+	limit = 200
+): Promise<OutboxSummary[]> {
 	return db
 		.selectFrom('outbox')
-		.select(['id', 'message_id', 'envelope_from', 'envelope_to', 'from_header', 'to_header', 'subject', 'text', 'received_at'])
+		.select([
+			'id',
+			'message_id',
+			'envelope_from',
+			'envelope_to',
+			'from_header',
+			'to_header',
+			'subject',
+			'text',
+			'received_at'
+		])
 		.where(addressedTo(address))
 		.where('received_at', '>=', since)
 		.orderBy('id', 'desc')
@@ -50,8 +89,19 @@ export async function listMailFor(db: DB, address: string, since: number, limit 
 }
 
 /** One message, only if it is addressed to `address` and arrived at or after `since`. */
-export async function getMailFor(db: DB, id: number, address: string, since: number): Promise<OutboxMessage | undefined> {
-	return db.selectFrom('outbox').selectAll().where('id', '=', id).where(addressedTo(address)).where('received_at', '>=', since).executeTakeFirst();
+export async function getMailFor(
+	db: DB,
+	id: number,
+	address: string,
+	since: number
+): Promise<OutboxMessage | undefined> {
+	return db
+		.selectFrom('outbox')
+		.selectAll()
+		.where('id', '=', id)
+		.where(addressedTo(address))
+		.where('received_at', '>=', since)
+		.executeTakeFirst();
 }
 
 /** Deletes the mail addressed to `address` alone; mail that also went to others stays. Returns how many. */

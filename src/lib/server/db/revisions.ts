@@ -1,4 +1,11 @@
-import type { DB, RevisionEventKind, SheetRevisionEvent, SheetRevisionRow, SheetRevisionsTable, SheetStatusValue } from './schema';
+import type {
+	DB,
+	RevisionEventKind,
+	SheetRevisionEvent,
+	SheetRevisionRow,
+	SheetRevisionsTable,
+	SheetStatusValue
+} from './schema';
 import type { Updateable } from 'kysely';
 
 /** Revision columns without the two JSON bodies, for lists. */
@@ -78,17 +85,40 @@ export async function insertRevision(db: DB, r: NewRevision, now = Date.now()): 
 }
 
 /** The newest revision of a sheet (without the JSON bodies), or undefined before Rev 1. */
-export async function latestRevision(db: DB, sheetId: string): Promise<RevisionListRow | undefined> {
-	return db.selectFrom('sheet_revisions').select(LIGHT).where('sheet_id', '=', sheetId).orderBy('number', 'desc').limit(1).executeTakeFirst();
+export async function latestRevision(
+	db: DB,
+	sheetId: string
+): Promise<RevisionListRow | undefined> {
+	return db
+		.selectFrom('sheet_revisions')
+		.select(LIGHT)
+		.where('sheet_id', '=', sheetId)
+		.orderBy('number', 'desc')
+		.limit(1)
+		.executeTakeFirst();
 }
 
 /** One revision with its document and result. */
-export async function getRevision(db: DB, sheetId: string, number: number): Promise<SheetRevisionRow | undefined> {
-	return db.selectFrom('sheet_revisions').selectAll().where('sheet_id', '=', sheetId).where('number', '=', number).executeTakeFirst();
+export async function getRevision(
+	db: DB,
+	sheetId: string,
+	number: number
+): Promise<SheetRevisionRow | undefined> {
+	return db
+		.selectFrom('sheet_revisions')
+		.selectAll()
+		.where('sheet_id', '=', sheetId)
+		.where('number', '=', number)
+		.executeTakeFirst();
 }
 
 export async function listRevisionRows(db: DB, sheetId: string): Promise<RevisionListRow[]> {
-	return db.selectFrom('sheet_revisions').select(LIGHT).where('sheet_id', '=', sheetId).orderBy('number', 'desc').execute();
+	return db
+		.selectFrom('sheet_revisions')
+		.select(LIGHT)
+		.where('sheet_id', '=', sheetId)
+		.orderBy('number', 'desc')
+		.execute();
 }
 
 /**
@@ -99,9 +129,17 @@ export async function updateRevisionStatus(
 	db: DB,
 	id: string,
 	from: SheetStatusValue,
-	patch: Omit<Updateable<SheetRevisionsTable>, 'id' | 'doc' | 'result' | 'number' | 'sheet_id' | 'team_id'>
+	patch: Omit<
+		Updateable<SheetRevisionsTable>,
+		'id' | 'doc' | 'result' | 'number' | 'sheet_id' | 'team_id'
+	>
 ): Promise<boolean> {
-	const r = await db.updateTable('sheet_revisions').set(patch).where('id', '=', id).where('status', '=', from).executeTakeFirst();
+	const r = await db
+		.updateTable('sheet_revisions')
+		.set(patch)
+		.where('id', '=', id)
+		.where('status', '=', from)
+		.executeTakeFirst();
 	return Number(r.numUpdatedRows) === 1;
 }
 
@@ -134,7 +172,10 @@ export async function logRevisionEvent(
 		.execute();
 }
 
-export async function listRevisionEvents(db: DB, sheetId: string): Promise<Array<SheetRevisionEvent & { number: number }>> {
+export async function listRevisionEvents(
+	db: DB,
+	sheetId: string
+): Promise<Array<SheetRevisionEvent & { number: number }>> {
 	return db
 		.selectFrom('sheet_revision_events as e')
 		.innerJoin('sheet_revisions as r', 'r.id', 'e.revision_id')

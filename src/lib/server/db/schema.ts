@@ -176,7 +176,8 @@ export interface SheetRevisionsTable {
 	returned_at: number | null;
 }
 
-export type RevisionEventKind = 'saved' | 'submitted' | 'returned' | 'checked' | 'approved' | 'restored';
+export type RevisionEventKind =
+	'saved' | 'submitted' | 'returned' | 'checked' | 'approved' | 'restored';
 
 export interface SheetRevisionEventsTable {
 	id: Generated<number>;

@@ -68,7 +68,12 @@ export async function insertSheet(db: DB, input: NewSheetRow, now = Date.now()):
 
 /** A sheet of a team by id (ids of other teams' sheets are not found). */
 export async function getSheet(db: DB, teamId: string, id: string): Promise<SheetRow | undefined> {
-	return db.selectFrom('sheets').selectAll().where('team_id', '=', teamId).where('id', '=', id).executeTakeFirst();
+	return db
+		.selectFrom('sheets')
+		.selectAll()
+		.where('team_id', '=', teamId)
+		.where('id', '=', id)
+		.executeTakeFirst();
 }
 
 const LIST_COLUMNS = [
@@ -126,7 +131,11 @@ export interface ListOptions {
 }
 
 /** A team's sheets, most recently changed first. */
-export async function listSheets(db: DB, teamId: string, options: ListOptions = {}): Promise<SheetListItem[]> {
+export async function listSheets(
+	db: DB,
+	teamId: string,
+	options: ListOptions = {}
+): Promise<SheetListItem[]> {
 	let query = db
 		.selectFrom('sheets')
 		.select(LIST_COLUMNS)
@@ -177,7 +186,11 @@ export interface RecentSheet extends SheetListItem {
 }
 
 /** The most recently changed sheets across every team a person belongs to. */
-export async function listRecentSheetsForUser(db: DB, userId: string, limit = 8): Promise<RecentSheet[]> {
+export async function listRecentSheetsForUser(
+	db: DB,
+	userId: string,
+	limit = 8
+): Promise<RecentSheet[]> {
 	return db
 		.selectFrom('sheets as s')
 		.innerJoin('memberships as m', 'm.team_id', 's.team_id')
@@ -207,7 +220,13 @@ export interface DraftWrite {
 }
 
 /** Write a draft if nobody saved since `baseVersion`: the new version, or null on a conflict. */
-export async function writeDraft(db: DB, teamId: string, id: string, input: DraftWrite, now = Date.now()): Promise<number | null> {
+export async function writeDraft(
+	db: DB,
+	teamId: string,
+	id: string,
+	input: DraftWrite,
+	now = Date.now()
+): Promise<number | null> {
 	const r = await db
 		.updateTable('sheets')
 		.set({
@@ -226,7 +245,14 @@ export async function writeDraft(db: DB, teamId: string, id: string, input: Draf
 	return Number(r.numUpdatedRows) === 1 ? input.baseVersion + 1 : null;
 }
 
-export async function renameSheet(db: DB, teamId: string, id: string, title: string, actor: { id: string | null; label: string }, now = Date.now()): Promise<boolean> {
+export async function renameSheet(
+	db: DB,
+	teamId: string,
+	id: string,
+	title: string,
+	actor: { id: string | null; label: string },
+	now = Date.now()
+): Promise<boolean> {
 	const r = await db
 		.updateTable('sheets')
 		.set({ title, updated_by: actor.id, updated_by_label: actor.label, updated_at: now })
@@ -238,6 +264,10 @@ export async function renameSheet(db: DB, teamId: string, id: string, title: str
 
 /** Deletes a sheet; its revisions, events, notes and traces go with it (foreign keys cascade). */
 export async function deleteSheetRow(db: DB, teamId: string, id: string): Promise<boolean> {
-	const r = await db.deleteFrom('sheets').where('team_id', '=', teamId).where('id', '=', id).executeTakeFirst();
+	const r = await db
+		.deleteFrom('sheets')
+		.where('team_id', '=', teamId)
+		.where('id', '=', id)
+		.executeTakeFirst();
 	return Number(r.numDeletedRows) > 0;
 }

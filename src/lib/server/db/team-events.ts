@@ -16,7 +16,13 @@ export type TeamEventKind =
 
 export async function logTeamEvent(
 	db: DB,
-	input: { teamId: string; actorId: string | null; actorLabel: string; kind: TeamEventKind; detail?: Record<string, unknown> },
+	input: {
+		teamId: string;
+		actorId: string | null;
+		actorLabel: string;
+		kind: TeamEventKind;
+		detail?: Record<string, unknown>;
+	},
 	now = Date.now()
 ): Promise<void> {
 	await db
@@ -36,7 +42,11 @@ export interface ListedTeamEvent extends Omit<TeamEvent, 'detail'> {
 	detail: Record<string, unknown>;
 }
 
-export async function listTeamEvents(db: DB, teamId: string, limit = 50): Promise<ListedTeamEvent[]> {
+export async function listTeamEvents(
+	db: DB,
+	teamId: string,
+	limit = 50
+): Promise<ListedTeamEvent[]> {
 	const rows = await db
 		.selectFrom('team_events')
 		.selectAll()

@@ -19,7 +19,9 @@ export function slugify(name: string): string {
 async function freeSlug(db: DB, name: string): Promise<string> {
 	const base = slugify(name);
 	const taken = new Set(
-		(await db.selectFrom('teams').select('slug').where('slug', 'like', `${base}%`).execute()).map((r) => r.slug)
+		(await db.selectFrom('teams').select('slug').where('slug', 'like', `${base}%`).execute()).map(
+			(r) => r.slug
+		)
 	);
 	if (!taken.has(base)) return base;
 	for (let i = 2; ; i++) if (!taken.has(`${base}-${i}`)) return `${base}-${i}`;
@@ -42,7 +44,13 @@ export async function createTeam(
 	await db.insertInto('teams').values(team).execute();
 	await db
 		.insertInto('memberships')
-		.values({ team_id: team.id, user_id: input.ownerId, role: 'owner', created_at: now, updated_at: now })
+		.values({
+			team_id: team.id,
+			user_id: input.ownerId,
+			role: 'owner',
+			created_at: now,
+			updated_at: now
+		})
 		.execute();
 	return team;
 }
@@ -78,7 +86,12 @@ export async function listTeamsForUser(db: DB, userId: string): Promise<TeamWith
 		.execute() as Promise<TeamWithRole[]>;
 }
 
-export async function updateTeam(db: DB, id: string, input: { name: string; description: string }, now = Date.now()) {
+export async function updateTeam(
+	db: DB,
+	id: string,
+	input: { name: string; description: string },
+	now = Date.now()
+) {
 	await db
 		.updateTable('teams')
 		.set({ name: input.name.trim(), description: input.description.trim(), updated_at: now })

@@ -28,19 +28,44 @@ export async function insertTrace(db: DB, row: SheetTraceRow): Promise<void> {
 }
 
 export async function listTraceRows(db: DB, sheetId: string): Promise<TraceListRow[]> {
-	return db.selectFrom('sheet_traces').select(LIGHT).where('sheet_id', '=', sheetId).orderBy('uploaded_at', 'asc').orderBy('id', 'asc').execute();
+	return db
+		.selectFrom('sheet_traces')
+		.select(LIGHT)
+		.where('sheet_id', '=', sheetId)
+		.orderBy('uploaded_at', 'asc')
+		.orderBy('id', 'asc')
+		.execute();
 }
 
 export async function listTraceRowsWithPoints(db: DB, sheetId: string): Promise<SheetTraceRow[]> {
-	return db.selectFrom('sheet_traces').selectAll().where('sheet_id', '=', sheetId).orderBy('uploaded_at', 'asc').orderBy('id', 'asc').execute();
+	return db
+		.selectFrom('sheet_traces')
+		.selectAll()
+		.where('sheet_id', '=', sheetId)
+		.orderBy('uploaded_at', 'asc')
+		.orderBy('id', 'asc')
+		.execute();
 }
 
-export async function getTraceRow(db: DB, sheetId: string, id: string): Promise<SheetTraceRow | undefined> {
-	return db.selectFrom('sheet_traces').selectAll().where('sheet_id', '=', sheetId).where('id', '=', id).executeTakeFirst();
+export async function getTraceRow(
+	db: DB,
+	sheetId: string,
+	id: string
+): Promise<SheetTraceRow | undefined> {
+	return db
+		.selectFrom('sheet_traces')
+		.selectAll()
+		.where('sheet_id', '=', sheetId)
+		.where('id', '=', id)
+		.executeTakeFirst();
 }
 
 export async function deleteTraceRow(db: DB, sheetId: string, id: string): Promise<boolean> {
-	const r = await db.deleteFrom('sheet_traces').where('sheet_id', '=', sheetId).where('id', '=', id).executeTakeFirst();
+	const r = await db
+		.deleteFrom('sheet_traces')
+		.where('sheet_id', '=', sheetId)
+		.where('id', '=', id)
+		.executeTakeFirst();
 	return Number(r.numDeletedRows) === 1;
 }
 

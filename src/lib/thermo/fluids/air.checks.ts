@@ -8,10 +8,21 @@ import type { CheckTable } from './checks.ts';
  * Not in checked-fluids.ts: air is not registered (see air.ts); air.test.ts runs these.
  */
 export const airSinglePhase: CheckTable = {
-	source: 'Lemmon et al. (2000), as transcribed in pychemqt lib/mEoS/Air.py, Selected point from Table A2, Pag 366, single phase',
+	source:
+		'Lemmon et al. (2000), as transcribed in pychemqt lib/mEoS/Air.py, Selected point from Table A2, Pag 366, single phase',
 	input: 'T-P',
 	energies: 'absolute',
-	columns: ['T [K]', 'P [MPa]', 'rho [mol/dm3]', 'u [J/mol]', 'h [J/mol]', 's [J/(mol K)]', 'cv [J/(mol K)]', 'cp [J/(mol K)]', 'w [m/s]'],
+	columns: [
+		'T [K]',
+		'P [MPa]',
+		'rho [mol/dm3]',
+		'u [J/mol]',
+		'h [J/mol]',
+		's [J/(mol K)]',
+		'cv [J/(mol K)]',
+		'cp [J/(mol K)]',
+		'w [m/s]'
+	],
 	rows: [
 		['100', '0.101325', '0.12449', '2028.2', '2842.1', '166.61', '21.09', '30.13', '198.2'],
 		['500', '0.2', '0.048077', '10418', '14578', '208.20', '21.51', '29.84', '446.6'],
@@ -26,7 +37,8 @@ export const airSinglePhase: CheckTable = {
  * pychemqt lib/mEoS/Air.py (Test.test_lemmon): T [K], bubble P [MPa], dew P [MPa].
  */
 export const airBubbleDew = {
-	source: 'Lemmon et al. (2000), as transcribed in pychemqt lib/mEoS/Air.py, Selected point from Table A1, Pag 363',
+	source:
+		'Lemmon et al. (2000), as transcribed in pychemqt lib/mEoS/Air.py, Selected point from Table A1, Pag 363',
 	rows: [
 		['59.75', '0.005265', '0.00243'],
 		['70', '0.03191', '0.01943'],

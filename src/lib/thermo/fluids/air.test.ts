@@ -18,7 +18,11 @@ import { airBubbleDew, airSinglePhase } from './air.checks.ts';
  */
 const data: FluidData = {
 	...airEquation,
-	ancillaries: { pSat: airBoundaries.bubblePressure, rhoLiquid: airBoundaries.dewDensity, rhoVapor: airBoundaries.dewDensity }
+	ancillaries: {
+		pSat: airBoundaries.bubblePressure,
+		rhoLiquid: airBoundaries.dewDensity,
+		rhoVapor: airBoundaries.dewDensity
+	}
 };
 const fl = new Fluid(data);
 const M = airEquation.molarMass;
@@ -57,7 +61,8 @@ describe('air (Lemmon et al. 2000): printed single-phase table', () => {
 			['rho', 'u', 'h', 's', 'cv', 'cp', 'w'].forEach((k, i) => {
 				const text = row[i + 2];
 				const got = molar[k];
-				if (!(Math.abs(got - Number(text)) <= halfUnit(text))) failures.push(`T = ${T} K, P = ${PMPa} MPa: ${k} ${got} against printed ${text}`);
+				if (!(Math.abs(got - Number(text)) <= halfUnit(text)))
+					failures.push(`T = ${T} K, P = ${PMPa} MPa: ${k} ${got} against printed ${text}`);
 			});
 		}
 		expect(failures).toEqual([]);
@@ -70,13 +75,22 @@ describe('air (Lemmon et al. 2000): bubble and dew lines', () => {
 
 	it(`bubble- and dew-point pressures: ${airBubbleDew.source}`, () => {
 		for (const [T, pb, pd] of airBubbleDew.rows) {
-			expect(Math.abs(bubble.value(Number(T)) / 1e6 - Number(pb)), `bubble P at ${T} K`).toBeLessThanOrEqual(halfUnit(pb));
-			expect(Math.abs(dew.value(Number(T)) / 1e6 - Number(pd)), `dew P at ${T} K`).toBeLessThanOrEqual(halfUnit(pd));
+			expect(
+				Math.abs(bubble.value(Number(T)) / 1e6 - Number(pb)),
+				`bubble P at ${T} K`
+			).toBeLessThanOrEqual(halfUnit(pb));
+			expect(
+				Math.abs(dew.value(Number(T)) / 1e6 - Number(pd)),
+				`dew P at ${T} K`
+			).toBeLessThanOrEqual(halfUnit(pd));
 		}
 	});
 
 	it('the dew-pressure exponents 0.5, 1, 1.5, 2 of one transcription miss the printed 59.75 K value (why 0.5, 1, 2.5, 4 were kept)', () => {
-		const other = new AncillaryEq({ ...airBoundaries.dewPressure, t: [0.5, 1, 1.5, 2] }, airBoundaries.maxcondentherm.T);
+		const other = new AncillaryEq(
+			{ ...airBoundaries.dewPressure, t: [0.5, 1, 1.5, 2] },
+			airBoundaries.maxcondentherm.T
+		);
 		// Table A1 (via pychemqt): 0.00243 MPa at 59.75 K
 		expect(other.value(59.75) / 1e6).toBeLessThan(0.001);
 		expect(Math.abs(dew.value(59.75) / 1e6 - 0.00243)).toBeLessThanOrEqual(0.000005);
@@ -86,6 +100,7 @@ describe('air (Lemmon et al. 2000): bubble and dew lines', () => {
 		const { T, P } = airBoundaries.maxcondentherm;
 		expect(bubble.value(T)).toBe(P);
 		expect(dew.value(T)).toBe(P);
-		for (let t = 59.75; t < T - 0.01; t += 0.5) expect(bubble.value(t)).toBeGreaterThan(dew.value(t));
+		for (let t = 59.75; t < T - 0.01; t += 0.5)
+			expect(bubble.value(t)).toBeGreaterThan(dew.value(t));
 	});
 });

@@ -48,7 +48,14 @@ function relErr(a: number, b: number): number {
 describe('ammonia vs python3-iapws 1.5.2 (Debian), iapws.ammonia.NH3', () => {
 	it('uses a fixture covering liquid, dome, vapor, supercritical and near-critical states', () => {
 		const regions = new Set(points.map((p) => p.region));
-		for (const r of ['compressed-liquid', 'saturated', 'two-phase', 'superheated-vapor', 'supercritical', 'near-critical']) {
+		for (const r of [
+			'compressed-liquid',
+			'saturated',
+			'two-phase',
+			'superheated-vapor',
+			'supercritical',
+			'near-critical'
+		]) {
 			expect(regions.has(r)).toBe(true);
 		}
 		// the offset between the conventions is tiny: the published constants are close to IIR already
@@ -60,17 +67,26 @@ describe('ammonia vs python3-iapws 1.5.2 (Debian), iapws.ammonia.NH3', () => {
 		let worst = 0;
 		for (const raw of points) {
 			const p = ours(raw);
-			const st = p.call === 'T,x' ? fixState('ammonia', { T: p.T, x: p.x as number }) : fixState('ammonia', { T: p.T, rho: p.rho });
+			const st =
+				p.call === 'T,x'
+					? fixState('ammonia', { T: p.T, x: p.x as number })
+					: fixState('ammonia', { T: p.T, rho: p.rho });
 			const tol = p.x === null ? 1e-6 : 1e-5;
 			for (const k of ['P', 'v', 'u', 'h', 's'] as const) {
 				const e = relErr(st[k], p[k]);
 				worst = Math.max(worst, e);
-				expect(e, `${k} at T=${p.T}, rho=${p.rho} (${p.region}): ${st[k]} vs ${p[k]}`).toBeLessThanOrEqual(tol);
+				expect(
+					e,
+					`${k} at T=${p.T}, rho=${p.rho} (${p.region}): ${st[k]} vs ${p[k]}`
+				).toBeLessThanOrEqual(tol);
 			}
 			if (p.x === null) {
 				expect(st.x).toBeNull();
 				for (const k of ['cv', 'cp', 'w'] as const) {
-					expect(relErr(st[k] as number, p[k] as number), `${k} at T=${p.T}, rho=${p.rho}`).toBeLessThanOrEqual(1e-6);
+					expect(
+						relErr(st[k] as number, p[k] as number),
+						`${k} at T=${p.T}, rho=${p.rho}`
+					).toBeLessThanOrEqual(1e-6);
 				}
 			} else {
 				expect(Math.abs((st.x as number) - p.x)).toBeLessThanOrEqual(1e-5);
@@ -78,11 +94,13 @@ describe('ammonia vs python3-iapws 1.5.2 (Debian), iapws.ammonia.NH3', () => {
 		}
 		expect(worst).toBeLessThan(1e-5);
 	});
-
 });
 
 describe('ammonia fixture rows beyond the melting curve', () => {
 	it('are refused as solid (Haar & Gallagher 1978 melting curve)', () => {
-		for (const p of solidPoints) expect(() => fixState('ammonia', { T: p.T, rho: p.rho }), `T=${p.T} P=${p.P}`).toThrow(/solid, not a fluid/);
+		for (const p of solidPoints)
+			expect(() => fixState('ammonia', { T: p.T, rho: p.rho }), `T=${p.T} P=${p.P}`).toThrow(
+				/solid, not a fluid/
+			);
 	});
 });

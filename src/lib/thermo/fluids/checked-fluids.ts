@@ -10,4 +10,14 @@ import { r1234yfChecks } from './r1234yf.checks.ts';
 import { oxygenChecks } from './oxygen.checks.ts';
 
 /** Every fluid's published check values (run by published-checks.test.ts); one line per fluid. */
-export const checkedFluids: FluidChecks[] = [propaneChecks, r32Checks, argonChecks, methaneChecks, isobutaneChecks, r1234zeEChecks, hydrogenChecks, r1234yfChecks, oxygenChecks];
+export const checkedFluids: FluidChecks[] = [
+	propaneChecks,
+	r32Checks,
+	argonChecks,
+	methaneChecks,
+	isobutaneChecks,
+	r1234zeEChecks,
+	hydrogenChecks,
+	r1234yfChecks,
+	oxygenChecks
+];

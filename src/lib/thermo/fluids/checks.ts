@@ -52,7 +52,14 @@ export interface CheckTable {
 export interface FluidChecks {
 	fluid: string;
 	/** published critical point the equation passes through (P at T, ρ to its printed digits, or within rel) */
-	critical?: { source: string; T: string; P: string; rho: string; units: [CheckUnit, CheckUnit, CheckUnit]; rel?: number };
+	critical?: {
+		source: string;
+		T: string;
+		P: string;
+		rho: string;
+		units: [CheckUnit, CheckUnit, CheckUnit];
+		rel?: number;
+	};
 	/** normal boiling point, K, as printed */
 	normalBoilingPoint?: { source: string; T: string };
 	tables: CheckTable[];

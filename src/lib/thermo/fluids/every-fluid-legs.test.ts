@@ -28,7 +28,12 @@ describe.each(checkedFluids.map((c) => [c.fluid]))('%s legs and chart lines', (i
 
 	it('gives every process a leg that ends at its target, with q = Δu + w and qFlow = Δh + wShaft', () => {
 		const cases: [string, Record<string, number>, Process, Record<string, number>, number?][] = [
-			['evaporate and superheat at constant P', { P: Plow, x: 0 }, 'isobaric', { T: Tlow + 0.2 * (Tc - Tt) }],
+			[
+				'evaporate and superheat at constant P',
+				{ P: Plow, x: 0 },
+				'isobaric',
+				{ T: Tlow + 0.2 * (Tc - Tt) }
+			],
 			['compress saturated vapor isentropically', { P: Plow, x: 1 }, 'isentropic', { P: Phigh }],
 			['throttle saturated liquid', { P: Phigh, x: 0 }, 'isenthalpic', { P: Plow }],
 			['heat a sealed two-phase charge', { T: Tlow, x: 0.3 }, 'isochoric', { T: Thigh }],
@@ -42,25 +47,52 @@ describe.each(checkedFluids.map((c) => [c.fluid]))('%s legs and chart lines', (i
 			const got = (leg.end as unknown as Record<string, number>)[k];
 			if (k === 'x') expect(Math.abs(got - v), what).toBeLessThan(1e-9);
 			else expect(rel(got, v), what).toBeLessThan(1e-9);
-			const scale = Math.max(Math.abs(leg.q), Math.abs(leg.w), Math.abs(leg.du), Math.abs(leg.dh), 1);
+			const scale = Math.max(
+				Math.abs(leg.q),
+				Math.abs(leg.w),
+				Math.abs(leg.du),
+				Math.abs(leg.dh),
+				1
+			);
 			if (process === 'isenthalpic') {
 				// throttling is irreversible: the engine reports no work and no heat, and keeps h
 				expect([leg.q, leg.w, leg.wShaft, leg.qFlow], what).toEqual([0, 0, 0, 0]);
 				expect(leg.ds, what).toBeGreaterThan(0);
 			} else {
-				expect(Math.abs(leg.q - (leg.du + leg.w)), `${what}: q = Δu + w`).toBeLessThan(1e-9 * scale);
-				expect(Math.abs(leg.qFlow - (leg.dh + leg.wShaft)), `${what}: qFlow = Δh + wShaft`).toBeLessThan(1e-9 * scale);
+				expect(Math.abs(leg.q - (leg.du + leg.w)), `${what}: q = Δu + w`).toBeLessThan(
+					1e-9 * scale
+				);
+				expect(
+					Math.abs(leg.qFlow - (leg.dh + leg.wShaft)),
+					`${what}: qFlow = Δh + wShaft`
+				).toBeLessThan(1e-9 * scale);
 			}
-			if (process === 'isobaric') expect(Math.abs(leg.q - leg.dh), `${what}: q = Δh`).toBeLessThan(1e-6 * scale);
-			if (process === 'isothermal') expect(Math.abs(leg.q - leg.start.T * leg.ds), `${what}: q = TΔs`).toBeLessThan(1e-6 * scale);
-			if (process === 'isentropic') expect(Math.abs(leg.q), `${what}: q = 0`).toBeLessThan(1e-6 * scale);
-			for (const p of leg.points) for (const q of [p.T, p.P, p.rho, p.h, p.s]) expect(Number.isFinite(q), what).toBe(true);
+			if (process === 'isobaric')
+				expect(Math.abs(leg.q - leg.dh), `${what}: q = Δh`).toBeLessThan(1e-6 * scale);
+			if (process === 'isothermal')
+				expect(Math.abs(leg.q - leg.start.T * leg.ds), `${what}: q = TΔs`).toBeLessThan(
+					1e-6 * scale
+				);
+			if (process === 'isentropic')
+				expect(Math.abs(leg.q), `${what}: q = 0`).toBeLessThan(1e-6 * scale);
+			for (const p of leg.points)
+				for (const q of [p.T, p.P, p.rho, p.h, p.s]) expect(Number.isFinite(q), what).toBe(true);
 		}
 		// the throttle keeps h; the isentrope keeps s (to the engine's quadrature and solver tolerance)
-		const thr = computeLeg({ fluid: id, start: { P: Phigh, x: 0 }, process: 'isenthalpic', target: { P: Plow } });
+		const thr = computeLeg({
+			fluid: id,
+			start: { P: Phigh, x: 0 },
+			process: 'isenthalpic',
+			target: { P: Plow }
+		});
 		expect(Math.abs(thr.end.h - thr.start.h)).toBeLessThan(1e-6 * data.R * Tc);
 		expect(thr.end.x).toBeGreaterThan(0);
-		const ise = computeLeg({ fluid: id, start: { P: Plow, x: 1 }, process: 'isentropic', target: { P: Phigh } });
+		const ise = computeLeg({
+			fluid: id,
+			start: { P: Plow, x: 1 },
+			process: 'isentropic',
+			target: { P: Phigh }
+		});
 		expect(Math.abs(ise.end.s - ise.start.s)).toBeLessThan(1e-9 * data.R);
 	});
 
@@ -69,13 +101,15 @@ describe.each(checkedFluids.map((c) => [c.fluid]))('%s legs and chart lines', (i
 		expect(curve.liquid.length).toBeGreaterThanOrEqual(30);
 		expect(curve.vapor.length).toBe(curve.liquid.length);
 		expect(rel(curve.critical.T, Tc)).toBeLessThan(1e-3);
-		for (const p of [...curve.liquid, ...curve.vapor]) expect(Number.isFinite(p.v) && p.P > 0).toBe(true);
+		for (const p of [...curve.liquid, ...curve.vapor])
+			expect(Number.isFinite(p.v) && p.P > 0).toBe(true);
 		const [bar] = isolines(id, 'isobar', [Phigh], 60);
 		const [therm] = isolines(id, 'isotherm', [Tlow], 60);
 		expect(bar.points.length).toBeGreaterThanOrEqual(60);
 		expect(therm.points.length).toBeGreaterThanOrEqual(60);
 		// the isobar runs flat in T through the dome, at the saturation temperature
-		const vL = fixState(id, { T: Thigh, x: 0 }).v, vV = fixState(id, { T: Thigh, x: 1 }).v;
+		const vL = fixState(id, { T: Thigh, x: 0 }).v,
+			vV = fixState(id, { T: Thigh, x: 1 }).v;
 		const inDome = bar.points.filter((p) => p.v > vL * (1 + 1e-6) && p.v < vV * (1 - 1e-6));
 		expect(inDome.length).toBeGreaterThan(0);
 		for (const p of inDome) expect(rel(p.T, Thigh)).toBeLessThan(1e-6);

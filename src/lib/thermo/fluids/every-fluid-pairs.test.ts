@@ -26,7 +26,11 @@ const KNOWN_SOLVER_MISSES = new Set([
 
 describe.each(checkedFluids.map((c) => [c.fluid]))('%s round trips', (id) => {
 	it('returns every reference state through all 21 input pairs', () => {
-		const { failures, pairsTried } = gridPairFailures(id, fluidData.find((f) => f.id === id)!, KNOWN_SOLVER_MISSES);
+		const { failures, pairsTried } = gridPairFailures(
+			id,
+			fluidData.find((f) => f.id === id)!,
+			KNOWN_SOLVER_MISSES
+		);
 		expect(failures).toEqual([]);
 		expect(pairsTried).toBe(21);
 	});

@@ -32,7 +32,9 @@ describe('ammonia: python3-iapws 1.5.2 (Debian) states from every input pair', (
 	const dh = 200e3 - fixture.saturatedLiquidAt273_15.h;
 	const ds = 1e3 - fixture.saturatedLiquidAt273_15.s;
 	// rows beyond the melting curve are solid (refused; ammonia-iapws.test.ts)
-	const points = (fixture.points as Point[]).filter((p) => !isSolidAt('ammonia', p.T, p.P)).map((p) => ({ ...p, u: p.u + dh, h: p.h + dh, s: p.s + ds }));
+	const points = (fixture.points as Point[])
+		.filter((p) => !isSolidAt('ammonia', p.T, p.P))
+		.map((p) => ({ ...p, u: p.u + dh, h: p.h + dh, s: p.s + ds }));
 
 	it('recovers every fixture state: ≤ 1e-6 single-phase, ≤ 1e-5 on and in the dome', () => {
 		const failures: string[] = [];
@@ -50,7 +52,8 @@ describe('ammonia: python3-iapws 1.5.2 (Debian) states from every input pair', (
 				}
 				tried++;
 				const out = fixFromPair('ammonia', p, pair, rel);
-				if (out.failure) failures.push(`${p.region} T=${p.T} rho=${p.rho} from (${a}, ${b}): ${out.failure}`);
+				if (out.failure)
+					failures.push(`${p.region} T=${p.T} rho=${p.rho} from (${a}, ${b}): ${out.failure}`);
 			}
 		}
 		expect(failures).toEqual([]);

@@ -38,7 +38,10 @@ function expectPrinted(actual: number, text: string, unit: number, rel = 0, what
 function expectPrintedDiff(actual: number, a: string, b: string, unit: number, what = ''): void {
 	const expected = (Number(a) - Number(b)) * unit;
 	const tol = (halfUnit(a, unit) + halfUnit(b, unit)) * (1 + 1e-6);
-	expect(Math.abs(actual - expected), `${what} ${actual} vs ${a} − ${b}; tolerance ${tol}`).toBeLessThanOrEqual(tol);
+	expect(
+		Math.abs(actual - expected),
+		`${what} ${actual} vs ${a} − ${b}; tolerance ${tol}`
+	).toBeLessThanOrEqual(tol);
 }
 
 function sat(fluid: string, T: number): { liq: State; vap: State } {
@@ -55,9 +58,19 @@ describe('fluid data files', () => {
 
 	it('declare the reference states of docs/compute-api.md', () => {
 		for (const f of [ammonia, carbonDioxide, r134a]) {
-			expect(f.referenceState).toMatchObject({ kind: 'saturated-liquid-at-T', T: 273.15, h: 200e3, s: 1e3 });
+			expect(f.referenceState).toMatchObject({
+				kind: 'saturated-liquid-at-T',
+				T: 273.15,
+				h: 200e3,
+				s: 1e3
+			});
 		}
-		expect(nitrogen.referenceState).toMatchObject({ kind: 'saturated-liquid-at-P', P: 101325, h: 0, s: 0 });
+		expect(nitrogen.referenceState).toMatchObject({
+			kind: 'saturated-liquid-at-P',
+			P: 101325,
+			h: 0,
+			s: 0
+		});
 	});
 });
 
@@ -222,18 +235,40 @@ describe('R-134a, Tillner-Roth & Baehr (1994)', () => {
 		// ρ′ = 518.20 + 884.13θ^(1/3) + 485.84θ^(2/3) + 193.29θ^(10/3)
 		// ρ″ = 516.86·exp(−2.837294θ^(1/3) − 7.875988θ^(2/3) + 4.478586θ^(1/2) − 14.140125θ^(9/4) − 52.361297θ^(11/2))
 		const th = (T: number) => 1 - T / 374.18;
-		const ps = (T: number) => 4.05629e6 * Math.exp((374.18 / T) * (-7.686556 * th(T) + 2.311791 * th(T) ** 1.5 - 2.039554 * th(T) ** 2 - 3.583758 * th(T) ** 4));
-		const rl = (T: number) => 518.2 + 884.13 * th(T) ** (1 / 3) + 485.84 * th(T) ** (2 / 3) + 193.29 * th(T) ** (10 / 3);
-		const rv = (T: number) => 516.86 * Math.exp(-2.837294 * th(T) ** (1 / 3) - 7.875988 * th(T) ** (2 / 3) + 4.478586 * th(T) ** 0.5 - 14.140125 * th(T) ** 2.25 - 52.361297 * th(T) ** 5.5);
+		const ps = (T: number) =>
+			4.05629e6 *
+			Math.exp(
+				(374.18 / T) *
+					(-7.686556 * th(T) +
+						2.311791 * th(T) ** 1.5 -
+						2.039554 * th(T) ** 2 -
+						3.583758 * th(T) ** 4)
+			);
+		const rl = (T: number) =>
+			518.2 + 884.13 * th(T) ** (1 / 3) + 485.84 * th(T) ** (2 / 3) + 193.29 * th(T) ** (10 / 3);
+		const rv = (T: number) =>
+			516.86 *
+			Math.exp(
+				-2.837294 * th(T) ** (1 / 3) -
+					7.875988 * th(T) ** (2 / 3) +
+					4.478586 * th(T) ** 0.5 -
+					14.140125 * th(T) ** 2.25 -
+					52.361297 * th(T) ** 5.5
+			);
 		for (let T = 170; T <= 374; T += 6) {
 			expect(Math.abs(fl.ancP.value(T) / ps(T) - 1), `pSat form at ${T}`).toBeLessThan(1e-13);
-			expect(Math.abs(fl.ancRhoL.value(T) / rl(T) - 1), `rhoLiquid form at ${T}`).toBeLessThan(1e-13);
-			expect(Math.abs(fl.ancRhoV.value(T) / rv(T) - 1), `rhoVapor form at ${T}`).toBeLessThan(1e-13);
+			expect(Math.abs(fl.ancRhoL.value(T) / rl(T) - 1), `rhoLiquid form at ${T}`).toBeLessThan(
+				1e-13
+			);
+			expect(Math.abs(fl.ancRhoV.value(T) / rv(T) - 1), `rhoVapor form at ${T}`).toBeLessThan(
+				1e-13
+			);
 			// and they follow the equation where they were fitted (the paper's data range): a check that the coefficients were copied right
 			const { liq, vap } = sat(id, T);
 			if (T >= 240) expect(Math.abs(ps(T) / liq.P - 1), `p_s at ${T}`).toBeLessThan(3e-4);
 			if (T <= 370) expect(Math.abs(rl(T) / liq.rho - 1), `ρ′ at ${T}`).toBeLessThan(4e-4);
-			if (T >= 260 && T <= 340) expect(Math.abs(rv(T) / vap.rho - 1), `ρ″ at ${T}`).toBeLessThan(1e-3);
+			if (T >= 260 && T <= 340)
+				expect(Math.abs(rv(T) / vap.rho - 1), `ρ″ at ${T}`).toBeLessThan(1e-3);
 		}
 	});
 
@@ -327,7 +362,13 @@ describe('nitrogen, Span et al. (2000)', () => {
 
 	it('passes through its critical point', () => {
 		// Span et al. (2000): Tc = 126.192 K, ρc = 11.1839 mol/dm³, pc = 3.3958 MPa
-		expectPrinted(fixState(id, { T: 126.192, rho: 11.1839 * molar }).P, '3.3958', MPa, 0, 'P(Tc, ρc)');
+		expectPrinted(
+			fixState(id, { T: 126.192, rho: 11.1839 * molar }).P,
+			'3.3958',
+			MPa,
+			0,
+			'P(Tc, ρc)'
+		);
 	});
 
 	it('has the triple-point pressure', () => {

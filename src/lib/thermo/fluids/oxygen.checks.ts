@@ -7,10 +7,17 @@ import type { FluidChecks } from './checks.ts';
  */
 export const oxygenChecks: FluidChecks = {
 	fluid: 'oxygen',
-	critical: { source: 'Schmidt & Wagner (1985): Tc = 154.581 K, pc = 5.043 MPa, ρc = 13.63 mol/dm³', T: '154.581', P: '5.043', rho: '13.63', units: ['K', 'MPa', 'mol/dm3'] },
+	critical: {
+		source: 'Schmidt & Wagner (1985): Tc = 154.581 K, pc = 5.043 MPa, ρc = 13.63 mol/dm³',
+		T: '154.581',
+		P: '5.043',
+		rho: '13.63',
+		units: ['K', 'MPa', 'mol/dm3']
+	},
 	tables: [
 		{
-			source: 'Schmidt & Wagner (1985), as transcribed in pychemqt lib/mEoS/O2.py, Table 4 pag 191, Saturation densities',
+			source:
+				'Schmidt & Wagner (1985), as transcribed in pychemqt lib/mEoS/O2.py, Table 4 pag 191, Saturation densities',
 			input: 'T-sat',
 			energies: 'absolute',
 			columns: ['T [K]', 'rhoL [mol/dm3]', 'rhoV [mol/dm3]'],

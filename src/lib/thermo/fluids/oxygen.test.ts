@@ -24,7 +24,9 @@ describe('oxygen: ideal-gas heat capacity', () => {
 			const r = fl.idealAt(1, fl.Tr / T, 2);
 			const cv = -fl.R * r.t2 * M;
 			expect(Math.abs(cv - cv0), `cv0 at ${T} K: ${cv}`).toBeLessThanOrEqual(0.001);
-			expect(Math.abs(cv + fl.R * M - cp0), `cp0 at ${T} K: ${cv + fl.R * M}`).toBeLessThanOrEqual(0.0005);
+			expect(Math.abs(cv + fl.R * M - cp0), `cp0 at ${T} K: ${cv + fl.R * M}`).toBeLessThanOrEqual(
+				0.0005
+			);
 		}
 	});
 });

@@ -43,7 +43,11 @@ export const propane: FluidData = {
 	ideal: [
 		{ kind: 'lead', a1: -4.970583, a2: 4.29352 },
 		{ kind: 'log-tau', a: 3 },
-		{ kind: 'planck-einstein', n: [3.043, 5.874, 9.337, 7.922], gamma: [393 / Tc, 1237 / Tc, 1984 / Tc, 4351 / Tc] }
+		{
+			kind: 'planck-einstein',
+			n: [3.043, 5.874, 9.337, 7.922],
+			gamma: [393 / Tc, 1237 / Tc, 1984 / Tc, 4351 / Tc]
+		}
 	],
 	residual: [
 		{

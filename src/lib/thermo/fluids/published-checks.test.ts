@@ -39,11 +39,13 @@ interface Column {
 
 function parseColumn(text: string): Column {
 	const m = /^(\w+) \[(.+)\]$/.exec(text);
-	if (!m || !(m[2] in CHECK_UNITS)) throw new Error(`column "${text}" is not "<property> [<known unit>]"`);
+	if (!m || !(m[2] in CHECK_UNITS))
+		throw new Error(`column "${text}" is not "<property> [<known unit>]"`);
 	return { name: m[1], unit: m[2] as CheckUnit };
 }
 
-const toSI = (text: string, c: Column, M: number) => Number(text) * factor(c.unit, M) + (c.unit === 'degC' ? 273.15 : 0);
+const toSI = (text: string, c: Column, M: number) =>
+	Number(text) * factor(c.unit, M) + (c.unit === 'degC' ? 273.15 : 0);
 const ENERGY = new Set(['u', 'h', 's', 'uL', 'uV', 'hL', 'hV', 'sL', 'sV']);
 
 interface Fixed {
@@ -69,7 +71,9 @@ function computed(name: string, st: Fixed): number {
 function runTable(id: string, M: number, table: CheckTable): string[] {
 	const failures: string[] = [];
 	const cols = table.columns.map(parseColumn);
-	const inputs = { 'T-rho': ['T', 'rho'], 'T-P': ['T', 'P'], 'T-sat': ['T'], 'P-sat': ['P'] }[table.input];
+	const inputs = { 'T-rho': ['T', 'rho'], 'T-P': ['T', 'P'], 'T-sat': ['T'], 'P-sat': ['P'] }[
+		table.input
+	];
 	const rel = table.rel?.value ?? 0;
 	const cell = (row: string[], name: string) => {
 		const k = cols.findIndex((c) => c.name === name);
@@ -80,14 +84,23 @@ function runTable(id: string, M: number, table: CheckTable): string[] {
 		if (table.input === 'T-sat' || table.input === 'P-sat') {
 			const key = table.input === 'T-sat' ? 'T' : 'P';
 			const v = cell(row, key);
-			return { one: null, liq: fixState(id, { [key]: v, x: 0 }), vap: fixState(id, { [key]: v, x: 1 }) };
+			return {
+				one: null,
+				liq: fixState(id, { [key]: v, x: 0 }),
+				vap: fixState(id, { [key]: v, x: 1 })
+			};
 		}
 		const other = inputs[1];
-		return { one: fixState(id, { T: cell(row, 'T'), [other]: cell(row, other) }), liq: null, vap: null };
+		return {
+			one: fixState(id, { T: cell(row, 'T'), [other]: cell(row, other) }),
+			liq: null,
+			vap: null
+		};
 	};
 	const first = fix(table.rows[0]);
 	for (const row of table.rows) {
-		if (row.length !== cols.length) failures.push(`row ${row.join(' ')} has ${row.length} cells for ${cols.length} columns`);
+		if (row.length !== cols.length)
+			failures.push(`row ${row.join(' ')} has ${row.length} cells for ${cols.length} columns`);
 		const st = fix(row);
 		cols.forEach((c, k) => {
 			const text = row[k];
@@ -106,63 +119,88 @@ function runTable(id: string, M: number, table: CheckTable): string[] {
 			}
 			tol *= 1 + 1e-9;
 			if (!(Math.abs(actual - expected) <= tol))
-				failures.push(`${table.input} ${row.join(' ')}: ${c.name} = ${(actual / f).toPrecision(9)} vs printed ${text} [${c.unit}] (tolerance ${(tol / f).toPrecision(3)})`);
+				failures.push(
+					`${table.input} ${row.join(' ')}: ${c.name} = ${(actual / f).toPrecision(9)} vs printed ${text} [${c.unit}] (tolerance ${(tol / f).toPrecision(3)})`
+				);
 		});
 	}
 	return failures;
 }
 
-describe.each(checkedFluids.map((c): [string, FluidChecks] => [c.fluid, c]))('%s: published check values', (id, checks) => {
-	const data = fluidData.find((f) => f.id === id)!;
+describe.each(checkedFluids.map((c): [string, FluidChecks] => [c.fluid, c]))(
+	'%s: published check values',
+	(id, checks) => {
+		const data = fluidData.find((f) => f.id === id)!;
 
-	it('is registered', () => {
-		expect(data).toBeDefined();
-	});
+		it('is registered', () => {
+			expect(data).toBeDefined();
+		});
 
-	it.each(checks.tables.map((t, k): [number, CheckTable] => [k, t]))('reproduces table %i to its printed digits', (_, table) => {
-		expect(runTable(id, data.molarMass, table)).toEqual([]);
-	});
+		it.each(checks.tables.map((t, k): [number, CheckTable] => [k, t]))(
+			'reproduces table %i to its printed digits',
+			(_, table) => {
+				expect(runTable(id, data.molarMass, table)).toEqual([]);
+			}
+		);
 
-	it('passes through its published critical point', () => {
-		const c = checks.critical;
-		if (!c) return;
-		const [uT, uP, uRho] = c.units.map((u, k) => ({ name: ['T', 'P', 'rho'][k], unit: u }));
-		const P = fixState(id, { T: toSI(c.T, uT, data.molarMass), rho: toSI(c.rho, uRho, data.molarMass) }).P;
-		const expected = toSI(c.P, uP, data.molarMass);
-		const tol = Math.max(halfUnit(c.P, factor(uP.unit, data.molarMass)), (c.rel ?? 0) * expected) * (1 + 1e-9);
-		expect(Math.abs(P - expected), `P(Tc, ρc) = ${P} (${c.source})`).toBeLessThanOrEqual(tol);
-	});
+		it('passes through its published critical point', () => {
+			const c = checks.critical;
+			if (!c) return;
+			const [uT, uP, uRho] = c.units.map((u, k) => ({ name: ['T', 'P', 'rho'][k], unit: u }));
+			const P = fixState(id, {
+				T: toSI(c.T, uT, data.molarMass),
+				rho: toSI(c.rho, uRho, data.molarMass)
+			}).P;
+			const expected = toSI(c.P, uP, data.molarMass);
+			const tol =
+				Math.max(halfUnit(c.P, factor(uP.unit, data.molarMass)), (c.rel ?? 0) * expected) *
+				(1 + 1e-9);
+			expect(Math.abs(P - expected), `P(Tc, ρc) = ${P} (${c.source})`).toBeLessThanOrEqual(tol);
+		});
 
-	it('boils at its published normal boiling point', () => {
-		const nbp = checks.normalBoilingPoint;
-		if (!nbp) return;
-		const T = fixState(id, { P: 101325, x: 0 }).T;
-		expect(Math.abs(T - Number(nbp.T)), `T_b = ${T} (${nbp.source})`).toBeLessThanOrEqual(halfUnit(nbp.T, 1) * (1 + 1e-9));
-	});
+		it('boils at its published normal boiling point', () => {
+			const nbp = checks.normalBoilingPoint;
+			if (!nbp) return;
+			const T = fixState(id, { P: 101325, x: 0 }).T;
+			expect(Math.abs(T - Number(nbp.T)), `T_b = ${T} (${nbp.source})`).toBeLessThanOrEqual(
+				halfUnit(nbp.T, 1) * (1 + 1e-9)
+			);
+		});
 
-	it('lists the triple-point pressure its equation gives (to its rounding, 5e-4)', () => {
-		const P = fixState(id, { T: data.triple.T, x: 0 }).P;
-		expect(Math.abs(P / data.triple.P - 1), `p_t = ${P} Pa`).toBeLessThan(5e-4);
-	});
+		it('lists the triple-point pressure its equation gives (to its rounding, 5e-4)', () => {
+			const P = fixState(id, { T: data.triple.T, x: 0 }).P;
+			expect(Math.abs(P / data.triple.P - 1), `p_t = ${P} Pa`).toBeLessThan(5e-4);
+		});
 
-	it('has its declared reference state', () => {
-		const rs = data.referenceState;
-		if (rs.kind === 'as-published') return;
-		const liq = rs.kind === 'saturated-liquid-at-T' ? fixState(id, { T: rs.T, x: 0 }) : fixState(id, { P: rs.P, x: 0 });
-		expect(Math.abs(liq.h - rs.h)).toBeLessThan(1e-6);
-		expect(Math.abs(liq.s - rs.s)).toBeLessThan(1e-9);
-	});
+		it('has its declared reference state', () => {
+			const rs = data.referenceState;
+			if (rs.kind === 'as-published') return;
+			const liq =
+				rs.kind === 'saturated-liquid-at-T'
+					? fixState(id, { T: rs.T, x: 0 })
+					: fixState(id, { P: rs.P, x: 0 });
+			expect(Math.abs(liq.h - rs.h)).toBeLessThan(1e-6);
+			expect(Math.abs(liq.s - rs.s)).toBeLessThan(1e-9);
+		});
 
-	it('has two phases in equilibrium from the triple point to 1 mK below its critical point', () => {
-		const crit = saturationCurve(id, 10).critical;
-		const Tt = data.triple.T;
-		for (const T of [Tt + 0.1 * (crit.T - Tt), Tt + 0.5 * (crit.T - Tt), 0.99 * crit.T, crit.T - 0.1, crit.T - 0.01, crit.T - 1e-3]) {
-			const liq = fixState(id, { T, x: 0 });
-			const vap = fixState(id, { T, x: 1 });
-			expect(liq.rho, `ρ′ > ρ″ at ${T}`).toBeGreaterThan(vap.rho);
-			expect(Math.abs(liq.P / vap.P - 1), `P′ = P″ at ${T}`).toBeLessThan(1e-9);
-			const g = (st: State) => st.h - T * st.s;
-			expect(Math.abs(g(liq) - g(vap)) / (data.R * T), `g′ = g″ at ${T}`).toBeLessThan(1e-9);
-		}
-	});
-});
+		it('has two phases in equilibrium from the triple point to 1 mK below its critical point', () => {
+			const crit = saturationCurve(id, 10).critical;
+			const Tt = data.triple.T;
+			for (const T of [
+				Tt + 0.1 * (crit.T - Tt),
+				Tt + 0.5 * (crit.T - Tt),
+				0.99 * crit.T,
+				crit.T - 0.1,
+				crit.T - 0.01,
+				crit.T - 1e-3
+			]) {
+				const liq = fixState(id, { T, x: 0 });
+				const vap = fixState(id, { T, x: 1 });
+				expect(liq.rho, `ρ′ > ρ″ at ${T}`).toBeGreaterThan(vap.rho);
+				expect(Math.abs(liq.P / vap.P - 1), `P′ = P″ at ${T}`).toBeLessThan(1e-9);
+				const g = (st: State) => st.h - T * st.s;
+				expect(Math.abs(g(liq) - g(vap)) / (data.R * T), `g′ = g″ at ${T}`).toBeLessThan(1e-9);
+			}
+		});
+	}
+);

@@ -17,7 +17,13 @@ export const r1234yf: FluidData = {
 	id: 'r1234yf',
 	name: 'R-1234yf',
 	formula: 'CH2=CFCF3',
-	aliases: ['r-1234yf', 'hfo-1234yf', 'hfo1234yf', '2,3,3,3-tetrafluoropropene', '2,3,3,3-tetrafluoroprop-1-ene'],
+	aliases: [
+		'r-1234yf',
+		'hfo-1234yf',
+		'hfo1234yf',
+		'2,3,3,3-tetrafluoropropene',
+		'2,3,3,3-tetrafluoroprop-1-ene'
+	],
 	group: 'refrigerant',
 	formulation: {
 		name: 'Lemmon–Akasaka (2022)',

@@ -17,7 +17,16 @@ export const r1234zeE: FluidData = {
 	id: 'r1234ze-e',
 	name: 'R-1234ze(E)',
 	formula: 'CHF=CHCF3',
-	aliases: ['r1234ze(e)', 'r-1234ze(e)', 'r1234ze', 'r-1234ze', 'r1234zee', 'hfo-1234ze(e)', 'hfo-1234ze', 'trans-1,3,3,3-tetrafluoropropene'],
+	aliases: [
+		'r1234ze(e)',
+		'r-1234ze(e)',
+		'r1234ze',
+		'r-1234ze',
+		'r1234zee',
+		'hfo-1234ze(e)',
+		'hfo-1234ze',
+		'trans-1,3,3,3-tetrafluoropropene'
+	],
 	group: 'refrigerant',
 	formulation: {
 		name: 'Thol–Lemmon (2016)',

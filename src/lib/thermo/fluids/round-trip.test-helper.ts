@@ -12,9 +12,17 @@ export const INPUT_NAMES: InputName[] = ['T', 'P', 'v', 'u', 'h', 's', 'x'];
 /** All 21 pairs of INPUT_NAMES. */
 export const INPUT_PAIRS: [InputName, InputName][] = [];
 for (let i = 0; i < INPUT_NAMES.length; i++)
-	for (let j = i + 1; j < INPUT_NAMES.length; j++) INPUT_PAIRS.push([INPUT_NAMES[i], INPUT_NAMES[j]]);
+	for (let j = i + 1; j < INPUT_NAMES.length; j++)
+		INPUT_PAIRS.push([INPUT_NAMES[i], INPUT_NAMES[j]]);
 
-const HINTS: RootHint[] = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'];
+const HINTS: RootHint[] = [
+	'lower-T',
+	'higher-T',
+	'lower-P',
+	'higher-P',
+	'liquid-side',
+	'vapor-side'
+];
 
 /** The properties a reference state must agree in (x separately). */
 export type Reference = Pick<State, 'T' | 'P' | 'v' | 'u' | 'h' | 's' | 'x'>;
@@ -35,7 +43,8 @@ export function differs(got: Reference, ref: Reference, rel: number): string | n
 		['s', 10]
 	];
 	for (const [k, floor] of checks) {
-		if (!close(got[k] as number, ref[k] as number, rel, floor)) return `${k} ${got[k]} vs ${ref[k]}`;
+		if (!close(got[k] as number, ref[k] as number, rel, floor))
+			return `${k} ${got[k]} vs ${ref[k]}`;
 	}
 	if ((ref.x === null) !== (got.x === null)) return `x ${got.x} vs ${ref.x}`;
 	if (ref.x !== null && Math.abs((got.x as number) - ref.x) > rel) return `x ${got.x} vs ${ref.x}`;
@@ -57,7 +66,12 @@ export interface PairOutcome {
  * answer must match too. A reference between two other candidates may be out of every hint's reach
  * (hints pick an extreme in T, P or ρ): it passes as named, flagged `unreachable`.
  */
-export function fixFromPair(fluid: string, ref: Reference, [a, b]: [InputName, InputName], rel: number): PairOutcome {
+export function fixFromPair(
+	fluid: string,
+	ref: Reference,
+	[a, b]: [InputName, InputName],
+	rel: number
+): PairOutcome {
 	const value = (k: InputName): number => (k === 'rho' ? 1 / ref.v : (ref[k] as number));
 	const inputs: Inputs = { [a]: value(a), [b]: value(b) };
 	const judge = (got: State): string | null => differs(got, ref, rel);
@@ -65,15 +79,22 @@ export function fixFromPair(fluid: string, ref: Reference, [a, b]: [InputName, I
 		return { failure: judge(fixState(fluid, inputs)), ambiguous: false, unreachable: false };
 	} catch (e) {
 		if (!(e instanceof ThermoError)) throw e;
-		if (e.code !== 'ambiguous-state') return { failure: `${e.code}: ${e.message}`, ambiguous: false, unreachable: false };
+		if (e.code !== 'ambiguous-state')
+			return { failure: `${e.code}: ${e.message}`, ambiguous: false, unreachable: false };
 		const listed = (e.candidates ?? []).some(
-			(c) => Math.abs(c.T - ref.T) <= rel * ref.T && Math.abs(c.rho * ref.v - 1) <= Math.max(rel, 1e-6)
+			(c) =>
+				Math.abs(c.T - ref.T) <= rel * ref.T && Math.abs(c.rho * ref.v - 1) <= Math.max(rel, 1e-6)
 		);
 		if (!listed)
-			return { failure: `ambiguous, reference not among ${JSON.stringify(e.candidates)}`, ambiguous: true, unreachable: false };
+			return {
+				failure: `ambiguous, reference not among ${JSON.stringify(e.candidates)}`,
+				ambiguous: true,
+				unreachable: false
+			};
 		for (const hint of HINTS) {
 			try {
-				if (judge(fixState(fluid, inputs, { hint })) === null) return { failure: null, ambiguous: true, unreachable: false };
+				if (judge(fixState(fluid, inputs, { hint })) === null)
+					return { failure: null, ambiguous: true, unreachable: false };
 			} catch (err) {
 				if (!(err instanceof ThermoError)) throw err;
 			}
@@ -83,7 +104,13 @@ export function fixFromPair(fluid: string, ref: Reference, [a, b]: [InputName, I
 }
 
 /** Reference states: single-phase from (T, ρ), ±1 mK around saturation at fixed P, in and on the dome, near critical. */
-export function grid(id: string, Tc: number, rhoc: number, Tt: number, Tmax: number): { ref: State; label: string }[] {
+export function grid(
+	id: string,
+	Tc: number,
+	rhoc: number,
+	Tt: number,
+	Tmax: number
+): { ref: State; label: string }[] {
 	const out: { ref: State; label: string }[] = [];
 	const add = (label: string, ref: State) => out.push({ label, ref });
 	const T1 = Tt + 0.3 * (Tc - Tt);
@@ -111,12 +138,17 @@ export function grid(id: string, Tc: number, rhoc: number, Tt: number, Tmax: num
 	add('compressed liquid', inRange(T1, [1.05 * rhoL1, 1.03 * rhoL1, 1.01 * rhoL1]));
 	const Thot = Math.min(1.4 * Tc, Tc + 0.8 * (Tmax - Tc));
 	add('superheated vapor', fixState(id, { T: Thot, rho: 0.2 * rhoc }));
-	add('supercritical, dense', inRange(Math.min(1.2 * Tc, Thot), [2, 1.8, 1.6, 1.4].map((k) => k * rhoc)));
+	add(
+		'supercritical, dense',
+		inRange(
+			Math.min(1.2 * Tc, Thot),
+			[2, 1.8, 1.6, 1.4].map((k) => k * rhoc)
+		)
+	);
 	add('near critical, above', fixState(id, { T: 1.005 * Tc, rho: 1.1 * rhoc }));
 	add('near critical, in the dome', fixState(id, { T: 0.995 * Tc, x: 0.5 }));
 	return out;
 }
-
 
 /**
  * Fixes every state of the fluid's `grid` again from each of the 21 input pairs (x only on and inside
@@ -130,7 +162,13 @@ export function gridPairFailures(
 ): { failures: string[]; pairsTried: number } {
 	const failures: string[] = [];
 	const seen = new Set<string>();
-	for (const { label, ref } of grid(id, data.critical.T, data.critical.rho, data.triple.T, data.limits.Tmax)) {
+	for (const { label, ref } of grid(
+		id,
+		data.critical.T,
+		data.critical.rho,
+		data.triple.T,
+		data.limits.Tmax
+	)) {
 		const inDome = ref.x !== null;
 		const rel = inDome ? 1e-5 : 1e-6;
 		for (const pair of INPUT_PAIRS) {
@@ -140,14 +178,17 @@ export function gridPairFailures(
 			if (inDome && a === 'T' && b === 'P') {
 				try {
 					fixState(id, { T: ref.T, P: ref.P });
-					failures.push(`${label} from (T, P): answered on the dome, where T and P are one property`);
+					failures.push(
+						`${label} from (T, P): answered on the dome, where T and P are one property`
+					);
 				} catch (e) {
 					if (!(e instanceof ThermoError)) throw e;
 				}
 				continue;
 			}
 			const out = fixFromPair(id, ref, pair, rel);
-			if (out.failure && !known.has(`${id}: ${label} from (${a}, ${b})`)) failures.push(`${label} from (${a}, ${b}): ${out.failure}`);
+			if (out.failure && !known.has(`${id}: ${label} from (${a}, ${b})`))
+				failures.push(`${label} from (${a}, ${b}): ${out.failure}`);
 		}
 	}
 	return { failures, pairsTried: seen.size };

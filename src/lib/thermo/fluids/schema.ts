@@ -151,7 +151,8 @@ export interface FluidData {
  * - `exp-theta-delta`: ln(P/Pref) = θ⁻¹·Σ aᵢ·(1 − θ)^bᵢ
  */
 export interface SolidLinePiece {
-	form: 'power-sum' | 'delta-power-sum' | 'exp-sum' | 'log-theta' | 'exp-theta-sum' | 'exp-theta-delta';
+	form:
+		'power-sum' | 'delta-power-sum' | 'exp-sum' | 'log-theta' | 'exp-theta-sum' | 'exp-theta-delta';
 	/** the solid phase on the other side (e.g. "ice VI"; "solid" where the publication names none) */
 	solid: string;
 	/** temperature range of this piece, K */

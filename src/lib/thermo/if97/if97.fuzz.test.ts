@@ -6,7 +6,13 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from '../errors.ts';
-import { if97SaturationPressure, if97State, if97StatePh, if97StatePs, type If97State } from './state.ts';
+import {
+	if97SaturationPressure,
+	if97State,
+	if97StatePh,
+	if97StatePs,
+	type If97State
+} from './state.ts';
 
 const SEED = Number(process.env.FUZZ_SEED ?? 97);
 const RUNS = Number(process.env.FUZZ_RUNS ?? 400);
@@ -14,7 +20,8 @@ const RUNS = Number(process.env.FUZZ_RUNS ?? 400);
 function finiteState(st: If97State): void {
 	for (const key of ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'cp', 'cv', 'w'] as const) {
 		const x = st[key];
-		if (x !== null) expect(Number.isFinite(x), `${key} = ${x} at P = ${st.P}, T = ${st.T}`).toBe(true);
+		if (x !== null)
+			expect(Number.isFinite(x), `${key} = ${x} at P = ${st.P}, T = ${st.T}`).toBe(true);
 	}
 	expect(st.v).toBeGreaterThan(0);
 	if (st.cp !== null) expect(st.cp).toBeGreaterThan(0);
@@ -45,43 +52,63 @@ function roundTrip(P: number, T: number): void {
 describe('IF97 fuzz (seeded)', () => {
 	it('(P, T) anywhere in the range: finite, consistent, and (P, h), (P, s) give it back', () => {
 		fc.assert(
-			fc.property(fc.double({ min: Math.log(700), max: Math.log(100e6), noNaN: true }), fc.double({ min: 273.15, max: 2273.15, noNaN: true }), (lnP, T) => {
-				roundTrip(Math.exp(lnP), T);
-			}),
+			fc.property(
+				fc.double({ min: Math.log(700), max: Math.log(100e6), noNaN: true }),
+				fc.double({ min: 273.15, max: 2273.15, noNaN: true }),
+				(lnP, T) => {
+					roundTrip(Math.exp(lnP), T);
+				}
+			),
 			{ seed: SEED, numRuns: RUNS }
 		);
 	});
 	it('near the critical point and in region 3', () => {
 		fc.assert(
-			fc.property(fc.double({ min: 16.6e6, max: 40e6, noNaN: true }), fc.double({ min: 623.16, max: 700, noNaN: true }), (P, T) => {
-				roundTrip(P, T);
-			}),
+			fc.property(
+				fc.double({ min: 16.6e6, max: 40e6, noNaN: true }),
+				fc.double({ min: 623.16, max: 700, noNaN: true }),
+				(P, T) => {
+					roundTrip(P, T);
+				}
+			),
 			{ seed: SEED + 1, numRuns: RUNS }
 		);
 	});
 	it('within 1e−6 of the saturation line on either side', () => {
 		fc.assert(
-			fc.property(fc.double({ min: 273.2, max: 647.09, noNaN: true }), fc.double({ min: -1e-6, max: 1e-6, noNaN: true }), (T, eps) => {
-				const P = if97SaturationPressure(T) * (1 + eps);
-				const st = if97State(P, T);
-				finiteState(st);
-				// above Psat a liquid, below it a vapor; within 1e−12·Psat the saturated liquid
-				expect(eps >= 0 ? ['compressed-liquid', 'saturated-liquid'] : ['superheated-vapor', 'saturated-liquid']).toContain(st.phase);
-				roundTrip(P, T);
-			}),
+			fc.property(
+				fc.double({ min: 273.2, max: 647.09, noNaN: true }),
+				fc.double({ min: -1e-6, max: 1e-6, noNaN: true }),
+				(T, eps) => {
+					const P = if97SaturationPressure(T) * (1 + eps);
+					const st = if97State(P, T);
+					finiteState(st);
+					// above Psat a liquid, below it a vapor; within 1e−12·Psat the saturated liquid
+					expect(
+						eps >= 0
+							? ['compressed-liquid', 'saturated-liquid']
+							: ['superheated-vapor', 'saturated-liquid']
+					).toContain(st.phase);
+					roundTrip(P, T);
+				}
+			),
 			{ seed: SEED + 2, numRuns: RUNS }
 		);
 	});
 	it('(P, h) over the whole enthalpy range at a pressure: never NaN, only ThermoError', () => {
 		fc.assert(
-			fc.property(fc.double({ min: Math.log(700), max: Math.log(100e6), noNaN: true }), fc.double({ min: -1e5, max: 8e6, noNaN: true }), (lnP, h) => {
-				try {
-					finiteState(if97StatePh(Math.exp(lnP), h));
-				} catch (e) {
-					expect(e).toBeInstanceOf(ThermoError);
-					expect((e as ThermoError).code).toBe('out-of-range');
+			fc.property(
+				fc.double({ min: Math.log(700), max: Math.log(100e6), noNaN: true }),
+				fc.double({ min: -1e5, max: 8e6, noNaN: true }),
+				(lnP, h) => {
+					try {
+						finiteState(if97StatePh(Math.exp(lnP), h));
+					} catch (e) {
+						expect(e).toBeInstanceOf(ThermoError);
+						expect((e as ThermoError).code).toBe('out-of-range');
+					}
 				}
-			}),
+			),
 			{ seed: SEED + 3, numRuns: RUNS }
 		);
 	});
@@ -94,7 +121,9 @@ describe('IF97 (P, h), (P, s) at a saturated state', () => {
 			for (const side of ['liquid', 'vapor'] as const) {
 				const st = if97State(P, T, { side });
 				for (const back of [if97StatePh(P, st.h), if97StatePs(P, st.s)]) {
-					expect(back.phase, `${side} at ${T} K`).toBe(side === 'liquid' ? 'saturated-liquid' : 'saturated-vapor');
+					expect(back.phase, `${side} at ${T} K`).toBe(
+						side === 'liquid' ? 'saturated-liquid' : 'saturated-vapor'
+					);
 					expect(back.x).toBe(side === 'liquid' ? 0 : 1);
 					expect(Math.abs(back.T - T)).toBeLessThan(1e-9);
 				}

@@ -9,7 +9,15 @@
 import { describe, expect, it } from 'vitest';
 import fixture from '../../../../tests/reference/if97-water.json';
 import { t1ph, t1ps, t2ph, t2ps, pB23, tB23, pB2bc, hB2bc, psat, tsat } from './regions.ts';
-import { if97Region, if97Region3State, if97State, if97StatePh, if97StatePs, if97SaturationPressure, if97SaturationTemperature } from './state.ts';
+import {
+	if97Region,
+	if97Region3State,
+	if97State,
+	if97StatePh,
+	if97StatePs,
+	if97SaturationPressure,
+	if97SaturationTemperature
+} from './state.ts';
 import { ThermoError } from '../errors.ts';
 
 function halfUnit(text: string): number {
@@ -21,13 +29,16 @@ function halfUnit(text: string): number {
 /** actual (in the printed value's units) equals the printed value to half a unit in its last digit */
 function printed(actual: number, text: string, what: string): void {
 	const tol = halfUnit(text) * (1 + 1e-9);
-	expect(Math.abs(actual - Number(text)), `${what}: ${actual} vs printed ${text}`).toBeLessThanOrEqual(tol);
+	expect(
+		Math.abs(actual - Number(text)),
+		`${what}: ${actual} vs printed ${text}`
+	).toBeLessThanOrEqual(tol);
 }
 
 const MPa = 1e6;
 const kJ = 1e3;
 
-describe('IF97 basic equations: the release\'s verification values', () => {
+describe("IF97 basic equations: the release's verification values", () => {
 	it('region 1, Eq. 7 (R7-97(2012), Table 5)', () => {
 		// IAPWS R7-97(2012), Table 5, as transcribed in python3-iapws 1.5.2 (_Region1 docstring)
 		printed(if97State(3 * MPa, 300).v, '0.00100215168', 'v(300 K, 3 MPa)');
@@ -106,7 +117,7 @@ describe('IF97 basic equations: the release\'s verification values', () => {
 	});
 });
 
-describe('IF97 region 4 and boundaries: the release\'s verification values', () => {
+describe("IF97 region 4 and boundaries: the release's verification values", () => {
 	it('saturation pressure Eq. 30 and temperature Eq. 31 (R7-97(2012), Tables 35 and 36)', () => {
 		// IAPWS R7-97(2012), Tables 35/36, as transcribed in python3-iapws 1.5.2 (_PSat_T, _TSat_P docstrings)
 		printed(psat(500), '2.63889776', 'psat(500 K)');
@@ -129,7 +140,7 @@ describe('IF97 region 4 and boundaries: the release\'s verification values', () 
 	});
 });
 
-describe('IF97 backward equations: the release\'s verification values', () => {
+describe("IF97 backward equations: the release's verification values", () => {
 	it('region 1 T(p, h) Eq. 11 and T(p, s) Eq. 13 (R7-97(2012), Tables 7 and 9)', () => {
 		// IAPWS R7-97(2012), Tables 7 and 9, as transcribed in python3-iapws 1.5.2 (_Backward1_* docstrings)
 		printed(t1ph(3, 500), '391.798509', 'T(3 MPa, 500 kJ/kg)');
@@ -172,9 +183,10 @@ interface Point {
 describe('IF97 against python3-iapws 1.5.2 (Debian) on a grid', () => {
 	const points = fixture.points as Point[];
 	it('has points in every region', () => {
-		for (const r of [1, 2, 3, 5]) expect(points.filter((p) => p.region === r).length).toBeGreaterThan(20);
+		for (const r of [1, 2, 3, 5])
+			expect(points.filter((p) => p.region === r).length).toBeGreaterThan(20);
 	});
-	it('(P, T) gives python3-iapws\'s region and properties (regions 1, 2, 5 to 1e−9; region 3 to 1e−8)', () => {
+	it("(P, T) gives python3-iapws's region and properties (regions 1, 2, 5 to 1e−9; region 3 to 1e−8)", () => {
 		// python3-iapws 1.5.2 (Debian), iapws97._Region1/_Region2/_Region5 at (T, p), _Region3 at (ρ, T)
 		for (const p of points) {
 			const st = if97State(p.P, p.T);
@@ -183,15 +195,23 @@ describe('IF97 against python3-iapws 1.5.2 (Debian) on a grid', () => {
 			expect(st.region, where).toBe(p.region);
 			for (const key of ['v', 'h', 's', 'cp', 'cv', 'w'] as const) {
 				const a = st[key] as number;
-				const scale = key === 'h' ? Math.max(Math.abs(p.h), 1e5) : key === 's' ? Math.max(Math.abs(p.s), 1e3) : Math.abs(p[key]);
-				expect(Math.abs(a - p[key]) / scale, `${key} at ${where}: ${a} vs ${p[key]}`).toBeLessThan(key === 'cp' && p.region === 3 ? 1e-6 : tol);
+				const scale =
+					key === 'h'
+						? Math.max(Math.abs(p.h), 1e5)
+						: key === 's'
+							? Math.max(Math.abs(p.s), 1e3)
+							: Math.abs(p[key]);
+				expect(Math.abs(a - p[key]) / scale, `${key} at ${where}: ${a} vs ${p[key]}`).toBeLessThan(
+					key === 'cp' && p.region === 3 ? 1e-6 : tol
+				);
 			}
 		}
 	});
 	it('saturation pressure and temperature (Eqs. 30, 31)', () => {
 		// python3-iapws 1.5.2 (Debian), iapws97._PSat_T and _TSat_P
 		for (const s of fixture.saturation) {
-			if (s.given === 'T') expect(Math.abs(if97SaturationPressure(s.T) - s.P) / s.P).toBeLessThan(1e-12);
+			if (s.given === 'T')
+				expect(Math.abs(if97SaturationPressure(s.T) - s.P) / s.P).toBeLessThan(1e-12);
 			else expect(Math.abs(if97SaturationTemperature(s.P) - s.T) / s.T).toBeLessThan(1e-12);
 		}
 	});
@@ -203,7 +223,10 @@ describe('IF97 against python3-iapws 1.5.2 (Debian) on a grid', () => {
 			const b = if97StatePs(p.P, p.s);
 			// on a region boundary (623.15 K, B23, 1073.15 K) IF97's equations differ slightly (the release's
 			// consistency limits), so (P, h) may land up to a few tenths of a kelvin beyond the boundary in the neighbouring region
-			const boundary = p.T === 623.15 || p.T === 1073.15 || (p.region === 2 && p.T > 623.15 && p.T <= 863.15 && Math.abs(p.P / 1e6 - pB23(p.T)) < 1);
+			const boundary =
+				p.T === 623.15 ||
+				p.T === 1073.15 ||
+				(p.region === 2 && p.T > 623.15 && p.T <= 863.15 && Math.abs(p.P / 1e6 - pB23(p.T)) < 1);
 			const tol = boundary ? 0.2 / p.T : p.region === 3 ? 1e-7 : 1e-9;
 			expect(Math.abs(a.T - p.T) / p.T, `T(P, h) at ${where}: ${a.T}`).toBeLessThan(tol);
 			expect(Math.abs(b.T - p.T) / p.T, `T(P, s) at ${where}: ${b.T}`).toBeLessThan(tol);
@@ -247,7 +270,7 @@ describe('IF97 phases, the dome and refusals', () => {
 		const m3 = if97StatePh(P3, 0.5 * (l3.h + v3.h));
 		expect(m3.x).toBeCloseTo(0.5, 10);
 	});
-	it('refuses states outside IF97\'s range with a typed error', () => {
+	it("refuses states outside IF97's range with a typed error", () => {
 		const code = (f: () => unknown) => {
 			try {
 				f();

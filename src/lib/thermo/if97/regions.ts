@@ -91,7 +91,17 @@ function compile(t: If97Table): Compiled {
 	const iHi = Math.max(0, ...t.I);
 	const jLo = Math.min(0, ...t.J) - 2;
 	const jHi = Math.max(0, ...t.J);
-	return { I, J, n: Float64Array.from(t.n), iLo, iHi, jLo, jHi, px: new Float64Array(iHi - iLo + 1), py: new Float64Array(jHi - jLo + 1) };
+	return {
+		I,
+		J,
+		n: Float64Array.from(t.n),
+		iLo,
+		iHi,
+		jLo,
+		jHi,
+		px: new Float64Array(iHi - iLo + 1),
+		py: new Float64Array(jHi - jLo + 1)
+	};
 }
 
 const scratch = { s: 0, sx: 0, sxx: 0, sy: 0, syy: 0, sxy: 0 };
@@ -153,13 +163,28 @@ export function gibbs1(T: number, p: number): Gibbs {
 /**
  * Ideal-gas part plus residual part (regions 2 and 5): γ = ln π + Σ n⁰ τ^J⁰ + Σ nᵢ π^Iᵢ (τ − τ₀)^Jᵢ.
  */
-function gibbsGas(res: Compiled, ideal: Compiled, pi: number, tau: number, tauShift: number): Gibbs {
+function gibbsGas(
+	res: Compiled,
+	ideal: Compiled,
+	pi: number,
+	tau: number,
+	tauShift: number
+): Gibbs {
 	const o = sum2(ideal, 1, tau);
 	const g0 = Math.log(pi) + o.s;
 	const g0t = o.sy;
 	const g0tt = o.syy;
 	const r = sum2(res, pi, tau - tauShift);
-	return { g: g0 + r.s, gp: 1 / pi + r.sx, gpp: -1 / (pi * pi) + r.sxx, gt: g0t + r.sy, gtt: g0tt + r.syy, gpt: r.sxy, pi, tau };
+	return {
+		g: g0 + r.s,
+		gp: 1 / pi + r.sx,
+		gpp: -1 / (pi * pi) + r.sxx,
+		gt: g0t + r.sy,
+		gtt: g0tt + r.syy,
+		gpt: r.sxy,
+		pi,
+		tau
+	};
 }
 
 /** Region 2 (vapor), IAPWS R7-97(2012), Eqs. 15–17: π = p/1 MPa, τ = 540 K/T, residual in (τ − 0.5). */

@@ -149,7 +149,7 @@ function rho3(p: number, T: number, side: 'liquid' | 'vapor'): number {
 	} else {
 		lo = 1e-6;
 		hi = RHO3_MAX;
-		rho = Math.min(Math.max((p * 1e6) / (R * T) * 1.5, 1), 700);
+		rho = Math.min(Math.max(((p * 1e6) / (R * T)) * 1.5, 1), 700);
 	}
 	let fPrev = Infinity;
 	for (let k = 0; k < 200; k++) {
@@ -168,7 +168,11 @@ function rho3(p: number, T: number, side: 'liquid' | 'vapor'): number {
 		if (Math.abs(next - rho) <= 1e-13 * rho || hi - lo <= 1e-13 * rho) return next;
 		rho = next;
 	}
-	throw new ThermoError('no-convergence', `IF97 region 3: no density found at P = ${fmt(p * 1e6)} Pa, T = ${fmt(T)} K.`, 'Please report these inputs.');
+	throw new ThermoError(
+		'no-convergence',
+		`IF97 region 3: no density found at P = ${fmt(p * 1e6)} Pa, T = ${fmt(T)} K.`,
+		'Please report these inputs.'
+	);
 }
 
 function checkRange(P: number, T: number): void {
@@ -177,16 +181,41 @@ function checkRange(P: number, T: number): void {
 		['T', T]
 	] as const)
 		if (typeof value !== 'number' || !Number.isFinite(value))
-			throw new ThermoError('non-finite-input', `${name} must be a finite number (got ${String(value)}).`, `Give ${name} as a finite number in SI units.`);
-	if (!(P > 0)) throw new ThermoError('non-positive-input', `P must be positive (got ${fmt(P)}).`, 'Give an absolute pressure in Pa.');
+			throw new ThermoError(
+				'non-finite-input',
+				`${name} must be a finite number (got ${String(value)}).`,
+				`Give ${name} as a finite number in SI units.`
+			);
+	if (!(P > 0))
+		throw new ThermoError(
+			'non-positive-input',
+			`P must be positive (got ${fmt(P)}).`,
+			'Give an absolute pressure in Pa.'
+		);
 	if (T < T_MIN)
-		throw new ThermoError('below-triple-point', `T = ${fmt(T)} K is below IAPWS-IF97's lower limit of ${T_MIN} K.`, `Give a temperature from ${T_MIN} to ${T_MAX} K.`);
+		throw new ThermoError(
+			'below-triple-point',
+			`T = ${fmt(T)} K is below IAPWS-IF97's lower limit of ${T_MIN} K.`,
+			`Give a temperature from ${T_MIN} to ${T_MAX} K.`
+		);
 	if (T > T_MAX)
-		throw new ThermoError('out-of-range', `T = ${fmt(T)} K is above IAPWS-IF97's upper limit of ${T_MAX} K.`, `Give a temperature from ${T_MIN} to ${T_MAX} K.`);
+		throw new ThermoError(
+			'out-of-range',
+			`T = ${fmt(T)} K is above IAPWS-IF97's upper limit of ${T_MAX} K.`,
+			`Give a temperature from ${T_MIN} to ${T_MAX} K.`
+		);
 	if (P > P_MAX * 1e6)
-		throw new ThermoError('out-of-range', `P = ${fmt(P)} Pa is above IAPWS-IF97's upper limit of 100 MPa.`, 'Give a pressure up to 1e8 Pa.');
+		throw new ThermoError(
+			'out-of-range',
+			`P = ${fmt(P)} Pa is above IAPWS-IF97's upper limit of 100 MPa.`,
+			'Give a pressure up to 1e8 Pa.'
+		);
 	if (T > T_25 && P > P_MAX5 * 1e6)
-		throw new ThermoError('out-of-range', `Above ${T_25} K IAPWS-IF97 holds up to 50 MPa; P = ${fmt(P)} Pa.`, 'Give a pressure up to 5e7 Pa, or a temperature up to 1073.15 K.');
+		throw new ThermoError(
+			'out-of-range',
+			`Above ${T_25} K IAPWS-IF97 holds up to 50 MPa; P = ${fmt(P)} Pa.`,
+			'Give a pressure up to 5e7 Pa, or a temperature up to 1073.15 K.'
+		);
 }
 
 /**
@@ -225,7 +254,8 @@ export function if97State(P: number, T: number, options: If97Options = {}): If97
 	else if (region === 2) st = fromGibbs(gibbs2(T, p), T, P, 2);
 	else if (region === 5) st = fromGibbs(gibbs5(T, p), T, P, 5);
 	else {
-		const side = ps !== null && (onLine(p, ps) ? options.side === 'vapor' : p < ps) ? 'vapor' : 'liquid';
+		const side =
+			ps !== null && (onLine(p, ps) ? options.side === 'vapor' : p < ps) ? 'vapor' : 'liquid';
 		st = fromHelmholtz(rho3(p, T, side), T, P);
 	}
 	if (ps !== null && onLine(p, ps)) {
@@ -241,7 +271,8 @@ function onSide(P: number, T: number, side: 'liquid' | 'vapor'): If97State {
 	const p = P / 1e6;
 	if (T > T_25) return fromGibbs(gibbs5(T, p), T, P, 5);
 	// the caller keeps T on its side of Tsat(P), so round-off of Eqs. 30/31 at the line cannot flip the region
-	if (T <= T_13) return side === 'liquid' ? fromGibbs(gibbs1(T, p), T, P, 1) : fromGibbs(gibbs2(T, p), T, P, 2);
+	if (T <= T_13)
+		return side === 'liquid' ? fromGibbs(gibbs1(T, p), T, P, 1) : fromGibbs(gibbs2(T, p), T, P, 2);
 	if (p <= pB23(T)) return fromGibbs(gibbs2(T, p), T, P, 2);
 	return fromHelmholtz(rho3(p, T, T < TC && side === 'vapor' ? 'vapor' : 'liquid'), T, P);
 }
@@ -250,8 +281,10 @@ function onSide(P: number, T: number, side: 'liquid' | 'vapor'): If97State {
 function saturatedAtP(P: number): { T: number; liquid: If97State; vapor: If97State } {
 	const p = P / 1e6;
 	const T = tsat(p);
-	const liquid = T <= T_13 ? fromGibbs(gibbs1(T, p), T, P, 1) : fromHelmholtz(rho3(p, T, 'liquid'), T, P);
-	const vapor = T <= T_13 ? fromGibbs(gibbs2(T, p), T, P, 2) : fromHelmholtz(rho3(p, T, 'vapor'), T, P);
+	const liquid =
+		T <= T_13 ? fromGibbs(gibbs1(T, p), T, P, 1) : fromHelmholtz(rho3(p, T, 'liquid'), T, P);
+	const vapor =
+		T <= T_13 ? fromGibbs(gibbs2(T, p), T, P, 2) : fromHelmholtz(rho3(p, T, 'vapor'), T, P);
 	liquid.phase = 'saturated-liquid';
 	liquid.x = 0;
 	vapor.phase = 'saturated-vapor';
@@ -286,7 +319,15 @@ function mixture(P: number, T: number, liquid: If97State, vapor: If97State, x: n
  * T on one branch at fixed P where the target property equals `value`: Newton with
  * d h/dT = cp and d s/dT = cp/T, kept in a bracket [Tlo, Thi] (bisection when a step leaves it).
  */
-function solveT(P: number, key: Target, value: number, Tlo: number, Thi: number, guess: number, side: 'liquid' | 'vapor'): If97State {
+function solveT(
+	P: number,
+	key: Target,
+	value: number,
+	Tlo: number,
+	Thi: number,
+	guess: number,
+	side: 'liquid' | 'vapor'
+): If97State {
 	let lo = Tlo;
 	let hi = Thi;
 	let T = Math.min(Math.max(guess, lo), hi);
@@ -299,7 +340,8 @@ function solveT(P: number, key: Target, value: number, Tlo: number, Thi: number,
 		const d = key === 'h' ? (st.cp as number) : (st.cp as number) / T;
 		let next = T - f / d;
 		// bisect where Newton would leave the bracket or does not halve the residual (oscillation)
-		if (!(next >= lo && next <= hi) || !Number.isFinite(next) || Math.abs(f) > 0.5 * fPrev) next = 0.5 * (lo + hi);
+		if (!(next >= lo && next <= hi) || !Number.isFinite(next) || Math.abs(f) > 0.5 * fPrev)
+			next = 0.5 * (lo + hi);
 		fPrev = Math.abs(f);
 		if (Math.abs(next - T) <= 1e-12 * T) {
 			st = onSide(P, next, side);
@@ -309,7 +351,11 @@ function solveT(P: number, key: Target, value: number, Tlo: number, Thi: number,
 		st = onSide(P, T, side);
 		if (Math.abs(st[key] - value) <= 1e-13 * Math.max(Math.abs(value), 1)) return st;
 	}
-	throw new ThermoError('no-convergence', `IF97: no temperature found at P = ${fmt(P)} Pa, ${key} = ${fmt(value)}.`, 'Please report these inputs.');
+	throw new ThermoError(
+		'no-convergence',
+		`IF97: no temperature found at P = ${fmt(P)} Pa, ${key} = ${fmt(value)}.`,
+		'Please report these inputs.'
+	);
 }
 
 /** Beyond a range end by more than round-off (1e−11 relative, floor 1e−6 in SI units). */
@@ -323,11 +369,16 @@ function fromPressureAnd(P: number, key: Target, value: number): If97State {
 		[key, value]
 	] as const)
 		if (typeof x !== 'number' || !Number.isFinite(x))
-			throw new ThermoError('non-finite-input', `${name} must be a finite number (got ${String(x)}).`, `Give ${name} as a finite number in SI units.`);
+			throw new ThermoError(
+				'non-finite-input',
+				`${name} must be a finite number (got ${String(x)}).`,
+				`Give ${name} as a finite number in SI units.`
+			);
 	checkRange(P, T_MIN);
 	const p = P / 1e6;
 	const Tmax = P <= P_MAX5 * 1e6 ? T_MAX : T_25;
-	const guessLiquid = (T: number) => (key === 'h' ? t1ph(p, value / 1000) : t1ps(p, value / 1000)) || T;
+	const guessLiquid = (T: number) =>
+		(key === 'h' ? t1ph(p, value / 1000) : t1ps(p, value / 1000)) || T;
 	const guessVapor = (T: number) => {
 		const g = key === 'h' ? t2ph(p, value / 1000) : t2ps(p, value / 1000);
 		return Number.isFinite(g) ? g : T;
@@ -345,7 +396,12 @@ function fromPressureAnd(P: number, key: Target, value: number): If97State {
 		const lo = onSide(P, T_MIN, side);
 		const hi = onSide(P, Tmax, side);
 		if (below(value, lo[key]) || above(value, hi[key])) throw rangeError(lo, hi);
-		const guess = P < P_SAT_MIN ? guessVapor(T_MIN) : value <= onSide(P, T_13, side)[key] ? guessLiquid(T_13) : 0.5 * (T_13 + Tmax);
+		const guess =
+			P < P_SAT_MIN
+				? guessVapor(T_MIN)
+				: value <= onSide(P, T_13, side)[key]
+					? guessLiquid(T_13)
+					: 0.5 * (T_13 + Tmax);
 		out = solveT(P, key, value, T_MIN, Tmax, guess, side);
 	} else {
 		const sat = saturatedAtP(P);
@@ -359,7 +415,15 @@ function fromPressureAnd(P: number, key: Target, value: number): If97State {
 		if (value < sat.liquid[key]) {
 			const lo = onSide(P, T_MIN, 'liquid');
 			if (below(value, lo[key])) throw rangeError(lo, onSide(P, Tmax, 'vapor'));
-			out = solveT(P, key, value, T_MIN, sat.T, sat.T <= T_13 ? guessLiquid(sat.T) : sat.T - 1, 'liquid');
+			out = solveT(
+				P,
+				key,
+				value,
+				T_MIN,
+				sat.T,
+				sat.T <= T_13 ? guessLiquid(sat.T) : sat.T - 1,
+				'liquid'
+			);
 			branch = 'liquid';
 		} else {
 			const hi = onSide(P, Tmax, 'vapor');
@@ -403,14 +467,22 @@ export function if97StatePs(P: number, s: number): If97State {
 /** Saturation pressure at T (K), Pa: IAPWS R7-97(2012), Eq. 30, 273.15 K ≤ T ≤ 647.096 K. */
 export function if97SaturationPressure(T: number): number {
 	if (!(T >= T_MIN && T <= TC))
-		throw new ThermoError('out-of-range', `IAPWS-IF97's saturation line runs from ${T_MIN} to ${TC} K; T = ${fmt(T)} K.`, `Give a temperature from ${T_MIN} to ${TC} K.`);
+		throw new ThermoError(
+			'out-of-range',
+			`IAPWS-IF97's saturation line runs from ${T_MIN} to ${TC} K; T = ${fmt(T)} K.`,
+			`Give a temperature from ${T_MIN} to ${TC} K.`
+		);
 	return psat(T) * 1e6;
 }
 
 /** Saturation temperature at P (Pa), K: IAPWS R7-97(2012), Eq. 31, 611.213 Pa ≤ P ≤ 22.064 MPa. */
 export function if97SaturationTemperature(P: number): number {
 	if (!(P >= P_SAT_MIN && P <= PC * 1e6))
-		throw new ThermoError('out-of-range', `IAPWS-IF97's saturation line runs from ${fmt(P_SAT_MIN)} to ${PC * 1e6} Pa; P = ${fmt(P)} Pa.`, `Give a pressure from ${fmt(P_SAT_MIN)} to ${PC * 1e6} Pa.`);
+		throw new ThermoError(
+			'out-of-range',
+			`IAPWS-IF97's saturation line runs from ${fmt(P_SAT_MIN)} to ${PC * 1e6} Pa; P = ${fmt(P)} Pa.`,
+			`Give a pressure from ${fmt(P_SAT_MIN)} to ${PC * 1e6} Pa.`
+		);
 	return tsat(P / 1e6);
 }
 

@@ -29,13 +29,27 @@ export function inWindow(s: { T: number; P: number }, w: StateWindow | undefined
 
 export function windowText(w: StateWindow): string {
 	const part = (lo: number | undefined, hi: number | undefined, name: string, unit: string) =>
-		lo !== undefined && hi !== undefined ? `${fmt(lo)}–${fmt(hi)} ${unit}` : lo !== undefined ? `${name} ≥ ${fmt(lo)} ${unit}` : hi !== undefined ? `${name} ≤ ${fmt(hi)} ${unit}` : '';
-	const t = part(w.Tmin, w.Tmax, 'T', 'K'), p = part(w.Pmin, w.Pmax, 'P', 'Pa');
-	return [t && (t.startsWith('T') ? t : `T ${t}`), p && (p.startsWith('P') ? p : `P ${p}`)].filter(Boolean).join(', ');
+		lo !== undefined && hi !== undefined
+			? `${fmt(lo)}–${fmt(hi)} ${unit}`
+			: lo !== undefined
+				? `${name} ≥ ${fmt(lo)} ${unit}`
+				: hi !== undefined
+					? `${name} ≤ ${fmt(hi)} ${unit}`
+					: '';
+	const t = part(w.Tmin, w.Tmax, 'T', 'K'),
+		p = part(w.Pmin, w.Pmax, 'P', 'Pa');
+	return [t && (t.startsWith('T') ? t : `T ${t}`), p && (p.startsWith('P') ? p : `P ${p}`)]
+		.filter(Boolean)
+		.join(', ');
 }
 
 /** The refusal when every state with the inputs lies outside the window. */
-export function outsideWindow(fl: Fluid, what: string, outside: State[], w: StateWindow): ThermoError {
+export function outsideWindow(
+	fl: Fluid,
+	what: string,
+	outside: State[],
+	w: StateWindow
+): ThermoError {
 	const list = outside.map((s) => `${s.phase} at T = ${fmt(s.T)} K, P = ${fmt(s.P)} Pa`).join('; ');
 	return new ThermoError(
 		'outside-window',
@@ -46,7 +60,14 @@ export function outsideWindow(fl: Fluid, what: string, outside: State[], w: Stat
 }
 
 /** Hints accepted by fixState (see RootHint in types.ts). */
-export const ROOT_HINTS: readonly RootHint[] = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'];
+export const ROOT_HINTS: readonly RootHint[] = [
+	'lower-T',
+	'higher-T',
+	'lower-P',
+	'higher-P',
+	'liquid-side',
+	'vapor-side'
+];
 
 /**
  * Same state to within solver round-off. Pressure is compared too: two liquid states can differ by
@@ -89,7 +110,13 @@ function key(hint: RootHint): (s: State) => number {
  * (candidates listed) when there are several and no hint, or the hint cannot tell them apart;
  * throws `noneError()` when there are none.
  */
-export function choose(fl: Fluid, found: State[], hint: RootHint | undefined, what: string, noneError: () => ThermoError): State {
+export function choose(
+	fl: Fluid,
+	found: State[],
+	hint: RootHint | undefined,
+	what: string,
+	noneError: () => ThermoError
+): State {
 	const all = dedupe(found);
 	if (all.length === 0) throw noneError();
 	// candidates beyond the melting curve are solid, not states of the fluid (solid.ts)
@@ -103,7 +130,8 @@ export function choose(fl: Fluid, found: State[], hint: RootHint | undefined, wh
 	const near = currentNear;
 	if (!hint && near && (near.T !== undefined || near.P !== undefined)) {
 		const d = (s: State) =>
-			(near.T !== undefined ? Math.abs(Math.log(s.T / near.T)) : 0) + (near.P !== undefined ? Math.abs(Math.log(s.P / near.P)) : 0);
+			(near.T !== undefined ? Math.abs(Math.log(s.T / near.T)) : 0) +
+			(near.P !== undefined ? Math.abs(Math.log(s.P / near.P)) : 0);
 		return [...c].sort((a, b) => d(a) - d(b))[0];
 	}
 	const list = c.map((s) => `${s.phase} at T = ${fmt(s.T)} K, P = ${fmt(s.P)} Pa`).join('; ');
@@ -111,7 +139,8 @@ export function choose(fl: Fluid, found: State[], hint: RootHint | undefined, wh
 	if (hint) {
 		const k = key(hint);
 		const sorted = [...c].sort((a, b) => k(a) - k(b));
-		const best = sorted[0], next = sorted[1];
+		const best = sorted[0],
+			next = sorted[1];
 		if (Math.abs(k(best) - k(next)) > 1e-9 * Math.abs(k(best))) return best;
 		throw new ThermoError(
 			'ambiguous-state',

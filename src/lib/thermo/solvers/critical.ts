@@ -23,11 +23,14 @@ export function refineCriticalPoint(fl: Fluid): void {
 	let [f1, f2] = conditions(fl, delta, tau);
 	if (!(Math.abs(f1) < 1e-9 && Math.abs(f2) < 1e-6)) {
 		for (let it = 0; it < 50; it++) {
-			const hd = 1e-6 * delta, ht = 1e-7 * tau;
+			const hd = 1e-6 * delta,
+				ht = 1e-7 * tau;
 			const [a1, a2] = conditions(fl, delta + hd, tau);
 			const [b1, b2] = conditions(fl, delta, tau + ht);
-			const j11 = (a1 - f1) / hd, j12 = (b1 - f1) / ht;
-			const j21 = (a2 - f2) / hd, j22 = (b2 - f2) / ht;
+			const j11 = (a1 - f1) / hd,
+				j12 = (b1 - f1) / ht;
+			const j21 = (a2 - f2) / hd,
+				j22 = (b2 - f2) / ht;
 			const det = j11 * j22 - j12 * j21;
 			if (!Number.isFinite(det) || det === 0) return;
 			let sd = -(f1 * j22 - j12 * f2) / det;
@@ -42,7 +45,8 @@ export function refineCriticalPoint(fl: Fluid): void {
 			if (Math.abs(sd) < 1e-12 * delta && Math.abs(st) < 1e-13 * tau) break;
 		}
 		// accept only a clean solution near the published point
-		const Tc = fl.Tr / tau, rhoc = delta * fl.rhor;
+		const Tc = fl.Tr / tau,
+			rhoc = delta * fl.rhor;
 		if (
 			!(Math.abs(f1) < 1e-8) ||
 			!(Math.abs(Tc / fl.data.critical.T - 1) < 1e-3) ||

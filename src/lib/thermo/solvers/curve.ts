@@ -21,7 +21,8 @@ export function curveOf(fl: Fluid, points: number): SaturationCurve {
 			`The number of saturation points must be a whole number from 2 to 5000 (got ${fmt(points)}).`,
 			'Give points between 2 and 5000 (100 draws a smooth dome).'
 		);
-	const liquid = [], vapor = [];
+	const liquid = [],
+		vapor = [];
 	const span = fl.Tc - fl.Tt;
 	for (let i = 0; i < points; i++) {
 		const w = 1 - i / points;

@@ -9,13 +9,22 @@ import type { Fluid } from '../fluid.ts';
  * Solve P(T, ρ) = P for ρ (kg/m³) starting at `guess`, with f(lo) < 0 and f(hi) > 0 known or
  * assumed (hi may be Infinity: the bracket grows). Returns NaN if no root is found.
  */
-export function densityAtTP(fl: Fluid, T: number, P: number, guess: number, lo = 0, hi = Infinity): number {
+export function densityAtTP(
+	fl: Fluid,
+	T: number,
+	P: number,
+	guess: number,
+	lo = 0,
+	hi = Infinity
+): number {
 	const tau = fl.Tr / T;
 	const RT = fl.R * T;
 	const rhor = fl.rhor;
 	let rho = guess;
-	if (!(rho > lo && rho < hi)) rho = Number.isFinite(hi) ? 0.5 * (lo + hi) : Math.max(2 * lo, 1e-12 * rhor);
-	let dxOld = Infinity, dx = Infinity;
+	if (!(rho > lo && rho < hi))
+		rho = Number.isFinite(hi) ? 0.5 * (lo + hi) : Math.max(2 * lo, 1e-12 * rhor);
+	let dxOld = Infinity,
+		dx = Infinity;
 	for (let it = 0; it < 100; it++) {
 		const r = fl.residualAt(rho / rhor, tau, 2);
 		const f = rho * RT * (1 + r.d1) - P;

@@ -47,7 +47,8 @@ export function evalSatLine(fl: Fluid, T: number, out: SatLine, sat?: SatPoint):
 	let guess: { rhoL: number; rhoV: number } | undefined;
 	if (!sat && out.T > 0 && Math.abs(T - out.T) < 0.05 * T) {
 		const dT = T - out.T;
-		const rL = out.sat.rhoL, rV = out.sat.rhoV;
+		const rL = out.sat.rhoL,
+			rV = out.sat.rhoV;
 		guess = { rhoL: rL - rL * rL * out.dL[0] * dT, rhoV: rV - rV * rV * out.dV[0] * dT };
 		if (!(guess.rhoL > guess.rhoV && guess.rhoV > 0)) guess = undefined;
 	}
@@ -82,7 +83,8 @@ function gOf(
 	dL?: ArrayLike<number>,
 	dV?: ArrayLike<number>
 ): [number, number, number] {
-	let x: number, dx = 0;
+	let x: number,
+		dx = 0;
 	if ('x' in spec) x = spec.x;
 	else {
 		const a = IDX[spec.prop];
@@ -108,7 +110,8 @@ const TOUCH = 1e-10;
 function nodeCubicClear(T: Float64Array, G: Float64Array, i: number, n: number): boolean {
 	if (n < 4) return false;
 	const k0 = Math.min(Math.max(i - 1, 0), n - 4);
-	const Ga = G[i], Gb = G[i + 1];
+	const Ga = G[i],
+		Gb = G[i + 1];
 	let ext = Ga;
 	for (let q = 1; q < 16; q++) {
 		const t = T[i] + ((T[i + 1] - T[i]) * q) / 16;
@@ -122,16 +125,21 @@ function nodeCubicClear(T: Float64Array, G: Float64Array, i: number, n: number):
 		if (Math.abs(v) < Math.abs(ext)) ext = v;
 	}
 	// clear only when short of zero beyond the interpolation's own error (a fraction of G's size)
-	return Math.abs(ext) > 0.25 * Math.min(Math.abs(Ga), Math.abs(Gb)) && Math.abs(ext) > 1e-2 * Math.max(Math.abs(Ga), Math.abs(Gb));
+	return (
+		Math.abs(ext) > 0.25 * Math.min(Math.abs(Ga), Math.abs(Gb)) &&
+		Math.abs(ext) > 1e-2 * Math.max(Math.abs(Ga), Math.abs(Gb))
+	);
 }
 
 /** Whether |G| has a local minimum at node i (an end node counts with its one neighbour) that is small against G's local change. */
 function dipsAt(G: Float64Array, i: number, n: number): boolean {
 	const g = Math.abs(G[i]);
-	const left = i > 0 ? Math.abs(G[i - 1]) : Infinity, right = i < n - 1 ? Math.abs(G[i + 1]) : Infinity;
+	const left = i > 0 ? Math.abs(G[i - 1]) : Infinity,
+		right = i < n - 1 ? Math.abs(G[i + 1]) : Infinity;
 	if (!(g <= left && g <= right)) return false;
 	let change = 0;
-	for (let k = Math.max(1, i - 1); k <= Math.min(n - 1, i + 2); k++) change = Math.max(change, Math.abs(G[k] - G[k - 1]));
+	for (let k = Math.max(1, i - 1); k <= Math.min(n - 1, i + 2); k++)
+		change = Math.max(change, Math.abs(G[k] - G[k - 1]));
 	return g <= 4 * change;
 }
 
@@ -139,29 +147,47 @@ function dipsAt(G: Float64Array, i: number, n: number): boolean {
  * All two-phase solutions with quality fixed by `spec` and property `target` = `value`. Quality
  * may overshoot 0…1 by round-off (up to 1e−6 near Tc); place each with twoPhaseAt.
  */
-export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value: number): DomeRoot[] {
+export function domeRoots(
+	fl: Fluid,
+	spec: QualitySpec,
+	target: DomeProp,
+	value: number
+): DomeRoot[] {
 	const nodes = domeNodes(fl);
 	const b = IDX[target];
 	const n = nodes.n;
 	const G = new Float64Array(n);
-	const bL = nodes.liq[b], bV = nodes.vap[b];
+	const bL = nodes.liq[b],
+		bV = nodes.vap[b];
 	let any = false;
 	if ('x' in spec) {
 		const x = spec.x;
 		for (let i = 0; i < n; i++) G[i] = bL[i] + x * (bV[i] - bL[i]) - value;
 	} else {
-		const a = IDX[spec.prop], A = spec.value;
-		const aL = nodes.liq[a], aV = nodes.vap[a];
-		for (let i = 0; i < n; i++) G[i] = bL[i] + ((A - aL[i]) / (aV[i] - aL[i])) * (bV[i] - bL[i]) - value;
+		const a = IDX[spec.prop],
+			A = spec.value;
+		const aL = nodes.liq[a],
+			aV = nodes.vap[a];
+		for (let i = 0; i < n; i++)
+			G[i] = bL[i] + ((A - aL[i]) / (aV[i] - aL[i])) * (bV[i] - bL[i]) - value;
 	}
 	// nothing to refine when G keeps one sign and |G| never dips (the common single-phase case)
 	for (let i = 1; i < n && !any; i++) {
 		if (G[i] < 0 !== G[i - 1] < 0) any = true;
-		else if (i < n - 1 && Math.abs(G[i]) < Math.abs(G[i - 1]) && Math.abs(G[i]) < Math.abs(G[i + 1])) any = true;
+		else if (
+			i < n - 1 &&
+			Math.abs(G[i]) < Math.abs(G[i - 1]) &&
+			Math.abs(G[i]) < Math.abs(G[i + 1])
+		)
+			any = true;
 	}
 	// a turning point inside the first or last interval shows as |G| falling toward the end node
 	if (!any && n > 2 && (dipsAt(G, 0, n) || dipsAt(G, n - 1, n))) any = true;
-	if (!any && !(Math.abs(G[0]) <= 1e-6 * Math.abs(G[1] - G[0])) && !(Math.abs(G[n - 1]) <= 1e-6 * Math.abs(G[n - 2] - G[n - 1])))
+	if (
+		!any &&
+		!(Math.abs(G[0]) <= 1e-6 * Math.abs(G[1] - G[0])) &&
+		!(Math.abs(G[n - 1]) <= 1e-6 * Math.abs(G[n - 2] - G[n - 1]))
+	)
 		return [];
 	const line = new SatLine();
 	const roots: DomeRoot[] = [];
@@ -170,7 +196,9 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		return gOf(spec, b, value, line.yL, line.yV, line.dL, line.dV);
 	};
 	const refine = (Ta: number, Ga: number, Tb: number, Gb: number, T0: number) => {
-		let a = Ta, fa = Ga, c = Tb;
+		let a = Ta,
+			fa = Ga,
+			c = Tb;
 		let T = T0;
 		for (let it = 0; it < 60; it++) {
 			const [x, g, dg] = fn(T);
@@ -180,7 +208,8 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 				fa = g;
 			} else c = T;
 			let next = T - g / dg;
-			const lo = Math.min(a, c), hi = Math.max(a, c);
+			const lo = Math.min(a, c),
+				hi = Math.max(a, c);
 			// Newton converges quadratically: a predicted step this small is the remaining error
 			if (Math.abs(next - T) <= 1e-13 * T && next > lo && next < hi) return accept(x);
 			if (!(next > lo && next < hi)) next = 0.5 * (a + c);
@@ -190,17 +219,25 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 	};
 	/** start for a bracket [i, i+1]: inverse quadratic through three nodes, else the secant */
 	const start = (i: number): number => {
-		const Ta = nodes.T[i], Tb = nodes.T[i + 1], Ga = G[i], Gb = G[i + 1];
+		const Ta = nodes.T[i],
+			Tb = nodes.T[i + 1],
+			Ga = G[i],
+			Gb = G[i + 1];
 		const lin = Ta - (Ga * (Tb - Ta)) / (Gb - Ga);
 		const k = i > 0 ? i - 1 : i + 2;
 		if (k >= n) return lin;
-		const Tk = nodes.T[k], Gk = G[k];
+		const Tk = nodes.T[k],
+			Gk = G[k];
 		if (Gk === Ga || Gk === Gb) return lin;
 		const q =
-			(Ta * Gb * Gk) / ((Ga - Gb) * (Ga - Gk)) + (Tb * Ga * Gk) / ((Gb - Ga) * (Gb - Gk)) + (Tk * Ga * Gb) / ((Gk - Ga) * (Gk - Gb));
+			(Ta * Gb * Gk) / ((Ga - Gb) * (Ga - Gk)) +
+			(Tb * Ga * Gk) / ((Gb - Ga) * (Gb - Gk)) +
+			(Tk * Ga * Gb) / ((Gk - Ga) * (Gk - Gb));
 		return q > Math.min(Ta, Tb) && q < Math.max(Ta, Tb) ? q : lin;
 	};
-	const hs = !('x' in spec) && ((spec.prop === 's' && target === 'h') || (spec.prop === 'h' && target === 's'));
+	const hs =
+		!('x' in spec) &&
+		((spec.prop === 's' && target === 'h') || (spec.prop === 'h' && target === 's'));
 	const push = (sat: SatPoint, x: number) => {
 		if (roots.some((r) => Math.abs(r.sat.T - sat.T) <= 1e-9 * sat.T)) return;
 		roots.push({ sat, x });
@@ -210,7 +247,8 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		if (!(x >= -1e-6 && x <= 1 + 1e-6)) return;
 		// a candidate must meet the inputs: an unconverged refinement (steep G beside Tc) is no root
 		const [, gLine] = gOf(spec, b, value, line.yL, line.yV);
-		if (!(Math.abs(gLine) <= ACCEPT * (Math.abs(value) + Math.abs(line.yV[b] - line.yL[b])))) return;
+		if (!(Math.abs(gLine) <= ACCEPT * (Math.abs(value) + Math.abs(line.yV[b] - line.yL[b]))))
+			return;
 		const sat = line.sat;
 		// next to a saturation line G can be nearly tangent to zero (for (h, s), dh = T·ds + v·dP
 		// makes the mixtures' h(T) touch the line's): there solve the line itself, a' (T) = A
@@ -224,12 +262,17 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		push(sat, x);
 	};
 	/** T where the saturated liquid (end 0) or vapor (end 1) has a = A, if b = B holds there too */
-	const polishOnLine = (sp: { prop: DomeProp; value: number }, end: 0 | 1, T0: number): SatPoint | null => {
+	const polishOnLine = (
+		sp: { prop: DomeProp; value: number },
+		end: 0 | 1,
+		T0: number
+	): SatPoint | null => {
 		const a = IDX[sp.prop];
 		let T = T0;
 		for (let it = 0; it < 30; it++) {
 			evalSatLine(fl, T, line);
-			const ya = end ? line.yV[a] : line.yL[a], dya = end ? line.dV[a] : line.dL[a];
+			const ya = end ? line.yV[a] : line.yL[a],
+				dya = end ? line.dV[a] : line.dL[a];
 			const step = (ya - sp.value) / dya;
 			if (!Number.isFinite(step)) return null;
 			T -= step;
@@ -258,7 +301,8 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		return (spec.value - nodes.liq[a][i]) / (nodes.vap[a][i] - nodes.liq[a][i]);
 	};
 	const outside = (i: number, j: number): boolean => {
-		const xa = xAt(i), xb = xAt(j);
+		const xa = xAt(i),
+			xb = xAt(j);
 		return (xa < -0.01 && xb < -0.01) || (xa > 1.01 && xb > 1.01);
 	};
 	/** extremum of G in [Ta, Tb] (same sign at both ends): two roots if it crosses zero, one if it touches */
@@ -271,7 +315,9 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		// bounds the extremum: clearly short of zero, there is nothing to look for. Its extremum
 		// from G'(t) = c1 + 2c2·t + 3c3·t² = 0 on 0 < t < 1.
 		const h = Tb - Ta;
-		const c1 = h * da, c2 = 3 * (Gb - Ga) - h * (2 * da + db), c3 = 2 * (Ga - Gb) + h * (da + db);
+		const c1 = h * da,
+			c2 = 3 * (Gb - Ga) - h * (2 * da + db),
+			c3 = 2 * (Ga - Gb) + h * (da + db);
 		let ext = Ga;
 		const at = (t: number) => {
 			if (t > 0 && t < 1) {
@@ -288,8 +334,15 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 				at((-c2 - r) / (3 * c3));
 			}
 		}
-		if (ext < 0 === Ga < 0 && Math.abs(ext) > 0.05 * Math.min(Math.abs(Ga), Math.abs(Gb)) && Math.abs(ext) > 1e-3 * Math.max(Math.abs(Ga), Math.abs(Gb))) return;
-		let lo = Ta, hi = Tb, m = 0.5 * (lo + hi);
+		if (
+			ext < 0 === Ga < 0 &&
+			Math.abs(ext) > 0.05 * Math.min(Math.abs(Ga), Math.abs(Gb)) &&
+			Math.abs(ext) > 1e-3 * Math.max(Math.abs(Ga), Math.abs(Gb))
+		)
+			return;
+		let lo = Ta,
+			hi = Tb,
+			m = 0.5 * (lo + hi);
 		for (let k = 0; k < 80; k++) {
 			m = 0.5 * (lo + hi);
 			const [, g, dg] = fn(m);
@@ -307,10 +360,12 @@ export function domeRoots(fl: Fluid, spec: QualitySpec, target: DomeProp, value:
 		if (Math.abs(g) <= TOUCH * (Math.abs(value) + Math.abs(line.yV[b] - line.yL[b]))) accept(x);
 	};
 	for (let i = 0; i < n - 1; i++) {
-		const Ga = G[i], Gb = G[i + 1];
+		const Ga = G[i],
+			Gb = G[i + 1];
 		if (!Number.isFinite(Ga) || !Number.isFinite(Gb)) continue;
 		if (outside(i, i + 1) && (i === 0 || outside(i - 1, i + 1))) continue;
-		const Ta = nodes.T[i], Tb = nodes.T[i + 1];
+		const Ta = nodes.T[i],
+			Tb = nodes.T[i + 1];
 		if (Ga === 0) {
 			refine(Ta, Ga, Tb, Gb, Ta);
 			continue;

@@ -62,7 +62,9 @@ for (const [pair, f] of Object.entries(FLASHES)) {
 }
 
 function unit(k: InputName): string {
-	return { T: 'K', P: 'Pa', v: 'm³/kg', rho: 'kg/m³', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)', x: '' }[k];
+	return { T: 'K', P: 'Pa', v: 'm³/kg', rho: 'kg/m³', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)', x: '' }[
+		k
+	];
 }
 
 /** Parse and check the inputs: exactly two known, finite properties in range. */
@@ -91,14 +93,24 @@ function rankOf(k: string): number {
 
 export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, number] {
 	if (typeof inputs !== 'object' || inputs === null)
-		throw new ThermoError('wrong-input-count', 'Inputs must be an object holding two properties.', 'Give exactly two of T, P, v, rho, u, h, s, x.');
+		throw new ThermoError(
+			'wrong-input-count',
+			'Inputs must be an object holding two properties.',
+			'Give exactly two of T, P, v, rho, u, h, s, x.'
+		);
 	// one pass over the keys, no allocation on the common path
-	let k1: InputName | null = null, k2: InputName | null = null, count = 0;
+	let k1: InputName | null = null,
+		k2: InputName | null = null,
+		count = 0;
 	const rec = inputs as Record<string, unknown>;
 	for (const k in rec) {
 		if (rec[k] === undefined) continue;
 		if (rankOf(k) < 0)
-			throw new ThermoError('unknown-input', `Unknown input "${k}".`, 'Give exactly two of T, P, v, rho, u, h, s, x (SI units).');
+			throw new ThermoError(
+				'unknown-input',
+				`Unknown input "${k}".`,
+				'Give exactly two of T, P, v, rho, u, h, s, x (SI units).'
+			);
 		count++;
 		if (count === 1) k1 = k as InputName;
 		else if (count === 2) k2 = k as InputName;
@@ -117,7 +129,8 @@ export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, numbe
 			'Give exactly two of T, P, v, rho, u, h, s, x.'
 		);
 	}
-	const r1 = rankOf(k1), r2 = rankOf(k2);
+	const r1 = rankOf(k1),
+		r2 = rankOf(k2);
 	if (r1 === r2)
 		throw new ThermoError(
 			'duplicate-property',
@@ -126,18 +139,31 @@ export function parseInputs(fl: Fluid, inputs: Inputs): [Key, number, Key, numbe
 		);
 	const a = checkValue(fl, k1, rec[k1]);
 	const b = checkValue(fl, k2, rec[k2]);
-	const ka: Key = k1 === 'v' ? 'rho' : (k1 as Key), kb: Key = k2 === 'v' ? 'rho' : (k2 as Key);
+	const ka: Key = k1 === 'v' ? 'rho' : (k1 as Key),
+		kb: Key = k2 === 'v' ? 'rho' : (k2 as Key);
 	return r1 < r2 ? [ka, a, kb, b] : [kb, b, ka, a];
 }
 
 /** A finite number in range for its property (v returned as rho = 1/v). */
 function checkValue(fl: Fluid, k: InputName, val: unknown): number {
 	if (typeof val !== 'number' || !Number.isFinite(val))
-		throw new ThermoError('non-finite-input', `${k} must be a finite number (got ${String(val)}).`, `Give ${k} as a finite number in ${unit(k) || 'SI units'}.`);
+		throw new ThermoError(
+			'non-finite-input',
+			`${k} must be a finite number (got ${String(val)}).`,
+			`Give ${k} as a finite number in ${unit(k) || 'SI units'}.`
+		);
 	if ((k === 'T' || k === 'P' || k === 'v' || k === 'rho') && !(val > 0))
-		throw new ThermoError('non-positive-input', `${k} must be positive (got ${fmt(val, 0)}); the engine uses absolute values.`, `Give ${k} in ${unit(k)} as a positive absolute value (for example kelvin, not °C; absolute, not gauge pressure).`);
+		throw new ThermoError(
+			'non-positive-input',
+			`${k} must be positive (got ${fmt(val, 0)}); the engine uses absolute values.`,
+			`Give ${k} in ${unit(k)} as a positive absolute value (for example kelvin, not °C; absolute, not gauge pressure).`
+		);
 	if (k === 'x' && !(val >= 0 && val <= 1))
-		throw new ThermoError('quality-out-of-range', `The quality x must lie between 0 and 1 (got ${fmt(val, 0, 1)}).`, 'Give x as a mass fraction of vapor from 0 (saturated liquid) to 1 (saturated vapor), or give the state by two other properties.');
+		throw new ThermoError(
+			'quality-out-of-range',
+			`The quality x must lie between 0 and 1 (got ${fmt(val, 0, 1)}).`,
+			'Give x as a mass fraction of vapor from 0 (saturated liquid) to 1 (saturated vapor), or give the state by two other properties.'
+		);
 	if (k === 'T') checkT(fl, val);
 	if (k === 'P') checkP(fl, val);
 	return k === 'v' ? 1 / val : val;
@@ -146,20 +172,48 @@ function checkValue(fl: Fluid, k: InputName, val: unknown): number {
 /** Fix a state from two properties (see index.ts fixState). */
 export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}): State {
 	if (options.hint !== undefined && !ROOT_HINTS.includes(options.hint))
-		throw new ThermoError('invalid-option', `Unknown hint "${String(options.hint)}".`, `Use one of: ${ROOT_HINTS.join(', ')}.`);
+		throw new ThermoError(
+			'invalid-option',
+			`Unknown hint "${String(options.hint)}".`,
+			`Use one of: ${ROOT_HINTS.join(', ')}.`
+		);
 	const near = options.near;
 	if (near !== undefined) {
-		const ok = (v: unknown) => v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
+		const ok = (v: unknown) =>
+			v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
 		if (typeof near !== 'object' || near === null || !ok(near.T) || !ok(near.P))
-			throw new ThermoError('invalid-option', 'options.near must hold a positive T (K) and/or P (Pa).', 'Give near as { T, P } of the state to stay close to, or leave it out.');
+			throw new ThermoError(
+				'invalid-option',
+				'options.near must hold a positive T (K) and/or P (Pa).',
+				'Give near as { T, P } of the state to stay close to, or leave it out.'
+			);
 	}
 	const win = options.window;
 	if (win !== undefined) {
-		const ok = (v: unknown) => v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
-		if (typeof win !== 'object' || win === null || !ok(win.Tmin) || !ok(win.Tmax) || !ok(win.Pmin) || !ok(win.Pmax))
-			throw new ThermoError('invalid-option', 'options.window must hold positive Tmin, Tmax (K) and/or Pmin, Pmax (Pa).', 'Give window as { Tmin, Tmax, Pmin, Pmax } (any of them), or leave it out to search the whole range.');
-		if ((win.Tmin !== undefined && win.Tmax !== undefined && win.Tmin > win.Tmax) || (win.Pmin !== undefined && win.Pmax !== undefined && win.Pmin > win.Pmax))
-			throw new ThermoError('invalid-option', `options.window is empty: ${windowText(win)}.`, 'Give each lower bound below its upper bound.');
+		const ok = (v: unknown) =>
+			v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
+		if (
+			typeof win !== 'object' ||
+			win === null ||
+			!ok(win.Tmin) ||
+			!ok(win.Tmax) ||
+			!ok(win.Pmin) ||
+			!ok(win.Pmax)
+		)
+			throw new ThermoError(
+				'invalid-option',
+				'options.window must hold positive Tmin, Tmax (K) and/or Pmin, Pmax (Pa).',
+				'Give window as { Tmin, Tmax, Pmin, Pmax } (any of them), or leave it out to search the whole range.'
+			);
+		if (
+			(win.Tmin !== undefined && win.Tmax !== undefined && win.Tmin > win.Tmax) ||
+			(win.Pmin !== undefined && win.Pmax !== undefined && win.Pmin > win.Pmax)
+		)
+			throw new ThermoError(
+				'invalid-option',
+				`options.window is empty: ${windowText(win)}.`,
+				'Give each lower bound below its upper bound.'
+			);
 	}
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
 	const flash = BY_RANK[KEY_RANK[ka] * 7 + KEY_RANK[kb]];
@@ -176,7 +230,8 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 	}
 	assertFluid(fl, st);
 	// a flash with one answer does not go through choose: the window applies here
-	if (win !== undefined && !inWindow(st, win)) throw outsideWindow(fl, `${ka} = ${fmt(a)} and ${kb} = ${fmt(b)}`, [st], win);
+	if (win !== undefined && !inWindow(st, win))
+		throw outsideWindow(fl, `${ka} = ${fmt(a)} and ${kb} = ${fmt(b)}`, [st], win);
 	st.precision = precisionOf(fl, st, ka, a, kb, b);
 	return st;
 }

@@ -13,7 +13,14 @@ import { P_LINE_TOL, pressureTol, singleState } from '../state.ts';
 import type { RootHint, State } from '../types.ts';
 import { densityAtTP } from './density.ts';
 import { locate, onLineAt, placedState } from './locate.ts';
-import { CRITICAL_BAND, TABLE_ACCURACY, satAtT, satGuess, type SatGuess, type SatPoint } from './saturation.ts';
+import {
+	CRITICAL_BAND,
+	TABLE_ACCURACY,
+	satAtT,
+	satGuess,
+	type SatGuess,
+	type SatPoint
+} from './saturation.ts';
 
 const p = new Point();
 const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };

@@ -27,10 +27,18 @@ const M = 10 * TABLE_ACCURACY;
 type Branch = 'liquid' | 'vapor' | 'any';
 
 /** Density on a branch at (T, P), warm-started from `guess`; NaN if none. */
-function rhoOnBranch(fl: Fluid, T: number, P: number, branch: Branch, guess: number, g: SatGuess): number {
+function rhoOnBranch(
+	fl: Fluid,
+	T: number,
+	P: number,
+	branch: Branch,
+	guess: number,
+	g: SatGuess
+): number {
 	if (T < fl.Tc && branch !== 'any') {
 		satGuess(fl, T, g);
-		if (branch === 'liquid') return densityAtTP(fl, T, P, Math.max(guess, g.rhoL), g.rhoL * (1 - M));
+		if (branch === 'liquid')
+			return densityAtTP(fl, T, P, Math.max(guess, g.rhoL), g.rhoL * (1 - M));
 		return densityAtTP(fl, T, P, Math.min(guess, g.rhoV), 0, g.rhoV * (1 + M));
 	}
 	if (T < fl.Tc) {
@@ -72,7 +80,8 @@ function solveAlongIsobar(
 	if (fast) return fast;
 	let T = T0;
 	// rtsafe rule (Numerical Recipes): bisect when Newton leaves the bracket or stops halving
-	let dxOld = Tb - Ta, dx = dxOld;
+	let dxOld = Tb - Ta,
+		dx = dxOld;
 	for (let it = 0; it < 100; it++) {
 		const f = evalAt(T);
 		if (!Number.isFinite(f)) return null;
@@ -135,14 +144,18 @@ function newtonTRho(
 	if (!(r0 > 0)) return null;
 	let z = Math.log(r0);
 	const sy = which === 's' ? fl.R : fl.R * fl.Tc;
-	let lastT = Infinity, lastZ = Infinity, noisy = 0;
+	let lastT = Infinity,
+		lastZ = Infinity,
+		noisy = 0;
 	for (let it = 0; it < 30; it++) {
 		const rho = Math.exp(z);
 		evalPoint(fl, T, rho, p, 2);
 		const r1 = p.P / P - 1;
 		const r2 = (propValue(p, which) - y) / sy;
-		const j11 = p.dPdT / P, j12 = (p.dPdrho * rho) / P;
-		const j21 = propDT(p, which) / sy, j22 = (propDrho(p, which) * rho) / sy;
+		const j11 = p.dPdT / P,
+			j12 = (p.dPdrho * rho) / P;
+		const j21 = propDT(p, which) / sy,
+			j22 = (propDrho(p, which) * rho) / sy;
 		const det = j11 * j22 - j12 * j21;
 		if (!Number.isFinite(det) || det === 0 || !(p.dPdrho > 0)) return null;
 		let dT = -(r1 * j22 - j12 * r2) / det;
@@ -151,7 +164,13 @@ function newtonTRho(
 		dT /= m;
 		dz /= m;
 		const tiny = Math.abs(dT) <= 1e-14 * T && Math.abs(dz) <= 1e-14;
-		noisy = Math.abs(r1) < 1e-11 && Math.abs(r2) < 1e-11 && Math.abs(dT) >= 0.5 * lastT && Math.abs(dz) >= 0.5 * lastZ ? noisy + 1 : 0;
+		noisy =
+			Math.abs(r1) < 1e-11 &&
+			Math.abs(r2) < 1e-11 &&
+			Math.abs(dT) >= 0.5 * lastT &&
+			Math.abs(dz) >= 0.5 * lastZ
+				? noisy + 1
+				: 0;
 		lastT = Math.abs(dT);
 		lastZ = Math.abs(dz);
 		T += dT;
@@ -178,7 +197,8 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 		const sat = satAtP(fl, P);
 		const line = evalSatLine(fl, sat.T, new SatLine(), sat);
 		const b = IDX[which];
-		const yL = line.yL[b], yV = line.yV[b];
+		const yL = line.yL[b],
+			yV = line.yV[b];
 		// a value equal to y' or y'' within round-off of the input is the saturated state itself
 		const eps = 1e-12 * (Math.abs(y) + (which === 's' ? fl.R : fl.R * sat.T));
 		if (Math.abs(y - yL) <= eps) return saturatedState(fl, sat, 0);
@@ -189,12 +209,36 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 			const pL = line.pL;
 			const dy = propDT(pL, which) - (propDrho(pL, which) * pL.dPdT) / pL.dPdrho;
 			const T0 = Math.max(fl.Tmin, sat.T + (y - yL) / dy);
-			result = solveAlongIsobar(fl, P, which, y, 'liquid', fl.Tmin * (1 - 1e-7), NaN, sat.T, yL - y, T0, sat.rhoL);
+			result = solveAlongIsobar(
+				fl,
+				P,
+				which,
+				y,
+				'liquid',
+				fl.Tmin * (1 - 1e-7),
+				NaN,
+				sat.T,
+				yL - y,
+				T0,
+				sat.rhoL
+			);
 		} else {
 			const pV = line.pV;
 			const dy = propDT(pV, which) - (propDrho(pV, which) * pV.dPdT) / pV.dPdrho;
 			const T0 = Math.min(fl.Tmax, sat.T + (y - yV) / dy);
-			result = solveAlongIsobar(fl, P, which, y, 'vapor', sat.T, yV - y, fl.Tmax * (1 + 1e-7), NaN, T0, sat.rhoV);
+			result = solveAlongIsobar(
+				fl,
+				P,
+				which,
+				y,
+				'vapor',
+				sat.T,
+				yV - y,
+				fl.Tmax * (1 + 1e-7),
+				NaN,
+				T0,
+				sat.rhoV
+			);
 		}
 	} else {
 		const branch: Branch = P < fl.Pc ? 'vapor' : 'any';
@@ -212,22 +256,51 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 			// turns and may cross the target twice: scanned, every root listed
 			if (a.f > 0 && b.f > 0) {
 				evalPoint(fl, a.T, a.rho, p, 2);
-				if (propDT(p, which) - (propDrho(p, which) * p.dPdT) / p.dPdrho < 0) return choose(fl, scanIsobar(fl, P, which, y, branch, a.T, b.T, a.rho), undefined, what, none);
+				if (propDT(p, which) - (propDrho(p, which) * p.dPdT) / p.dPdrho < 0)
+					return choose(
+						fl,
+						scanIsobar(fl, P, which, y, branch, a.T, b.T, a.rho),
+						undefined,
+						what,
+						none
+					);
 			}
 			throw none();
 		}
 		const T0 = a.T - (a.f * (b.T - a.T)) / (b.f - a.f);
-		result = solveAlongIsobar(fl, P, which, y, branch, a.T, a.f, b.T, b.f, T0, T0 < fl.Tc ? a.rho : b.rho);
+		result = solveAlongIsobar(
+			fl,
+			P,
+			which,
+			y,
+			branch,
+			a.T,
+			a.f,
+			b.T,
+			b.f,
+			T0,
+			T0 < fl.Tc ? a.rho : b.rho
+		);
 	}
 	if (!result) throw none();
 	result.P = P;
 	const loc = locate(fl, result);
-	if (!loc.sat && (result.T < fl.Tmin * (1 - 1e-9) || result.T > fl.Tmax * (1 + 1e-9))) throw none();
+	if (!loc.sat && (result.T < fl.Tmin * (1 - 1e-9) || result.T > fl.Tmax * (1 + 1e-9)))
+		throw none();
 	return placedState(fl, result, loc, true);
 }
 
 /** Every state on the isobar (one branch) with y, from a scan in T (for an isobar along which y turns). */
-function scanIsobar(fl: Fluid, P: number, which: EnergyProp, y: number, branch: Branch, Ta: number, Tb: number, rho0: number): State[] {
+function scanIsobar(
+	fl: Fluid,
+	P: number,
+	which: EnergyProp,
+	y: number,
+	branch: Branch,
+	Ta: number,
+	Tb: number,
+	rho0: number
+): State[] {
 	const p = new Point();
 	const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
 	let rho = rho0;
@@ -277,7 +350,8 @@ export function flashPRho(fl: Fluid, P: number, rho: number, hint?: RootHint): S
 		if (!loc.sat && (T < fl.Tmin * (1 - 1e-9) || T > fl.Tmax * (1 + 1e-9))) return;
 		found.push(placedState(fl, p, loc, true));
 	};
-	let Ta = fl.Tmin * (1 - 1e-7), Tb = fl.Tmax * (1 + 1e-7);
+	let Ta = fl.Tmin * (1 - 1e-7),
+		Tb = fl.Tmax * (1 + 1e-7);
 	let monotone = false;
 	if (P < fl.Pc && P >= triplePressure(fl) * (1 - 1e-9)) {
 		const sat = satAtP(fl, P);
@@ -304,4 +378,3 @@ export function flashPRho(fl: Fluid, P: number, rho: number, hint?: RootHint): S
 	}
 	return choose(fl, found, hint, what, () => noStateInRange(fl, what));
 }
-

@@ -31,7 +31,8 @@ export function singlePhaseIntervals(fl: Fluid, rho: number): [number, number][]
 	const out: [number, number][] = [];
 	let start: number | null = inside(0) ? null : fl.Tmin;
 	for (let i = 0; i < n - 1; i++) {
-		const a = inside(i), b = inside(i + 1);
+		const a = inside(i),
+			b = inside(i + 1);
 		if (a && !b) start = nd.T[i];
 		else if (!a && b) {
 			out.push([start ?? fl.Tmin, Math.min(nd.T[i + 1] + (nd.T[i + 1] - nd.T[i]), fl.Tmax)]);
@@ -39,10 +40,18 @@ export function singlePhaseIntervals(fl: Fluid, rho: number): [number, number][]
 		}
 	}
 	out.push([start ?? nd.T[n - 1], fl.Tmax * (1 + 1e-7)]);
-	return out.map(([a, b]) => [Math.max(a, fl.Tmin * (1 - 1e-7)), b] as [number, number]).filter(([a, b]) => b > a);
+	return out
+		.map(([a, b]) => [Math.max(a, fl.Tmin * (1 - 1e-7)), b] as [number, number])
+		.filter(([a, b]) => b > a);
 }
 
-export function flashRhoY(fl: Fluid, rho: number, which: EnergyProp, y: number, hint?: RootHint): State {
+export function flashRhoY(
+	fl: Fluid,
+	rho: number,
+	which: EnergyProp,
+	y: number,
+	hint?: RootHint
+): State {
 	const what = `ρ = ${fmt(rho)} kg/m³ and ${which} = ${fmt(y)} ${UNIT[which]}`;
 	const found: State[] = [];
 	const nd = domeNodes(fl);

@@ -3,7 +3,11 @@ import fixture from '../../../../tests/reference/iapws-legs.json';
 import { ThermoError, getFluid, isolines, saturationAtP, saturationAtT } from '../index.ts';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
-const cases = (fixture as unknown as { cases: { name: string; crossings: { line: string; T: number; P: number; rho: number }[] }[] }).cases;
+const cases = (
+	fixture as unknown as {
+		cases: { name: string; crossings: { line: string; T: number; P: number; rho: number }[] }[];
+	}
+).cases;
 
 function thrown(fn: () => unknown): ThermoError {
 	try {
@@ -33,7 +37,8 @@ describe('isolines', () => {
 		expect(inside.length).toBeGreaterThan(5);
 		for (const p of inside) expect(rel(p.T, ref[0].T)).toBeLessThan(1e-9);
 		// rising T along the line
-		for (let i = 1; i < line.points.length; i++) expect(line.points[i].T).toBeGreaterThanOrEqual(line.points[i - 1].T);
+		for (let i = 1; i < line.points.length; i++)
+			expect(line.points[i].T).toBeGreaterThanOrEqual(line.points[i - 1].T);
 	});
 	it('isotherms below Tc run flat in P across the dome; above Tc they have no flat part', () => {
 		const [sub, sup] = isolines('water', 'isotherm', [450, 700]);
@@ -44,18 +49,21 @@ describe('isolines', () => {
 		expect(flat.length).toBeGreaterThan(5);
 		for (const p of flat) expect(rel(p.P, ref.P)).toBeLessThan(1e-7);
 		for (const p of sub.points) expect(p.T).toBe(450);
-		for (let i = 1; i < sub.points.length; i++) expect(sub.points[i].v).toBeGreaterThan(sub.points[i - 1].v);
+		for (let i = 1; i < sub.points.length; i++)
+			expect(sub.points[i].v).toBeGreaterThan(sub.points[i - 1].v);
 		// from the formulation's highest pressure down to a tenth of the triple-point pressure
 		expect(rel(sub.points[0].P, water.limits.Pmax)).toBeLessThan(1e-9);
 		expect(rel(sub.points[sub.points.length - 1].P, water.triple.P / 10)).toBeLessThan(1e-3);
-		for (let i = 1; i < sup.points.length; i++) expect(sup.points[i].P).toBeLessThan(sup.points[i - 1].P);
+		for (let i = 1; i < sup.points.length; i++)
+			expect(sup.points[i].P).toBeLessThan(sup.points[i - 1].P);
 	});
 	it('isochores keep v and cross the dome where the saturation line has that v', () => {
 		const lines = isolines('water', 'isochore', [0.001, 0.01, 1]);
 		for (const l of lines) {
 			expect(l.points.length).toBeGreaterThanOrEqual(100);
 			for (const p of l.points) expect(rel(p.v, l.value)).toBeLessThan(1e-12);
-			for (let i = 1; i < l.points.length; i++) expect(l.points[i].T).toBeGreaterThan(l.points[i - 1].T);
+			for (let i = 1; i < l.points.length; i++)
+				expect(l.points[i].T).toBeGreaterThan(l.points[i - 1].T);
 			expect(l.points.every((p) => p.P <= water.limits.Pmax * (1 + 1e-9))).toBe(true);
 		}
 	});
@@ -79,7 +87,9 @@ describe('isolines', () => {
 		['isobar', [5e9], 100, 'out-of-range'],
 		['isotherm', [100], 100, 'out-of-range']
 	])('refuses %s %j points=%s', (kind, values, points, code) => {
-		const e = thrown(() => isolines('water', kind as 'isobar', values as number[], points as number));
+		const e = thrown(() =>
+			isolines('water', kind as 'isobar', values as number[], points as number)
+		);
 		expect(e.code).toBe(code);
 	});
 });

@@ -33,8 +33,13 @@ function startOf(fl: Fluid, kind: IsolineKind, value: number): State {
 		kind === 'isobar'
 			? [{ T: fl.Tmax, P: value }]
 			: kind === 'isotherm'
-				? [{ T: value, P: isolineFloor(fl) }, { T: value, P: fl.Pmax }]
-				: [fl.Tmax, fl.Tc * 1.2, fl.Tc, 0.5 * (fl.Tmin + fl.Tc), fl.Tmin].filter((T) => T <= fl.Tmax).map((T) => ({ T, v: value }));
+				? [
+						{ T: value, P: isolineFloor(fl) },
+						{ T: value, P: fl.Pmax }
+					]
+				: [fl.Tmax, fl.Tc * 1.2, fl.Tc, 0.5 * (fl.Tmin + fl.Tc), fl.Tmin]
+						.filter((T) => T <= fl.Tmax)
+						.map((T) => ({ T, v: value }));
 	let last: unknown = null;
 	for (const inputs of tries) {
 		try {
@@ -44,7 +49,11 @@ function startOf(fl: Fluid, kind: IsolineKind, value: number): State {
 		}
 	}
 	if (last instanceof ThermoError) throw last;
-	throw new ThermoError('out-of-range', `No ${fl.id} state lies on this ${kind}.`, 'Give a value inside the fluid range.');
+	throw new ThermoError(
+		'out-of-range',
+		`No ${fl.id} state lies on this ${kind}.`,
+		'Give a value inside the fluid range.'
+	);
 }
 
 /** One isoline (see Isoline in types.ts). */
@@ -52,14 +61,22 @@ function isolineOf(fl: Fluid, kind: IsolineKind, value: number, points: number):
 	const start = startOf(fl, kind, value);
 	const startC = cptOfState(fl, start);
 	const inv: Invariant =
-		kind === 'isobar' ? { process: 'isobaric', P: value } : kind === 'isotherm' ? { process: 'isothermal', T: value } : { process: 'isochoric', rho: 1 / value };
+		kind === 'isobar'
+			? { process: 'isobaric', P: value }
+			: kind === 'isotherm'
+				? { process: 'isothermal', T: value }
+				: { process: 'isochoric', rho: 1 / value };
 	const curve = new Curve(fl, inv, startC, isolineFloor(fl));
 	curve.energies = false;
 	const pieces: Piece[] = [];
 	const pos = curve.locateStart(startC);
 	curve.segs.forEach((seg, k) => {
 		// a point known to lie on this piece: a crossing at one of its ends, or the start
-		const ok: [CPt, number] = seg.A ? [seg.A, seg.ta] : seg.B ? [seg.B, seg.tb] : [startC, paramOf(seg.dome ? curve.domeParam : curve.singleParam, startC)];
+		const ok: [CPt, number] = seg.A
+			? [seg.A, seg.ta]
+			: seg.B
+				? [seg.B, seg.tb]
+				: [startC, paramOf(seg.dome ? curve.domeParam : curve.singleParam, startC)];
 		if (!seg.A && !seg.B && pos.seg !== k) return;
 		const a = curve.end(k, 'A', ok[0], ok[1]);
 		const b = curve.end(k, 'B', ok[0], ok[1]);
@@ -76,19 +93,48 @@ function isolineOf(fl: Fluid, kind: IsolineKind, value: number, points: number):
  * isochores), each with at least `points` points (default 100). Throws ThermoError for a bad kind,
  * count or value.
  */
-export function isolines(fluid: string, kind: IsolineKind, values: number[], points = ISOLINE_POINTS_DEFAULT): Isoline[] {
+export function isolines(
+	fluid: string,
+	kind: IsolineKind,
+	values: number[],
+	points = ISOLINE_POINTS_DEFAULT
+): Isoline[] {
 	const fl = getCompiledFluid(fluid);
-	if (!ISOLINE_KINDS.includes(kind)) throw invalid(`Unknown isoline kind "${String(kind)}".`, `Use one of: ${ISOLINE_KINDS.join(', ')}.`);
+	if (!ISOLINE_KINDS.includes(kind))
+		throw invalid(
+			`Unknown isoline kind "${String(kind)}".`,
+			`Use one of: ${ISOLINE_KINDS.join(', ')}.`
+		);
 	if (!Array.isArray(values) || values.length === 0 || values.length > ISOLINE_VALUES_MAX)
-		throw invalid(`Give from 1 to ${ISOLINE_VALUES_MAX} isoline values (got ${Array.isArray(values) ? values.length : 'none'}).`, 'Ask for fewer lines per request.');
+		throw invalid(
+			`Give from 1 to ${ISOLINE_VALUES_MAX} isoline values (got ${Array.isArray(values) ? values.length : 'none'}).`,
+			'Ask for fewer lines per request.'
+		);
 	if (!Number.isInteger(points) || points < ISOLINE_POINTS_MIN || points > ISOLINE_POINTS_MAX)
-		throw invalid(`points must be a whole number from ${ISOLINE_POINTS_MIN} to ${ISOLINE_POINTS_MAX} (got ${String(points)}).`, `Leave points out for ${ISOLINE_POINTS_DEFAULT}.`);
+		throw invalid(
+			`points must be a whole number from ${ISOLINE_POINTS_MIN} to ${ISOLINE_POINTS_MAX} (got ${String(points)}).`,
+			`Leave points out for ${ISOLINE_POINTS_DEFAULT}.`
+		);
 	const unit = kind === 'isobar' ? 'Pa' : kind === 'isotherm' ? 'K' : 'm³/kg';
 	for (const v of values) {
-		if (typeof v !== 'number' || !Number.isFinite(v) || !(v > 0)) throw new ThermoError('non-positive-input', `Isoline values must be positive numbers in ${unit} (got ${String(v)}).`, `Give ${kind} values in ${unit}.`);
-		if (kind === 'isobar' && v > fl.Pmax) throw new ThermoError('out-of-range', `P = ${fmt(v)} Pa is above the range of ${fl.id} (up to ${fmt(fl.Pmax)} Pa).`, `Give isobars up to ${fmt(fl.Pmax)} Pa.`);
+		if (typeof v !== 'number' || !Number.isFinite(v) || !(v > 0))
+			throw new ThermoError(
+				'non-positive-input',
+				`Isoline values must be positive numbers in ${unit} (got ${String(v)}).`,
+				`Give ${kind} values in ${unit}.`
+			);
+		if (kind === 'isobar' && v > fl.Pmax)
+			throw new ThermoError(
+				'out-of-range',
+				`P = ${fmt(v)} Pa is above the range of ${fl.id} (up to ${fmt(fl.Pmax)} Pa).`,
+				`Give isobars up to ${fmt(fl.Pmax)} Pa.`
+			);
 		if (kind === 'isotherm' && (v < fl.Tmin || v > fl.Tmax))
-			throw new ThermoError('out-of-range', `T = ${fmt(v)} K is outside the range of ${fl.id} (${fmt(fl.Tmin)}–${fmt(fl.Tmax)} K).`, `Give isotherms from ${fmt(fl.Tmin)} to ${fmt(fl.Tmax)} K.`);
+			throw new ThermoError(
+				'out-of-range',
+				`T = ${fmt(v)} K is outside the range of ${fl.id} (${fmt(fl.Tmin)}–${fmt(fl.Tmax)} K).`,
+				`Give isotherms from ${fmt(fl.Tmin)} to ${fmt(fl.Tmax)} K.`
+			);
 	}
 	return values.map((v) => isolineOf(fl, kind, v, points));
 }

@@ -31,7 +31,13 @@ const RHO_FLOOR = 1e-10;
  */
 const DILUTE_FRACTION = 1e-5;
 
-export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint?: RootHint): State {
+export function flashTY(
+	fl: Fluid,
+	T: number,
+	which: EnergyProp,
+	y: number,
+	hint?: RootHint
+): State {
 	const p = new Point();
 	const found: State[] = [];
 	const fn = (logScale: boolean) => (z: number, out: FD) => {
@@ -58,7 +64,8 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 	const ends: FD = { f: 0, df: 0 };
 	const dilute = (add: (rho: number) => void) => {
 		if (!(rhoLow < rhoFloor)) return;
-		const zl = Math.log(rhoLow), zf = Math.log(rhoFloor);
+		const zl = Math.log(rhoLow),
+			zf = Math.log(rhoFloor);
 		fn(true)(zl, ends);
 		const fl0 = ends.f;
 		fn(true)(zf, ends);
@@ -69,7 +76,8 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 		const line = evalSatLine(fl, T, new SatLine());
 		const rhoMax = densityAtTP(fl, T, fl.Pmax * (1 + 1e-6), line.sat.rhoL * 1.01, line.sat.rhoL);
 		const b = IDX[which];
-		const yL = line.yL[b], yV = line.yV[b];
+		const yL = line.yL[b],
+			yV = line.yV[b];
 		// a value equal to y' or y'' within round-off of the input is the saturated state itself
 		const eps = 1e-12 * (Math.abs(y) + (which === 's' ? fl.R : fl.R * T));
 		if (Math.abs(y - yL) <= eps) found.push(saturatedState(fl, line.sat, 0));
@@ -90,7 +98,8 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 		if (which === 's') extendDilute(fl, T, y, rhoLow, fn(true), (r) => single(r, 'vapor', line));
 	} else {
 		const rhoMax = densityAtTP(fl, T, fl.Pmax * (1 + 1e-6), 2 * fl.rhoc);
-		for (const z of scanRoots(fn(true), Math.log(rhoFloor), Math.log(rhoMax), 24, 1e-13)) single(Math.exp(z), 'any', null);
+		for (const z of scanRoots(fn(true), Math.log(rhoFloor), Math.log(rhoMax), 24, 1e-13))
+			single(Math.exp(z), 'any', null);
 		dilute((r) => single(r, 'any', null));
 		if (which === 's') extendDilute(fl, T, y, rhoLow, fn(true), (r) => single(r, 'any', null));
 	}
@@ -100,7 +109,14 @@ export function flashTY(fl: Fluid, T: number, which: EnergyProp, y: number, hint
 }
 
 /** Entropy beyond the densest-to-lightest scan: below RHO_FLOOR s ≈ s₀ − R·ln ρ, solved by Newton in ln ρ. */
-function extendDilute(fl: Fluid, T: number, y: number, rhoLow: number, fn: (z: number, out: FD) => void, add: (rho: number) => void): void {
+function extendDilute(
+	fl: Fluid,
+	T: number,
+	y: number,
+	rhoLow: number,
+	fn: (z: number, out: FD) => void,
+	add: (rho: number) => void
+): void {
 	const out: FD = { f: 0, df: 0 };
 	let z = Math.log(rhoLow);
 	fn(z, out);

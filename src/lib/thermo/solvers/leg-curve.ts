@@ -31,7 +31,17 @@ import type { Inputs, Process, SaturationLine, State } from '../types.ts';
 import { densityAtTP } from './density.ts';
 import { fixStateOf } from './fix-state.ts';
 import { locate, placedState } from './locate.ts';
-import { CRITICAL_BAND, TABLE_ACCURACY, domeNodes, satAtP, satAtT, satGuess, triplePressure, type SatGuess, type SatPoint } from './saturation.ts';
+import {
+	CRITICAL_BAND,
+	TABLE_ACCURACY,
+	domeNodes,
+	satAtP,
+	satAtT,
+	satGuess,
+	triplePressure,
+	type SatGuess,
+	type SatPoint
+} from './saturation.ts';
 
 /** A point on a leg's curve: a single-phase evaluation, or a saturation with a quality. */
 export interface CPt {
@@ -87,7 +97,9 @@ const MAX_EVALUATIONS = 50000;
 const MAX_FALLBACKS = 400;
 
 /** Where leavesDomain looks between the start (0) and a crossing (1). */
-const LEAVE_FRACTIONS = [1e-4, 1e-3, 0.01, 0.03, 0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 0.97, 0.99];
+const LEAVE_FRACTIONS = [
+	1e-4, 1e-3, 0.01, 0.03, 0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 0.97, 0.99
+];
 
 /** Pressure floor of every curve, Pa (lowered to the start's pressure if that is lower). */
 export const P_FLOOR = 1;
@@ -108,7 +120,8 @@ export interface Invariant {
 }
 
 function mixture(fl: Fluid, sat: SatPoint, x: number, L: Point, V: Point): CPt {
-	const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
+	const vL = 1 / sat.rhoL,
+		vV = 1 / sat.rhoV;
 	const v = vL + x * (vV - vL);
 	return {
 		T: sat.T,
@@ -127,7 +140,10 @@ function mixture(fl: Fluid, sat: SatPoint, x: number, L: Point, V: Point): CPt {
 
 /** Both saturated phases at order 2 (u, h, s, cv and the pressure derivatives; the EOS pressure is kept). */
 function phases(fl: Fluid, sat: SatPoint): [Point, Point] {
-	return [evalPoint(fl, sat.T, sat.rhoL, new Point(), 2), evalPoint(fl, sat.T, sat.rhoV, new Point(), 2)];
+	return [
+		evalPoint(fl, sat.T, sat.rhoL, new Point(), 2),
+		evalPoint(fl, sat.T, sat.rhoV, new Point(), 2)
+	];
 }
 
 function single(p: Point): CPt {
@@ -160,7 +176,18 @@ export function cptOfState(fl: Fluid, st: State): CPt {
 	}
 	const p = evalPoint(fl, st.T, st.rho, new Point(), 2);
 	p.P = st.P;
-	return { T: st.T, rho: st.rho, P: st.P, u: st.u, h: st.h, s: st.s, x: null, sat: null, pt: p, state: st };
+	return {
+		T: st.T,
+		rho: st.rho,
+		P: st.P,
+		u: st.u,
+		h: st.h,
+		s: st.s,
+		x: null,
+		sat: null,
+		pt: p,
+		state: st
+	};
 }
 
 /** Saturation at T with both phases' v, u, h, s, P and their slopes along the lines (T < Tc). */
@@ -181,13 +208,23 @@ function lineAt(fl: Fluid, T: number): LineSlopes {
 	[L, V].forEach((p, k) => {
 		const drho = (dPs - p.dPdT) / p.dPdrho;
 		out.y[k] = [1 / p.rho, p.u, p.h, p.s];
-		out.dy[k] = [-drho / (p.rho * p.rho), propDT(p, 'u') + propDrho(p, 'u') * drho, propDT(p, 'h') + propDrho(p, 'h') * drho, propDT(p, 's') + propDrho(p, 's') * drho];
+		out.dy[k] = [
+			-drho / (p.rho * p.rho),
+			propDT(p, 'u') + propDrho(p, 'u') * drho,
+			propDT(p, 'h') + propDrho(p, 'h') * drho,
+			propDT(p, 's') + propDrho(p, 's') * drho
+		];
 	});
 	return out;
 }
 
 /** F on a saturation line from P and [v, u, h, s]; dF/dT from their slopes. */
-type LineFn = (P: number, y: ArrayLike<number>, dP: number, dy: ArrayLike<number>) => [number, number];
+type LineFn = (
+	P: number,
+	y: ArrayLike<number>,
+	dP: number,
+	dy: ArrayLike<number>
+) => [number, number];
 
 /**
  * Temperatures where F vanishes on one saturation line (0 liquid, 1 vapor): sign changes between
@@ -214,9 +251,11 @@ function lineRoots(fl: Fluid, side: 0 | 1, F: LineFn): number[] {
 	}
 	const roots: number[] = [];
 	// a curve through the critical point itself (e.g. the critical isochore)
-	if (Ts[Ts.length - 1] >= fl.Tc * (1 - 2 * CRITICAL_BAND) && Math.abs(Fs[Fs.length - 1]) <= 1e-12) roots.push(fl.Tc);
+	if (Ts[Ts.length - 1] >= fl.Tc * (1 - 2 * CRITICAL_BAND) && Math.abs(Fs[Fs.length - 1]) <= 1e-12)
+		roots.push(fl.Tc);
 	for (let i = 0; i < Ts.length - 1; i++) {
-		let a = Ts[i], b = Ts[i + 1];
+		let a = Ts[i],
+			b = Ts[i + 1];
 		let fa = Fs[i];
 		const fb = Fs[i + 1];
 		if (!Number.isFinite(fa) || !Number.isFinite(fb)) continue;
@@ -331,7 +370,12 @@ export class Curve {
 	/** Whether a point lies in the curve's domain (g ≤ 0; see violation). */
 	violation(c: CPt): number {
 		const fl = this.fl;
-		return Math.max(Math.log(c.P / fl.Pmax), Math.log(this.Pfloor / c.P), c.T / fl.Tmax - 1, fl.Tmin / c.T - 1);
+		return Math.max(
+			Math.log(c.P / fl.Pmax),
+			Math.log(this.Pfloor / c.P),
+			c.T / fl.Tmax - 1,
+			fl.Tmin / c.T - 1
+		);
 	}
 
 	// ---- evaluators ---------------------------------------------------------------------------
@@ -342,7 +386,13 @@ export class Curve {
 		try {
 			const c = seg.dome ? this.dome(t) : this.single(t, guess, seg.branch);
 			if (!c || !Number.isFinite(c.T) || !Number.isFinite(c.rho) || !(c.P > 0)) return null;
-			if (!seg.dome && (this.process === 'isobaric' || this.process === 'isenthalpic' || this.process === 'polytropic')) c.givenP = true;
+			if (
+				!seg.dome &&
+				(this.process === 'isobaric' ||
+					this.process === 'isenthalpic' ||
+					this.process === 'polytropic')
+			)
+				c.givenP = true;
 			// the equation of state continues into the dome (metastable and unstable states): not a point of the leg
 			if (!seg.dome && this.insideDome(c)) return null;
 			return c;
@@ -361,7 +411,8 @@ export class Curve {
 	}
 
 	private single(t: number, guess: CPt | null, branch: Branch): CPt | null {
-		const fl = this.fl, inv = this.inv;
+		const fl = this.fl,
+			inv = this.inv;
 		switch (inv.process) {
 			case 'isobaric':
 				return this.isobaricSingle(t, guess, branch);
@@ -370,7 +421,13 @@ export class Curve {
 			case 'isothermal':
 				return single(evalPoint(fl, inv.T as number, Math.exp(-t), new Point(), 2));
 			case 'isentropic':
-				return this.tAtRho(Math.exp(-t), guess, branch, (p) => [p.s - (inv.s as number), p.cv / p.T], { s: inv.s as number });
+				return this.tAtRho(
+					Math.exp(-t),
+					guess,
+					branch,
+					(p) => [p.s - (inv.s as number), p.cv / p.T],
+					{ s: inv.s as number }
+				);
 			case 'isenthalpic':
 				return this.isenthalpicSingle(Math.exp(t), guess, branch);
 			case 'polytropic': {
@@ -388,8 +445,23 @@ export class Curve {
 		let rho: number;
 		if (T < fl.Tc && branch !== 'any') {
 			satGuess(fl, T, this.g);
-			if (branch === 'liquid') rho = densityAtTP(fl, T, P, Math.max(guess?.rho ?? 0, this.g.rhoL * 1.001), this.g.rhoL * (1 - M));
-			else rho = densityAtTP(fl, T, P, Math.min(guess?.rho ?? P / (fl.R * T), this.g.rhoV), 0, this.g.rhoV * (1 + M));
+			if (branch === 'liquid')
+				rho = densityAtTP(
+					fl,
+					T,
+					P,
+					Math.max(guess?.rho ?? 0, this.g.rhoL * 1.001),
+					this.g.rhoL * (1 - M)
+				);
+			else
+				rho = densityAtTP(
+					fl,
+					T,
+					P,
+					Math.min(guess?.rho ?? P / (fl.R * T), this.g.rhoV),
+					0,
+					this.g.rhoV * (1 + M)
+				);
 		} else if (T < fl.Tc) {
 			satGuess(fl, T, this.g);
 			rho = densityAtTP(fl, T, P, Math.max(guess?.rho ?? 0, this.g.rhoL), this.g.rhoL * (1 - M));
@@ -401,7 +473,13 @@ export class Curve {
 	}
 
 	/** T at fixed ρ with f(point) = 0, Newton from the guess (df/dT given); fallback: the engine's flash. */
-	private tAtRho(rho: number, guess: CPt | null, branch: Branch, f: (p: Point) => [number, number], pair: Inputs): CPt | null {
+	private tAtRho(
+		rho: number,
+		guess: CPt | null,
+		branch: Branch,
+		f: (p: Point) => [number, number],
+		pair: Inputs
+	): CPt | null {
 		const fl = this.fl;
 		let T = guess ? guess.T : fl.Tc;
 		const p = new Point();
@@ -433,9 +511,12 @@ export class Curve {
 		for (let it = 0; it < 50; it++) {
 			const rho = Math.exp(z);
 			evalPoint(fl, T, rho, p, 2);
-			const r1 = p.P / P - 1, r2 = (p.h - h0) / sh;
-			const j11 = p.dPdT / P, j12 = (rho * p.dPdrho) / P;
-			const j21 = propDT(p, 'h') / sh, j22 = (rho * propDrho(p, 'h')) / sh;
+			const r1 = p.P / P - 1,
+				r2 = (p.h - h0) / sh;
+			const j11 = p.dPdT / P,
+				j12 = (rho * p.dPdrho) / P;
+			const j21 = propDT(p, 'h') / sh,
+				j22 = (rho * propDrho(p, 'h')) / sh;
 			const det = j11 * j22 - j12 * j21;
 			if (!Number.isFinite(det) || det === 0 || !(p.dPdrho > 0)) break;
 			let dT = -(r1 * j22 - j12 * r2) / det;
@@ -462,10 +543,21 @@ export class Curve {
 		const fl = this.fl;
 		let st: State;
 		try {
-			st = fixStateOf(fl, inputs, branch === 'liquid' ? { hint: 'liquid-side' } : branch === 'vapor' ? { hint: 'vapor-side' } : {});
+			st = fixStateOf(
+				fl,
+				inputs,
+				branch === 'liquid'
+					? { hint: 'liquid-side' }
+					: branch === 'vapor'
+						? { hint: 'vapor-side' }
+						: {}
+			);
 		} catch (e) {
-			if (!(e instanceof ThermoError) || e.code !== 'ambiguous-state' || !e.candidates || !guess) return null;
-			const best = [...e.candidates].sort((a, b) => Math.abs(a.T - guess.T) - Math.abs(b.T - guess.T))[0];
+			if (!(e instanceof ThermoError) || e.code !== 'ambiguous-state' || !e.candidates || !guess)
+				return null;
+			const best = [...e.candidates].sort(
+				(a, b) => Math.abs(a.T - guess.T) - Math.abs(b.T - guess.T)
+			)[0];
 			const p = evalPoint(fl, best.T, best.rho, new Point(), 2);
 			return single(p);
 		}
@@ -477,7 +569,8 @@ export class Curve {
 
 	/** Two-phase point at parameter t; null when the invariant puts no mixture there. */
 	private dome(t: number): CPt | null {
-		const fl = this.fl, inv = this.inv;
+		const fl = this.fl,
+			inv = this.inv;
 		let sat: SatPoint, L: Point, V: Point, x: number;
 		if (this.fixedSat) {
 			({ sat, L, V } = this.fixedSat);
@@ -496,7 +589,10 @@ export class Curve {
 					sat = critical(e, t > fl.Tc * (1 - 1e-6));
 				}
 			} else {
-				const P = inv.process === 'isenthalpic' ? Math.exp(t) : Math.exp((inv.lnC as number) - (inv.n as number) * t);
+				const P =
+					inv.process === 'isenthalpic'
+						? Math.exp(t)
+						: Math.exp((inv.lnC as number) - (inv.n as number) * t);
 				if (!(P >= triplePressure(fl) * (1 - 1e-12) && P <= fl.Pc * (1 + 1e-6))) return null;
 				try {
 					sat = satAtP(fl, Math.min(P, fl.Pc));
@@ -513,19 +609,34 @@ export class Curve {
 				x = (v - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
 				// x from v needs no energies; they are filled in only when someone reads them
 				if (!this.energies) {
-					if (!(x >= -1e-9 && x <= 1 + 1e-9) && !(sat.P > fl.Pc * (1 - 1e-4) && Number.isFinite(x))) return null;
+					if (!(x >= -1e-9 && x <= 1 + 1e-9) && !(sat.P > fl.Pc * (1 - 1e-4) && Number.isFinite(x)))
+						return null;
 					x = Math.min(1, Math.max(0, x));
-					return { T: sat.T, rho: 1 / (1 / sat.rhoL + x * (1 / sat.rhoV - 1 / sat.rhoL)), P: sat.P, u: NaN, h: NaN, s: NaN, x, sat, pt: null };
+					return {
+						T: sat.T,
+						rho: 1 / (1 / sat.rhoL + x * (1 / sat.rhoV - 1 / sat.rhoL)),
+						P: sat.P,
+						u: NaN,
+						h: NaN,
+						s: NaN,
+						x,
+						sat,
+						pt: null
+					};
 				}
 				[L, V] = phases(fl, sat);
 			} else {
 				[L, V] = phases(fl, sat);
-				x = inv.process === 'isentropic' ? ((inv.s as number) - L.s) / (V.s - L.s) : ((inv.h as number) - L.h) / (V.h - L.h);
+				x =
+					inv.process === 'isentropic'
+						? ((inv.s as number) - L.s) / (V.s - L.s)
+						: ((inv.h as number) - L.h) / (V.h - L.h);
 			}
 		}
 		// next to the critical point a crossing may be placed at the critical point itself (see lineRoots):
 		// there the curve's few ppm of two-phase stretch are clamped onto the nearer line
-		if (!(x >= -1e-9 && x <= 1 + 1e-9) && !(sat.P > fl.Pc * (1 - 1e-4) && Number.isFinite(x))) return null;
+		if (!(x >= -1e-9 && x <= 1 + 1e-9) && !(sat.P > fl.Pc * (1 - 1e-4) && Number.isFinite(x)))
+			return null;
 		return mixture(fl, sat, Math.min(1, Math.max(0, x)), L, V);
 	}
 
@@ -541,7 +652,8 @@ export class Curve {
 			const L = evalPoint(fl, t, sat.rhoL, this.pL, 1);
 			const V = evalPoint(fl, t, sat.rhoV, this.pV, 1);
 			const x = ((this.inv.s as number) - L.s) / (V.s - L.s);
-			const vL = 1 / sat.rhoL, vV = 1 / sat.rhoV;
+			const vL = 1 / sat.rhoL,
+				vV = 1 / sat.rhoV;
 			const dPs = (V.s - L.s) / (vV - vL);
 			return -(vL + x * (vV - vL)) * dPs;
 		}
@@ -568,7 +680,11 @@ export class Curve {
 					`This ${this.process} leg of ${this.fl.id} passes within round-off of the critical point (${fmt(this.fl.Tc)} K, ${fmt(this.fl.Pc)} Pa), where its crossing of the saturation line cannot be resolved.`,
 					'Move the start or the target slightly so that the leg passes the critical point at a distance.'
 				)
-			: new ThermoError('no-convergence', `A point of this ${this.process} leg of ${this.fl.id} could not be solved.`, 'Please report the leg; try a slightly different start or target.');
+			: new ThermoError(
+					'no-convergence',
+					`A point of this ${this.process} leg of ${this.fl.id} could not be solved.`,
+					'Please report the leg; try a slightly different start or target.'
+				);
 	}
 
 	// ---- construction -------------------------------------------------------------------------
@@ -579,7 +695,8 @@ export class Curve {
 	}
 
 	private build(start: CPt): void {
-		const fl = this.fl, inv = this.inv;
+		const fl = this.fl,
+			inv = this.inv;
 		const Pt = triplePressure(fl);
 		const subT = (T: number) => T < fl.Tc * (1 - CRITICAL_BAND);
 		let crossings: CrossingPt[] = [];
@@ -607,16 +724,29 @@ export class Curve {
 			const F = this.lineFn();
 			for (const side of [0, 1] as const) {
 				const line: SaturationLine = side === 0 ? 'saturated-liquid' : 'saturated-vapor';
-				for (const T of lineRoots(fl, side, F)) crossings.push({ line, p: this.crossingPt(satAtT(fl, T >= fl.Tc * (1 - 2 * CRITICAL_BAND) ? fl.Tc : T), line) });
+				for (const T of lineRoots(fl, side, F))
+					crossings.push({
+						line,
+						p: this.crossingPt(satAtT(fl, T >= fl.Tc * (1 - 2 * CRITICAL_BAND) ? fl.Tc : T), line)
+					});
 			}
 			// a start on a saturation line is a point of the curve on that line
 			if (start.x === 0 || start.x === 1) {
 				const line: SaturationLine = start.x === 0 ? 'saturated-liquid' : 'saturated-vapor';
-				if (!crossings.some((c) => c.line === line && Math.abs(c.p.T - start.T) <= 1e-7 * start.T)) crossings.push({ line, p: start });
+				if (!crossings.some((c) => c.line === line && Math.abs(c.p.T - start.T) <= 1e-7 * start.T))
+					crossings.push({ line, p: start });
 			}
 			crossings.sort((a, b) => this.key(a.p) - this.key(b.p));
 			// a curve through the critical point meets both lines there: one crossing
-			crossings = crossings.filter((c, i) => i === 0 || !(c.p.sat && c.p.sat.rhoL === c.p.sat.rhoV && crossings[i - 1].p.sat?.rhoL === crossings[i - 1].p.sat?.rhoV));
+			crossings = crossings.filter(
+				(c, i) =>
+					i === 0 ||
+					!(
+						c.p.sat &&
+						c.p.sat.rhoL === c.p.sat.rhoV &&
+						crossings[i - 1].p.sat?.rhoL === crossings[i - 1].p.sat?.rhoV
+					)
+			);
 		}
 		// regions of the m + 1 pieces between crossings
 		const inDome = start.x !== null && start.x > 0 && start.x < 1;
@@ -627,14 +757,22 @@ export class Curve {
 			else if (m === 0) dome[0] = inDome;
 			else {
 				// between two crossings: test the middle of the two-phase parameter
-				for (let k = 1; k < m; k++) dome[k] = this.twoPhaseAt(0.5 * (paramOf(this.domeParam, cs[k - 1].p) + paramOf(this.domeParam, cs[k].p)));
+				for (let k = 1; k < m; k++)
+					dome[k] = this.twoPhaseAt(
+						0.5 * (paramOf(this.domeParam, cs[k - 1].p) + paramOf(this.domeParam, cs[k].p))
+					);
 				// outer pieces: the other side of the neighbouring crossing, or a probe beside it
 				dome[0] = m > 1 ? !dome[1] : this.probe(cs[0].p, -1);
 				dome[m] = m > 1 ? !dome[m - 1] : this.probe(cs[m - 1].p, 1);
 			}
 			// the start's own piece must be what the start says it is
-			const onCrossing = cs.some((c) => Math.abs(c.p.T - start.T) <= 1e-9 * start.T && Math.abs(c.p.rho - start.rho) <= 1e-9 * start.rho);
-			if (this.fixedSat || m === 0 || start.x === 0 || start.x === 1 || onCrossing) return { dome, conflict: null };
+			const onCrossing = cs.some(
+				(c) =>
+					Math.abs(c.p.T - start.T) <= 1e-9 * start.T &&
+					Math.abs(c.p.rho - start.rho) <= 1e-9 * start.rho
+			);
+			if (this.fixedSat || m === 0 || start.x === 0 || start.x === 1 || onCrossing)
+				return { dome, conflict: null };
 			const k = cs.filter((c) => this.key(c.p) < this.key(start)).length;
 			return { dome, conflict: dome[k] !== inDome ? k : null };
 		};
@@ -655,7 +793,8 @@ export class Curve {
 				// other side is the other phase; elsewhere its probe stands (a curve may touch a line and
 				// stay on its side, e.g. water's liquid near its density maximum)
 				const c = crossings[0];
-				if (crossings.length === 1 && Math.abs(c.p.T / fl.Tc - 1) < 1e-3) dome[1 - conflict] = !inDome;
+				if (crossings.length === 1 && Math.abs(c.p.T / fl.Tc - 1) < 1e-3)
+					dome[1 - conflict] = !inDome;
 			}
 		}
 		this.crossings = crossings;
@@ -667,9 +806,20 @@ export class Curve {
 			const isDome = dome[k];
 			const param = isDome ? this.domeParam : this.singleParam;
 			// a crossing at the critical point belongs to neither branch
-			const atCritical = (c: CrossingPt | null) => !!c && !!c.p.sat && c.p.sat.rhoL === c.p.sat.rhoV;
-			const lines = atCritical(a) || atCritical(b) ? ['critical'] : [a?.line, b?.line].filter((l): l is SaturationLine => !!l);
-			const branch: Branch = isDome || lines.length === 0 ? 'any' : lines.every((l) => l === 'saturated-liquid') ? 'liquid' : lines.every((l) => l === 'saturated-vapor') ? 'vapor' : 'any';
+			const atCritical = (c: CrossingPt | null) =>
+				!!c && !!c.p.sat && c.p.sat.rhoL === c.p.sat.rhoV;
+			const lines =
+				atCritical(a) || atCritical(b)
+					? ['critical']
+					: [a?.line, b?.line].filter((l): l is SaturationLine => !!l);
+			const branch: Branch =
+				isDome || lines.length === 0
+					? 'any'
+					: lines.every((l) => l === 'saturated-liquid')
+						? 'liquid'
+						: lines.every((l) => l === 'saturated-vapor')
+							? 'vapor'
+							: 'any';
 			const [ha, hb] = this.hardBounds(isDome, param);
 			segs.push({
 				dome: isDome,
@@ -684,7 +834,11 @@ export class Curve {
 		}
 		// an isobar below the triple-point pressure (all vapor: Psat(T) ≥ Pt there) or above Pc, or an
 		// isotherm above Tc: one piece
-		if (this.fixedSat === null && (inv.process === 'isobaric' || inv.process === 'isothermal') && segs.length === 1)
+		if (
+			this.fixedSat === null &&
+			(inv.process === 'isobaric' || inv.process === 'isothermal') &&
+			segs.length === 1
+		)
 			segs[0].branch = inv.process === 'isobaric' && (inv.P as number) < Pt ? 'vapor' : 'any';
 		this.segs = segs;
 	}
@@ -713,7 +867,8 @@ export class Curve {
 	 * dome): points of the single-phase parametrisation (LEAVE_FRACTIONS), quick solves only.
 	 */
 	private leavesDomain(start: CPt, toward: CPt): boolean {
-		const t0 = paramOf(this.singleParam, start), t1 = paramOf(this.singleParam, toward);
+		const t0 = paramOf(this.singleParam, start),
+			t1 = paramOf(this.singleParam, toward);
 		const branch: Branch = start.rho > this.fl.rhoc ? 'liquid' : 'vapor';
 		this.quick = true;
 		try {
@@ -752,20 +907,36 @@ export class Curve {
 				return (_P, y, _dP, dy) => [(y[2] - h0) / sc, dy[2] / sc];
 			}
 			default: {
-				const n = inv.n as number, lnC = inv.lnC as number;
-				return (P, y, dP, dy) => [Math.log(P) + n * Math.log(y[0]) - lnC, dP / P + (n * dy[0]) / y[0]];
+				const n = inv.n as number,
+					lnC = inv.lnC as number;
+				return (P, y, dP, dy) => [
+					Math.log(P) + n * Math.log(y[0]) - lnC,
+					dP / P + (n * dy[0]) / y[0]
+				];
 			}
 		}
 	}
 
 	/** Hard parameter bounds of an outer piece (beyond them lies no state of the domain). */
 	private hardBounds(dome: boolean, param: Param): [number, number] {
-		const fl = this.fl, inv = this.inv;
+		const fl = this.fl,
+			inv = this.inv;
 		if (dome) {
 			// two-phase pieces end at the triple point (or, failing that, just below the critical point)
-			const Ttrip = fl.Tmin, Pt = triplePressure(fl);
-			const lo = param === 'T' ? Ttrip : param === 'lnP' ? Math.log(Pt) : ((inv.lnC as number) - Math.log(Pt)) / (inv.n as number);
-			const hi = param === 'T' ? fl.Tc * (1 - 2 * CRITICAL_BAND) : param === 'lnP' ? Math.log(fl.Pc * (1 - 1e-9)) : ((inv.lnC as number) - Math.log(fl.Pc * (1 - 1e-9))) / (inv.n as number);
+			const Ttrip = fl.Tmin,
+				Pt = triplePressure(fl);
+			const lo =
+				param === 'T'
+					? Ttrip
+					: param === 'lnP'
+						? Math.log(Pt)
+						: ((inv.lnC as number) - Math.log(Pt)) / (inv.n as number);
+			const hi =
+				param === 'T'
+					? fl.Tc * (1 - 2 * CRITICAL_BAND)
+					: param === 'lnP'
+						? Math.log(fl.Pc * (1 - 1e-9))
+						: ((inv.lnC as number) - Math.log(fl.Pc * (1 - 1e-9))) / (inv.n as number);
 			const [a, b] = lo <= hi ? [lo, hi] : [hi, lo];
 			return this.domeSign > 0 ? [a, b] : [b, a];
 		}
@@ -778,16 +949,31 @@ export class Curve {
 				if (inv.process === 'isothermal') {
 					const T = inv.T as number;
 					const g = T < fl.Tc ? satGuess(fl, T, { P: 0, rhoL: 0, rhoV: 0 }) : null;
-					const rMax = densityAtTP(fl, T, fl.Pmax, g ? g.rhoL * 1.1 : 3 * fl.rhoc, g ? g.rhoL * (1 - M) : 0);
-					const rMin = densityAtTP(fl, T, this.Pfloor, this.Pfloor / (fl.R * T), 0, g ? g.rhoV * (1 + M) : Infinity);
+					const rMax = densityAtTP(
+						fl,
+						T,
+						fl.Pmax,
+						g ? g.rhoL * 1.1 : 3 * fl.rhoc,
+						g ? g.rhoL * (1 - M) : 0
+					);
+					const rMin = densityAtTP(
+						fl,
+						T,
+						this.Pfloor,
+						this.Pfloor / (fl.R * T),
+						0,
+						g ? g.rhoV * (1 + M) : Infinity
+					);
 					return [-Math.log(rMax), -Math.log(rMin)];
 				}
 				const rhoTop = densityAtTP(fl, fl.Tmin, fl.Pmax, 3 * fl.rhoc);
 				let lo = -Math.log(1.2 * (rhoTop > 0 ? rhoTop : 5 * fl.rhoc));
 				let hi = Math.log((1.2 * fl.R * fl.Tmax) / this.Pfloor);
 				if (inv.process === 'polytropic' && inv.n !== 0) {
-					const n = inv.n as number, lnC = inv.lnC as number;
-					const a = (lnC - Math.log(fl.Pmax)) / n, b = (lnC - Math.log(this.Pfloor)) / n;
+					const n = inv.n as number,
+						lnC = inv.lnC as number;
+					const a = (lnC - Math.log(fl.Pmax)) / n,
+						b = (lnC - Math.log(this.Pfloor)) / n;
 					lo = Math.max(lo, Math.min(a, b));
 					hi = Math.min(hi, Math.max(a, b));
 				}
@@ -801,7 +987,14 @@ export class Curve {
 	 * leaves the domain (found by regula falsi on the violation from a known point `ok` inside).
 	 * Returns null if no state of the piece can be found at all.
 	 */
-	end(k: number, side: 'A' | 'B', ok: CPt, tOk: number, tBad?: number, bad?: CPt | null): { t: number; p: CPt } | null {
+	end(
+		k: number,
+		side: 'A' | 'B',
+		ok: CPt,
+		tOk: number,
+		tBad?: number,
+		bad?: CPt | null
+	): { t: number; p: CPt } | null {
 		const seg = this.segs[k];
 		const known = side === 'A' ? seg.A : seg.B;
 		if (known) return { t: side === 'A' ? seg.ta : seg.tb, p: known };
@@ -812,7 +1005,8 @@ export class Curve {
 		else {
 			this.quick = true;
 			// violation g: ≤ 0 inside; a failed solve counts as outside
-			let a = tOk, b = tHard;
+			let a = tOk,
+				b = tHard;
 			let ga = Math.min(0, this.violation(ok));
 			let gb = hard ? this.violation(hard) : NaN;
 			let pa = ok;
@@ -837,7 +1031,8 @@ export class Curve {
 					if (lastSide === 1) ga *= 0.5;
 					lastSide = 1;
 				}
-				if (Math.abs(b - a) <= 1e-13 * Math.max(1, Math.abs(a)) || (ga > -1e-13 && c && g <= 0)) break;
+				if (Math.abs(b - a) <= 1e-13 * Math.max(1, Math.abs(a)) || (ga > -1e-13 && c && g <= 0))
+					break;
 			}
 			this.quick = false;
 			res = { t: a, p: pa };
@@ -855,11 +1050,20 @@ export class Curve {
 	/** Where the start lies: segment index and parameter, or the crossing it sits on. */
 	locateStart(start: CPt): { seg: number; t: number; crossing: number | null } {
 		const cs = this.crossings;
-		const same = cs.findIndex((c) => Math.abs(c.p.T - start.T) <= 1e-9 * start.T && Math.abs(c.p.rho - start.rho) <= 1e-9 * start.rho);
+		const same = cs.findIndex(
+			(c) =>
+				Math.abs(c.p.T - start.T) <= 1e-9 * start.T &&
+				Math.abs(c.p.rho - start.rho) <= 1e-9 * start.rho
+		);
 		if (same >= 0) return { seg: same + 1, t: this.segs[same + 1].ta, crossing: same };
 		if (start.x === 0 || start.x === 1) {
 			const line: SaturationLine = start.x === 0 ? 'saturated-liquid' : 'saturated-vapor';
-			const i = cs.findIndex((c) => c.line === line && Math.abs(c.p.T - start.T) <= 1e-7 * start.T && Math.abs(c.p.P - start.P) <= 1e-6 * start.P);
+			const i = cs.findIndex(
+				(c) =>
+					c.line === line &&
+					Math.abs(c.p.T - start.T) <= 1e-7 * start.T &&
+					Math.abs(c.p.P - start.P) <= 1e-6 * start.P
+			);
 			if (i >= 0) return { seg: i + 1, t: this.segs[i + 1].ta, crossing: i };
 		}
 		const key = this.key(start);
@@ -867,8 +1071,19 @@ export class Curve {
 		const inDome = start.x !== null && start.x > 0 && start.x < 1;
 		if (this.segs[k].dome !== inDome) {
 			// next to a crossing within round-off: take the neighbour that matches
-			if (k > 0 && this.segs[k - 1].dome === inDome && Math.abs(this.key(cs[k - 1].p) - key) <= 1e-6 * Math.max(1, Math.abs(key))) k -= 1;
-			else if (k + 1 < this.segs.length && this.segs[k + 1].dome === inDome && k < cs.length && Math.abs(this.key(cs[k].p) - key) <= 1e-6 * Math.max(1, Math.abs(key))) k += 1;
+			if (
+				k > 0 &&
+				this.segs[k - 1].dome === inDome &&
+				Math.abs(this.key(cs[k - 1].p) - key) <= 1e-6 * Math.max(1, Math.abs(key))
+			)
+				k -= 1;
+			else if (
+				k + 1 < this.segs.length &&
+				this.segs[k + 1].dome === inDome &&
+				k < cs.length &&
+				Math.abs(this.key(cs[k].p) - key) <= 1e-6 * Math.max(1, Math.abs(key))
+			)
+				k += 1;
 			else
 				throw new ThermoError(
 					'no-convergence',
@@ -877,6 +1092,10 @@ export class Curve {
 				);
 		}
 		const seg = this.segs[k];
-		return { seg: k, t: paramOf(seg.dome ? this.domeParam : this.singleParam, start), crossing: null };
+		return {
+			seg: k,
+			t: paramOf(seg.dome ? this.domeParam : this.singleParam, start),
+			crossing: null
+		};
 	}
 }

@@ -25,11 +25,26 @@ import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { getCompiledFluid } from '../registry.ts';
 import type { Crossing, Leg, LegSpec, Process, State, TargetName } from '../types.ts';
-import { Curve, cptOfState, paramOf, stateOf, type CPt, type Invariant, type Segment } from './leg-curve.ts';
+import {
+	Curve,
+	cptOfState,
+	paramOf,
+	stateOf,
+	type CPt,
+	type Invariant,
+	type Segment
+} from './leg-curve.ts';
 import { fixStateOf } from './fix-state.ts';
 import { integrate } from './quadrature.ts';
 
-export const PROCESSES: readonly Process[] = ['isobaric', 'isochoric', 'isothermal', 'isentropic', 'isenthalpic', 'polytropic'];
+export const PROCESSES: readonly Process[] = [
+	'isobaric',
+	'isochoric',
+	'isothermal',
+	'isentropic',
+	'isenthalpic',
+	'polytropic'
+];
 export const TARGET_NAMES: readonly TargetName[] = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'];
 /** Default, least and greatest number of points along a leg. */
 export const SAMPLES_DEFAULT = 40;
@@ -38,7 +53,16 @@ export const SAMPLES_MAX = 2000;
 /** Largest |n| accepted for a polytropic leg. */
 export const N_MAX = 50;
 
-const UNIT: Record<TargetName, string> = { T: 'K', P: 'Pa', v: 'm³/kg', rho: 'kg/m³', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)', x: '' };
+const UNIT: Record<TargetName, string> = {
+	T: 'K',
+	P: 'Pa',
+	v: 'm³/kg',
+	rho: 'kg/m³',
+	u: 'J/kg',
+	h: 'J/kg',
+	s: 'J/(kg·K)',
+	x: ''
+};
 const INVARIANT_KEYS: Record<Process, TargetName[]> = {
 	isobaric: ['P'],
 	isochoric: ['v', 'rho'],
@@ -67,15 +91,28 @@ export interface CheckedLeg {
 
 /** Validate a leg spec (everything but the start, which fixState checks). Throws ThermoError. */
 export function checkLegSpec(spec: LegSpec): CheckedLeg {
-	if (typeof spec !== 'object' || spec === null) throw invalid('A leg must be an object { fluid, start, process, target, n?, samples? }.', 'Send the leg as a JSON object.');
+	if (typeof spec !== 'object' || spec === null)
+		throw invalid(
+			'A leg must be an object { fluid, start, process, target, n?, samples? }.',
+			'Send the leg as a JSON object.'
+		);
 	const fl = getCompiledFluid(spec.fluid);
 	const process = spec.process;
-	if (!PROCESSES.includes(process)) throw invalid(`Unknown process "${String(process)}".`, `Use one of: ${PROCESSES.join(', ')}.`);
+	if (!PROCESSES.includes(process))
+		throw invalid(`Unknown process "${String(process)}".`, `Use one of: ${PROCESSES.join(', ')}.`);
 	const target = spec.target as Record<string, unknown>;
 	if (typeof target !== 'object' || target === null || Array.isArray(target))
-		throw invalid('The target must be an object holding one property, e.g. { "T": 450 }.', `Give exactly one of ${TARGET_NAMES.join(', ')}.`);
+		throw invalid(
+			'The target must be an object holding one property, e.g. { "T": 450 }.',
+			`Give exactly one of ${TARGET_NAMES.join(', ')}.`
+		);
 	const keys = Object.keys(target).filter((k) => target[k] !== undefined);
-	for (const k of keys) if (!TARGET_NAMES.includes(k as TargetName)) throw invalid(`Unknown target property "${k}".`, `Give exactly one of ${TARGET_NAMES.join(', ')} (SI units).`);
+	for (const k of keys)
+		if (!TARGET_NAMES.includes(k as TargetName))
+			throw invalid(
+				`Unknown target property "${k}".`,
+				`Give exactly one of ${TARGET_NAMES.join(', ')} (SI units).`
+			);
 	if (keys.length !== 1)
 		throw invalid(
 			`A leg ends on exactly one target property; got ${keys.length}${keys.length ? ` (${keys.join(', ')})` : ''}.`,
@@ -84,16 +121,35 @@ export function checkLegSpec(spec: LegSpec): CheckedLeg {
 	const key = keys[0] as TargetName;
 	const value = target[key];
 	if (typeof value !== 'number' || !Number.isFinite(value))
-		throw new ThermoError('non-finite-input', `The target ${key} must be a finite number (got ${String(value)}).`, `Give ${key} as a finite number in ${UNIT[key] || 'SI units'}.`);
+		throw new ThermoError(
+			'non-finite-input',
+			`The target ${key} must be a finite number (got ${String(value)}).`,
+			`Give ${key} as a finite number in ${UNIT[key] || 'SI units'}.`
+		);
 	if ((key === 'T' || key === 'P' || key === 'v' || key === 'rho') && !(value > 0))
-		throw new ThermoError('non-positive-input', `The target ${key} must be positive (got ${fmt(value)}); the engine uses absolute values.`, `Give ${key} in ${UNIT[key]} as a positive absolute value (kelvin, absolute pressure).`);
+		throw new ThermoError(
+			'non-positive-input',
+			`The target ${key} must be positive (got ${fmt(value)}); the engine uses absolute values.`,
+			`Give ${key} in ${UNIT[key]} as a positive absolute value (kelvin, absolute pressure).`
+		);
 	if (key === 'x' && !(value >= 0 && value <= 1))
-		throw new ThermoError('quality-out-of-range', `The target quality x must lie between 0 and 1 (got ${fmt(value)}).`, 'Give x from 0 (saturated liquid) to 1 (saturated vapor).');
+		throw new ThermoError(
+			'quality-out-of-range',
+			`The target quality x must lie between 0 and 1 (got ${fmt(value)}).`,
+			'Give x from 0 (saturated liquid) to 1 (saturated vapor).'
+		);
 	let n: number | undefined;
 	if (process === 'polytropic') {
 		if (typeof spec.n !== 'number' || !Number.isFinite(spec.n))
-			throw invalid(`A polytropic leg needs a finite exponent n (P·vⁿ = const); got ${String(spec.n)}.`, `Give n, for example 1.3; from −${N_MAX} to ${N_MAX}.`);
-		if (Math.abs(spec.n) > N_MAX) throw invalid(`The polytropic exponent n = ${fmt(spec.n)} is outside −${N_MAX}…${N_MAX}.`, 'Use an isochoric leg for very large n.');
+			throw invalid(
+				`A polytropic leg needs a finite exponent n (P·vⁿ = const); got ${String(spec.n)}.`,
+				`Give n, for example 1.3; from −${N_MAX} to ${N_MAX}.`
+			);
+		if (Math.abs(spec.n) > N_MAX)
+			throw invalid(
+				`The polytropic exponent n = ${fmt(spec.n)} is outside −${N_MAX}…${N_MAX}.`,
+				'Use an isochoric leg for very large n.'
+			);
 		n = spec.n;
 	}
 	if (INVARIANT_KEYS[process].includes(key) || (process === 'polytropic' && n === 0 && key === 'P'))
@@ -104,8 +160,16 @@ export function checkLegSpec(spec: LegSpec): CheckedLeg {
 		);
 	let samples = SAMPLES_DEFAULT;
 	if (spec.samples !== undefined) {
-		if (typeof spec.samples !== 'number' || !Number.isInteger(spec.samples) || spec.samples < SAMPLES_MIN || spec.samples > SAMPLES_MAX)
-			throw invalid(`samples must be a whole number from ${SAMPLES_MIN} to ${SAMPLES_MAX} (got ${String(spec.samples)}).`, `Leave samples out for ${SAMPLES_DEFAULT} points, or give ${SAMPLES_MIN}…${SAMPLES_MAX}.`);
+		if (
+			typeof spec.samples !== 'number' ||
+			!Number.isInteger(spec.samples) ||
+			spec.samples < SAMPLES_MIN ||
+			spec.samples > SAMPLES_MAX
+		)
+			throw invalid(
+				`samples must be a whole number from ${SAMPLES_MIN} to ${SAMPLES_MAX} (got ${String(spec.samples)}).`,
+				`Leave samples out for ${SAMPLES_DEFAULT} points, or give ${SAMPLES_MIN}…${SAMPLES_MAX}.`
+			);
 		samples = spec.samples;
 	}
 	return { fl, process, key, value, n, samples };
@@ -185,7 +249,14 @@ export function traceLeg(spec: LegSpec): LegTrace {
 	const notes: string[] = [];
 	if (process === 'isenthalpic') notes.push(THROTTLING_NOTE);
 
-	const scale = key === 'u' || key === 'h' ? Math.max(Math.abs(value), fl.R * fl.Tc) : key === 's' ? Math.max(Math.abs(value), fl.R) : key === 'x' ? 1 : value;
+	const scale =
+		key === 'u' || key === 'h'
+			? Math.max(Math.abs(value), fl.R * fl.Tc)
+			: key === 's'
+				? Math.max(Math.abs(value), fl.R)
+				: key === 'x'
+					? 1
+					: value;
 	const F = (c: CPt) => (valueOf(c, key) - value) / scale;
 	const tolF = key === 'x' ? 1e-12 : 1e-11;
 	const pos0 = curve.locateStart(startC);
@@ -210,7 +281,23 @@ export function traceLeg(spec: LegSpec): LegTrace {
 		const mono = isMonotone(inv.process, key);
 		const hit1 = scan(curve, pos0, startC, F, F0, tolF, first, Infinity, key, seen, range, mono);
 		// a property monotone along the whole curve is reached one way only: no need to look back
-		const hit2 = hit1 && mono ? null : scan(curve, pos0, startC, F, F0, tolF, first === 1 ? -1 : 1, hit1 ? Math.floor(hit1.dist) : Infinity, key, seen, range, mono);
+		const hit2 =
+			hit1 && mono
+				? null
+				: scan(
+						curve,
+						pos0,
+						startC,
+						F,
+						F0,
+						tolF,
+						first === 1 ? -1 : 1,
+						hit1 ? Math.floor(hit1.dist) : Infinity,
+						key,
+						seen,
+						range,
+						mono
+					);
 		if (!hit1 && !hit2) throw unreachable(fl, process, inv, n, key, value, range);
 		if (hit1 && hit2) {
 			const [a, b] = hit1.dist <= hit2.dist ? [hit1, hit2] : [hit2, hit1];
@@ -236,10 +323,15 @@ export function traceLeg(spec: LegSpec): LegTrace {
 	const points: State[] = sampled.map((sp) => stateOf(fl, sp.c));
 	points[0] = start;
 	const endState = points[points.length - 1];
-	const crossings: Crossing[] = pieces.slice(1).map((pc) => ({ line: pc.lineFrom as Crossing['line'], state: stateOf(fl, pc.A) }));
+	const crossings: Crossing[] = pieces
+		.slice(1)
+		.map((pc) => ({ line: pc.lineFrom as Crossing['line'], state: stateOf(fl, pc.A) }));
 
-	const du = endState.u - start.u, dh = endState.h - start.h, ds = endState.s - start.s;
-	let w = 0, wShaft = 0;
+	const du = endState.u - start.u,
+		dh = endState.h - start.h,
+		ds = endState.s - start.s;
+	let w = 0,
+		wShaft = 0;
 	const dPv = endState.P * endState.v - start.P * start.v;
 	switch (inv.process) {
 		case 'isobaric':
@@ -274,13 +366,18 @@ export function traceLeg(spec: LegSpec): LegTrace {
 	};
 	if (notes.length) leg.notes = notes;
 	if (process === 'polytropic') leg.n = n;
-	const sides = pieces.slice(1).map((pc, i): [boolean, boolean] => [pieces[i].seg.dome, pc.seg.dome]);
-	const endsFromDome = pieces[pieces.length - 1].seg.dome && pieces[pieces.length - 1].from !== pieces[pieces.length - 1].to;
+	const sides = pieces
+		.slice(1)
+		.map((pc, i): [boolean, boolean] => [pieces[i].seg.dome, pc.seg.dome]);
+	const endsFromDome =
+		pieces[pieces.length - 1].seg.dome &&
+		pieces[pieces.length - 1].from !== pieces[pieces.length - 1].to;
 	const firstReach = (g: (T: number, P: number, v: number) => number): State | null => {
 		const G = (c: CPt) => g(c.T, c.P, 1 / c.rho);
 		let gPrev = G(sampled[0].c);
 		for (let j = 1; j < sampled.length; j++) {
-			const b = sampled[j], a = sampled[j - 1];
+			const b = sampled[j],
+				a = sampled[j - 1];
 			const gb = G(b.c);
 			if (gPrev < 0 && gb >= 0) {
 				if (gb === 0) return stateOf(fl, b.c);
@@ -296,7 +393,15 @@ export function traceLeg(spec: LegSpec): LegTrace {
 	return { leg, sides, endsFromDome, firstReach };
 }
 
-function unreachable(fl: Fluid, process: Process, inv: Invariant, n: number | undefined, key: TargetName, value: number, range: { lo: number; hi: number }): ThermoError {
+function unreachable(
+	fl: Fluid,
+	process: Process,
+	inv: Invariant,
+	n: number | undefined,
+	key: TargetName,
+	value: number,
+	range: { lo: number; hi: number }
+): ThermoError {
 	const where = `This ${process} leg ${describeInvariant(process, inv, n)}`;
 	if (key === 'x' && !(range.hi >= range.lo))
 		return new ThermoError(
@@ -313,7 +418,13 @@ function unreachable(fl: Fluid, process: Process, inv: Invariant, n: number | un
 }
 
 /** The direction in which F moves toward zero at the start (1 if it cannot tell). */
-function preferredDirection(curve: Curve, pos: Pos | { seg: number; t: number; crossing: number | null }, startC: CPt, F: (c: CPt) => number, F0: number): 1 | -1 {
+function preferredDirection(
+	curve: Curve,
+	pos: Pos | { seg: number; t: number; crossing: number | null },
+	startC: CPt,
+	F: (c: CPt) => number,
+	F0: number
+): 1 | -1 {
 	const k = pos.seg;
 	const seg = curve.segs[k];
 	const span = Math.abs(seg.tb - seg.ta);
@@ -379,7 +490,9 @@ function scan(
 		const side = dir === 1 ? 'B' : 'A';
 		// a crossing ends the segment; an outer end is found only if the walk gets there (lazy edge)
 		const known = side === 'B' ? seg.B : seg.A;
-		let e: { t: number; p: CPt } | null = known ? { t: side === 'B' ? seg.tb : seg.ta, p: known } : null;
+		let e: { t: number; p: CPt } | null = known
+			? { t: side === 'B' ? seg.tb : seg.ta, p: known }
+			: null;
 		// no quality on an outer single-phase segment, and nothing beyond it
 		if (!e && key === 'x' && !seg.dome) return null;
 		const tEnd = e ? e.t : side === 'B' ? seg.tb : seg.ta;
@@ -404,9 +517,12 @@ function scan(
 			const f = F(c);
 			seen(c);
 			const frac = tEnd === tEntry ? 1 : (t - tEntry) / (tEnd - tEntry);
-			const atCrossing = j === steps && (dir === 1 ? seg.B !== null && seg.lineB !== null : seg.A !== null && seg.lineA !== null);
+			const atCrossing =
+				j === steps &&
+				(dir === 1 ? seg.B !== null && seg.lineB !== null : seg.A !== null && seg.lineA !== null);
 			const crossingIndex = atCrossing ? (dir === 1 ? k : k - 1) : null;
-			if (Math.abs(f) <= tolF) return { seg: k, t, p: c, crossing: crossingIndex, dist: entered + frac };
+			if (Math.abs(f) <= tolF)
+				return { seg: k, t, p: c, crossing: crossingIndex, dist: entered + frac };
 			if (Number.isFinite(f) && Number.isFinite(Fprev) && f < 0 !== Fprev < 0) {
 				const r = refine(curve, seg, tPrev, Fprev, prev, t, f, c, F);
 				if (!(Math.abs(F(r.p)) <= 1e-7))
@@ -436,7 +552,17 @@ function scan(
 }
 
 /** Root of F on a segment between a and b (opposite signs), Illinois regula falsi with bisection. */
-function refine(curve: Curve, seg: Segment, a: number, fa: number, pa: CPt, b: number, fb: number, pb: CPt, F: (c: CPt) => number): { t: number; p: CPt } {
+function refine(
+	curve: Curve,
+	seg: Segment,
+	a: number,
+	fa: number,
+	pa: CPt,
+	b: number,
+	fb: number,
+	pb: CPt,
+	F: (c: CPt) => number
+): { t: number; p: CPt } {
 	let side = 0;
 	let best = Math.abs(fa) < Math.abs(fb) ? { t: a, p: pa, f: fa } : { t: b, p: pb, f: fb };
 	for (let it = 0; it < 100; it++) {
@@ -491,9 +617,18 @@ export interface Piece {
 	lineFrom: string | null;
 }
 
-function piecesBetween(curve: Curve, pos0: { seg: number; t: number; crossing: number | null }, startC: CPt, end: Pos, dir: 1 | -1): Piece[] {
+function piecesBetween(
+	curve: Curve,
+	pos0: { seg: number; t: number; crossing: number | null },
+	startC: CPt,
+	end: Pos,
+	dir: 1 | -1
+): Piece[] {
 	const segs = curve.segs;
-	if (end.p === startC) return [{ seg: segs[pos0.seg], from: pos0.t, to: pos0.t, A: startC, B: startC, lineFrom: null }];
+	if (end.p === startC)
+		return [
+			{ seg: segs[pos0.seg], from: pos0.t, to: pos0.t, A: startC, B: startC, lineFrom: null }
+		];
 	let k = pos0.crossing === null ? pos0.seg : dir === 1 ? pos0.crossing + 1 : pos0.crossing;
 	let from = pos0.crossing === null ? pos0.t : dir === 1 ? segs[k].ta : segs[k].tb;
 	let A = startC;
@@ -502,7 +637,11 @@ function piecesBetween(curve: Curve, pos0: { seg: number; t: number; crossing: n
 	for (;;) {
 		const seg = segs[k];
 		if (!seg)
-			throw new ThermoError('no-convergence', 'The end of this leg could not be placed on its path.', 'Please report the leg; try a slightly different start or target.');
+			throw new ThermoError(
+				'no-convergence',
+				'The end of this leg could not be placed on its path.',
+				'Please report the leg; try a slightly different start or target.'
+			);
 		if (k === end.seg) {
 			out.push({ seg, from, to: end.t, A, B: end.p, lineFrom });
 			break;
@@ -550,7 +689,8 @@ export function samplePieces(curve: Curve, pieces: Piece[], samples: number): SP
 	});
 	// normalise each coordinate by the leg's own span (floors keep a fixed coordinate from blowing up)
 	const S = [0, 1, 2, 3].map((d) => {
-		let lo = Infinity, hi = -Infinity;
+		let lo = Infinity,
+			hi = -Infinity;
 		for (const p of pts) {
 			lo = Math.min(lo, p.X[d]);
 			hi = Math.max(hi, p.X[d]);
@@ -562,11 +702,14 @@ export function samplePieces(curve: Curve, pieces: Piece[], samples: number): SP
 	const N: number[][] = pts.map((p) => norm(p.X));
 	// boundary vertices (crossings) may kink: never count their angle
 	// an interval (j, j + 1) lies in the piece of its right end; a piece's last point carries that piece's index
-	const boundary = (j: number) => j === 0 || j === pts.length - 1 || pts[j].piece !== pts[j + 1].piece;
-	const leftT = (j: number) => (pts[j].piece === pts[j + 1].piece ? pts[j].t : pieces[pts[j + 1].piece].from);
+	const boundary = (j: number) =>
+		j === 0 || j === pts.length - 1 || pts[j].piece !== pts[j + 1].piece;
+	const leftT = (j: number) =>
+		pts[j].piece === pts[j + 1].piece ? pts[j].t : pieces[pts[j + 1].piece].from;
 	// length of an interval: the longest of its projections on (ln v, T), (ln v, ln P), (ln v, P)
 	const len = (j: number) => {
-		const a = N[j], b = N[j + 1];
+		const a = N[j],
+			b = N[j + 1];
 		const dx = b[0] - a[0];
 		let m = 0;
 		for (let d = 1; d < 4; d++) {
@@ -578,12 +721,17 @@ export function samplePieces(curve: Curve, pieces: Piece[], samples: number): SP
 	// turning angle at a vertex: the largest over the three projections
 	const turn = (j: number) => {
 		if (boundary(j)) return 0;
-		const a = N[j - 1], b = N[j], c = N[j + 1];
-		const ux = b[0] - a[0], vx = c[0] - b[0];
+		const a = N[j - 1],
+			b = N[j],
+			c = N[j + 1];
+		const ux = b[0] - a[0],
+			vx = c[0] - b[0];
 		let m = 0;
 		for (let d = 1; d < 4; d++) {
-			const uy = b[d] - a[d], vy = c[d] - b[d];
-			const lu = ux * ux + uy * uy, lv = vx * vx + vy * vy;
+			const uy = b[d] - a[d],
+				vy = c[d] - b[d];
+			const lu = ux * ux + uy * uy,
+				lv = vx * vx + vy * vy;
 			if (lu === 0 || lv === 0) continue;
 			const cos = Math.max(-1, Math.min(1, (ux * vx + uy * vy) / Math.sqrt(lu * lv)));
 			m = Math.max(m, Math.acos(cos));
@@ -598,7 +746,8 @@ export function samplePieces(curve: Curve, pieces: Piece[], samples: number): SP
 	};
 	/** Split interval j (pts[j], pts[j+1]) into m + 1 equal parameter steps; returns the new points. */
 	const split = (j: number, m: number): SP[] => {
-		const a = pts[j], b = pts[j + 1];
+		const a = pts[j],
+			b = pts[j + 1];
 		const ta = leftT(j);
 		const out: SP[] = [];
 		let prev = a.c;
@@ -615,13 +764,18 @@ export function samplePieces(curve: Curve, pieces: Piece[], samples: number): SP
 	// pass 1: share the remaining budget among the coarse intervals by length weighted by turning
 	{
 		const theta = pts.map((_, j) => turn(j));
-		const wts = pts.map((_, j) => (j < pts.length - 1 ? len(j) * (1 + 8 * Math.max(theta[j], theta[j + 1])) : 0));
+		const wts = pts.map((_, j) =>
+			j < pts.length - 1 ? len(j) * (1 + 8 * Math.max(theta[j], theta[j + 1])) : 0
+		);
 		const total = wts.reduce((x, y) => x + y, 0);
 		const budget = Math.max(0, samples - pts.length);
 		const share = wts.map((w) => (total > 0 ? (budget * w) / total : 0));
 		const m = share.map(Math.floor);
 		let left = budget - m.reduce((x, y) => x + y, 0);
-		const order = share.map((v, j) => [v - m[j], j]).filter(([, j]) => wts[j] > 0 || total === 0).sort((x, y) => y[0] - x[0]);
+		const order = share
+			.map((v, j) => [v - m[j], j])
+			.filter(([, j]) => wts[j] > 0 || total === 0)
+			.sort((x, y) => y[0] - x[0]);
 		if (total === 0) for (let j = 0; j < pts.length - 1; j++) order.push([0, j]);
 		for (let i = 0; left > 0 && order.length; i = (i + 1) % order.length, left--) m[order[i][1]]++;
 		const next: SP[] = [];
@@ -641,7 +795,9 @@ export function samplePieces(curve: Curve, pieces: Piece[], samples: number): SP
 			if (Math.max(theta[j], theta[j + 1]) > TURN_TOL && len(j) > 1e-3) want.add(j);
 		}
 		if (pts.length < samples) {
-			const byLen = pts.map((_, j) => [j < pts.length - 1 ? len(j) : -1, j]).sort((x, y) => y[0] - x[0]);
+			const byLen = pts
+				.map((_, j) => [j < pts.length - 1 ? len(j) : -1, j])
+				.sort((x, y) => y[0] - x[0]);
 			for (const [l, j] of byLen) {
 				if (pts.length + want.size >= samples) break;
 				if (l > 0) want.add(j);
@@ -670,7 +826,8 @@ function integrals(curve: Curve, pieces: Piece[], sampled: SP[]): number {
 		if (pc.from === pc.to) return;
 		const mine = sampled.filter((s) => s.piece === i);
 		const guess = (t: number) => {
-			let best = mine[0].c, d = Infinity;
+			let best = mine[0].c,
+				d = Infinity;
 			for (const s of mine) {
 				const e = Math.abs(s.t - t);
 				if (e < d) {

@@ -8,10 +8,26 @@
  */
 import type { Fluid } from '../fluid.ts';
 import type { Point } from '../properties.ts';
-import { P_LINE_TOL, P_ROUNDOFF, X_SNAP, lineTol, phaseAboveCritical, pressureTol, saturatedState, singleState } from '../state.ts';
+import {
+	P_LINE_TOL,
+	P_ROUNDOFF,
+	X_SNAP,
+	lineTol,
+	phaseAboveCritical,
+	pressureTol,
+	saturatedState,
+	singleState
+} from '../state.ts';
 import type { State } from '../types.ts';
 import type { Phase } from '../types.ts';
-import { CRITICAL_BAND, TABLE_ACCURACY, satAtT, satGuess, type SatGuess, type SatPoint } from './saturation.ts';
+import {
+	CRITICAL_BAND,
+	TABLE_ACCURACY,
+	satAtT,
+	satGuess,
+	type SatGuess,
+	type SatPoint
+} from './saturation.ts';
 
 export interface Located {
 	phase: Phase;
@@ -29,7 +45,13 @@ const M = 10 * TABLE_ACCURACY;
  * pressureTol, X_SNAP). P is the state's pressure: the given one when P was an input, else the
  * equation's; a two-phase point passes sat.P.
  */
-export function locateWithSat(fl: Fluid, T: number, rho: number, P: number, sat: SatPoint): Located {
+export function locateWithSat(
+	fl: Fluid,
+	T: number,
+	rho: number,
+	P: number,
+	sat: SatPoint
+): Located {
 	const tol = lineTol(fl, T);
 	const dP = P - sat.P;
 	if (rho > sat.rhoL * (1 + tol)) return { phase: 'compressed-liquid', sat: null, x: null };
@@ -71,17 +93,22 @@ export function twoPhaseAt(fl: Fluid, sat: SatPoint, x: number): State | null {
  * input) against the dome.
  */
 export function locate(fl: Fluid, p: Point): Located {
-	const T = p.T, rho = p.rho, P = p.P;
-	if (T >= fl.Tc * (1 - CRITICAL_BAND)) return { phase: phaseAboveCritical(fl, T, P), sat: null, x: null };
+	const T = p.T,
+		rho = p.rho,
+		P = p.P;
+	if (T >= fl.Tc * (1 - CRITICAL_BAND))
+		return { phase: phaseAboveCritical(fl, T, P), sat: null, x: null };
 	if (T < 0.999 * fl.Tc) {
 		satGuess(fl, T, g);
 		// the table's Psat and densities are within M/10; the line's bands are far narrower than M
 		const hiP = g.P * (1 + M) * (1 + P_LINE_TOL) + P_ROUNDOFF * rho * fl.R * T;
 		const loP = g.P * (1 - M) * (1 - P_LINE_TOL) - P_ROUNDOFF * rho * fl.R * T;
 		if (rho > g.rhoL * (1 + M)) return { phase: 'compressed-liquid', sat: null, x: null };
-		if (rho >= g.rhoL * (1 - M) && p.dPdrho > 0 && P > hiP) return { phase: 'compressed-liquid', sat: null, x: null };
+		if (rho >= g.rhoL * (1 - M) && p.dPdrho > 0 && P > hiP)
+			return { phase: 'compressed-liquid', sat: null, x: null };
 		if (rho < g.rhoV * (1 - M)) return { phase: 'superheated-vapor', sat: null, x: null };
-		if (rho <= g.rhoV * (1 + M) && p.dPdrho > 0 && P < loP) return { phase: 'superheated-vapor', sat: null, x: null };
+		if (rho <= g.rhoV * (1 + M) && p.dPdrho > 0 && P < loP)
+			return { phase: 'superheated-vapor', sat: null, x: null };
 	}
 	return locateWithSat(fl, T, rho, P, satAtT(fl, T));
 }

@@ -24,16 +24,69 @@ interface Case {
 }
 
 const CASES: Case[] = [
-	{ fluid: 'ammonia', inputs: { u: 2128176.6420585867, h: 2450203.1347223665 }, expect: [{ T: 689.34, P: 11.0e6 }, { T: 698.49, P: 15.7e6 }], was: 'silent wrong root' },
-	{ fluid: 'r134a', inputs: { u: 210261.44946158602, h: 217949.71408896055 }, expect: [{ T: 284.84 }, { T: 170.54, P: 421 }], was: 'silent wrong root' },
-	{ fluid: 'nitrogen', inputs: { s: 1470.7996522623748, x: 0.5760206412523985 }, expect: [{ T: 85.2 }, { T: 108.35 }], was: 'silent wrong root' },
-	{ fluid: 'water', inputs: { h: 2536016.9279289735, s: 11546.249393804384 }, expect: [{ T: 291.73, P: 4.5 }], was: 'false out-of-range below 5 Pa' },
-	{ fluid: 'ammonia', inputs: { u: 1243384.2793952678, x: 0.8568622586317359 }, expect: [{ T: 355.555 }], was: 'false inconsistent-inputs' },
-	{ fluid: 'nitrogen', inputs: { u: 168253.0387632135, x: 0.8568622586317362 }, expect: [{ T: 111.164 }], was: 'false inconsistent-inputs' },
-	{ fluid: 'carbon-dioxide', inputs: { v: 0.0019167245727986612, x: 0.20324253780584423 }, expect: [{ T: 301.813 }], was: 'false inconsistent-inputs' },
-	{ fluid: 'water', inputs: { h: 2359677.196880071, x: 0.7220160171855242 }, expect: [{ T: 578.746 }], was: 'false inconsistent-inputs' },
-	{ fluid: 'ammonia', inputs: { u: 1352696.3584300978, h: 1481463.8358483308 }, expect: [{ T: 264.014, P: 5894 }], was: 'candidate list missing a state' },
-	{ fluid: 'water', inputs: { u: 2015016.6567527356, x: 0.4413501522503793 }, expect: [], was: 'candidate list naming a state off the inputs' }
+	{
+		fluid: 'ammonia',
+		inputs: { u: 2128176.6420585867, h: 2450203.1347223665 },
+		expect: [
+			{ T: 689.34, P: 11.0e6 },
+			{ T: 698.49, P: 15.7e6 }
+		],
+		was: 'silent wrong root'
+	},
+	{
+		fluid: 'r134a',
+		inputs: { u: 210261.44946158602, h: 217949.71408896055 },
+		expect: [{ T: 284.84 }, { T: 170.54, P: 421 }],
+		was: 'silent wrong root'
+	},
+	{
+		fluid: 'nitrogen',
+		inputs: { s: 1470.7996522623748, x: 0.5760206412523985 },
+		expect: [{ T: 85.2 }, { T: 108.35 }],
+		was: 'silent wrong root'
+	},
+	{
+		fluid: 'water',
+		inputs: { h: 2536016.9279289735, s: 11546.249393804384 },
+		expect: [{ T: 291.73, P: 4.5 }],
+		was: 'false out-of-range below 5 Pa'
+	},
+	{
+		fluid: 'ammonia',
+		inputs: { u: 1243384.2793952678, x: 0.8568622586317359 },
+		expect: [{ T: 355.555 }],
+		was: 'false inconsistent-inputs'
+	},
+	{
+		fluid: 'nitrogen',
+		inputs: { u: 168253.0387632135, x: 0.8568622586317362 },
+		expect: [{ T: 111.164 }],
+		was: 'false inconsistent-inputs'
+	},
+	{
+		fluid: 'carbon-dioxide',
+		inputs: { v: 0.0019167245727986612, x: 0.20324253780584423 },
+		expect: [{ T: 301.813 }],
+		was: 'false inconsistent-inputs'
+	},
+	{
+		fluid: 'water',
+		inputs: { h: 2359677.196880071, x: 0.7220160171855242 },
+		expect: [{ T: 578.746 }],
+		was: 'false inconsistent-inputs'
+	},
+	{
+		fluid: 'ammonia',
+		inputs: { u: 1352696.3584300978, h: 1481463.8358483308 },
+		expect: [{ T: 264.014, P: 5894 }],
+		was: 'candidate list missing a state'
+	},
+	{
+		fluid: 'water',
+		inputs: { u: 2015016.6567527356, x: 0.4413501522503793 },
+		expect: [],
+		was: 'candidate list naming a state off the inputs'
+	}
 ];
 
 /** The answer, or every candidate of an ambiguous-state refusal as a full state. */
@@ -51,7 +104,8 @@ function answers(fluid: string, inputs: Inputs): State[] {
 function miss(s: State, inputs: Inputs): number {
 	let worst = 0;
 	for (const [k, want] of Object.entries(inputs) as [keyof Inputs, number][]) {
-		const got = k === 'x' ? (s.x ?? NaN) : k === 'v' ? s.v : (s[k as 'T' | 'P' | 'u' | 'h' | 's'] as number);
+		const got =
+			k === 'x' ? (s.x ?? NaN) : k === 'v' ? s.v : (s[k as 'T' | 'P' | 'u' | 'h' | 's'] as number);
 		const e = k === 'x' ? Math.abs(got - want) : Math.abs(got - want) / Math.abs(want);
 		worst = Math.max(worst, Number.isNaN(e) ? Infinity : e);
 	}
@@ -67,13 +121,20 @@ describe('pairs with several, touching or dilute-gas states (issue 11 audit inpu
 			for (const s of found) expect(miss(s, c.inputs)).toBeLessThan(1e-6);
 			// and the state the inputs came from is among them
 			for (const want of c.expect) {
-				const hit = found.find((s) => Math.abs(s.T - want.T) <= 6e-3 + 1e-4 * want.T && (want.P === undefined || Math.abs(s.P - want.P) <= 0.01 * want.P));
+				const hit = found.find(
+					(s) =>
+						Math.abs(s.T - want.T) <= 6e-3 + 1e-4 * want.T &&
+						(want.P === undefined || Math.abs(s.P - want.P) <= 0.01 * want.P)
+				);
 				expect(hit, `T ≈ ${want.T} K${want.P ? `, P ≈ ${want.P} Pa` : ''}`).toBeDefined();
 			}
 			// no state named twice
 			for (let i = 0; i < found.length; i++)
 				for (let j = i + 1; j < found.length; j++)
-					expect(Math.abs(found[i].T - found[j].T) > 1e-6 * found[i].T || Math.abs(found[i].P - found[j].P) > 1e-3 * found[i].P).toBe(true);
+					expect(
+						Math.abs(found[i].T - found[j].T) > 1e-6 * found[i].T ||
+							Math.abs(found[i].P - found[j].P) > 1e-3 * found[i].P
+					).toBe(true);
 		});
 	}
 
@@ -97,7 +158,10 @@ describe('pairs with several, touching or dilute-gas states (issue 11 audit inpu
 		for (const T of [273.5, 291.73, 320, 353]) {
 			for (const P of [0.1, 0.5, 1, 4.5, 10]) {
 				const ref = fixState('water', { T, P });
-				for (const pair of [{ h: ref.h, s: ref.s }, { u: ref.u, s: ref.s }] as Inputs[]) {
+				for (const pair of [
+					{ h: ref.h, s: ref.s },
+					{ u: ref.u, s: ref.s }
+				] as Inputs[]) {
 					try {
 						const s = fixState('water', pair);
 						expect(s.T).toBeCloseTo(T, 6);

@@ -1,8 +1,21 @@
 import { describe, expect, it } from 'vitest';
 import fixture from '../../../../tests/reference/iapws-legs.json';
 import liquidFull from '../../../../tests/reference/iapws-liquid-full.json';
-import { LIQUID_FULL_CAUTION as APP_LIQUID_FULL, PRESSURE_EQUIPMENT_CAUTION as APP_CAUTION } from '../../cautions.ts';
-import { LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION, ThermoError, computeLeg, computePath, fixState, saturationAtT, stateExtras, type PathSpec } from '../index.ts';
+import {
+	LIQUID_FULL_CAUTION as APP_LIQUID_FULL,
+	PRESSURE_EQUIPMENT_CAUTION as APP_CAUTION
+} from '../../cautions.ts';
+import {
+	LIQUID_FULL_CAUTION,
+	PRESSURE_EQUIPMENT_CAUTION,
+	ThermoError,
+	computeLeg,
+	computePath,
+	fixState,
+	saturationAtT,
+	stateExtras,
+	type PathSpec
+} from '../index.ts';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
@@ -22,10 +35,19 @@ const VESSEL: PathSpec = {
 	system: { kind: 'closed', volume: 0.5 },
 	start: { T: 393.15, x: 1e-4 },
 	legs: [{ id: 'fire-heating', process: 'isochoric', target: { T: 493.15 } }],
-	limits: { designPressure: 1.6e6, reliefSetPressure: 1.5e6, designTemperature: 473.15, minimumTemperature: 263.15 }
+	limits: {
+		designPressure: 1.6e6,
+		reliefSetPressure: 1.5e6,
+		designTemperature: 473.15,
+		minimumTemperature: 263.15
+	}
 };
 
-const cases = (fixture as unknown as { cases: { name: string; crossings: { T: number; P: number }[]; end: { T: number; P: number } }[] }).cases;
+const cases = (
+	fixture as unknown as {
+		cases: { name: string; crossings: { T: number; P: number }[]; end: { T: number; P: number } }[];
+	}
+).cases;
 
 describe('computePath: the sealed vessel heated until liquid-full', () => {
 	const r = computePath(VESSEL);
@@ -63,7 +85,11 @@ describe('computePath: the sealed vessel heated until liquid-full', () => {
 
 	it('finds each design limit exactly at the first state along the leg where it is reached', () => {
 		const byLimit = Object.fromEntries(r.limitEvents.map((e) => [e.limit, e]));
-		expect(Object.keys(byLimit).sort()).toEqual(['designPressure', 'designTemperature', 'reliefSetPressure']);
+		expect(Object.keys(byLimit).sort()).toEqual([
+			'designPressure',
+			'designTemperature',
+			'reliefSetPressure'
+		]);
 		for (const k of ['designPressure', 'reliefSetPressure'] as const) {
 			const e = byLimit[k];
 			expect(e.kind).toBe('reached');
@@ -79,7 +105,14 @@ describe('computePath: the sealed vessel heated until liquid-full', () => {
 		// relief set pressure is met before the design pressure while heating
 		expect(byLimit.reliefSetPressure.state.T).toBeLessThan(byLimit.designPressure.state.T);
 		const codes = r.warnings.map((w) => w.code);
-		expect(codes).toEqual(expect.arrayContaining(['pressure-equipment-caution', 'design-pressure-exceeded', 'relief-set-pressure-exceeded', 'design-temperature-exceeded']));
+		expect(codes).toEqual(
+			expect.arrayContaining([
+				'pressure-equipment-caution',
+				'design-pressure-exceeded',
+				'relief-set-pressure-exceeded',
+				'design-temperature-exceeded'
+			])
+		);
 		expect(codes).not.toContain('below-minimum-temperature');
 	});
 
@@ -100,7 +133,12 @@ describe('computePath: a vessel that starts liquid-full', () => {
 	// the library's (T, P) call, (∂P/∂T)ᵥ from its derivative and a central difference, end from (T, ρ)
 	for (const c of liquidFull.cases) {
 		it(`warns when a sealed vessel of liquid water is heated: ${c.name}`, () => {
-			const r = computePath({ fluid: 'water', system: { kind: 'closed', volume: 0.05 }, start: { T: c.start.T, P: c.start.P }, legs: [{ id: 'heat', process: 'isochoric', target: { T: c.end.T } }] });
+			const r = computePath({
+				fluid: 'water',
+				system: { kind: 'closed', volume: 0.05 },
+				start: { T: c.start.T, P: c.start.P },
+				legs: [{ id: 'heat', process: 'isochoric', target: { T: c.end.T } }]
+			});
 			expect(rel(r.states[0].state.rho, c.start.rho)).toBeLessThan(1e-9);
 			expect(rel(r.states[1].state.P, c.end.P)).toBeLessThan(1e-7);
 			const w = r.warnings.find((x) => x.code === 'liquid-full');
@@ -119,13 +157,31 @@ describe('computePath: a vessel that starts liquid-full', () => {
 	}
 	it('says nothing for a liquid cooled at constant volume, or heated at constant pressure', () => {
 		const c = liquidFull.cases[0];
-		const cooled = computePath({ fluid: 'water', system: { kind: 'closed', mass: 1 }, start: { T: c.end.T, P: 2e6 }, legs: [{ process: 'isochoric', target: { T: c.start.T } }] });
+		const cooled = computePath({
+			fluid: 'water',
+			system: { kind: 'closed', mass: 1 },
+			start: { T: c.end.T, P: 2e6 },
+			legs: [{ process: 'isochoric', target: { T: c.start.T } }]
+		});
 		expect(cooled.warnings.map((w) => w.code)).not.toContain('liquid-full');
-		const isobaric = computePath({ fluid: 'water', system: { kind: 'closed', mass: 1 }, start: { T: c.start.T, P: c.start.P }, legs: [{ process: 'isobaric', target: { T: c.end.T } }] });
+		const isobaric = computePath({
+			fluid: 'water',
+			system: { kind: 'closed', mass: 1 },
+			start: { T: c.start.T, P: c.start.P },
+			legs: [{ process: 'isobaric', target: { T: c.end.T } }]
+		});
 		expect(isobaric.warnings.map((w) => w.code)).not.toContain('liquid-full');
 	});
 	it('warns on a later leg that heats the liquid left by an earlier one', () => {
-		const r = computePath({ fluid: 'water', system: { kind: 'closed', mass: 1 }, start: { T: 293.15, P: 101325 }, legs: [{ id: 'press', process: 'isothermal', target: { P: 5e6 } }, { id: 'heat', process: 'isochoric', target: { T: 303.15 } }] });
+		const r = computePath({
+			fluid: 'water',
+			system: { kind: 'closed', mass: 1 },
+			start: { T: 293.15, P: 101325 },
+			legs: [
+				{ id: 'press', process: 'isothermal', target: { P: 5e6 } },
+				{ id: 'heat', process: 'isochoric', target: { T: 303.15 } }
+			]
+		});
 		const w = r.warnings.filter((x) => x.code === 'liquid-full');
 		expect(w.map((x) => x.leg)).toEqual(['heat']);
 		expect(w[0].at).toBe(r.states[1].state);
@@ -149,10 +205,13 @@ describe('computePath: cycles', () => {
 		const c = chiller.cycle!;
 		expect(c.kind).toBe('reverse');
 		// first law over a cycle: net work = heat added − heat rejected
-		expect(Math.abs(c.netWork - (c.heatAdded - c.heatRejected))).toBeLessThan(1e-6 * c.heatRejected);
+		expect(Math.abs(c.netWork - (c.heatAdded - c.heatRejected))).toBeLessThan(
+			1e-6 * c.heatRejected
+		);
 		expect(Math.abs((c.copHeating as number) - (c.copCooling as number) - 1)).toBeLessThan(1e-9);
 		// second law: below the Carnot COP between the evaporating and condensing temperatures
-		const Tc = chiller.states[2].state.T, Te = 263.15;
+		const Tc = chiller.states[2].state.T,
+			Te = 263.15;
 		expect(c.copCooling as number).toBeLessThan(Te / (Tc - Te));
 		expect(c.copCooling as number).toBeGreaterThan(0.5 * (Te / (Tc - Te)));
 		expect(c.totals.unit).toBe('W');
@@ -197,7 +256,15 @@ describe('computePath: cycles', () => {
 		expect(plant.totals.unit).toBe('W');
 	});
 	it('is not a cycle when the end misses the start', () => {
-		const open = computePath({ fluid: 'water', system: { kind: 'flow', massFlow: 1 }, start: { T: 313.15, x: 0 }, legs: [{ process: 'isentropic', target: { P: 1e7 } }, { process: 'isobaric', target: { T: 500 } }] });
+		const open = computePath({
+			fluid: 'water',
+			system: { kind: 'flow', massFlow: 1 },
+			start: { T: 313.15, x: 0 },
+			legs: [
+				{ process: 'isentropic', target: { P: 1e7 } },
+				{ process: 'isobaric', target: { T: 500 } }
+			]
+		});
 		expect(open.cycle).toBeNull();
 	});
 });
@@ -214,7 +281,9 @@ describe('computePath: warnings and extras', () => {
 		const e = r.limitEvents[0];
 		expect(e.limit).toBe('minimumTemperature');
 		expect(rel(e.state.T, 243.15)).toBeLessThan(1e-8);
-		expect(r.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(['below-minimum-temperature', 'pressure-equipment-caution']));
+		expect(r.warnings.map((w) => w.code)).toEqual(
+			expect.arrayContaining(['below-minimum-temperature', 'pressure-equipment-caution'])
+		);
 	});
 	it('notes a start already beyond a limit, a relief set above design, per-kg totals and liquid-full ahead', () => {
 		const r = computePath({
@@ -226,58 +295,134 @@ describe('computePath: warnings and extras', () => {
 		});
 		expect(r.limitEvents.find((e) => e.kind === 'start-beyond')?.limit).toBe('designPressure');
 		const codes = r.warnings.map((w) => w.code);
-		expect(codes).toEqual(expect.arrayContaining(['relief-set-above-design-pressure', 'per-kg-totals', 'liquid-full-ahead', 'design-pressure-exceeded']));
+		expect(codes).toEqual(
+			expect.arrayContaining([
+				'relief-set-above-design-pressure',
+				'per-kg-totals',
+				'liquid-full-ahead',
+				'design-pressure-exceeded'
+			])
+		);
 		expect(r.system).toMatchObject({ kind: 'closed', mass: 1 });
 	});
 	it('gives no caution when the path has no design limits and reaches none', () => {
-		const r = computePath({ fluid: 'water', system: { kind: 'closed', mass: 2 }, start: { T: 300, P: 1e5 }, legs: [{ process: 'isobaric', target: { T: 350 } }] });
+		const r = computePath({
+			fluid: 'water',
+			system: { kind: 'closed', mass: 2 },
+			start: { T: 300, P: 1e5 },
+			legs: [{ process: 'isobaric', target: { T: 350 } }]
+		});
 		expect(r.warnings).toEqual([]);
 		expect(r.limitEvents).toEqual([]);
 		expect(r.totals.Q).toBeCloseTo(2 * r.legs[0].leg.q, 6);
 	});
 	it('computes superheat, subcooling and volume fractions like python3-iapws', () => {
 		// python3-iapws 1.5.2 (Debian): Tsat by bisection of (T, x = 0) calls, fractions from (T, x) calls
-		for (const ex of (fixture as unknown as { extras: { fluid: string; inputs: Record<string, number>; Tsat: number; vaporVolumeFraction?: number; liquidVolumeFraction?: number }[] }).extras) {
+		for (const ex of (
+			fixture as unknown as {
+				extras: {
+					fluid: string;
+					inputs: Record<string, number>;
+					Tsat: number;
+					vaporVolumeFraction?: number;
+					liquidVolumeFraction?: number;
+				}[];
+			}
+		).extras) {
 			const st = fixState(ex.fluid, ex.inputs);
 			const e = stateExtras(st);
 			expect(rel(e.Tsat as number, ex.Tsat)).toBeLessThan(1e-9);
-			if (st.phase === 'superheated-vapor') expect(Math.abs((e.superheat as number) - (st.T - ex.Tsat))).toBeLessThan(1e-6);
-			if (st.phase === 'compressed-liquid') expect(Math.abs((e.subcooling as number) - (ex.Tsat - st.T))).toBeLessThan(1e-6);
+			if (st.phase === 'superheated-vapor')
+				expect(Math.abs((e.superheat as number) - (st.T - ex.Tsat))).toBeLessThan(1e-6);
+			if (st.phase === 'compressed-liquid')
+				expect(Math.abs((e.subcooling as number) - (ex.Tsat - st.T))).toBeLessThan(1e-6);
 			if (ex.vaporVolumeFraction !== undefined) {
-				expect(Math.abs((e.vaporVolumeFraction as number) - ex.vaporVolumeFraction)).toBeLessThan(1e-7);
-				expect(Math.abs((e.liquidVolumeFraction as number) - (ex.liquidVolumeFraction as number))).toBeLessThan(1e-7);
+				expect(Math.abs((e.vaporVolumeFraction as number) - ex.vaporVolumeFraction)).toBeLessThan(
+					1e-7
+				);
+				expect(
+					Math.abs((e.liquidVolumeFraction as number) - (ex.liquidVolumeFraction as number))
+				).toBeLessThan(1e-7);
 			} else expect(e.vaporVolumeFraction).toBeNull();
 		}
 		// above the critical pressure neither superheat nor subcooling means anything
 		const e = stateExtras(fixState('water', { T: 500, P: 3e7 }));
 		expect([e.Tsat, e.superheat, e.subcooling]).toEqual([null, null, null]);
 		const sat = saturationAtT('water', 400);
-		expect(stateExtras(sat.liquid)).toMatchObject({ subcooling: 0, liquidVolumeFraction: 1, vaporVolumeFraction: 0 });
-		expect(stateExtras(sat.vapor)).toMatchObject({ superheat: 0, liquidVolumeFraction: 0, vaporVolumeFraction: 1 });
+		expect(stateExtras(sat.liquid)).toMatchObject({
+			subcooling: 0,
+			liquidVolumeFraction: 1,
+			vaporVolumeFraction: 0
+		});
+		expect(stateExtras(sat.vapor)).toMatchObject({
+			superheat: 0,
+			liquidVolumeFraction: 0,
+			vaporVolumeFraction: 1
+		});
 	});
 	it('chains legs: each leg starts at the previous state', () => {
-		const r = computePath({ fluid: 'water', system: { kind: 'closed', mass: 1 }, start: { T: 300, P: 1e5 }, legs: [{ process: 'isobaric', target: { T: 400 } }, { process: 'isochoric', target: { T: 500 } }] });
+		const r = computePath({
+			fluid: 'water',
+			system: { kind: 'closed', mass: 1 },
+			start: { T: 300, P: 1e5 },
+			legs: [
+				{ process: 'isobaric', target: { T: 400 } },
+				{ process: 'isochoric', target: { T: 500 } }
+			]
+		});
 		expect(r.legs[1].leg.start).toBe(r.states[1].state);
-		const direct = computeLeg({ fluid: 'water', start: { T: 400, P: 1e5 }, process: 'isochoric', target: { T: 500 } });
+		const direct = computeLeg({
+			fluid: 'water',
+			start: { T: 400, P: 1e5 },
+			process: 'isochoric',
+			target: { T: 500 }
+		});
 		expect(rel(r.states[2].state.P, direct.end.P)).toBeLessThan(1e-9);
 	});
 });
 
 describe('computePath: refusals', () => {
-	const ok: PathSpec = { fluid: 'water', system: { kind: 'closed', mass: 1 }, start: { T: 300, P: 1e5 }, legs: [{ process: 'isobaric', target: { T: 400 } }] };
+	const ok: PathSpec = {
+		fluid: 'water',
+		system: { kind: 'closed', mass: 1 },
+		start: { T: 300, P: 1e5 },
+		legs: [{ process: 'isobaric', target: { T: 400 } }]
+	};
 	it.each([
 		[{ system: { kind: 'closed', mass: 1, volume: 2 } }, 'invalid-path', /not both/],
 		[{ system: { kind: 'closed', mass: -1 } }, 'invalid-path', /positive/],
 		[{ system: { kind: 'flow' } }, 'invalid-path', /massFlow/],
 		[{ system: { kind: 'open' } }, 'invalid-path', /Unknown system kind/],
 		[{ legs: [] }, 'invalid-path', /at least one leg/],
-		[{ legs: new Array(51).fill({ process: 'isobaric', target: { T: 400 } }) }, 'invalid-path', /at most 50/],
-		[{ legs: [{ id: 'a', process: 'isobaric', target: { T: 400 } }, { id: 'a', process: 'isobaric', target: { T: 450 } }] }, 'invalid-path', /Two legs/],
+		[
+			{ legs: new Array(51).fill({ process: 'isobaric', target: { T: 400 } }) },
+			'invalid-path',
+			/at most 50/
+		],
+		[
+			{
+				legs: [
+					{ id: 'a', process: 'isobaric', target: { T: 400 } },
+					{ id: 'a', process: 'isobaric', target: { T: 450 } }
+				]
+			},
+			'invalid-path',
+			/Two legs/
+		],
 		[{ limits: { designPressure: -5 } }, 'invalid-path', /positive/],
 		[{ limits: { burstPressure: 5e6 } }, 'invalid-path', /Unknown design limit/],
 		[{ atmosphericPressure: 0 }, 'invalid-path', /positive/],
 		[{ legs: [{ process: 'isobaric', target: { P: 2e5 } }] }, 'target-is-invariant', /Leg L1/],
-		[{ legs: [{ process: 'isobaric', target: { T: 400 } }, { process: 'isobaric', target: { T: 100 } }] }, 'unreachable-target', /Leg L2/],
+		[
+			{
+				legs: [
+					{ process: 'isobaric', target: { T: 400 } },
+					{ process: 'isobaric', target: { T: 100 } }
+				]
+			},
+			'unreachable-target',
+			/Leg L2/
+		],
 		[{ fluid: 'helium-3' }, 'unknown-fluid', /helium-3/]
 	])('refuses %j', (patch, code, msg) => {
 		const e = thrown(() => computePath({ ...ok, ...(patch as Partial<PathSpec>) } as PathSpec));

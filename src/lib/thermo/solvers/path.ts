@@ -56,9 +56,15 @@ export const PRESSURE_EQUIPMENT_CAUTION =
 	'engineer. Statewright supplies states and warnings, never relief sizes.';
 
 /** Said with every liquid-full warning (same words as LIQUID_FULL_CAUTION in src/lib/cautions.ts). */
-export const LIQUID_FULL_CAUTION = 'Heating a liquid-full sealed vessel raises its pressure very fast.';
+export const LIQUID_FULL_CAUTION =
+	'Heating a liquid-full sealed vessel raises its pressure very fast.';
 
-const LIMIT_NAMES: DesignLimitName[] = ['designPressure', 'reliefSetPressure', 'designTemperature', 'minimumTemperature'];
+const LIMIT_NAMES: DesignLimitName[] = [
+	'designPressure',
+	'reliefSetPressure',
+	'designTemperature',
+	'minimumTemperature'
+];
 const LIMIT_LABEL: Record<DesignLimitName, string> = {
 	designPressure: 'design pressure',
 	reliefSetPressure: 'relief set pressure',
@@ -81,7 +87,11 @@ function kel(T: number): string {
 }
 
 function positive(name: string, v: unknown, unit: string): number {
-	if (typeof v !== 'number' || !Number.isFinite(v) || !(v > 0)) throw bad(`${name} must be a positive number in ${unit} (got ${String(v)}).`, `Give ${name} in ${unit}.`);
+	if (typeof v !== 'number' || !Number.isFinite(v) || !(v > 0))
+		throw bad(
+			`${name} must be a positive number in ${unit} (got ${String(v)}).`,
+			`Give ${name} in ${unit}.`
+		);
 	return v;
 }
 
@@ -90,7 +100,13 @@ function positive(name: string, v: unknown, unit: string): number {
  * liquid and vapor volume fractions on and inside the dome: α″ = x·v″/v, α′ = (1 − x)·v′/v.
  */
 export function stateExtras(fl: Fluid, st: State): StateExtras {
-	const out: StateExtras = { Tsat: null, superheat: null, subcooling: null, liquidVolumeFraction: null, vaporVolumeFraction: null };
+	const out: StateExtras = {
+		Tsat: null,
+		superheat: null,
+		subcooling: null,
+		liquidVolumeFraction: null,
+		vaporVolumeFraction: null
+	};
 	const subcritical = st.P < fl.Pc * (1 - 1e-9) && st.P >= triplePressure(fl) * (1 - 1e-9);
 	if (subcritical) {
 		const Tsat = st.x !== null ? st.T : satAtP(fl, st.P).T;
@@ -118,42 +134,87 @@ export function stateExtras(fl: Fluid, st: State): StateExtras {
 	return out;
 }
 
-function totalsOf(unit: 'J' | 'W', m: number, q: number, w: number, wShaft: number, qFlow: number): PathTotals {
+function totalsOf(
+	unit: 'J' | 'W',
+	m: number,
+	q: number,
+	w: number,
+	wShaft: number,
+	qFlow: number
+): PathTotals {
 	return { unit, Q: m * q, W: m * w, WShaft: m * wShaft, QFlow: m * qFlow };
 }
 
 /** Check the spec's shape (the engine's own checks cover the start and each leg). */
 function checkSpec(spec: PathSpec): { fl: Fluid; limits: DesignLimits; atm: number } {
-	if (typeof spec !== 'object' || spec === null) throw bad('A path must be an object { fluid, system, start, legs, limits? }.', 'Send the path as a JSON object.');
+	if (typeof spec !== 'object' || spec === null)
+		throw bad(
+			'A path must be an object { fluid, system, start, legs, limits? }.',
+			'Send the path as a JSON object.'
+		);
 	const fl = getCompiledFluid(spec.fluid);
 	const sys = spec.system as unknown as Record<string, unknown>;
-	if (typeof sys !== 'object' || sys === null) throw bad('The system is missing.', 'Give system: { kind: "closed", mass } or { kind: "closed", volume } or { kind: "flow", massFlow }.');
+	if (typeof sys !== 'object' || sys === null)
+		throw bad(
+			'The system is missing.',
+			'Give system: { kind: "closed", mass } or { kind: "closed", volume } or { kind: "flow", massFlow }.'
+		);
 	if (sys.kind === 'closed') {
 		if (sys.mass !== undefined && sys.volume !== undefined)
-			throw bad('Give the closed system’s mass or its volume, not both (the volume fixes the mass through the start state).', 'Keep one of mass (kg) or volume (m³).');
+			throw bad(
+				'Give the closed system’s mass or its volume, not both (the volume fixes the mass through the start state).',
+				'Keep one of mass (kg) or volume (m³).'
+			);
 		if (sys.mass !== undefined) positive('system.mass', sys.mass, 'kg');
 		if (sys.volume !== undefined) positive('system.volume', sys.volume, 'm³');
 	} else if (sys.kind === 'flow') positive('system.massFlow', sys.massFlow, 'kg/s');
-	else throw bad(`Unknown system kind "${String(sys.kind)}".`, 'Use "closed" (vessel, piston–cylinder) or "flow" (steady-flow device).');
-	if (!Array.isArray(spec.legs) || spec.legs.length === 0) throw bad('A path needs at least one leg.', 'Give legs: [{ process, target }, …].');
-	if (spec.legs.length > MAX_LEGS) throw bad(`A path may hold at most ${MAX_LEGS} legs (got ${spec.legs.length}).`, `Split the path into sheets of up to ${MAX_LEGS} legs.`);
+	else
+		throw bad(
+			`Unknown system kind "${String(sys.kind)}".`,
+			'Use "closed" (vessel, piston–cylinder) or "flow" (steady-flow device).'
+		);
+	if (!Array.isArray(spec.legs) || spec.legs.length === 0)
+		throw bad('A path needs at least one leg.', 'Give legs: [{ process, target }, …].');
+	if (spec.legs.length > MAX_LEGS)
+		throw bad(
+			`A path may hold at most ${MAX_LEGS} legs (got ${spec.legs.length}).`,
+			`Split the path into sheets of up to ${MAX_LEGS} legs.`
+		);
 	const ids = new Set<string>();
 	spec.legs.forEach((l, i) => {
-		if (typeof l !== 'object' || l === null) throw bad(`Leg ${i + 1} is not an object.`, 'Give each leg as { process, target, n? }.');
+		if (typeof l !== 'object' || l === null)
+			throw bad(`Leg ${i + 1} is not an object.`, 'Give each leg as { process, target, n? }.');
 		const id = l.id ?? `L${i + 1}`;
-		if (typeof id !== 'string' || id.trim() === '') throw bad(`Leg ${i + 1} has an empty or non-text id.`, 'Leave id out or give a short text.');
-		if (ids.has(id)) throw bad(`Two legs have the id "${id}".`, 'Give every leg its own id, or leave ids out.');
+		if (typeof id !== 'string' || id.trim() === '')
+			throw bad(`Leg ${i + 1} has an empty or non-text id.`, 'Leave id out or give a short text.');
+		if (ids.has(id))
+			throw bad(`Two legs have the id "${id}".`, 'Give every leg its own id, or leave ids out.');
 		ids.add(id);
 	});
 	const limits: DesignLimits = {};
 	const lim = (spec.limits ?? {}) as Record<string, unknown>;
-	if (typeof lim !== 'object' || lim === null) throw bad('limits must be an object.', 'Give limits: { designPressure?, designTemperature?, reliefSetPressure?, minimumTemperature? } in Pa and K.');
+	if (typeof lim !== 'object' || lim === null)
+		throw bad(
+			'limits must be an object.',
+			'Give limits: { designPressure?, designTemperature?, reliefSetPressure?, minimumTemperature? } in Pa and K.'
+		);
 	for (const k of Object.keys(lim)) {
-		if (!LIMIT_NAMES.includes(k as DesignLimitName)) throw bad(`Unknown design limit "${k}".`, `Use ${LIMIT_NAMES.join(', ')} (Pa and K, absolute).`);
+		if (!LIMIT_NAMES.includes(k as DesignLimitName))
+			throw bad(
+				`Unknown design limit "${k}".`,
+				`Use ${LIMIT_NAMES.join(', ')} (Pa and K, absolute).`
+			);
 		if (lim[k] === undefined || lim[k] === null) continue;
-		limits[k as DesignLimitName] = positive(`limits.${k}`, lim[k], k.endsWith('Pressure') ? 'Pa (absolute)' : 'K');
+		limits[k as DesignLimitName] = positive(
+			`limits.${k}`,
+			lim[k],
+			k.endsWith('Pressure') ? 'Pa (absolute)' : 'K'
+		);
 	}
-	const atm = spec.atmosphericPressure === undefined ? DEFAULT_ATMOSPHERE : positive('atmosphericPressure', spec.atmosphericPressure, 'Pa');
+	const atm =
+		spec.atmosphericPressure === undefined
+			? DEFAULT_ATMOSPHERE
+			: positive('atmosphericPressure', spec.atmosphericPressure, 'Pa');
 	return { fl, limits, atm };
 }
 
@@ -170,7 +231,11 @@ export function computePath(spec: PathSpec): PathResult {
 		m = sys.mass ?? (sys.volume !== undefined ? sys.volume / start.v : 1);
 		system = { kind: 'closed', mass: m, volume: m * start.v };
 		if (sys.mass === undefined && sys.volume === undefined)
-			warnings.push({ code: 'per-kg-totals', severity: 'info', message: 'No mass or volume is given for this closed system: the totals are for 1 kg.' });
+			warnings.push({
+				code: 'per-kg-totals',
+				severity: 'info',
+				message: 'No mass or volume is given for this closed system: the totals are for 1 kg.'
+			});
 	} else {
 		m = spec.system.massFlow;
 		system = { kind: 'flow', massFlow: m };
@@ -191,7 +256,15 @@ export function computePath(spec: PathSpec): PathResult {
 	for (const k of LIMIT_NAMES) {
 		if (limits[k] === undefined) continue;
 		const g = beyond[k](start.T, start.P);
-		if (g >= -tol(k)) limitEvents.push({ limit: k, value: limits[k] as number, leg: null, kind: 'start-beyond', exceeded: g > tol(k), state: start });
+		if (g >= -tol(k))
+			limitEvents.push({
+				limit: k,
+				value: limits[k] as number,
+				leg: null,
+				kind: 'start-beyond',
+				exceeded: g > tol(k),
+				state: start
+			});
 	}
 
 	let from = start;
@@ -200,9 +273,20 @@ export function computePath(spec: PathSpec): PathResult {
 		const stateId = `S${i + 2}`;
 		let trace;
 		try {
-			trace = traceLeg({ fluid: fl.id, start: { T: from.T, rho: from.rho }, process: ls.process, target: ls.target, n: ls.n, samples: ls.samples ?? spec.samples });
+			trace = traceLeg({
+				fluid: fl.id,
+				start: { T: from.T, rho: from.rho },
+				process: ls.process,
+				target: ls.target,
+				n: ls.n,
+				samples: ls.samples ?? spec.samples
+			});
 		} catch (e) {
-			if (e instanceof ThermoError) throw new ThermoError(e.code, `Leg ${id} (${String(ls.process)}): ${e.message}`, e.hint, { field: `legs[${i}]`, candidates: e.candidates });
+			if (e instanceof ThermoError)
+				throw new ThermoError(e.code, `Leg ${id} (${String(ls.process)}): ${e.message}`, e.hint, {
+					field: `legs[${i}]`,
+					candidates: e.candidates
+				});
 			throw e;
 		}
 		const leg = trace.leg;
@@ -230,7 +314,14 @@ export function computePath(spec: PathSpec): PathResult {
 			if (!at) continue;
 			const gEnd = g(leg.end.T, leg.end.P);
 			const exceeded = gEnd > tol(k) || leg.points.some((p) => g(p.T, p.P) > tol(k));
-			limitEvents.push({ limit: k, value: limits[k] as number, leg: id, kind: 'reached', exceeded, state: at });
+			limitEvents.push({
+				limit: k,
+				value: limits[k] as number,
+				leg: id,
+				kind: 'reached',
+				exceeded,
+				state: at
+			});
 		}
 
 		// liquid-full: a closed system crossing into compressed liquid from the dome, or heating a
@@ -243,7 +334,12 @@ export function computePath(spec: PathSpec): PathResult {
 				if (!full && c.line === 'saturated-liquid' && before && !after) full = c.state;
 			});
 			if (!full && trace.endsFromDome && leg.end.phase === 'saturated-liquid') full = leg.end;
-			if (!full && ls.process === 'isochoric' && leg.start.phase === 'compressed-liquid' && leg.end.T > leg.start.T) {
+			if (
+				!full &&
+				ls.process === 'isochoric' &&
+				leg.start.phase === 'compressed-liquid' &&
+				leg.end.T > leg.start.T
+			) {
 				full = leg.start;
 				onset = 'start';
 			}
@@ -264,9 +360,16 @@ export function computePath(spec: PathSpec): PathResult {
 							? `Leg ${id} (${ls.process}) fills the closed system with liquid at T = ${kel(f.T)}, P = ${pa(f.P)}: it crosses the saturated-liquid line toward the liquid side. `
 							: `Leg ${id} (${ls.process}) heats a liquid-full closed system at constant volume: it starts as compressed liquid at T = ${kel(f.T)}, P = ${pa(f.P)}. `) +
 						LIQUID_FULL_CAUTION +
-						(known ? ` Here about ${fmt(rate / 1e6)} MPa per kelvin at constant volume ((∂P/∂T)ᵥ of the liquid).` : '')
+						(known
+							? ` Here about ${fmt(rate / 1e6)} MPa per kelvin at constant volume ((∂P/∂T)ᵥ of the liquid).`
+							: '')
 				});
-			} else if (ls.process === 'isochoric' && leg.end.phase === 'saturated-mixture' && leg.end.T > leg.start.T && leg.end.rho > fl.rhoc) {
+			} else if (
+				ls.process === 'isochoric' &&
+				leg.end.phase === 'saturated-mixture' &&
+				leg.end.T > leg.start.T &&
+				leg.end.rho > fl.rhoc
+			) {
 				warnings.push({
 					code: 'liquid-full-ahead',
 					severity: 'info',
@@ -275,7 +378,13 @@ export function computePath(spec: PathSpec): PathResult {
 				});
 			}
 		}
-		if (ls.process === 'isenthalpic') warnings.push({ code: 'throttling-irreversible', severity: 'info', leg: id, message: `Leg ${id}: ${THROTTLING_NOTE}` });
+		if (ls.process === 'isenthalpic')
+			warnings.push({
+				code: 'throttling-irreversible',
+				severity: 'info',
+				leg: id,
+				message: `Leg ${id}: ${THROTTLING_NOTE}`
+			});
 		from = leg.end;
 	});
 	const end = states[states.length - 1].state;
@@ -287,13 +396,26 @@ export function computePath(spec: PathSpec): PathResult {
 	for (const ev of limitEvents) {
 		const label = LIMIT_LABEL[ev.limit];
 		const v = ev.limit.endsWith('Pressure') ? pa(ev.value) : kel(ev.value);
-		const where = ev.leg ? `Leg ${ev.leg} reaches the ${label} (${v})` : `The start S1 is already at or beyond the ${label} (${v})`;
+		const where = ev.leg
+			? `Leg ${ev.leg} reaches the ${label} (${v})`
+			: `The start S1 is already at or beyond the ${label} (${v})`;
 		const at = ev.leg ? ` at T = ${kel(ev.state.T)}, P = ${pa(ev.state.P)}` : '';
 		if (ev.limit === 'minimumTemperature') {
-			warnings.push({ code: 'below-minimum-temperature', severity: 'warning', leg: ev.leg ?? undefined, at: ev.state, message: `${where}${at}${ev.exceeded ? ' and goes below it' : ''}: materials must be rated for it.` });
+			warnings.push({
+				code: 'below-minimum-temperature',
+				severity: 'warning',
+				leg: ev.leg ?? undefined,
+				at: ev.state,
+				message: `${where}${at}${ev.exceeded ? ' and goes below it' : ''}: materials must be rated for it.`
+			});
 			continue;
 		}
-		const base = ev.limit === 'designPressure' ? 'design-pressure' : ev.limit === 'reliefSetPressure' ? 'relief-set-pressure' : 'design-temperature';
+		const base =
+			ev.limit === 'designPressure'
+				? 'design-pressure'
+				: ev.limit === 'reliefSetPressure'
+					? 'relief-set-pressure'
+					: 'design-temperature';
 		warnings.push({
 			code: `${base}-${ev.exceeded ? 'exceeded' : 'reached'}` as PathWarning['code'],
 			severity: 'warning',
@@ -302,29 +424,48 @@ export function computePath(spec: PathSpec): PathResult {
 			message: `${where}${at}${ev.exceeded ? ' and goes beyond it' : ''}.`
 		});
 	}
-	if (limits.reliefSetPressure !== undefined && limits.designPressure !== undefined && limits.reliefSetPressure > limits.designPressure)
+	if (
+		limits.reliefSetPressure !== undefined &&
+		limits.designPressure !== undefined &&
+		limits.reliefSetPressure > limits.designPressure
+	)
 		warnings.push({
 			code: 'relief-set-above-design-pressure',
 			severity: 'warning',
 			message: `The relief set pressure (${pa(limits.reliefSetPressure)}) is above the design pressure (${pa(limits.designPressure)}); relief set pressures and allowable overpressure are governed by the applicable code — check them there.`
 		});
-	if (Object.keys(limits).length > 0 || limitEvents.length > 0) warnings.unshift({ code: 'pressure-equipment-caution', severity: 'caution', message: PRESSURE_EQUIPMENT_CAUTION });
+	if (Object.keys(limits).length > 0 || limitEvents.length > 0)
+		warnings.unshift({
+			code: 'pressure-equipment-caution',
+			severity: 'caution',
+			message: PRESSURE_EQUIPMENT_CAUTION
+		});
 
 	// a cycle: back at the start within CYCLE_TOLERANCE
 	let cycle: CycleAnalysis | null = null;
-	if (Math.abs(end.T - start.T) <= CYCLE_TOLERANCE * start.T && Math.abs(end.rho - start.rho) <= CYCLE_TOLERANCE * start.rho && legs.length >= 2) {
+	if (
+		Math.abs(end.T - start.T) <= CYCLE_TOLERANCE * start.T &&
+		Math.abs(end.rho - start.rho) <= CYCLE_TOLERANCE * start.rho &&
+		legs.length >= 2
+	) {
 		const qs = legs.map((l) => (closed ? l.leg.q : l.leg.qFlow));
 		const netWork = legs.reduce((a, l) => a + (closed ? l.leg.w : l.leg.wShaft), 0);
 		const heatAdded = qs.reduce((a, q) => a + Math.max(0, q), 0);
 		const heatRejected = qs.reduce((a, q) => a + Math.max(0, -q), 0);
 		const scale = Math.max(heatAdded, heatRejected, 1e-300);
-		const kind: CycleAnalysis['kind'] = Math.abs(netWork) <= 1e-9 * scale ? 'no-net-work' : netWork > 0 ? 'power' : 'reverse';
+		const kind: CycleAnalysis['kind'] =
+			Math.abs(netWork) <= 1e-9 * scale ? 'no-net-work' : netWork > 0 ? 'power' : 'reverse';
 		cycle = {
 			kind,
 			netWork,
 			heatAdded,
 			heatRejected,
-			totals: { unit, netWork: m * netWork, heatAdded: m * heatAdded, heatRejected: m * heatRejected },
+			totals: {
+				unit,
+				netWork: m * netWork,
+				heatAdded: m * heatAdded,
+				heatRejected: m * heatRejected
+			},
 			thermalEfficiency: kind === 'power' && heatAdded > 0 ? netWork / heatAdded : null,
 			copCooling: kind === 'reverse' ? heatAdded / -netWork : null,
 			copHeating: kind === 'reverse' ? heatRejected / -netWork : null

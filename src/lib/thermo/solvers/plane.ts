@@ -77,14 +77,18 @@ function buildGrid(fl: Fluid): Grid {
 			let rho = b === 0 ? Plo / (fl.R * T) : sat ? sat.rhoL : fl.rhoc;
 			for (let j = 0; j < nj; j++) {
 				const f = j / (nj - 1);
-				const lnP = b === 0 ? Math.log(Plo) + f * (Math.log(Pmid) - Math.log(Plo)) : Math.log(Pmid) + f * (Math.log(fl.Pmax) - Math.log(Pmid));
+				const lnP =
+					b === 0
+						? Math.log(Plo) + f * (Math.log(Pmid) - Math.log(Plo))
+						: Math.log(Pmid) + f * (Math.log(fl.Pmax) - Math.log(Pmid));
 				const P = Math.exp(lnP);
 				if (sat && b === 0 && j === nj - 1) rho = sat.rhoV;
 				else if (sat && b === 1 && j === 0) rho = sat.rhoL;
 				else if (sat && b === 0) rho = densityAtTP(fl, T, P, Math.min(rho, sat.rhoV), 0, sat.rhoV);
 				// start strictly inside the bracket: a guess equal to its bound would be replaced by 2·ρ' (density.ts),
 				// from which Newton need not come back on a stiff liquid isotherm (oxygen near its triple point)
-				else if (sat && b === 1) rho = densityAtTP(fl, T, P, Math.max(rho, sat.rhoL * (1 + 1e-12)), sat.rhoL);
+				else if (sat && b === 1)
+					rho = densityAtTP(fl, T, P, Math.max(rho, sat.rhoL * (1 + 1e-12)), sat.rhoL);
 				else rho = densityAtTP(fl, T, P, rho);
 				const idx = i * nj + j;
 				evalPoint(fl, T, rho, p, 1);
@@ -116,7 +120,8 @@ function boxes(g: Grid, a: EnergyProp, b: EnergyProp): Float64Array[] {
 	if (bx) return bx;
 	bx = g.branches.map((br) => {
 		const nj = br.nj;
-		const A = br.y[YI[a]], B = br.y[YI[b]];
+		const A = br.y[YI[a]],
+			B = br.y[YI[b]];
 		const out = new Float64Array((g.nt - 1) * (nj - 1) * 4);
 		for (let i = 0; i < g.nt - 1; i++)
 			for (let j = 0; j < nj - 1; j++) {
@@ -143,8 +148,17 @@ export interface Starts {
 	nearest: [number, number][];
 }
 
-function barycentric(Ya: Float64Array, Yb: Float64Array, p0: number, p1: number, p2: number, A: number, B: number): [number, number, number] | null {
-	const x0 = Ya[p0], y0 = Yb[p0];
+function barycentric(
+	Ya: Float64Array,
+	Yb: Float64Array,
+	p0: number,
+	p1: number,
+	p2: number,
+	A: number,
+	B: number
+): [number, number, number] | null {
+	const x0 = Ya[p0],
+		y0 = Yb[p0];
 	const d = (Ya[p1] - x0) * (Yb[p2] - y0) - (Ya[p2] - x0) * (Yb[p1] - y0);
 	if (d === 0) return null;
 	const l1 = ((A - x0) * (Yb[p2] - y0) - (Ya[p2] - x0) * (B - y0)) / d;
@@ -163,22 +177,31 @@ export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: nu
 	const g = grid(fl);
 	const bx = boxes(g, a, b);
 	const out: Starts = { inside: [], centres: [], nearest: [] };
-	const ia = YI[a], ib = YI[b];
+	const ia = YI[a],
+		ib = YI[b];
 	for (let bi = 0; bi < g.branches.length; bi++) {
 		const br = g.branches[bi];
 		const nj = br.nj;
 		const box = bx[bi];
-		const Ya = br.y[ia], Yb = br.y[ib];
+		const Ya = br.y[ia],
+			Yb = br.y[ib];
 		const cells = (g.nt - 1) * (nj - 1);
 		for (let cell = 0; cell < cells; cell++) {
 			const o = cell * 4;
-			const lo0 = box[o], hi0 = box[o + 1], lo1 = box[o + 2], hi1 = box[o + 3];
+			const lo0 = box[o],
+				hi0 = box[o + 1],
+				lo1 = box[o + 2],
+				hi1 = box[o + 3];
 			const wa = 1e-9 * Math.abs(A) + 1e-6 * (hi0 - lo0);
 			if (A < lo0 - wa || A > hi0 + wa) continue;
 			const wb = 1e-9 * Math.abs(B) + 1e-6 * (hi1 - lo1);
 			if (B < lo1 - wb || B > hi1 + wb) continue;
-			const i = (cell / (nj - 1)) | 0, j = cell - i * (nj - 1);
-			const c0 = i * nj + j, c1 = c0 + 1, c3 = c0 + nj, c2 = c3 + 1;
+			const i = (cell / (nj - 1)) | 0,
+				j = cell - i * (nj - 1);
+			const c0 = i * nj + j,
+				c1 = c0 + 1,
+				c3 = c0 + nj,
+				c2 = c3 + 1;
 			let w = barycentric(Ya, Yb, c0, c1, c2, A, B);
 			let tri = [c0, c1, c2];
 			if (!w) {
@@ -201,9 +224,11 @@ export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: nu
 	if (out.inside.length + out.centres.length > 0) return out;
 	let bestD = Infinity;
 	for (const br of g.branches) {
-		const Ya = br.y[ia], Yb = br.y[ib];
+		const Ya = br.y[ia],
+			Yb = br.y[ib];
 		for (let q = 0; q < g.nt * br.nj; q++) {
-			const da = (Ya[q] - A) / (fl.R * fl.Tc), db = (Yb[q] - B) / (fl.R * fl.Tc);
+			const da = (Ya[q] - A) / (fl.R * fl.Tc),
+				db = (Yb[q] - B) / (fl.R * fl.Tc);
 			const dist = da * da + db * db;
 			if (dist < bestD) {
 				bestD = dist;
@@ -222,9 +247,16 @@ export function starts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: nu
  * started at the interpolated point. Each root the grid resolves is bracketed this way, also when
  * its cell holds another root or the curve leaves the grid through its low-pressure edge.
  */
-export function bracketStarts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number): [number, number][] {
+export function bracketStarts(
+	fl: Fluid,
+	a: EnergyProp,
+	A: number,
+	b: EnergyProp,
+	B: number
+): [number, number][] {
 	const g = grid(fl);
-	const ia = YI[a], ib = YI[b];
+	const ia = YI[a],
+		ib = YI[b];
 	const pv = a === 'u' && b === 'h';
 	const bx = boxes(g, a, b);
 	const out: [number, number][] = [];
@@ -232,7 +264,8 @@ export function bracketStarts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp
 	for (let bi = 0; bi < g.branches.length; bi++) {
 		const br = g.branches[bi];
 		const nj = br.nj;
-		const Ya = br.y[ia], Yb = br.y[ib];
+		const Ya = br.y[ia],
+			Yb = br.y[ib];
 		const box = bx[bi];
 		const rb = (q: number) => (pv ? Yb[q] - Ya[q] - (B - A) : Yb[q] - B);
 		const cells = (g.nt - 1) * (nj - 1);
@@ -245,8 +278,12 @@ export function bracketStarts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp
 				const wb = 1e-9 * Math.abs(B) + 1e-6 * (box[o + 3] - box[o + 2]);
 				if (B < box[o + 2] - wb || B > box[o + 3] + wb) continue;
 			}
-			const i = (cell / (nj - 1)) | 0, j = cell - i * (nj - 1);
-			const c0 = i * nj + j, c1 = c0 + 1, c3 = c0 + nj, c2 = c3 + 1;
+			const i = (cell / (nj - 1)) | 0,
+				j = cell - i * (nj - 1);
+			const c0 = i * nj + j,
+				c1 = c0 + 1,
+				c3 = c0 + nj,
+				c2 = c3 + 1;
 			cross.length = 0;
 			for (const [p, q] of [
 				[c0, c1],
@@ -254,18 +291,27 @@ export function bracketStarts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp
 				[c2, c3],
 				[c3, c0]
 			]) {
-				const fp = Ya[p] - A, fq = Ya[q] - A;
+				const fp = Ya[p] - A,
+					fq = Ya[q] - A;
 				if (fp === 0 || (fp < 0 !== fq < 0 && fq !== 0)) {
 					const w = fp === 0 ? 0 : fp / (fp - fq);
-					cross.push(br.T[p] + w * (br.T[q] - br.T[p]), br.lnRho[p] + w * (br.lnRho[q] - br.lnRho[p]), rb(p) + w * (rb(q) - rb(p)));
+					cross.push(
+						br.T[p] + w * (br.T[q] - br.T[p]),
+						br.lnRho[p] + w * (br.lnRho[q] - br.lnRho[p]),
+						rb(p) + w * (rb(q) - rb(p))
+					);
 				}
 			}
 			for (let m = 0; m < cross.length; m += 3)
 				for (let n = m + 3; n < cross.length; n += 3) {
-					const r0 = cross[m + 2], r1 = cross[n + 2];
+					const r0 = cross[m + 2],
+						r1 = cross[n + 2];
 					if (r0 === 0 || r0 < 0 !== r1 < 0) {
 						const w = r0 === 0 ? 0 : r0 / (r0 - r1);
-						out.push([cross[m] + w * (cross[n] - cross[m]), cross[m + 1] + w * (cross[n + 1] - cross[m + 1])]);
+						out.push([
+							cross[m] + w * (cross[n] - cross[m]),
+							cross[m + 1] + w * (cross[n + 1] - cross[m + 1])
+						]);
 					}
 				}
 		}
@@ -282,7 +328,8 @@ export function bracketStarts(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp
  */
 export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number][] {
 	const g = grid(fl);
-	let zMax = -Infinity, zMin = Infinity;
+	let zMax = -Infinity,
+		zMin = Infinity;
 	for (const br of g.branches)
 		for (let q = 0; q < br.lnRho.length; q++) {
 			zMax = Math.max(zMax, br.lnRho[q]);
@@ -330,12 +377,25 @@ export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number
  * 2-D Newton in (T, ln ρ) on y_a = A, y_b = B (for (u, h): u = U and P/ρ = H − U); returns the
  * converged point or null.
  */
-export function newton2(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, T0: number, z0: number, p: Point): Point | null {
+export function newton2(
+	fl: Fluid,
+	a: EnergyProp,
+	A: number,
+	b: EnergyProp,
+	B: number,
+	T0: number,
+	z0: number,
+	p: Point
+): Point | null {
 	const sa = a === 's' ? fl.R : fl.R * fl.Tc;
 	const sb = b === 's' ? fl.R : fl.R * fl.Tc;
 	const pv = a === 'u' && b === 'h';
-	let T = T0, z = z0;
-	let lastDT = Infinity, lastDz = Infinity, noisy = 0, norm = Infinity;
+	let T = T0,
+		z = z0;
+	let lastDT = Infinity,
+		lastDz = Infinity,
+		noisy = 0,
+		norm = Infinity;
 	for (let it = 0; it < 60; it++) {
 		const rho = Math.exp(z);
 		evalPoint(fl, T, rho, p, 2);
@@ -345,7 +405,8 @@ export function newton2(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		norm = Math.abs(ra) + Math.abs(rb);
 		if (!Number.isFinite(norm)) return null;
 		if (norm < 1e-16) return p;
-		const j11 = propDT(p, a) / sa, j12 = (propDrho(p, a) * rho) / sa;
+		const j11 = propDT(p, a) / sa,
+			j12 = (propDrho(p, a) * rho) / sa;
 		const j21 = pv ? p.dPdT / rho / sb : propDT(p, b) / sb;
 		const j22 = pv ? (p.dPdrho - p.P / rho) / sb : (propDrho(p, b) * rho) / sb;
 		const det = j11 * j22 - j12 * j21;
@@ -363,7 +424,8 @@ export function newton2(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		const stuck =
 			norm < 1e-11 &&
 			Math.abs(ra * sa) <= 8 * rounding(fl, a, A, T) &&
-			Math.abs(rb * sb) <= 8 * (pv ? rounding(fl, a, A, T) + rounding(fl, b, B, T) : rounding(fl, b, B, T)) &&
+			Math.abs(rb * sb) <=
+				8 * (pv ? rounding(fl, a, A, T) + rounding(fl, b, B, T) : rounding(fl, b, B, T)) &&
 			Math.abs(dT) >= 0.5 * lastDT &&
 			Math.abs(dz) >= 0.5 * lastDz;
 		noisy = stuck ? noisy + 1 : 0;
@@ -381,7 +443,14 @@ export function newton2(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 	return null;
 }
 
-export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, hint?: RootHint): State {
+export function flashYY(
+	fl: Fluid,
+	a: EnergyProp,
+	A: number,
+	b: EnergyProp,
+	B: number,
+	hint?: RootHint
+): State {
 	const what = `${a} = ${fmt(A)} ${UNIT[a]} and ${b} = ${fmt(B)} ${UNIT[b]}`;
 	const found: State[] = [];
 	// the quality from s (or h) is better conditioned than from u; any works
@@ -392,7 +461,8 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 	// (h, s) is one-to-one across the dome (Mollier): a compressed liquid with entropy s lies above
 	// h'(T) + v'-weighted pressure work, every mixture with that s below it; a two-phase answer ends
 	// the search
-	if (found.length > 0 && ((a === 's' && b === 'h') || (a === 'h' && b === 's'))) return choose(fl, found, hint, what, () => noStateInRange(fl, what));
+	if (found.length > 0 && ((a === 's' && b === 'h') || (a === 'h' && b === 's')))
+		return choose(fl, found, hint, what, () => noStateInRange(fl, what));
 	const p = new Point();
 	const dT = (fl.Tmax - fl.Tmin) / (NT_UNIFORM - 1);
 	const accepted: [number, number][] = [];
@@ -401,11 +471,24 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 	// cells holding the target first; centres of the other candidate cells only if none gave a
 	// state — except for (u, h), whose dilute-vapor cells are degenerate and only reached that way
 	const degenerate = (a === 'u' && b === 'h') || (a === 'h' && b === 'u');
-	const contour = degenerate ? (a === 'u' ? contourRootsUH(fl, A, B) : contourRootsUH(fl, B, A)) : [];
+	const contour = degenerate
+		? a === 'u'
+			? contourRootsUH(fl, A, B)
+			: contourRootsUH(fl, B, A)
+		: [];
 	const bracketed = bracketStarts(fl, a, A, b, B);
 	// a cell-interior start beside a bracketed one is the same cell's root: run it once
-	const inside = st.inside.filter(([T0, z0]) => !bracketed.some(([T, z]) => Math.abs(T - T0) < 0.5 * dT && Math.abs(z - z0) < 0.25));
-	const queue: [number, number][] = [...contour, ...bracketed, ...inside, ...st.nearest, ...(degenerate ? st.centres : [])];
+	const inside = st.inside.filter(
+		([T0, z0]) =>
+			!bracketed.some(([T, z]) => Math.abs(T - T0) < 0.5 * dT && Math.abs(z - z0) < 0.25)
+	);
+	const queue: [number, number][] = [
+		...contour,
+		...bracketed,
+		...inside,
+		...st.nearest,
+		...(degenerate ? st.centres : [])
+	];
 	let centresQueued = degenerate;
 	const centreSet = new Set(st.centres.map(([T, z]) => T * 1e3 + z));
 	let runs = 0;
@@ -421,16 +504,28 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		// (two roots of a pair can share a grid cell). Cell centres are a fallback (or, for (u, h),
 		// a supplement to the contour scan): one within a cell of an accepted state is not run.
 		const near = centreSet.has(T0 * 1e3 + z0) ? [dT, 0.5] : [SAME_START * dT, SAME_START];
-		if (accepted.some(([T, z]) => Math.abs(T - T0) < near[0] && Math.abs(z - z0) < near[1])) continue;
+		if (accepted.some(([T, z]) => Math.abs(T - T0) < near[0] && Math.abs(z - z0) < near[1]))
+			continue;
 		runs++;
 		const q = newton2(fl, a, A, b, B, T0, z0, p);
 		if (!q) continue;
-		if (q.T < fl.Tmin * (1 - 1e-9) || q.T > fl.Tmax * (1 + 1e-9) || q.P > fl.Pmax * (1 + 1e-9) || !(q.P > 0)) continue;
+		if (
+			q.T < fl.Tmin * (1 - 1e-9) ||
+			q.T > fl.Tmax * (1 + 1e-9) ||
+			q.P > fl.Pmax * (1 + 1e-9) ||
+			!(q.P > 0)
+		)
+			continue;
 		const loc = locate(fl, q);
 		if (loc.phase === 'saturated-mixture' && loc.sat) {
 			// a metastable root of the equation inside the dome: look again just outside it on its
 			// side, once per such root
-			if (metastable.some(([T, z]) => Math.abs(T - q.T) < 1e-6 * T && Math.abs(z - Math.log(q.rho)) < 1e-6)) continue;
+			if (
+				metastable.some(
+					([T, z]) => Math.abs(T - q.T) < 1e-6 * T && Math.abs(z - Math.log(q.rho)) < 1e-6
+				)
+			)
+				continue;
 			metastable.push([q.T, Math.log(q.rho)]);
 			const { rhoL, rhoV } = loc.sat;
 			const side = q.rho > Math.sqrt(rhoL * rhoV) ? Math.log(rhoL * 1.001) : Math.log(rhoV * 0.999);
@@ -440,7 +535,20 @@ export function flashYY(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 		accepted.push([q.T, Math.log(q.rho)]);
 		found.push(placedState(fl, q, loc));
 	}
-	return choose(fl, mergeConnected(fl, a, A, b, B, found.map((c) => toLine(fl, a, A, b, B, c, p))), hint, what, () => noStateInRange(fl, what));
+	return choose(
+		fl,
+		mergeConnected(
+			fl,
+			a,
+			A,
+			b,
+			B,
+			found.map((c) => toLine(fl, a, A, b, B, c, p))
+		),
+		hint,
+		what,
+		() => noStateInRange(fl, what)
+	);
 }
 
 const YIDX: Record<EnergyProp, number> = { u: 1, h: 2, s: 3 };
@@ -451,9 +559,19 @@ function rounding(fl: Fluid, k: EnergyProp, y: number, T: number): number {
 }
 
 /** Whether (T, ρ) meets both inputs within their rounding (for (u, h): u and Pv = h − u). */
-function withinRounding(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, T: number, rho: number, p: Point): boolean {
+function withinRounding(
+	fl: Fluid,
+	a: EnergyProp,
+	A: number,
+	b: EnergyProp,
+	B: number,
+	T: number,
+	rho: number,
+	p: Point
+): boolean {
 	evalPoint(fl, T, rho, p, 1);
-	const da = rounding(fl, a, A, T), db = rounding(fl, b, B, T);
+	const da = rounding(fl, a, A, T),
+		db = rounding(fl, b, B, T);
 	// a few roundings: the equation's own evaluation noise in a cold liquid is of that size
 	if (!(Math.abs(propValue(p, a) - A) <= 4 * da)) return false;
 	if (a === 'u' && b === 'h') return Math.abs(p.P / rho - (B - A)) <= 4 * (da + db);
@@ -472,18 +590,28 @@ function withinRounding(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
  * below 1/10) is kept; one that does not (an unresolved P, or a run stopped short in the valley) is
  * replaced.
  */
-function toLine(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, c: State, p: Point): State {
+function toLine(
+	fl: Fluid,
+	a: EnergyProp,
+	A: number,
+	b: EnergyProp,
+	B: number,
+	c: State,
+	p: Point
+): State {
 	if (c.phase !== 'compressed-liquid' || c.T >= fl.Tc * (1 - CRITICAL_BAND)) return c;
 	// a candidate that meets the inputs within their rounding and resolves P stays as it is
 	// (stated P precision below 1/10: the valley meeting the inputs within four roundings reaches
 	// up to about twice the P at which the linearized precision is 1/2, where it is 1/8)
-	if (withinRounding(fl, a, A, b, B, c.T, c.rho, p) && precisionOf(fl, c, a, A, b, B).P < 0.1) return c;
+	if (withinRounding(fl, a, A, b, B, c.T, c.rho, p) && precisionOf(fl, c, a, A, b, B).P < 0.1)
+		return c;
 	const ia = YIDX[a];
 	const line = new SatLine();
 	let T = c.T;
 	for (let it = 0; it < 30; it++) {
 		evalSatLine(fl, T, line);
-		const f = line.yL[ia] - A, d = line.dL[ia];
+		const f = line.yL[ia] - A,
+			d = line.dL[ia];
 		const step = f / d;
 		if (!Number.isFinite(step)) return c;
 		T = Math.min(Math.max(T - step, fl.Tmin), fl.Tc * (1 - CRITICAL_BAND));
@@ -499,7 +627,16 @@ function toLine(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, c
 }
 
 /** Scaled residual norm of the pair at (T, ρ) (as newton2 measures it). */
-function residual(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, T: number, rho: number, p: Point): number {
+function residual(
+	fl: Fluid,
+	a: EnergyProp,
+	A: number,
+	b: EnergyProp,
+	B: number,
+	T: number,
+	rho: number,
+	p: Point
+): number {
 	const sa = a === 's' ? fl.R : fl.R * fl.Tc;
 	const sb = b === 's' ? fl.R : fl.R * fl.Tc;
 	evalPoint(fl, T, rho, p, 1);
@@ -512,7 +649,14 @@ function residual(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number,
  * several (in dilute gas (u, h) fixes T but hardly P): two candidates are merged when the residual
  * stays at round-off level at three points between them. Two-phase candidates are kept as found.
  */
-function mergeConnected(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: number, found: State[]): State[] {
+function mergeConnected(
+	fl: Fluid,
+	a: EnergyProp,
+	A: number,
+	b: EnergyProp,
+	B: number,
+	found: State[]
+): State[] {
 	if (found.length < 2) return found;
 	const p = new Point();
 	const out: State[] = [];
@@ -522,7 +666,8 @@ function mergeConnected(fl: Fluid, a: EnergyProp, A: number, b: EnergyProp, B: n
 			out.some((o) => {
 				if (o.x !== null) return false;
 				for (const f of [0.25, 0.5, 0.75]) {
-					const T = o.T + f * (s.T - o.T), rho = o.rho * Math.pow(s.rho / o.rho, f);
+					const T = o.T + f * (s.T - o.T),
+						rho = o.rho * Math.pow(s.rho / o.rho, f);
 					if (!(residual(fl, a, A, b, B, T, rho, p) <= VALLEY)) return false;
 				}
 				return true;

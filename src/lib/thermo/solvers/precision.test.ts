@@ -47,7 +47,14 @@ describe('State.precision', () => {
 
 	it('never exceeds 1 and is a number on every pair', () => {
 		const ref = fixState('water', { T: 400, x: 0.4 });
-		for (const inputs of [{ T: 400, x: 0.4 }, { P: ref.P, x: 0.4 }, { v: ref.v, x: 0.4 }, { u: ref.u, h: ref.h }, { h: ref.h, s: ref.s }, { T: 400, v: ref.v }]) {
+		for (const inputs of [
+			{ T: 400, x: 0.4 },
+			{ P: ref.P, x: 0.4 },
+			{ v: ref.v, x: 0.4 },
+			{ u: ref.u, h: ref.h },
+			{ h: ref.h, s: ref.s },
+			{ T: 400, v: ref.v }
+		]) {
 			const pr = fixState('water', inputs, { near: { T: 400 } }).precision!;
 			for (const k of ['T', 'P', 'v'] as const) {
 				expect(Number.isFinite(pr[k])).toBe(true);

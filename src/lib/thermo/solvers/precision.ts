@@ -61,7 +61,9 @@ function clamp(r: number): number {
 
 /** Rows in (T, ρ) from the state (re-evaluated only where it lacks cv, (∂P/∂T)_ρ or κ_T). */
 function singleRows(fl: Fluid, s: State): void {
-	let cv = s.cv, dPdT = s.dPdT ?? null, dPdrho = s.kappaT ? 1 / (s.rho * s.kappaT) : null;
+	let cv = s.cv,
+		dPdT = s.dPdT ?? null,
+		dPdrho = s.kappaT ? 1 / (s.rho * s.kappaT) : null;
 	if (cv === null || dPdT === null || dPdrho === null) {
 		evalPoint(fl, s.T, s.rho, p, 2);
 		cv = p.cv;
@@ -71,7 +73,14 @@ function singleRows(fl: Fluid, s: State): void {
 	singleRowsAt(s.T, s.rho, s.P, cv, dPdT, dPdrho);
 }
 
-function singleRowsAt(T: number, rho: number, P: number, cv: number, dPdT: number, dPdrho: number): void {
+function singleRowsAt(
+	T: number,
+	rho: number,
+	P: number,
+	cv: number,
+	dPdT: number,
+	dPdrho: number
+): void {
 	const r2 = rho * rho;
 	const duDrho = (P - T * dPdT) / r2;
 	D[0] = 1;
@@ -95,20 +104,25 @@ function twoPhaseRows(fl: Fluid, s: State): boolean {
 	if (s.T >= fl.Tc * (1 - 1e-6)) return false;
 	// the phases the state was just built from, else the table's densities (slopes need no more)
 	const last = lastSaturatedPhases(fl, s.T);
-	let L = pL, V = pV;
+	let L = pL,
+		V = pV;
 	if (last) [L, V] = last;
 	else {
 		satGuess(fl, s.T, g);
 		evalPoint(fl, s.T, g.rhoL, pL, 2);
 		evalPoint(fl, s.T, g.rhoV, pV, 2);
 	}
-	const rL = L.rho, rV = V.rho;
+	const rL = L.rho,
+		rV = V.rho;
 	const x = s.x ?? 0;
-	const vL = 1 / rL, vV = 1 / rV;
+	const vL = 1 / rL,
+		vV = 1 / rV;
 	const dPs = (V.s - L.s) / (vV - vL);
-	const dL = (dPs - L.dPdT) / L.dPdrho, dV = (dPs - V.dPdT) / V.dPdrho;
+	const dL = (dPs - L.dPdT) / L.dPdrho,
+		dV = (dPs - V.dPdT) / V.dPdrho;
 	const vm = vL + x * (vV - vL);
-	const dvT = -(1 - x) * dL * vL * vL - x * dV * vV * vV, dvx = vV - vL;
+	const dvT = -(1 - x) * dL * vL * vL - x * dV * vV * vV,
+		dvx = vV - vL;
 	D[0] = 1;
 	D[1] = 0;
 	D[2] = dPs;
@@ -117,7 +131,8 @@ function twoPhaseRows(fl: Fluid, s: State): boolean {
 	D[5] = -dvx / (vm * vm);
 	let i = 6;
 	for (const k of ENERGY) {
-		D[i] = (1 - x) * (propDT(L, k) + propDrho(L, k) * dL) + x * (propDT(V, k) + propDrho(V, k) * dV);
+		D[i] =
+			(1 - x) * (propDT(L, k) + propDrho(L, k) * dL) + x * (propDT(V, k) + propDrho(V, k) * dV);
 		D[i + 1] = V[k] - L[k];
 		i += 2;
 	}
@@ -133,7 +148,14 @@ const UNKNOWN: Precision = { T: 1, P: 1, v: 1 };
  * liquid or vapor (x = 0 or 1) fixed without x borders its single phase: the pair's uncertainty
  * there counts too (u and s of a liquid at a few mPa leave P unresolved on both sides of the line).
  */
-export function precisionOf(fl: Fluid, s: State, ka: Key, a: number, kb: Key, b: number): Precision {
+export function precisionOf(
+	fl: Fluid,
+	s: State,
+	ka: Key,
+	a: number,
+	kb: Key,
+	b: number
+): Precision {
 	const own = precisionIn(fl, s, ka, a, kb, b, false);
 	if ((s.x === 0 || s.x === 1) && ka !== 'x' && kb !== 'x') {
 		const side = precisionIn(fl, s, ka, a, kb, b, true);
@@ -142,25 +164,43 @@ export function precisionOf(fl: Fluid, s: State, ka: Key, a: number, kb: Key, b:
 	return own;
 }
 
-function precisionIn(fl: Fluid, s: State, ka: Key, a: number, kb: Key, b: number, singleSide: boolean): Precision {
+function precisionIn(
+	fl: Fluid,
+	s: State,
+	ka: Key,
+	a: number,
+	kb: Key,
+	b: number,
+	singleSide: boolean
+): Precision {
 	if (singleSide) {
 		evalPoint(fl, s.T, s.rho, p, 2);
 		singleRowsAt(s.T, s.rho, s.P, p.cv, p.dPdT, p.dPdrho);
 	} else if (s.x !== null) {
 		if (!twoPhaseRows(fl, s)) return { ...UNKNOWN };
 	} else singleRows(fl, s);
-	const ia = 2 * ORDER[ka], ib = 2 * ORDER[kb];
-	const a1 = D[ia], a2 = D[ia + 1], b1 = D[ib], b2 = D[ib + 1];
+	const ia = 2 * ORDER[ka],
+		ib = 2 * ORDER[kb];
+	const a1 = D[ia],
+		a2 = D[ia + 1],
+		b1 = D[ib],
+		b2 = D[ib + 1];
 	const det = a1 * b2 - a2 * b1;
 	if (!(det !== 0 && Number.isFinite(det))) return { ...UNKNOWN };
 	// ∂(T, z)/∂a and ∂(T, z)/∂b
-	const Ta = b2 / det, Tb = -a2 / det, za = -b1 / det, zb = a1 / det;
-	const da = inputRounding(fl, ka, a, s.T), db = inputRounding(fl, kb, b, s.T);
-	const spread = (i: number) => Math.abs(D[i] * Ta + D[i + 1] * za) * da + Math.abs(D[i] * Tb + D[i + 1] * zb) * db;
+	const Ta = b2 / det,
+		Tb = -a2 / det,
+		za = -b1 / det,
+		zb = a1 / det;
+	const da = inputRounding(fl, ka, a, s.T),
+		db = inputRounding(fl, kb, b, s.T);
+	const spread = (i: number) =>
+		Math.abs(D[i] * Ta + D[i + 1] * za) * da + Math.abs(D[i] * Tb + D[i + 1] * zb) * db;
 	// a single phase's P carries the equation's own round-off (state.ts P_ROUNDOFF·ρRT): in a cold
 	// liquid at mPa (propane near its triple point) that alone is a few per cent of P
 	// (P given: exact)
-	const floorP = kb !== 'P' && (singleSide || s.x === null) ? (P_ROUNDOFF * s.rho * fl.R * s.T) / s.P : 0;
+	const floorP =
+		kb !== 'P' && (singleSide || s.x === null) ? (P_ROUNDOFF * s.rho * fl.R * s.T) / s.P : 0;
 	return {
 		T: ka === 'T' ? EPS : clamp(spread(0) / s.T),
 		P: ka === 'P' ? EPS : clamp(Math.max(spread(2) / s.P, floorP)),

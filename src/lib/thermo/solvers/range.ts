@@ -64,7 +64,12 @@ export function checkSaturationP(fl: Fluid, P: number): void {
 
 /** Whether a computed state lies in range (T within limits, P ≤ Pmax). */
 export function inRange(fl: Fluid, s: State): boolean {
-	return s.T >= fl.Tmin * (1 - 1e-9) && s.T <= fl.Tmax * (1 + 1e-9) && s.P <= fl.Pmax * (1 + 1e-9) && s.P > 0;
+	return (
+		s.T >= fl.Tmin * (1 - 1e-9) &&
+		s.T <= fl.Tmax * (1 + 1e-9) &&
+		s.P <= fl.Pmax * (1 + 1e-9) &&
+		s.P > 0
+	);
 }
 
 /** Throw out-of-range for a computed state outside the limits. */

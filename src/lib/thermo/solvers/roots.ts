@@ -16,14 +16,26 @@ export type ScalarFn = (z: number, out: FD) => void;
  * Root of fn in [a, b] where fa and fb have opposite signs: Newton steps from z0 (default: the
  * secant point), falling back to bisection when a step leaves the bracket. tol is absolute in z.
  */
-export function newtonBracket(fn: ScalarFn, a: number, fa: number, b: number, fb: number, tol: number, z0?: number): number {
+export function newtonBracket(
+	fn: ScalarFn,
+	a: number,
+	fa: number,
+	b: number,
+	fb: number,
+	tol: number,
+	z0?: number
+): number {
 	if (fa === 0) return a;
 	if (fb === 0) return b;
 	const out: FD = { f: 0, df: 0 };
-	let z = z0 !== undefined && z0 > Math.min(a, b) && z0 < Math.max(a, b) ? z0 : a - (fa * (b - a)) / (fb - fa);
+	let z =
+		z0 !== undefined && z0 > Math.min(a, b) && z0 < Math.max(a, b)
+			? z0
+			: a - (fa * (b - a)) / (fb - fa);
 	if (!(z > Math.min(a, b) && z < Math.max(a, b))) z = 0.5 * (a + b);
 	// rtsafe rule (Numerical Recipes): bisect when Newton leaves the bracket or stops halving
-	let dxOld = Math.abs(b - a), dx = dxOld;
+	let dxOld = Math.abs(b - a),
+		dx = dxOld;
 	for (let it = 0; it < 200; it++) {
 		fn(z, out);
 		const f = out.f;
@@ -36,7 +48,8 @@ export function newtonBracket(fn: ScalarFn, a: number, fa: number, b: number, fb
 			fb = f;
 		}
 		let next = z - f / out.df;
-		const lo = Math.min(a, b), hi = Math.max(a, b);
+		const lo = Math.min(a, b),
+			hi = Math.max(a, b);
 		const slow = Math.abs(next - z) > 0.5 * dxOld;
 		dxOld = dx;
 		if (!(next > lo && next < hi) || slow) next = 0.5 * (a + b);
@@ -48,7 +61,14 @@ export function newtonBracket(fn: ScalarFn, a: number, fa: number, b: number, fb
 }
 
 /** Extremum of fn (a zero of its derivative) in [a, b] where df changes sign; bisection/secant on df. */
-function turningPoint(fn: ScalarFn, a: number, da: number, b: number, db: number, tol: number): number {
+function turningPoint(
+	fn: ScalarFn,
+	a: number,
+	da: number,
+	b: number,
+	db: number,
+	tol: number
+): number {
 	const out: FD = { f: 0, df: 0 };
 	let z = 0.5 * (a + b);
 	for (let it = 0; it < 100; it++) {
@@ -86,7 +106,9 @@ function turningPoint(fn: ScalarFn, a: number, da: number, b: number, db: number
  * located and, if f changes sign there, both roots beside it are refined.
  */
 export function scanRoots(fn: ScalarFn, z0: number, z1: number, n: number, tol: number): number[] {
-	const zs: number[] = [], fs: number[] = [], ds: number[] = [];
+	const zs: number[] = [],
+		fs: number[] = [],
+		ds: number[] = [];
 	const out: FD = { f: 0, df: 0 };
 	for (let i = 0; i <= n; i++) {
 		const z = z0 + ((z1 - z0) * i) / n;
@@ -100,7 +122,10 @@ export function scanRoots(fn: ScalarFn, z0: number, z1: number, n: number, tol: 
 		if (Number.isFinite(z) && !roots.some((r) => Math.abs(r - z) <= 10 * tol)) roots.push(z);
 	};
 	for (let i = 0; i < n; i++) {
-		const fa = fs[i], fb = fs[i + 1], a = zs[i], b = zs[i + 1];
+		const fa = fs[i],
+			fb = fs[i + 1],
+			a = zs[i],
+			b = zs[i + 1];
 		if (!Number.isFinite(fa) || !Number.isFinite(fb)) continue;
 		if (fa === 0) {
 			push(a);
@@ -113,8 +138,14 @@ export function scanRoots(fn: ScalarFn, z0: number, z1: number, n: number, tol: 
 		}
 		if (fb === 0) continue;
 		// same sign at both ends: look for a turning point that dips across zero
-		const da = ds[i], db = ds[i + 1];
-		if (Number.isFinite(da) && Number.isFinite(db) && da < 0 !== db < 0 && (fa > 0 ? da < 0 : da > 0)) {
+		const da = ds[i],
+			db = ds[i + 1];
+		if (
+			Number.isFinite(da) &&
+			Number.isFinite(db) &&
+			da < 0 !== db < 0 &&
+			(fa > 0 ? da < 0 : da > 0)
+		) {
 			const m = turningPoint(fn, a, da, b, db, tol);
 			fn(m, out);
 			const fm = out.f;

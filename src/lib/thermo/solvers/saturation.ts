@@ -31,7 +31,8 @@ interface AkasakaOut {
 /** Newton–Akasaka at fixed τ; returns false if it fails (caller tries other guesses). */
 function akasaka(fl: Fluid, T: number, dL0: number, dV0: number, out: AkasakaOut): boolean {
 	const tau = fl.Tr / T;
-	let dL = dL0, dV = dV0;
+	let dL = dL0,
+		dV = dV0;
 	let prevNorm = Infinity;
 	for (let it = 0; it < 60; it++) {
 		let r = fl.residualAt(dL, tau, 2);
@@ -67,7 +68,8 @@ function akasaka(fl: Fluid, T: number, dL0: number, dV0: number, out: AkasakaOut
 		// keep both densities positive and ordered
 		let g = 1;
 		for (let k = 0; k < 40; k++) {
-			const nL = dL + g * stepL, nV = dV + g * stepV;
+			const nL = dL + g * stepL,
+				nV = dV + g * stepV;
 			if (nL > 0 && nV > 0 && nL > nV) break;
 			g *= 0.5;
 		}
@@ -118,7 +120,14 @@ function xiOf(fl: Fluid, T: number): number {
 	return th > 0 ? Math.cbrt(th) : 0;
 }
 
-function segment(fl: Fluid, z0: number, z1: number, Tof: (z: number) => number, endsAtCritical: boolean, n = SEGMENT_NODES): SatSegment {
+function segment(
+	fl: Fluid,
+	z0: number,
+	z1: number,
+	Tof: (z: number) => number,
+	endsAtCritical: boolean,
+	n = SEGMENT_NODES
+): SatSegment {
 	const seg: SatSegment = {
 		z0,
 		dz: (z1 - z0) / (n - 1),
@@ -140,24 +149,37 @@ function segment(fl: Fluid, z0: number, z1: number, Tof: (z: number) => number, 
 		// solution; a node must narrow the dome, not close it
 		const plausible = (): boolean => {
 			if (!endsAtCritical || i < 2) return true;
-			const gap = out.dL - out.dV, prev = (seg.rhoL[i - 1] - Math.exp(seg.lnRhoV[i - 1])) / fl.rhor;
+			const gap = out.dL - out.dV,
+				prev = (seg.rhoL[i - 1] - Math.exp(seg.lnRhoV[i - 1])) / fl.rhor;
 			const zr = (z0 + i * seg.dz) / (z0 + (i - 1) * seg.dz);
 			return gap < prev && gap > 0.2 * prev * zr * zr;
 		};
-		const tryAt = (rL: number, rV: number) => akasaka(fl, T, rL / fl.rhor, rV / fl.rhor, out) && plausible();
+		const tryAt = (rL: number, rV: number) =>
+			akasaka(fl, T, rL / fl.rhor, rV / fl.rhor, out) && plausible();
 		// toward Tc: the mean density linear in the abscissa, the gap by the power of it seen over the
 		// last two nodes (1 far out, 1.5 at the critical point: an analytic equation's ρ' − ρ'' ∝ θ^½)
 		const extrapolate = () => {
-			if (!endsAtCritical) return tryAt(2 * seg.rhoL[i - 1] - seg.rhoL[i - 2], Math.exp(2 * seg.lnRhoV[i - 1] - seg.lnRhoV[i - 2]));
+			if (!endsAtCritical)
+				return tryAt(
+					2 * seg.rhoL[i - 1] - seg.rhoL[i - 2],
+					Math.exp(2 * seg.lnRhoV[i - 1] - seg.lnRhoV[i - 2])
+				);
 			const mean = (k: number) => 0.5 * (seg.rhoL[k] + Math.exp(seg.lnRhoV[k]));
 			const gap = (k: number) => seg.rhoL[k] - Math.exp(seg.lnRhoV[k]);
 			const z = (k: number) => z0 + k * seg.dz;
-			const e = Math.min(2, Math.max(0.5, Math.log(gap(i - 1) / gap(i - 2)) / Math.log(z(i - 1) / z(i - 2))));
-			const m = 2 * mean(i - 1) - mean(i - 2), h = 0.5 * gap(i - 1) * Math.pow(z(i) / z(i - 1), e);
+			const e = Math.min(
+				2,
+				Math.max(0.5, Math.log(gap(i - 1) / gap(i - 2)) / Math.log(z(i - 1) / z(i - 2)))
+			);
+			const m = 2 * mean(i - 1) - mean(i - 2),
+				h = 0.5 * gap(i - 1) * Math.pow(z(i) / z(i - 1), e);
 			return tryAt(m + h, m - h);
 		};
 		const ancillary = () => tryAt(fl.ancRhoL.value(T), fl.ancRhoV.value(T));
-		const ok = endsAtCritical && i >= 2 ? extrapolate() || ancillary() : ancillary() || (i >= 2 && extrapolate());
+		const ok =
+			endsAtCritical && i >= 2
+				? extrapolate() || ancillary()
+				: ancillary() || (i >= 2 && extrapolate());
 		if (!ok)
 			throw new ThermoError(
 				'no-convergence',
@@ -177,7 +199,14 @@ function buildTable(fl: Fluid): SatTable {
 	// the low segment keeps water's node spacing in Tc/T: fluids whose triple point lies far below Tc
 	// (propane: Tt = 0.23·Tc) get more nodes, or the table misses TABLE_ACCURACY below 0.9·Tc
 	const span = (Tc / fl.Tt - 1 / 0.95) / (647.096 / 273.16 - 1 / 0.95);
-	const low = segment(fl, 1 / fl.Tt, 1 / (0.95 * Tc), (z) => 1 / z, false, Math.max(SEGMENT_NODES, Math.ceil(SEGMENT_NODES * span)));
+	const low = segment(
+		fl,
+		1 / fl.Tt,
+		1 / (0.95 * Tc),
+		(z) => 1 / z,
+		false,
+		Math.max(SEGMENT_NODES, Math.ceil(SEGMENT_NODES * span))
+	);
 	const high = segment(fl, Math.cbrt(0.15), 0, (xi) => Tc * (1 - xi * xi * xi), true);
 	const list: [number, number, number, number][] = [];
 	for (let i = 0; i < low.lnP.length; i++) {
@@ -236,7 +265,10 @@ function lagrange(arr: Float64Array, u: number): number {
 	if (i < 0) i = 0;
 	if (i > n - 4) i = n - 4;
 	const s = u - i;
-	const y0 = arr[i], y1 = arr[i + 1], y2 = arr[i + 2], y3 = arr[i + 3];
+	const y0 = arr[i],
+		y1 = arr[i + 1],
+		y2 = arr[i + 2],
+		y3 = arr[i + 3];
 	return (
 		(-y0 * (s - 1) * (s - 2) * (s - 3)) / 6 +
 		(y1 * s * (s - 2) * (s - 3)) / 2 -
@@ -283,7 +315,9 @@ export function satAtT(fl: Fluid, T: number, guess?: { rhoL: number; rhoV: numbe
 	const out: AkasakaOut = { dL: 0, dV: 0, P: 0 };
 	// near Tc Newton can also settle on the trivial solution ρ' ≈ ρ'': a solution must keep at least
 	// a quarter of the gap of its start
-	const from = (rL: number, rV: number) => akasaka(fl, T, rL / fl.rhor, rV / fl.rhor, out) && out.dL - out.dV > (0.25 * (rL - rV)) / fl.rhor;
+	const from = (rL: number, rV: number) =>
+		akasaka(fl, T, rL / fl.rhor, rV / fl.rhor, out) &&
+		out.dL - out.dV > (0.25 * (rL - rV)) / fl.rhor;
 	let ok = false;
 	if (guess) ok = from(guess.rhoL, guess.rhoV);
 	const g = ok ? null : satGuess(fl, T, { P: 0, rhoL: 0, rhoV: 0 });
@@ -305,7 +339,8 @@ function guessTsat(fl: Fluid, tab: SatTable, P: number): number {
 	const seg = useLow ? tab.low : tab.high;
 	const lp = seg.lnP;
 	// both segments store ln P rising with the node index
-	let lo = 0, hi = lp.length - 1;
+	let lo = 0,
+		hi = lp.length - 1;
 	while (hi - lo > 1) {
 		const mid = (lo + hi) >> 1;
 		if (lp[mid] <= lnP) lo = mid;
@@ -313,10 +348,12 @@ function guessTsat(fl: Fluid, tab: SatTable, P: number): number {
 	}
 	// Illinois regula falsi on the interpolant: the table itself is good to TABLE_ACCURACY, so a
 	// guess to 1e−10 in ln P is all Newton needs
-	let a = lo, b = hi;
+	let a = lo,
+		b = hi;
 	let fa = lagrange(lp, a) - lnP;
 	let fb = lagrange(lp, b) - lnP;
-	let u = a, side = 0;
+	let u = a,
+		side = 0;
 	for (let k = 0; k < 60; k++) {
 		u = fb === fa ? 0.5 * (a + b) : a - (fa * (b - a)) / (fb - fa);
 		if (!(u >= Math.min(a, b) && u <= Math.max(a, b))) u = 0.5 * (a + b);
@@ -367,7 +404,9 @@ export function satAtP(fl: Fluid, P: number): SatPoint {
 		const KV = r.d1 + r.a + Math.log(dV);
 		const KtV = r.t1 + r.dt;
 		const KdV = (1 + 2 * r.d1 + r.d2) / dV;
-		const r1 = PL / P - 1, r2 = PV / P - 1, r3 = KL - KV;
+		const r1 = PL / P - 1,
+			r2 = PV / P - 1,
+			r3 = KL - KV;
 		if (!(a12 > 0 && a23 > 0)) break;
 		const a31 = (KtL - KtV) / tau;
 		const den = a31 - (KdL * a11) / a12 + (KdV * a21) / a23;
@@ -376,7 +415,8 @@ export function satAtP(fl: Fluid, P: number): SatPoint {
 		const ddV = (-r2 - a21 * dTau) / a23;
 		if (!Number.isFinite(dTau + ddL + ddV)) break;
 		let g = 1;
-		while (g > 1e-6 && !(dL + g * ddL > dV + g * ddV && dV + g * ddV > 0 && tau + g * dTau > 0)) g *= 0.5;
+		while (g > 1e-6 && !(dL + g * ddL > dV + g * ddV && dV + g * ddV > 0 && tau + g * dTau > 0))
+			g *= 0.5;
 		tau += g * dTau;
 		dL += g * ddL;
 		dV += g * ddV;
@@ -397,7 +437,8 @@ export function satAtP(fl: Fluid, P: number): SatPoint {
 
 /** Robust fallback: solve ln Psat(T) = ln P by safeguarded secant on T within [Tt, Tc]. */
 function satAtPByT(fl: Fluid, P: number, T0: number): SatPoint {
-	let lo = fl.Tt, hi = fl.Tc * (1 - CRITICAL_BAND);
+	let lo = fl.Tt,
+		hi = fl.Tc * (1 - CRITICAL_BAND);
 	const lnP = Math.log(P);
 	let T = Math.min(Math.max(T0, lo), hi);
 	let best: SatPoint | null = null;
@@ -427,7 +468,6 @@ function satAtPByT(fl: Fluid, P: number, T0: number): SatPoint {
 		);
 	return { T: best.T, P, rhoL: best.rhoL, rhoV: best.rhoV };
 }
-
 
 /** The equation's vapor pressure at the triple-point temperature, Pa. */
 export function triplePressure(fl: Fluid): number {

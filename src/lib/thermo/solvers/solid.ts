@@ -122,7 +122,8 @@ export function meltingLine(fl: Fluid, points: number): State[] {
 	const lines = cached(fl).lines;
 	if (!lines) return [];
 	// highest temperature with a melting pressure inside the range: bisection on P_m(T) = Pmax
-	let lo = fl.Tt, hi = fl.Tmax;
+	let lo = fl.Tt,
+		hi = fl.Tmax;
 	const Pm = (T: number) => meltingAt(fl, T)?.P ?? Infinity;
 	if (Pm(hi) <= fl.Pmax) lo = hi;
 	else

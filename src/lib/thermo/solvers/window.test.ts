@@ -19,7 +19,10 @@ function code(f: () => unknown): string {
 describe('options.window', () => {
 	it('selects the everyday liquid among three cold-water states for (T, s) and (T, u)', () => {
 		const ref = fixState('water', { T: 275, P: 1e6 });
-		for (const inputs of [{ T: 275, s: ref.s }, { T: 275, u: ref.u }]) {
+		for (const inputs of [
+			{ T: 275, s: ref.s },
+			{ T: 275, u: ref.u }
+		]) {
 			let n = 0;
 			try {
 				fixState('water', inputs);
@@ -48,11 +51,17 @@ describe('options.window', () => {
 		expect(err?.message).toMatch(/P ≥ 200000 Pa/);
 		expect(err?.candidates?.length).toBe(1);
 		const ref = fixState('water', { T: 275, P: 1e6 });
-		expect(code(() => fixState('water', { T: 275, s: ref.s }, { window: { Tmin: 400 } }))).toBe('outside-window');
+		expect(code(() => fixState('water', { T: 275, s: ref.s }, { window: { Tmin: 400 } }))).toBe(
+			'outside-window'
+		);
 	});
 
 	it('refuses a malformed or empty window as invalid-option', () => {
-		expect(code(() => fixState('water', { T: 300, P: 1e5 }, { window: { Pmin: -1 } }))).toBe('invalid-option');
-		expect(code(() => fixState('water', { T: 300, P: 1e5 }, { window: { Pmin: 2e5, Pmax: 1e5 } }))).toBe('invalid-option');
+		expect(code(() => fixState('water', { T: 300, P: 1e5 }, { window: { Pmin: -1 } }))).toBe(
+			'invalid-option'
+		);
+		expect(
+			code(() => fixState('water', { T: 300, P: 1e5 }, { window: { Pmin: 2e5, Pmax: 1e5 } }))
+		).toBe('invalid-option');
 	});
 });

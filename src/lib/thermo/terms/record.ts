@@ -80,7 +80,8 @@ export class EvalContext {
 			dp[0] = 1;
 			if (dp.length > 1) dp[1] = delta;
 			// by squaring where possible: a short chain of dependent multiplications
-			for (let k = 2; k < dp.length; k++) dp[k] = k & 1 ? dp[k - 1] * delta : dp[k >> 1] * dp[k >> 1];
+			for (let k = 2; k < dp.length; k++)
+				dp[k] = k & 1 ? dp[k - 1] * delta : dp[k >> 1] * dp[k >> 1];
 			this.tableDelta = delta;
 		}
 		if (tau !== this.tableTau) {

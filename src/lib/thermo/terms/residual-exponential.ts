@@ -1,4 +1,10 @@
-import { tableIndex, type AlphaRecord, type DerivativeOrder, type EvalContext, type TermEvaluator } from './record.ts';
+import {
+	tableIndex,
+	type AlphaRecord,
+	type DerivativeOrder,
+	type EvalContext,
+	type TermEvaluator
+} from './record.ts';
 
 /**
  * Residual exponential terms αʳ = Σ nᵢ·δ^dᵢ·τ^tᵢ·exp(−δ^lᵢ) (IAPWS R6-95(2018), Eq. 6, i = 8…51,
@@ -27,14 +33,20 @@ export class ResidualExponential implements TermEvaluator {
 	private readonly groupStart: Int32Array;
 	private readonly tables: boolean;
 
-	constructor(n: readonly number[], d: readonly number[], t: readonly number[], l: readonly number[]) {
+	constructor(
+		n: readonly number[],
+		d: readonly number[],
+		t: readonly number[],
+		l: readonly number[]
+	) {
 		const order = l.map((_, i) => i).sort((a, b) => l[a] - l[b] || a - b);
 		this.n = Float64Array.from(order, (i) => n[i]);
 		this.d = Float64Array.from(order, (i) => d[i]);
 		this.t = Float64Array.from(order, (i) => t[i]);
 		this.di = Int32Array.from(order, (i) => tableIndex(d[i]));
 		this.ti = Int32Array.from(order, (i) => tableIndex(t[i]));
-		const ls: number[] = [], starts: number[] = [];
+		const ls: number[] = [],
+			starts: number[] = [];
 		order.forEach((i, k) => {
 			if (k === 0 || l[i] !== l[order[k - 1]]) {
 				ls.push(l[i]);
@@ -52,15 +64,27 @@ export class ResidualExponential implements TermEvaluator {
 	add(ctx: EvalContext, order: DerivativeOrder, rec: AlphaRecord): void {
 		const { n, d, t, di, ti, groupL, groupStart, tables } = this;
 		const { dPow, tPow, lnDelta, lnTau } = ctx;
-		let a = 0, d1 = 0, t1 = 0, d2 = 0, t2 = 0, dt = 0, d3 = 0, t3 = 0, d2t = 0, dt2 = 0;
+		let a = 0,
+			d1 = 0,
+			t1 = 0,
+			d2 = 0,
+			t2 = 0,
+			dt = 0,
+			d3 = 0,
+			t3 = 0,
+			d2t = 0,
+			dt2 = 0;
 		for (let g = 0; g < groupL.length; g++) {
 			const l = groupL[g];
 			const L = tables ? dPow[l] : Math.exp(l * lnDelta);
 			const E = Math.exp(-L);
-			const lL = l * L, l2L = l * lL;
+			const lL = l * L,
+				l2L = l * lL;
 			const end = groupStart[g + 1];
 			for (let i = groupStart[g]; i < end; i++) {
-				const f = tables ? n[i] * dPow[di[i]] * tPow[ti[i]] * E : n[i] * Math.exp(d[i] * lnDelta + t[i] * lnTau - L);
+				const f = tables
+					? n[i] * dPow[di[i]] * tPow[ti[i]] * E
+					: n[i] * Math.exp(d[i] * lnDelta + t[i] * lnTau - L);
 				a += f;
 				if (order < 1) continue;
 				const k = d[i] - lL;

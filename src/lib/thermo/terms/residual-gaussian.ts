@@ -50,7 +50,10 @@ export class ResidualGaussian implements TermEvaluator {
 		const { n, d, t, alpha, beta, gamma, epsilon, skip } = this;
 		const { delta, tau, lnDelta, lnTau } = ctx;
 		for (let i = 0; i < n.length; i++) {
-			const al = alpha[i], be = beta[i], ga = gamma[i], ep = epsilon[i];
+			const al = alpha[i],
+				be = beta[i],
+				ga = gamma[i],
+				ep = epsilon[i];
 			const dd = delta - ep;
 			const tt = tau - ga;
 			const e = d[i] * lnDelta + t[i] * lnTau - al * dd * dd - be * tt * tt;

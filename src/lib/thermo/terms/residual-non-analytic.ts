@@ -62,9 +62,13 @@ export class ResidualNonAnalytic implements TermEvaluator {
 		const y2 = y * y;
 		const z2 = z * z;
 		for (let i = 0; i < this.n.length; i++) {
-			const C = this.C[i], Dc = this.D[i];
+			const C = this.C[i],
+				Dc = this.D[i];
 			if (C * y2 + Dc * z2 > this.skip) continue;
-			const n = this.n[i], b = this.b[i], A = this.A[i], B = this.B[i];
+			const n = this.n[i],
+				b = this.b[i],
+				A = this.A[i],
+				B = this.B[i];
 			const e1 = 1 / this.beta[i]; // [(δ−1)²]^(1/(2β)) = |δ−1|^(1/β)
 			const e2 = 2 * this.a[i]; // [(δ−1)²]^a = |δ−1|^(2a)
 			const P0 = Math.exp(-C * y2);
@@ -135,8 +139,10 @@ export class ResidualNonAnalytic implements TermEvaluator {
 			const E12 = f3 * Dd * Dt * Dt + f2 * (Dtt * Dd + 2 * Ddt * Dt);
 			const F30 = (G3 * f0 + 3 * G2 * E10 + 3 * G1 * E20 + G0 * E30) * Q0;
 			const F03 = G0 * (E03 * Q0 + 3 * E02 * H1 + 3 * E01 * H2 + f0 * H3);
-			const F21 = G2 * (E01 * Q0 + f0 * H1) + 2 * G1 * (E11 * Q0 + E10 * H1) + G0 * (E21 * Q0 + E20 * H1);
-			const F12 = G1 * (E02 * Q0 + 2 * E01 * H1 + f0 * H2) + G0 * (E12 * Q0 + 2 * E11 * H1 + E10 * H2);
+			const F21 =
+				G2 * (E01 * Q0 + f0 * H1) + 2 * G1 * (E11 * Q0 + E10 * H1) + G0 * (E21 * Q0 + E20 * H1);
+			const F12 =
+				G1 * (E02 * Q0 + 2 * E01 * H1 + f0 * H2) + G0 * (E12 * Q0 + 2 * E11 * H1 + E10 * H2);
 			rec.d3 += n * delta * delta * delta * F30;
 			rec.t3 += n * tau * tau * tau * F03;
 			rec.d2t += n * delta * delta * tau * F21;

@@ -1,4 +1,10 @@
-import { tableIndex, type AlphaRecord, type DerivativeOrder, type EvalContext, type TermEvaluator } from './record.ts';
+import {
+	tableIndex,
+	type AlphaRecord,
+	type DerivativeOrder,
+	type EvalContext,
+	type TermEvaluator
+} from './record.ts';
 
 /**
  * Residual polynomial terms αʳ = Σ nᵢ·δ^dᵢ·τ^tᵢ (IAPWS R6-95(2018), Eq. 6, i = 1…7).
@@ -32,7 +38,11 @@ export class ResidualPolynomial implements TermEvaluator {
 		this.maxD = dOk ? Math.max(0, ...di) : 0;
 		let q = 0;
 		for (const cand of [1, 2, 4, 8, 16, 32, 64]) {
-			if (t.every((x) => Math.abs(x * cand - Math.round(x * cand)) < 1e-12 && Math.abs(x * cand) <= 256)) {
+			if (
+				t.every(
+					(x) => Math.abs(x * cand - Math.round(x * cand)) < 1e-12 && Math.abs(x * cand) <= 256
+				)
+			) {
 				q = cand;
 				break;
 			}
@@ -56,9 +66,21 @@ export class ResidualPolynomial implements TermEvaluator {
 			for (let k = z + 1; k < tq.length; k++) tq[k] = tq[k - 1] * root;
 			for (let k = z - 1; k >= 0; k--) tq[k] = tq[k + 1] * inv;
 		}
-		let a = 0, d1 = 0, t1 = 0, d2 = 0, t2 = 0, dt = 0, d3 = 0, t3 = 0, d2t = 0, dt2 = 0;
+		let a = 0,
+			d1 = 0,
+			t1 = 0,
+			d2 = 0,
+			t2 = 0,
+			dt = 0,
+			d3 = 0,
+			t3 = 0,
+			d2t = 0,
+			dt2 = 0;
 		for (let i = 0; i < n.length; i++) {
-			const f = q > 0 ? n[i] * dPow[di[i]] * tq[qt[i] - qMin] : n[i] * Math.exp(d[i] * lnDelta + t[i] * lnTau);
+			const f =
+				q > 0
+					? n[i] * dPow[di[i]] * tq[qt[i] - qMin]
+					: n[i] * Math.exp(d[i] * lnDelta + t[i] * lnTau);
 			a += f;
 			if (order < 1) continue;
 			const D1 = d[i];

@@ -15,7 +15,12 @@ import { ResidualExponential } from './residual-exponential.ts';
 import { ResidualGaussian } from './residual-gaussian.ts';
 import { ResidualNonAnalytic } from './residual-non-analytic.ts';
 
-function evaluate(term: TermEvaluator, delta: number, tau: number, order: DerivativeOrder): AlphaRecord {
+function evaluate(
+	term: TermEvaluator,
+	delta: number,
+	tau: number,
+	order: DerivativeOrder
+): AlphaRecord {
 	const ctx = new EvalContext(Math.max(term.maxD, 1), Math.max(term.maxT, 1));
 	ctx.set(delta, tau);
 	const rec = new AlphaRecord();
@@ -25,7 +30,18 @@ function evaluate(term: TermEvaluator, delta: number, tau: number, order: Deriva
 
 /** Unscaled derivative ∂^(i+j)α/∂δ^i∂τ^j from the scaled record. */
 function raw(r: AlphaRecord, i: number, j: number, delta: number, tau: number): number {
-	const key: Record<string, keyof AlphaRecord> = { '00': 'a', '10': 'd1', '01': 't1', '20': 'd2', '02': 't2', '11': 'dt', '30': 'd3', '03': 't3', '21': 'd2t', '12': 'dt2' };
+	const key: Record<string, keyof AlphaRecord> = {
+		'00': 'a',
+		'10': 'd1',
+		'01': 't1',
+		'20': 'd2',
+		'02': 't2',
+		'11': 'dt',
+		'30': 'd3',
+		'03': 't3',
+		'21': 'd2t',
+		'12': 'dt2'
+	};
 	return (r[key[`${i}${j}`]] as number) / (delta ** i * tau ** j);
 }
 
@@ -35,12 +51,47 @@ const cases: [string, TermEvaluator][] = [
 	['ideal power', new IdealPower([1.2, -0.7, 0.3], [-0.5, 1.5, 2])],
 	['ideal Planck–Einstein', new IdealPlanckEinstein([0.97, 1.28], [3.5, 7.7])],
 	['ideal ln(c + exp(γτ))', new IdealLogCPlusExp([-0.2, 0.7], [2 / 3, 1.5], [0.9, 2.4])],
-	['residual polynomial (t in eighths: one root)', new ResidualPolynomial([0.0125, 7.9, -0.3], [1, 2, 4], [-0.5, 0.875, 1])],
-	['residual polynomial (general exponents)', new ResidualPolynomial([0.3, -0.2, 0.05], [1.5, 2, 3], [0.3, 1.7, -0.9])],
-	['residual exponential (integer exponents)', new ResidualExponential([-0.67, 0.2, 0.016, -0.02], [1, 2, 5, 3], [4, 6, 1, 10], [1, 2, 2, 6])],
-	['residual exponential (fractional exponents)', new ResidualExponential([-0.67, 0.2], [1.5, 2], [4.25, 0.5], [1, 2.5])],
-	['residual Gaussian', new ResidualGaussian([-31.3, 31.5, -2521], [3, 3, 3], [0, 1, 4], [20, 20, 20], [150, 150, 250], [1.21, 1.21, 1.25], [1, 1, 1])],
-	['residual non-analytic', new ResidualNonAnalytic([-0.1487, 0.318], [3.5, 3.5], [0.85, 0.95], [0.3, 0.3], [0.32, 0.32], [0.2, 0.2], [28, 32], [700, 800])]
+	[
+		'residual polynomial (t in eighths: one root)',
+		new ResidualPolynomial([0.0125, 7.9, -0.3], [1, 2, 4], [-0.5, 0.875, 1])
+	],
+	[
+		'residual polynomial (general exponents)',
+		new ResidualPolynomial([0.3, -0.2, 0.05], [1.5, 2, 3], [0.3, 1.7, -0.9])
+	],
+	[
+		'residual exponential (integer exponents)',
+		new ResidualExponential([-0.67, 0.2, 0.016, -0.02], [1, 2, 5, 3], [4, 6, 1, 10], [1, 2, 2, 6])
+	],
+	[
+		'residual exponential (fractional exponents)',
+		new ResidualExponential([-0.67, 0.2], [1.5, 2], [4.25, 0.5], [1, 2.5])
+	],
+	[
+		'residual Gaussian',
+		new ResidualGaussian(
+			[-31.3, 31.5, -2521],
+			[3, 3, 3],
+			[0, 1, 4],
+			[20, 20, 20],
+			[150, 150, 250],
+			[1.21, 1.21, 1.25],
+			[1, 1, 1]
+		)
+	],
+	[
+		'residual non-analytic',
+		new ResidualNonAnalytic(
+			[-0.1487, 0.318],
+			[3.5, 3.5],
+			[0.85, 0.95],
+			[0.3, 0.3],
+			[0.32, 0.32],
+			[0.2, 0.2],
+			[28, 32],
+			[700, 800]
+		)
+	]
 ];
 
 // points away from δ = τ = 1 (where the non-analytic term is singular), on both sides of 1
@@ -75,13 +126,16 @@ describe('Helmholtz terms: derivatives against finite differences', () => {
 					// (Abramowitz & Stegun (1964), 25.3.6 — from memory); with h = 1e−4 relative the
 					// round-off floor is ~1e−12/h, so 2e−7 is a common-practice bound
 					const f = (k: number) => {
-						const dd = byDelta ? d + k * hp : d, tt = byDelta ? t : t + k * hp;
+						const dd = byDelta ? d + k * hp : d,
+							tt = byDelta ? t : t + k * hp;
 						return raw(evaluate(term, dd, tt, 3), li, lj, dd, tt);
 					};
 					const fd = (8 * (f(1) - f(-1)) - (f(2) - f(-2))) / (12 * hp);
 					const an = raw(r, i, j, d, t);
 					const scale = Math.max(Math.abs(an), Math.abs(raw(r, li, lj, d, t)), 1e-8);
-					expect(Math.abs(an - fd) / scale, `${name} at δ=${d}, τ=${t}: ∂${i}${j}`).toBeLessThan(2e-7);
+					expect(Math.abs(an - fd) / scale, `${name} at δ=${d}, τ=${t}: ∂${i}${j}`).toBeLessThan(
+						2e-7
+					);
 				}
 				// lower orders leave the higher fields untouched and agree with the full evaluation (the
 				// reference here is the order-3 evaluation checked above; 12 digits is round-off)
@@ -107,12 +161,20 @@ describe('Helmholtz terms: far bells skipped without effect', () => {
 			const pairs: [TermEvaluator, TermEvaluator][] = [];
 			for (const t of fl.data.residual) {
 				if (t.kind === 'gaussian')
-					pairs.push([new ResidualGaussian(t.n, t.d, t.t, t.alpha, t.beta, t.gamma, t.epsilon), new ResidualGaussian(t.n, t.d, t.t, t.alpha, t.beta, t.gamma, t.epsilon, Infinity)]);
+					pairs.push([
+						new ResidualGaussian(t.n, t.d, t.t, t.alpha, t.beta, t.gamma, t.epsilon),
+						new ResidualGaussian(t.n, t.d, t.t, t.alpha, t.beta, t.gamma, t.epsilon, Infinity)
+					]);
 				if (t.kind === 'non-analytic')
-					pairs.push([new ResidualNonAnalytic(t.n, t.a, t.b, t.beta, t.A, t.B, t.C, t.D), new ResidualNonAnalytic(t.n, t.a, t.b, t.beta, t.A, t.B, t.C, t.D, Infinity)]);
+					pairs.push([
+						new ResidualNonAnalytic(t.n, t.a, t.b, t.beta, t.A, t.B, t.C, t.D),
+						new ResidualNonAnalytic(t.n, t.a, t.b, t.beta, t.A, t.B, t.C, t.D, Infinity)
+					]);
 			}
 			expect(pairs.length).toBeGreaterThan(0);
-			let skipped = 0, worst = 0, where = '';
+			let skipped = 0,
+				worst = 0,
+				where = '';
 			for (let i = 0; i <= 60; i++)
 				for (let j = 0; j <= 60; j++) {
 					const T = fl.Tmin + ((fl.Tmax - fl.Tmin) * i) / 60;
@@ -120,9 +182,21 @@ describe('Helmholtz terms: far bells skipped without effect', () => {
 					const full = fl.residualAt(delta, fl.Tr / T, 3);
 					const scale = { ...full } as Record<string, number>;
 					for (const [fast, exact] of pairs) {
-						const a = evaluate(fast, delta, fl.Tr / T, 3), b = evaluate(exact, delta, fl.Tr / T, 3);
+						const a = evaluate(fast, delta, fl.Tr / T, 3),
+							b = evaluate(exact, delta, fl.Tr / T, 3);
 						if (a.a === 0 && b.a !== 0) skipped++;
-						for (const k of ['a', 'd1', 't1', 'd2', 't2', 'dt', 'd3', 't3', 'd2t', 'dt2'] as const) {
+						for (const k of [
+							'a',
+							'd1',
+							't1',
+							'd2',
+							't2',
+							'dt',
+							'd3',
+							't3',
+							'd2t',
+							'dt2'
+						] as const) {
 							const e = Math.abs(a[k] - b[k]) / Math.max(1, Math.abs(scale[k]));
 							if (e > worst) [worst, where] = [e, `${k} at T=${T}, δ=${delta}`];
 						}

@@ -7,7 +7,13 @@
  * enhancement ((∂ρ/∂p)_T = (cp/cv)/w²).
  */
 import type { State } from '../types.ts';
-import { waterConductivity, waterSurfaceTension, waterTensionRange, waterTransportRange, waterViscosity } from './water.ts';
+import {
+	waterConductivity,
+	waterSurfaceTension,
+	waterTensionRange,
+	waterTransportRange,
+	waterViscosity
+} from './water.ts';
 
 export type TransportName = 'mu' | 'k' | 'Pr' | 'sigma';
 
@@ -50,24 +56,45 @@ export function transport(state: State): Transport {
 	const all: TransportName[] = ['mu', 'k', 'Pr', 'sigma'];
 	if (state.fluid !== 'water') {
 		for (const name of all)
-			out.absent[name] = { code: 'no-correlation', reason: `No published ${describe(name)} correlation for ${state.fluid} is built into the engine yet.` };
+			out.absent[name] = {
+				code: 'no-correlation',
+				reason: `No published ${describe(name)} correlation for ${state.fluid} is built into the engine yet.`
+			};
 		return out;
 	}
 	const { T, P, rho } = state;
-	const onDome = state.phase === 'saturated-liquid' || state.phase === 'saturated-vapor' || state.phase === 'saturated-mixture';
+	const onDome =
+		state.phase === 'saturated-liquid' ||
+		state.phase === 'saturated-vapor' ||
+		state.phase === 'saturated-mixture';
 	if (onDome && T >= waterTensionRange.Tmin - 0.01 && T <= waterTensionRange.Tmax) {
 		out.sigma = waterSurfaceTension(T);
 		out.sources.sigma = SOURCES.sigma;
 	} else if (onDome)
-		out.absent.sigma = { code: 'out-of-range', reason: `IAPWS R1-76(2014) holds from ${waterTensionRange.Tmin} K to ${waterTensionRange.Tmax} K; T = ${T} K.` };
-	else out.absent.sigma = { code: 'not-on-saturation-line', reason: 'Surface tension is given only on the saturation line (a saturated liquid, vapor or mixture).' };
+		out.absent.sigma = {
+			code: 'out-of-range',
+			reason: `IAPWS R1-76(2014) holds from ${waterTensionRange.Tmin} K to ${waterTensionRange.Tmax} K; T = ${T} K.`
+		};
+	else
+		out.absent.sigma = {
+			code: 'not-on-saturation-line',
+			reason:
+				'Surface tension is given only on the saturation line (a saturated liquid, vapor or mixture).'
+		};
 
 	if (state.phase === 'saturated-mixture') {
 		for (const name of ['mu', 'k', 'Pr'] as const)
-			out.absent[name] = { code: 'two-phase', reason: `A two-phase mixture has no single ${describe(name)}: ask for the saturated liquid (x = 0) or vapor (x = 1) at this temperature.` };
+			out.absent[name] = {
+				code: 'two-phase',
+				reason: `A two-phase mixture has no single ${describe(name)}: ask for the saturated liquid (x = 0) or vapor (x = 1) at this temperature.`
+			};
 		return out;
 	}
-	if (T < waterTransportRange.Tmin || T > waterTransportRange.Tmax || P > waterTransportRange.Pmax) {
+	if (
+		T < waterTransportRange.Tmin ||
+		T > waterTransportRange.Tmax ||
+		P > waterTransportRange.Pmax
+	) {
 		for (const name of ['mu', 'k', 'Pr'] as const)
 			out.absent[name] = {
 				code: 'out-of-range',
@@ -84,7 +111,10 @@ export function transport(state: State): Transport {
 	out.sources.mu = SOURCES.mu;
 	if (!thermo) {
 		for (const name of ['k', 'Pr'] as const)
-			out.absent[name] = { code: 'out-of-range', reason: `This state has no cp, cv or speed of sound, which the ${describe(name)} needs.` };
+			out.absent[name] = {
+				code: 'out-of-range',
+				reason: `This state has no cp, cv or speed of sound, which the ${describe(name)} needs.`
+			};
 		return out;
 	}
 	const k = waterConductivity(rho, T, cp as number, cv as number, drhodP as number, mu);
@@ -96,5 +126,10 @@ export function transport(state: State): Transport {
 }
 
 function describe(name: TransportName): string {
-	return { mu: 'viscosity', k: 'thermal conductivity', Pr: 'Prandtl number', sigma: 'surface tension' }[name];
+	return {
+		mu: 'viscosity',
+		k: 'thermal conductivity',
+		Pr: 'Prandtl number',
+		sigma: 'surface tension'
+	}[name];
 }

@@ -7,17 +7,25 @@
 import { describe, expect, it } from 'vitest';
 import fixture from '../../../../tests/reference/water-transport.json';
 import { fixState, if97State, transport } from '../index.ts';
-import { viscosityCriticalRegion, waterConductivityBackground, waterSurfaceTension, waterViscosity } from './water.ts';
+import {
+	viscosityCriticalRegion,
+	waterConductivityBackground,
+	waterSurfaceTension,
+	waterViscosity
+} from './water.ts';
 
 function printed(actual: number, text: string, what: string): void {
 	const [mant, exp] = text.toLowerCase().split('e');
 	const decimals = mant.includes('.') ? mant.split('.')[1].length : 0;
 	const tol = 0.5 * 10 ** (-decimals + (exp ? Number(exp) : 0)) * (1 + 1e-9);
-	expect(Math.abs(actual - Number(text)), `${what}: ${actual} vs printed ${text}`).toBeLessThanOrEqual(tol);
+	expect(
+		Math.abs(actual - Number(text)),
+		`${what}: ${actual} vs printed ${text}`
+	).toBeLessThanOrEqual(tol);
 }
 
 describe('water viscosity, IAPWS R12-08 (μ̄2 = 1)', () => {
-	it('matches the release\'s verification values (Table 4, μ̄2 = 1), μPa·s', () => {
+	it("matches the release's verification values (Table 4, μ̄2 = 1), μPa·s", () => {
 		// IAPWS R12-08, Table 4, as transcribed in python3-iapws 1.5.2 (_Viscosity docstring)
 		printed(waterViscosity(998, 298.15) * 1e6, '889.735100', '298.15 K, 998 kg/m³');
 		printed(waterViscosity(600, 873.15) * 1e6, '77.430195', '873.15 K, 600 kg/m³');
@@ -33,7 +41,8 @@ describe('water viscosity, IAPWS R12-08 (μ̄2 = 1)', () => {
 			[1173.15, 100, '47.640433'],
 			[1173.15, 400, '64.154608']
 		];
-		for (const [T, rho, text] of rows) printed(waterViscosity(rho, T) * 1e6, text, `${T} K, ${rho} kg/m³`);
+		for (const [T, rho, text] of rows)
+			printed(waterViscosity(rho, T) * 1e6, text, `${T} K, ${rho} kg/m³`);
 	});
 });
 
@@ -48,25 +57,29 @@ describe('near the critical point: IAPWS-95 states at 647.35 K (R12-08 and R15-1
 		[372, '45.688204', '650.319402'],
 		[422, '49.436256', '448.883487']
 	];
-	it('inside R12-08\'s critical region (245.8 to 405.3 kg/m³) μ̄2 is applied: μ to 1e−7 and λ to 1e−6', () => {
+	it("inside R12-08's critical region (245.8 to 405.3 kg/m³) μ̄2 is applied: μ to 1e−7 and λ to 1e−6", () => {
 		for (const [rho, mu, k] of rows.filter(([r]) => r > 245.8 && r < 405.3)) {
 			const t = transport(fixState('water', { T: 647.35, rho }));
 			// to 1e−7: the reference (∂ρ/∂p)_T at 1.5 Tc comes from R15-11's industrial Eq. 25, not IAPWS-95
-			expect(Math.abs(t.mu! * 1e6 - Number(mu)) / Number(mu), `μ at ${rho} kg/m³`).toBeLessThan(1e-7);
+			expect(Math.abs(t.mu! * 1e6 - Number(mu)) / Number(mu), `μ at ${rho} kg/m³`).toBeLessThan(
+				1e-7
+			);
 			expect(Math.abs(t.k! * 1e3 - Number(k)) / Number(k), `λ at ${rho} kg/m³`).toBeLessThan(1e-6);
 		}
 	});
 	it('outside it μ̄2 = 1, as industrial use allows: μ within 1 % and λ within 0.5 % of the printed values', () => {
 		for (const [rho, mu, k] of rows.filter(([r]) => r < 245.8 || r > 405.3)) {
 			const t = transport(fixState('water', { T: 647.35, rho }));
-			expect(Math.abs(t.mu! * 1e6 - Number(mu)) / Number(mu), `μ at ${rho} kg/m³`).toBeLessThan(1e-2);
+			expect(Math.abs(t.mu! * 1e6 - Number(mu)) / Number(mu), `μ at ${rho} kg/m³`).toBeLessThan(
+				1e-2
+			);
 			expect(Math.abs(t.k! * 1e3 - Number(k)) / Number(k), `λ at ${rho} kg/m³`).toBeLessThan(5e-3);
 		}
 	});
 });
 
 describe('water thermal conductivity, IAPWS R15-11', () => {
-	it('matches the release\'s verification values without the critical enhancement (Table 4), mW/(m·K)', () => {
+	it("matches the release's verification values without the critical enhancement (Table 4), mW/(m·K)", () => {
 		// IAPWS R15-11, Table 4 (λ̄2 = 0), as transcribed in python3-iapws 1.5.2 (_ThCond docstring)
 		printed(waterConductivityBackground(998, 298.15) * 1e3, '607.712868', '298.15 K, 998 kg/m³');
 		printed(waterConductivityBackground(0, 873.15) * 1e3, '79.1034659', '873.15 K, 0 kg/m³');
@@ -77,7 +90,7 @@ describe('water thermal conductivity, IAPWS R15-11', () => {
 });
 
 describe('water surface tension, IAPWS R1-76(2014)', () => {
-	it('matches the release\'s values, mN/m', () => {
+	it("matches the release's values, mN/m", () => {
 		// IAPWS R1-76(2014), as transcribed in python3-iapws 1.5.2 (_Tension docstring)
 		printed(waterSurfaceTension(300) * 1e3, '71.6859625', '300 K');
 		printed(waterSurfaceTension(450) * 1e3, '42.8914992', '450 K');
@@ -136,13 +149,13 @@ describe('transport(state): absences and IAPWS-95 states', () => {
 			expect(n2.absent[name]?.code).toBe('no-correlation');
 		}
 	});
-	it('outside the correlations\' range μ, k and Pr are absent with the range in the reason', () => {
+	it("outside the correlations' range μ, k and Pr are absent with the range in the reason", () => {
 		const hot = transport(if97State(1e6, 1500));
 		expect(hot.mu).toBeNull();
 		expect(hot.absent.k?.code).toBe('out-of-range');
 		expect(hot.absent.mu?.reason).toMatch(/1173\.15 K/);
 	});
-	it('an IAPWS-95 state gives μ and k within the two formulations\' agreement of the IF97 figure', () => {
+	it("an IAPWS-95 state gives μ and k within the two formulations' agreement of the IF97 figure", () => {
 		// the correlations are the same; only ρ, cp, cv and w differ between IAPWS-95 and IF97 (by ~1e−4 or less away from the critical point)
 		for (const [T, P] of [
 			[300, 1e5],

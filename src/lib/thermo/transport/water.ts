@@ -9,7 +9,13 @@
  * - surface tension σ (N/m), IAPWS R1-76(2014): σ = B τ^μ (1 + b τ), τ = 1 − T/Tc, on the saturation line.
  * Coefficients: water-coefficients.ts.
  */
-import { conductivityL0, conductivityL1, conductivityZetaRef, viscosityH0, viscosityH1 } from './water-coefficients.ts';
+import {
+	conductivityL0,
+	conductivityL1,
+	conductivityZetaRef,
+	viscosityH0,
+	viscosityH1
+} from './water-coefficients.ts';
 
 /** Reference constants of R12-08 and R15-11: T* = 647.096 K, ρ* = 322 kg/m³, p* = 22.064 MPa, μ* = 1e−6 Pa·s, λ* = 1e−3 W/(m·K). */
 const T_STAR = 647.096;
@@ -19,7 +25,12 @@ const P_STAR = 22.064e6;
 const R_95 = 461.51805;
 
 /** R12-08: the region where μ̄2 cannot be neglected (from memory of the release). */
-export const viscosityCriticalRegion = { Tmin: 645.91, Tmax: 650.77, rhoMin: 245.8, rhoMax: 405.3 } as const;
+export const viscosityCriticalRegion = {
+	Tmin: 645.91,
+	Tmax: 650.77,
+	rhoMin: 245.8,
+	rhoMax: 405.3
+} as const;
 
 /**
  * Viscosity of water, Pa·s, at density ρ (kg/m³) and temperature T (K): IAPWS R12-08, Eq. 10 with
@@ -39,7 +50,8 @@ export function waterViscosity(rho: number, T: number, drhodP?: number): number 
 	for (let k = 0; k < H.length; k++) sum += H[k] * x ** I[k] * y ** J[k];
 	const mu1 = Math.exp(d * sum);
 	const c = viscosityCriticalRegion;
-	const critical = drhodP !== undefined && T > c.Tmin && T < c.Tmax && rho > c.rhoMin && rho < c.rhoMax;
+	const critical =
+		drhodP !== undefined && T > c.Tmin && T < c.Tmax && rho > c.rhoMin && rho < c.rhoMax;
 	return mu0 * mu1 * (critical ? viscosityEnhancement(d, Tr, drhodP as number) : 1) * 1e-6;
 }
 
@@ -56,7 +68,11 @@ function viscosityEnhancement(d: number, Tr: number, drhodP: number): number {
 	let Y: number;
 	if (xi <= 0.3817016416) {
 		// Eq. 15
-		Y = (qc / 5) * xi * (qd * xi) ** 5 * (1 - qc * xi + (qc * xi) ** 2 - (765 / 504) * (qd * xi) ** 2);
+		Y =
+			(qc / 5) *
+			xi *
+			(qd * xi) ** 5 *
+			(1 - qc * xi + (qc * xi) ** 2 - (765 / 504) * (qd * xi) ** 2);
 	} else {
 		const psiD = Math.acos((1 + qd * qd * xi * xi) ** -0.5); // Eq. 17
 		const w = Math.sqrt(Math.abs((qc * xi - 1) / (qc * xi + 1))) * Math.tan(psiD / 2); // Eq. 19
@@ -102,7 +118,14 @@ function zetaRef(d: number): number {
  * Eqs. 20–22 (ξ0 = 0.13 nm, Γ0 = 0.06, ν = 0.630, γ = 1.239, 1/q̄_D = 0.40 nm) and ζ̄(T̄_R) from Eq. 25.
  * Needs the state's cp, cp/cv, (∂ρ/∂p)_T (kg/m³ per Pa) and the viscosity μ (Pa·s).
  */
-export function waterConductivity(rho: number, T: number, cp: number, cv: number, drhodP: number, mu: number): number {
+export function waterConductivity(
+	rho: number,
+	T: number,
+	cp: number,
+	cv: number,
+	drhodP: number,
+	mu: number
+): number {
 	const background = waterConductivityBackground(rho, T);
 	const d = rho / RHO_STAR;
 	const Tr = T / T_STAR;
@@ -112,7 +135,11 @@ export function waterConductivity(rho: number, T: number, cp: number, cv: number
 	const y = xi / 0.4;
 	if (y < 1.2e-7) return background;
 	const kappa = cp / cv;
-	const Z = (2 / (Math.PI * y)) * ((1 - 1 / kappa) * Math.atan(y) + y / kappa - (1 - Math.exp(-1 / (1 / y + (y * y) / (3 * d * d)))));
+	const Z =
+		(2 / (Math.PI * y)) *
+		((1 - 1 / kappa) * Math.atan(y) +
+			y / kappa -
+			(1 - Math.exp(-1 / (1 / y + (y * y) / (3 * d * d)))));
 	const k2 = ((177.8514 * d * (cp / R_95) * Tr) / (mu / 1e-6)) * Z;
 	return background + k2 * 1e-3;
 }

@@ -1,6 +1,21 @@
-import { fixState, saturationCurve, getFluid, saturationAtP, saturationAtT, computeLeg } from '$lib/thermo';
+import {
+	fixState,
+	saturationCurve,
+	getFluid,
+	saturationAtP,
+	saturationAtT,
+	computeLeg
+} from '$lib/thermo';
 import type { FluidInfo, Inputs, Process, State } from '$lib/thermo/types';
-import type { ChartLeg, ChartState, CurvePoint, DesignLimits, Isoline, MeasuredTrace, SaturationCurve } from '$lib/charts/types';
+import type {
+	ChartLeg,
+	ChartState,
+	CurvePoint,
+	DesignLimits,
+	Isoline,
+	MeasuredTrace,
+	SaturationCurve
+} from '$lib/charts/types';
 import type { PageLoad } from './$types';
 
 /**
@@ -73,7 +88,14 @@ function isWet(s: State) {
 /** One leg from the engine, starting at the previous state. */
 function legOf(fluid: string, start: State, spec: _LegSpec) {
 	const target = spec.process === 'isochoric' ? { T: spec.target.T! } : { v: spec.target.v! };
-	const leg = computeLeg({ fluid, start: { T: start.T, v: start.v }, process: spec.process, target, n: spec.n, samples: SAMPLES });
+	const leg = computeLeg({
+		fluid,
+		start: { T: start.T, v: start.v },
+		process: spec.process,
+		target,
+		n: spec.n,
+		samples: SAMPLES
+	});
 	return { points: leg.points, end: leg.end, crossings: leg.crossings };
 }
 
@@ -92,7 +114,10 @@ function cachedLeg(fluid: string, start: State, spec: _LegSpec) {
 
 export { tryFix as _fix };
 
-export function _computePath(scn: _Scenario, labels = true): { states: ChartState[]; legs: ChartLeg[] } {
+export function _computePath(
+	scn: _Scenario,
+	labels = true
+): { states: ChartState[]; legs: ChartLeg[] } {
 	const first = tryFix(scn.fluid, scn.start);
 	if (!first) throw new Error('The start state cannot be fixed there.');
 	const states: ChartState[] = [{ id: 's1', label: labels ? 'S1' : '', state: first }];
@@ -101,7 +126,15 @@ export function _computePath(scn: _Scenario, labels = true): { states: ChartStat
 	scn.legs.forEach((spec, i) => {
 		const { points, end, crossings } = cachedLeg(scn.fluid, cur, spec);
 		const id = `s${i + 2}`;
-		legs.push({ id: `l${i + 1}`, process: spec.process, points, crossings, from: states[i].id, to: id, n: spec.n });
+		legs.push({
+			id: `l${i + 1}`,
+			process: spec.process,
+			points,
+			crossings,
+			from: states[i].id,
+			to: id,
+			n: spec.n
+		});
 		states.push({ id, label: `S${i + 2}`, state: end });
 		cur = end;
 	});
@@ -161,7 +194,10 @@ export interface _Demo {
 	traces: MeasuredTrace[];
 }
 
-const DEMO_LEVELS: Record<string, { P: number[]; T: number[]; limits: { dp: number; rsp: number; dt: number; mt: number } }> = {
+const DEMO_LEVELS: Record<
+	string,
+	{ P: number[]; T: number[]; limits: { dp: number; rsp: number; dt: number; mt: number } }
+> = {
 	water: {
 		P: [2e3, 2e4, 2e5, 2e6, 20e6],
 		T: [323.15, 373.15, 423.15, 473.15, 523.15, 573.15, 623.15],
@@ -182,10 +218,22 @@ export function _demo(fluid: string, path: { legs: ChartLeg[] }): _Demo {
 	const lv = DEMO_LEVELS[fluid];
 	const atm = 101325;
 	const limits: DesignLimits = {
-		designPressure: { value: lv.limits.dp + atm, points: _isobar(info, lv.limits.dp + atm, vRange).points },
-		reliefSetPressure: { value: lv.limits.rsp + atm, points: _isobar(info, lv.limits.rsp + atm, vRange).points },
-		designTemperature: { value: lv.limits.dt, points: _isotherm(info, lv.limits.dt, vRange).points },
-		minimumTemperature: { value: lv.limits.mt, points: _isotherm(info, lv.limits.mt, vRange).points }
+		designPressure: {
+			value: lv.limits.dp + atm,
+			points: _isobar(info, lv.limits.dp + atm, vRange).points
+		},
+		reliefSetPressure: {
+			value: lv.limits.rsp + atm,
+			points: _isobar(info, lv.limits.rsp + atm, vRange).points
+		},
+		designTemperature: {
+			value: lv.limits.dt,
+			points: _isotherm(info, lv.limits.dt, vRange).points
+		},
+		minimumTemperature: {
+			value: lv.limits.mt,
+			points: _isotherm(info, lv.limits.mt, vRange).points
+		}
 	};
 	// a logger on the kettle during the sealed heat-up: T and P with a little noise, v filled in by the engine
 	let seed = 7;

@@ -6,7 +6,15 @@ import { requireOutbox } from '../guard';
 export const load: PageServerLoad = async (event) => {
 	const me = await requireOutbox(event);
 	const messages = await listMailFor(getDb(), me.address, me.since);
-	return { address: me.address, messages: messages.map((m) => ({ id: m.id, to: m.to_header, subject: m.subject, receivedAt: m.received_at })) };
+	return {
+		address: me.address,
+		messages: messages.map((m) => ({
+			id: m.id,
+			to: m.to_header,
+			subject: m.subject,
+			receivedAt: m.received_at
+		}))
+	};
 };
 
 export const actions: Actions = {

@@ -9,7 +9,12 @@ import { getMembership } from '$lib/server/db/memberships';
 export const load: PageServerLoad = async ({ params, locals }) => {
 	const db = getDb();
 	const view = await inspectInvite(db, params.token);
-	if (!view) error(404, { code: 'link-invalid', message: 'This invitation link is not valid. Check that you copied all of it, or ask for a new invitation.' });
+	if (!view)
+		error(404, {
+			code: 'link-invalid',
+			message:
+				'This invitation link is not valid. Check that you copied all of it, or ask for a new invitation.'
+		});
 	const member = locals.user ? !!(await getMembership(db, view.team.id, locals.user.id)) : false;
 	return {
 		token: params.token,

@@ -7,7 +7,13 @@ import { capabilitiesOf } from '$lib/roles';
 export const load: LayoutServerLoad = async (event) => {
 	const access = await requireTeam(event, event.params.team, 'read');
 	return {
-		team: { id: access.team.id, slug: access.team.slug, name: access.team.name, description: access.team.description, createdAt: access.team.created_at },
+		team: {
+			id: access.team.id,
+			slug: access.team.slug,
+			name: access.team.name,
+			description: access.team.description,
+			createdAt: access.team.created_at
+		},
 		role: access.role,
 		capabilities: [...capabilitiesOf(access.role)]
 	};

@@ -14,7 +14,10 @@ export const load: PageServerLoad = async (event) => {
 	const q = (event.url.searchParams.get('q') ?? '').trim().slice(0, 200);
 	const problem = controlCharProblem(q, 'The search text');
 	if (problem) error(400, { code: 'invalid-query', message: problem });
-	const [{ sheets, total }, all] = await Promise.all([listTeamSheets(getDb(), access, { q, limit: 100 }), countSheets(getDb(), access.team.id)]);
+	const [{ sheets, total }, all] = await Promise.all([
+		listTeamSheets(getDb(), access, { q, limit: 100 }),
+		countSheets(getDb(), access.team.id)
+	]);
 	return {
 		joined: event.url.searchParams.has('joined'),
 		members: members.map((m) => ({ id: m.user_id, name: m.name, role: m.role })),

@@ -7,5 +7,14 @@ import { legRequestSchema } from '$lib/server/compute/schemas';
 export const POST: RequestHandler = computePost(async (event) => {
 	const b = await readBody(event.request, legRequestSchema);
 	chargeWork(event, b.samples ?? SAMPLES_DEFAULT);
-	return { leg: computeLeg({ fluid: b.fluid, start: b.start, process: b.process as Process, target: b.target, n: b.n, samples: b.samples }) };
+	return {
+		leg: computeLeg({
+			fluid: b.fluid,
+			start: b.start,
+			process: b.process as Process,
+			target: b.target,
+			n: b.n,
+			samples: b.samples
+		})
+	};
 });

@@ -10,6 +10,10 @@ import { stateRequestSchema } from '$lib/server/compute/schemas';
  */
 export const POST: RequestHandler = computePost(async ({ request }) => {
 	const body = await readBody(request, stateRequestSchema);
-	const state = fixState(body.fluid, body.inputs, { hint: body.hint, near: body.near, window: body.window });
+	const state = fixState(body.fluid, body.inputs, {
+		hint: body.hint,
+		near: body.near,
+		window: body.window
+	});
 	return { state, extras: stateExtras(state), transport: transport(state) };
 });

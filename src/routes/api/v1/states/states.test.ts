@@ -6,10 +6,23 @@
 import { describe, expect, it } from 'vitest';
 import { POST } from './+server';
 
-async function post(body: unknown, query = ''): Promise<{ status: number; json: Record<string, any> }> {
+async function post(
+	body: unknown,
+	query = ''
+): Promise<{ status: number; json: Record<string, any> }> {
 	const url = new URL(`http://127.0.0.1/api/v1/states${query}`);
-	const request = new Request(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
-	const event = { request, url, getClientAddress: () => '127.0.0.9', params: {}, locals: {} } as unknown as Parameters<typeof POST>[0];
+	const request = new Request(url, {
+		method: 'POST',
+		headers: { 'content-type': 'application/json' },
+		body: JSON.stringify(body)
+	});
+	const event = {
+		request,
+		url,
+		getClientAddress: () => '127.0.0.9',
+		params: {},
+		locals: {}
+	} as unknown as Parameters<typeof POST>[0];
 	const res = await POST(event);
 	return { status: res.status, json: await res.json() };
 }
@@ -31,10 +44,18 @@ describe('POST /api/v1/states', () => {
 		const byNear = await post({ fluid: 'water', inputs: { T: 275, s: ref.s }, near: { P: 1e6 } });
 		expect(byNear.status).toBe(200);
 		expect(Math.abs(byNear.json.state.P - 1e6) / 1e6).toBeLessThan(1e-3);
-		const byWindow = await post({ fluid: 'water', inputs: { T: 275, s: ref.s }, window: { Pmin: 1e5, Pmax: 1e7 } });
+		const byWindow = await post({
+			fluid: 'water',
+			inputs: { T: 275, s: ref.s },
+			window: { Pmin: 1e5, Pmax: 1e7 }
+		});
 		expect(byWindow.status).toBe(200);
 		expect(Math.abs(byWindow.json.state.P - 1e6) / 1e6).toBeLessThan(1e-3);
-		const none = await post({ fluid: 'water', inputs: { T: 275, s: ref.s }, window: { Tmin: 400 } });
+		const none = await post({
+			fluid: 'water',
+			inputs: { T: 275, s: ref.s },
+			window: { Tmin: 400 }
+		});
 		expect(none.status).toBe(422);
 		expect(none.json.error.code).toBe('outside-window');
 	});
@@ -43,10 +64,18 @@ describe('POST /api/v1/states', () => {
 		const field = await post({ fluid: 'water', inputs: { T: 300, P: 1e5 }, units: 'us' });
 		expect(field.status).toBe(400);
 		expect(field.json.error.message).toMatch(/"units"/);
-		const inNear = await post({ fluid: 'water', inputs: { T: 300, P: 1e5 }, near: { T: 300, Q: 1 } });
+		const inNear = await post({
+			fluid: 'water',
+			inputs: { T: 300, P: 1e5 },
+			near: { T: 300, Q: 1 }
+		});
 		expect(inNear.status).toBe(400);
 		expect(inNear.json.error.message).toMatch(/"Q"/);
-		const empty = await post({ fluid: 'water', inputs: { T: 300, P: 1e5 }, window: { Pmin: 2e5, Pmax: 1e5 } });
+		const empty = await post({
+			fluid: 'water',
+			inputs: { T: 300, P: 1e5 },
+			window: { Pmin: 2e5, Pmax: 1e5 }
+		});
 		expect(empty.status).toBe(400);
 		const query = await post({ fluid: 'water', inputs: { T: 300, P: 1e5 } }, '?units=us&x=1');
 		expect(query.status).toBe(400);

@@ -17,12 +17,20 @@ afterAll(() => {
 
 interface Answer {
 	state: { phase: string };
-	transport: { mu: number | null; k: number | null; Pr: number | null; sigma: number | null; absent: Record<string, { code: string; reason: string }> };
+	transport: {
+		mu: number | null;
+		k: number | null;
+		Pr: number | null;
+		sigma: number | null;
+		absent: Record<string, { code: string; reason: string }>;
+	};
 }
 
 describe('POST /api/v1/states answers carry transport', () => {
 	it('liquid water: μ, k and Pr; σ absent off the saturation line', async () => {
-		const r = await callRoute(states, '/api/v1/states', { body: JSON.stringify({ fluid: 'water', inputs: { T: 298.15, P: 101325 } }) });
+		const r = await callRoute(states, '/api/v1/states', {
+			body: JSON.stringify({ fluid: 'water', inputs: { T: 298.15, P: 101325 } })
+		});
 		expect(r.status).toBe(200);
 		const { transport } = r.body as Answer;
 		// python3-iapws 1.5.2 (Debian), IAPWS95(T=298.15, P=0.101325): mu, k, Prandt (its k adds the scientific
@@ -34,12 +42,20 @@ describe('POST /api/v1/states answers carry transport', () => {
 		expect(transport.absent.sigma.code).toBe('not-on-saturation-line');
 	});
 	it('a wet state: σ given, μ absent with a reason; a fluid without correlations: all absent', async () => {
-		const wet = (await callRoute(states, '/api/v1/states', { body: JSON.stringify({ fluid: 'water', inputs: { T: 450, x: 0.5 } }) })).body as Answer;
+		const wet = (
+			await callRoute(states, '/api/v1/states', {
+				body: JSON.stringify({ fluid: 'water', inputs: { T: 450, x: 0.5 } })
+			})
+		).body as Answer;
 		// IAPWS R1-76(2014), as transcribed in python3-iapws 1.5.2 (_Tension docstring): σ(450 K) = 42.8914992 mN/m
 		expect(Math.abs(wet.transport.sigma! - 0.0428914992)).toBeLessThan(1e-10);
 		expect(wet.transport.mu).toBeNull();
 		expect(wet.transport.absent.mu.code).toBe('two-phase');
-		const n2 = (await callRoute(states, '/api/v1/states', { body: JSON.stringify({ fluid: 'nitrogen', inputs: { T: 300, P: 1e5 } }) })).body as Answer;
+		const n2 = (
+			await callRoute(states, '/api/v1/states', {
+				body: JSON.stringify({ fluid: 'nitrogen', inputs: { T: 300, P: 1e5 } })
+			})
+		).body as Answer;
 		expect(n2.transport.k).toBeNull();
 		expect(n2.transport.absent.k.code).toBe('no-correlation');
 	});

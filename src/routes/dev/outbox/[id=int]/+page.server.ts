@@ -10,6 +10,15 @@ export const load: PageServerLoad = async (event) => {
 	const m = await getMailFor(getDb(), Number(event.params.id), me.address, me.since);
 	if (!m) error(404, { code: 'not-found', message: 'No such message in your outbox.' });
 	return {
-		message: { id: m.id, from: m.from_header, to: m.to_header, subject: m.subject, text: m.text, hasHtml: m.html !== null, raw: m.raw, receivedAt: m.received_at }
+		message: {
+			id: m.id,
+			from: m.from_header,
+			to: m.to_header,
+			subject: m.subject,
+			text: m.text,
+			hasHtml: m.html !== null,
+			raw: m.raw,
+			receivedAt: m.received_at
+		}
 	};
 };

@@ -9,7 +9,14 @@ import { listMembers } from '$lib/server/db/memberships';
 import { listPendingInvites } from '$lib/server/db/invites';
 import { listApiTokens } from '$lib/server/db/api-tokens';
 import { listTeamEvents } from '$lib/server/db/team-events';
-import { cancelInvite, changeMemberRole, inviteMember, leaveTeam, removeTeamMember, renameTeam } from '$lib/server/teams';
+import {
+	cancelInvite,
+	changeMemberRole,
+	inviteMember,
+	leaveTeam,
+	removeTeamMember,
+	renameTeam
+} from '$lib/server/teams';
 import { createTeamToken, grantableTokenRoles, revokeTeamToken } from '$lib/server/api-tokens';
 
 export const load: PageServerLoad = async (event) => {
@@ -29,7 +36,14 @@ export const load: PageServerLoad = async (event) => {
 			since: m.created_at
 		})),
 		invites: manage
-			? (await listPendingInvites(db, access.team.id)).map((i) => ({ id: i.id, email: i.email, role: i.role, by: i.invited_by_name, createdAt: i.created_at, expiresAt: i.expires_at }))
+			? (await listPendingInvites(db, access.team.id)).map((i) => ({
+					id: i.id,
+					email: i.email,
+					role: i.role,
+					by: i.invited_by_name,
+					createdAt: i.created_at,
+					expiresAt: i.expires_at
+				}))
 			: [],
 		tokens: tokens.map((t) => ({
 			id: t.id,
@@ -51,12 +65,17 @@ const inviteSchema = z.object({ email: fields.email, role: fields.role });
 const idSchema = z.object({ id: fields.id });
 const roleSchema = z.object({ id: fields.id, role: fields.role });
 const tokenSchema = z.object({ name: fields.tokenName, role: fields.role });
-const leaveSchema = z.object({ confirm: z.literal('yes', { error: 'Tick the box to confirm you want to leave.' }) });
+const leaveSchema = z.object({
+	confirm: z.literal('yes', { error: 'Tick the box to confirm you want to leave.' })
+});
 
 export const actions: Actions = {
 	rename: async (event) => {
 		const access = await requireTeam(event, event.params.team, 'team:manage');
-		const parsed = parseForm(renameSchema, await readFormData(event.request), ['name', 'description']);
+		const parsed = parseForm(renameSchema, await readFormData(event.request), [
+			'name',
+			'description'
+		]);
 		if (!parsed.ok) return parsed.failure;
 		return runAction(parsed.values, async () => {
 			await renameTeam(getDb(), access, parsed.data);
@@ -71,7 +90,10 @@ export const actions: Actions = {
 			parsed.values,
 			async () => {
 				const r = await inviteMember(getDb(), access, parsed.data, flowContext(event));
-				return { done: 'invite' as const, invited: { email: r.invite.email, role: r.invite.role, url: r.url, mailed: r.mailed } };
+				return {
+					done: 'invite' as const,
+					invited: { email: r.invite.email, role: r.invite.role, url: r.url, mailed: r.mailed }
+				};
 			},
 			event
 		);
@@ -109,7 +131,10 @@ export const actions: Actions = {
 		if (!parsed.ok) return parsed.failure;
 		return runAction(parsed.values, async () => {
 			const { token, row } = await createTeamToken(getDb(), access, parsed.data);
-			return { done: 'createToken' as const, created: { value: token, name: row.name, role: row.role } };
+			return {
+				done: 'createToken' as const,
+				created: { value: token, name: row.name, role: row.role }
+			};
 		});
 	},
 	revokeToken: async (event) => {

@@ -1,7 +1,11 @@
 import { ROLE_LABEL, isRole } from '$lib/roles';
 
 /** One line of the team activity list. */
-export function describeEvent(e: { actor_label: string; kind: string; detail: Record<string, unknown> }): string {
+export function describeEvent(e: {
+	actor_label: string;
+	kind: string;
+	detail: Record<string, unknown>;
+}): string {
 	const d = e.detail;
 	const role = (r: unknown) => (isRole(r) ? ROLE_LABEL[r].toLowerCase() : String(r));
 	const who = e.actor_label;

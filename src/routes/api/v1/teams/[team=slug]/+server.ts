@@ -7,7 +7,12 @@ import { capabilitiesOf } from '$lib/roles';
 export const GET: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'read');
 	return {
-		team: { slug: access.team.slug, name: access.team.name, description: access.team.description, createdAt: access.team.created_at },
+		team: {
+			slug: access.team.slug,
+			name: access.team.name,
+			description: access.team.description,
+			createdAt: access.team.created_at
+		},
 		role: access.role,
 		capabilities: capabilitiesOf(access.role)
 	};

@@ -7,7 +7,17 @@ import { isAppError } from '$lib/server/errors';
 import { parseForm, readFormData, runAction } from '$lib/server/forms';
 import { readSheet, renameTeamSheet, sheetDeletion, titleSchema } from '$lib/server/sheets';
 import { sheetReviewData } from '$lib/server/review-pages';
-import { computePath, fixState, getFluid, listFluids, saturationCurve, stateExtras, ThermoError, type PathResult, type SaturationCurve } from '$lib/thermo';
+import {
+	computePath,
+	fixState,
+	getFluid,
+	listFluids,
+	saturationCurve,
+	stateExtras,
+	ThermoError,
+	type PathResult,
+	type SaturationCurve
+} from '$lib/thermo';
 import { engineSpec, labelIds, startOnlyResult } from '$lib/sheets/doc';
 import type { SheetDoc } from '$lib/sheets/types';
 
@@ -37,7 +47,11 @@ function compute(doc: SheetDoc): { result: PathResult | null; resultError: strin
 		}
 		return { result: computePath(engineSpec(doc)), resultError: null };
 	} catch (e) {
-		if (e instanceof ThermoError) return { result: null, resultError: labelIds(`${e.message}${e.hint ? ` ${e.hint}` : ''}`, doc.spec.legs) };
+		if (e instanceof ThermoError)
+			return {
+				result: null,
+				resultError: labelIds(`${e.message}${e.hint ? ` ${e.hint}` : ''}`, doc.spec.legs)
+			};
 		throw e;
 	}
 }

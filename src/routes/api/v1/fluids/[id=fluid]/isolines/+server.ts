@@ -12,5 +12,10 @@ export const GET: RequestHandler = computeGet((event) => {
 	const q = readQuery(event.url, isolineQuerySchema);
 	chargeWork(event, q.values.length * q.points);
 	const kind = q.kind as keyof typeof UNIT;
-	return { fluid: fluid.id, kind, unit: UNIT[kind], lines: isolines(fluid.id, kind, q.values, q.points) };
+	return {
+		fluid: fluid.id,
+		kind,
+		unit: UNIT[kind],
+		lines: isolines(fluid.id, kind, q.values, q.points)
+	};
 });

@@ -7,5 +7,13 @@ import { listMembers } from '$lib/server/db/memberships';
 export const GET: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'read');
 	const members = await listMembers(getDb(), access.team.id);
-	return { members: members.map((m) => ({ id: m.user_id, name: m.name, email: m.email, role: m.role, since: m.created_at })) };
+	return {
+		members: members.map((m) => ({
+			id: m.user_id,
+			name: m.name,
+			email: m.email,
+			role: m.role,
+			since: m.created_at
+		}))
+	};
 });

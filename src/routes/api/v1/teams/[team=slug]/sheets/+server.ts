@@ -18,19 +18,38 @@ import { plainText } from '$lib/plain-text';
 
 const listQuery = z.strictObject(
 	{
-		q: plainText('The search text (q)').max(200, { error: 'q must be at most 200 characters.' }).optional(),
-		limit: z.coerce.number({ error: 'limit must be a whole number.' }).int({ error: 'limit must be a whole number.' }).min(1, { error: 'limit must be 1 to 200.' }).max(200, { error: 'limit must be 1 to 200.' }).optional(),
-		offset: z.coerce.number({ error: 'offset must be a whole number.' }).int({ error: 'offset must be a whole number.' }).min(0, { error: 'offset must be 0 or more.' }).optional()
+		q: plainText('The search text (q)')
+			.max(200, { error: 'q must be at most 200 characters.' })
+			.optional(),
+		limit: z.coerce
+			.number({ error: 'limit must be a whole number.' })
+			.int({ error: 'limit must be a whole number.' })
+			.min(1, { error: 'limit must be 1 to 200.' })
+			.max(200, { error: 'limit must be 1 to 200.' })
+			.optional(),
+		offset: z.coerce
+			.number({ error: 'offset must be a whole number.' })
+			.int({ error: 'offset must be a whole number.' })
+			.min(0, { error: 'offset must be 0 or more.' })
+			.optional()
 	},
 	{ error: 'Allowed query parameters: q, limit, offset.' }
 );
 
 const createBody = z.union(
 	[
-		z.strictObject({ title: z.string({ error: 'title must be text.' }), doc: z.unknown().refine((d) => d !== undefined, { message: 'doc is required.' }) }),
-		z.strictObject({ example: plainText('example', 'line', 'example must be a worked example id.'), title: z.string({ error: 'title must be text.' }).optional() })
+		z.strictObject({
+			title: z.string({ error: 'title must be text.' }),
+			doc: z.unknown().refine((d) => d !== undefined, { message: 'doc is required.' })
+		}),
+		z.strictObject({
+			example: plainText('example', 'line', 'example must be a worked example id.'),
+			title: z.string({ error: 'title must be text.' }).optional()
+		})
 	],
-	{ error: 'Send { "title", "doc" } (a sheet document or a path spec), or { "example", "title"? }.' }
+	{
+		error: 'Send { "title", "doc" } (a sheet document or a path spec), or { "example", "title"? }.'
+	}
 );
 
 export const GET: RequestHandler = apiRoute(async (event) => {
@@ -42,6 +61,9 @@ export const GET: RequestHandler = apiRoute(async (event) => {
 export const POST: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'sheet:edit');
 	const body = await readJson(event.request, createBody);
-	const sheet = 'example' in body ? await createFromExample(getDb(), access, body.example, body.title) : await createSheet(getDb(), access, { title: body.title, doc: body.doc });
+	const sheet =
+		'example' in body
+			? await createFromExample(getDb(), access, body.example, body.title)
+			: await createSheet(getDb(), access, { title: body.title, doc: body.doc });
 	return json({ sheet }, { status: 201 });
 });

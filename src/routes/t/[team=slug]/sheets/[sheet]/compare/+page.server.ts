@@ -14,8 +14,16 @@ export const load: PageServerLoad = async (event) => {
 		const q = event.url.searchParams;
 		const ctx = await sheetContext(getDb(), access, event.params.sheet);
 		const latest = ctx.latest?.number ?? null;
-		const a = q.get('a') ? parseCompareSide(q.get('a'), 'a') : latest && latest > 1 ? latest - 1 : latest ?? 'draft';
-		const b = q.get('b') ? parseCompareSide(q.get('b'), 'b') : latest && latest > 1 ? latest : 'draft';
+		const a = q.get('a')
+			? parseCompareSide(q.get('a'), 'a')
+			: latest && latest > 1
+				? latest - 1
+				: (latest ?? 'draft');
+		const b = q.get('b')
+			? parseCompareSide(q.get('b'), 'b')
+			: latest && latest > 1
+				? latest
+				: 'draft';
 		return await comparePageData(getDb(), access, event.params.sheet, a, b);
 	} catch (e) {
 		if (isAppError(e)) error(e.status, { code: e.code, message: e.message });

@@ -11,7 +11,11 @@ export const load: PageServerLoad = async (event) => {
 	try {
 		const ctx = await sheetContext(getDb(), access, event.params.sheet);
 		const rev = revisionParam(event.url.searchParams.get('rev'), ctx.latest?.number ?? null);
-		return { ...(await printPageData(getDb(), access, event.params.sheet, rev)), paper: event.url.searchParams.get('paper') === 'letter' ? ('letter' as const) : ('a4' as const) };
+		return {
+			...(await printPageData(getDb(), access, event.params.sheet, rev)),
+			paper:
+				event.url.searchParams.get('paper') === 'letter' ? ('letter' as const) : ('a4' as const)
+		};
 	} catch (e) {
 		if (isAppError(e)) error(e.status, { code: e.code, message: e.message });
 		throw e;

@@ -19,7 +19,13 @@ export const GET: RequestHandler = apiRoute(async (event) => {
 	return { sheet: await readSheet(getDb(), access, event.params.sheet) };
 });
 
-const patchBody = z.strictObject({ title: z.string({ error: 'title must be text.' }) }, { error: 'Send { "title": "…" }; only the title can be changed here (the draft is saved with PUT …/draft).' });
+const patchBody = z.strictObject(
+	{ title: z.string({ error: 'title must be text.' }) },
+	{
+		error:
+			'Send { "title": "…" }; only the title can be changed here (the draft is saved with PUT …/draft).'
+	}
+);
 
 export const PATCH: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'sheet:edit');

@@ -10,7 +10,12 @@ import { revisionPageData } from '$lib/server/review-pages';
 export const load: PageServerLoad = async (event) => {
 	const access = await requireTeam(event, event.params.team, 'read');
 	try {
-		return await revisionPageData(getDb(), access, event.params.sheet, parseRevisionNumber(event.params.number));
+		return await revisionPageData(
+			getDb(),
+			access,
+			event.params.sheet,
+			parseRevisionNumber(event.params.number)
+		);
 	} catch (e) {
 		if (isAppError(e)) error(e.status, { code: e.code, message: e.message });
 		throw e;

@@ -16,7 +16,9 @@ import { DraftConflictError, saveDraft } from '$lib/server/sheets';
 const body = z.strictObject(
 	{
 		version: z.number({ error: 'version must be the whole number the sheet was read with.' }),
-		doc: z.unknown().refine((d) => d !== undefined, { message: 'doc is required: the sheet document to save.' })
+		doc: z
+			.unknown()
+			.refine((d) => d !== undefined, { message: 'doc is required: the sheet document to save.' })
 	},
 	{ error: 'Send { "version": n, "doc": { … } }.' }
 );
@@ -25,9 +27,13 @@ export const PUT: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'sheet:edit');
 	const input = await readJson(event.request, body);
 	try {
-		return await saveDraft(getDb(), access, event.params.sheet, { version: input.version, doc: input.doc });
+		return await saveDraft(getDb(), access, event.params.sheet, {
+			version: input.version,
+			doc: input.doc
+		});
 	} catch (e) {
-		if (e instanceof DraftConflictError) return jsonError(409, e.code, e.message, { current: e.current });
+		if (e instanceof DraftConflictError)
+			return jsonError(409, e.code, e.message, { current: e.current });
 		throw e;
 	}
 });

@@ -25,9 +25,28 @@ export const GET: RequestHandler = apiRoute(async (event) => {
 
 const body = z.strictObject(
 	{
-		anchor: z.unknown().refine((a) => a !== undefined, { message: 'anchor is required: { "kind": "sheet" }, { "kind": "leg", "legId": "…" } or { "kind": "state", "at": "…" }.' }),
+		anchor: z
+			.unknown()
+			.refine((a) => a !== undefined, {
+				message:
+					'anchor is required: { "kind": "sheet" }, { "kind": "leg", "legId": "…" } or { "kind": "state", "at": "…" }.'
+			}),
 		body: z.string({ error: 'body must be the text of the note.' }),
-		revision: z.number({ error: 'revision must be the number of the revision you are reading (1, 2, …), or null for the working draft.' }).int({ error: 'revision must be the number of the revision you are reading (1, 2, …), or null for the working draft.' }).min(1, { error: 'revision must be the number of the revision you are reading (1, 2, …), or null for the working draft.' }).nullable().optional()
+		revision: z
+			.number({
+				error:
+					'revision must be the number of the revision you are reading (1, 2, …), or null for the working draft.'
+			})
+			.int({
+				error:
+					'revision must be the number of the revision you are reading (1, 2, …), or null for the working draft.'
+			})
+			.min(1, {
+				error:
+					'revision must be the number of the revision you are reading (1, 2, …), or null for the working draft.'
+			})
+			.nullable()
+			.optional()
 	},
 	{ error: 'Send { "anchor": {…}, "body": "…" } and optionally "revision".' }
 );
@@ -35,6 +54,12 @@ const body = z.strictObject(
 export const POST: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'note:write');
 	const input = await readJson(event.request, body);
-	const note = await createNote(getDb(), access, event.params.sheet, { anchor: input.anchor as never, body: input.body, revision: input.revision ?? null }, flowContext(event));
+	const note = await createNote(
+		getDb(),
+		access,
+		event.params.sheet,
+		{ anchor: input.anchor as never, body: input.body, revision: input.revision ?? null },
+		flowContext(event)
+	);
 	return json({ note }, { status: 201 });
 });

@@ -28,11 +28,32 @@ export const GET: RequestHandler = apiRoute(async (event) => {
 const body = z.strictObject(
 	{
 		message: z.string({ error: 'message is required: say what changed in this revision.' }),
-		baseRevision: z.number({ error: 'baseRevision must be the revision number the draft started from, or null.' }).int().nullable(),
+		baseRevision: z
+			.number({
+				error: 'baseRevision must be the revision number the draft started from, or null.'
+			})
+			.int()
+			.nullable(),
 		doc: z.unknown().optional(),
-		draftVersion: z.number({ error: "draftVersion must be the working draft's version (a whole number from 1, as GET …/sheets/{id} returns it)." }).int({ error: "draftVersion must be the working draft's version (a whole number from 1, as GET …/sheets/{id} returns it)." }).min(1, { error: "draftVersion must be the working draft's version (a whole number from 1, as GET …/sheets/{id} returns it)." }).optional()
+		draftVersion: z
+			.number({
+				error:
+					"draftVersion must be the working draft's version (a whole number from 1, as GET …/sheets/{id} returns it)."
+			})
+			.int({
+				error:
+					"draftVersion must be the working draft's version (a whole number from 1, as GET …/sheets/{id} returns it)."
+			})
+			.min(1, {
+				error:
+					"draftVersion must be the working draft's version (a whole number from 1, as GET …/sheets/{id} returns it)."
+			})
+			.optional()
 	},
-	{ error: 'Send { "message": "…", "baseRevision": n | null } and optionally "doc" or "draftVersion".' }
+	{
+		error:
+			'Send { "message": "…", "baseRevision": n | null } and optionally "doc" or "draftVersion".'
+	}
 );
 
 export const POST: RequestHandler = apiRoute(async (event) => {
@@ -42,8 +63,10 @@ export const POST: RequestHandler = apiRoute(async (event) => {
 		const revision = await saveRevision(getDb(), access, event.params.sheet, input);
 		return json({ revision }, { status: 201 });
 	} catch (e) {
-		if (e instanceof RevisionConflictError) return jsonError(409, e.code, e.message, { latest: e.latest, yours: e.yours });
-		if (e instanceof DraftConflictError) return jsonError(409, e.code, e.message, { current: e.current });
+		if (e instanceof RevisionConflictError)
+			return jsonError(409, e.code, e.message, { latest: e.latest, yours: e.yours });
+		if (e instanceof DraftConflictError)
+			return jsonError(409, e.code, e.message, { current: e.current });
 		throw e;
 	}
 });

@@ -21,7 +21,8 @@ import { listTraces, readUpload, TraceRefusedError, uploadTrace } from '$lib/ser
 export const GET: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'read');
 	const points = event.url.searchParams.get('points') ?? 'none';
-	if (points !== 'none' && points !== 'chart' && points !== 'all') throw new AppError(400, 'invalid-points', 'points must be none, chart or all.');
+	if (points !== 'none' && points !== 'chart' && points !== 'all')
+		throw new AppError(400, 'invalid-points', 'points must be none, chart or all.');
 	return { traces: await listTraces(getDb(), access, event.params.sheet, { points }) };
 });
 
@@ -32,7 +33,11 @@ export const POST: RequestHandler = apiRoute(async (event) => {
 		const { points, ...trace } = await uploadTrace(getDb(), access, event.params.sheet, input);
 		return json({ trace: { ...trace, points: points.length } }, { status: 201 });
 	} catch (e) {
-		if (e instanceof TraceRefusedError) return jsonError(e.status, e.code, e.message, { rejected: e.rejected, rejectedCount: e.rejectedCount });
+		if (e instanceof TraceRefusedError)
+			return jsonError(e.status, e.code, e.message, {
+				rejected: e.rejected,
+				rejectedCount: e.rejectedCount
+			});
 		throw e;
 	}
 });

@@ -14,13 +14,26 @@ import { getNote, noteContextOf, setNoteState } from '$lib/server/notes';
 
 export const GET: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'read');
-	return { note: await getNote(getDb(), access, event.params.sheet, event.params.note, noteContextOf(event.url)) };
+	return {
+		note: await getNote(
+			getDb(),
+			access,
+			event.params.sheet,
+			event.params.note,
+			noteContextOf(event.url)
+		)
+	};
 });
 
-const patch = z.strictObject({ resolved: z.boolean({ error: 'resolved must be true (resolve) or false (reopen).' }) }, { error: 'Send { "resolved": true } or { "resolved": false }.' });
+const patch = z.strictObject(
+	{ resolved: z.boolean({ error: 'resolved must be true (resolve) or false (reopen).' }) },
+	{ error: 'Send { "resolved": true } or { "resolved": false }.' }
+);
 
 export const PATCH: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'note:write');
 	const input = await readJson(event.request, patch);
-	return { note: await setNoteState(getDb(), access, event.params.sheet, event.params.note, input.resolved) };
+	return {
+		note: await setNoteState(getDb(), access, event.params.sheet, event.params.note, input.resolved)
+	};
 });

@@ -10,5 +10,12 @@ import { parseRevisionNumber, readRevision } from '$lib/server/revisions';
  */
 export const GET: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'read');
-	return { revision: await readRevision(getDb(), access, event.params.sheet, parseRevisionNumber(event.params.number)) };
+	return {
+		revision: await readRevision(
+			getDb(),
+			access,
+			event.params.sheet,
+			parseRevisionNumber(event.params.number)
+		)
+	};
 });

@@ -12,10 +12,25 @@ import { replyToNote } from '$lib/server/notes';
  * author is mailed (unless they turned replies off); @Name mentions are mailed as mentions.
  */
 
-const body = z.strictObject({ body: z.string({ error: 'body must be the text of the reply.' }) }, { error: 'Send { "body": "…" }.' });
+const body = z.strictObject(
+	{ body: z.string({ error: 'body must be the text of the reply.' }) },
+	{ error: 'Send { "body": "…" }.' }
+);
 
 export const POST: RequestHandler = apiRoute(async (event) => {
 	const access = await requireTeam(event, event.params.team, 'note:write');
 	const input = await readJson(event.request, body);
-	return json({ note: await replyToNote(getDb(), access, event.params.sheet, event.params.note, input, flowContext(event)) }, { status: 201 });
+	return json(
+		{
+			note: await replyToNote(
+				getDb(),
+				access,
+				event.params.sheet,
+				event.params.note,
+				input,
+				flowContext(event)
+			)
+		},
+		{ status: 201 }
+	);
 });

@@ -4,7 +4,12 @@ import { getDb } from '$lib/server/db';
 import { apiRoute, jsonError, readJson } from '$lib/server/api';
 import { requireTeam } from '$lib/server/guard';
 import { flowContext } from '$lib/server/request';
-import { moveRevision, OpenNotesError, parseRevisionNumber, restoreRevision } from '$lib/server/revisions';
+import {
+	moveRevision,
+	OpenNotesError,
+	parseRevisionNumber,
+	restoreRevision
+} from '$lib/server/revisions';
 import { DraftConflictError } from '$lib/server/sheets';
 import { plainText } from '$lib/plain-text';
 
@@ -29,12 +34,21 @@ const ACTIONS = ['submit', 'withdraw', 'check', 'return', 'approve'] as const;
 const stepBody = z.strictObject(
 	{
 		note: z.string({ error: 'note must be text.' }).optional(),
-		checkerId: plainText('checkerId', 'line', 'checkerId must be the id of a team member.').nullable().optional(),
-		override: plainText('override', 'lines', 'override must be text: the reason for signing off over open review notes.').optional()
+		checkerId: plainText('checkerId', 'line', 'checkerId must be the id of a team member.')
+			.nullable()
+			.optional(),
+		override: plainText(
+			'override',
+			'lines',
+			'override must be text: the reason for signing off over open review notes.'
+		).optional()
 	},
 	{ error: 'Send a JSON object, e.g. { "note": "…" }.' }
 );
-const restoreBody = z.strictObject({ version: z.number({ error: 'version must be the draft version you hold.' }).int() }, { error: 'Send { "version": n }: the draft version you hold.' });
+const restoreBody = z.strictObject(
+	{ version: z.number({ error: 'version must be the draft version you hold.' }).int() },
+	{ error: 'Send { "version": n }: the draft version you hold.' }
+);
 
 async function bodyOf<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
 	// a step without a body is fine: every field is optional
@@ -52,18 +66,32 @@ export const POST: RequestHandler = apiRoute(async (event) => {
 		try {
 			return await restoreRevision(getDb(), access, event.params.sheet, number, input.version);
 		} catch (e) {
-			if (e instanceof DraftConflictError) return jsonError(409, e.code, e.message, { current: e.current });
+			if (e instanceof DraftConflictError)
+				return jsonError(409, e.code, e.message, { current: e.current });
 			throw e;
 		}
 	}
 	if (!(ACTIONS as readonly string[]).includes(action))
-		return jsonError(404, 'not-found', `There is no step "${action}". Use one of: ${ACTIONS.join(', ')}, restore.`);
+		return jsonError(
+			404,
+			'not-found',
+			`There is no step "${action}". Use one of: ${ACTIONS.join(', ')}, restore.`
+		);
 	const input = await bodyOf(event.request, stepBody);
 	try {
-		const revision = await moveRevision(getDb(), access, event.params.sheet, number, action as (typeof ACTIONS)[number], input, flowContext(event));
+		const revision = await moveRevision(
+			getDb(),
+			access,
+			event.params.sheet,
+			number,
+			action as (typeof ACTIONS)[number],
+			input,
+			flowContext(event)
+		);
 		return { revision };
 	} catch (e) {
-		if (e instanceof OpenNotesError) return jsonError(409, e.code, e.message, { openNotes: e.openNotes });
+		if (e instanceof OpenNotesError)
+			return jsonError(409, e.code, e.message, { openNotes: e.openNotes });
 		throw e;
 	}
 });
