@@ -3,6 +3,7 @@
  * All quantities are SI base units: T K, P Pa, v m³/kg, rho kg/m³, u h J/kg,
  * s cv cp J/(kg·K), w m/s, x dimensionless quality 0…1.
  */
+import type { Transport } from './transport/index.ts';
 
 /** Names of the properties a state can be fixed from. `v` and `rho` are the same property. */
 export type InputName = 'T' | 'P' | 'v' | 'rho' | 'u' | 'h' | 's' | 'x';
@@ -268,6 +269,8 @@ export interface PathState {
 	id: string;
 	state: State;
 	extras: StateExtras;
+	/** viscosity, conductivity, Prandtl number and surface tension (transport/index.ts); POST /api/v1/paths adds it to every state */
+	transport?: Transport;
 }
 
 /** Totals of a leg or path: per-kg values × mass (J) for a closed system, × mass flow (W) for a device. */
