@@ -49,7 +49,7 @@ describe('nitrogen, argon and oxygen: Lemmon & Jacobsen (2004), Int. J. Thermoph
 		for (const [fluid, T, rhoMolar, mu, k] of rows.filter((r) => r[1] < 120 || r[1] > 160)) {
 			const r = transportAt(fluid, T, Math.max(rhoMolar, 1e-17) * M[fluid])!;
 			printed(r.mu * 1e6, mu, `${fluid} η at ${T} K, ${rhoMolar} mol/dm³`, 2);
-			printed(r.k * 1e3, k, `${fluid} λ at ${T} K, ${rhoMolar} mol/dm³`, 2);
+			printed(r.k! * 1e3, k, `${fluid} λ at ${T} K, ${rhoMolar} mol/dm³`, 2);
 		}
 	});
 	it('near the critical point, where λ is mostly the critical enhancement: η to the printed digits, λ within 2e−5', () => {
@@ -58,7 +58,7 @@ describe('nitrogen, argon and oxygen: Lemmon & Jacobsen (2004), Int. J. Thermoph
 		for (const [fluid, T, rhoMolar, mu, k] of rows.filter((r) => r[1] > 120 && r[1] < 160)) {
 			const r = transportAt(fluid, T, rhoMolar * M[fluid])!;
 			printed(r.mu * 1e6, mu, `${fluid} η at ${T} K`, 2);
-			expect(Math.abs(r.k * 1e3 - Number(k)) / Number(k), `${fluid} λ at ${T} K`).toBeLessThan(
+			expect(Math.abs(r.k! * 1e3 - Number(k)) / Number(k), `${fluid} λ at ${T} K`).toBeLessThan(
 				2e-5
 			);
 		}
@@ -93,7 +93,27 @@ describe('carbon dioxide', () => {
 			[310, 400, '73.04']
 		];
 		for (const [T, rho, k] of rows)
-			printed(transportAt('carbon-dioxide', T, rho)!.k * 1e3, k, `λ at ${T} K, ${rho} kg/m³`);
+			printed(transportAt('carbon-dioxide', T, rho)!.k! * 1e3, k, `λ at ${T} K, ${rho} kg/m³`);
+	});
+});
+
+describe('ammonia viscosity: Monogenidou, Assael & Huber (2018), J. Phys. Chem. Ref. Data 47, 023102', () => {
+	it('matches the values the paper quotes at 300 K (its Section 3), μPa·s', () => {
+		// Monogenidou et al. (2018), Section 3, as quoted in pychemqt lib/mEoS/NH3.py (test_monogenidouVisco)
+		printed(transportAt('ammonia', 300, 0)!.mu * 1e6, '10.1812', '300 K, 0 kg/m³');
+		printed(transportAt('ammonia', 300, 8)!.mu * 1e6, '9.9219', '300 K, 8 kg/m³');
+		printed(transportAt('ammonia', 300, 609)!.mu * 1e6, '133.3937', '300 K, 609 kg/m³');
+	});
+	it('a state has μ, and k and Pr absent with the reason', () => {
+		const t = transport(fixState('ammonia', { T: 300, P: 2e6 }));
+		expect(t.mu).toBeGreaterThan(1e-4);
+		expect(t.k).toBeNull();
+		expect(t.absent.k?.code).toBe('no-correlation');
+		expect(t.absent.k?.reason).toMatch(/600 kg\/m³/);
+		expect(t.absent.Pr?.code).toBe('no-correlation');
+		expect(transport(fixState('ammonia', { T: 400, P: 60e6 })).absent.mu?.code).toBe(
+			'out-of-range'
+		);
 	});
 });
 

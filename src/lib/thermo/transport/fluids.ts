@@ -5,6 +5,7 @@
 import { evalPoint, Point } from '../properties.ts';
 import { getCompiledFluid } from '../registry.ts';
 import { collisionDilute, olchowySengers, tauDeltaSum, type OlchowySengers } from './forms.ts';
+import { ammoniaViscosity } from './data/ammonia.ts';
 import { co2Conductivity, co2Viscosity } from './data/carbon-dioxide.ts';
 import { lemmonJacobsen2004, lemmonJacobsenCritical } from './data/lemmon-jacobsen-2004.ts';
 
@@ -17,8 +18,10 @@ export interface FluidCorrelation {
 	/** where each correlation is applied (beyond the equation of state's own range) */
 	range: { mu: { Tmax?: number; Pmax?: number }; k: { Tmax?: number; Pmax?: number } };
 	mu(T: number, rho: number): number;
-	/** needs μ (Pa·s) for the critical enhancement */
-	k(T: number, rho: number, mu: number): number;
+	/** needs μ (Pa·s) for the critical enhancement; absent where no conductivity correlation is built */
+	k?(T: number, rho: number, mu: number): number;
+	/** why k is absent when `k` is */
+	noK?: string;
 }
 
 const point = new Point();
@@ -110,10 +113,40 @@ const carbonDioxide: FluidCorrelation = {
 	}
 };
 
+const ammonia: FluidCorrelation = {
+	sources: {
+		mu: 'Monogenidou, Assael & Huber (2018), J. Phys. Chem. Ref. Data 47, 023102',
+		k: ''
+	},
+	range: { mu: ammoniaViscosity.range, k: {} },
+	mu(T, rho) {
+		const v = ammoniaViscosity;
+		const d = v.dilute;
+		const lnT = Math.log(T / d.epsK);
+		let s = 0;
+		for (let i = d.a.length - 1; i >= 0; i--) s = s * lnT + d.a[i];
+		const eta0 = (d.chapman * Math.sqrt(d.M * T)) / (d.sigmaNm * d.sigmaNm * Math.exp(s));
+		const Ts = T / d.epsK;
+		let Bstar = 0;
+		for (let i = 0; i < v.initialDensity.b.length; i++)
+			Bstar += v.initialDensity.b[i] * Ts ** v.initialDensity.t[i];
+		const Beta = AVOGADRO * (d.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
+		const rhoMolar = (rho / d.M) * 1e3; // mol/m³
+		const r = v.residual;
+		const tau = r.Tc / T;
+		const delta = rho / r.rhoc;
+		let dEta = 0;
+		for (let i = 0; i < r.n.length; i++) dEta += r.n[i] * tau ** r.t[i] * delta ** r.d[i];
+		return (eta0 * (1 + Beta * rhoMolar) + dEta) * 1e-6;
+	},
+	noK: 'The thermal conductivity correlation of Monogenidou, Assael & Huber (2018) is not built into the engine: its one public copy misses the paper’s tables above 600 kg/m³.'
+};
+
 /** The fluids with viscosity and conductivity correlations (water apart: water.ts). */
 export const fluidCorrelations: Record<string, FluidCorrelation> = {
 	nitrogen: lemmonJacobsen('nitrogen'),
 	argon: lemmonJacobsen('argon'),
 	oxygen: lemmonJacobsen('oxygen'),
-	'carbon-dioxide': carbonDioxide
+	'carbon-dioxide': carbonDioxide,
+	ammonia
 };

@@ -1,7 +1,8 @@
 /**
  * Transport and interface properties of a state: viscosity, thermal conductivity, Prandtl number and
  * surface tension, in SI (Pa·s, W/(m·K), –, N/m), each either a number or absent with a reason.
- * Water: IAPWS releases (water.ts). Nitrogen, argon, oxygen and carbon dioxide: fluids.ts. Surface
+ * Water: IAPWS releases (water.ts). Nitrogen, argon, oxygen, carbon dioxide and ammonia's
+ * viscosity: fluids.ts. Surface
  * tension of the other fluids: data/surface-tension.ts. A value without a correlation is absent with
  * `no-correlation` and a reason. The state may come from IAPWS-95 (fixState) or IAPWS-IF97 (if97State…): the
  * correlations take its ρ and T, and its cp, cv and speed of sound for the conductivity's critical
@@ -51,8 +52,6 @@ const SOURCES = {
 
 /** Why μ and k are absent for the fluids without a built correlation. */
 const NOT_BUILT: Record<string, string> = {
-	ammonia:
-		'Monogenidou, Assael & Huber (2018) is not built into the engine yet (one public copy of its coefficients found; two are needed to check them).',
 	r134a:
 		'Huber, Laesecke & Perkins (2003) is not built into the engine yet; the paper prints no check values to test it against.',
 	'r1234ze-e': 'No correlation with printed check values is built into the engine for R-1234ze(E).'
@@ -118,8 +117,13 @@ export function transport(state: State): Transport {
 		out.sources.mu = corr.sources.mu;
 	} else
 		out.absent.mu = { code: 'out-of-range', reason: rangeReason('viscosity', corr.range.mu, T, P) };
-	const k = corr.k(T, rho, mu);
-	if (inRange(corr.range.k) && Number.isFinite(k) && k > 0) {
+	const k = corr.k ? corr.k(T, rho, mu) : NaN;
+	if (!corr.k)
+		out.absent.k = {
+			code: 'no-correlation',
+			reason: corr.noK ?? 'No thermal conductivity correlation is built for this fluid.'
+		};
+	else if (inRange(corr.range.k) && Number.isFinite(k) && k > 0) {
 		out.k = k;
 		out.sources.k = corr.sources.k;
 	} else
@@ -132,7 +136,7 @@ export function transport(state: State): Transport {
 		out.sources.Pr = SOURCES.Pr;
 	} else
 		out.absent.Pr = {
-			code: 'out-of-range',
+			code: out.absent.k?.code === 'no-correlation' ? 'no-correlation' : 'out-of-range',
 			reason: 'The Prandtl number needs μ, k and cp, and one of them is absent at this state.'
 		};
 	return out;
@@ -147,11 +151,11 @@ export function transportAt(
 	fluid: string,
 	T: number,
 	rho: number
-): { mu: number; k: number } | null {
+): { mu: number; k: number | null } | null {
 	const corr = fluidCorrelations[fluid];
 	if (!corr) return null;
 	const mu = corr.mu(T, rho);
-	return { mu, k: corr.k(T, rho, mu) };
+	return { mu, k: corr.k ? corr.k(T, rho, mu) : null };
 }
 
 function rangeReason(
