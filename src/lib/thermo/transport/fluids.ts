@@ -7,6 +7,7 @@ import { getCompiledFluid } from '../registry.ts';
 import { collisionDilute, olchowySengers, tauDeltaSum, type OlchowySengers } from './forms.ts';
 import { ammoniaViscosity } from './data/ammonia.ts';
 import { co2Conductivity, co2Viscosity } from './data/carbon-dioxide.ts';
+import { r134aViscosity } from './data/r134a.ts';
 import { lemmonJacobsen2004, lemmonJacobsenCritical } from './data/lemmon-jacobsen-2004.ts';
 
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
@@ -113,6 +114,45 @@ const carbonDioxide: FluidCorrelation = {
 	}
 };
 
+/** Dilute gas from S* (Ω(2,2) = (5/4) S*) plus the Rainwater–Friend initial-density term, μPa·s. */
+function diluteAndInitial(
+	d: { chapman: number; M: number; sigmaNm: number; epsK: number; a: readonly number[] },
+	b: { b: readonly number[]; t: readonly number[] },
+	T: number,
+	rho: number
+): number {
+	const lnT = Math.log(T / d.epsK);
+	let s = 0;
+	for (let i = d.a.length - 1; i >= 0; i--) s = s * lnT + d.a[i];
+	const eta0 = (d.chapman * Math.sqrt(d.M * T)) / (d.sigmaNm * d.sigmaNm * Math.exp(s));
+	const Ts = T / d.epsK;
+	let Bstar = 0;
+	for (let i = 0; i < b.b.length; i++) Bstar += b.b[i] * Ts ** b.t[i];
+	const Beta = AVOGADRO * (d.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
+	return eta0 * (1 + Beta * (rho / d.M) * 1e3);
+}
+
+const r134a: FluidCorrelation = {
+	sources: {
+		mu: 'Huber, Laesecke & Perkins (2003), Ind. Eng. Chem. Res. 42, 3163 (its R-134a correlation)',
+		k: ''
+	},
+	range: { mu: {}, k: {} },
+	mu(T, rho) {
+		const v = r134aViscosity;
+		const r = v.residual;
+		const tau = r.Tc / T;
+		const delta = rho / r.rhoc;
+		let h = 0;
+		for (let i = 0; i < r.e.length; i++) h += r.e[i] * tau ** r.t[i] * delta ** r.d[i];
+		const Tr = T / r.Tc;
+		const delta0 = r.c10 / (1 + r.c8 * Tr + r.c9 * Tr * Tr);
+		h += r.c7 * (1 / (delta0 - delta) - 1 / delta0);
+		return (diluteAndInitial(v.dilute, v.initialDensity, T, rho) + h * 1e3) * 1e-6;
+	},
+	noK: 'The thermal conductivity of R-134a is not built into the engine: Huber, Laesecke & Perkins (2003) give it by extended corresponding states on a reference fluid not built here, and print no check values.'
+};
+
 const ammonia: FluidCorrelation = {
 	sources: {
 		mu: 'Monogenidou, Assael & Huber (2018), J. Phys. Chem. Ref. Data 47, 023102',
@@ -121,23 +161,12 @@ const ammonia: FluidCorrelation = {
 	range: { mu: ammoniaViscosity.range, k: {} },
 	mu(T, rho) {
 		const v = ammoniaViscosity;
-		const d = v.dilute;
-		const lnT = Math.log(T / d.epsK);
-		let s = 0;
-		for (let i = d.a.length - 1; i >= 0; i--) s = s * lnT + d.a[i];
-		const eta0 = (d.chapman * Math.sqrt(d.M * T)) / (d.sigmaNm * d.sigmaNm * Math.exp(s));
-		const Ts = T / d.epsK;
-		let Bstar = 0;
-		for (let i = 0; i < v.initialDensity.b.length; i++)
-			Bstar += v.initialDensity.b[i] * Ts ** v.initialDensity.t[i];
-		const Beta = AVOGADRO * (d.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
-		const rhoMolar = (rho / d.M) * 1e3; // mol/m³
 		const r = v.residual;
 		const tau = r.Tc / T;
 		const delta = rho / r.rhoc;
 		let dEta = 0;
 		for (let i = 0; i < r.n.length; i++) dEta += r.n[i] * tau ** r.t[i] * delta ** r.d[i];
-		return (eta0 * (1 + Beta * rhoMolar) + dEta) * 1e-6;
+		return (diluteAndInitial(v.dilute, v.initialDensity, T, rho) + dEta) * 1e-6;
 	},
 	noK: 'The thermal conductivity correlation of Monogenidou, Assael & Huber (2018) is not built into the engine: its one public copy misses the paper’s tables above 600 kg/m³.'
 };
@@ -148,5 +177,6 @@ export const fluidCorrelations: Record<string, FluidCorrelation> = {
 	argon: lemmonJacobsen('argon'),
 	oxygen: lemmonJacobsen('oxygen'),
 	'carbon-dioxide': carbonDioxide,
-	ammonia
+	ammonia,
+	r134a
 };
