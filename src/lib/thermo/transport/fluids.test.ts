@@ -118,7 +118,7 @@ describe('ammonia viscosity: Monogenidou, Assael & Huber (2018), J. Phys. Chem. 
 });
 
 describe('R-134a viscosity: Huber, Laesecke & Perkins (2003), Ind. Eng. Chem. Res. 42, 3163', () => {
-	it('on the saturation line within 0.1 % of REFPROP 9.1 (the paper prints no check values)', () => {
+	it('on the saturation line within 1e−4 of REFPROP 9.1 (the paper prints no check values)', () => {
 		// REFPROP 9.1, as given in CoolProp's src/Tests/CoolProp-Tests.cpp ("since Huber I&ECR 2003 does not
 		// provide validation data"), Pa·s; the saturated densities are this engine's (Tillner-Roth & Baehr)
 		const rows: [number, 0 | 1, number][] = [
@@ -129,7 +129,7 @@ describe('R-134a viscosity: Huber, Laesecke & Perkins (2003), Ind. Eng. Chem. Re
 		];
 		for (const [T, x, mu] of rows) {
 			const t = transport(fixState('r134a', { T, x }));
-			expect(Math.abs(t.mu! / mu - 1), `${T} K, x = ${x}: ${t.mu}`).toBeLessThan(1e-3);
+			expect(Math.abs(t.mu! / mu - 1), `${T} K, x = ${x}: ${t.mu}`).toBeLessThan(1e-4);
 			expect(t.absent.k?.code).toBe('no-correlation');
 		}
 	});
