@@ -4,7 +4,7 @@
  * the error body, e.g. `latest` and `yours` of a revision conflict, `rejected` lines of a refused
  * trace); a network failure as OfflineError.
  */
-import { ApiError, OfflineError, apiCall } from '../sheets/client';
+import { ApiError, OfflineError, apiCall } from '$lib/editor/client';
 import type { SheetDoc, Anchor } from '../sheets/types';
 import type { PathResult } from '../thermo/types';
 import type { RevisionDiff } from '../revisions/diff';

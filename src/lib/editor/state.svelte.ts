@@ -10,8 +10,8 @@
  * Extending (revisions, notes, traces): read `doc`, `view`, `selection`; draw over the chart by
  * setting `traces`; add panel tabs on the page (see SheetPanel.svelte).
  */
-import type { AddPointEvent, NudgeEvent, StateDragEvent } from '../charts/chart';
-import { fitDomain } from '../charts/scales';
+import type { AddPointEvent, NudgeEvent, StateDragEvent } from '$lib/charts/chart';
+import { fitDomain } from '$lib/charts/scales';
 import type {
 	ChartCoords,
 	ChartKind,
@@ -21,9 +21,9 @@ import type {
 	Isoline,
 	MeasuredTrace,
 	SaturationCurve
-} from '../charts/types';
-import type { FluidInfo, Inputs, PathResult, Process, State, TargetName } from '../thermo/types';
-import type { UnitPrefs } from '../units/prefs';
+} from '$lib/charts/types';
+import type { FluidInfo, Inputs, PathResult, Process, State, TargetName } from '$lib/thermo/types';
+import type { UnitPrefs } from '$lib/units/prefs';
 import { Autosave, readLocalCopy, type AutosaveState, type KeyValueStore } from './autosave';
 import {
 	ApiError,
@@ -51,9 +51,9 @@ import {
 	viewOf,
 	type EditableProp,
 	type PathView
-} from './doc';
+} from '$lib/sheets/doc';
 import { History } from './history';
-import { isobarValues, isothermValues } from './isolines';
+import { isobarValues, isothermValues } from '$lib/sheets/isolines';
 import {
 	defaultTargetKind,
 	projectOntoLeg,
@@ -62,10 +62,16 @@ import {
 	type FixFn,
 	type ScreenMetric
 } from './targets';
-import type { ChartPrefs, SheetDoc, SheetLegSpec, SheetStatus, TitleBlockFields } from './types';
-import { fillStart, type FillSpec } from './fill';
-import { readAcrossSaturation, type SaturationReading } from './saturation-input';
-import { saturationTarget } from './saturation-target';
+import type {
+	ChartPrefs,
+	SheetDoc,
+	SheetLegSpec,
+	SheetStatus,
+	TitleBlockFields
+} from '$lib/sheets/types';
+import { fillStart, type FillSpec } from '$lib/sheets/fill';
+import { readAcrossSaturation, type SaturationReading } from '$lib/sheets/saturation-input';
+import { saturationTarget } from '$lib/sheets/saturation-target';
 
 type Engine = typeof import('../thermo');
 

@@ -4,9 +4,9 @@
  * projected onto that line — the point of the line nearest to it on screen — and the point's
  * property of the leg's target kind becomes the new target. Pure: the engine comes in as `fix`.
  */
-import type { ChartCoords, ChartKind, PressureScale } from '../charts/types';
-import type { Inputs, Process, State, TargetName } from '../thermo/types';
-import { INVARIANT, type EditableProp } from './doc';
+import type { ChartCoords, ChartKind, PressureScale } from '$lib/charts/types';
+import type { Inputs, Process, State, TargetName } from '$lib/thermo/types';
+import { INVARIANT, type EditableProp } from '$lib/sheets/doc';
 
 /** Fix a state from two properties (the engine's fixState); throws where there is none. */
 export type FixFn = (inputs: Inputs) => State;

@@ -3,9 +3,15 @@
  * the draft. Errors come back in the API's shape ({ error: { code, message } }) and are thrown as
  * ApiError; a network failure (offline, server gone) as OfflineError.
  */
-import type { Isoline, IsolineKind, PathResult, PathSpec, SaturationCurve } from '../thermo/types';
-import type { SheetDoc } from './types';
-import { fitPathPoints } from '../compute-limits';
+import type {
+	Isoline,
+	IsolineKind,
+	PathResult,
+	PathSpec,
+	SaturationCurve
+} from '$lib/thermo/types';
+import type { SheetDoc } from '$lib/sheets/types';
+import { fitPathPoints } from '$lib/compute-limits';
 
 export class ApiError extends Error {
 	readonly status: number;
