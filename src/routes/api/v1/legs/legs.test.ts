@@ -5,7 +5,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resetComputeLimiter } from '$lib/server/compute/http';
-import { callRoute } from '$lib/server/compute/testing';
+import { callRoute, type Handler } from '$lib/server/compute/testing';
 import { POST as legs } from './+server';
 import { POST as paths } from '../paths/+server';
 
@@ -30,7 +30,7 @@ type LegAnswer = {
 };
 type PathAnswer = { path: { states: { state: { T: number; P: number } }[] } };
 
-const post = (handler: typeof legs, url: string, body: unknown) =>
+const post = (handler: Handler, url: string, body: unknown) =>
 	callRoute(handler, url, { body: JSON.stringify(body) });
 
 // python3-iapws 1.5 (Debian), IAPWS95: v(279 K, 0.1 MPa), met again at 275.29277 K on the same isobar
