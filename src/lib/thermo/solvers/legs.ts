@@ -131,13 +131,13 @@ export function checkLegSpec(spec: LegSpec): CheckedLeg {
 	if ((key === 'T' || key === 'P' || key === 'v' || key === 'rho') && !(value > 0))
 		throw new ThermoError(
 			'non-positive-input',
-			`The target ${key} must be positive (got ${fmt(value)}); the engine uses absolute values.`,
+			`The target ${key} must be positive (got ${fmt(value, 0)}); the engine uses absolute values.`,
 			`Give ${key} in ${UNIT[key]} as a positive absolute value (kelvin, absolute pressure).`
 		);
 	if (key === 'x' && !(value >= 0 && value <= 1))
 		throw new ThermoError(
 			'quality-out-of-range',
-			`The target quality x must lie between 0 and 1 (got ${fmt(value)}).`,
+			`The target quality x must lie between 0 and 1 (got ${fmt(value, 0, 1)}).`,
 			'Give x from 0 (saturated liquid) to 1 (saturated vapor).'
 		);
 	let n: number | undefined;
