@@ -91,13 +91,13 @@ export function saturationAtT(fluid: string, T: number): Saturation {
 	if (T < fl.Tt)
 		throw new ThermoError(
 			'below-triple-point',
-			`T = ${fmt(T)} K is below the triple point of ${fl.id} (${fmt(fl.Tt)} K).`,
+			`T = ${fmt(T, fl.Tt)} K is below the triple point of ${fl.id} (${fmt(fl.Tt, T)} K).`,
 			`Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`
 		);
 	if (T > fl.Tc)
 		throw new ThermoError(
 			'inconsistent-inputs',
-			`There is no saturation above the critical temperature of ${fl.id} (${fmt(fl.Tc)} K); T = ${fmt(T)} K.`,
+			`There is no saturation above the critical temperature of ${fl.id} (${fmt(fl.Tc, T)} K); T = ${fmt(T, fl.Tc)} K.`,
 			`Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`
 		);
 	const sat = satAtT(fl, T);
@@ -114,13 +114,13 @@ export function saturationAtP(fluid: string, P: number): Saturation {
 	if (!(P > 0))
 		throw new ThermoError(
 			'non-positive-input',
-			`P must be positive (got ${fmt(P)}).`,
+			`P must be positive (got ${fmt(P, 0)}).`,
 			'Give an absolute pressure in Pa.'
 		);
 	if (P > fl.Pc)
 		throw new ThermoError(
 			'inconsistent-inputs',
-			`There is no saturation above the critical pressure of ${fl.id} (${fmt(fl.Pc)} Pa); P = ${fmt(P)} Pa.`,
+			`There is no saturation above the critical pressure of ${fl.id} (${fmt(fl.Pc, P)} Pa); P = ${fmt(P, fl.Pc)} Pa.`,
 			`Give a pressure up to ${fmt(fl.Pc)} Pa.`
 		);
 	checkSaturationP(fl, P);

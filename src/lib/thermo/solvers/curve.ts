@@ -18,7 +18,7 @@ export function curveOf(fl: Fluid, points: number): SaturationCurve {
 	if (!Number.isInteger(points) || points < 2 || points > 5000)
 		throw new ThermoError(
 			'invalid-option',
-			`The number of saturation points must be a whole number from 2 to 5000 (got ${fmt(points)}).`,
+			`The number of saturation points must be a whole number from 2 to 5000 (got ${fmt(points, 2, 5000)}).`,
 			'Give points between 2 and 5000 (100 draws a smooth dome).'
 		);
 	const liquid = [],
