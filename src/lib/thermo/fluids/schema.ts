@@ -149,10 +149,19 @@ export interface FluidData {
  * - `log-theta`:       P/Pref = Σ aᵢ·(ln θ)^bᵢ
  * - `exp-theta-sum`:   ln(P/Pref) = θ⁻¹·Σ aᵢ·θ^bᵢ
  * - `exp-theta-delta`: ln(P/Pref) = θ⁻¹·Σ aᵢ·(1 − θ)^bᵢ
+ * - `simon`:           P = Pref + Σ aᵢ·(θ^bᵢ − 1), aᵢ in Pa (Simon–Glatzel)
+ * - `power-plain`:     P/Pref = Σ aᵢ·θ^bᵢ
  */
 export interface SolidLinePiece {
 	form:
-		'power-sum' | 'delta-power-sum' | 'exp-sum' | 'log-theta' | 'exp-theta-sum' | 'exp-theta-delta';
+		| 'power-sum'
+		| 'delta-power-sum'
+		| 'exp-sum'
+		| 'log-theta'
+		| 'exp-theta-sum'
+		| 'exp-theta-delta'
+		| 'simon'
+		| 'power-plain';
 	/** the solid phase on the other side (e.g. "ice VI"; "solid" where the publication names none) */
 	solid: string;
 	/** temperature range of this piece, K */
@@ -164,7 +173,11 @@ export interface SolidLinePiece {
 	b: number[];
 }
 
-/** Melting and sublimation curves of a fluid, each naming the publication its numbers come from. */
+/**
+ * Melting and sublimation curves of a fluid, each naming the publication its numbers come from.
+ * A fluid whose equation's paper publishes no melting equation (and none is named) has an empty
+ * `melting.pieces` with `source` saying so: its states are bounded only by the triple point.
+ */
 export interface SolidLines {
 	melting: { pieces: SolidLinePiece[]; source: string };
 	sublimation?: { pieces: SolidLinePiece[]; source: string };
