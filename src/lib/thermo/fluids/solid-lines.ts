@@ -355,6 +355,30 @@ const oxygen: SolidLines = {
 	}
 };
 
+/**
+ * Air: Lemmon, Jacobsen, Penoncello & Friend (2000), melting equation of air,
+ * p_m/p₀ = 1 + 35493.5·(θ^1.78963 − 1), T₀ = 59.75 K, p₀ = 5265 Pa, as pychemqt (lib/mEoS/Air.py)
+ * carries it; CoolProp (dev/fluids/Air.json) the same in Simon form (a = 186 844 210.76 Pa =
+ * 35493.5 × 5264.18 Pa).
+ */
+const air: SolidLines = {
+	melting: {
+		source: 'Lemmon et al. (2000), melting equation of air',
+		pieces: [
+			{
+				solid: 'solid air',
+				form: 'power-sum',
+				Tmin: 59.75,
+				Tmax: 2000,
+				Tref: 59.75,
+				Pref: 5265,
+				a: [35493.5],
+				b: [1.78963]
+			}
+		]
+	}
+};
+
 /** Refrigerants whose equation's paper publishes no melting equation, and none is named here. */
 const noMeltingEquation = (paper: string): SolidLines => ({
 	melting: {
@@ -381,5 +405,6 @@ export const SOLID_LINES: Record<string, SolidLines> = {
 	oxygen,
 	r32: noMeltingEquation('Tillner-Roth & Yokozeki (1997)'),
 	r1234yf: noMeltingEquation('Lemmon & Akasaka (2022)'),
-	'r1234ze-e': noMeltingEquation('Thol & Lemmon (2016)')
+	'r1234ze-e': noMeltingEquation('Thol & Lemmon (2016)'),
+	air
 };
