@@ -293,11 +293,22 @@ export function fixOnLine(
 
 /** Whether a state from the pure-fluid solvers lies in the band (or on the equation's own dome, inside it). */
 export function inBand(band: MixtureBand, st: State): boolean {
-	return (
-		(st.x !== null && st.x !== undefined) ||
-		band.insideTP(st.T, st.P) ||
-		band.insideTRho(st.T, st.rho)
-	);
+	if (st.x !== null && st.x !== undefined) return true;
+	if (!(st.T < band.Tj)) return false;
+	// the lines themselves (a bubble or dew point re-fixed from other properties) are not inside.
+	// Pressure decides: the pure-fluid solvers answer a state inside the equation's own dome as
+	// two-phase (above), and a single-phase state of theirs with a density between the dew- and
+	// bubble-point densities has a pressure between the two lines' (its isotherm rises there).
+	const tol = 1e-7;
+	return st.P > band.dewP(st.T) * (1 + tol) && st.P < band.bubbleP(st.T) * (1 - tol);
+}
+
+/** The line a state outside the band lies on (within 1e−7 in pressure), or null. */
+function onLine(band: MixtureBand, st: State): BandLine | null {
+	if (!(st.T < band.Tj)) return null;
+	if (Math.abs(st.P / band.bubbleP(st.T) - 1) <= 1e-7) return 'bubble';
+	if (Math.abs(st.P / band.dewP(st.T) - 1) <= 1e-7) return 'dew';
+	return null;
 }
 
 /**
@@ -307,6 +318,9 @@ export function inBand(band: MixtureBand, st: State): boolean {
  */
 export function holdOutsideBand(fl: Fluid, band: MixtureBand, st: State): State {
 	if (inBand(band, st)) throw band.refusal(st.T);
+	const line = onLine(band, st);
+	if (line === 'bubble') return { ...st, phase: 'saturated-liquid', x: 0 };
+	if (line === 'dew') return { ...st, phase: 'saturated-vapor', x: 1 };
 	const phase = band.phase(st.T, st.P);
 	return phase === st.phase ? st : { ...st, phase };
 }

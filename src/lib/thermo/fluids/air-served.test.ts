@@ -144,6 +144,21 @@ describe('air: the 21 input pairs outside the band', () => {
 		expect(rel(fixState('air', { T: 90, h: ref.h }).P, 5e6)).toBeLessThan(1e-6);
 	});
 
+	it('a bubble or dew point re-fixed from (P, h), (T, v) or (h, s) is the line state, not refused', () => {
+		for (const x of [0, 1]) {
+			const ref = fixState('air', { T: 81.3844, x });
+			for (const inputs of [
+				{ P: ref.P, h: ref.h },
+				{ T: ref.T, v: ref.v },
+				{ h: ref.h, s: ref.s }
+			]) {
+				const got = fixState('air', inputs, { near: { T: ref.T, P: ref.P } });
+				expect(rel(got.T, ref.T), JSON.stringify(inputs)).toBeLessThan(1e-6);
+				expect(got.x, JSON.stringify(inputs)).toBe(x);
+			}
+		}
+	});
+
 	it('the six x pairs on each line give the line state back', () => {
 		for (const x of [0, 1]) {
 			const ref = fixState('air', { T: 95, x });
