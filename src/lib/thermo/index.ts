@@ -19,6 +19,8 @@ import { checkSaturationP } from './solvers/range.ts';
 import { satAtP, satAtT } from './solvers/saturation.ts';
 import { isSolid, meltingAt, meltingLine, sublimationAt } from './solvers/solid.ts';
 import { fmt } from './errors.ts';
+import type { Fluid } from './fluid.ts';
+import { bandOf } from './pseudo-pure.ts';
 import type {
 	FixOptions,
 	FluidInfo,
@@ -71,6 +73,17 @@ export function fixState(fluid: string, inputs: Inputs, options: FixOptions = {}
 	return fixStateOf(getCompiledFluid(fluid), inputs, options);
 }
 
+/** A mixture (pseudo-pure.ts) has a bubble and a dew line, not one saturation: say so and how to ask. */
+function noSingleSaturation(fl: Fluid): void {
+	const band = bandOf(fl);
+	if (band)
+		throw new ThermoError(
+			'mixture-two-phase',
+			`${fl.data.name} is a mixture: it has a bubble line and a dew line (below ${fmt(band.Tj)} K), not one saturation pressure at a temperature.`,
+			'Fix the state on a line with x = 0 (bubble point) or x = 1 (dew point) and T or P, or draw both lines from the saturation curve.'
+		);
+}
+
 function finite(name: string, value: number): void {
 	if (typeof value !== 'number' || !Number.isFinite(value))
 		throw new ThermoError(
@@ -88,6 +101,7 @@ function finite(name: string, value: number): void {
 export function saturationAtT(fluid: string, T: number): Saturation {
 	const fl = getCompiledFluid(fluid);
 	finite('T', T);
+	noSingleSaturation(fl);
 	if (T < fl.Tt)
 		throw new ThermoError(
 			'below-triple-point',
@@ -111,6 +125,7 @@ export function saturationAtT(fluid: string, T: number): Saturation {
 export function saturationAtP(fluid: string, P: number): Saturation {
 	const fl = getCompiledFluid(fluid);
 	finite('P', P);
+	noSingleSaturation(fl);
 	if (!(P > 0))
 		throw new ThermoError(
 			'non-positive-input',

@@ -2,6 +2,7 @@
  * Picking among several states that satisfy the same pair of inputs. Without a hint the pair is
  * refused (`ambiguous-state`) with every candidate named; with a hint the matching one is returned.
  */
+import { bandOf, inBand } from '../pseudo-pure.ts';
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { FixOptions, RootHint, State, StateWindow } from '../types.ts';
@@ -199,8 +200,12 @@ export function choose(
 	const all = dedupe(found);
 	if (all.length === 0) throw noneError();
 	// candidates beyond the melting curve are solid, not states of the fluid (solid.ts)
-	const fluid = all.filter((s) => !isSolid(fl, s.T, s.P));
-	if (fluid.length === 0) throw solidError(fl, all[0].T, all[0].P, what);
+	const solidFree = all.filter((s) => !isSolid(fl, s.T, s.P));
+	if (solidFree.length === 0) throw solidError(fl, all[0].T, all[0].P, what);
+	// a mixture's candidates between its bubble and dew lines are not states it has (pseudo-pure.ts)
+	const band = bandOf(fl);
+	const fluid = band ? solidFree.filter((s) => !inBand(band, s)) : solidFree;
+	if (band && fluid.length === 0) throw band.refusal(solidFree[0].T);
 	// the requested window excludes roots outside it
 	const win = currentWindow;
 	const c = win ? fluid.filter((s) => inWindow(s, win)) : fluid;

@@ -17,6 +17,7 @@ import { flashYY } from './plane.ts';
 import { checkP, checkT } from './range.ts';
 import { precisionOf } from './precision.ts';
 import { assertFluid } from './solid.ts';
+import { bandOf, fixOnLine, holdOutsideBand } from '../pseudo-pure.ts';
 
 /** Canonical property keys after v → rho: order used to name pairs. */
 export type Key = 'T' | 'P' | 'rho' | 'u' | 'h' | 's' | 'x';
@@ -175,6 +176,9 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 	const near = options.near;
 	const win = options.window;
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
+	// a mixture (pseudo-pure.ts): x names its bubble or dew line; other answers are held to its band
+	const band = bandOf(fl);
+	if (band && kb === 'x') return fixOnLine(fl, band, ka as Exclude<Key, 'x'>, a, b);
 	const flash = BY_RANK[KEY_RANK[ka] * 7 + KEY_RANK[kb]];
 	// beyond the melting curve the substance is solid: refused (solid.ts), never answered as a fluid
 	let st: State;
@@ -188,6 +192,7 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 		}
 	}
 	assertFluid(fl, st);
+	if (band) st = holdOutsideBand(fl, band, st);
 	// a flash with one answer does not go through choose: the window applies here
 	if (win !== undefined && !inWindow(st, win))
 		throw outsideWindow(fl, `${ka} = ${fmt(a)} and ${kb} = ${fmt(b)}`, [st], win);

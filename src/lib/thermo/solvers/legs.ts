@@ -21,6 +21,7 @@
  * length on T–v and P–v with log v (and linear or log P), with extra points where the curve turns,
  * up to 1.5 × samples — and exactly through each crossing.
  */
+import { bandOf, holdLegOutsideBand } from '../pseudo-pure.ts';
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { getCompiledFluid } from '../registry.ts';
@@ -402,6 +403,8 @@ export function traceLeg(spec: LegSpec, chained = false): LegTrace {
 		wShaft,
 		qFlow: process === 'isenthalpic' ? 0 : dh + wShaft
 	};
+	const band = bandOf(fl);
+	if (band) holdLegOutsideBand(fl, band, leg);
 	if (notes.length) leg.notes = notes;
 	if (process === 'polytropic') leg.n = n;
 	const sides = pieces
