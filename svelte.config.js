@@ -1,11 +1,31 @@
 import adapter from '@sveltejs/adapter-node';
 import { vitePreprocess } from '@sveltejs/vite-plugin-svelte';
+import { buildComputeWorker } from './scripts/compute-worker.js';
+
+const OUT = 'build';
+
+/**
+ * adapter-node, then the compute pool's worker bundle beside the server (build/compute-worker.js):
+ * the engine work of the compute routes runs on worker threads (src/lib/server/compute/pool.ts),
+ * and a worker needs a file of its own to start from. It holds only the engine, so one esbuild
+ * step bundles it (scripts/compute-worker.js).
+ */
+function withComputeWorker(base) {
+	return {
+		...base,
+		async adapt(builder) {
+			await base.adapt(builder);
+			await buildComputeWorker(`${OUT}/compute-worker.js`);
+			builder.log.minor(`Wrote ${OUT}/compute-worker.js`);
+		}
+	};
+}
 
 /** @type {import('@sveltejs/kit').Config} */
 const config = {
 	preprocess: vitePreprocess(),
 	kit: {
-		adapter: adapter({ out: 'build' }),
+		adapter: withComputeWorker(adapter({ out: OUT })),
 		// cross-site form posts are refused by our own hook (src/lib/server/csrf.ts), which lets
 		// token-carrying API scripts through and answers the API in its JSON error shape
 		csrf: { trustedOrigins: ['*'] },

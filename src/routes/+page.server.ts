@@ -7,7 +7,7 @@ import { fields, parseForm, runAction, readFormData } from '$lib/server/forms';
 import { createTeamFor } from '$lib/server/teams';
 import { listRecentSheetsForUser, sheetCountsForUser } from '$lib/server/db/sheets';
 import { summaryOf } from '$lib/server/sheets';
-import { listFluids } from '$lib/thermo';
+import { fluidNames } from '$lib/server/chart-data';
 
 export const load: PageServerLoad = async ({ locals }) => {
 	if (!locals.user)
@@ -28,7 +28,7 @@ export const load: PageServerLoad = async ({ locals }) => {
 			teamName: r.team_name
 		})),
 		sheetCounts: Object.fromEntries(counts),
-		fluidNames: Object.fromEntries(listFluids().map((f) => [f.id, f.name]))
+		fluidNames: fluidNames()
 	};
 };
 

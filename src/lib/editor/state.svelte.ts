@@ -25,8 +25,10 @@ import type {
 import type { FluidInfo, Inputs, PathResult, Process, State, TargetName } from '$lib/thermo/types';
 import type { UnitPrefs } from '$lib/units/prefs';
 import { Autosave, readLocalCopy, type AutosaveState, type KeyValueStore } from './autosave';
+import type { ChartData, ChartDataRef } from '$lib/chart-data';
 import {
 	ApiError,
+	apiCall,
 	getIsolines,
 	getSaturation,
 	getSheetDraft,
@@ -101,9 +103,8 @@ export interface EditorInit {
 	resultError: string | null;
 	canEdit: boolean;
 	fluid: FluidInfo;
-	/** null when the engine could not trace the dome: the chart draws without it */
-	saturation: SaturationCurve | null;
-	fluids: FluidInfo[];
+	/** where the dome and the fluid list are (loadChartData fetches them after the first paint) */
+	chartData: ChartDataRef;
 }
 
 export type Outcome = { ok: true; note?: string | null } | { ok: false; message: string };
@@ -154,7 +155,9 @@ export class SheetEditor {
 	readonly sheetId: string;
 	readonly number: number;
 	readonly canEdit: boolean;
-	readonly fluids: FluidInfo[];
+	/** every fluid, for the picker: the sheet's own until loadChartData brings the list */
+	fluids = $state.raw<FluidInfo[]>([]);
+	readonly #chartData: ChartDataRef;
 
 	title = $state('');
 	status = $state<SheetStatus>('draft');
@@ -231,12 +234,12 @@ export class SheetEditor {
 		this.sheetId = init.sheetId;
 		this.number = init.number;
 		this.canEdit = init.canEdit;
-		this.fluids = init.fluids;
+		this.fluids = [init.fluid];
+		this.#chartData = init.chartData;
 		this.title = init.title;
 		this.status = init.status;
 		this.doc = init.doc;
 		this.fluid = init.fluid;
-		this.saturation = init.saturation;
 		this.updatedAt = init.updatedAt;
 		this.updatedBy = init.updatedBy;
 		this.save = {
@@ -251,11 +254,6 @@ export class SheetEditor {
 			this.committedView = this.view;
 		}
 		this.computeError = init.resultError;
-		if (!init.saturation)
-			this.notice = {
-				kind: 'caution',
-				text: `The engine could not trace the vapor dome of ${init.fluid.name} just now, so the charts are drawn without it. The states and legs are computed as usual.`
-			};
 		this.#history = new History(init.doc, { limit: 200, same: sameDoc });
 		this.#coalescer = createCoalescer<Candidate, { view: PathView; candidate: Candidate }>(
 			async (c) => ({ view: await this.#compute(c.doc, DRAG_SAMPLES), candidate: c }),
@@ -1035,6 +1033,32 @@ export class SheetEditor {
 	}
 
 	// ---- background lines ---------------------------------------------------------------------
+
+	/**
+	 * Fetch the fluid's chart data (the dome and the fluid list): an immutable, versioned resource
+	 * the browser keeps, so the page's HTML carries only the sheet. Without it the charts draw no dome.
+	 */
+	async loadChartData(f: typeof fetch = fetch): Promise<void> {
+		const ref = this.#chartData;
+		let data: ChartData;
+		try {
+			data = await apiCall<ChartData>(f, ref.url);
+		} catch (e) {
+			this.notice = {
+				kind: 'caution',
+				text: `The vapor dome could not be loaded (${messageOf(e, [])}), so the charts are drawn without it. Reload the page to try again.`
+			};
+			return;
+		}
+		if (data.fluids.length) this.fluids = data.fluids;
+		if (this.doc.spec.fluid !== ref.fluid || this.saturation) return;
+		this.saturation = data.saturation;
+		if (!data.saturation)
+			this.notice = {
+				kind: 'caution',
+				text: `The engine could not trace the vapor dome of ${this.fluid.name} just now, so the charts are drawn without it. The states and legs are computed as usual.`
+			};
+	}
 
 	/** Fetch the isolines and limit curves the current fluid, units and path need (cached by URL). */
 	async refreshLines(): Promise<void> {

@@ -211,7 +211,12 @@ function refuseQuery(url: URL): void {
 		);
 }
 
-/** A POST compute route: rate limit, then the handler's object as JSON, errors in the shape. */
+/** An answer already serialised (by a compute worker): sent as it is, never parsed again. */
+export class JsonText {
+	constructor(readonly text: string) {}
+}
+
+/** A POST compute route: rate limit, then the handler's object (or JsonText) as JSON, errors in the shape. */
 export function computePost<E extends RequestEvent>(
 	handler: (event: E) => Promise<unknown> | unknown
 ) {
@@ -220,7 +225,10 @@ export function computePost<E extends RequestEvent>(
 		if (limited) return limited;
 		try {
 			refuseQuery(event.url);
-			return json(await handler(event));
+			const out = await handler(event);
+			if (out instanceof JsonText)
+				return new Response(out.text, { headers: { 'content-type': 'application/json' } });
+			return json(out);
 		} catch (e) {
 			return computeError(e, event);
 		}
@@ -253,7 +261,8 @@ export function computeGet<E extends RequestEvent>(
 		try {
 			if (hit) chargeUnits(event, hit.units);
 			else {
-				const body = utf8.encode(JSON.stringify(await handler(event)));
+				const out = await handler(event);
+				const body = utf8.encode(out instanceof JsonText ? out.text : JSON.stringify(out));
 				hit = {
 					body,
 					etag: `"${createHash('sha1').update(body).digest('base64url').slice(0, 27)}"`,

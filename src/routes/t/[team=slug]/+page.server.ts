@@ -5,7 +5,7 @@ import { requireTeam } from '$lib/server/guard';
 import { listMembers } from '$lib/server/db/memberships';
 import { countSheets } from '$lib/server/db/sheets';
 import { listTeamSheets } from '$lib/server/sheets';
-import { listFluids } from '$lib/thermo';
+import { fluidNames } from '$lib/server/chart-data';
 import { controlCharProblem } from '$lib/plain-text';
 
 export const load: PageServerLoad = async (event) => {
@@ -25,6 +25,6 @@ export const load: PageServerLoad = async (event) => {
 		sheets: sheets.map((s) => ({ ...s, teamSlug: access.team.slug })),
 		matching: total,
 		sheetCount: all,
-		fluidNames: Object.fromEntries(listFluids().map((f) => [f.id, f.name]))
+		fluidNames: fluidNames()
 	};
 };

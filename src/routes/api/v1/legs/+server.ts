@@ -1,6 +1,7 @@
 import type { RequestHandler } from './$types';
-import { computeLeg, SAMPLES_DEFAULT, type Process } from '$lib/thermo';
-import { chargeWork, computePost, readBody } from '$lib/server/compute/http';
+import { SAMPLES_DEFAULT, type Process } from '$lib/thermo';
+import { chargeWork, computePost, JsonText, readBody } from '$lib/server/compute/http';
+import { compute } from '$lib/server/compute/pool';
 import { legRequestSchema } from '$lib/server/compute/schemas';
 
 /**
@@ -10,19 +11,18 @@ import { legRequestSchema } from '$lib/server/compute/schemas';
 export const POST: RequestHandler = computePost(async (event) => {
 	const b = await readBody(event.request, legRequestSchema);
 	chargeWork(event, b.samples ?? SAMPLES_DEFAULT);
-	return {
-		leg: computeLeg({
-			fluid: b.fluid,
-			start: b.start,
-			process: b.process as Process,
-			target: b.target,
-			n: b.n,
-			samples: b.samples,
-			startHint: b.startHint,
-			startNear: b.startNear,
-			endHint: b.endHint,
-			endNear: b.endNear,
-			window: b.window
-		})
+	const spec = {
+		fluid: b.fluid,
+		start: b.start,
+		process: b.process as Process,
+		target: b.target,
+		n: b.n,
+		samples: b.samples,
+		startHint: b.startHint,
+		startNear: b.startNear,
+		endHint: b.endHint,
+		endNear: b.endNear,
+		window: b.window
 	};
+	return new JsonText(await compute({ kind: 'leg', spec }));
 });

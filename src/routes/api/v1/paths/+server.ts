@@ -1,6 +1,7 @@
 import type { RequestHandler } from './$types';
-import { computePath, transport, type PathSpec } from '$lib/thermo';
-import { chargeWork, computePost, readBody } from '$lib/server/compute/http';
+import type { PathSpec } from '$lib/thermo';
+import { chargeWork, computePost, JsonText, readBody } from '$lib/server/compute/http';
+import { compute } from '$lib/server/compute/pool';
 import { pathPoints, pathRequestSchema } from '$lib/server/compute/schemas';
 
 /**
@@ -12,7 +13,5 @@ import { pathPoints, pathRequestSchema } from '$lib/server/compute/schemas';
 export const POST: RequestHandler = computePost(async (event) => {
 	const spec = await readBody(event.request, pathRequestSchema);
 	chargeWork(event, pathPoints(spec));
-	const path = computePath(spec as PathSpec);
-	for (const ps of path.states) ps.transport = transport(ps.state);
-	return { path };
+	return new JsonText(await compute({ kind: 'path', spec: spec as PathSpec }));
 });

@@ -1,6 +1,6 @@
 import type { RequestHandler } from './$types';
-import { fixState, stateExtras, transport } from '$lib/thermo';
-import { computePost, readBody } from '$lib/server/compute/http';
+import { computePost, JsonText, readBody } from '$lib/server/compute/http';
+import { compute } from '$lib/server/compute/pool';
 import { stateRequestSchema } from '$lib/server/compute/schemas';
 
 /**
@@ -10,10 +10,8 @@ import { stateRequestSchema } from '$lib/server/compute/schemas';
  */
 export const POST: RequestHandler = computePost(async ({ request }) => {
 	const body = await readBody(request, stateRequestSchema);
-	const state = fixState(body.fluid, body.inputs, {
-		hint: body.hint,
-		near: body.near,
-		window: body.window
-	});
-	return { state, extras: stateExtras(state), transport: transport(state) };
+	const options = { hint: body.hint, near: body.near, window: body.window };
+	return new JsonText(
+		await compute({ kind: 'state', fluid: body.fluid, inputs: body.inputs, options })
+	);
 });

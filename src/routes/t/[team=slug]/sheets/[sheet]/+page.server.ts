@@ -7,40 +7,39 @@ import { isAppError } from '$lib/server/errors';
 import { parseForm, readFormData, runAction } from '$lib/server/forms';
 import { readSheet, renameTeamSheet, sheetDeletion, titleSchema } from '$lib/server/sheets';
 import { sheetReviewData } from '$lib/server/review-pages';
+import { chartDataRef } from '$lib/server/chart-data';
 import {
 	computePath,
 	fixState,
 	getFluid,
-	listFluids,
-	saturationCurve,
 	stateExtras,
 	ThermoError,
-	type PathResult,
-	type SaturationCurve
+	type PathResult
 } from '$lib/thermo';
 import { engineSpec, labelIds, startOnlyResult } from '$lib/sheets/doc';
 import { startOptions } from '$lib/sheets/choice';
 import type { SheetDoc } from '$lib/sheets/types';
 
-const domes = new Map<string, SaturationCurve>();
-/** The vapor dome for the chart (cached per fluid); null if the engine cannot trace it — the sheet still opens. */
-function dome(fluid: string): SaturationCurve | null {
-	let d = domes.get(fluid);
-	if (!d) {
-		try {
-			d = saturationCurve(fluid, 100);
-		} catch (e) {
-			if (!(e instanceof ThermoError)) throw e;
-			console.error(`[statewright] the vapor dome of ${fluid} could not be traced: ${e.message}`);
-			return null;
-		}
-		domes.set(fluid, d);
-	}
-	return d;
+type Computed = { result: PathResult | null; resultError: string | null };
+
+/**
+ * Drafts computed for the first paint, by sheet and draft version (a version's document never
+ * changes), most recently used last: a sheet viewed again costs no engine work.
+ */
+const computed = new Map<string, Computed>();
+const COMPUTED_MAX = 500;
+
+function computeOnce(key: string, doc: SheetDoc): Computed {
+	let c = computed.get(key);
+	if (c) computed.delete(key);
+	else c = compute(doc);
+	computed.set(key, c);
+	if (computed.size > COMPUTED_MAX) computed.delete(computed.keys().next().value as string);
+	return c;
 }
 
 /** The draft computed for the first paint (the browser recomputes on every edit). */
-function compute(doc: SheetDoc): { result: PathResult | null; resultError: string | null } {
+function compute(doc: SheetDoc): Computed {
 	try {
 		if (doc.spec.legs.length === 0) {
 			const start = fixState(doc.spec.fluid, doc.spec.start, startOptions(doc.spec));
@@ -70,10 +69,10 @@ export const load: PageServerLoad = async (event) => {
 	return {
 		sheet: meta,
 		doc,
-		...compute(doc),
+		...computeOnce(`${meta.id}@${meta.version}`, doc),
 		fluid: getFluid(doc.spec.fluid),
-		saturation: dome(doc.spec.fluid),
-		fluids: listFluids(),
+		// the dome and the fluid list: one immutable resource per fluid, fetched by the browser
+		chartData: chartDataRef(doc.spec.fluid),
 		canEdit: access.can('sheet:edit'),
 		review: await sheetReviewData(getDb(), access, event.params.sheet),
 		deletion: await sheetDeletion(getDb(), access, event.params.sheet)

@@ -1,21 +1,17 @@
 import type { RequestHandler } from './$types';
-import { isolines } from '$lib/thermo';
-import { chargeWork, computeGet, readQuery } from '$lib/server/compute/http';
+import { chargeWork, computeGet, JsonText, readQuery } from '$lib/server/compute/http';
 import { fluidFromParam } from '$lib/server/compute/fluids';
+import { compute } from '$lib/server/compute/pool';
 import { isolineQuerySchema } from '$lib/server/compute/schemas';
-
-const UNIT = { isobar: 'Pa', isotherm: 'K', isochore: 'm³/kg' } as const;
+import type { IsolineKind } from '$lib/server/compute/tasks';
 
 /** Background isobars, isotherms or isochores (SI values) across the drawable range, through the dome. */
-export const GET: RequestHandler = computeGet((event) => {
+export const GET: RequestHandler = computeGet(async (event) => {
 	const fluid = fluidFromParam(event.params.id);
 	const q = readQuery(event.url, isolineQuerySchema);
 	chargeWork(event, q.values.length * q.points);
-	const kind = q.kind as keyof typeof UNIT;
-	return {
-		fluid: fluid.id,
-		kind,
-		unit: UNIT[kind],
-		lines: isolines(fluid.id, kind, q.values, q.points)
-	};
+	const line = q.kind as IsolineKind;
+	return new JsonText(
+		await compute({ kind: 'isolines', fluid: fluid.id, line, values: q.values, points: q.points })
+	);
 });
