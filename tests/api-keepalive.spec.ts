@@ -1,12 +1,12 @@
 import { expect, test } from '@playwright/test';
 import { exchange, openSocket, rawRequest } from '../src/lib/server/testing-http';
+import { PORT } from './helpers';
 
 /*
  * A client that keeps its connection alive sends its next request on the same socket after an
  * early refusal. The built app used to leave such a body unread, and the next request on the
  * socket was reset (ECONNRESET); hooks.server.ts now drains it (src/lib/server/body.ts).
  */
-const PORT = Number(process.env.E2E_PORT ?? 4317);
 const BIG = Buffer.alloc(300 * 1024, 'x');
 
 for (const [name, method, path, status] of [

@@ -6,17 +6,17 @@ import {
 	type APIResponse
 } from '@playwright/test';
 import Database from 'better-sqlite3';
-import { BASE, DEMO, FORM, createToken, signedInRequest } from './helpers';
+import { BASE, DB_PATH, DEMO, FORM, createToken, signedInRequest } from './helpers';
 
 // Control characters in every text field, against the built app: each table row sends a value
 // holding one (NUL first, as the reported 500 did, then BEL, ESC, DEL, backspace; one-line
 // fields also a tab and a line break) and must get a 4xx whose message names the control
 // character, and nothing may be stored. Runs in a team of its own so the demo team is untouched.
 
-const DB_PATH = `tmp/e2e-${process.env.E2E_PORT ?? 4317}/statewright.db`;
 const IN_ANY = ['\u0000abc', 'a\u0007b', 'x\u001b[2J', 'end\u007f', 'back\u0008space'];
 const IN_LINE = [...IN_ANY, 'two\nlines', 'tab\there'];
 const CONTROL =
+	// eslint-disable-next-line no-control-regex -- control characters are what this test looks for
 	/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]|\\u00(?:0[0-8bcef]|1[0-9a-f])|\\u007f/i;
 
 let owner: APIRequestContext;
@@ -76,11 +76,14 @@ test.afterAll(async () => {
 });
 
 const S = () => `/api/v1/teams/${slug}/sheets/${sheet}`;
+// a test patches the document at any depth, the way a client could send it
+/* eslint-disable @typescript-eslint/no-explicit-any */
 const withDoc = (patch: (d: Record<string, any>) => void) => {
 	const d = structuredClone(doc) as Record<string, any>;
 	patch(d);
 	return d;
 };
+/* eslint-enable @typescript-eslint/no-explicit-any */
 const csv = 'time [s],P [kPa a],T [°C]\n0,150,20\n';
 
 interface Row {

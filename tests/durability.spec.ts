@@ -2,7 +2,7 @@ import { expect, test } from '@playwright/test';
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdirSync, rmSync } from 'node:fs';
 import Database from 'better-sqlite3';
-import { DEMO, DEMO_PASSWORD } from './helpers';
+import { DEMO, DEMO_PASSWORD, ownPort } from './helpers';
 
 // Crash durability of the built server (build/index.js, as `npm start` runs it) on its own SQLite
 // file: sign in, make an API token and a sheet, then in each cycle save revisions through the API
@@ -11,7 +11,7 @@ import { DEMO, DEMO_PASSWORD } from './helpers';
 // client received) must be there with its message. Each cycle also races four saves on the same
 // base revision: exactly one 201, the rest 409. Fixed counts, so the run is repeatable and bounded.
 
-const PORT = Number(process.env.DURABILITY_PORT ?? Number(process.env.E2E_PORT ?? 4317) + 10);
+const PORT = Number(process.env.DURABILITY_PORT ?? ownPort(10));
 const ORIGIN = `http://127.0.0.1:${PORT}`;
 const DIR = `tmp/durability-${PORT}`;
 const DB_PATH = `${DIR}/statewright.db`;

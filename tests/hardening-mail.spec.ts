@@ -5,12 +5,12 @@ import {
 	BASE,
 	DEMO,
 	FORM,
-	PORT,
 	TEAM,
 	freshEmail,
 	lastMailId,
 	linkIn,
 	mailTo,
+	ownPort,
 	postFrom,
 	signedInRequest,
 	signedUpRequest,
@@ -295,7 +295,7 @@ test.describe('hardening: mail, enumeration, lock-out', () => {
 	}) => {
 		// a second copy of the built app, started as the README's `npm start` runs it (scripts/start.mjs):
 		// no NODE_ENV, no SMTP_URL, no ORIGIN — plain http on whatever address it is reached by
-		const port = PORT + 800;
+		const port = ownPort(800);
 		const base = `http://127.0.0.1:${port}`;
 		const dir = `tmp/e2e-console-${port}`;
 		rmSync(dir, { recursive: true, force: true });

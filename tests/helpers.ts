@@ -5,12 +5,35 @@ import {
 	request as playwrightRequest,
 	type APIRequestContext,
 	type Browser,
+	type Cookie,
 	type Page
 } from '@playwright/test';
 
-// The demo team seeded on the fresh e2e database (scripts/e2e-server.mjs sets SEED_DEMO=1).
-export const PORT = Number(process.env.E2E_PORT ?? 4317);
+/*
+ * Each Playwright worker has a server of its own (playwright.config.ts): worker n, its
+ * TEST_PARALLEL_INDEX, talks to the built app on E2E_PORT + n with its own fresh database and the
+ * demo team seeded on it (scripts/e2e-server.mjs sets SEED_DEMO=1).
+ */
+const E2E_PORT = Number(process.env.E2E_PORT ?? 4317);
+/** This worker's index (0 in a run with one worker). */
+export const WORKER = Number(process.env.TEST_PARALLEL_INDEX ?? 0);
+if (WORKER >= Number(process.env.E2E_WORKERS ?? 1))
+	throw new Error(
+		`worker ${WORKER} has no server: set the number of workers with E2E_WORKERS, not --workers`
+	);
+export const PORT = E2E_PORT + WORKER;
 export const BASE = `http://127.0.0.1:${PORT}`;
+/** This worker's database file, as scripts/e2e-server.mjs lays it out. */
+export const DB_PATH = `tmp/e2e-${PORT}/statewright.db`;
+
+/**
+ * A port for a server a spec starts itself (a crash test, a differently configured copy): `offset`
+ * names the kind, and each worker gets its own so two workers never collide.
+ */
+export function ownPort(offset: number): number {
+	return E2E_PORT + offset + WORKER;
+}
+
 export const DEMO_PASSWORD = 'statewright-demo';
 export const TEAM = 'brindlemoor';
 export const DEMO = {
@@ -103,12 +126,11 @@ export interface Mail {
 
 /*
  * Caught mail is read the way whoever runs the server reads it, not through any route a client of
- * the server could use: straight from the e2e server's SQLite file (scripts/e2e-server.mjs puts it
- * under tmp/e2e-<port>/), read-only. /dev/outbox shows each person only their own mail.
+ * the server could use: straight from this worker's e2e server's SQLite file (DB_PATH), read-only. /dev/outbox shows each person only their own mail.
  */
 let caught: Database.Database | undefined;
 function caughtMail(): Database.Database {
-	caught ??= new Database(`tmp/e2e-${PORT}/statewright.db`, {
+	caught ??= new Database(DB_PATH, {
 		readonly: true,
 		fileMustExist: true
 	});
@@ -215,16 +237,45 @@ export function linkIn(mail: Mail, prefix: string): string {
 	return link;
 }
 
-export async function signInPage(
-	page: Page,
-	email: string,
-	password = DEMO_PASSWORD
-): Promise<void> {
+/*
+ * The seeded demo people sign in through the form once per worker; later journeys that only need
+ * one of them signed in reuse that session's cookie, and fall back to the form when the session is
+ * gone (a test signed it out or changed the password). Anyone else, and every test about signing in
+ * itself, goes through the form each time.
+ */
+const demoSessions = new Map<string, Cookie[]>();
+const isDemo = (email: string, password: string) =>
+	password === DEMO_PASSWORD && (Object.values(DEMO) as string[]).includes(email);
+
+async function signInThroughForm(page: Page, email: string, password: string): Promise<void> {
 	await page.goto('/signin');
 	await page.getByLabel('E-mail').fill(email);
 	await page.getByLabel('Password').fill(password);
 	await page.getByRole('button', { name: 'Sign in' }).click();
 	await expect(page.getByRole('heading', { name: 'Your teams' })).toBeVisible();
+	if (isDemo(email, password))
+		demoSessions.set(
+			email,
+			(await page.context().cookies(BASE)).filter((c) => c.name.endsWith('statewright_session'))
+		);
+}
+
+/** Signs `page` in as `email` and leaves it on the home page ("Your teams"). */
+export async function signInPage(
+	page: Page,
+	email: string,
+	password = DEMO_PASSWORD
+): Promise<void> {
+	const saved = isDemo(email, password) ? demoSessions.get(email) : undefined;
+	if (saved?.length) {
+		await page.context().addCookies(saved);
+		await page.goto('/');
+		// the home page is rendered on the server: signed in, it shows the heading at once
+		if (await page.getByRole('heading', { name: 'Your teams' }).isVisible()) return;
+		demoSessions.delete(email);
+		await page.context().clearCookies();
+	}
+	await signInThroughForm(page, email, password);
 }
 
 /** The id of a member row in team settings (the hidden id of its role form). */
@@ -269,10 +320,6 @@ export async function signedInPage(
 	});
 	const page = await ctx.newPage();
 	page.on('pageerror', (e) => console.log(`[${email}] page error: ${e.message}`));
-	await page.goto('/signin');
-	await page.getByLabel('E-mail').fill(email);
-	await page.getByLabel('Password').fill(password);
-	await page.getByRole('button', { name: 'Sign in' }).click();
-	await expect(page.getByRole('heading', { name: 'Your teams' })).toBeVisible();
+	await signInPage(page, email, password);
 	return page;
 }

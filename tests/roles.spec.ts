@@ -5,6 +5,7 @@ import {
 	type APIRequestContext
 } from '@playwright/test';
 import {
+	BASE,
 	createToken,
 	DEMO,
 	freshEmail,
@@ -37,9 +38,7 @@ test.beforeAll(async () => {
 	});
 	expect(created.status()).toBe(303);
 	outsiderTeam = created.headers()['location'].replace('/t/', '');
-	ctx.anonymous = await playwrightRequest.newContext({
-		baseURL: `http://127.0.0.1:${process.env.E2E_PORT ?? 4317}`
-	});
+	ctx.anonymous = await playwrightRequest.newContext({ baseURL: BASE });
 });
 
 test.afterAll(async () => {

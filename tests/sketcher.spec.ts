@@ -1,4 +1,4 @@
-import { expect, test, type Locator, type Page } from '@playwright/test';
+import { expect, test, type Locator, type Page, type Request } from '@playwright/test';
 import { DEMO, signInPage, signedInRequest, TEAM } from './helpers';
 import { readFileSync } from 'node:fs';
 
@@ -26,28 +26,24 @@ async function chartGeometry(page: Page, kind: 'T-v' | 'P-v') {
 	const chart = page.locator(`[data-chart="${kind}"]`);
 	const drawing = chart.locator('svg.swc-drawing');
 	const box = (await drawing.boundingBox())!;
-	const ticks = await drawing
-		.locator('text.yl')
-		.evaluateAll((els) =>
-			els
-				.map((e) => ({
-					value: Number((e.textContent ?? '').replace('−', '-')),
-					y: Number(e.getAttribute('y'))
-				}))
-				.filter((t) => Number.isFinite(t.value))
-		);
+	const ticks = await drawing.locator('text.yl').evaluateAll((els) =>
+		els
+			.map((e) => ({
+				value: Number((e.textContent ?? '').replace('−', '-')),
+				y: Number(e.getAttribute('y'))
+			}))
+			.filter((t) => Number.isFinite(t.value))
+	);
 	expect(ticks.length).toBeGreaterThan(1);
 	const [a, b] = [ticks[0], ticks[ticks.length - 1]];
 	const slope = (b.y - a.y) / (b.value - a.value);
-	const states = await chart
-		.locator('circle.swc-hit-state')
-		.evaluateAll((els) =>
-			els.map((e) => ({
-				x: Number(e.getAttribute('cx')),
-				y: Number(e.getAttribute('cy')),
-				label: e.getAttribute('aria-label') ?? ''
-			}))
-		);
+	const states = await chart.locator('circle.swc-hit-state').evaluateAll((els) =>
+		els.map((e) => ({
+			x: Number(e.getAttribute('cx')),
+			y: Number(e.getAttribute('cy')),
+			label: e.getAttribute('aria-label') ?? ''
+		}))
+	);
 	return {
 		/** page y of a temperature (°C on an SI sheet) */
 		yOf: (value: number) => box.y + a.y + (value - a.value) * slope,
@@ -283,11 +279,23 @@ test.describe('the sketcher', () => {
 		await expect(hit).toHaveClass(/is-locked/);
 		const g = await chartGeometry(page, 'T-v');
 		const s2 = g.state(1);
+		// a drag in an editable sheet posts the new path at once (then saves the draft); here no
+		// request may leave the page. The page's own request sent after the drag is the barrier:
+		// once it is answered, any request the drag made has been seen.
+		const sent: string[] = [];
+		const onRequest = (r: Request) => {
+			if (r.method() !== 'GET') sent.push(`${r.method()} ${new URL(r.url()).pathname}`);
+		};
+		page.on('request', onRequest);
 		await page.mouse.move(s2.x, s2.y);
 		await page.mouse.down();
 		await page.mouse.move(s2.x, s2.y + 60, { steps: 8 });
 		await page.mouse.up();
-		await page.waitForTimeout(500);
+		const barrier = page.waitForResponse((r) => r.url().endsWith('/healthz?after-drag'));
+		await page.evaluate(() => fetch('/healthz?after-drag').then((r) => r.text()));
+		await barrier;
+		page.off('request', onRequest);
+		expect(sent).toEqual([]);
 		expect(await cellText(page, 'S2', 'T')).toBe(before);
 		// the server refuses the checker's save, whatever the page shows
 		const id = page.url().split('/').pop()!;
