@@ -16,7 +16,6 @@ import type {
 	ChartCoords,
 	ChartKind,
 	ChartSelection,
-	CurvePoint,
 	DesignLimits as ChartLimits,
 	Isoline,
 	MeasuredTrace,
@@ -44,7 +43,7 @@ import {
 	newLegId,
 	sameDoc,
 	sameSpec,
-	startOnlyResult,
+	firstStateResult,
 	stateIndex,
 	stateKey,
 	targetOf,
@@ -53,7 +52,7 @@ import {
 	type PathView
 } from '$lib/sheets/doc';
 import { History } from './history';
-import { isobarValues, isothermValues } from '$lib/sheets/isolines';
+import { frameLimits, frameLines } from '$lib/sheets/frame';
 import {
 	defaultTargetKind,
 	projectOntoLeg,
@@ -328,11 +327,10 @@ export class SheetEditor {
 	/** The path of `doc`: the server's answer (fewer points per leg while dragging), or S1 alone from the browser's engine. */
 	async #compute(doc: SheetDoc, samples?: number): Promise<PathView> {
 		if (doc.spec.legs.length === 0) {
-			const e = await this.loadEngine();
-			const start = e.fixState(doc.spec.fluid, doc.spec.start);
+			const result = firstStateResult(doc, await this.loadEngine());
 			return {
-				result: startOnlyResult(doc, start, e.stateExtras(start)),
-				states: [{ id: 'start', label: 'S1', state: start }],
+				result,
+				states: [{ id: 'start', label: 'S1', state: result.states[0].state }],
 				legs: []
 			};
 		}
@@ -995,48 +993,35 @@ export class SheetEditor {
 
 	// ---- background lines ---------------------------------------------------------------------
 
-	/** Fetch the isolines and limit curves the current fluid, units and path need (cached by URL). */
+	/** Fetch the isolines and limit curves the current fluid, units and path need (frame.ts; cached by values). */
 	async refreshLines(): Promise<void> {
-		const doc = this.doc;
 		const f = this.fluid;
 		if (!f) return;
-		const states = this.committedView?.states ?? [];
-		const maxP = Math.max(f.critical.P, ...states.map((s) => s.state.P));
-		const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.state.P));
-		const maxT = Math.max(f.critical.T, ...states.map((s) => s.state.T));
-		const isobars = doc.chart.isolines
-			? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units)
-			: [];
-		const isotherms = doc.chart.isolines
-			? isothermValues({ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) }, doc.units)
-			: [];
-		const key = JSON.stringify([f.id, isobars, isotherms]);
+		const want = frameLines(
+			f,
+			this.doc,
+			(this.committedView?.states ?? []).map((s) => s.state)
+		);
+		const key = JSON.stringify([f.id, want.isobars, want.isotherms]);
 		if (key !== this.#isoKey) {
 			this.#isoKey = key;
 			try {
 				const [tv, pv] = await Promise.all([
-					getIsolines(f.id, 'isobar', isobars),
-					getIsolines(f.id, 'isotherm', isotherms)
+					getIsolines(f.id, 'isobar', want.isobars),
+					getIsolines(f.id, 'isotherm', want.isotherms)
 				]);
 				if (this.#isoKey === key) this.isolines = { tv, pv };
 			} catch {
 				this.#isoKey = '';
 			}
 		}
-		const lim = doc.spec.limits ?? {};
-		const pLimits = [lim.designPressure, lim.reliefSetPressure].filter(
-			(v): v is number => typeof v === 'number' && v <= f.limits.Pmax
-		);
-		const tLimits = [lim.designTemperature, lim.minimumTemperature].filter(
-			(v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax
-		);
-		const lkey = JSON.stringify([f.id, pLimits, tLimits]);
+		const lkey = JSON.stringify([f.id, want.limitIsobars, want.limitIsotherms]);
 		if (lkey !== this.#limitKey) {
 			this.#limitKey = lkey;
 			try {
 				const [isobars, isotherms] = await Promise.all([
-					getIsolines(f.id, 'isobar', pLimits),
-					getIsolines(f.id, 'isotherm', tLimits)
+					getIsolines(f.id, 'isobar', want.limitIsobars),
+					getIsolines(f.id, 'isotherm', want.limitIsotherms)
 				]);
 				if (this.#limitKey === lkey) this.limitCurves = { isobars, isotherms };
 			} catch {
@@ -1047,31 +1032,7 @@ export class SheetEditor {
 
 	/** Design limits for the chart, with the curves a limit needs on the other diagram. */
 	chartLimits(): ChartLimits {
-		const lim = this.doc.spec.limits ?? {};
-		const curve = (list: Isoline[], value: number | undefined): CurvePoint[] | undefined =>
-			list.find((l) => Math.abs(l.value / (value ?? NaN) - 1) < 1e-9)?.points;
-		const out: ChartLimits = {};
-		if (lim.designPressure !== undefined)
-			out.designPressure = {
-				value: lim.designPressure,
-				points: curve(this.limitCurves.isobars, lim.designPressure)
-			};
-		if (lim.reliefSetPressure !== undefined)
-			out.reliefSetPressure = {
-				value: lim.reliefSetPressure,
-				points: curve(this.limitCurves.isobars, lim.reliefSetPressure)
-			};
-		if (lim.designTemperature !== undefined)
-			out.designTemperature = {
-				value: lim.designTemperature,
-				points: curve(this.limitCurves.isotherms, lim.designTemperature)
-			};
-		if (lim.minimumTemperature !== undefined)
-			out.minimumTemperature = {
-				value: lim.minimumTemperature,
-				points: curve(this.limitCurves.isotherms, lim.minimumTemperature)
-			};
-		return out;
+		return frameLimits(this.doc.spec.limits, this.limitCurves);
 	}
 
 	/** How the chart of `kind` maps data to screen (for projecting the pointer onto a leg). */

@@ -222,6 +222,18 @@ export function viewOf(spec: SheetPathSpec, result: PathResult): PathView {
 	return { result, states, legs };
 }
 
+/** The engine's calls a first state needs (the server's engine, or the one loaded in the browser). */
+export interface StartEngine {
+	fixState(fluid: string, inputs: Inputs): State;
+	stateExtras(state: State): StateExtras;
+}
+
+/** The path of a sheet without legs: its start state fixed by `engine`, with `startOnlyResult`. */
+export function firstStateResult(doc: SheetDoc, engine: StartEngine): PathResult {
+	const start = engine.fixState(doc.spec.fluid, doc.spec.start);
+	return startOnlyResult(doc, start, engine.stateExtras(start));
+}
+
 /**
  * The result of a sheet without legs (POST /api/v1/paths needs at least one): the start state and
  * its extras, fixed by the engine in the browser, with the limits the start already meets.

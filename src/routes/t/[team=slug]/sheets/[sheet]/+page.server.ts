@@ -7,54 +7,8 @@ import { isAppError } from '$lib/server/errors';
 import { parseForm, readFormData, runAction } from '$lib/server/forms';
 import { readSheet, renameTeamSheet, sheetDeletion, titleSchema } from '$lib/server/sheets';
 import { sheetReviewData } from '$lib/server/review-pages';
-import {
-	computePath,
-	fixState,
-	getFluid,
-	listFluids,
-	saturationCurve,
-	stateExtras,
-	ThermoError,
-	type PathResult,
-	type SaturationCurve
-} from '$lib/thermo';
-import { engineSpec, labelIds, startOnlyResult } from '$lib/sheets/doc';
-import type { SheetDoc } from '$lib/sheets/types';
-
-const domes = new Map<string, SaturationCurve>();
-/** The vapor dome for the chart (cached per fluid); null if the engine cannot trace it — the sheet still opens. */
-function dome(fluid: string): SaturationCurve | null {
-	let d = domes.get(fluid);
-	if (!d) {
-		try {
-			d = saturationCurve(fluid, 100);
-		} catch (e) {
-			if (!(e instanceof ThermoError)) throw e;
-			console.error(`[statewright] the vapor dome of ${fluid} could not be traced: ${e.message}`);
-			return null;
-		}
-		domes.set(fluid, d);
-	}
-	return d;
-}
-
-/** The draft computed for the first paint (the browser recomputes on every edit). */
-function compute(doc: SheetDoc): { result: PathResult | null; resultError: string | null } {
-	try {
-		if (doc.spec.legs.length === 0) {
-			const start = fixState(doc.spec.fluid, doc.spec.start);
-			return { result: startOnlyResult(doc, start, stateExtras(start)), resultError: null };
-		}
-		return { result: computePath(engineSpec(doc)), resultError: null };
-	} catch (e) {
-		if (e instanceof ThermoError)
-			return {
-				result: null,
-				resultError: labelIds(`${e.message}${e.hint ? ` ${e.hint}` : ''}`, doc.spec.legs)
-			};
-		throw e;
-	}
-}
+import { dome, draftResult } from '$lib/server/compute/sheet-frame';
+import { getFluid, listFluids } from '$lib/thermo';
 
 export const load: PageServerLoad = async (event) => {
 	const access = await requireTeam(event, event.params.team, 'read');
@@ -69,7 +23,7 @@ export const load: PageServerLoad = async (event) => {
 	return {
 		sheet: meta,
 		doc,
-		...compute(doc),
+		...draftResult(doc),
 		fluid: getFluid(doc.spec.fluid),
 		saturation: dome(doc.spec.fluid),
 		fluids: listFluids(),
