@@ -3,7 +3,7 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { dev } from '$app/environment';
 import { randomUUID } from 'node:crypto';
 import { startApp } from '$lib/server/startup';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import {
 	clearSessionCookie,
 	sessionCookieName,

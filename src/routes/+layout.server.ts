@@ -1,5 +1,5 @@
 import type { LayoutServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { listTeamsForUser } from '$lib/server/db/teams';
 import { config } from '$lib/server/config';
 

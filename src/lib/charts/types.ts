@@ -1,4 +1,5 @@
 import type { Crossing, Process, State } from '$lib/thermo/types';
+import type { DesignLimits } from '$lib/sheets/frame';
 
 /** Which property diagram: temperature or pressure against specific volume (always log v). */
 export type ChartKind = 'T-v' | 'P-v';
@@ -67,23 +68,7 @@ export interface ChartSelection {
 	id: string;
 }
 
-/**
- * One design limit, SI (pressures absolute, Pa; temperatures K). `points` is the limit's own
- * isobar (for a pressure limit on T–v) or isotherm (for a temperature limit on P–v); without
- * it that limit is not drawn on that diagram, because its curve cannot be drawn without the engine.
- */
-export interface DesignLimit {
-	value: number;
-	points?: CurvePoint[];
-}
-
-export interface DesignLimits {
-	designPressure?: DesignLimit | null;
-	reliefSetPressure?: DesignLimit | null;
-	designTemperature?: DesignLimit | null;
-	minimumTemperature?: DesignLimit | null;
-}
-
+export type { DesignLimit, DesignLimits } from '$lib/sheets/frame';
 export type DesignLimitName = keyof DesignLimits;
 
 /** A logged point. Only points with `v` can be drawn (the page fills v in with the engine). */

@@ -16,13 +16,12 @@ import type {
 	ChartCoords,
 	ChartKind,
 	ChartSelection,
-	CurvePoint,
 	DesignLimits as ChartLimits,
 	Isoline,
 	MeasuredTrace,
 	SaturationCurve
 } from '$lib/charts/types';
-import type { FluidInfo, Inputs, PathResult, Process, State, TargetName } from '$lib/thermo/types';
+import type { FluidInfo, Inputs, PathResult, Process, State } from '$lib/thermo/types';
 import type { UnitPrefs } from '$lib/units/prefs';
 import { Autosave, readLocalCopy, type AutosaveState, type KeyValueStore } from './autosave';
 import type { ChartData, ChartDataRef } from '$lib/chart-data';
@@ -40,13 +39,12 @@ import { createCoalescer, type Coalescer } from './coalescer';
 import {
 	cloneDoc,
 	engineSpec,
-	INVARIANT,
 	labelIds,
 	MAX_SHEET_LEGS,
 	newLegId,
 	sameDoc,
 	sameSpec,
-	startOnlyResult,
+	firstStateResult,
 	stateIndex,
 	stateKey,
 	targetOf,
@@ -64,6 +62,9 @@ import {
 	type StateCandidate
 } from '$lib/sheets/choice';
 import { isobarValues, isothermValues } from '$lib/sheets/isolines';
+import * as edits from './edits';
+import type { Edit } from './edits';
+import { frameLimits, frameLines } from '$lib/sheets/frame';
 import {
 	defaultTargetKind,
 	projectOntoLeg,
@@ -339,11 +340,10 @@ export class SheetEditor {
 	/** The path of `doc`: the server's answer (fewer points per leg while dragging), or S1 alone from the browser's engine. */
 	async #compute(doc: SheetDoc, samples?: number): Promise<PathView> {
 		if (doc.spec.legs.length === 0) {
-			const e = await this.loadEngine();
-			const start = e.fixState(doc.spec.fluid, doc.spec.start, startOptions(doc.spec));
+			const result = firstStateResult(doc, await this.loadEngine(), startOptions(doc.spec));
 			return {
-				result: startOnlyResult(doc, start, e.stateExtras(start)),
-				states: [{ id: 'start', label: 'S1', state: start }],
+				result,
+				states: [{ id: 'start', label: 'S1', state: result.states[0].state }],
 				legs: []
 			};
 		}
@@ -672,21 +672,17 @@ export class SheetEditor {
 
 	// ---- typed edits (table and setup) --------------------------------------------------------
 
-	/**
-	 * Fix S1 by a typed property. Typing one of its two properties changes that value; typing
-	 * another replaces the older of the two (the one set first), so the last two typed fix it.
-	 */
+	/** Commit the next document of an edit (edits.ts); an edit that changes nothing is done. */
+	#edit(edit: Edit | SheetDoc): Promise<Outcome> {
+		const r: Edit = 'ok' in edit ? edit : { ok: true, doc: edit };
+		if (!r.ok) return Promise.resolve(r);
+		if (r.doc === this.doc) return Promise.resolve({ ok: true });
+		return this.commit(r.doc);
+	}
+
+	/** Fix S1 by a typed property (the last two typed fix it). */
 	setStartProperty(prop: EditableProp, si: number): Promise<Outcome> {
-		const next = cloneDoc(withoutStartChoice(this.doc));
-		const start: Record<string, number> = {};
-		// rho is shown and typed as v
-		for (const [k, v] of Object.entries(next.spec.start))
-			if (v !== undefined) start[k === 'rho' ? 'v' : k] = k === 'rho' ? 1 / v : v;
-		const [older, newer] = Object.keys(start);
-		const keep = prop === newer ? older : newer;
-		next.spec.start = { [keep]: start[keep], [prop]: si };
-		delete next.startSpec;
-		return this.commit(next);
+		return this.#edit(edits.setStartProperty(withoutStartChoice(this.doc), prop, si));
 	}
 
 	/**
@@ -695,24 +691,19 @@ export class SheetEditor {
 	 * dragging S1 afterwards replaces it with two properties again.
 	 */
 	async setStartFill(fill: FillSpec): Promise<Outcome> {
-		if (this.doc.spec.system.kind !== 'closed')
-			return {
-				ok: false,
-				message:
-					'A start by fill level is for a closed system (a vessel); set the system to closed first.'
-			};
+		const noFill = edits.setStartFill(this.doc, fill, {});
+		if (!noFill.ok) return noFill;
 		const e = await this.loadEngine();
-		const next = cloneDoc(withoutStartChoice(this.doc));
+		let start: Inputs;
 		try {
-			next.spec.start = fillStart(e, next.spec.fluid, fill);
+			start = fillStart(e, this.doc.spec.fluid, fill);
 		} catch (err) {
 			return {
 				ok: false,
 				message: `No fill level there: ${messageOf(err, [])} Give a temperature or pressure between the triple point and the critical point.`
 			};
 		}
-		next.startSpec = { ...fill };
-		return this.commit(next);
+		return this.#edit(edits.setStartFill(withoutStartChoice(this.doc), fill, start));
 	}
 
 	/** A temperature typed in a P cell (or a pressure in a T cell): the saturation value there, with a note (saturation-input.ts). */
@@ -723,20 +714,9 @@ export class SheetEditor {
 
 	/** Replace the start pair at once (the table's "fixed by" picker). */
 	setStartPair(a: EditableProp, b: EditableProp): Promise<Outcome> {
-		const s = this.view?.states[0]?.state;
-		if (!s || a === b)
-			return Promise.resolve({ ok: false, message: 'Pick two different properties.' });
-		const va = valueOf(s, a);
-		const vb = valueOf(s, b);
-		if (va === null || vb === null)
-			return Promise.resolve({
-				ok: false,
-				message: 'S1 has no quality outside the vapor dome; pick other properties.'
-			});
-		const next = cloneDoc(withoutStartChoice(this.doc));
-		next.spec.start = { [a]: va, [b]: vb };
-		delete next.startSpec;
-		return this.commit(next);
+		return this.#edit(
+			edits.setStartPair(withoutStartChoice(this.doc), this.view?.states[0]?.state, a, b)
+		);
 	}
 
 	/**
@@ -750,73 +730,27 @@ export class SheetEditor {
 		const e = await this.loadEngine();
 		const r = saturationTarget(e, this.doc.spec.fluid, start, leg.process, leg.n);
 		if (!r.ok) return { ok: false, message: r.message };
-		const next = cloneDoc(this.doc);
-		next.spec.legs[index] = { ...leg, target: { x: r.x }, to: 'saturation' };
-		const out = await this.commit(next);
+		const out = await this.#edit(edits.setTargetSaturation(this.doc, index, r.x));
 		return out.ok ? { ok: true, line: r.x === 0 ? 'liquid' : 'vapor' } : out;
 	}
 
 	/** End leg `index` exactly on a typed property of its end state. */
 	setTarget(index: number, prop: EditableProp, si: number): Promise<Outcome> {
-		const leg = this.doc.spec.legs[index];
-		if (!leg) return Promise.resolve({ ok: false, message: 'That leg is no longer on the sheet.' });
-		if (INVARIANT[leg.process] === prop)
-			return Promise.resolve({
-				ok: false,
-				message: `An ${leg.process} leg keeps ${prop} constant; type another property of this state.`
-			});
-		const next = cloneDoc(this.doc);
-		next.spec.legs[index] = {
-			...leg,
-			target: { [prop]: si } as Partial<Record<TargetName, number>>
-		};
-		delete next.spec.legs[index].to;
-		return this.commit(next);
+		return this.#edit(edits.setTarget(this.doc, index, prop, si));
 	}
 
 	/** Change a leg's process, keeping its id (so its review notes stay on it) and, where it can, its end. */
 	setProcess(index: number, process: Process): Promise<Outcome> {
-		const leg = this.doc.spec.legs[index];
-		if (!leg || leg.process === process) return Promise.resolve({ ok: true });
 		const end = this.view?.states[index + 1]?.state;
-		const [kind, value] = targetOf(leg.target);
-		let target: Partial<Record<TargetName, number>> = { [kind]: value };
-		if (INVARIANT[process] === kind && end)
-			target = targetFor(
-				process,
-				end,
-				kind,
-				'T-v',
-				process === 'polytropic' ? this.addN : undefined
-			).target;
-		else if (INVARIANT[process] === kind) target = { T: value };
-		const next = cloneDoc(this.doc);
-		const changed: SheetLegSpec = { id: leg.id, process, target };
-		if (process === 'polytropic') changed.n = leg.n ?? this.addN;
-		next.spec.legs[index] = changed;
-		return this.commit(next);
+		return this.#edit(edits.setProcess(this.doc, index, process, end, this.addN));
 	}
 
 	setN(index: number, n: number): Promise<Outcome> {
-		const leg = this.doc.spec.legs[index];
-		if (!leg || leg.process !== 'polytropic')
-			return Promise.resolve({ ok: false, message: 'Only a polytropic leg has n.' });
-		if (!Number.isFinite(n) || Math.abs(n) > 50)
-			return Promise.resolve({
-				ok: false,
-				message: 'n must be a number from −50 to 50, e.g. 1.3.'
-			});
-		const next = cloneDoc(this.doc);
-		next.spec.legs[index] = { ...leg, n };
-		return this.commit(next);
+		return this.#edit(edits.setN(this.doc, index, n));
 	}
 
 	deleteLeg(index: number): Promise<Outcome> {
-		const leg = this.doc.spec.legs[index];
-		if (!leg) return Promise.resolve({ ok: false, message: 'That leg is no longer on the sheet.' });
-		const next = cloneDoc(this.doc);
-		next.spec.legs.splice(index, 1);
-		return this.commit(next).then((r) => {
+		return this.#edit(edits.deleteLeg(this.doc, index)).then((r) => {
 			if (r.ok) this.selection = null;
 			return r;
 		});
@@ -824,13 +758,7 @@ export class SheetEditor {
 
 	/** Move a leg one place earlier (-1) or later (+1); every state after it re-solves. */
 	moveLeg(index: number, by: -1 | 1): Promise<Outcome> {
-		const to = index + by;
-		const legs = this.doc.spec.legs;
-		if (to < 0 || to >= legs.length) return Promise.resolve({ ok: true });
-		const next = cloneDoc(this.doc);
-		const [leg] = next.spec.legs.splice(index, 1);
-		next.spec.legs.splice(to, 0, leg);
-		return this.commit(next);
+		return this.#edit(edits.moveLeg(this.doc, index, by));
 	}
 
 	/** Delete the selected leg (the Delete key); a selected state deletes the leg ending there. */
@@ -849,11 +777,7 @@ export class SheetEditor {
 	}
 
 	setSystem(system: SheetDoc['spec']['system']): Promise<Outcome> {
-		const next = cloneDoc(this.doc);
-		next.spec.system = system;
-		// a fill level belongs to a vessel: a flow device keeps the start's two properties
-		if (system.kind !== 'closed') delete next.startSpec;
-		return this.commit(next);
+		return this.#edit(edits.setSystem(this.doc, system));
 	}
 
 	/**
@@ -882,47 +806,31 @@ export class SheetEditor {
 	}
 
 	setLimits(limits: NonNullable<SheetDoc['spec']['limits']>): Promise<Outcome> {
-		const next = cloneDoc(this.doc);
-		const clean = Object.fromEntries(
-			Object.entries(limits).filter(([, v]) => typeof v === 'number' && Number.isFinite(v))
-		);
-		if (Object.keys(clean).length) next.spec.limits = clean;
-		else delete next.spec.limits;
-		return this.commit(next);
+		return this.#edit(edits.setLimits(this.doc, limits));
+	}
+
+	/** A view preference: saved for editors, for readers it changes the view only. */
+	#viewOnly(next: SheetDoc): Promise<Outcome> {
+		if (this.canEdit) return this.#edit(next);
+		this.doc = next;
+		return Promise.resolve({ ok: true });
 	}
 
 	setUnits(patch: Partial<UnitPrefs>): Promise<Outcome> {
-		const next = cloneDoc(this.doc);
-		next.units = { ...next.units, ...patch };
-		next.spec.atmosphericPressure = next.units.atmosphere;
-		if (!this.canEdit) {
-			this.doc = next;
-			return Promise.resolve({ ok: true });
-		}
-		return this.commit(next);
+		return this.#viewOnly(edits.setUnits(this.doc, patch));
 	}
 
 	/** Chart preferences; for readers they change the view only (nothing is saved). */
 	setChart(patch: Partial<ChartPrefs>): Promise<Outcome> {
-		const next = cloneDoc(this.doc);
-		next.chart = { ...next.chart, ...patch };
-		if (!this.canEdit) {
-			this.doc = next;
-			return Promise.resolve({ ok: true });
-		}
-		return this.commit(next);
+		return this.#viewOnly(edits.setChart(this.doc, patch));
 	}
 
 	setTitleBlock(patch: Partial<TitleBlockFields>): Promise<Outcome> {
-		const next = cloneDoc(this.doc);
-		next.titleBlock = { ...next.titleBlock, ...patch };
-		return this.commit(next);
+		return this.#edit(edits.setTitleBlock(this.doc, patch));
 	}
 
 	setDescription(text: string): Promise<Outcome> {
-		const next = cloneDoc(this.doc);
-		next.description = text;
-		return this.commit(next);
+		return this.#edit(edits.setDescription(this.doc, text));
 	}
 
 	/** Another fluid: the same spec in it, if its start state exists there. */
@@ -930,12 +838,11 @@ export class SheetEditor {
 		const info = this.fluids.find((f) => f.id === id);
 		if (!info) return { ok: false, message: 'Unknown fluid.' };
 		if (id === this.doc.spec.fluid) return { ok: true };
-		const next = cloneDoc(this.doc);
-		next.spec.fluid = id;
-		if (next.startSpec) {
+		let start: Inputs | undefined;
+		if (this.doc.startSpec) {
 			// the same fill level in the other fluid
 			try {
-				next.spec.start = fillStart(await this.loadEngine(), id, next.startSpec);
+				start = fillStart(await this.loadEngine(), id, this.doc.startSpec);
 			} catch (err) {
 				return {
 					ok: false,
@@ -949,7 +856,7 @@ export class SheetEditor {
 		} catch (e) {
 			return { ok: false, message: messageOf(e, []) };
 		}
-		const r = await this.commit(next);
+		const r = await this.commit(edits.setFluid(this.doc, id, start));
 		if (r.ok) {
 			this.fluid = info;
 			this.saturation = sat;
@@ -1060,48 +967,35 @@ export class SheetEditor {
 			};
 	}
 
-	/** Fetch the isolines and limit curves the current fluid, units and path need (cached by URL). */
+	/** Fetch the isolines and limit curves the current fluid, units and path need (frame.ts; cached by values). */
 	async refreshLines(): Promise<void> {
-		const doc = this.doc;
 		const f = this.fluid;
 		if (!f) return;
-		const states = this.committedView?.states ?? [];
-		const maxP = Math.max(f.critical.P, ...states.map((s) => s.state.P));
-		const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.state.P));
-		const maxT = Math.max(f.critical.T, ...states.map((s) => s.state.T));
-		const isobars = doc.chart.isolines
-			? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units)
-			: [];
-		const isotherms = doc.chart.isolines
-			? isothermValues({ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) }, doc.units)
-			: [];
-		const key = JSON.stringify([f.id, isobars, isotherms]);
+		const want = frameLines(
+			f,
+			this.doc,
+			(this.committedView?.states ?? []).map((s) => s.state)
+		);
+		const key = JSON.stringify([f.id, want.isobars, want.isotherms]);
 		if (key !== this.#isoKey) {
 			this.#isoKey = key;
 			try {
 				const [tv, pv] = await Promise.all([
-					getIsolines(f.id, 'isobar', isobars),
-					getIsolines(f.id, 'isotherm', isotherms)
+					getIsolines(f.id, 'isobar', want.isobars),
+					getIsolines(f.id, 'isotherm', want.isotherms)
 				]);
 				if (this.#isoKey === key) this.isolines = { tv, pv };
 			} catch {
 				this.#isoKey = '';
 			}
 		}
-		const lim = doc.spec.limits ?? {};
-		const pLimits = [lim.designPressure, lim.reliefSetPressure].filter(
-			(v): v is number => typeof v === 'number' && v <= f.limits.Pmax
-		);
-		const tLimits = [lim.designTemperature, lim.minimumTemperature].filter(
-			(v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax
-		);
-		const lkey = JSON.stringify([f.id, pLimits, tLimits]);
+		const lkey = JSON.stringify([f.id, want.limitIsobars, want.limitIsotherms]);
 		if (lkey !== this.#limitKey) {
 			this.#limitKey = lkey;
 			try {
 				const [isobars, isotherms] = await Promise.all([
-					getIsolines(f.id, 'isobar', pLimits),
-					getIsolines(f.id, 'isotherm', tLimits)
+					getIsolines(f.id, 'isobar', want.limitIsobars),
+					getIsolines(f.id, 'isotherm', want.limitIsotherms)
 				]);
 				if (this.#limitKey === lkey) this.limitCurves = { isobars, isotherms };
 			} catch {
@@ -1112,31 +1006,7 @@ export class SheetEditor {
 
 	/** Design limits for the chart, with the curves a limit needs on the other diagram. */
 	chartLimits(): ChartLimits {
-		const lim = this.doc.spec.limits ?? {};
-		const curve = (list: Isoline[], value: number | undefined): CurvePoint[] | undefined =>
-			list.find((l) => Math.abs(l.value / (value ?? NaN) - 1) < 1e-9)?.points;
-		const out: ChartLimits = {};
-		if (lim.designPressure !== undefined)
-			out.designPressure = {
-				value: lim.designPressure,
-				points: curve(this.limitCurves.isobars, lim.designPressure)
-			};
-		if (lim.reliefSetPressure !== undefined)
-			out.reliefSetPressure = {
-				value: lim.reliefSetPressure,
-				points: curve(this.limitCurves.isobars, lim.reliefSetPressure)
-			};
-		if (lim.designTemperature !== undefined)
-			out.designTemperature = {
-				value: lim.designTemperature,
-				points: curve(this.limitCurves.isotherms, lim.designTemperature)
-			};
-		if (lim.minimumTemperature !== undefined)
-			out.minimumTemperature = {
-				value: lim.minimumTemperature,
-				points: curve(this.limitCurves.isotherms, lim.minimumTemperature)
-			};
-		return out;
+		return frameLimits(this.doc.spec.limits, this.limitCurves);
 	}
 
 	/** How the chart of `kind` maps data to screen (for projecting the pointer onto a leg). */

@@ -6,7 +6,7 @@ import type { RejectedLine, TraceColumn, TracePoint } from '../traces/types';
 /** What a read-only chart needs besides the path: the dome, background isolines, design limits. */
 export interface ChartFrame {
 	fluid: FluidInfo;
-	saturation: SaturationCurve;
+	saturation: SaturationCurve | null;
 	isolines: { tv: Isoline[]; pv: Isoline[] };
 	limits: ChartLimits;
 }

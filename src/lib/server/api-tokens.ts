@@ -11,7 +11,7 @@ import { getTeamById } from './db/teams';
 import { logTeamEvent } from './db/team-events';
 import { AppError } from './errors';
 import { newSecret, sha256 } from './secrets';
-import type { TeamAccess } from './guard';
+import type { TeamAccess, TokenPrincipal } from './access';
 import { can } from '../roles';
 
 /*
@@ -26,15 +26,7 @@ export const TOKEN_PREFIX = 'swt_';
 const TOKEN_PATTERN = /^swt_[A-Za-z0-9_-]{43}$/;
 const LAST_USED_RESOLUTION_MS = 60_000;
 
-export interface TokenPrincipal {
-	id: string;
-	name: string;
-	role: Role;
-	teamId: string;
-	createdBy: string | null;
-	/** the creator's name, who signs what the token does (null when the account is gone) */
-	createdByName: string | null;
-}
+export type { TokenPrincipal } from './access';
 
 /** The roles a member may give a new token. */
 export function grantableTokenRoles(role: Role): Role[] {

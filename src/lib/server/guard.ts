@@ -1,11 +1,11 @@
 import { error, redirect } from '@sveltejs/kit';
 import { can, ROLE_LABEL, type Capability, type Role } from '../roles';
-import type { DB, Team } from './db/schema';
-import { getDb } from './db';
+import type { DB } from './db/schema';
+import { getDb } from './database';
 import { getTeamBySlug } from './db/teams';
 import { getMembership } from './db/memberships';
 import type { SessionUser } from './auth';
-import type { TokenPrincipal } from './api-tokens';
+import type { Principal, TeamAccess } from './access';
 
 /*
  * Every permission check of the app goes through this module.
@@ -19,17 +19,7 @@ import type { TokenPrincipal } from './api-tokens';
  * On /api/v1/* an API token is a principal too: it reaches only its own team, with its role.
  */
 
-export type Principal =
-	{ kind: 'user'; user: SessionUser } | { kind: 'token'; token: TokenPrincipal };
-
-export interface TeamAccess {
-	team: Team;
-	role: Role;
-	principal: Principal;
-	/** who to record as having done something: the person, or for a token "Creator Name (token “name”)" */
-	actor: { id: string | null; label: string };
-	can(capability: Capability): boolean;
-}
+export type { Principal, TeamAccess } from './access';
 
 /** The part of a RequestEvent the guard needs (lets unit tests pass a plain object). */
 export interface GuardEvent {

@@ -146,7 +146,7 @@ let appMailer: Promise<Mailer> | undefined;
 /** The app's mailer, started on first use (the server starts it in `init`). */
 export function getMailer(): Promise<Mailer> {
 	appMailer ??= import('./config').then(async ({ config }) => {
-		const { getDb } = await import('./db');
+		const { getDb } = await import('./database');
 		const c = config();
 		return createMailer({ db: getDb(), smtpUrl: c.smtpUrl, from: c.mailFrom });
 	});

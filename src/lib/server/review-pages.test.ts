@@ -1,17 +1,9 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { expectAppError } from './testing';
 import { reviewWorld, type ReviewWorld } from './revisions.test-support';
-import {
-	chartFrame,
-	comparePageData,
-	printPageData,
-	revisionPageData,
-	revisionParam
-} from './review-pages';
+import { comparePageData, printPageData, revisionPageData, revisionParam } from './review-pages';
 import { saveRevision } from './revisions';
 import { createNote } from './notes';
-import { vesselDoc } from '$lib/revisions/test-fixtures';
-import { computePath } from '$lib/thermo';
 
 let w: ReviewWorld;
 beforeEach(async () => {
@@ -22,21 +14,6 @@ afterEach(async () => {
 });
 
 describe('read-only page data', () => {
-	it('frames a chart: dome, isolines in the sheet units, limit curves for both diagrams', () => {
-		const doc = vesselDoc();
-		const f = chartFrame(doc, [computePath(doc.spec)]);
-		expect(f.fluid.id).toBe('water');
-		expect(f.saturation.liquid.length).toBeGreaterThan(50);
-		expect(f.isolines.tv.every((l) => l.kind === 'isobar')).toBe(true);
-		expect(f.isolines.pv.every((l) => l.kind === 'isotherm')).toBe(true);
-		expect(f.isolines.tv.length).toBeGreaterThan(2);
-		// the design pressure (1 101 325 Pa a, set on the sheet) is drawn on T–v as its own isobar
-		expect(f.limits.designPressure?.value).toBe(1_101_325);
-		expect(f.limits.designPressure?.points?.length).toBeGreaterThan(10);
-		const off = chartFrame({ ...doc, chart: { ...doc.chart, isolines: false } }, [null]);
-		expect(off.isolines.tv).toEqual([]);
-	});
-
 	it('gives a revision page its notes against that revision, sign-off and history', async () => {
 		const sheet = await w.newSheet();
 		await saveRevision(w.env.db, await w.access(w.people.designer), sheet, {

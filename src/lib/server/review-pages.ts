@@ -1,18 +1,6 @@
 import type { DB } from './db/schema';
 import { AppError } from './errors';
 import type { TeamAccess } from './guard';
-import {
-	computePath,
-	getFluid,
-	isolines as engineIsolines,
-	saturationCurve,
-	ThermoError
-} from '$lib/thermo';
-import type { Isoline, PathResult, SaturationCurve } from '$lib/thermo/types';
-import type { ChartFrame } from '$lib/review/types';
-import type { SheetDoc } from '$lib/sheets/types';
-import { isobarValues, isothermValues } from '$lib/sheets/isolines';
-import type { DesignLimits as ChartLimits, CurvePoint } from '$lib/charts/types';
 import { listMembers } from './db/memberships';
 import { latestRevision } from './db/revisions';
 import {
@@ -28,97 +16,11 @@ import { listNotes } from './notes';
 import { listTraces } from './traces';
 import { checkDoc } from './sheets';
 import { getSheet } from './db/sheets';
-import { engineSpec } from '$lib/sheets/doc';
+import { chartFrame, draftResult } from './compute/sheet-frame';
 import { signOffOverrides } from '$lib/export/title';
-
-/*
- * Data the read-only pages (a revision, a comparison, the print view) need to draw a path without
- * the editor: the dome, background isolines and design-limit curves, computed here with the engine
- * the way the sketcher's editor asks the compute API for them.
- */
 
 export type { ChartFrame } from '$lib/review/types';
 
-const domes = new Map<string, SaturationCurve>();
-
-function dome(fluid: string): SaturationCurve {
-	let d = domes.get(fluid);
-	if (!d) {
-		d = saturationCurve(fluid, 100);
-		domes.set(fluid, d);
-	}
-	return d;
-}
-
-function lines(fluid: string, kind: 'isobar' | 'isotherm', values: number[]): Isoline[] {
-	if (!values.length) return [];
-	try {
-		return engineIsolines(fluid, kind, values.slice(0, 40), 80);
-	} catch (e) {
-		if (e instanceof ThermoError) return [];
-		throw e;
-	}
-}
-
-/** The chart's frame for a document and (if it computed) its path. */
-export function chartFrame(doc: SheetDoc, results: Array<PathResult | null>): ChartFrame {
-	const f = getFluid(doc.spec.fluid);
-	const states = results.flatMap((r) => r?.states ?? []).map((s) => s.state);
-	const maxP = Math.max(f.critical.P, ...states.map((s) => s.P));
-	const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.P));
-	const maxT = Math.max(f.critical.T, ...states.map((s) => s.T));
-	const isobars = doc.chart.isolines
-		? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units).filter(
-				(v) => v <= f.limits.Pmax
-			)
-		: [];
-	const isotherms = doc.chart.isolines
-		? isothermValues(
-				{ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) },
-				doc.units
-			).filter((v) => v >= f.limits.Tmin && v <= f.limits.Tmax)
-		: [];
-	const lim = doc.spec.limits ?? {};
-	const pLimits = [lim.designPressure, lim.reliefSetPressure].filter(
-		(v): v is number => typeof v === 'number' && v <= f.limits.Pmax
-	);
-	const tLimits = [lim.designTemperature, lim.minimumTemperature].filter(
-		(v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax
-	);
-	const limitIsobars = lines(f.id, 'isobar', pLimits);
-	const limitIsotherms = lines(f.id, 'isotherm', tLimits);
-	const curve = (list: Isoline[], value: number | undefined): CurvePoint[] | undefined =>
-		list.find((l) => Math.abs(l.value / (value ?? NaN) - 1) < 1e-9)?.points;
-	const limits: ChartLimits = {};
-	if (lim.designPressure !== undefined)
-		limits.designPressure = {
-			value: lim.designPressure,
-			points: curve(limitIsobars, lim.designPressure)
-		};
-	if (lim.reliefSetPressure !== undefined)
-		limits.reliefSetPressure = {
-			value: lim.reliefSetPressure,
-			points: curve(limitIsobars, lim.reliefSetPressure)
-		};
-	if (lim.designTemperature !== undefined)
-		limits.designTemperature = {
-			value: lim.designTemperature,
-			points: curve(limitIsotherms, lim.designTemperature)
-		};
-	if (lim.minimumTemperature !== undefined)
-		limits.minimumTemperature = {
-			value: lim.minimumTemperature,
-			points: curve(limitIsotherms, lim.minimumTemperature)
-		};
-	return {
-		fluid: f,
-		saturation: dome(f.id),
-		isolines: { tv: lines(f.id, 'isobar', isobars), pv: lines(f.id, 'isotherm', isotherms) },
-		limits
-	};
-}
-
-/** The sheet, its team's members (for mentions and checkers) and the newest revision number. */
 export async function sheetContext(db: DB, access: TeamAccess, sheetId: string) {
 	const sheet = await loadSheet(db, access, sheetId);
 	const members = await listMembers(db, access.team.id);
@@ -221,17 +123,12 @@ export async function printPageData(
 ) {
 	const ctx = await sheetContext(db, access, sheetId);
 	let doc;
-	let result: PathResult | null;
+	let result;
 	let revision: RevisionSummary | null = null;
 	if (rev === 'draft') {
 		const row = (await getSheet(db, access.team.id, ctx.sheet.id))!;
 		doc = checkDoc(JSON.parse(row.draft)).doc;
-		try {
-			result = computePath(engineSpec(doc));
-		} catch (e) {
-			if (!(e instanceof ThermoError)) throw e;
-			result = null;
-		}
+		result = draftResult(doc).result;
 	} else {
 		const {
 			doc: frozen,

@@ -1,5 +1,5 @@
 import { config } from './config';
-import { getDb, migrateAppDatabase } from './db';
+import { getDb, migrateAppDatabase } from './database';
 import { getMailer } from './mail';
 import { backgroundSettled } from './background';
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_TEAM, seedDemo } from './demo';

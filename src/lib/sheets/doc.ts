@@ -4,6 +4,7 @@
  */
 import type { ChartLeg, ChartState } from '../charts/types';
 import type {
+	FixOptions,
 	Inputs,
 	PathResult,
 	PathSpec,
@@ -225,6 +226,22 @@ export function viewOf(spec: SheetPathSpec, result: PathResult): PathView {
 		return leg;
 	});
 	return { result, states, legs };
+}
+
+/** The engine's calls a first state needs (the server's engine, or the one loaded in the browser). */
+export interface StartEngine {
+	fixState(fluid: string, inputs: Inputs, options?: FixOptions): State;
+	stateExtras(state: State): StateExtras;
+}
+
+/** The path of a sheet without legs: its start state fixed by `engine`, with `startOnlyResult`. */
+export function firstStateResult(
+	doc: SheetDoc,
+	engine: StartEngine,
+	options?: FixOptions
+): PathResult {
+	const start = engine.fixState(doc.spec.fluid, doc.spec.start, options);
+	return startOnlyResult(doc, start, engine.stateExtras(start));
 }
 
 /**

@@ -1,6 +1,6 @@
 import { error, type RequestEvent } from '@sveltejs/kit';
 import { config } from '$lib/server/config';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { getUserById } from '$lib/server/db/users';
 import { requireUser } from '$lib/server/guard';
 

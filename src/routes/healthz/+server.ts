@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
 import { sql } from 'kysely';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 
 /** Liveness and readiness: the database answers. */
 export const GET: RequestHandler = async () => {

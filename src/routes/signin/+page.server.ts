@@ -1,7 +1,7 @@
 import { redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { signIn, startSession } from '$lib/server/auth';
 import { fields, parseForm, runAction, safeNext, readFormData } from '$lib/server/forms';
 import { clientIp, clientMeta } from '$lib/server/request';

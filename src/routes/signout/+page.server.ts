@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { safeNext } from '$lib/server/forms';
 import { clearSessionCookie, invalidateSession, sessionCookieName } from '$lib/server/auth';
 

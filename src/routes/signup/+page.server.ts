@@ -1,7 +1,7 @@
 import { redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { PASSWORD_MIN, signUp, startSession } from '$lib/server/auth';
 import { normalizeEmail } from '$lib/server/db/users';
 import { fields, parseForm, runAction, safeNext, readFormData } from '$lib/server/forms';

@@ -1,6 +1,6 @@
 import { redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { sendVerification, startSession, verifyEmail } from '$lib/server/auth';
 import { requireUser } from '$lib/server/guard';
 import { runAction } from '$lib/server/forms';

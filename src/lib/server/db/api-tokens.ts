@@ -1,6 +1,6 @@
-import type { Role } from '../../roles';
+import type { Role } from '$lib/roles';
 import type { ApiToken, DB } from './schema';
-import { newId } from '../secrets';
+import { newId } from './ids';
 
 export async function insertApiToken(
 	db: DB,

@@ -1,5 +1,5 @@
 import type { DB, EmailToken, EmailTokenPurpose } from './schema';
-import { newId } from '../secrets';
+import { newId } from './ids';
 import { normalizeEmail } from './users';
 
 export async function insertEmailToken(

@@ -1,6 +1,6 @@
-import type { Role } from '../../roles';
+import type { Role } from '$lib/roles';
 import type { DB, Invite } from './schema';
-import { newId } from '../secrets';
+import { newId } from './ids';
 import { normalizeEmail } from './users';
 
 export async function insertInvite(

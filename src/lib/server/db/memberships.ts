@@ -1,4 +1,4 @@
-import type { Role } from '../../roles';
+import type { Role } from '$lib/roles';
 import type { DB, Membership } from './schema';
 
 export interface Member {

@@ -1,5 +1,5 @@
 import type { Generated, Insertable, Kysely, Selectable, Updateable } from 'kysely';
-import type { Role } from '../../roles';
+import type { Role } from '$lib/roles';
 
 /*
  * Table types for Kysely. Times are integer Unix milliseconds; ids are random text. Secrets

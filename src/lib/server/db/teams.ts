@@ -1,8 +1,8 @@
-import type { Role } from '../../roles';
+import type { Role } from '$lib/roles';
 import type { DB, Team } from './schema';
-import { newId } from '../secrets';
+import { newId } from './ids';
 
-export { SLUG_PATTERN } from '../../slug';
+export { SLUG_PATTERN } from '$lib/slug';
 
 export function slugify(name: string): string {
 	const base = name

@@ -1,5 +1,5 @@
 import type { DB, User } from './schema';
-import { newId } from '../secrets';
+import { newId } from './ids';
 
 export function normalizeEmail(email: string): string {
 	return email.trim().toLowerCase();

@@ -1,6 +1,6 @@
 import { json } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { listMailFor } from '$lib/server/db/outbox';
 import { requireOutbox } from '../guard';
 

@@ -1,5 +1,5 @@
 import type { Actions, PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { clearMailFor, listMailFor } from '$lib/server/db/outbox';
 import { requireOutbox } from '../guard';
 

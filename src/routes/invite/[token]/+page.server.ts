@@ -1,6 +1,6 @@
 import { error, redirect } from '@sveltejs/kit';
 import type { Actions, PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { requireUser } from '$lib/server/guard';
 import { acceptInvite, inspectInvite } from '$lib/server/teams';
 import { runAction } from '$lib/server/forms';

@@ -1,6 +1,6 @@
 import { error } from '@sveltejs/kit';
 import type { RequestHandler } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { apiRoute } from '$lib/server/api';
 import { requirePrincipal } from '$lib/server/guard';
 import { getTeamById, listTeamsForUser } from '$lib/server/db/teams';

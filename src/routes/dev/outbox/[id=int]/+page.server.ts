@@ -1,6 +1,6 @@
 import { error } from '@sveltejs/kit';
 import type { PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { getMailFor } from '$lib/server/db/outbox';
 import { requireOutbox } from '../../guard';
 

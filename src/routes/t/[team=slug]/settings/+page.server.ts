@@ -1,7 +1,7 @@
 import { redirect } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { requireTeam } from '$lib/server/guard';
 import { fields, formFailure, parseForm, runAction, readFormData } from '$lib/server/forms';
 import { flowContext } from '$lib/server/request';

@@ -1,26 +1,18 @@
 import { error } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { Actions, PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { requireTeam } from '$lib/server/guard';
 import { isAppError } from '$lib/server/errors';
 import { parseForm, readFormData, runAction } from '$lib/server/forms';
 import { readSheet, renameTeamSheet, sheetDeletion, titleSchema } from '$lib/server/sheets';
 import { sheetReviewData } from '$lib/server/review-pages';
 import { chartDataRef } from '$lib/server/chart-data';
-import {
-	computePath,
-	fixState,
-	getFluid,
-	stateExtras,
-	ThermoError,
-	type PathResult
-} from '$lib/thermo';
-import { engineSpec, labelIds, startOnlyResult } from '$lib/sheets/doc';
-import { startOptions } from '$lib/sheets/choice';
+import { draftResult } from '$lib/server/compute/sheet-frame';
+import { getFluid } from '$lib/thermo';
 import type { SheetDoc } from '$lib/sheets/types';
 
-type Computed = { result: PathResult | null; resultError: string | null };
+type Computed = ReturnType<typeof draftResult>;
 
 /**
  * Drafts computed for the first paint, by sheet and draft version (a version's document never
@@ -32,28 +24,10 @@ const COMPUTED_MAX = 500;
 function computeOnce(key: string, doc: SheetDoc): Computed {
 	let c = computed.get(key);
 	if (c) computed.delete(key);
-	else c = compute(doc);
+	else c = draftResult(doc);
 	computed.set(key, c);
 	if (computed.size > COMPUTED_MAX) computed.delete(computed.keys().next().value as string);
 	return c;
-}
-
-/** The draft computed for the first paint (the browser recomputes on every edit). */
-function compute(doc: SheetDoc): Computed {
-	try {
-		if (doc.spec.legs.length === 0) {
-			const start = fixState(doc.spec.fluid, doc.spec.start, startOptions(doc.spec));
-			return { result: startOnlyResult(doc, start, stateExtras(start)), resultError: null };
-		}
-		return { result: computePath(engineSpec(doc)), resultError: null };
-	} catch (e) {
-		if (e instanceof ThermoError)
-			return {
-				result: null,
-				resultError: labelIds(`${e.message}${e.hint ? ` ${e.hint}` : ''}`, doc.spec.legs)
-			};
-		throw e;
-	}
 }
 
 export const load: PageServerLoad = async (event) => {

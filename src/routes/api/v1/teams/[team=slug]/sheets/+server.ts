@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { z } from 'zod';
 import type { RequestHandler } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { apiRoute, readJson } from '$lib/server/api';
 import { requireTeam } from '$lib/server/guard';
 import { createFromExample, createSheet, listTeamSheets } from '$lib/server/sheets';

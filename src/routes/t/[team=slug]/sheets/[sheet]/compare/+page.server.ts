@@ -1,6 +1,6 @@
 import { error } from '@sveltejs/kit';
 import type { PageServerLoad } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { requireTeam } from '$lib/server/guard';
 import { isAppError } from '$lib/server/errors';
 import { parseCompareSide } from '$lib/server/revisions';

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { RequestHandler } from './$types';
 import { json } from '@sveltejs/kit';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { apiRoute, readJson } from '$lib/server/api';
 import { requireTeam } from '$lib/server/guard';
 import { flowContext } from '$lib/server/request';
@@ -25,12 +25,10 @@ export const GET: RequestHandler = apiRoute(async (event) => {
 
 const body = z.strictObject(
 	{
-		anchor: z
-			.unknown()
-			.refine((a) => a !== undefined, {
-				message:
-					'anchor is required: { "kind": "sheet" }, { "kind": "leg", "legId": "…" } or { "kind": "state", "at": "…" }.'
-			}),
+		anchor: z.unknown().refine((a) => a !== undefined, {
+			message:
+				'anchor is required: { "kind": "sheet" }, { "kind": "leg", "legId": "…" } or { "kind": "state", "at": "…" }.'
+		}),
 		body: z.string({ error: 'body must be the text of the note.' }),
 		revision: z
 			.number({

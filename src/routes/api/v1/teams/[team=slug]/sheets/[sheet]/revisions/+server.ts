@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { RequestHandler } from './$types';
 import { json } from '@sveltejs/kit';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { apiRoute, jsonError, readJson } from '$lib/server/api';
 import { requireTeam } from '$lib/server/guard';
 import { listRevisions, RevisionConflictError, saveRevision } from '$lib/server/revisions';

@@ -1,6 +1,6 @@
 import type { RequestHandler } from './$types';
 import { json } from '@sveltejs/kit';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { apiRoute, jsonError } from '$lib/server/api';
 import { requireTeam } from '$lib/server/guard';
 import { AppError } from '$lib/server/errors';

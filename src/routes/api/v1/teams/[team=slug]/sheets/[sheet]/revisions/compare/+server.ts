@@ -1,5 +1,5 @@
 import type { RequestHandler } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { apiRoute } from '$lib/server/api';
 import { requireTeam } from '$lib/server/guard';
 import { compareRevisions, parseCompareSide } from '$lib/server/revisions';

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { RequestHandler } from './$types';
-import { getDb } from '$lib/server/db';
+import { getDb } from '$lib/server/database';
 import { apiRoute, jsonError, readJson } from '$lib/server/api';
 import { requireTeam } from '$lib/server/guard';
 import { flowContext } from '$lib/server/request';

@@ -1,0 +1,92 @@
+import {
+	computePath,
+	fixState,
+	getFluid,
+	isolines as engineIsolines,
+	saturationCurve,
+	stateExtras,
+	ThermoError,
+	type Isoline,
+	type PathResult,
+	type SaturationCurve
+} from '$lib/thermo';
+import type { ChartFrame } from '$lib/review/types';
+import type { SheetDoc } from '$lib/sheets/types';
+import { firstStateResult, engineSpec, labelIds } from '$lib/sheets/doc';
+import { startOptions } from '$lib/sheets/choice';
+import { frameLimits, frameLines } from '$lib/sheets/frame';
+
+/*
+ * What a page needs to draw a sheet's path, computed on the server with the engine: the vapor
+ * dome (cached per fluid), the chart's frame and the draft's path for the first paint. The
+ * editor asks the compute API for the same lines, chosen by the same `frameLines`.
+ */
+
+const domes = new Map<string, SaturationCurve>();
+
+/** The vapor dome for the chart (cached per fluid); null if the engine cannot trace it — the page still opens. */
+export function dome(fluid: string): SaturationCurve | null {
+	let d = domes.get(fluid);
+	if (!d) {
+		try {
+			d = saturationCurve(fluid, 100);
+		} catch (e) {
+			if (!(e instanceof ThermoError)) throw e;
+			console.error(`[statewright] the vapor dome of ${fluid} could not be traced: ${e.message}`);
+			return null;
+		}
+		domes.set(fluid, d);
+	}
+	return d;
+}
+
+function lines(fluid: string, kind: 'isobar' | 'isotherm', values: number[]): Isoline[] {
+	if (!values.length) return [];
+	try {
+		return engineIsolines(fluid, kind, values.slice(0, 40), 80);
+	} catch (e) {
+		if (e instanceof ThermoError) return [];
+		throw e;
+	}
+}
+
+/** The chart's frame for a document and (those that computed of) its paths. */
+export function chartFrame(doc: SheetDoc, results: Array<PathResult | null>): ChartFrame {
+	const f = getFluid(doc.spec.fluid);
+	const states = results.flatMap((r) => r?.states ?? []).map((s) => s.state);
+	const want = frameLines(f, doc, states);
+	return {
+		fluid: f,
+		saturation: dome(f.id),
+		isolines: {
+			tv: lines(f.id, 'isobar', want.isobars),
+			pv: lines(f.id, 'isotherm', want.isotherms)
+		},
+		limits: frameLimits(doc.spec.limits, {
+			isobars: lines(f.id, 'isobar', want.limitIsobars),
+			isotherms: lines(f.id, 'isotherm', want.limitIsotherms)
+		})
+	};
+}
+
+/** The draft's path for the first paint (the browser recomputes on every edit), or why it has none. */
+export function draftResult(doc: SheetDoc): {
+	result: PathResult | null;
+	resultError: string | null;
+} {
+	try {
+		if (doc.spec.legs.length === 0)
+			return {
+				result: firstStateResult(doc, { fixState, stateExtras }, startOptions(doc.spec)),
+				resultError: null
+			};
+		return { result: computePath(engineSpec(doc)), resultError: null };
+	} catch (e) {
+		if (e instanceof ThermoError)
+			return {
+				result: null,
+				resultError: labelIds(`${e.message}${e.hint ? ` ${e.hint}` : ''}`, doc.spec.legs)
+			};
+		throw e;
+	}
+}

@@ -1,0 +1,108 @@
+import type {
+	FluidInfo,
+	DesignLimits as SpecLimits,
+	Isoline,
+	IsolinePoint,
+	State
+} from '$lib/thermo/types';
+import type { UnitPrefs } from '$lib/units/prefs';
+import { isobarValues, isothermValues } from './isolines';
+
+/*
+ * The chart's frame around a path — which background isolines and design-limit curves to draw —
+ * decided once for the editor (which fetches the lines from the compute API) and the server's
+ * read-only pages (which trace them with the engine directly).
+ */
+
+/**
+ * One design limit, SI (pressures absolute, Pa; temperatures K). `points` is the limit's own
+ * isobar (for a pressure limit on T–v) or isotherm (for a temperature limit on P–v); without
+ * it that limit is not drawn on that diagram, because its curve cannot be drawn without the engine.
+ */
+export interface DesignLimit {
+	value: number;
+	points?: IsolinePoint[];
+}
+
+/** The design limits as the charts draw them. */
+export interface DesignLimits {
+	designPressure?: DesignLimit | null;
+	reliefSetPressure?: DesignLimit | null;
+	designTemperature?: DesignLimit | null;
+	minimumTemperature?: DesignLimit | null;
+}
+
+/** The values (SI) of the lines a frame needs: background isobars/isotherms and limit curves. */
+export interface FrameLines {
+	isobars: number[];
+	isotherms: number[];
+	limitIsobars: number[];
+	limitIsotherms: number[];
+}
+
+/**
+ * Background lines at round values in the sheet's units over the range the path and the dome
+ * span (none when the sheet hides isolines), and the curves of the design limits, all inside the
+ * fluid's range.
+ */
+export function frameLines(
+	fluid: FluidInfo,
+	doc: { units: UnitPrefs; chart: { isolines: boolean }; spec: { limits?: SpecLimits } },
+	states: State[]
+): FrameLines {
+	const f = fluid;
+	const maxP = Math.max(f.critical.P, ...states.map((s) => s.P));
+	const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.P));
+	const maxT = Math.max(f.critical.T, ...states.map((s) => s.T));
+	const isobars = doc.chart.isolines
+		? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units).filter(
+				(v) => v <= f.limits.Pmax
+			)
+		: [];
+	const isotherms = doc.chart.isolines
+		? isothermValues(
+				{ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) },
+				doc.units
+			).filter((v) => v >= f.limits.Tmin && v <= f.limits.Tmax)
+		: [];
+	const lim = doc.spec.limits ?? {};
+	const limitIsobars = [lim.designPressure, lim.reliefSetPressure].filter(
+		(v): v is number => typeof v === 'number' && v <= f.limits.Pmax
+	);
+	const limitIsotherms = [lim.designTemperature, lim.minimumTemperature].filter(
+		(v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax
+	);
+	return { isobars, isotherms, limitIsobars, limitIsotherms };
+}
+
+/** The document's design limits with the curve each needs on the other diagram (when traced). */
+export function frameLimits(
+	limits: SpecLimits | undefined,
+	curves: { isobars: Isoline[]; isotherms: Isoline[] }
+): DesignLimits {
+	const lim = limits ?? {};
+	const curve = (list: Isoline[], value: number): IsolinePoint[] | undefined =>
+		list.find((l) => Math.abs(l.value / value - 1) < 1e-9)?.points;
+	const out: DesignLimits = {};
+	if (lim.designPressure !== undefined)
+		out.designPressure = {
+			value: lim.designPressure,
+			points: curve(curves.isobars, lim.designPressure)
+		};
+	if (lim.reliefSetPressure !== undefined)
+		out.reliefSetPressure = {
+			value: lim.reliefSetPressure,
+			points: curve(curves.isobars, lim.reliefSetPressure)
+		};
+	if (lim.designTemperature !== undefined)
+		out.designTemperature = {
+			value: lim.designTemperature,
+			points: curve(curves.isotherms, lim.designTemperature)
+		};
+	if (lim.minimumTemperature !== undefined)
+		out.minimumTemperature = {
+			value: lim.minimumTemperature,
+			points: curve(curves.isotherms, lim.minimumTemperature)
+		};
+	return out;
+}
