@@ -451,6 +451,8 @@ describe('password reset by e-mail', () => {
 			{ name: 'P', email: 'p@example.com', password: 'old password here' },
 			env.ctx
 		);
+		// the confirmation mail goes out first (on PostgreSQL the two background mails could race)
+		await backgroundSettled();
 		const s = await createSession(env.db, u.id, meta);
 		await requestPasswordReset(env.db, 'P@example.com', env.ctx);
 		const [mail] = await env.mailTo('p@example.com');

@@ -6,7 +6,7 @@ import { legRequestSchema } from '$lib/server/compute/schemas';
 /** One process leg from a start state to a target: { leg } per docs/compute-api.md. */
 export const POST: RequestHandler = computePost(async (event) => {
 	const b = await readBody(event.request, legRequestSchema);
-	chargeWork(event, b.samples ?? SAMPLES_DEFAULT);
+	await chargeWork(event, b.samples ?? SAMPLES_DEFAULT);
 	return {
 		leg: computeLeg({
 			fluid: b.fluid,

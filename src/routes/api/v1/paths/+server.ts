@@ -6,6 +6,6 @@ import { pathPoints, pathRequestSchema } from '$lib/server/compute/schemas';
 /** A whole path (PathSpec → PathResult): states, legs with totals, cycle, design-limit events, warnings. */
 export const POST: RequestHandler = computePost(async (event) => {
 	const spec = await readBody(event.request, pathRequestSchema);
-	chargeWork(event, pathPoints(spec));
+	await chargeWork(event, pathPoints(spec));
 	return { path: computePath(spec as PathSpec) };
 });

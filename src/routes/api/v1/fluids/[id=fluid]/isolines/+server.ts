@@ -7,10 +7,10 @@ import { isolineQuerySchema } from '$lib/server/compute/schemas';
 const UNIT = { isobar: 'Pa', isotherm: 'K', isochore: 'm³/kg' } as const;
 
 /** Background isobars, isotherms or isochores (SI values) across the drawable range, through the dome. */
-export const GET: RequestHandler = computeGet((event) => {
+export const GET: RequestHandler = computeGet(async (event) => {
 	const fluid = fluidFromParam(event.params.id);
 	const q = readQuery(event.url, isolineQuerySchema);
-	chargeWork(event, q.values.length * q.points);
+	await chargeWork(event, q.values.length * q.points);
 	const kind = q.kind as keyof typeof UNIT;
 	return {
 		fluid: fluid.id,

@@ -5,10 +5,10 @@ import { fluidFromParam } from '$lib/server/compute/fluids';
 import { saturationQuerySchema } from '$lib/server/compute/schemas';
 
 /** The vapor dome: saturated liquid and vapor states from the triple point toward the critical point. */
-export const GET: RequestHandler = computeGet((event) => {
+export const GET: RequestHandler = computeGet(async (event) => {
 	const fluid = fluidFromParam(event.params.id);
 	const q = readQuery(event.url, saturationQuerySchema);
 	const points = q.points ?? 100;
-	chargeWork(event, 2 * points);
+	await chargeWork(event, 2 * points);
 	return saturationCurve(fluid.id, points);
 });
