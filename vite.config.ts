@@ -15,13 +15,16 @@ export default defineConfig({
 	plugins: [tailwindcss(), sveltekit()],
 	server: { port: 5173 },
 	test: {
-		include: ['src/**/*.test.ts', 'bench/**/*.test.ts'],
 		environment: 'node',
 		testTimeout: 30_000,
 		hookTimeout: 30_000,
 		pool: 'forks',
 		projects: [
-			{ extends: true, test: { name: 'sqlite' } },
+			// (include lists per project: a project that extends the root adds to the root's lists)
+			{
+				extends: true,
+				test: { name: 'sqlite', include: ['src/**/*.test.ts', 'bench/**/*.test.ts'] }
+			},
 			...(postgresUrl
 				? [
 						{
