@@ -11,6 +11,10 @@ import { DEMO, DEMO_PASSWORD, TEAM } from './helpers';
 // that may create databases); without it the test is skipped and says so.
 
 const BASE_URL = process.env.TEST_POSTGRES_URL?.trim();
+if (!BASE_URL)
+	console.log(
+		'[statewright] TEST_POSTGRES_URL is not set: the two-process PostgreSQL test is skipped.'
+	);
 const E2E_PORT = Number(process.env.E2E_PORT ?? 4317);
 const PORTS = [E2E_PORT + 900, E2E_PORT + 901];
 // the public origin both processes sit behind (a reverse proxy's), so forms and cookies agree
