@@ -2,14 +2,42 @@ import { sveltekit } from '@sveltejs/kit/vite';
 import tailwindcss from '@tailwindcss/vite';
 import { defineConfig } from 'vitest/config';
 
+// The integration tests (real database, real mail catcher) run on SQLite and, when
+// TEST_POSTGRES_URL names a PostgreSQL server, once more on PostgreSQL (project "postgres").
+const INTEGRATION = ['src/lib/server/*.test.ts', 'src/lib/server/db/*.test.ts'];
+const postgresUrl = process.env.TEST_POSTGRES_URL?.trim();
+if (process.env.VITEST && !postgresUrl)
+	console.log(
+		'[statewright] TEST_POSTGRES_URL is not set: integration tests run on SQLite only, PostgreSQL skipped.'
+	);
+
 export default defineConfig({
 	plugins: [tailwindcss(), sveltekit()],
 	server: { port: 5173 },
 	test: {
-		include: ['src/**/*.test.ts', 'bench/**/*.test.ts'],
 		environment: 'node',
 		testTimeout: 30_000,
 		hookTimeout: 30_000,
-		pool: 'forks'
+		pool: 'forks',
+		projects: [
+			// (include lists per project: a project that extends the root adds to the root's lists)
+			{
+				extends: true,
+				test: { name: 'sqlite', include: ['src/**/*.test.ts', 'bench/**/*.test.ts'] }
+			},
+			...(postgresUrl
+				? [
+						{
+							extends: true as const,
+							test: {
+								name: 'postgres',
+								include: INTEGRATION,
+								env: { STATEWRIGHT_TEST_DB: 'postgres', TEST_POSTGRES_URL: postgresUrl },
+								globalSetup: ['scripts/vitest-postgres.ts']
+							}
+						}
+					]
+				: [])
+		]
 	}
 });

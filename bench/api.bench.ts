@@ -234,6 +234,9 @@ try {
 
 	const fmt = (r: autocannon.Result) =>
 		`${r.requests.average.toFixed(0).padStart(5)}/s p50 ${String(r.latency.p50).padStart(3)} p99 ${String(r.latency.p99).padStart(3)} ms${r.errors || r.non2xx ? ` (${r.errors} errors, ${r.non2xx} non-2xx)` : ''}`;
+	console.log(
+		`database: ${process.env.DATABASE_URL ? 'PostgreSQL (DATABASE_URL; both servers share it)' : 'SQLite (a fresh file per server); set DATABASE_URL=postgres://… to measure PostgreSQL'}`
+	);
 	for (let round = 1; round <= ROUNDS; round++) {
 		console.log(`round ${round}, load average ${load()}`);
 		for (let i = 0; i < rows.length; i++) {

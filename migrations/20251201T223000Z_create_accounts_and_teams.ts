@@ -1,4 +1,5 @@
 import { sql, type Kysely } from 'kysely';
+import { columnTypes } from '../src/lib/server/db/dialect';
 
 // Accounts, sessions, teams with roles, invites, e-mailed one-time tokens, API tokens,
 // the fake-SMTP outbox and the team activity log. Times are integer Unix milliseconds.
@@ -6,15 +7,16 @@ import { sql, type Kysely } from 'kysely';
 const roleCheck = sql`role in ('owner', 'designer', 'checker', 'viewer')`;
 
 export async function up(db: Kysely<any>): Promise<void> {
+	const t = columnTypes(db);
 	await db.schema
 		.createTable('users')
 		.addColumn('id', 'text', (c) => c.primaryKey())
 		.addColumn('email', 'text', (c) => c.notNull().unique())
 		.addColumn('name', 'text', (c) => c.notNull())
 		.addColumn('password_hash', 'text', (c) => c.notNull())
-		.addColumn('email_verified_at', 'integer')
-		.addColumn('created_at', 'integer', (c) => c.notNull())
-		.addColumn('updated_at', 'integer', (c) => c.notNull())
+		.addColumn('email_verified_at', t.time)
+		.addColumn('created_at', t.time, (c) => c.notNull())
+		.addColumn('updated_at', t.time, (c) => c.notNull())
 		.addCheckConstraint('users_email_lower', sql`email = lower(email)`)
 		.execute();
 
@@ -22,9 +24,9 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.createTable('sessions')
 		.addColumn('id', 'text', (c) => c.primaryKey())
 		.addColumn('user_id', 'text', (c) => c.notNull().references('users.id').onDelete('cascade'))
-		.addColumn('expires_at', 'integer', (c) => c.notNull())
-		.addColumn('created_at', 'integer', (c) => c.notNull())
-		.addColumn('last_seen_at', 'integer', (c) => c.notNull())
+		.addColumn('expires_at', t.time, (c) => c.notNull())
+		.addColumn('created_at', t.time, (c) => c.notNull())
+		.addColumn('last_seen_at', t.time, (c) => c.notNull())
 		.addColumn('ip', 'text')
 		.addColumn('user_agent', 'text')
 		.execute();
@@ -36,8 +38,8 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('slug', 'text', (c) => c.notNull().unique())
 		.addColumn('name', 'text', (c) => c.notNull())
 		.addColumn('description', 'text', (c) => c.notNull().defaultTo(''))
-		.addColumn('created_at', 'integer', (c) => c.notNull())
-		.addColumn('updated_at', 'integer', (c) => c.notNull())
+		.addColumn('created_at', t.time, (c) => c.notNull())
+		.addColumn('updated_at', t.time, (c) => c.notNull())
 		.execute();
 
 	await db.schema
@@ -45,8 +47,8 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('team_id', 'text', (c) => c.notNull().references('teams.id').onDelete('cascade'))
 		.addColumn('user_id', 'text', (c) => c.notNull().references('users.id').onDelete('cascade'))
 		.addColumn('role', 'text', (c) => c.notNull())
-		.addColumn('created_at', 'integer', (c) => c.notNull())
-		.addColumn('updated_at', 'integer', (c) => c.notNull())
+		.addColumn('created_at', t.time, (c) => c.notNull())
+		.addColumn('updated_at', t.time, (c) => c.notNull())
 		.addPrimaryKeyConstraint('memberships_pk', ['team_id', 'user_id'])
 		.addCheckConstraint('memberships_role', roleCheck)
 		.execute();
@@ -60,11 +62,11 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('role', 'text', (c) => c.notNull())
 		.addColumn('token_hash', 'text', (c) => c.notNull().unique())
 		.addColumn('invited_by', 'text', (c) => c.references('users.id').onDelete('set null'))
-		.addColumn('created_at', 'integer', (c) => c.notNull())
-		.addColumn('expires_at', 'integer', (c) => c.notNull())
-		.addColumn('accepted_at', 'integer')
+		.addColumn('created_at', t.time, (c) => c.notNull())
+		.addColumn('expires_at', t.time, (c) => c.notNull())
+		.addColumn('accepted_at', t.time)
 		.addColumn('accepted_by', 'text', (c) => c.references('users.id').onDelete('set null'))
-		.addColumn('revoked_at', 'integer')
+		.addColumn('revoked_at', t.time)
 		.addCheckConstraint('invites_role', roleCheck)
 		.execute();
 	await db.schema.createIndex('invites_team_id').on('invites').column('team_id').execute();
@@ -76,9 +78,9 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('purpose', 'text', (c) => c.notNull())
 		.addColumn('token_hash', 'text', (c) => c.notNull().unique())
 		.addColumn('email', 'text', (c) => c.notNull())
-		.addColumn('created_at', 'integer', (c) => c.notNull())
-		.addColumn('expires_at', 'integer', (c) => c.notNull())
-		.addColumn('used_at', 'integer')
+		.addColumn('created_at', t.time, (c) => c.notNull())
+		.addColumn('expires_at', t.time, (c) => c.notNull())
+		.addColumn('used_at', t.time)
 		.addCheckConstraint('email_tokens_purpose', sql`purpose in ('verify-email', 'reset-password')`)
 		.execute();
 	await db.schema
@@ -96,16 +98,18 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('prefix', 'text', (c) => c.notNull())
 		.addColumn('role', 'text', (c) => c.notNull())
 		.addColumn('created_by', 'text', (c) => c.references('users.id').onDelete('set null'))
-		.addColumn('created_at', 'integer', (c) => c.notNull())
-		.addColumn('last_used_at', 'integer')
-		.addColumn('revoked_at', 'integer')
+		.addColumn('created_at', t.time, (c) => c.notNull())
+		.addColumn('last_used_at', t.time)
+		.addColumn('revoked_at', t.time)
 		.addCheckConstraint('api_tokens_role', roleCheck)
 		.execute();
 	await db.schema.createIndex('api_tokens_team_id').on('api_tokens').column('team_id').execute();
 
 	await db.schema
 		.createTable('outbox')
-		.addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+		.addColumn('id', t.serial, (c) =>
+			t.autoIncrement ? c.primaryKey().autoIncrement() : c.primaryKey()
+		)
 		.addColumn('message_id', 'text')
 		.addColumn('envelope_from', 'text', (c) => c.notNull())
 		.addColumn('envelope_to', 'text', (c) => c.notNull())
@@ -115,18 +119,20 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('text', 'text', (c) => c.notNull())
 		.addColumn('html', 'text')
 		.addColumn('raw', 'text', (c) => c.notNull())
-		.addColumn('received_at', 'integer', (c) => c.notNull())
+		.addColumn('received_at', t.time, (c) => c.notNull())
 		.execute();
 
 	await db.schema
 		.createTable('team_events')
-		.addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+		.addColumn('id', t.serial, (c) =>
+			t.autoIncrement ? c.primaryKey().autoIncrement() : c.primaryKey()
+		)
 		.addColumn('team_id', 'text', (c) => c.notNull().references('teams.id').onDelete('cascade'))
 		.addColumn('actor_id', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('actor_label', 'text', (c) => c.notNull())
 		.addColumn('kind', 'text', (c) => c.notNull())
 		.addColumn('detail', 'text', (c) => c.notNull().defaultTo('{}'))
-		.addColumn('created_at', 'integer', (c) => c.notNull())
+		.addColumn('created_at', t.time, (c) => c.notNull())
 		.execute();
 	await db.schema
 		.createIndex('team_events_team_time')

@@ -1,10 +1,12 @@
 import { sql, type Kysely } from 'kysely';
+import { columnTypes } from '../src/lib/server/db/dialect';
 
 // Sheets: a team's design documents, each holding one path. The working draft is the sheet
 // document as JSON (src/lib/sheets/types.ts), saved by autosave with a version counter for
 // optimistic concurrency. Revisions, review notes and traces come in later migrations.
 
 export async function up(db: Kysely<any>): Promise<void> {
+	const t = columnTypes(db);
 	await db.schema
 		.createTable('sheets')
 		.addColumn('id', 'text', (c) => c.primaryKey())
@@ -21,10 +23,10 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('draft_version', 'integer', (c) => c.notNull().defaultTo(1))
 		.addColumn('created_by', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('created_by_label', 'text', (c) => c.notNull())
-		.addColumn('created_at', 'integer', (c) => c.notNull())
+		.addColumn('created_at', t.time, (c) => c.notNull())
 		.addColumn('updated_by', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('updated_by_label', 'text', (c) => c.notNull())
-		.addColumn('updated_at', 'integer', (c) => c.notNull())
+		.addColumn('updated_at', t.time, (c) => c.notNull())
 		.addUniqueConstraint('sheets_team_number', ['team_id', 'number'])
 		.addCheckConstraint(
 			'sheets_status',

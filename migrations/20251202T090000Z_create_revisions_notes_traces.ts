@@ -1,4 +1,5 @@
 import { sql, type Kysely } from 'kysely';
+import { columnTypes, isPostgres } from '../src/lib/server/db/dialect';
 
 // Revisions of sheets (immutable: spec and computed result frozen, enforced by triggers) with
 // their sign-off workflow and its log; review notes anchored to a leg, a state or the sheet, with
@@ -8,6 +9,7 @@ import { sql, type Kysely } from 'kysely';
 const statusCheck = sql`status in ('draft', 'in-check', 'checked', 'approved')`;
 
 export async function up(db: Kysely<any>): Promise<void> {
+	const t = columnTypes(db);
 	await db.schema
 		.createTable('sheet_revisions')
 		.addColumn('id', 'text', (c) => c.primaryKey())
@@ -24,22 +26,22 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('message', 'text', (c) => c.notNull())
 		.addColumn('author_id', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('author_label', 'text', (c) => c.notNull())
-		.addColumn('created_at', 'integer', (c) => c.notNull())
+		.addColumn('created_at', t.time, (c) => c.notNull())
 		.addColumn('status', 'text', (c) => c.notNull().defaultTo('draft'))
 		.addColumn('submitted_by', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('submitted_by_label', 'text')
-		.addColumn('submitted_at', 'integer')
+		.addColumn('submitted_at', t.time)
 		// the checker the designer asked (null: any checker of the team)
 		.addColumn('check_requested_from', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('checked_by', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('checked_by_label', 'text')
-		.addColumn('checked_at', 'integer')
+		.addColumn('checked_at', t.time)
 		.addColumn('approved_by', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('approved_by_label', 'text')
-		.addColumn('approved_at', 'integer')
+		.addColumn('approved_at', t.time)
 		.addColumn('returned_by', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('returned_by_label', 'text')
-		.addColumn('returned_at', 'integer')
+		.addColumn('returned_at', t.time)
 		.addUniqueConstraint('sheet_revisions_sheet_number', ['sheet_id', 'number'])
 		.addCheckConstraint('sheet_revisions_number', sql`number >= 1`)
 		.addCheckConstraint(
@@ -56,18 +58,43 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.execute();
 
 	// What a revision holds never changes (user ids may still be cleared when an account goes).
-	await sql`create trigger sheet_revisions_content_immutable
-		before update of sheet_id, team_id, number, based_on, title, doc, result, message, author_label, created_at on sheet_revisions
-		begin select raise(abort, 'revision content is immutable'); end`.execute(db);
 	// An approved revision is locked: its status and sign-off stay as they are.
-	await sql`create trigger sheet_revisions_approved_locked
-		before update of status, submitted_at, checked_at, approved_at, returned_at, submitted_by_label, checked_by_label, approved_by_label on sheet_revisions
+	const content =
+		'sheet_id, team_id, number, based_on, title, doc, result, message, author_label, created_at';
+	const signOff =
+		'status, submitted_at, checked_at, approved_at, returned_at, submitted_by_label, checked_by_label, approved_by_label';
+	if (isPostgres(db)) {
+		for (const [name, message] of [
+			['sheet_revisions_content_immutable', 'revision content is immutable'],
+			['sheet_revisions_approved_locked', 'an approved revision is locked']
+		]) {
+			await sql`create function ${sql.id(name)}() returns trigger language plpgsql as ${sql.lit(
+				`begin raise exception '${message}'; end`
+			)}`.execute(db);
+		}
+		await sql`create trigger sheet_revisions_content_immutable
+			before update of ${sql.raw(content)} on sheet_revisions
+			for each row execute function sheet_revisions_content_immutable()`.execute(db);
+		await sql`create trigger sheet_revisions_approved_locked
+			before update of ${sql.raw(signOff)} on sheet_revisions
+			for each row when (old.status = 'approved') execute function sheet_revisions_approved_locked()`.execute(
+			db
+		);
+	} else {
+		await sql`create trigger sheet_revisions_content_immutable
+		before update of ${sql.raw(content)} on sheet_revisions
+		begin select raise(abort, 'revision content is immutable'); end`.execute(db);
+		await sql`create trigger sheet_revisions_approved_locked
+		before update of ${sql.raw(signOff)} on sheet_revisions
 		when old.status = 'approved'
 		begin select raise(abort, 'an approved revision is locked'); end`.execute(db);
+	}
 
 	await db.schema
 		.createTable('sheet_revision_events')
-		.addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+		.addColumn('id', t.serial, (c) =>
+			t.autoIncrement ? c.primaryKey().autoIncrement() : c.primaryKey()
+		)
 		.addColumn('revision_id', 'text', (c) =>
 			c.notNull().references('sheet_revisions.id').onDelete('cascade')
 		)
@@ -76,7 +103,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('actor_id', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('actor_label', 'text', (c) => c.notNull())
 		.addColumn('note', 'text')
-		.addColumn('created_at', 'integer', (c) => c.notNull())
+		.addColumn('created_at', t.time, (c) => c.notNull())
 		.addCheckConstraint(
 			'sheet_revision_events_kind',
 			sql`kind in ('saved', 'submitted', 'returned', 'checked', 'approved', 'restored')`
@@ -104,12 +131,12 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('body', 'text', (c) => c.notNull())
 		.addColumn('author_id', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('author_label', 'text', (c) => c.notNull())
-		.addColumn('created_at', 'integer', (c) => c.notNull())
-		.addColumn('edited_at', 'integer')
-		.addColumn('resolved_at', 'integer')
+		.addColumn('created_at', t.time, (c) => c.notNull())
+		.addColumn('edited_at', t.time)
+		.addColumn('resolved_at', t.time)
 		.addColumn('resolved_by', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('resolved_by_label', 'text')
-		.addColumn('last_activity_at', 'integer', (c) => c.notNull())
+		.addColumn('last_activity_at', t.time, (c) => c.notNull())
 		.addCheckConstraint('review_notes_anchor_kind', sql`anchor_kind in ('sheet', 'leg', 'state')`)
 		.addCheckConstraint(
 			'review_notes_anchor_id',
@@ -134,7 +161,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('body', 'text', (c) => c.notNull())
 		.addColumn('author_id', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('author_label', 'text', (c) => c.notNull())
-		.addColumn('created_at', 'integer', (c) => c.notNull())
+		.addColumn('created_at', t.time, (c) => c.notNull())
 		.addCheckConstraint('review_note_replies_kind', sql`kind in ('reply', 'resolved', 'reopened')`)
 		.addCheckConstraint(
 			'review_note_replies_body',
@@ -149,7 +176,9 @@ export async function up(db: Kysely<any>): Promise<void> {
 
 	await db.schema
 		.createTable('review_note_mentions')
-		.addColumn('id', 'integer', (c) => c.primaryKey().autoIncrement())
+		.addColumn('id', t.serial, (c) =>
+			t.autoIncrement ? c.primaryKey().autoIncrement() : c.primaryKey()
+		)
 		.addColumn('note_id', 'text', (c) =>
 			c.notNull().references('review_notes.id').onDelete('cascade')
 		)
@@ -157,7 +186,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 			c.references('review_note_replies.id').onDelete('cascade')
 		)
 		.addColumn('user_id', 'text', (c) => c.notNull().references('users.id').onDelete('cascade'))
-		.addColumn('created_at', 'integer', (c) => c.notNull())
+		.addColumn('created_at', t.time, (c) => c.notNull())
 		.execute();
 	await db.schema
 		.createIndex('review_note_mentions_user')
@@ -174,7 +203,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('on_checked', 'integer', (c) => c.notNull().defaultTo(1))
 		.addColumn('on_approved', 'integer', (c) => c.notNull().defaultTo(1))
 		.addColumn('on_returned', 'integer', (c) => c.notNull().defaultTo(1))
-		.addColumn('updated_at', 'integer', (c) => c.notNull())
+		.addColumn('updated_at', t.time, (c) => c.notNull())
 		.execute();
 
 	await db.schema
@@ -189,9 +218,9 @@ export async function up(db: Kysely<any>): Promise<void> {
 		// JSON: the file's columns with their units
 		.addColumn('columns', 'text', (c) => c.notNull())
 		// Pa absolute, used for gauge columns
-		.addColumn('atmosphere', 'real', (c) => c.notNull())
+		.addColumn('atmosphere', t.real, (c) => c.notNull())
 		// K, the saturation-line tolerance
-		.addColumn('tolerance', 'real', (c) => c.notNull())
+		.addColumn('tolerance', t.real, (c) => c.notNull())
 		// JSON array of TracePoint (src/lib/traces/types.ts), SI
 		.addColumn('points', 'text', (c) => c.notNull())
 		.addColumn('point_count', 'integer', (c) => c.notNull())
@@ -203,7 +232,7 @@ export async function up(db: Kysely<any>): Promise<void> {
 		.addColumn('started_at', 'text')
 		.addColumn('uploaded_by', 'text', (c) => c.references('users.id').onDelete('set null'))
 		.addColumn('uploaded_by_label', 'text', (c) => c.notNull())
-		.addColumn('uploaded_at', 'integer', (c) => c.notNull())
+		.addColumn('uploaded_at', t.time, (c) => c.notNull())
 		.addCheckConstraint('sheet_traces_name', sql`length(name) between 1 and 80`)
 		.addCheckConstraint(
 			'sheet_traces_counts',
@@ -229,4 +258,7 @@ export async function down(db: Kysely<any>): Promise<void> {
 	]) {
 		await db.schema.dropTable(table).execute();
 	}
+	if (isPostgres(db))
+		for (const name of ['sheet_revisions_content_immutable', 'sheet_revisions_approved_locked'])
+			await sql`drop function ${sql.id(name)}()`.execute(db);
 }

@@ -1,14 +1,16 @@
-// Applies pending migrations to DATABASE_PATH (default data/statewright.db): `npm run migrate`.
+// Applies pending migrations to DATABASE_URL (PostgreSQL) or else DATABASE_PATH (default
+// data/statewright.db): `npm run migrate`.
 // `npm run migrate -- --down` reverts the latest one. The server also migrates on start.
 import { readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { Migrator, type Migration } from 'kysely';
+import type { Migration } from 'kysely';
 import { readConfig } from '../src/lib/server/config.ts';
-import { openDatabase } from '../src/lib/server/db/connection.ts';
+import { isPostgresUrl, openDatabase, openPostgres } from '../src/lib/server/db/connection.ts';
 import {
 	migrateToLatest,
 	migrationName,
+	migratorFor,
 	type MigrationModules
 } from '../src/lib/server/db/migrate.ts';
 
@@ -20,11 +22,12 @@ for (const file of readdirSync(dir)
 	modules[migrationName(file)] = (await import(pathToFileURL(join(dir, file)).href)) as Migration;
 }
 
-const { databasePath } = readConfig();
-const db = openDatabase(databasePath);
+const { databasePath: path, databaseUrl } = readConfig();
+const db = isPostgresUrl(databaseUrl) ? openPostgres(databaseUrl, { max: 1 }) : openDatabase(path);
+const databasePath = databaseUrl ? new URL(databaseUrl).pathname.slice(1) || 'PostgreSQL' : path;
 try {
 	if (process.argv.includes('--down')) {
-		const migrator = new Migrator({ db, provider: { getMigrations: async () => modules } });
+		const migrator = await migratorFor(db, modules);
 		const { error, results } = await migrator.migrateDown();
 		if (error) throw error;
 		const name = results?.[0]?.migrationName;

@@ -1,4 +1,5 @@
 import { roleWithin, ROLE_LABEL, type Role } from '../roles';
+import { transaction } from './db/dialect';
 import type { ApiToken, DB, Team } from './db/schema';
 import {
 	getLiveApiTokenByHash,
@@ -51,7 +52,7 @@ export async function createTeamToken(
 		);
 	}
 	const token = TOKEN_PREFIX + newSecret();
-	const row = await db.transaction().execute(async (trx) => {
+	const row = await transaction(db, async (trx) => {
 		const row = await insertApiToken(trx, {
 			teamId: access.team.id,
 			name: input.name,
@@ -85,7 +86,7 @@ export async function revokeTeamToken(
 	if (!own && !can(access.role, 'team:manage')) {
 		throw new AppError(403, 'forbidden', 'Only owners can revoke tokens other people created.');
 	}
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		await revokeApiToken(trx, access.team.id, row.id);
 		await logTeamEvent(trx, {
 			teamId: access.team.id,

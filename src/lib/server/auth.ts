@@ -1,4 +1,5 @@
 import { hash, verify } from '@node-rs/argon2';
+import { isUniqueViolation, transaction } from './db/dialect';
 import {
 	Lucia,
 	TimeSpan,
@@ -31,8 +32,8 @@ import {
 	retryAfterSeconds,
 	signInLimits,
 	takeAll,
-	type Backoff,
-	type Limiter
+	type AnyBackoff,
+	type AnyLimiter
 } from './rate-limit';
 import { afterResponse } from './background';
 import {
@@ -343,8 +344,8 @@ async function deliver(ctx: FlowContext, message: MailMessage): Promise<void> {
 	}
 }
 
-function limitMail(email: string, ip: string | null, what: string): void {
-	const r = takeAll([
+async function limitMail(email: string, ip: string | null, what: string): Promise<void> {
+	const r = await takeAll([
 		[mailLimits.perAddress, normalizeEmail(email)],
 		[mailLimits.perIp, addressKey(ip)]
 	]);
@@ -366,7 +367,7 @@ export async function signUp(
 ): Promise<SignUpOutcome> {
 	const problem = passwordProblem(input.password, input.email);
 	if (problem) throw new AppError(400, 'weak-password', problem, 'password');
-	limitMail(input.email, ctx.ip, 'sign-ups from this address');
+	await limitMail(input.email, ctx.ip, 'sign-ups from this address');
 	// hashed either way, so a taken address answers in the time a new one takes
 	const passwordHash = await hashPassword(input.password);
 	const existing = await getUserByEmail(db, input.email);
@@ -381,7 +382,7 @@ export async function signUp(
 			});
 		} catch (e) {
 			// two sign-ups racing for one address: the unique index decides, the loser is told by mail
-			if (!String(e).includes('UNIQUE')) throw e;
+			if (!isUniqueViolation(e)) throw e;
 		}
 	}
 	if (user) {
@@ -406,8 +407,8 @@ export async function signUp(
 }
 
 export interface SignInLimits {
-	perAccountAndIp: Backoff;
-	perIp: Limiter;
+	perAccountAndIp: AnyBackoff;
+	perIp: AnyLimiter;
 }
 
 /**
@@ -423,19 +424,19 @@ export async function signIn(
 ): Promise<User> {
 	const client = addressKey(ip);
 	const pairKey = `${normalizeEmail(input.email)} ${client}`;
-	const fromIp = limits.perIp.take(client);
+	const fromIp = await limits.perIp.take(client);
 	if (!fromIp.allowed) throw tooMany(fromIp, 'sign-in attempts from this address');
-	const pair = limits.perAccountAndIp.attempt(pairKey);
+	const pair = await limits.perAccountAndIp.attempt(pairKey);
 	if (!pair.allowed) {
-		limits.perIp.refund(client);
+		await limits.perIp.refund(client);
 		throw tooMany(pair, 'sign-in attempts');
 	}
 	const user = await getUserByEmail(db, input.email);
 	if (!user) {
 		await burnTime(input.password);
 	} else if (await verifyPassword(user.password_hash, input.password)) {
-		limits.perAccountAndIp.succeed(pairKey);
-		limits.perIp.refund(client);
+		await limits.perAccountAndIp.succeed(pairKey);
+		await limits.perIp.refund(client);
 		return user;
 	}
 	throw new AppError(
@@ -451,10 +452,10 @@ export async function sendVerification(
 	ctx: FlowContext,
 	options: { limited?: boolean } = {}
 ): Promise<void> {
-	if (options.limited !== false) limitMail(user.email, ctx.ip, 'verification mails');
+	if (options.limited !== false) await limitMail(user.email, ctx.ip, 'verification mails');
 	const token = newSecret();
 	const expiresAt = Date.now() + VERIFY_LINK_HOURS * 3600_000;
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		await retireEmailTokens(trx, user.id, 'verify-email');
 		await insertEmailToken(trx, {
 			userId: user.id,
@@ -498,7 +499,7 @@ export async function verifyEmail(
 			'This confirmation link has expired. Ask for a new one from your account page.'
 		);
 	if (row.email !== user.email) throw unusable;
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		await markEmailTokenUsed(trx, row.id);
 		await markEmailVerified(trx, user.id, user.email);
 	});
@@ -512,7 +513,7 @@ export async function verifyEmail(
  * timing tells a caller anything. A mail that fails is logged; the person can ask again.
  */
 export async function requestPasswordReset(db: DB, email: string, ctx: FlowContext): Promise<void> {
-	limitMail(email, ctx.ip, 'reset requests');
+	await limitMail(email, ctx.ip, 'reset requests');
 	afterResponse('reset mail', () => sendResetLink(db, email, ctx));
 }
 
@@ -521,7 +522,7 @@ async function sendResetLink(db: DB, email: string, ctx: FlowContext): Promise<v
 	if (!user) return;
 	const token = newSecret();
 	const expiresAt = Date.now() + RESET_LINK_MINUTES * 60_000;
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		await retireEmailTokens(trx, user.id, 'reset-password');
 		await insertEmailToken(trx, {
 			userId: user.id,
@@ -567,7 +568,7 @@ export async function resetPassword(db: DB, token: string, password: string): Pr
 	const problem = passwordProblem(password, user.email);
 	if (problem) throw new AppError(400, 'weak-password', problem, 'password');
 	const passwordHash = await hashPassword(password);
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		const row = await getEmailToken(trx, 'reset-password', sha256(token));
 		if (!row || !(await markEmailTokenUsed(trx, row.id))) {
 			throw new AppError(400, 'link-used', 'This reset link was already used. Ask for a new one.');
@@ -595,7 +596,7 @@ export async function changePassword(
 	const problem = passwordProblem(input.next, row.email);
 	if (problem) throw new AppError(400, 'weak-password', problem, 'next');
 	const passwordHash = await hashPassword(input.next);
-	const ended = await db.transaction().execute(async (trx) => {
+	const ended = await transaction(db, async (trx) => {
 		await setPasswordHash(trx, row.id, passwordHash);
 		await retireEmailTokens(trx, row.id, 'reset-password');
 		return sessions.deleteUserSessions(trx, row.id, input.keepSessionId);

@@ -1,4 +1,5 @@
 import type { Role } from '../roles';
+import { transaction } from './db/dialect';
 import type { DB } from './db/schema';
 import { countUsers, createUser } from './db/users';
 import { createTeam } from './db/teams';
@@ -113,7 +114,7 @@ export async function seedDemo(db: DB): Promise<SeedResult> {
 	const hour = 3_600_000;
 	const t0 = Date.now() - WORKED_EXAMPLES.length * hour;
 	const founded = t0 - hour;
-	const seeded = await db.transaction().execute(async (trx) => {
+	const seeded = await transaction(db, async (trx) => {
 		if ((await countUsers(trx)) > 0) return false;
 		for (const [i, p] of DEMO_PEOPLE.entries()) {
 			ids[p.role] = (

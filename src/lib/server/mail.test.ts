@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Kysely } from 'kysely';
-import { createTestDb } from './db';
+import { createTestDb, disposeTestDb } from './db';
 import type { Database } from './db/schema';
 import { caughtSummary, createMailer, startFakeSmtp, type Mailer } from './mail';
 import { getOutboxMessage, listOutboxMessages } from './db/outbox';
@@ -11,7 +11,7 @@ let mailer: Mailer | undefined;
 afterEach(async () => {
 	await mailer?.close();
 	mailer = undefined;
-	await db.destroy();
+	await disposeTestDb(db);
 });
 
 describe('mail through the local fake SMTP server', () => {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { transaction } from './db/dialect';
 import type { DB, ReviewNoteReplyRow, ReviewNoteRow } from './db/schema';
 import { AppError } from './errors';
 import { newId } from './secrets';
@@ -276,7 +277,7 @@ export async function createNote(
 	const mentioned = mentionedIds(body.data, mentionable(members));
 	const author = access.actor;
 	const id = newId();
-	const row = await db.transaction().execute(async (trx) => {
+	const row = await transaction(db, async (trx) => {
 		const r = await insertNote(
 			trx,
 			{
@@ -351,7 +352,7 @@ export async function replyToNote(
 	const mentioned = mentionedIds(body.data, mentionable(members));
 	const author = access.actor;
 	const replyId = newId();
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		await insertReply(
 			trx,
 			{ id: replyId, noteId: note.id, kind: 'reply', body: body.data, author },
@@ -400,7 +401,7 @@ export async function setNoteState(
 	const note = await getNoteRow(db, sheet.id, noteId);
 	if (!note) noteNotFound();
 	const by = access.actor;
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		const changed = await setNoteResolved(trx, note.id, resolved ? by : null, now);
 		if (!changed)
 			throw new AppError(

@@ -104,24 +104,26 @@ describe('token bucket', () => {
 });
 
 describe('takeAll', () => {
-	it('takes from every bucket or from none', () => {
+	it('takes from every bucket or from none', async () => {
 		const c = clock();
 		const a = createLimiter({ ratePerSecond: 0.001, burst: 5, now: c.now });
 		const b = createLimiter({ ratePerSecond: 0.001, burst: 1, now: c.now });
 		expect(
-			takeAll([
-				[a, 'x'],
-				[b, 'y']
-			]).allowed
+			(
+				await takeAll([
+					[a, 'x'],
+					[b, 'y']
+				])
+			).allowed
 		).toBe(true);
-		const r = takeAll([
+		const r = await takeAll([
 			[a, 'x'],
 			[b, 'y']
 		]);
 		expect(r.allowed).toBe(false);
 		// a's token was given back because b refused
 		expect(a.available('x')).toBe(4);
-		refundAll([[b, 'y']]);
+		await refundAll([[b, 'y']]);
 		expect(b.available('y')).toBe(1);
 	});
 });

@@ -1,3 +1,6 @@
+import type { DB } from './db/schema';
+import { deleteCounters, stepCounter, type CounterRow } from './db/rate-limits';
+
 /**
  * In-memory token-bucket rate limiting, one bucket per key (an IP, an e-mail, a token id…).
  *
@@ -7,7 +10,7 @@
  * `COMPUTE_RATE_LIMIT=0` means.
  *
  * State lives in this process only: a restart forgets it, and several processes would each
- * keep their own. Idle keys are dropped once their bucket has refilled, and at most `maxKeys`
+ * keep their own (the app's own limits move to the database with shareLimitsThrough, below). Idle keys are dropped once their bucket has refilled, and at most `maxKeys`
  * are kept (least recently used go first), so an attacker cycling keys cannot grow memory.
  *
  * Usage:
@@ -123,23 +126,27 @@ export function retryAfterSeconds(r: { retryAfterMs: number }): string {
  * Takes one token from each (limiter, key) pair, or none: if any refuses, the tokens already
  * taken are given back and the longest wait is returned.
  */
-export function takeAll(pairs: ReadonlyArray<readonly [Limiter, string]>): TakeResult {
-	const taken: Array<readonly [Limiter, string]> = [];
+export async function takeAll(
+	pairs: ReadonlyArray<readonly [AnyLimiter, string]>
+): Promise<TakeResult> {
+	const taken: Array<readonly [AnyLimiter, string]> = [];
 	let wait = 0;
 	for (const pair of pairs) {
-		const r = pair[0].take(pair[1]);
+		const r = await pair[0].take(pair[1]);
 		if (r.allowed) taken.push(pair);
 		else wait = Math.max(wait, r.retryAfterMs);
 	}
 	if (wait > 0) {
-		for (const [l, k] of taken) l.refund(k);
+		for (const [l, k] of taken) await l.refund(k);
 		return { allowed: false, retryAfterMs: wait };
 	}
 	return { allowed: true, remaining: 0 };
 }
 
-export function refundAll(pairs: ReadonlyArray<readonly [Limiter, string]>): void {
-	for (const [l, k] of pairs) l.refund(k);
+export async function refundAll(
+	pairs: ReadonlyArray<readonly [AnyLimiter, string]>
+): Promise<void> {
+	for (const [l, k] of pairs) await l.refund(k);
 }
 
 /**
@@ -247,6 +254,148 @@ export function createBackoff(options: BackoffOptions): Backoff {
 	};
 }
 
+type MaybePromise<T> = T | Promise<T>;
+
+/** A token bucket kept in memory (createLimiter) or in the database (createSharedLimiter). */
+export interface AnyLimiter {
+	take(key: string, cost?: number): MaybePromise<TakeResult>;
+	refund(key: string, amount?: number): MaybePromise<void>;
+	reset(key?: string): MaybePromise<void>;
+	readonly enabled: boolean;
+}
+
+/** Growing delays kept in memory (createBackoff) or in the database (createSharedBackoff). */
+export interface AnyBackoff {
+	attempt(key: string): MaybePromise<TakeResult>;
+	succeed(key: string): MaybePromise<void>;
+	failures(key: string): MaybePromise<number>;
+	reset(key?: string): MaybePromise<void>;
+}
+
+/**
+ * A token bucket per key in the `rate_limits` table, so every app process on one database
+ * counts against the same budget. Same arithmetic as createLimiter.
+ */
+export function createSharedLimiter(
+	db: () => DB,
+	name: string,
+	options: Omit<LimiterOptions, 'maxKeys'>
+): AnyLimiter {
+	const { ratePerSecond, burst } = options;
+	const now = options.now ?? Date.now;
+	const perMs = ratePerSecond / 1000;
+	const enabled = ratePerSecond > 0;
+	const level = (row: CounterRow | undefined, t: number) =>
+		row ? Math.min(burst, row.tokens + Math.max(0, t - row.at) * perMs) : burst;
+	return {
+		enabled,
+		take(key, cost = 1) {
+			if (!enabled) return { allowed: true, remaining: burst };
+			const t = now();
+			return stepCounter<TakeResult>(db(), name, key, (row) => {
+				const tokens = level(row, t);
+				if (tokens >= cost)
+					return {
+						next: { tokens: tokens - cost, failures: 0, at: t },
+						result: { allowed: true, remaining: Math.floor(tokens - cost) }
+					};
+				return {
+					next: { tokens, failures: 0, at: t },
+					result: { allowed: false, retryAfterMs: Math.ceil((cost - tokens) / perMs) }
+				};
+			});
+		},
+		async refund(key, amount = 1) {
+			if (!enabled) return;
+			const t = now();
+			await stepCounter(db(), name, key, (row) => ({
+				next: row ? { tokens: Math.min(burst, level(row, t) + amount), failures: 0, at: t } : null,
+				result: undefined
+			}));
+		},
+		reset: (key) => deleteCounters(db(), name, key)
+	};
+}
+
+/** Growing delays per key in the `rate_limits` table, shared by every app process; as createBackoff. */
+export function createSharedBackoff(
+	db: () => DB,
+	name: string,
+	options: Omit<BackoffOptions, 'maxKeys'>
+): AnyBackoff {
+	const { free, baseMs, maxMs, forgetMs } = options;
+	const now = options.now ?? Date.now;
+	const waitAfter = (failures: number) =>
+		failures < free ? 0 : Math.min(maxMs, baseMs * 2 ** Math.min(failures - free, 40));
+	const live = (row: CounterRow | undefined, t: number) =>
+		row && t - row.at < forgetMs ? row : undefined;
+	return {
+		attempt(key) {
+			const t = now();
+			return stepCounter<TakeResult>(db(), name, key, (found) => {
+				const row = live(found, t);
+				const failures = row?.failures ?? 0;
+				if (row) {
+					const readyAt = row.at + waitAfter(failures);
+					if (t < readyAt)
+						return { next: row, result: { allowed: false, retryAfterMs: readyAt - t } };
+				}
+				return {
+					next: { tokens: 0, failures: failures + 1, at: t },
+					result: { allowed: true, remaining: Math.max(0, free - failures - 1) }
+				};
+			});
+		},
+		succeed: (key) => deleteCounters(db(), name, key),
+		failures(key) {
+			const t = now();
+			return stepCounter(db(), name, key, (found) => ({
+				next: found ?? null,
+				result: live(found, t)?.failures ?? 0
+			}));
+		},
+		reset: (key) => deleteCounters(db(), name, key)
+	};
+}
+
+let sharedDb: DB | undefined;
+
+/**
+ * Keeps the app's limits (sign-in, mail, invitations, compute) in this database from now on, so
+ * that several app processes on one PostgreSQL count together; `undefined` goes back to memory
+ * (one process on SQLite, the default, where a database write per request would buy nothing).
+ */
+export function shareLimitsThrough(db: DB | undefined): void {
+	sharedDb = db;
+}
+
+function appLimiter(name: string, options: LimiterOptions): AnyLimiter {
+	const memory = createLimiter(options);
+	const shared = createSharedLimiter(() => sharedDb as DB, name, options);
+	const pick = () => (sharedDb ? shared : memory);
+	return {
+		enabled: memory.enabled,
+		take: (key, cost) => pick().take(key, cost),
+		refund: (key, amount) => pick().refund(key, amount),
+		reset: (key) => pick().reset(key)
+	};
+}
+
+function appBackoff(name: string, options: BackoffOptions): AnyBackoff {
+	const memory = createBackoff(options);
+	const shared = createSharedBackoff(() => sharedDb as DB, name, options);
+	const pick = () => (sharedDb ? shared : memory);
+	return {
+		attempt: (key) => pick().attempt(key),
+		succeed: (key) => pick().succeed(key),
+		failures: (key) => pick().failures(key),
+		reset: (key) => pick().reset(key)
+	};
+}
+
+/** A limit of the app's: in memory, or shared through the database after shareLimitsThrough. */
+export const appLimits = { limiter: appLimiter, backoff: appBackoff };
+
 /**
  * Sign-in attempts. Failures count per (account, client address) with growing delays: five free,
  * then 1 s, 2 s, 4 s, … up to 15 minutes between tries from that address for that account. The
@@ -257,20 +406,20 @@ export function createBackoff(options: BackoffOptions): Backoff {
  * reveal nothing.
  */
 export const signInLimits = {
-	perAccountAndIp: createBackoff({
+	perAccountAndIp: appBackoff('sign-in', {
 		free: 5,
 		baseMs: 1000,
 		maxMs: 15 * 60_000,
 		forgetMs: 24 * 3600_000
 	}),
-	perIp: createLimiter({ ratePerSecond: 1 / 10, burst: 30 })
+	perIp: appLimiter('sign-in-ip', { ratePerSecond: 1 / 10, burst: 30 })
 };
 
 /** Mail-sending actions a stranger can trigger (reset links, verification resends, sign-ups). */
 export const mailLimits = {
-	perAddress: createLimiter({ ratePerSecond: 1 / 120, burst: 3 }),
-	perIp: createLimiter({ ratePerSecond: 1 / 30, burst: 30 })
+	perAddress: appLimiter('mail-address', { ratePerSecond: 1 / 120, burst: 3 }),
+	perIp: appLimiter('mail-ip', { ratePerSecond: 1 / 30, burst: 30 })
 };
 
 /** Invitations sent per team. */
-export const inviteLimits = createLimiter({ ratePerSecond: 1 / 60, burst: 30 });
+export const inviteLimits = appLimiter('invite', { ratePerSecond: 1 / 60, burst: 30 });

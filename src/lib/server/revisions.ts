@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { transaction } from './db/dialect';
 import type { DB, SheetRevisionRow, SheetRow, SheetStatusValue } from './db/schema';
 import { AppError } from './errors';
 import { newId } from './secrets';
@@ -270,7 +271,7 @@ export async function saveRevision(
 	const result = computeDoc(doc);
 	const author = access.actor;
 
-	return db.transaction().execute(async (trx) => {
+	return transaction(db, async (trx) => {
 		const latest = await latestRevision(trx, sheet.id);
 		const latestNumber = latest?.number ?? null;
 		if (latestNumber !== input.baseRevision) {
@@ -491,7 +492,7 @@ export async function moveRevision(
 	const by = access.actor;
 
 	let overridden: { reason: string; openNotes: number } | null = null;
-	const updated = await db.transaction().execute(async (trx) => {
+	const updated = await transaction(db, async (trx) => {
 		const row = await getRevision(trx, sheet.id, number);
 		if (!row) revisionNotFound(number);
 		const latest = (await latestRevision(trx, sheet.id))!;
@@ -694,7 +695,7 @@ export async function restoreRevision(
 		);
 	const sheet = await loadSheet(db, access, sheetId);
 	const by = access.actor;
-	return db.transaction().execute(async (trx) => {
+	return transaction(db, async (trx) => {
 		const row = await getRevision(trx, sheet.id, number);
 		if (!row) revisionNotFound(number);
 		const doc = checkDoc(parseJson(row.doc, 'revision')).doc;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { transaction } from './db/dialect';
 import type { DB, SheetRow } from './db/schema';
 import {
 	getSheet,
@@ -171,7 +172,7 @@ export async function createSheet(
 	if (!t.success) throw new AppError(400, 'invalid-title', t.error.issues[0].message, 'title');
 	const { doc } = checkDoc(input.doc, 'sent');
 	checkStart(doc);
-	const row = await db.transaction().execute((trx) =>
+	const row = await transaction(db, (trx) =>
 		insertSheet(
 			trx,
 			{
@@ -259,7 +260,7 @@ export async function renameTeamSheet(
 	const t = titleSchema.safeParse(title);
 	if (!t.success) throw new AppError(400, 'invalid-title', t.error.issues[0].message, 'title');
 	if (!SHEET_ID.test(id)) notFound();
-	return db.transaction().execute(async (trx) => {
+	return transaction(db, async (trx) => {
 		if (!(await renameSheet(trx, access.team.id, id, t.data, access.actor, now))) notFound();
 		return meta((await getSheet(trx, access.team.id, id))!);
 	});
@@ -331,7 +332,7 @@ export async function sheetDeletion(
 /** Deletes a sheet with its draft, revisions, notes and traces (rules in `deletion`), logged in the team's activity. */
 export async function deleteTeamSheet(db: DB, access: TeamAccess, id: string): Promise<void> {
 	requireEdit(access);
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		const { row, revisions, verdict } = await judgeDeletion(trx, access, id);
 		if (!verdict.allowed) throw new AppError(verdict.status, verdict.code, verdict.message);
 		if (!(await deleteSheetRow(trx, access.team.id, id))) notFound();
@@ -389,7 +390,7 @@ export async function saveDraft(
 			'version'
 		);
 	const { doc } = checkDoc(input.doc, 'sent');
-	return db.transaction().execute(async (trx) => {
+	return transaction(db, async (trx) => {
 		const row = await getSheet(trx, access.team.id, id);
 		if (!row) notFound();
 		assertDraftEditable(row);

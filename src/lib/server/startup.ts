@@ -1,10 +1,13 @@
 import { config } from './config';
-import { getDb, migrateAppDatabase } from './database';
+import { databaseLabel, getDb, migrateAppDatabase } from './database';
 import { getMailer } from './mail';
 import { backgroundSettled } from './background';
 import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_TEAM, seedDemo } from './demo';
 import { getTeamBySlug } from './db/teams';
 import { deleteExpiredSessions } from './db/sessions';
+import { deleteStaleCounters } from './db/rate-limits';
+import { isPostgres } from './db/dialect';
+import { shareLimitsThrough } from './rate-limit';
 
 /**
  * Server start: apply migrations, start mail (the local fake SMTP server when SMTP_URL is unset),
@@ -18,7 +21,13 @@ export async function startApp(options: { dev?: boolean } = {}): Promise<void> {
 	const mailer = await getMailer();
 	const seed = c.seedDemo ? await seedDemo(db) : { seeded: false };
 
-	const timer = setInterval(() => void deleteExpiredSessions(db).catch(() => {}), 3600_000);
+	// several app processes on one PostgreSQL count their rate limits together
+	if (isPostgres(db)) shareLimitsThrough(db);
+
+	const timer = setInterval(() => {
+		void deleteExpiredSessions(db).catch(() => {});
+		void deleteStaleCounters(db, Date.now() - 24 * 3600_000).catch(() => {});
+	}, 3600_000);
 	timer.unref();
 	// adapter-node emits this after it stopped taking requests (SIGINT/SIGTERM)
 	process.once('sveltekit:shutdown', () => {
@@ -36,7 +45,7 @@ export async function startApp(options: { dev?: boolean } = {}): Promise<void> {
 		'',
 		'  Statewright',
 		url ? `  ${url}` : '  (development server)',
-		`  database  ${c.databasePath}${applied.length ? `  (applied ${applied.length} migration${applied.length > 1 ? 's' : ''})` : ''}`,
+		`  database  ${databaseLabel()}${applied.length ? `  (applied ${applied.length} migration${applied.length > 1 ? 's' : ''})` : ''}`,
 		mailer.catching
 			? `  mail      caught by the local SMTP server on 127.0.0.1:${mailer.port} and printed here, each message with its links${c.devTools ? `; signed-in people read their own at ${url}/dev/outbox` : ' (SMTP_URL unset: mail is not delivered)'}`
 			: '  mail      sent through SMTP_URL'

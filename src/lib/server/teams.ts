@@ -1,4 +1,5 @@
 import { roleWithin, ROLES, type Role } from '../roles';
+import { transaction } from './db/dialect';
 import type { DB, Invite, Team, User } from './db/schema';
 import { createTeam, getTeamById, updateTeam } from './db/teams';
 import {
@@ -63,7 +64,7 @@ export async function createTeamFor(
 	user: SessionUser,
 	input: { name: string; description?: string }
 ): Promise<Team> {
-	return db.transaction().execute(async (trx) => {
+	return transaction(db, async (trx) => {
 		const team = await createTeam(trx, {
 			name: input.name,
 			description: input.description,
@@ -86,7 +87,7 @@ export async function renameTeam(
 	input: { name: string; description: string }
 ): Promise<void> {
 	assertManager(access);
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		await updateTeam(trx, access.team.id, input);
 		await log(trx, access, 'team.renamed', { from: access.team.name, to: input.name.trim() });
 	});
@@ -116,7 +117,7 @@ export async function inviteMember(
 			'email'
 		);
 	}
-	const limit = inviteLimits.take(access.team.id);
+	const limit = await inviteLimits.take(access.team.id);
 	if (!limit.allowed)
 		throw new AppError(
 			429,
@@ -125,7 +126,7 @@ export async function inviteMember(
 		);
 	const token = newSecret();
 	const expiresAt = Date.now() + INVITE_DAYS * 86_400_000;
-	const invite = await db.transaction().execute(async (trx) => {
+	const invite = await transaction(db, async (trx) => {
 		await revokeOpenInvitesFor(trx, access.team.id, email);
 		const invite = await insertInvite(trx, {
 			teamId: access.team.id,
@@ -162,7 +163,7 @@ export async function cancelInvite(db: DB, access: TeamAccess, inviteId: string)
 	assertManager(access);
 	const invite = await getTeamInvite(db, access.team.id, inviteId);
 	if (!invite) throw new AppError(404, 'not-found', 'No such invitation in this team.');
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		if (!(await revokeInvite(trx, access.team.id, inviteId))) {
 			throw new AppError(
 				409,
@@ -230,7 +231,7 @@ export async function acceptInvite(db: DB, token: string, user: SessionUser): Pr
 			`This invitation is for ${view.invite.email}, but you are signed in as ${user.email}. Sign out and sign in (or sign up) with the invited address.`
 		);
 	}
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		if (await getMembership(trx, view.team.id, user.id)) {
 			throw new AppError(409, 'already-member', `You are already a member of ${view.team.name}.`);
 		}
@@ -289,7 +290,7 @@ export async function changeMemberRole(
 	role: Role
 ): Promise<{ from: Role; revokedTokens: number }> {
 	assertManager(access);
-	return db.transaction().execute(async (trx) => {
+	return transaction(db, async (trx) => {
 		const member = await requireMember(trx, access, userId);
 		if (member.role === role) return { from: role, revokedTokens: 0 };
 		await assertOwnerRemains(trx, access.team.id, member.role);
@@ -311,7 +312,7 @@ export async function removeTeamMember(db: DB, access: TeamAccess, userId: strin
 	if (access.principal.kind === 'user' && userId === access.principal.user.id) {
 		throw new AppError(400, 'use-leave', 'To remove yourself, use "Leave team".');
 	}
-	return db.transaction().execute(async (trx) => {
+	return transaction(db, async (trx) => {
 		const member = await requireMember(trx, access, userId);
 		await assertOwnerRemains(trx, access.team.id, member.role);
 		await removeMember(trx, access.team.id, userId);
@@ -329,7 +330,7 @@ export async function leaveTeam(db: DB, access: TeamAccess): Promise<void> {
 	if (access.principal.kind !== 'user')
 		throw new AppError(403, 'forbidden', 'Tokens cannot leave teams.');
 	const userId = access.principal.user.id;
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		const m = await getMembership(trx, access.team.id, userId);
 		if (!m) throw new AppError(404, 'not-found', 'You are not a member of this team.');
 		await assertOwnerRemains(trx, access.team.id, m.role);

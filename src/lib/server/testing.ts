@@ -1,7 +1,7 @@
 import { expect } from 'vitest';
 import type { Kysely } from 'kysely';
 import { AppError } from './errors';
-import { createTestDb } from './db';
+import { createTestDb, disposeTestDb } from './db';
 import type { Database } from './db/schema';
 import { createMailer, type Mailer } from './mail';
 import type { FlowContext } from './auth';
@@ -10,8 +10,9 @@ import { mailLimits, signInLimits, inviteLimits } from './rate-limit';
 import { backgroundSettled } from './background';
 
 /**
- * For integration tests: a fresh migrated in-memory database and a real local fake SMTP server
- * storing into it. Not used by the app.
+ * For integration tests: a fresh migrated database (in-memory SQLite, or a schema of its own on
+ * TEST_POSTGRES_URL in the PostgreSQL test project) and a real local fake SMTP server storing
+ * into it. Not used by the app.
  */
 export async function setupIntegration(origin = 'http://statewright.test'): Promise<{
 	db: Kysely<Database>;
@@ -37,7 +38,7 @@ export async function setupIntegration(origin = 'http://statewright.test'): Prom
 		signInLimits.perIp,
 		inviteLimits
 	])
-		l.reset();
+		await l.reset();
 	return {
 		db,
 		mailer,
@@ -50,7 +51,7 @@ export async function setupIntegration(origin = 'http://statewright.test'): Prom
 		async close() {
 			await backgroundSettled();
 			await mailer.close();
-			await db.destroy();
+			await disposeTestDb(db);
 		}
 	};
 }

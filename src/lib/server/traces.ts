@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { transaction } from './db/dialect';
 import type { DB, SheetTraceRow } from './db/schema';
 import { AppError } from './errors';
 import { newId } from './secrets';
@@ -189,7 +190,7 @@ export async function uploadTrace(
 		uploaded_by_label: by.label,
 		uploaded_at: now
 	};
-	await db.transaction().execute(async (trx) => {
+	await transaction(db, async (trx) => {
 		if ((await countTraces(trx, sheet.id)) >= MAX_TRACES_PER_SHEET)
 			throw new AppError(
 				409,

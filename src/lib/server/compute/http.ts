@@ -4,7 +4,7 @@ import { ZodError, type z } from 'zod';
 import { ThermoError, type ThermoErrorCode } from '$lib/thermo';
 import { issueText, jsonError, readJson } from '$lib/server/api';
 import { AppError } from '$lib/server/errors';
-import { createLimiter, retryAfterSeconds, type Limiter } from '$lib/server/rate-limit';
+import { appLimits, retryAfterSeconds, type AnyLimiter } from '$lib/server/rate-limit';
 import { clientIp } from '$lib/server/request';
 import { createAnswerCache } from './answer-cache';
 
@@ -68,11 +68,11 @@ export function workUnits(points: number): number {
 		: 1;
 }
 
-let limiter: { limiter: Limiter; rate: number; burst: number } | undefined;
+let limiter: { limiter: AnyLimiter; rate: number; burst: number } | undefined;
 
 let clock: (() => number) | undefined;
 
-function computeBucket(): { limiter: Limiter; rate: number; burst: number } {
+function computeBucket(): { limiter: AnyLimiter; rate: number; burst: number } {
 	if (!limiter) {
 		const raw = process.env.COMPUTE_RATE_LIMIT;
 		const rate = raw === undefined || raw.trim() === '' ? 100 : Number(raw);
@@ -81,13 +81,20 @@ function computeBucket(): { limiter: Limiter; rate: number; burst: number } {
 			console.warn(`[statewright] COMPUTE_RATE_LIMIT="${raw}" is not a number ≥ 0; using 100.`);
 		const r = ok ? rate : 100;
 		const burst = Math.max(1, 2 * r);
-		limiter = { limiter: createLimiter({ ratePerSecond: r, burst, now: clock }), rate: r, burst };
+		limiter = {
+			limiter: appLimits.limiter('compute', { ratePerSecond: r, burst, now: clock }),
+			rate: r,
+			burst
+		};
 	}
 	return limiter;
 }
 
-/** The compute limiter: COMPUTE_RATE_LIMIT units of work per second per client (default 100, bursts 2×, 0 = off). */
-export function computeLimiter(): Limiter {
+/**
+ * The compute limiter: COMPUTE_RATE_LIMIT units of work per second per client (default 100,
+ * bursts 2×, 0 = off), shared by every app process on one PostgreSQL database.
+ */
+export function computeLimiter(): AnyLimiter {
 	return computeBucket().limiter;
 }
 
@@ -123,18 +130,18 @@ const charged = new WeakMap<RequestEvent, number>();
  * arrival, this takes the rest (capped at the burst, so any request within the work caps can pass
  * after a wait). Throws a 429 AppError with the wait when the client's bucket cannot pay.
  */
-export function chargeWork(event: RequestEvent, points: number): void {
+export async function chargeWork(event: RequestEvent, points: number): Promise<void> {
 	const units = workUnits(points);
-	chargeUnits(event, units);
+	await chargeUnits(event, units);
 }
 
-function chargeUnits(event: RequestEvent, units: number): void {
+async function chargeUnits(event: RequestEvent, units: number): Promise<void> {
 	const { limiter: l, burst } = computeBucket();
 	if (!l.enabled) return;
 	const target = Math.min(units, burst);
 	const due = target - (charged.get(event) ?? 0);
 	if (due <= 0) return;
-	const r = l.take(clientKey(event), due);
+	const r = await l.take(clientKey(event), due);
 	if (!r.allowed) throw rateLimitedError(r.retryAfterMs, units);
 	charged.set(event, target);
 }
@@ -168,8 +175,8 @@ export function computeError(e: unknown, event: RequestEvent): Response {
 }
 
 /** The unit every request pays on arrival, before its body or query is read. */
-function rateLimited(event: RequestEvent): Response | null {
-	const r = computeLimiter().take(clientKey(event));
+async function rateLimited(event: RequestEvent): Promise<Response | null> {
+	const r = await computeLimiter().take(clientKey(event));
 	if (r.allowed) {
 		charged.set(event, 1);
 		return null;
@@ -221,7 +228,7 @@ export function computePost<E extends RequestEvent>(
 	handler: (event: E) => Promise<unknown> | unknown
 ) {
 	return async (event: E): Promise<Response> => {
-		const limited = rateLimited(event);
+		const limited = await rateLimited(event);
 		if (limited) return limited;
 		try {
 			refuseQuery(event.url);
@@ -254,12 +261,12 @@ export function computeGet<E extends RequestEvent>(
 	handler: (event: E) => Promise<unknown> | unknown
 ) {
 	return async (event: E): Promise<Response> => {
-		const limited = rateLimited(event);
+		const limited = await rateLimited(event);
 		if (limited) return limited;
 		const key = event.url.pathname + event.url.search;
 		let hit = answerCache.get(key);
 		try {
-			if (hit) chargeUnits(event, hit.units);
+			if (hit) await chargeUnits(event, hit.units);
 			else {
 				const out = await handler(event);
 				const body = utf8.encode(out instanceof JsonText ? out.text : JSON.stringify(out));

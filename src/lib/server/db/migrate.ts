@@ -1,4 +1,5 @@
-import { Migrator, type Kysely, type Migration, type MigrationResult } from 'kysely';
+import { Migrator, sql, type Kysely, type Migration, type MigrationResult } from 'kysely';
+import { isPostgres } from './dialect';
 
 export type MigrationModules = Record<string, Migration>;
 
@@ -11,7 +12,7 @@ export async function migrateToLatest(
 	db: Kysely<any>, // eslint-disable-line @typescript-eslint/no-explicit-any
 	modules: MigrationModules
 ): Promise<MigrationResult[]> {
-	const migrator = new Migrator({ db, provider: { getMigrations: async () => modules } });
+	const migrator = await migratorFor(db, modules);
 	const { error, results } = await migrator.migrateToLatest();
 	if (error) {
 		const failed = results?.find((r) => r.status === 'Error')?.migrationName ?? 'unknown';
@@ -23,6 +24,24 @@ export async function migrateToLatest(
 		);
 	}
 	return results ?? [];
+}
+
+/**
+ * A Migrator whose bookkeeping tables live where the data does: on PostgreSQL in the connection's
+ * current schema (Kysely would otherwise take a kysely_migration table in any schema for ours).
+ */
+export async function migratorFor(
+	db: Kysely<any>, // eslint-disable-line @typescript-eslint/no-explicit-any
+	modules: MigrationModules
+): Promise<Migrator> {
+	const migrationTableSchema = isPostgres(db)
+		? (await sql<{ s: string }>`select current_schema() as s`.execute(db)).rows[0]?.s
+		: undefined;
+	return new Migrator({
+		db,
+		provider: { getMigrations: async () => modules },
+		...(migrationTableSchema ? { migrationTableSchema } : {})
+	});
 }
 
 /** Turns a path like `/migrations/20251201T223000Z_create_accounts.ts` into its migration name. */

@@ -1,5 +1,5 @@
-import { sql } from 'kysely';
 import type { DB, OutboxMessage } from './schema';
+import { jsonArrayHas } from './dialect';
 
 export type NewOutboxMessage = Omit<OutboxMessage, 'id'>;
 
@@ -57,8 +57,8 @@ export async function getOutboxMessage(db: DB, id: number): Promise<OutboxMessag
  * recipients, never with LIKE), and only mail received since `since` (when the account was made:
  * mail sent to an address before anyone held it is not handed to whoever signs up with it later).
  */
-function addressedTo(address: string) {
-	return sql<boolean>`exists (select 1 from json_each(outbox.envelope_to) where json_each.value = ${address.trim().toLowerCase()})`;
+function addressedTo(db: DB, address: string) {
+	return jsonArrayHas(db, 'outbox.envelope_to', address.trim().toLowerCase());
 }
 
 /** Newest first: the mail whose envelope names `address`, received at or after `since`. */
@@ -81,7 +81,7 @@ export async function listMailFor(
 			'text',
 			'received_at'
 		])
-		.where(addressedTo(address))
+		.where(addressedTo(db, address))
 		.where('received_at', '>=', since)
 		.orderBy('id', 'desc')
 		.limit(Math.min(Math.max(limit, 1), 500))
@@ -99,7 +99,7 @@ export async function getMailFor(
 		.selectFrom('outbox')
 		.selectAll()
 		.where('id', '=', id)
-		.where(addressedTo(address))
+		.where(addressedTo(db, address))
 		.where('received_at', '>=', since)
 		.executeTakeFirst();
 }

@@ -296,6 +296,19 @@ export interface Database {
 	review_note_mentions: ReviewNoteMentionsTable;
 	notification_settings: NotificationSettingsTable;
 	sheet_traces: SheetTracesTable;
+	rate_limits: RateLimitsTable;
+}
+
+/** A rate-limit counter shared by the app processes (src/lib/server/db/rate-limits.ts). */
+export interface RateLimitsTable {
+	/** which limit: 'sign-in-ip', 'compute', … */
+	name: string;
+	key: string;
+	/** a token bucket's level at `at` */
+	tokens: number;
+	/** a growing-delay counter's failures, the last counted at `at` */
+	failures: number;
+	at: number;
 }
 
 /** A database handle or an open transaction: every data function takes one of these first. */

@@ -1,5 +1,6 @@
 import { sql, type Expression, type SqlBool } from 'kysely';
 import type { DB, SheetRow, SheetStatusValue } from './schema';
+import { jsonArrayLength, jsonText, likeOperator } from './dialect';
 
 /** A sheet as lists show it: no draft body, with title-block fields and the leg count read from it. */
 export interface SheetListItem {
@@ -92,32 +93,38 @@ const LIST_COLUMNS = [
 	'updated_at'
 ] as const;
 
-function jsonText(path: string) {
-	return sql<string>`coalesce(json_extract(draft, ${path}), '')`;
-}
-
 /** `%text%` with LIKE's wildcards escaped (matched with ESCAPE '\'). */
 export function likePattern(text: string): string {
 	return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
 
-function searchCondition(q: string): Expression<SqlBool> | null {
+const SEARCHED = [
+	['titleBlock', 'tag'],
+	['titleBlock', 'equipment'],
+	['titleBlock', 'project'],
+	['titleBlock', 'documentNumber'],
+	['titleBlock', 'site'],
+	['description']
+] as const;
+
+function searchCondition(db: DB, q: string): Expression<SqlBool> | null {
 	const words = q
 		.trim()
 		.split(/\s+/)
 		.filter((w) => w.length > 0)
 		.slice(0, 8);
 	if (!words.length) return null;
+	const likeOp = sql.raw(likeOperator(db));
 	const parts = words.map((w) => {
 		const p = likePattern(w);
 		const num = /^#?\d{1,9}$/.test(w) ? Number(w.replace('#', '')) : null;
-		return sql<SqlBool>`(title like ${p} escape '\\' or fluid like ${p} escape '\\'
-			or json_extract(draft, '$.titleBlock.tag') like ${p} escape '\\'
-			or json_extract(draft, '$.titleBlock.equipment') like ${p} escape '\\'
-			or json_extract(draft, '$.titleBlock.project') like ${p} escape '\\'
-			or json_extract(draft, '$.titleBlock.documentNumber') like ${p} escape '\\'
-			or json_extract(draft, '$.titleBlock.site') like ${p} escape '\\'
-			or json_extract(draft, '$.description') like ${p} escape '\\'
+		const like = (field: Expression<unknown>) => sql<SqlBool>`${field} ${likeOp} ${p} escape '\\'`;
+		const fields = [
+			sql.ref('title'),
+			sql.ref('fluid'),
+			...SEARCHED.map((at) => jsonText(db, 'draft', at))
+		];
+		return sql<SqlBool>`(${sql.join(fields.map(like), sql` or `)}
 			${num !== null ? sql`or number = ${num}` : sql``})`;
 	});
 	return sql<SqlBool>`(${sql.join(parts, sql` and `)})`;
@@ -140,13 +147,13 @@ export async function listSheets(
 		.selectFrom('sheets')
 		.select(LIST_COLUMNS)
 		.select([
-			jsonText('$.titleBlock.tag').as('tag'),
-			jsonText('$.titleBlock.equipment').as('equipment'),
-			jsonText('$.titleBlock.project').as('project'),
-			sql<number>`coalesce(json_array_length(draft, '$.spec.legs'), 0)`.as('leg_count')
+			jsonText(db, 'draft', ['titleBlock', 'tag']).as('tag'),
+			jsonText(db, 'draft', ['titleBlock', 'equipment']).as('equipment'),
+			jsonText(db, 'draft', ['titleBlock', 'project']).as('project'),
+			jsonArrayLength(db, 'draft', ['spec', 'legs']).as('leg_count')
 		])
 		.where('team_id', '=', teamId);
-	const cond = options.q ? searchCondition(options.q) : null;
+	const cond = options.q ? searchCondition(db, options.q) : null;
 	if (cond) query = query.where(cond);
 	return query
 		.orderBy('updated_at', 'desc')
@@ -161,7 +168,7 @@ export async function countSheets(db: DB, teamId: string, q?: string): Promise<n
 		.selectFrom('sheets')
 		.select((eb) => eb.fn.countAll<number>().as('n'))
 		.where('team_id', '=', teamId);
-	const cond = q ? searchCondition(q) : null;
+	const cond = q ? searchCondition(db, q) : null;
 	if (cond) query = query.where(cond);
 	const r = await query.executeTakeFirst();
 	return Number(r?.n ?? 0);
@@ -197,10 +204,10 @@ export async function listRecentSheetsForUser(
 		.innerJoin('teams as t', 't.id', 's.team_id')
 		.select(LIST_COLUMNS.map((c) => `s.${c}` as const))
 		.select([
-			sql<string>`coalesce(json_extract(s.draft, '$.titleBlock.tag'), '')`.as('tag'),
-			sql<string>`coalesce(json_extract(s.draft, '$.titleBlock.equipment'), '')`.as('equipment'),
-			sql<string>`coalesce(json_extract(s.draft, '$.titleBlock.project'), '')`.as('project'),
-			sql<number>`coalesce(json_array_length(s.draft, '$.spec.legs'), 0)`.as('leg_count'),
+			jsonText(db, 's.draft', ['titleBlock', 'tag']).as('tag'),
+			jsonText(db, 's.draft', ['titleBlock', 'equipment']).as('equipment'),
+			jsonText(db, 's.draft', ['titleBlock', 'project']).as('project'),
+			jsonArrayLength(db, 's.draft', ['spec', 'legs']).as('leg_count'),
 			't.slug as team_slug',
 			't.name as team_name'
 		])

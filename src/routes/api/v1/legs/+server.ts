@@ -10,7 +10,7 @@ import { legRequestSchema } from '$lib/server/compute/schemas';
  */
 export const POST: RequestHandler = computePost(async (event) => {
 	const b = await readBody(event.request, legRequestSchema);
-	chargeWork(event, b.samples ?? SAMPLES_DEFAULT);
+	await chargeWork(event, b.samples ?? SAMPLES_DEFAULT);
 	const spec = {
 		fluid: b.fluid,
 		start: b.start,

@@ -12,6 +12,6 @@ import { pathPoints, pathRequestSchema } from '$lib/server/compute/schemas';
  */
 export const POST: RequestHandler = computePost(async (event) => {
 	const spec = await readBody(event.request, pathRequestSchema);
-	chargeWork(event, pathPoints(spec));
+	await chargeWork(event, pathPoints(spec));
 	return new JsonText(await compute({ kind: 'path', spec: spec as PathSpec }));
 });

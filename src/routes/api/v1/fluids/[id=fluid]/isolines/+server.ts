@@ -9,7 +9,7 @@ import type { IsolineKind } from '$lib/server/compute/tasks';
 export const GET: RequestHandler = computeGet(async (event) => {
 	const fluid = fluidFromParam(event.params.id);
 	const q = readQuery(event.url, isolineQuerySchema);
-	chargeWork(event, q.values.length * q.points);
+	await chargeWork(event, q.values.length * q.points);
 	const line = q.kind as IsolineKind;
 	return new JsonText(
 		await compute({ kind: 'isolines', fluid: fluid.id, line, values: q.values, points: q.points })

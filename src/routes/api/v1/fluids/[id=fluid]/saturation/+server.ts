@@ -9,6 +9,6 @@ export const GET: RequestHandler = computeGet(async (event) => {
 	const fluid = fluidFromParam(event.params.id);
 	const q = readQuery(event.url, saturationQuerySchema);
 	const points = q.points ?? 100;
-	chargeWork(event, 2 * points);
+	await chargeWork(event, 2 * points);
 	return new JsonText(await compute({ kind: 'saturation', fluid: fluid.id, points }));
 });
