@@ -1,7 +1,7 @@
 import { expect, test } from '@playwright/test';
 import { spawn, type ChildProcess } from 'node:child_process';
 import pg from 'pg';
-import { DEMO, DEMO_PASSWORD, TEAM } from './helpers';
+import { DEMO, DEMO_PASSWORD, ownPort, TEAM } from './helpers';
 
 // Two built app processes (build/index.js, as `npm start` runs it) on one PostgreSQL database, as
 // behind a load balancer (docs/deploy.md): both start at once on an empty database (migrations
@@ -15,8 +15,8 @@ if (!BASE_URL)
 	console.log(
 		'[statewright] TEST_POSTGRES_URL is not set: the two-process PostgreSQL test is skipped.'
 	);
-const E2E_PORT = Number(process.env.E2E_PORT ?? 4317);
-const PORTS = [E2E_PORT + 900, E2E_PORT + 901];
+// two ports of this worker's own (tests/helpers.ts ownPort): +700 and +720, plus the worker index
+const PORTS = [ownPort(700), ownPort(720)];
 // the public origin both processes sit behind (a reverse proxy's), so forms and cookies agree
 const ORIGIN = `http://127.0.0.1:${PORTS[0]}`;
 const DATABASE = `statewright_multinode_${PORTS[0]}`;
