@@ -12,6 +12,7 @@
  */
 import type { AddPointEvent, NudgeEvent, StateDragEvent } from '$lib/charts/chart';
 import { fitDomain } from '$lib/charts/scales';
+import { pairInputs, VIEWS } from '$lib/charts/views';
 import type {
 	ChartCoords,
 	ChartKind,
@@ -470,8 +471,7 @@ export class SheetEditor {
 		const fix = this.#fix();
 		if (drag.kind === 'state' && drag.key === 'start') {
 			const next = cloneDoc(base);
-			next.spec.start =
-				drag.chart === 'T-v' ? { T: coords.T!, v: coords.v } : { P: coords.P!, v: coords.v };
+			next.spec.start = pairInputs(drag.chart, coords) as Inputs;
 			delete next.startSpec;
 			return { doc: next, note: null };
 		}
@@ -609,6 +609,7 @@ export class SheetEditor {
 		if (
 			index > 0 &&
 			legs[index - 1].process === 'isochoric' &&
+			VIEWS[chart].x.prop === 'v' &&
 			(e.direction === 'left' || e.direction === 'right')
 		) {
 			this.#note(
@@ -646,11 +647,9 @@ export class SheetEditor {
 		const e = this.engine;
 		if (!e) return null;
 		try {
-			return e.fixState(
-				this.doc.spec.fluid,
-				chart === 'T-v' ? { T: c.T!, v: c.v } : { P: c.P!, v: c.v },
-				{ near: this.view?.states[0]?.state }
-			);
+			return e.fixState(this.doc.spec.fluid, pairInputs(chart, c) as Inputs, {
+				near: this.view?.states[0]?.state
+			});
 		} catch {
 			return null;
 		}
