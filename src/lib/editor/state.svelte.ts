@@ -20,6 +20,7 @@ import type {
 	CurvePoint,
 	DesignLimits as ChartLimits,
 	Isoline,
+	IsolineKind,
 	MeasuredTrace,
 	SaturationCurve
 } from '$lib/charts/types';
@@ -54,7 +55,8 @@ import {
 	type PathView
 } from '$lib/sheets/doc';
 import { History } from './history';
-import { isobarValues, isothermValues } from '$lib/sheets/isolines';
+import { lineSpans, lineValues } from '$lib/sheets/isolines';
+import { shownLines } from '$lib/sheets/chart-views';
 import {
 	defaultTargetKind,
 	projectOntoLeg,
@@ -164,7 +166,8 @@ export class SheetEditor {
 
 	fluid = $state.raw<FluidInfo>(null as unknown as FluidInfo);
 	saturation = $state.raw<SaturationCurve | null>(null);
-	isolines = $state.raw<{ tv: Isoline[]; pv: Isoline[] }>({ tv: [], pv: [] });
+	/** background lines by kind, for the kinds the shown views draw (chart-views.ts) */
+	isolines = $state.raw<Partial<Record<IsolineKind, Isoline[]>>>({});
 	limitCurves = $state.raw<{ isobars: Isoline[]; isotherms: Isoline[] }>({
 		isobars: [],
 		isotherms: []
@@ -999,25 +1002,21 @@ export class SheetEditor {
 		const doc = this.doc;
 		const f = this.fluid;
 		if (!f) return;
-		const states = this.committedView?.states ?? [];
-		const maxP = Math.max(f.critical.P, ...states.map((s) => s.state.P));
-		const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.state.P));
-		const maxT = Math.max(f.critical.T, ...states.map((s) => s.state.T));
-		const isobars = doc.chart.isolines
-			? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units)
-			: [];
-		const isotherms = doc.chart.isolines
-			? isothermValues({ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) }, doc.units)
-			: [];
-		const key = JSON.stringify([f.id, isobars, isotherms]);
+		const states = (this.committedView?.states ?? []).map((s) => s.state);
+		const spans = lineSpans(f, this.saturation, states);
+		const wanted = shownLines(doc.chart).map(
+			(kind) => [kind, lineValues(kind, spans, doc.units)] as const
+		);
+		const key = JSON.stringify([f.id, wanted]);
 		if (key !== this.#isoKey) {
 			this.#isoKey = key;
 			try {
-				const [tv, pv] = await Promise.all([
-					getIsolines(f.id, 'isobar', isobars),
-					getIsolines(f.id, 'isotherm', isotherms)
-				]);
-				if (this.#isoKey === key) this.isolines = { tv, pv };
+				const got = await Promise.all(
+					wanted.map(
+						async ([kind, values]) => [kind, await getIsolines(f.id, kind, values)] as const
+					)
+				);
+				if (this.#isoKey === key) this.isolines = Object.fromEntries(got);
 			} catch {
 				this.#isoKey = '';
 			}

@@ -8,10 +8,11 @@ import {
 	saturationCurve,
 	ThermoError
 } from '$lib/thermo';
-import type { Isoline, PathResult, SaturationCurve } from '$lib/thermo/types';
+import type { Isoline, IsolineKind, PathResult, SaturationCurve } from '$lib/thermo/types';
 import type { ChartFrame } from '$lib/review/types';
 import type { SheetDoc } from '$lib/sheets/types';
-import { isobarValues, isothermValues } from '$lib/sheets/isolines';
+import { lineSpans, lineValues } from '$lib/sheets/isolines';
+import { shownLines } from '$lib/sheets/chart-views';
 import type { DesignLimits as ChartLimits, CurvePoint } from '$lib/charts/types';
 import { listMembers } from './db/memberships';
 import { latestRevision } from './db/revisions';
@@ -50,7 +51,7 @@ function dome(fluid: string): SaturationCurve {
 	return d;
 }
 
-function lines(fluid: string, kind: 'isobar' | 'isotherm', values: number[]): Isoline[] {
+function lines(fluid: string, kind: IsolineKind, values: number[]): Isoline[] {
 	if (!values.length) return [];
 	try {
 		return engineIsolines(fluid, kind, values.slice(0, 40), 80);
@@ -64,20 +65,21 @@ function lines(fluid: string, kind: 'isobar' | 'isotherm', values: number[]): Is
 export function chartFrame(doc: SheetDoc, results: Array<PathResult | null>): ChartFrame {
 	const f = getFluid(doc.spec.fluid);
 	const states = results.flatMap((r) => r?.states ?? []).map((s) => s.state);
-	const maxP = Math.max(f.critical.P, ...states.map((s) => s.P));
-	const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.P));
-	const maxT = Math.max(f.critical.T, ...states.map((s) => s.T));
-	const isobars = doc.chart.isolines
-		? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units).filter(
-				(v) => v <= f.limits.Pmax
-			)
-		: [];
-	const isotherms = doc.chart.isolines
-		? isothermValues(
-				{ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) },
-				doc.units
-			).filter((v) => v >= f.limits.Tmin && v <= f.limits.Tmax)
-		: [];
+	const saturation = dome(f.id);
+	const spans = lineSpans(f, saturation, states);
+	const inRange = (kind: IsolineKind, v: number) =>
+		kind === 'isobar'
+			? v <= f.limits.Pmax
+			: kind === 'isotherm'
+				? v >= f.limits.Tmin && v <= f.limits.Tmax
+				: true;
+	const isolines: ChartFrame['isolines'] = {};
+	for (const kind of shownLines(doc.chart))
+		isolines[kind] = lines(
+			f.id,
+			kind,
+			lineValues(kind, spans, doc.units).filter((v) => inRange(kind, v))
+		);
 	const lim = doc.spec.limits ?? {};
 	const pLimits = [lim.designPressure, lim.reliefSetPressure].filter(
 		(v): v is number => typeof v === 'number' && v <= f.limits.Pmax
@@ -112,8 +114,8 @@ export function chartFrame(doc: SheetDoc, results: Array<PathResult | null>): Ch
 		};
 	return {
 		fluid: f,
-		saturation: dome(f.id),
-		isolines: { tv: lines(f.id, 'isobar', isobars), pv: lines(f.id, 'isotherm', isotherms) },
+		saturation,
+		isolines,
 		limits
 	};
 }
