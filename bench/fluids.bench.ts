@@ -6,10 +6,15 @@
  *
  * States per fluid: single-phase points between the triple and 1.6× the critical temperature at
  * 0.2, 1 and 3 times the critical density, plus mixtures at x = 0.1 and 0.6 (inputs precomputed).
+ * Air (a mixture, pseudo-pure.ts) has no two-phase states: its bubble (x = 0) and dew (x = 1)
+ * points stand in for the mixtures, and its "sat at T" column is the bubble point at T.
  */
 import { loadavg } from 'node:os';
 import { fixState, listFluids, saturationAtT } from '../src/lib/thermo/index.ts';
 import type { FluidInfo, Inputs, State } from '../src/lib/thermo/types.ts';
+import { fluidData } from '../src/lib/thermo/fluids/index.ts';
+
+const isMixture = (id: string) => Boolean(fluidData.find((d) => d.id === id)?.band);
 
 const BUDGETS = { 'T, rho': 1, 'P, T': 3, 'P, h': 10, 'sat at T': 5 } as const;
 
@@ -58,7 +63,7 @@ function states(f: FluidInfo): { single: State[]; mixed: State[] } {
 		}
 	}
 	const mixed = [0.3, 0.6, 0.9].flatMap((k) =>
-		[0.1, 0.6].map((x) => fixState(f.id, { T: Tt + k * (Tc - Tt), x }))
+		(isMixture(f.id) ? [0, 1] : [0.1, 0.6]).map((x) => fixState(f.id, { T: Tt + k * (Tc - Tt), x }))
 	);
 	return { single, mixed };
 }
@@ -80,7 +85,11 @@ for (const f of fluids) {
 		'P, T': time(single.map((s) => call({ T: s.T, P: s.P }))),
 		'P, h': time(all.map((s) => call({ P: s.P, h: s.h }))),
 		'sat at T': time(
-			[0.2, 0.4, 0.6, 0.8, 0.95, 0.99].map((k) => () => saturationAtT(f.id, Tt + k * (Tc - Tt)))
+			[0.2, 0.4, 0.6, 0.8, 0.95, 0.99].map((k) =>
+				isMixture(f.id)
+					? () => fixState(f.id, { T: Tt + k * (Tc - Tt), x: 0 })
+					: () => saturationAtT(f.id, Tt + k * (Tc - Tt))
+			)
 		)
 	};
 	lines.push([

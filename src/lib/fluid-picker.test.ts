@@ -44,7 +44,12 @@ describe('fluid picker search', () => {
 			['R-134a', 'r134a'],
 			['O2', 'oxygen'],
 			['LOX', 'oxygen'],
-			['R-732', 'oxygen']
+			['R-732', 'oxygen'],
+			['air', 'air'],
+			['compressed air', 'air'],
+			['Compressed Air', 'air'],
+			['R-729', 'air'],
+			['liquid air', 'air']
 		];
 		for (const [q, id] of cases) expect(first(q), q).toBe(id);
 	});
@@ -56,13 +61,12 @@ describe('fluid picker search', () => {
 
 	it('says when a query names a fluid Statewright does not carry', () => {
 		expect(notCarried('O2')).toBeNull(); // carried: oxygen is a fluid of its own
-		expect(notCarried('air')).toBe('Air');
-		expect(notCarried('R-729')).toBe('Air');
+		expect(notCarried('air')).toBeNull(); // carried: air as a pseudo-pure fluid
 		expect(notCarried('He')).toBe('Helium');
 		expect(notCarried('CO2')).toBeNull();
 		expect(notCarried('propane')).toBeNull();
 		// none of them is a carried fluid's name
-		for (const q of ['air', 'he'])
+		for (const q of ['he'])
 			expect(searchFluids(fluids, q).some((f) => normalize(f.name) === q)).toBe(false);
 	});
 
@@ -92,5 +96,6 @@ describe('fluid picker groups', () => {
 		expect(of('isobutane')).toBe('hydrocarbon');
 		expect(of('methane')).toBe('cryogen');
 		expect(of('nitrogen')).toBe('cryogen');
+		expect(of('air')).toBe('cryogen');
 	});
 });

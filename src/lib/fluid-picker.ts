@@ -64,10 +64,9 @@ export function groupFluids<F extends PickableFluid>(
 
 /**
  * Fluids engineers ask for that Statewright does not carry (yet): a query naming one exactly is
- * told so, rather than only shown near matches (O2 would otherwise offer CO2).
+ * told so, rather than only shown near matches (He would otherwise offer methane, whose name contains it).
  */
 const NOT_CARRIED: { label: string; names: string[] }[] = [
-	{ label: 'Air', names: ['air', 'r729', 'liquid air', 'compressed air'] },
 	{ label: 'Helium', names: ['helium', 'he', 'he4', 'helium4', 'lhe', 'r704', 'liquid helium'] }
 ];
 

@@ -58,6 +58,14 @@ import { History } from './history';
 import { lineSpans, lineValues } from '$lib/sheets/isolines';
 import { shownLines } from '$lib/sheets/chart-views';
 import {
+	startCandidatesOf,
+	startOptions,
+	withoutStartChoice,
+	withStartChoice,
+	withWindow,
+	type StateCandidate
+} from '$lib/sheets/choice';
+import {
 	defaultTargetKind,
 	projectOntoLeg,
 	targetFor,
@@ -161,6 +169,11 @@ export class SheetEditor {
 	/** the view of the committed document (isolines and the chart window follow it, not a drag) */
 	committedView = $state.raw<PathView | null>(null);
 	computeError = $state<string | null>(null);
+	/**
+	 * S1's pair of the last edit met several states (within the sheet's window): the document that
+	 * was refused and the states to pick from (pickStart); null otherwise.
+	 */
+	startChoice = $state.raw<{ doc: SheetDoc; candidates: StateCandidate[] } | null>(null);
 	/** a committed edit is being computed */
 	busy = $state(false);
 
@@ -333,7 +346,7 @@ export class SheetEditor {
 	async #compute(doc: SheetDoc, samples?: number): Promise<PathView> {
 		if (doc.spec.legs.length === 0) {
 			const e = await this.loadEngine();
-			const start = e.fixState(doc.spec.fluid, doc.spec.start);
+			const start = e.fixState(doc.spec.fluid, doc.spec.start, startOptions(doc.spec));
 			return {
 				result: startOnlyResult(doc, start, e.stateExtras(start)),
 				states: [{ id: 'start', label: 'S1', state: start }],
@@ -398,6 +411,8 @@ export class SheetEditor {
 				this.#apply(next, view);
 				return { ok: true };
 			} catch (e) {
+				const candidates = startCandidatesOf(e);
+				this.startChoice = candidates ? { doc: next, candidates } : null;
 				return { ok: false, message: messageOf(e, next.spec.legs) };
 			} finally {
 				this.busy = false;
@@ -410,6 +425,7 @@ export class SheetEditor {
 		this.view = view;
 		this.committedView = view;
 		this.computeError = null;
+		this.startChoice = null;
 		if (this.#history.push(next)) this.#historyRev++;
 		this.#autosave?.change(next);
 		this.#keepSelection();
@@ -665,7 +681,7 @@ export class SheetEditor {
 	 * another replaces the older of the two (the one set first), so the last two typed fix it.
 	 */
 	setStartProperty(prop: EditableProp, si: number): Promise<Outcome> {
-		const next = cloneDoc(this.doc);
+		const next = cloneDoc(withoutStartChoice(this.doc));
 		const start: Record<string, number> = {};
 		// rho is shown and typed as v
 		for (const [k, v] of Object.entries(next.spec.start))
@@ -690,7 +706,7 @@ export class SheetEditor {
 					'A start by fill level is for a closed system (a vessel); set the system to closed first.'
 			};
 		const e = await this.loadEngine();
-		const next = cloneDoc(this.doc);
+		const next = cloneDoc(withoutStartChoice(this.doc));
 		try {
 			next.spec.start = fillStart(e, next.spec.fluid, fill);
 		} catch (err) {
@@ -721,7 +737,7 @@ export class SheetEditor {
 				ok: false,
 				message: 'S1 has no quality outside the vapor dome; pick other properties.'
 			});
-		const next = cloneDoc(this.doc);
+		const next = cloneDoc(withoutStartChoice(this.doc));
 		next.spec.start = { [a]: va, [b]: vb };
 		delete next.startSpec;
 		return this.commit(next);
@@ -842,6 +858,31 @@ export class SheetEditor {
 		// a fill level belongs to a vessel: a flow device keeps the start's two properties
 		if (system.kind !== 'closed') delete next.startSpec;
 		return this.commit(next);
+	}
+
+	/**
+	 * The sheet's window: every state is solved within these bounds (K, Pa absolute; null for an
+	 * open side, all null for the formulation's whole range).
+	 */
+	setWindow(
+		window: Partial<Record<'Tmin' | 'Tmax' | 'Pmin' | 'Pmax', number | null>>
+	): Promise<Outcome> {
+		const r = withWindow(this.doc, window);
+		if (!r.ok) return Promise.resolve(r);
+		return this.commit(r.doc);
+	}
+
+	/** Pick one of the states S1's pair meets (startChoice): it is kept as the start's choice. */
+	pickStart(index: number): Promise<Outcome> {
+		const choice = this.startChoice;
+		const c = choice?.candidates[index];
+		if (!choice || !c) return Promise.resolve({ ok: false, message: 'There is nothing to pick.' });
+		return this.commit(withStartChoice(choice.doc, c));
+	}
+
+	/** Close the candidate picker without picking (the sheet stays as it was). */
+	dismissStartChoice(): void {
+		this.startChoice = null;
 	}
 
 	setLimits(limits: NonNullable<SheetDoc['spec']['limits']>): Promise<Outcome> {

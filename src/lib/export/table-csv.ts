@@ -2,7 +2,7 @@ import Papa from 'papaparse';
 import type { PathResult } from '../thermo/types';
 import type { UnitPrefs } from '../units';
 import { severityWord, type MemoFindings } from './findings';
-import { sheetTable, type SheetTable } from './table';
+import { sheetTable, transportSources, type SheetTable } from './table';
 
 // Kept apart from table.ts so pages that show the table do not ship the CSV writer.
 
@@ -36,7 +36,8 @@ export function tableCsv(
 	caption: string[],
 	findings: MemoFindings
 ): string {
-	const t = sheetTable(result, prefs, { style: 'ascii' });
+	const t = sheetTable(result, prefs, { style: 'ascii', transport: true });
+	const sources = transportSources(result);
 	const block = (title: string, b: SheetTable['states']) =>
 		Papa.unparse({ fields: [title, ...b.columns.slice(1).map(() => '')], data: [] }) +
 		'\r\n' +
@@ -59,6 +60,9 @@ export function tableCsv(
 		'\r\n\r\n' +
 		block('States', t.states) +
 		'\r\n\r\n' +
+		(sources.length
+			? Papa.unparse(textRows([['Transport sources'], ...sources.map((s) => [s])])) + '\r\n\r\n'
+			: '') +
 		block('Legs', t.legs) +
 		'\r\n\r\n' +
 		Papa.unparse(textRows([[t.note]])) +

@@ -32,6 +32,36 @@ export interface SheetTable {
 export interface TableOptions {
 	/** `ascii` for CSV (- and e-5), `unicode` for Markdown (− and ×10⁻⁵) */
 	style?: 'ascii' | 'unicode';
+	/**
+	 * add μ, k, Pr and σ columns when the states carry transport properties (POST /api/v1/paths
+	 * gives them); an absent value is an empty cell, and `transportSources` names the correlations
+	 */
+	transport?: boolean;
+}
+
+const TRANSPORT_COLUMNS = [
+	{ key: 'mu', symbol: 'μ', quantity: 'viscosity' },
+	{ key: 'k', symbol: 'k', quantity: 'thermalConductivity' },
+	{ key: 'Pr', symbol: 'Pr', quantity: 'dimensionless' },
+	{ key: 'sigma', symbol: 'σ', quantity: 'surfaceTension' }
+] as const;
+
+/**
+ * The publications behind a path's transport values, one line per property name that has any:
+ * "μ: IAPWS R12-08 …". Empty when no state carries transport properties.
+ */
+export function transportSources(result: PathResult): string[] {
+	const names = { mu: 'μ', k: 'k', Pr: 'Pr', sigma: 'σ' } as const;
+	const out: string[] = [];
+	for (const key of ['mu', 'k', 'Pr', 'sigma'] as const) {
+		const seen = new Set<string>();
+		for (const ps of result.states) {
+			const src = ps.transport?.sources[key];
+			if (src) seen.add(src);
+		}
+		if (seen.size) out.push(`${names[key]}: ${[...seen].join('; ')}`);
+	}
+	return out;
 }
 
 function unitLabel(q: Quantity, prefs: UnitPrefs, magnitude?: number[]): string {
@@ -61,6 +91,8 @@ export function sheetTable(
 		return formatQuantity(si, quantity, prefs, { unit, style }).text;
 	};
 
+	const withTransport =
+		options.transport === true && result.states.some((ps) => ps.transport !== undefined);
 	const states = {
 		columns: [
 			{ key: 'state', header: 'State', numeric: false },
@@ -81,7 +113,14 @@ export function sheetTable(
 				key: 'subcooling',
 				header: `subcooling [${unitLabel('temperatureDifference', prefs)}]`,
 				numeric: true
-			}
+			},
+			...(withTransport
+				? TRANSPORT_COLUMNS.map((c) => ({
+						key: c.key,
+						header: `${c.symbol} [${unitLabel(c.quantity, prefs)}]`,
+						numeric: true
+					}))
+				: [])
 		],
 		rows: result.states.map((ps, i) => [
 			stateLabel(i),
@@ -94,7 +133,8 @@ export function sheetTable(
 			q(ps.state.s, 'specificEntropy'),
 			q(ps.state.x, 'quality'),
 			q(ps.extras.superheat, 'temperatureDifference'),
-			q(ps.extras.subcooling, 'temperatureDifference')
+			q(ps.extras.subcooling, 'temperatureDifference'),
+			...(withTransport ? TRANSPORT_COLUMNS.map((c) => q(ps.transport?.[c.key], c.quantity)) : [])
 		])
 	};
 
@@ -196,10 +236,13 @@ export function tableMarkdown(
 	caption: string[],
 	findings: MemoFindings
 ): string {
-	const t = sheetTable(result, prefs, { style: 'unicode' });
+	const t = sheetTable(result, prefs, { style: 'unicode', transport: true });
 	const parts = [];
 	if (caption.length) parts.push(caption.map(mdText).join('  \n'));
 	parts.push(findingsMarkdown(findings));
-	parts.push('**States**', mdTable(t.states), '**Legs**', mdTable(t.legs), `_${t.note}_`);
+	parts.push('**States**', mdTable(t.states));
+	const sources = transportSources(result);
+	if (sources.length) parts.push(`_Transport properties — ${sources.map(mdText).join(' · ')}_`);
+	parts.push('**Legs**', mdTable(t.legs), `_${t.note}_`);
 	return parts.join('\n\n') + '\n';
 }

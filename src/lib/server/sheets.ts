@@ -16,6 +16,7 @@ import { AppError } from './errors';
 import { newId } from './secrets';
 import type { TeamAccess } from './guard';
 import { fixState, ThermoError } from '$lib/thermo';
+import { startOptions } from '$lib/sheets/choice';
 import { parseSheetDoc } from '$lib/sheets/schema';
 import { workedExample } from '$lib/sheets/templates';
 import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
@@ -130,7 +131,7 @@ export function checkDoc(
 /** The start state must exist, or the sheet could not even be opened: 422 with the engine's reason. */
 export function checkStart(doc: SheetDoc): void {
 	try {
-		fixState(doc.spec.fluid, doc.spec.start);
+		fixState(doc.spec.fluid, doc.spec.start, startOptions(doc.spec));
 	} catch (e) {
 		if (e instanceof ThermoError)
 			throw new AppError(

@@ -140,6 +140,8 @@ export function engineSpec(doc: SheetDoc): PathSpec {
 			const leg: SheetLegSpec = { id: l.id, process: l.process, target: { ...l.target } };
 			if (l.n !== undefined) leg.n = l.n;
 			if (l.samples !== undefined) leg.samples = l.samples;
+			if (l.endHint !== undefined) leg.endHint = l.endHint;
+			if (l.endNear !== undefined) leg.endNear = { ...l.endNear };
 			return leg;
 		}),
 		atmosphericPressure: doc.units.atmosphere
@@ -149,6 +151,9 @@ export function engineSpec(doc: SheetDoc): PathSpec {
 	);
 	if (Object.keys(limits).length) spec.limits = limits;
 	if (s.samples !== undefined) spec.samples = s.samples;
+	if (s.startHint !== undefined) spec.startHint = s.startHint;
+	if (s.startNear !== undefined) spec.startNear = { ...s.startNear };
+	if (s.window !== undefined) spec.window = { ...s.window };
 	return spec;
 }
 

@@ -104,6 +104,38 @@ const targetSchema = z
 			});
 	});
 
+const HINTS = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'] as const;
+const hintSchema = (name: string) =>
+	z.enum(HINTS, { error: `${name} must be one of ${HINTS.join(', ')}.` });
+
+/** The state picked where a pair meets several: its T (K) and/or P (Pa). */
+const nearSchema = (name: string) =>
+	z.strictObject(
+		{
+			T: positive(`${name}.T`, 'K').optional(),
+			P: positive(`${name}.P`, 'Pa, absolute').optional()
+		},
+		{ error: `${name} must be an object { T?, P? } (K, Pa absolute).` }
+	);
+
+/** The range every state of the sheet is solved within (docs/engine-states.md). */
+const windowSchema = z
+	.strictObject(
+		{
+			Tmin: positive('window.Tmin', 'K').optional(),
+			Tmax: positive('window.Tmax', 'K').optional(),
+			Pmin: positive('window.Pmin', 'Pa, absolute').optional(),
+			Pmax: positive('window.Pmax', 'Pa, absolute').optional()
+		},
+		{ error: 'window must be an object { Tmin?, Tmax?, Pmin?, Pmax? } (K, Pa absolute).' }
+	)
+	.refine(
+		(w) =>
+			!(w.Tmin !== undefined && w.Tmax !== undefined && w.Tmin > w.Tmax) &&
+			!(w.Pmin !== undefined && w.Pmax !== undefined && w.Pmin > w.Pmax),
+		{ message: 'window is empty: give each lower bound (Tmin, Pmin) below its upper bound.' }
+	);
+
 const legSchema = z
 	.strictObject(
 		{
@@ -124,6 +156,8 @@ const legSchema = z
 				.refine((n) => Math.abs(n) <= 50, { message: 'n must be from −50 to 50.' })
 				.optional(),
 			samples: z.number().int().min(20).max(1000).optional(),
+			endHint: hintSchema('endHint').optional(),
+			endNear: nearSchema('endNear').optional(),
 			to: z
 				.literal('saturation', {
 					error:
@@ -256,9 +290,12 @@ const specSchema = z
 				.max(MAX_SHEET_LEGS, { error: `A sheet holds at most ${MAX_SHEET_LEGS} legs.` }),
 			limits: limitsSchema.optional(),
 			atmosphericPressure: positive('spec.atmosphericPressure', 'Pa, absolute').optional(),
-			samples: z.number().int().min(20).max(200).optional()
+			samples: z.number().int().min(20).max(200).optional(),
+			startHint: hintSchema('startHint').optional(),
+			startNear: nearSchema('startNear').optional(),
+			window: windowSchema.optional()
 		},
-		{ error: 'spec must be an object { fluid, system, start, legs, limits? }.' }
+		{ error: 'spec must be an object { fluid, system, start, legs, limits?, window? }.' }
 	)
 	.superRefine((s, ctx) => {
 		const seen = new Set<string>();
@@ -383,7 +420,18 @@ function fromUnversioned(raw: Record<string, unknown>): unknown {
 	const spec: Record<string, unknown> = isObject(raw.spec)
 		? { ...raw.spec }
 		: Object.fromEntries(
-				['fluid', 'system', 'start', 'legs', 'limits', 'atmosphericPressure', 'samples']
+				[
+					'fluid',
+					'system',
+					'start',
+					'legs',
+					'limits',
+					'atmosphericPressure',
+					'samples',
+					'startHint',
+					'startNear',
+					'window'
+				]
 					.filter((k) => k in raw)
 					.map((k) => [k, raw[k]])
 			);

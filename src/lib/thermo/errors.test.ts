@@ -4,7 +4,14 @@
  */
 import { describe, expect, it } from 'vitest';
 import { ThermoError, fmt, type ThermoErrorCode } from './errors.ts';
-import { fixState, getFluid, saturationAtP, saturationAtT, saturationCurve } from './index.ts';
+import {
+	computeLeg,
+	fixState,
+	getFluid,
+	saturationAtP,
+	saturationAtT,
+	saturationCurve
+} from './index.ts';
 import { water } from './fluids/water.ts';
 import { expectFinite, PAIRS } from './pairs.test-support.ts';
 import { loadFluid } from './registry.ts';
@@ -190,5 +197,49 @@ describe('message numbers never contradict the message', () => {
 		const P = 1e9 * (1 + 1e-10);
 		const mp = message(() => fixState('water', { T: 300, P }));
 		expect(mp).not.toMatch(/P = 1e\+9 Pa is above/);
+	});
+});
+
+describe('messages never contradict themselves', () => {
+	function message(f: () => unknown): string {
+		try {
+			f();
+		} catch (e) {
+			return (e as Error).message;
+		}
+		throw new Error('expected a refusal');
+	}
+	const justOver = 1 + Number.EPSILON;
+
+	it('prints a value as many digits as it takes to differ from the bound it breaks', () => {
+		expect(message(() => fixState('water', { T: 300, x: justOver }))).toBe(
+			'The quality x must lie between 0 and 1 (got 1.0000000000000002).'
+		);
+		expect(
+			message(() =>
+				computeLeg({
+					fluid: 'water',
+					start: { T: 400, x: 0.5 },
+					process: 'isobaric',
+					target: { x: justOver }
+				})
+			)
+		).toBe('The target quality x must lie between 0 and 1 (got 1.0000000000000002).');
+		expect(message(() => fixState('water', { T: 300, P: -5e-324 }))).toMatch(
+			/got -4\.94066e-324\)/
+		);
+		// a temperature a hair above the critical one is not printed as the critical one
+		const Tc = getFluid('water').critical.T;
+		const over = Tc * (1 + 4 * Number.EPSILON);
+		const m = message(() => saturationAtT('water', over));
+		const [shownT, shownTc] = [/T = ([\d.]+) K\./.exec(m)?.[1], /\(([\d.]+) K\)/.exec(m)?.[1]];
+		expect(shownT).not.toBe(shownTc);
+	});
+
+	it('fmt: 6 significant digits unless a bound would print the same', () => {
+		expect(fmt(101325)).toBe('101325');
+		expect(fmt(1.0000000000000002, 0, 1)).toBe('1.0000000000000002');
+		expect(fmt(0.99999999, 0, 1)).toBe('0.99999999');
+		expect(fmt(2.5e7, 1e7)).toBe('2.5e+7');
 	});
 });

@@ -133,6 +133,11 @@ export function validateFluidData(data: unknown): asserts data is FluidData {
 			bad(id, 'referenceState.P', 'must lie between the triple and critical pressures');
 		c.num(rs.h, 'referenceState.h');
 		c.num(rs.s, 'referenceState.s');
+	} else if (rs.kind === 'bubble-liquid-at-P') {
+		c.num(rs.P, 'referenceState.P', true);
+		c.num(rs.h, 'referenceState.h');
+		c.num(rs.s, 'referenceState.s');
+		if (!d.band) bad(id, 'referenceState.kind', 'bubble-liquid-at-P needs the fluid’s band');
 	} else if (rs.kind !== 'as-published') {
 		bad(
 			id,

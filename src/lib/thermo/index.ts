@@ -19,6 +19,8 @@ import { checkSaturationP } from './solvers/range.ts';
 import { satAtP, satAtT } from './solvers/saturation.ts';
 import { isSolid, meltingAt, meltingLine, sublimationAt } from './solvers/solid.ts';
 import { fmt } from './errors.ts';
+import type { Fluid } from './fluid.ts';
+import { bandOf } from './pseudo-pure.ts';
 import type {
 	FixOptions,
 	FluidInfo,
@@ -71,6 +73,17 @@ export function fixState(fluid: string, inputs: Inputs, options: FixOptions = {}
 	return fixStateOf(getCompiledFluid(fluid), inputs, options);
 }
 
+/** A mixture (pseudo-pure.ts) has a bubble and a dew line, not one saturation: say so and how to ask. */
+function noSingleSaturation(fl: Fluid): void {
+	const band = bandOf(fl);
+	if (band)
+		throw new ThermoError(
+			'mixture-two-phase',
+			`${fl.data.name} is a mixture: it has a bubble line and a dew line (below ${fmt(band.Tj)} K), not one saturation pressure at a temperature.`,
+			'Fix the state on a line with x = 0 (bubble point) or x = 1 (dew point) and T or P, or draw both lines from the saturation curve.'
+		);
+}
+
 function finite(name: string, value: number): void {
 	if (typeof value !== 'number' || !Number.isFinite(value))
 		throw new ThermoError(
@@ -88,16 +101,17 @@ function finite(name: string, value: number): void {
 export function saturationAtT(fluid: string, T: number): Saturation {
 	const fl = getCompiledFluid(fluid);
 	finite('T', T);
+	noSingleSaturation(fl);
 	if (T < fl.Tt)
 		throw new ThermoError(
 			'below-triple-point',
-			`T = ${fmt(T)} K is below the triple point of ${fl.id} (${fmt(fl.Tt)} K).`,
+			`T = ${fmt(T, fl.Tt)} K is below the triple point of ${fl.id} (${fmt(fl.Tt, T)} K).`,
 			`Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`
 		);
 	if (T > fl.Tc)
 		throw new ThermoError(
 			'inconsistent-inputs',
-			`There is no saturation above the critical temperature of ${fl.id} (${fmt(fl.Tc)} K); T = ${fmt(T)} K.`,
+			`There is no saturation above the critical temperature of ${fl.id} (${fmt(fl.Tc, T)} K); T = ${fmt(T, fl.Tc)} K.`,
 			`Give a temperature from ${fmt(fl.Tt)} to ${fmt(fl.Tc)} K.`
 		);
 	const sat = satAtT(fl, T);
@@ -111,16 +125,17 @@ export function saturationAtT(fluid: string, T: number): Saturation {
 export function saturationAtP(fluid: string, P: number): Saturation {
 	const fl = getCompiledFluid(fluid);
 	finite('P', P);
+	noSingleSaturation(fl);
 	if (!(P > 0))
 		throw new ThermoError(
 			'non-positive-input',
-			`P must be positive (got ${fmt(P)}).`,
+			`P must be positive (got ${fmt(P, 0)}).`,
 			'Give an absolute pressure in Pa.'
 		);
 	if (P > fl.Pc)
 		throw new ThermoError(
 			'inconsistent-inputs',
-			`There is no saturation above the critical pressure of ${fl.id} (${fmt(fl.Pc)} Pa); P = ${fmt(P)} Pa.`,
+			`There is no saturation above the critical pressure of ${fl.id} (${fmt(fl.Pc, P)} Pa); P = ${fmt(P, fl.Pc)} Pa.`,
 			`Give a pressure up to ${fmt(fl.Pc)} Pa.`
 		);
 	checkSaturationP(fl, P);

@@ -10,12 +10,14 @@
 import { describe, expect, it } from 'vitest';
 import { listFluids } from './index.ts';
 import { runMix } from './region-mix.ts';
+import { fluidData } from './fluids/index.ts';
 
 const PER_FLUID = 2000;
 const CHUNK = 500;
 
 describe('seeded region-mix round trip through every pair', () => {
-	for (const f of listFluids())
+	// air (a mixture) is held to its band in fluids/air-served.test.ts
+	for (const f of listFluids().filter(({ id }) => !fluidData.find((d) => d.id === id)?.band))
 		for (let c = 0; c < PER_FLUID / CHUNK; c++)
 			it(`${f.id}, states ${c * CHUNK + 1}–${(c + 1) * CHUNK}`, () => {
 				const { tried, failures } = runMix(1000 + c, CHUNK, false, f.id);

@@ -9,6 +9,7 @@ import type { FluidData } from './fluids/schema.ts';
 import { evalPoint, Point } from './properties.ts';
 import { refineCriticalPoint } from './solvers/critical.ts';
 import { satAtP, satAtT } from './solvers/saturation.ts';
+import { bandOf, lineTemperature } from './pseudo-pure.ts';
 import type { FluidInfo } from './types.ts';
 
 const compiled = new Map<string, Fluid>();
@@ -25,7 +26,12 @@ export function loadFluid(data: unknown): Fluid {
 	refineCriticalPoint(fl);
 	const rs = data.referenceState;
 	if (rs.kind === 'as-published') return fl;
-	const sat = rs.kind === 'saturated-liquid-at-T' ? satAtT(fl, rs.T) : satAtP(fl, rs.P);
+	const sat =
+		rs.kind === 'saturated-liquid-at-T'
+			? satAtT(fl, rs.T)
+			: rs.kind === 'bubble-liquid-at-P'
+				? bubbleAtP(fl, rs.P)
+				: satAtP(fl, rs.P);
 	const p = evalPoint(fl, sat.T, sat.rhoL, new Point(), 1);
 	const a1 = fl.a1 - (rs.s - p.s) / fl.R;
 	const a2 = fl.a2 + (rs.h - p.h) / (fl.R * fl.Tr);
@@ -36,6 +42,19 @@ export function loadFluid(data: unknown): Fluid {
 	// the critical point is unchanged by the shift; the saturation table (which stores h, s) is rebuilt
 	shifted.cache.criticalRefined = true;
 	return shifted;
+}
+
+/** A mixture's liquid at its bubble point at P: T and ρ' (pseudo-pure.ts), for its reference state. */
+function bubbleAtP(fl: Fluid, P: number): { T: number; rhoL: number } {
+	const band = bandOf(fl);
+	const T = band ? lineTemperature(fl, band, 'bubble', P) : null;
+	if (!band || T === null)
+		throw new ThermoError(
+			'no-convergence',
+			`${fl.id}: no bubble point at P = ${P} Pa for its reference state.`,
+			'Declare a reference pressure on the bubble line.'
+		);
+	return { T, rhoL: band.bubbleRho(T) };
 }
 
 function findData(id: string): FluidData | undefined {

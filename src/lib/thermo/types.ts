@@ -3,6 +3,7 @@
  * All quantities are SI base units: T K, P Pa, v m³/kg, rho kg/m³, u h J/kg,
  * s cv cp J/(kg·K), w m/s, x dimensionless quality 0…1.
  */
+import type { Transport } from './transport/index.ts';
 
 /** Names of the properties a state can be fixed from. `v` and `rho` are the same property. */
 export type InputName = 'T' | 'P' | 'v' | 'rho' | 'u' | 'h' | 's' | 'x';
@@ -149,6 +150,21 @@ export interface LegSpec {
 	n?: number;
 	/** minimum number of points along the leg (default 40; at least 20) */
 	samples?: number;
+	/** which state `start` means where its pair has several (as FixOptions.hint / near) */
+	startHint?: RootHint;
+	startNear?: FixOptions['near'];
+	/**
+	 * Bounds (T K, P Pa) on the start state and on the end: a start outside is not an answer (as
+	 * FixOptions.window), and a place where the target is reached outside it is not the leg's end.
+	 */
+	window?: StateWindow;
+	/**
+	 * Which end, where the target is reached both ways along the process curve from the start:
+	 * the one `endNear` is nearest, or the one `endHint` selects. Without either the nearer along
+	 * the curve is taken and a note names the other.
+	 */
+	endHint?: RootHint;
+	endNear?: FixOptions['near'];
 }
 
 export type SaturationLine = 'saturated-liquid' | 'saturated-vapor';
@@ -222,6 +238,9 @@ export interface PathLegSpec {
 	n?: number;
 	/** points along this leg (default: the path's `samples`, else 40) */
 	samples?: number;
+	/** which end where the target is reached both ways (LegSpec.endHint / endNear) */
+	endHint?: RootHint;
+	endNear?: FixOptions['near'];
 }
 
 /** Design limits drawn on the chart and checked along every leg (Pa, K; absolute pressure). */
@@ -247,6 +266,11 @@ export interface PathSpec {
 	atmosphericPressure?: number;
 	/** points per leg unless a leg says otherwise (default 40) */
 	samples?: number;
+	/** which state `start` means where its pair has several (FixOptions.hint / near) */
+	startHint?: RootHint;
+	startNear?: FixOptions['near'];
+	/** bounds (T K, P Pa) on the start and every leg's end (LegSpec.window) */
+	window?: StateWindow;
 }
 
 /** What practitioners read beside T, P, v (null where not meaningful). */
@@ -268,6 +292,8 @@ export interface PathState {
 	id: string;
 	state: State;
 	extras: StateExtras;
+	/** viscosity, conductivity, Prandtl number and surface tension (transport/index.ts); POST /api/v1/paths adds it to every state */
+	transport?: Transport;
 }
 
 /** Totals of a leg or path: per-kg values × mass (J) for a closed system, × mass flow (W) for a device. */

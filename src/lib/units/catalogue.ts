@@ -12,15 +12,18 @@ import {
 	HORSEPOWER,
 	LBM_PER_CUBIC_FOOT,
 	LBM_PER_HOUR,
+	POUND_FORCE,
 	POUND_MASS,
 	PSI,
+	RANKINE,
 	STANDARD_ATMOSPHERE,
 	US_GALLON
 } from './factors';
 
 /**
  * What a number measures. Each quantity has one SI base unit, the unit the engine and the API
- * speak (K, Pa, m³/kg, kg/m³, J/kg, J/(kg·K), kg, m³, kg/s, J, W, m/s; quality and fractions 1).
+ * speak (K, Pa, m³/kg, kg/m³, J/kg, J/(kg·K), kg, m³, kg/s, J, W, m/s, Pa·s, W/(m·K), N/m; quality,
+ * fractions and the Prandtl number 1).
  * `temperatureDifference` (superheat, subcooling, margins) converts without the zero offset.
  */
 export type Quantity =
@@ -38,7 +41,11 @@ export type Quantity =
 	| 'power'
 	| 'speed'
 	| 'quality'
-	| 'fraction';
+	| 'fraction'
+	| 'viscosity'
+	| 'thermalConductivity'
+	| 'surfaceTension'
+	| 'dimensionless';
 
 /** The quantity of each state property a sheet names (T, P, v, rho, u, h, s, x). */
 export const PROPERTY_QUANTITY = {
@@ -438,6 +445,80 @@ add({
 	aliases: ['percent']
 });
 
+// Transport and interface properties (dynamic viscosity, thermal conductivity, surface tension) and
+// the Prandtl number. US customary: lbm/(ft·h), Btu_IT/(h·ft·°F), lbf/ft.
+add({
+	id: 'Pa·s',
+	label: 'Pa·s',
+	quantity: 'viscosity',
+	system: 'other',
+	aliases: ['Pa s', 'Pas']
+});
+add({
+	id: 'mPa·s',
+	label: 'mPa·s',
+	quantity: 'viscosity',
+	system: 'other',
+	factor: 1e-3,
+	aliases: ['mPa s', 'cP']
+});
+add({
+	id: 'μPa·s',
+	label: 'μPa·s',
+	quantity: 'viscosity',
+	system: 'si',
+	factor: 1e-6,
+	aliases: ['uPa·s', 'uPa s', 'μPa s']
+});
+add({
+	id: 'lbm/(ft·h)',
+	label: 'lbm/(ft·h)',
+	quantity: 'viscosity',
+	system: 'us',
+	factor: POUND_MASS / (FOOT * 3600),
+	aliases: ['lbm/ft/h', 'lb/ft/h', 'lbm/ft·h']
+});
+add({
+	id: 'W/(m·K)',
+	label: 'W/(m·K)',
+	quantity: 'thermalConductivity',
+	system: 'si',
+	aliases: ['W/m/K', 'W/mK']
+});
+add({
+	id: 'mW/(m·K)',
+	label: 'mW/(m·K)',
+	quantity: 'thermalConductivity',
+	system: 'other',
+	factor: 1e-3,
+	aliases: ['mW/m/K', 'mW/mK']
+});
+add({
+	id: 'Btu/(h·ft·°F)',
+	label: 'Btu/(h·ft·°F)',
+	quantity: 'thermalConductivity',
+	system: 'us',
+	factor: BTU_IT / (3600 * FOOT * RANKINE),
+	aliases: ['Btu/h/ft/F', 'Btu/hftF', 'BTU/h/ft/F']
+});
+add({ id: 'N/m', label: 'N/m', quantity: 'surfaceTension', system: 'other' });
+add({
+	id: 'mN/m',
+	label: 'mN/m',
+	quantity: 'surfaceTension',
+	system: 'si',
+	factor: 1e-3,
+	aliases: ['dyn/cm']
+});
+add({
+	id: 'lbf/ft',
+	label: 'lbf/ft',
+	quantity: 'surfaceTension',
+	system: 'us',
+	factor: POUND_FORCE / FOOT
+});
+add({ id: 'one', label: '', quantity: 'dimensionless', system: 'si' });
+
 /** Every unit Statewright knows, by id. */
 export const UNITS: Readonly<Record<string, UnitDef>> = Object.freeze(
 	Object.fromEntries(specs.map((s) => [s.id, define(s)]))
@@ -459,7 +540,11 @@ export const SI_BASE: Readonly<Record<Quantity, string>> = {
 	power: 'W',
 	speed: 'm/s',
 	quality: 'x1',
-	fraction: 'f1'
+	fraction: 'f1',
+	viscosity: 'Pa·s',
+	thermalConductivity: 'W/(m·K)',
+	surfaceTension: 'N/m',
+	dimensionless: 'one'
 };
 
 /** A unit by id; throws for an unknown id (ids are code, not user input). */

@@ -69,7 +69,11 @@ const EXAMPLES: Record<Quantity, string> = {
 	power: '25 kW, 85 000 Btu/h or 34 hp',
 	speed: '340 m/s or 1115 ft/s',
 	quality: '0.35 or 35 %',
-	fraction: '0.6 or 60 %'
+	fraction: '0.6 or 60 %',
+	viscosity: '890 μPa·s, 0.89 mPa·s or 2.15 lbm/(ft·h)',
+	thermalConductivity: '0.61 W/(m·K) or 0.35 Btu/(h·ft·°F)',
+	surfaceTension: '72 mN/m or 0.0049 lbf/ft',
+	dimensionless: '6.1'
 };
 
 const NAMES: Record<Quantity, string> = {
@@ -87,7 +91,11 @@ const NAMES: Record<Quantity, string> = {
 	power: 'a power',
 	speed: 'a speed',
 	quality: 'a quality (0 to 1)',
-	fraction: 'a fraction (0 to 1)'
+	fraction: 'a fraction (0 to 1)',
+	viscosity: 'a dynamic viscosity',
+	thermalConductivity: 'a thermal conductivity',
+	surfaceTension: 'a surface tension',
+	dimensionless: 'a dimensionless number'
 };
 
 const POSITIVE: ReadonlySet<Quantity> = new Set([
@@ -95,7 +103,10 @@ const POSITIVE: ReadonlySet<Quantity> = new Set([
 	'density',
 	'mass',
 	'volume',
-	'massFlow'
+	'massFlow',
+	'viscosity',
+	'thermalConductivity',
+	'surfaceTension'
 ]);
 
 // mantissa, then an optional exponent: e5, ×10^5, x10^-5, *10^5, or ×10⁻⁵ (which NFKC turns into ×10-5)

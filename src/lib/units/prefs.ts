@@ -46,7 +46,11 @@ const SI_DISPLAY: Record<Exclude<Quantity, 'pressure' | 'power'>, string> = {
 	energy: 'kJ',
 	speed: 'm/s',
 	quality: 'x1',
-	fraction: 'f%'
+	fraction: 'f%',
+	viscosity: 'μPa·s',
+	thermalConductivity: 'W/(m·K)',
+	surfaceTension: 'mN/m',
+	dimensionless: 'one'
 };
 
 const US_DISPLAY: Record<Exclude<Quantity, 'pressure' | 'power'>, string> = {
@@ -62,7 +66,11 @@ const US_DISPLAY: Record<Exclude<Quantity, 'pressure' | 'power'>, string> = {
 	energy: 'Btu',
 	speed: 'ft/s',
 	quality: 'x1',
-	fraction: 'f%'
+	fraction: 'f%',
+	viscosity: 'lbm/(ft·h)',
+	thermalConductivity: 'Btu/(h·ft·°F)',
+	surfaceTension: 'lbf/ft',
+	dimensionless: 'one'
 };
 
 /** Larger units tried for a magnitude where the user has not fixed one (smallest first). */

@@ -173,10 +173,15 @@ const positive = (name: string, unit: string) =>
 	num(name, unit).positive({ error: `${name} must be positive (${unit}).` });
 
 /** `near`: the state to stay close to where several have the inputs (T K and/or P Pa). */
-const nearSchema = z.strictObject(
-	{ T: positive('near.T', 'K').optional(), P: positive('near.P', 'Pa, absolute').optional() },
-	{ error: objectError('near', '{ "T": 300, "P": 1e6 }', ['T', 'P']) }
-);
+const nearFor = (name: string) =>
+	z.strictObject(
+		{
+			T: positive(`${name}.T`, 'K').optional(),
+			P: positive(`${name}.P`, 'Pa, absolute').optional()
+		},
+		{ error: objectError(name, '{ "T": 300, "P": 1e6 }', ['T', 'P']) }
+	);
+const nearSchema = nearFor('near');
 
 /** `window`: bounds on the answer (T K, P Pa); roots outside are not answers. */
 const windowSchema = z
@@ -201,15 +206,19 @@ const windowSchema = z
 		}
 	);
 
+const HINTS = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'] as const;
+
+/** A root hint; `name` is the field's name in messages. */
+const hintSchema = (name: string) =>
+	z.enum(HINTS, {
+		error: (iss) => `${name} must be one of ${HINTS.join(', ')}; got ${got(iss.input)}.`
+	});
+
 export const stateRequestSchema = z.strictObject(
 	{
 		fluid: fluidSchema,
 		inputs: inputsSchema,
-		hint: z
-			.enum(['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'], {
-				error: 'hint must be one of lower-T, higher-T, lower-P, higher-P, liquid-side, vapor-side.'
-			})
-			.optional(),
+		hint: hintSchema('hint').optional(),
 		near: nearSchema.optional(),
 		window: windowSchema.optional()
 	},
@@ -232,13 +241,30 @@ export const legRequestSchema = z
 			process: processSchema,
 			target: targetSchema,
 			n: nSchema.optional(),
-			samples: samplesSchema.optional()
+			samples: samplesSchema.optional(),
+			startHint: hintSchema('startHint').optional(),
+			startNear: nearFor('startNear').optional(),
+			endHint: hintSchema('endHint').optional(),
+			endNear: nearFor('endNear').optional(),
+			window: windowSchema.optional()
 		},
 		{
 			error: objectError(
 				'the body',
 				'{ "fluid": "water", "start": { "T": 300, "P": 101325 }, "process": "isobaric", "target": { "T": 500 } }',
-				['fluid', 'start', 'process', 'target', 'n', 'samples']
+				[
+					'fluid',
+					'start',
+					'process',
+					'target',
+					'n',
+					'samples',
+					'startHint',
+					'startNear',
+					'endHint',
+					'endNear',
+					'window'
+				]
 			)
 		}
 	)
@@ -276,7 +302,9 @@ const pathLegSchema = z
 			process: processSchema,
 			target: targetSchema,
 			n: nSchema.optional(),
-			samples: samplesSchema.optional()
+			samples: samplesSchema.optional(),
+			endHint: hintSchema('endHint').optional(),
+			endNear: nearFor('endNear').optional()
 		},
 		{
 			error: objectError('a leg', '{ "process": "isochoric", "target": { "T": 450 } }', [
@@ -284,7 +312,9 @@ const pathLegSchema = z
 				'process',
 				'target',
 				'n',
-				'samples'
+				'samples',
+				'endHint',
+				'endNear'
 			])
 		}
 	)
@@ -322,13 +352,27 @@ export const pathRequestSchema = z
 				.max(MAX_LEGS, { error: `A path may hold at most ${MAX_LEGS} legs.` }),
 			limits: limitsSchema.optional(),
 			atmosphericPressure: positive('atmosphericPressure', 'Pa').optional(),
-			samples: samplesSchema.optional()
+			samples: samplesSchema.optional(),
+			startHint: hintSchema('startHint').optional(),
+			startNear: nearFor('startNear').optional(),
+			window: windowSchema.optional()
 		},
 		{
 			error: objectError(
 				'the body',
 				'{ "fluid": "water", "system": { "kind": "closed", "volume": 0.5 }, "start": {…}, "legs": […] }',
-				['fluid', 'system', 'start', 'legs', 'limits', 'atmosphericPressure', 'samples']
+				[
+					'fluid',
+					'system',
+					'start',
+					'legs',
+					'limits',
+					'atmosphericPressure',
+					'samples',
+					'startHint',
+					'startNear',
+					'window'
+				]
 			)
 		}
 	)

@@ -3,12 +3,11 @@ import type { Ancillary, FluidData } from './schema.ts';
 /**
  * Air as a pseudo-pure fluid: Lemmon, Jacobsen, Penoncello & Friend (2000).
  *
- * NOT REGISTERED (not in fluids/index.ts): the coefficients below are established (see
- * `provenance`) and the equation reproduces the paper's printed single-phase table and its bubble-
- * and dew-point pressures (air.test.ts), but the engine's solvers know only one saturation line per
- * fluid. Air has two (a bubble line and a dew line, with a band of two-phase states of changing
- * composition between them that a pseudo-pure equation cannot describe); until the engine refuses
- * states in that band and draws both lines, air is not served. See docs/fluids.md.
+ * `airEquation` is the equation as published (air.test.ts reproduces the paper's printed
+ * single-phase table and its bubble- and dew-point pressures with it); `air` is the registered
+ * fluid: the same equation on the NBP-style reference state, with its two-phase band
+ * (`airBoundaries`, pseudo-pure.ts) between the bubble and dew lines, where states are refused.
+ * See docs/fluids.md.
  */
 
 /** Molar mass of the paper, kg/mol (0.7812 N₂, 0.0092 Ar, 0.2096 O₂ by mole). */
@@ -162,4 +161,43 @@ export const airBoundaries: {
 		Tr: Tj,
 		source: ANCILLARY_SOURCE
 	}
+};
+
+/**
+ * The registered fluid. The engine's pure-fluid solvers run on the equation (its own phase
+ * equilibrium, whose critical point 131.86 K, 322 kg/m³ lies inside the band, is never served: every
+ * such state lies between the dew and bubble lines and is refused by pseudo-pure.ts); quality
+ * inputs mean the bubble line (x = 0) or the dew line (x = 1).
+ */
+export const air: FluidData = {
+	...airEquation,
+	aliases: [...airEquation.aliases, 'compressed air'],
+	referenceState: {
+		kind: 'bubble-liquid-at-P',
+		label:
+			'NBP-style: h = 0, s = 0 for the liquid at its bubble point at 101.325 kPa (78.90 K); the paper’s own constants are kept in airEquation',
+		P: 101325,
+		h: 0,
+		s: 0
+	},
+	// the equation's own critical point (dP/dρ = d²P/dρ² = 0), found by a scan of (∂P/∂ρ)_T from the published mixture critical point
+	equationCriticalGuess: { T: 131.87, rho: 322 },
+	ancillaries: {
+		// starting guesses only: the equation's own vapor pressure lies between these lines
+		pSat: airBoundaries.bubblePressure,
+		rhoLiquid: {
+			form: 'ratio-plus-one',
+			n: [
+				23549.22872973586, -36125.479937395976, 29748.003516251414, -25536.830521053136,
+				8367.433264822796, 1.3265163441261232
+			],
+			t: [0.052, 0.058, 0.086, 0.107, 0.125, 8.0],
+			yc: 11830.8 * M,
+			Tr: 132.5306,
+			source:
+				'CoolProp dev/fluids/Air.json ANCILLARIES.rhoL (a fit to the equation’s own saturated-liquid density); starting guesses only'
+		},
+		rhoVapor: airBoundaries.dewDensity
+	},
+	band: airBoundaries
 };

@@ -13,6 +13,7 @@ import { r1234zeE } from './r1234ze-e.ts';
 import { hydrogen } from './hydrogen.ts';
 import { r1234yf } from './r1234yf.ts';
 import { oxygen } from './oxygen.ts';
+import { air } from './air.ts';
 
 /**
  * Registry of fluid data files, in display order. Each entry is a plain FluidData (see schema.ts);
@@ -33,5 +34,6 @@ export const fluidData: FluidData[] = [
 	r1234zeE,
 	hydrogen,
 	r1234yf,
-	oxygen
+	oxygen,
+	air
 ];

@@ -1,3 +1,4 @@
+import type { BandData } from '../pseudo-pure.ts';
 /**
  * Shape of a fluid data file. Every coefficient of a reference equation of state is data:
  * the solvers hold no fluid-specific number. Each file names the publication its numbers
@@ -83,7 +84,9 @@ export type ReferenceStateSpec =
 	/** shift a1, a2 so that the saturated liquid at T has enthalpy h and entropy s (IIR: 273.15 K, 200 kJ/kg, 1 kJ/(kg·K)) */
 	| { kind: 'saturated-liquid-at-T'; label: string; T: number; h: number; s: number }
 	/** shift a1, a2 so that the saturated liquid at P has enthalpy h and entropy s (NBP: 101325 Pa, 0, 0) */
-	| { kind: 'saturated-liquid-at-P'; label: string; P: number; h: number; s: number };
+	| { kind: 'saturated-liquid-at-P'; label: string; P: number; h: number; s: number }
+	/** a mixture (pseudo-pure fluid): shift a1, a2 so that the liquid at its bubble point at P has h and s */
+	| { kind: 'bubble-liquid-at-P'; label: string; P: number; h: number; s: number };
 
 /**
  * The IIR convention for refrigerants: h = 200 kJ/kg and s = 1 kJ/(kg·K) for the saturated liquid
@@ -139,6 +142,13 @@ export interface FluidData {
 	ancillaries: { pSat: Ancillary; rhoLiquid: Ancillary; rhoVapor: Ancillary };
 	/** melting and sublimation curves (optional here; solid-lines.ts holds them for the first fluids) */
 	solid?: SolidLines;
+	/**
+	 * Where the equation's own critical point is sought when it lies away from the published one
+	 * (a pseudo-pure mixture's equation: its phases merge below the mixture's critical point).
+	 */
+	equationCriticalGuess?: { T: number; rho: number };
+	/** A mixture's bubble and dew lines (pseudo-pure.ts): states between them are refused. */
+	band?: BandData;
 }
 
 /**
@@ -149,10 +159,19 @@ export interface FluidData {
  * - `log-theta`:       P/Pref = Σ aᵢ·(ln θ)^bᵢ
  * - `exp-theta-sum`:   ln(P/Pref) = θ⁻¹·Σ aᵢ·θ^bᵢ
  * - `exp-theta-delta`: ln(P/Pref) = θ⁻¹·Σ aᵢ·(1 − θ)^bᵢ
+ * - `simon`:           P = Pref + Σ aᵢ·(θ^bᵢ − 1), aᵢ in Pa (Simon–Glatzel)
+ * - `power-plain`:     P/Pref = Σ aᵢ·θ^bᵢ
  */
 export interface SolidLinePiece {
 	form:
-		'power-sum' | 'delta-power-sum' | 'exp-sum' | 'log-theta' | 'exp-theta-sum' | 'exp-theta-delta';
+		| 'power-sum'
+		| 'delta-power-sum'
+		| 'exp-sum'
+		| 'log-theta'
+		| 'exp-theta-sum'
+		| 'exp-theta-delta'
+		| 'simon'
+		| 'power-plain';
 	/** the solid phase on the other side (e.g. "ice VI"; "solid" where the publication names none) */
 	solid: string;
 	/** temperature range of this piece, K */
@@ -164,7 +183,11 @@ export interface SolidLinePiece {
 	b: number[];
 }
 
-/** Melting and sublimation curves of a fluid, each naming the publication its numbers come from. */
+/**
+ * Melting and sublimation curves of a fluid, each naming the publication its numbers come from.
+ * A fluid whose equation's paper publishes no melting equation (and none is named) has an empty
+ * `melting.pieces` with `source` saying so: its states are bounded only by the triple point.
+ */
 export interface SolidLines {
 	melting: { pieces: SolidLinePiece[]; source: string };
 	sublimation?: { pieces: SolidLinePiece[]; source: string };

@@ -189,7 +189,7 @@ function checkRange(P: number, T: number): void {
 	if (!(P > 0))
 		throw new ThermoError(
 			'non-positive-input',
-			`P must be positive (got ${fmt(P)}).`,
+			`P must be positive (got ${fmt(P, 0)}).`,
 			'Give an absolute pressure in Pa.'
 		);
 	if (T < T_MIN)

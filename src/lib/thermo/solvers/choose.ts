@@ -2,6 +2,7 @@
  * Picking among several states that satisfy the same pair of inputs. Without a hint the pair is
  * refused (`ambiguous-state`) with every candidate named; with a hint the matching one is returned.
  */
+import { bandOf, inBand } from '../pseudo-pure.ts';
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { FixOptions, RootHint, State, StateWindow } from '../types.ts';
@@ -69,6 +70,85 @@ export const ROOT_HINTS: readonly RootHint[] = [
 	'vapor-side'
 ];
 
+/** Check hint, near and window of a fixState call (or a leg's start/end choice); `what` names the option's owner in messages. */
+export function checkOptions(options: FixOptions, what = 'options'): void {
+	if (options.hint !== undefined && !ROOT_HINTS.includes(options.hint))
+		throw new ThermoError(
+			'invalid-option',
+			`Unknown hint "${String(options.hint)}" in ${what}.`,
+			`Use one of: ${ROOT_HINTS.join(', ')}.`
+		);
+	const ok = (v: unknown) =>
+		v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
+	const near = options.near;
+	if (near !== undefined) {
+		if (typeof near !== 'object' || near === null || !ok(near.T) || !ok(near.P))
+			throw new ThermoError(
+				'invalid-option',
+				`${what}.near must hold a positive T (K) and/or P (Pa).`,
+				'Give near as { T, P } of the state to stay close to, or leave it out.'
+			);
+	}
+	const win = options.window;
+	if (win !== undefined) {
+		if (
+			typeof win !== 'object' ||
+			win === null ||
+			!ok(win.Tmin) ||
+			!ok(win.Tmax) ||
+			!ok(win.Pmin) ||
+			!ok(win.Pmax)
+		)
+			throw new ThermoError(
+				'invalid-option',
+				`${what}.window must hold positive Tmin, Tmax (K) and/or Pmin, Pmax (Pa).`,
+				'Give window as { Tmin, Tmax, Pmin, Pmax } (any of them), or leave it out to search the whole range.'
+			);
+		if (
+			(win.Tmin !== undefined && win.Tmax !== undefined && win.Tmin > win.Tmax) ||
+			(win.Pmin !== undefined && win.Pmax !== undefined && win.Pmin > win.Pmax)
+		)
+			throw new ThermoError(
+				'invalid-option',
+				`${what}.window is empty: ${windowText(win)}.`,
+				'Give each lower bound below its upper bound.'
+			);
+	}
+}
+
+/** Distance of a state from `near` (|ln T/T₀| + |ln P/P₀|). */
+function nearDistance(
+	near: NonNullable<FixOptions['near']>
+): (s: { T: number; P: number }) => number {
+	return (s) =>
+		(near.T !== undefined ? Math.abs(Math.log(s.T / near.T)) : 0) +
+		(near.P !== undefined ? Math.abs(Math.log(s.P / near.P)) : 0);
+}
+
+/**
+ * Index of the candidate `near` or `hint` selects (near first), or −1 when neither is given or
+ * the hint does not tell the candidates apart.
+ */
+export function pickIndex(
+	c: readonly State[],
+	hint: RootHint | undefined,
+	near: FixOptions['near'] | undefined
+): number {
+	if (near && (near.T !== undefined || near.P !== undefined)) {
+		const d = nearDistance(near);
+		let best = 0;
+		for (let i = 1; i < c.length; i++) if (d(c[i]) < d(c[best])) best = i;
+		return best;
+	}
+	if (!hint) return -1;
+	const k = key(hint);
+	const order = c.map((_, i) => i).sort((a, b) => k(c[a]) - k(c[b]));
+	const best = c[order[0]],
+		next = c[order[1]];
+	if (next === undefined || Math.abs(k(best) - k(next)) > 1e-9 * Math.abs(k(best))) return order[0];
+	return -1;
+}
+
 /**
  * Same state to within solver round-off. Pressure is compared too: two liquid states can differ by
  * hundreds of pascals while their T and ρ agree to 1e−7.
@@ -120,20 +200,20 @@ export function choose(
 	const all = dedupe(found);
 	if (all.length === 0) throw noneError();
 	// candidates beyond the melting curve are solid, not states of the fluid (solid.ts)
-	const fluid = all.filter((s) => !isSolid(fl, s.T, s.P));
-	if (fluid.length === 0) throw solidError(fl, all[0].T, all[0].P, what);
+	const solidFree = all.filter((s) => !isSolid(fl, s.T, s.P));
+	if (solidFree.length === 0) throw solidError(fl, all[0].T, all[0].P, what);
+	// a mixture's candidates between its bubble and dew lines are not states it has (pseudo-pure.ts)
+	const band = bandOf(fl);
+	const fluid = band ? solidFree.filter((s) => !inBand(band, s)) : solidFree;
+	if (band && fluid.length === 0) throw band.refusal(solidFree[0].T);
 	// the requested window excludes roots outside it
 	const win = currentWindow;
 	const c = win ? fluid.filter((s) => inWindow(s, win)) : fluid;
 	if (c.length === 0 && win) throw outsideWindow(fl, what, fluid, win);
 	if (c.length === 1) return c[0];
 	const near = currentNear;
-	if (!hint && near && (near.T !== undefined || near.P !== undefined)) {
-		const d = (s: State) =>
-			(near.T !== undefined ? Math.abs(Math.log(s.T / near.T)) : 0) +
-			(near.P !== undefined ? Math.abs(Math.log(s.P / near.P)) : 0);
-		return [...c].sort((a, b) => d(a) - d(b))[0];
-	}
+	if (!hint && near && (near.T !== undefined || near.P !== undefined))
+		return c[pickIndex(c, undefined, near)];
 	const list = c.map((s) => `${s.phase} at T = ${fmt(s.T)} K, P = ${fmt(s.P)} Pa`).join('; ');
 	const candidates = c.map((s) => ({ T: s.T, P: s.P, rho: s.rho, phase: s.phase }));
 	if (hint) {

@@ -18,8 +18,9 @@ function conditions(fl: Fluid, delta: number, tau: number): [number, number] {
 export function refineCriticalPoint(fl: Fluid): void {
 	if (fl.cache.criticalRefined) return;
 	fl.cache.criticalRefined = true;
-	let delta = fl.data.critical.rho / fl.rhor;
-	let tau = fl.Tr / fl.data.critical.T;
+	const seed = fl.data.equationCriticalGuess ?? fl.data.critical;
+	let delta = seed.rho / fl.rhor;
+	let tau = fl.Tr / seed.T;
 	let [f1, f2] = conditions(fl, delta, tau);
 	if (!(Math.abs(f1) < 1e-9 && Math.abs(f2) < 1e-6)) {
 		for (let it = 0; it < 50; it++) {
@@ -49,8 +50,8 @@ export function refineCriticalPoint(fl: Fluid): void {
 			rhoc = delta * fl.rhor;
 		if (
 			!(Math.abs(f1) < 1e-8) ||
-			!(Math.abs(Tc / fl.data.critical.T - 1) < 1e-3) ||
-			!(Math.abs(rhoc / fl.data.critical.rho - 1) < 0.05)
+			!(Math.abs(Tc / seed.T - 1) < 1e-3) ||
+			!(Math.abs(rhoc / seed.rho - 1) < 0.05)
 		)
 			return;
 		fl.Tc = Tc;

@@ -5,6 +5,7 @@ import { criticalState, saturatedState } from '../state.ts';
 import type { SaturationCurve } from '../types.ts';
 import { satAtT } from './saturation.ts';
 import { meltingLine } from './solid.ts';
+import { bandCurve, bandOf } from '../pseudo-pure.ts';
 
 /** points drawn along the melting curve */
 const MELTING_POINTS = 40;
@@ -18,9 +19,12 @@ export function curveOf(fl: Fluid, points: number): SaturationCurve {
 	if (!Number.isInteger(points) || points < 2 || points > 5000)
 		throw new ThermoError(
 			'invalid-option',
-			`The number of saturation points must be a whole number from 2 to 5000 (got ${fmt(points)}).`,
+			`The number of saturation points must be a whole number from 2 to 5000 (got ${fmt(points, 2, 5000)}).`,
 			'Give points between 2 and 5000 (100 draws a smooth dome).'
 		);
+	// a mixture: its bubble line as the liquid, its dew line as the vapor (pseudo-pure.ts)
+	const band = bandOf(fl);
+	if (band) return { ...bandCurve(fl, band, points), melting: meltingLine(fl, MELTING_POINTS) };
 	const liquid = [],
 		vapor = [];
 	const span = fl.Tc - fl.Tt;

@@ -4,7 +4,7 @@
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { FixOptions, InputName, Inputs, State } from '../types.ts';
-import { ROOT_HINTS, inWindow, outsideWindow, setNear, windowText } from './choose.ts';
+import { checkOptions, inWindow, outsideWindow, setNear } from './choose.ts';
 import { flashPX } from './flash-p-x.ts';
 import { flashTP } from './flash-t-p.ts';
 import { flashTRho } from './flash-t-v.ts';
@@ -17,6 +17,7 @@ import { flashYY } from './plane.ts';
 import { checkP, checkT } from './range.ts';
 import { precisionOf } from './precision.ts';
 import { assertFluid } from './solid.ts';
+import { bandOf, fixOnLine, holdOutsideBand } from '../pseudo-pure.ts';
 
 /** Canonical property keys after v → rho: order used to name pairs. */
 export type Key = 'T' | 'P' | 'rho' | 'u' | 'h' | 's' | 'x';
@@ -171,51 +172,13 @@ function checkValue(fl: Fluid, k: InputName, val: unknown): number {
 
 /** Fix a state from two properties (see index.ts fixState). */
 export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}): State {
-	if (options.hint !== undefined && !ROOT_HINTS.includes(options.hint))
-		throw new ThermoError(
-			'invalid-option',
-			`Unknown hint "${String(options.hint)}".`,
-			`Use one of: ${ROOT_HINTS.join(', ')}.`
-		);
+	checkOptions(options);
 	const near = options.near;
-	if (near !== undefined) {
-		const ok = (v: unknown) =>
-			v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
-		if (typeof near !== 'object' || near === null || !ok(near.T) || !ok(near.P))
-			throw new ThermoError(
-				'invalid-option',
-				'options.near must hold a positive T (K) and/or P (Pa).',
-				'Give near as { T, P } of the state to stay close to, or leave it out.'
-			);
-	}
 	const win = options.window;
-	if (win !== undefined) {
-		const ok = (v: unknown) =>
-			v === undefined || (typeof v === 'number' && Number.isFinite(v) && v > 0);
-		if (
-			typeof win !== 'object' ||
-			win === null ||
-			!ok(win.Tmin) ||
-			!ok(win.Tmax) ||
-			!ok(win.Pmin) ||
-			!ok(win.Pmax)
-		)
-			throw new ThermoError(
-				'invalid-option',
-				'options.window must hold positive Tmin, Tmax (K) and/or Pmin, Pmax (Pa).',
-				'Give window as { Tmin, Tmax, Pmin, Pmax } (any of them), or leave it out to search the whole range.'
-			);
-		if (
-			(win.Tmin !== undefined && win.Tmax !== undefined && win.Tmin > win.Tmax) ||
-			(win.Pmin !== undefined && win.Pmax !== undefined && win.Pmin > win.Pmax)
-		)
-			throw new ThermoError(
-				'invalid-option',
-				`options.window is empty: ${windowText(win)}.`,
-				'Give each lower bound below its upper bound.'
-			);
-	}
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
+	// a mixture (pseudo-pure.ts): x names its bubble or dew line; other answers are held to its band
+	const band = bandOf(fl);
+	if (band && kb === 'x') return fixOnLine(fl, band, ka as Exclude<Key, 'x'>, a, b);
 	const flash = BY_RANK[KEY_RANK[ka] * 7 + KEY_RANK[kb]];
 	// beyond the melting curve the substance is solid: refused (solid.ts), never answered as a fluid
 	let st: State;
@@ -229,6 +192,7 @@ export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}):
 		}
 	}
 	assertFluid(fl, st);
+	if (band) st = holdOutsideBand(fl, band, st);
 	// a flash with one answer does not go through choose: the window applies here
 	if (win !== undefined && !inWindow(st, win))
 		throw outsideWindow(fl, `${ka} = ${fmt(a)} and ${kb} = ${fmt(b)}`, [st], win);

@@ -10,7 +10,7 @@
 import { fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDT, propDrho, propValue, type EnergyProp } from '../properties.ts';
-import { P_ROUNDOFF, saturatedState, singleState } from '../state.ts';
+import { P_ROUNDOFF, saturatedState } from '../state.ts';
 import type { RootHint, State } from '../types.ts';
 import { choose } from './choose.ts';
 import { densityAtTP } from './density.ts';
@@ -192,7 +192,7 @@ function newtonTRho(
 export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): State {
 	const what = `P = ${fmt(P)} Pa and ${which} = ${fmt(y)} ${UNIT[which]}`;
 	const none = () => noStateInRange(fl, what);
-	let result: Point | null = null;
+	let result: Point | null;
 	if (P < fl.Pc && P >= triplePressure(fl) * (1 - 1e-9)) {
 		const sat = satAtP(fl, P);
 		const line = evalSatLine(fl, sat.T, new SatLine(), sat);
@@ -363,6 +363,12 @@ export function flashPRho(fl: Fluid, P: number, rho: number, hint?: RootHint): S
 			Ta = sat.T;
 			monotone = true;
 		} else Tb = sat.T;
+	} else if (P >= fl.Pc && rho <= fl.rhoc) {
+		// at or above Pc no state at ρ ≤ ρc lies below Tc (vapor there is below Pc, liquid denser
+		// than ρc); scanning from Tmin would meet the equation's loops inside the dome, whose
+		// spurious roots can hide the real one
+		Ta = fl.Tc;
+		monotone = true;
 	}
 	if (monotone) {
 		const out: FD = { f: 0, df: 0 };

@@ -210,13 +210,13 @@ export function isolines(
 		if (kind === 'isobar' && v > fl.Pmax)
 			throw new ThermoError(
 				'out-of-range',
-				`P = ${fmt(v)} Pa is above the range of ${fl.id} (up to ${fmt(fl.Pmax)} Pa).`,
+				`P = ${fmt(v, fl.Pmax)} Pa is above the range of ${fl.id} (up to ${fmt(fl.Pmax, v)} Pa).`,
 				`Give isobars up to ${fmt(fl.Pmax)} Pa.`
 			);
 		if (kind === 'isotherm' && (v < fl.Tmin || v > fl.Tmax))
 			throw new ThermoError(
 				'out-of-range',
-				`T = ${fmt(v)} K is outside the range of ${fl.id} (${fmt(fl.Tmin)}–${fmt(fl.Tmax)} K).`,
+				`T = ${fmt(v, fl.Tmin, fl.Tmax)} K is outside the range of ${fl.id} (${fmt(fl.Tmin, v)}–${fmt(fl.Tmax, v)} K).`,
 				`Give isotherms from ${fmt(fl.Tmin)} to ${fmt(fl.Tmax)} K.`
 			);
 	}

@@ -21,6 +21,7 @@
  * length on T–v and P–v with log v (and linear or log P), with extra points where the curve turns,
  * up to 1.5 × samples — and exactly through each crossing.
  */
+import { bandOf, holdLegOutsideBand } from '../pseudo-pure.ts';
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { getCompiledFluid } from '../registry.ts';
@@ -34,7 +35,9 @@ import {
 	type Invariant,
 	type Segment
 } from './leg-curve.ts';
-import { fixStateOf } from './fix-state.ts';
+import { checkOptions, inWindow, outsideWindow, pickIndex } from './choose.ts';
+import { fixStateOf, type Key } from './fix-state.ts';
+import { legPointPrecision } from './precision.ts';
 import { integrate } from './quadrature.ts';
 
 export const PROCESSES: readonly Process[] = [
@@ -129,13 +132,13 @@ export function checkLegSpec(spec: LegSpec): CheckedLeg {
 	if ((key === 'T' || key === 'P' || key === 'v' || key === 'rho') && !(value > 0))
 		throw new ThermoError(
 			'non-positive-input',
-			`The target ${key} must be positive (got ${fmt(value)}); the engine uses absolute values.`,
+			`The target ${key} must be positive (got ${fmt(value, 0)}); the engine uses absolute values.`,
 			`Give ${key} in ${UNIT[key]} as a positive absolute value (kelvin, absolute pressure).`
 		);
 	if (key === 'x' && !(value >= 0 && value <= 1))
 		throw new ThermoError(
 			'quality-out-of-range',
-			`The target quality x must lie between 0 and 1 (got ${fmt(value)}).`,
+			`The target quality x must lie between 0 and 1 (got ${fmt(value, 0, 1)}).`,
 			'Give x from 0 (saturated liquid) to 1 (saturated vapor).'
 		);
 	let n: number | undefined;
@@ -232,11 +235,21 @@ export interface LegTrace {
 	firstReach(g: (T: number, P: number, v: number) => number): State | null;
 }
 
-/** computeLeg with the curve kept (for paths: limit crossings along the leg, crossing directions). */
-export function traceLeg(spec: LegSpec): LegTrace {
+/**
+ * computeLeg with the curve kept (for paths: limit crossings along the leg, crossing directions).
+ * `chained`: the start is the previous leg's end, given by its (T, ρ), so the window is not
+ * applied to it again (its P from (T, ρ) may differ from the end's in the last bits).
+ */
+export function traceLeg(spec: LegSpec, chained = false): LegTrace {
 	const chk = checkLegSpec(spec);
 	const { fl, process, key, value, n, samples } = chk;
-	const start = fixStateOf(fl, spec.start);
+	checkOptions({ hint: spec.endHint, near: spec.endNear }, "the leg's end choice");
+	const endChoice = spec.endHint !== undefined || spec.endNear !== undefined;
+	const start = fixStateOf(fl, spec.start, {
+		hint: spec.startHint,
+		near: spec.startNear,
+		window: chained ? undefined : spec.window
+	});
 	const startC = cptOfState(fl, start);
 	const inv: Invariant =
 		process === 'polytropic' && n === 0
@@ -280,7 +293,9 @@ export function traceLeg(spec: LegSpec): LegTrace {
 		const first = preferredDirection(curve, pos0, startC, F, F0);
 		const mono = isMonotone(inv.process, key);
 		const hit1 = scan(curve, pos0, startC, F, F0, tolF, first, Infinity, key, seen, range, mono);
-		// a property monotone along the whole curve is reached one way only: no need to look back
+		// a property monotone along the whole curve is reached one way only: no need to look back;
+		// with a choice of end the other way is searched in full
+		const choosing = endChoice || spec.window !== undefined;
 		const hit2 =
 			hit1 && mono
 				? null
@@ -292,24 +307,44 @@ export function traceLeg(spec: LegSpec): LegTrace {
 						F0,
 						tolF,
 						first === 1 ? -1 : 1,
-						hit1 ? Math.floor(hit1.dist) : Infinity,
+						hit1 && !choosing ? Math.floor(hit1.dist) : Infinity,
 						key,
 						seen,
 						range,
 						mono
 					);
 		if (!hit1 && !hit2) throw unreachable(fl, process, inv, n, key, value, range);
-		if (hit1 && hit2) {
-			const [a, b] = hit1.dist <= hit2.dist ? [hit1, hit2] : [hit2, hit1];
-			end = a;
-			dir = a === hit1 ? first : first === 1 ? -1 : 1;
-			notes.push(
-				`The target ${key} = ${fmt(value)} ${UNIT[key]} is also reached the other way along this ${process} leg (at T = ${fmt(b.p.T)} K, P = ${fmt(b.p.P)} Pa); the nearer end was taken.`
-			);
-		} else {
-			end = (hit1 ?? hit2) as Pos;
-			dir = hit1 ? first : first === 1 ? -1 : 1;
+		const other: 1 | -1 = first === 1 ? -1 : 1;
+		let hits: { pos: Pos; dir: 1 | -1 }[] = [];
+		if (hit1) hits.push({ pos: hit1, dir: first });
+		if (hit2) hits.push({ pos: hit2, dir: other });
+		if (spec.window) {
+			const inside = hits.filter((h) => inWindow(h.pos.p, spec.window));
+			if (inside.length === 0)
+				throw outsideWindow(
+					fl,
+					`${key} = ${fmt(value)}${UNIT[key] ? ` ${UNIT[key]}` : ''} along this ${process} leg ${describeInvariant(process, inv, n)}`,
+					hits.map((h) => stateOf(fl, h.pos.p)),
+					spec.window
+				);
+			hits = inside;
 		}
+		hits.sort((a, b) => a.pos.dist - b.pos.dist);
+		let pick = 0;
+		if (hits.length > 1) {
+			const i = pickIndex(
+				hits.map((h) => stateOf(fl, h.pos.p)),
+				spec.endHint,
+				spec.endNear
+			);
+			if (i >= 0) pick = i;
+			const b = hits[pick === 0 ? 1 : 0].pos;
+			notes.push(
+				`The target ${key} = ${fmt(value)} ${UNIT[key]} is also reached the other way along this ${process} leg (at T = ${fmt(b.p.T)} K, P = ${fmt(b.p.P)} Pa); ${i >= 0 ? `the end ${spec.endNear ? 'nearest endNear' : `the hint "${spec.endHint}" selects`} was taken` : 'the nearer end was taken (endHint or endNear choose the other)'}.`
+			);
+		}
+		end = hits[pick].pos;
+		dir = hits[pick].dir;
 	}
 	// a throttle only lowers the pressure: along constant h, ds = −(v/T)·dP
 	if (process === 'isenthalpic' && end.p.P > start.P * (1 + 1e-12))
@@ -326,6 +361,10 @@ export function traceLeg(spec: LegSpec): LegTrace {
 	const crossings: Crossing[] = pieces
 		.slice(1)
 		.map((pc) => ({ line: pc.lineFrom as Crossing['line'], state: stateOf(fl, pc.A) }));
+	// every point states how well the leg's invariant and its target property fix it
+	const pk: Key = key === 'v' ? 'rho' : key;
+	for (const st of [...points, ...crossings.map((c) => c.state)])
+		if (st.precision === undefined) st.precision = legPointPrecision(fl, st, process, n, pk);
 
 	const du = endState.u - start.u,
 		dh = endState.h - start.h,
@@ -364,6 +403,8 @@ export function traceLeg(spec: LegSpec): LegTrace {
 		wShaft,
 		qFlow: process === 'isenthalpic' ? 0 : dh + wShaft
 	};
+	const band = bandOf(fl);
+	if (band) holdLegOutsideBand(fl, band, leg);
 	if (notes.length) leg.notes = notes;
 	if (process === 'polytropic') leg.n = n;
 	const sides = pieces

@@ -222,7 +222,11 @@ function checkSpec(spec: PathSpec): { fl: Fluid; limits: DesignLimits; atm: numb
 export function computePath(spec: PathSpec): PathResult {
 	const { fl, limits, atm } = checkSpec(spec);
 	const warnings: PathWarning[] = [];
-	const start = fixStateOf(fl, spec.start);
+	const start = fixStateOf(fl, spec.start, {
+		hint: spec.startHint,
+		near: spec.startNear,
+		window: spec.window
+	});
 	const closed = spec.system.kind === 'closed';
 	let m: number;
 	let system: PathResult['system'];
@@ -273,14 +277,20 @@ export function computePath(spec: PathSpec): PathResult {
 		const stateId = `S${i + 2}`;
 		let trace;
 		try {
-			trace = traceLeg({
-				fluid: fl.id,
-				start: { T: from.T, rho: from.rho },
-				process: ls.process,
-				target: ls.target,
-				n: ls.n,
-				samples: ls.samples ?? spec.samples
-			});
+			trace = traceLeg(
+				{
+					fluid: fl.id,
+					start: { T: from.T, rho: from.rho },
+					process: ls.process,
+					target: ls.target,
+					n: ls.n,
+					samples: ls.samples ?? spec.samples,
+					window: spec.window,
+					endHint: ls.endHint,
+					endNear: ls.endNear
+				},
+				true
+			);
 		} catch (e) {
 			if (e instanceof ThermoError)
 				throw new ThermoError(e.code, `Leg ${id} (${String(ls.process)}): ${e.message}`, e.hint, {

@@ -14,7 +14,7 @@
  */
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDT, propDrho } from '../properties.ts';
-import type { Precision, State } from '../types.ts';
+import type { Precision, Process, State } from '../types.ts';
 import type { Key } from './fix-state.ts';
 import { lastSaturatedPhases, P_ROUNDOFF } from '../state.ts';
 import { satGuess, type SatGuess } from './saturation.ts';
@@ -37,12 +37,18 @@ const pL = new Point();
 const pV = new Point();
 const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
 /** derivative rows [∂y/∂T, ∂y/∂z] of T, P, ρ, u, h, s, x (in that order) in the state's variables */
-const D = new Float64Array(14);
+const D = new Float64Array(16);
 const ENERGY = ['u', 'h', 's'] as const;
-const ORDER: Record<Key, number> = { T: 0, P: 1, rho: 2, u: 3, h: 4, s: 5, x: 6 };
+/** a leg's point is also fixed by 'poly', ln(P·vⁿ) of a polytropic leg (row 7, n in polyN) */
+type RowKey = Key | 'poly';
+const ORDER: Record<RowKey, number> = { T: 0, P: 1, rho: 2, u: 3, h: 4, s: 5, x: 6, poly: 7 };
+let polyN = 0;
 
-function inputRounding(fl: Fluid, k: Key, value: number, T: number): number {
+function inputRounding(fl: Fluid, k: RowKey, value: number, T: number): number {
 	switch (k) {
+		case 'poly':
+			// ln P + n·ln v from P and v each rounded once
+			return EPS * (1 + Math.abs(polyN));
 		case 'u':
 		case 'h':
 			return EPS * Math.max(Math.abs(value), ENERGY_TERMS * fl.R * T);
@@ -153,7 +159,7 @@ export function precisionOf(
 	s: State,
 	ka: Key,
 	a: number,
-	kb: Key,
+	kb: RowKey,
 	b: number
 ): Precision {
 	const own = precisionIn(fl, s, ka, a, kb, b, false);
@@ -169,7 +175,7 @@ function precisionIn(
 	s: State,
 	ka: Key,
 	a: number,
-	kb: Key,
+	kb: RowKey,
 	b: number,
 	singleSide: boolean
 ): Precision {
@@ -179,6 +185,11 @@ function precisionIn(
 	} else if (s.x !== null) {
 		if (!twoPhaseRows(fl, s)) return { ...UNKNOWN };
 	} else singleRows(fl, s);
+	if (kb === 'poly') {
+		// d ln(P·vⁿ) = dP/P − n·dρ/ρ
+		D[14] = D[2] / s.P - (polyN * D[4]) / s.rho;
+		D[15] = D[3] / s.P - (polyN * D[5]) / s.rho;
+	}
 	const ia = 2 * ORDER[ka],
 		ib = 2 * ORDER[kb];
 	const a1 = D[ia],
@@ -206,4 +217,43 @@ function precisionIn(
 		P: ka === 'P' ? EPS : clamp(Math.max(spread(2) / s.P, floorP)),
 		v: clamp(spread(4) / s.rho)
 	};
+}
+
+const LEG_INVARIANT: Record<Exclude<Process, 'polytropic'>, Key> = {
+	isobaric: 'P',
+	isochoric: 'rho',
+	isothermal: 'T',
+	isentropic: 's',
+	isenthalpic: 'h'
+};
+
+function valueAt(s: State, k: Key): number {
+	return k === 'x' ? (s.x as number) : s[k];
+}
+
+/**
+ * Precision of a point along a leg: the state the leg's invariant and its target property fix
+ * there (a leg's end is exactly that pair). Where the pair fixes nothing at the point — T or P
+ * with the other inside the dome, a quality outside it — the point's quality, or its T (P on an
+ * isotherm), stands in for the target.
+ */
+export function legPointPrecision(
+	fl: Fluid,
+	s: State,
+	process: Process,
+	n: number | undefined,
+	target: Key
+): Precision {
+	const dome = s.x !== null && s.phase !== 'supercritical-fluid';
+	const inv: Key | 'poly' =
+		process === 'polytropic' ? (n === 0 ? 'P' : 'poly') : LEG_INVARIANT[process];
+	let k: Key = target;
+	if (k === 'x' && !dome) k = inv === 'T' ? 'P' : 'T';
+	if (dome && ((inv === 'P' && k === 'T') || (inv === 'T' && k === 'P'))) k = 'x';
+	if (inv === 'poly') {
+		polyN = n as number;
+		return precisionOf(fl, s, k, valueAt(s, k), 'poly', Math.log(s.P) + polyN * Math.log(s.v));
+	}
+	const [ka, kb] = ORDER[inv] < ORDER[k] ? [inv, k] : [k, inv];
+	return precisionOf(fl, s, ka, valueAt(s, ka), kb, valueAt(s, kb));
 }

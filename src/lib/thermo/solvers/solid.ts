@@ -41,6 +41,12 @@ export function piecePressure(p: SolidLinePiece, T: number): number {
 		case 'exp-theta-delta':
 			for (let i = 0; i < p.a.length; i++) sum += p.a[i] * Math.pow(1 - th, p.b[i]);
 			return p.Pref * Math.exp(sum / th);
+		case 'simon':
+			for (let i = 0; i < p.a.length; i++) sum += p.a[i] * (Math.pow(th, p.b[i]) - 1);
+			return p.Pref + sum;
+		case 'power-plain':
+			for (let i = 0; i < p.a.length; i++) sum += p.a[i] * Math.pow(th, p.b[i]);
+			return p.Pref * sum;
 	}
 }
 
@@ -120,7 +126,7 @@ export function assertFluid(fl: Fluid, s: State, what?: string): State {
  */
 export function meltingLine(fl: Fluid, points: number): State[] {
 	const lines = cached(fl).lines;
-	if (!lines) return [];
+	if (!lines?.melting.pieces.length) return [];
 	// highest temperature with a melting pressure inside the range: bisection on P_m(T) = Pmax
 	let lo = fl.Tt,
 		hi = fl.Tmax;

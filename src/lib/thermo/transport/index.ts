@@ -1,8 +1,10 @@
 /**
  * Transport and interface properties of a state: viscosity, thermal conductivity, Prandtl number and
  * surface tension, in SI (Pa·s, W/(m·K), –, N/m), each either a number or absent with a reason.
- * Correlations exist so far for water (water.ts); for any other fluid every value is absent with
- * `no-correlation`. The state may come from IAPWS-95 (fixState) or IAPWS-IF97 (if97State…): the
+ * Water: IAPWS releases (water.ts). Nitrogen, argon, oxygen, carbon dioxide; ammonia's and
+ * R-134a's viscosity: fluids.ts. Surface
+ * tension of the other fluids: data/surface-tension.ts. A value without a correlation is absent with
+ * `no-correlation` and a reason. The state may come from IAPWS-95 (fixState) or IAPWS-IF97 (if97State…): the
  * correlations take its ρ and T, and its cp, cv and speed of sound for the conductivity's critical
  * enhancement ((∂ρ/∂p)_T = (cp/cv)/w²).
  */
@@ -14,6 +16,9 @@ import {
 	waterTransportRange,
 	waterViscosity
 } from './water.ts';
+import { muleroSource, muleroTension } from './data/surface-tension.ts';
+import { fluidCorrelations } from './fluids.ts';
+import { tensionSum } from './forms.ts';
 
 export type TransportName = 'mu' | 'k' | 'Pr' | 'sigma';
 
@@ -45,32 +50,150 @@ const SOURCES = {
 	sigma: 'IAPWS R1-76(2014)'
 } as const;
 
+/** Why μ and k are absent for the fluids without a built correlation. */
+const NOT_BUILT: Record<string, string> = {
+	'r1234ze-e': 'No correlation with printed check values is built into the engine for R-1234ze(E).'
+};
+
 /**
  * Viscosity, thermal conductivity, Prandtl number and surface tension of a state (SI), or each
  * absent with a reason: no correlation for the fluid; outside a correlation's range (water: 273.15 K
- * to 1173.15 K, P ≤ 1000 MPa); μ, k and Pr inside the dome (they belong to one phase: ask for the
- * saturated liquid or vapor); σ off the saturation line.
+ * to 1173.15 K, P ≤ 1000 MPa; carbon dioxide's conductivity: to 1100 K and 200 MPa); μ, k and Pr
+ * inside the dome (they belong to one phase: ask for the saturated liquid or vapor); σ off the
+ * saturation line.
  */
 export function transport(state: State): Transport {
+	if (state.fluid === 'water') return waterTransport(state);
 	const out: Transport = { mu: null, k: null, Pr: null, sigma: null, absent: {}, sources: {} };
-	const all: TransportName[] = ['mu', 'k', 'Pr', 'sigma'];
-	if (state.fluid !== 'water') {
-		for (const name of all)
+	const { T, P, rho } = state;
+	const tension = muleroTension[state.fluid];
+	if (!tension)
+		out.absent.sigma = {
+			code: 'no-correlation',
+			reason:
+				state.fluid === 'r1234ze-e'
+					? 'The two public copies of the surface-tension coefficients for R-1234ze(E) disagree in sign; it is left out until the paper is read.'
+					: `No published surface-tension correlation for ${state.fluid} is built into the engine.`
+		};
+	else if (!onDome(state))
+		out.absent.sigma = {
+			code: 'not-on-saturation-line',
+			reason:
+				'Surface tension is given only on the saturation line (a saturated liquid, vapor or mixture).'
+		};
+	else if (T >= tension.Tc)
+		out.absent.sigma = {
+			code: 'out-of-range',
+			reason: `The correlation ends at its critical temperature, ${tension.Tc} K; T = ${T} K.`
+		};
+	else {
+		out.sigma = tensionSum(tension, T);
+		out.sources.sigma = muleroSource;
+	}
+
+	const corr = fluidCorrelations[state.fluid];
+	if (!corr) {
+		const why =
+			NOT_BUILT[state.fluid] ??
+			`No published viscosity or thermal conductivity correlation for ${state.fluid} is built into the engine.`;
+		for (const name of ['mu', 'k', 'Pr'] as const)
 			out.absent[name] = {
 				code: 'no-correlation',
-				reason: `No published ${describe(name)} correlation for ${state.fluid} is built into the engine yet.`
+				reason: name === 'Pr' ? `The Prandtl number needs μ and k. ${why}` : why
 			};
 		return out;
 	}
-	const { T, P, rho } = state;
-	const onDome =
+	if (state.phase === 'saturated-mixture') {
+		twoPhase(out);
+		return out;
+	}
+	const inRange = (r: { Tmax?: number; Pmax?: number }) =>
+		(r.Tmax === undefined || T <= r.Tmax) && (r.Pmax === undefined || P <= r.Pmax);
+	const mu = corr.mu(T, rho);
+	if (inRange(corr.range.mu) && Number.isFinite(mu) && mu > 0) {
+		out.mu = mu;
+		out.sources.mu = corr.sources.mu;
+	} else
+		out.absent.mu = { code: 'out-of-range', reason: rangeReason('viscosity', corr.range.mu, T, P) };
+	const k = corr.k ? corr.k(T, rho, mu) : NaN;
+	if (!corr.k)
+		out.absent.k = {
+			code: 'no-correlation',
+			reason: corr.noK ?? 'No thermal conductivity correlation is built for this fluid.'
+		};
+	else if (inRange(corr.range.k) && Number.isFinite(k) && k > 0) {
+		out.k = k;
+		out.sources.k = corr.sources.k;
+	} else
+		out.absent.k = {
+			code: 'out-of-range',
+			reason: rangeReason('thermal conductivity', corr.range.k, T, P)
+		};
+	if (out.mu !== null && out.k !== null && state.cp !== null) {
+		out.Pr = (out.mu * state.cp) / out.k;
+		out.sources.Pr = SOURCES.Pr;
+	} else
+		out.absent.Pr = {
+			code: out.absent.k?.code === 'no-correlation' ? 'no-correlation' : 'out-of-range',
+			reason: 'The Prandtl number needs μ, k and cp, and one of them is absent at this state.'
+		};
+	return out;
+}
+
+/**
+ * μ (Pa·s) and k (W/(m·K)) of a fluid other than water at T (K) and ρ (kg/m³) straight from its
+ * correlations, without range checks; null for a fluid without them. For checks against printed
+ * (T, ρ) tables.
+ */
+export function transportAt(
+	fluid: string,
+	T: number,
+	rho: number
+): { mu: number; k: number | null } | null {
+	const corr = fluidCorrelations[fluid];
+	if (!corr) return null;
+	const mu = corr.mu(T, rho);
+	return { mu, k: corr.k ? corr.k(T, rho, mu) : null };
+}
+
+function rangeReason(
+	what: string,
+	r: { Tmax?: number; Pmax?: number },
+	T: number,
+	P: number
+): string {
+	const lim = [
+		r.Tmax !== undefined ? `up to ${r.Tmax} K` : '',
+		r.Pmax !== undefined ? `up to ${r.Pmax / 1e6} MPa` : ''
+	]
+		.filter(Boolean)
+		.join(' and ');
+	return `The ${what} correlation holds ${lim || 'within the equation of state'}; this state is at ${T} K, ${P} Pa.`;
+}
+
+function onDome(state: State): boolean {
+	return (
 		state.phase === 'saturated-liquid' ||
 		state.phase === 'saturated-vapor' ||
-		state.phase === 'saturated-mixture';
-	if (onDome && T >= waterTensionRange.Tmin - 0.01 && T <= waterTensionRange.Tmax) {
+		state.phase === 'saturated-mixture'
+	);
+}
+
+function twoPhase(out: Transport): void {
+	for (const name of ['mu', 'k', 'Pr'] as const)
+		out.absent[name] = {
+			code: 'two-phase',
+			reason: `A two-phase mixture has no single ${describe(name)}: ask for the saturated liquid (x = 0) or vapor (x = 1) at this temperature.`
+		};
+}
+
+function waterTransport(state: State): Transport {
+	const out: Transport = { mu: null, k: null, Pr: null, sigma: null, absent: {}, sources: {} };
+	const { T, P, rho } = state;
+	if (onDome(state) && T >= waterTensionRange.Tmin - 0.01 && T <= waterTensionRange.Tmax) {
 		out.sigma = waterSurfaceTension(T);
 		out.sources.sigma = SOURCES.sigma;
-	} else if (onDome)
+	} else if (onDome(state))
 		out.absent.sigma = {
 			code: 'out-of-range',
 			reason: `IAPWS R1-76(2014) holds from ${waterTensionRange.Tmin} K to ${waterTensionRange.Tmax} K; T = ${T} K.`
@@ -83,11 +206,7 @@ export function transport(state: State): Transport {
 		};
 
 	if (state.phase === 'saturated-mixture') {
-		for (const name of ['mu', 'k', 'Pr'] as const)
-			out.absent[name] = {
-				code: 'two-phase',
-				reason: `A two-phase mixture has no single ${describe(name)}: ask for the saturated liquid (x = 0) or vapor (x = 1) at this temperature.`
-			};
+		twoPhase(out);
 		return out;
 	}
 	if (

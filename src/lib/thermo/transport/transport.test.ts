@@ -143,7 +143,7 @@ describe('transport(state): absences and IAPWS-95 states', () => {
 		expect(mix.absent.mu?.code).toBe('two-phase');
 		expect(mix.absent.k?.code).toBe('two-phase');
 		expect(mix.absent.Pr?.code).toBe('two-phase');
-		const n2 = transport(fixState('nitrogen', { T: 300, P: 1e5 }));
+		const n2 = transport(fixState('r1234ze-e', { T: 300, P: 1e5 }));
 		for (const name of ['mu', 'k', 'Pr', 'sigma'] as const) {
 			expect(n2[name]).toBeNull();
 			expect(n2.absent[name]?.code).toBe('no-correlation');

@@ -41,7 +41,7 @@ describe('POST /api/v1/states answers carry transport', () => {
 		expect(transport.sigma).toBeNull();
 		expect(transport.absent.sigma.code).toBe('not-on-saturation-line');
 	});
-	it('a wet state: σ given, μ absent with a reason; a fluid without correlations: all absent', async () => {
+	it('a wet state: σ given, μ absent with a reason; a fluid without μ and k correlations says why', async () => {
 		const wet = (
 			await callRoute(states, '/api/v1/states', {
 				body: JSON.stringify({ fluid: 'water', inputs: { T: 450, x: 0.5 } })
@@ -51,12 +51,25 @@ describe('POST /api/v1/states answers carry transport', () => {
 		expect(Math.abs(wet.transport.sigma! - 0.0428914992)).toBeLessThan(1e-10);
 		expect(wet.transport.mu).toBeNull();
 		expect(wet.transport.absent.mu.code).toBe('two-phase');
-		const n2 = (
+		const r134a = (
 			await callRoute(states, '/api/v1/states', {
-				body: JSON.stringify({ fluid: 'nitrogen', inputs: { T: 300, P: 1e5 } })
+				body: JSON.stringify({ fluid: 'r134a', inputs: { T: 300, P: 1e5 } })
 			})
 		).body as Answer;
-		expect(n2.transport.k).toBeNull();
-		expect(n2.transport.absent.k.code).toBe('no-correlation');
+		expect(r134a.transport.k).toBeNull();
+		expect(r134a.transport.absent.k.code).toBe('no-correlation');
+		expect(r134a.transport.absent.k.reason).toMatch(/Huber, Laesecke & Perkins/);
+	});
+	it('nitrogen gas: μ and k from Lemmon & Jacobsen (2004), near its dilute-gas check value', async () => {
+		const r = await callRoute(states, '/api/v1/states', {
+			body: JSON.stringify({ fluid: 'nitrogen', inputs: { T: 300, P: 1e4 } })
+		});
+		expect(r.status).toBe(200);
+		const { transport } = r.body as Answer & { transport: { sources: Record<string, string> } };
+		// Lemmon & Jacobsen (2004), check values at 300 K and ρ → 0: 17.8771 μPa·s and 25.9361 mW/(m·K)
+		// (read from CoolProp's CoolProp-Tests.cpp); at 10 kPa the density terms add under 0.05 %
+		expect(Math.abs(transport.mu! / 17.8771e-6 - 1)).toBeLessThan(5e-4);
+		expect(Math.abs(transport.k! / 25.9361e-3 - 1)).toBeLessThan(5e-4);
+		expect(transport.sources.mu).toMatch(/Lemmon & Jacobsen \(2004\)/);
 	});
 });

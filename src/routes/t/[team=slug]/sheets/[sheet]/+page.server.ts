@@ -19,6 +19,7 @@ import {
 	type SaturationCurve
 } from '$lib/thermo';
 import { engineSpec, labelIds, startOnlyResult } from '$lib/sheets/doc';
+import { startOptions } from '$lib/sheets/choice';
 import type { SheetDoc } from '$lib/sheets/types';
 
 const domes = new Map<string, SaturationCurve>();
@@ -42,7 +43,7 @@ function dome(fluid: string): SaturationCurve | null {
 function compute(doc: SheetDoc): { result: PathResult | null; resultError: string | null } {
 	try {
 		if (doc.spec.legs.length === 0) {
-			const start = fixState(doc.spec.fluid, doc.spec.start);
+			const start = fixState(doc.spec.fluid, doc.spec.start, startOptions(doc.spec));
 			return { result: startOnlyResult(doc, start, stateExtras(start)), resultError: null };
 		}
 		return { result: computePath(engineSpec(doc)), resultError: null };
