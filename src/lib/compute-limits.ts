@@ -7,8 +7,20 @@
 
 /** Points of one path request: legs × points per leg (each leg's samples, default 40), summed. */
 export const API_PATH_POINTS_MAX = 4000;
-/** Points of one isolines request: number of values (lines) × points per line. */
+/** Points of one isolines request: number of values (lines) × points per line × the kind's weight. */
 export const API_ISOLINE_POINTS_MAX = 4000;
+/**
+ * What one point of each kind of line costs, in isobar points (`npm run bench:isolines`: an
+ * isenthalp point takes up to four times an isobar's, a 2-D solve; the others are alike).
+ */
+export const ISOLINE_WEIGHT: Readonly<Record<string, number>> = {
+	isobar: 1,
+	isotherm: 1,
+	isochore: 1,
+	isentrope: 1,
+	isenthalp: 4,
+	quality: 1
+};
 /** Points of one leg request (its samples). */
 export const API_SAMPLES_MAX = 1000;
 /** Points per branch of the saturation dome. */

@@ -4,7 +4,6 @@ import {
 	select,
 	zoom,
 	zoomIdentity,
-	type Selection,
 	type ZoomBehavior,
 	type ZoomTransform
 } from 'd3';
@@ -29,11 +28,13 @@ import {
 	makeXScale,
 	makeYScale,
 	thinLabels,
+	xScaleType,
 	yScaleType,
 	type Scale,
 	type Tick
 } from './scales';
 import { DRAWING_CSS, OVERLAY_CSS } from './style';
+import { VIEWS, type ChartView, type ViewProp } from './views';
 import type {
 	ChartCoords,
 	ChartKind,
@@ -138,8 +139,6 @@ export interface ChartController {
 	destroy(): void;
 }
 
-type G = Selection<SVGGElement, unknown, null, undefined>;
-
 const NUDGE_PX = { fine: 1, normal: 4, coarse: 20 } as const;
 const STATE_R = 9.5;
 const MARGIN = { right: 18, bottom: 46, left: 66 } as const;
@@ -162,6 +161,18 @@ function polylineD(points: readonly Point[]): string {
  */
 export function plotTransform(t: ZoomTransform, plot: { x: number; y: number }): ZoomTransform {
 	return zoomIdentity.translate(t.x + (t.k - 1) * plot.x, t.y + (t.k - 1) * plot.y).scale(t.k);
+}
+
+/** Anything with some of a view's properties (a State has them all; an isoline point may lack h and s). */
+type Projectable = { [K in ViewProp]?: number | null };
+
+/** Whether a point has both of the view's properties (and a positive v where v is one). */
+function drawable(view: ChartView, p: Projectable): boolean {
+	for (const k of view.pair) {
+		const q = p[k];
+		if (typeof q !== 'number' || !Number.isFinite(q) || (k === 'v' && !(q > 0))) return false;
+	}
+	return true;
 }
 
 function diamond(size: number): string {
@@ -260,15 +271,17 @@ export function createChart(
 			if (!destroyed && frame) drawFrame();
 		});
 
-	const yOf = (p: { T: number; P: number }) => (frame!.kind === 'T-v' ? p.T : p.P);
-	const project = (p: { v: number; T: number; P: number }): Point => ({
-		x: plot.x + x!(p.v),
-		y: plot.y + y!(yOf(p))
-	});
+	const view = (): ChartView => VIEWS[frame!.kind];
+	const project = (p: Projectable): Point => {
+		const vw = view();
+		return {
+			x: plot.x + x!(p[vw.x.prop] ?? NaN),
+			y: plot.y + y!(p[vw.y.prop] ?? NaN)
+		};
+	};
 	const dataAt = (px: number, py: number): ChartCoords => {
-		const v = x!.invert(px - plot.x);
-		const q = y!.invert(py - plot.y);
-		return frame!.kind === 'T-v' ? { T: q, v } : { P: q, v };
+		const vw = view();
+		return { [vw.x.prop]: x!.invert(px - plot.x), [vw.y.prop]: y!.invert(py - plot.y) };
 	};
 	const clamp = (c: ChartCoords) =>
 		clampCoords(
@@ -287,13 +300,14 @@ export function createChart(
 	}
 
 	function currentKeyEntries() {
-		const drawn = (path.traces ?? []).filter((t) => t.points.some((p) => p.v));
+		const vw = view();
+		const drawn = (path.traces ?? []).filter((t) => t.points.some((p) => drawable(vw, p)));
 		return keyEntries(path.legs, {
 			limits: drawnLimits().length > 0,
 			traces: drawn.some((t) => t.kind !== 'revision'),
-			bands: (path.traces ?? []).some(
-				(t) => t.kind !== 'revision' && t.points.some((p) => p.vBand)
-			),
+			bands:
+				vw.x.prop === 'v' &&
+				(path.traces ?? []).some((t) => t.kind !== 'revision' && t.points.some((p) => p.vBand)),
 			revisions: drawn.filter((t) => t.kind === 'revision').map((t) => t.label)
 		});
 	}
@@ -306,14 +320,16 @@ export function createChart(
 		straight: boolean;
 	}[] {
 		if (!frame?.limits) return [];
+		const vw = view();
 		const out = [];
 		for (const name of LIMIT_ORDER) {
 			const lim = frame.limits[name];
 			if (!lim) continue;
-			const straight = (frame.kind === 'T-v') !== isPressureLimit(name);
+			// a rule across the chart where the limit's quantity is the y axis, else its own curve
+			const straight = vw.y.prop === (isPressureLimit(name) ? 'P' : 'T');
+			const points = straight ? [] : (lim.points ?? []).filter((p) => drawable(vw, p));
 			if (straight) out.push({ name, value: lim.value, straight });
-			else if (lim.points && lim.points.length > 1)
-				out.push({ name, value: lim.value, points: lim.points, straight });
+			else if (points.length > 1) out.push({ name, value: lim.value, points, straight });
 		}
 		return out;
 	}
@@ -349,7 +365,7 @@ export function createChart(
 			width: Math.max(10, f.width - m.left - m.right),
 			height: Math.max(10, f.height - m.top - m.bottom)
 		};
-		const x0 = makeXScale(baseDomain!, plot.width);
+		const x0 = makeXScale(baseDomain!, plot.width, xScaleType(f.kind, f.pressureScale));
 		const y0 = makeYScale(f.kind, f.pressureScale, baseDomain!, plot.height);
 		const local = plotTransform(transform, plot);
 		x = local.rescaleX(x0);
@@ -391,25 +407,22 @@ export function createChart(
 	function drawAxes() {
 		const f = frame!;
 		const atm = f.units.atmosphere;
-		const vUnit = axisUnit('v', f.units, f.pressureScale);
-		const yAxis = f.kind === 'T-v' ? 'T' : 'P';
-		const yDomain = y!.domain() as [number, number];
-		const yUnit = axisUnit(yAxis, f.units, f.pressureScale, yDomain);
+		const vw = view();
+		const xType = xScaleType(f.kind, f.pressureScale);
+		const yType = yScaleType(f.kind, f.pressureScale);
 		const xDomain = x!.domain() as [number, number];
+		const xUnit = axisUnit(vw.x.prop, f.units, xType, xDomain);
+		const yAxis = vw.y.prop;
+		const yDomain = y!.domain() as [number, number];
+		const yUnit = axisUnit(yAxis, f.units, yType, yDomain);
 		const xt = thinLabels(
-			axisTicks('log', xDomain, vUnit, atm),
+			axisTicks(xType, xDomain, xUnit, atm, Math.max(3, Math.round(plot.width / 90))),
 			(s) => x!(s),
 			8,
 			(l) => textWidth(l, 10)
 		);
 		const yt = thinLabels(
-			axisTicks(
-				yScaleType(f.kind, f.pressureScale),
-				yDomain,
-				yUnit,
-				atm,
-				Math.max(3, Math.round(plot.height / 60))
-			),
+			axisTicks(yType, yDomain, yUnit, atm, Math.max(3, Math.round(plot.height / 60))),
 			(s) => -y!(s),
 			4,
 			() => 11
@@ -477,9 +490,9 @@ export function createChart(
 		const titles = [
 			{
 				cls: 'xt',
-				sym: 'v',
-				word: 'specific volume',
-				unit: `${vUnit.label}, log`,
+				sym: vw.x.prop,
+				word: vw.x.word,
+				unit: xType === 'log' ? `${xUnit.label}, log` : xUnit.label,
 				x: plot.x + plot.width / 2,
 				y: plot.y + plot.height + 36,
 				rotate: false
@@ -487,8 +500,8 @@ export function createChart(
 			{
 				cls: 'yt',
 				sym: yAxis,
-				word: yAxis === 'T' ? 'temperature' : 'pressure',
-				unit: yAxis === 'P' && f.pressureScale === 'log' ? `${yUnit.label}, log` : yUnit.label,
+				word: vw.y.word,
+				unit: yType === 'log' ? `${yUnit.label}, log` : yUnit.label,
 				x: 16,
 				y: plot.y + plot.height / 2,
 				rotate: true
@@ -551,7 +564,7 @@ export function createChart(
 			.data(iso)
 			.join('path')
 			.attr('class', 'swc-isoline')
-			.attr('d', (l) => polylineD(l.points.map(project)));
+			.attr('d', (l) => polylineD(l.points.filter((p) => drawable(view(), p)).map(project)));
 	}
 
 	function drawLimits() {
@@ -578,6 +591,11 @@ export function createChart(
 
 	function isolineLabel(l: Isoline): string {
 		const f = frame!;
+		if (l.kind === 'quality') return `x ${compactNumber(l.value, 2)}`;
+		if (l.kind === 'isentrope' || l.kind === 'isenthalp') {
+			const unit = axisUnit(l.kind === 'isentrope' ? 's' : 'h', f.units, 'linear');
+			return `${compactNumber(unit.fromSI(l.value, f.units.atmosphere), 4)} ${unit.label}`;
+		}
 		if (l.kind === 'isobar') {
 			const unit = axisUnit('P', f.units, 'linear');
 			return `${compactNumber(unit.fromSI(l.value, f.units.atmosphere))} ${unit.label}`;
@@ -643,14 +661,16 @@ export function createChart(
 			.attr('d', diamond(4.5))
 			.attr('transform', (d) => `translate(${d.p.x.toFixed(1)},${d.p.y.toFixed(1)})`);
 
+		const vw = view();
 		const traces = (path.traces ?? []).map((t) => ({
 			id: t.id,
 			revision: t.kind === 'revision',
 			pts: t.points
-				.filter((p) => p.v && p.v > 0)
-				.map((p) => ({ ...project({ v: p.v!, T: p.T, P: p.P }), inDome: !!p.inDome })),
+				.filter((p) => drawable(vw, p))
+				.map((p) => ({ ...project(p), inDome: !!p.inDome })),
+			// a band across the dome needs v on an axis: elsewhere the reading has no known place
 			bands: t.points
-				.filter((p) => p.vBand && !(p.v && p.v > 0))
+				.filter((p) => vw.x.prop === 'v' && p.vBand && !(p.v && p.v > 0))
 				.map((p) => ({
 					a: project({ v: p.vBand![0], T: p.T, P: p.P }),
 					b: project({ v: p.vBand![1], T: p.T, P: p.P })
@@ -800,17 +820,16 @@ export function createChart(
 
 		const lims = drawnLimits();
 		const limLines = lims.map((l) => (l.straight ? limitLine(l.value) : l.points!.map(project)));
+		const vw = view();
 		const iso = f.isolines ?? [];
-		const isoLines = iso.map((l) => l.points.map(project));
+		const isoLines = iso.map((l) => l.points.filter((p) => drawable(vw, p)).map(project));
 		const lines: Point[][] = [...limLines];
 		if (sat) {
 			lines.push([...sat.liquid, sat.critical, ...[...sat.vapor].reverse()].map(project));
 			lines.push([project(sat.liquid[0]), project(sat.vapor[0])]);
 		}
 		for (const t of path.traces ?? [])
-			lines.push(
-				t.points.filter((p) => p.v && p.v > 0).map((p) => project({ v: p.v!, T: p.T, P: p.P }))
-			);
+			lines.push(t.points.filter((p) => drawable(vw, p)).map(project));
 
 		const limText = lims.map((l) => limitText(l.name, l.value, f.units));
 		const isoText = iso.map((l) => isolineLabel(l));
@@ -1080,9 +1099,8 @@ export function createChart(
 
 	function toScreen(c: ChartCoords): Point | null {
 		if (!frame || !x || !y) return null;
-		const q = frame.kind === 'T-v' ? c.T : c.P;
-		if (q === undefined) return null;
-		return { x: plot.x + x(c.v), y: plot.y + y(q) };
+		if (!drawable(view(), c)) return null;
+		return project(c);
 	}
 
 	// ---- zoom, pan, hover, add

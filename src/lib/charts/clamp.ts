@@ -7,6 +7,7 @@ import type {
 	SaturationCurve,
 	TriplePoint
 } from './types';
+import { VIEWS } from './views';
 
 export interface ClampBounds {
 	triple?: TriplePoint | null;
@@ -25,6 +26,8 @@ export interface ClampBounds {
  *   the triple-point isotherm; vapor there is very dilute); smaller v is moved out to that line.
  *   The liquid side is left to the engine: compressed liquid can be denser than the saturated
  *   liquid at the triple point (water near 4 °C), so no cheap bound is safe there.
+ * The same temperature and pressure rules hold on every view with T or P on an axis (T–s, P–h);
+ * the vapor-side rule needs v, so it is P–v's alone. h–s has neither.
  * Reasons name the limit in the sheet's units.
  */
 export function clampCoords(
@@ -39,8 +42,9 @@ export function clampCoords(
 	const P = (pa: number) => formatQuantity(pa, 'pressure', prefs, { sig: 4 }).full;
 	const range = bounds.range;
 	const triple = bounds.triple;
+	const pair = VIEWS[kind].pair;
 
-	if (kind === 'T-v' && out.T !== undefined) {
+	if (pair.includes('T') && out.T !== undefined) {
 		const floor = Math.max(triple?.T ?? -Infinity, range?.Tmin ?? -Infinity);
 		if (out.T < floor) {
 			out.T = floor;
@@ -56,7 +60,7 @@ export function clampCoords(
 		}
 	}
 
-	if (kind === 'P-v' && out.P !== undefined) {
+	if (pair.includes('P') && out.P !== undefined) {
 		if (!(out.P > 0)) {
 			out.P = triple?.P ?? 1;
 			reasons.push('At or below a perfect vacuum: the pressure is held just above it.');
@@ -66,7 +70,7 @@ export function clampCoords(
 			reasons.push(`Above the formulation's highest pressure (${P(range.Pmax)}).`);
 		}
 		const vgTriple = bounds.saturation?.vapor[0]?.v;
-		if (triple && vgTriple && out.P < triple.P) {
+		if (triple && vgTriple && out.v !== undefined && out.P < triple.P) {
 			const vMin = (vgTriple * triple.P) / out.P;
 			if (out.v < vMin) {
 				out.v = vMin;

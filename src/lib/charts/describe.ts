@@ -1,6 +1,7 @@
 import type { Phase, State } from '$lib/thermo/types';
 import { formatQuantity, type UnitPrefs } from '$lib/units';
 import { PROCESS_ORDER, processStyle } from './encoding';
+import { VIEWS } from './views';
 import type { ChartKind, ChartLeg, ChartState, DesignLimitName, DesignLimits } from './types';
 
 const PHASE_NAMES: Record<Phase, string> = {
@@ -86,7 +87,7 @@ export interface ChartSummaryInput {
 
 /** One-sentence summary for the SVG's aria-label. */
 export function chartSummary(input: ChartSummaryInput): string {
-	const what = `${input.kind === 'T-v' ? 'Temperature' : 'Pressure'}–specific volume diagram${input.fluidName ? ` of ${input.fluidName}` : ''}`;
+	const what = `${VIEWS[input.kind].name} diagram${input.fluidName ? ` of ${input.fluidName}` : ''}`;
 	const path = input.states.length
 		? `${input.states.length} state${input.states.length === 1 ? '' : 's'} and ${input.legs.length} leg${input.legs.length === 1 ? '' : 's'}`
 		: 'no path yet';

@@ -6,6 +6,7 @@ import {
 	type ScaleContinuousNumeric
 } from 'd3';
 import { displayUnit, exponentText, formatNumber, type UnitDef, type UnitPrefs } from '$lib/units';
+import { axisScaleType, VIEWS, type ViewProp } from './views';
 import type {
 	ChartKind,
 	ChartLeg,
@@ -29,11 +30,16 @@ export interface Tick {
 
 /** How the y axis of a chart kind is scaled. */
 export function yScaleType(kind: ChartKind, pressureScale: PressureScale): 'log' | 'linear' {
-	return kind === 'P-v' && pressureScale === 'log' ? 'log' : 'linear';
+	return axisScaleType(VIEWS[kind].y, pressureScale);
 }
 
-export function makeXScale(domain: Domain, width: number): Scale {
-	return scaleLog().domain(domain.x).range([0, width]);
+/** How the x axis of a chart kind is scaled (log v; h and s linear). */
+export function xScaleType(kind: ChartKind, pressureScale: PressureScale): 'log' | 'linear' {
+	return axisScaleType(VIEWS[kind].x, pressureScale);
+}
+
+export function makeXScale(domain: Domain, width: number, type: 'log' | 'linear' = 'log'): Scale {
+	return (type === 'log' ? scaleLog() : scaleLinear()).domain(domain.x).range([0, width]);
 }
 
 export function makeYScale(
@@ -53,12 +59,14 @@ export function makeYScale(
  * negative, which a log axis cannot show), else the preferred reference.
  */
 export function axisUnit(
-	axis: 'v' | 'T' | 'P',
+	axis: ViewProp,
 	prefs: UnitPrefs,
 	pressureScale: PressureScale,
 	domainSI?: [number, number]
 ): UnitDef {
 	if (axis === 'v') return displayUnit('specificVolume', prefs);
+	if (axis === 'h') return displayUnit('specificEnergy', prefs);
+	if (axis === 's') return displayUnit('specificEntropy', prefs);
 	if (axis === 'T') return displayUnit('temperature', prefs);
 	return displayUnit('pressure', prefs, {
 		reference: pressureScale === 'log' ? 'absolute' : prefs.pressureReference,
@@ -114,32 +122,50 @@ function* pointsOf(inputs: DomainInputs) {
 
 /**
  * The window a chart opens on (and double-click returns to): the dome, the path and the design
- * limits, padded; v and log P by a fraction of a decade, T and linear P by a share of the span.
- * Linear pressure starts at zero absolute at the lowest.
+ * limits, padded; log axes (v, log P) by a fraction of a decade, linear ones (T, h, s, linear P)
+ * by a share of the span. Linear pressure starts at zero absolute at the lowest; T no lower than
+ * 10 K under the triple point.
  */
 export function fitDomain(
 	kind: ChartKind,
 	pressureScale: PressureScale,
 	inputs: DomainInputs
 ): Domain {
+	const view = VIEWS[kind];
 	const pts = [...pointsOf(inputs)];
-	const v = extent(pts.map((p) => p.v).filter((x) => x > 0));
-	const x = v ? padLog(v) : ([1e-3, 10] as [number, number]);
 	const lim = inputs.limits ?? {};
-	if (kind === 'T-v') {
-		const limitT = [lim.designTemperature?.value, lim.minimumTemperature?.value].filter(
+	const limitValues: Partial<Record<ViewProp, number[]>> = {
+		T: [lim.designTemperature?.value, lim.minimumTemperature?.value].filter(
 			(t): t is number => t !== undefined
-		);
-		const T = extent([...pts.map((p) => p.T), ...limitT]);
-		const floor = inputs.triple ? inputs.triple.T - 10 : 0;
-		return { x, y: T ? padLinear(T, Math.max(0, floor)) : [273.15, 673.15] };
-	}
-	const limitP = [lim.designPressure?.value, lim.reliefSetPressure?.value].filter(
-		(p): p is number => p !== undefined
-	);
-	const P = extent([...pts.map((p) => p.P), ...limitP].filter((p) => p > 0));
-	if (pressureScale === 'log') return { x, y: P ? padLog(P) : [1e3, 1e7] };
-	return { x, y: P ? padLinear([0, P[1]], 0) : [0, 1e7] };
+		),
+		P: [lim.designPressure?.value, lim.reliefSetPressure?.value].filter(
+			(p): p is number => p !== undefined
+		)
+	};
+	const axis = (prop: ViewProp, type: 'log' | 'linear', withLimits: boolean): [number, number] => {
+		const values = [...pts.map((p) => p[prop]), ...(withLimits ? (limitValues[prop] ?? []) : [])];
+		if (prop === 'v') {
+			const v = extent(values.filter((x) => x > 0));
+			return v ? padLog(v) : [1e-3, 10];
+		}
+		if (prop === 'T') {
+			const T = extent(values);
+			const floor = inputs.triple ? inputs.triple.T - 10 : 0;
+			return T ? padLinear(T, Math.max(0, floor)) : [273.15, 673.15];
+		}
+		if (prop === 'P') {
+			const P = extent(values.filter((p) => p > 0));
+			if (type === 'log') return P ? padLog(P) : [1e3, 1e7];
+			return P ? padLinear([0, P[1]], 0) : [0, 1e7];
+		}
+		const e = extent(values);
+		return e ? padLinear(e) : prop === 'h' ? [0, 3e6] : [0, 1e4];
+	};
+	// limits widen the y axis only, as on the first two views (a limit is a rule across it there)
+	return {
+		x: axis(view.x.prop, xScaleType(kind, pressureScale), false),
+		y: axis(view.y.prop, yScaleType(kind, pressureScale), true)
+	};
 }
 
 /** Trim a tick label: "500.0" → "500", "0.250" → "0.25". */

@@ -1,8 +1,8 @@
 import type { Crossing, Process, State } from '$lib/thermo/types';
 import type { DesignLimits } from '$lib/sheets/frame';
 
-/** Which property diagram: temperature or pressure against specific volume (always log v). */
-export type ChartKind = 'T-v' | 'P-v';
+/** Which property diagram (the five views, described as data in views.ts). */
+export type { ChartKind } from './views';
 export type PressureScale = 'log' | 'linear';
 
 /** Saturation lines as `GET /api/v1/fluids/{id}/saturation` returns them (triple point → critical point). */
@@ -28,16 +28,19 @@ export interface FluidRange {
 	Pmax: number;
 }
 
-/** A point of a background line or limit curve, SI. */
+/** A point of a background line or limit curve, SI; h and s where the views that need them are drawn. */
 export interface CurvePoint {
 	T: number;
 	P: number;
 	v: number;
+	h?: number;
+	s?: number;
 }
 
-export type IsolineKind = 'isobar' | 'isotherm' | 'isochore';
+export type IsolineKind =
+	'isobar' | 'isotherm' | 'isochore' | 'isentrope' | 'isenthalp' | 'quality';
 
-/** A background line of constant P, T or v. `value` is SI (Pa absolute, K, m³/kg). */
+/** A background line of constant P, T, v, s, h or x. `value` is SI (Pa absolute, K, m³/kg, J/(kg·K), J/kg, 1). */
 export interface Isoline {
 	kind: IsolineKind;
 	value: number;
@@ -76,6 +79,9 @@ export interface TracePoint {
 	T: number;
 	P: number;
 	v?: number | null;
+	/** filled in by the page where it can; a point is drawn on the views whose two properties it has */
+	h?: number | null;
+	s?: number | null;
 	/** the logger or the engine says the point is inside the vapor dome */
 	inDome?: boolean;
 	/**
@@ -96,11 +102,13 @@ export interface MeasuredTrace {
 	kind?: 'measured' | 'revision';
 }
 
-/** A position on the chart in SI: v always, and T (T–v) or P (P–v, absolute Pa). */
+/** A position on the chart in SI: the view's two properties (T and v on T–v, P and h on P–h …; P absolute). */
 export interface ChartCoords {
 	T?: number;
 	P?: number;
-	v: number;
+	v?: number;
+	h?: number;
+	s?: number;
 }
 
 export interface ClampResult {
@@ -109,7 +117,7 @@ export interface ClampResult {
 	reason: string | null;
 }
 
-/** Data-space window: x is v (m³/kg), y is T (K) or P (Pa absolute). */
+/** Data-space window in SI: x and y are the view's axis properties (v and T on T–v …). */
 export interface Domain {
 	x: [number, number];
 	y: [number, number];

@@ -12,12 +12,14 @@
  */
 import type { AddPointEvent, NudgeEvent, StateDragEvent } from '$lib/charts/chart';
 import { fitDomain } from '$lib/charts/scales';
+import { pairInputs, VIEWS } from '$lib/charts/views';
 import type {
 	ChartCoords,
 	ChartKind,
 	ChartSelection,
 	DesignLimits as ChartLimits,
 	Isoline,
+	IsolineKind,
 	MeasuredTrace,
 	SaturationCurve
 } from '$lib/charts/types';
@@ -53,6 +55,8 @@ import {
 	type PathView
 } from '$lib/sheets/doc';
 import { History } from './history';
+import { lineSpans, lineValues } from '$lib/sheets/isolines';
+import { shownLines } from '$lib/sheets/chart-views';
 import {
 	startCandidatesOf,
 	startOptions,
@@ -61,7 +65,6 @@ import {
 	withWindow,
 	type StateCandidate
 } from '$lib/sheets/choice';
-import { isobarValues, isothermValues } from '$lib/sheets/isolines';
 import * as edits from './edits';
 import type { Edit } from './edits';
 import { frameLimits, frameLines } from '$lib/sheets/frame';
@@ -180,7 +183,8 @@ export class SheetEditor {
 
 	fluid = $state.raw<FluidInfo>(null as unknown as FluidInfo);
 	saturation = $state.raw<SaturationCurve | null>(null);
-	isolines = $state.raw<{ tv: Isoline[]; pv: Isoline[] }>({ tv: [], pv: [] });
+	/** background lines by kind, for the kinds the shown views draw (chart-views.ts) */
+	isolines = $state.raw<Partial<Record<IsolineKind, Isoline[]>>>({});
 	limitCurves = $state.raw<{ isobars: Isoline[]; isotherms: Isoline[] }>({
 		isobars: [],
 		isotherms: []
@@ -484,8 +488,7 @@ export class SheetEditor {
 		const fix = this.#fix();
 		if (drag.kind === 'state' && drag.key === 'start') {
 			const next = cloneDoc(base);
-			next.spec.start =
-				drag.chart === 'T-v' ? { T: coords.T!, v: coords.v } : { P: coords.P!, v: coords.v };
+			next.spec.start = pairInputs(drag.chart, coords) as Inputs;
 			delete next.startSpec;
 			return { doc: next, note: null };
 		}
@@ -623,6 +626,7 @@ export class SheetEditor {
 		if (
 			index > 0 &&
 			legs[index - 1].process === 'isochoric' &&
+			VIEWS[chart].x.prop === 'v' &&
 			(e.direction === 'left' || e.direction === 'right')
 		) {
 			this.#note(
@@ -660,11 +664,9 @@ export class SheetEditor {
 		const e = this.engine;
 		if (!e) return null;
 		try {
-			return e.fixState(
-				this.doc.spec.fluid,
-				chart === 'T-v' ? { T: c.T!, v: c.v } : { P: c.P!, v: c.v },
-				{ near: this.view?.states[0]?.state }
-			);
+			return e.fixState(this.doc.spec.fluid, pairInputs(chart, c) as Inputs, {
+				near: this.view?.states[0]?.state
+			});
 		} catch {
 			return null;
 		}
@@ -974,17 +976,19 @@ export class SheetEditor {
 		const want = frameLines(
 			f,
 			this.doc,
-			(this.committedView?.states ?? []).map((s) => s.state)
+			(this.committedView?.states ?? []).map((s) => s.state),
+			this.saturation
 		);
-		const key = JSON.stringify([f.id, want.isobars, want.isotherms]);
+		const key = JSON.stringify([f.id, want.lines]);
 		if (key !== this.#isoKey) {
 			this.#isoKey = key;
 			try {
-				const [tv, pv] = await Promise.all([
-					getIsolines(f.id, 'isobar', want.isobars),
-					getIsolines(f.id, 'isotherm', want.isotherms)
-				]);
-				if (this.#isoKey === key) this.isolines = { tv, pv };
+				const got = await Promise.all(
+					want.lines.map(
+						async ([kind, values]) => [kind, await getIsolines(f.id, kind, values)] as const
+					)
+				);
+				if (this.#isoKey === key) this.isolines = Object.fromEntries(got);
 			} catch {
 				this.#isoKey = '';
 			}

@@ -5,6 +5,7 @@
  * property of the leg's target kind becomes the new target. Pure: the engine comes in as `fix`.
  */
 import type { ChartCoords, ChartKind, PressureScale } from '$lib/charts/types';
+import { axisScaleType, VIEWS, type ViewProp } from '$lib/charts/views';
 import type { Inputs, Process, State, TargetName } from '$lib/thermo/types';
 import { INVARIANT, type EditableProp } from '$lib/sheets/doc';
 
@@ -15,28 +16,31 @@ export type FixFn = (inputs: Inputs) => State;
 export interface ScreenMetric {
 	kind: ChartKind;
 	pressureScale: PressureScale;
-	/** the y span of the window (K on T–v, Pa on P–v) */
+	/** the y span of the window, SI (K on T–v, Pa on P–v and P–h, J/kg on h–s) */
 	ySpan: [number, number];
-	/** the v span of the window, m³/kg */
+	/** the x span of the window, SI (m³/kg on T–v and P–v, J/kg on P–h, J/(kg·K) on T–s and h–s) */
 	vSpan: [number, number];
 	/** plot width / plot height in px */
 	aspect: number;
 }
 
-function yOf(kind: ChartKind, s: { T: number; P: number }) {
-	return kind === 'T-v' ? s.T : s.P;
+/** Where a value sits across a span, 0…1, on a log or linear axis. */
+function across(type: 'log' | 'linear', q: number, span: [number, number]): number {
+	return type === 'log'
+		? Math.log10(q / span[0]) / (Math.log10(span[1] / span[0]) || 1)
+		: (q - span[0]) / (span[1] - span[0] || 1);
 }
 
-/** Screen-like coordinates (plot heights) of a data point. */
-function screen(m: ScreenMetric, v: number, y: number): [number, number] {
-	const lv = Math.log10(m.vSpan[1] / m.vSpan[0]) || 1;
-	const sx = (Math.log10(v / m.vSpan[0]) / lv) * m.aspect;
-	const logY = m.kind === 'P-v' && m.pressureScale === 'log';
-	const sy = logY
-		? Math.log10(y / m.ySpan[0]) / (Math.log10(m.ySpan[1] / m.ySpan[0]) || 1)
-		: (y - m.ySpan[0]) / (m.ySpan[1] - m.ySpan[0] || 1);
-	return [sx, sy];
+/** Screen-like coordinates (plot heights) of a point given by the view's x and y properties. */
+function screen(m: ScreenMetric, xq: number, yq: number): [number, number] {
+	const view = VIEWS[m.kind];
+	return [
+		across(axisScaleType(view.x, m.pressureScale), xq, m.vSpan) * m.aspect,
+		across(axisScaleType(view.y, m.pressureScale), yq, m.ySpan)
+	];
 }
+
+const prop = (c: { [K in ViewProp]?: number }, k: ViewProp): number => c[k] ?? NaN;
 
 /** The state on the constraint line of `process` through `from` at specific volume `v`. */
 export function stateAtV(
@@ -86,23 +90,29 @@ export function projectOntoLeg(
 	n?: number,
 	hint?: number
 ): State | null {
+	const view = VIEWS[metric.kind];
+	const [xp, yp] = view.pair;
 	if (process === 'isochoric') {
-		return tryState(() =>
-			metric.kind === 'T-v' ? fix({ T: coords.T!, v: from.v }) : fix({ P: coords.P!, v: from.v })
-		);
+		// v is fixed: the pointer's y property (T, P or h) is the other of the pair
+		return tryState(() => fix({ [yp]: prop(coords, yp), v: from.v } as Inputs));
 	}
-	const target = screen(metric, coords.v, metric.kind === 'T-v' ? coords.T! : coords.P!);
+	const target = screen(metric, prop(coords, xp), prop(coords, yp));
 	const dist = (s: State) => {
-		const p = screen(metric, s.v, yOf(metric.kind, s));
+		const p = screen(metric, s[xp], s[yp]);
 		return Math.hypot(p[0] - target[0], p[1] - target[1]);
 	};
 	const at = (lv: number) => tryState(() => stateAtV(process, from, 10 ** lv, fix, n));
-	// Sample a window of v around the pointer (and the previous answer while dragging: the
-	// nearest point moves little between two pointer moves), then refine the best bracket.
-	const near = hint !== undefined && hint > 0 ? hint : coords.v;
+	// The line is followed in v on every view. Sample a window of v around the pointer (and the
+	// previous answer while dragging: the nearest point moves little between two pointer moves),
+	// then refine the best bracket. Off the v views the pointer's own v comes from its pair.
+	const pointerV =
+		coords.v ??
+		tryState(() => fix({ [xp]: prop(coords, xp), [yp]: prop(coords, yp) } as Inputs))?.v;
+	const near = hint !== undefined && hint > 0 ? hint : (pointerV ?? from.v);
+	const here = pointerV ?? near;
 	const width = hint !== undefined ? 0.25 : 0.8;
-	const lo = Math.min(Math.log10(coords.v), Math.log10(near)) - width;
-	const hi = Math.max(Math.log10(coords.v), Math.log10(near)) + width;
+	const lo = Math.min(Math.log10(here), Math.log10(near)) - width;
+	const hi = Math.max(Math.log10(here), Math.log10(near)) + width;
 	const N = Math.min(40, Math.max(8, Math.ceil((hi - lo) / 0.05)));
 	let best: { lv: number; s: State; d: number } | null = null;
 	for (let i = 0; i <= N; i++) {
@@ -165,7 +175,7 @@ export function defaultTargetKind(
 ): EditableProp {
 	switch (process) {
 		case 'isochoric':
-			return kind === 'T-v' ? 'T' : 'P';
+			return VIEWS[kind].pair.includes('T') ? 'T' : 'P';
 		case 'isobaric':
 			return inDome(end) ? 'x' : 'T';
 		case 'isothermal':
@@ -209,7 +219,7 @@ export function targetFor(
 	if (ok) return { target: { [wanted]: valueOf(end, wanted)! }, note: null };
 	let fallback = defaultTargetKind(process, end, kind, n);
 	if (valueOf(end, fallback) === null || fallback === INVARIANT[process])
-		fallback = process === 'isochoric' ? (kind === 'T-v' ? 'T' : 'P') : 'v';
+		fallback = process === 'isochoric' ? (VIEWS[kind].pair.includes('T') ? 'T' : 'P') : 'v';
 	const why =
 		wanted === 'x'
 			? 'this end lies outside the vapor dome, where there is no quality'

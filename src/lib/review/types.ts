@@ -1,5 +1,5 @@
 import type { DesignLimits as ChartLimits } from '../charts/types';
-import type { FluidInfo, Isoline, PathResult, SaturationCurve } from '../thermo/types';
+import type { FluidInfo, Isoline, IsolineKind, PathResult, SaturationCurve } from '../thermo/types';
 import type { Anchor, SheetDoc, SheetStatus } from '../sheets/types';
 import type { RejectedLine, TraceColumn, TracePoint } from '../traces/types';
 
@@ -7,7 +7,8 @@ import type { RejectedLine, TraceColumn, TracePoint } from '../traces/types';
 export interface ChartFrame {
 	fluid: FluidInfo;
 	saturation: SaturationCurve | null;
-	isolines: { tv: Isoline[]; pv: Isoline[] };
+	/** background lines by kind: the kinds the sheet's shown views draw (sheets/chart-views.ts) */
+	isolines: Partial<Record<IsolineKind, Isoline[]>>;
 	limits: ChartLimits;
 }
 

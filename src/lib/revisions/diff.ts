@@ -173,6 +173,15 @@ function presentationChanges(a: SheetDoc, b: SheetDoc): ValueChange[] {
 	out.push(change('chart.view', 'chart view', null, a.chart.view, b.chart.view));
 	out.push(
 		change(
+			'chart.lines',
+			'background lines',
+			null,
+			a.chart.lines?.join(', ') ?? 'each view’s own',
+			b.chart.lines?.join(', ') ?? 'each view’s own'
+		)
+	);
+	out.push(
+		change(
 			'chart.pressureScale',
 			'pressure axis',
 			null,

@@ -5,6 +5,8 @@ import { vesselDoc } from '$lib/revisions/test-fixtures';
 import { frameLimits, frameLines } from './frame';
 
 const water = getFluid('water');
+const byKind = (want: ReturnType<typeof frameLines>, kind: string) =>
+	want.lines.find(([k]) => k === kind)?.[1] ?? [];
 
 describe('frameLines', () => {
 	it('keeps background and limit lines inside the fluid range, limit values as set', () => {
@@ -15,12 +17,12 @@ describe('frameLines', () => {
 			designTemperature: 500,
 			minimumTemperature: 1
 		};
-		const want = frameLines(water, doc, []);
-		expect(want.isobars.length).toBeGreaterThan(2);
-		expect(want.isobars.every((p) => p <= water.limits.Pmax)).toBe(true);
-		expect(want.isotherms.every((t) => t >= water.limits.Tmin && t <= water.limits.Tmax)).toBe(
-			true
-		);
+		const want = frameLines(water, doc, [], null);
+		const isobars = byKind(want, 'isobar');
+		const isotherms = byKind(want, 'isotherm');
+		expect(isobars.length).toBeGreaterThan(2);
+		expect(isobars.every((p) => p <= water.limits.Pmax)).toBe(true);
+		expect(isotherms.every((t) => t >= water.limits.Tmin && t <= water.limits.Tmax)).toBe(true);
 		// a relief pressure above the fluid's range and a temperature below its triple point have no curve
 		expect(want.limitIsobars).toEqual([1_101_325]);
 		expect(want.limitIsotherms).toEqual([500]);
@@ -28,18 +30,19 @@ describe('frameLines', () => {
 
 	it('draws no background lines when the sheet hides them, but keeps the limit curves', () => {
 		const doc = vesselDoc();
-		const want = frameLines(water, { ...doc, chart: { ...doc.chart, isolines: false } }, []);
-		expect(want.isobars).toEqual([]);
-		expect(want.isotherms).toEqual([]);
+		const want = frameLines(water, { ...doc, chart: { ...doc.chart, isolines: false } }, [], null);
+		expect(want.lines.flatMap(([, values]) => values)).toEqual([]);
 		expect(want.limitIsobars).toEqual([1_101_325, 1_101_325]);
 	});
 
 	it('widens the isobar range to the states of the path', () => {
 		const doc = vesselDoc();
 		const high = { ...water.critical, P: 2 * water.critical.P };
-		const plain = frameLines(water, doc, []);
-		const wide = frameLines(water, doc, [high as never]);
-		expect(Math.max(...wide.isobars)).toBeGreaterThan(Math.max(...plain.isobars));
+		const plain = frameLines(water, doc, [], null);
+		const wide = frameLines(water, doc, [high as never], null);
+		expect(Math.max(...byKind(wide, 'isobar'))).toBeGreaterThan(
+			Math.max(...byKind(plain, 'isobar'))
+		);
 	});
 });
 

@@ -2,11 +2,15 @@ import type {
 	FluidInfo,
 	DesignLimits as SpecLimits,
 	Isoline,
+	IsolineKind,
 	IsolinePoint,
+	SaturationCurve,
 	State
 } from '$lib/thermo/types';
 import type { UnitPrefs } from '$lib/units/prefs';
-import { isobarValues, isothermValues } from './isolines';
+import { lineSpans, lineValues } from './isolines';
+import { shownLines } from './chart-views';
+import type { ChartPrefs } from './types';
 
 /*
  * The chart's frame around a path — which background isolines and design-limit curves to draw —
@@ -32,39 +36,36 @@ export interface DesignLimits {
 	minimumTemperature?: DesignLimit | null;
 }
 
-/** The values (SI) of the lines a frame needs: background isobars/isotherms and limit curves. */
+/** The values (SI) of the lines a frame needs: background lines by kind and limit curves. */
 export interface FrameLines {
-	isobars: number[];
-	isotherms: number[];
+	/** each background line kind the sheet's shown views draw, with its values */
+	lines: Array<readonly [IsolineKind, number[]]>;
 	limitIsobars: number[];
 	limitIsotherms: number[];
 }
 
 /**
- * Background lines at round values in the sheet's units over the range the path and the dome
- * span (none when the sheet hides isolines), and the curves of the design limits, all inside the
- * fluid's range.
+ * Background lines of every kind the sheet's shown views draw (sheets/chart-views.ts), at round
+ * values in the sheet's units over what the path and the dome span (none when the sheet hides
+ * isolines), and the curves of the design limits, all inside the fluid's range.
  */
 export function frameLines(
 	fluid: FluidInfo,
-	doc: { units: UnitPrefs; chart: { isolines: boolean }; spec: { limits?: SpecLimits } },
-	states: State[]
+	doc: { units: UnitPrefs; chart: ChartPrefs; spec: { limits?: SpecLimits } },
+	states: State[],
+	saturation: SaturationCurve | null
 ): FrameLines {
 	const f = fluid;
-	const maxP = Math.max(f.critical.P, ...states.map((s) => s.P));
-	const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.P));
-	const maxT = Math.max(f.critical.T, ...states.map((s) => s.T));
-	const isobars = doc.chart.isolines
-		? isobarValues({ min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) }, doc.units).filter(
-				(v) => v <= f.limits.Pmax
-			)
-		: [];
-	const isotherms = doc.chart.isolines
-		? isothermValues(
-				{ min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) },
-				doc.units
-			).filter((v) => v >= f.limits.Tmin && v <= f.limits.Tmax)
-		: [];
+	const spans = lineSpans(f, saturation, states);
+	const inRange = (kind: IsolineKind, v: number) =>
+		kind === 'isobar'
+			? v <= f.limits.Pmax
+			: kind === 'isotherm'
+				? v >= f.limits.Tmin && v <= f.limits.Tmax
+				: true;
+	const lines = shownLines(doc.chart).map(
+		(kind) => [kind, lineValues(kind, spans, doc.units).filter((v) => inRange(kind, v))] as const
+	);
 	const lim = doc.spec.limits ?? {};
 	const limitIsobars = [lim.designPressure, lim.reliefSetPressure].filter(
 		(v): v is number => typeof v === 'number' && v <= f.limits.Pmax
@@ -72,7 +73,7 @@ export function frameLines(
 	const limitIsotherms = [lim.designTemperature, lim.minimumTemperature].filter(
 		(v): v is number => typeof v === 'number' && v >= f.triple.T && v <= f.limits.Tmax
 	);
-	return { isobars, isotherms, limitIsobars, limitIsotherms };
+	return { lines, limitIsobars, limitIsotherms };
 }
 
 /** The document's design limits with the curve each needs on the other diagram (when traced). */

@@ -1,10 +1,12 @@
 /**
- * Which background isolines a sheet draws: isobars on T–v and isotherms on P–v, at round values
+ * Which background isolines a sheet draws (isobars on T–v and isotherms on P–v unless the sheet
+ * chose others; see views.ts in $lib/charts for what each view offers), at round values
  * of the sheet's display unit (kPa, bar, MPa or psi; °C or °F) spread over the pressures and
  * temperatures the dome and the path span. Values are returned in SI for the isolines endpoint.
  */
 import { displayUnit, type UnitPrefs } from '../units/prefs';
 import type { UnitDef } from '../units/catalogue';
+import type { IsolineKind } from '../charts/types';
 
 export interface Span {
 	/** SI: Pa absolute or K */
@@ -101,4 +103,92 @@ export function isothermValues(span: Span, prefs: UnitPrefs): number[] {
 	return linearRoundValues(lo + pad, hi + pad * 3, 7).map((d) =>
 		exactSI(d, unit, prefs.atmosphere)
 	);
+}
+
+/** The spans a sheet's background lines cover, SI: P Pa absolute, T K, v m³/kg, h J/kg, s J/(kg·K). */
+export interface LineSpans {
+	P: Span;
+	T: Span;
+	v: Span;
+	h: Span;
+	s: Span;
+}
+
+interface SpanFluid {
+	triple: { T: number; P: number };
+	critical: { T: number; P: number };
+	limits: { Tmax: number; Pmax: number };
+}
+interface SpanState {
+	T: number;
+	P: number;
+	v: number;
+	h: number;
+	s: number;
+}
+
+/**
+ * What the lines span: pressures and temperatures as before (triple point to above the critical
+ * point or the path), v from the critical volume to the path's largest (at most the vapor's at
+ * the lowest saturation temperature), h and s over the dome and the path.
+ */
+export function lineSpans(
+	f: SpanFluid,
+	dome: { liquid: SpanState[]; vapor: SpanState[]; critical: SpanState } | null,
+	states: readonly SpanState[]
+): LineSpans {
+	const maxP = Math.max(f.critical.P, ...states.map((s) => s.P));
+	const minP = Math.min(f.triple.P * 2, ...states.map((s) => s.P));
+	const maxT = Math.max(f.critical.T, ...states.map((s) => s.T));
+	const domeStates = dome ? [...dome.liquid, ...dome.vapor] : [];
+	const all = [...domeStates, ...states];
+	const ext = (k: 'h' | 's') => {
+		const vals = all.map((s) => s[k]).filter(Number.isFinite);
+		return vals.length ? { min: Math.min(...vals), max: Math.max(...vals) } : { min: 0, max: 0 };
+	};
+	const vc = dome?.critical.v ?? Math.min(...states.map((s) => s.v));
+	const vTop = Math.max(vc * 100, ...states.map((s) => s.v * 2));
+	return {
+		P: { min: minP, max: Math.min(maxP * 1.5, f.limits.Pmax) },
+		T: { min: f.triple.T, max: Math.min(maxT * 1.08, f.limits.Tmax) },
+		v: { min: vc, max: dome ? Math.min(vTop, dome.vapor[0]?.v ?? vTop) : vTop },
+		h: ext('h'),
+		s: ext('s')
+	};
+}
+
+/** The nine quality lines drawn inside the dome. */
+export const QUALITY_VALUES: readonly number[] = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
+
+/**
+ * Values (SI) of the background lines of one kind, round in the sheet's display unit: isobars
+ * and isotherms as above, isochores at 1-2-5 steps of the v unit, isentropes and isenthalps at
+ * round steps of the s and h units (at most eight), quality lines at x = 0.1 … 0.9.
+ */
+export function lineValues(kind: IsolineKind, spans: LineSpans, prefs: UnitPrefs): number[] {
+	const atm = prefs.atmosphere;
+	switch (kind) {
+		case 'isobar':
+			return isobarValues(spans.P, prefs);
+		case 'isotherm':
+			return isothermValues(spans.T, prefs);
+		case 'quality':
+			return [...QUALITY_VALUES];
+		case 'isochore': {
+			const unit = displayUnit('specificVolume', prefs);
+			return logRoundValues(
+				unit.fromSI(spans.v.min, atm) * 1.05,
+				unit.fromSI(spans.v.max, atm),
+				7
+			).map((d) => exactSI(d, unit, atm));
+		}
+		default: {
+			const span = kind === 'isentrope' ? spans.s : spans.h;
+			const unit = displayUnit(kind === 'isentrope' ? 'specificEntropy' : 'specificEnergy', prefs);
+			const lo = unit.fromSI(span.min, atm);
+			const hi = unit.fromSI(span.max, atm);
+			const pad = (hi - lo) * 0.04;
+			return linearRoundValues(lo + pad, hi - pad, 8).map((d) => exactSI(d, unit, atm));
+		}
+	}
 }

@@ -28,7 +28,8 @@ import {
 	START,
 	newLegId
 } from './doc';
-import { SHEET_DOC_VERSION, type SheetDoc } from './types';
+import { SHEET_DOC_VERSION, type ChartView, type LineKind, type SheetDoc } from './types';
+import { CHART_VIEW_VALUES, LINE_KINDS } from './chart-views';
 import { cleanText, plainText, type TextKind } from '../plain-text';
 
 const INPUT_NAMES = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'] as const;
@@ -343,15 +344,28 @@ export const sheetDocSchema = z
 			units: unitsSchema,
 			chart: z.strictObject(
 				{
-					view: z.enum(['T-v', 'P-v', 'both'], {
-						error: 'chart.view must be "T-v", "P-v" or "both".'
+					view: z.enum(CHART_VIEW_VALUES as unknown as [ChartView, ...ChartView[]], {
+						error:
+							'chart.view must be one view ("T-v", "P-v", "P-h", "T-s" or "h-s"), two joined by "+" (e.g. "P-h+T-s"), or "both" (T–v and P–v).'
 					}),
 					pressureScale: z.enum(['log', 'linear'], {
 						error: 'chart.pressureScale must be "log" or "linear".'
 					}),
-					isolines: z.boolean({ error: 'chart.isolines must be true or false.' })
+					isolines: z.boolean({ error: 'chart.isolines must be true or false.' }),
+					lines: z
+						.array(
+							z.enum(LINE_KINDS as unknown as [LineKind, ...LineKind[]], {
+								error: `chart.lines holds line kinds: ${LINE_KINDS.join(', ')}.`
+							}),
+							{ error: `chart.lines must be a list of line kinds (${LINE_KINDS.join(', ')}).` }
+						)
+						.max(LINE_KINDS.length)
+						.refine((l) => new Set(l).size === l.length, {
+							message: 'chart.lines names each kind at most once.'
+						})
+						.optional()
 				},
-				{ error: 'chart must be an object { view, pressureScale, isolines }.' }
+				{ error: 'chart must be an object { view, pressureScale, isolines, lines? }.' }
 			),
 			titleBlock: titleBlockSchema
 		},

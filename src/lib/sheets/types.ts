@@ -34,13 +34,25 @@ export interface TitleBlockFields {
 	site: string;
 }
 
-export type ChartView = 'T-v' | 'P-v' | 'both';
+/** The diagram views (T–v, P–v, P–h, T–s, h–s; described in $lib/charts/views). */
+export type ChartKindId = 'T-v' | 'P-v' | 'P-h' | 'T-s' | 'h-s';
+
+/**
+ * The views a sheet shows: one, or two as "first+second" (e.g. "P-h+T-s"). "both" is T–v and P–v,
+ * what every sheet showed before there were more views, and stays its name.
+ */
+export type ChartView = ChartKindId | 'both' | `${ChartKindId}+${ChartKindId}`;
+
+/** Background line kinds a sheet may switch on (each drawn on the views where it is not an axis rule). */
+export type LineKind = 'isobar' | 'isotherm' | 'isochore' | 'isentrope' | 'isenthalp' | 'quality';
 
 export interface ChartPrefs {
 	view: ChartView;
 	pressureScale: 'log' | 'linear';
 	/** background isolines drawn */
 	isolines: boolean;
+	/** which kinds of background line; absent: each view's own default set */
+	lines?: LineKind[];
 }
 
 /**

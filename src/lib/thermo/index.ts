@@ -219,12 +219,13 @@ export {
 } from './solvers/legs.ts';
 
 /**
- * Background isolines (isobars Pa, isotherms K, isochores m³/kg) across the drawable range, through
- * the dome (solvers/isolines.ts).
+ * Background isolines (isobars Pa, isotherms K, isochores m³/kg, isentropes J/(kg·K), isenthalps
+ * J/kg) across the drawable range, through the dome, and quality lines inside it (solvers/isolines.ts).
  */
 export {
 	isolines,
 	ISOLINE_KINDS,
+	ISOLINE_UNITS,
 	ISOLINE_POINTS_DEFAULT,
 	ISOLINE_POINTS_MIN,
 	ISOLINE_POINTS_MAX,

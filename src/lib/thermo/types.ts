@@ -415,23 +415,28 @@ export interface PathResult {
 
 // ---- Isolines (GET /api/v1/fluids/{id}/isolines) ------------------------------------------------
 
-export type IsolineKind = 'isobar' | 'isotherm' | 'isochore';
+export type IsolineKind =
+	'isobar' | 'isotherm' | 'isochore' | 'isentrope' | 'isenthalp' | 'quality';
 
-/** A point of an isoline: T K, P Pa, v m³/kg. */
+/** A point of an isoline: T K, P Pa, v m³/kg, h J/kg, s J/(kg·K). */
 export interface IsolinePoint {
 	T: number;
 	P: number;
 	v: number;
+	h: number;
+	s: number;
 }
 
 /**
- * A background line of constant P (isobar), T (isotherm) or v (isochore) across the fluid's
- * drawable range, through the dome (flat in T for an isobar, flat in P for an isotherm below the
- * critical point), in order of rising T (isobar, isochore) or rising v (isotherm).
+ * A background line of constant P (isobar), T (isotherm), v (isochore), s (isentrope), h
+ * (isenthalp) across the fluid's drawable range, through the dome (flat in T for an isobar, flat in
+ * P for an isotherm below the critical point), in order of rising T (isobar, isochore) or rising v
+ * (isotherm, isentrope), or rising P (isenthalp); or a line of constant quality x inside the dome,
+ * from the triple point to the critical point in rising T.
  */
 export interface Isoline {
 	kind: IsolineKind;
-	/** Pa, K or m³/kg */
+	/** Pa, K, m³/kg, J/(kg·K), J/kg or 1 (quality) */
 	value: number;
 	points: IsolinePoint[];
 }

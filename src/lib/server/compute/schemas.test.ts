@@ -261,9 +261,24 @@ describe('compute request schemas', () => {
 		expect(
 			isolineQuerySchema.parse({ kind: 'isochore', values: '.001', points: '40' }).points
 		).toBe(40);
-		expect(issues(isolineQuerySchema, { kind: 'isentrope', values: '1' })).toMatch(
-			/kind must be one of isobar, isotherm, isochore/
+		expect(issues(isolineQuerySchema, { kind: 'isoline', values: '1' })).toMatch(
+			/kind must be one of isobar, isotherm, isochore, isentrope, isenthalp, quality/
 		);
+		// s and h count from a reference state: either sign; a quality lies from 0 to 1
+		expect(isolineQuerySchema.parse({ kind: 'isentrope', values: '-120,6500' }).values).toEqual([
+			-120, 6500
+		]);
+		expect(issues(isolineQuerySchema, { kind: 'quality', values: '0.5,1.5' })).toMatch(
+			/x lies from 0 to 1; got 1.5/
+		);
+		expect(issues(isolineQuerySchema, { kind: 'isochore', values: '0' })).toMatch(/positive/);
+		// an isenthalp point weighs four: 2 lines × 500 points fit, 3 × 400 do not
+		expect(
+			isolineQuerySchema.parse({ kind: 'isenthalp', values: '1,2', points: '500' }).points
+		).toBe(500);
+		expect(
+			issues(isolineQuerySchema, { kind: 'isenthalp', values: '1,2,3', points: '400' })
+		).toMatch(/3 lines × 400 points × 4 \(an isenthalp point costs 4\) = 4800 points.*points=333/);
 		expect(issues(isolineQuerySchema, { kind: 'isobar' })).toMatch(/values is required/);
 		expect(issues(isolineQuerySchema, { kind: 'isobar', values: '1e5,NaN' })).toMatch(
 			/"NaN" is not one/

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import {
 	API_ISOLINE_POINTS_MAX,
+	ISOLINE_WEIGHT,
 	API_PATH_POINTS_MAX,
 	API_SAMPLES_MAX,
 	API_SATURATION_POINTS_MAX,
@@ -427,7 +428,7 @@ export const isolineQuerySchema = z
 			values: z
 				.string({
 					error:
-						'values is required: comma-separated SI numbers, e.g. values=1e5,1e6 (Pa for isobars, K for isotherms, m³/kg for isochores).'
+						'values is required: comma-separated SI numbers, e.g. values=1e5,1e6 (Pa for isobars, K for isotherms, m³/kg for isochores, J/(kg·K) for isentropes, J/kg for isenthalps, 0…1 for quality lines).'
 				})
 				.transform((s, ctx) => {
 					const parts = s.split(',').map((p) => p.trim());
@@ -447,11 +448,11 @@ export const isolineQuerySchema = z
 						return z.NEVER;
 					}
 					const nums = parts.map(Number);
-					if (nums.some((n) => !(n > 0) || !Number.isFinite(n))) {
+					if (nums.some((n) => !Number.isFinite(n))) {
 						ctx.addIssue({
 							code: 'custom',
 							message:
-								'values must be positive, finite SI values (absolute pressure in Pa, temperature in K, v in m³/kg).'
+								'values must be finite SI values (absolute pressure in Pa, temperature in K, v in m³/kg, s in J/(kg·K), h in J/kg, x from 0 to 1).'
 						});
 						return z.NEVER;
 					}
@@ -472,13 +473,28 @@ export const isolineQuerySchema = z
 		{ error: objectError('the query', '?kind=isobar&values=1e5,1e6', ['kind', 'values', 'points']) }
 	)
 	.superRefine((q, ctx) => {
-		const total = q.values.length * q.points;
+		// s and h count from each fluid's reference state (either sign); a quality is 0…1
+		const signed = q.kind === 'isentrope' || q.kind === 'isenthalp';
+		const bad = q.values.find((v) =>
+			q.kind === 'quality' ? !(v >= 0 && v <= 1) : !signed && !(v > 0)
+		);
+		if (bad !== undefined)
+			ctx.addIssue({
+				code: 'custom',
+				path: ['values'],
+				message:
+					q.kind === 'quality'
+						? `A quality line's x lies from 0 to 1; got ${bad}. Send values such as 0.1,0.5,0.9.`
+						: `values must be positive, finite SI values (absolute pressure in Pa, temperature in K, v in m³/kg); got ${bad}.`
+			});
+		const weight = ISOLINE_WEIGHT[q.kind] ?? 1;
+		const total = q.values.length * q.points * weight;
 		if (total > API_ISOLINE_POINTS_MAX) {
-			const fit = Math.floor(API_ISOLINE_POINTS_MAX / q.values.length);
+			const fit = Math.floor(API_ISOLINE_POINTS_MAX / (q.values.length * weight));
 			ctx.addIssue({
 				code: 'custom',
 				path: ['points'],
-				message: `This asks for ${q.values.length} lines × ${q.points} points = ${total} points; at most ${API_ISOLINE_POINTS_MAX} per request (values × points). Send points=${fit} or less for ${q.values.length} lines, or fewer values per request.`
+				message: `This asks for ${q.values.length} lines × ${q.points} points${weight > 1 ? ` × ${weight} (an ${q.kind} point costs ${weight})` : ''} = ${total} points; at most ${API_ISOLINE_POINTS_MAX} per request (values × points${weight > 1 ? ' × weight' : ''}). Send points=${fit} or less for ${q.values.length} lines, or fewer values per request.`
 			});
 		}
 	});

@@ -9,14 +9,32 @@ describe('the chart frame on the server', () => {
 		const f = chartFrame(doc, [computePath(doc.spec)]);
 		expect(f.fluid.id).toBe('water');
 		expect(f.saturation?.liquid.length).toBeGreaterThan(50);
-		expect(f.isolines.tv.every((l) => l.kind === 'isobar')).toBe(true);
-		expect(f.isolines.pv.every((l) => l.kind === 'isotherm')).toBe(true);
-		expect(f.isolines.tv.length).toBeGreaterThan(2);
+		// T–v and P–v (the default views) draw isobars and isotherms, nothing else
+		expect(Object.keys(f.isolines).sort()).toEqual(['isobar', 'isotherm']);
+		expect(f.isolines.isobar!.every((l) => l.kind === 'isobar')).toBe(true);
+		expect(f.isolines.isotherm!.every((l) => l.kind === 'isotherm')).toBe(true);
+		expect(f.isolines.isobar!.length).toBeGreaterThan(2);
+		// a sheet on P–h and T–s gets those views' lines, each point with h and s
+		const ph = chartFrame({ ...doc, chart: { ...doc.chart, view: 'P-h+T-s' } }, [null]);
+		expect(Object.keys(ph.isolines).sort()).toEqual([
+			'isenthalp',
+			'isentrope',
+			'isobar',
+			'isotherm',
+			'quality'
+		]);
+		expect(ph.isolines.quality!.map((l) => l.value)).toEqual([
+			0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9
+		]);
+		for (const l of ph.isolines.isentrope!)
+			expect(
+				l.points.every((p) => Number.isFinite(p.h) && Math.abs(p.s / l.value - 1) < 1e-9)
+			).toBe(true);
 		// the design pressure (1 101 325 Pa a, set on the sheet) is drawn on T–v as its own isobar
 		expect(f.limits.designPressure?.value).toBe(1_101_325);
 		expect(f.limits.designPressure?.points?.length).toBeGreaterThan(10);
 		const off = chartFrame({ ...doc, chart: { ...doc.chart, isolines: false } }, [null]);
-		expect(off.isolines.tv).toEqual([]);
+		expect(off.isolines).toEqual({});
 	});
 
 	it('traces a fluid dome once', () => {

@@ -7,6 +7,7 @@ import {
 	stateExtras,
 	ThermoError,
 	type Isoline,
+	type IsolineKind,
 	type PathResult,
 	type SaturationCurve
 } from '$lib/thermo';
@@ -40,7 +41,7 @@ export function dome(fluid: string): SaturationCurve | null {
 	return d;
 }
 
-function lines(fluid: string, kind: 'isobar' | 'isotherm', values: number[]): Isoline[] {
+function lines(fluid: string, kind: IsolineKind, values: number[]): Isoline[] {
 	if (!values.length) return [];
 	try {
 		return engineIsolines(fluid, kind, values.slice(0, 40), 80);
@@ -54,14 +55,14 @@ function lines(fluid: string, kind: 'isobar' | 'isotherm', values: number[]): Is
 export function chartFrame(doc: SheetDoc, results: Array<PathResult | null>): ChartFrame {
 	const f = getFluid(doc.spec.fluid);
 	const states = results.flatMap((r) => r?.states ?? []).map((s) => s.state);
-	const want = frameLines(f, doc, states);
+	const saturation = dome(f.id);
+	const want = frameLines(f, doc, states, saturation);
 	return {
 		fluid: f,
-		saturation: dome(f.id),
-		isolines: {
-			tv: lines(f.id, 'isobar', want.isobars),
-			pv: lines(f.id, 'isotherm', want.isotherms)
-		},
+		saturation,
+		isolines: Object.fromEntries(
+			want.lines.map(([kind, values]) => [kind, lines(f.id, kind, values)])
+		),
 		limits: frameLimits(doc.spec.limits, {
 			isobars: lines(f.id, 'isobar', want.limitIsobars),
 			isotherms: lines(f.id, 'isotherm', want.limitIsotherms)

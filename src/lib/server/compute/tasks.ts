@@ -3,6 +3,7 @@ import {
 	computePath,
 	fixState,
 	isolines,
+	ISOLINE_UNITS,
 	saturationCurve,
 	stateExtras,
 	ThermoError,
@@ -20,7 +21,9 @@ import {
  * here, so the worker bundle (build/compute-worker.js) holds nothing but the engine.
  */
 
-export type IsolineKind = 'isobar' | 'isotherm' | 'isochore';
+import type { IsolineKind } from '$lib/thermo/types';
+
+export type { IsolineKind };
 
 export type ComputeTask =
 	| { kind: 'leg'; spec: LegSpec }
@@ -34,8 +37,6 @@ export type ThermoFailure = ReturnType<ThermoError['toJSON']>;
 
 /** A task's outcome: the answer's JSON text, or the engine's refusal. */
 export type TaskOutcome = { json: string } | { refused: ThermoFailure };
-
-const ISOLINE_UNIT = { isobar: 'Pa', isotherm: 'K', isochore: 'm³/kg' } as const;
 
 function answer(task: ComputeTask): unknown {
 	switch (task.kind) {
@@ -55,7 +56,7 @@ function answer(task: ComputeTask): unknown {
 			return {
 				fluid: task.fluid,
 				kind: task.line,
-				unit: ISOLINE_UNIT[task.line],
+				unit: ISOLINE_UNITS[task.line],
 				lines: isolines(task.fluid, task.line, task.values, task.points)
 			};
 		case 'saturation':
