@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import { getFluid } from '$lib/thermo';
-import type { Isoline } from '$lib/thermo/types';
 import { vesselDoc } from '$lib/revisions/test-fixtures';
 import { frameLimits, frameLines } from './frame';
 
@@ -47,7 +46,7 @@ describe('frameLines', () => {
 });
 
 describe('frameLimits', () => {
-	const isobar = (value: number): Isoline => ({
+	const isobar = (value: number) => ({
 		kind: 'isobar',
 		value,
 		points: [{ T: 400, P: value, v: 0.1 }]

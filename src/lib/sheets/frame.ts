@@ -1,9 +1,7 @@
 import type {
 	FluidInfo,
 	DesignLimits as SpecLimits,
-	Isoline,
 	IsolineKind,
-	IsolinePoint,
 	SaturationCurve,
 	State
 } from '$lib/thermo/types';
@@ -18,6 +16,21 @@ import type { ChartPrefs } from './types';
  * read-only pages (which trace them with the engine directly).
  */
 
+/** A point of a limit curve, SI; h and s where the views that need them are drawn. */
+export interface LinePoint {
+	T: number;
+	P: number;
+	v: number;
+	h?: number;
+	s?: number;
+}
+
+/** A traced line: its value (SI) and points. */
+interface TracedLine {
+	value: number;
+	points: LinePoint[];
+}
+
 /**
  * One design limit, SI (pressures absolute, Pa; temperatures K). `points` is the limit's own
  * isobar (for a pressure limit on T–v) or isotherm (for a temperature limit on P–v); without
@@ -25,7 +38,7 @@ import type { ChartPrefs } from './types';
  */
 export interface DesignLimit {
 	value: number;
-	points?: IsolinePoint[];
+	points?: LinePoint[];
 }
 
 /** The design limits as the charts draw them. */
@@ -79,10 +92,10 @@ export function frameLines(
 /** The document's design limits with the curve each needs on the other diagram (when traced). */
 export function frameLimits(
 	limits: SpecLimits | undefined,
-	curves: { isobars: Isoline[]; isotherms: Isoline[] }
+	curves: { isobars: TracedLine[]; isotherms: TracedLine[] }
 ): DesignLimits {
 	const lim = limits ?? {};
-	const curve = (list: Isoline[], value: number): IsolinePoint[] | undefined =>
+	const curve = (list: TracedLine[], value: number): LinePoint[] | undefined =>
 		list.find((l) => Math.abs(l.value / value - 1) < 1e-9)?.points;
 	const out: DesignLimits = {};
 	if (lim.designPressure !== undefined)
