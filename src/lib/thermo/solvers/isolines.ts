@@ -9,7 +9,7 @@ import { getCompiledFluid } from '../registry.ts';
 import type { Inputs, Isoline, IsolineKind, State } from '../types.ts';
 import { Curve, cptOfState, paramOf, type CPt, type Invariant } from './leg-curve.ts';
 import { fixStateOf } from './fix-state.ts';
-import { samplePieces, type Piece } from './legs.ts';
+import { samplePieces, type Piece } from './leg-points.ts';
 import { triplePressure } from './saturation.ts';
 
 export const ISOLINE_KINDS: readonly IsolineKind[] = ['isobar', 'isotherm', 'isochore'];
