@@ -3,18 +3,19 @@
  */
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
-import type { FixOptions, InputName, Inputs, State } from '../types.ts';
-import { checkOptions, inWindow, outsideWindow, setNear } from './choose.ts';
-import { flashPX } from './flash-p-x.ts';
+import { evalPoint, Point } from '../properties.ts';
+import { saturatedState } from '../state.ts';
+import type { FixOptions, InputName, Inputs, RootHint, State } from '../types.ts';
+import { checkOptions, choose, inWindow, outsideWindow, setNear } from './choose.ts';
+import { domeRoots, type DomeProp } from './dome.ts';
 import { flashTP } from './flash-t-p.ts';
-import { flashTRho } from './flash-t-v.ts';
-import { flashTX } from './flash-t-x.ts';
-import { flashXY } from './flash-x.ts';
 import { flashPRho, flashPY } from './isobar.ts';
 import { flashRhoY } from './isochore.ts';
 import { flashTY } from './isotherm.ts';
+import { locate, placedState } from './locate.ts';
 import { flashYY } from './plane.ts';
-import { checkP, checkT } from './range.ts';
+import { assertInRange, checkP, checkSaturationP, checkT } from './range.ts';
+import { satAtP, satAtT } from './saturation.ts';
 import { precisionOf } from './precision.ts';
 import { assertFluid } from './solid.ts';
 import { bandOf, fixOnLine, holdOutsideBand } from '../pseudo-pure.ts';
@@ -24,10 +25,63 @@ export type Key = 'T' | 'P' | 'rho' | 'u' | 'h' | 's' | 'x';
 
 export type Flash = (fl: Fluid, a: number, b: number, options: FixOptions) => State;
 
+const tRho = new Point();
+
+/** (T, ρ): one evaluation of the equation of state, then placed against the dome. */
+function flashTRho(fl: Fluid, T: number, rho: number): State {
+	evalPoint(fl, T, rho, tRho, 2);
+	const loc = locate(fl, tRho);
+	const st = placedState(fl, tRho, loc);
+	return loc.sat ? st : assertInRange(fl, st);
+}
+
+/** (T, x): saturation at T, then the mass-weighted mixture. */
+function flashTX(fl: Fluid, T: number, x: number): State {
+	if (T > fl.Tc)
+		throw new ThermoError(
+			'inconsistent-inputs',
+			`A quality exists only below the critical temperature of ${fl.id} (${fmt(fl.Tc)} K); T = ${fmt(T)} K is above it.`,
+			`Give a temperature below ${fmt(fl.Tc)} K with x, or give the state by two other properties.`
+		);
+	return saturatedState(fl, satAtT(fl, T), x);
+}
+
+/** (P, x): saturation at P, then the mass-weighted mixture. */
+function flashPX(fl: Fluid, P: number, x: number): State {
+	if (P > fl.Pc)
+		throw new ThermoError(
+			'inconsistent-inputs',
+			`A quality exists only below the critical pressure of ${fl.id} (${fmt(fl.Pc)} Pa); P = ${fmt(P)} Pa is above it.`,
+			`Give a pressure below ${fmt(fl.Pc)} Pa with x, or give the state by two other properties.`
+		);
+	checkSaturationP(fl, P);
+	return saturatedState(fl, satAtP(fl, P), x);
+}
+
+const DOME_UNIT: Record<DomeProp, string> = { v: 'm³/kg', u: 'J/kg', h: 'J/kg', s: 'J/(kg·K)' };
+
+/** States on or inside the dome with a given quality and one of v, u, h, s (several possible). */
+function flashXY(fl: Fluid, x: number, which: DomeProp, y: number, hint?: RootHint): State {
+	const what = `x = ${fmt(x)} and ${which} = ${fmt(y)} ${DOME_UNIT[which]}`;
+	const found = domeRoots(fl, { x }, which, y).map((r) => saturatedState(fl, r.sat, x));
+	return choose(
+		fl,
+		found,
+		hint,
+		what,
+		() =>
+			new ThermoError(
+				'inconsistent-inputs',
+				`No saturated ${fl.id} state has ${what}: along the saturation curve from the triple point to the critical point that quality never reaches this ${which}.`,
+				`Check the value and its units, or give the state by two other properties (for example T or P with x).`
+			)
+	);
+}
+
 /**
  * Flash for each of the 21 pairs, keyed "A,B" in ORDER (T, P, rho, u, h, s, x): along the
  * isotherm (isotherm.ts), the isobar (isobar.ts), the isochore and across the dome (isochore.ts),
- * the saturation curve (flash-x.ts, dome.ts), or on the (T, ln ρ) plane for two of u, h, s
+ * the saturation curve (flashXY below, dome.ts), or on the (T, ln ρ) plane for two of u, h, s
  * (plane.ts; in dilute vapor (u, h) hardly fixes P: h − u = Pv ≈ RT).
  */
 export const FLASHES: Record<string, Flash> = {

@@ -13,7 +13,7 @@ import type { Inputs, Isoline, IsolineKind, State } from '../types.ts';
 import { evalPoint, Point } from '../properties.ts';
 import { Curve, cptOfState, paramOf, type CPt, type Invariant } from './leg-curve.ts';
 import { fixStateOf } from './fix-state.ts';
-import { samplePieces, type Piece } from './legs.ts';
+import { samplePieces, type Piece } from './leg-points.ts';
 import { satAtT, triplePressure } from './saturation.ts';
 
 export const ISOLINE_KINDS: readonly IsolineKind[] = [

@@ -153,6 +153,29 @@ describe('pairs with several, touching or dilute-gas states (issue 11 audit inpu
 		}
 	});
 
+	it('finds dilute gas below the state grid floor (Pt·1e−5) from (u, h), for every fluid', () => {
+		// an identity check: the state is fixed from (T, ρ) by the engine, its u and h re-fixed, and
+		// the same T and P must come back. Carbon dioxide at 1091.06 K and 1.47 Pa was refused
+		// out-of-range: its triple-point pressure (0.518 MPa) puts the grid's floor near 5.2 Pa.
+		const cases: [string, number, number][] = [
+			['carbon-dioxide', 1091.06, 1.47],
+			['carbon-dioxide', 600, 0.5],
+			['ammonia', 500, 0.05],
+			['nitrogen', 300, 0.1],
+			['water', 600, 0.001]
+		];
+		for (const [fluid, T, P] of cases) {
+			const rho = fixState(fluid, { T, P }).rho;
+			const ref = fixState(fluid, { T, v: 1 / rho });
+			const found = answers(fluid, { u: ref.u, h: ref.h });
+			const hit = found.find((s) => Math.abs(s.T - T) < 1e-6 * T);
+			expect(hit, `${fluid} at ${T} K, ${P} Pa`).toBeDefined();
+			// P is barely fixed by (u, h) in dilute gas: held to the answer's own stated precision
+			const tolP = Math.max(1e-6, 4 * (hit?.precision?.P ?? 0));
+			expect(Math.abs((hit as State).P - P) / P).toBeLessThan(tolP);
+		}
+	});
+
 	it('finds water from (h, s) in gas at 0.1–10 Pa, far below the triple-point pressure', () => {
 		let refused = 0;
 		for (const T of [273.5, 291.73, 320, 353]) {

@@ -31,6 +31,10 @@ const NL = 18;
 const MAX_RUNS = 48;
 /** samples of the (u, h) contour scan in ln ρ */
 const CONTOUR_SAMPLES = 160;
+/** the (u, h) contour scan reaches dilute gas down to this pressure (Pa) at Tmax, whatever the grid's floor */
+const CONTOUR_FLOOR_P = 1e-4;
+/** samples of the contour scan between that floor and the grid's */
+const CONTOUR_DILUTE_SAMPLES = 32;
 /** a start within this fraction of a grid cell (in T, and in ln ρ) of an accepted state is not run */
 const SAME_START = 0.02;
 /** scaled residual below which a point between two candidates shows them to be one state */
@@ -370,6 +374,15 @@ export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number
 		const T = Tat(z);
 		if (Number.isFinite(T)) out.push([T, z]);
 	}
+	// below the grid's floor (Pt·1e−5: about 5 Pa for carbon dioxide) the gas is still in range;
+	// there R(ln ρ) is its dilute limit plus a term in ρ, so a coarse scan down to a common
+	// absolute floor brackets its zero
+	const zFloor = Math.log(CONTOUR_FLOOR_P / (fl.R * fl.Tmax));
+	if (zFloor < zMin)
+		for (const z of scanRoots(fn, zFloor, zMin, CONTOUR_DILUTE_SAMPLES, 1e-12)) {
+			const T = Tat(z);
+			if (Number.isFinite(T) && !out.some(([, z1]) => Math.abs(z1 - z) < 1e-9)) out.push([T, z]);
+		}
 	return out;
 }
 
