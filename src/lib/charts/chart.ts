@@ -138,8 +138,6 @@ export interface ChartController {
 	destroy(): void;
 }
 
-type G = Selection<SVGGElement, unknown, null, undefined>;
-
 const NUDGE_PX = { fine: 1, normal: 4, coarse: 20 } as const;
 const STATE_R = 9.5;
 const MARGIN = { right: 18, bottom: 46, left: 66 } as const;
