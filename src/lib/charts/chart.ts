@@ -4,7 +4,6 @@ import {
 	select,
 	zoom,
 	zoomIdentity,
-	type Selection,
 	type ZoomBehavior,
 	type ZoomTransform
 } from 'd3';

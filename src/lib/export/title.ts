@@ -2,7 +2,7 @@ import type { SignOff } from '$lib/revisions/sign-off';
 import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
 import { STATUS_LABEL } from '$lib/sheets/types';
 import { displayUnit, formatQuantity, NBSP, type UnitPrefs } from '$lib/units';
-import { isoDate, type MemoTitle } from './memo';
+import type { MemoTitle } from './memo';
 
 /** The fluid facts the title block names (a FluidInfo from GET /api/v1/fluids fits). */
 export interface TitleFluid {
