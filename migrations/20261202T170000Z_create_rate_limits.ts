@@ -4,7 +4,6 @@ import { columnTypes } from '../src/lib/server/db/dialect';
 // Rate-limit counters shared by every app process on one database (PostgreSQL deployments): a
 // token bucket (tokens, at) or a growing-delay counter (failures, at) per limit name and key.
 // A row untouched for a day is the same as no row and is deleted.
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
 export async function up(db: Kysely<any>): Promise<void> {
 	const t = columnTypes(db);
 	await db.schema
@@ -19,7 +18,6 @@ export async function up(db: Kysely<any>): Promise<void> {
 	await db.schema.createIndex('rate_limits_at').on('rate_limits').column('at').execute();
 }
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
 export async function down(db: Kysely<any>): Promise<void> {
 	await db.schema.dropTable('rate_limits').execute();
 }

@@ -107,13 +107,11 @@ async function geometry(drawing: Locator): Promise<Geometry> {
 				text: t.textContent ?? '',
 				box: bbox(t as SVGGraphicsElement)
 			}));
-		const texts = [...svg.querySelectorAll('text')]
-			.filter(visible)
-			.map((t) => ({
-				cls: t.getAttribute('class') ?? '',
-				text: t.textContent ?? '',
-				box: bbox(t as SVGGraphicsElement)
-			}));
+		const texts = [...svg.querySelectorAll('text')].filter(visible).map((t) => ({
+			cls: t.getAttribute('class') ?? '',
+			text: t.textContent ?? '',
+			box: bbox(t as SVGGraphicsElement)
+		}));
 		const holes = [...svg.querySelectorAll('mask rect.swc-mask-hole')].map((r) => ({
 			x: num(r, 'x'),
 			y: num(r, 'y'),

@@ -226,13 +226,11 @@ test('logger readings on the saturation line are drawn across the dome (v open, 
 		).toHaveCount(1);
 	}
 
-	await panel
-		.getByLabel(/Logger file/)
-		.setInputFiles({
-			name: 'broken.csv',
-			mimeType: 'text/csv',
-			buffer: Buffer.from('time,P [kPa],T [°C]\n0,100,20\n5,abc,21\n')
-		});
+	await panel.getByLabel(/Logger file/).setInputFiles({
+		name: 'broken.csv',
+		mimeType: 'text/csv',
+		buffer: Buffer.from('time,P [kPa],T [°C]\n0,100,20\n5,abc,21\n')
+	});
 	await panel.getByRole('button', { name: 'Upload trace' }).click();
 	const refusal = page.getByTestId('trace-refusal');
 	await expect(refusal).toContainText('The file has 3 problems; nothing was saved.');

@@ -263,13 +263,11 @@ test('a measured trace uploads and shows on the chart; a malformed file is refus
 	await expect(line).toHaveCount(1);
 	expect((await line.getAttribute('d'))?.length ?? 0).toBeGreaterThan(10);
 
-	await panel
-		.getByLabel(/Logger file/)
-		.setInputFiles({
-			name: 'broken.csv',
-			mimeType: 'text/csv',
-			buffer: Buffer.from('time [s],P [kPa g],T [°C]\n0,0,80\n60,abc,90\n120;40;100\n180,50,\n')
-		});
+	await panel.getByLabel(/Logger file/).setInputFiles({
+		name: 'broken.csv',
+		mimeType: 'text/csv',
+		buffer: Buffer.from('time [s],P [kPa g],T [°C]\n0,0,80\n60,abc,90\n120;40;100\n180,50,\n')
+	});
 	await panel.getByRole('button', { name: 'Upload trace' }).click();
 	const refusal = designer.getByTestId('trace-refusal');
 	await expect(refusal).toContainText('Nothing was saved');

@@ -144,6 +144,7 @@ function mutated(template: () => unknown) {
 				if (kind === 'set') body = value;
 				continue;
 			}
+			// eslint-disable-next-line @typescript-eslint/no-explicit-any -- walks arbitrary JSON by a random path
 			const parent = path.slice(0, -1).reduce<any>((o, k) => o?.[k], body);
 			if (!parent || typeof parent !== 'object') continue;
 			const last = path[path.length - 1];
@@ -306,7 +307,10 @@ const request: fc.Arbitrary<Req> = fc
 				'POST',
 				sheetSeg.map((s) => `${S(s)}/notes`),
 				() => ({
-					anchor: { kind: 'leg', legId: (doc as any).spec.legs[0].id },
+					anchor: {
+						kind: 'leg',
+						legId: (doc as { spec: { legs: { id: string }[] } }).spec.legs[0].id
+					},
 					body: 'Fuzzed note @Maren',
 					revision: 1
 				})

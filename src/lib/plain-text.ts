@@ -14,9 +14,11 @@ import { z } from 'zod';
 
 export type TextKind = 'line' | 'lines';
 
+/* eslint-disable no-control-regex -- these patterns exist to find control characters */
 const IN_LINE = /[\u0000-\u001f\u007f]/;
 const IN_LINES = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
 const ALL_CONTROLS = /[\u0000-\u001f\u007f]/g;
+/* eslint-enable no-control-regex */
 
 const NAMES: Record<number, string> = {
 	0: 'NUL',

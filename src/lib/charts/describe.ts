@@ -1,28 +1,12 @@
-import type { Phase, State } from '$lib/thermo/types';
+import { DESIGN_LIMIT_LABEL, PHASE_NAME, type Phase, type State } from '$lib/thermo/types';
 import { formatQuantity, type UnitPrefs } from '$lib/units';
 import { PROCESS_ORDER, processStyle } from './encoding';
 import { VIEWS } from './views';
 import type { ChartKind, ChartLeg, ChartState, DesignLimitName, DesignLimits } from './types';
 
-const PHASE_NAMES: Record<Phase, string> = {
-	'compressed-liquid': 'compressed liquid',
-	'saturated-liquid': 'saturated liquid',
-	'saturated-mixture': 'saturated mixture',
-	'saturated-vapor': 'saturated vapor',
-	'superheated-vapor': 'superheated vapor',
-	'supercritical-fluid': 'supercritical fluid'
-};
-
 export function phaseName(phase: Phase): string {
-	return PHASE_NAMES[phase];
+	return PHASE_NAME[phase];
 }
-
-export const LIMIT_NAMES: Record<DesignLimitName, string> = {
-	designPressure: 'design pressure',
-	reliefSetPressure: 'relief set pressure',
-	designTemperature: 'design temperature',
-	minimumTemperature: 'minimum temperature'
-};
 
 export const LIMIT_ORDER: readonly DesignLimitName[] = [
 	'reliefSetPressure',
@@ -72,7 +56,7 @@ export function legAriaLabel(leg: ChartLeg, states: readonly ChartState[]): stri
 }
 
 export function limitText(name: DesignLimitName, value: number, prefs: UnitPrefs): string {
-	return `${LIMIT_NAMES[name]} ${isPressureLimit(name) ? shortP(value, prefs) : shortT(value, prefs)}`;
+	return `${DESIGN_LIMIT_LABEL[name]} ${isPressureLimit(name) ? shortP(value, prefs) : shortT(value, prefs)}`;
 }
 
 export interface ChartSummaryInput {

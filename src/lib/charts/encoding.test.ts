@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+// eslint-disable-next-line no-restricted-imports -- checks the chart's colours against the site's Tailwind theme
 import config from '../../../tailwind.config';
 import { dashSignature, LIMIT_STROKE, PROCESS_ORDER, PROCESS_STYLES } from './encoding';
 import { keyEntries, layoutKey } from './key';

@@ -57,7 +57,7 @@ export async function apiCall<T>(f: Fetch, url: string, init: RequestInit = {}):
 		throw new OfflineError(e);
 	}
 	if (res.status === 204) return undefined as T;
-	let body: unknown = null;
+	let body: unknown;
 	try {
 		body = await res.json();
 	} catch {

@@ -87,7 +87,7 @@ import { fillStart, type FillSpec } from '$lib/sheets/fill';
 import { readAcrossSaturation, type SaturationReading } from '$lib/sheets/saturation-input';
 import { saturationTarget } from '$lib/sheets/saturation-target';
 
-type Engine = typeof import('../thermo');
+type Engine = typeof import('$lib/thermo');
 
 /** Points per leg while dragging (the engine's least): half the work per answer; the end of the gesture redraws at full detail. */
 const DRAG_SAMPLES = 20;
@@ -312,7 +312,7 @@ export class SheetEditor {
 
 	async loadEngine(): Promise<Engine> {
 		if (this.engine) return this.engine;
-		const e = await import('../thermo');
+		const e = await import('$lib/thermo');
 		this.engine = e;
 		return e;
 	}

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
-import type { PathResult, State } from '../thermo/types';
-import { unitPrefs } from '../units';
+import type { PathResult, State } from '$lib/thermo/types';
+import { unitPrefs } from '$lib/units';
 import {
 	composeMemoFigure,
 	escapeXml,
@@ -21,17 +21,17 @@ import {
 	type TitleInput
 } from './title';
 import { pngSize } from './png';
-import { vesselDoc } from '../revisions/test-fixtures';
-import { CAUTION_TITLE, LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
+import { vesselDoc } from '$lib/revisions/test-fixtures';
+import { CAUTION_TITLE, LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '$lib/cautions';
 import { columnPoints, COLUMN_CHART_CSS, MEMO_COLUMN, MEMO_COLUMN_PIXEL_RATIO } from './memo';
 import { findingLines, memoFindings, type MemoFindings } from './findings';
 import { csvCell } from './table-csv';
 import { mdText } from './table';
-import { DRAWING_CSS } from '../charts/style';
-import { computePath, getFluid } from '../thermo';
-import { engineSpec } from '../sheets/doc';
-import { workedExample } from '../sheets/templates';
-import type { SheetDoc } from '../sheets/types';
+import { DRAWING_CSS } from '$lib/charts/style';
+import { computePath, getFluid } from '$lib/thermo';
+import { engineSpec } from '$lib/sheets/doc';
+import { workedExample } from '$lib/sheets/templates';
+import type { SheetDoc } from '$lib/sheets/types';
 import Papa from 'papaparse';
 
 const NO_FINDINGS: MemoFindings = {

@@ -1,9 +1,9 @@
-import { CAUTION_TITLE, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
-import { sheetWarnings } from '../sheets/warnings';
-import type { SheetLegSpec } from '../sheets/types';
-import type { FluidInfo, PathResult } from '../thermo/types';
-import { formatQuantity, type UnitPrefs } from '../units';
-import { tidy } from '../sheets/format';
+import { CAUTION_TITLE, PRESSURE_EQUIPMENT_CAUTION } from '$lib/cautions';
+import { sheetWarnings } from '$lib/sheets/warnings';
+import type { SheetLegSpec } from '$lib/sheets/types';
+import type { FluidInfo, PathResult } from '$lib/thermo/types';
+import { formatQuantity, type UnitPrefs } from '$lib/units';
+import { tidy } from '$lib/sheets/format';
 
 /**
  * What a memo says besides the numbers: the warnings under the state table (the same words as the

@@ -5,12 +5,9 @@
  * Pure string work: the browser part (serialising the live chart, loading fonts, PNG) is in
  * `browser.ts`.
  */
+import { isoDate, type SignOffPerson } from '$lib/revisions/sign-off';
 
-export interface MemoPerson {
-	name: string | null;
-	/** Unix ms */
-	at: number | null;
-}
+export type MemoPerson = SignOffPerson;
 
 /** What the title block says. Free text is escaped; long values are shortened with an ellipsis. */
 export interface MemoTitle {
@@ -136,9 +133,7 @@ export function escapeXml(s: string): string {
 }
 
 /** ISO date (UTC) of a Unix ms time, as engineering documents date things. */
-export function isoDate(ms: number | null): string {
-	return ms === null ? '' : new Date(ms).toISOString().slice(0, 10);
-}
+export { isoDate };
 
 /** @font-face rules for embedded fonts. */
 export function fontFaceCss(fonts: readonly MemoFont[]): string {

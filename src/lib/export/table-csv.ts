@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
-import type { PathResult } from '../thermo/types';
-import type { UnitPrefs } from '../units';
+import type { PathResult } from '$lib/thermo/types';
+import type { UnitPrefs } from '$lib/units';
 import { severityWord, type MemoFindings } from './findings';
 import { sheetTable, transportSources, type SheetTable } from './table';
 

@@ -1,8 +1,7 @@
-import type { PathResult } from '../thermo/types';
-import { displayUnit, formatNumber, formatQuantity, type Quantity, type UnitPrefs } from '../units';
-import { phaseName } from '../charts/describe';
-import { processStyle } from '../charts/encoding';
-import { tidy } from '../sheets/format';
+import type { PathResult } from '$lib/thermo/types';
+import { displayUnit, formatQuantity, type Quantity, type UnitPrefs } from '$lib/units';
+import { phaseName } from '$lib/charts/describe';
+import { processText, tidy } from '$lib/sheets/format';
 import { severityWord, type MemoFindings } from './findings';
 
 /**
@@ -72,12 +71,7 @@ function unitLabel(q: Quantity, prefs: UnitPrefs, magnitude?: number[]): string 
 export const legLabel = (index: number) => `L${index + 1}`;
 export const stateLabel = (index: number) => `S${index + 1}`;
 
-export function processText(process: string, n?: number): string {
-	const name = processStyle(process as Parameters<typeof processStyle>[0])?.name ?? process;
-	return process === 'polytropic' && n !== undefined
-		? `${name}, n = ${formatNumber(n, { sig: 4 })}`
-		: name;
-}
+export { processText };
 
 export function sheetTable(
 	result: PathResult,

@@ -1,7 +1,8 @@
-import type { SheetDoc, SheetStatus } from '../sheets/types';
-import { STATUS_LABEL } from '../sheets/types';
-import { displayUnit, formatQuantity, NBSP, type UnitPrefs } from '../units';
-import { isoDate, type MemoPerson, type MemoTitle } from './memo';
+import type { SignOff } from '$lib/revisions/sign-off';
+import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
+import { STATUS_LABEL } from '$lib/sheets/types';
+import { displayUnit, formatQuantity, NBSP, type UnitPrefs } from '$lib/units';
+import type { MemoTitle } from './memo';
 
 /** The fluid facts the title block names (a FluidInfo from GET /api/v1/fluids fits). */
 export interface TitleFluid {
@@ -10,12 +11,9 @@ export interface TitleFluid {
 	formulation: { name: string; reference: string };
 }
 
-/** Who signed what, from the revision record. */
-export interface TitleSignOff {
-	designer: MemoPerson;
-	checker: MemoPerson;
-	approver: MemoPerson;
-}
+/** Who signed what, from the revision record (src/lib/revisions/sign-off.ts). */
+export type TitleSignOff = SignOff;
+export { signOffOverrides, type SignOffEvent } from '$lib/revisions/sign-off';
 
 const SUBSCRIPT: Record<string, string> = {
 	'0': '₀',
@@ -86,29 +84,6 @@ export interface TitleInput {
 	/** sign-off steps taken over open review notes (signOffOverrides) */
 	overrides?: string[];
 	issued: number;
-}
-
-/** A sign-off log entry, as the revisions API lists it. */
-export interface SignOffEvent {
-	number: number;
-	kind: string;
-	actor: string;
-	at: number;
-	override?: { reason: string; openNotes: number } | null;
-}
-
-/**
- * The checks and approvals of revision `number` taken over open review notes, in words, oldest
- * first: "Marked checked by Priya Ramanathan on 2026-01-06 over 2 open review notes: “…”".
- */
-export function signOffOverrides(events: readonly SignOffEvent[], number: number): string[] {
-	return events
-		.filter((e) => e.number === number && e.override)
-		.sort((a, b) => a.at - b.at)
-		.map((e) => {
-			const n = e.override!.openNotes;
-			return `${e.kind === 'approved' ? 'Approved' : 'Marked checked'} by ${e.actor} on ${isoDate(e.at)} over ${n} open review note${n === 1 ? '' : 's'}: “${e.override!.reason}”`;
-		});
 }
 
 /**

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { computePath, transport, type PathResult } from '../thermo';
-import { unitPrefs } from '../units';
+import { computePath, transport, type PathResult } from '$lib/thermo';
+import { unitPrefs } from '$lib/units';
 import type { MemoFindings } from './findings';
 import { sheetTable, tableMarkdown, transportSources } from './table';
 import { tableCsv } from './table-csv';

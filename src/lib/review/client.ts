@@ -5,9 +5,9 @@
  * trace); a network failure as OfflineError.
  */
 import { ApiError, OfflineError, apiCall } from '$lib/editor/client';
-import type { SheetDoc, Anchor } from '../sheets/types';
-import type { PathResult } from '../thermo/types';
-import type { RevisionDiff } from '../revisions/diff';
+import type { SheetDoc, Anchor } from '$lib/sheets/types';
+import type { PathResult } from '$lib/thermo/types';
+import type { RevisionDiff } from '$lib/revisions/diff';
 import type { NoteView, RevisionEvent, RevisionFull, RevisionSummary, TraceSummary } from './types';
 
 export { ApiError, OfflineError };

@@ -13,13 +13,14 @@ import {
 	type RevisionSummary,
 	type TraceSummary
 } from './client';
-import type { MeasuredTrace } from '../charts/types';
-import type { SheetDoc, SheetStatus } from '../sheets/types';
-import type { FluidInfo } from '../thermo/types';
-import { chartTrace } from '../traces/chart';
-import { sameContent } from '../revisions/same';
-import { memoTitle, signOffOverrides } from '../export/title';
-import type { MemoTitle } from '../export/memo';
+import type { MeasuredTrace } from '$lib/charts/types';
+import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
+import type { FluidInfo } from '$lib/thermo/types';
+import { chartTrace } from '$lib/traces/chart';
+import { sameContent } from '$lib/revisions/same';
+import { memoTitle } from '$lib/export/title';
+import { signOffOverrides } from '$lib/revisions/sign-off';
+import type { MemoTitle } from '$lib/export/memo';
 
 export interface ReviewInit {
 	team: string;

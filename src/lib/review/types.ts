@@ -1,7 +1,13 @@
-import type { DesignLimits as ChartLimits } from '../charts/types';
-import type { FluidInfo, Isoline, IsolineKind, PathResult, SaturationCurve } from '../thermo/types';
-import type { Anchor, SheetDoc, SheetStatus } from '../sheets/types';
-import type { RejectedLine, TraceColumn, TracePoint } from '../traces/types';
+import type { DesignLimits as ChartLimits } from '$lib/charts/types';
+import type {
+	FluidInfo,
+	Isoline,
+	IsolineKind,
+	PathResult,
+	SaturationCurve
+} from '$lib/thermo/types';
+import type { Anchor, SheetDoc, SheetStatus } from '$lib/sheets/types';
+import type { RejectedLine, TraceColumn, TracePoint } from '$lib/traces/types';
 
 /** What a read-only chart needs besides the path: the dome, background isolines, design limits. */
 export interface ChartFrame {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { computePath } from '../thermo/index';
-import type { PathResult } from '../thermo/types';
-import { unitPrefs } from '../units';
+import { computePath } from '$lib/thermo';
+import type { PathResult } from '$lib/thermo/types';
+import { unitPrefs } from '$lib/units';
 import { diffRevisions, isEmptyDiff, mergedLegOrder, type DiffSide } from './diff';
 import { formatDelta, formatRelative, formatValue } from './format';
 import { vesselDoc } from './test-fixtures';
@@ -182,7 +182,7 @@ describe('pathOverlay', () => {
 
 	it('is a revision overlay, keyed by its label and not as a measured trace', async () => {
 		const { pathOverlay } = await import('./overlay');
-		const { keyEntries } = await import('../charts/key');
+		const { keyEntries } = await import('$lib/charts/key');
 		const o = pathOverlay(computePath(vesselDoc().spec), 'rev-1', 'Rev 1');
 		expect(o.kind).toBe('revision');
 		const entries = keyEntries([], { limits: false, traces: false, revisions: [o.label] });

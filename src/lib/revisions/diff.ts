@@ -1,6 +1,14 @@
-import type { SheetDoc } from '../sheets/types';
-import type { PathLeg, PathResult, PathState, TargetName } from '../thermo/types';
-import { PROPERTY_QUANTITY, type Quantity } from '../units';
+import type { SheetDoc } from '$lib/sheets/types';
+import {
+	DESIGN_LIMIT_LABEL,
+	DESIGN_LIMIT_NAMES,
+	DESIGN_LIMIT_QUANTITY,
+	type PathLeg,
+	type PathResult,
+	type PathState,
+	type TargetName
+} from '$lib/thermo/types';
+import { PROPERTY_QUANTITY, type Quantity } from '$lib/units';
 
 /**
  * What changed between two revisions of a sheet (or a revision and a draft): the spec's fields,
@@ -98,12 +106,9 @@ function change(
 
 const INPUT_NAMES = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'] as const;
 
-const LIMITS = [
-	['designPressure', 'design pressure', 'pressure'],
-	['reliefSetPressure', 'relief set pressure', 'pressure'],
-	['designTemperature', 'design temperature', 'temperature'],
-	['minimumTemperature', 'minimum temperature', 'temperature']
-] as const;
+const LIMITS = DESIGN_LIMIT_NAMES.map(
+	(k) => [k, DESIGN_LIMIT_LABEL[k], DESIGN_LIMIT_QUANTITY[k]] as const
+);
 
 function specChanges(a: SheetDoc, b: SheetDoc): ValueChange[] {
 	const out: ValueChange[] = [];

@@ -1,6 +1,6 @@
-import { displayUnit, formatNumber, formatQuantity, NBSP, type UnitPrefs } from '../units';
-import { phaseName } from '../charts/describe';
-import type { Phase } from '../thermo/types';
+import { displayUnit, formatNumber, formatQuantity, NBSP, type UnitPrefs } from '$lib/units';
+import { phaseName } from '$lib/charts/describe';
+import type { Phase } from '$lib/thermo/types';
 import type { ValueChange } from './diff';
 
 /** A compared value in the sheet's display units ("180.00 °C", "isobaric", "—" when absent). */

@@ -1,5 +1,5 @@
-import type { MeasuredTrace } from '../charts/types';
-import type { PathResult } from '../thermo/types';
+import type { MeasuredTrace } from '$lib/charts/types';
+import type { PathResult } from '$lib/thermo/types';
 
 /**
  * Another revision's path as an overlay on the chart (kind `revision`: a wide faint band keyed by

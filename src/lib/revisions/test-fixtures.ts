@@ -1,5 +1,5 @@
-import { SHEET_DOC_VERSION, type SheetDoc, type SheetLegSpec } from '../sheets/types';
-import { unitPrefs } from '../units';
+import { SHEET_DOC_VERSION, type SheetDoc, type SheetLegSpec } from '$lib/sheets/types';
+import { unitPrefs } from '$lib/units';
 
 /**
  * Sheet documents for tests of revisions, exports and notes: an invented sealed hot-water vessel

@@ -1,4 +1,4 @@
-import type { Capability, Role } from '../roles';
+import type { Capability, Role } from '$lib/roles';
 import type { Team } from './db/schema';
 import type { SessionUser } from './auth';
 

@@ -1,4 +1,4 @@
-import { roleWithin, ROLE_LABEL, type Role } from '../roles';
+import { roleWithin, ROLE_LABEL, type Role } from '$lib/roles';
 import { transaction } from './db/dialect';
 import type { ApiToken, DB, Team } from './db/schema';
 import {
@@ -13,7 +13,7 @@ import { logTeamEvent } from './db/team-events';
 import { AppError } from './errors';
 import { newSecret, sha256 } from './secrets';
 import type { TeamAccess, TokenPrincipal } from './access';
-import { can } from '../roles';
+import { can } from '$lib/roles';
 
 /*
  * API tokens for scripts. A token belongs to one team and carries a role chosen when it is

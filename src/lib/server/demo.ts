@@ -1,4 +1,4 @@
-import type { Role } from '../roles';
+import type { Role } from '$lib/roles';
 import { transaction } from './db/dialect';
 import type { DB } from './db/schema';
 import { countUsers, createUser } from './db/users';
@@ -8,8 +8,8 @@ import { logTeamEvent } from './db/team-events';
 import { hashPassword } from './auth';
 import { insertSheet } from './db/sheets';
 import { newId } from './secrets';
-import { WORKED_EXAMPLES } from '../sheets/templates';
-import type { SheetDoc } from '../sheets/types';
+import { WORKED_EXAMPLES } from '$lib/sheets/templates';
+import type { SheetDoc } from '$lib/sheets/types';
 import { resolveTeamAccess, type TeamAccess } from './guard';
 import { moveRevision, saveRevision } from './revisions';
 import { createNote, replyToNote, setNoteState } from './notes';

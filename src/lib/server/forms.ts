@@ -2,8 +2,8 @@ import { error, fail, type ActionFailure, type RequestEvent } from '@sveltejs/ki
 import { retryAfterSeconds } from './rate-limit';
 import { z } from 'zod';
 import { isAppError } from './errors';
-import { ROLES } from '../roles';
-import { controlCharProblem, plainText, withoutControlChars } from '../plain-text';
+import { ROLES } from '$lib/roles';
+import { controlCharProblem, plainText, withoutControlChars } from '$lib/plain-text';
 
 /*
  * Form actions: validate with zod, answer problems with

@@ -1,5 +1,5 @@
 import { error, redirect } from '@sveltejs/kit';
-import { can, ROLE_LABEL, type Capability, type Role } from '../roles';
+import { can, ROLE_LABEL, type Capability, type Role } from '$lib/roles';
 import type { DB } from './db/schema';
 import { getDb } from './database';
 import { getTeamBySlug } from './db/teams';

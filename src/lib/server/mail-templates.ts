@@ -1,4 +1,4 @@
-import { ROLE_LABEL, type Role } from '../roles';
+import { ROLE_LABEL, type Role } from '$lib/roles';
 
 /**
  * The mails Statewright sends, each as plain text and a simple HTML version. Links are absolute

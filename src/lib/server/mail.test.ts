@@ -31,7 +31,7 @@ describe('mail through the local fake SMTP server', () => {
 				'[statewright] mail caught for someone@example.com: Reset your Statewright password'
 			);
 			expect(printed).toContain('  link: https://statewright.test/reset?token=abc_DEF-123');
-			expect(printed).toMatch(/  link: https:\/\/statewright.test\/signin$/m);
+			expect(printed).toMatch(/ {2}link: https:\/\/statewright.test\/signin$/m);
 		} finally {
 			logged.mockRestore();
 		}

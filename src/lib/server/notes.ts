@@ -26,9 +26,9 @@ import {
 	type NotifyContext,
 	type Recipient
 } from './notifications';
-import { ROLE_LABEL } from '../roles';
+import { ROLE_LABEL } from '$lib/roles';
 import { mentionedIds } from '$lib/notes/mentions';
-import { processText } from '$lib/export/table';
+import { processText } from '$lib/sheets/format';
 import type { Anchor, SheetDoc } from '$lib/sheets/types';
 import type { NoteView, ReplyView } from '$lib/review/types';
 import { plainText } from '$lib/plain-text';

@@ -17,7 +17,7 @@ import { listTraces } from './traces';
 import { checkDoc } from './sheets';
 import { getSheet } from './db/sheets';
 import { chartFrame, draftResult } from './compute/sheet-frame';
-import { signOffOverrides } from '$lib/export/title';
+import { signOffOverrides } from '$lib/revisions/sign-off';
 
 export type { ChartFrame } from '$lib/review/types';
 

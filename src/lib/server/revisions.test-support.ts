@@ -1,4 +1,4 @@
-import type { Role } from '../roles';
+import type { Role } from '$lib/roles';
 import { setupIntegration } from './testing';
 import { createUser } from './db/users';
 import { addMember } from './db/memberships';

@@ -28,13 +28,13 @@ import {
 	type NotifyContext,
 	type Recipient
 } from './notifications';
-import { can, ROLE_LABEL, type Capability } from '../roles';
+import { can, ROLE_LABEL, type Capability } from '$lib/roles';
 import { computePath, ThermoError } from '$lib/thermo';
 import type { PathResult } from '$lib/thermo/types';
 import { engineSpec, sameDoc } from '$lib/sheets/doc';
-import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
+import type { SheetDoc } from '$lib/sheets/types';
 import { diffRevisions, type RevisionDiff } from '$lib/revisions/diff';
-import type { TitleSignOff } from '$lib/export/title';
+import type { SignOff } from '$lib/revisions/sign-off';
 import type { RevisionEvent, RevisionFull, RevisionSummary, Signature } from '$lib/review/types';
 import { plainText } from '$lib/plain-text';
 
@@ -105,7 +105,7 @@ export class OpenNotesError extends AppError {
 		super(
 			409,
 			'open-notes',
-			`${openNotes === 1 ? '1 review note is' : `${openNotes} review notes are`} still open on this sheet, so Rev ${number} is not ${action === 'check' ? 'marked checked' : 'approved'} yet. Resolve ${openNotes === 1 ? 'it' : 'them'} first, or ${action === 'check' ? 'check' : 'approve'} over ${openNotes === 1 ? 'it' : 'them'} by giving the reason as override; the reason is recorded in the sign-off log.`
+			`${openNotes === 1 ? '1 review note is' : `${openNotes} review notes are`} still open on this sheet, so Rev ${number} is not ${STEPS[action].done} yet. Resolve ${openNotes === 1 ? 'it' : 'them'} first, or ${action === 'check' ? 'check' : 'approve'} over ${openNotes === 1 ? 'it' : 'them'} by giving the reason as override; the reason is recorded in the sign-off log.`
 		);
 		this.openNotes = openNotes;
 	}
@@ -133,9 +133,7 @@ export function summaryOf(r: RevisionListRow, latestNumber: number): RevisionSum
 }
 
 /** Designer, checker and approver with their dates, for the title block. */
-export function signOffOf(
-	r: Pick<RevisionSummary, 'author' | 'checked' | 'approved'>
-): TitleSignOff {
+export function signOffOf(r: Pick<RevisionSummary, 'author' | 'checked' | 'approved'>): SignOff {
 	return {
 		designer: { name: r.author.name, at: r.author.at },
 		checker: { name: r.checked?.name ?? null, at: r.checked?.at ?? null },
@@ -394,7 +392,8 @@ interface Step {
 	from: readonly SheetStatusValue[];
 	to: SheetStatusValue;
 	event: 'submitted' | 'returned' | 'checked' | 'approved';
-	verb: string;
+	/** what the revision is once the step is taken, in refusals ("cannot be marked checked") */
+	done: string;
 }
 
 const STEPS: Record<Action, Step> = {
@@ -403,35 +402,35 @@ const STEPS: Record<Action, Step> = {
 		from: ['draft'],
 		to: 'in-check',
 		event: 'submitted',
-		verb: 'submit for checking'
+		done: 'submitted'
 	},
 	withdraw: {
 		cap: 'sheet:edit',
 		from: ['in-check'],
 		to: 'draft',
 		event: 'returned',
-		verb: 'withdraw from checking'
+		done: 'withdrawn'
 	},
 	check: {
 		cap: 'sheet:check',
 		from: ['in-check'],
 		to: 'checked',
 		event: 'checked',
-		verb: 'mark checked'
+		done: 'marked checked'
 	},
 	return: {
 		cap: 'sheet:check',
 		from: ['in-check', 'checked'],
 		to: 'draft',
 		event: 'returned',
-		verb: 'return to the designer'
+		done: 'returned'
 	},
 	approve: {
 		cap: 'sheet:approve',
 		from: ['checked'],
 		to: 'approved',
 		event: 'approved',
-		verb: 'approve'
+		done: 'approved'
 	}
 };
 
@@ -506,7 +505,7 @@ export async function moveRevision(
 			throw new AppError(
 				409,
 				'wrong-status',
-				`Rev ${number} is ${STATUS_WORDS[row.status]}, so it cannot be ${action === 'check' ? 'marked checked' : action === 'approve' ? 'approved' : action === 'submit' ? 'submitted' : action === 'withdraw' ? 'withdrawn' : 'returned'}: only a revision that is ${step.from.map((s) => STATUS_WORDS[s]).join(' or ')} can.`
+				`Rev ${number} is ${STATUS_WORDS[row.status]}, so it cannot be ${step.done}: only a revision that is ${step.from.map((s) => STATUS_WORDS[s]).join(' or ')} can.`
 			);
 		if (action === 'return' && row.status === 'checked') requireCap(access, 'sheet:approve');
 		const isAuthor = access.actor.id !== null && access.actor.id === row.author_id;

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import type { Role } from '../roles';
+import type { Role } from '$lib/roles';
 import { expectAppError, setupIntegration } from './testing';
 import { createUser } from './db/users';
 import { addMember } from './db/memberships';

@@ -1,4 +1,4 @@
-import { roleWithin, ROLES, type Role } from '../roles';
+import { roleWithin, ROLES, type Role } from '$lib/roles';
 import { transaction } from './db/dialect';
 import type { DB, Invite, Team, User } from './db/schema';
 import { createTeam, getTeamById, updateTeam } from './db/teams';

@@ -15,7 +15,7 @@ import { requireTeam, requireUser, resolveTeamAccess, type GuardEvent } from './
 import type { SessionUser } from './auth';
 import type { TokenPrincipal } from './api-tokens';
 import { AppError } from './errors';
-import type { Role } from '../roles';
+import type { Role } from '$lib/roles';
 import type { Team } from './db/schema';
 
 let env: Awaited<ReturnType<typeof setupIntegration>>;

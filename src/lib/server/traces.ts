@@ -16,7 +16,7 @@ import {
 } from './db/traces';
 import { checkDoc } from './sheets';
 import { loadSheet } from './revisions';
-import { ROLE_LABEL } from '../roles';
+import { ROLE_LABEL } from '$lib/roles';
 import { readTraceCsv } from '$lib/traces/read';
 import {
 	DEFAULT_SATURATION_TOLERANCE,

@@ -5,7 +5,7 @@
  * one sets `spec.startNear` to its T and P. Typing a new start pair drops that choice: it was made
  * for the old pair, and nothing is chosen silently. Client-safe, pure document edits.
  */
-import type { FixOptions, Phase, StateWindow } from '../thermo/types';
+import type { FixOptions, Phase, StateWindow } from '$lib/thermo/types';
 import { cloneDoc } from './doc';
 import type { SheetDoc } from './types';
 

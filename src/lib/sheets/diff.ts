@@ -4,8 +4,14 @@
  * units and title block. Values are formatted in the display units of `prefs`. Used when an
  * autosave is refused because someone else saved in between (and by revision compares later).
  */
-import { formatQuantity, PROPERTY_QUANTITY, type UnitPrefs } from '../units';
-import type { Inputs, TargetName } from '../thermo/types';
+import { formatQuantity, PROPERTY_QUANTITY, type UnitPrefs } from '$lib/units';
+import {
+	DESIGN_LIMIT_LABEL,
+	DESIGN_LIMIT_NAMES,
+	DESIGN_LIMIT_QUANTITY,
+	type Inputs,
+	type TargetName
+} from '$lib/thermo/types';
 import { legLabel, TITLE_BLOCK_LABELS } from './doc';
 import type { SheetDoc, SheetLegSpec } from './types';
 import { fillText } from './fill';
@@ -55,12 +61,9 @@ function systemText(d: SheetDoc, prefs: UnitPrefs): string {
 	return 'closed, per kg';
 }
 
-const LIMITS = [
-	['designPressure', 'design pressure', 'pressure'],
-	['reliefSetPressure', 'relief set pressure', 'pressure'],
-	['designTemperature', 'design temperature', 'temperature'],
-	['minimumTemperature', 'minimum temperature', 'temperature']
-] as const;
+const LIMITS = DESIGN_LIMIT_NAMES.map(
+	(k) => [k, DESIGN_LIMIT_LABEL[k], DESIGN_LIMIT_QUANTITY[k]] as const
+);
 
 /** Rows where `a` and `b` differ; values shown in `prefs` (usually the reader's sheet units). */
 export function diffDocs(a: SheetDoc, b: SheetDoc, prefs: UnitPrefs = a.units): DiffRow[] {

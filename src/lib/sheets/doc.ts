@@ -2,7 +2,7 @@
  * Helpers around the sheet document (types.ts): defaults, stable ids and labels, the spec the
  * engine reads, and the view of a computed path that the chart and the table draw. Client-safe.
  */
-import type { ChartLeg, ChartState } from '../charts/types';
+import type { ChartLeg, ChartState } from '$lib/charts/types';
 import type {
 	FixOptions,
 	Inputs,
@@ -12,8 +12,8 @@ import type {
 	State,
 	StateExtras,
 	TargetName
-} from '../thermo/types';
-import { DEFAULT_UNIT_PREFS, type UnitPrefs } from '../units/prefs';
+} from '$lib/thermo/types';
+import { DEFAULT_UNIT_PREFS, type UnitPrefs } from '$lib/units/prefs';
 import {
 	SHEET_DOC_VERSION,
 	type ChartPrefs,

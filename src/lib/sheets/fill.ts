@@ -9,10 +9,10 @@
  * saturated vapor. Client-safe: the engine's saturation functions are passed in, so the browser
  * can keep loading the engine lazily.
  */
-import type { Inputs, Saturation } from '../thermo/types';
-import { formatQuantity } from '../units/format';
-import { parseQuantity } from '../units/parse';
-import type { UnitPrefs } from '../units/prefs';
+import type { Inputs, Saturation } from '$lib/thermo/types';
+import { formatQuantity } from '$lib/units/format';
+import { parseQuantity } from '$lib/units/parse';
+import type { UnitPrefs } from '$lib/units/prefs';
 import type { StartSpec } from './types';
 
 export interface SaturationSource {

@@ -5,13 +5,15 @@
 import {
 	chooseUnit,
 	displayUnit,
+	formatNumber,
 	formatQuantity,
 	type Formatted,
 	type Quantity,
 	type UnitDef,
 	type UnitPrefs
-} from '../units';
-import type { Phase, State } from '../thermo/types';
+} from '$lib/units';
+import { processStyle } from '$lib/charts/encoding';
+import { PHASE_NAME, type Phase, type State } from '$lib/thermo/types';
 import type { EditableProp } from './doc';
 
 export const PROP_QUANTITY: Record<EditableProp, Quantity> = {
@@ -91,17 +93,8 @@ export function total(si: number, kind: 'J' | 'W', unit: UnitDef, prefs: UnitPre
 	return formatQuantity(tidy(si, 'total'), kind === 'J' ? 'energy' : 'power', prefs, { unit }).full;
 }
 
-const PHASE: Record<Phase, string> = {
-	'compressed-liquid': 'compressed liquid',
-	'saturated-liquid': 'saturated liquid',
-	'saturated-mixture': 'saturated mixture',
-	'saturated-vapor': 'saturated vapor',
-	'superheated-vapor': 'superheated vapor',
-	'supercritical-fluid': 'supercritical fluid'
-};
-
 export function phaseText(p: Phase): string {
-	return PHASE[p];
+	return PHASE_NAME[p];
 }
 
 /** Relative uncertainty past which the state table says how loosely the inputs fix T, P or v. */
@@ -124,4 +117,12 @@ export function compactQuantity(si: number, q: Quantity, prefs: UnitPrefs): stri
 	const text =
 		f.text.includes('×') || !f.text.includes('.') ? f.text : f.text.replace(/\.?0+$/, '');
 	return f.unit.label ? `${text}\u00a0${f.unit.label}` : text;
+}
+
+/** A leg's process in words, with n for a polytropic leg ("polytropic, n = 1.3"). */
+export function processText(process: string, n?: number): string {
+	const name = processStyle(process as Parameters<typeof processStyle>[0])?.name ?? process;
+	return process === 'polytropic' && n !== undefined
+		? `${name}, n = ${formatNumber(n, { sig: 4 })}`
+		: name;
 }

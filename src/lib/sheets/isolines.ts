@@ -4,9 +4,9 @@
  * of the sheet's display unit (kPa, bar, MPa or psi; °C or °F) spread over the pressures and
  * temperatures the dome and the path span. Values are returned in SI for the isolines endpoint.
  */
-import { displayUnit, type UnitPrefs } from '../units/prefs';
-import type { UnitDef } from '../units/catalogue';
-import type { IsolineKind } from '../charts/types';
+import { displayUnit, type UnitPrefs } from '$lib/units/prefs';
+import type { UnitDef } from '$lib/units/catalogue';
+import type { IsolineKind } from '$lib/thermo/types';
 
 export interface Span {
 	/** SI: Pa absolute or K */

@@ -5,10 +5,10 @@
  * converted with the engine's saturation functions (passed in: the browser loads the engine
  * lazily); the answer carries a sentence saying what was done, for the screen.
  */
-import type { Saturation } from '../thermo/types';
-import { formatQuantity } from '../units/format';
-import { parseQuantity } from '../units/parse';
-import type { UnitPrefs } from '../units/prefs';
+import type { Saturation } from '$lib/thermo/types';
+import { formatQuantity } from '$lib/units/format';
+import { parseQuantity } from '$lib/units/parse';
+import type { UnitPrefs } from '$lib/units/prefs';
 
 export interface SaturationFns {
 	saturationAtT(fluid: string, T: number): Saturation;

@@ -9,7 +9,7 @@
  * way), the heating one (q > 0 per kg) is taken — a heat-up is what a vessel's "to saturation"
  * means — else the one nearer in v. Client-safe: the engine is passed in.
  */
-import type { Leg, LegSpec, Process, State } from '../thermo/types';
+import type { Leg, LegSpec, Process, State } from '$lib/thermo/types';
 
 export interface LegEngine {
 	computeLeg(spec: LegSpec): Leg;

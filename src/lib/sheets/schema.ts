@@ -15,10 +15,11 @@
  * Messages say what to give instead. Everything physical is SI (K, Pa absolute, m³/kg, J/kg).
  */
 import { z } from 'zod';
-import * as engine from '../thermo';
-import { PROCESSES, ThermoError, fluids } from '../thermo';
+import * as engine from '$lib/thermo';
+import { PROCESSES, ROOT_HINTS, ThermoError, fluids } from '$lib/thermo';
+import type { RootHint } from '$lib/thermo/types';
 import { fillStart } from './fill';
-import { DEFAULT_UNIT_PREFS } from '../units/prefs';
+import { DEFAULT_UNIT_PREFS } from '$lib/units/prefs';
 import {
 	DEFAULT_CHART,
 	EMPTY_TITLE_BLOCK,
@@ -30,7 +31,7 @@ import {
 } from './doc';
 import { SHEET_DOC_VERSION, type ChartView, type LineKind, type SheetDoc } from './types';
 import { CHART_VIEW_VALUES, LINE_KINDS } from './chart-views';
-import { cleanText, plainText, type TextKind } from '../plain-text';
+import { cleanText, plainText, type TextKind } from '$lib/plain-text';
 
 const INPUT_NAMES = ['T', 'P', 'v', 'rho', 'u', 'h', 's', 'x'] as const;
 const UNIT: Record<(typeof INPUT_NAMES)[number], string> = {
@@ -104,7 +105,7 @@ const targetSchema = z
 			});
 	});
 
-const HINTS = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'] as const;
+const HINTS = ROOT_HINTS as [RootHint, ...RootHint[]];
 const hintSchema = (name: string) =>
 	z.enum(HINTS, { error: `${name} must be one of ${HINTS.join(', ')}.` });
 
@@ -271,7 +272,9 @@ const titleBlockSchema = z.strictObject(
 	{ error: 'titleBlock must be an object { project, equipment, tag, documentNumber, site }.' }
 );
 
-const fluidIds = () => fluids.map((f) => f.id);
+/** The ids a sheet, form or request may name as its fluid. */
+export const fluidIds = (): [string, ...string[]] =>
+	fluids.map((f) => f.id) as [string, ...string[]];
 
 const fluidSchema = z
 	.string({ error: 'spec.fluid must be a fluid id such as "water".' })

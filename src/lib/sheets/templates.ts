@@ -5,7 +5,7 @@
  */
 import { makeDoc, newLegId } from './doc';
 import type { SheetDoc, SheetLegSpec } from './types';
-import type { PathLegSpec } from '../thermo/types';
+import type { PathLegSpec } from '$lib/thermo/types';
 
 export interface WorkedExample {
 	id: string;

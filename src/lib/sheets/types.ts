@@ -4,8 +4,8 @@
  * (`spec` is exactly a PathSpec, so the draft can be sent to computePath / POST /api/v1/paths as is);
  * display units live in `units` and are applied only at the screen's edge.
  */
-import type { PathLegSpec, PathSpec } from '../thermo/types';
-import type { UnitPrefs } from '../units/prefs';
+import type { PathLegSpec, PathSpec } from '$lib/thermo/types';
+import type { UnitPrefs } from '$lib/units/prefs';
 
 /** Bumped when the document's shape changes; readers migrate older documents forward. */
 export const SHEET_DOC_VERSION = 1 as const;

@@ -3,7 +3,7 @@ import { computePath, getFluid } from '$lib/thermo';
 import { engineSpec } from './doc';
 import { workedExample } from './templates';
 import { sheetWarnings } from './warnings';
-import { LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
+import { LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '$lib/cautions';
 
 function run(
 	id: string,

@@ -4,17 +4,17 @@
  * met, then notes on how to read the numbers. Built from the engine's PathWarnings and
  * LimitEvents; where the engine's text is in SI (it always is), it is rewritten in display units.
  */
-import { CAUTION_TITLE, LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions';
-import type { ChartSelection } from '../charts/types';
-import type {
-	DesignLimitName,
-	FluidInfo,
-	LimitEvent,
-	PathResult,
-	PathWarning,
-	State
-} from '../thermo/types';
-import { displayUnit, formatQuantity, unitById, type UnitPrefs } from '../units';
+import { CAUTION_TITLE, LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '$lib/cautions';
+import type { ChartSelection } from '$lib/charts/types';
+import {
+	DESIGN_LIMIT_LABEL,
+	type FluidInfo,
+	type LimitEvent,
+	type PathResult,
+	type PathWarning,
+	type State
+} from '$lib/thermo/types';
+import { displayUnit, formatQuantity, unitById, type UnitPrefs } from '$lib/units';
 import { labelIds, legLabel, stateKey, stateLabel } from './doc';
 import type { SheetLegSpec } from './types';
 
@@ -28,13 +28,6 @@ export interface SheetWarning {
 	target: ChartSelection | null;
 	code: string;
 }
-
-const LIMIT_LABEL: Record<DesignLimitName, string> = {
-	designPressure: 'Design pressure',
-	reliefSetPressure: 'Relief set pressure',
-	designTemperature: 'Design temperature',
-	minimumTemperature: 'Minimum temperature'
-};
 
 function limitValue(ev: LimitEvent, prefs: UnitPrefs): string {
 	return ev.limit.endsWith('Pressure')
@@ -152,18 +145,18 @@ export function sheetWarnings(
 	}
 
 	for (const ev of result.limitEvents) {
-		const label = LIMIT_LABEL[ev.limit];
+		const label = DESIGN_LIMIT_LABEL[ev.limit];
 		const value = limitValue(ev, prefs);
 		const below = ev.limit === 'minimumTemperature';
 		const verb = ev.exceeded ? (below ? 'goes below' : 'goes beyond') : 'reaches';
 		const text = ev.leg
-			? `${name(ev.leg)} ${ev.exceeded ? 'reaches and ' + verb : 'reaches'} the ${label.toLowerCase()} (${value}), first at ${at(ev.state, prefs)}.`
-			: `The start S1 is already ${ev.exceeded ? (below ? 'below' : 'beyond') : 'at'} the ${label.toLowerCase()} (${value}).`;
+			? `${name(ev.leg)} ${ev.exceeded ? 'reaches and ' + verb : 'reaches'} the ${label} (${value}), first at ${at(ev.state, prefs)}.`
+			: `The start S1 is already ${ev.exceeded ? (below ? 'below' : 'beyond') : 'at'} the ${label} (${value}).`;
 		out.push({
 			key: `limit:${ev.limit}:${ev.leg ?? 'start'}`,
 			code: `limit-${ev.limit}`,
 			severity: 'warning',
-			title: `${label} ${ev.exceeded ? (below ? 'undercut' : 'exceeded') : 'reached'}`,
+			title: `${label[0].toUpperCase()}${label.slice(1)} ${ev.exceeded ? (below ? 'undercut' : 'exceeded') : 'reached'}`,
 			text: below ? `${text} Materials must be rated for it.` : text,
 			target: ev.leg ? legTarget(ev.leg) : { kind: 'state', id: 'start' }
 		});

@@ -195,13 +195,9 @@ export function computeLeg(spec: LegSpec): Leg {
  * leg, per-state extras (superheat, subcooling, volume fractions) and warnings with stable codes
  * (solvers/path.ts). Throws ThermoError (`invalid-path`, or a leg's error prefixed with its id).
  */
-export {
-	computePath,
-	PRESSURE_EQUIPMENT_CAUTION,
-	LIQUID_FULL_CAUTION,
-	CYCLE_TOLERANCE,
-	MAX_LEGS
-} from './solvers/path.ts';
+export { computePath, CYCLE_TOLERANCE, MAX_LEGS } from './solvers/path.ts';
+export { PRESSURE_EQUIPMENT_CAUTION, LIQUID_FULL_CAUTION } from './cautions.ts';
+export { DEFAULT_ATMOSPHERE, STANDARD_ATMOSPHERE } from './constants.ts';
 
 /** Degrees of superheat/subcooling against saturation at the state's P, and liquid/vapor volume fractions. */
 export function stateExtras(state: State): import('./types.ts').StateExtras {
@@ -217,6 +213,7 @@ export {
 	SAMPLES_MAX,
 	N_MAX
 } from './solvers/legs.ts';
+export { ROOT_HINTS } from './solvers/choose.ts';
 
 /**
  * Background isolines (isobars Pa, isotherms K, isochores m³/kg, isentropes J/(kg·K), isenthalps

@@ -63,7 +63,7 @@ export function solveLike(
 			Math.abs(Math.log(c.rho * ref.v));
 		const best = [...cands].sort((a, b) => dist(a) - dist(b))[0];
 		if (!(Math.abs(best.T / ref.T - 1) < 1e-6 && Math.abs(best.P / ref.P - 1) < 1e-3))
-			throw new Error(`reference not among candidates: ${e.message}`);
+			throw new Error(`reference not among candidates: ${e.message}`, { cause: e });
 		const same = (st: State) =>
 			Math.abs(st.T / best.T - 1) < 1e-12 && Math.abs(st.rho / best.rho - 1) < 1e-9;
 		for (const hint of HINTS) {
@@ -77,7 +77,9 @@ export function solveLike(
 		// three or more candidates: only `near` tells the middle ones apart
 		const st = fixState(fluid, inputs, { near: { T: best.T, P: best.P } });
 		if (same(st)) return { state: st, hinted: true };
-		throw new Error(`neither a hint nor near returns the reference: ${e.message}`);
+		throw new Error(`neither a hint nor near returns the reference: ${e.message}`, {
+			cause: e
+		});
 	}
 }
 

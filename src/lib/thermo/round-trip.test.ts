@@ -54,7 +54,7 @@ function roundTrip(seed: Inputs): number {
 		try {
 			st = solveLike('water', inputs, ref).state;
 		} catch (e) {
-			throw new Error(`${where}: ${(e as Error).message}`);
+			throw new Error(`${where}: ${(e as Error).message}`, { cause: e });
 		}
 		expectFinite(st);
 		const sp = dome ? { T: 0, P: 0, v: 0 } : spread('water', ref, a, b);

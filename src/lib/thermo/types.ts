@@ -19,6 +19,16 @@ export type Phase =
 	| 'superheated-vapor'
 	| 'supercritical-fluid';
 
+/** Each phase in running text, as every table, chart and export names it. */
+export const PHASE_NAME: Readonly<Record<Phase, string>> = {
+	'compressed-liquid': 'compressed liquid',
+	'saturated-liquid': 'saturated liquid',
+	'saturated-mixture': 'saturated mixture',
+	'saturated-vapor': 'saturated vapor',
+	'superheated-vapor': 'superheated vapor',
+	'supercritical-fluid': 'supercritical fluid'
+};
+
 export interface State {
 	fluid: string;
 	phase: Phase;
@@ -252,6 +262,31 @@ export interface DesignLimits {
 }
 
 export type DesignLimitName = keyof DesignLimits;
+
+/** The design limits in the order every table, diff and message lists them. */
+export const DESIGN_LIMIT_NAMES: readonly DesignLimitName[] = [
+	'designPressure',
+	'reliefSetPressure',
+	'designTemperature',
+	'minimumTemperature'
+];
+
+/** Each design limit's name in running text (lower case: "reaches the design pressure"). */
+export const DESIGN_LIMIT_LABEL: Readonly<Record<DesignLimitName, string>> = {
+	designPressure: 'design pressure',
+	reliefSetPressure: 'relief set pressure',
+	designTemperature: 'design temperature',
+	minimumTemperature: 'minimum temperature'
+};
+
+/** The quantity each design limit is (for units and formatting). */
+export const DESIGN_LIMIT_QUANTITY: Readonly<Record<DesignLimitName, 'pressure' | 'temperature'>> =
+	{
+		designPressure: 'pressure',
+		reliefSetPressure: 'pressure',
+		designTemperature: 'temperature',
+		minimumTemperature: 'temperature'
+	};
 
 /** A whole path: the sheet's spec (docs/compute-api.md, "A path"). */
 export interface PathSpec {

@@ -4,6 +4,7 @@
  * Fixture: tests/reference/iapws-water.json, made by tests/reference/make-iapws-water.py.
  * Tolerances (issue 3): 1e−6 relative in P, v, u, h, s single-phase; 1e−5 on and inside the dome.
  */
+// eslint-disable-next-line no-restricted-imports -- a test, run by vitest on Node, reading its reference table
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from './errors.ts';
@@ -112,7 +113,7 @@ describe('water against python3-iapws (fixture)', () => {
 				try {
 					res = solveLike('water', inputsFrom(r, a, b), r);
 				} catch (e) {
-					throw new Error(`${where}: ${(e as Error).message}`);
+					throw new Error(`${where}: ${(e as Error).message}`, { cause: e });
 				}
 				if (res.hinted) hinted++;
 				const st = res.state;
@@ -168,7 +169,7 @@ describe('water against python3-iapws (fixture)', () => {
 				try {
 					res = solveLike('water', inputs, r);
 				} catch (e) {
-					throw new Error(`${where}: ${(e as Error).message}`);
+					throw new Error(`${where}: ${(e as Error).message}`, { cause: e });
 				}
 				const st = res.state;
 				expectFinite(st);

@@ -1,4 +1,4 @@
-import type { MeasuredTrace } from '../charts/types';
+import type { MeasuredTrace } from '$lib/charts/types';
 import type { TracePoint } from './types';
 
 /**

@@ -7,9 +7,9 @@ import {
 	unitById,
 	unitsOf,
 	type UnitDef
-} from '../units/catalogue';
-import { DEFAULT_ATMOSPHERE } from '../units/factors';
-import { formatNumber } from '../units/format';
+} from '$lib/units/catalogue';
+import { DEFAULT_ATMOSPHERE } from '$lib/units/factors';
+import { formatNumber } from '$lib/units/format';
 import type {
 	RawTracePoint,
 	RejectedLine,

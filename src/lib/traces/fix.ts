@@ -1,4 +1,4 @@
-import { fixState, getFluid, saturationAtP, ThermoError } from '../thermo/index';
+import { fixState, getFluid, saturationAtP, ThermoError } from '$lib/thermo';
 import type { RawTracePoint, RejectedLine, TracePoint } from './types';
 
 /**

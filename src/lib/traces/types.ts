@@ -1,4 +1,4 @@
-import type { Phase } from '../thermo/types';
+import type { Phase } from '$lib/thermo/types';
 
 /**
  * Measured traces: logger data (time, P, T and optionally v or rho) read from a CSV file and fixed

@@ -28,8 +28,8 @@ export const PSI = POUND_FORCE / (INCH * INCH);
 /** 1 bar = 100 000 Pa exactly. NIST SP 811 (2008), App. B.8. */
 export const BAR = 1e5;
 
-/** 1 standard atmosphere = 101 325 Pa exactly. 10th CGPM (1954); NIST SP 811 (2008), App. B.8. */
-export const STANDARD_ATMOSPHERE = 101325;
+/** 1 standard atmosphere (src/lib/thermo/constants.ts, shared with the engine's gauge default). */
+export { STANDARD_ATMOSPHERE } from '$lib/thermo/constants';
 
 /**
  * 1 Btu_IT = 1055.05585262 J exactly: the IT calorie is 4.1868 J exactly (5th International
@@ -77,5 +77,5 @@ export const FAHRENHEIT_OFFSET = 459.67;
 /** T/°C = T/K − 273.15 exactly. NIST SP 811 (2008), App. B.9. */
 export const CELSIUS_OFFSET = 273.15;
 
-/** Default atmospheric pressure for gauge readings: one standard atmosphere, Pa. */
-export const DEFAULT_ATMOSPHERE = STANDARD_ATMOSPHERE;
+/** Default atmospheric pressure for gauge readings; its home is the engine, which applies it too. */
+export { DEFAULT_ATMOSPHERE } from '$lib/thermo/constants';

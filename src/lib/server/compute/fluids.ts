@@ -1,5 +1,5 @@
 import { ThermoError, getFluid, type FluidInfo } from '$lib/thermo';
-import { AppError } from '$lib/server/errors';
+import { AppError } from '../errors';
 
 /** The fluid named in a URL, or a 404 that lists the fluids. */
 export function fluidFromParam(id: string): FluidInfo {

@@ -2,11 +2,13 @@ import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { answerCache, resetComputeLimiter, workUnits, WORK_UNIT_POINTS } from './http';
 import { API_ISOLINE_POINTS_MAX, API_PATH_POINTS_MAX } from './schemas';
 import { callRoute } from './testing';
+/* eslint-disable no-restricted-imports -- the routes' own handlers, called as SvelteKit calls them */
 import { POST as states } from '../../../routes/api/v1/states/+server';
 import { POST as legs } from '../../../routes/api/v1/legs/+server';
 import { POST as paths } from '../../../routes/api/v1/paths/+server';
 import { GET as isolines } from '../../../routes/api/v1/fluids/[id=fluid]/isolines/+server';
 import { GET as saturation } from '../../../routes/api/v1/fluids/[id=fluid]/saturation/+server';
+/* eslint-enable no-restricted-imports */
 
 /*
  * The compute routes' work caps and their cost-charged rate limit, through the real handlers. The

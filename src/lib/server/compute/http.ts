@@ -2,10 +2,10 @@ import { createHash, randomUUID } from 'node:crypto';
 import { json, type RequestEvent } from '@sveltejs/kit';
 import { ZodError, type z } from 'zod';
 import { ThermoError, type ThermoErrorCode } from '$lib/thermo';
-import { issueText, jsonError, readJson } from '$lib/server/api';
-import { AppError } from '$lib/server/errors';
-import { appLimits, retryAfterSeconds, type AnyLimiter } from '$lib/server/rate-limit';
-import { clientIp } from '$lib/server/request';
+import { issueText, jsonError, readJson } from '../api';
+import { AppError } from '../errors';
+import { appLimits, retryAfterSeconds, type AnyLimiter } from '../rate-limit';
+import { clientIp } from '../request';
 import { createAnswerCache } from './answer-cache';
 
 /*

@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ThermoError } from '$lib/thermo';
+// eslint-disable-next-line no-restricted-imports -- the production worker entry, run by the pool under test
 import { buildComputeWorker } from '../../../../scripts/compute-worker.js';
 import { compute, poolSize, startPool, type ComputePool } from './pool';
 import type { ComputeTask } from './tasks';

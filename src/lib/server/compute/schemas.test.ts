@@ -9,7 +9,7 @@ import {
 	stateRequestSchema
 } from './schemas';
 import { MAX_BODY_BYTES, readBody, readQuery, thermoStatus } from './http';
-import { AppError } from '$lib/server/errors';
+import { AppError } from '../errors';
 
 const LEG = {
 	fluid: 'water',

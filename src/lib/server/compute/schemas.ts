@@ -16,8 +16,13 @@ import {
 	MAX_LEGS,
 	N_MAX,
 	PROCESSES,
+	ROOT_HINTS,
 	SAMPLES_DEFAULT,
-	TARGET_NAMES
+	TARGET_NAMES,
+	type LegSpec,
+	type PathSpec,
+	type Process,
+	type RootHint
 } from '$lib/thermo';
 
 /*
@@ -141,7 +146,7 @@ export const fluidSchema = z
 	.min(1, { error: 'fluid must not be empty; use an id such as "water".' })
 	.max(64, { error: 'fluid is too long; use an id such as "water".' });
 
-const processSchema = z.enum(PROCESSES as unknown as [string, ...string[]], {
+const processSchema = z.enum(PROCESSES as [Process, ...Process[]], {
 	error: (iss) => `process must be one of ${PROCESSES.join(', ')}; got ${got(iss.input)}.`
 });
 
@@ -206,7 +211,7 @@ const windowSchema = z
 		}
 	);
 
-const HINTS = ['lower-T', 'higher-T', 'lower-P', 'higher-P', 'liquid-side', 'vapor-side'] as const;
+const HINTS = ROOT_HINTS as [RootHint, ...RootHint[]];
 
 /** A root hint; `name` is the field's name in messages. */
 const hintSchema = (name: string) =>
@@ -510,3 +515,15 @@ export const noQuerySchema = z.strictObject(
 			`Unknown field${(iss.keys?.length ?? 0) > 1 ? 's' : ''} ${(iss.keys ?? []).map((k) => `"${k.slice(0, 40)}"`).join(', ')} in the query: this route takes no query parameters (every answer is SI).`
 	}
 );
+
+/** `A` when it is assignable to `B`; otherwise svelte-check fails where it is used. */
+type Assignable<A extends B, B> = A;
+
+/**
+ * Compile-time ties between the request schemas and the engine's input types: a field added,
+ * renamed or narrowed on one side and not the other fails svelte-check here.
+ */
+export type SchemasMatchEngine = [
+	Assignable<z.infer<typeof pathRequestSchema>, PathSpec>,
+	Assignable<z.infer<typeof legRequestSchema>, LegSpec>
+];

@@ -50,7 +50,7 @@ export async function callRoute(
 ): Promise<{ status: number; headers: Headers; text: string; body: unknown }> {
 	const response = await handler(computeEvent(url, init) as never);
 	const text = response.status === 304 ? '' : await response.text();
-	let body: unknown = null;
+	let body: unknown;
 	try {
 		body = text ? JSON.parse(text) : null;
 	} catch {

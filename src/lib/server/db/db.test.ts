@@ -20,6 +20,7 @@ import {
 	listOutboxMessages
 } from './outbox';
 import { logTeamEvent, listTeamEvents } from './team-events';
+// eslint-disable-next-line no-restricted-imports -- checks the route matcher agrees with the slugs the db stores
 import { match as slugMatcher } from '../../../params/slug';
 
 let db: Kysely<Database>;

@@ -20,23 +20,27 @@
  * - throttling-irreversible: an isenthalpic leg (info).
  * - per-kg-totals: a closed system without mass or volume: totals are per 1 kg (info).
  */
+import { LIQUID_FULL_CAUTION, PRESSURE_EQUIPMENT_CAUTION } from '../cautions.ts';
+import { DEFAULT_ATMOSPHERE } from '../constants.ts';
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point } from '../properties.ts';
 import { getCompiledFluid } from '../registry.ts';
-import type {
-	CycleAnalysis,
-	DesignLimitName,
-	DesignLimits,
-	LimitEvent,
-	PathLeg,
-	PathResult,
-	PathSpec,
-	PathState,
-	PathTotals,
-	PathWarning,
-	State,
-	StateExtras
+import {
+	DESIGN_LIMIT_LABEL,
+	DESIGN_LIMIT_NAMES,
+	type CycleAnalysis,
+	type DesignLimitName,
+	type DesignLimits,
+	type LimitEvent,
+	type PathLeg,
+	type PathResult,
+	type PathSpec,
+	type PathState,
+	type PathTotals,
+	type PathWarning,
+	type State,
+	type StateExtras
 } from '../types.ts';
 import { fixStateOf } from './fix-state.ts';
 import { THROTTLING_NOTE, traceLeg } from './legs.ts';
@@ -46,32 +50,6 @@ import { satAtP, satAtT, triplePressure } from './saturation.ts';
 export const MAX_LEGS = 50;
 /** Relative tolerance for "the path ends where it started" (T and ρ). */
 export const CYCLE_TOLERANCE = 1e-6;
-export const DEFAULT_ATMOSPHERE = 101325;
-
-/** The brief's caution wherever results touch pressure equipment (same words as src/lib/cautions.ts). */
-export const PRESSURE_EQUIPMENT_CAUTION =
-	'These are design-exploration results. Pressure equipment and relief devices are designed, sized and approved ' +
-	'under the applicable code (for example ASME BPVC Section VIII or EN 13445 for vessels; ASME BPVC Section XIII, ' +
-	'ISO 4126 or API 520/521 for overpressure protection and relief devices) and local regulations, by a qualified ' +
-	'engineer. Statewright supplies states and warnings, never relief sizes.';
-
-/** Said with every liquid-full warning (same words as LIQUID_FULL_CAUTION in src/lib/cautions.ts). */
-export const LIQUID_FULL_CAUTION =
-	'Heating a liquid-full sealed vessel raises its pressure very fast.';
-
-const LIMIT_NAMES: DesignLimitName[] = [
-	'designPressure',
-	'reliefSetPressure',
-	'designTemperature',
-	'minimumTemperature'
-];
-const LIMIT_LABEL: Record<DesignLimitName, string> = {
-	designPressure: 'design pressure',
-	reliefSetPressure: 'relief set pressure',
-	designTemperature: 'design temperature',
-	minimumTemperature: 'minimum temperature'
-};
-
 function bad(message: string, hint: string): ThermoError {
 	return new ThermoError('invalid-path', message, hint);
 }
@@ -199,10 +177,10 @@ function checkSpec(spec: PathSpec): { fl: Fluid; limits: DesignLimits; atm: numb
 			'Give limits: { designPressure?, designTemperature?, reliefSetPressure?, minimumTemperature? } in Pa and K.'
 		);
 	for (const k of Object.keys(lim)) {
-		if (!LIMIT_NAMES.includes(k as DesignLimitName))
+		if (!DESIGN_LIMIT_NAMES.includes(k as DesignLimitName))
 			throw bad(
 				`Unknown design limit "${k}".`,
-				`Use ${LIMIT_NAMES.join(', ')} (Pa and K, absolute).`
+				`Use ${DESIGN_LIMIT_NAMES.join(', ')} (Pa and K, absolute).`
 			);
 		if (lim[k] === undefined || lim[k] === null) continue;
 		limits[k as DesignLimitName] = positive(
@@ -257,7 +235,7 @@ export function computePath(spec: PathSpec): PathResult {
 		minimumTemperature: (T) => (limits.minimumTemperature as number) - T
 	};
 	const tol = (k: DesignLimitName) => 1e-9 * (limits[k] as number);
-	for (const k of LIMIT_NAMES) {
+	for (const k of DESIGN_LIMIT_NAMES) {
 		if (limits[k] === undefined) continue;
 		const g = beyond[k](start.T, start.P);
 		if (g >= -tol(k))
@@ -317,7 +295,7 @@ export function computePath(spec: PathSpec): PathResult {
 		per.qFlow += leg.qFlow;
 
 		// design limits: the first state along the leg where each is reached
-		for (const k of LIMIT_NAMES) {
+		for (const k of DESIGN_LIMIT_NAMES) {
 			if (limits[k] === undefined) continue;
 			const g = beyond[k];
 			const at = trace.firstReach((T, P) => g(T, P) + tol(k));
@@ -404,7 +382,7 @@ export function computePath(spec: PathSpec): PathResult {
 
 	// warnings for the limit events, and the caution
 	for (const ev of limitEvents) {
-		const label = LIMIT_LABEL[ev.limit];
+		const label = DESIGN_LIMIT_LABEL[ev.limit];
 		const v = ev.limit.endsWith('Pressure') ? pa(ev.value) : kel(ev.value);
 		const where = ev.leg
 			? `Leg ${ev.leg} reaches the ${label} (${v})`

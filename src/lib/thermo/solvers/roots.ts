@@ -43,10 +43,7 @@ export function newtonBracket(
 		if (f < 0 === fa < 0) {
 			a = z;
 			fa = f;
-		} else {
-			b = z;
-			fb = f;
-		}
+		} else b = z;
 		let next = z - f / out.df;
 		const lo = Math.min(a, b),
 			hi = Math.max(a, b);
@@ -70,6 +67,7 @@ function turningPoint(
 	tol: number
 ): number {
 	const out: FD = { f: 0, df: 0 };
+	// eslint-disable-next-line no-useless-assignment -- TypeScript wants z set before a loop it cannot see always runs
 	let z = 0.5 * (a + b);
 	for (let it = 0; it < 100; it++) {
 		z = a - (da * (b - a)) / (db - da);

@@ -132,9 +132,6 @@ const target: fc.Arbitrary<unknown> = fc.oneof(
 
 /** Sometimes absent (1 in `freq`). */
 const maybe = <T>(a: fc.Arbitrary<T>, freq = 3) => fc.option(a, { nil: undefined, freq });
-/** Almost always there, now and then left out. */
-const usually = <T>(a: fc.Arbitrary<T>) =>
-	fc.oneof({ weight: 15, arbitrary: a }, { weight: 1, arbitrary: fc.constant(undefined) });
 const samples = fc.oneof(
 	{ weight: 8, arbitrary: fc.integer({ min: 20, max: 80 }) },
 	{ weight: 1, arbitrary: fc.constantFrom(0, 19, 1000, 1001, 33.5, -40) }

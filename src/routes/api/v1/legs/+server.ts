@@ -1,5 +1,5 @@
 import type { RequestHandler } from './$types';
-import { SAMPLES_DEFAULT, type Process } from '$lib/thermo';
+import { SAMPLES_DEFAULT } from '$lib/thermo';
 import { chargeWork, computePost, JsonText, readBody } from '$lib/server/compute/http';
 import { compute } from '$lib/server/compute/pool';
 import { legRequestSchema } from '$lib/server/compute/schemas';
@@ -14,7 +14,7 @@ export const POST: RequestHandler = computePost(async (event) => {
 	const spec = {
 		fluid: b.fluid,
 		start: b.start,
-		process: b.process as Process,
+		process: b.process,
 		target: b.target,
 		n: b.n,
 		samples: b.samples,

@@ -1,5 +1,4 @@
 import type { RequestHandler } from './$types';
-import type { PathSpec } from '$lib/thermo';
 import { chargeWork, computePost, JsonText, readBody } from '$lib/server/compute/http';
 import { compute } from '$lib/server/compute/pool';
 import { pathPoints, pathRequestSchema } from '$lib/server/compute/schemas';
@@ -13,5 +12,5 @@ import { pathPoints, pathRequestSchema } from '$lib/server/compute/schemas';
 export const POST: RequestHandler = computePost(async (event) => {
 	const spec = await readBody(event.request, pathRequestSchema);
 	await chargeWork(event, pathPoints(spec));
-	return new JsonText(await compute({ kind: 'path', spec: spec as PathSpec }));
+	return new JsonText(await compute({ kind: 'path', spec }));
 });

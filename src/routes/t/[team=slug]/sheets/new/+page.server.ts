@@ -9,6 +9,7 @@ import { plainText } from '$lib/plain-text';
 import * as engine from '$lib/thermo';
 import { listFluids } from '$lib/thermo';
 import { fillStart } from '$lib/sheets/fill';
+import { fluidIds } from '$lib/sheets/schema';
 import { readAcrossSaturation } from '$lib/sheets/saturation-input';
 import type { StartSpec } from '$lib/sheets/types';
 import { WORKED_EXAMPLES } from '$lib/sheets/templates';
@@ -48,7 +49,6 @@ const QUANTITY: Record<(typeof PROPS)[number], Quantity> = {
 	x: 'quality',
 	fill: 'fraction'
 };
-const fluidIds = listFluids().map((f) => f.id) as [string, ...string[]];
 
 const text = (what: string, max = 60) =>
 	plainText(`The ${what.replace(/^the /, '')}`, 'line', `Enter ${what}.`)
@@ -58,7 +58,7 @@ const text = (what: string, max = 60) =>
 const blankForm = z
 	.object({
 		title: titleSchema,
-		fluid: z.enum(fluidIds, { error: `Choose a fluid: ${fluidIds.join(', ')}.` }),
+		fluid: z.enum(fluidIds(), { error: `Choose a fluid: ${fluidIds().join(', ')}.` }),
 		size: z.enum(['mass', 'volume', 'perkg', 'flow'], {
 			error: 'Choose what sizes the system: a mass, a volume, per kg, or a mass flow.'
 		}),
