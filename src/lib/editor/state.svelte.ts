@@ -55,8 +55,6 @@ import {
 	type PathView
 } from '$lib/sheets/doc';
 import { History } from './history';
-import { lineSpans, lineValues } from '$lib/sheets/isolines';
-import { shownLines } from '$lib/sheets/chart-views';
 import {
 	startCandidatesOf,
 	startOptions,

@@ -12,8 +12,8 @@ import {
 	viewLines
 } from './chart-views';
 import { lineSpans, lineValues } from './isolines';
-import { DEFAULT_UNIT_PREFS } from '../units/prefs';
-import { getFluid, saturationCurve, fixState } from '../thermo';
+import { DEFAULT_UNIT_PREFS } from '$lib/units/prefs';
+import { getFluid, saturationCurve, fixState } from '$lib/thermo';
 
 describe('which views a sheet shows', () => {
 	it('reads "both" as T–v and P–v and a pair as its two views, in order', () => {

@@ -2,8 +2,8 @@
  * Which views a sheet shows and which background lines each draws, from its chart preferences
  * (types.ts). Pure; the views themselves are data in $lib/charts/views.
  */
-import { isChartKind, VIEW_ORDER, VIEWS, type ChartKind } from '../charts/views';
-import type { IsolineKind } from '../charts/types';
+import { isChartKind, VIEW_ORDER, VIEWS, type ChartKind } from '$lib/charts/views';
+import type { IsolineKind } from '$lib/charts/types';
 import type { ChartPrefs, ChartView, LineKind } from './types';
 
 export const LINE_KINDS: readonly LineKind[] = [
