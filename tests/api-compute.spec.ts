@@ -675,7 +675,7 @@ const BAD: Row[] = [
 	},
 	{
 		name: 'isolines: unknown kind',
-		path: '/api/v1/fluids/water/isolines?kind=isentrope&values=1e5',
+		path: '/api/v1/fluids/water/isolines?kind=isoquant&values=1e5',
 		status: 400,
 		code: 'invalid-input',
 		message: /kind must be one of/
@@ -746,6 +746,13 @@ const BAD: Row[] = [
 	{
 		name: 'isolines: isobar above the range',
 		path: '/api/v1/fluids/water/isolines?kind=isobar&values=1e12',
+		status: 422,
+		code: 'out-of-range'
+	},
+	{
+		// isentropes are a kind now: a value no state on the whole range has is refused as out of range
+		name: 'isolines: an isentrope no state reaches',
+		path: '/api/v1/fluids/water/isolines?kind=isentrope&values=1e5',
 		status: 422,
 		code: 'out-of-range'
 	},
