@@ -78,6 +78,8 @@ export interface ChartPath {
 	legs: readonly ChartLeg[];
 	selection: ChartSelection | null;
 	traces?: readonly MeasuredTrace[] | null;
+	/** a preview computed in the browser while dragging: the legs are drawn lighter until the real answer replaces it */
+	preview?: boolean;
 }
 
 export interface ChartInteraction {
@@ -625,6 +627,7 @@ export function createChart(
 			STATE_R
 		);
 
+		gLegs.classed('is-preview', path.preview === true);
 		gLegs
 			.selectAll<SVGGElement, ChartLeg>('g.swc-leg')
 			.data(path.legs, (d) => d.id)
@@ -748,11 +751,11 @@ export function createChart(
 		);
 		drawKey();
 		drawOverlay(legPts);
-		// for benchmarks and tests: a redraw counter and its cost, on the overlay (never exported)
-		ov.attr('data-path-rev', ++pathRev).attr(
-			'data-path-ms',
-			(performance.now() - started).toFixed(2)
-		);
+		// for benchmarks and tests: a redraw counter, its cost and whether it drew a preview, on the
+		// overlay (never exported)
+		ov.attr('data-path-rev', ++pathRev)
+			.attr('data-path-ms', (performance.now() - started).toFixed(2))
+			.attr('data-path-preview', path.preview ? 'true' : null);
 	}
 
 	/**

@@ -48,6 +48,7 @@ export const DRAWING_CSS = `
 .swc-drawing .swc-leg-casing { fill: none; stroke: ${v.sheet}; stroke-linecap: round; stroke-linejoin: round; }
 .swc-drawing .swc-leg.is-selected .swc-leg-casing { stroke: ${v.accentWash}; }
 .swc-drawing .swc-leg-line { fill: none; stroke-linecap: round; stroke-linejoin: round; }
+.swc-drawing .is-preview .swc-leg-line { stroke-opacity: 0.6; }
 .swc-drawing .swc-crossing { fill: ${v.sheet}; stroke: ${v.ink}; stroke-width: 1.25; }
 .swc-drawing .swc-state-disc { fill: ${v.ink}; stroke: ${v.sheet}; stroke-width: 1.5; }
 .swc-drawing .swc-state-text { font-family: ${MONO}; font-size: 8.5px; font-weight: 600; fill: ${v.sheet}; text-anchor: middle; }

@@ -3,9 +3,12 @@
  * panels all read and change the sheet through this object, so every edit takes one path:
  * build the next document → compute it (POST /api/v1/paths; the engine in the browser for a
  * sheet without legs) → on success make it the document, push it on the undo stack and hand it
- * to autosave; on failure keep the old one and say why. Drags are live: every pointer move asks
- * the server through a coalescer (one request in flight, the newest position waiting, stale
- * answers dropped) and the chart redraws as answers land; the gesture is one undo step.
+ * to autosave; on failure keep the old one and say why. Drags are live: once a frame (the latest
+ * pointer move wins) the browser's engine recomputes the legs the move changes and the chart
+ * redraws that preview at once (preview.ts); the same move asks the server through a coalescer
+ * (one request in flight, the newest position waiting, stale answers dropped), and the server's
+ * answer replaces the preview and fills the table and warnings. Only the server's answers ever
+ * become the document's result; the gesture is one undo step.
  *
  * Extending (revisions, notes, traces): read `doc`, `view`, `selection`; draw over the chart by
  * setting `traces`; add panel tabs on the page (see SheetPanel.svelte).
@@ -84,11 +87,24 @@ import type {
 import { fillStart, type FillSpec } from '$lib/sheets/fill';
 import { readAcrossSaturation, type SaturationReading } from '$lib/sheets/saturation-input';
 import { saturationTarget } from '$lib/sheets/saturation-target';
+import { previewPath, type PathPreview } from './preview';
 
 type Engine = typeof import('$lib/thermo');
 
 /** Points per leg while dragging (the engine's least): half the work per answer; the end of the gesture redraws at full detail. */
 const DRAG_SAMPLES = 20;
+/** A drag preview stops adding legs after this long (a long path dragged near its start); the server's answer draws the rest. */
+const PREVIEW_BUDGET_MS = 10;
+
+/** Once a frame in a browser; elsewhere (unit tests, server) a timer of about one frame. */
+const nextFrame = (f: () => void): (() => void) => {
+	if (typeof requestAnimationFrame === 'function') {
+		const id = requestAnimationFrame(f);
+		return () => cancelAnimationFrame(id);
+	}
+	const id = setTimeout(f, 16);
+	return () => clearTimeout(id);
+};
 
 export interface EditorInit {
 	team: string;
@@ -131,7 +147,12 @@ interface Drag {
 interface Candidate {
 	doc: SheetDoc;
 	note: string | null;
+	/** which pointer move of the gesture it is for (1, 2, …): orders previews and answers */
+	seq?: number;
 }
+
+/** A preview on the chart, and the move it was computed for. */
+export type DragPreview = PathPreview & { seq: number };
 
 /** A leg marked "to saturation" whose target was changed since (typed, dragged) is an ordinary leg again. */
 function keepSaturationMarks(doc: SheetDoc): SheetDoc {
@@ -168,6 +189,12 @@ export class SheetEditor {
 	doc = $state.raw<SheetDoc>(null as unknown as SheetDoc);
 	/** its computed path (null if it could not be computed: `computeError` says why) */
 	view = $state.raw<PathView | null>(null);
+	/**
+	 * While dragging: the path as the browser's engine computed it for the newest pointer move,
+	 * drawn on the charts instead of `view` until the server answers for that move or a later one.
+	 * For drawing only: it never becomes `view`, the table, a warning or a saved result.
+	 */
+	preview = $state.raw<DragPreview | null>(null);
 	/** the view of the committed document (isolines and the chart window follow it, not a drag) */
 	committedView = $state.raw<PathView | null>(null);
 	computeError = $state<string | null>(null);
@@ -227,6 +254,10 @@ export class SheetEditor {
 	#autosave: Autosave<SheetDoc> | null = null;
 	#queue: Promise<unknown> = Promise.resolve();
 	#drag: Drag | null = null;
+	/** the newest pointer move of the drag, waiting for the next frame */
+	#pendingMove: StateDragEvent | null = null;
+	#cancelFrame: (() => void) | null = null;
+	#moveSeq = 0;
 	#coalescer: Coalescer<Candidate>;
 	#noteTimer: ReturnType<typeof setTimeout> | undefined;
 	#isoKey = '';
@@ -266,10 +297,15 @@ export class SheetEditor {
 					this.#drag.live = candidate.doc;
 					this.doc = candidate.doc;
 					this.view = view;
+					// the server's answer replaces a preview of this move or an earlier one (a
+					// preview of a later move stays: the chart does not step back)
+					if (this.preview && this.preview.seq <= (candidate.seq ?? Infinity)) this.preview = null;
 					if (candidate.note) this.#note(candidate.note, 'info');
 				},
-				error: (e) => {
+				error: (e, candidate) => {
 					if (!this.#drag) return;
+					// the server refused the very move the preview shows: its last answer is drawn
+					if (this.preview && this.preview.seq === candidate.seq) this.preview = null;
 					this.#note(
 						`Not there: ${messageOf(e, this.#drag.base.spec.legs)} The last valid path stays drawn.`,
 						'caution'
@@ -531,6 +567,9 @@ export class SheetEditor {
 		const key = pullNewLeg ? newLegId(legs.map((l) => l.id)) : e.stateId;
 		const leg = !pullNewLeg && index > 0 ? legs[index - 1] : null;
 		this.#coalescer.cancel();
+		this.#dropPendingMove();
+		this.preview = null;
+		this.#moveSeq = 0;
 		this.#drag = {
 			kind: pullNewLeg ? 'new-leg' : 'state',
 			key,
@@ -546,7 +585,26 @@ export class SheetEditor {
 		if (!pullNewLeg) this.selection = { kind: 'state', id: e.stateId };
 	}
 
+	/** A pointer move of the drag: handled at the next frame, the latest move winning. */
 	drag(e: StateDragEvent): void {
+		if (!this.#drag) return;
+		this.#pendingMove = e;
+		this.#cancelFrame ??= nextFrame(() => {
+			this.#cancelFrame = null;
+			const move = this.#pendingMove;
+			this.#pendingMove = null;
+			if (move) this.#move(move);
+		});
+	}
+
+	#dropPendingMove() {
+		this.#cancelFrame?.();
+		this.#cancelFrame = null;
+		this.#pendingMove = null;
+	}
+
+	/** One move: the candidate document, its preview drawn now, the server asked (coalesced). */
+	#move(e: StateDragEvent): void {
 		const d = this.#drag;
 		if (!d) return;
 		const c = this.#candidate(d, e.coords);
@@ -554,16 +612,42 @@ export class SheetEditor {
 			this.#note(c.error, 'caution');
 			return;
 		}
+		c.seq = ++this.#moveSeq;
+		this.#preview(d, c);
 		this.#coalescer.submit(c);
+	}
+
+	/**
+	 * The preview of a move, from the engine in the browser (the legs from the moved state on).
+	 * Where the engine refuses the move, the last good preview stays and the server's answer speaks.
+	 */
+	#preview(d: Drag, c: Candidate): void {
+		const e = this.engine;
+		if (!e || !d.baseView || c.seq === undefined) return;
+		const first = stateIndex(c.doc.spec.legs, d.key);
+		if (first < 0) return;
+		try {
+			const p = previewPath(e, c.doc.spec, d.baseView, first, {
+				samples: DRAG_SAMPLES,
+				budgetMs: PREVIEW_BUDGET_MS
+			});
+			this.preview = { ...p, seq: c.seq };
+		} catch {
+			// the server's answer for this move says why (the coalescer's error handler)
+		}
 	}
 
 	async dragEnd(e: StateDragEvent): Promise<void> {
 		const d = this.#drag;
 		if (!d) return;
-		this.drag(e);
+		// the release position is the last move: handled now, not at the next frame
+		this.#dropPendingMove();
+		this.#move(e);
 		await this.#coalescer.idle();
 		this.#drag = null;
 		this.dragging = false;
+		// only the server's answers become the result: the preview goes with the gesture
+		this.preview = null;
 		const live = d.live;
 		if (!live || sameDoc(live, d.base) || !this.view) {
 			this.doc = d.base;
