@@ -208,6 +208,8 @@ export function createChart(
 	/** `off`: the disc's stacking offset when the drag began (kept, so the state does not jump as it leaves the stack) */
 	let dragging: { id: string; moved: boolean; off: Point } | null = null;
 	let pathRev = 0;
+	/** the frame was drawn since the labels were last placed */
+	let labelsStale = true;
 	/** discs moved beside an earlier state they would hide (a cycle's last state on its first) */
 	let stateShift = new Map<string, Point & { beside?: string }>();
 	const shifted = (d: ChartState): Point => {
@@ -403,6 +405,7 @@ export function createChart(
 		drawDome();
 		drawIsolines();
 		drawLimits();
+		labelsStale = true;
 		drawPath();
 	}
 
@@ -745,10 +748,15 @@ export function createChart(
 					t.text(d.label).attr('font-size', d.label.length > 2 ? 7.5 : null);
 			});
 
-		drawLabels(
-			legPts,
-			crossings.map((c) => c.p)
-		);
+		// a preview (a drag, every frame) leaves the labels where the last computed path put them,
+		// unless the frame moved under them: placing them is most of a redraw's time
+		if (!path.preview || labelsStale) {
+			drawLabels(
+				legPts,
+				crossings.map((c) => c.p)
+			);
+			labelsStale = false;
+		}
 		drawKey();
 		drawOverlay(legPts);
 		// for benchmarks and tests: a redraw counter, its cost and whether it drew a preview, on the

@@ -585,16 +585,27 @@ export class SheetEditor {
 		if (!pullNewLeg) this.selection = { kind: 'state', id: e.stateId };
 	}
 
-	/** A pointer move of the drag: handled at the next frame, the latest move winning. */
+	/**
+	 * A pointer move of the drag, paced by frames: the first move after a quiet frame is handled
+	 * at once; moves arriving before the next frame wait for it, the latest winning.
+	 */
 	drag(e: StateDragEvent): void {
 		if (!this.#drag) return;
 		this.#pendingMove = e;
-		this.#cancelFrame ??= nextFrame(() => {
+		if (this.#cancelFrame) return;
+		this.#takeMove();
+	}
+
+	/** Handle the waiting move and hold any later one until the next frame. */
+	#takeMove(): void {
+		const move = this.#pendingMove;
+		this.#pendingMove = null;
+		if (!move) return;
+		this.#cancelFrame = nextFrame(() => {
 			this.#cancelFrame = null;
-			const move = this.#pendingMove;
-			this.#pendingMove = null;
-			if (move) this.#move(move);
+			this.#takeMove();
 		});
+		this.#move(move);
 	}
 
 	#dropPendingMove() {
