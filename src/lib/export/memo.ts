@@ -117,6 +117,7 @@ export const PAPER_THEME: Readonly<Record<string, string>> = {
 	'--sw-rule': '#d6ccb8',
 	'--sw-accent': '#3346b8',
 	'--sw-accent-wash': '#e3e6f7',
+	'--sw-accent-ink': '#ffffff',
 	'--sw-caution': '#a3361b',
 	'--sw-caution-wash': '#f6e1d6',
 	'--sw-dome': 'rgb(51 70 184 / 0.06)'
