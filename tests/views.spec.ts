@@ -199,3 +199,114 @@ test('an h–s memo figure is the h–s view', async ({ browser }) => {
 	await page.getByTestId('sheet-charts').screenshot({ path: 'tmp/views-pair.png' });
 	await page.context().close();
 });
+
+// Water heated at 1 MPa a from 350 K to 600 K (Tsat(1 MPa) = 453.03 K, python3-iapws 1.5.2
+// (Debian), IAPWS95(P=1, x=0)): the logger readings below are all single phase, off the dome.
+const heater = {
+	spec: {
+		fluid: 'water',
+		system: { kind: 'flow', massFlow: 0.1 },
+		start: { T: 350, P: 1e6 },
+		legs: [{ id: 'heat', process: 'isobaric', target: { T: 600 } }],
+		// a pressure limit is a rule across P–h, a temperature limit its own isotherm
+		limits: { designPressure: 1.2e6, designTemperature: 550 }
+	},
+	units: {
+		system: 'si',
+		pressureUnit: 'kPa',
+		pressureReference: 'absolute',
+		usPower: 'Btu/h',
+		atmosphere: 101325
+	},
+	chart: { view: 'P-h', pressureScale: 'log', isolines: true }
+};
+const heaterLog = [
+	'time [s],P [kPa a],T [°C]',
+	'0,1000,80',
+	'60,1000,120',
+	'120,1000,150',
+	'180,1000,220',
+	'240,1000,260',
+	'300,1000,300'
+].join('\n');
+
+test('a measured trace, a note flag and both design limits on the P–h view, and in its exported SVG', async ({
+	browser
+}) => {
+	test.setTimeout(180_000);
+	const api = await signedInRequest(DEMO.designer);
+	const made = await api.post(`/api/v1/teams/${TEAM}/sheets`, {
+		data: { title: `Feed heater ${Date.now().toString(36)}`, doc: heater }
+	});
+	expect(made.status(), await made.text()).toBe(201);
+	const id = ((await made.json()) as { sheet: { id: string } }).sheet.id;
+	const S = `/api/v1/teams/${TEAM}/sheets/${id}`;
+	const up = await api.post(`${S}/traces?filename=heater.csv&name=Heater%20log`, {
+		data: heaterLog,
+		headers: { 'content-type': 'text/csv' }
+	});
+	expect(up.status(), await up.text()).toBe(201);
+	const note = await api.post(`${S}/notes`, {
+		data: { anchor: { kind: 'leg', legId: 'heat' }, body: 'Check the outlet against the log.' }
+	});
+	expect(note.status(), await note.text()).toBe(201);
+
+	const page = await signedInPage(browser, DEMO.designer);
+	await page.goto(`/t/${TEAM}/sheets/${id}`);
+	await expect(page.getByTestId('sheet-charts')).toHaveAttribute('data-view', 'P-h');
+	const drawing = page.locator('[data-chart="P-h"] svg.swc-drawing');
+	await expect(drawing).toBeVisible();
+	// the trace: a line through the readings with a cross at each
+	const traceLine = drawing.locator('path.swc-trace-line');
+	await expect(traceLine).toHaveAttribute('d', /^M[\d.-]+,[\d.-]+(L[\d.-]+,[\d.-]+){5}$/, {
+		timeout: 20_000
+	});
+	await expect(drawing.locator('path.swc-trace-mark:not(.sample)')).toHaveAttribute(
+		'd',
+		/^(M[\d.-]+,[\d.-]+h5M[\d.-]+,[\d.-]+v5){6}$/
+	);
+	// the note: a flag drawn beside the leg, and the page's button over it
+	const flag = drawing.locator('g.swc-note-flag[data-anchor="leg:heat"]');
+	await expect(flag).toHaveCount(1);
+	await expect(flag.locator('text')).toHaveText('1');
+	const marker = page.getByTestId('note-marker');
+	await expect(marker).toHaveCount(1);
+	await expect(marker).toHaveAttribute('aria-label', '1 open review note on L1');
+	// the button sits over the drawn flag: the same bottom centre (where the flag points)
+	const rect = (l: typeof flag) =>
+		l.evaluate((e) => {
+			const r = e.getBoundingClientRect();
+			return { x: r.left + r.width / 2, bottom: r.bottom };
+		});
+	const [fb, mb] = [await rect(flag), await rect(marker)];
+	expect(Math.abs(fb.x - mb.x)).toBeLessThan(1.5);
+	expect(Math.abs(fb.bottom - mb.bottom)).toBeLessThan(1.5);
+	// both limits: design pressure straight across, design temperature along its isotherm
+	const limits = drawing.locator('path.swc-limit:not(.sample)');
+	await expect(limits).toHaveCount(2, { timeout: 20_000 });
+	for (const d of await limits.evaluateAll((ls) => ls.map((l) => l.getAttribute('d') ?? '')))
+		expect(d).toMatch(/^M[\d.-]+,[\d.-]+L/);
+	await page.locator('[data-chart="P-h"]').screenshot({ path: 'tmp/views-ph-trace-note.png' });
+
+	await waitSaved(page);
+	await page.getByTestId('export-menu').locator('summary').click();
+	const [dl] = await Promise.all([
+		page.waitForEvent('download'),
+		page.getByTestId('export-svg').click()
+	]);
+	const svg = await readDownload(dl);
+	expect(svg).toContain('Pressure–specific enthalpy diagram');
+	expect(svg).toMatch(/class="swc-trace-line" d="M[\d.-]+,[\d.-]+(L[\d.-]+,[\d.-]+){5}"/);
+	expect(svg).toMatch(/<g class="swc-note-flag" data-anchor="leg:heat"[^>]*>/);
+	expect(svg).toContain('1 open review note on L1');
+	expect(svg.match(/class="swc-limit"/g)?.length).toBe(2);
+
+	// the print view draws the same on its P–h chart
+	await page.goto(`/t/${TEAM}/sheets/${id}/print`);
+	const printed = page.locator('[data-chart="P-h"] svg.swc-drawing');
+	await expect(printed.locator('path.swc-trace-line')).toHaveAttribute('d', /^M.*L/);
+	await expect(printed.locator('g.swc-note-flag[data-anchor="leg:heat"]')).toHaveCount(1);
+	await expect(printed.locator('path.swc-limit:not(.sample)')).toHaveCount(2);
+	await page.context().close();
+	await api.dispose();
+});

@@ -48,6 +48,7 @@ import type {
 	FluidRange,
 	Isoline,
 	MeasuredTrace,
+	NoteFlag,
 	Point,
 	PressureScale,
 	Rect,
@@ -80,6 +81,8 @@ export interface ChartPath {
 	traces?: readonly MeasuredTrace[] | null;
 	/** a preview computed in the browser while dragging: the legs are drawn lighter until the real answer replaces it */
 	preview?: boolean;
+	/** open review notes: a numbered flag beside each leg or state that has them (in the drawing, so exports carry them) */
+	flags?: readonly NoteFlag[] | null;
 }
 
 export interface ChartInteraction {
@@ -177,6 +180,28 @@ function drawable(view: ChartView, p: Projectable): boolean {
 	return true;
 }
 
+/** The point halfway along a polyline, by length (null for fewer than one finite point). */
+export function midpointByLength(points: readonly Point[]): Point | null {
+	const pts = points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
+	if (pts.length === 0) return null;
+	let total = 0;
+	for (let i = 1; i < pts.length; i++)
+		total += Math.hypot(pts[i].x - pts[i - 1].x, pts[i].y - pts[i - 1].y);
+	let left = total / 2;
+	for (let i = 1; i < pts.length; i++) {
+		const d = Math.hypot(pts[i].x - pts[i - 1].x, pts[i].y - pts[i - 1].y);
+		if (d >= left && d > 0) {
+			const f = left / d;
+			return {
+				x: pts[i - 1].x + f * (pts[i].x - pts[i - 1].x),
+				y: pts[i - 1].y + f * (pts[i].y - pts[i - 1].y)
+			};
+		}
+		left -= d;
+	}
+	return pts[pts.length - 1];
+}
+
 function diamond(size: number): string {
 	return `M0,${-size}L${size},0L0,${size}L${-size},0Z`;
 }
@@ -245,6 +270,7 @@ export function createChart(
 	const gCross = clipped.append('g');
 	const cp = clipped.append('circle').attr('class', 'swc-cp').attr('r', 3.5);
 	const gStates = clipped.append('g');
+	const gFlags = clipped.append('g').attr('class', 'swc-note-flags');
 	const gLabels = root.append('g');
 	const cpLabel = gLabels.append('text').attr('class', 'swc-cp-label').text('c.p.');
 	const frameRect = root.append('rect').attr('class', 'swc-frame');
@@ -748,6 +774,7 @@ export function createChart(
 					t.text(d.label).attr('font-size', d.label.length > 2 ? 7.5 : null);
 			});
 
+		drawFlags(legPts);
 		// a preview (a drag, every frame) leaves the labels where the last computed path put them,
 		// unless the frame moved under them: placing them is most of a redraw's time
 		if (!path.preview || labelsStale) {
@@ -764,6 +791,60 @@ export function createChart(
 		ov.attr('data-path-rev', ++pathRev)
 			.attr('data-path-ms', (performance.now() - started).toFixed(2))
 			.attr('data-path-preview', path.preview ? 'true' : null);
+	}
+
+	/**
+	 * Open review notes as numbered flags: beside the middle of a leg (by length, 11 px right and
+	 * 3 px up, so it never hides the line) or up and right of a state's disc; the flag's bottom
+	 * centre sits there, as the sheet page's note buttons over it do (NoteMarkers.svelte).
+	 */
+	function drawFlags(legPts: Map<string, Point[]>) {
+		const states = new Map(path.states.map((s) => [s.id, s]));
+		const flags = (path.flags ?? []).flatMap((f) => {
+			let at: Point | null = null;
+			if (f.target.kind === 'leg') {
+				const pts = legPts.get(f.target.id);
+				const mid = pts ? midpointByLength(pts) : null;
+				if (mid) at = { x: mid.x + 11, y: mid.y - 3 };
+			} else {
+				const s = states.get(f.target.id);
+				if (s) {
+					const p = shifted(s);
+					at = { x: p.x + 9, y: p.y - 9 };
+				}
+			}
+			if (!at || !Number.isFinite(at.x) || !Number.isFinite(at.y)) return [];
+			return [{ ...f, at, w: Math.max(18, 6.5 * String(f.count).length + 9) }];
+		});
+		gFlags
+			.selectAll<SVGGElement, (typeof flags)[number]>('g.swc-note-flag')
+			.data(flags, (d) => d.key)
+			.join((enter) => {
+				const g = enter.append('g').attr('class', 'swc-note-flag');
+				g.append('title');
+				g.append('path');
+				g.append('text').attr('dy', '0.35em');
+				return g;
+			})
+			.attr('data-anchor', (d) => d.key)
+			.attr('transform', (d) => `translate(${d.at.x.toFixed(1)},${d.at.y.toFixed(1)})`)
+			.each(function (d) {
+				const g = select(this);
+				const h = 18;
+				const r = 4.5;
+				const l = -d.w / 2;
+				// rounded but for the bottom-left corner, which points at what the notes are on
+				g.select('path').attr(
+					'd',
+					`M${l},0V${-h + r}Q${l},${-h} ${l + r},${-h}H${-l - r}Q${-l},${-h} ${-l},${-h + r}V${-r}Q${-l},0 ${-l - r},0Z`
+				);
+				g.select('text')
+					.attr('y', -h / 2)
+					.text(String(d.count));
+				g.select('title').text(
+					`${d.count} open review note${d.count > 1 ? 's' : ''} on ${d.label}`
+				);
+			});
 	}
 
 	/**

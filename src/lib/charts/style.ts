@@ -16,6 +16,7 @@ const v = {
 	rule: 'var(--sw-rule, #d6ccb8)',
 	accent: 'var(--sw-accent, #3346b8)',
 	accentWash: 'var(--sw-accent-wash, #e3e6f7)',
+	accentInk: 'var(--sw-accent-ink, #ffffff)',
 	caution: 'var(--sw-caution, #a3361b)',
 	dome: 'var(--sw-dome, rgb(51 70 184 / 0.06))'
 };
@@ -57,6 +58,8 @@ export const DRAWING_CSS = `
 .swc-drawing .swc-cp { fill: ${v.sheet}; stroke: ${v.ink}; stroke-width: 1.25; }
 .swc-drawing .swc-cp-label { font-size: 10.5px; font-style: italic; fill: ${v.ink}; ${halo} }
 .swc-drawing .swc-key-text { font-size: 11px; fill: ${v.inkSoft}; }
+.swc-drawing .swc-note-flag path { fill: ${v.accent}; stroke: ${v.sheet}; stroke-width: 1.5; }
+.swc-drawing .swc-note-flag text { font-family: ${MONO}; font-size: 10.5px; font-weight: 600; fill: ${v.accentInk}; text-anchor: middle; }
 `;
 
 export const OVERLAY_CSS = `

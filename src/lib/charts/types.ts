@@ -91,6 +91,18 @@ export interface TracePoint {
 	vBand?: [number, number] | null;
 }
 
+/** Open review notes on a leg or a state, drawn as a numbered flag beside it (review/flags.ts). */
+export interface NoteFlag {
+	/** "leg:<id>" or "state:<id>" (a state is named by the leg it ends, or `start`) */
+	key: string;
+	target: { kind: 'leg' | 'state'; id: string };
+	count: number;
+	/** the anchor's label where it is shown (L2, S3) */
+	label: string;
+	/** the notes' ids (the page opens them) */
+	ids?: string[];
+}
+
 export interface MeasuredTrace {
 	id: string;
 	label: string;

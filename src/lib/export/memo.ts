@@ -5,7 +5,7 @@
  * Pure string work: the browser part (serialising the live chart, loading fonts, PNG) is in
  * `browser.ts`.
  */
-import { isoDate, type SignOffPerson } from '$lib/revisions/sign-off';
+import { isoDate, SIGNED_LABEL, type SignOffPerson } from '$lib/revisions/sign-off';
 
 export type MemoPerson = SignOffPerson;
 
@@ -117,6 +117,7 @@ export const PAPER_THEME: Readonly<Record<string, string>> = {
 	'--sw-rule': '#d6ccb8',
 	'--sw-accent': '#3346b8',
 	'--sw-accent-wash': '#e3e6f7',
+	'--sw-accent-ink': '#ffffff',
 	'--sw-caution': '#a3361b',
 	'--sw-caution-wash': '#f6e1d6',
 	'--sw-dome': 'rgb(51 70 184 / 0.06)'
@@ -262,9 +263,9 @@ function wideRows(title: MemoTitle): { h: number; cells: Cell[] }[] {
 		{
 			h: 36,
 			cells: [
-				{ label: 'Designed', value: person(title.designer), w: 1 / 3 },
-				{ label: 'Checked', value: person(title.checker), w: 1 / 3 },
-				{ label: 'Approved', value: person(title.approver), w: 1 / 3 }
+				{ label: SIGNED_LABEL.designer, value: person(title.designer), w: 1 / 3 },
+				{ label: SIGNED_LABEL.checker, value: person(title.checker), w: 1 / 3 },
+				{ label: SIGNED_LABEL.approver, value: person(title.approver), w: 1 / 3 }
 			]
 		}
 	];
@@ -283,9 +284,9 @@ function columnFields(
 	const equipment = join([title.tag, title.equipment, title.project, title.site]);
 	const signOff = join(
 		[
-			signed('Designed', title.designer),
-			signed('checked', title.checker),
-			signed('approved', title.approver)
+			signed(SIGNED_LABEL.designer, title.designer),
+			signed(SIGNED_LABEL.checker.toLowerCase(), title.checker),
+			signed(SIGNED_LABEL.approver.toLowerCase(), title.approver)
 		],
 		'; '
 	);

@@ -1,6 +1,6 @@
 import type { SignOff } from '$lib/revisions/sign-off';
 import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
-import { STATUS_LABEL } from '$lib/sheets/types';
+import { STATUS } from '$lib/revisions/steps';
 import { displayUnit, formatQuantity, NBSP, type UnitPrefs } from '$lib/units';
 import type { MemoTitle } from './memo';
 
@@ -112,7 +112,7 @@ export function memoTitle(input: TitleInput): MemoTitle {
 		team: input.teamName,
 		revision: revisionText(input.revision, input.basedOn),
 		// a working draft is not issued: its status says so and its date is not called an issue date
-		status: input.revision ? STATUS_LABEL[input.revision.status] : 'Working draft',
+		status: input.revision ? STATUS[input.revision.status].label : 'Working draft',
 		dateLabel: input.revision ? 'Issued' : 'Date',
 		fluid: `${fluid.name} (${chemical(fluid.formula)})`,
 		formulation: shortFormulation(fluid),

@@ -8,6 +8,7 @@ import { ApiError, OfflineError, apiCall } from '$lib/editor/client';
 import type { SheetDoc, Anchor } from '$lib/sheets/types';
 import type { PathResult } from '$lib/thermo/types';
 import type { RevisionDiff } from '$lib/revisions/diff';
+import type { SignOffAction } from '$lib/revisions/steps';
 import type { NoteView, RevisionEvent, RevisionFull, RevisionSummary, TraceSummary } from './types';
 
 export { ApiError, OfflineError };
@@ -47,7 +48,7 @@ export function reviewApi(team: string, sheet: string, f: Fetch = fetch) {
 		}) => post<{ revision: RevisionFull }>('/revisions', input).then((r) => r.revision),
 		step: (
 			n: number,
-			action: 'submit' | 'withdraw' | 'check' | 'return' | 'approve',
+			action: SignOffAction,
 			input: { note?: string; checkerId?: string | null; override?: string } = {}
 		) =>
 			post<{ revision: RevisionSummary }>(`/revisions/${n}/${action}`, input).then(

@@ -8,6 +8,7 @@ import type {
 } from '$lib/thermo/types';
 import type { Anchor, SheetDoc, SheetStatus } from '$lib/sheets/types';
 import type { RejectedLine, TraceColumn, TracePoint } from '$lib/traces/types';
+import type { SignOffEventKind } from '$lib/revisions/steps';
 
 /** What a read-only chart needs besides the path: the dome, background isolines, design limits. */
 export interface ChartFrame {
@@ -57,7 +58,7 @@ export function wasReturned(r: Pick<RevisionSummary, 'status' | 'returned' | 'au
 
 export interface RevisionEvent {
 	number: number;
-	kind: string;
+	kind: SignOffEventKind;
 	actor: string;
 	note: string | null;
 	/** checked or approved over open review notes: the reason given and how many were open */

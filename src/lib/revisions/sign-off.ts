@@ -2,6 +2,7 @@
  * Sign-off records in words, shared by the server (revision records, review pages) and the
  * exports' title block, so neither side imports the other.
  */
+import { capitalized, STATUS, STEPS } from './steps';
 
 /** One person's part in sign-off: who and when (null until they have signed). */
 export interface SignOffPerson {
@@ -9,6 +10,13 @@ export interface SignOffPerson {
 	/** Unix ms */
 	at: number | null;
 }
+
+/** The title block's sign-off fields: "Designed", "Checked", "Approved". */
+export const SIGNED_LABEL: Record<keyof SignOff, string> = {
+	designer: 'Designed',
+	checker: STATUS.checked.label,
+	approver: STATUS.approved.label
+};
 
 /** Who signed what, from the revision record. */
 export interface SignOff {
@@ -41,6 +49,6 @@ export function signOffOverrides(events: readonly SignOffEvent[], number: number
 		.sort((a, b) => a.at - b.at)
 		.map((e) => {
 			const n = e.override!.openNotes;
-			return `${e.kind === 'approved' ? 'Approved' : 'Marked checked'} by ${e.actor} on ${isoDate(e.at)} over ${n} open review note${n === 1 ? '' : 's'}: “${e.override!.reason}”`;
+			return `${capitalized(e.kind === 'approved' ? STEPS.approve.done : STEPS.check.done)} by ${e.actor} on ${isoDate(e.at)} over ${n} open review note${n === 1 ? '' : 's'}: “${e.override!.reason}”`;
 		});
 }

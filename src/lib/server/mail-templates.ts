@@ -1,4 +1,5 @@
 import { ROLE_LABEL, type Role } from '$lib/roles';
+import { STEPS } from '$lib/revisions/steps';
 
 /**
  * The mails Statewright sends, each as plain text and a simple HTML version. Links are absolute
@@ -242,15 +243,20 @@ function overrideLines(input: RevisionMailInput): string[] {
 	];
 }
 
+/** "<strong>Rev 2</strong> of the sheet <strong>V-204</strong> (Team)", HTML-escaped. */
+function revisionOfSheet(input: RevisionMailInput): string {
+	return `<strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)})`;
+}
+
 export function submittedMail(input: RevisionMailInput): Composed {
 	return compose(
 		`Rev ${input.revision} of ${input.sheetTitle} is ready for your check`,
 		`A revision to check`,
 		[
 			`Hello ${esc(input.name)},`,
-			`${esc(input.actorName)} submitted <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}) for checking. The revision message:`,
+			`${esc(input.actorName)} ${STEPS.submit.didTo(revisionOfSheet(input))}. The revision message:`,
 			quote(input.text),
-			'Write review notes on its legs and states, then mark it checked or return it to the designer.'
+			`Write review notes on its legs and states, then ${STEPS.check.doTo('it')} or ${STEPS.return.doTo('it')}.`
 		],
 		{ label: `Check Rev ${input.revision}`, url: input.url },
 		settingsNote(input.settingsUrl)
@@ -259,11 +265,11 @@ export function submittedMail(input: RevisionMailInput): Composed {
 
 export function checkedMail(input: RevisionMailInput): Composed {
 	return compose(
-		`Rev ${input.revision} of ${input.sheetTitle} was checked`,
-		`Your revision was checked`,
+		`Rev ${input.revision} of ${input.sheetTitle} was ${STEPS.check.past}`,
+		`Your revision was ${STEPS.check.past}`,
 		[
 			`Hello ${esc(input.name)},`,
-			`${esc(input.actorName)} marked <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}) as checked. It now waits for an owner's approval.`,
+			`${esc(input.actorName)} ${STEPS.check.didTo(revisionOfSheet(input))}. It now waits for an owner's approval.`,
 			...(input.text ? [quote(input.text)] : []),
 			...overrideLines(input)
 		],
@@ -274,11 +280,11 @@ export function checkedMail(input: RevisionMailInput): Composed {
 
 export function approvedMail(input: RevisionMailInput): Composed {
 	return compose(
-		`Rev ${input.revision} of ${input.sheetTitle} was approved`,
-		`Your revision was approved`,
+		`Rev ${input.revision} of ${input.sheetTitle} was ${STEPS.approve.past}`,
+		`Your revision was ${STEPS.approve.past}`,
 		[
 			`Hello ${esc(input.name)},`,
-			`${esc(input.actorName)} approved <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}). The revision is now locked; further edits start a new draft based on it.`,
+			`${esc(input.actorName)} ${STEPS.approve.didTo(revisionOfSheet(input))}. The revision is now locked; further edits start a new draft based on it.`,
 			...(input.text ? [quote(input.text)] : []),
 			...overrideLines(input)
 		],
@@ -289,11 +295,11 @@ export function approvedMail(input: RevisionMailInput): Composed {
 
 export function returnedMail(input: RevisionMailInput): Composed {
 	return compose(
-		`Rev ${input.revision} of ${input.sheetTitle} was returned to you`,
-		`Your revision was returned`,
+		`Rev ${input.revision} of ${input.sheetTitle} was ${STEPS.return.past} to you`,
+		`Your revision was ${STEPS.return.past}`,
 		[
 			`Hello ${esc(input.name)},`,
-			`${esc(input.actorName)} returned <strong>Rev ${input.revision}</strong> of the sheet <strong>${esc(input.sheetTitle)}</strong> (${esc(input.teamName)}) without checking it:`,
+			`${esc(input.actorName)} ${STEPS.return.didTo(revisionOfSheet(input))} with this note:`,
 			quote(input.text),
 			'Answer the review notes, fix the sheet and save a new revision.'
 		],

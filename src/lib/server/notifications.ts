@@ -7,6 +7,7 @@ import {
 	type NotificationKind,
 	type NotificationSettings
 } from './db/notification-settings';
+import { STEPS } from '$lib/revisions/steps';
 
 /*
  * Review and sign-off mails: who gets one, honouring each person's settings, and the links in
@@ -91,10 +92,19 @@ export async function notify(
 export const NOTIFICATION_LABELS: Record<NotificationKind, { label: string; hint: string }> = {
 	mention: { label: 'Someone mentions me in a review note', hint: '@Your Name in a note or reply' },
 	reply: { label: 'Someone replies to a review note I started', hint: 'replies in your threads' },
-	submitted: { label: 'A revision is submitted for my check', hint: 'checkers and owners' },
-	checked: { label: 'My revision is marked checked', hint: 'revisions you saved or submitted' },
-	approved: { label: 'My revision is approved', hint: 'revisions you saved or submitted' },
-	returned: { label: 'My revision is returned to me', hint: 'with the checker’s note' }
+	submitted: {
+		label: `A revision is ${STEPS.submit.done} for my check`,
+		hint: 'checkers and owners'
+	},
+	checked: {
+		label: `My revision is ${STEPS.check.done}`,
+		hint: 'revisions you saved or submitted'
+	},
+	approved: {
+		label: `My revision is ${STEPS.approve.done}`,
+		hint: 'revisions you saved or submitted'
+	},
+	returned: { label: `My revision is ${STEPS.return.done} to me`, hint: 'with the checker’s note' }
 };
 
 /** The account page's form: a checkbox per kind, present when on. */

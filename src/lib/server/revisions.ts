@@ -29,6 +29,7 @@ import {
 	type Recipient
 } from './notifications';
 import { can, ROLE_LABEL, type Capability } from '$lib/roles';
+import { STATUS, STEPS, type SignOffAction } from '$lib/revisions/steps';
 import { computePath, ThermoError } from '$lib/thermo';
 import type { PathResult } from '$lib/thermo/types';
 import { engineSpec, sameDoc } from '$lib/sheets/doc';
@@ -44,7 +45,8 @@ export type { RevisionEvent, RevisionFull, RevisionSummary, Signature };
  * Revisions and their sign-off. Saving the working draft creates an immutable revision (Rev 1,
  * 2, …) holding the document, the path computed from it, its author, time and message.
  *
- * Workflow (enforced here; the database locks content and approved rows by trigger):
+ * Workflow (enforced here; the database locks content and approved rows by trigger; the steps, who
+ * takes them and their words are defined once in $lib/revisions/steps):
  *
  *   draft ──submit──▶ in check ──check──▶ checked ──approve──▶ approved (locked)
  *     ▲                  │                   │
@@ -105,7 +107,7 @@ export class OpenNotesError extends AppError {
 		super(
 			409,
 			'open-notes',
-			`${openNotes === 1 ? '1 review note is' : `${openNotes} review notes are`} still open on this sheet, so Rev ${number} is not ${STEPS[action].done} yet. Resolve ${openNotes === 1 ? 'it' : 'them'} first, or ${action === 'check' ? 'check' : 'approve'} over ${openNotes === 1 ? 'it' : 'them'} by giving the reason as override; the reason is recorded in the sign-off log.`
+			`${openNotes === 1 ? '1 review note is' : `${openNotes} review notes are`} still open on this sheet, so Rev ${number} is not ${STEPS[action].done} yet. Resolve ${openNotes === 1 ? 'it' : 'them'} first, or ${STEPS[action].doTo(`Rev ${number}`)} over ${openNotes === 1 ? 'it' : 'them'} by giving the reason as override; the reason is recorded in the sign-off log.`
 		);
 		this.openNotes = openNotes;
 	}
@@ -385,61 +387,10 @@ function fullOf(row: SheetRevisionRow, latest: number): RevisionFull {
 
 // ---- workflow ---------------------------------------------------------------------------------
 
-type Action = 'submit' | 'withdraw' | 'check' | 'return' | 'approve';
+type Action = SignOffAction;
 
-interface Step {
-	cap: Capability;
-	from: readonly SheetStatusValue[];
-	to: SheetStatusValue;
-	event: 'submitted' | 'returned' | 'checked' | 'approved';
-	/** what the revision is once the step is taken, in refusals ("cannot be marked checked") */
-	done: string;
-}
-
-const STEPS: Record<Action, Step> = {
-	submit: {
-		cap: 'sheet:edit',
-		from: ['draft'],
-		to: 'in-check',
-		event: 'submitted',
-		done: 'submitted'
-	},
-	withdraw: {
-		cap: 'sheet:edit',
-		from: ['in-check'],
-		to: 'draft',
-		event: 'returned',
-		done: 'withdrawn'
-	},
-	check: {
-		cap: 'sheet:check',
-		from: ['in-check'],
-		to: 'checked',
-		event: 'checked',
-		done: 'marked checked'
-	},
-	return: {
-		cap: 'sheet:check',
-		from: ['in-check', 'checked'],
-		to: 'draft',
-		event: 'returned',
-		done: 'returned'
-	},
-	approve: {
-		cap: 'sheet:approve',
-		from: ['checked'],
-		to: 'approved',
-		event: 'approved',
-		done: 'approved'
-	}
-};
-
-const STATUS_WORDS: Record<SheetStatusValue, string> = {
-	draft: 'a draft',
-	'in-check': 'in check',
-	checked: 'checked',
-	approved: 'approved (and locked)'
-};
+/** A status in a refusal: "Rev 2 is in check, so …". */
+const statusPhrase = (s: SheetStatusValue): string => STATUS[s].phrase;
 
 export interface WorkflowInput {
 	/** a note with the step (required to return a revision) */
@@ -505,7 +456,7 @@ export async function moveRevision(
 			throw new AppError(
 				409,
 				'wrong-status',
-				`Rev ${number} is ${STATUS_WORDS[row.status]}, so it cannot be ${step.done}: only a revision that is ${step.from.map((s) => STATUS_WORDS[s]).join(' or ')} can.`
+				`Rev ${number} is ${statusPhrase(row.status)}, so it cannot be ${step.done}: only a revision that is ${step.from.map(statusPhrase).join(' or ')} can.`
 			);
 		if (action === 'return' && row.status === 'checked') requireCap(access, 'sheet:approve');
 		const isAuthor = access.actor.id !== null && access.actor.id === row.author_id;

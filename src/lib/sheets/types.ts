@@ -86,12 +86,5 @@ export type Anchor =
 	| { kind: 'leg'; legId: string }
 	| { kind: 'state'; /** 'start' or the id of the leg the state ends */ at: string };
 
-/** Workflow status of a sheet or revision (chip on the sheet header). */
+/** Workflow status of a sheet or revision (its words and steps: $lib/revisions/steps). */
 export type SheetStatus = 'draft' | 'in-check' | 'checked' | 'approved';
-
-export const STATUS_LABEL: Record<SheetStatus, string> = {
-	draft: 'Draft',
-	'in-check': 'In check',
-	checked: 'Checked',
-	approved: 'Approved'
-};

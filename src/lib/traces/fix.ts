@@ -58,6 +58,8 @@ export function fixTracePoints(
 						T: r.T,
 						vLogged: r.v,
 						v: r.v,
+						h: st.h,
+						s: st.s,
 						vFrom: 'logged',
 						phase: st.phase,
 						x: st.x,
@@ -89,6 +91,8 @@ export function fixTracePoints(
 				T: r.T,
 				vLogged: r.v,
 				v: st.v,
+				h: st.h,
+				s: st.s,
 				vFrom: 'P-T',
 				phase: st.phase,
 				x: st.x,
@@ -110,16 +114,29 @@ export function fixTracePoints(
 /**
  * Stored points as they are read back: a saturation-line point without a logged v has v open and
  * its [v′, v″] (older uploads stored an interpolated "estimated" v and no range: both are put right
- * here, so no guessed v is ever drawn).
+ * here, so no guessed v is ever drawn); a point with v and without h and s (older uploads) gets
+ * them from (T, v), so it has its place on P–h, T–s and h–s too.
  */
 export function openSaturationPoints(fluid: string, points: TracePoint[]): TracePoint[] {
 	return points.map((p) => {
-		if (!p.inDome || p.vLogged !== null || (p.vRange && p.v === null)) return p;
+		if (!p.inDome || p.vLogged !== null || (p.vRange && p.v === null)) return withHS(fluid, p);
 		try {
 			const s = saturationAtP(fluid, p.P);
-			return { ...p, v: null, vFrom: null, vRange: [s.liquid.v, s.vapor.v] };
+			return { ...p, v: null, h: null, s: null, vFrom: null, vRange: [s.liquid.v, s.vapor.v] };
 		} catch {
-			return { ...p, v: null, vFrom: null, vRange: null };
+			return { ...p, v: null, h: null, s: null, vFrom: null, vRange: null };
 		}
 	});
+}
+
+function withHS(fluid: string, p: TracePoint): TracePoint {
+	if (p.h != null && p.s != null) return p;
+	if (!(p.v !== null && p.v > 0) || p.vFrom === 'estimated') return p;
+	try {
+		const st = fixState(fluid, { T: p.T, v: p.v });
+		return { ...p, h: st.h, s: st.s };
+	} catch (e) {
+		if (!(e instanceof ThermoError)) throw e;
+		return p;
+	}
 }

@@ -71,6 +71,12 @@ export interface TracePoint {
 	/** m³/kg used to draw the point; null when P and T do not fix it (on the saturation line, no logged v) */
 	v: number | null;
 	/**
+	 * J/kg and J/(kg·K) of the state at (T, v), where v is known: the point's place on the views
+	 * without v on an axis (P–h, T–s, h–s). Older uploads lack them; they are filled in on reading.
+	 */
+	h?: number | null;
+	s?: number | null;
+	/**
 	 * on the saturation line without a logged v: [v′, v″] at the logged pressure, m³/kg. The reading
 	 * is somewhere on that segment (saturated liquid, a mixture or saturated vapor); the chart draws
 	 * it across the dome there, never at one guessed v.

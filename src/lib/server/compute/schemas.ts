@@ -19,6 +19,8 @@ import {
 	ROOT_HINTS,
 	SAMPLES_DEFAULT,
 	TARGET_NAMES,
+	type FixOptions,
+	type Inputs,
 	type LegSpec,
 	type PathSpec,
 	type Process,
@@ -519,11 +521,24 @@ export const noQuerySchema = z.strictObject(
 /** `A` when it is assignable to `B`; otherwise svelte-check fails where it is used. */
 type Assignable<A extends B, B> = A;
 
+/** The keys on one side only (`never` when A and B have the same keys). */
+type OneSided<A, B> = Exclude<keyof A, keyof B> | Exclude<keyof B, keyof A>;
+/** `K` when it is `never`; a key named here fails svelte-check where it is used. */
+type NoKeys<K extends never> = K;
+
+/** A state request's options: everything but the fluid and the inputs goes to fixState as FixOptions. */
+export type StateRequestOptions = Omit<z.infer<typeof stateRequestSchema>, 'fluid' | 'inputs'>;
+
 /**
  * Compile-time ties between the request schemas and the engine's input types: a field added,
- * renamed or narrowed on one side and not the other fails svelte-check here.
+ * renamed or narrowed on one side and not the other fails svelte-check here. The state request
+ * is tied both ways: its options must be assignable to FixOptions, and a field of FixOptions
+ * the schema lacks (or one the schema has that FixOptions lacks) is named by `NoKeys`.
  */
 export type SchemasMatchEngine = [
 	Assignable<z.infer<typeof pathRequestSchema>, PathSpec>,
-	Assignable<z.infer<typeof legRequestSchema>, LegSpec>
+	Assignable<z.infer<typeof legRequestSchema>, LegSpec>,
+	Assignable<z.infer<typeof stateRequestSchema>['inputs'], Inputs>,
+	Assignable<StateRequestOptions, FixOptions>,
+	NoKeys<OneSided<StateRequestOptions, FixOptions>>
 ];

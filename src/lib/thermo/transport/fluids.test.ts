@@ -21,10 +21,10 @@ function printed(actual: number, text: string, what: string, slack = 1): void {
 	).toBeLessThanOrEqual(tol);
 }
 
-describe('nitrogen, argon and oxygen: Lemmon & Jacobsen (2004), Int. J. Thermophys. 25, 21', () => {
+describe('nitrogen, argon, oxygen and air: Lemmon & Jacobsen (2004), Int. J. Thermophys. 25, 21', () => {
 	// Lemmon & Jacobsen (2004), their table of check values (T, ρ in mol/dm³ → η μPa·s, λ mW/(m·K)),
 	// read from CoolProp's CoolProp-Tests.cpp. The ρ = 0 rows are given there as 1e−14 mol/m³.
-	const M = { nitrogen: 28.01348, argon: 39.948, oxygen: 31.9988 };
+	const M = { nitrogen: 28.01348, argon: 39.948, oxygen: 31.9988, air: 28.9586 };
 	const rows: [keyof typeof M, number, number, string, string][] = [
 		['nitrogen', 100, 0, '6.90349', '9.27749'],
 		['nitrogen', 300, 0, '17.8771', '25.9361'],
@@ -43,7 +43,15 @@ describe('nitrogen, argon and oxygen: Lemmon & Jacobsen (2004), Int. J. Thermoph
 		['oxygen', 100, 35, '172.136', '146.044'],
 		['oxygen', 200, 10, '22.4445', '34.6124'],
 		['oxygen', 300, 5, '23.7577', '32.5491'],
-		['oxygen', 154.6, 13.6, '24.7898', '377.476']
+		['oxygen', 154.6, 13.6, '24.7898', '377.476'],
+		// air: the paper's Table V, read from CoolProp's CoolProp-Tests.cpp and, the same figures,
+		// from pychemqt's lib/mEoS/Air.py (test_LemmonTransport, "Table V, pag 28")
+		['air', 100, 0, '7.09559', '9.35902'],
+		['air', 300, 0, '18.5230', '26.3529'],
+		['air', 100, 28, '107.923', '119.221'],
+		['air', 200, 10, '21.1392', '35.3185'],
+		['air', 300, 5, '21.3241', '32.6062'],
+		['air', 132.64, 10.4, '17.7623', '75.6231']
 	];
 	it('η and λ away from the critical point to the printed digits (2 units of the last)', () => {
 		for (const [fluid, T, rhoMolar, mu, k] of rows.filter((r) => r[1] < 120 || r[1] > 160)) {
@@ -163,6 +171,23 @@ describe('surface tension: Mulero, Cachadiña & Parra (2012), J. Phys. Chem. Ref
 });
 
 describe('transport(state) for the other fluids', () => {
+	it('air has μ, k and Pr by Lemmon & Jacobsen (2004), and σ absent with the reason', () => {
+		const t = transport(fixState('air', { T: 300, P: 101_325 }));
+		// Lemmon & Jacobsen (2004) Table V at 300 K and ρ → 0 (above); at 1 atm the residual adds
+		// a little: η a few 0.01 μPa·s above 18.5230, λ a few 0.01 mW/(m·K) above 26.3529
+		expect(t.mu! * 1e6).toBeGreaterThan(18.523);
+		expect(t.mu! * 1e6).toBeLessThan(18.6);
+		expect(t.k! * 1e3).toBeGreaterThan(26.3529);
+		expect(t.k! * 1e3).toBeLessThan(26.5);
+		// from memory: air's Prandtl number near room temperature is about 0.71
+		expect(t.Pr!).toBeGreaterThan(0.7);
+		expect(t.Pr!).toBeLessThan(0.72);
+		expect(t.sources.mu).toMatch(/Lemmon & Jacobsen \(2004\)/);
+		expect(t.sigma).toBeNull();
+		expect(t.absent.sigma?.code).toBe('no-correlation');
+		expect(t.absent.sigma?.reason).toMatch(/mixture/);
+	});
+
 	it('a saturated liquid of nitrogen has μ, k, Pr and σ with their sources', () => {
 		const t = transport(fixState('nitrogen', { T: 77.355, x: 0 }));
 		expect(t.mu).toBeGreaterThan(1e-4);

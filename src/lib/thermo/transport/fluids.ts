@@ -48,7 +48,7 @@ function enhancement(fluid: string, c: OlchowySengers, T: number, rho: number, m
 
 const LJ = 'Lemmon & Jacobsen (2004), Int. J. Thermophys. 25, 21';
 
-function lemmonJacobsen(fluid: 'nitrogen' | 'argon' | 'oxygen'): FluidCorrelation {
+function lemmonJacobsen(fluid: 'nitrogen' | 'argon' | 'oxygen' | 'air'): FluidCorrelation {
 	const f = lemmonJacobsen2004[fluid];
 	const rhoc = f.rhocMolar * f.dilute.M; // kg/m³ (mol/dm³ × g/mol)
 	const critical = lemmonJacobsenCritical(f);
@@ -176,6 +176,7 @@ export const fluidCorrelations: Record<string, FluidCorrelation> = {
 	nitrogen: lemmonJacobsen('nitrogen'),
 	argon: lemmonJacobsen('argon'),
 	oxygen: lemmonJacobsen('oxygen'),
+	air: lemmonJacobsen('air'),
 	'carbon-dioxide': carbonDioxide,
 	ammonia,
 	r134a

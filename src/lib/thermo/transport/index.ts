@@ -73,7 +73,9 @@ export function transport(state: State): Transport {
 			reason:
 				state.fluid === 'r1234ze-e'
 					? 'The two public copies of the surface-tension coefficients for R-1234ze(E) disagree in sign; it is left out until the paper is read.'
-					: `No published surface-tension correlation for ${state.fluid} is built into the engine.`
+					: state.fluid === 'air'
+						? 'Air is a mixture: the surface-tension correlations built here (Mulero et al. 2012) are for pure fluids, and no published correlation for air is built.'
+						: `No published surface-tension correlation for ${state.fluid} is built into the engine.`
 		};
 	else if (!onDome(state))
 		out.absent.sigma = {

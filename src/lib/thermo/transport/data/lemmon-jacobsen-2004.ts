@@ -1,10 +1,12 @@
 /**
- * Viscosity and thermal conductivity of nitrogen, argon and oxygen: Lemmon & Jacobsen (2004),
+ * Viscosity and thermal conductivity of nitrogen, argon, oxygen and air: Lemmon & Jacobsen (2004),
  * "Viscosity and Thermal Conductivity Equations for Nitrogen, Oxygen, Argon, and Air",
  * Int. J. Thermophys. 25, 21–69. The coefficients are the paper's (its tables of η and λ terms),
  * in its units: η terms in μPa·s, λ terms in mW/(m·K), ρc in mol/dm³, σ in nm, M in g/mol.
- * Copies compared term by term: CoolProp dev/fluids/{Nitrogen,Argon,Oxygen}.json (TRANSPORT, stored
- * in SI) and pychemqt lib/mEoS/{N2,Ar,O2}.py ("Lemmon (2004)" visco and thermo dicts); they agree.
+ * Copies compared term by term: CoolProp dev/fluids/{Nitrogen,Argon,Oxygen,Air}.json (TRANSPORT, stored
+ * in SI) and pychemqt lib/mEoS/{N2,Ar,O2,Air}.py ("Lemmon (2004)" visco and thermo dicts); they agree.
+ * Air is the paper's pseudo-pure air (M = 28.9586 g/mol, the molar mass this engine's air uses);
+ * its Tc, ρc and pc are the paper's reducing values for air (the maxcondentherm, 132.6312 K).
  * The collision-integral terms b_i are shared by the three fluids (the paper's Table I).
  */
 import type { CollisionDilute, OlchowySengers, TauDeltaSum } from '../forms.ts';
@@ -31,7 +33,10 @@ const b = [0.431, -0.4623, 0.08406, 0.005341, -0.00331] as const;
 /** R0, ν and γ of the paper's critical enhancement, the same for every fluid */
 export const lemmonJacobsenUniversal = { R0: 1.01, nu: 0.63, gamma: 1.2415 } as const;
 
-export const lemmonJacobsen2004: Record<'nitrogen' | 'argon' | 'oxygen', LemmonJacobsenFluid> = {
+export const lemmonJacobsen2004: Record<
+	'nitrogen' | 'argon' | 'oxygen' | 'air',
+	LemmonJacobsenFluid
+> = {
 	nitrogen: {
 		Tc: 126.192,
 		rhocMolar: 11.1839,
@@ -97,6 +102,28 @@ export const lemmonJacobsen2004: Record<'nitrogen' | 'argon' | 'oxygen', LemmonJ
 			gamma: [0, 0, 0, 1, 1, 1]
 		},
 		critical: { xi0Nm: 0.24, Gamma: 0.055, qDinvNm: 0.51, Tref: 309.162 }
+	},
+	air: {
+		Tc: 132.6312,
+		rhocMolar: 10.4477,
+		Pc: 3.78502e6,
+		dilute: { M: 28.9586, sigmaNm: 0.36, epsK: 103.3, b },
+		viscosity: {
+			N: [10.72, 1.122, 0.002019, -8.876, -0.02916],
+			t: [0.2, 0.05, 2.4, 0.6, 3.6],
+			d: [1, 4, 9, 1, 8],
+			l: [0, 0, 0, 1, 1],
+			gamma: [0, 0, 0, 1, 1]
+		},
+		conductivityDilute: { N1: 1.308, N: [1.405, -1.036], t: [-1.1, -0.3] },
+		conductivity: {
+			N: [8.743, 14.76, -16.62, 3.793, -6.142, -0.3778],
+			t: [0.1, 0.0, 0.5, 2.7, 0.3, 1.3],
+			d: [1, 2, 3, 7, 7, 11],
+			l: [0, 0, 2, 2, 2, 2],
+			gamma: [0, 0, 1, 1, 1, 1]
+		},
+		critical: { xi0Nm: 0.11, Gamma: 0.055, qDinvNm: 0.31, Tref: 265.262 }
 	}
 };
 

@@ -9,9 +9,7 @@ import { stateRequestSchema } from '$lib/server/compute/schemas';
  * each null with a reason where absent); `hint`, `near` and `window` choose among several states.
  */
 export const POST: RequestHandler = computePost(async ({ request }) => {
-	const body = await readBody(request, stateRequestSchema);
-	const options = { hint: body.hint, near: body.near, window: body.window };
-	return new JsonText(
-		await compute({ kind: 'state', fluid: body.fluid, inputs: body.inputs, options })
-	);
+	// every field but fluid and inputs is a fixState option (tied to FixOptions: SchemasMatchEngine)
+	const { fluid, inputs, ...options } = await readBody(request, stateRequestSchema);
+	return new JsonText(await compute({ kind: 'state', fluid, inputs, options }));
 });

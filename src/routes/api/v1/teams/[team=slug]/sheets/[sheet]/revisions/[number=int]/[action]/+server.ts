@@ -12,6 +12,7 @@ import {
 } from '$lib/server/revisions';
 import { DraftConflictError } from '$lib/server/sheets';
 import { plainText } from '$lib/plain-text';
+import { isSignOffAction, SIGN_OFF_ACTIONS } from '$lib/revisions/steps';
 
 /*
  * Sign-off steps on the newest revision, and restoring any revision as the working draft.
@@ -28,8 +29,6 @@ import { plainText } from '$lib/plain-text';
  *   403 forbidden / self-check / self-approve / self-return; 409 not-latest / wrong-status;
  *   409 open-notes; 400 invalid-note / invalid-checker / invalid-override; 404 unknown step or revision.
  */
-
-const ACTIONS = ['submit', 'withdraw', 'check', 'return', 'approve'] as const;
 
 const stepBody = z.strictObject(
 	{
@@ -71,11 +70,11 @@ export const POST: RequestHandler = apiRoute(async (event) => {
 			throw e;
 		}
 	}
-	if (!(ACTIONS as readonly string[]).includes(action))
+	if (!isSignOffAction(action))
 		return jsonError(
 			404,
 			'not-found',
-			`There is no step "${action}". Use one of: ${ACTIONS.join(', ')}, restore.`
+			`There is no step "${action}". Use one of: ${SIGN_OFF_ACTIONS.join(', ')}, restore.`
 		);
 	const input = await bodyOf(event.request, stepBody);
 	try {
@@ -84,7 +83,7 @@ export const POST: RequestHandler = apiRoute(async (event) => {
 			access,
 			event.params.sheet,
 			number,
-			action as (typeof ACTIONS)[number],
+			action,
 			input,
 			flowContext(event)
 		);
