@@ -162,7 +162,9 @@ export function differenceText(
 ): string | null {
 	const ref = ps.iapws95;
 	if (!ref) return null;
-	const d = ps.state[prop] - ref[prop];
+	const raw = ps.state[prop] - ref[prop];
+	// the same input given back by both (a P of the pair, say) differs by round-off only: 0
+	const d = Math.abs(raw) <= 1e-12 * Math.abs(ref[prop]) ? 0 : raw;
 	const q: Quantity = prop === 'T' ? 'temperatureDifference' : PROP_QUANTITY[prop];
 	const f = formatQuantity(d, q, prefs, { sig: 3, reference: 'absolute' });
 	const sign = d > 0 ? '+' : '';

@@ -326,8 +326,13 @@ export function if97FixFrom(inputs: Inputs, seedOrGet: If97Seed | (() => If97See
 					`IAPWS-IF97's saturation line runs from ${fmt(P_SAT_MIN)} Pa to its critical pressure ${PCPa} Pa; P = ${fmt(P)} Pa.`,
 					`Give a pressure from ${fmt(P_SAT_MIN)} to ${PCPa} Pa for a saturated state.`
 				);
-			const sat = saturationAtT(tsat(P / 1e6));
-			return mixOf(sat.liquid, sat.vapor, x);
+			// the saturated states at the given P itself (Eq. 31 then Eq. 30 agree to a few 1e−15)
+			const Ts = tsat(P / 1e6);
+			return mixOf(
+				if97State(P, Ts, { side: 'liquid' }),
+				if97State(P, Ts, { side: 'vapor' }),
+				x
+			);
 		}
 		const o = otherOf('x');
 		const T0 = Math.min(Math.max(seedOf().T, if97Limits.Tmin), TC - 1e-6);
