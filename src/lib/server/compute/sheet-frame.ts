@@ -80,7 +80,11 @@ export function draftResult(doc: SheetDoc): {
 	try {
 		if (doc.spec.legs.length === 0)
 			return {
-				result: firstStateResult(doc, { fixState, stateExtras, if97Fix, if97Extras }, startOptions(doc.spec)),
+				result: firstStateResult(
+					doc,
+					{ fixState, stateExtras, if97Fix, if97Extras },
+					startOptions(doc.spec)
+				),
 				resultError: null
 			};
 		return { result: computePath(engineSpec(doc)), resultError: null };

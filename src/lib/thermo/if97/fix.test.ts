@@ -7,7 +7,14 @@
  */
 import { describe, expect, it } from 'vitest';
 import fixture from '../../../../tests/reference/if97-fix.json';
-import { fixState, if97Fix, ThermoError, type InputName, type Inputs, type State } from '../index.ts';
+import {
+	fixState,
+	if97Fix,
+	ThermoError,
+	type InputName,
+	type Inputs,
+	type State
+} from '../index.ts';
 import { if97State } from './state.ts';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);
@@ -25,9 +32,15 @@ describe('if97Fix against python3-iapws IAPWS97', () => {
 			expect(rel(st.T, state.T), `T ${st.T} vs ${state.T}`).toBeLessThan(tol);
 			expect(rel(st.P, state.P), `P ${st.P} vs ${state.P}`).toBeLessThan(tol);
 			expect(rel(st.v, state.v), `v ${st.v} vs ${state.v}`).toBeLessThan(10 * tol);
-			expect(Math.abs(st.h - state.h), `h ${st.h} vs ${state.h}`).toBeLessThan(1e-3 + tol * state.h);
-			expect(Math.abs(st.s - state.s), `s ${st.s} vs ${state.s}`).toBeLessThan(1e-6 + tol * state.s);
-			expect(Math.abs(st.u - state.u), `u ${st.u} vs ${state.u}`).toBeLessThan(1e-3 + tol * state.u);
+			expect(Math.abs(st.h - state.h), `h ${st.h} vs ${state.h}`).toBeLessThan(
+				1e-3 + tol * state.h
+			);
+			expect(Math.abs(st.s - state.s), `s ${st.s} vs ${state.s}`).toBeLessThan(
+				1e-6 + tol * state.s
+			);
+			expect(Math.abs(st.u - state.u), `u ${st.u} vs ${state.u}`).toBeLessThan(
+				1e-3 + tol * state.u
+			);
 			if (state.x > 0 && state.x < 1) expect(st.x).toBeCloseTo(state.x, 8);
 		});
 	}
@@ -74,7 +87,8 @@ describe('if97Fix round trips: (P, T) → pair → state', () => {
 				}
 				const st = if97Fix(inputs, seed);
 				// the answer gives back both inputs
-				for (const k of [a, b]) expect(rel(st[k] as number, ref[k] as number), k).toBeLessThan(1e-9);
+				for (const k of [a, b])
+					expect(rel(st[k] as number, ref[k] as number), k).toBeLessThan(1e-9);
 				// where the pair pins the state (the IAPWS-95 state of the same inputs lies near: their
 				// difference is ~1e−4), the same state; pairs such as (u, h) of a near-ideal gas or (u, s)
 				// of a liquid barely depend on P and have other IF97 states with both values

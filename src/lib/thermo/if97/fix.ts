@@ -328,11 +328,7 @@ export function if97FixFrom(inputs: Inputs, seedOrGet: If97Seed | (() => If97See
 				);
 			// the saturated states at the given P itself (Eq. 31 then Eq. 30 agree to a few 1e−15)
 			const Ts = tsat(P / 1e6);
-			return mixOf(
-				if97State(P, Ts, { side: 'liquid' }),
-				if97State(P, Ts, { side: 'vapor' }),
-				x
-			);
+			return mixOf(if97State(P, Ts, { side: 'liquid' }), if97State(P, Ts, { side: 'vapor' }), x);
 		}
 		const o = otherOf('x');
 		const T0 = Math.min(Math.max(seedOf().T, if97Limits.Tmin), TC - 1e-6);
@@ -345,12 +341,18 @@ export function if97FixFrom(inputs: Inputs, seedOrGet: If97Seed | (() => If97See
 			T0,
 			T0
 		);
-		const st = Tx === null ? null : solved(a, b, mixOf(saturationAtT(Tx).liquid, saturationAtT(Tx).vapor, x));
+		const st =
+			Tx === null
+				? null
+				: solved(a, b, mixOf(saturationAtT(Tx).liquid, saturationAtT(Tx).vapor, x));
 		if (!st) throw noState(inputs);
 		return st;
 	}
 	const seed = seedOf();
-	const seedInside = seed.phase !== undefined ? seed.phase === 'saturated-mixture' : seed.x !== null && seed.x !== undefined && seed.x > 0 && seed.x < 1;
+	const seedInside =
+		seed.phase !== undefined
+			? seed.phase === 'saturated-mixture'
+			: seed.x !== null && seed.x !== undefined && seed.x > 0 && seed.x < 1;
 	const side: 'liquid' | 'vapor' =
 		seed.phase !== undefined
 			? seed.phase === 'superheated-vapor' || seed.phase === 'saturated-vapor'

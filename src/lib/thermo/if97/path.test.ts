@@ -35,8 +35,12 @@ describe('water paths by IAPWS-IF97 against python3-iapws IAPWS97', () => {
 				const closed = r.system.kind === 'closed';
 				const Q = closed ? l.totals.Q : l.totals.QFlow;
 				const W = closed ? l.totals.W : l.totals.WShaft;
-				expect(Math.abs(Q - ref.Q), `L${i + 1} Q ${Q} vs ${ref.Q}`).toBeLessThan(1e-6 * Math.abs(ref.Q) + 1e-2);
-				expect(Math.abs(W - ref.W), `L${i + 1} W ${W} vs ${ref.W}`).toBeLessThan(1e-6 * Math.abs(ref.W) + 1e-2);
+				expect(Math.abs(Q - ref.Q), `L${i + 1} Q ${Q} vs ${ref.Q}`).toBeLessThan(
+					1e-6 * Math.abs(ref.Q) + 1e-2
+				);
+				expect(Math.abs(W - ref.W), `L${i + 1} W ${W} vs ${ref.W}`).toBeLessThan(
+					1e-6 * Math.abs(ref.W) + 1e-2
+				);
 			});
 		});
 
@@ -47,7 +51,11 @@ describe('water paths by IAPWS-IF97 against python3-iapws IAPWS97', () => {
 	});
 
 	it('refuses IF97 for a fluid other than water, and an unknown formulation', () => {
-		const spec = { ...(fixture.paths[0].spec as PathSpec), fluid: 'nitrogen', start: { T: 300, P: 1e6 } };
+		const spec = {
+			...(fixture.paths[0].spec as PathSpec),
+			fluid: 'nitrogen',
+			start: { T: 300, P: 1e6 }
+		};
 		expect(() => computePath({ ...spec, formulation: 'if97' })).toThrow(/water only/);
 		expect(() =>
 			computePath({ ...(fixture.paths[0].spec as PathSpec), formulation: 'x' as 'if97' })

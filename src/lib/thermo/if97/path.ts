@@ -80,7 +80,9 @@ const INVARIANT: Record<Exclude<Process, 'polytropic'>, 'P' | 'v' | 'T' | 's' | 
 };
 
 /** The leg's target as [property, value] with ρ read as v. */
-function targetPair(target: Partial<Record<TargetName, number>>): ['T' | 'P' | 'v' | 'u' | 'h' | 's' | 'x', number] {
+function targetPair(
+	target: Partial<Record<TargetName, number>>
+): ['T' | 'P' | 'v' | 'u' | 'h' | 's' | 'x', number] {
 	const [k, x] = Object.entries(target).find(([, y]) => y !== undefined) as [TargetName, number];
 	return k === 'rho' ? ['v', 1 / x] : [k, x];
 }
@@ -89,7 +91,8 @@ function targetPair(target: Partial<Record<TargetName, number>>): ['T' | 'P' | '
 function polytropicEnd(start: State, n: number, target: [string, number], seed: State): State {
 	const C = start.P * start.v ** n;
 	const [k, value] = target;
-	if (k === 'P' && n !== 0) return if97FixFrom({ P: value, v: (C / value) ** (1 / n) }, seedOf(seed));
+	if (k === 'P' && n !== 0)
+		return if97FixFrom({ P: value, v: (C / value) ** (1 / n) }, seedOf(seed));
 	if (k === 'v') return if97FixFrom({ P: C / value ** n, v: value }, seedOf(seed));
 	const at = (lnv: number) => {
 		const v = Math.exp(lnv);
@@ -183,7 +186,12 @@ function unavailable(id: string, leg: string | undefined, e: unknown): PathWarni
 export function if97Path(spec: PathSpec, base: PathResult): PathResult {
 	const warnings: PathWarning[] = [];
 	const states: PathState[] = [];
-	const fix = (inputs: () => Inputs | State, seed: State, id: string, leg?: string): PathState['state'] | null => {
+	const fix = (
+		inputs: () => Inputs | State,
+		seed: State,
+		id: string,
+		leg?: string
+	): PathState['state'] | null => {
 		try {
 			const got = inputs();
 			return 'phase' in got ? (got as State) : if97FixFrom(got as Inputs, seedOf(seed));
@@ -196,10 +204,19 @@ export function if97Path(spec: PathSpec, base: PathResult): PathResult {
 	const put = (ps: PathState, st: State | null) => {
 		const base95 = ps.state;
 		if (st)
-			states.push({ ...ps, state: st, extras: if97Extras(st), iapws95: base95, formulation: 'if97' });
+			states.push({
+				...ps,
+				state: st,
+				extras: if97Extras(st),
+				iapws95: base95,
+				formulation: 'if97'
+			});
 		else states.push({ ...ps, iapws95: base95, formulation: 'iapws95' });
 	};
-	put(base.states[0], fix(() => spec.start, base.states[0].state, base.states[0].id));
+	put(
+		base.states[0],
+		fix(() => spec.start, base.states[0].state, base.states[0].id)
+	);
 	const legs = base.legs.map((pl, i) => {
 		const ls = spec.legs[i];
 		const from = states[i];
@@ -231,7 +248,9 @@ export function if97Path(spec: PathSpec, base: PathResult): PathResult {
 			? (spec.system.mass ?? (spec.system.volume !== undefined ? spec.system.volume / s1.v : 1))
 			: spec.system.massFlow;
 	const system: PathResult['system'] =
-		spec.system.kind === 'closed' ? { kind: 'closed', mass: m, volume: m * s1.v } : { kind: 'flow', massFlow: m };
+		spec.system.kind === 'closed'
+			? { kind: 'closed', mass: m, volume: m * s1.v }
+			: { kind: 'flow', massFlow: m };
 	const unit = base.totals.unit;
 	const totals = (q: number, w: number, wShaft: number, qFlow: number) => ({
 		unit,
@@ -267,7 +286,12 @@ export function if97Path(spec: PathSpec, base: PathResult): PathResult {
 			netWork,
 			heatAdded,
 			heatRejected,
-			totals: { unit, netWork: m * netWork, heatAdded: m * heatAdded, heatRejected: m * heatRejected },
+			totals: {
+				unit,
+				netWork: m * netWork,
+				heatAdded: m * heatAdded,
+				heatRejected: m * heatRejected
+			},
 			thermalEfficiency: kind === 'power' && heatAdded > 0 ? netWork / heatAdded : null,
 			copCooling: kind === 'reverse' ? heatAdded / -netWork : null,
 			copHeating: kind === 'reverse' ? heatRejected / -netWork : null
