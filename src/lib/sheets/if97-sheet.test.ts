@@ -14,7 +14,7 @@ import { diffDocs } from './diff';
 import { differenceText, formulationText } from './format';
 import { parseSheetDoc } from './schema';
 import type { SheetDoc } from './types';
-import { DEFAULT_UNIT_PREFS } from '$lib/units/prefs';
+import { DEFAULT_UNIT_PREFS, type UnitPrefs } from '$lib/units/prefs';
 
 function waterDoc(legs = true): SheetDoc {
 	return makeDoc({
@@ -81,7 +81,7 @@ describe('numbers of an IF97 sheet', () => {
 		const d = waterDoc();
 		d.spec.formulation = 'if97';
 		const r = computePath(engineSpec(d));
-		const prefs = { ...DEFAULT_UNIT_PREFS, pressureUnit: 'kPa' };
+		const prefs: UnitPrefs = { ...DEFAULT_UNIT_PREFS, pressureUnit: 'kPa' };
 		// python3-iapws 1.5.2: IAPWS97(P=0.601325, x=0).h = 670.8758 kJ/kg, IAPWS95(…).h = 670.7515 kJ/kg
 		expect(r.states[1].state.h / 1e3).toBeCloseTo(670.8758, 3);
 		expect(r.states[1].iapws95!.h / 1e3).toBeCloseTo(670.7515, 3);
