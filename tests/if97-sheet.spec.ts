@@ -89,4 +89,9 @@ test('a water sheet by IAPWS-IF97: IF97 values, the formulation named, the diffe
 	await page.reload();
 	await expect(page.getByTestId('table-formulation')).toHaveText('Water by IAPWS-IF97');
 	await expect.poll(s2h).toBe('670.88');
+
+	// the print view of the draft: the title block's formulation and the table's
+	await page.goto(`${new URL(page.url()).pathname}/print?rev=draft`);
+	await expect(page.locator('body')).toContainText('IAPWS-IF97 — IAPWS R7-97(2012)');
+	await expect(page.getByTestId('path-table-formulation')).toContainText('IAPWS-IF97');
 });

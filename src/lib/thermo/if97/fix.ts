@@ -326,9 +326,15 @@ export function if97FixFrom(inputs: Inputs, seedOrGet: If97Seed | (() => If97See
 					`IAPWS-IF97's saturation line runs from ${fmt(P_SAT_MIN)} Pa to its critical pressure ${PCPa} Pa; P = ${fmt(P)} Pa.`,
 					`Give a pressure from ${fmt(P_SAT_MIN)} to ${PCPa} Pa for a saturated state.`
 				);
-			// the saturated states at the given P itself (Eq. 31 then Eq. 30 agree to a few 1e−15)
+			// the saturated states at the given P itself, each on its own side of the line
 			const Ts = tsat(P / 1e6);
-			return mixOf(if97State(P, Ts, { side: 'liquid' }), if97State(P, Ts, { side: 'vapor' }), x);
+			const liquid = onSide(P, Ts, 'liquid');
+			const vapor = onSide(P, Ts, 'vapor');
+			liquid.phase = 'saturated-liquid';
+			liquid.x = 0;
+			vapor.phase = 'saturated-vapor';
+			vapor.x = 1;
+			return mixOf(liquid, vapor, x);
 		}
 		const o = otherOf('x');
 		const T0 = Math.min(Math.max(seedOf().T, if97Limits.Tmin), TC - 1e-6);
