@@ -1,4 +1,4 @@
-import type { Inputs, Process, State, TargetName } from '$lib/thermo/types';
+import type { Formulation, Inputs, Process, State, TargetName } from '$lib/thermo/types';
 import type { UnitPrefs } from '$lib/units/prefs';
 import { cloneDoc, INVARIANT, targetOf, type EditableProp } from '$lib/sheets/doc';
 import type { FillSpec } from '$lib/sheets/fill';
@@ -205,6 +205,22 @@ export function setFluid(doc: SheetDoc, id: string, start?: Inputs): SheetDoc {
 	if (id === doc.spec.fluid) return doc;
 	const next = cloneDoc(doc);
 	next.spec.fluid = id;
+	// IAPWS-IF97 is water's alone: another fluid takes its own equation of state
+	if (id !== 'water') delete next.spec.formulation;
 	if (next.startSpec && start) next.spec.start = start;
 	return next;
+}
+
+/** Water's formulation for the sheet: IAPWS-95 (the default, kept as no field) or IAPWS-IF97. */
+export function setFormulation(doc: SheetDoc, formulation: Formulation): Edit {
+	if (formulation === 'if97' && doc.spec.fluid !== 'water')
+		return {
+			ok: false,
+			message: 'IAPWS-IF97 is for water only; make the sheet’s fluid water first.'
+		};
+	if ((doc.spec.formulation ?? 'iapws95') === formulation) return { ok: true, doc };
+	const next = cloneDoc(doc);
+	if (formulation === 'if97') next.spec.formulation = 'if97';
+	else delete next.spec.formulation;
+	return { ok: true, doc: next };
 }

@@ -26,7 +26,7 @@ import type {
 	MeasuredTrace,
 	SaturationCurve
 } from '$lib/charts/types';
-import type { FluidInfo, Inputs, PathResult, Process, State } from '$lib/thermo/types';
+import type { FluidInfo, Formulation, Inputs, PathResult, Process, State } from '$lib/thermo/types';
 import type { UnitPrefs } from '$lib/units/prefs';
 import { Autosave, readLocalCopy, type AutosaveState, type KeyValueStore } from './autosave';
 import type { ChartData, ChartDataRef } from '$lib/chart-data';
@@ -873,6 +873,11 @@ export class SheetEditor {
 
 	setSystem(system: SheetDoc['spec']['system']): Promise<Outcome> {
 		return this.#edit(edits.setSystem(this.doc, system));
+	}
+
+	/** Water's formulation for this sheet's states and legs' Q and W: IAPWS-95 or IAPWS-IF97. */
+	setFormulation(formulation: Formulation): Promise<Outcome> {
+		return this.#edit(edits.setFormulation(this.doc, formulation));
 	}
 
 	/**

@@ -1,4 +1,4 @@
-import type { PathResult } from '$lib/thermo/types';
+import { FORMULATION_NAME, type PathResult } from '$lib/thermo/types';
 import { displayUnit, formatQuantity, type Quantity, type UnitPrefs } from '$lib/units';
 import { phaseName } from '$lib/charts/describe';
 import { processText, tidy } from '$lib/sheets/format';
@@ -12,6 +12,9 @@ import { severityWord, type MemoFindings } from './findings';
  * entropy changes below the round-off floor the screen uses (sheets/format.ts `tidy`) are written
  * as 0, as the screen shows them; a total is 0 when its per-kg value is.
  */
+
+/** What an IF97 sheet's table says of its numbers. */
+export const IF97_NOTE = `States and each leg's q and w by ${FORMULATION_NAME.if97} (IAPWS R7-97(2012)).`;
 
 export interface TableColumn {
 	key: string;
@@ -178,7 +181,7 @@ export function sheetTable(
 	const note = flow
 		? 'Steady-flow device: q − w shaft = Δh per kg; Q̇ and Ẇ shaft are per-kg values × mass flow. Heat is positive into the fluid, work positive when done by the fluid.'
 		: 'Closed system: q − w = Δu per kg, w = ∫P dv; Q and W are per-kg values × mass. Heat is positive into the fluid, work positive when done by the fluid.';
-	return { states, legs, note };
+	return { states, legs, note: result.formulation === 'if97' ? `${note} ${IF97_NOTE}` : note };
 }
 
 /**

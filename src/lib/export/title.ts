@@ -2,6 +2,7 @@ import type { SignOff } from '$lib/revisions/sign-off';
 import type { SheetDoc, SheetStatus } from '$lib/sheets/types';
 import { STATUS } from '$lib/revisions/steps';
 import { displayUnit, formatQuantity, NBSP, type UnitPrefs } from '$lib/units';
+import { FORMULATION_NAME } from '$lib/thermo/types';
 import type { MemoTitle } from './memo';
 
 /** The fluid facts the title block names (a FluidInfo from GET /api/v1/fluids fits). */
@@ -98,6 +99,13 @@ export function shortFormulation(fluid: TitleFluid): string {
 	return ref && ref !== name ? `${name} — ${ref}` : name;
 }
 
+/** The title block's formulation of a sheet: water's IAPWS-IF97 when the sheet chose it, else the fluid's own. */
+export function sheetFormulation(doc: SheetDoc, fluid: TitleFluid): string {
+	return doc.spec.formulation === 'if97'
+		? `${FORMULATION_NAME.if97} — IAPWS R7-97(2012)`
+		: shortFormulation(fluid);
+}
+
 export function revisionText(revision: TitleInput['revision'], basedOn?: number | null): string {
 	if (revision) return `Rev ${revision.number}`;
 	return basedOn ? `Working draft (after Rev ${basedOn})` : 'Working draft';
@@ -115,7 +123,7 @@ export function memoTitle(input: TitleInput): MemoTitle {
 		status: input.revision ? STATUS[input.revision.status].label : 'Working draft',
 		dateLabel: input.revision ? 'Issued' : 'Date',
 		fluid: `${fluid.name} (${chemical(fluid.formula)})`,
-		formulation: shortFormulation(fluid),
+		formulation: sheetFormulation(doc, fluid),
 		system: systemText(doc, doc.units),
 		units: unitsText(doc.units),
 		designer: input.signOff.designer,

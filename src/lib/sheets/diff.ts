@@ -9,6 +9,7 @@ import {
 	DESIGN_LIMIT_LABEL,
 	DESIGN_LIMIT_NAMES,
 	DESIGN_LIMIT_QUANTITY,
+	FORMULATION_NAME,
 	type Inputs,
 	type TargetName
 } from '$lib/thermo/types';
@@ -72,6 +73,9 @@ export function diffDocs(a: SheetDoc, b: SheetDoc, prefs: UnitPrefs = a.units): 
 		if (x !== y) rows.push({ section, field, a: x, b: y });
 	};
 	add('Sheet', 'fluid', a.spec.fluid, b.spec.fluid);
+	const formulation = (d: SheetDoc) =>
+		d.spec.fluid === 'water' ? FORMULATION_NAME[d.spec.formulation ?? 'iapws95'] : '';
+	add('Sheet', 'formulation', formulation(a), formulation(b));
 	add('Sheet', 'system', systemText(a, prefs), systemText(b, prefs));
 	add('Sheet', 'description', a.description, b.description);
 	const startText = (d: SheetDoc) =>

@@ -155,6 +155,7 @@ export function engineSpec(doc: SheetDoc): PathSpec {
 	if (s.startHint !== undefined) spec.startHint = s.startHint;
 	if (s.startNear !== undefined) spec.startNear = { ...s.startNear };
 	if (s.window !== undefined) spec.window = { ...s.window };
+	if (s.formulation === 'if97') spec.formulation = 'if97';
 	return spec;
 }
 
@@ -232,6 +233,9 @@ export function viewOf(spec: SheetPathSpec, result: PathResult): PathView {
 export interface StartEngine {
 	fixState(fluid: string, inputs: Inputs, options?: FixOptions): State;
 	stateExtras(state: State): StateExtras;
+	/** for a sheet of water by IAPWS-IF97 (thermo's if97Fix and if97Extras) */
+	if97Fix?(inputs: Inputs, seed?: State): State;
+	if97Extras?(state: State): StateExtras;
 }
 
 /** The path of a sheet without legs: its start state fixed by `engine`, with `startOnlyResult`. */
@@ -241,7 +245,29 @@ export function firstStateResult(
 	options?: FixOptions
 ): PathResult {
 	const start = engine.fixState(doc.spec.fluid, doc.spec.start, options);
-	return startOnlyResult(doc, start, engine.stateExtras(start));
+	if (doc.spec.formulation !== 'if97' || !engine.if97Fix || !engine.if97Extras)
+		return startOnlyResult(doc, start, engine.stateExtras(start));
+	// IAPWS-IF97 from the same pair, started from the IAPWS-95 state; where IF97 cannot give it, the
+	// IAPWS-95 state with a warning (as computePath does for a path's states)
+	let st: State;
+	try {
+		st = engine.if97Fix(doc.spec.start, start);
+	} catch (e) {
+		const r = startOnlyResult(doc, start, engine.stateExtras(start));
+		r.formulation = 'if97';
+		r.states[0] = { ...r.states[0], iapws95: start, formulation: 'iapws95' };
+		r.warnings.push({
+			code: 'if97-state-unavailable',
+			severity: 'warning',
+			message: `S1: IAPWS-IF97 cannot give this state, so it is shown by IAPWS-95. ${e instanceof Error ? e.message : String(e)}`,
+			state: 'S1'
+		});
+		return r;
+	}
+	const r = startOnlyResult(doc, st, engine.if97Extras(st));
+	r.formulation = 'if97';
+	r.states[0] = { ...r.states[0], iapws95: start, formulation: 'if97' };
+	return r;
 }
 
 /**

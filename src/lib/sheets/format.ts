@@ -13,7 +13,14 @@ import {
 	type UnitPrefs
 } from '$lib/units';
 import { processStyle } from '$lib/charts/encoding';
-import { PHASE_NAME, type Phase, type State } from '$lib/thermo/types';
+import {
+	FORMULATION_NAME,
+	PHASE_NAME,
+	type Formulation,
+	type PathState,
+	type Phase,
+	type State
+} from '$lib/thermo/types';
 import type { EditableProp } from './doc';
 
 export const PROP_QUANTITY: Record<EditableProp, Quantity> = {
@@ -125,4 +132,41 @@ export function processText(process: string, n?: number): string {
 	return process === 'polytropic' && n !== undefined
 		? `${name}, n = ${formatNumber(n, { sig: 4 })}`
 		: name;
+}
+
+/**
+ * The formulation a sheet's numbers come from, as the state table names it: water's "IAPWS-95" or
+ * "IAPWS-IF97"; for another fluid its own equation's name (`fluidFormulation`, from FluidInfo).
+ */
+export function formulationText(
+	fluid: string,
+	formulation: Formulation | undefined,
+	fluidFormulation?: string
+): string {
+	if (fluid === 'water') return FORMULATION_NAME[formulation ?? 'iapws95'];
+	return fluidFormulation ?? '';
+}
+
+/** The properties the difference row of an IAPWS-IF97 sheet shows (IF97 − IAPWS-95). */
+export const DIFFERENCE_PROPS = ['T', 'P', 'v', 'u', 'h', 's'] as const;
+
+/**
+ * IF97 − IAPWS-95 of one property of a state, with its unit ("+0.0021 K", "−3.4 Pa"): temperatures
+ * as a temperature difference, pressures in the sheet's absolute unit (a difference has no gauge
+ * zero), 3 significant figures; null where the state carries no IAPWS-95 value.
+ */
+export function differenceText(
+	ps: PathState,
+	prop: (typeof DIFFERENCE_PROPS)[number],
+	prefs: UnitPrefs
+): string | null {
+	const ref = ps.iapws95;
+	if (!ref) return null;
+	const raw = ps.state[prop] - ref[prop];
+	// the same input given back by both (a P of the pair, say) differs by round-off only: 0
+	const d = Math.abs(raw) <= 1e-12 * Math.abs(ref[prop]) ? 0 : raw;
+	const q: Quantity = prop === 'T' ? 'temperatureDifference' : PROP_QUANTITY[prop];
+	const f = formatQuantity(d, q, prefs, { sig: 3, reference: 'absolute' });
+	const sign = d > 0 ? '+' : '';
+	return `${sign}${f.full}`;
 }

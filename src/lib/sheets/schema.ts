@@ -296,11 +296,23 @@ const specSchema = z
 			samples: z.number().int().min(20).max(200).optional(),
 			startHint: hintSchema('startHint').optional(),
 			startNear: nearSchema('startNear').optional(),
-			window: windowSchema.optional()
+			window: windowSchema.optional(),
+			formulation: z
+				.enum(['iapws95', 'if97'], {
+					error:
+						'spec.formulation must be "iapws95" (IAPWS-95, the default) or "if97" (IAPWS-IF97, water only).'
+				})
+				.optional()
 		},
 		{ error: 'spec must be an object { fluid, system, start, legs, limits?, window? }.' }
 	)
 	.superRefine((s, ctx) => {
+		if (s.formulation === 'if97' && s.fluid !== 'water')
+			ctx.addIssue({
+				code: 'custom',
+				path: ['formulation'],
+				message: `spec.formulation "if97" (IAPWS-IF97) is for water only; this sheet is of ${s.fluid}. Leave it out (the fluid's own equation of state) or make the fluid water.`
+			});
 		const seen = new Set<string>();
 		s.legs.forEach((l, i) => {
 			if (seen.has(l.id))

@@ -172,7 +172,8 @@ export function sheetWarnings(
 function fromEngine(w: PathWarning, legs: readonly SheetLegSpec[]): SheetWarning {
 	const titles: Record<string, string> = {
 		'throttling-irreversible': 'Throttling is irreversible',
-		'per-kg-totals': 'Totals per kilogram'
+		'per-kg-totals': 'Totals per kilogram',
+		'if97-state-unavailable': 'A state IAPWS-IF97 cannot give'
 	};
 	const i = w.leg ? legs.findIndex((l) => l.id === w.leg) : -1;
 	const title = titles[w.code] ?? w.code;

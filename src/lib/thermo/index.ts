@@ -13,6 +13,10 @@ import { fluidData } from './fluids/index.ts';
 import { saturatedState } from './state.ts';
 import { curveOf } from './solvers/curve.ts';
 import { fixStateOf } from './solvers/fix-state.ts';
+import { computePath as computePathBase } from './solvers/path.ts';
+import { if97FixFrom, type If97Seed } from './if97/fix.ts';
+import { if97Path } from './if97/path.ts';
+import type { If97State } from './if97/state.ts';
 import { computeLeg as computeLegImpl } from './solvers/legs.ts';
 import { stateExtras as stateExtrasOf } from './solvers/path.ts';
 import { checkSaturationP } from './solvers/range.ts';
@@ -27,6 +31,8 @@ import type {
 	Inputs,
 	Leg,
 	LegSpec,
+	PathResult,
+	PathSpec,
 	Saturation,
 	SaturationCurve,
 	State
@@ -35,6 +41,7 @@ import type {
 export type * from './types.ts';
 export type { FluidData } from './fluids/schema.ts';
 export { ThermoError } from './errors.ts';
+export { FORMULATION_NAME } from './types.ts';
 /** Water by IAPWS-IF97 (IAPWS R7-97(2012)), the industrial formulation: see if97/state.ts. */
 export {
 	if97State,
@@ -195,7 +202,37 @@ export function computeLeg(spec: LegSpec): Leg {
  * leg, per-state extras (superheat, subcooling, volume fractions) and warnings with stable codes
  * (solvers/path.ts). Throws ThermoError (`invalid-path`, or a leg's error prefixed with its id).
  */
-export { computePath, CYCLE_TOLERANCE, MAX_LEGS } from './solvers/path.ts';
+export function computePath(spec: PathSpec): PathResult {
+	const formulation = (spec as { formulation?: unknown } | null)?.formulation;
+	if (formulation === undefined || formulation === 'iapws95') return computePathBase(spec);
+	if (formulation !== 'if97')
+		throw new ThermoError(
+			'invalid-path',
+			`Unknown formulation "${String(formulation)}".`,
+			'Use "iapws95" (the default) or "if97" (water only).'
+		);
+	if (spec.fluid !== 'water')
+		throw new ThermoError(
+			'invalid-path',
+			`The formulation IAPWS-IF97 is for water only; this path is of ${String(spec.fluid)}.`,
+			'Leave formulation out (the fluid’s own equation of state) or make the fluid water.'
+		);
+	return if97Path(spec, computePathBase(spec));
+}
+export { CYCLE_TOLERANCE, MAX_LEGS } from './solvers/path.ts';
+
+/**
+ * A water state by IAPWS-IF97 (IAPWS R7-97(2012)) from any two of T, P, v, rho, u, h, s, x (SI), as
+ * fixState takes them (if97/fix.ts). Pairs other than (P, T), (P, h), (P, s) and those holding x are
+ * solved by Newton's method from `seed`; without one, from the IAPWS-95 state of the same inputs
+ * (fixState('water', inputs, options)). Throws ThermoError outside IF97's range (below 273.15 K,
+ * above 100 MPa, above 50 MPa beyond 1073.15 K, above 2273.15 K) or where IF97 has no such state.
+ */
+export function if97Fix(inputs: Inputs, seed?: If97Seed, options: FixOptions = {}): If97State {
+	return if97FixFrom(inputs, seed ?? (() => fixState('water', inputs, options)));
+}
+export type { If97Seed } from './if97/fix.ts';
+export { if97Extras, if97LegEnergy } from './if97/path.ts';
 export { PRESSURE_EQUIPMENT_CAUTION, LIQUID_FULL_CAUTION } from './cautions.ts';
 export { DEFAULT_ATMOSPHERE, STANDARD_ATMOSPHERE } from './constants.ts';
 

@@ -306,7 +306,25 @@ export interface PathSpec {
 	startNear?: FixOptions['near'];
 	/** bounds (T K, P Pa) on the start and every leg's end (LegSpec.window) */
 	window?: StateWindow;
+	/**
+	 * Water only: which formulation gives the path's states and the legs' q and w. Absent or
+	 * 'iapws95': IAPWS-95 (R6-95(2018)). 'if97': IAPWS-IF97 (R7-97(2012)); see Formulation.
+	 */
+	formulation?: Formulation;
 }
+
+/**
+ * The formulations a water path may be computed with. With 'if97' every state of the path is fixed
+ * by IF97 from the same pair the IAPWS-95 path fixes it by, and each leg's q and w follow from those
+ * states (if97/path.ts); the legs' points between the ends stay IAPWS-95.
+ */
+export type Formulation = 'iapws95' | 'if97';
+
+/** Each formulation's name, as tables, title blocks and exports print it. */
+export const FORMULATION_NAME: Readonly<Record<Formulation, string>> = {
+	iapws95: 'IAPWS-95',
+	if97: 'IAPWS-IF97'
+};
 
 /** What practitioners read beside T, P, v (null where not meaningful). */
 export interface StateExtras {
@@ -329,6 +347,10 @@ export interface PathState {
 	extras: StateExtras;
 	/** viscosity, conductivity, Prandtl number and surface tension (transport/index.ts); POST /api/v1/paths adds it to every state */
 	transport?: Transport;
+	/** on a path computed with IAPWS-IF97: the IAPWS-95 state of the same inputs, for the difference */
+	iapws95?: State;
+	/** on a path computed with IAPWS-IF97: 'iapws95' where IF97 could not give this state (a warning says why) */
+	formulation?: Formulation;
 }
 
 /** Totals of a leg or path: per-kg values × mass (J) for a closed system, × mass flow (W) for a device. */
@@ -406,7 +428,8 @@ export type PathWarningCode =
 	| 'liquid-full'
 	| 'liquid-full-ahead'
 	| 'throttling-irreversible'
-	| 'per-kg-totals';
+	| 'per-kg-totals'
+	| 'if97-state-unavailable';
 
 export interface PathWarning {
 	code: PathWarningCode;
@@ -446,6 +469,8 @@ export interface PathResult {
 	cycle: CycleAnalysis | null;
 	limitEvents: LimitEvent[];
 	warnings: PathWarning[];
+	/** the formulation of the states and legs' q and w; absent: IAPWS-95 (the fluid's own equation) */
+	formulation?: Formulation;
 }
 
 // ---- Isolines (GET /api/v1/fluids/{id}/isolines) ------------------------------------------------

@@ -66,6 +66,22 @@ describe('compute request schemas', () => {
 		).toBe(true);
 	});
 
+	it('formulation: "if97" for water, refused naming formulation for another fluid or an unknown one', () => {
+		expect(pathRequestSchema.safeParse({ ...PATH, formulation: 'if97' }).success).toBe(true);
+		expect(pathRequestSchema.safeParse({ ...PATH, formulation: 'iapws95' }).success).toBe(true);
+		expect(
+			issues(pathRequestSchema, {
+				...PATH,
+				fluid: 'nitrogen',
+				start: { T: 300, P: 1e6 },
+				formulation: 'if97'
+			})
+		).toMatch(/formulation.*water only/);
+		expect(issues(pathRequestSchema, { ...PATH, formulation: 'if2000' })).toMatch(
+			/formulation must be "iapws95".*"if97"/
+		);
+	});
+
 	it.each([
 		['missing inputs', stateRequestSchema, { fluid: 'water' }, /inputs is required/],
 		[

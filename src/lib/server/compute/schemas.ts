@@ -362,7 +362,13 @@ export const pathRequestSchema = z
 			samples: samplesSchema.optional(),
 			startHint: hintSchema('startHint').optional(),
 			startNear: nearFor('startNear').optional(),
-			window: windowSchema.optional()
+			window: windowSchema.optional(),
+			formulation: z
+				.enum(['iapws95', 'if97'], {
+					error:
+						'formulation must be "iapws95" (the default, the fluid\'s own equation of state) or "if97" (water by IAPWS-IF97).'
+				})
+				.optional()
 		},
 		{
 			error: objectError(
@@ -378,7 +384,8 @@ export const pathRequestSchema = z
 					'samples',
 					'startHint',
 					'startNear',
-					'window'
+					'window',
+					'formulation'
 				]
 			)
 		}
@@ -393,6 +400,12 @@ export const pathRequestSchema = z
 				message: `The path asks for ${total} points (${p.legs.length} legs × their samples); at most ${API_PATH_POINTS_MAX} per request (legs × points). Lower samples (for ${p.legs.length} legs, at most ${fit} each; leave it out for ${SAMPLES_DEFAULT}) or split the path.`
 			});
 		}
+		if (p.formulation === 'if97' && p.fluid !== 'water')
+			ctx.addIssue({
+				code: 'custom',
+				path: ['formulation'],
+				message: `formulation "if97" (IAPWS-IF97) is for water only; this path is of ${p.fluid}. Leave formulation out, or make the fluid water.`
+			});
 		const ids = p.legs.map((l, i) => l.id ?? `L${i + 1}`);
 		const dup = ids.find((id, i) => ids.indexOf(id) !== i);
 		if (dup)

@@ -1,5 +1,7 @@
 import {
 	computePath,
+	if97Extras,
+	if97Fix,
 	fixState,
 	getFluid,
 	isolines as engineIsolines,
@@ -78,7 +80,11 @@ export function draftResult(doc: SheetDoc): {
 	try {
 		if (doc.spec.legs.length === 0)
 			return {
-				result: firstStateResult(doc, { fixState, stateExtras }, startOptions(doc.spec)),
+				result: firstStateResult(
+					doc,
+					{ fixState, stateExtras, if97Fix, if97Extras },
+					startOptions(doc.spec)
+				),
 				resultError: null
 			};
 		return { result: computePath(engineSpec(doc)), resultError: null };

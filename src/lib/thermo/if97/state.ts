@@ -266,8 +266,12 @@ export function if97State(P: number, T: number, options: If97Options = {}): If97
 	return st;
 }
 
-/** Single-phase state at (P, T) on a given side of the saturation line (used while iterating on T). */
-function onSide(P: number, T: number, side: 'liquid' | 'vapor'): If97State {
+/**
+ * Single-phase state at (P, T) on a given side of the saturation line (used while iterating): below
+ * 623.15 K region 1 for `liquid` and region 2 for `vapor` whichever side of Eq. 30 (P, T) lies on.
+ * The caller checks the range.
+ */
+export function onSide(P: number, T: number, side: 'liquid' | 'vapor'): If97State {
 	const p = P / 1e6;
 	if (T > T_25) return fromGibbs(gibbs5(T, p), T, P, 5);
 	// the caller keeps T on its side of Tsat(P), so round-off of Eqs. 30/31 at the line cannot flip the region

@@ -1,0 +1,81 @@
+/**
+ * IAPWS-IF97 per sheet: median CPU µs of if97Fix per input pair (seeded with the IAPWS-95 state of
+ * the same inputs, as a path does) beside fixState with IAPWS-95 for the same pair, and of a water
+ * path computed with formulation 'if97' beside the same path with IAPWS-95 (the IF97 re-fix is
+ * added on top of the IAPWS-95 path). Prints figures; never fails on time. `npm run bench:if97`.
+ */
+import { loadavg } from 'node:os';
+import { computePath, fixState, if97Fix } from '../src/lib/thermo/index.ts';
+import { if97Path } from '../src/lib/thermo/if97/path.ts';
+import type { Inputs, PathSpec } from '../src/lib/thermo/types.ts';
+
+function median(xs: number[]): number {
+	const s = [...xs].sort((a, b) => a - b);
+	return s[s.length >> 1];
+}
+
+/** Median CPU µs per call over batches of ~2 ms, after a warm-up of at least 0.2 s. */
+function time(call: () => unknown): number {
+	const w0 = performance.now();
+	let warm = 0;
+	while (warm < 20 || performance.now() - w0 < 200) {
+		call();
+		warm++;
+	}
+	const per = Math.max(1, Math.ceil(2 / ((performance.now() - w0) / warm)));
+	const cpus: number[] = [];
+	const deadline = performance.now() + 1500;
+	while (cpus.length < 7 || (performance.now() < deadline && cpus.length < 50)) {
+		const c0 = process.cpuUsage();
+		for (let k = 0; k < per; k++) call();
+		const cu = process.cpuUsage(c0);
+		cpus.push((cu.user + cu.system) / per);
+	}
+	return median(cpus);
+}
+
+const pairs: [string, Inputs][] = [
+	['T, P (liquid)', { T: 350, P: 5e6 }],
+	['P, h (vapor)', { P: 1e6, h: 3.0e6 }],
+	['P, s (mixture)', { P: 1e5, s: 6e3 }],
+	['T, x', { T: 450, x: 0.3 }],
+	['T, v (liquid)', { T: 360, v: 0.00103 }],
+	['P, v (vapor)', { P: 1e6, v: 0.25 }],
+	['v, u (mixture)', { v: 0.1, u: 1.5e6 }],
+	['h, s (vapor)', { h: 3.2e6, s: 7e3 }]
+];
+
+console.log(
+	`if97Fix against fixState (IAPWS-95), median CPU µs per call; load average ${loadavg()
+		.map((x) => x.toFixed(1))
+		.join(' ')}`
+);
+console.log('pair                 IAPWS-95   IF97 (seeded)');
+for (const [name, inputs] of pairs) {
+	const seed = fixState('water', inputs);
+	const t95 = time(() => fixState('water', inputs));
+	const t97 = time(() => if97Fix(inputs, seed));
+	console.log(`${name.padEnd(20)} ${t95.toFixed(1).padStart(8)}   ${t97.toFixed(1).padStart(8)}`);
+}
+
+const path: PathSpec = {
+	fluid: 'water',
+	system: { kind: 'closed', mass: 2 },
+	start: { T: 300, P: 1e6 },
+	legs: [
+		{ process: 'isobaric', target: { T: 500 } },
+		{ process: 'isentropic', target: { P: 1e5 } },
+		{ process: 'isobaric', target: { x: 0 } },
+		{ process: 'isochoric', target: { T: 420 } }
+	]
+};
+const p95 = time(() => computePath(path));
+const p97 = time(() => computePath({ ...path, formulation: 'if97' }));
+console.log(
+	`4-leg water path: IAPWS-95 ${(p95 / 1000).toFixed(2)} ms, IF97 ${(p97 / 1000).toFixed(2)} ms (+${(((p97 - p95) / p95) * 100).toFixed(0)} %)`
+);
+const base = computePath(path);
+const refix = time(() => if97Path(path, base));
+console.log(
+	`of which the IF97 re-fix of its 5 states and 4 legs (if97Path alone): ${refix.toFixed(0)} µs`
+);
