@@ -78,4 +78,27 @@ describe('water paths by IAPWS-IF97 against python3-iapws IAPWS97', () => {
 		// the leg keeps its IAPWS-95 energies
 		expect(Number.isFinite(r.legs[0].leg.q)).toBe(true);
 	});
+
+	it('a polytropic leg: the IF97 end keeps P·vⁿ of the IF97 start and meets the target; w by the identity', () => {
+		const n = 1.25;
+		const spec: PathSpec = {
+			fluid: 'water',
+			system: { kind: 'closed', mass: 1 },
+			start: { T: 600, P: 1e6 },
+			legs: [{ id: 'Lp', process: 'polytropic', n, target: { T: 520 } }],
+			formulation: 'if97'
+		};
+		const r = computePath(spec);
+		const [a, b] = r.states.map((s) => s.state);
+		expect(r.states[1].formulation).toBe('if97');
+		expect(rel(b.P * b.v ** n, a.P * a.v ** n)).toBeLessThan(1e-9);
+		expect(rel(b.T, 520)).toBeLessThan(1e-9);
+		// identities of a polytrope (not the engine's quadrature): w = (P₂v₂ − P₁v₁)/(1 − n), q = Δu + w
+		const leg = r.legs[0].leg;
+		expect(rel(leg.w, (b.P * b.v - a.P * a.v) / (1 - n))).toBeLessThan(1e-12);
+		expect(rel(leg.q, b.u - a.u + leg.w)).toBeLessThan(1e-12);
+		// and the IAPWS-95 leg's quadrature agrees to the formulations' difference (~1e−4)
+		const spec95: PathSpec = { ...spec, formulation: 'iapws95' };
+		expect(rel(leg.w, computePath(spec95).legs[0].leg.w)).toBeLessThan(2e-3);
+	});
 });
