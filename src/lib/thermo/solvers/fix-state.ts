@@ -226,9 +226,10 @@ function checkValue(fl: Fluid, k: InputName, val: unknown): number {
 
 /** Fix a state from two properties (see index.ts fixState). */
 export function fixStateOf(fl: Fluid, inputs: Inputs, options: FixOptions = {}): State {
-	checkOptions(options);
 	const near = options.near;
 	const win = options.window;
+	// nothing to check when no option is given (the common call: no closure built)
+	if (near !== undefined || win !== undefined || options.hint !== undefined) checkOptions(options);
 	const [ka, a, kb, b] = parseInputs(fl, inputs);
 	// a mixture (pseudo-pure.ts): x names its bubble or dew line; other answers are held to its band
 	const band = bandOf(fl);

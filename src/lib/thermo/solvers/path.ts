@@ -211,7 +211,8 @@ export function computePath(spec: PathSpec): PathResult {
 	if (spec.system.kind === 'closed') {
 		const sys = spec.system;
 		m = sys.mass ?? (sys.volume !== undefined ? sys.volume / start.v : 1);
-		system = { kind: 'closed', mass: m, volume: m * start.v };
+		// a given volume is reported as given (m·v₁ = (V/v₁)·v₁ can miss it by an ulp)
+		system = { kind: 'closed', mass: m, volume: sys.volume ?? m * start.v };
 		if (sys.mass === undefined && sys.volume === undefined)
 			warnings.push({
 				code: 'per-kg-totals',

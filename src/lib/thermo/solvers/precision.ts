@@ -170,6 +170,19 @@ export function precisionOf(
 	return own;
 }
 
+/** Uncertainty of the quantity in rows i, i + 1 of D from the inputs' roundings da, db. */
+function spread(
+	i: number,
+	Ta: number,
+	Tb: number,
+	za: number,
+	zb: number,
+	da: number,
+	db: number
+): number {
+	return Math.abs(D[i] * Ta + D[i + 1] * za) * da + Math.abs(D[i] * Tb + D[i + 1] * zb) * db;
+}
+
 function precisionIn(
 	fl: Fluid,
 	s: State,
@@ -205,17 +218,15 @@ function precisionIn(
 		zb = a1 / det;
 	const da = inputRounding(fl, ka, a, s.T),
 		db = inputRounding(fl, kb, b, s.T);
-	const spread = (i: number) =>
-		Math.abs(D[i] * Ta + D[i + 1] * za) * da + Math.abs(D[i] * Tb + D[i + 1] * zb) * db;
 	// a single phase's P carries the equation's own round-off (state.ts P_ROUNDOFF·ρRT): in a cold
 	// liquid at mPa (propane near its triple point) that alone is a few per cent of P
 	// (P given: exact)
 	const floorP =
 		kb !== 'P' && (singleSide || s.x === null) ? (P_ROUNDOFF * s.rho * fl.R * s.T) / s.P : 0;
 	return {
-		T: ka === 'T' ? EPS : clamp(spread(0) / s.T),
-		P: ka === 'P' ? EPS : clamp(Math.max(spread(2) / s.P, floorP)),
-		v: clamp(spread(4) / s.rho)
+		T: ka === 'T' ? EPS : clamp(spread(0, Ta, Tb, za, zb, da, db) / s.T),
+		P: ka === 'P' ? EPS : clamp(Math.max(spread(2, Ta, Tb, za, zb, da, db) / s.P, floorP)),
+		v: clamp(spread(4, Ta, Tb, za, zb, da, db) / s.rho)
 	};
 }
 

@@ -82,24 +82,32 @@ const MELT_TOL = 1e-9;
 interface SolidCache {
 	lines: SolidLines | undefined;
 	Pt: number;
+	/** the last temperature asked and the pressure above which it is solid (Infinity: no curve there) */
+	lastT: number;
+	lastLimit: number;
 }
 
 function cached(fl: Fluid): SolidCache {
 	let c = fl.cache.solid as SolidCache | undefined;
 	if (!c) {
-		c = { lines: solidLines(fl), Pt: triplePressure(fl) };
+		c = { lines: solidLines(fl), Pt: triplePressure(fl), lastT: NaN, lastLimit: Infinity };
 		fl.cache.solid = c;
 	}
 	return c;
 }
 
 export function isSolid(fl: Fluid, T: number, P: number): boolean {
-	const { lines, Pt } = cached(fl);
+	const c = cached(fl);
+	const { lines, Pt } = c;
 	// no curve, or below the triple-point pressure (gas): never solid here
 	if (!lines || P <= Pt) return false;
-	const p = pieceAt(lines.melting.pieces, T, fl.Tt);
-	if (!p) return false;
-	return P > Math.max(piecePressure(p, T), Pt) * (1 + MELT_TOL);
+	// solvers and legs ask at one temperature many times: the limit is kept for the last T
+	if (T !== c.lastT) {
+		const p = pieceAt(lines.melting.pieces, T, fl.Tt);
+		c.lastLimit = p ? Math.max(piecePressure(p, T), Pt) * (1 + MELT_TOL) : Infinity;
+		c.lastT = T;
+	}
+	return P > c.lastLimit;
 }
 
 export function solidError(fl: Fluid, T: number, P: number, what?: string): ThermoError {

@@ -121,6 +121,84 @@ export function tableIndex(e: number): number {
 	return Number.isInteger(e) && e >= 0 && e <= MAX_TABLE_EXPONENT ? e : -1;
 }
 
+/**
+ * x^eᵢ for a fixed list of exponents eᵢ, filled all at once for a new x > 0. When every eᵢ is a
+ * multiple of 1/q for q = 1, 2, 4 or 8 (the integer, half, quarter and eighth exponents of most
+ * registered fluids), x^eᵢ = x^⌊eᵢ⌋·(x^(1/q))^j with x^(1/q) from one, two or three square roots
+ * and the integer powers (negative ones too) from tables built by multiplication: no exp or log.
+ * Otherwise each costs one exp(eᵢ·ln x). Either way the result agrees with Math.pow to a few units
+ * in the last place.
+ */
+export class PowerSet {
+	/** 1, 2, 4 or 8 when the multiplication route applies, else 0 */
+	readonly q: number;
+	private readonly e: Float64Array;
+	/** offset of x^0 in `ipow`: table index of each exponent's integer part, and q·(its fraction) */
+	private readonly ip: Int32Array;
+	private readonly fp: Int32Array;
+	/** x^(k − zero) for k = 0…length − 1 */
+	private readonly ipow: Float64Array;
+	private readonly zero: number;
+	/** (x^(1/q))^j for j = 0…q − 1 */
+	private readonly fpow: Float64Array;
+
+	constructor(e: readonly number[] | Float64Array) {
+		this.e = Float64Array.from(e);
+		let q = 0;
+		for (const cand of [1, 2, 4, 8]) {
+			if (
+				this.e.every(
+					(x) => Math.abs(x) <= 1024 && Math.abs(x * cand - Math.round(x * cand)) < 1e-12
+				)
+			) {
+				q = cand;
+				break;
+			}
+		}
+		this.q = q;
+		const qq = q || 1;
+		const whole = Array.from(this.e, (x) => (q ? Math.floor(Math.round(x * qq) / qq) : 0));
+		this.zero = -Math.min(0, ...whole);
+		this.ip = Int32Array.from(whole, (k) => k + this.zero);
+		this.fp = Int32Array.from(this.e, (x, i) => (q ? Math.round(x * qq) - qq * whole[i] : 0));
+		this.ipow = new Float64Array(this.zero + Math.max(0, ...whole) + 1);
+		this.fpow = new Float64Array(qq);
+	}
+
+	/** out[i] = x^eᵢ (x > 0; lnX = ln x, read only when q = 0) */
+	fill(x: number, lnX: number, out: Float64Array): void {
+		const { e, ip, fp, ipow, fpow, q, zero } = this;
+		if (q === 0) {
+			for (let i = 0; i < e.length; i++) out[i] = Math.exp(e[i] * lnX);
+			return;
+		}
+		// x^k by squaring where it can (a short chain of dependent multiplications), 1/x^k likewise
+		ipow[zero] = 1;
+		const up = ipow.length - zero;
+		if (up > 1) ipow[zero + 1] = x;
+		for (let k = 2; k < up; k++)
+			ipow[zero + k] =
+				k & 1 ? ipow[zero + k - 1] * x : ipow[zero + (k >> 1)] * ipow[zero + (k >> 1)];
+		if (zero > 0) {
+			const inv = 1 / x;
+			ipow[zero - 1] = inv;
+			for (let k = 2; k <= zero; k++)
+				ipow[zero - k] =
+					k & 1 ? ipow[zero - k + 1] * inv : ipow[zero - (k >> 1)] * ipow[zero - (k >> 1)];
+		}
+		if (q === 1) {
+			for (let i = 0; i < e.length; i++) out[i] = ipow[ip[i]];
+			return;
+		}
+		let root = Math.sqrt(x);
+		if (q >= 4) root = Math.sqrt(root);
+		if (q === 8) root = Math.sqrt(root);
+		fpow[0] = 1;
+		for (let j = 1; j < q; j++) fpow[j] = fpow[j - 1] * root;
+		for (let i = 0; i < e.length; i++) out[i] = ipow[ip[i]] * fpow[fp[i]];
+	}
+}
+
 /** A compiled term of α⁰ or αʳ: adds its value and derivatives (scaled, see AlphaRecord) into `rec`. */
 export interface TermEvaluator {
 	readonly kind: string;

@@ -1,4 +1,5 @@
 import {
+	PowerSet,
 	tableIndex,
 	type AlphaRecord,
 	type DerivativeOrder,
@@ -14,24 +15,30 @@ import {
  *   ϑg = k·g,  ϑ²g = (k² − l²L)·g,  ϑ³g = (k³ − 3k·l²L − l³L)·g,  k = d − l·L,
  * and δ²g'' = (ϑ² − ϑ)g, δ³g''' = (ϑ³ − 3ϑ² + 2ϑ)g. The τ factor gives falling factorials of t.
  * The terms are kept grouped by l, so exp(−δ^l) is computed once per group and the inner loop
- * reads no per-term l. When every d, t, l is a small non-negative integer the powers come from the
- * context's tables (multiplications only); otherwise each term costs one exp:
- * δ^d·τ^t·exp(−L) = exp(d·ln δ + t·ln τ − L).
+ * reads no per-term l. The τ part nᵢ·τ^tᵢ is kept for the last τ seen (PowerSet: multiplications
+ * and square roots when every t is a multiple of 1/8, as for all but a few fluids, else one exp per
+ * term), so a solver holding T fixed (density and saturation iterations) pays no exp per term; δ^d
+ * and δ^l come from the context's table when they are small integers (every registered fluid's),
+ * otherwise each costs one exp.
  */
 export class ResidualExponential implements TermEvaluator {
 	readonly kind = 'exponential';
 	readonly maxD: number;
-	readonly maxT: number;
+	readonly maxT = 0;
 	/** per term, in order of rising l */
 	private readonly n: Float64Array;
 	private readonly d: Float64Array;
 	private readonly t: Float64Array;
 	private readonly di: Int32Array;
-	private readonly ti: Int32Array;
 	/** the distinct l, and where each group's terms start (groupStart[g] … groupStart[g + 1] − 1) */
 	private readonly groupL: Float64Array;
 	private readonly groupStart: Int32Array;
+	/** δ^d and δ^l from the context's table */
 	private readonly tables: boolean;
+	private readonly tPows: PowerSet;
+	/** nᵢ·τ^tᵢ at tauAt */
+	private readonly nt: Float64Array;
+	private tauAt = NaN;
 
 	constructor(
 		n: readonly number[],
@@ -44,7 +51,6 @@ export class ResidualExponential implements TermEvaluator {
 		this.d = Float64Array.from(order, (i) => d[i]);
 		this.t = Float64Array.from(order, (i) => t[i]);
 		this.di = Int32Array.from(order, (i) => tableIndex(d[i]));
-		this.ti = Int32Array.from(order, (i) => tableIndex(t[i]));
 		const ls: number[] = [],
 			starts: number[] = [];
 		order.forEach((i, k) => {
@@ -56,14 +62,21 @@ export class ResidualExponential implements TermEvaluator {
 		starts.push(order.length);
 		this.groupL = Float64Array.from(ls);
 		this.groupStart = Int32Array.from(starts);
-		this.tables = [...this.di, ...this.ti, ...ls.map(tableIndex)].every((k) => k >= 0);
+		this.tables = [...this.di, ...ls.map(tableIndex)].every((k) => k >= 0);
 		this.maxD = this.tables ? Math.max(0, ...this.di, ...ls) : 0;
-		this.maxT = this.tables ? Math.max(0, ...this.ti) : 0;
+		this.tPows = new PowerSet(this.t);
+		this.nt = new Float64Array(order.length);
 	}
 
 	add(ctx: EvalContext, order: DerivativeOrder, rec: AlphaRecord): void {
-		const { n, d, t, di, ti, groupL, groupStart, tables } = this;
-		const { dPow, tPow, lnDelta, lnTau } = ctx;
+		const { d, t, di, nt, groupL, groupStart, tables } = this;
+		if (ctx.tau !== this.tauAt) {
+			const n = this.n;
+			this.tPows.fill(ctx.tau, ctx.lnTau, nt);
+			for (let i = 0; i < n.length; i++) nt[i] *= n[i];
+			this.tauAt = ctx.tau;
+		}
+		const { dPow, lnDelta } = ctx;
 		let a = 0,
 			d1 = 0,
 			t1 = 0,
@@ -82,9 +95,7 @@ export class ResidualExponential implements TermEvaluator {
 				l2L = l * lL;
 			const end = groupStart[g + 1];
 			for (let i = groupStart[g]; i < end; i++) {
-				const f = tables
-					? n[i] * dPow[di[i]] * tPow[ti[i]] * E
-					: n[i] * Math.exp(d[i] * lnDelta + t[i] * lnTau - L);
+				const f = tables ? nt[i] * dPow[di[i]] * E : nt[i] * Math.exp(d[i] * lnDelta - L);
 				a += f;
 				if (order < 1) continue;
 				const k = d[i] - lL;

@@ -4,7 +4,13 @@
  * chosen to exercise integer and fractional exponents).
  */
 import { describe, expect, it } from 'vitest';
-import { AlphaRecord, EvalContext, type DerivativeOrder, type TermEvaluator } from './record.ts';
+import {
+	AlphaRecord,
+	EvalContext,
+	PowerSet,
+	type DerivativeOrder,
+	type TermEvaluator
+} from './record.ts';
 import { IdealLead } from './ideal-lead.ts';
 import { IdealLogTau } from './ideal-log-tau.ts';
 import { IdealPower } from './ideal-power.ts';
@@ -227,5 +233,30 @@ describe('Helmholtz terms: ln(c + exp(γτ)) value', () => {
 		expect(far.a).toBeCloseTo(1600, 9);
 		expect(far.t1).toBeCloseTo(1600, 9);
 		expect(Math.abs(far.t2)).toBeLessThan(1e-300);
+	});
+});
+
+describe('PowerSet: x^e by multiplication and square roots', () => {
+	it('agrees with Math.pow to a few units in the last place, for each route', () => {
+		const sets: [number, number[]][] = [
+			[1, [0, 1, 2, 7, 16, 50]],
+			[2, [0.5, 1.5, 3, 28.5]],
+			[4, [0.25, 0.75, 2.25, 16]],
+			[8, [-0.5, 0.125, 0.375, 0.875, 1]],
+			[0, [0.629, 1.704, 3.3, 8.4]]
+		];
+		for (const [q, es] of sets) {
+			const ps = new PowerSet(es);
+			expect(ps.q, `exponents ${es.join(', ')}`).toBe(q);
+			const out = new Float64Array(es.length);
+			for (const x of [0.3, 0.97, 1, 1.08, 2.6, 4.5]) {
+				ps.fill(x, Math.log(x), out);
+				es.forEach((e, i) => {
+					// reference: the runtime's Math.pow; 1e−14 relative is a few dozen ulps (common practice)
+					const ref = Math.pow(x, e);
+					expect(Math.abs(out[i] - ref), `${x}^${e}`).toBeLessThanOrEqual(1e-14 * ref);
+				});
+			}
+		}
 	});
 });
