@@ -2,6 +2,10 @@ import type { PathResult } from '$lib/thermo';
 import type { SheetDoc } from '$lib/sheets/types';
 import { legPointsOf, withoutLegPoints, type LegPointsRef } from '$lib/sheets/leg-points';
 import { draftResult } from './compute/sheet-frame';
+import type { DB } from './db/schema';
+import type { TeamAccess } from './access';
+import { jsonError } from './api';
+import { readSheetDraft } from './sheets';
 
 /*
  * The sheet page's first paint of a draft: the path computed once per draft content and kept,
@@ -92,24 +96,40 @@ export function firstPaint(
 	};
 }
 
-/** The legs' points of a draft's first paint, when kept (the route computes them again if not). */
-export function keptLegPoints(
-	teamId: string,
-	sheetId: string,
-	key: string
-): { body: Uint8Array<ArrayBuffer>; etag: string } | null {
-	const e = entries.get(id(sheetId, key));
-	return e && e.teamId === teamId ? keep(e) : null;
-}
-
-/** The legs' points of the draft whose stored text has key `key`, computed now (and kept). */
-export function legPointsNow(
-	teamId: string,
+/**
+ * The answer to GET …/sheets/{sheet}/draft/points/{key} for a caller whose access to the team is
+ * checked already: the kept points when this process has them (only for a sheet of the caller's
+ * team), else the current draft's when its key is `key` (another process gave the page, a
+ * restart), else 404 `draft-changed`. Immutable and private, strong ETag, 304 on If-None-Match.
+ */
+export async function legPointsAnswer(
+	db: DB,
+	access: TeamAccess,
 	sheetId: string,
 	key: string,
-	doc: SheetDoc
-): { body: Uint8Array<ArrayBuffer>; etag: string } {
-	return entryFor(teamId, sheetId, key, doc);
+	ifNoneMatch: string | null
+): Promise<Response> {
+	let found = entries.get(id(sheetId, key));
+	if (found && found.teamId === access.team.id) keep(found);
+	else {
+		const current = await readSheetDraft(db, access, sheetId);
+		if (current.draftKey !== key)
+			return jsonError(
+				404,
+				'draft-changed',
+				'The draft of this sheet has changed since this URL was given: compute the current draft’s path with POST /api/v1/paths, or reload the sheet page.'
+			);
+		found = entryFor(access.team.id, sheetId, key, current.sheet.doc);
+	}
+	const headers = {
+		etag: found.etag,
+		'cache-control': 'private, max-age=31536000, immutable',
+		vary: 'cookie, authorization'
+	};
+	const etag = found.etag;
+	if (ifNoneMatch && ifNoneMatch.split(',').some((t) => [etag, `W/${etag}`].includes(t.trim())))
+		return new Response(null, { status: 304, headers });
+	return new Response(found.body, { headers: { ...headers, 'content-type': 'application/json' } });
 }
 
 /** Forget every kept first paint (tests). */
