@@ -405,8 +405,7 @@ try {
 		if (!on || !off) continue;
 		const ratio = (i: number) =>
 			(
-				best(at(i, on.key)).result.requests.average /
-				best(at(i, off.key)).result.requests.average
+				best(at(i, on.key)).result.requests.average / best(at(i, off.key)).result.requests.average
 			).toFixed(2);
 		console.log(
 			`  pool on/off on ${db === 'pg' ? 'PostgreSQL' : 'SQLite'}: typical leg ${ratio(0)}×, 200-point leg ${ratio(1)}×`

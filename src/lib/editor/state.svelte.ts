@@ -995,7 +995,10 @@ export class SheetEditor {
 			try {
 				view = await this.#compute(this.doc);
 			} catch (e) {
-				this.#note(`The path’s legs could not be drawn: ${messageOf(e, this.doc.spec.legs)}`, 'caution');
+				this.#note(
+					`The path’s legs could not be drawn: ${messageOf(e, this.doc.spec.legs)}`,
+					'caution'
+				);
 				return;
 			}
 			if (this.view !== pending.view || this.#drag) return;

@@ -87,7 +87,9 @@ describe('the first paint of a sheet page', () => {
 		expect(body.error.code).toBe('draft-changed');
 		expect(body.error.message).toContain('POST /api/v1/paths');
 		// the current URL is computed again from the stored draft
-		const now = (await (await points(designer, sheet, after.paint.points!.url)).json()) as LegPoints;
+		const now = (await (
+			await points(designer, sheet, after.paint.points!.url)
+		).json()) as LegPoints;
 		expect(now.points).toHaveLength(1);
 	});
 

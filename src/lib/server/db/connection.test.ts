@@ -48,7 +48,11 @@ describe('SQLite statements prepared once', () => {
 	it('keep at most `max` statements, forgetting the least recently used', async () => {
 		const { db, prepared } = counted(2);
 		await sql`create table t (id integer primary key)`.execute(db);
-		const q = (n: number) => db.selectFrom('t').select(sql<number>`${sql.lit(n)}`.as('n')).execute();
+		const q = (n: number) =>
+			db
+				.selectFrom('t')
+				.select(sql<number>`${sql.lit(n)}`.as('n'))
+				.execute();
 		await q(1);
 		await q(2);
 		await q(1); // kept

@@ -17,7 +17,9 @@ export function openDatabase(path: string): Kysely<Schema> {
 	sqlite.pragma('foreign_keys = ON');
 	sqlite.pragma('busy_timeout = 5000');
 	sqlite.pragma('synchronous = NORMAL');
-	return new Kysely<Schema>({ dialect: new SqliteDialect({ database: reusingStatements(sqlite) }) });
+	return new Kysely<Schema>({
+		dialect: new SqliteDialect({ database: reusingStatements(sqlite) })
+	});
 }
 
 /** Prepared statements kept per connection, by SQL text (most recently used last). */
@@ -30,7 +32,10 @@ export const STATEMENTS_KEPT = 256;
  * completion synchronously (`all`/`run`); the app never streams (`.stream()`), which would keep a
  * statement busy. SQLite recompiles a kept statement itself after a schema change.
  */
-export function reusingStatements(sqlite: Database.Database, max = STATEMENTS_KEPT): SqliteDatabase {
+export function reusingStatements(
+	sqlite: Database.Database,
+	max = STATEMENTS_KEPT
+): SqliteDatabase {
 	const kept = new Map<string, Database.Statement>();
 	return {
 		prepare(sql: string) {
