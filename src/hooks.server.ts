@@ -56,6 +56,8 @@ const authenticateApiToken: Handle = async ({ event, resolve }) => {
 const authenticateSession: Handle = async ({ event, resolve }) => {
 	event.locals.user = null;
 	event.locals.session = null;
+	if (event.request.method === 'GET' || event.request.method === 'HEAD')
+		event.locals.teamAccess = new Map();
 	if (event.locals.token) return resolve(event);
 	const token = event.cookies.get(sessionCookieName(event.url));
 	if (token) {

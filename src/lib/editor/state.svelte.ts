@@ -30,6 +30,7 @@ import type { FluidInfo, Formulation, Inputs, PathResult, Process, State } from 
 import type { UnitPrefs } from '$lib/units/prefs';
 import { Autosave, readLocalCopy, type AutosaveState, type KeyValueStore } from './autosave';
 import type { ChartData, ChartDataRef } from '$lib/chart-data';
+import { withLegPoints, type LegPoints, type LegPointsRef } from '$lib/sheets/leg-points';
 import {
 	ApiError,
 	apiCall,
@@ -119,6 +120,8 @@ export interface EditorInit {
 	/** the draft computed on the server for the first paint, or why it could not be */
 	result: PathResult | null;
 	resultError: string | null;
+	/** where the first paint's leg points are when `result` came without them (loadPoints fetches them) */
+	points?: LegPointsRef | null;
 	canEdit: boolean;
 	fluid: FluidInfo;
 	/** where the dome and the fluid list are (loadChartData fetches them after the first paint) */
@@ -181,6 +184,8 @@ export class SheetEditor {
 	/** every fluid, for the picker: the sheet's own until loadChartData brings the list */
 	fluids = $state.raw<FluidInfo[]>([]);
 	readonly #chartData: ChartDataRef;
+	/** the first paint's leg points still to fetch, and the view drawn without them */
+	#points: { ref: LegPointsRef; view: PathView } | null = null;
 
 	title = $state('');
 	status = $state<SheetStatus>('draft');
@@ -286,6 +291,7 @@ export class SheetEditor {
 		if (init.result) {
 			this.view = viewOf(init.doc.spec, init.result);
 			this.committedView = this.view;
+			if (init.points) this.#points = { ref: init.points, view: this.view };
 		}
 		this.computeError = init.resultError;
 		this.#history = new History(init.doc, { limit: 200, same: sameDoc });
@@ -1065,6 +1071,40 @@ export class SheetEditor {
 				kind: 'caution',
 				text: `The engine could not trace the vapor dome of ${this.fluid.name} just now, so the charts are drawn without it. The states and legs are computed as usual.`
 			};
+	}
+
+	/**
+	 * Fetch the first paint's leg points (the page carries the path without them) and draw the
+	 * legs, unless an edit has drawn a path of its own since. If they cannot be had (the draft
+	 * changed meanwhile, offline), the path is computed again as an edit would.
+	 */
+	async loadPoints(f: typeof fetch = fetch): Promise<void> {
+		const pending = this.#points;
+		if (!pending) return;
+		this.#points = null;
+		let view: PathView | null = null;
+		try {
+			const got = await apiCall<LegPoints>(f, pending.ref.url);
+			const result = withLegPoints(pending.view.result, got);
+			if (result) view = viewOf(this.doc.spec, result);
+		} catch {
+			// computed again below
+		}
+		if (this.view !== pending.view || this.#drag) return;
+		if (!view) {
+			try {
+				view = await this.#compute(this.doc);
+			} catch (e) {
+				this.#note(
+					`The path’s legs could not be drawn: ${messageOf(e, this.doc.spec.legs)}`,
+					'caution'
+				);
+				return;
+			}
+			if (this.view !== pending.view || this.#drag) return;
+		}
+		this.view = view;
+		if (this.committedView === pending.view) this.committedView = view;
 	}
 
 	/** Fetch the isolines and limit curves the current fluid, units and path need (frame.ts; cached by values). */

@@ -129,7 +129,16 @@ export async function requireTeam(
 	capability: Capability = 'read',
 	db: DB = getDb()
 ): Promise<TeamAccess> {
-	const access = await resolveTeamAccess(db, requirePrincipal(event), teamSlug);
+	const principal = requirePrincipal(event);
+	// one lookup per team for all the loads of one GET (the layout's and the page's); hooks set
+	// the memo on GET and HEAD only, so a form action and the loads after it read afresh
+	const memo = event.locals.teamAccess;
+	let pending = memo?.get(teamSlug);
+	if (!pending || pending.db !== db) {
+		pending = { db, access: resolveTeamAccess(db, principal, teamSlug) };
+		memo?.set(teamSlug, pending);
+	}
+	const access = await pending.access;
 	if (!access) notFound();
 	requireCapability(access, capability);
 	return access;

@@ -14,9 +14,9 @@ import {
 	listReplyRows,
 	setNoteResolved
 } from './db/notes';
-import { getRevision } from './db/revisions';
+import { getRevisionDoc } from './db/revisions';
 import { listMembers, type Member } from './db/memberships';
-import { checkDoc } from './sheets';
+import { readStoredDoc } from './sheets';
 import { loadSheet } from './revisions';
 import { mentionMail, replyMail } from './mail-templates';
 import {
@@ -118,7 +118,9 @@ function anchorOf(row: ReviewNoteRow): Anchor {
 
 function parseDoc(text: string): SheetDoc {
 	try {
-		return checkDoc(JSON.parse(text)).doc;
+		return readStoredDoc(text, () => {
+			throw new Error('not JSON');
+		}).doc;
 	} catch {
 		throw new AppError(
 			422,
@@ -135,9 +137,10 @@ async function contextDoc(
 	revision: number | null
 ): Promise<SheetDoc> {
 	if (revision === null) return parseDoc(sheet.draft);
-	const row = await getRevision(db, sheet.id, revision);
-	if (!row) throw new AppError(404, 'revision-not-found', `This sheet has no Rev ${revision}.`);
-	return parseDoc(row.doc);
+	const text = await getRevisionDoc(db, sheet.id, revision);
+	if (text === undefined)
+		throw new AppError(404, 'revision-not-found', `This sheet has no Rev ${revision}.`);
+	return parseDoc(text);
 }
 
 function requireWrite(access: TeamAccess): void {
@@ -200,7 +203,15 @@ export async function listNotes(
 	sheetId: string,
 	context: number | null = null
 ): Promise<{ notes: NoteView[]; open: number; outdated: number }> {
-	const sheet = await loadSheet(db, access, sheetId);
+	return notesOf(db, await loadSheet(db, access, sheetId), context);
+}
+
+/** listNotes for a sheet row already read (and scoped to the caller's team). */
+export async function notesOf(
+	db: DB,
+	sheet: { id: string; draft: string },
+	context: number | null = null
+): Promise<{ notes: NoteView[]; open: number; outdated: number }> {
 	const doc = await contextDoc(db, sheet, context);
 	const rows = await listNoteRows(db, sheet.id);
 	const ids = rows.map((r) => r.id);

@@ -75,8 +75,14 @@ describe('the sheet page’s review data', () => {
 	it('brings revisions, notes against the draft, traces, members and the newest revision’s document', async () => {
 		const { sheetReviewData } = await import('./review-pages');
 		const { uploadTrace } = await import('./traces');
+		const { readSheetDraft } = await import('./sheets');
 		const sheet = await w.newSheet();
-		const empty = await sheetReviewData(w.env.db, await w.access(w.people.viewer), sheet);
+		const reviewOf = async (access: Awaited<ReturnType<typeof w.access>>) =>
+			sheetReviewData(w.env.db, access, (await readSheetDraft(w.env.db, access, sheet)).row);
+		const { review: empty, deletion: viewerDeletion } = await reviewOf(
+			await w.access(w.people.viewer)
+		);
+		expect(viewerDeletion.allowed).toBe(false);
 		expect(empty).toMatchObject({
 			revisions: [],
 			notes: [],
@@ -93,7 +99,7 @@ describe('the sheet page’s review data', () => {
 			bytes: new TextEncoder().encode('time [s],P [kPa a],T [°C]\n0,200,20\n'),
 			filename: 'a.csv'
 		});
-		const d = await sheetReviewData(w.env.db, await w.access(w.people.designer), sheet);
+		const { review: d } = await reviewOf(await w.access(w.people.designer));
 		expect(d.revisions.map((r) => r.number)).toEqual([1]);
 		expect(d.latestDoc?.spec.legs.map((l) => l.id)).toEqual(['heat', 'vent']);
 		expect(d.traces[0].points).toHaveLength(1);

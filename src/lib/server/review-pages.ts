@@ -1,20 +1,21 @@
-import type { DB } from './db/schema';
+import type { DB, SheetRow } from './db/schema';
 import { AppError } from './errors';
 import type { TeamAccess } from './guard';
 import { listMembers } from './db/memberships';
-import { latestRevision } from './db/revisions';
+import { getRevisionDoc, latestRevision, listRevisionRows } from './db/revisions';
 import {
 	compareRevisions,
 	listRevisions,
 	loadSheet,
+	revisionsOf,
 	readRevision,
 	signOffOf,
 	type CompareSide,
 	type RevisionSummary
 } from './revisions';
-import { listNotes } from './notes';
-import { listTraces } from './traces';
-import { checkDoc } from './sheets';
+import { listNotes, notesOf } from './notes';
+import { listTraces, tracesOf } from './traces';
+import { checkDoc, deletion, readStoredDoc } from './sheets';
 import { getSheet } from './db/sheets';
 import { chartFrame, draftResult } from './compute/sheet-frame';
 import { signOffOverrides } from '$lib/revisions/sign-off';
@@ -47,6 +48,14 @@ export function revisionParam(value: string | null, latest: number | null): numb
 		400,
 		'invalid-revision',
 		'rev must be a revision number (1, 2, …) or "draft".'
+	);
+}
+
+function unreadableRevision(): never {
+	throw new AppError(
+		422,
+		'unreadable-revision',
+		'The stored revision cannot be read. Please report it.'
 	);
 }
 
@@ -168,26 +177,36 @@ export async function printPageData(
 /**
  * What the sheet page adds for review: revisions and the sign-off log, review notes against the
  * working draft, measured traces (thinned for the chart), members (mentions, checkers), the newest
- * revision's document (to tell whether the draft changed since), and the viewer's capabilities.
+ * revision's document (to tell whether the draft changed since), the viewer's capabilities, and
+ * whether the viewer may delete the sheet. `sheet` is the sheet's row as the page read it (scoped
+ * to the caller's team), so each table is read once.
  */
-export async function sheetReviewData(db: DB, access: TeamAccess, sheetId: string) {
-	const ctx = await sheetContext(db, access, sheetId);
-	const [history, { notes }, traces] = await Promise.all([
-		listRevisions(db, access, sheetId),
-		listNotes(db, access, sheetId, null),
-		listTraces(db, access, sheetId, { points: 'chart' })
+export async function sheetReviewData(db: DB, access: TeamAccess, sheet: SheetRow) {
+	const [rows, members, { notes }, traces] = await Promise.all([
+		listRevisionRows(db, sheet.id),
+		listMembers(db, access.team.id),
+		notesOf(db, sheet, null),
+		tracesOf(db, sheet, { points: 'chart' })
 	]);
-	const latestDoc = ctx.latest
-		? (await readRevision(db, access, sheetId, ctx.latest.number)).doc
-		: null;
+	const history = await revisionsOf(db, sheet, rows);
+	// only the newest revision's document (not its stored result, a full state at every point)
+	const latestText = rows[0] ? await getRevisionDoc(db, sheet.id, rows[0].number) : undefined;
+	const latestDoc =
+		latestText !== undefined ? readStoredDoc(latestText, unreadableRevision).doc : null;
+	const verdict = deletion(access, sheet, rows);
 	return {
-		revisions: history.revisions,
-		events: history.events,
-		notes,
-		traces,
-		members: ctx.members,
-		latestDoc,
-		me: access.actor.id,
-		...capabilities(access)
+		review: {
+			revisions: history.revisions,
+			events: history.events,
+			notes,
+			traces,
+			members: members.map((m) => ({ id: m.user_id, name: m.name, role: m.role })),
+			latestDoc,
+			me: access.actor.id,
+			...capabilities(access)
+		},
+		deletion: verdict.allowed
+			? { allowed: true, message: null }
+			: { allowed: false, message: verdict.message }
 	};
 }

@@ -336,8 +336,16 @@ export async function listRevisions(
 	access: TeamAccess,
 	sheetId: string
 ): Promise<{ revisions: RevisionSummary[]; events: RevisionEvent[] }> {
-	const sheet = await loadSheet(db, access, sheetId);
-	const rows = await listRevisionRows(db, sheet.id);
+	return revisionsOf(db, await loadSheet(db, access, sheetId));
+}
+
+/** listRevisions for a sheet row already read (and scoped to the caller's team); `rows` if already listed. */
+export async function revisionsOf(
+	db: DB,
+	sheet: { id: string },
+	rows?: RevisionListRow[]
+): Promise<{ revisions: RevisionSummary[]; events: RevisionEvent[] }> {
+	rows ??= await listRevisionRows(db, sheet.id);
 	const latest = rows[0]?.number ?? 0;
 	const events = await listRevisionEvents(db, sheet.id);
 	return {

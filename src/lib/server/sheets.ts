@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { z } from 'zod';
 import { transaction } from './db/dialect';
 import type { DB, SheetRow } from './db/schema';
@@ -129,6 +130,44 @@ export function checkDoc(
 	return { doc: r.doc, migratedFrom: r.migratedFrom };
 }
 
+/** A stored document as read: checked (and migrated), with a key taken from its text. */
+export interface StoredDoc {
+	doc: SheetDoc;
+	migratedFrom: number | null;
+	/** 16 characters of the SHA-256 of the stored text: the same text, the same key */
+	key: string;
+}
+
+/** Stored documents read lately, by their text (most recently used last). */
+const storedDocs = new Map<string, StoredDoc>();
+export const STORED_DOCS_KEPT = 500;
+
+/**
+ * A stored document (a draft or a revision's) from its JSON text, checked once per text: the
+ * same text always gives the same document, so a page viewed again skips the JSON parse and
+ * the schema check. Each caller gets its own copy (callers may change theirs). Throws
+ * `unreadable` (a 422) when the text is not JSON; a 400 `invalid-sheet` like checkDoc.
+ */
+export function readStoredDoc(text: string, unreadable: () => never): StoredDoc {
+	let kept = storedDocs.get(text);
+	if (kept) storedDocs.delete(text);
+	else {
+		let raw: unknown;
+		try {
+			raw = JSON.parse(text);
+		} catch {
+			unreadable();
+		}
+		const { doc, migratedFrom } = checkDoc(raw);
+		const key = createHash('sha256').update(text).digest('base64url').slice(0, 16);
+		kept = { doc, migratedFrom, key };
+		if (storedDocs.size >= STORED_DOCS_KEPT)
+			storedDocs.delete(storedDocs.keys().next().value as string);
+	}
+	storedDocs.set(text, kept);
+	return { ...kept, doc: structuredClone(kept.doc) };
+}
+
 /** The start state must exist, or the sheet could not even be opened: 422 with the engine's reason. */
 export function checkStart(doc: SheetDoc): void {
 	try {
@@ -215,23 +254,30 @@ export async function createFromExample(
 	);
 }
 
+function unreadableDraft(): never {
+	throw new AppError(
+		422,
+		'unreadable-draft',
+		'The stored draft of this sheet cannot be read. Please report it.'
+	);
+}
+
 /** A sheet with its working draft (older drafts migrated on the way out). */
 export async function readSheet(db: DB, access: TeamAccess, id: string): Promise<SheetWithDraft> {
+	return (await readSheetDraft(db, access, id)).sheet;
+}
+
+/** readSheet, with the key of the stored draft's text (the sheet page caches by it) and its row. */
+export async function readSheetDraft(
+	db: DB,
+	access: TeamAccess,
+	id: string
+): Promise<{ sheet: SheetWithDraft; draftKey: string; row: SheetRow }> {
 	if (!SHEET_ID.test(id)) notFound();
 	const row = await getSheet(db, access.team.id, id);
 	if (!row) notFound();
-	let raw: unknown;
-	try {
-		raw = JSON.parse(row.draft);
-	} catch {
-		throw new AppError(
-			422,
-			'unreadable-draft',
-			'The stored draft of this sheet cannot be read. Please report it.'
-		);
-	}
-	const { doc, migratedFrom } = checkDoc(raw);
-	return { ...meta(row), doc, migratedFrom };
+	const { doc, migratedFrom, key } = readStoredDoc(row.draft, unreadableDraft);
+	return { sheet: { ...meta(row), doc, migratedFrom }, draftKey: key, row };
 }
 
 export async function listTeamSheets(
@@ -315,18 +361,6 @@ async function judgeDeletion(db: DB, access: TeamAccess, id: string) {
 	if (!row) notFound();
 	const revisions = await listRevisionRows(db, row.id);
 	return { row, revisions, verdict: deletion(access, row, revisions) };
-}
-
-/** Whether this caller may delete the sheet now (for the page: the DELETE route checks again). */
-export async function sheetDeletion(
-	db: DB,
-	access: TeamAccess,
-	id: string
-): Promise<{ allowed: boolean; message: string | null }> {
-	const { verdict } = await judgeDeletion(db, access, id);
-	return verdict.allowed
-		? { allowed: true, message: null }
-		: { allowed: false, message: verdict.message };
 }
 
 /** Deletes a sheet with its draft, revisions, notes and traces (rules in `deletion`), logged in the team's activity. */

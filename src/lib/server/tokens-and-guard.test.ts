@@ -217,3 +217,28 @@ describe('guard', () => {
 		expect((other as { status: number }).status).toBe(404);
 	});
 });
+
+describe('the guard’s per-request memo', () => {
+	it('looks a team up once for all the loads of one GET, and afresh for the next request', async () => {
+		const { setMemberRole } = await import('./db/memberships');
+		const get = () => ({
+			...event('/t/heat-works', { user: people.viewer }),
+			locals: { user: people.viewer, session: null, token: null, teamAccess: new Map() }
+		});
+		const first = get();
+		const a = await requireTeam(first, team.slug, 'read', env.db);
+		await setMemberRole(env.db, team.id, people.viewer.id, 'designer');
+		// the page's load after the layout's, in the same GET: the same answer, not read again
+		expect(await requireTeam(first, team.slug, 'read', env.db)).toBe(a);
+		expect(a.role).toBe('viewer');
+		// the next request reads the changed role
+		const next = await requireTeam(get(), team.slug, 'sheet:edit', env.db);
+		expect(next.role).toBe('designer');
+		// a request without the memo (a form action, and the loads after it) always reads afresh
+		await setMemberRole(env.db, team.id, people.viewer.id, 'viewer');
+		const post = event('/t/heat-works', { user: people.viewer });
+		expect((await requireTeam(post, team.slug, 'read', env.db)).role).toBe('viewer');
+		const e = await thrown(requireTeam(post, team.slug, 'sheet:edit', env.db));
+		expect(isHttpError(e) && e.status).toBe(403);
+	});
+});

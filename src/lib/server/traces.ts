@@ -208,7 +208,15 @@ export async function listTraces(
 	sheetId: string,
 	options: { points?: 'all' | 'chart' | 'none' } = {}
 ): Promise<Array<TraceSummary & { points?: TracePoint[] }>> {
-	const sheet = await loadSheet(db, access, sheetId);
+	return tracesOf(db, await loadSheet(db, access, sheetId), options);
+}
+
+/** listTraces for a sheet row already read (and scoped to the caller's team). */
+export async function tracesOf(
+	db: DB,
+	sheet: { id: string; fluid: string },
+	options: { points?: 'all' | 'chart' | 'none' } = {}
+): Promise<Array<TraceSummary & { points?: TracePoint[] }>> {
 	const fluid = sheet.fluid;
 	if ((options.points ?? 'none') === 'none')
 		return (await listTraceRows(db, sheet.id)).map((r) => summaryOf(r, fluid));

@@ -1,5 +1,5 @@
 import Database from 'better-sqlite3';
-import { Kysely, PostgresDialect, SqliteDialect } from 'kysely';
+import { Kysely, PostgresDialect, SqliteDialect, type SqliteDatabase } from 'kysely';
 import pg from 'pg';
 import { mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
@@ -17,7 +17,42 @@ export function openDatabase(path: string): Kysely<Schema> {
 	sqlite.pragma('foreign_keys = ON');
 	sqlite.pragma('busy_timeout = 5000');
 	sqlite.pragma('synchronous = NORMAL');
-	return new Kysely<Schema>({ dialect: new SqliteDialect({ database: sqlite }) });
+	return new Kysely<Schema>({
+		dialect: new SqliteDialect({ database: reusingStatements(sqlite) })
+	});
+}
+
+/** Prepared statements kept per connection, by SQL text (most recently used last). */
+export const STATEMENTS_KEPT = 256;
+
+/**
+ * The database as Kysely's SQLite driver sees it, with each statement prepared once and kept by
+ * its SQL text: the app runs the same few hundred queries over and over, and better-sqlite3 would
+ * otherwise compile every one again on every call. Safe because every query of the driver runs to
+ * completion synchronously (`all`/`run`); the app never streams (`.stream()`), which would keep a
+ * statement busy. SQLite recompiles a kept statement itself after a schema change.
+ */
+export function reusingStatements(
+	sqlite: Database.Database,
+	max = STATEMENTS_KEPT
+): SqliteDatabase {
+	const kept = new Map<string, Database.Statement>();
+	return {
+		prepare(sql: string) {
+			let stmt = kept.get(sql);
+			if (stmt) kept.delete(sql);
+			else {
+				stmt = sqlite.prepare(sql);
+				if (kept.size >= max) kept.delete(kept.keys().next().value as string);
+			}
+			kept.set(sql, stmt);
+			return stmt;
+		},
+		close() {
+			kept.clear();
+			sqlite.close();
+		}
+	};
 }
 
 const INT8 = 20;

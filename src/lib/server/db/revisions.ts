@@ -99,6 +99,21 @@ export async function latestRevision(
 }
 
 /** One revision with its document and result. */
+/** A revision's stored document alone (not its stored result, the bulk of the row). */
+export async function getRevisionDoc(
+	db: DB,
+	sheetId: string,
+	number: number
+): Promise<string | undefined> {
+	const row = await db
+		.selectFrom('sheet_revisions')
+		.select('doc')
+		.where('sheet_id', '=', sheetId)
+		.where('number', '=', number)
+		.executeTakeFirst();
+	return row?.doc;
+}
+
 export async function getRevision(
 	db: DB,
 	sheetId: string,

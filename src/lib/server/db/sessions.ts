@@ -10,18 +10,51 @@ export async function getSessionAndUser(
 ): Promise<
 	{ session: SessionRow; user: User } | { session: SessionRow | undefined; user: undefined }
 > {
-	const session = await db
-		.selectFrom('sessions')
-		.selectAll()
-		.where('id', '=', id)
+	// one round trip: the session and its person (a session whose person is gone comes back alone)
+	const row = await db
+		.selectFrom('sessions as s')
+		.leftJoin('users as u', 'u.id', 's.user_id')
+		.select([
+			's.id',
+			's.user_id',
+			's.expires_at',
+			's.created_at',
+			's.last_seen_at',
+			's.ip',
+			's.user_agent',
+			'u.id as u_id',
+			'u.email as u_email',
+			'u.name as u_name',
+			'u.password_hash as u_password_hash',
+			'u.email_verified_at as u_email_verified_at',
+			'u.created_at as u_created_at',
+			'u.updated_at as u_updated_at'
+		])
+		.where('s.id', '=', id)
 		.executeTakeFirst();
-	if (!session) return { session: undefined, user: undefined };
-	const user = await db
-		.selectFrom('users')
-		.selectAll()
-		.where('id', '=', session.user_id)
-		.executeTakeFirst();
-	return user ? { session, user } : { session, user: undefined };
+	if (!row) return { session: undefined, user: undefined };
+	const session: SessionRow = {
+		id: row.id,
+		user_id: row.user_id,
+		expires_at: row.expires_at,
+		created_at: row.created_at,
+		last_seen_at: row.last_seen_at,
+		ip: row.ip,
+		user_agent: row.user_agent
+	};
+	if (row.u_id === null) return { session, user: undefined };
+	return {
+		session,
+		user: {
+			id: row.u_id,
+			email: row.u_email!,
+			name: row.u_name!,
+			password_hash: row.u_password_hash!,
+			email_verified_at: row.u_email_verified_at,
+			created_at: row.u_created_at!,
+			updated_at: row.u_updated_at!
+		}
+	};
 }
 
 export async function listUserSessions(
