@@ -11,7 +11,7 @@ import { describe, expect, it } from 'vitest';
 import { fixState, listFluids, saturationAtT } from './index.ts';
 import { solveLike } from './pairs.test-support.ts';
 import { getCompiledFluid } from './registry.ts';
-import { P_ROUNDOFF } from './state.ts';
+import { P_ROUNDOFF, pressureTol } from './state.ts';
 import type { InputName, State } from './types.ts';
 import fixture from '../../../tests/reference/iapws-near-line.json';
 import { fluidData } from './fluids/index.ts';
@@ -154,6 +154,38 @@ describe('states just off the saturation line, every fluid (internal consistency
 			expect([liq.phase, liq.x, liq.P, liq.T]).toEqual(['saturated-liquid', 0, P, T]);
 			expect([vap.phase, vap.x, vap.P, vap.T]).toEqual(['saturated-vapor', 1, P, T]);
 		}
+	});
+
+	it('(T, P) within the liquid’s round-off band above Psat near the triple point is on the line too, however wide the band is against Psat', () => {
+		// propane's Psat at 87 K is 3e−4 Pa while its liquid's round-off band (P_ROUNDOFF·ρ′RT) is 2.4e−5 Pa: a
+		// (T, P) 7 % above Psat there used to come back as a saturated liquid carrying that P (the table's
+		// margin, 1e−4·Psat, decided "liquid" before the band was looked at), which no other pair reproduces
+		for (const { id } of listFluids().filter(pure)) {
+			const fl = getCompiledFluid(id);
+			for (const T of [fl.Tt + 0.02, fl.Tt * 1.02]) {
+				const sat = saturationAtT(id, T);
+				// the line's band: P_LINE_TOL·Psat plus the liquid's round-off floor P_ROUNDOFF·ρ′RT
+				const band = pressureTol(fl, T, sat.liquid.rho, sat.P);
+				const P = sat.P + 0.5 * band;
+				const where = `${id} at T = ${T}, P = Psat + ${0.5 * band} Pa`;
+				expect(() => fixState(id, { T, P }), where).toThrowError(
+					expect.objectContaining({ code: 'two-phase-pressure-temperature' })
+				);
+				const liq = fixState(id, { T, P }, { hint: 'liquid-side' });
+				expect([liq.phase, liq.x, liq.P, liq.T], where).toEqual(['saturated-liquid', 0, P, T]);
+				// three bands above Psat it is a compressed liquid again, with its P
+				const above = fixState(id, { T, P: sat.P + 3 * band });
+				expect([above.phase, above.x, above.P], where).toEqual([
+					'compressed-liquid',
+					null,
+					sat.P + 3 * band
+				]);
+			}
+		}
+		// the state the region-mix run met (scripts/region-mix.ts, seed 7)
+		expect(() =>
+			fixState('propane', { T: 87.1269016742747, P: 0.0003504410204663957 })
+		).toThrowError(expect.objectContaining({ code: 'two-phase-pressure-temperature' }));
 	});
 
 	it('the reported case: water at 373.124 K and 101325 Pa is a compressed liquid 1.07 Pa above Psat', () => {

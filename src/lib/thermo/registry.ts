@@ -2,7 +2,7 @@
  * Loading fluids: find the data file by id or alias, validate it, compile it, pin the equation's
  * critical point and apply the declared reference state. Compiled fluids are cached.
  */
-import { ThermoError } from './errors.ts';
+import { ThermoError, fmt } from './errors.ts';
 import { Fluid, validateFluidData } from './fluid.ts';
 import { fluidData } from './fluids/index.ts';
 import type { FluidData } from './fluids/schema.ts';
@@ -51,7 +51,7 @@ function bubbleAtP(fl: Fluid, P: number): { T: number; rhoL: number } {
 	if (!band || T === null)
 		throw new ThermoError(
 			'no-convergence',
-			`${fl.id}: no bubble point at P = ${P} Pa for its reference state.`,
+			`${fl.id}: no bubble point at P = ${fmt(P)} Pa for its reference state.`,
 			'Declare a reference pressure on the bubble line.'
 		);
 	return { T, rhoL: band.bubbleRho(T) };

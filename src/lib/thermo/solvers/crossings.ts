@@ -3,12 +3,12 @@
  * takes its value on the liquid or vapor line, bracketed between the saturation table's nodes and
  * refined by Newton along the line with the slopes
  *   dPs/dT = (s'' − s')/(v'' − v') (Clapeyron), dρ/dT|sat = (dPs/dT − (∂P/∂T)_ρ)/(∂P/∂ρ)_T.
- * Isobaric and isothermal curves meet the lines at the one saturation of their P or T (leg-curve.ts).
+ * Each process's residual F is its strategy's lineResidual (leg-processes.ts); isobaric and isothermal
+ * curves meet the lines at the one saturation of their P or T instead.
  */
 import { ThermoError } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import { evalPoint, Point, propDT, propDrho } from '../properties.ts';
-import type { Invariant } from './leg-curve.ts';
 import { CRITICAL_BAND, domeNodes, satAtT, type SatPoint } from './saturation.ts';
 
 /** Saturation at T with both phases' v, u, h, s, P and their slopes along the lines (T < Tc). */
@@ -117,32 +117,4 @@ export function lineRoots(fl: Fluid, side: 0 | 1, F: LineFn): number[] {
 		if (!roots.some((r) => Math.abs(r - T) <= 1e-9 * T)) roots.push(T);
 	}
 	return roots;
-}
-
-/** F on a saturation line for the processes whose crossings are searched by lineRoots (all but isobaric and isothermal). */
-export function lineResidual(fl: Fluid, inv: Invariant): LineFn {
-	switch (inv.process) {
-		case 'isochoric': {
-			const v0 = 1 / (inv.rho as number);
-			return (_P, y, _dP, dy) => [y[0] / v0 - 1, dy[0] / v0];
-		}
-		case 'isentropic': {
-			const s0 = inv.s as number;
-			const sc = Math.max(Math.abs(s0), fl.R);
-			return (_P, y, _dP, dy) => [(y[3] - s0) / sc, dy[3] / sc];
-		}
-		case 'isenthalpic': {
-			const h0 = inv.h as number;
-			const sc = Math.max(Math.abs(h0), fl.R * fl.Tc);
-			return (_P, y, _dP, dy) => [(y[2] - h0) / sc, dy[2] / sc];
-		}
-		default: {
-			const n = inv.n as number,
-				lnC = inv.lnC as number;
-			return (P, y, dP, dy) => [
-				Math.log(P) + n * Math.log(y[0]) - lnC,
-				dP / P + (n * dy[0]) / y[0]
-			];
-		}
-	}
 }

@@ -1,6 +1,7 @@
 /**
  * State from (T, P). Below Tc the side of the saturation line is decided first (table, then a full
- * saturation solve only within its margin), then the density is solved on that branch. T and P
+ * saturation solve only within its margin: the table's accuracy, widened on the liquid side by the
+ * line's pressure band), then the density is solved on that branch. T and P
  * on the saturation line (|P − Psat| within state.ts pressureTol: 1e−9·Psat plus the liquid's
  * round-off floor) are not independent: refused unless the hint `liquid-side` / `vapor-side` asks
  * for the saturated liquid / vapor (returned with the given P). Off the line the answer is the
@@ -49,7 +50,10 @@ export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State
 		satGuess(fl, T, g);
 		let side: 'liquid' | 'vapor';
 		let lo: number, hi: number;
-		if (P > g.P * (1 + M)) {
+		// the table's margin, widened on the liquid side by the line's pressure band: near the triple
+		// point of a fluid whose Psat is tiny (propane, 3e−4 Pa at 87 K) the liquid's round-off floor
+		// spans several per cent of Psat, and a P within it is on the line, not a compressed liquid
+		if (P > g.P * (1 + M) + 2 * pressureTol(fl, T, g.rhoL, g.P)) {
 			side = 'liquid';
 			lo = g.rhoL * (1 - M);
 			hi = Infinity;

@@ -2,18 +2,12 @@
  * The curve a process leg follows, cut at its crossings of the saturation lines into segments.
  *
  * Each process keeps one quantity fixed (the invariant: P, v, T, s, h, or ln P + n·ln v for a
- * polytropic leg). Along the whole curve a canonical direction is fixed (rising T for isobaric and
- * isochoric legs, rising v for isothermal, isentropic and polytropic legs, rising P for
- * isenthalpic legs) and every segment is parametrised by a quantity that is monotone on it:
- *
- * | process     | single phase: parameter, solve                     | two-phase: parameter, solve          |
- * | ----------- | -------------------------------------------------- | ------------------------------------ |
- * | isobaric    | T; ρ from P(T, ρ) = P on the segment's branch      | ln v; fixed saturation at P          |
- * | isochoric   | T; direct (T, ρ)                                   | T; saturation at T, x from v         |
- * | isothermal  | ln v; direct (T, ρ)                                | ln v; fixed saturation at T          |
- * | isentropic  | ln v; T from s(T, ρ) = s (ds/dT = cv/T > 0)        | T; saturation at T, x from s         |
- * | isenthalpic | ln P; (T, ρ) from P and h by 2-D Newton            | ln P; saturation at P, x from h      |
- * | polytropic  | ln v; P = C·v⁻ⁿ, T from P(T, ρ) = P                | ln v; saturation at P = C·v⁻ⁿ, x from v |
+ * polytropic leg). Along the whole curve a canonical direction is fixed and every segment is
+ * parametrised by a quantity that is monotone on it. What differs between processes — the
+ * invariant, the parameters, how a point is solved, what the process knows about the dome, its
+ * work — is one strategy object per process (leg-processes.ts, with the table of parameters and
+ * solves); the curve dispatches through PROCESS_CURVES and holds only what all processes share:
+ * segments, crossings, the domain, the two-phase mixture and the end-finding on a segment.
  *
  * Two-phase points are mass-weighted between the saturated phases (x = (v − v')/(v'' − v') etc.).
  * Crossings are the temperatures where the invariant equals its value on a saturation line
@@ -24,48 +18,37 @@
  */
 import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
-import { evalPoint, Point, propDT, propDrho } from '../properties.ts';
+import { evalPoint, Point } from '../properties.ts';
 import { saturatedState } from '../state.ts';
 import type { Inputs, Process, SaturationLine, State } from '../types.ts';
-import { densityAtTP } from './density.ts';
 import { fixStateOf } from './fix-state.ts';
-import { lineResidual, lineRoots } from './crossings.ts';
+import { lineRoots } from './crossings.ts';
+import {
+	mixture,
+	paramOf,
+	phases,
+	singlePt,
+	type Branch,
+	type CPt,
+	type Param
+} from './curve-point.ts';
+import {
+	PROCESS_CURVES,
+	type Invariant,
+	type PointSolver,
+	type ProcessCurve
+} from './leg-processes.ts';
 import { locate, placedState } from './locate.ts';
 import {
 	CRITICAL_BAND,
 	TABLE_ACCURACY,
-	satAtP,
 	satAtT,
 	satGuess,
-	triplePressure,
 	type SatGuess,
 	type SatPoint
 } from './saturation.ts';
 
-/** A point on a leg's curve: a single-phase evaluation, or a saturation with a quality. */
-export interface CPt {
-	T: number;
-	rho: number;
-	P: number;
-	u: number;
-	h: number;
-	s: number;
-	/** quality on or inside the dome, else null */
-	x: number | null;
-	/** the saturation at T for two-phase points and crossings */
-	sat: SatPoint | null;
-	/** the single-phase evaluation (order 2), for building the State */
-	pt: Point | null;
-	/** two-phase points: both saturated phases evaluated at order 2 (EOS pressure kept), for the State */
-	L?: Point;
-	V?: Point;
-	/** cached public State */
-	state?: State;
-	/** single-phase points of a curve that fixes P (isobaric, isenthalpic, polytropic): the State keeps c.P */
-	givenP?: boolean;
-}
-
-export type Branch = 'liquid' | 'vapor' | 'any';
+export { paramOf, type Branch, type CPt, type Invariant, type Param };
 
 export interface Segment {
 	dome: boolean;
@@ -105,49 +88,7 @@ export const P_FLOOR = 1;
 
 const M = 10 * TABLE_ACCURACY;
 
-/** The process's fixed quantity and its parameters. */
-export interface Invariant {
-	process: Process;
-	P?: number;
-	rho?: number;
-	T?: number;
-	s?: number;
-	h?: number;
-	/** polytropic: n and ln C = ln P + n·ln v */
-	n?: number;
-	lnC?: number;
-}
-
-function mixture(fl: Fluid, sat: SatPoint, x: number, L: Point, V: Point): CPt {
-	const vL = 1 / sat.rhoL,
-		vV = 1 / sat.rhoV;
-	const v = vL + x * (vV - vL);
-	return {
-		T: sat.T,
-		rho: 1 / v,
-		P: sat.P,
-		u: L.u + x * (V.u - L.u),
-		h: L.h + x * (V.h - L.h),
-		s: L.s + x * (V.s - L.s),
-		x,
-		sat,
-		pt: null,
-		L,
-		V
-	};
-}
-
-/** Both saturated phases at order 2 (u, h, s, cv and the pressure derivatives; the EOS pressure is kept). */
-function phases(fl: Fluid, sat: SatPoint): [Point, Point] {
-	return [
-		evalPoint(fl, sat.T, sat.rhoL, new Point(), 2),
-		evalPoint(fl, sat.T, sat.rhoV, new Point(), 2)
-	];
-}
-
-function single(p: Point): CPt {
-	return { T: p.T, rho: p.rho, P: p.P, u: p.u, h: p.h, s: p.s, x: null, sat: null, pt: p };
-}
+type VolumeAt = NonNullable<ProcessCurve['domeVolume']>;
 
 /** The public State of a curve point (phase per the engine's rules in state.ts). */
 export function stateOf(fl: Fluid, c: CPt): State {
@@ -169,7 +110,7 @@ export function cptOfState(fl: Fluid, st: State): CPt {
 	if (st.x !== null && st.phase !== 'supercritical-fluid') {
 		const sat = satAtT(fl, st.T);
 		const [L, V] = phases(fl, sat);
-		const c = mixture(fl, sat, st.x, L, V);
+		const c = mixture(sat, st.x, L, V);
 		c.state = st;
 		return c;
 	}
@@ -189,24 +130,22 @@ export function cptOfState(fl: Fluid, st: State): CPt {
 	};
 }
 
-export type Param = 'T' | 'lnv' | 'lnP';
-
-export function paramOf(kind: Param, c: CPt): number {
-	return kind === 'T' ? c.T : kind === 'lnv' ? -Math.log(c.rho) : Math.log(c.P);
-}
-
 /** The curve of one leg: its segments in canonical order, evaluators and domain. */
-export class Curve {
+export class Curve implements PointSolver {
 	readonly fl: Fluid;
 	readonly inv: Invariant;
 	readonly process: Process;
+	/** the process's strategy: parameters, point solves, dome knowledge */
+	readonly pc: ProcessCurve;
 	readonly singleParam: Param;
 	readonly domeParam: Param;
+	/** +1 when the two-phase parameter rises along the canonical direction, −1 when it falls */
+	readonly domeSign: 1 | -1;
 	segs: Segment[] = [];
 	crossings: CrossingPt[] = [];
 	readonly Pfloor: number;
 	private fixedSat: { sat: SatPoint; L: Point; V: Point } | null = null;
-	private g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
+	readonly g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
 	private pL = new Point();
 	private pV = new Point();
 	/** evaluations done (for benchmarks and tests); at most MAX_EVALUATIONS */
@@ -227,35 +166,16 @@ export class Curve {
 		this.inv = inv;
 		this.process = inv.process;
 		this.Pfloor = Math.min(Pfloor ?? P_FLOOR, start.P * (1 - 1e-12));
-		const params: Record<Process, [Param, Param]> = {
-			isobaric: ['T', 'lnv'],
-			isochoric: ['T', 'T'],
-			isothermal: ['lnv', 'lnv'],
-			isentropic: ['lnv', 'T'],
-			isenthalpic: ['lnP', 'lnP'],
-			polytropic: ['lnv', 'lnv']
-		};
-		[this.singleParam, this.domeParam] = params[inv.process];
+		this.pc = PROCESS_CURVES[inv.process];
+		this.singleParam = this.pc.singleParam;
+		this.domeParam = this.pc.domeParam;
+		this.domeSign = this.pc.domeSign;
 		this.build(start);
-	}
-
-	/** +1 when the two-phase parameter rises along the canonical direction, −1 when it falls. */
-	get domeSign(): 1 | -1 {
-		return this.process === 'isentropic' ? -1 : 1;
 	}
 
 	/** Key rising along the canonical direction (orders crossings). */
 	key(c: CPt): number {
-		switch (this.process) {
-			case 'isobaric':
-				return c.h;
-			case 'isochoric':
-				return c.T;
-			case 'isenthalpic':
-				return Math.log(c.P);
-			default:
-				return -Math.log(c.rho);
-		}
+		return this.pc.key(c);
 	}
 
 	/** Whether a point lies in the curve's domain (g ≤ 0; see violation). */
@@ -275,15 +195,9 @@ export class Curve {
 	at(seg: Segment, t: number, guess: CPt | null): CPt | null {
 		if (++this.evaluations > MAX_EVALUATIONS) throw this.tooMuchWork();
 		try {
-			const c = seg.dome ? this.dome(t) : this.single(t, guess, seg.branch);
+			const c = seg.dome ? this.dome(t) : this.pc.single(this, t, guess, seg.branch);
 			if (!c || !Number.isFinite(c.T) || !Number.isFinite(c.rho) || !(c.P > 0)) return null;
-			if (
-				!seg.dome &&
-				(this.process === 'isobaric' ||
-					this.process === 'isenthalpic' ||
-					this.process === 'polytropic')
-			)
-				c.givenP = true;
+			if (!seg.dome && this.pc.fixesP) c.givenP = true;
 			// the equation of state continues into the dome (metastable and unstable states): not a point of the leg
 			if (!seg.dome && this.insideDome(c)) return null;
 			return c;
@@ -301,70 +215,8 @@ export class Curve {
 		return c.rho < this.g.rhoL * (1 - 100 * M) && c.rho > this.g.rhoV * (1 + 100 * M);
 	}
 
-	private single(t: number, guess: CPt | null, branch: Branch): CPt | null {
-		const fl = this.fl,
-			inv = this.inv;
-		switch (inv.process) {
-			case 'isobaric':
-				return this.isobaricSingle(t, guess, branch);
-			case 'isochoric':
-				return single(evalPoint(fl, t, inv.rho as number, new Point(), 2));
-			case 'isothermal':
-				return single(evalPoint(fl, inv.T as number, Math.exp(-t), new Point(), 2));
-			case 'isentropic':
-				return this.tAtRho(
-					Math.exp(-t),
-					guess,
-					branch,
-					(p) => [p.s - (inv.s as number), p.cv / p.T],
-					{ s: inv.s as number }
-				);
-			case 'isenthalpic':
-				return this.isenthalpicSingle(Math.exp(t), guess, branch);
-			case 'polytropic': {
-				const P = Math.exp((inv.lnC as number) - (inv.n as number) * t);
-				const c = this.tAtRho(Math.exp(-t), guess, branch, (p) => [p.P / P - 1, p.dPdT / P], { P });
-				if (c) c.P = P;
-				return c;
-			}
-		}
-	}
-
-	private isobaricSingle(T: number, guess: CPt | null, branch: Branch): CPt | null {
-		const fl = this.fl;
-		const P = this.inv.P as number;
-		let rho: number;
-		if (T < fl.Tc && branch !== 'any') {
-			satGuess(fl, T, this.g);
-			if (branch === 'liquid')
-				rho = densityAtTP(
-					fl,
-					T,
-					P,
-					Math.max(guess?.rho ?? 0, this.g.rhoL * 1.001),
-					this.g.rhoL * (1 - M)
-				);
-			else
-				rho = densityAtTP(
-					fl,
-					T,
-					P,
-					Math.min(guess?.rho ?? P / (fl.R * T), this.g.rhoV),
-					0,
-					this.g.rhoV * (1 + M)
-				);
-		} else if (T < fl.Tc) {
-			satGuess(fl, T, this.g);
-			rho = densityAtTP(fl, T, P, Math.max(guess?.rho ?? 0, this.g.rhoL), this.g.rhoL * (1 - M));
-		} else rho = densityAtTP(fl, T, P, guess?.rho ?? (P < fl.Pc ? P / (fl.R * T) : 2 * fl.rhoc));
-		if (!(rho > 0)) return null;
-		const p = evalPoint(fl, T, rho, new Point(), 2);
-		p.P = P;
-		return single(p);
-	}
-
 	/** T at fixed ρ with f(point) = 0, Newton from the guess (df/dT given); fallback: the engine's flash. */
-	private tAtRho(
+	tAtRho(
 		rho: number,
 		guess: CPt | null,
 		branch: Branch,
@@ -381,54 +233,19 @@ export class Curve {
 			let dT = -r / dr;
 			const cap = 0.25 * T;
 			if (Math.abs(dT) > cap) dT = Math.sign(dT) * cap;
-			if (Math.abs(dT) <= 1e-13 * T) return single(p);
+			if (Math.abs(dT) <= 1e-13 * T) return singlePt(p);
 			T += dT;
 			if (!(T > 0.5 * fl.Tmin && T < 2 * fl.Tmax)) break;
 			if (Math.abs(dT) <= 1e-11 * T) {
 				evalPoint(fl, T, rho, p, 2);
-				return single(p);
+				return singlePt(p);
 			}
 		}
 		return this.fallback({ ...pair, rho }, guess, branch);
 	}
 
-	private isenthalpicSingle(P: number, guess: CPt | null, branch: Branch): CPt | null {
-		const fl = this.fl;
-		const h0 = this.inv.h as number;
-		const sh = fl.R * fl.Tc;
-		let T = guess ? guess.T : fl.Tc;
-		let z = Math.log(guess ? guess.rho : P / (fl.R * fl.Tc));
-		const p = new Point();
-		for (let it = 0; it < 50; it++) {
-			const rho = Math.exp(z);
-			evalPoint(fl, T, rho, p, 2);
-			const r1 = p.P / P - 1,
-				r2 = (p.h - h0) / sh;
-			const j11 = p.dPdT / P,
-				j12 = (rho * p.dPdrho) / P;
-			const j21 = propDT(p, 'h') / sh,
-				j22 = (rho * propDrho(p, 'h')) / sh;
-			const det = j11 * j22 - j12 * j21;
-			if (!Number.isFinite(det) || det === 0 || !(p.dPdrho > 0)) break;
-			let dT = -(r1 * j22 - j12 * r2) / det;
-			let dz = -(j11 * r2 - r1 * j21) / det;
-			const m = Math.max(1, Math.abs(dT) / (0.2 * T), Math.abs(dz) / 0.5);
-			dT /= m;
-			dz /= m;
-			T += dT;
-			z += dz;
-			if (!(T > 0.5 * fl.Tmin && T < 2 * fl.Tmax)) break;
-			if (Math.abs(dT) <= 1e-12 * T && Math.abs(dz) <= 1e-12) {
-				evalPoint(fl, T, Math.exp(z), p, 2);
-				p.P = P;
-				return single(p);
-			}
-		}
-		return this.fallback({ P, h: h0 }, guess, branch);
-	}
-
 	/** The engine's general flash for the pair; where it finds several states, the one nearest the guess. */
-	private fallback(inputs: Inputs, guess: CPt | null, branch: Branch): CPt | null {
+	fallback(inputs: Inputs, guess: CPt | null, branch: Branch): CPt | null {
 		if (this.quick) return null;
 		if (++this.fallbacks > MAX_FALLBACKS) throw this.tooMuchWork();
 		const fl = this.fl;
@@ -450,53 +267,33 @@ export class Curve {
 				(a, b) => Math.abs(a.T - guess.T) - Math.abs(b.T - guess.T)
 			)[0];
 			const p = evalPoint(fl, best.T, best.rho, new Point(), 2);
-			return single(p);
+			return singlePt(p);
 		}
 		if (st.x !== null && st.phase === 'saturated-mixture') return null;
 		const p = evalPoint(fl, st.T, st.rho, new Point(), 2);
 		p.P = st.P;
-		return single(p);
+		return singlePt(p);
 	}
 
 	/** Two-phase point at parameter t; null when the invariant puts no mixture there. */
 	private dome(t: number): CPt | null {
 		const fl = this.fl,
-			inv = this.inv;
+			inv = this.inv,
+			pc = this.pc;
 		let sat: SatPoint, L: Point, V: Point, x: number;
 		if (this.fixedSat) {
 			({ sat, L, V } = this.fixedSat);
-			x = (Math.exp(t) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
+			x = ((pc.domeVolume as VolumeAt)(inv, t) - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
 		} else {
-			// within round-off of the critical point the saturation solvers may fail: it is the critical point
-			const critical = (e: unknown, near: boolean): SatPoint => {
-				if (!(e instanceof ThermoError) || !near) throw e;
-				return { T: fl.Tc, P: fl.Pc, rhoL: fl.rhoc, rhoV: fl.rhoc };
-			};
-			if (inv.process === 'isochoric' || inv.process === 'isentropic') {
-				if (!(t >= fl.Tmin * (1 - 1e-12) && t <= fl.Tc * (1 + 1e-9))) return null;
-				try {
-					sat = satAtT(fl, Math.min(t, fl.Tc));
-				} catch (e) {
-					sat = critical(e, t > fl.Tc * (1 - 1e-6));
-				}
-			} else {
-				const P =
-					inv.process === 'isenthalpic'
-						? Math.exp(t)
-						: Math.exp((inv.lnC as number) - (inv.n as number) * t);
-				if (!(P >= triplePressure(fl) * (1 - 1e-12) && P <= fl.Pc * (1 + 1e-6))) return null;
-				try {
-					sat = satAtP(fl, Math.min(P, fl.Pc));
-				} catch (e) {
-					sat = critical(e, P > fl.Pc * (1 - 1e-5));
-				}
-			}
+			const at = pc.domeSaturation(fl, inv, t);
+			if (!at) return null;
+			sat = at;
 			if (sat.rhoL === sat.rhoV) {
 				const c = evalPoint(fl, fl.Tc, fl.rhoc, new Point(), 1);
 				return { T: fl.Tc, rho: fl.rhoc, P: fl.Pc, u: c.u, h: c.h, s: c.s, x: 0.5, sat, pt: null };
 			}
-			if (inv.process === 'isochoric' || inv.process === 'polytropic') {
-				const v = inv.process === 'isochoric' ? 1 / (inv.rho as number) : Math.exp(t);
+			if (pc.domeVolume) {
+				const v = pc.domeVolume(inv, t);
 				x = (v - 1 / sat.rhoL) / (1 / sat.rhoV - 1 / sat.rhoL);
 				// x from v needs no energies; they are filled in only when someone reads them
 				if (!this.energies) {
@@ -518,36 +315,25 @@ export class Curve {
 				[L, V] = phases(fl, sat);
 			} else {
 				[L, V] = phases(fl, sat);
-				x =
-					inv.process === 'isentropic'
-						? ((inv.s as number) - L.s) / (V.s - L.s)
-						: ((inv.h as number) - L.h) / (V.h - L.h);
+				const e = pc.domeEnergy as 's' | 'h';
+				x = ((inv[e] as number) - L[e]) / (V[e] - L[e]);
 			}
 		}
 		// next to the critical point a crossing may be placed at the critical point itself (see lineRoots):
 		// there the curve's few ppm of two-phase stretch are clamped onto the nearer line
 		if (!(x >= -1e-9 && x <= 1 + 1e-9) && !(sat.P > fl.Pc * (1 - 1e-4) && Number.isFinite(x)))
 			return null;
-		return mixture(fl, sat, Math.min(1, Math.max(0, x)), L, V);
+		return mixture(sat, Math.min(1, Math.max(0, x)), L, V);
 	}
 
 	/**
 	 * Integrand of the leg integral on a segment at parameter t: for parameter ln v, P·v
-	 * (∫P dv = ∫P·v d ln v); for the isentropic two-phase segment (parameter T), −v·dPs/dT
-	 * (−∫v dP). Returns [value, kind] where kind says which integral it belongs to.
+	 * (∫P dv = ∫P·v d ln v); on a two-phase segment whose process integrates shaft work there (the
+	 * isentropic one, parameter T), its −v·dPs/dT (−∫v dP).
 	 */
 	integrand(seg: Segment, t: number, guess: CPt | null): number {
-		if (seg.dome && this.process === 'isentropic') {
-			const fl = this.fl;
-			const sat = satAtT(fl, t);
-			const L = evalPoint(fl, t, sat.rhoL, this.pL, 1);
-			const V = evalPoint(fl, t, sat.rhoV, this.pV, 1);
-			const x = ((this.inv.s as number) - L.s) / (V.s - L.s);
-			const vL = 1 / sat.rhoL,
-				vV = 1 / sat.rhoV;
-			const dPs = (V.s - L.s) / (vV - vL);
-			return -(vL + x * (vV - vL)) * dPs;
-		}
+		if (seg.dome && this.pc.domeShaftIntegrand)
+			return this.pc.domeShaftIntegrand(this.fl, this.inv, t, this.pL, this.pV);
 		const c = this.at(seg, t, guess);
 		if (!c) throw this.unsolved();
 		return c.P / c.rho;
@@ -582,37 +368,27 @@ export class Curve {
 
 	private crossingPt(sat: SatPoint, line: SaturationLine): CPt {
 		const [L, V] = phases(this.fl, sat);
-		return mixture(this.fl, sat, line === 'saturated-liquid' ? 0 : 1, L, V);
+		return mixture(sat, line === 'saturated-liquid' ? 0 : 1, L, V);
 	}
 
 	private build(start: CPt): void {
 		const fl = this.fl,
 			inv = this.inv;
-		const Pt = triplePressure(fl);
-		const subT = (T: number) => T < fl.Tc * (1 - CRITICAL_BAND);
+		const pc = this.pc;
 		let crossings: CrossingPt[] = [];
-		if (inv.process === 'isobaric') {
-			const P = inv.P as number;
-			if (P >= Pt * (1 - 1e-12) && P < fl.Pc) {
-				const sat = satAtP(fl, P);
-				this.fixedSat = { sat, ...(([L, V]) => ({ L, V }))(phases(fl, sat)) };
-				crossings = [
-					{ line: 'saturated-liquid', p: this.crossingPt(sat, 'saturated-liquid') },
-					{ line: 'saturated-vapor', p: this.crossingPt(sat, 'saturated-vapor') }
-				];
-			}
-		} else if (inv.process === 'isothermal') {
-			const T = inv.T as number;
-			if (subT(T)) {
-				const sat = satAtT(fl, T);
-				this.fixedSat = { sat, ...(([L, V]) => ({ L, V }))(phases(fl, sat)) };
+		if (pc.fixedSaturation) {
+			// one saturation (isobaric below Pc, isothermal below Tc): its two ends are the crossings
+			const sat = pc.fixedSaturation(fl, inv);
+			if (sat) {
+				const [L, V] = phases(fl, sat);
+				this.fixedSat = { sat, L, V };
 				crossings = [
 					{ line: 'saturated-liquid', p: this.crossingPt(sat, 'saturated-liquid') },
 					{ line: 'saturated-vapor', p: this.crossingPt(sat, 'saturated-vapor') }
 				];
 			}
 		} else {
-			const F = lineResidual(fl, inv);
+			const F = (pc.lineResidual as NonNullable<ProcessCurve['lineResidual']>)(fl, inv);
 			for (const side of [0, 1] as const) {
 				const line: SaturationLine = side === 0 ? 'saturated-liquid' : 'saturated-vapor';
 				for (const T of lineRoots(fl, side, F))
@@ -711,7 +487,7 @@ export class Curve {
 						: lines.every((l) => l === 'saturated-vapor')
 							? 'vapor'
 							: 'any';
-			const [ha, hb] = this.hardBounds(isDome, param);
+			const [ha, hb] = this.hardBounds(isDome);
 			segs.push({
 				dome: isDome,
 				branch,
@@ -723,14 +499,10 @@ export class Curve {
 				lineB: b ? b.line : null
 			});
 		}
-		// an isobar below the triple-point pressure (all vapor: Psat(T) ≥ Pt there) or above Pc, or an
-		// isotherm above Tc: one piece
-		if (
-			this.fixedSat === null &&
-			(inv.process === 'isobaric' || inv.process === 'isothermal') &&
-			segs.length === 1
-		)
-			segs[0].branch = inv.process === 'isobaric' && (inv.P as number) < Pt ? 'vapor' : 'any';
+		// a fixed-saturation curve that misses the dome (an isobar below the triple-point pressure or
+		// above Pc, an isotherm above Tc): one piece, on the branch its process says
+		if (this.fixedSat === null && pc.lonePieceBranch && segs.length === 1)
+			segs[0].branch = pc.lonePieceBranch(fl, inv);
 		this.segs = segs;
 	}
 
@@ -766,7 +538,7 @@ export class Curve {
 			let prev: CPt = start;
 			// closer together near the start, where a branch may end within a small step
 			for (const f of LEAVE_FRACTIONS) {
-				const c = this.single(t0 + (t1 - t0) * f, prev, branch);
+				const c = this.pc.single(this, t0 + (t1 - t0) * f, prev, branch);
 				if (!c || this.violation(c) > 1e-12) return true;
 				prev = c;
 			}
@@ -780,68 +552,12 @@ export class Curve {
 	}
 
 	/** Hard parameter bounds of an outer piece (beyond them lies no state of the domain). */
-	private hardBounds(dome: boolean, param: Param): [number, number] {
-		const fl = this.fl,
-			inv = this.inv;
-		if (dome) {
-			// two-phase pieces end at the triple point (or, failing that, just below the critical point)
-			const Ttrip = fl.Tmin,
-				Pt = triplePressure(fl);
-			const lo =
-				param === 'T'
-					? Ttrip
-					: param === 'lnP'
-						? Math.log(Pt)
-						: ((inv.lnC as number) - Math.log(Pt)) / (inv.n as number);
-			const hi =
-				param === 'T'
-					? fl.Tc * (1 - 2 * CRITICAL_BAND)
-					: param === 'lnP'
-						? Math.log(fl.Pc * (1 - 1e-9))
-						: ((inv.lnC as number) - Math.log(fl.Pc * (1 - 1e-9))) / (inv.n as number);
-			const [a, b] = lo <= hi ? [lo, hi] : [hi, lo];
-			return this.domeSign > 0 ? [a, b] : [b, a];
-		}
-		switch (param) {
-			case 'T':
-				return [fl.Tmin, fl.Tmax];
-			case 'lnP':
-				return [Math.log(this.Pfloor), Math.log(fl.Pmax)];
-			case 'lnv': {
-				if (inv.process === 'isothermal') {
-					const T = inv.T as number;
-					const g = T < fl.Tc ? satGuess(fl, T, { P: 0, rhoL: 0, rhoV: 0 }) : null;
-					const rMax = densityAtTP(
-						fl,
-						T,
-						fl.Pmax,
-						g ? g.rhoL * 1.1 : 3 * fl.rhoc,
-						g ? g.rhoL * (1 - M) : 0
-					);
-					const rMin = densityAtTP(
-						fl,
-						T,
-						this.Pfloor,
-						this.Pfloor / (fl.R * T),
-						0,
-						g ? g.rhoV * (1 + M) : Infinity
-					);
-					return [-Math.log(rMax), -Math.log(rMin)];
-				}
-				const rhoTop = densityAtTP(fl, fl.Tmin, fl.Pmax, 3 * fl.rhoc);
-				let lo = -Math.log(1.2 * (rhoTop > 0 ? rhoTop : 5 * fl.rhoc));
-				let hi = Math.log((1.2 * fl.R * fl.Tmax) / this.Pfloor);
-				if (inv.process === 'polytropic' && inv.n !== 0) {
-					const n = inv.n as number,
-						lnC = inv.lnC as number;
-					const a = (lnC - Math.log(fl.Pmax)) / n,
-						b = (lnC - Math.log(this.Pfloor)) / n;
-					lo = Math.max(lo, Math.min(a, b));
-					hi = Math.min(hi, Math.max(a, b));
-				}
-				return [lo, hi];
-			}
-		}
+	private hardBounds(dome: boolean): [number, number] {
+		if (!dome) return this.pc.singleBounds(this);
+		// two-phase pieces end at the triple point (or, failing that, just below the critical point)
+		const [lo, hi] = this.pc.domeBounds(this.fl, this.inv, this.fixedSat?.sat ?? null);
+		const [a, b] = lo <= hi ? [lo, hi] : [hi, lo];
+		return this.domeSign > 0 ? [a, b] : [b, a];
 	}
 
 	/**

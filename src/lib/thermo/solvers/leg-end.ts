@@ -7,6 +7,7 @@ import { ThermoError, fmt } from '../errors.ts';
 import type { Fluid } from '../fluid.ts';
 import type { Process, TargetName } from '../types.ts';
 import { Curve, type CPt, type Invariant, type Segment } from './leg-curve.ts';
+import { PROCESS_CURVES } from './leg-processes.ts';
 import { TARGET_UNIT } from './leg-spec.ts';
 
 /** A place on the curve: segment, parameter and point; `crossing` when it sits on crossing i. */
@@ -17,23 +18,6 @@ export interface Pos {
 	crossing: number | null;
 	/** segments entered before reaching it plus the fraction of the last (for "nearer") */
 	dist: number;
-}
-
-export function describeInvariant(process: Process, inv: Invariant, n: number | undefined): string {
-	switch (process) {
-		case 'isobaric':
-			return `at P = ${fmt(inv.P as number)} Pa`;
-		case 'isochoric':
-			return `at v = ${fmt(1 / (inv.rho as number))} m³/kg`;
-		case 'isothermal':
-			return `at T = ${fmt(inv.T as number)} K`;
-		case 'isentropic':
-			return `at s = ${fmt(inv.s as number)} J/(kg·K)`;
-		case 'isenthalpic':
-			return `at h = ${fmt(inv.h as number)} J/kg`;
-		case 'polytropic':
-			return `with P·vⁿ constant, n = ${fmt(n as number)}`;
-	}
 }
 
 export function valueOf(c: CPt, key: TargetName): number {
@@ -56,7 +40,7 @@ export function unreachable(
 	value: number,
 	range: { lo: number; hi: number }
 ): ThermoError {
-	const where = `This ${process} leg ${describeInvariant(process, inv, n)}`;
+	const where = `This ${process} leg ${PROCESS_CURVES[process].describe(inv, n)}`;
 	if (key === 'x' && !(range.hi >= range.lo))
 		return new ThermoError(
 			'unreachable-target',

@@ -26,14 +26,16 @@ export function integrals(curve: Curve, pieces: Piece[], sampled: SP[]): number 
 			return best;
 		};
 		const Pv = (c: CPt) => c.P / c.rho;
-		if (pc.seg.dome && curve.process === 'isothermal') {
+		// a two-phase piece at a fixed pressure (isothermal): P·Δv exactly
+		if (pc.seg.dome && curve.pc.domeWork === 'exact') {
 			w += pc.A.P * (1 / pc.B.rho - 1 / pc.A.rho);
 			return;
 		}
 		let scaleAbs = 0;
 		for (const s of mine) scaleAbs = Math.max(scaleAbs, Math.abs(Pv(s.c)));
 		const f = (t: number) => curve.integrand(pc.seg, t, guess(t));
-		if (pc.seg.dome && curve.process === 'isentropic') {
+		// a two-phase piece integrated as shaft work (isentropic): w = Δ(Pv) + wShaft
+		if (pc.seg.dome && curve.pc.domeWork === 'shaft') {
 			let dPsv = 0;
 			for (const s of mine) dPsv = Math.max(dPsv, Math.abs(s.c.P / s.c.rho / s.c.T));
 			const ws = integrate(f, pc.from, pc.to, 1e-10, 1e-9 * dPsv * Math.abs(pc.to - pc.from)).value;

@@ -33,7 +33,6 @@ import { checkOptions, inWindow, outsideWindow, pickIndex } from './choose.ts';
 import { fixStateOf, type Key } from './fix-state.ts';
 import { legPointPrecision } from './precision.ts';
 import {
-	describeInvariant,
 	isMonotone,
 	preferredDirection,
 	refine,
@@ -43,6 +42,7 @@ import {
 	type Pos
 } from './leg-end.ts';
 import { integrals } from './leg-integrals.ts';
+import { PROCESS_CURVES } from './leg-processes.ts';
 import { piecesBetween, samplePieces } from './leg-points.ts';
 import { checkLegSpec, TARGET_UNIT, THROTTLING_NOTE } from './leg-spec.ts';
 
@@ -94,12 +94,7 @@ export function traceLeg(spec: LegSpec, chained = false): LegTrace {
 		window: chained ? undefined : spec.window
 	});
 	const startC = cptOfState(fl, start);
-	const inv: Invariant =
-		process === 'polytropic' && n === 0
-			? { process: 'isobaric', P: start.P }
-			: process === 'polytropic'
-				? { process, n, lnC: Math.log(start.P) + (n as number) * Math.log(start.v) }
-				: { process, P: start.P, rho: start.rho, T: start.T, s: start.s, h: start.h };
+	const inv: Invariant = PROCESS_CURVES[process].invariant(start, n);
 	const curve = new Curve(fl, inv, startC);
 	curve.energies = key === 'u' || key === 'h' || key === 's';
 	const notes: string[] = [];
@@ -166,7 +161,7 @@ export function traceLeg(spec: LegSpec, chained = false): LegTrace {
 			if (inside.length === 0)
 				throw outsideWindow(
 					fl,
-					`${key} = ${fmt(value)}${TARGET_UNIT[key] ? ` ${TARGET_UNIT[key]}` : ''} along this ${process} leg ${describeInvariant(process, inv, n)}`,
+					`${key} = ${fmt(value)}${TARGET_UNIT[key] ? ` ${TARGET_UNIT[key]}` : ''} along this ${process} leg ${PROCESS_CURVES[process].describe(inv, n)}`,
 					hits.map((h) => stateOf(fl, h.pos.p)),
 					spec.window
 				);
@@ -212,26 +207,10 @@ export function traceLeg(spec: LegSpec, chained = false): LegTrace {
 	const du = endState.u - start.u,
 		dh = endState.h - start.h,
 		ds = endState.s - start.s;
-	let w = 0,
-		wShaft = 0;
-	const dPv = endState.P * endState.v - start.P * start.v;
-	switch (inv.process) {
-		case 'isobaric':
-			w = (inv.P as number) * (endState.v - start.v);
-			wShaft = 0;
-			break;
-		case 'isochoric':
-			w = 0;
-			wShaft = -start.v * (endState.P - start.P);
-			break;
-		case 'isenthalpic':
-			break;
-		default: {
-			w = integrals(curve, pieces, sampled);
-			wShaft = w - dPv;
-		}
-	}
-	if (process === 'polytropic' && n === 0) wShaft = 0;
+	// closed forms where the process has them, else quadrature along the pieces
+	const { w, wShaft } = curve.pc.work(start, endState, inv, () =>
+		integrals(curve, pieces, sampled)
+	);
 	const leg: Leg = {
 		process,
 		start,

@@ -57,7 +57,10 @@ function buildGrid(fl: Fluid): Grid {
 	// uniform in T, plus nodes closing in on the critical temperature from both sides
 	const span = fl.Tmax - fl.Tmin;
 	const set = new Set<number>();
-	for (let i = 0; i < NT_UNIFORM; i++) set.add(fl.Tmin + (span * i) / (NT_UNIFORM - 1));
+	// the last node is Tmax itself: Tmin + span can round one ulp above it (hydrogen, nitrogen,
+	// carbon dioxide), and a node above Tmax would be dropped, leaving the top cell out of the grid
+	for (let i = 0; i < NT_UNIFORM - 1; i++) set.add(fl.Tmin + (span * i) / (NT_UNIFORM - 1));
+	set.add(fl.Tmax);
 	for (const f of NEAR_CRITICAL) set.add(fl.Tc * (1 + f));
 	set.add(fl.Tc);
 	const Ts = [...set].filter((T) => T >= fl.Tmin && T <= fl.Tmax).sort((a, b) => a - b);

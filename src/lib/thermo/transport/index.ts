@@ -8,6 +8,7 @@
  * correlations take its ρ and T, and its cp, cv and speed of sound for the conductivity's critical
  * enhancement ((∂ρ/∂p)_T = (cp/cv)/w²).
  */
+import { fmt } from '../errors.ts';
 import type { State } from '../types.ts';
 import {
 	waterConductivity,
@@ -86,7 +87,7 @@ export function transport(state: State): Transport {
 	else if (T >= tension.Tc)
 		out.absent.sigma = {
 			code: 'out-of-range',
-			reason: `The correlation ends at its critical temperature, ${tension.Tc} K; T = ${T} K.`
+			reason: `The correlation ends at its critical temperature, ${fmt(tension.Tc)} K; T = ${fmt(T, tension.Tc)} K.`
 		};
 	else {
 		out.sigma = tensionSum(tension, T);
@@ -165,12 +166,12 @@ function rangeReason(
 	P: number
 ): string {
 	const lim = [
-		r.Tmax !== undefined ? `up to ${r.Tmax} K` : '',
-		r.Pmax !== undefined ? `up to ${r.Pmax / 1e6} MPa` : ''
+		r.Tmax !== undefined ? `up to ${fmt(r.Tmax)} K` : '',
+		r.Pmax !== undefined ? `up to ${fmt(r.Pmax / 1e6)} MPa` : ''
 	]
 		.filter(Boolean)
 		.join(' and ');
-	return `The ${what} correlation holds ${lim || 'within the equation of state'}; this state is at ${T} K, ${P} Pa.`;
+	return `The ${what} correlation holds ${lim || 'within the equation of state'}; this state is at ${fmt(T, r.Tmax ?? T)} K, ${fmt(P, r.Pmax ?? P)} Pa.`;
 }
 
 function onDome(state: State): boolean {
@@ -198,7 +199,7 @@ function waterTransport(state: State): Transport {
 	} else if (onDome(state))
 		out.absent.sigma = {
 			code: 'out-of-range',
-			reason: `IAPWS R1-76(2014) holds from ${waterTensionRange.Tmin} K to ${waterTensionRange.Tmax} K; T = ${T} K.`
+			reason: `IAPWS R1-76(2014) holds from ${fmt(waterTensionRange.Tmin)} K to ${fmt(waterTensionRange.Tmax)} K; T = ${fmt(T, waterTensionRange.Tmin, waterTensionRange.Tmax)} K.`
 		};
 	else
 		out.absent.sigma = {
@@ -219,7 +220,7 @@ function waterTransport(state: State): Transport {
 		for (const name of ['mu', 'k', 'Pr'] as const)
 			out.absent[name] = {
 				code: 'out-of-range',
-				reason: `Water's ${describe(name)} correlation holds from ${waterTransportRange.Tmin} K to ${waterTransportRange.Tmax} K up to ${waterTransportRange.Pmax / 1e6} MPa; this state is at ${T} K, ${P} Pa.`
+				reason: `Water's ${describe(name)} correlation holds from ${fmt(waterTransportRange.Tmin)} K to ${fmt(waterTransportRange.Tmax)} K up to ${fmt(waterTransportRange.Pmax / 1e6)} MPa; this state is at ${fmt(T, waterTransportRange.Tmin, waterTransportRange.Tmax)} K, ${fmt(P, waterTransportRange.Pmax)} Pa.`
 			};
 		return out;
 	}

@@ -1,0 +1,37 @@
+/**
+ * The (T, ln ρ) start grid of the two-energy pairs (plane.ts) reaches Tmax: for fluids whose
+ * Tmin + (Tmax − Tmin) rounds one ulp above Tmax the top isotherm used to be dropped, and states
+ * in the top cell (up to ~25 K below Tmax for hydrogen) could not be fixed from (h, s), (u, s) or
+ * (u, h) — refused as out of range (found by scripts/region-mix.ts, seed 11).
+ */
+import { describe, expect, it } from 'vitest';
+import { fixState, getFluid } from '../index.ts';
+
+describe('two-energy pairs near Tmax', () => {
+	for (const id of ['hydrogen', 'nitrogen', 'carbon-dioxide', 'water'])
+		it(`${id}: states 1 to 20 K below Tmax come back from (h, s), (u, s) and (u, h)`, () => {
+			const Tmax = getFluid(id).limits.Tmax;
+			for (const dT of [1, 5, 20])
+				for (const P of [2, 1.5e5]) {
+					const ref = fixState(id, { T: Tmax - dT, P });
+					for (const [a, b] of [
+						['h', 's'],
+						['u', 's'],
+						['u', 'h']
+					] as const) {
+						const got = fixState(id, { [a]: ref[a], [b]: ref[b] }, { near: { T: ref.T, P } });
+						const where = `${id} ${a},${b} at T = ${ref.T}, P = ${P}`;
+						expect(Math.abs(got.T / ref.T - 1), where).toBeLessThan(1e-9);
+						// (u, h) of a dilute gas fixes P only as well as its stated precision says (ideal gas: u, h of T alone)
+						expect(Math.abs(got.P / P - 1), where).toBeLessThan(
+							Math.max(1e-6, 8 * (got.precision?.P ?? 0))
+						);
+					}
+				}
+		});
+	// the seeded region-mix state that exposed it
+	it('hydrogen at 995.76 K, 151.5 kPa from (h, s)', () => {
+		const st = fixState('hydrogen', { h: 14132017.612055108, s: 69287.41856979189 });
+		expect(st.T).toBeCloseTo(995.7629005599271, 6);
+	});
+});
