@@ -15,6 +15,7 @@ import {
 	if97State,
 	if97StatePh,
 	if97StatePs,
+	mixture,
 	onSide,
 	type If97State
 } from './state.ts';
@@ -95,24 +96,7 @@ function saturationAtT(T: number): { P: number; liquid: If97State; vapor: If97St
 function mixOf(liquid: If97State, vapor: If97State, x: number): If97State {
 	if (x === 0) return liquid;
 	if (x === 1) return vapor;
-	const mix = (a: number, b: number) => a + x * (b - a);
-	const v = mix(liquid.v, vapor.v);
-	return {
-		fluid: 'water',
-		phase: 'saturated-mixture',
-		T: liquid.T,
-		P: liquid.P,
-		v,
-		rho: 1 / v,
-		u: mix(liquid.u, vapor.u),
-		h: mix(liquid.h, vapor.h),
-		s: mix(liquid.s, vapor.s),
-		x,
-		cp: null,
-		cv: null,
-		w: null,
-		region: 4
-	};
+	return mixture(liquid.P, liquid.T, liquid, vapor, x);
 }
 
 function checkQuality(x: number): void {

@@ -37,6 +37,7 @@ import type {
 import { PC, TC, psat, tsat } from './regions.ts';
 import { if97FixFrom, type If97Seed } from './fix.ts';
 import { if97Limits, if97State } from './state.ts';
+import { cycleOf } from '../solvers/path.ts';
 
 const seedOf = (st: State): If97Seed => ({ T: st.T, P: st.P, x: st.x, phase: st.phase });
 
@@ -273,30 +274,7 @@ export function if97Path(spec: PathSpec, base: PathResult): PathResult {
 	per.dh = last.h - s1.h;
 	per.ds = last.s - s1.s;
 	let cycle = base.cycle;
-	if (cycle) {
-		const qs = outLegs.map((l) => (closed ? l.leg.q : l.leg.qFlow));
-		const netWork = outLegs.reduce((a, l) => a + (closed ? l.leg.w : l.leg.wShaft), 0);
-		const heatAdded = qs.reduce((a, q) => a + Math.max(0, q), 0);
-		const heatRejected = qs.reduce((a, q) => a + Math.max(0, -q), 0);
-		const scale = Math.max(heatAdded, heatRejected, 1e-300);
-		const kind =
-			Math.abs(netWork) <= 1e-9 * scale ? 'no-net-work' : netWork > 0 ? 'power' : 'reverse';
-		cycle = {
-			kind,
-			netWork,
-			heatAdded,
-			heatRejected,
-			totals: {
-				unit,
-				netWork: m * netWork,
-				heatAdded: m * heatAdded,
-				heatRejected: m * heatRejected
-			},
-			thermalEfficiency: kind === 'power' && heatAdded > 0 ? netWork / heatAdded : null,
-			copCooling: kind === 'reverse' ? heatAdded / -netWork : null,
-			copHeating: kind === 'reverse' ? heatRejected / -netWork : null
-		};
-	}
+	if (cycle) cycle = cycleOf(outLegs, closed, m, unit);
 	return {
 		...base,
 		system,

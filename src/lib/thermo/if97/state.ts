@@ -298,7 +298,14 @@ function saturatedAtP(P: number): { T: number; liquid: If97State; vapor: If97Sta
 
 type Target = 'h' | 's';
 
-function mixture(P: number, T: number, liquid: If97State, vapor: If97State, x: number): If97State {
+/** The saturated mixture of quality x at (P, T) between its saturated liquid and vapor. */
+export function mixture(
+	P: number,
+	T: number,
+	liquid: If97State,
+	vapor: If97State,
+	x: number
+): If97State {
 	const mix = (a: number, b: number) => a + x * (b - a);
 	const v = mix(liquid.v, vapor.v);
 	return {

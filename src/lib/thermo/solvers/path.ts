@@ -437,28 +437,7 @@ export function computePath(spec: PathSpec): PathResult {
 		Math.abs(end.rho - start.rho) <= CYCLE_TOLERANCE * start.rho &&
 		legs.length >= 2
 	) {
-		const qs = legs.map((l) => (closed ? l.leg.q : l.leg.qFlow));
-		const netWork = legs.reduce((a, l) => a + (closed ? l.leg.w : l.leg.wShaft), 0);
-		const heatAdded = qs.reduce((a, q) => a + Math.max(0, q), 0);
-		const heatRejected = qs.reduce((a, q) => a + Math.max(0, -q), 0);
-		const scale = Math.max(heatAdded, heatRejected, 1e-300);
-		const kind: CycleAnalysis['kind'] =
-			Math.abs(netWork) <= 1e-9 * scale ? 'no-net-work' : netWork > 0 ? 'power' : 'reverse';
-		cycle = {
-			kind,
-			netWork,
-			heatAdded,
-			heatRejected,
-			totals: {
-				unit,
-				netWork: m * netWork,
-				heatAdded: m * heatAdded,
-				heatRejected: m * heatRejected
-			},
-			thermalEfficiency: kind === 'power' && heatAdded > 0 ? netWork / heatAdded : null,
-			copCooling: kind === 'reverse' ? heatAdded / -netWork : null,
-			copHeating: kind === 'reverse' ? heatRejected / -netWork : null
-		};
+		cycle = cycleOf(legs, closed, m, unit);
 	}
 	return {
 		fluid: fl.id,
@@ -472,5 +451,40 @@ export function computePath(spec: PathSpec): PathResult {
 		cycle,
 		limitEvents,
 		warnings
+	};
+}
+
+/**
+ * A closed path's cycle figures from its legs' heat and work per kg (the system's if closed, else
+ * the flow's): net work, heat added and rejected, and the thermal efficiency of a power cycle or the
+ * COPs of a reverse one, with totals for mass m.
+ */
+export function cycleOf(
+	legs: readonly { leg: { q: number; w: number; wShaft: number; qFlow: number } }[],
+	closed: boolean,
+	m: number,
+	unit: 'J' | 'W'
+): CycleAnalysis {
+	const qs = legs.map((l) => (closed ? l.leg.q : l.leg.qFlow));
+	const netWork = legs.reduce((a, l) => a + (closed ? l.leg.w : l.leg.wShaft), 0);
+	const heatAdded = qs.reduce((a, q) => a + Math.max(0, q), 0);
+	const heatRejected = qs.reduce((a, q) => a + Math.max(0, -q), 0);
+	const scale = Math.max(heatAdded, heatRejected, 1e-300);
+	const kind: CycleAnalysis['kind'] =
+		Math.abs(netWork) <= 1e-9 * scale ? 'no-net-work' : netWork > 0 ? 'power' : 'reverse';
+	return {
+		kind,
+		netWork,
+		heatAdded,
+		heatRejected,
+		totals: {
+			unit,
+			netWork: m * netWork,
+			heatAdded: m * heatAdded,
+			heatRejected: m * heatRejected
+		},
+		thermalEfficiency: kind === 'power' && heatAdded > 0 ? netWork / heatAdded : null,
+		copCooling: kind === 'reverse' ? heatAdded / -netWork : null,
+		copHeating: kind === 'reverse' ? heatRejected / -netWork : null
 	};
 }
