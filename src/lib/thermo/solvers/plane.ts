@@ -35,6 +35,12 @@ const CONTOUR_SAMPLES = 160;
 const CONTOUR_FLOOR_P = 1e-4;
 /** samples of the contour scan between that floor and the grid's */
 const CONTOUR_DILUTE_SAMPLES = 32;
+/**
+ * samples of the contour scan between its last sample inside [Tmin, Tmax] and the point where the
+ * curve u = U leaves that range (both roots beside a turning point can lie there: R-1234ze(E)
+ * 0.1 K below Tmax)
+ */
+const CONTOUR_EDGE_SAMPLES = 8;
 /** a start within this fraction of a grid cell (in T, and in ln ρ) of an accepted state is not run */
 const SAME_START = 0.02;
 /** scaled residual below which a point between two candidates shows them to be one state */
@@ -373,7 +379,7 @@ export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number
 		out.df = ((p.dPdT / rho) * dTdz + (p.dPdrho - p.P / rho)) / (fl.R * fl.Tc);
 	};
 	const out: [number, number][] = [];
-	for (const z of scanRoots(fn, zMin, zMax, CONTOUR_SAMPLES, 1e-12)) {
+	for (const z of scanRoots(fn, zMin, zMax, CONTOUR_SAMPLES, 1e-12, CONTOUR_EDGE_SAMPLES)) {
 		const T = Tat(z);
 		if (Number.isFinite(T)) out.push([T, z]);
 	}
@@ -382,7 +388,14 @@ export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number
 	// absolute floor brackets its zero
 	const zFloor = Math.log(CONTOUR_FLOOR_P / (fl.R * fl.Tmax));
 	if (zFloor < zMin)
-		for (const z of scanRoots(fn, zFloor, zMin, CONTOUR_DILUTE_SAMPLES, 1e-12)) {
+		for (const z of scanRoots(
+			fn,
+			zFloor,
+			zMin,
+			CONTOUR_DILUTE_SAMPLES,
+			1e-12,
+			CONTOUR_EDGE_SAMPLES
+		)) {
 			const T = Tat(z);
 			if (Number.isFinite(T) && !out.some(([, z1]) => Math.abs(z1 - z) < 1e-9)) out.push([T, z]);
 		}
