@@ -75,7 +75,7 @@ describe('scanRoots where the function is defined on part of the interval', () =
 	};
 	it('finds both roots with edge samples and none without', () => {
 		expect(scanRoots(fn, 0, 1, 1, 1e-12)).toEqual([]);
-		const r = scanRoots(fn, 0, 1, 1, 1e-12, 4).sort((a, b) => a - b);
+		const r = scanRoots(fn, 0, 1, 1, 1e-12, { samples: 4 }).sort((a, b) => a - b);
 		expect(r.length).toBe(2);
 		expect(r[0]).toBeCloseTo(0.3, 10);
 		expect(r[1]).toBeCloseTo(0.5, 10);

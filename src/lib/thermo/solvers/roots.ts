@@ -113,15 +113,26 @@ export function domainEdge(fn: ScalarFn, z: number, zOut: number, tol: number): 
 	return z;
 }
 
+/** How scanRoots treats the edge of fn's domain inside the interval. */
+export interface EdgeScan {
+	/** samples between the last defined sample and the edge */
+	samples: number;
+	/**
+	 * the edge between zIn (fn defined) and zOut (not), where fn is still defined, or null when
+	 * it cannot say; without it (or on null) the edge is found by bisection (domainEdge)
+	 */
+	at?: (zIn: number, zOut: number) => number | null;
+}
+
 /**
  * Every root of fn on [z0, z1] from n + 1 equally spaced samples: sign changes of f are refined
  * by newtonBracket; where f keeps its sign but its derivative changes sign, the turning point is
  * located and, if f changes sign there, both roots beside it are refined.
- * With edgeSamples > 0, fn may be undefined (NaN) on part of the interval: where one sample of a
- * pair is finite and the other is not, the edge of fn's domain between them is located
- * (domainEdge) and the defined part scanned again with edgeSamples samples — otherwise roots
- * between the last defined sample and the domain's edge (two of them, beside a turning point,
- * or one) would be lost with the undefined sample.
+ * With edge, fn may be undefined (NaN) on part of the interval: where one sample of a pair is
+ * finite and the other is not, the edge of fn's domain between them is located (edge.at, or
+ * domainEdge's bisection) and the defined part scanned again with edge.samples samples —
+ * otherwise roots between the last defined sample and the domain's edge (two of them, beside a
+ * turning point, or one) would be lost with the undefined sample.
  */
 export function scanRoots(
 	fn: ScalarFn,
@@ -129,7 +140,7 @@ export function scanRoots(
 	z1: number,
 	n: number,
 	tol: number,
-	edgeSamples = 0
+	edge?: EdgeScan
 ): number[] {
 	const zs: number[] = [],
 		fs: number[] = [],
@@ -154,11 +165,12 @@ export function scanRoots(
 		if (!Number.isFinite(fa) || !Number.isFinite(fb)) {
 			const okA = Number.isFinite(fa) && Number.isFinite(ds[i]),
 				okB = Number.isFinite(fb) && Number.isFinite(ds[i + 1]);
-			if (edgeSamples > 0 && okA !== okB) {
-				const e = okA ? domainEdge(fn, a, b, tol) : domainEdge(fn, b, a, tol);
-				const from = okA ? a : b;
+			if (edge && edge.samples > 0 && okA !== okB) {
+				const from = okA ? a : b,
+					to = okA ? b : a;
+				const e = edge.at?.(from, to) ?? domainEdge(fn, from, to, tol);
 				if (Math.abs(e - from) > tol)
-					for (const r of scanRoots(fn, Math.min(from, e), Math.max(from, e), edgeSamples, tol))
+					for (const r of scanRoots(fn, Math.min(from, e), Math.max(from, e), edge.samples, tol))
 						push(r);
 			}
 			continue;
