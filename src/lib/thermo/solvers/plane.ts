@@ -425,14 +425,7 @@ export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number
 	// absolute floor brackets its zero
 	const zFloor = Math.log(CONTOUR_FLOOR_P / (fl.R * fl.Tmax));
 	if (zFloor < zMin)
-		for (const z of scanRoots(
-			fn,
-			zFloor,
-			zMin,
-			CONTOUR_DILUTE_SAMPLES,
-			1e-12,
-			CONTOUR_EDGE_SAMPLES
-		)) {
+		for (const z of scanRoots(fn, zFloor, zMin, CONTOUR_DILUTE_SAMPLES, 1e-12, edge)) {
 			const T = Tat(z);
 			if (Number.isFinite(T) && !out.some(([, z1]) => Math.abs(z1 - z) < 1e-9)) out.push([T, z]);
 		}
