@@ -17,7 +17,7 @@ import { densityAtTP } from './density.ts';
 import { domeRoots, evalSatLine, SatLine } from './dome.ts';
 import { locate, placedState, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
-import { scanRoots, type FD } from './roots.ts';
+import { newtonBracket, scanRoots, type FD } from './roots.ts';
 import { CRITICAL_BAND, satAtT, triplePressure } from './saturation.ts';
 import { saturatedState } from '../state.ts';
 import { precisionOf } from './precision.ts';
@@ -35,6 +35,12 @@ const CONTOUR_SAMPLES = 160;
 const CONTOUR_FLOOR_P = 1e-4;
 /** samples of the contour scan between that floor and the grid's */
 const CONTOUR_DILUTE_SAMPLES = 32;
+/**
+ * samples of the contour scan between its last sample inside [Tmin, Tmax] and the point where the
+ * curve u = U leaves that range (both roots beside a turning point can lie there: R-1234ze(E)
+ * 0.1 K below Tmax)
+ */
+const CONTOUR_EDGE_SAMPLES = 8;
 /** a start within this fraction of a grid cell (in T, and in ln ρ) of an accepted state is not run */
 const SAME_START = 0.02;
 /** scaled residual below which a point between two candidates shows them to be one state */
@@ -346,14 +352,19 @@ export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number
 	let Tlast = 0.5 * (fl.Tmin + fl.Tmax);
 	const Tat = (z: number): number => {
 		const rho = Math.exp(z);
-		let T = Tlast;
+		let T = Tlast,
+			last = Infinity;
 		for (let it = 0; it < 40; it++) {
 			evalPoint(fl, T, rho, p, 2);
 			const step = (p.u - U) / p.cv;
 			if (!Number.isFinite(step)) return NaN;
 			T = Math.min(Math.max(T - step, 0.5 * T), 2 * T);
-			if (Math.abs(step) <= 1e-12 * T) break;
+			last = Math.abs(step);
+			if (last <= 1e-12 * T) break;
 		}
+		// a run that has not settled (u = U has no T at this ρ where the equation is sane) is no
+		// point of the curve: the scan treats it as outside the domain
+		if (!(last <= 1e-8 * T)) return NaN;
 		if (!(T >= fl.Tmin * (1 - 1e-9) && T <= fl.Tmax * (1 + 1e-9))) return NaN;
 		evalPoint(fl, T, rho, p, 2);
 		Tlast = T;
@@ -372,8 +383,40 @@ export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number
 		out.f = (p.P / rho - (H - U)) / (fl.R * fl.Tc);
 		out.df = ((p.dPdT / rho) * dTdz + (p.dPdrho - p.P / rho)) / (fl.R * fl.Tc);
 	};
+	// where the curve u = U leaves [Tmin, Tmax] between zIn (T in range) and zOut (not): at zOut
+	// u(Tmax, ρ) < U (the curve is above Tmax) or u(Tmin, ρ) > U (below Tmin); the edge is the
+	// zero of u(T_bound, ρ) − U between them (u(T_bound, ρ) − U has the other sign at zIn)
+	const q = new Point();
+	const uAt = (Tb: number) => (z: number, o: FD) => {
+		const rho = Math.exp(z);
+		evalPoint(fl, Tb, rho, q, 2);
+		o.f = (q.u - U) / (fl.R * fl.Tc);
+		o.df = (propDrho(q, 'u') * rho) / (fl.R * fl.Tc);
+	};
+	const at = (zIn: number, zOut: number): number | null => {
+		const o: FD = { f: 0, df: 0 };
+		for (const Tb of [fl.Tmax, fl.Tmin]) {
+			const g = uAt(Tb);
+			g(zOut, o);
+			const gOut = o.f;
+			if (!Number.isFinite(gOut) || (Tb === fl.Tmax ? gOut >= 0 : gOut <= 0)) continue;
+			g(zIn, o);
+			const gIn = o.f;
+			if (!Number.isFinite(gIn) || gIn < 0 === gOut < 0) continue;
+			const z = newtonBracket(g, zIn, gIn, zOut, gOut, 1e-13);
+			// the edge itself, or a hair inside it, is where fn is still defined
+			for (let k = 0; k < 4; k++) {
+				const zk = z + (zIn - z) * (k === 0 ? 0 : Math.pow(10, 3 * k - 12));
+				fn(zk, o);
+				if (Number.isFinite(o.f) && Number.isFinite(o.df)) return zk;
+			}
+			return null;
+		}
+		return null;
+	};
+	const edge = { samples: CONTOUR_EDGE_SAMPLES, at };
 	const out: [number, number][] = [];
-	for (const z of scanRoots(fn, zMin, zMax, CONTOUR_SAMPLES, 1e-12)) {
+	for (const z of scanRoots(fn, zMin, zMax, CONTOUR_SAMPLES, 1e-12, edge)) {
 		const T = Tat(z);
 		if (Number.isFinite(T)) out.push([T, z]);
 	}
@@ -382,7 +425,7 @@ export function contourRootsUH(fl: Fluid, U: number, H: number): [number, number
 	// absolute floor brackets its zero
 	const zFloor = Math.log(CONTOUR_FLOOR_P / (fl.R * fl.Tmax));
 	if (zFloor < zMin)
-		for (const z of scanRoots(fn, zFloor, zMin, CONTOUR_DILUTE_SAMPLES, 1e-12)) {
+		for (const z of scanRoots(fn, zFloor, zMin, CONTOUR_DILUTE_SAMPLES, 1e-12, edge)) {
 			const T = Tat(z);
 			if (Number.isFinite(T) && !out.some(([, z1]) => Math.abs(z1 - z) < 1e-9)) out.push([T, z]);
 		}

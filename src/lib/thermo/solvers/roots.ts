@@ -99,11 +99,49 @@ function turningPoint(
 }
 
 /**
+ * Where fn is defined (finite) at z and not at zOut, the last point towards zOut at which it is
+ * still defined, by bisection to tol (fn's domain ends somewhere between the two).
+ */
+export function domainEdge(fn: ScalarFn, z: number, zOut: number, tol: number): number {
+	const out: FD = { f: 0, df: 0 };
+	for (let it = 0; it < 200 && Math.abs(zOut - z) > tol; it++) {
+		const m = 0.5 * (z + zOut);
+		fn(m, out);
+		if (Number.isFinite(out.f) && Number.isFinite(out.df)) z = m;
+		else zOut = m;
+	}
+	return z;
+}
+
+/** How scanRoots treats the edge of fn's domain inside the interval. */
+export interface EdgeScan {
+	/** samples between the last defined sample and the edge */
+	samples: number;
+	/**
+	 * the edge between zIn (fn defined) and zOut (not), where fn is still defined, or null when
+	 * it cannot say; without it (or on null) the edge is found by bisection (domainEdge)
+	 */
+	at?: (zIn: number, zOut: number) => number | null;
+}
+
+/**
  * Every root of fn on [z0, z1] from n + 1 equally spaced samples: sign changes of f are refined
  * by newtonBracket; where f keeps its sign but its derivative changes sign, the turning point is
  * located and, if f changes sign there, both roots beside it are refined.
+ * With edge, fn may be undefined (NaN) on part of the interval: where one sample of a pair is
+ * finite and the other is not, the edge of fn's domain between them is located (edge.at, or
+ * domainEdge's bisection) and the defined part scanned again with edge.samples samples —
+ * otherwise roots between the last defined sample and the domain's edge (two of them, beside a
+ * turning point, or one) would be lost with the undefined sample.
  */
-export function scanRoots(fn: ScalarFn, z0: number, z1: number, n: number, tol: number): number[] {
+export function scanRoots(
+	fn: ScalarFn,
+	z0: number,
+	z1: number,
+	n: number,
+	tol: number,
+	edge?: EdgeScan
+): number[] {
 	const zs: number[] = [],
 		fs: number[] = [],
 		ds: number[] = [];
@@ -124,7 +162,19 @@ export function scanRoots(fn: ScalarFn, z0: number, z1: number, n: number, tol: 
 			fb = fs[i + 1],
 			a = zs[i],
 			b = zs[i + 1];
-		if (!Number.isFinite(fa) || !Number.isFinite(fb)) continue;
+		if (!Number.isFinite(fa) || !Number.isFinite(fb)) {
+			const okA = Number.isFinite(fa) && Number.isFinite(ds[i]),
+				okB = Number.isFinite(fb) && Number.isFinite(ds[i + 1]);
+			if (edge && edge.samples > 0 && okA !== okB) {
+				const from = okA ? a : b,
+					to = okA ? b : a;
+				const e = edge.at?.(from, to) ?? domainEdge(fn, from, to, tol);
+				if (Math.abs(e - from) > tol)
+					for (const r of scanRoots(fn, Math.min(from, e), Math.max(from, e), edge.samples, tol))
+						push(r);
+			}
+			continue;
+		}
 		if (fa === 0) {
 			push(a);
 			continue;
