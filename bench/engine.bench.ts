@@ -175,6 +175,15 @@ const cases: Case[] = [
 		py: 'IAPWS95(h=d["h"]/1e3, s=d["s"]/1e3)'
 	},
 	{
+		// the two energies barely fix a state: a contour scan along u = U finds every root
+		// (python3-iapws is timed on the same pair, though it may settle on another root)
+		name: 'state from (u, h)',
+		budget: 20,
+		inputs: all.map((s) => ({ u: s.u, h: s.h })),
+		run: (i) => fixState('water', i),
+		py: 'IAPWS95(h=d["h"]/1e3, u=d["u"]/1e3)'
+	},
+	{
 		name: 'state from (T, h)',
 		budget: 20,
 		inputs: single.slice(3).map((s) => ({ T: s.T, h: s.h })),
