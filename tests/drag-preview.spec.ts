@@ -149,10 +149,23 @@ test('dragging a state redraws its path before the server answers; after release
 	await expect(chart.overlay).not.toHaveAttribute('data-path-preview', 'true');
 	await expect(page.locator('[data-chart="T-v"] svg.swc-drawing g.is-preview')).toHaveCount(0);
 
-	// what was saved is what the server computed, and the table and chart show it
-	const sheet = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${sheetId}`)).json())
-		.sheet;
-	const leg = sheet.doc.spec.legs[0];
+	// what was saved is what the server computed, and the table and chart show it. The status was
+	// already "saved" before the drag (nothing is saved while dragging), so wait for the draft that
+	// holds the released state rather than for the status word.
+	const savedLeg = async () =>
+		(await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${sheetId}`)).json()).sheet.doc
+			.spec.legs[0];
+	await expect
+		.poll(async () => Math.abs(((await savedLeg()).target.T as number) - 273.15 - 190), {
+			message: 'the released state (near the pointer’s 190 °C) is saved',
+			timeout: 20_000
+		})
+		.toBeLessThan(3);
+	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved', {
+		timeout: 20_000
+	});
+	expect(draftSaves).toBeGreaterThan(0);
+	const leg = await savedLeg();
 	expect(leg.process).toBe('isochoric');
 	const tSaved = (leg.target.T as number) - 273.15;
 	// past where python3-iapws's saturated vapour has ρ'' = 1/v, and near the pointer's 190 °C

@@ -1,5 +1,14 @@
 import { expect, test, type Locator, type Page } from '@playwright/test';
-import { createToken, DEMO, FORM, freshEmail, signedInRequest, signInPage, TEAM } from './helpers';
+import {
+	createToken,
+	DEMO,
+	FORM,
+	freshEmail,
+	seededK101Id,
+	signedInRequest,
+	signInPage,
+	TEAM
+} from './helpers';
 
 /*
  * A checker reads and comments on a phone: every signed-in page fits a 390 px wide screen in every
@@ -60,7 +69,7 @@ test.describe('on a 390 px phone', () => {
 		test(`every signed-in page fits, as ${role}`, async ({ page }) => {
 			await signInPage(page, DEMO[role]);
 			const s = await sheets(page);
-			const approved = s['K-101'];
+			const approved = { id: await seededK101Id(page.request) };
 			const draft = s['V-204'];
 			const inCheck = s['HP-410'];
 			const pages: [string, string][] = [

@@ -4,7 +4,7 @@ import {
 	test,
 	type APIRequestContext
 } from '@playwright/test';
-import { BASE, createToken, DEMO, signedInRequest, TEAM } from './helpers';
+import { BASE, createToken, DEMO, seededK101Id, signedInRequest, TEAM } from './helpers';
 
 /*
  * The sheet API over HTTP with team tokens (and the session a browser has): list and search,
@@ -197,9 +197,7 @@ test.describe('sheet API', () => {
 		expect((await viewer.get(`${url}/${id}`)).status()).toBe(404);
 		expect((await designer.delete(`${url}/${id}`)).status()).toBe(404);
 		// the seeded K-101 holds an approved revision: kept, even for the owner
-		const k101 = (
-			(await (await viewer.get(`${url}?q=K-101`)).json()) as { sheets: Array<{ id: string }> }
-		).sheets[0];
+		const k101 = { id: await seededK101Id(viewer) };
 		const kept = await owner.delete(`${url}/${k101.id}`);
 		expect(kept.status()).toBe(409);
 		const e = ((await kept.json()) as { error: { code: string; message: string } }).error;

@@ -1,5 +1,5 @@
 import { expect, test, type Locator, type Page, type Request } from '@playwright/test';
-import { DEMO, signInPage, signedInRequest, TEAM } from './helpers';
+import { DEMO, seededK101Id, signInPage, signedInRequest, TEAM } from './helpers';
 import { readFileSync } from 'node:fs';
 
 // python3-iapws 1.5.2 (Debian), IAPWS95, direct calls: tests/reference/make-iapws-sketcher.py
@@ -391,11 +391,7 @@ test.describe('the sketcher', () => {
 		await expect(page.locator('[data-notice="ok"]')).toContainText(`Sheet “${title}” was deleted.`);
 		expect((await page.request.get(`/t/${TEAM}/sheets/${id}`)).status()).toBe(404);
 		// the seeded K-101 holds an approved revision: the designer reads why it cannot be deleted
-		const k101 = (
-			(await (await page.request.get(`/api/v1/teams/${TEAM}/sheets?q=K-101`)).json()) as {
-				sheets: Array<{ id: string }>;
-			}
-		).sheets[0];
+		const k101 = { id: await seededK101Id(page.request) };
 		await page.goto(`/t/${TEAM}/sheets/${k101.id}`);
 		await page.getByRole('tab', { name: /Setup/ }).click();
 		await expect(page.getByTestId('sheet-delete-reason')).toContainText('approved');
