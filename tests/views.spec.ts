@@ -281,6 +281,11 @@ test('a measured trace, a note flag and both design limits on the P–h view, an
 	const [fb, mb] = [await rect(flag), await rect(marker)];
 	expect(Math.abs(fb.x - mb.x)).toBeLessThan(1.5);
 	expect(Math.abs(fb.bottom - mb.bottom)).toBeLessThan(1.5);
+	// the key shows the flag's shape and says what it is; the chart's description names it
+	await expect(drawing.locator('path.swc-note-flag-sample')).toHaveCount(1);
+	await expect(drawing.locator('text.swc-key-text')).toContainText(['open review notes (count)']);
+	await expect(drawing.locator('desc')).toContainText('Open review notes flagged: 1 on L1.');
+	await expect(drawing.locator('desc')).toContainText('Measured trace Heater log: 6 points.');
 	// both limits: design pressure straight across, design temperature along its isotherm
 	const limits = drawing.locator('path.swc-limit:not(.sample)');
 	await expect(limits).toHaveCount(2, { timeout: 20_000 });
@@ -299,6 +304,8 @@ test('a measured trace, a note flag and both design limits on the P–h view, an
 	expect(svg).toMatch(/class="swc-trace-line" d="M[\d.-]+,[\d.-]+(L[\d.-]+,[\d.-]+){5}"/);
 	expect(svg).toMatch(/<g class="swc-note-flag" data-anchor="leg:heat"[^>]*>/);
 	expect(svg).toContain('1 open review note on L1');
+	expect(svg).toContain('open review notes (count)');
+	expect(svg).toContain('Open review notes flagged: 1 on L1.');
 	expect(svg.match(/class="swc-limit"/g)?.length).toBe(2);
 
 	// the print view draws the same on its P–h chart

@@ -338,6 +338,7 @@ export function createChart(
 			bands:
 				vw.x.prop === 'v' &&
 				(path.traces ?? []).some((t) => t.kind !== 'revision' && t.points.some((p) => p.vBand)),
+			flags: (path.flags ?? []).length > 0,
 			revisions: drawn.filter((t) => t.kind === 'revision').map((t) => t.label)
 		});
 	}
@@ -1064,6 +1065,15 @@ export function createChart(
 					sample.attr('class', 'sample swc-trace-band').attr('d', `M3,0h${KEY.sample - 6}`);
 				} else if (e.kind === 'revision') {
 					sample.attr('class', 'sample swc-revision-line').attr('d', `M3,0h${KEY.sample - 6}`);
+				} else if (e.kind === 'note-flag') {
+					// the flag's own shape, smaller: rounded but for the corner that points at the notes
+					const l = KEY.sample / 2 - 7;
+					sample
+						.attr('class', 'sample swc-note-flag-sample')
+						.attr(
+							'd',
+							`M${l},5V-2Q${l},-5 ${l + 3},-5H${l + 11}Q${l + 14},-5 ${l + 14},-2V2Q${l + 14},5 ${l + 11},5Z`
+						);
 				} else {
 					sample
 						.attr('class', 'sample swc-trace-mark')

@@ -71,4 +71,34 @@ describe('accessible names', () => {
 		expect(d).toContain('Design limit: design pressure');
 		expect(d).toContain('Legs are drawn by process: isochoric as a vermillion long dash line.');
 	});
+
+	it('the description names the measured traces, overlaid revisions and open-note flags drawn', () => {
+		const d = chartDescription({
+			kind: 'P-h',
+			states,
+			legs,
+			prefs: si,
+			traces: [
+				{
+					id: 't1',
+					label: 'jacket logger 1',
+					points: [
+						{ T: 400, P: 2e5 },
+						{ T: 410, P: 2e5 }
+					]
+				},
+				{ id: 'r1', label: 'Rev 1', kind: 'revision', points: [{ T: 400, P: 2e5 }] },
+				{ id: 't2', label: 'empty', points: [] }
+			],
+			flags: [
+				{ key: 'leg:l1', target: { kind: 'leg', id: 'l1' }, count: 2, label: 'L1' },
+				{ key: 'state:b', target: { kind: 'state', id: 'b' }, count: 1, label: 'S2' }
+			]
+		});
+		expect(d).toContain('Measured trace jacket logger 1: 2 points.');
+		expect(d).toContain('Overlaid for comparison: Rev 1, 1 point.');
+		expect(d).not.toContain('empty');
+		expect(d).toContain('Open review notes flagged: 2 on L1, 1 on S2.');
+		expect(chartDescription({ kind: 'P-h', states, legs, prefs: si })).not.toContain('review');
+	});
 });

@@ -2,7 +2,15 @@ import { DESIGN_LIMIT_LABEL, PHASE_NAME, type Phase, type State } from '$lib/the
 import { formatQuantity, type UnitPrefs } from '$lib/units';
 import { PROCESS_ORDER, processStyle } from './encoding';
 import { VIEWS } from './views';
-import type { ChartKind, ChartLeg, ChartState, DesignLimitName, DesignLimits } from './types';
+import type {
+	ChartKind,
+	ChartLeg,
+	ChartState,
+	DesignLimitName,
+	DesignLimits,
+	MeasuredTrace,
+	NoteFlag
+} from './types';
 
 export function phaseName(phase: Phase): string {
 	return PHASE_NAME[phase];
@@ -66,6 +74,10 @@ export interface ChartSummaryInput {
 	states: readonly ChartState[];
 	legs: readonly ChartLeg[];
 	limits?: DesignLimits | null;
+	/** open review notes flagged on the chart */
+	flags?: readonly NoteFlag[] | null;
+	/** measured traces and overlaid revisions drawn on the chart */
+	traces?: readonly MeasuredTrace[] | null;
 	prefs: UnitPrefs;
 }
 
@@ -100,5 +112,19 @@ export function chartDescription(input: ChartSummaryInput): string {
 	][]) {
 		if (limit) lines.push(`Design limit: ${limitText(name, limit.value, input.prefs)}.`);
 	}
+	for (const t of input.traces ?? []) {
+		if (!t.points.length) continue;
+		const n = `${t.points.length} point${t.points.length === 1 ? '' : 's'}`;
+		lines.push(
+			t.kind === 'revision'
+				? `Overlaid for comparison: ${t.label}, ${n}.`
+				: `Measured trace ${t.label}: ${n}.`
+		);
+	}
+	const flags = (input.flags ?? []).filter((f) => f.count > 0);
+	if (flags.length)
+		lines.push(
+			`Open review notes flagged: ${flags.map((f) => `${f.count} on ${f.label}`).join(', ')}.`
+		);
 	return lines.join(' ');
 }

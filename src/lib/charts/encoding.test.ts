@@ -76,6 +76,15 @@ describe('key', () => {
 		]);
 	});
 
+	it('keys open-note flags when the chart carries any, after the marks', () => {
+		const entries = keyEntries([leg('1', 'isobaric')], { limits: true, traces: true, flags: true });
+		expect(entries.map((e) => e.kind)).toEqual(['process', 'limit', 'trace', 'note-flag']);
+		expect(entries.at(-1)!.text).toBe('open review notes (count)');
+		expect(
+			keyEntries([leg('1', 'isobaric')], { limits: false, traces: false }).map((e) => e.kind)
+		).toEqual(['process']);
+	});
+
 	it('wraps onto more rows when narrow', () => {
 		const entries = keyEntries(
 			PROCESS_ORDER.map((p, i) => leg(String(i), p)),

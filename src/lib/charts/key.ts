@@ -9,6 +9,7 @@ export type KeyEntry =
 	| { kind: 'limit'; text: string }
 	| { kind: 'trace'; text: string }
 	| { kind: 'trace-band'; text: string }
+	| { kind: 'note-flag'; text: string }
 	| { kind: 'revision'; text: string };
 
 /**
@@ -17,7 +18,14 @@ export type KeyEntry =
  */
 export function keyEntries(
 	legs: readonly ChartLeg[],
-	extras: { limits: boolean; traces: boolean; bands?: boolean; revisions?: readonly string[] }
+	extras: {
+		limits: boolean;
+		traces: boolean;
+		bands?: boolean;
+		/** open review notes are flagged on the chart */
+		flags?: boolean;
+		revisions?: readonly string[];
+	}
 ): KeyEntry[] {
 	const used = new Set(legs.map((l) => l.process));
 	const out: KeyEntry[] = PROCESS_ORDER.filter((p) => used.has(p)).map((p) => ({
@@ -32,6 +40,7 @@ export function keyEntries(
 	// readings on the saturation line: P and T put them on the isobar across the dome, v open
 	if (extras.bands)
 		out.push({ kind: 'trace-band', text: 'measured at saturation (v not fixed by P, T)' });
+	if (extras.flags) out.push({ kind: 'note-flag', text: 'open review notes (count)' });
 	for (const text of extras.revisions ?? []) out.push({ kind: 'revision', text });
 	return out;
 }

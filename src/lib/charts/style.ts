@@ -59,6 +59,7 @@ export const DRAWING_CSS = `
 .swc-drawing .swc-cp-label { font-size: 10.5px; font-style: italic; fill: ${v.ink}; ${halo} }
 .swc-drawing .swc-key-text { font-size: 11px; fill: ${v.inkSoft}; }
 .swc-drawing .swc-note-flag path { fill: ${v.accent}; stroke: ${v.sheet}; stroke-width: 1.5; }
+.swc-drawing .swc-note-flag-sample { fill: ${v.accent}; stroke: ${v.sheet}; stroke-width: 1; }
 .swc-drawing .swc-note-flag text { font-family: ${MONO}; font-size: 10.5px; font-weight: 600; fill: ${v.accentInk}; text-anchor: middle; }
 `;
 
