@@ -190,8 +190,9 @@ function newtonTRho(
 }
 
 export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): State {
-	const what = `P = ${fmt(P)} Pa and ${which} = ${fmt(y)} ${UNIT[which]}`;
-	const none = () => noStateInRange(fl, what);
+	// the inputs in words, for a refusal only (not built on the way to an answer)
+	const what = () => `P = ${fmt(P)} Pa and ${which} = ${fmt(y)} ${UNIT[which]}`;
+	const none = () => noStateInRange(fl, what());
 	let result: Point | null;
 	if (P < fl.Pc && P >= triplePressure(fl) * (1 - 1e-9)) {
 		const sat = satAtP(fl, P);
@@ -261,7 +262,7 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 						fl,
 						scanIsobar(fl, P, which, y, branch, a.T, b.T, a.rho),
 						undefined,
-						what,
+						what(),
 						none
 					);
 			}
