@@ -11,6 +11,7 @@ import { getCompiledFluid } from '../registry.ts';
 import { olchowySengers, type OlchowySengers } from './forms.ts';
 import type { FluidCorrelation } from './fluids.ts';
 import { propaneConductivity, propaneViscosity } from './data/propane.ts';
+import { isobutaneViscosity } from './data/isobutane.ts';
 
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 
@@ -116,4 +117,15 @@ export const propane: FluidCorrelation = {
 	range: { mu: propaneViscosity.range, k: propaneConductivity.range },
 	mu: (T, rho) => vogelViscosity(propaneViscosity, T, rho),
 	k: (T, rho, mu) => perkinsConductivity('propane', propaneConductivity, T, rho, mu)
+};
+
+export const isobutane: FluidCorrelation = {
+	sources: {
+		mu: 'Vogel, Küchenmeister & Bich (2000), Int. J. Thermophys. 21, 343',
+		k: ''
+	},
+	// the paper's statement of range could not be read here: applied within the equation of state's
+	range: { mu: {}, k: {} },
+	mu: (T, rho) => vogelViscosity(isobutaneViscosity, T, rho),
+	noK: 'The thermal conductivity of isobutane is not built into the engine: the two public copies of Perkins (2002) disagree on its reducing temperature and density, and no published check value was found to settle it.'
 };
