@@ -1,0 +1,131 @@
+/**
+ * Viscosity and thermal conductivity of the light hydrocarbons: propane and isobutane. Each
+ * viscosity is a Vogel et al. correlation (dilute gas from a collision integral, the Rainwater–Friend
+ * initial-density term, a double polynomial in δ and 1/T_r and a close-packed term); each
+ * conductivity a Perkins et al. one (polynomial dilute gas, polynomial residual in δ and T_r, and the
+ * Olchowy–Sengers critical enhancement from this engine's equation of state). Coefficients and the
+ * copies they were read from: data/propane.ts, data/isobutane.ts.
+ */
+import { evalPoint, Point } from '../properties.ts';
+import { getCompiledFluid } from '../registry.ts';
+import { olchowySengers, type OlchowySengers } from './forms.ts';
+import type { FluidCorrelation } from './fluids.ts';
+import { propaneConductivity, propaneViscosity } from './data/propane.ts';
+import { isobutaneViscosity } from './data/isobutane.ts';
+
+const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
+
+/** the shape shared by data/propane.ts and data/isobutane.ts */
+export interface VogelViscosity {
+	dilute: { chapman: number; M: number; sigmaNm: number; epsK: number; a: readonly number[] };
+	initialDensity: { b: readonly number[]; t: readonly number[] };
+	higherOrder: {
+		Tc: number;
+		rhoc: number;
+		e: readonly (readonly number[])[];
+		f: number;
+		g1: number;
+		g2: number;
+	};
+}
+
+export interface PerkinsConductivity {
+	dilute: { Tc: number; A: readonly number[] };
+	residual: { Tc: number; rhoc: number; B1: readonly number[]; B2: readonly number[] };
+	critical: OlchowySengers;
+}
+
+/** η in Pa·s at T (K) and ρ (kg/m³). */
+export function vogelViscosity(v: VogelViscosity, T: number, rho: number): number {
+	const d = v.dilute;
+	const lnT = Math.log(T / d.epsK);
+	let s = 0;
+	for (let i = d.a.length - 1; i >= 0; i--) s = s * lnT + d.a[i];
+	const eta0 = (d.chapman * Math.sqrt(d.M * T)) / (d.sigmaNm * d.sigmaNm * Math.exp(s)); // μPa·s
+	const Ts = T / d.epsK;
+	const id = v.initialDensity;
+	let Bstar = 0;
+	for (let i = 0; i < id.b.length; i++) Bstar += id.b[i] * Ts ** id.t[i];
+	const Beta = AVOGADRO * (d.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
+	const initial = eta0 * Beta * ((rho / d.M) * 1e3); // ρ_n in mol/m³
+	const h = v.higherOrder;
+	const delta = rho / h.rhoc;
+	const Tr = T / h.Tc;
+	let poly = 0;
+	for (let i = 0; i < h.e.length; i++) {
+		const row = h.e[i];
+		let c = 0;
+		for (let j = row.length - 1; j >= 0; j--) c = c / Tr + row[j];
+		poly += c * delta ** (i + 2);
+	}
+	const delta0 = h.g1 * (1 + h.g2 * Math.sqrt(Tr));
+	const closePacked = h.f * (delta / (delta0 - delta) - delta / delta0);
+	return (eta0 + initial + poly + closePacked) * 1e-6;
+}
+
+const point = new Point();
+const pointRef = new Point();
+
+/** Δλ_c (W/(m·K)) with cp, cv and (∂ρ/∂p)_T at (T, ρ) and (Tref, ρ) from the fluid's equation of state. */
+function criticalEnhancement(
+	fluid: string,
+	c: OlchowySengers,
+	T: number,
+	rho: number,
+	mu: number
+): number {
+	if (rho <= 0) return 0;
+	const fl = getCompiledFluid(fluid);
+	evalPoint(fl, T, rho, point, 2);
+	evalPoint(fl, c.Tref, rho, pointRef, 2);
+	if (!(point.dPdrho > 0) || !(pointRef.dPdrho > 0)) return 0;
+	return olchowySengers(c, {
+		T,
+		rho,
+		cp: point.cp,
+		cv: point.cv,
+		mu,
+		drhodP: 1 / point.dPdrho,
+		drhodPref: 1 / pointRef.dPdrho
+	});
+}
+
+/** λ in W/(m·K) at T (K), ρ (kg/m³) and η (Pa·s, for the critical enhancement). */
+export function perkinsConductivity(
+	fluid: string,
+	c: PerkinsConductivity,
+	T: number,
+	rho: number,
+	mu: number
+): number {
+	const Tr0 = T / c.dilute.Tc;
+	let k0 = 0;
+	for (let i = c.dilute.A.length - 1; i >= 0; i--) k0 = k0 * Tr0 + c.dilute.A[i];
+	const r = c.residual;
+	const Tr = T / r.Tc;
+	const delta = rho / r.rhoc;
+	let kr = 0;
+	for (let i = 0; i < r.B1.length; i++) kr += (r.B1[i] + r.B2[i] * Tr) * delta ** (i + 1);
+	return k0 + kr + criticalEnhancement(fluid, c.critical, T, rho, mu);
+}
+
+export const propane: FluidCorrelation = {
+	sources: {
+		mu: 'Vogel, Küchenmeister, Bich & Laesecke (1998), J. Phys. Chem. Ref. Data 27, 947',
+		k: 'Marsh, Perkins & Ramires (2002), J. Chem. Eng. Data 47, 932 (critical enhancement with this engine’s equation of state)'
+	},
+	range: { mu: propaneViscosity.range, k: propaneConductivity.range },
+	mu: (T, rho) => vogelViscosity(propaneViscosity, T, rho),
+	k: (T, rho, mu) => perkinsConductivity('propane', propaneConductivity, T, rho, mu)
+};
+
+export const isobutane: FluidCorrelation = {
+	sources: {
+		mu: 'Vogel, Küchenmeister & Bich (2000), Int. J. Thermophys. 21, 343',
+		k: ''
+	},
+	// the paper's statement of range could not be read here: applied within the equation of state's
+	range: { mu: {}, k: {} },
+	mu: (T, rho) => vogelViscosity(isobutaneViscosity, T, rho),
+	noK: 'The thermal conductivity of isobutane is not built into the engine: the two public copies of Perkins (2002) disagree on its reducing temperature and density, and no published check value was found to settle it.'
+};
