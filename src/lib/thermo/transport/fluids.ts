@@ -9,7 +9,7 @@ import { ammoniaViscosity } from './data/ammonia.ts';
 import { co2Conductivity, co2Viscosity } from './data/carbon-dioxide.ts';
 import { r134aViscosity } from './data/r134a.ts';
 import { lemmonJacobsen2004, lemmonJacobsenCritical } from './data/lemmon-jacobsen-2004.ts';
-import { hydrogen } from './gases.ts';
+import { hydrogen, methane } from './gases.ts';
 
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 const R_MOLAR = 8.314462618; // J/(mol·K), exact (SI 2019)
@@ -181,5 +181,6 @@ export const fluidCorrelations: Record<string, FluidCorrelation> = {
 	'carbon-dioxide': carbonDioxide,
 	ammonia,
 	r134a,
-	hydrogen
+	hydrogen,
+	methane
 };

@@ -8,6 +8,8 @@ import { getCompiledFluid } from '../registry.ts';
 import { olchowySengers, type OlchowySengers } from './forms.ts';
 import type { FluidCorrelation } from './fluids.ts';
 import { hydrogenTransport } from './data/hydrogen.ts';
+import { methaneTransport } from './data/methane.ts';
+import { satAtT } from '../solvers/saturation.ts';
 
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 
@@ -95,5 +97,63 @@ export const hydrogen: FluidCorrelation = {
 		for (let i = 0; i < c.residual.B1.length; i++)
 			dk += (c.residual.B1[i] + c.residual.B2[i] * Tr) * rr ** (i + 1);
 		return num / den + dk + olchowySengersHere('hydrogen', c.critical, T, rho, mu);
+	}
+};
+
+const CH4 = methaneTransport;
+
+/** Friend et al. (1989): the dilute-gas viscosity η0, μPa·s */
+function methaneEta0(T: number): number {
+	const v = CH4.viscosity;
+	const Ts = T / v.epsK;
+	let invOmega = 0;
+	for (let i = 0; i < v.C.length; i++) invOmega += v.C[i] * Ts ** ((i - 3) / 3);
+	return v.eta0 * Math.sqrt(Ts) * invOmega;
+}
+
+/** Methane: Friend, Ely & Ingham (1989), with this engine's equation of state where λ needs one. */
+export const methane: FluidCorrelation = {
+	sources: {
+		mu: 'Friend, Ely & Ingham (1989), J. Phys. Chem. Ref. Data 18, 583',
+		k: 'Friend, Ely & Ingham (1989), J. Phys. Chem. Ref. Data 18, 583 (ideal-gas heat capacity, saturated-vapor density and critical enhancement from this engine’s equation of state; within 3 % of the critical temperature and density the enhancement of the paper’s Eq. 19, not its scaled form)'
+	},
+	range: { mu: CH4.range, k: CH4.range },
+	mu(T, rho) {
+		const v = CH4.viscosity;
+		const delta = rho / CH4.rhoc;
+		const tau = CH4.Tc / T;
+		let num = 0;
+		for (let i = 0; i < v.g.length; i++) num += v.g[i] * delta ** v.r[i] * tau ** v.s[i];
+		const etaR = (v.factor * num) / (1 + v.g9 * delta + v.g10 * delta * tau);
+		return (methaneEta0(T) + etaR) * 1e-6;
+	},
+	k(T, rho, mu) {
+		const c = CH4.conductivity;
+		const fl = getCompiledFluid('methane');
+		const Ts = T / CH4.viscosity.epsK;
+		// c_v⁰/R = −τ² ∂²φ⁰/∂τ² of the ideal part (which does not depend on δ)
+		const cv0R = -fl.idealAt(1, fl.Tr / T, 2).t2;
+		const k0 = c.lambda0 * methaneEta0(T) * (3.75 + (c.f[0] + c.f[1] / Ts) * (cv0R - 1.5));
+		if (!(rho > 0)) return k0 * 1e-3;
+		const delta = rho / CH4.rhoc;
+		const tau = CH4.Tc / T;
+		let sum = 0;
+		for (let i = 0; i < c.j.length; i++) sum += c.j[i] * delta ** c.r[i] * tau ** c.s[i];
+		const deltaSigma = T < fl.Tc && delta < 1 ? satAtT(fl, T).rhoV / CH4.rhoc : 1;
+		const kr = c.factor * (sum + (c.j7 * delta * delta) / deltaSigma);
+		// λc, Eq. 19, with (∂p/∂T)_ρ and (∂p/∂ρ)_T of this engine's equation of state
+		evalPoint(fl, T, rho, at, 2);
+		const X = at.dPdT / (rho * fl.R);
+		const Y = at.dPdrho / (fl.R * T);
+		let kc = 0;
+		if (Y > 0) {
+			const cc = c.critical;
+			const chi = (cc.chi * delta * tau) / Y;
+			const Tp = 1 - T / CH4.Tc;
+			const rp = 1 - delta;
+			const F = Math.exp(-cc.FT * Math.sqrt(Math.abs(Tp)) - cc.Frho * rp * rp - cc.FA * rp);
+			kc = (cc.A / (mu * 1e6 * tau * tau)) * X * X * chi ** cc.power * F;
+		}
+		return (k0 + kr + kc) * 1e-3;
 	}
 };
