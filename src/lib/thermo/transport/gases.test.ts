@@ -139,8 +139,9 @@ describe('methane: Friend, Ely & Ingham (1989), J. Phys. Chem. Ref. Data 18, 583
 		printed(mu(100)(0), '3.95', 'η at 100 K, ρ → 0');
 		printed(mu(400)(0), '14.23', 'η at 400 K, ρ → 0');
 		printed(k(100)(0), '9.83', 'λ at 100 K, ρ → 0');
-		// λ0 takes the ideal-gas heat capacity of the equation of state: this engine's (Setzmann &
-		// Wagner) differs from the paper's by about 2e−4 in c_v⁰ at 400 K, which moves λ0 by 0.007
+		// λ0 takes the ideal-gas heat capacity of the equation of state: Table A1 prints c_p⁰ =
+		// 40.613 J/(mol·K) at 400 K, this engine's ideal part (Setzmann & Wagner) gives 40.608; the
+		// difference, 1.3e−4 of c_p⁰, lowers λ0 by 0.006 mW/(m·K) (49.953 here)
 		printed(k(400)(0), '49.96', 'λ at 400 K, ρ → 0', 2);
 	});
 	it('single-phase states (Table A3) and saturated liquids (Table A2), at the printed density', () => {

@@ -21,8 +21,8 @@
  * coefficient agrees digit for digit (CoolProp writes the residual viscosity factor in Pa·s,
  * 6.43449673e−6, pychemqt in μPa·s, 6.43449673; CoolProp the residual density factor as ×0.011,
  * pychemqt as ÷90.909090909; CoolProp the cut-off as q_D = 2.5e9 m⁻¹, pychemqt as q_D⁻¹ = 0.4e−9 m;
- * both take Tref = 1.5 Tc = 49.7175 K and ν = 0.63). A third public copy (a C++ finite-element
- * framework's hydrogen transport) prints b2 = 3.71513 and b4 = 9.09655 for the virial sum where the
+ * both take Tref = 1.5 Tc = 49.7175 K and ν = 0.63). A third public copy (BELFEM, the Berkeley Lab finite-element
+ * framework, its Helmholtz hydrogen transport) prints b2 = 3.71513 and b4 = 9.09655 for the virial sum where the
  * two copies used here, and two further ones seen, have 3.7151 and 9.0965; the difference moves η by
  * under 1e−5 of itself at the check states, so it is not settled by the checks — the two agreeing
  * copies are used.
