@@ -10,6 +10,7 @@ import { co2Conductivity, co2Viscosity } from './data/carbon-dioxide.ts';
 import { r134aViscosity } from './data/r134a.ts';
 import { lemmonJacobsen2004, lemmonJacobsenCritical } from './data/lemmon-jacobsen-2004.ts';
 import { isobutane, propane } from './hydrocarbons.ts';
+import { hydrogen, methane } from './gases.ts';
 
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 const R_MOLAR = 8.314462618; // J/(mol·K), exact (SI 2019)
@@ -182,5 +183,7 @@ export const fluidCorrelations: Record<string, FluidCorrelation> = {
 	ammonia,
 	r134a,
 	propane,
-	isobutane
+	isobutane,
+	hydrogen,
+	methane
 };
