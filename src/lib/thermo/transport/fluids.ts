@@ -9,6 +9,7 @@ import { ammoniaViscosity } from './data/ammonia.ts';
 import { co2Conductivity, co2Viscosity } from './data/carbon-dioxide.ts';
 import { r134aViscosity } from './data/r134a.ts';
 import { lemmonJacobsen2004, lemmonJacobsenCritical } from './data/lemmon-jacobsen-2004.ts';
+import { r1234yfTransport, r1234zeETransport } from './refrigerants.ts';
 
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 const R_MOLAR = 8.314462618; // J/(mol·K), exact (SI 2019)
@@ -179,5 +180,7 @@ export const fluidCorrelations: Record<string, FluidCorrelation> = {
 	air: lemmonJacobsen('air'),
 	'carbon-dioxide': carbonDioxide,
 	ammonia,
-	r134a
+	r134a,
+	r1234yf: r1234yfTransport,
+	'r1234ze-e': r1234zeETransport
 };
