@@ -138,7 +138,8 @@ describe('R-134a viscosity: Huber, Laesecke & Perkins (2003), Ind. Eng. Chem. Re
 		for (const [T, x, mu] of rows) {
 			const t = transport(fixState('r134a', { T, x }));
 			expect(Math.abs(t.mu! / mu - 1), `${T} K, x = ${x}: ${t.mu}`).toBeLessThan(1e-4);
-			expect(t.absent.k?.code).toBe('no-correlation');
+			// the conductivity (Perkins et al. 2000) is checked in refrigerants.test.ts
+			expect(t.k).toBeGreaterThan(0);
 		}
 	});
 });

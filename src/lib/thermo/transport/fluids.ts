@@ -7,7 +7,7 @@ import { getCompiledFluid } from '../registry.ts';
 import { collisionDilute, olchowySengers, tauDeltaSum, type OlchowySengers } from './forms.ts';
 import { ammoniaViscosity } from './data/ammonia.ts';
 import { co2Conductivity, co2Viscosity } from './data/carbon-dioxide.ts';
-import { r134aViscosity } from './data/r134a.ts';
+import { r134aConductivity, r134aViscosity } from './data/r134a.ts';
 import { lemmonJacobsen2004, lemmonJacobsenCritical } from './data/lemmon-jacobsen-2004.ts';
 import { r1234yfTransport, r1234zeETransport } from './refrigerants.ts';
 
@@ -136,7 +136,7 @@ function diluteAndInitial(
 const r134a: FluidCorrelation = {
 	sources: {
 		mu: 'Huber, Laesecke & Perkins (2003), Ind. Eng. Chem. Res. 42, 3163 (its R-134a correlation)',
-		k: ''
+		k: 'Perkins, Laesecke, Howley, Ramires, Gurova & Cusco (2000), NISTIR 6605 (critical enhancement with this engine’s equation of state)'
 	},
 	range: { mu: {}, k: {} },
 	mu(T, rho) {
@@ -151,7 +151,14 @@ const r134a: FluidCorrelation = {
 		h += r.c7 * (1 / (delta0 - delta) - 1 / delta0);
 		return (diluteAndInitial(v.dilute, v.initialDensity, T, rho) + h * 1e3) * 1e-6;
 	},
-	noK: 'The thermal conductivity of R-134a is not built into the engine: Huber, Laesecke & Perkins (2003) give it by extended corresponding states on a reference fluid not built here, and print no check values.'
+	k(T, rho, mu) {
+		const c = r134aConductivity;
+		const k0 = c.dilute.a[0] + c.dilute.a[1] * T;
+		const d = rho / c.residual.rhoRed;
+		let kr = 0;
+		for (let i = c.residual.b.length - 1; i >= 0; i--) kr = (kr + c.residual.b[i]) * d;
+		return k0 + c.residual.lambdaRed * kr + enhancement('r134a', c.critical, T, rho, mu);
+	}
 };
 
 const ammonia: FluidCorrelation = {

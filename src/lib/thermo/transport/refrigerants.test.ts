@@ -131,3 +131,50 @@ describe('transport(state) for R-1234yf and R-1234ze(E)', () => {
 		expect(t.absent.k?.code).toBe('two-phase');
 	});
 });
+
+describe('R-134a thermal conductivity: Perkins, Laesecke, Howley, Ramires, Gurova & Cusco (2000), NISTIR 6605', () => {
+	// The report prints no check values for the correlation; CoolProp's src/Tests/CoolProp-Tests.cpp
+	// (commit ea27c639) gives REFPROP 9.1's values "since no data provided", W/(m·K). The dilute rows
+	// are at ρ = 1e−10 mol/m³; the saturated rows at this engine's saturated densities (Tillner-Roth
+	// & Baehr, the equation REFPROP 9.1 uses for R-134a).
+	it('at zero density within 1e−6 of REFPROP 9.1 (λ0 alone)', () => {
+		for (const [T, k] of [
+			[240, 0.008698768],
+			[330, 0.015907606]
+		])
+			expect(
+				Math.abs(transportAt('r134a', T, 1e-10 * 0.102032)!.k! / k - 1),
+				`${T} K`
+			).toBeLessThan(1e-6);
+	});
+	it('on the saturation line within 1e−6 of REFPROP 9.1 (background and critical enhancement)', () => {
+		const rows: [number, 0 | 1, number][] = [
+			[330, 0, 0.06746432253],
+			[240, 1, 0.00873242359]
+		];
+		for (const [T, x, k] of rows) {
+			const t = transport(fixState('r134a', { T, x }));
+			expect(Math.abs(t.k! / k - 1), `${T} K, x = ${x}: ${t.k}`).toBeLessThan(1e-6);
+			expect(t.sources.k).toMatch(/NISTIR 6605/);
+		}
+	});
+	it('a compressed liquid and a superheated vapour have μ, k and Pr, as transportAt gives them', () => {
+		for (const inputs of [
+			{ T: 280, P: 2e6 },
+			{ T: 320, P: 0.2e6 }
+		]) {
+			const s = fixState('r134a', inputs);
+			const t = transport(s);
+			const at = transportAt('r134a', s.T, s.rho)!;
+			expect(t.k).toBe(at.k);
+			expect(t.Pr).toBeCloseTo((at.mu * s.cp!) / at.k!, 12);
+		}
+		// from memory: liquid R-134a near 280 K conducts about 0.09 W/(m·K); its vapour about 0.014
+		const liquid = transport(fixState('r134a', { T: 280, P: 2e6 }));
+		expect(liquid.k!).toBeGreaterThan(0.08);
+		expect(liquid.k!).toBeLessThan(0.1);
+		const vapour = transport(fixState('r134a', { T: 320, P: 0.2e6 }));
+		expect(vapour.k!).toBeGreaterThan(0.012);
+		expect(vapour.k!).toBeLessThan(0.017);
+	});
+});
