@@ -14,11 +14,18 @@ import { r1234yfTransport, r1234zeETransport } from './refrigerants.ts';
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 const R_MOLAR = 8.314462618; // J/(mol·K), exact (SI 2019)
 
+/** where a correlation holds (K, Pa); a bound left out is the equation of state's */
+export interface TransportRange {
+	Tmin?: number;
+	Tmax?: number;
+	Pmax?: number;
+}
+
 export interface FluidCorrelation {
 	/** the publications, for `sources` */
 	sources: { mu: string; k: string };
 	/** where each correlation is applied (beyond the equation of state's own range) */
-	range: { mu: { Tmax?: number; Pmax?: number }; k: { Tmax?: number; Pmax?: number } };
+	range: { mu: TransportRange; k: TransportRange };
 	mu(T: number, rho: number): number;
 	/** needs μ (Pa·s) for the critical enhancement; absent where no conductivity correlation is built */
 	k?(T: number, rho: number, mu: number): number;

@@ -18,7 +18,7 @@ import {
 	waterViscosity
 } from './water.ts';
 import { muleroSource, muleroTension } from './data/surface-tension.ts';
-import { fluidCorrelations } from './fluids.ts';
+import { fluidCorrelations, type TransportRange } from './fluids.ts';
 import { tensionSum } from './forms.ts';
 
 export type TransportName = 'mu' | 'k' | 'Pr' | 'sigma';
@@ -110,8 +110,10 @@ export function transport(state: State): Transport {
 		twoPhase(out);
 		return out;
 	}
-	const inRange = (r: { Tmax?: number; Pmax?: number }) =>
-		(r.Tmax === undefined || T <= r.Tmax) && (r.Pmax === undefined || P <= r.Pmax);
+	const inRange = (r: TransportRange) =>
+		(r.Tmin === undefined || T >= r.Tmin) &&
+		(r.Tmax === undefined || T <= r.Tmax) &&
+		(r.Pmax === undefined || P <= r.Pmax);
 	const mu = corr.mu(T, rho);
 	if (inRange(corr.range.mu) && Number.isFinite(mu) && mu > 0) {
 		out.mu = mu;
@@ -159,19 +161,19 @@ export function transportAt(
 	return { mu, k: corr.k ? corr.k(T, rho, mu) : null };
 }
 
-function rangeReason(
-	what: string,
-	r: { Tmax?: number; Pmax?: number },
-	T: number,
-	P: number
-): string {
-	const lim = [
-		r.Tmax !== undefined ? `up to ${fmt(r.Tmax)} K` : '',
-		r.Pmax !== undefined ? `up to ${fmt(r.Pmax / 1e6)} MPa` : ''
-	]
+function rangeReason(what: string, r: TransportRange, T: number, P: number): string {
+	const temperature =
+		r.Tmin !== undefined && r.Tmax !== undefined
+			? `from ${fmt(r.Tmin)} K to ${fmt(r.Tmax)} K`
+			: r.Tmin !== undefined
+				? `from ${fmt(r.Tmin)} K`
+				: r.Tmax !== undefined
+					? `up to ${fmt(r.Tmax)} K`
+					: '';
+	const lim = [temperature, r.Pmax !== undefined ? `up to ${fmt(r.Pmax / 1e6)} MPa` : '']
 		.filter(Boolean)
 		.join(' and ');
-	return `The ${what} correlation holds ${lim || 'within the equation of state'}; this state is at ${fmt(T, r.Tmax ?? T)} K, ${fmt(P, r.Pmax ?? P)} Pa.`;
+	return `The ${what} correlation holds ${lim || 'within the equation of state'}; this state is at ${fmt(T, r.Tmin ?? T, r.Tmax ?? T)} K, ${fmt(P, r.Pmax ?? P)} Pa.`;
 }
 
 function onDome(state: State): boolean {

@@ -24,7 +24,7 @@ export interface HuberAssaelViscosity {
 	/** Δη = δ^(2/3) Tr^(1/2) [c0 + c1 δ + c2 δ² + (c3 δ + c4 δ⁶ + c5 δ Tr² + c6 δ⁵ Tr)/(c7 Tr + c8 δ Tr)] */
 	residual: { Tc: number; rhocMolar: number; c: readonly number[] };
 	/** the paper's range of validity (K, Pa) */
-	range: { Tmax: number; Pmax: number };
+	range: { Tmin: number; Tmax: number; Pmax: number };
 }
 
 /** η in Pa·s at T (K) and ρ (kg/m³). */

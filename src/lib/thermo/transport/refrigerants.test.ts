@@ -124,6 +124,13 @@ describe('transport(state) for R-1234yf and R-1234ze(E)', () => {
 		expect(yf.absent.Pr?.code).toBe('out-of-range');
 		const ze = transport(fixState('r1234ze-e', { T: 300, P: 40e6 }));
 		expect(ze.mu).toBeGreaterThan(0);
+		// below the paper's lower limit (R-1234yf's triple point then, 220 K; this engine's equation
+		// of state reaches 121.6 K)
+		const cold = transport(fixState('r1234yf', { T: 200, x: 0 }));
+		expect(cold.mu).toBeNull();
+		expect(cold.absent.mu?.code).toBe('out-of-range');
+		expect(cold.absent.mu?.reason).toMatch(/from 220 K to 410 K/);
+		expect(transport(fixState('r1234yf', { T: 221, x: 0 })).mu).toBeGreaterThan(0);
 	});
 	it('a saturated mixture has no μ, k or Pr', () => {
 		const t = transport(fixState('r1234yf', { T: 280, x: 0.5 }));

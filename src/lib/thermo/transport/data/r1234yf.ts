@@ -50,7 +50,7 @@ export const r1234yfViscosity: HuberAssaelViscosity = {
 		rhocMolar: 4.17,
 		c: [-0.1942591, -2.079577245, 0, -43.47027288, 0, 0, 0, -3.53682791, 1]
 	},
-	range: { Tmax: 410, Pmax: 30e6 }
+	range: { Tmin: 220, Tmax: 410, Pmax: 30e6 }
 };
 
 export const r1234yfConductivity: PerkinsHuberConductivity = {

@@ -52,7 +52,7 @@ export const r1234zeEViscosity: HuberAssaelViscosity = {
 		rhocMolar: 4.29,
 		c: [8.61691913, 0, 20.83024738, 0, 0.5424369, -10.49684841, -1.38137689, 1, 0]
 	},
-	range: { Tmax: 420, Pmax: 100e6 }
+	range: { Tmin: 169, Tmax: 420, Pmax: 100e6 }
 };
 
 export const r1234zeEConductivity: PerkinsHuberConductivity = {
