@@ -73,7 +73,7 @@ export function transport(state: State): Transport {
 			code: 'no-correlation',
 			reason:
 				state.fluid === 'r1234ze-e'
-					? 'The two public copies of the surface-tension coefficients for R-1234ze(E) disagree in sign; it is left out until the paper is read.'
+					? 'The public copies of the surface-tension coefficients for R-1234ze(E) disagree in sign (two against one) and none prints a check value to settle it; it is left out until the paper is read.'
 					: state.fluid === 'air'
 						? 'Air is a mixture: the surface-tension correlations built here (Mulero et al. 2012) are for pure fluids, and no published correlation for air is built.'
 						: `No published surface-tension correlation for ${state.fluid} is built into the engine.`
