@@ -53,7 +53,7 @@ const SOURCES = {
 
 /** Why μ and k are absent for the fluids without a built correlation. */
 const NOT_BUILT: Record<string, string> = {
-	'r1234ze-e': 'No correlation with printed check values is built into the engine for R-1234ze(E).'
+	r32: 'No viscosity or thermal conductivity correlation for R-32 is built into the engine: its fluid-specific viscosity correlation (Velliadou et al. 2022) has only one public copy of its coefficients, and its conductivity is published only as an extended corresponding-states model.'
 };
 
 /**

@@ -7,6 +7,8 @@
  *   background): a polynomial dilute-gas term in Tr and a residual Σ (B1,i + B2,i Tr) δ^i.
  */
 
+import type { OlchowySengers } from './forms.ts';
+
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 
 export interface HuberAssaelViscosity {
@@ -58,6 +60,8 @@ export interface PerkinsHuberConductivity {
 	dilute: { Tc: number; a: readonly number[] };
 	/** Δλ = Σ_{i=1..n} (B1,i + B2,i Tr) δ^i, δ = ρ/ρc (kg/m³), W/(m·K) */
 	residual: { Tc: number; rhoc: number; B1: readonly number[]; B2: readonly number[] };
+	/** the paper's critical enhancement (Olchowy–Sengers), SI */
+	critical: OlchowySengers;
 }
 
 /** λ0 + Δλ in W/(m·K), without the critical enhancement, at T (K) and ρ (kg/m³). */

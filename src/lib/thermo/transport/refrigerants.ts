@@ -50,7 +50,7 @@ const PERKINS_HUBER = `Perkins & Huber (2011), J. Chem. Eng. Data 56, 4868 (crit
 function hfo(
 	fluid: string,
 	v: HuberAssaelViscosity,
-	k: PerkinsHuberConductivity & { critical: OlchowySengers }
+	k: PerkinsHuberConductivity
 ): FluidCorrelation {
 	return {
 		sources: { mu: HUBER_ASSAEL, k: PERKINS_HUBER },
