@@ -138,7 +138,8 @@ describe('R-134a viscosity: Huber, Laesecke & Perkins (2003), Ind. Eng. Chem. Re
 		for (const [T, x, mu] of rows) {
 			const t = transport(fixState('r134a', { T, x }));
 			expect(Math.abs(t.mu! / mu - 1), `${T} K, x = ${x}: ${t.mu}`).toBeLessThan(1e-4);
-			expect(t.absent.k?.code).toBe('no-correlation');
+			// the conductivity (Perkins et al. 2000) is checked in refrigerants.test.ts
+			expect(t.k).toBeGreaterThan(0);
 		}
 	});
 });
@@ -201,7 +202,7 @@ describe('transport(state) for the other fluids', () => {
 		const t = transport(fixState('r32', { T: 273.15, x: 1 }));
 		expect(t.mu).toBeNull();
 		expect(t.absent.mu?.code).toBe('no-correlation');
-		expect(t.absent.mu?.reason).toMatch(/r32/);
+		expect(t.absent.mu?.reason).toMatch(/R-32.*one public copy/);
 		expect(t.sigma).toBeGreaterThan(0);
 		const ze = transport(fixState('r1234ze-e', { T: 273.15, x: 0 }));
 		expect(ze.sigma).toBeNull();

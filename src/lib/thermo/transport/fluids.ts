@@ -7,19 +7,27 @@ import { getCompiledFluid } from '../registry.ts';
 import { collisionDilute, olchowySengers, tauDeltaSum, type OlchowySengers } from './forms.ts';
 import { ammoniaViscosity } from './data/ammonia.ts';
 import { co2Conductivity, co2Viscosity } from './data/carbon-dioxide.ts';
-import { r134aViscosity } from './data/r134a.ts';
+import { r134aConductivity, r134aViscosity } from './data/r134a.ts';
 import { lemmonJacobsen2004, lemmonJacobsenCritical } from './data/lemmon-jacobsen-2004.ts';
 import { isobutane, propane } from './hydrocarbons.ts';
 import { hydrogen, methane } from './gases.ts';
+import { r1234yfTransport, r1234zeETransport } from './refrigerants.ts';
 
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 const R_MOLAR = 8.314462618; // J/(mol·K), exact (SI 2019)
+
+/** where a correlation holds (K, Pa); a bound left out is the equation of state's */
+export interface TransportRange {
+	Tmin?: number;
+	Tmax?: number;
+	Pmax?: number;
+}
 
 export interface FluidCorrelation {
 	/** the publications, for `sources` */
 	sources: { mu: string; k: string };
 	/** where each correlation is applied (beyond the equation of state's own range) */
-	range: { mu: { Tmax?: number; Pmax?: number }; k: { Tmax?: number; Pmax?: number } };
+	range: { mu: TransportRange; k: TransportRange };
 	mu(T: number, rho: number): number;
 	/** needs μ (Pa·s) for the critical enhancement; absent where no conductivity correlation is built */
 	k?(T: number, rho: number, mu: number): number;
@@ -137,7 +145,7 @@ function diluteAndInitial(
 const r134a: FluidCorrelation = {
 	sources: {
 		mu: 'Huber, Laesecke & Perkins (2003), Ind. Eng. Chem. Res. 42, 3163 (its R-134a correlation)',
-		k: ''
+		k: 'Perkins, Laesecke, Howley, Ramires, Gurova & Cusco (2000), NISTIR 6605 (critical enhancement with this engine’s equation of state)'
 	},
 	range: { mu: {}, k: {} },
 	mu(T, rho) {
@@ -152,7 +160,14 @@ const r134a: FluidCorrelation = {
 		h += r.c7 * (1 / (delta0 - delta) - 1 / delta0);
 		return (diluteAndInitial(v.dilute, v.initialDensity, T, rho) + h * 1e3) * 1e-6;
 	},
-	noK: 'The thermal conductivity of R-134a is not built into the engine: Huber, Laesecke & Perkins (2003) give it by extended corresponding states on a reference fluid not built here, and print no check values.'
+	k(T, rho, mu) {
+		const c = r134aConductivity;
+		const k0 = c.dilute.a[0] + c.dilute.a[1] * T;
+		const d = rho / c.residual.rhoRed;
+		let kr = 0;
+		for (let i = c.residual.b.length - 1; i >= 0; i--) kr = (kr + c.residual.b[i]) * d;
+		return k0 + c.residual.lambdaRed * kr + enhancement('r134a', c.critical, T, rho, mu);
+	}
 };
 
 const ammonia: FluidCorrelation = {
@@ -185,5 +200,7 @@ export const fluidCorrelations: Record<string, FluidCorrelation> = {
 	propane,
 	isobutane,
 	hydrogen,
-	methane
+	methane,
+	r1234yf: r1234yfTransport,
+	'r1234ze-e': r1234zeETransport
 };

@@ -1,8 +1,8 @@
 /**
  * Transport and interface properties of a state: viscosity, thermal conductivity, Prandtl number and
  * surface tension, in SI (Pa·s, W/(m·K), –, N/m), each either a number or absent with a reason.
- * Water: IAPWS releases (water.ts). Nitrogen, argon, oxygen, carbon dioxide; ammonia's and
- * R-134a's viscosity: fluids.ts. Surface
+ * Water: IAPWS releases (water.ts). Nitrogen, argon, oxygen, carbon dioxide, R-134a; ammonia's
+ * viscosity: fluids.ts. R-1234yf and R-1234ze(E): refrigerants.ts. Surface
  * tension of the other fluids: data/surface-tension.ts. A value without a correlation is absent with
  * `no-correlation` and a reason. The state may come from IAPWS-95 (fixState) or IAPWS-IF97 (if97State…): the
  * correlations take its ρ and T, and its cp, cv and speed of sound for the conductivity's critical
@@ -18,7 +18,7 @@ import {
 	waterViscosity
 } from './water.ts';
 import { muleroSource, muleroTension } from './data/surface-tension.ts';
-import { fluidCorrelations } from './fluids.ts';
+import { fluidCorrelations, type TransportRange } from './fluids.ts';
 import { tensionSum } from './forms.ts';
 
 export type TransportName = 'mu' | 'k' | 'Pr' | 'sigma';
@@ -53,7 +53,7 @@ const SOURCES = {
 
 /** Why μ and k are absent for the fluids without a built correlation. */
 const NOT_BUILT: Record<string, string> = {
-	'r1234ze-e': 'No correlation with printed check values is built into the engine for R-1234ze(E).'
+	r32: 'No viscosity or thermal conductivity correlation for R-32 is built into the engine: its fluid-specific viscosity correlation (Velliadou et al. 2022) has only one public copy of its coefficients, and its conductivity is published only as an extended corresponding-states model.'
 };
 
 /**
@@ -73,7 +73,7 @@ export function transport(state: State): Transport {
 			code: 'no-correlation',
 			reason:
 				state.fluid === 'r1234ze-e'
-					? 'The two public copies of the surface-tension coefficients for R-1234ze(E) disagree in sign; it is left out until the paper is read.'
+					? 'The public copies of the surface-tension coefficients for R-1234ze(E) disagree in sign (two against one) and none prints a check value to settle it; it is left out until the paper is read.'
 					: state.fluid === 'air'
 						? 'Air is a mixture: the surface-tension correlations built here (Mulero et al. 2012) are for pure fluids, and no published correlation for air is built.'
 						: `No published surface-tension correlation for ${state.fluid} is built into the engine.`
@@ -110,8 +110,10 @@ export function transport(state: State): Transport {
 		twoPhase(out);
 		return out;
 	}
-	const inRange = (r: { Tmax?: number; Pmax?: number }) =>
-		(r.Tmax === undefined || T <= r.Tmax) && (r.Pmax === undefined || P <= r.Pmax);
+	const inRange = (r: TransportRange) =>
+		(r.Tmin === undefined || T >= r.Tmin) &&
+		(r.Tmax === undefined || T <= r.Tmax) &&
+		(r.Pmax === undefined || P <= r.Pmax);
 	const mu = corr.mu(T, rho);
 	if (inRange(corr.range.mu) && Number.isFinite(mu) && mu > 0) {
 		out.mu = mu;
@@ -159,19 +161,19 @@ export function transportAt(
 	return { mu, k: corr.k ? corr.k(T, rho, mu) : null };
 }
 
-function rangeReason(
-	what: string,
-	r: { Tmax?: number; Pmax?: number },
-	T: number,
-	P: number
-): string {
-	const lim = [
-		r.Tmax !== undefined ? `up to ${fmt(r.Tmax)} K` : '',
-		r.Pmax !== undefined ? `up to ${fmt(r.Pmax / 1e6)} MPa` : ''
-	]
+function rangeReason(what: string, r: TransportRange, T: number, P: number): string {
+	const temperature =
+		r.Tmin !== undefined && r.Tmax !== undefined
+			? `from ${fmt(r.Tmin)} K to ${fmt(r.Tmax)} K`
+			: r.Tmin !== undefined
+				? `from ${fmt(r.Tmin)} K`
+				: r.Tmax !== undefined
+					? `up to ${fmt(r.Tmax)} K`
+					: '';
+	const lim = [temperature, r.Pmax !== undefined ? `up to ${fmt(r.Pmax / 1e6)} MPa` : '']
 		.filter(Boolean)
 		.join(' and ');
-	return `The ${what} correlation holds ${lim || 'within the equation of state'}; this state is at ${fmt(T, r.Tmax ?? T)} K, ${fmt(P, r.Pmax ?? P)} Pa.`;
+	return `The ${what} correlation holds ${lim || 'within the equation of state'}; this state is at ${fmt(T, r.Tmin ?? T, r.Tmax ?? T)} K, ${fmt(P, r.Pmax ?? P)} Pa.`;
 }
 
 function onDome(state: State): boolean {

@@ -8,6 +8,8 @@
  * and pychemqt lib/mEoS/R134a.py ("Huber (2003)" visco1 and _closePacked). They agree except σ, given
  * as 0.468932 nm by CoolProp and 0.46893 nm by pychemqt (4e−6 apart; the longer one is kept).
  */
+import type { OlchowySengers } from '../forms.ts';
+
 export const r134aViscosity = {
 	/** η0 = 0.021357 √(M T)/(σ² S*) μPa·s (M g/mol, σ nm), ln S* = Σ a_i (ln T*)^i, T* = T/(ε/k) */
 	dilute: {
@@ -37,4 +39,44 @@ export const r134aViscosity = {
 		c9: 0.100035295,
 		c10: 3.163695636
 	}
+} as const;
+
+/**
+ * R-134a's thermal conductivity: Perkins, Laesecke, Howley, Ramires, Gurova & Cusco (2000),
+ * "Experimental Thermal Conductivity Values for the IUPAC Round-Robin Sample of
+ * 1,1,1,2-Tetrafluoroethane (R134a)", NIST Interagency Report NISTIR 6605, doi:10.6028/NIST.IR.6605:
+ * λ = λ0(T) + Δλ(ρ) + Δλc(ρ, T), λ0 = a0 + a1 T, Δλ = λ_red Σ b_i (ρ/ρ_red)^i (W/(m·K)), and the
+ * simplified Olchowy–Sengers critical enhancement.
+ * Copies compared term by term: CoolProp dev/fluids/R134a.json (TRANSPORT.conductivity, stored with
+ * λ_red folded into the b_i; commit ea27c639), pychemqt lib/mEoS/R134a.py ("Perkins (2000)" thermo0;
+ * commit a26588c5), IDAES idaes/models/properties/general_helmholtz/components/parameters/r134a.py
+ * (thermal_conductivity_rule; commit a60fbf81) and HelmholtzMedia
+ * HelmholtzMedia/HelmholtzFluids/R134a/package.mo (thermalConductivityCoefficientsR134a; commit
+ * 2045ee57). Every coefficient agrees (CoolProp stores q_D = 1892020000 m⁻¹ = 1/5.285356e−10 m).
+ * The critical point scaling the enhancement is the equation of state's (374.21 K, 511.9 kg/m³,
+ * 4.05928 MPa) in pychemqt, CoolProp and HelmholtzMedia; IDAES takes ρ_red (515.25 kg/m³) for ρc
+ * there, which changes λ by under 1e−4 relative except within a few kelvin of Tc.
+ */
+export const r134aConductivity = {
+	/** λ0 = a0 + a1 T, W/(m·K), T in K */
+	dilute: { a: [-1.05248e-2, 8.00982e-5] },
+	/** Δλ = λ_red Σ b_i (ρ/ρ_red)^i, i = 1…4; ρ_red = 5.049886 mol/dm³ × 102.032 g/mol */
+	residual: {
+		lambdaRed: 2.055e-3,
+		rhoRed: 5.049886 * 102.032,
+		b: [1.836526, 5.126143, -1.436883, 0.6261441]
+	},
+	/** the critical enhancement's terms (Olchowy–Sengers), SI */
+	critical: {
+		Tc: 374.21,
+		rhoc: 511.9,
+		Pc: 4.05928e6,
+		Tref: 561.411,
+		xi0: 1.94e-10,
+		Gamma: 0.0496,
+		nu: 0.63,
+		gamma: 1.239,
+		qDinv: 5.285356e-10,
+		R0: 1.03
+	} satisfies OlchowySengers
 } as const;

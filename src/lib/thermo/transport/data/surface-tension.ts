@@ -8,7 +8,10 @@
  * Every term below agrees between the two copies.
  * Not here: water (IAPWS R1-76(2014), water.ts); R-1234ze(E), whose copies (CoolProp, Mulero &
  * Cachadiña 2014) disagree on the sign of the second term (+0.8247 against −0.8247 N/m), so it is
- * left absent until the paper itself is read.
+ * left absent until the paper itself is read. A third copy, CalebBell/chemicals
+ * chemicals/Interface/MuleroCachadinaParameters.tsv (commit 82faef90), has −0.8247 like pychemqt's,
+ * but none of the three prints a check value, and the two signs differ by 0.08 mN/m at 300 K and
+ * 1.4 mN/m (10 %) at 253 K, so two copies against one does not settle it.
  */
 import type { TensionSum } from '../forms.ts';
 
