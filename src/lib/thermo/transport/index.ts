@@ -1,8 +1,9 @@
 /**
  * Transport and interface properties of a state: viscosity, thermal conductivity, Prandtl number and
  * surface tension, in SI (Pa·s, W/(m·K), –, N/m), each either a number or absent with a reason.
- * Water: IAPWS releases (water.ts). Nitrogen, argon, oxygen, carbon dioxide, R-134a; ammonia's
- * viscosity: fluids.ts. R-1234yf and R-1234ze(E): refrigerants.ts. Surface
+ * Water: IAPWS releases (water.ts). Nitrogen, argon, oxygen, air, carbon dioxide, R-134a; ammonia's
+ * viscosity: fluids.ts. R-1234yf and R-1234ze(E): refrigerants.ts. Propane; isobutane's viscosity:
+ * hydrocarbons.ts. Hydrogen and methane: gases.ts. R-32 has none (NOT_BUILT says why). Surface
  * tension of the other fluids: data/surface-tension.ts. A value without a correlation is absent with
  * `no-correlation` and a reason. The state may come from IAPWS-95 (fixState) or IAPWS-IF97 (if97State…): the
  * correlations take its ρ and T, and its cp, cv and speed of sound for the conductivity's critical
