@@ -5,21 +5,11 @@
  * paper's name without a table number.
  */
 import { describe, expect, it } from 'vitest';
+import { printed } from './printed.test-support.ts';
 import { fixState, transport } from '../index.ts';
 import { tensionSum } from './forms.ts';
 import { muleroTension } from './data/surface-tension.ts';
 import { transportAt } from './index.ts';
-
-/** |actual − printed| within half a unit of the printed figure's last digit, times `slack` */
-function printed(actual: number, text: string, what: string, slack = 1): void {
-	const [mant, exp] = text.toLowerCase().split('e');
-	const decimals = mant.includes('.') ? mant.split('.')[1].length : 0;
-	const tol = 0.5 * 10 ** (-decimals + (exp ? Number(exp) : 0)) * slack * (1 + 1e-9);
-	expect(
-		Math.abs(actual - Number(text)),
-		`${what}: ${actual} vs printed ${text}`
-	).toBeLessThanOrEqual(tol);
-}
 
 describe('nitrogen, argon, oxygen and air: Lemmon & Jacobsen (2004), Int. J. Thermophys. 25, 21', () => {
 	// Lemmon & Jacobsen (2004), their table of check values (T, ρ in mol/dm³ → η μPa·s, λ mW/(m·K)),

@@ -2,9 +2,8 @@
  * Viscosity and thermal conductivity of the fluids other than water, at (T, ρ) from the fluid's own
  * equation of state (cp, cv and (∂ρ/∂p)_T for the critical enhancement). Coefficients: data/*.ts.
  */
-import { evalPoint, Point } from '../properties.ts';
-import { getCompiledFluid } from '../registry.ts';
-import { collisionDilute, olchowySengers, tauDeltaSum, type OlchowySengers } from './forms.ts';
+import { criticalEnhancement } from './enhancement.ts';
+import { collisionDilute, tauDeltaSum } from './forms.ts';
 import { ammoniaViscosity } from './data/ammonia.ts';
 import { co2Conductivity, co2Viscosity } from './data/carbon-dioxide.ts';
 import { r134aConductivity, r134aViscosity } from './data/r134a.ts';
@@ -35,27 +34,6 @@ export interface FluidCorrelation {
 	noK?: string;
 }
 
-const point = new Point();
-const pointRef = new Point();
-
-/** λc from the fluid's equation of state at (T, ρ) and (Tref, ρ). */
-function enhancement(fluid: string, c: OlchowySengers, T: number, rho: number, mu: number): number {
-	if (rho <= 0) return 0;
-	const fl = getCompiledFluid(fluid);
-	evalPoint(fl, T, rho, point, 2);
-	evalPoint(fl, c.Tref, rho, pointRef, 2);
-	if (!(point.dPdrho > 0) || !(pointRef.dPdrho > 0)) return 0;
-	return olchowySengers(c, {
-		T,
-		rho,
-		cp: point.cp,
-		cv: point.cv,
-		mu,
-		drhodP: 1 / point.dPdrho,
-		drhodPref: 1 / pointRef.dPdrho
-	});
-}
-
 const LJ = 'Lemmon & Jacobsen (2004), Int. J. Thermophys. 25, 21';
 
 function lemmonJacobsen(fluid: 'nitrogen' | 'argon' | 'oxygen' | 'air'): FluidCorrelation {
@@ -76,7 +54,7 @@ function lemmonJacobsen(fluid: 'nitrogen' | 'argon' | 'oxygen' | 'air'): FluidCo
 			let k0 = cd.N1 * eta0;
 			for (let i = 0; i < cd.N.length; i++) k0 += cd.N[i] * tau ** cd.t[i];
 			const kr = tauDeltaSum(f.conductivity, tau, rho / rhoc);
-			return (k0 + kr) * 1e-3 + enhancement(fluid, critical, T, rho, mu);
+			return (k0 + kr) * 1e-3 + criticalEnhancement(fluid, critical, T, rho, mu);
 		}
 	};
 }
@@ -120,7 +98,7 @@ const carbonDioxide: FluidCorrelation = {
 		const rr = rho / c.residual.rhoc;
 		let kr = 0;
 		for (let i = 0; i < 6; i++) kr += (c.residual.B1[i] + c.residual.B2[i] * Tr) * rr ** (i + 1);
-		return k0 + kr + enhancement('carbon-dioxide', c.critical, T, rho, mu);
+		return k0 + kr + criticalEnhancement('carbon-dioxide', c.critical, T, rho, mu);
 	}
 };
 
@@ -166,7 +144,7 @@ const r134a: FluidCorrelation = {
 		const d = rho / c.residual.rhoRed;
 		let kr = 0;
 		for (let i = c.residual.b.length - 1; i >= 0; i--) kr = (kr + c.residual.b[i]) * d;
-		return k0 + c.residual.lambdaRed * kr + enhancement('r134a', c.critical, T, rho, mu);
+		return k0 + c.residual.lambdaRed * kr + criticalEnhancement('r134a', c.critical, T, rho, mu);
 	}
 };
 

@@ -4,20 +4,10 @@
  * it.
  */
 import { describe, expect, it } from 'vitest';
+import { printed } from './printed.test-support.ts';
 import { fixState, transport } from '../index.ts';
 import { transportAt } from './index.ts';
 import { hydrogen } from './gases.ts';
-
-/** |actual − printed| within half a unit of the printed figure's last digit, times `slack` */
-function printed(actual: number, text: string, what: string, slack = 1): void {
-	const [mant, exp] = text.toLowerCase().split('e');
-	const decimals = mant.includes('.') ? mant.split('.')[1].length : 0;
-	const tol = 0.5 * 10 ** (-decimals + (exp ? Number(exp) : 0)) * slack * (1 + 1e-9);
-	expect(
-		Math.abs(actual - Number(text)),
-		`${what}: ${actual} vs printed ${text}`
-	).toBeLessThanOrEqual(tol);
-}
 
 /**
  * A figure printed beside a density that is itself rounded: the printed figure must lie between the

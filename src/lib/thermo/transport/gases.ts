@@ -3,42 +3,17 @@
  * critical enhancement from this engine's own equation of state. Coefficients and their provenance:
  * data/hydrogen.ts, data/methane.ts.
  */
+import { criticalEnhancement } from './enhancement.ts';
 import { evalPoint, Point } from '../properties.ts';
 import { getCompiledFluid } from '../registry.ts';
-import { olchowySengers, type OlchowySengers } from './forms.ts';
 import type { FluidCorrelation } from './fluids.ts';
 import { hydrogenTransport } from './data/hydrogen.ts';
 import { methaneTransport } from './data/methane.ts';
 import { satAtT } from '../solvers/saturation.ts';
 
+const methanePoint = new Point();
+
 const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
-
-const at = new Point();
-const atRef = new Point();
-
-/** λc (W/(m·K)) of the simplified Olchowy–Sengers form, cp, cv, (∂ρ/∂p)_T from the fluid's equation of state. */
-function olchowySengersHere(
-	fluid: string,
-	c: OlchowySengers,
-	T: number,
-	rho: number,
-	mu: number
-): number {
-	if (rho <= 0) return 0;
-	const fl = getCompiledFluid(fluid);
-	evalPoint(fl, T, rho, at, 2);
-	evalPoint(fl, c.Tref, rho, atRef, 2);
-	if (!(at.dPdrho > 0) || !(atRef.dPdrho > 0)) return 0;
-	return olchowySengers(c, {
-		T,
-		rho,
-		cp: at.cp,
-		cv: at.cv,
-		mu,
-		drhodP: 1 / at.dPdrho,
-		drhodPref: 1 / atRef.dPdrho
-	});
-}
 
 /**
  * η0 (1 + B_η ρ_n) in μPa·s: the dilute gas from S* (η0 = chapman √(M T)/(σ² S*), ln S* = Σ a_i (ln T*)^i)
@@ -96,7 +71,7 @@ export const hydrogen: FluidCorrelation = {
 		let dk = 0;
 		for (let i = 0; i < c.residual.B1.length; i++)
 			dk += (c.residual.B1[i] + c.residual.B2[i] * Tr) * rr ** (i + 1);
-		return num / den + dk + olchowySengersHere('hydrogen', c.critical, T, rho, mu);
+		return num / den + dk + criticalEnhancement('hydrogen', c.critical, T, rho, mu);
 	}
 };
 
@@ -142,7 +117,7 @@ export const methane: FluidCorrelation = {
 		const deltaSigma = T < fl.Tc && delta < 1 ? satAtT(fl, T).rhoV / CH4.rhoc : 1;
 		const kr = c.factor * (sum + (c.j7 * delta * delta) / deltaSigma);
 		// λc, Eq. 19, with (∂p/∂T)_ρ and (∂p/∂ρ)_T of this engine's equation of state
-		evalPoint(fl, T, rho, at, 2);
+		const at = evalPoint(fl, T, rho, methanePoint, 2);
 		const X = at.dPdT / (rho * fl.R);
 		const Y = at.dPdrho / (fl.R * T);
 		let kc = 0;

@@ -3,27 +3,11 @@
  * project. None of the papers could be opened here; where each figure was read is named beside it.
  */
 import { describe, expect, it } from 'vitest';
+import { printed, halfUnit } from './printed.test-support.ts';
 import { fixState, transport } from '../index.ts';
 import { transportAt } from './index.ts';
 import { vogelViscosity } from './hydrocarbons.ts';
 import { propaneViscosity } from './data/propane.ts';
-
-/** |actual − printed| within half a unit of the printed figure's last digit, times `slack` */
-function printed(actual: number, text: string, what: string, slack = 1): void {
-	const [mant, exp] = text.toLowerCase().split('e');
-	const decimals = mant.includes('.') ? mant.split('.')[1].length : 0;
-	const tol = 0.5 * 10 ** (-decimals + (exp ? Number(exp) : 0)) * slack * (1 + 1e-9);
-	expect(
-		Math.abs(actual - Number(text)),
-		`${what}: ${actual} vs printed ${text}`
-	).toBeLessThanOrEqual(tol);
-}
-
-/** half a unit of the last digit of a printed figure */
-function halfUnit(text: string): number {
-	const decimals = text.includes('.') ? text.split('.')[1].length : 0;
-	return 0.5 * 10 ** -decimals;
-}
 
 describe('propane viscosity: Vogel, Küchenmeister, Bich & Laesecke (1998), J. Phys. Chem. Ref. Data 27, 947', () => {
 	const M = 44.0956; // g/mol, the correlation's

@@ -6,9 +6,8 @@
  * Olchowy–Sengers critical enhancement from this engine's equation of state). Coefficients and the
  * copies they were read from: data/propane.ts, data/isobutane.ts.
  */
-import { evalPoint, Point } from '../properties.ts';
-import { getCompiledFluid } from '../registry.ts';
-import { olchowySengers, type OlchowySengers } from './forms.ts';
+import { criticalEnhancement } from './enhancement.ts';
+import { type OlchowySengers } from './forms.ts';
 import type { FluidCorrelation } from './fluids.ts';
 import { propaneConductivity, propaneViscosity } from './data/propane.ts';
 import { isobutaneViscosity } from './data/isobutane.ts';
@@ -61,33 +60,6 @@ export function vogelViscosity(v: VogelViscosity, T: number, rho: number): numbe
 	const delta0 = h.g1 * (1 + h.g2 * Math.sqrt(Tr));
 	const closePacked = h.f * (delta / (delta0 - delta) - delta / delta0);
 	return (eta0 + initial + poly + closePacked) * 1e-6;
-}
-
-const point = new Point();
-const pointRef = new Point();
-
-/** Δλ_c (W/(m·K)) with cp, cv and (∂ρ/∂p)_T at (T, ρ) and (Tref, ρ) from the fluid's equation of state. */
-function criticalEnhancement(
-	fluid: string,
-	c: OlchowySengers,
-	T: number,
-	rho: number,
-	mu: number
-): number {
-	if (rho <= 0) return 0;
-	const fl = getCompiledFluid(fluid);
-	evalPoint(fl, T, rho, point, 2);
-	evalPoint(fl, c.Tref, rho, pointRef, 2);
-	if (!(point.dPdrho > 0) || !(pointRef.dPdrho > 0)) return 0;
-	return olchowySengers(c, {
-		T,
-		rho,
-		cp: point.cp,
-		cv: point.cv,
-		mu,
-		drhodP: 1 / point.dPdrho,
-		drhodPref: 1 / pointRef.dPdrho
-	});
 }
 
 /** λ in W/(m·K) at T (K), ρ (kg/m³) and η (Pa·s, for the critical enhancement). */

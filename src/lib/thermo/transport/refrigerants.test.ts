@@ -4,22 +4,12 @@
  * copies named beside it.
  */
 import { describe, expect, it } from 'vitest';
+import { printed } from './printed.test-support.ts';
 import { fixState, transport } from '../index.ts';
 import { transportAt } from './index.ts';
 import { perkinsHuberBackground } from './refrigerant-forms.ts';
 import { r1234yfConductivity } from './data/r1234yf.ts';
 import { r1234zeEConductivity } from './data/r1234ze-e.ts';
-
-/** |actual − printed| within half a unit of the printed figure's last digit, times `slack` */
-function printed(actual: number, text: string, what: string, slack = 1): void {
-	const [mant, exp] = text.toLowerCase().split('e');
-	const decimals = mant.includes('.') ? mant.split('.')[1].length : 0;
-	const tol = 0.5 * 10 ** (-decimals + (exp ? Number(exp) : 0)) * slack * (1 + 1e-9);
-	expect(
-		Math.abs(actual - Number(text)),
-		`${what}: ${actual} vs printed ${text}`
-	).toBeLessThanOrEqual(tol);
-}
 
 const M = 114.0416; // g/mol, both fluids (the papers' molar mass)
 

@@ -4,9 +4,8 @@
  * critical enhancement takes cp, cv and (∂ρ/∂p)_T at the state and at the paper's reference
  * temperature from this engine's equation of state of the fluid.
  */
-import { evalPoint, Point } from '../properties.ts';
-import { getCompiledFluid } from '../registry.ts';
-import { olchowySengers, type OlchowySengers } from './forms.ts';
+
+import { criticalEnhancement } from './enhancement.ts';
 import {
 	huberAssaelViscosity,
 	perkinsHuberBackground,
@@ -16,33 +15,6 @@ import {
 import { r1234yfConductivity, r1234yfViscosity } from './data/r1234yf.ts';
 import { r1234zeEConductivity, r1234zeEViscosity } from './data/r1234ze-e.ts';
 import type { FluidCorrelation } from './fluids.ts';
-
-const point = new Point();
-const pointRef = new Point();
-
-/** λc (W/(m·K)) from the fluid's equation of state at (T, ρ) and (Tref, ρ). */
-export function criticalEnhancement(
-	fluid: string,
-	c: OlchowySengers,
-	T: number,
-	rho: number,
-	mu: number
-): number {
-	if (!(rho > 0) || !(mu > 0)) return 0;
-	const fl = getCompiledFluid(fluid);
-	evalPoint(fl, T, rho, point, 2);
-	evalPoint(fl, c.Tref, rho, pointRef, 2);
-	if (!(point.dPdrho > 0) || !(pointRef.dPdrho > 0)) return 0;
-	return olchowySengers(c, {
-		T,
-		rho,
-		cp: point.cp,
-		cv: point.cv,
-		mu,
-		drhodP: 1 / point.dPdrho,
-		drhodPref: 1 / pointRef.dPdrho
-	});
-}
 
 const HUBER_ASSAEL = 'Huber & Assael (2016), Int. J. Refrig. 71, 39';
 const PERKINS_HUBER = `Perkins & Huber (2011), J. Chem. Eng. Data 56, 4868 (critical enhancement with this engine's equation of state)`;
