@@ -3,7 +3,7 @@
  * equation of state (cp, cv and (∂ρ/∂p)_T for the critical enhancement). Coefficients: data/*.ts.
  */
 import { criticalEnhancement } from './enhancement.ts';
-import { collisionDilute, tauDeltaSum } from './forms.ts';
+import { AVOGADRO, collisionDilute, diluteAndInitial, tauDeltaSum } from './forms.ts';
 import { ammoniaViscosity } from './data/ammonia.ts';
 import { co2Conductivity, co2Viscosity } from './data/carbon-dioxide.ts';
 import { r134aConductivity, r134aViscosity } from './data/r134a.ts';
@@ -12,7 +12,6 @@ import { isobutane, propane } from './hydrocarbons.ts';
 import { hydrogen, methane } from './gases.ts';
 import { r1234yfTransport, r1234zeETransport } from './refrigerants.ts';
 
-const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 const R_MOLAR = 8.314462618; // J/(mol·K), exact (SI 2019)
 
 /** where a correlation holds (K, Pa); a bound left out is the equation of state's */
@@ -101,24 +100,6 @@ const carbonDioxide: FluidCorrelation = {
 		return k0 + kr + criticalEnhancement('carbon-dioxide', c.critical, T, rho, mu);
 	}
 };
-
-/** Dilute gas from S* (Ω(2,2) = (5/4) S*) plus the Rainwater–Friend initial-density term, μPa·s. */
-function diluteAndInitial(
-	d: { chapman: number; M: number; sigmaNm: number; epsK: number; a: readonly number[] },
-	b: { b: readonly number[]; t: readonly number[] },
-	T: number,
-	rho: number
-): number {
-	const lnT = Math.log(T / d.epsK);
-	let s = 0;
-	for (let i = d.a.length - 1; i >= 0; i--) s = s * lnT + d.a[i];
-	const eta0 = (d.chapman * Math.sqrt(d.M * T)) / (d.sigmaNm * d.sigmaNm * Math.exp(s));
-	const Ts = T / d.epsK;
-	let Bstar = 0;
-	for (let i = 0; i < b.b.length; i++) Bstar += b.b[i] * Ts ** b.t[i];
-	const Beta = AVOGADRO * (d.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
-	return eta0 * (1 + Beta * (rho / d.M) * 1e3);
-}
 
 const r134a: FluidCorrelation = {
 	sources: {

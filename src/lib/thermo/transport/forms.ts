@@ -116,3 +116,24 @@ export function olchowySengers(
 	const omega0 = (2 / Math.PI) * (1 - Math.exp(-1 / (1 / y + (y * y) / (3 * d * d))));
 	return ((s.rho * s.cp * c.R0 * BOLTZMANN * s.T) / (6 * Math.PI * s.mu * xi)) * (omega - omega0);
 }
+
+/** Avogadro's constant, 1/mol, exact (SI 2019) */
+export const AVOGADRO = 6.02214076e23;
+
+/** Dilute gas from S* (Ω(2,2) = (5/4) S*) plus the Rainwater–Friend initial-density term, μPa·s. */
+export function diluteAndInitial(
+	d: { chapman: number; M: number; sigmaNm: number; epsK: number; a: readonly number[] },
+	b: { b: readonly number[]; t: readonly number[] },
+	T: number,
+	rho: number
+): number {
+	const lnT = Math.log(T / d.epsK);
+	let s = 0;
+	for (let i = d.a.length - 1; i >= 0; i--) s = s * lnT + d.a[i];
+	const eta0 = (d.chapman * Math.sqrt(d.M * T)) / (d.sigmaNm * d.sigmaNm * Math.exp(s));
+	const Ts = T / d.epsK;
+	let Bstar = 0;
+	for (let i = 0; i < b.b.length; i++) Bstar += b.b[i] * Ts ** b.t[i];
+	const Beta = AVOGADRO * (d.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
+	return eta0 * (1 + Beta * (rho / d.M) * 1e3);
+}

@@ -4,6 +4,7 @@
  * data/hydrogen.ts, data/methane.ts.
  */
 import { criticalEnhancement } from './enhancement.ts';
+import { diluteAndInitial } from './forms.ts';
 import { evalPoint, Point } from '../properties.ts';
 import { getCompiledFluid } from '../registry.ts';
 import type { FluidCorrelation } from './fluids.ts';
@@ -12,35 +13,6 @@ import { methaneTransport } from './data/methane.ts';
 import { satAtT } from '../solvers/saturation.ts';
 
 const methanePoint = new Point();
-
-const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
-
-/**
- * η0 (1 + B_η ρ_n) in μPa·s: the dilute gas from S* (η0 = chapman √(M T)/(σ² S*), ln S* = Σ a_i (ln T*)^i)
- * and the Rainwater–Friend initial-density term B_η = N_A σ³ Σ b_i T*^t_i. M g/mol, σ nm, ρ kg/m³.
- */
-function diluteAndInitialDensity(
-	d: {
-		chapman: number;
-		M: number;
-		sigmaNm: number;
-		epsK: number;
-		a: readonly number[];
-	},
-	b: { b: readonly number[]; t: readonly number[] },
-	T: number,
-	rho: number
-): number {
-	const lnT = Math.log(T / d.epsK);
-	let s = 0;
-	for (let i = d.a.length - 1; i >= 0; i--) s = s * lnT + d.a[i];
-	const eta0 = (d.chapman * Math.sqrt(d.M * T)) / (d.sigmaNm * d.sigmaNm * Math.exp(s));
-	const Ts = T / d.epsK;
-	let Bstar = 0;
-	for (let i = 0; i < b.b.length; i++) Bstar += b.b[i] * Ts ** b.t[i];
-	const Beta = AVOGADRO * (d.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
-	return eta0 * (1 + Beta * ((rho / d.M) * 1e3));
-}
 
 const H2 = hydrogenTransport;
 
@@ -58,7 +30,7 @@ export const hydrogen: FluidCorrelation = {
 		const r2 = (rho / v.residual.rhoSc) ** 2;
 		const dEta =
 			c[0] * r2 * Math.exp(c[1] * Tr + c[2] / Tr + (c[3] * r2) / (c[4] + Tr) + c[5] * r2 ** 3);
-		return (diluteAndInitialDensity(v.dilute, v.initialDensity, T, rho) + dEta) * 1e-6;
+		return (diluteAndInitial(v.dilute, v.initialDensity, T, rho) + dEta) * 1e-6;
 	},
 	k(T, rho, mu) {
 		const c = H2.conductivity;

@@ -7,12 +7,10 @@
  * copies they were read from: data/propane.ts, data/isobutane.ts.
  */
 import { criticalEnhancement } from './enhancement.ts';
-import { type OlchowySengers } from './forms.ts';
+import { AVOGADRO, type OlchowySengers } from './forms.ts';
 import type { FluidCorrelation } from './fluids.ts';
 import { propaneConductivity, propaneViscosity } from './data/propane.ts';
 import { isobutaneViscosity } from './data/isobutane.ts';
-
-const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 
 /** the shape shared by data/propane.ts and data/isobutane.ts */
 export interface VogelViscosity {

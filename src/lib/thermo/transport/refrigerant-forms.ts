@@ -7,9 +7,8 @@
  *   background): a polynomial dilute-gas term in Tr and a residual Σ (B1,i + B2,i Tr) δ^i.
  */
 
+import { AVOGADRO } from './forms.ts';
 import type { OlchowySengers } from './forms.ts';
-
-const AVOGADRO = 6.02214076e23; // 1/mol, exact (SI 2019)
 
 export interface HuberAssaelViscosity {
 	/** molar mass, g/mol (to turn ρ in kg/m³ into mol/dm³) */
