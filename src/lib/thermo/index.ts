@@ -16,6 +16,7 @@ import { fixStateOf } from './solvers/fix-state.ts';
 import { computePath as computePathBase } from './solvers/path.ts';
 import { if97FixFrom, type If97Seed } from './if97/fix.ts';
 import { if97Path } from './if97/path.ts';
+import { if97SaturationCurve as if97Dome } from './if97/dome.ts';
 import type { If97State } from './if97/state.ts';
 import { computeLeg as computeLegImpl } from './solvers/legs.ts';
 import { stateExtras as stateExtrasOf } from './solvers/path.ts';
@@ -233,6 +234,16 @@ export function if97Fix(inputs: Inputs, seed?: If97Seed, options: FixOptions = {
 }
 export type { If97Seed } from './if97/fix.ts';
 export { if97Extras, if97LegEnergy } from './if97/path.ts';
+export { IF97_DOME_TOP } from './if97/dome.ts';
+
+/**
+ * The vapor dome of water by IAPWS-IF97 (if97/dome.ts): IF97's saturated liquid and vapor from
+ * 273.15 K up to 643.15 K (spaced denser toward the top), closed by straight lines to IF97's critical
+ * point, with IAPWS-95's melting line (IF97 starts at 273.15 K). `note` says so for a chart.
+ */
+export function if97SaturationCurve(points = 100): SaturationCurve {
+	return { ...if97Dome(points), melting: saturationCurve('water', 2).melting };
+}
 export { PRESSURE_EQUIPMENT_CAUTION, LIQUID_FULL_CAUTION } from './cautions.ts';
 export { DEFAULT_ATMOSPHERE, STANDARD_ATMOSPHERE } from './constants.ts';
 

@@ -40,6 +40,19 @@ describe('the chart frame on the server', () => {
 	it('traces a fluid dome once', () => {
 		expect(dome('water')).toBe(dome('water'));
 	});
+
+	it('frames a water sheet by IAPWS-IF97 with IF97’s dome, cached apart from IAPWS-95’s', () => {
+		const doc = vesselDoc();
+		const if97 = { ...doc, spec: { ...doc.spec, formulation: 'if97' as const } };
+		const f = chartFrame(if97, [null]);
+		expect(f.saturation?.formulation).toBe('if97');
+		expect(f.saturation).toBe(dome('water', 'if97'));
+		expect(dome('water', 'if97')).not.toBe(dome('water'));
+		expect(chartFrame(doc, [null]).saturation?.formulation).toBeUndefined();
+		// its first point: python3-iapws 1.5.2 IAPWS97(T=273.15, x=0).P = 611.212677 Pa
+		expect(f.saturation!.liquid[0].T).toBe(273.15);
+		expect(f.saturation!.liquid[0].P).toBeCloseTo(611.212677, 5);
+	});
 });
 
 describe('draftResult', () => {

@@ -2,6 +2,7 @@ import {
 	computePath,
 	if97Extras,
 	if97Fix,
+	if97SaturationCurve,
 	fixState,
 	getFluid,
 	isolines as engineIsolines,
@@ -9,6 +10,7 @@ import {
 	stateExtras,
 	ThermoError,
 	type Isoline,
+	type Formulation,
 	type IsolineKind,
 	type PathResult,
 	type SaturationCurve
@@ -27,18 +29,23 @@ import { frameLimits, frameLines } from '$lib/sheets/frame';
 
 const domes = new Map<string, SaturationCurve>();
 
-/** The vapor dome for the chart (cached per fluid); null if the engine cannot trace it — the page still opens. */
-export function dome(fluid: string): SaturationCurve | null {
-	let d = domes.get(fluid);
+/**
+ * The vapor dome for the chart, cached per fluid and formulation: water's by IAPWS-IF97 for an IF97
+ * sheet (if97SaturationCurve), else the fluid's own equation's. Null if the engine cannot trace it —
+ * the page still opens.
+ */
+export function dome(fluid: string, formulation: Formulation = 'iapws95'): SaturationCurve | null {
+	const key = `${fluid}:${formulation}`;
+	let d = domes.get(key);
 	if (!d) {
 		try {
-			d = saturationCurve(fluid, 100);
+			d = formulation === 'if97' ? if97SaturationCurve(100) : saturationCurve(fluid, 100);
 		} catch (e) {
 			if (!(e instanceof ThermoError)) throw e;
 			console.error(`[statewright] the vapor dome of ${fluid} could not be traced: ${e.message}`);
 			return null;
 		}
-		domes.set(fluid, d);
+		domes.set(key, d);
 	}
 	return d;
 }
@@ -57,7 +64,8 @@ function lines(fluid: string, kind: IsolineKind, values: number[]): Isoline[] {
 export function chartFrame(doc: SheetDoc, results: Array<PathResult | null>): ChartFrame {
 	const f = getFluid(doc.spec.fluid);
 	const states = results.flatMap((r) => r?.states ?? []).map((s) => s.state);
-	const saturation = dome(f.id);
+	const formulation = f.id === 'water' ? (doc.spec.formulation ?? 'iapws95') : 'iapws95';
+	const saturation = dome(f.id, formulation);
 	const want = frameLines(f, doc, states, saturation);
 	return {
 		fluid: f,

@@ -16,13 +16,22 @@
  * | isenthalpic | 0 (throttling: irreversible)        | 0         | 0               | 0              |
  * | polytropic  | (P₂v₂ − P₁v₁)/(1 − n); n = 1: P₁v₁ ln(v₂/v₁) | Δu + w | w − Δ(Pv) (n = 0: 0) | Δh + wShaft |
  *
- * The legs' points between the ends, the crossings and the design-limit events stay IAPWS-95 (the
- * difference is far below a chart's resolution). A state IF97 cannot give keeps its IAPWS-95 value,
- * is marked `formulation: 'iapws95'` and named in an `if97-state-unavailable` warning; a leg with such
- * an end keeps its IAPWS-95 q and w.
+ * Each leg's crossings of the saturation lines are IF97's own: where the leg's invariant meets IF97's
+ * saturated liquid or vapor (Eq. 30 with region 1, 2 or 3 on each side), found from the IAPWS-95
+ * crossing (legCrossings). Each point between the ends is re-fixed by IF97 from the invariant and the
+ * point's progress coordinate (COORD: a property that runs monotonically along the process curve and
+ * pairs with the invariant; isobaric (P, h), isentropic (s, P) and isenthalpic (h, P) go straight to
+ * the basic equations). The IAPWS-95 point's coordinate is carried over piecewise linearly (in ln P or
+ * ln v for those) between the leg's anchors — start, crossings, end — mapped onto their IF97
+ * counterparts, so the IF97 points stay in order and run exactly through the IF97 ends and crossings.
+ *
+ * The design-limit events stay IAPWS-95. A state, point or crossing IF97 cannot give keeps its
+ * IAPWS-95 value, is marked `formulation: 'iapws95'` and counted in an `if97-state-unavailable`
+ * warning; a leg with such an end keeps its IAPWS-95 q, w, points and crossings (all so marked).
  */
 import { ThermoError } from '../errors.ts';
 import type {
+	Crossing,
 	Inputs,
 	Leg,
 	PathResult,
@@ -122,6 +131,165 @@ function polytropicEnd(start: State, n: number, target: [string, number], seed: 
 	return at(y);
 }
 
+/**
+ * The property each process's points are re-fixed by beside the invariant: it runs monotonically
+ * along the process curve (an isobar's h, an isochore's T, an isotherm's v, an isentrope's and an
+ * isenthalp's P, a polytrope's v). P and v are carried over in logarithms.
+ */
+const COORD: Record<Process, 'h' | 'T' | 'v' | 'P'> = {
+	isobaric: 'h',
+	isochoric: 'T',
+	isothermal: 'v',
+	isentropic: 'P',
+	isenthalpic: 'P',
+	polytropic: 'v'
+};
+
+/** The pair that fixes a point of the leg from `start` (its invariant) at coordinate c. */
+export function if97PointInputs(process: Process, start: State, c: number, n?: number): Inputs {
+	if (process === 'polytropic') return { P: start.P * (start.v / c) ** (n ?? 1), v: c };
+	const inv = INVARIANT[process];
+	return { [inv]: start[inv], [COORD[process]]: c } as Inputs;
+}
+
+/** IF97's saturated liquid or vapor at T (K), Eq. 30 with the region on that side. */
+function saturatedAt(T: number, side: 'liquid' | 'vapor'): State {
+	if (!(T >= if97Limits.Tmin && T < TC))
+		throw new ThermoError(
+			'out-of-range',
+			`IAPWS-IF97's saturation line runs from ${if97Limits.Tmin} K to ${TC} K; this crossing lies at ${T} K.`,
+			'Use IAPWS-95 for this sheet.'
+		);
+	return if97State(psat(T) * 1e6, T, { side });
+}
+
+/**
+ * Where a leg from the IF97 state `start` meets IF97's saturated liquid or vapor line near the
+ * IAPWS-95 crossing `near`: at the leg's own P (isobaric, polytropic n = 0) or T (isothermal), else
+ * the temperature along the line where the invariant takes its value (secant from the IAPWS-95 T).
+ */
+export function if97Crossing(process: Process, start: State, near: Crossing, n?: number): State {
+	const side = near.line === 'saturated-liquid' ? 'liquid' : 'vapor';
+	const x = side === 'liquid' ? 0 : 1;
+	const seed = seedOf(near.state);
+	if (process === 'isobaric' || (process === 'polytropic' && n === 0))
+		return if97FixFrom({ P: start.P, x }, seed);
+	if (process === 'isothermal') return if97FixFrom({ T: start.T, x }, seed);
+	const k = n ?? 1;
+	const lnC = Math.log(start.P) + k * Math.log(start.v);
+	const F = (T: number): number => {
+		const st = saturatedAt(T, side);
+		switch (process) {
+			case 'isochoric':
+				return Math.log(st.v / start.v);
+			case 'isentropic':
+				return (st.s - start.s) / 1e3;
+			case 'isenthalpic':
+				return (st.h - start.h) / 1e6;
+			default:
+				return Math.log(st.P) + k * Math.log(st.v) - lnC;
+		}
+	};
+	const top = TC - 1e-9;
+	let a = Math.min(near.state.T, top);
+	let b = Math.min(a * (1 - 1e-6), top);
+	let fa = F(a);
+	let fb = F(b);
+	for (let i = 0; i < 60; i++) {
+		if (fb === 0 || Math.abs(b - a) <= 1e-12 * b) return saturatedAt(b, side);
+		if (fa === fb) break;
+		const c = Math.min(top, Math.max(if97Limits.Tmin, b - (fb * (b - a)) / (fb - fa)));
+		a = b;
+		fa = fb;
+		b = c;
+		fb = F(b);
+	}
+	throw new ThermoError(
+		'no-convergence',
+		`IAPWS-IF97: this leg's crossing of the ${near.line} line was not found near ${near.state.T} K.`,
+		'Use IAPWS-95 for this sheet.'
+	);
+}
+
+/** Coordinate c of a state as carried over: logarithmic for P and v. */
+const coordOf = (process: Process, st: State): number => {
+	const c = COORD[process];
+	return c === 'P' || c === 'v' ? Math.log(st[c]) : st[c];
+};
+
+/**
+ * The points and crossings of a leg by IF97 (module comment): `pts95` and `cr95` are the IAPWS-95
+ * leg's, `start` and `end` the IF97 ends. Points IF97 cannot give keep their IAPWS-95 value, marked
+ * `formulation: 'iapws95'`; `failed` counts them (with the first reason).
+ */
+export function if97LegPoints(
+	process: Process,
+	start: State,
+	end: State,
+	pts95: readonly State[],
+	cr95: readonly Crossing[],
+	n?: number
+): { points: State[]; crossings: Crossing[]; failed: number; why: unknown } {
+	let failed = 0;
+	let why: unknown = null;
+	const miss = (st: State, e: unknown): State => {
+		if (!(e instanceof ThermoError)) throw e;
+		failed++;
+		why ??= e;
+		return { ...st, formulation: 'iapws95' };
+	};
+	const crossings: Crossing[] = cr95.map((c) => {
+		try {
+			return { line: c.line, state: if97Crossing(process, start, c, n) };
+		} catch (e) {
+			return { line: c.line, state: miss(c.state, e) };
+		}
+	});
+	const last = pts95.length - 1;
+	// anchors: [index in pts95, IAPWS-95 coordinate, IF97 coordinate, IF97 state]
+	const anchors: Array<[number, number, number, State]> = [
+		[0, coordOf(process, pts95[0]), coordOf(process, start), start]
+	];
+	let from = 1;
+	cr95.forEach((c, j) => {
+		for (let k = from; k < last; k++) {
+			const p = pts95[k];
+			if (p.T === c.state.T && p.rho === c.state.rho) {
+				const st = crossings[j].state;
+				anchors.push([k, coordOf(process, p), coordOf(process, st), st]);
+				from = k + 1;
+				break;
+			}
+		}
+	});
+	anchors.push([last, coordOf(process, pts95[last]), coordOf(process, end), end]);
+	const log = COORD[process] === 'P' || COORD[process] === 'v';
+	const points: State[] = new Array(pts95.length);
+	let a = 0;
+	for (let k = 0; k <= last; k++) {
+		while (a < anchors.length - 1 && anchors[a + 1][0] < k) a++;
+		const A = anchors[a];
+		const B = anchors[Math.min(a + 1, anchors.length - 1)];
+		if (k === A[0] || k === B[0]) {
+			points[k] = k === A[0] ? A[3] : B[3];
+			continue;
+		}
+		const p = pts95[k];
+		const span95 = B[1] - A[1];
+		const c = span95 === 0 ? A[2] : A[2] + ((coordOf(process, p) - A[1]) * (B[2] - A[2])) / span95;
+		try {
+			points[k] = if97FixFrom(if97PointInputs(process, start, log ? Math.exp(c) : c, n), seedOf(p));
+		} catch (e) {
+			points[k] = miss(p, e);
+		}
+	}
+	// a crossing met twice in a row (the end of one piece and the start of the next) is one state
+	for (let k = 1; k < last; k++)
+		if (pts95[k].T === pts95[k - 1].T && pts95[k].rho === pts95[k - 1].rho)
+			points[k] = points[k - 1];
+	return { points, crossings, failed, why };
+}
+
 /** q, w, wShaft, qFlow and the differences of a leg between two IF97 states (the table above). */
 export function if97LegEnergy(
 	process: Process,
@@ -177,6 +345,16 @@ function unavailable(id: string, leg: string | undefined, e: unknown): PathWarni
 	};
 	if (leg !== undefined) w.leg = leg;
 	return w;
+}
+
+function pointsUnavailable(leg: string, count: number, e: unknown): PathWarning {
+	const why = e instanceof ThermoError ? e.message : String(e);
+	return {
+		code: 'if97-state-unavailable',
+		severity: 'warning',
+		message: `${leg}: IAPWS-IF97 cannot give ${count === 1 ? 'one point' : `${count} points`} of this leg (points along it or where it crosses a saturation line), so ${count === 1 ? 'it is' : 'they are'} drawn by IAPWS-95. ${why}`,
+		leg
+	};
 }
 
 /**
@@ -236,10 +414,34 @@ export function if97Path(spec: PathSpec, base: PathResult): PathResult {
 		);
 		put(end95, st);
 		const to = states[i + 1];
-		if (from.formulation !== 'if97' || to.formulation !== 'if97') return pl;
+		if (from.formulation !== 'if97' || to.formulation !== 'if97') {
+			// the leg stays IAPWS-95 (its end's warning says why); its points and crossings say so
+			const mark = (p: State): State => ({ ...p, formulation: 'iapws95' });
+			const leg: Leg = {
+				...pl.leg,
+				points: pl.leg.points.map(mark),
+				crossings: pl.leg.crossings.map((c) => ({ ...c, state: mark(c.state) }))
+			};
+			return { ...pl, leg };
+		}
 		const e = if97LegEnergy(ls.process, from.state, to.state, ls.n);
-		const leg: Leg = { ...pl.leg, ...e, start: from.state, end: to.state };
-		leg.points = [from.state, ...pl.leg.points.slice(1, -1), to.state];
+		const got = if97LegPoints(
+			ls.process,
+			from.state,
+			to.state,
+			pl.leg.points,
+			pl.leg.crossings,
+			ls.n
+		);
+		if (got.failed) warnings.push(pointsUnavailable(pl.id, got.failed, got.why));
+		const leg: Leg = {
+			...pl.leg,
+			...e,
+			start: from.state,
+			end: to.state,
+			points: got.points,
+			crossings: got.crossings
+		};
 		return { ...pl, leg };
 	});
 	const closed = base.system.kind === 'closed';
