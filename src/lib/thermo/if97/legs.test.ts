@@ -14,6 +14,7 @@ import {
 	if97Fix,
 	if97SaturationCurve,
 	if97SaturationPressure,
+	if97State,
 	IF97_DOME_TOP,
 	type PathSpec,
 	type State
@@ -177,6 +178,30 @@ describe('crossings of the other processes lie on IF97’s saturation line with 
 				expect(leg.points).toContain(st);
 			}
 		});
+});
+
+describe('an isochore through the critical region', () => {
+	it('has its region 3 points (read straight from Eq. 28) on the basic equation at their own P and T', () => {
+		// a consistency check of the direct (ρ, T) reading against the (P, T) solve of the same equation
+		const r = computePath({
+			fluid: 'water',
+			system: { kind: 'closed', mass: 1 },
+			start: { T: 600, v: 0.0025 },
+			legs: [{ process: 'isochoric', target: { T: 800 } }],
+			samples: 120,
+			formulation: 'if97'
+		});
+		const pts = r.legs[0].leg.points.filter(
+			(p) => (p as State & { region?: number }).region === 3 && p.x === null
+		);
+		expect(pts.length).toBeGreaterThan(40);
+		for (const p of pts) {
+			const q = if97State(p.P, p.T);
+			expect(rel(q.v, p.v)).toBeLessThan(1e-10);
+			expect(Math.abs(q.h - p.h)).toBeLessThan(1e-3);
+			expect(q.phase).toBe(p.phase);
+		}
+	});
 });
 
 describe('points IF97 cannot give', () => {

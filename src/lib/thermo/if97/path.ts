@@ -43,9 +43,9 @@ import type {
 	StateExtras,
 	TargetName
 } from '../types.ts';
-import { PC, TC, psat, tsat } from './regions.ts';
+import { PC, RHOC, TC, pB23, pressure3, psat, tsat } from './regions.ts';
 import { if97FixFrom, type If97Seed } from './fix.ts';
-import { if97Limits, if97State } from './state.ts';
+import { if97Limits, if97Region3State, if97State } from './state.ts';
 import { cycleOf } from '../solvers/path.ts';
 
 const seedOf = (st: State): If97Seed => ({ T: st.T, P: st.P, x: st.x, phase: st.phase });
@@ -211,6 +211,25 @@ export function if97Crossing(process: Process, start: State, near: Crossing, n?:
 	);
 }
 
+/**
+ * A (T, v) point straight from region 3's Helmholtz equation (Eq. 28), which takes ρ and T: where it
+ * lands in region 3 (623.15 K ≤ T, P from B23 to 100 MPa), mechanically stable and, below Tc, on the
+ * side of the saturation line its density says (so neither metastable nor inside the dome). Else
+ * null, and the general (T, v) solve (Newton in ln P) is used. Saves that solve's many region 3
+ * density iterations on isochores and isotherms near and above the critical point.
+ */
+function region3Direct(T: number, v: number): State | null {
+	if (!(T >= 623.15)) return null;
+	const rho = 1 / v;
+	const { p, dpdrho } = pressure3(rho, T);
+	if (!(dpdrho > 0 && p >= pB23(T) && p <= if97Limits.Pmax / 1e6)) return null;
+	if (T < TC) {
+		const ps = psat(T);
+		if (rho > RHOC ? !(p > ps * (1 + 1e-9)) : !(p < ps * (1 - 1e-9))) return null;
+	}
+	return if97Region3State(rho, T);
+}
+
 /** Coordinate c of a state as carried over: logarithmic for P and v. */
 const coordOf = (process: Process, st: State): number => {
 	const c = COORD[process];
@@ -277,8 +296,14 @@ export function if97LegPoints(
 		const p = pts95[k];
 		const span95 = B[1] - A[1];
 		const c = span95 === 0 ? A[2] : A[2] + ((coordOf(process, p) - A[1]) * (B[2] - A[2])) / span95;
+		const x = log ? Math.exp(c) : c;
 		try {
-			points[k] = if97FixFrom(if97PointInputs(process, start, log ? Math.exp(c) : c, n), seedOf(p));
+			points[k] =
+				(process === 'isochoric'
+					? region3Direct(x, start.v)
+					: process === 'isothermal'
+						? region3Direct(start.T, x)
+						: null) ?? if97FixFrom(if97PointInputs(process, start, x, n), seedOf(p));
 		} catch (e) {
 			points[k] = miss(p, e);
 		}
