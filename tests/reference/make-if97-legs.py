@@ -7,7 +7,8 @@ Leg points: the engine places a leg's points itself, so each leg is given here a
 along its process curve on a fine grid of the leg's progress coordinate (h along an isobar, ln P
 along an isentrope, T along an isochore), one grid per smooth piece (liquid, inside the dome,
 vapor: the pieces meet at the crossings, where the properties have kinks). The test reads each of the
-engine's points off that grid by 3-point (quadratic) interpolation in the coordinate. `tol` is the
+engine's points off that grid by 3-point (quadratic) interpolation in the coordinate, of each value
+or (T, P, v: `mode` 'log') of its logarithm, whichever the script finds closer. `tol` is the
 interpolation's own error, measured here at the midpoints between nodes, times 4 (with a floor);
 it is far below the difference between IF97 and IAPWS-95 (~1e-4 relative), which the test also checks.
 
@@ -79,20 +80,30 @@ def interp3(xs, ys, x):
 
 
 def piece(name, a, b, state_at, n=101):
-    """Nodes of one smooth piece from coordinate a to b, and the interpolation's error at the midpoints."""
+    """Nodes of one smooth piece from coordinate a to b; per property the reading (of the value, or for
+    T, P and v of its logarithm) whose error at the midpoints between nodes is smaller, and that error."""
     xs = [a + (b - a) * k / (n - 1) for k in range(n)]
     nodes = [si(state_at(x)) for x in xs]
-    err = {p: 0.0 for p in PROPS}
-    for k in range(n - 1):
-        xm = 0.5 * (xs[k] + xs[k + 1])
-        st = si(state_at(xm))
-        for p in PROPS:
-            y = interp3(xs, [nd[p] for nd in nodes], xm)
-            e = abs(y - st[p]) / abs(st[p]) if p in ('T', 'P', 'v') else abs(y - st[p])
-            err[p] = max(err[p], e)
+    mids = [si(state_at(0.5 * (xs[k] + xs[k + 1]))) for k in range(n - 1)]
+    mode, tol = {}, {}
     floor = {'T': 1e-9, 'P': 1e-9, 'v': 1e-9, 'h': 1e-3, 's': 1e-6}
-    tol = {p: max(4 * err[p], floor[p]) for p in PROPS}
-    return {'name': name, 'x': xs, 'nodes': nodes, 'tol': tol}
+    for p in PROPS:
+        best = None
+        for m in (('lin', 'log') if p in ('T', 'P', 'v') else ('lin',)):
+            f = math.log if m == 'log' else (lambda y: y)
+            g = math.exp if m == 'log' else (lambda y: y)
+            ys = [f(nd[p]) for nd in nodes]
+            err = 0.0
+            for k in range(n - 1):
+                y = g(interp3(xs, ys, 0.5 * (xs[k] + xs[k + 1])))
+                ref = mids[k][p]
+                # relative for T, P and v; absolute (J/kg, J/(kg·K)) for h and s
+                err = max(err, abs(y - ref) / abs(ref) if p in ('T', 'P', 'v') else abs(y - ref))
+            if best is None or err < best[1]:
+                best = (m, err)
+        mode[p] = best[0]
+        tol[p] = max(4 * best[1], floor[p])
+    return {'name': name, 'x': xs, 'nodes': nodes, 'mode': mode, 'tol': tol}
 
 
 legs = []

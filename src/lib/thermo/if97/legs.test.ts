@@ -28,6 +28,7 @@ interface Piece {
 	name: string;
 	x: number[];
 	nodes: Ref[];
+	mode: Record<Prop, string>;
 	tol: Record<Prop, number>;
 }
 
@@ -47,8 +48,13 @@ function read(pc: Piece, x: number): Ref {
 	const l1 = ((x - x0) * (x - x2)) / ((x1 - x0) * (x1 - x2));
 	const l2 = ((x - x0) * (x - x1)) / ((x2 - x0) * (x2 - x1));
 	const out = {} as Ref;
-	for (const p of PROPS)
-		out[p] = pc.nodes[i - 1][p] * l0 + pc.nodes[i][p] * l1 + pc.nodes[i + 1][p] * l2;
+	for (const p of PROPS) {
+		// the value, or its logarithm, as the fixture's script chose and measured the reading
+		const log = pc.mode[p] === 'log';
+		const f = log ? Math.log : (y: number) => y;
+		const y = f(pc.nodes[i - 1][p]) * l0 + f(pc.nodes[i][p]) * l1 + f(pc.nodes[i + 1][p]) * l2;
+		out[p] = log ? Math.exp(y) : y;
+	}
 	return out;
 }
 
