@@ -82,8 +82,10 @@ console.log(
 	`of which the IF97 re-fix of its 5 states and 4 legs (if97Path alone): ${refix.toFixed(0)} µs`
 );
 
-// one 200-point leg per process: the IAPWS-95 leg (computePath, one leg) and its IF97 points and
-// crossings alone (if97LegPoints), against the 3 ms budget of a 200-point leg (docs/performance.md)
+// one 200-point leg per process: the IAPWS-95 leg (computePath, one leg), its IF97 points and
+// crossings alone (if97LegPoints), and the whole IF97 leg (computePath with formulation 'if97': the
+// IAPWS-95 leg, then its ends, energies, points and crossings by IF97), against the 3 ms budget of a
+// 200-point leg with its crossings (docs/performance.md)
 const legs: [string, PathSpec][] = [
 	[
 		'isobaric 1 MPa, 300→600 K',
@@ -124,11 +126,11 @@ const legs: [string, PathSpec][] = [
 	}
 ]);
 console.log(
-	`\n200-point leg, median CPU ms: the IAPWS-95 leg and the IF97 re-fix of its points and crossings (budget 3 ms); load average ${loadavg()
+	`\n200-point leg, median CPU ms: the IAPWS-95 leg, the IF97 re-fix of its points and crossings, the whole IF97 leg (budget 3 ms); load average ${loadavg()
 		.map((x) => x.toFixed(1))
 		.join(' ')}`
 );
-console.log('leg                              IAPWS-95 leg   IF97 points');
+console.log('leg                              IAPWS-95 leg   IF97 points   IF97 leg (all)');
 for (const [name, spec] of legs) {
 	const r = computePath(spec);
 	const r97 = computePath({ ...spec, formulation: 'if97' });
@@ -137,7 +139,8 @@ for (const [name, spec] of legs) {
 	const e = r97.legs[0].leg.end;
 	const tLeg = time(() => computePath(spec));
 	const tPts = time(() => if97LegPoints(l.process, s, e, l.points, l.crossings, l.n));
+	const tAll = time(() => computePath({ ...spec, formulation: 'if97' }));
 	console.log(
-		`${name.padEnd(32)} ${(tLeg / 1000).toFixed(2).padStart(12)}   ${(tPts / 1000).toFixed(2).padStart(11)}`
+		`${name.padEnd(32)} ${(tLeg / 1000).toFixed(2).padStart(12)}   ${(tPts / 1000).toFixed(2).padStart(11)}   ${(tAll / 1000).toFixed(2).padStart(14)}`
 	);
 }
