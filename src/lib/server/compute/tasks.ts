@@ -5,10 +5,12 @@ import {
 	isolines,
 	ISOLINE_UNITS,
 	saturationCurve,
+	if97SaturationCurve,
 	stateExtras,
 	ThermoError,
 	transport,
 	type FixOptions,
+	type Formulation,
 	type Inputs,
 	type LegSpec,
 	type PathSpec
@@ -30,7 +32,7 @@ export type ComputeTask =
 	| { kind: 'path'; spec: PathSpec }
 	| { kind: 'state'; fluid: string; inputs: Inputs; options: FixOptions }
 	| { kind: 'isolines'; fluid: string; line: IsolineKind; values: number[]; points: number }
-	| { kind: 'saturation'; fluid: string; points: number };
+	| { kind: 'saturation'; fluid: string; points: number; formulation?: Formulation };
 
 /** The engine's refusal, as plain data (a class does not survive the crossing). */
 export type ThermoFailure = ReturnType<ThermoError['toJSON']>;
@@ -60,7 +62,9 @@ function answer(task: ComputeTask): unknown {
 				lines: isolines(task.fluid, task.line, task.values, task.points)
 			};
 		case 'saturation':
-			return saturationCurve(task.fluid, task.points);
+			return task.formulation === 'if97'
+				? if97SaturationCurve(task.points)
+				: saturationCurve(task.fluid, task.points);
 	}
 }
 
