@@ -186,6 +186,46 @@ describe('crossings of the other processes lie on IF97’s saturation line with 
 		});
 });
 
+describe('a leg ending between IF97’s saturation line and IAPWS-95’s', () => {
+	// the isochore at 0.1 m³/kg meets the saturated-vapor line at 485.31734 K by IF97 (python3-iapws
+	// 1.5.2 IAPWS97, tests/reference/if97-legs.json) and about 5 mK lower by IAPWS-95
+	const iso = fixture.legs[2];
+	const T97 = iso.crossings[0].state.T;
+	const leg = (start: PathSpec['start'], T: number, formulation?: 'if97') =>
+		computePath({
+			fluid: 'water',
+			system: { kind: 'closed', mass: 1 },
+			start,
+			legs: [{ process: 'isochoric', target: { T } }],
+			...(formulation && { formulation })
+		}).legs[0].leg;
+	const inOrder = (pts: State[]) => {
+		const d = Math.sign(pts.at(-1)!.T - pts[0].T);
+		return pts.every((p, k) => k === 0 || (p.T - pts[k - 1].T) * d >= 0);
+	};
+
+	it('heated to just below IF97’s line: IAPWS-95 crosses its own line, IF97 does not', () => {
+		const T2 = T97 - 4e-5;
+		expect(leg({ T: 373.15, v: 0.1 }, T2).crossings).toHaveLength(1);
+		const l = leg({ T: 373.15, v: 0.1 }, T2, 'if97');
+		expect(l.crossings).toEqual([]);
+		expect(l.end.phase).toBe('saturated-mixture');
+		expect(l.points.every((p) => p.phase === 'saturated-mixture')).toBe(true);
+		expect(inOrder(l.points)).toBe(true);
+	});
+
+	it('cooled to just above IAPWS-95’s line: IF97 crosses its own line, at python3-iapws’s state', () => {
+		const T2 = T97 - 3e-3;
+		expect(leg({ T: 600, v: 0.1 }, T2).crossings).toEqual([]);
+		const l = leg({ T: 600, v: 0.1 }, T2, 'if97');
+		expect(l.crossings.map((c) => c.line)).toEqual(['saturated-vapor']);
+		expectState(l.crossings[0].state, iso.crossings[0].state, 'crossing');
+		expect(l.points).toContain(l.crossings[0].state);
+		expect(l.end.phase).toBe('saturated-mixture');
+		expect(inOrder(l.points)).toBe(true);
+	});
+});
+
 describe('an isochore through the critical region', () => {
 	it('has its region 3 points (read straight from Eq. 28) on the basic equation at their own P and T', () => {
 		// a consistency check of the direct (ρ, T) reading against the (P, T) solve of the same equation

@@ -257,7 +257,7 @@ export function if97LegPoints(
 		why ??= e;
 		return { ...st, formulation: 'iapws95' };
 	};
-	const crossings: Crossing[] = cr95.map((c) => {
+	const found: Crossing[] = cr95.map((c) => {
 		try {
 			return { line: c.line, state: if97Crossing(process, start, c, n) };
 		} catch (e) {
@@ -265,23 +265,34 @@ export function if97LegPoints(
 		}
 	});
 	const last = pts95.length - 1;
+	const c0 = coordOf(process, start);
+	const cEnd = coordOf(process, end);
+	const dir = Math.sign(cEnd - c0);
 	// anchors: [index in pts95, IAPWS-95 coordinate, IF97 coordinate, IF97 state]
 	const anchors: Array<[number, number, number, State]> = [
-		[0, coordOf(process, pts95[0]), coordOf(process, start), start]
+		[0, coordOf(process, pts95[0]), c0, start]
 	];
+	// [index in pts95, crossing] of the crossings the IF97 leg keeps
+	const kept: Array<[number, Crossing]> = [];
 	let from = 1;
 	cr95.forEach((c, j) => {
+		const st = found[j].state;
+		const ci = coordOf(process, st);
+		// IF97's line may lie beyond the leg's IF97 end (or before the previous crossing) where the
+		// IAPWS-95 leg ends just past its own line: then the IF97 leg does not cross it
+		if (!((ci - anchors[anchors.length - 1][2]) * dir > 0 && (cEnd - ci) * dir > 0)) return;
 		for (let k = from; k < last; k++) {
 			const p = pts95[k];
 			if (p.T === c.state.T && p.rho === c.state.rho) {
-				const st = crossings[j].state;
-				anchors.push([k, coordOf(process, p), coordOf(process, st), st]);
+				anchors.push([k, coordOf(process, p), ci, st]);
+				kept.push([k, found[j]]);
 				from = k + 1;
-				break;
+				return;
 			}
 		}
+		kept.push([from, found[j]]);
 	});
-	anchors.push([last, coordOf(process, pts95[last]), coordOf(process, end), end]);
+	anchors.push([last, coordOf(process, pts95[last]), cEnd, end]);
 	const log = COORD[process] === 'P' || COORD[process] === 'v';
 	const points: State[] = new Array(pts95.length);
 	let a = 0;
@@ -312,6 +323,34 @@ export function if97LegPoints(
 	for (let k = 1; k < last; k++)
 		if (pts95[k].T === pts95[k - 1].T && pts95[k].rho === pts95[k - 1].rho)
 			points[k] = points[k - 1];
+	// IF97's line crossed where IAPWS-95's is not (the IAPWS-95 leg ends just short of its own line):
+	// between two IF97 points, one inside the dome and one outside it, with no crossing between them
+	const inside = (st: State) => st.x !== null && st.x > 0 && st.x < 1;
+	const added: Array<[number, Crossing]> = [];
+	for (let k = 1; k <= last; k++) {
+		const [pa, pb] = [points[k - 1], points[k]];
+		if (pa.formulation || pb.formulation || inside(pa) === inside(pb)) continue;
+		if (pa.x !== null && !inside(pa)) continue; // on the line already
+		if (pb.x !== null && !inside(pb)) continue;
+		const single = inside(pa) ? pb : pa;
+		const line =
+			single.phase === 'compressed-liquid'
+				? 'saturated-liquid'
+				: single.phase === 'superheated-vapor'
+					? 'saturated-vapor'
+					: null;
+		if (!line) continue;
+		try {
+			const st = if97Crossing(process, start, { line, state: single }, n);
+			const ci = coordOf(process, st);
+			const [ca, cb] = [coordOf(process, pa), coordOf(process, pb)];
+			if ((ci - ca) * (cb - ci) > 0) added.push([k, { line, state: st }]);
+		} catch (e) {
+			if (!(e instanceof ThermoError)) throw e;
+		}
+	}
+	for (let i = added.length - 1; i >= 0; i--) points.splice(added[i][0], 0, added[i][1].state);
+	const crossings = [...kept, ...added].sort((x, y) => x[0] - y[0]).map(([, c]) => c);
 	return { points, crossings, failed, why };
 }
 
