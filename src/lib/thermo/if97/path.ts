@@ -305,8 +305,10 @@ export function if97LegPoints(
 			continue;
 		}
 		const p = pts95[k];
-		const span95 = B[1] - A[1];
-		const c = span95 === 0 ? A[2] : A[2] + ((coordOf(process, p) - A[1]) * (B[2] - A[2])) / span95;
+		// the IAPWS-95 piece stretched onto the IF97 one; a piece of (next to) no length on either side
+		// (a leg whose ends coincide) is moved across unstretched
+		const ratio = (B[2] - A[2]) / (B[1] - A[1]);
+		const c = A[2] + (coordOf(process, p) - A[1]) * (ratio > 0.5 && ratio < 2 ? ratio : 1);
 		const x = log ? Math.exp(c) : c;
 		try {
 			points[k] =
