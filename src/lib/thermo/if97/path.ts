@@ -18,10 +18,12 @@
  *
  * Each leg's crossings of the saturation lines are IF97's own: where the leg's invariant meets IF97's
  * saturated liquid or vapor (Eq. 30 with region 1, 2 or 3 on each side), found from the IAPWS-95
- * crossing (legCrossings). Each point between the ends is re-fixed by IF97 from the invariant and the
- * point's progress coordinate (COORD: a property that runs monotonically along the process curve and
- * pairs with the invariant; isobaric (P, h), isentropic (s, P) and isenthalpic (h, P) go straight to
- * the basic equations). The IAPWS-95 point's coordinate is carried over piecewise linearly (in ln P or
+ * crossing (if97Crossing); one whose IF97 line lies beyond the leg's IF97 end is dropped, and one the
+ * IF97 leg meets where the IAPWS-95 leg does not is found between the two IF97 points it separates and
+ * put among the points (if97LegPoints). Each point between the ends is re-fixed by IF97 from the
+ * invariant and the point's progress coordinate (COORD: a property that runs monotonically along the
+ * process curve and pairs with the invariant; isobaric (P, h), isentropic (s, P) and isenthalpic
+ * (h, P) go straight to the basic equations, (T, v) in region 3 straight to Eq. 28). The IAPWS-95 point's coordinate is carried over piecewise linearly (in ln P or
  * ln v for those) between the leg's anchors — start, crossings, end — mapped onto their IF97
  * counterparts, so the IF97 points stay in order and run exactly through the IF97 ends and crossings.
  *
