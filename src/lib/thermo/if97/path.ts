@@ -47,7 +47,7 @@ import type {
 } from '../types.ts';
 import { PC, RHOC, TC, pB23, pressure3, psat, tsat } from './regions.ts';
 import { if97FixFrom, type If97Seed } from './fix.ts';
-import { if97Limits, if97Region3State, if97State } from './state.ts';
+import { if97Limits, if97Region3State, if97State, if97StatePh, if97StatePs } from './state.ts';
 import { cycleOf } from '../solvers/path.ts';
 
 const seedOf = (st: State): If97Seed => ({ T: st.T, P: st.P, x: st.x, phase: st.phase });
@@ -232,6 +232,34 @@ function region3Direct(T: number, v: number): State | null {
 	return if97Region3State(rho, T);
 }
 
+/**
+ * The IF97 point of the leg from `start` at coordinate c: (P, h) and (P, s) straight to the basic
+ * equations (as if97FixFrom would, without its checks of the pair), (T, v) in region 3 straight from
+ * Eq. 28 where it can be, else if97FixFrom seeded with the IAPWS-95 point `seed`.
+ */
+function pointAt(
+	process: Process,
+	start: State,
+	c: number,
+	n: number | undefined,
+	seed: State
+): State {
+	switch (process) {
+		case 'isobaric':
+			return if97StatePh(start.P, c);
+		case 'isentropic':
+			return if97StatePs(c, start.s);
+		case 'isenthalpic':
+			return if97StatePh(c, start.h);
+		case 'isochoric':
+			return region3Direct(c, start.v) ?? if97FixFrom({ T: c, v: start.v }, seedOf(seed));
+		case 'isothermal':
+			return region3Direct(start.T, c) ?? if97FixFrom({ T: start.T, v: c }, seedOf(seed));
+		default:
+			return if97FixFrom(if97PointInputs(process, start, c, n), seedOf(seed));
+	}
+}
+
 /** Coordinate c of a state as carried over: logarithmic for P and v. */
 const coordOf = (process: Process, st: State): number => {
 	const c = COORD[process];
@@ -313,12 +341,7 @@ export function if97LegPoints(
 		const c = A[2] + (coordOf(process, p) - A[1]) * (ratio > 0.5 && ratio < 2 ? ratio : 1);
 		const x = log ? Math.exp(c) : c;
 		try {
-			points[k] =
-				(process === 'isochoric'
-					? region3Direct(x, start.v)
-					: process === 'isothermal'
-						? region3Direct(start.T, x)
-						: null) ?? if97FixFrom(if97PointInputs(process, start, x, n), seedOf(p));
+			points[k] = pointAt(process, start, x, n, p);
 		} catch (e) {
 			points[k] = miss(p, e);
 		}
