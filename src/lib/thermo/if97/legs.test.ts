@@ -12,10 +12,12 @@ import {
 	computePath,
 	fixState,
 	if97Fix,
+	if97Isolines,
 	if97SaturationCurve,
 	if97SaturationPressure,
 	if97State,
 	IF97_DOME_TOP,
+	type IsolineKind,
 	type PathSpec,
 	type State
 } from '../index.ts';
@@ -286,6 +288,48 @@ describe('points IF97 cannot give', () => {
 		expect(got.points[2]).toEqual({ ...bad, formulation: 'iapws95' });
 		expect(got.points[1].formulation).toBeUndefined();
 		expect((got.points[1] as State & { region?: number }).region).toBe(1);
+	});
+});
+
+describe('background lines by IF97 against python3-iapws IAPWS97', () => {
+	// the same curves as the fixture's legs: the 1 MPa isobar, the isentrope of 10 MPa and 800 K, the
+	// isochore of 0.1 m³/kg; each line's points within a leg's range read off its grid as above
+	const cases: Array<[IsolineKind, number, (typeof fixture.legs)[number]]> = [
+		['isobar', 1e6, fixture.legs[0]],
+		['isentrope', fixture.legs[1].start.s, fixture.legs[1]],
+		['isochore', 0.1, fixture.legs[2]]
+	];
+	for (const [kind, value, lg] of cases)
+		it(`${kind} ${value}`, () => {
+			const [line] = if97Isolines(kind, [value], 80);
+			const pieces = lg.pieces as Piece[];
+			let checked = 0;
+			for (const pt of line.points) {
+				const x = coordinate(lg.coordinate, pt as State);
+				const pc = pieceAt(pieces, x);
+				if (!pc) continue;
+				const ref = read(pc, x);
+				for (const p of PROPS)
+					expect(err(p, pt[p], ref[p]), `${kind} at ${x} (${pc.name}) ${p}`).toBeLessThanOrEqual(
+						pc.tol[p] * 1.01
+					);
+				checked++;
+			}
+			expect(checked).toBeGreaterThan(15);
+			// IF97 stops at 100 MPa: no point beyond it
+			expect(line.points.every((p) => p.P <= 100e6 * (1 + 1e-12))).toBe(true);
+		});
+	it('quality lines stop where the IF97 dome does', () => {
+		const [line] = if97Isolines('quality', [0.5], 80);
+		expect(line.points.length).toBeGreaterThan(50);
+		expect(Math.max(...line.points.map((p) => p.T))).toBeLessThanOrEqual(IF97_DOME_TOP);
+		// each point IF97's lever rule at its T (if97Fix (T, x) is checked against python3-iapws
+		// IAPWS97(T, x) in fix.test.ts)
+		for (const p of line.points) {
+			const l = if97Fix({ T: p.T, x: 0 });
+			const g = if97Fix({ T: p.T, x: 1 });
+			expect(rel(p.v, 0.5 * (l.v + g.v))).toBeLessThan(1e-12);
+		}
 	});
 });
 

@@ -220,7 +220,7 @@ export function if97Crossing(process: Process, start: State, near: Crossing, n?:
  * null, and the general (T, v) solve (Newton in ln P) is used. Saves that solve's many region 3
  * density iterations on isochores and isotherms near and above the critical point.
  */
-function region3Direct(T: number, v: number): State | null {
+export function region3Direct(T: number, v: number): State | null {
 	if (!(T >= 623.15)) return null;
 	const rho = 1 / v;
 	const { p, dpdrho } = pressure3(rho, T);
