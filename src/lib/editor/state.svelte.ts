@@ -1137,13 +1137,16 @@ export class SheetEditor {
 			(this.committedView?.states ?? []).map((s) => s.state),
 			this.dome
 		);
-		const key = JSON.stringify([f.id, want.lines]);
+		// water by IAPWS-IF97: its background lines too
+		const by = f.id === 'water' && this.doc.spec.formulation === 'if97' ? 'if97' : undefined;
+		const key = JSON.stringify([f.id, by, want.lines]);
 		if (key !== this.#isoKey) {
 			this.#isoKey = key;
 			try {
 				const got = await Promise.all(
 					want.lines.map(
-						async ([kind, values]) => [kind, await getIsolines(f.id, kind, values)] as const
+						async ([kind, values]) =>
+							[kind, await getIsolines(f.id, kind, values, fetch, by)] as const
 					)
 				);
 				if (this.#isoKey === key) this.isolines = Object.fromEntries(got);
@@ -1151,13 +1154,13 @@ export class SheetEditor {
 				this.#isoKey = '';
 			}
 		}
-		const lkey = JSON.stringify([f.id, want.limitIsobars, want.limitIsotherms]);
+		const lkey = JSON.stringify([f.id, by, want.limitIsobars, want.limitIsotherms]);
 		if (lkey !== this.#limitKey) {
 			this.#limitKey = lkey;
 			try {
 				const [isobars, isotherms] = await Promise.all([
-					getIsolines(f.id, 'isobar', want.limitIsobars),
-					getIsolines(f.id, 'isotherm', want.limitIsotherms)
+					getIsolines(f.id, 'isobar', want.limitIsobars, fetch, by),
+					getIsolines(f.id, 'isotherm', want.limitIsotherms, fetch, by)
 				]);
 				if (this.#limitKey === lkey) this.limitCurves = { isobars, isotherms };
 			} catch {

@@ -2,6 +2,7 @@ import {
 	computePath,
 	if97Extras,
 	if97Fix,
+	if97Isolines,
 	if97SaturationCurve,
 	fixState,
 	getFluid,
@@ -23,7 +24,8 @@ import { frameLimits, frameLines } from '$lib/sheets/frame';
 
 /*
  * What a page needs to draw a sheet's path, computed on the server with the engine: the vapor
- * dome (cached per fluid), the chart's frame and the draft's path for the first paint. The
+ * dome (cached per fluid and formulation), the chart's frame (a water sheet by IAPWS-IF97 gets IF97's
+ * dome and background lines) and the draft's path for the first paint. The
  * editor asks the compute API for the same lines, chosen by the same `frameLines`.
  */
 
@@ -50,10 +52,17 @@ export function dome(fluid: string, formulation: Formulation = 'iapws95'): Satur
 	return d;
 }
 
-function lines(fluid: string, kind: IsolineKind, values: number[]): Isoline[] {
+function lines(
+	fluid: string,
+	kind: IsolineKind,
+	values: number[],
+	formulation: Formulation
+): Isoline[] {
 	if (!values.length) return [];
 	try {
-		return engineIsolines(fluid, kind, values.slice(0, 40), 80);
+		return formulation === 'if97'
+			? if97Isolines(kind, values.slice(0, 40), 80)
+			: engineIsolines(fluid, kind, values.slice(0, 40), 80);
 	} catch (e) {
 		if (e instanceof ThermoError) return [];
 		throw e;
@@ -71,11 +80,11 @@ export function chartFrame(doc: SheetDoc, results: Array<PathResult | null>): Ch
 		fluid: f,
 		saturation,
 		isolines: Object.fromEntries(
-			want.lines.map(([kind, values]) => [kind, lines(f.id, kind, values)])
+			want.lines.map(([kind, values]) => [kind, lines(f.id, kind, values, formulation)])
 		),
 		limits: frameLimits(doc.spec.limits, {
-			isobars: lines(f.id, 'isobar', want.limitIsobars),
-			isotherms: lines(f.id, 'isotherm', want.limitIsotherms)
+			isobars: lines(f.id, 'isobar', want.limitIsobars, formulation),
+			isotherms: lines(f.id, 'isotherm', want.limitIsotherms, formulation)
 		})
 	};
 }

@@ -5,6 +5,7 @@ import {
 	isolines,
 	ISOLINE_UNITS,
 	saturationCurve,
+	if97Isolines,
 	if97SaturationCurve,
 	stateExtras,
 	ThermoError,
@@ -31,7 +32,14 @@ export type ComputeTask =
 	| { kind: 'leg'; spec: LegSpec }
 	| { kind: 'path'; spec: PathSpec }
 	| { kind: 'state'; fluid: string; inputs: Inputs; options: FixOptions }
-	| { kind: 'isolines'; fluid: string; line: IsolineKind; values: number[]; points: number }
+	| {
+			kind: 'isolines';
+			fluid: string;
+			line: IsolineKind;
+			values: number[];
+			points: number;
+			formulation?: Formulation;
+	  }
 	| { kind: 'saturation'; fluid: string; points: number; formulation?: Formulation };
 
 /** The engine's refusal, as plain data (a class does not survive the crossing). */
@@ -59,7 +67,10 @@ function answer(task: ComputeTask): unknown {
 				fluid: task.fluid,
 				kind: task.line,
 				unit: ISOLINE_UNITS[task.line],
-				lines: isolines(task.fluid, task.line, task.values, task.points)
+				lines:
+					task.formulation === 'if97'
+						? if97Isolines(task.line, task.values, task.points)
+						: isolines(task.fluid, task.line, task.values, task.points)
 			};
 		case 'saturation':
 			return task.formulation === 'if97'
