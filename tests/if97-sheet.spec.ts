@@ -3,7 +3,8 @@ import { DEMO, TEAM, signInPage } from './helpers';
 
 // A water sheet switched to IAPWS-IF97 in Setup: its states are IF97's (a value the scientific
 // formulation gives differently), the table, the exports and the title block name the formulation,
-// the difference toggle shows IF97 − IAPWS-95 under each state, and the charts draw IF97's own dome.
+// the difference toggle shows IF97 − IAPWS-95 under each state, and the charts draw IF97's own dome
+// and background lines.
 
 async function readDownload(d: Download): Promise<string> {
 	const { readFile } = await import('node:fs/promises');
@@ -55,6 +56,10 @@ test('a water sheet by IAPWS-IF97: IF97 values, the formulation named, the diffe
 	await page.getByRole('tab', { name: /Setup/ }).click();
 	const select = page.getByTestId('setup-formulation');
 	await expect(select).toHaveValue('iapws95');
+	// once switched, the editor asks for the background lines by IF97 too
+	const if97Lines = page.waitForResponse(
+		(r) => r.url().includes('/isolines?') && r.url().includes('formulation=if97')
+	);
 	await expect(async () => {
 		await select.selectOption('if97');
 		await expect(select).toHaveValue('if97', { timeout: 2000 });
@@ -68,6 +73,7 @@ test('a water sheet by IAPWS-IF97: IF97 values, the formulation named, the diffe
 	await expect.poll(s2h).toBe('670.88');
 	// and now IF97's dome, which stops at 643.15 K and says so (src/lib/thermo/if97/dome.ts)
 	await expect(chartDesc).toContainText('Vapor dome by IAPWS-IF97 from 273.15 K up to 643.15 K');
+	expect((await if97Lines).status()).toBe(200);
 
 	// the difference: IF97 − IAPWS-95 of S2's h, python3-iapws 1.5.2: 670.8758 − 670.7515 = +0.124 kJ/kg
 	const toggle = page.getByTestId('toggle-difference');
