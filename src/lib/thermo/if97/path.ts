@@ -23,9 +23,10 @@
  * put among the points (if97LegPoints). Each point between the ends is re-fixed by IF97 from the
  * invariant and the point's progress coordinate (COORD: a property that runs monotonically along the
  * process curve and pairs with the invariant; isobaric (P, h), isentropic (s, P) and isenthalpic
- * (h, P) go straight to the basic equations, (T, v) in region 3 straight to Eq. 28). The IAPWS-95 point's coordinate is carried over piecewise linearly (in ln P or
- * ln v for those) between the leg's anchors — start, crossings, end — mapped onto their IF97
- * counterparts, so the IF97 points stay in order and run exactly through the IF97 ends and crossings.
+ * (h, P) go straight to the basic equations, (T, v) in region 3 straight to Eq. 28). The IAPWS-95
+ * point's coordinate is carried over piecewise linearly (in ln P or ln v for those) between the leg's
+ * anchors — start, crossings, end — mapped onto their IF97 counterparts, so the IF97 points stay in
+ * order and run exactly through the IF97 ends and crossings.
  *
  * The design-limit events stay IAPWS-95. A state, point or crossing IF97 cannot give keeps its
  * IAPWS-95 value, is marked `formulation: 'iapws95'` and counted in an `if97-state-unavailable`
