@@ -4,9 +4,9 @@
  * points are (path.ts): isobar (P, h), isotherm (T, v), isochore (v, T), isentrope (s, P), isenthalp
  * (h, P), quality line (T, x). (P, h) and (P, s) go straight to the basic equations, (T, v) in region
  * 3 straight to Eq. 28 where it can be. A point outside IF97's range (above 100 MPa; above 50 MPa
- * beyond 1073.15 K; a quality line above 643.15 K, where the IF97 dome stops, dome.ts) is left out, so a line stops
- * where IF97 stops. No stretching between anchors: a background line has no ends to meet, and its
- * points lie ~1e−4 from where IF97's own would, far below a chart's resolution.
+ * beyond 1073.15 K; a quality line above 643.15 K, where the IF97 dome stops, dome.ts) is left out,
+ * so a line stops where IF97 stops. No stretching between anchors as on a leg: a background line has
+ * no ends to meet; each point is IF97's state at the IAPWS-95 point's coordinate.
  */
 import { ThermoError } from '../errors.ts';
 import type { Isoline, IsolineKind, IsolinePoint, State } from '../types.ts';
