@@ -3,7 +3,8 @@ import { DEMO, TEAM, signInPage } from './helpers';
 
 // A water sheet switched to IAPWS-IF97 in Setup: its states are IF97's (a value the scientific
 // formulation gives differently), the table, the exports and the title block name the formulation,
-// and the difference toggle shows IF97 − IAPWS-95 under each state.
+// the difference toggle shows IF97 − IAPWS-95 under each state, and the charts draw IF97's own dome
+// and background lines.
 
 async function readDownload(d: Download): Promise<string> {
 	const { readFile } = await import('node:fs/promises');
@@ -47,10 +48,18 @@ test('a water sheet by IAPWS-IF97: IF97 values, the formulation named, the diffe
 	await expect.poll(s1T).toBe('158.91');
 	await expect.poll(s2h).toBe('670.75');
 	await expect(page.getByTestId('toggle-difference')).toHaveCount(0);
+	// the charts draw the fluid's own dome (IAPWS-95): their description names no other
+	const chartDesc = page.locator('.process-chart desc').first();
+	await expect(chartDesc).toContainText('Critical point');
+	await expect(chartDesc).not.toContainText('IAPWS-IF97');
 
 	await page.getByRole('tab', { name: /Setup/ }).click();
 	const select = page.getByTestId('setup-formulation');
 	await expect(select).toHaveValue('iapws95');
+	// once switched, the editor asks for the background lines by IF97 too
+	const if97Lines = page.waitForResponse(
+		(r) => r.url().includes('/isolines?') && r.url().includes('formulation=if97')
+	);
 	await expect(async () => {
 		await select.selectOption('if97');
 		await expect(select).toHaveValue('if97', { timeout: 2000 });
@@ -62,6 +71,9 @@ test('a water sheet by IAPWS-IF97: IF97 values, the formulation named, the diffe
 	await expect(page.getByTestId('table-formulation')).toHaveText('Water by IAPWS-IF97');
 	await expect.poll(s1T).toBe('158.92');
 	await expect.poll(s2h).toBe('670.88');
+	// and now IF97's dome, which stops at 643.15 K and says so (src/lib/thermo/if97/dome.ts)
+	await expect(chartDesc).toContainText('Vapor dome by IAPWS-IF97 from 273.15 K up to 643.15 K');
+	expect((await if97Lines).status()).toBe(200);
 
 	// the difference: IF97 − IAPWS-95 of S2's h, python3-iapws 1.5.2: 670.8758 − 670.7515 = +0.124 kJ/kg
 	const toggle = page.getByTestId('toggle-difference');
@@ -94,4 +106,8 @@ test('a water sheet by IAPWS-IF97: IF97 values, the formulation named, the diffe
 	await page.goto(`${new URL(page.url()).pathname}/print?rev=draft`);
 	await expect(page.locator('body')).toContainText('IAPWS-IF97 — IAPWS R7-97(2012)');
 	await expect(page.getByTestId('path-table-formulation')).toContainText('IAPWS-IF97');
+	// its charts are framed on the server with IF97's dome
+	await expect(page.locator('.process-chart desc').first()).toContainText(
+		'Vapor dome by IAPWS-IF97'
+	);
 });

@@ -70,6 +70,11 @@ describe('accessible names', () => {
 		expect(d).toContain('Leg S1 to S2');
 		expect(d).toContain('Design limit: design pressure');
 		expect(d).toContain('Legs are drawn by process: isochoric as a vermillion long dash line.');
+		expect(d).not.toContain('Vapor dome by');
+		const note = 'Vapor dome by IAPWS-IF97 up to 643.15 K.';
+		expect(chartDescription({ kind: 'T-v', states, legs, prefs: si, domeNote: note })).toContain(
+			note
+		);
 	});
 
 	it('the description names the measured traces, overlaid revisions and open-note flags drawn', () => {

@@ -71,6 +71,8 @@ export interface ChartSummaryInput {
 	kind: ChartKind;
 	fluidName?: string;
 	critical?: State | null;
+	/** what the dome's own data says of it (SaturationCurve.note: its formulation, where it stops) */
+	domeNote?: string | null;
 	states: readonly ChartState[];
 	legs: readonly ChartLeg[];
 	limits?: DesignLimits | null;
@@ -97,6 +99,7 @@ export function chartDescription(input: ChartSummaryInput): string {
 		lines.push(
 			`Critical point at ${shortT(input.critical.T, input.prefs)} and ${shortP(input.critical.P, input.prefs)}.`
 		);
+	if (input.domeNote) lines.push(input.domeNote);
 	for (const s of input.states) lines.push(`${stateAriaLabel(s, input.prefs)}.`);
 	for (const l of input.legs) lines.push(`${legAriaLabel(l, input.states)}.`);
 	const used = PROCESS_ORDER.filter((p) => input.legs.some((l) => l.process === p)).map(

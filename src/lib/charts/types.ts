@@ -12,6 +12,8 @@ export interface SaturationCurve {
 	critical: State;
 	/** the liquid along the melting curve (drawn where it falls in view); absent or empty without one */
 	melting?: State[];
+	/** what a chart's description says of this dome beyond its shape (water by IAPWS-IF97: where it stops) */
+	note?: string;
 }
 
 export interface TriplePoint {

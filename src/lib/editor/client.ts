@@ -4,6 +4,7 @@
  * ApiError; a network failure (offline, server gone) as OfflineError.
  */
 import type {
+	Formulation,
 	Isoline,
 	IsolineKind,
 	PathResult,
@@ -84,18 +85,20 @@ export async function postPath(spec: PathSpec, f: Fetch = fetch): Promise<PathRe
 	return r.path;
 }
 
-/** GET /api/v1/fluids/{id}/isolines (cached by the browser: the answer depends on the URL only). */
+/** GET /api/v1/fluids/{id}/isolines (cached by the browser: the answer depends on the URL only); water's by IAPWS-IF97 with `formulation` 'if97'. */
 export async function getIsolines(
 	fluid: string,
 	kind: IsolineKind,
 	values: number[],
-	f: Fetch = fetch
+	f: Fetch = fetch,
+	formulation?: Formulation
 ): Promise<Isoline[]> {
 	if (!values.length) return [];
 	const q = values.map((v) => Number(v.toPrecision(12))).join(',');
+	const by = formulation === 'if97' ? '&formulation=if97' : '';
 	const r = await apiCall<{ lines: Isoline[] }>(
 		f,
-		`/api/v1/fluids/${encodeURIComponent(fluid)}/isolines?kind=${kind}&values=${q}&points=80`
+		`/api/v1/fluids/${encodeURIComponent(fluid)}/isolines?kind=${kind}&values=${q}&points=80${by}`
 	);
 	return r.lines;
 }

@@ -212,7 +212,27 @@ export class SheetEditor {
 	busy = $state(false);
 
 	fluid = $state.raw<FluidInfo>(null as unknown as FluidInfo);
+	/** the fluid's own dome (its chart data); the charts draw `dome` */
 	saturation = $state.raw<SaturationCurve | null>(null);
+	/** water's dome by IAPWS-IF97, made once by the browser's engine for an IF97 sheet */
+	#if97Dome: SaturationCurve | null = null;
+
+	/**
+	 * The dome the charts draw and frame: on a water sheet by IAPWS-IF97 IF97's own (once the engine
+	 * has loaded; the fluid's until then), else the fluid's own.
+	 */
+	get dome(): SaturationCurve | null {
+		const spec = this.doc.spec;
+		if (spec.fluid !== 'water' || spec.formulation !== 'if97' || !this.engine)
+			return this.saturation;
+		if (!this.#if97Dome)
+			try {
+				this.#if97Dome = this.engine.if97SaturationCurve(100);
+			} catch {
+				return this.saturation;
+			}
+		return this.#if97Dome;
+	}
 	/** background lines by kind, for the kinds the shown views draw (chart-views.ts) */
 	isolines = $state.raw<Partial<Record<IsolineKind, Isoline[]>>>({});
 	limitCurves = $state.raw<{ isobars: Isoline[]; isotherms: Isoline[] }>({
@@ -1115,15 +1135,18 @@ export class SheetEditor {
 			f,
 			this.doc,
 			(this.committedView?.states ?? []).map((s) => s.state),
-			this.saturation
+			this.dome
 		);
-		const key = JSON.stringify([f.id, want.lines]);
+		// water by IAPWS-IF97: its background lines too
+		const by = f.id === 'water' && this.doc.spec.formulation === 'if97' ? 'if97' : undefined;
+		const key = JSON.stringify([f.id, by, want.lines]);
 		if (key !== this.#isoKey) {
 			this.#isoKey = key;
 			try {
 				const got = await Promise.all(
 					want.lines.map(
-						async ([kind, values]) => [kind, await getIsolines(f.id, kind, values)] as const
+						async ([kind, values]) =>
+							[kind, await getIsolines(f.id, kind, values, fetch, by)] as const
 					)
 				);
 				if (this.#isoKey === key) this.isolines = Object.fromEntries(got);
@@ -1131,13 +1154,13 @@ export class SheetEditor {
 				this.#isoKey = '';
 			}
 		}
-		const lkey = JSON.stringify([f.id, want.limitIsobars, want.limitIsotherms]);
+		const lkey = JSON.stringify([f.id, by, want.limitIsobars, want.limitIsotherms]);
 		if (lkey !== this.#limitKey) {
 			this.#limitKey = lkey;
 			try {
 				const [isobars, isotherms] = await Promise.all([
-					getIsolines(f.id, 'isobar', want.limitIsobars),
-					getIsolines(f.id, 'isotherm', want.limitIsotherms)
+					getIsolines(f.id, 'isobar', want.limitIsobars, fetch, by),
+					getIsolines(f.id, 'isotherm', want.limitIsotherms, fetch, by)
 				]);
 				if (this.#limitKey === lkey) this.limitCurves = { isobars, isotherms };
 			} catch {
@@ -1155,7 +1178,7 @@ export class SheetEditor {
 	metric(kind: ChartKind, width: number, height: number): ScreenMetric {
 		const v = this.committedView;
 		const d = fitDomain(kind, this.doc.chart.pressureScale, {
-			saturation: this.saturation,
+			saturation: this.dome,
 			triple: this.fluid.triple,
 			states: v?.states ?? [],
 			legs: v?.legs ?? [],

@@ -77,6 +77,12 @@ export interface State {
 	 * (solvers/precision.ts). 2.2e−16 for a perfectly conditioned pair; up to 1.
 	 */
 	precision?: Precision;
+	/**
+	 * On a leg point or crossing of a path computed with IAPWS-IF97: 'iapws95' where IF97 could not
+	 * give it, so it is the IAPWS-95 point (a warning `if97-state-unavailable` counts them); absent
+	 * on every other state.
+	 */
+	formulation?: Formulation;
 }
 
 /** Relative uncertainties (dimensionless) of T, P and v; see State.precision. */
@@ -143,6 +149,15 @@ export interface SaturationCurve {
 	critical: State;
 	/** the liquid along the melting curve from the triple point up to the formulation's Pmax, for drawing; empty for a fluid without one */
 	melting?: State[];
+	/** absent: the fluid's own equation; 'if97': water by IAPWS-IF97 (if97/dome.ts) */
+	formulation?: Formulation;
+	/**
+	 * Set where the curves stop short of the critical point: the temperature (K) of their last
+	 * points, from which the dome is joined to `critical` by straight lines; `note` says so in words.
+	 */
+	stopsAt?: number;
+	/** what a chart's description says of this dome beyond its shape (its formulation, where it stops) */
+	note?: string;
 }
 
 export type Process =
@@ -315,8 +330,8 @@ export interface PathSpec {
 
 /**
  * The formulations a water path may be computed with. With 'if97' every state of the path is fixed
- * by IF97 from the same pair the IAPWS-95 path fixes it by, and each leg's q and w follow from those
- * states (if97/path.ts); the legs' points between the ends stay IAPWS-95.
+ * by IF97 from the same pair the IAPWS-95 path fixes it by, each leg's q and w follow from those
+ * states, and each leg's points and crossings of the saturation lines are IF97's too (if97/path.ts).
  */
 export type Formulation = 'iapws95' | 'if97';
 

@@ -416,7 +416,7 @@ export const pathRequestSchema = z
 			});
 	});
 
-/** Query of GET …/saturation: points (2…1000, default 100). */
+/** Query of GET …/saturation: points (2…1000, default 100); formulation (water: "if97" for IAPWS-IF97's dome). */
 export const saturationQuerySchema = z.strictObject(
 	{
 		points: z
@@ -431,9 +431,15 @@ export const saturationQuerySchema = z.strictObject(
 						error: `points must be at most ${API_SATURATION_POINTS_MAX}.`
 					})
 			)
+			.optional(),
+		formulation: z
+			.enum(['iapws95', 'if97'], {
+				error:
+					'formulation must be "iapws95" (the default, the fluid\'s own equation of state) or "if97" (water by IAPWS-IF97).'
+			})
 			.optional()
 	},
-	{ error: objectError('the query', '?points=100', ['points']) }
+	{ error: objectError('the query', '?points=100', ['points', 'formulation']) }
 );
 
 const NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
@@ -488,9 +494,22 @@ export const isolineQuerySchema = z
 						.min(ISOLINE_POINTS_MIN, { error: `points must be at least ${ISOLINE_POINTS_MIN}.` })
 						.max(ISOLINE_POINTS_MAX, { error: `points must be at most ${ISOLINE_POINTS_MAX}.` })
 				)
-				.default(ISOLINE_POINTS_DEFAULT)
+				.default(ISOLINE_POINTS_DEFAULT),
+			formulation: z
+				.enum(['iapws95', 'if97'], {
+					error:
+						'formulation must be "iapws95" (the default, the fluid\'s own equation of state) or "if97" (water by IAPWS-IF97).'
+				})
+				.optional()
 		},
-		{ error: objectError('the query', '?kind=isobar&values=1e5,1e6', ['kind', 'values', 'points']) }
+		{
+			error: objectError('the query', '?kind=isobar&values=1e5,1e6', [
+				'kind',
+				'values',
+				'points',
+				'formulation'
+			])
+		}
 	)
 	.superRefine((q, ctx) => {
 		// s and h count from each fluid's reference state (either sign); a quality is 0…1

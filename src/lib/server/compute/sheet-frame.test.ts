@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { computePath } from '$lib/thermo';
+import { computePath, if97Isolines } from '$lib/thermo';
 import { vesselDoc } from '$lib/revisions/test-fixtures';
 import { chartFrame, dome, draftResult } from './sheet-frame';
 
@@ -39,6 +39,30 @@ describe('the chart frame on the server', () => {
 
 	it('traces a fluid dome once', () => {
 		expect(dome('water')).toBe(dome('water'));
+	});
+
+	it('frames a water sheet by IAPWS-IF97 with IF97’s dome, cached apart from IAPWS-95’s', () => {
+		const doc = vesselDoc();
+		const if97 = { ...doc, spec: { ...doc.spec, formulation: 'if97' as const } };
+		const f = chartFrame(if97, [null]);
+		expect(f.saturation?.formulation).toBe('if97');
+		expect(f.saturation).toBe(dome('water', 'if97'));
+		expect(dome('water', 'if97')).not.toBe(dome('water'));
+		expect(chartFrame(doc, [null]).saturation?.formulation).toBeUndefined();
+		// its first point: python3-iapws 1.5.2 IAPWS97(T=273.15, x=0).P = 611.212677 Pa
+		expect(f.saturation!.liquid[0].T).toBe(273.15);
+		expect(f.saturation!.liquid[0].P).toBeCloseTo(611.212677, 5);
+		// and IF97's background lines (if97Isolines, checked against python3-iapws in if97/legs.test.ts)
+		const isobars = f.isolines.isobar!;
+		expect(isobars.length).toBeGreaterThan(2);
+		expect(isobars).toEqual(
+			if97Isolines(
+				'isobar',
+				isobars.map((l) => l.value),
+				80
+			)
+		);
+		expect(isobars).not.toEqual(chartFrame(doc, [null]).isolines.isobar);
 	});
 });
 

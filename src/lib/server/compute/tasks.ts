@@ -5,10 +5,13 @@ import {
 	isolines,
 	ISOLINE_UNITS,
 	saturationCurve,
+	if97Isolines,
+	if97SaturationCurve,
 	stateExtras,
 	ThermoError,
 	transport,
 	type FixOptions,
+	type Formulation,
 	type Inputs,
 	type LegSpec,
 	type PathSpec
@@ -29,8 +32,15 @@ export type ComputeTask =
 	| { kind: 'leg'; spec: LegSpec }
 	| { kind: 'path'; spec: PathSpec }
 	| { kind: 'state'; fluid: string; inputs: Inputs; options: FixOptions }
-	| { kind: 'isolines'; fluid: string; line: IsolineKind; values: number[]; points: number }
-	| { kind: 'saturation'; fluid: string; points: number };
+	| {
+			kind: 'isolines';
+			fluid: string;
+			line: IsolineKind;
+			values: number[];
+			points: number;
+			formulation?: Formulation;
+	  }
+	| { kind: 'saturation'; fluid: string; points: number; formulation?: Formulation };
 
 /** The engine's refusal, as plain data (a class does not survive the crossing). */
 export type ThermoFailure = ReturnType<ThermoError['toJSON']>;
@@ -57,10 +67,15 @@ function answer(task: ComputeTask): unknown {
 				fluid: task.fluid,
 				kind: task.line,
 				unit: ISOLINE_UNITS[task.line],
-				lines: isolines(task.fluid, task.line, task.values, task.points)
+				lines:
+					task.formulation === 'if97'
+						? if97Isolines(task.line, task.values, task.points)
+						: isolines(task.fluid, task.line, task.values, task.points)
 			};
 		case 'saturation':
-			return saturationCurve(task.fluid, task.points);
+			return task.formulation === 'if97'
+				? if97SaturationCurve(task.points)
+				: saturationCurve(task.fluid, task.points);
 	}
 }
 

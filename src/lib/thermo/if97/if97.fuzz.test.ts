@@ -2,10 +2,14 @@
  * Seeded fuzzing of the IF97 entries over their whole range (fast-check): every (P, T) gives finite
  * properties consistent with the inputs (or a ThermoError, never NaN or another error); (P, h) and
  * (P, s) of each such state give it back. Also dense near the critical point and the saturation line.
+ * And water paths of one leg by IF97 from random starts, processes and targets: points in order along
+ * the leg, each crossing on IF97's line and among the points, anything IF97 cannot give counted.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from '../errors.ts';
+import { computePath, fixState } from '../index.ts';
+import type { PathSpec, Process, State } from '../types.ts';
 import {
 	if97SaturationPressure,
 	if97State,
@@ -129,5 +133,101 @@ describe('IF97 (P, h), (P, s) at a saturated state', () => {
 				}
 			}
 		}
+	});
+});
+
+const PROCESSES: Process[] = [
+	'isobaric',
+	'isochoric',
+	'isothermal',
+	'isentropic',
+	'isenthalpic',
+	'polytropic'
+];
+/** what runs monotonically along each process's curve (if97/path.ts) */
+const ALONG: Record<Process, 'h' | 'T' | 'v' | 'P'> = {
+	isobaric: 'h',
+	isochoric: 'T',
+	isothermal: 'v',
+	isentropic: 'P',
+	isenthalpic: 'P',
+	polytropic: 'v'
+};
+
+describe('IF97 legs (seeded)', () => {
+	it('points in order, crossings on IF97’s line and among the points, failures counted', () => {
+		fc.assert(
+			fc.property(
+				fc.double({ min: 280, max: 980, noNaN: true }),
+				fc.double({ min: Math.log(1e3), max: Math.log(9e7), noNaN: true }),
+				fc.double({ min: 0, max: 1, noNaN: true }),
+				fc.boolean(),
+				fc.constantFrom(...PROCESSES),
+				fc.constantFrom('T', 'P', 'v', 'h', 's', 'x'),
+				fc.double({ min: 0, max: 1, noNaN: true }),
+				fc.double({ min: 0.5, max: 1.7, noNaN: true }),
+				(T, lnP, x, inDome, process, key, u, n) => {
+					const start = inDome ? { T: Math.min(T, 646.9), x } : { T, P: Math.exp(lnP) };
+					let s0: State;
+					try {
+						s0 = fixState('water', start);
+					} catch {
+						return;
+					}
+					const target = {
+						T: { T: 280 + u * 700 },
+						P: { P: Math.exp(Math.log(1e3) + u * 11) },
+						v: { v: s0.v * Math.exp((u - 0.5) * 6) },
+						h: { h: s0.h + (u - 0.5) * 2e6 },
+						s: { s: s0.s + (u - 0.5) * 4e3 },
+						x: { x: u }
+					}[key];
+					const spec: PathSpec = {
+						fluid: 'water',
+						system: { kind: 'flow', massFlow: 1 },
+						start,
+						legs: [{ process, target, ...(process === 'polytropic' && { n }) }],
+						formulation: 'if97'
+					};
+					let r;
+					try {
+						r = computePath(spec);
+					} catch (e) {
+						expect(e).toBeInstanceOf(ThermoError);
+						return;
+					}
+					const leg = r.legs[0].leg;
+					const marked =
+						leg.points.some((p) => p.formulation) || leg.crossings.some((c) => c.state.formulation);
+					if (marked)
+						expect(r.warnings.some((w) => w.code === 'if97-state-unavailable')).toBe(true);
+					if (r.states.some((s) => s.formulation === 'iapws95')) return;
+					const k = ALONG[process];
+					const d = Math.sign(leg.end[k] - leg.start[k]);
+					// in order wherever the IAPWS-95 leg's points are (those of a leg whose ends coincide
+					// need not be), within the solvers' tolerance (1e−8 in v at a polytropic end in the liquid)
+					const p95 = computePath({ ...spec, formulation: undefined }).legs[0].leg.points;
+					const d95 = Math.sign(p95[p95.length - 1][k] - p95[0][k]);
+					const tol = (y: number) => 1e-7 * Math.abs(y);
+					if (
+						leg.points.length === p95.length &&
+						d95 === d &&
+						p95.every((p, i) => i === 0 || (p[k] - p95[i - 1][k]) * d >= -tol(p[k]))
+					)
+						leg.points.forEach((p, i) => {
+							if (i > 0)
+								expect((p[k] - leg.points[i - 1][k]) * d, `point ${i}`).toBeGreaterThanOrEqual(
+									-tol(p[k])
+								);
+						});
+					for (const c of leg.crossings) {
+						if (c.state.formulation) continue;
+						expect(leg.points).toContain(c.state);
+						expect(Math.abs(c.state.P / if97SaturationPressure(c.state.T) - 1)).toBeLessThan(1e-12);
+					}
+				}
+			),
+			{ seed: SEED + 4, numRuns: RUNS }
+		);
 	});
 });

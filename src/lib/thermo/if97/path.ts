@@ -16,13 +16,25 @@
  * | isenthalpic | 0 (throttling: irreversible)        | 0         | 0               | 0              |
  * | polytropic  | (P₂v₂ − P₁v₁)/(1 − n); n = 1: P₁v₁ ln(v₂/v₁) | Δu + w | w − Δ(Pv) (n = 0: 0) | Δh + wShaft |
  *
- * The legs' points between the ends, the crossings and the design-limit events stay IAPWS-95 (the
- * difference is far below a chart's resolution). A state IF97 cannot give keeps its IAPWS-95 value,
- * is marked `formulation: 'iapws95'` and named in an `if97-state-unavailable` warning; a leg with such
- * an end keeps its IAPWS-95 q and w.
+ * Each leg's crossings of the saturation lines are IF97's own: where the leg's invariant meets IF97's
+ * saturated liquid or vapor (Eq. 30 with region 1, 2 or 3 on each side), found from the IAPWS-95
+ * crossing (if97Crossing); one whose IF97 line lies beyond the leg's IF97 end is dropped, and one the
+ * IF97 leg meets where the IAPWS-95 leg does not is found between the two IF97 points it separates and
+ * put among the points (if97LegPoints). Each point between the ends is re-fixed by IF97 from the
+ * invariant and the point's progress coordinate (COORD: a property that runs monotonically along the
+ * process curve and pairs with the invariant; isobaric (P, h), isentropic (s, P) and isenthalpic
+ * (h, P) go straight to the basic equations, (T, v) in region 3 straight to Eq. 28). The IAPWS-95
+ * point's coordinate is carried over piecewise linearly (in ln P or ln v for those) between the leg's
+ * anchors — start, crossings, end — mapped onto their IF97 counterparts, so the IF97 points stay in
+ * order and run exactly through the IF97 ends and crossings.
+ *
+ * The design-limit events stay IAPWS-95. A state, point or crossing IF97 cannot give keeps its
+ * IAPWS-95 value, is marked `formulation: 'iapws95'` and counted in an `if97-state-unavailable`
+ * warning; a leg with such an end keeps its IAPWS-95 q, w, points and crossings (all so marked).
  */
 import { ThermoError } from '../errors.ts';
 import type {
+	Crossing,
 	Inputs,
 	Leg,
 	PathResult,
@@ -34,9 +46,9 @@ import type {
 	StateExtras,
 	TargetName
 } from '../types.ts';
-import { PC, TC, psat, tsat } from './regions.ts';
+import { PC, RHOC, TC, pB23, pressure3, psat, tsat } from './regions.ts';
 import { if97FixFrom, type If97Seed } from './fix.ts';
-import { if97Limits, if97State } from './state.ts';
+import { if97Limits, if97Region3State, if97State, if97StatePh, if97StatePs } from './state.ts';
 import { cycleOf } from '../solvers/path.ts';
 
 const seedOf = (st: State): If97Seed => ({ T: st.T, P: st.P, x: st.x, phase: st.phase });
@@ -122,6 +134,254 @@ function polytropicEnd(start: State, n: number, target: [string, number], seed: 
 	return at(y);
 }
 
+/**
+ * The property each process's points are re-fixed by beside the invariant: it runs monotonically
+ * along the process curve (an isobar's h, an isochore's T, an isotherm's v, an isentrope's and an
+ * isenthalp's P, a polytrope's v). P and v are carried over in logarithms.
+ */
+const COORD: Record<Process, 'h' | 'T' | 'v' | 'P'> = {
+	isobaric: 'h',
+	isochoric: 'T',
+	isothermal: 'v',
+	isentropic: 'P',
+	isenthalpic: 'P',
+	polytropic: 'v'
+};
+
+/** The pair that fixes a point of the leg from `start` (its invariant) at coordinate c. */
+export function if97PointInputs(process: Process, start: State, c: number, n?: number): Inputs {
+	if (process === 'polytropic') return { P: start.P * (start.v / c) ** (n ?? 1), v: c };
+	const inv = INVARIANT[process];
+	return { [inv]: start[inv], [COORD[process]]: c } as Inputs;
+}
+
+/** IF97's saturated liquid or vapor at T (K), Eq. 30 with the region on that side. */
+function saturatedAt(T: number, side: 'liquid' | 'vapor'): State {
+	if (!(T >= if97Limits.Tmin && T < TC))
+		throw new ThermoError(
+			'out-of-range',
+			`IAPWS-IF97's saturation line runs from ${if97Limits.Tmin} K to ${TC} K; this crossing lies at ${T} K.`,
+			'Use IAPWS-95 for this sheet.'
+		);
+	return if97State(psat(T) * 1e6, T, { side });
+}
+
+/**
+ * Where a leg from the IF97 state `start` meets IF97's saturated liquid or vapor line near the
+ * IAPWS-95 crossing `near`: at the leg's own P (isobaric, polytropic n = 0) or T (isothermal), else
+ * the temperature along the line where the invariant takes its value (secant from the IAPWS-95 T).
+ */
+export function if97Crossing(process: Process, start: State, near: Crossing, n?: number): State {
+	const side = near.line === 'saturated-liquid' ? 'liquid' : 'vapor';
+	const x = side === 'liquid' ? 0 : 1;
+	const seed = seedOf(near.state);
+	if (process === 'isobaric' || (process === 'polytropic' && n === 0))
+		return if97FixFrom({ P: start.P, x }, seed);
+	if (process === 'isothermal') return if97FixFrom({ T: start.T, x }, seed);
+	const k = n ?? 1;
+	const lnC = Math.log(start.P) + k * Math.log(start.v);
+	const F = (T: number): number => {
+		const st = saturatedAt(T, side);
+		switch (process) {
+			case 'isochoric':
+				return Math.log(st.v / start.v);
+			case 'isentropic':
+				return (st.s - start.s) / 1e3;
+			case 'isenthalpic':
+				return (st.h - start.h) / 1e6;
+			default:
+				return Math.log(st.P) + k * Math.log(st.v) - lnC;
+		}
+	};
+	const top = TC - 1e-9;
+	let a = Math.min(near.state.T, top);
+	let b = Math.min(a * (1 - 1e-6), top);
+	let fa = F(a);
+	let fb = F(b);
+	for (let i = 0; i < 60; i++) {
+		if (fb === 0 || Math.abs(b - a) <= 1e-12 * b) return saturatedAt(b, side);
+		if (fa === fb) break;
+		const c = Math.min(top, Math.max(if97Limits.Tmin, b - (fb * (b - a)) / (fb - fa)));
+		a = b;
+		fa = fb;
+		b = c;
+		fb = F(b);
+	}
+	throw new ThermoError(
+		'no-convergence',
+		`IAPWS-IF97: this leg's crossing of the ${near.line} line was not found near ${near.state.T} K.`,
+		'Use IAPWS-95 for this sheet.'
+	);
+}
+
+/**
+ * A (T, v) point straight from region 3's Helmholtz equation (Eq. 28), which takes ρ and T: where it
+ * lands in region 3 (623.15 K ≤ T, P from B23 to 100 MPa), mechanically stable and, below Tc, on the
+ * side of the saturation line its density says (so neither metastable nor inside the dome). Else
+ * null, and the general (T, v) solve (Newton in ln P) is used. Saves that solve's many region 3
+ * density iterations on isochores and isotherms near and above the critical point.
+ */
+export function region3Direct(T: number, v: number): State | null {
+	if (!(T >= 623.15)) return null;
+	const rho = 1 / v;
+	const { p, dpdrho } = pressure3(rho, T);
+	if (!(dpdrho > 0 && p >= pB23(T) && p <= if97Limits.Pmax / 1e6)) return null;
+	if (T < TC) {
+		const ps = psat(T);
+		if (rho > RHOC ? !(p > ps * (1 + 1e-9)) : !(p < ps * (1 - 1e-9))) return null;
+	}
+	return if97Region3State(rho, T);
+}
+
+/**
+ * The IF97 point of the leg from `start` at coordinate c: (P, h) and (P, s) straight to the basic
+ * equations (as if97FixFrom would, without its checks of the pair), (T, v) in region 3 straight from
+ * Eq. 28 where it can be, else if97FixFrom seeded with the IAPWS-95 point `seed`.
+ */
+function pointAt(
+	process: Process,
+	start: State,
+	c: number,
+	n: number | undefined,
+	seed: State
+): State {
+	switch (process) {
+		case 'isobaric':
+			return if97StatePh(start.P, c);
+		case 'isentropic':
+			return if97StatePs(c, start.s);
+		case 'isenthalpic':
+			return if97StatePh(c, start.h);
+		case 'isochoric':
+			return region3Direct(c, start.v) ?? if97FixFrom({ T: c, v: start.v }, seedOf(seed));
+		case 'isothermal':
+			return region3Direct(start.T, c) ?? if97FixFrom({ T: start.T, v: c }, seedOf(seed));
+		default:
+			return if97FixFrom(if97PointInputs(process, start, c, n), seedOf(seed));
+	}
+}
+
+/** Coordinate c of a state as carried over: logarithmic for P and v. */
+const coordOf = (process: Process, st: State): number => {
+	const c = COORD[process];
+	return c === 'P' || c === 'v' ? Math.log(st[c]) : st[c];
+};
+
+/**
+ * The points and crossings of a leg by IF97 (module comment): `pts95` and `cr95` are the IAPWS-95
+ * leg's, `start` and `end` the IF97 ends. Points IF97 cannot give keep their IAPWS-95 value, marked
+ * `formulation: 'iapws95'`; `failed` counts them (with the first reason).
+ */
+export function if97LegPoints(
+	process: Process,
+	start: State,
+	end: State,
+	pts95: readonly State[],
+	cr95: readonly Crossing[],
+	n?: number
+): { points: State[]; crossings: Crossing[]; failed: number; why: unknown } {
+	let failed = 0;
+	let why: unknown = null;
+	const miss = (st: State, e: unknown): State => {
+		if (!(e instanceof ThermoError)) throw e;
+		failed++;
+		why ??= e;
+		return { ...st, formulation: 'iapws95' };
+	};
+	const found: Crossing[] = cr95.map((c) => {
+		try {
+			return { line: c.line, state: if97Crossing(process, start, c, n) };
+		} catch (e) {
+			return { line: c.line, state: miss(c.state, e) };
+		}
+	});
+	const last = pts95.length - 1;
+	const c0 = coordOf(process, start);
+	const cEnd = coordOf(process, end);
+	const dir = Math.sign(cEnd - c0);
+	// anchors: [index in pts95, IAPWS-95 coordinate, IF97 coordinate, IF97 state]
+	const anchors: Array<[number, number, number, State]> = [
+		[0, coordOf(process, pts95[0]), c0, start]
+	];
+	// [index in pts95, crossing] of the crossings the IF97 leg keeps
+	const kept: Array<[number, Crossing]> = [];
+	let from = 1;
+	cr95.forEach((c, j) => {
+		const st = found[j].state;
+		const ci = coordOf(process, st);
+		// IF97's line may lie beyond the leg's IF97 end (or before the previous crossing) where the
+		// IAPWS-95 leg ends just past its own line: then the IF97 leg does not cross it
+		if (!((ci - anchors[anchors.length - 1][2]) * dir > 0 && (cEnd - ci) * dir > 0)) return;
+		for (let k = from; k < last; k++) {
+			const p = pts95[k];
+			if (p.T === c.state.T && p.rho === c.state.rho) {
+				anchors.push([k, coordOf(process, p), ci, st]);
+				kept.push([k, found[j]]);
+				from = k + 1;
+				return;
+			}
+		}
+		kept.push([from, found[j]]);
+	});
+	anchors.push([last, coordOf(process, pts95[last]), cEnd, end]);
+	const log = COORD[process] === 'P' || COORD[process] === 'v';
+	const points: State[] = new Array(pts95.length);
+	let a = 0;
+	for (let k = 0; k <= last; k++) {
+		while (a < anchors.length - 1 && anchors[a + 1][0] < k) a++;
+		const A = anchors[a];
+		const B = anchors[Math.min(a + 1, anchors.length - 1)];
+		if (k === A[0] || k === B[0]) {
+			points[k] = k === A[0] ? A[3] : B[3];
+			continue;
+		}
+		const p = pts95[k];
+		// the IAPWS-95 piece stretched onto the IF97 one; a piece of (next to) no length on either side
+		// (a leg whose ends coincide) is moved across unstretched
+		const ratio = (B[2] - A[2]) / (B[1] - A[1]);
+		const c = A[2] + (coordOf(process, p) - A[1]) * (ratio > 0.5 && ratio < 2 ? ratio : 1);
+		const x = log ? Math.exp(c) : c;
+		try {
+			points[k] = pointAt(process, start, x, n, p);
+		} catch (e) {
+			points[k] = miss(p, e);
+		}
+	}
+	// a crossing met twice in a row (the end of one piece and the start of the next) is one state
+	for (let k = 1; k < last; k++)
+		if (pts95[k].T === pts95[k - 1].T && pts95[k].rho === pts95[k - 1].rho)
+			points[k] = points[k - 1];
+	// IF97's line crossed where IAPWS-95's is not (the IAPWS-95 leg ends just short of its own line):
+	// between two IF97 points, one inside the dome and one outside it, with no crossing between them
+	const inside = (st: State) => st.x !== null && st.x > 0 && st.x < 1;
+	const added: Array<[number, Crossing]> = [];
+	for (let k = 1; k <= last; k++) {
+		const [pa, pb] = [points[k - 1], points[k]];
+		if (pa.formulation || pb.formulation || inside(pa) === inside(pb)) continue;
+		if (pa.x !== null && !inside(pa)) continue; // on the line already
+		if (pb.x !== null && !inside(pb)) continue;
+		const single = inside(pa) ? pb : pa;
+		const line =
+			single.phase === 'compressed-liquid'
+				? 'saturated-liquid'
+				: single.phase === 'superheated-vapor'
+					? 'saturated-vapor'
+					: null;
+		if (!line) continue;
+		try {
+			const st = if97Crossing(process, start, { line, state: single }, n);
+			const ci = coordOf(process, st);
+			const [ca, cb] = [coordOf(process, pa), coordOf(process, pb)];
+			if ((ci - ca) * (cb - ci) > 0) added.push([k, { line, state: st }]);
+		} catch (e) {
+			if (!(e instanceof ThermoError)) throw e;
+		}
+	}
+	for (let i = added.length - 1; i >= 0; i--) points.splice(added[i][0], 0, added[i][1].state);
+	const crossings = [...kept, ...added].sort((x, y) => x[0] - y[0]).map(([, c]) => c);
+	return { points, crossings, failed, why };
+}
+
 /** q, w, wShaft, qFlow and the differences of a leg between two IF97 states (the table above). */
 export function if97LegEnergy(
 	process: Process,
@@ -177,6 +437,16 @@ function unavailable(id: string, leg: string | undefined, e: unknown): PathWarni
 	};
 	if (leg !== undefined) w.leg = leg;
 	return w;
+}
+
+function pointsUnavailable(leg: string, count: number, e: unknown): PathWarning {
+	const why = e instanceof ThermoError ? e.message : String(e);
+	return {
+		code: 'if97-state-unavailable',
+		severity: 'warning',
+		message: `${leg}: IAPWS-IF97 cannot give ${count === 1 ? 'one point' : `${count} points`} of this leg (points along it or where it crosses a saturation line), so ${count === 1 ? 'it is' : 'they are'} drawn by IAPWS-95. ${why}`,
+		leg
+	};
 }
 
 /**
@@ -236,10 +506,34 @@ export function if97Path(spec: PathSpec, base: PathResult): PathResult {
 		);
 		put(end95, st);
 		const to = states[i + 1];
-		if (from.formulation !== 'if97' || to.formulation !== 'if97') return pl;
+		if (from.formulation !== 'if97' || to.formulation !== 'if97') {
+			// the leg stays IAPWS-95 (its end's warning says why); its points and crossings say so
+			const mark = (p: State): State => ({ ...p, formulation: 'iapws95' });
+			const leg: Leg = {
+				...pl.leg,
+				points: pl.leg.points.map(mark),
+				crossings: pl.leg.crossings.map((c) => ({ ...c, state: mark(c.state) }))
+			};
+			return { ...pl, leg };
+		}
 		const e = if97LegEnergy(ls.process, from.state, to.state, ls.n);
-		const leg: Leg = { ...pl.leg, ...e, start: from.state, end: to.state };
-		leg.points = [from.state, ...pl.leg.points.slice(1, -1), to.state];
+		const got = if97LegPoints(
+			ls.process,
+			from.state,
+			to.state,
+			pl.leg.points,
+			pl.leg.crossings,
+			ls.n
+		);
+		if (got.failed) warnings.push(pointsUnavailable(pl.id, got.failed, got.why));
+		const leg: Leg = {
+			...pl.leg,
+			...e,
+			start: from.state,
+			end: to.state,
+			points: got.points,
+			crossings: got.crossings
+		};
 		return { ...pl, leg };
 	});
 	const closed = base.system.kind === 'closed';

@@ -386,6 +386,7 @@ describe('compute routes under seeded fuzz: never a 5xx, always the error shape,
 					),
 					3
 				),
+				queryPart('formulation', fc.constantFrom('if97', 'iapws95', 'IF97', ''), 3),
 				fc.oneof(
 					{ weight: 12, arbitrary: fc.constant('') },
 					{ weight: 1, arbitrary: fc.string().map((x) => `extra=${encodeURIComponent(x)}`) }
@@ -413,6 +414,7 @@ describe('compute routes under seeded fuzz: never a 5xx, always the error shape,
 					),
 					3
 				),
+				queryPart('formulation', fc.constantFrom('if97', 'iapws95', 'IF97', ''), 2),
 				fc.oneof(
 					{ weight: 12, arbitrary: fc.constant('') },
 					{ weight: 1, arbitrary: fc.string().map((x) => `colour=${encodeURIComponent(x)}`) }
