@@ -326,15 +326,20 @@ export async function signedInPage(
 
 /**
  * The id of the seeded K-101 sheet (the one with an approved revision). Other journeys in the same
- * worker start sheets from the K-101 example whose titles also hold "K-101", so a search's first
- * hit is not necessarily the seeded one: pick it by the seeded title.
+ * worker start sheets from the K-101 example — with the same title when started from the worked
+ * example's button — so neither a search's first hit nor the title alone picks it: the seeded sheet
+ * is the approved one of that title created first.
  */
 export async function seededK101Id(ctx: APIRequestContext): Promise<string> {
 	const seededTitle = 'K-101 kettle jacket: condensing steam, then the trap';
 	const r = await ctx.get(`/api/v1/teams/${TEAM}/sheets?q=K-101&limit=200`);
 	expect(r.status()).toBe(200);
-	const { sheets } = (await r.json()) as { sheets: Array<{ id: string; title: string }> };
-	const hit = sheets.filter((s) => s.title === seededTitle);
-	expect(hit, 'exactly one seeded K-101 sheet').toHaveLength(1);
+	const { sheets } = (await r.json()) as {
+		sheets: Array<{ id: string; title: string; status: string; createdAt: number }>;
+	};
+	const hit = sheets
+		.filter((s) => s.title === seededTitle && s.status === 'approved')
+		.sort((a, b) => a.createdAt - b.createdAt);
+	expect(hit.length, 'the seeded, approved K-101 sheet').toBeGreaterThan(0);
 	return hit[0].id;
 }
