@@ -343,3 +343,15 @@ export async function seededK101Id(ctx: APIRequestContext): Promise<string> {
 	expect(hit.length, 'the seeded, approved K-101 sheet').toBeGreaterThan(0);
 	return hit[0].id;
 }
+
+/**
+ * The next draft save's answer (call before the gesture that ends in a save, await after it). The
+ * save status alone cannot tell: it already says "saved" before a drag, since nothing is saved until
+ * the gesture ends, so waiting on it can return before the released state's save has started.
+ */
+export function nextDraftSave(page: Page): Promise<unknown> {
+	return page.waitForResponse(
+		(r) => r.request().method() === 'PUT' && /\/sheets\/[^/]+\/draft$/.test(r.url()) && r.ok(),
+		{ timeout: 30_000 }
+	);
+}

@@ -1,5 +1,5 @@
 import { expect, test, type Locator, type Page, type Request } from '@playwright/test';
-import { DEMO, seededK101Id, signInPage, signedInRequest, TEAM } from './helpers';
+import { DEMO, nextDraftSave, seededK101Id, signInPage, signedInRequest, TEAM } from './helpers';
 import { readFileSync } from 'node:fs';
 
 // python3-iapws 1.5.2 (Debian), IAPWS95, direct calls: tests/reference/make-iapws-sketcher.py
@@ -131,8 +131,10 @@ test.describe('the sketcher', () => {
 		const target = g.yOf(180);
 		for (let i = 1; i <= 12; i++)
 			await page.mouse.move(s2.x + 1, s2.y + ((target - s2.y) * i) / 12, { steps: 2 });
+		const saved = nextDraftSave(page);
 		await page.mouse.up();
 		await expect(page.getByTestId('phase-S2')).toContainText('superheated vapor');
+		await saved;
 		await waitSaved(page);
 
 		// the table shows what the API says for that end state
@@ -242,8 +244,10 @@ test.describe('the sketcher', () => {
 		await page.mouse.move(x, y);
 		await page.mouse.down();
 		for (let i = 1; i <= 8; i++) await page.mouse.move(x + 5 * i, y - 4 * i);
+		const saved = nextDraftSave(page);
 		await page.mouse.up();
 		await expect.poll(() => cellText(page, 'S1', 'P')).not.toBe(before);
+		await saved;
 		await waitSaved(page);
 		const sheet = (await (await page.request.get(`/api/v1/teams/${TEAM}/sheets/${id}`)).json())
 			.sheet;

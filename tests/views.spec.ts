@@ -1,5 +1,5 @@
 import { expect, test, type Download, type Page } from '@playwright/test';
-import { DEMO, TEAM, signedInPage, signedInRequest } from './helpers';
+import { DEMO, nextDraftSave, TEAM, signedInPage, signedInRequest } from './helpers';
 
 /*
  * The five views in Chromium: an ammonia refrigeration cycle read on P–h with its COP, a state
@@ -142,15 +142,21 @@ test('dragging the compressor outlet on the T–s view keeps it on its isentrope
 	await page.mouse.down();
 	// up and a little sideways: on T–s the isentrope is a vertical line, so only T (and P) change
 	for (let i = 1; i <= 10; i++) await page.mouse.move(x + i * 2, y - i * 4, { steps: 2 });
+	const saved = nextDraftSave(page);
 	await page.mouse.up();
+	await saved;
 	await waitSaved(page);
 	await expect.poll(pOf).toBeGreaterThan(before * 1.05);
 	// the stored leg: still isentropic, now ending at the dragged pressure
 	const api = await signedInRequest(DEMO.designer);
-	const sheet = (await (await api.get(`/api/v1/teams/${TEAM}/sheets/${sheetId}`)).json()).sheet;
+	const read = async () =>
+		(await (await api.get(`/api/v1/teams/${TEAM}/sheets/${sheetId}`)).json()).sheet;
+	await expect
+		.poll(async () => (await read()).doc.spec.legs[0].target.P)
+		.toBeGreaterThan(P_COND * 1.05);
+	const sheet = await read();
 	const leg = sheet.doc.spec.legs[0];
 	expect(leg.process).toBe('isentropic');
-	expect(leg.target.P).toBeGreaterThan(P_COND * 1.05);
 	expect(sheet.doc.chart.view).toBe('T-s');
 	// S2's disc is still straight above S1's on screen: same s
 	const s1 = ts.locator('circle.swc-hit-state[aria-label^="State S1"]');
