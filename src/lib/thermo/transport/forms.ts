@@ -120,6 +120,22 @@ export function olchowySengers(
 /** Avogadro's constant, 1/mol, exact (SI 2019) */
 export const AVOGADRO = 6.02214076e23;
 
+/**
+ * The Rainwater–Friend second viscosity virial coefficient B_η = N_A σ³ B*_η(T*), m³/mol, with
+ * B*_η = Σ b_i T*^t_i, T* = T/(ε/k), σ in nm.
+ */
+export function rainwaterFriendB(
+	b: { b: readonly number[]; t: readonly number[] },
+	epsK: number,
+	sigmaNm: number,
+	T: number
+): number {
+	const Ts = T / epsK;
+	let Bstar = 0;
+	for (let i = 0; i < b.b.length; i++) Bstar += b.b[i] * Ts ** b.t[i];
+	return AVOGADRO * (sigmaNm * 1e-9) ** 3 * Bstar;
+}
+
 /** Dilute gas from S* (Ω(2,2) = (5/4) S*) plus the Rainwater–Friend initial-density term, μPa·s. */
 export function diluteAndInitial(
 	d: { chapman: number; M: number; sigmaNm: number; epsK: number; a: readonly number[] },
@@ -131,9 +147,6 @@ export function diluteAndInitial(
 	let s = 0;
 	for (let i = d.a.length - 1; i >= 0; i--) s = s * lnT + d.a[i];
 	const eta0 = (d.chapman * Math.sqrt(d.M * T)) / (d.sigmaNm * d.sigmaNm * Math.exp(s));
-	const Ts = T / d.epsK;
-	let Bstar = 0;
-	for (let i = 0; i < b.b.length; i++) Bstar += b.b[i] * Ts ** b.t[i];
-	const Beta = AVOGADRO * (d.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
+	const Beta = rainwaterFriendB(b, d.epsK, d.sigmaNm, T);
 	return eta0 * (1 + Beta * (rho / d.M) * 1e3);
 }

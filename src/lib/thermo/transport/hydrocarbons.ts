@@ -7,7 +7,8 @@
  * copies they were read from: data/propane.ts, data/isobutane.ts.
  */
 import { criticalEnhancement } from './enhancement.ts';
-import { AVOGADRO, type OlchowySengers } from './forms.ts';
+import { diluteAndInitial } from './forms.ts';
+import { perkinsHuberBackground } from './refrigerant-forms.ts';
 import type { FluidCorrelation } from './fluids.ts';
 import { propaneConductivity, propaneViscosity } from './data/propane.ts';
 import { isobutaneViscosity } from './data/isobutane.ts';
@@ -26,25 +27,10 @@ export interface VogelViscosity {
 	};
 }
 
-export interface PerkinsConductivity {
-	dilute: { Tc: number; A: readonly number[] };
-	residual: { Tc: number; rhoc: number; B1: readonly number[]; B2: readonly number[] };
-	critical: OlchowySengers;
-}
-
 /** η in Pa·s at T (K) and ρ (kg/m³). */
 export function vogelViscosity(v: VogelViscosity, T: number, rho: number): number {
-	const d = v.dilute;
-	const lnT = Math.log(T / d.epsK);
-	let s = 0;
-	for (let i = d.a.length - 1; i >= 0; i--) s = s * lnT + d.a[i];
-	const eta0 = (d.chapman * Math.sqrt(d.M * T)) / (d.sigmaNm * d.sigmaNm * Math.exp(s)); // μPa·s
-	const Ts = T / d.epsK;
-	const id = v.initialDensity;
-	let Bstar = 0;
-	for (let i = 0; i < id.b.length; i++) Bstar += id.b[i] * Ts ** id.t[i];
-	const Beta = AVOGADRO * (d.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
-	const initial = eta0 * Beta * ((rho / d.M) * 1e3); // ρ_n in mol/m³
+	// η0 (1 + B_η ρ_n), μPa·s
+	const dilute = diluteAndInitial(v.dilute, v.initialDensity, T, rho);
 	const h = v.higherOrder;
 	const delta = rho / h.rhoc;
 	const Tr = T / h.Tc;
@@ -57,26 +43,7 @@ export function vogelViscosity(v: VogelViscosity, T: number, rho: number): numbe
 	}
 	const delta0 = h.g1 * (1 + h.g2 * Math.sqrt(Tr));
 	const closePacked = h.f * (delta / (delta0 - delta) - delta / delta0);
-	return (eta0 + initial + poly + closePacked) * 1e-6;
-}
-
-/** λ in W/(m·K) at T (K), ρ (kg/m³) and η (Pa·s, for the critical enhancement). */
-export function perkinsConductivity(
-	fluid: string,
-	c: PerkinsConductivity,
-	T: number,
-	rho: number,
-	mu: number
-): number {
-	const Tr0 = T / c.dilute.Tc;
-	let k0 = 0;
-	for (let i = c.dilute.A.length - 1; i >= 0; i--) k0 = k0 * Tr0 + c.dilute.A[i];
-	const r = c.residual;
-	const Tr = T / r.Tc;
-	const delta = rho / r.rhoc;
-	let kr = 0;
-	for (let i = 0; i < r.B1.length; i++) kr += (r.B1[i] + r.B2[i] * Tr) * delta ** (i + 1);
-	return k0 + kr + criticalEnhancement(fluid, c.critical, T, rho, mu);
+	return (dilute + poly + closePacked) * 1e-6;
 }
 
 export const propane: FluidCorrelation = {
@@ -86,7 +53,9 @@ export const propane: FluidCorrelation = {
 	},
 	range: { mu: propaneViscosity.range, k: propaneConductivity.range },
 	mu: (T, rho) => vogelViscosity(propaneViscosity, T, rho),
-	k: (T, rho, mu) => perkinsConductivity('propane', propaneConductivity, T, rho, mu)
+	k: (T, rho, mu) =>
+		perkinsHuberBackground(propaneConductivity, T, rho) +
+		criticalEnhancement('propane', propaneConductivity.critical, T, rho, mu)
 };
 
 export const isobutane: FluidCorrelation = {

@@ -3,12 +3,12 @@
  * data/<fluid>.ts, each paper named there):
  * - the viscosity of Huber & Assael (2016): a rational dilute-gas term, the Rainwater–Friend
  *   initial-density term and a residual in δ^(n/3) and Tr;
- * - the thermal conductivity of Perkins & Huber (2011) (also Perkins et al. (2000) for R-134a's
- *   background): a polynomial dilute-gas term in Tr and a residual Σ (B1,i + B2,i Tr) δ^i.
+ * - the thermal conductivity of Perkins & Huber (2011), also that of Marsh, Perkins & Ramires (2002)
+ *   for propane (hydrocarbons.ts): a polynomial dilute-gas term in Tr and a residual
+ *   Σ (B1,i + B2,i Tr) δ^i.
  */
 
-import { AVOGADRO } from './forms.ts';
-import type { OlchowySengers } from './forms.ts';
+import { rainwaterFriendB, type OlchowySengers } from './forms.ts';
 
 export interface HuberAssaelViscosity {
 	/** molar mass, g/mol (to turn ρ in kg/m³ into mol/dm³) */
@@ -39,10 +39,7 @@ export function huberAssaelViscosity(v: HuberAssaelViscosity, T: number, rho: nu
 	const rhoMolar = rho / v.M; // mol/dm³
 	if (!(rhoMolar > 0)) return eta0 * 1e-6;
 	const id = v.initialDensity;
-	const Ts = T / id.epsK;
-	let Bstar = 0;
-	for (let i = 0; i < id.b.length; i++) Bstar += id.b[i] * Ts ** id.t[i];
-	const Beta = AVOGADRO * (id.sigmaNm * 1e-9) ** 3 * Bstar; // m³/mol
+	const Beta = rainwaterFriendB(id, id.epsK, id.sigmaNm, T); // m³/mol
 	const c = v.residual.c;
 	const delta = rhoMolar / v.residual.rhocMolar;
 	const Tr = T / v.residual.Tc;

@@ -76,10 +76,10 @@ export const propaneViscosity = {
 
 export const propaneConductivity = {
 	/**
-	 * λ0 = Σ A_i T_r^i W/(m·K), T_r = T/369.85 K (CoolProp and pychemqt; IDAES reduces by 369.89 K): the
+	 * λ0 = Σ a_i T_r^i W/(m·K), T_r = T/369.85 K (CoolProp and pychemqt; IDAES reduces by 369.89 K): the
 	 * REFPROP 9.1 dilute-gas λ at 368 K quoted in CoolProp's tests is reproduced to 1e−14 with 369.85 K
 	 */
-	dilute: { Tc: 369.85, A: [-0.00124778, 0.00816371, 0.0199374] },
+	dilute: { Tc: 369.85, a: [-0.00124778, 0.00816371, 0.0199374] },
 	/** Δλ_r = Σ (B1,i + B2,i T_r) δ^i, i = 1…5, W/(m·K); pychemqt's reducing point (see above) */
 	residual: {
 		Tc: 369.85,
