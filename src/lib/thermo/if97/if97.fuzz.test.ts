@@ -17,6 +17,7 @@ import {
 	if97StatePs,
 	type If97State
 } from './state.ts';
+import { COORD } from './path.ts';
 
 const SEED = Number(process.env.FUZZ_SEED ?? 97);
 const RUNS = Number(process.env.FUZZ_RUNS ?? 400);
@@ -144,15 +145,6 @@ const PROCESSES: Process[] = [
 	'isenthalpic',
 	'polytropic'
 ];
-/** what runs monotonically along each process's curve (if97/path.ts) */
-const ALONG: Record<Process, 'h' | 'T' | 'v' | 'P'> = {
-	isobaric: 'h',
-	isochoric: 'T',
-	isothermal: 'v',
-	isentropic: 'P',
-	isenthalpic: 'P',
-	polytropic: 'v'
-};
 
 describe('IF97 legs (seeded)', () => {
 	it('points in order, crossings on IF97’s line and among the points, failures counted', () => {
@@ -202,7 +194,7 @@ describe('IF97 legs (seeded)', () => {
 					if (marked)
 						expect(r.warnings.some((w) => w.code === 'if97-state-unavailable')).toBe(true);
 					if (r.states.some((s) => s.formulation === 'iapws95')) return;
-					const k = ALONG[process];
+					const k = COORD[process];
 					const d = Math.sign(leg.end[k] - leg.start[k]);
 					// in order wherever the IAPWS-95 leg's points are (those of a leg whose ends coincide
 					// need not be), within the solvers' tolerance (1e−8 in v at a polytropic end in the liquid)

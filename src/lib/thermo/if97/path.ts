@@ -139,7 +139,7 @@ function polytropicEnd(start: State, n: number, target: [string, number], seed: 
  * along the process curve (an isobar's h, an isochore's T, an isotherm's v, an isentrope's and an
  * isenthalp's P, a polytrope's v). P and v are carried over in logarithms.
  */
-const COORD: Record<Process, 'h' | 'T' | 'v' | 'P'> = {
+export const COORD: Record<Process, 'h' | 'T' | 'v' | 'P'> = {
 	isobaric: 'h',
 	isochoric: 'T',
 	isothermal: 'v',
