@@ -1,7 +1,7 @@
 /**
  * Air (Lemmon et al. 2000, pseudo-pure): the equation, compiled directly (air is not registered:
  * see air.ts), against the paper's printed single-phase table and bubble- and dew-point pressures
- * (air.checks.ts names the table and the public transcription each value was read in). Every
+ * (air.checks.ts names the table and the public copy each value was read in). Every
  * printed value must be reproduced within half a unit in its last printed digit.
  */
 import { describe, expect, it } from 'vitest';
@@ -86,7 +86,7 @@ describe('air (Lemmon et al. 2000): bubble and dew lines', () => {
 		}
 	});
 
-	it('the dew-pressure exponents 0.5, 1, 1.5, 2 of one transcription miss the printed 59.75 K value (why 0.5, 1, 2.5, 4 were kept)', () => {
+	it('the dew-pressure exponents 0.5, 1, 1.5, 2 of CoolProp’s copy miss the printed 59.75 K value (why 0.5, 1, 2.5, 4 were kept)', () => {
 		const other = new AncillaryEq(
 			{ ...airBoundaries.dewPressure, t: [0.5, 1, 1.5, 2] },
 			airBoundaries.maxcondentherm.T

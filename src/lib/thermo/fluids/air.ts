@@ -19,24 +19,23 @@ const rhoj = 10.4477 * 1e3 * M;
 
 const ANCILLARY_SOURCE =
 	'Lemmon, Jacobsen, Penoncello & Friend (2000), Eqs. (1)–(3) and Table 10 (θ = 1 − T/132.6312 K), ' +
-	'as carried by pychemqt lib/mEoS/Air.py and compared with a second public transcription of Table 10 (see provenance)';
+	'as carried by pychemqt lib/mEoS/Air.py and compared with CoolProp dev/fluids/Air.json (see provenance)';
 
 const PROVENANCE =
 	'Residual coefficients (Table 13 of the paper: 19 terms, n, d, t, l) and ideal-gas coefficients (Table 12: N1–N13) ' +
 	'transcribed from the public CoolProp data file (CoolProp/CoolProp, dev/fluids/Air.json) and compared by script, digit ' +
-	'for digit, with two independent transcriptions: pychemqt (jjgomera/pychemqt, lib/mEoS/Air.py) and the Fortran of the ' +
+	'for digit, with two independent copies: pychemqt (jjgomera/pychemqt, lib/mEoS/Air.py) and the Fortran of the ' +
 	'TEOS-10 SIA library by D. G. Wright (module air_1, init_iapws10, "Tables 12 and 13 of Lemmon et al. (2000)"): all 19 ' +
-	'residual terms and all 13 ideal-gas coefficients identical in the three. (A fourth, unrelated public Python ' +
-	'transcription prints n17 with a minus sign; the three above agree on +0.000233594806142.) ' +
+	'residual terms and all 13 ideal-gas coefficients identical in the three (n17 = +0.000233594806142 in each). ' +
 	'Reducing (maxcondentherm) point 132.6312 K, 3.78502 MPa, 10.4477 mol/dm³; R = 8.31451 J/(mol·K): identical in all three. ' +
 	'Molar mass: the paper’s 28.9586 g/mol (pychemqt; TEOS-10 SIA version 1.0, whose constants file names it as Lemmon et ' +
 	'al. 2000’s). CoolProp uses 28.96546 g/mol, the later CIPM value that TEOS-10 SIA 1.1 also switched to; molar ' +
 	'properties do not depend on it, mass-based ones by 2.4e−4. Bubble- and dew-point ancillaries (Table 10): coefficients ' +
 	'identical in pychemqt and CoolProp; their exponents differ for the dew-point pressure (CoolProp 0.5, 1, 1.5, 2; ' +
-	'pychemqt and a second Python transcription that lists Table 10 by position: 0.5, 1, 2.5, 4). The paper’s printed ' +
+	'pychemqt 0.5, 1, 2.5, 4). The paper’s printed ' +
 	'Table A1 decides: with 0.5, 1, 2.5, 4 every printed dew pressure is reproduced, with CoolProp’s the 59.75 K one is ' +
-	'off by a factor 4 (air.test.ts). Bubble- and dew-point densities (Eqs. 2, 3): pychemqt and the second Python ' +
-	'transcription agree. Maxcondenbar point 132.6035 K, 3.7891 MPa, 11.0948 mol/dm³ (CoolProp); ' +
+	'off by a factor 4 (air.test.ts). Bubble- and dew-point densities (Eqs. 2, 3): as pychemqt carries them. ' +
+	'Maxcondenbar point 132.6035 K, 3.7891 MPa, 11.0948 mol/dm³ (CoolProp); ' +
 	'critical point of the mixture 132.5306 K, 3.7860 MPa, 11.8308 mol/dm³ (CoolProp; fprops). ' +
 	'Published scientific data (facts), transcribed; no code copied.';
 

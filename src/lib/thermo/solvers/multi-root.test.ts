@@ -6,9 +6,10 @@
  * answer must be the right state or name every genuine candidate — each one reproducing the
  * inputs — and never a refusal when a state exists.
  */
-// Source of the expected values: the engine audit filed as issue 11 ("Engine: every pair in every region"),
-// which printed T and P of each state it generated from (T, ρ); each answer is also held to reproduce its
-// own inputs (an identity). Tolerances: the audit's printed rounding.
+// Source of the check values: a round-trip identity — each input pair is a state's own properties
+// (generated from (T, ρ) by the engine audit filed as issue 11, "Engine: every pair in every region",
+// which printed T and P of each state), and each answer is held to reproduce its inputs. Tolerances: the
+// audit's printed rounding.
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from '../errors.ts';
 import { fixState } from '../index.ts';

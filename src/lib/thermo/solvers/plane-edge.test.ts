@@ -8,6 +8,10 @@
  * Expected values: the generating states' own T and P (inputs of the test); every candidate is
  * held to reproduce u and h (an identity).
  */
+// Source of the check values: a round-trip identity — the states are fixed from (T, P) and must come
+// back from their own (u, h); 415.69 K is the second state's T as the region-mix run printed it. The
+// root-finder cases check roots placed in the test's own function. Tolerances 1e−9 in T and u, h,
+// 1e−8 in P: common practice.
 import { describe, expect, it } from 'vitest';
 import { ThermoError } from '../errors.ts';
 import { fixState, getFluid } from '../index.ts';

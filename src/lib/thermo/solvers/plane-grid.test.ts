@@ -4,6 +4,9 @@
  * in the top cell (up to ~25 K below Tmax for hydrogen) could not be fixed from (h, s), (u, s) or
  * (u, h) — refused as out of range (found by scripts/region-mix.ts, seed 11).
  */
+// Source of the check values: a round-trip identity — each state, fixed from (T, P), must come back
+// from two of its own energies; no value is taken from elsewhere. Tolerances 1e−9 in T and 1e−6 in P
+// (or the answer's stated precision): common practice.
 import { describe, expect, it } from 'vitest';
 import { fixState, getFluid } from '../index.ts';
 
