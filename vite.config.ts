@@ -1,5 +1,6 @@
 import { sveltekit } from '@sveltejs/kit/vite';
 import tailwindcss from '@tailwindcss/vite';
+import { availableParallelism } from 'node:os';
 import { defineConfig } from 'vitest/config';
 
 // The integration tests (real database, real mail catcher) run on SQLite and, when
@@ -19,6 +20,8 @@ export default defineConfig({
 		testTimeout: 30_000,
 		hookTimeout: 30_000,
 		pool: 'forks',
+		// one fork per core: vitest's own default leaves one core idle (on 2 cores, one fork)
+		maxWorkers: availableParallelism(),
 		projects: [
 			// (include lists per project: a project that extends the root adds to the root's lists)
 			{

@@ -6,7 +6,8 @@ import {
 	type APIRequestContext,
 	type Browser,
 	type Cookie,
-	type Page
+	type Page,
+	type Request
 } from '@playwright/test';
 
 /*
@@ -353,5 +354,45 @@ export function nextDraftSave(page: Page): Promise<unknown> {
 	return page.waitForResponse(
 		(r) => r.request().method() === 'PUT' && /\/sheets\/[^/]+\/draft$/.test(r.url()) && r.ok(),
 		{ timeout: 30_000 }
+	);
+}
+
+/**
+ * Goes to `url` and returns once the page has had no request in flight for `quietMs`, its fonts
+ * are loaded and two frames have been drawn: the page as a reader sees it once its data has come.
+ * (Playwright's 'networkidle' is the same idea with a fixed 500 ms of quiet.)
+ */
+export async function gotoQuiet(page: Page, url: string, quietMs = 150): Promise<void> {
+	const inFlight = new Set<Request>();
+	let last = Date.now();
+	const started = (r: Request) => {
+		inFlight.add(r);
+		last = Date.now();
+	};
+	const ended = (r: Request) => {
+		inFlight.delete(r);
+		last = Date.now();
+	};
+	page.on('request', started);
+	page.on('requestfinished', ended);
+	page.on('requestfailed', ended);
+	try {
+		await page.goto(url);
+		await expect
+			.poll(() => inFlight.size === 0 && Date.now() - last >= quietMs, {
+				message: `no request in flight for ${quietMs} ms after loading ${url}`,
+				intervals: [25],
+				timeout: 30_000
+			})
+			.toBe(true);
+	} finally {
+		page.off('request', started);
+		page.off('requestfinished', ended);
+		page.off('requestfailed', ended);
+	}
+	await page.evaluate(() =>
+		document.fonts.ready.then(
+			() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)))
+		)
 	);
 }

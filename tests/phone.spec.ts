@@ -4,6 +4,7 @@ import {
 	DEMO,
 	FORM,
 	freshEmail,
+	gotoQuiet,
 	seededK101Id,
 	signedInRequest,
 	signInPage,
@@ -32,8 +33,11 @@ async function sheets(page: Page): Promise<Record<string, Sheet>> {
 	return Object.fromEntries(sheets.map((s) => [s.title.split(' ')[0], s]));
 }
 
+/** After gotoQuiet, or after a click that fetches nothing: nothing wider than the screen. */
 async function fits(page: Page, where: string) {
-	await page.waitForLoadState('networkidle');
+	await page.evaluate(
+		() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)))
+	);
 	const width = await page.evaluate(() => document.scrollingElement!.scrollWidth);
 	expect(width, `${where}: page width at a 390 px screen`).toBeLessThanOrEqual(PHONE.width);
 }
@@ -84,14 +88,14 @@ test.describe('on a 390 px phone', () => {
 				['account', '/account']
 			];
 			for (const [name, url] of pages) {
-				await page.goto(url);
+				await gotoQuiet(page, url);
 				await fits(page, `${role}: ${name}`);
 				if (name !== 'print') await pressable(signOut(page), `${role}: ${name}: Sign out`);
 				await pressable(page.getByTestId('header-account'), `${role}: ${name}: account`);
 			}
 
 			// the sheet: the state table's s and x columns, and the Setup tab
-			await page.goto(`/t/${TEAM}/sheets/${draft.id}`);
+			await gotoQuiet(page, `/t/${TEAM}/sheets/${draft.id}`);
 			await fits(page, `${role}: sheet`);
 			for (const col of ['s', 'x'])
 				await pressable(
@@ -131,7 +135,7 @@ test.describe('on a 390 px phone', () => {
 	test('a checker comments on a leg from the phone', async ({ page }) => {
 		await signInPage(page, DEMO.checker);
 		const s = await sheets(page);
-		await page.goto(`/t/${TEAM}/sheets/${s['HP-410'].id}`);
+		await gotoQuiet(page, `/t/${TEAM}/sheets/${s['HP-410'].id}`);
 		const notes = page.getByRole('tab', { name: /Notes/ });
 		await pressable(notes, 'Notes tab');
 		await notes.click();
