@@ -17,6 +17,11 @@ import { fluidData } from '../src/lib/thermo/fluids/index.ts';
 const isMixture = (id: string) => Boolean(fluidData.find((d) => d.id === id)?.band);
 
 const BUDGETS = { 'T, rho': 1, 'P, T': 3, 'P, h': 10, 'sat at T': 5 } as const;
+/**
+ * The first budgets, which water's figures met when the ten fluids after the first five were added
+ * (they were to meet the same): a second mark per figure, so both bars read off one run.
+ */
+const FIRST_BUDGETS = { 'T, rho': 2, 'P, T': 12, 'P, h': 40, 'sat at T': 20 } as const;
 
 function median(xs: number[]): number {
 	const s = [...xs].sort((a, b) => a - b);
@@ -96,7 +101,8 @@ for (const f of fluids) {
 		f.id,
 		...Object.entries(figures).map(([k, v]) => {
 			const budget = BUDGETS[k as keyof typeof BUDGETS];
-			return `${v.toFixed(2)} / ${budget}${v <= budget ? ' ✓' : ' ✗'}`;
+			const first = FIRST_BUDGETS[k as keyof typeof FIRST_BUDGETS];
+			return `${v.toFixed(2)} / ${budget}${v <= budget ? ' ✓' : ' ✗'} (${first}${v <= first ? ' ✓' : ' ✗'})`;
 		})
 	]);
 }
@@ -112,5 +118,5 @@ console.log(fmtRow(head));
 console.log(widths.map((w) => '─'.repeat(w)).join('  '));
 for (const l of lines) console.log(fmtRow(l));
 console.log(
-	'Median CPU µs per call / budget µs (the current budgets for every fluid, docs/performance.md). Never fails on time.'
+	'Median CPU µs per call / budget µs (the current budgets for every fluid, docs/performance.md), and in brackets the first budgets (those water met when the other fluids came). Never fails on time.'
 );

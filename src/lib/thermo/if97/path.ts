@@ -28,15 +28,22 @@
  * anchors — start, crossings, end — mapped onto their IF97 counterparts, so the IF97 points stay in
  * order and run exactly through the IF97 ends and crossings.
  *
- * The design-limit events stay IAPWS-95. A state, point or crossing IF97 cannot give keeps its
+ * The design-limit events are IF97's (if97LimitEvents): the start's from the IF97 start, and along
+ * each leg the first IF97 point at or beyond a limit decides, the event state fixed by IF97 from the
+ * leg's invariant and the limit's P or T; their warnings are written again from those states. The
+ * other warnings' states (liquid-full) stay IAPWS-95. A state, point or crossing IF97 cannot give keeps its
  * IAPWS-95 value, is marked `formulation: 'iapws95'` and counted in an `if97-state-unavailable`
  * warning; a leg with such an end keeps its IAPWS-95 q, w, points and crossings (all so marked).
  */
 import { ThermoError } from '../errors.ts';
+import { DESIGN_LIMIT_NAMES } from '../types.ts';
 import type {
 	Crossing,
+	DesignLimitName,
 	Inputs,
 	Leg,
+	LimitEvent,
+	PathLeg,
 	PathResult,
 	PathSpec,
 	PathState,
@@ -49,7 +56,7 @@ import type {
 import { PC, RHOC, TC, pB23, pressure3, psat, tsat } from './regions.ts';
 import { if97FixFrom, type If97Seed } from './fix.ts';
 import { if97Limits, if97Region3State, if97State, if97StatePh, if97StatePs } from './state.ts';
-import { cycleOf } from '../solvers/path.ts';
+import { cycleOf, LIMIT_WARNING_CODES, limitTests, limitWarnings } from '../solvers/path.ts';
 
 const seedOf = (st: State): If97Seed => ({ T: st.T, P: st.P, x: st.x, phase: st.phase });
 
@@ -450,6 +457,105 @@ function pointsUnavailable(leg: string, count: number, e: unknown): PathWarning 
 }
 
 /**
+ * The design-limit events of an IF97 path, found as computePath finds them for IAPWS-95 but on the
+ * IF97 states: the start is at or beyond a limit; along a leg, the first IF97 point at or beyond it
+ * after one short of it, the event's state then fixed by IF97 from the leg's invariant and the
+ * limit's P or T (polytropic: P·vⁿ = P₁v₁ⁿ), seeded by the IAPWS-95 event. A leg that stayed IAPWS-95
+ * keeps its events; an event state IF97 cannot give keeps the IAPWS-95 one, so marked.
+ */
+function if97LimitEvents(
+	spec: PathSpec,
+	base: PathResult,
+	start: State,
+	legs: readonly PathLeg[]
+): LimitEvent[] {
+	const limits = base.limits;
+	const { beyond, tol } = limitTests(limits);
+	const named = DESIGN_LIMIT_NAMES.filter((k) => limits[k] !== undefined);
+	const events: LimitEvent[] = [];
+	for (const k of named) {
+		const g = beyond[k](start.T, start.P);
+		if (g >= -tol(k))
+			events.push({
+				limit: k,
+				value: limits[k] as number,
+				leg: null,
+				kind: 'start-beyond',
+				exceeded: g > tol(k),
+				state: start
+			});
+	}
+	legs.forEach((pl, i) => {
+		const leg = pl.leg;
+		const baseOf = (k: DesignLimitName) =>
+			base.limitEvents.find((e) => e.leg === pl.id && e.limit === k && e.kind === 'reached');
+		if (leg.start.formulation === 'iapws95' || leg.end.formulation === 'iapws95') {
+			for (const k of named) {
+				const ev = baseOf(k);
+				if (ev) events.push(ev);
+			}
+			return;
+		}
+		const ls = spec.legs[i];
+		for (const k of named) {
+			const value = limits[k] as number;
+			const G = (p: State) => beyond[k](p.T, p.P) + tol(k);
+			const pts = leg.points;
+			let j = 1;
+			while (j < pts.length && !(G(pts[j - 1]) < 0 && G(pts[j]) >= 0)) j++;
+			if (j >= pts.length) continue;
+			const seed = baseOf(k)?.state ?? pts[j];
+			let state: State;
+			if (G(pts[j]) === 0) state = pts[j];
+			else
+				try {
+					state = limitStateOnLeg(ls.process, leg.start, k, value, seed, ls.n);
+				} catch (e) {
+					if (!(e instanceof ThermoError)) throw e;
+					state = { ...seed, formulation: 'iapws95' };
+				}
+			const g = (p: State) => beyond[k](p.T, p.P);
+			events.push({
+				limit: k,
+				value,
+				leg: pl.id,
+				kind: 'reached',
+				exceeded: g(leg.end) > tol(k) || pts.some((p) => g(p) > tol(k)),
+				state
+			});
+		}
+	});
+	return events;
+}
+
+/** The IF97 state of a leg from `start` where the limit's P or T takes `value`. */
+function limitStateOnLeg(
+	process: Process,
+	start: State,
+	limit: DesignLimitName,
+	value: number,
+	seed: State,
+	n?: number
+): State {
+	const q = limit.endsWith('Pressure') ? 'P' : 'T';
+	if (process === 'polytropic') {
+		const m = n ?? 1;
+		return polytropicEnd(start, m, [q, value], seed);
+	}
+	const inv = INVARIANT[process];
+	return if97FixFrom({ [inv]: start[inv], [q]: value } as Inputs, seedOf(seed));
+}
+
+/** The path's warnings with the design-limit ones written again from `events`, where they stood. */
+function withLimitWarnings(warnings: readonly PathWarning[], events: readonly LimitEvent[]) {
+	const at = warnings.findIndex((w) => LIMIT_WARNING_CODES.has(w.code));
+	const rest = warnings.filter((w) => !LIMIT_WARNING_CODES.has(w.code));
+	const relief = rest.findIndex((w) => w.code === 'relief-set-above-design-pressure');
+	const put = at >= 0 ? at : relief >= 0 ? relief : rest.length;
+	return [...rest.slice(0, put), ...limitWarnings(events), ...rest.slice(put)];
+}
+
+/**
  * The IAPWS-95 path `base` (computePath of `spec`) with its states and legs' energies by IAPWS-IF97
  * (module comment). Each state keeps its IAPWS-95 value as `iapws95`. Never throws for a state IF97
  * cannot give: that state stays IAPWS-95 with a warning.
@@ -569,6 +675,7 @@ export function if97Path(spec: PathSpec, base: PathResult): PathResult {
 	per.ds = last.s - s1.s;
 	let cycle = base.cycle;
 	if (cycle) cycle = cycleOf(outLegs, closed, m, unit);
+	const limitEvents = if97LimitEvents(spec, base, s1, outLegs);
 	return {
 		...base,
 		system,
@@ -577,7 +684,8 @@ export function if97Path(spec: PathSpec, base: PathResult): PathResult {
 		perKg: per,
 		totals: totals(per.q, per.w, per.wShaft, per.qFlow),
 		cycle,
-		warnings: [...base.warnings, ...warnings],
+		limitEvents,
+		warnings: [...withLimitWarnings(base.warnings, limitEvents), ...warnings],
 		formulation: 'if97'
 	};
 }

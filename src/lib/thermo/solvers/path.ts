@@ -229,13 +229,7 @@ export function computePath(spec: PathSpec): PathResult {
 	const legs: PathLeg[] = [];
 	const limitEvents: LimitEvent[] = [];
 	const per = { q: 0, w: 0, wShaft: 0, qFlow: 0, du: 0, dh: 0, ds: 0 };
-	const beyond: Record<DesignLimitName, (T: number, P: number) => number> = {
-		designPressure: (_T, P) => P - (limits.designPressure as number),
-		reliefSetPressure: (_T, P) => P - (limits.reliefSetPressure as number),
-		designTemperature: (T) => T - (limits.designTemperature as number),
-		minimumTemperature: (T) => (limits.minimumTemperature as number) - T
-	};
-	const tol = (k: DesignLimitName) => 1e-9 * (limits[k] as number);
+	const { beyond, tol } = limitTests(limits);
 	for (const k of DESIGN_LIMIT_NAMES) {
 		if (limits[k] === undefined) continue;
 		const g = beyond[k](start.T, start.P);
@@ -382,37 +376,7 @@ export function computePath(spec: PathSpec): PathResult {
 	per.ds = end.s - start.s;
 
 	// warnings for the limit events, and the caution
-	for (const ev of limitEvents) {
-		const label = DESIGN_LIMIT_LABEL[ev.limit];
-		const v = ev.limit.endsWith('Pressure') ? pa(ev.value) : kel(ev.value);
-		const where = ev.leg
-			? `Leg ${ev.leg} reaches the ${label} (${v})`
-			: `The start S1 is already at or beyond the ${label} (${v})`;
-		const at = ev.leg ? ` at T = ${kel(ev.state.T)}, P = ${pa(ev.state.P)}` : '';
-		if (ev.limit === 'minimumTemperature') {
-			warnings.push({
-				code: 'below-minimum-temperature',
-				severity: 'warning',
-				leg: ev.leg ?? undefined,
-				at: ev.state,
-				message: `${where}${at}${ev.exceeded ? ' and goes below it' : ''}: materials must be rated for it.`
-			});
-			continue;
-		}
-		const base =
-			ev.limit === 'designPressure'
-				? 'design-pressure'
-				: ev.limit === 'reliefSetPressure'
-					? 'relief-set-pressure'
-					: 'design-temperature';
-		warnings.push({
-			code: `${base}-${ev.exceeded ? 'exceeded' : 'reached'}` as PathWarning['code'],
-			severity: 'warning',
-			leg: ev.leg ?? undefined,
-			at: ev.state,
-			message: `${where}${at}${ev.exceeded ? ' and goes beyond it' : ''}.`
-		});
-	}
+	warnings.push(...limitWarnings(limitEvents));
 	if (
 		limits.reliefSetPressure !== undefined &&
 		limits.designPressure !== undefined &&
@@ -452,6 +416,74 @@ export function computePath(spec: PathSpec): PathResult {
 		limitEvents,
 		warnings
 	};
+}
+
+/**
+ * How far beyond each design limit a state at (T, P) lies (≥ 0: at or beyond; positive the way the
+ * limit is exceeded: above a pressure or design temperature, below the minimum temperature), and
+ * the tolerance within which a state counts as at the limit.
+ */
+export function limitTests(limits: DesignLimits): {
+	beyond: Record<DesignLimitName, (T: number, P: number) => number>;
+	tol: (k: DesignLimitName) => number;
+} {
+	return {
+		beyond: {
+			designPressure: (_T, P) => P - (limits.designPressure as number),
+			reliefSetPressure: (_T, P) => P - (limits.reliefSetPressure as number),
+			designTemperature: (T) => T - (limits.designTemperature as number),
+			minimumTemperature: (T) => (limits.minimumTemperature as number) - T
+		},
+		tol: (k) => 1e-9 * (limits[k] as number)
+	};
+}
+
+/** The codes of the warnings limitWarnings gives. */
+export const LIMIT_WARNING_CODES: ReadonlySet<PathWarning['code']> = new Set([
+	'design-pressure-reached',
+	'design-pressure-exceeded',
+	'relief-set-pressure-reached',
+	'relief-set-pressure-exceeded',
+	'design-temperature-reached',
+	'design-temperature-exceeded',
+	'below-minimum-temperature'
+]);
+
+/** One warning per design-limit event, in the events' order, with the event's state. */
+export function limitWarnings(limitEvents: readonly LimitEvent[]): PathWarning[] {
+	const warnings: PathWarning[] = [];
+	for (const ev of limitEvents) {
+		const label = DESIGN_LIMIT_LABEL[ev.limit];
+		const v = ev.limit.endsWith('Pressure') ? pa(ev.value) : kel(ev.value);
+		const where = ev.leg
+			? `Leg ${ev.leg} reaches the ${label} (${v})`
+			: `The start S1 is already at or beyond the ${label} (${v})`;
+		const at = ev.leg ? ` at T = ${kel(ev.state.T)}, P = ${pa(ev.state.P)}` : '';
+		if (ev.limit === 'minimumTemperature') {
+			warnings.push({
+				code: 'below-minimum-temperature',
+				severity: 'warning',
+				leg: ev.leg ?? undefined,
+				at: ev.state,
+				message: `${where}${at}${ev.exceeded ? ' and goes below it' : ''}: materials must be rated for it.`
+			});
+			continue;
+		}
+		const base =
+			ev.limit === 'designPressure'
+				? 'design-pressure'
+				: ev.limit === 'reliefSetPressure'
+					? 'relief-set-pressure'
+					: 'design-temperature';
+		warnings.push({
+			code: `${base}-${ev.exceeded ? 'exceeded' : 'reached'}` as PathWarning['code'],
+			severity: 'warning',
+			leg: ev.leg ?? undefined,
+			at: ev.state,
+			message: `${where}${at}${ev.exceeded ? ' and goes beyond it' : ''}.`
+		});
+	}
+	return warnings;
 }
 
 /**
