@@ -47,13 +47,22 @@ export function poolSize(raw = process.env.COMPUTE_WORKERS): number {
 
 export type ComputePool = Piscina<ComputeTask, TaskOutcome>;
 
+/**
+ * Tasks handed to a worker before it has finished the one it runs. A task runs synchronously, so two
+ * never run at once; the second waits in the worker's own queue, and the worker goes straight on to
+ * it instead of going to sleep and being woken for it. Measured with typical legs at 10 connections
+ * (docs/performance.md): the server's CPU per request fell from 1.03–1.16 ms to 0.81–0.87 ms.
+ */
+export const TASKS_PER_WORKER = 2;
+
 /** A pool of `size` workers started from the worker bundle `file`, kept for the process's life. */
 export function startPool(file: string, size: number): ComputePool {
 	return new Piscina<ComputeTask, TaskOutcome>({
 		filename: file,
 		minThreads: size,
 		maxThreads: size,
-		idleTimeout: Infinity
+		idleTimeout: Infinity,
+		concurrentTasksPerWorker: TASKS_PER_WORKER
 	});
 }
 

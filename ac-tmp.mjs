@@ -1,0 +1,12 @@
+import autocannon from 'autocannon';
+import { readFileSync } from 'node:fs';
+import { execSync } from 'node:child_process';
+const pid = execSync("pgrep -f 'build/index.js'").toString().trim().split('\n')[0];
+const cpu = () => { const f = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' '); return (Number(f[11]) + Number(f[12])) * 10; };
+const body = process.env.LONG ? JSON.stringify({ fluid: 'water', start: { T: 800, P: 1e7 }, process: 'isentropic', target: { P: 1e4 }, samples: 200 }) : JSON.stringify({ fluid: 'water', start: { T: 393.15, x: 0.3 }, process: 'isochoric', target: { T: 450 } });
+const run = () => autocannon({ url: 'http://127.0.0.1:4411/api/v1/legs', method: 'POST', headers: { 'content-type': 'application/json' }, body, connections: 10, duration: 6 });
+await run();
+const c0 = cpu();
+const r = await run();
+const n = r.requests.total;
+console.log(process.env.LABEL, r.requests.average, 'req/s; p99', r.latency.p99, 'server CPU ms/req', ((cpu() - c0) / n).toFixed(3));
