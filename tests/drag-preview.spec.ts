@@ -12,7 +12,8 @@ const reference = JSON.parse(readFileSync('tests/reference/iapws-sketcher.json',
  * frame before the server answers (the chart marks it a preview, the table waits for the
  * server); after release the server's states are what the chart, the table and the saved draft
  * show. The server's answers are held back here with page.route, so only the preview can move
- * the path while they are.
+ * the path while they are. Neither a preview nor an answer during the gesture places the labels
+ * again; the end of the gesture does.
  */
 
 const stamp = () => `${Date.now().toString(36)}${Math.random().toString(36).slice(2, 5)}`;
@@ -138,9 +139,20 @@ test('dragging a state redraws its path before the server answers; after release
 	expect(await cellValue(page, 'S2', 'T')).toBe(tBefore);
 	expect(draftSaves).toBe(0);
 
-	// the server answers; the gesture ends there
+	// the server answers while the pointer is still down: its path replaces the preview, and the
+	// labels stay where they are (placing them is most of a redraw) until the gesture ends. (The
+	// preview may have placed them once more: its crossing added a row to the chart's key, which
+	// redraws the frame under them.)
+	const labelsRev = async () => Number(await chart.overlay.getAttribute('data-labels-rev'));
+	const labelsBefore = await labelsRev();
 	release();
+	await expect(chart.overlay).not.toHaveAttribute('data-path-preview', 'true');
+	expect(answered).toBeGreaterThan(0);
+	expect(await labelsRev(), 'labels placed during the drag').toBe(labelsBefore);
 	await page.mouse.up();
+	await expect
+		.poll(labelsRev, { message: 'the labels are placed again once the gesture ends' })
+		.toBeGreaterThan(labelsBefore);
 	await expect(page.getByTestId('phase-S2')).toContainText('superheated vapor');
 	await expect(page.locator('[data-save-status]')).toHaveAttribute('data-save-status', 'saved', {
 		timeout: 20_000

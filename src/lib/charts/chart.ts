@@ -73,6 +73,24 @@ export interface ChartFrame {
 	fluidName?: string;
 }
 
+/**
+ * Whether two frames draw the same: every field the same value (nested data by identity, as the
+ * chart treats it as replaced, never mutated), the unit settings field by field (a caller copies
+ * them to catch edits in place).
+ */
+export function sameFrame(a: ChartFrame, b: ChartFrame): boolean {
+	const keys = new Set([...Object.keys(a), ...Object.keys(b)] as (keyof ChartFrame)[]);
+	for (const k of keys) {
+		if (k === 'units') continue;
+		if (a[k] !== b[k]) return false;
+	}
+	const ua = a.units as unknown as Record<string, unknown>;
+	const ub = b.units as unknown as Record<string, unknown>;
+	const unitKeys = new Set([...Object.keys(ua), ...Object.keys(ub)]);
+	for (const k of unitKeys) if (ua[k] !== ub[k]) return false;
+	return true;
+}
+
 /** What changes while a designer drags: redrawing it touches only the path layers. */
 export interface ChartPath {
 	states: readonly ChartState[];
@@ -81,6 +99,11 @@ export interface ChartPath {
 	traces?: readonly MeasuredTrace[] | null;
 	/** a preview computed in the browser while dragging: the legs are drawn lighter until the real answer replaces it */
 	preview?: boolean;
+	/**
+	 * a state is being dragged: the server's answers, like previews, leave the labels where they
+	 * are (placing them is most of a redraw); they are placed again when the gesture ends
+	 */
+	moving?: boolean;
 	/** open review notes: a numbered flag beside each leg or state that has them (in the drawing, so exports carry them) */
 	flags?: readonly NoteFlag[] | null;
 }
@@ -235,6 +258,9 @@ export function createChart(
 	let pathRev = 0;
 	/** the frame was drawn since the labels were last placed */
 	let labelsStale = true;
+	/** how many times the labels and the frame were drawn (on the overlay, for tests and benchmarks) */
+	let labelsRev = 0;
+	let frameRev = 0;
 	/** discs moved beside an earlier state they would hide (a cycle's last state on its first) */
 	let stateShift = new Map<string, Point & { beside?: string }>();
 	const shifted = (d: ChartState): Point => {
@@ -433,6 +459,7 @@ export function createChart(
 		drawIsolines();
 		drawLimits();
 		labelsStale = true;
+		ov.attr('data-frame-rev', ++frameRev);
 		drawPath();
 	}
 
@@ -776,20 +803,23 @@ export function createChart(
 			});
 
 		drawFlags(legPts);
-		// a preview (a drag, every frame) leaves the labels where the last computed path put them,
-		// unless the frame moved under them: placing them is most of a redraw's time
-		if (!path.preview || labelsStale) {
+		// a drag (a preview every frame, the server's answers between) leaves the labels where the
+		// last path drawn at rest put them, unless the frame moved under them: placing them is most
+		// of a redraw's time, and the pointer's next move waits behind it
+		if (!(path.preview || path.moving) || labelsStale) {
 			drawLabels(
 				legPts,
 				crossings.map((c) => c.p)
 			);
 			labelsStale = false;
+			labelsRev++;
 		}
 		drawKey();
 		drawOverlay(legPts);
 		// for benchmarks and tests: a redraw counter, its cost and whether it drew a preview, on the
 		// overlay (never exported)
 		ov.attr('data-path-rev', ++pathRev)
+			.attr('data-labels-rev', labelsRev)
 			.attr('data-path-ms', (performance.now() - started).toFixed(2))
 			.attr('data-path-preview', path.preview ? 'true' : null);
 	}
