@@ -90,7 +90,12 @@ import { readAcrossSaturation, type SaturationReading } from '$lib/sheets/satura
 import { saturationTarget } from '$lib/sheets/saturation-target';
 import { previewPath, type PathPreview } from './preview';
 
-type Engine = typeof import('$lib/thermo');
+/**
+ * The engine in the browser: loaded after the page (browser.ts), with IAPWS-IF97 beside it only for
+ * a water sheet by IF97 (browser-if97.ts).
+ */
+type Engine = typeof import('$lib/thermo/browser') &
+	Partial<typeof import('$lib/thermo/browser-if97')>;
 
 /** Points per leg while dragging (the engine's least): half the work per answer; the end of the gesture redraws at full detail. */
 const DRAG_SAMPLES = 20;
@@ -225,6 +230,11 @@ export class SheetEditor {
 		const spec = this.doc.spec;
 		if (spec.fluid !== 'water' || spec.formulation !== 'if97' || !this.engine)
 			return this.saturation;
+		if (!this.engine.if97SaturationCurve) {
+			// the sheet became IF97 after the engine loaded: load IF97 beside it (drawn when it comes)
+			queueMicrotask(() => void this.loadEngine());
+			return this.saturation;
+		}
 		if (!this.#if97Dome)
 			try {
 				this.#if97Dome = this.engine.if97SaturationCurve(100);
@@ -370,11 +380,22 @@ export class SheetEditor {
 		};
 	}
 
+	/** A water sheet by IAPWS-IF97: the browser's engine needs IF97 beside it. */
+	#wantsIf97(): boolean {
+		const spec = this.doc.spec;
+		return spec.fluid === 'water' && spec.formulation === 'if97';
+	}
+
 	async loadEngine(): Promise<Engine> {
-		if (this.engine) return this.engine;
-		const e = await import('$lib/thermo');
-		this.engine = e;
-		return e;
+		const if97 = this.#wantsIf97();
+		if (this.engine && (!if97 || this.engine.if97Fix)) return this.engine;
+		const [base, extra] = await Promise.all([
+			import('$lib/thermo/browser'),
+			if97 ? import('$lib/thermo/browser-if97') : null
+		]);
+		// a call that finished meanwhile may have added IF97: keep it
+		this.engine = { ...base, ...this.engine, ...extra };
+		return this.engine;
 	}
 
 	/** Save now (leaving the page, or the connection came back). */
