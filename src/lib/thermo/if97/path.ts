@@ -56,7 +56,13 @@ import type {
 import { PC, RHOC, TC, pB23, pressure3, psat, tsat } from './regions.ts';
 import { if97FixFrom, type If97Seed } from './fix.ts';
 import { if97Limits, if97Region3State, if97State, if97StatePh, if97StatePs } from './state.ts';
-import { cycleOf, LIMIT_WARNING_CODES, limitTests, limitWarnings } from '../solvers/path.ts';
+import {
+	cycleOf,
+	LIMIT_WARNING_CODES,
+	limitTests,
+	limitWarnings,
+	startLimitEvents
+} from '../solvers/path.ts';
 
 const seedOf = (st: State): If97Seed => ({ T: st.T, P: st.P, x: st.x, phase: st.phase });
 
@@ -472,19 +478,7 @@ function if97LimitEvents(
 	const limits = base.limits;
 	const { beyond, tol } = limitTests(limits);
 	const named = DESIGN_LIMIT_NAMES.filter((k) => limits[k] !== undefined);
-	const events: LimitEvent[] = [];
-	for (const k of named) {
-		const g = beyond[k](start.T, start.P);
-		if (g >= -tol(k))
-			events.push({
-				limit: k,
-				value: limits[k] as number,
-				leg: null,
-				kind: 'start-beyond',
-				exceeded: g > tol(k),
-				state: start
-			});
-	}
+	const events = startLimitEvents(limits, start);
 	legs.forEach((pl, i) => {
 		const leg = pl.leg;
 		const baseOf = (k: DesignLimitName) =>

@@ -230,19 +230,7 @@ export function computePath(spec: PathSpec): PathResult {
 	const limitEvents: LimitEvent[] = [];
 	const per = { q: 0, w: 0, wShaft: 0, qFlow: 0, du: 0, dh: 0, ds: 0 };
 	const { beyond, tol } = limitTests(limits);
-	for (const k of DESIGN_LIMIT_NAMES) {
-		if (limits[k] === undefined) continue;
-		const g = beyond[k](start.T, start.P);
-		if (g >= -tol(k))
-			limitEvents.push({
-				limit: k,
-				value: limits[k] as number,
-				leg: null,
-				kind: 'start-beyond',
-				exceeded: g > tol(k),
-				state: start
-			});
-	}
+	limitEvents.push(...startLimitEvents(limits, start));
 
 	let from = start;
 	spec.legs.forEach((ls, i) => {
@@ -436,6 +424,26 @@ export function limitTests(limits: DesignLimits): {
 		},
 		tol: (k) => 1e-9 * (limits[k] as number)
 	};
+}
+
+/** The limits the path's start is already at or beyond, in the order of DESIGN_LIMIT_NAMES. */
+export function startLimitEvents(limits: DesignLimits, start: State): LimitEvent[] {
+	const { beyond, tol } = limitTests(limits);
+	const events: LimitEvent[] = [];
+	for (const k of DESIGN_LIMIT_NAMES) {
+		if (limits[k] === undefined) continue;
+		const g = beyond[k](start.T, start.P);
+		if (g >= -tol(k))
+			events.push({
+				limit: k,
+				value: limits[k] as number,
+				leg: null,
+				kind: 'start-beyond',
+				exceeded: g > tol(k),
+				state: start
+			});
+	}
+	return events;
 }
 
 /** The codes of the warnings limitWarnings gives. */
