@@ -390,9 +390,13 @@ export async function gotoQuiet(page: Page, url: string, quietMs = 150): Promise
 		page.off('requestfinished', ended);
 		page.off('requestfailed', ended);
 	}
-	await page.evaluate(() =>
-		document.fonts.ready.then(
-			() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)))
-		)
+	await page.evaluate(() => document.fonts.ready.then(() => undefined));
+	await twoFrames(page);
+}
+
+/** Returns once the page has drawn two more frames (what a click or a load changed is laid out). */
+export async function twoFrames(page: Page): Promise<void> {
+	await page.evaluate(
+		() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)))
 	);
 }

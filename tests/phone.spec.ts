@@ -8,7 +8,8 @@ import {
 	seededK101Id,
 	signedInRequest,
 	signInPage,
-	TEAM
+	TEAM,
+	twoFrames
 } from './helpers';
 
 /*
@@ -35,9 +36,7 @@ async function sheets(page: Page): Promise<Record<string, Sheet>> {
 
 /** After gotoQuiet, or after a click that fetches nothing: nothing wider than the screen. */
 async function fits(page: Page, where: string) {
-	await page.evaluate(
-		() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)))
-	);
+	await twoFrames(page);
 	const width = await page.evaluate(() => document.scrollingElement!.scrollWidth);
 	expect(width, `${where}: page width at a 390 px screen`).toBeLessThanOrEqual(PHONE.width);
 }

@@ -227,9 +227,7 @@ export class SheetEditor {
 	 * has loaded; the fluid's until then), else the fluid's own.
 	 */
 	get dome(): SaturationCurve | null {
-		const spec = this.doc.spec;
-		if (spec.fluid !== 'water' || spec.formulation !== 'if97' || !this.engine)
-			return this.saturation;
+		if (!this.#wantsIf97() || !this.engine) return this.saturation;
 		if (!this.engine.if97SaturationCurve) {
 			// the sheet became IF97 after the engine loaded: load IF97 beside it (drawn when it comes)
 			queueMicrotask(() => void this.loadEngine());

@@ -491,10 +491,12 @@ function if97LimitEvents(
 			return;
 		}
 		const ls = spec.legs[i];
+		const pts = leg.points;
 		for (const k of named) {
 			const value = limits[k] as number;
-			const G = (p: State) => beyond[k](p.T, p.P) + tol(k);
-			const pts = leg.points;
+			// how far beyond the limit (g), and the same counting a state within tolerance as at it (G)
+			const g = (p: State) => beyond[k](p.T, p.P);
+			const G = (p: State) => g(p) + tol(k);
 			let j = 1;
 			while (j < pts.length && !(G(pts[j - 1]) < 0 && G(pts[j]) >= 0)) j++;
 			if (j >= pts.length) continue;
@@ -508,7 +510,6 @@ function if97LimitEvents(
 					if (!(e instanceof ThermoError)) throw e;
 					state = { ...seed, formulation: 'iapws95' };
 				}
-			const g = (p: State) => beyond[k](p.T, p.P);
 			events.push({
 				limit: k,
 				value,
@@ -532,10 +533,7 @@ function limitStateOnLeg(
 	n?: number
 ): State {
 	const q = limit.endsWith('Pressure') ? 'P' : 'T';
-	if (process === 'polytropic') {
-		const m = n ?? 1;
-		return polytropicEnd(start, m, [q, value], seed);
-	}
+	if (process === 'polytropic') return polytropicEnd(start, n ?? 1, [q, value], seed);
 	const inv = INVARIANT[process];
 	return if97FixFrom({ [inv]: start[inv], [q]: value } as Inputs, seedOf(seed));
 }
