@@ -1,7 +1,7 @@
 /**
  * Published check values kept as data beside each fluid (`<id>.checks.ts`), run by one generic test
  * (published-checks.test.ts). Every table names the publication and table its numbers come from, and
- * the public transcription they were read in. Values are strings as printed, so the test knows the
+ * the public copy of them that was used. Values are strings as printed, so the test knows the
  * printed precision: a computed value must agree within half a unit in the last printed digit
  * (`2148e1` means 21480 printed to tens), or within `rel` where a table says why it needs one.
  * An empty string is a cell the table leaves blank.
@@ -32,7 +32,7 @@ export const CHECK_UNITS = {
 export type CheckUnit = keyof typeof CHECK_UNITS;
 
 export interface CheckTable {
-	/** publication, table (and page), and the public transcription it was read in */
+	/** publication, table (and page), and the public copy of its numbers that was used */
 	source: string;
 	/** how each row's state is fixed: from its T and ρ, its T and P, or saturation at its T or P */
 	input: 'T-rho' | 'T-P' | 'T-sat' | 'P-sat';

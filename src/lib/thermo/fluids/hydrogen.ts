@@ -26,13 +26,13 @@ export const hydrogen: FluidData = {
 			'J. W. Leachman, R. T Jacobsen, S. G. Penoncello, E. W. Lemmon, "Fundamental Equations of State for Parahydrogen, Normal Hydrogen, and Orthohydrogen", J. Phys. Chem. Ref. Data 38 (2009) 721–748, doi:10.1063/1.3160306',
 		provenance:
 			'Residual coefficients (normal hydrogen) transcribed from the public CoolProp data file (CoolProp/CoolProp, ' +
-			'dev/fluids/Hydrogen.json) and compared term by term by script with the independent pychemqt transcription ' +
-			'(jjgomera/pychemqt, lib/mEoS/H2.py, class H2, "leachman"): all 14 terms identical digit for digit (n, d, t, l and the ' +
+			'dev/fluids/Hydrogen.json) and compared term by term by script with the independent pychemqt copy ' +
+			'(jjgomera/pychemqt, lib/mEoS/H2.py, H2, "leachman"): all 14 terms identical digit for digit (n, d, t, l and the ' +
 			'Gaussian φ, β, γ, D, stored with the signs of exp(−η(δ − ε)² − β(τ − γ)²)). Ideal part identical: a1 = −1.4579856475, ' +
 			'a2 = 1.888076782, 1.5 ln τ, Planck–Einstein a = 1.616, −0.4117, −0.792, 0.758, 1.217 with b = 531, 751, 1989, 2484, ' +
 			'6859 K (written here as b/Tc). Molar mass 2.01588 g/mol, R = 8.314472 J/(mol·K), reducing point 33.145 K, ' +
 			'15.508 mol/dm³. Checked in published-checks.test.ts with hydrogen.checks.ts: the paper’s Table 14 (saturation, NBP ' +
-			'convention), as transcribed by pychemqt; no single-phase table of the paper was available in a public transcription. Published scientific data (facts), transcribed; no code copied.'
+			'convention), as pychemqt gives it; no single-phase table of the paper was available in a public copy. Published scientific data (facts), copied as data; no code copied.'
 	},
 	molarMass: M,
 	// R = Rm/M with Rm = 8.314472 J/(mol·K) as used by the paper

@@ -24,7 +24,7 @@ export const isobutane: FluidData = {
 			'D. Bücker, W. Wagner, "Reference Equations of State for the Thermodynamic Properties of Fluid Phase n-Butane and Isobutane", J. Phys. Chem. Ref. Data 35 (2006) 929–1019, doi:10.1063/1.1901687',
 		provenance:
 			'Residual coefficients transcribed from the public CoolProp data file (CoolProp/CoolProp, dev/fluids/IsoButane.json) and ' +
-			'compared term by term by script with the independent pychemqt transcription (jjgomera/pychemqt, lib/mEoS/iC4.py, class ' +
+			'compared term by term by script with the independent pychemqt copy (jjgomera/pychemqt, lib/mEoS/iC4.py, ' +
 			'iC4, "buecker"): all 25 terms identical digit for digit (n, d, t, l and the Gaussian η, β, γ, ε). Ideal part: a1 = ' +
 			'11.60865546, a2 = −5.29450411, c = 3.05956619 and the Planck–Einstein a = 4.94641014, 4.09475197, 15.6632824, 9.73918122 ' +
 			'identical in both; the exponents θ = 0.9512779015, 2.3878958853, 4.3469042691, 10.3688586351 are pychemqt’s, the same ' +
