@@ -6,11 +6,15 @@
  * answer must be the right state or name every genuine candidate — each one reproducing the
  * inputs — and never a refusal when a state exists.
  */
-// Source of the check values: a round-trip identity — each input pair is a state's own properties
-// (generated from (T, ρ) by the engine audit filed as issue 11, "Engine: every pair in every region",
-// which printed T and P of each state), and each answer is held to reproduce its inputs. Tolerances: the
-// audit's printed rounding.
+// Sources of the check values: (1) a round-trip identity — each input pair is a state's own
+// properties (generated from (T, ρ) by the engine audit filed as issue 11, "Engine: every pair in every
+// region", which printed T and P of each state), and each answer is held to reproduce its inputs;
+// tolerances: the audit's printed rounding. (2) For the single-phase water and ammonia cases (but
+// ammonia in dilute gas, where (u, h) hardly fixes P), the
+// states python3-iapws 1.5.2's IAPWS95 and NH3 classes give for the same inputs
+// (tests/reference/iapws-multi-root.json, made by tests/reference/make-iapws-multi-root.py).
 import { describe, expect, it } from 'vitest';
+import reference from '../../../../tests/reference/iapws-multi-root.json';
 import { ThermoError } from '../errors.ts';
 import { fixState } from '../index.ts';
 import type { Inputs, State } from '../types.ts';
@@ -138,6 +142,25 @@ describe('pairs with several, touching or dilute-gas states (issue 11 audit inpu
 					).toBe(true);
 		});
 	}
+
+	it('names every state python3-iapws finds for the water (h, s) and ammonia (u, h) cases', () => {
+		// source: python3-iapws 1.5.2 IAPWS95 and NH3, tests/reference/iapws-multi-root.json
+		for (const c of reference.cases) {
+			const found = answers(c.fluid, c.inputs as Inputs);
+			for (const ref of c.states) {
+				// the reference state reproduces the inputs in python3-iapws too
+				const given = c.inputs as unknown as Record<string, number>;
+				for (const [k, v] of Object.entries(ref.inputs as unknown as Record<string, number>))
+					expect(Math.abs(v / given[k] - 1)).toBeLessThan(1e-9);
+				const hit = found.find((s) => Math.abs(s.T - ref.T) <= 1e-6 * ref.T);
+				expect(hit, `${c.fluid} ${JSON.stringify(c.inputs)}: T = ${ref.T} K`).toBeDefined();
+				// P within 1e−4: the two implementations agree to about 1e−6 at a given (T, ρ)
+				// (ammonia-iapws.test.ts), and a pair with two states close by (ammonia's (u, h) at
+				// 689 and 698 K) moves its states more than that; the audit's figures were held to 1 %
+				expect(Math.abs(hit!.P / ref.P - 1), `${c.fluid} at ${ref.T} K: P`).toBeLessThan(1e-4);
+			}
+		}
+	});
 
 	it('names each dilute-gas water state once for (u, h)', () => {
 		for (const [T, P] of [
