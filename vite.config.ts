@@ -22,6 +22,12 @@ export default defineConfig({
 		pool: 'forks',
 		// one fork per core: vitest's own default leaves one core idle (on 2 cores, one fork)
 		maxWorkers: availableParallelism(),
+		// test files share a fork's module graph instead of importing it again each (import time was
+		// most of the run: 137 → 63 s). The rule that makes this safe: a file restores whatever global
+		// state it changes (process.env, fake timers, spies) in its after-hooks, and each integration
+		// test opens its own database (setupIntegration). The suite passes in shuffled file orders too
+		// (--sequence.shuffle.files).
+		isolate: false,
 		projects: [
 			// (include lists per project: a project that extends the root adds to the root's lists)
 			{
