@@ -99,10 +99,11 @@ export default ts.config(
 		rules: { 'no-undef': 'off' }
 	},
 	{
+		// without projectService: no rule here needs TypeScript's type information, and building the
+		// program for it doubled the lint's time (38 → 18 s)
 		files: ['**/*.svelte', '**/*.svelte.ts', '**/*.svelte.js'],
 		languageOptions: {
 			parserOptions: {
-				projectService: true,
 				extraFileExtensions: ['.svelte'],
 				parser: ts.parser,
 				svelteConfig
