@@ -31,7 +31,9 @@ const chromiumArgs = [
 	'--disable-background-networking',
 	'--disable-component-update',
 	'--disable-sync',
-	'--no-first-run'
+	'--no-first-run',
+	'--renderer-process-limit=2',
+	'--disable-site-isolation-trials'
 ];
 
 export default defineConfig({
