@@ -65,6 +65,8 @@ export async function startFakeSmtp(
 		banner: 'Statewright local mail catcher',
 		size: 10 * 1024 * 1024,
 		logger: false,
+		// no reverse DNS look-up of the client: it is always this machine
+		disableReverseLookup: true,
 		onData(stream, session, callback) {
 			const chunks: Buffer[] = [];
 			stream.on('data', (c: Buffer) => chunks.push(c));
@@ -124,7 +126,11 @@ export async function createMailer(options: {
 			host: '127.0.0.1',
 			port: fake.port,
 			secure: false,
-			ignoreTLS: true
+			ignoreTLS: true,
+			// one connection kept open for many messages: smtp-server waits 100 ms before its
+			// greeting on every new connection (it listens for clients that talk too early)
+			pool: true,
+			maxConnections: 2
 		});
 	}
 	return {
