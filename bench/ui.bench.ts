@@ -15,7 +15,14 @@
  *    waited in the page's queue before its first handler ran (the browser's input path and the
  *    machine's load), and from that handler to the redrawn path (the editor's own work). Also
  *    printed, without a budget: each move until the first redraw of the server's answer after it
- *    (the answer that replaces the preview).
+ *    (the answer that replaces the preview). During a gesture the editor asks the server at most
+ *    every 100 ms and an answer replaces only a preview of its own move or an earlier one, so
+ *    this mostly measures how long the pointer keeps moving; the answers themselves fill the
+ *    table and warnings as they land.
+ *
+ *    Pointer moves are continuous events: Chromium hands them to the page just before its next
+ *    frame, so in the one-move-at-a-time figure the event's wait (up to one frame) is the
+ *    browser's, not the editor's.
  *
  * Prints figures; never fails on time. Run: npm run bench:ui  (BENCH_PORT, default 4397)
  */
@@ -288,7 +295,9 @@ async function main() {
 		console.log('  of which, one move at a time:');
 		line('  event waiting to be run', seq.waited);
 		line('  handler to redrawn path', seq.worked);
-		console.log('Pointer move → the server’s answer drawn (POST /api/v1/paths, coalesced):');
+		console.log(
+			'Pointer move → the server’s answer drawn (POST /api/v1/paths, at most every 100 ms in a gesture):'
+		);
 		line('one move at a time', seq.answered);
 		line('continuous, ~60 moves/s', cont.answered);
 		console.log('');

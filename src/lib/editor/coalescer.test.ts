@@ -121,4 +121,47 @@ describe('request coalescer', () => {
 		expect(n).toBe(2);
 		spy.mockRestore();
 	});
+
+	it('with a spacing, starts requests at least that far apart, the newest input winning; flush sends at once', async () => {
+		const server = fakeServer(20);
+		const results: number[] = [];
+		const c = createCoalescer(
+			server.run,
+			{ result: (o) => results.push(o), error: () => {} },
+			{ minIntervalMs: 100 }
+		);
+		const t0 = Date.now();
+		const starts: number[] = [];
+		const calls = () => server.calls.length;
+		let seen = 0;
+		// pointer moves every 10 ms for 350 ms; the server answers in 20
+		for (let i = 1; i <= 35; i++) {
+			c.submit(i);
+			await vi.advanceTimersByTimeAsync(10);
+			if (calls() > seen) {
+				seen = calls();
+				starts.push(Date.now() - t0);
+			}
+		}
+		// starts at 0 (seen after the first step), then every 100 ms with the newest move then
+		expect(server.calls).toEqual([1, 10, 20, 30]);
+		expect(starts).toEqual([10, 100, 200, 300]);
+		// a move 50 ms after the last start waits for the spacing…
+		c.submit(99);
+		await vi.advanceTimersByTimeAsync(20);
+		expect(server.calls).toHaveLength(4);
+		// …unless flushed (the release of a drag): sent at once
+		c.flush();
+		expect(server.calls).toEqual([1, 10, 20, 30, 99]);
+		await vi.advanceTimersByTimeAsync(20);
+		expect(results.at(-1)).toBe(198);
+		expect(c.busy).toBe(false);
+		// cancel drops an input waiting out the spacing
+		c.submit(5);
+		c.submit(6);
+		c.cancel();
+		await vi.advanceTimersByTimeAsync(200);
+		expect(server.calls).toHaveLength(5);
+		expect(c.stats.replaced).toBeGreaterThan(0);
+	});
 });

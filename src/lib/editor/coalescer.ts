@@ -3,11 +3,15 @@
  * but at most one request is in flight; moves arriving meanwhile replace each other, and only the
  * newest is sent when the running one lands. Answers are delivered in order, each the moment it
  * lands; after `cancel()` (the gesture was undone or superseded) an answer still in flight is
- * dropped as stale. Pure logic: `run` does the fetching.
+ * dropped as stale. With `minIntervalMs`, requests also start at least that far apart (an input
+ * arriving sooner waits, replaced by newer ones) until `flush()` sends the waiting one at once.
+ * Pure logic: `run` does the fetching.
  */
 export interface Coalescer<I> {
 	/** Ask for `input`: now if idle, else after the running request (replacing any waiting input). */
 	submit(input: I): void;
+	/** Send the waiting input now if nothing is in flight (not waiting out the spacing). */
+	flush(): void;
 	/** Drop the waiting input and ignore the answer in flight. */
 	cancel(): void;
 	/** True while a request is in flight or an input waits. */
@@ -25,10 +29,29 @@ export interface CoalescerHandlers<I, O> {
 	error(error: unknown, input: I): void;
 }
 
+export interface CoalescerOptions {
+	/** the least time from the start of one request to the start of the next (default 0) */
+	minIntervalMs?: number;
+	/** the clock and timer (tests, or another time base) */
+	now?: () => number;
+	setTimer?: (f: () => void, ms: number) => () => void;
+}
+
+const defaultTimer = (f: () => void, ms: number) => {
+	const t = setTimeout(f, ms);
+	return () => clearTimeout(t);
+};
+
 export function createCoalescer<I, O>(
 	run: (input: I) => Promise<O>,
-	handlers: CoalescerHandlers<I, O>
+	handlers: CoalescerHandlers<I, O>,
+	options: CoalescerOptions = {}
 ): Coalescer<I> {
+	const spacing = options.minIntervalMs ?? 0;
+	const now = options.now ?? (() => Date.now());
+	const setTimer = options.setTimer ?? defaultTimer;
+	let lastStart = -Infinity;
+	let cancelTimer: (() => void) | null = null;
 	let inFlight = false;
 	let waiting: { input: I } | null = null;
 	let generation = 0;
@@ -42,8 +65,29 @@ export function createCoalescer<I, O>(
 		for (const f of w) f();
 	}
 
+	/** Start `input` now, or once the spacing since the last start has passed (if still the newest). */
+	function startOrWait(input: I) {
+		const wait = lastStart + spacing - now();
+		if (wait <= 0) return start(input);
+		waiting = { input };
+		cancelTimer ??= setTimer(() => {
+			cancelTimer = null;
+			const next = waiting;
+			waiting = null;
+			if (next && !inFlight) start(next.input);
+			else if (next) waiting = next;
+		}, wait);
+	}
+
+	function clearWait() {
+		cancelTimer?.();
+		cancelTimer = null;
+	}
+
 	function start(input: I) {
+		clearWait();
 		inFlight = true;
+		lastStart = now();
 		stats.sent++;
 		const gen = generation;
 		let promise: Promise<O>;
@@ -71,21 +115,27 @@ export function createCoalescer<I, O>(
 		} else stats.dropped++;
 		const next = waiting;
 		waiting = null;
-		if (next) start(next.input);
+		if (next) startOrWait(next.input);
 		else settleIdle();
 	}
 
 	return {
 		submit(input) {
-			if (inFlight) {
-				if (waiting) stats.replaced++;
-				waiting = { input };
-			} else start(input);
+			if (waiting) stats.replaced++;
+			if (inFlight) waiting = { input };
+			else startOrWait(input);
+		},
+		flush() {
+			const next = waiting;
+			if (!next || inFlight) return;
+			waiting = null;
+			start(next.input);
 		},
 		cancel() {
 			generation++;
 			if (waiting) stats.replaced++;
 			waiting = null;
+			clearWait();
 			settleIdle();
 		},
 		get busy() {

@@ -6,7 +6,8 @@
  * to autosave; on failure keep the old one and say why. Drags are live: once a frame (the latest
  * pointer move wins) the browser's engine recomputes the legs the move changes and the chart
  * redraws that preview at once (preview.ts); the same move asks the server through a coalescer
- * (one request in flight, the newest position waiting, stale answers dropped), and the server's
+ * (one request in flight and at most one started per DRAG_ASK_SPACING_MS, the newest position
+ * waiting, stale answers dropped; the release is sent at once), and the server's
  * answer replaces the preview and fills the table and warnings. Only the server's answers ever
  * become the document's result; the gesture is one undo step.
  *
@@ -101,6 +102,13 @@ type Engine = typeof import('$lib/thermo/browser') &
 const DRAG_SAMPLES = 20;
 /** A drag preview stops adding legs after this long (a long path dragged near its start); the server's answer draws the rest. */
 const PREVIEW_BUDGET_MS = 10;
+/**
+ * During a drag the server is asked at most this often (the browser's preview draws every move;
+ * the answers fill the table and warnings). Each answer costs the page a redraw of the path, the
+ * table and the warnings: at one per server round trip they met about half the pointer moves
+ * half-way and pushed the move-to-redraw time past a frame. The release is sent at once.
+ */
+const DRAG_ASK_SPACING_MS = 100;
 
 /** Once a frame in a browser; elsewhere (unit tests, server) a timer of about one frame. */
 const nextFrame = (f: () => void): (() => void) => {
@@ -345,7 +353,8 @@ export class SheetEditor {
 						'caution'
 					);
 				}
-			}
+			},
+			{ minIntervalMs: DRAG_ASK_SPACING_MS }
 		);
 	}
 
@@ -699,6 +708,7 @@ export class SheetEditor {
 		// the release position is the last move: handled now, not at the next frame
 		this.#dropPendingMove();
 		this.#move(e);
+		this.#coalescer.flush();
 		await this.#coalescer.idle();
 		this.#drag = null;
 		this.dragging = false;
