@@ -28,7 +28,7 @@ export const isobutane: FluidData = {
 			'iC4, "buecker"): all 25 terms identical digit for digit (n, d, t, l and the Gaussian η, β, γ, ε). Ideal part: a1 = ' +
 			'11.60865546, a2 = −5.29450411, c = 3.05956619 and the Planck–Einstein a = 4.94641014, 4.09475197, 15.6632824, 9.73918122 ' +
 			'identical in both; the exponents θ = 0.9512779015, 2.3878958853, 4.3469042691, 10.3688586351 are pychemqt’s, the same ' +
-			'digits in an independent Modelica transcription (HelmholtzMedia) — CoolProp stores them rounded to 9 decimals ' +
+			'digits in an independent Modelica copy (HelmholtzMedia) — CoolProp stores them rounded to 9 decimals ' +
 			'(0.951277902…). Molar mass 58.1222 g/mol, R = 8.314472 J/(mol·K), reducing point 407.81 K, 225.5 kg/m³. Checked in ' +
 			'published-checks.test.ts with isobutane.checks.ts: the paper’s verification and saturation values as transcribed by ' +
 			'pychemqt, energies as differences (the paper’s own convention). Triple-point pressure 0.0229 Pa: the equation’s own saturation pressure at 113.73 K, rounded. Published scientific data (facts), transcribed; no code copied.'

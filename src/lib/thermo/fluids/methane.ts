@@ -25,7 +25,7 @@ export const methane: FluidData = {
 			'U. Setzmann, W. Wagner, "A New Equation of State and Tables of Thermodynamic Properties for Methane Covering the Range from the Melting Line to 625 K at Pressures up to 1000 MPa", J. Phys. Chem. Ref. Data 20 (1991) 1061–1155, doi:10.1063/1.555898',
 		provenance:
 			'Residual coefficients transcribed from the public CoolProp data file (CoolProp/CoolProp, dev/fluids/Methane.json) and ' +
-			'compared term by term by script with the independent pychemqt transcription (jjgomera/pychemqt, lib/mEoS/CH4.py, class ' +
+			'compared term by term by script with the independent pychemqt copy (jjgomera/pychemqt, lib/mEoS/CH4.py, class ' +
 			'CH4, "setzmann"): all 40 terms identical digit for digit (n, d, t, l and the Gaussian η, β, γ, ε). Ideal part identical: ' +
 			'a1 = 9.91243972, a2 = −6.33270087, 3.0016 ln τ, Planck–Einstein a = 0.008449, 4.6942, 3.4865, 1.6572, 1.4115 with ' +
 			'θ = 648, 1957, 3895, 5705, 15080 K (written here as θ/Tc). Molar mass 16.0428 g/mol, R = 8.31451 J/(mol·K), reducing ' +

@@ -24,7 +24,7 @@ export const propane: FluidData = {
 			'E. W. Lemmon, M. O. McLinden, W. Wagner, "Thermodynamic Properties of Propane. III. A Reference Equation of State for Temperatures from the Melting Line to 650 K and Pressures up to 1000 MPa", J. Chem. Eng. Data 54 (2009) 3141–3180, doi:10.1021/je900217v',
 		provenance:
 			'Coefficients (Tables 2 and 3 of the paper) transcribed from the public CoolProp data file (CoolProp/CoolProp, ' +
-			'dev/fluids/n-Propane.json) and compared term by term by script with the independent pychemqt transcription ' +
+			'dev/fluids/n-Propane.json) and compared term by term by script with the independent pychemqt copy ' +
 			'(jjgomera/pychemqt, lib/mEoS/C3.py, class C3, "lemmon"): all 18 residual terms identical digit for digit (n, d, t, and the ' +
 			'Gaussian η, β, γ, ε); ideal part identical (a1 = −4.970583, a2 = 4.29352, the Planck–Einstein v = 3.043, 5.874, 9.337, ' +
 			'7.922 with u = 393, 1237, 1984, 4351 K, written here as u/Tc; CoolProp stores u/Tc rounded to 7 digits). Molar ' +

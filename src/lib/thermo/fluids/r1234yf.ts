@@ -31,13 +31,13 @@ export const r1234yf: FluidData = {
 			'E. W. Lemmon, R. Akasaka, "An International Standard Formulation for 2,3,3,3-Tetrafluoroprop-1-ene (R1234yf) Covering Temperatures from the Triple Point Temperature to 410 K and Pressures Up to 100 MPa", Int. J. Thermophys. 43 (2022) 119, doi:10.1007/s10765-022-03015-y',
 		provenance:
 			'Residual coefficients transcribed from the public CoolProp data file (CoolProp/CoolProp, dev/fluids/R1234yf.json, its ' +
-			'first equation, Lemmon-IJT-2022) and compared term by term by script with the independent pychemqt transcription ' +
+			'first equation, Lemmon-IJT-2022) and compared term by term by script with the independent pychemqt copy ' +
 			'(jjgomera/pychemqt, lib/mEoS/R1234yf.py, class R1234yf, "lemmon"): all 17 terms identical digit for digit (n, d, t, l and ' +
 			'the Gaussian η, β, γ, ε). Ideal part identical: 3 ln τ, Planck–Einstein v = 8.65, 9.75, 2.11 with u = 512, 1570, 4500 K ' +
 			'(written here as u/Tc; both sources store u/Tc); a1, a2 are set by the IIR reference state. Molar mass 114.0416 g/mol, ' +
 			'R = 8.314462618 J/(mol·K), reducing point 367.85 K, 4.18 mol/dm³ (both). Triple point 121.6 K, 0.4127 Pa (CoolProp). ' +
 			'Checked in published-checks.test.ts with r1234yf.checks.ts: the paper’s Table 7 (computer-program verification). No ' +
-			'saturation table of the paper was available in a public transcription: saturation is checked at the critical point ' +
+			'saturation table of the paper was available in a public copy: saturation is checked at the critical point ' +
 			'(and by phase equilibrium) only. Published scientific data (facts), transcribed; no code copied.'
 	},
 	molarMass: M,

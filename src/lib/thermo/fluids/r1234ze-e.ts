@@ -34,13 +34,13 @@ export const r1234zeE: FluidData = {
 			'M. Thol, E. W. Lemmon, "Equation of State for the Thermodynamic Properties of trans-1,3,3,3-Tetrafluoropropene [R-1234ze(E)]", Int. J. Thermophys. 37 (2016) 28, doi:10.1007/s10765-016-2040-6',
 		provenance:
 			'Residual coefficients transcribed from the public CoolProp data file (CoolProp/CoolProp, dev/fluids/R1234ze(E).json) and ' +
-			'compared term by term by script with the independent pychemqt transcription (jjgomera/pychemqt, lib/mEoS/R1234zeE.py, class ' +
+			'compared term by term by script with the independent pychemqt copy (jjgomera/pychemqt, lib/mEoS/R1234zeE.py, class ' +
 			'R1234zeE, "thol"): all 16 terms identical digit for digit (n, d, t, l and the Gaussian η, β, γ, ε). Ideal part: 3 ln τ and ' +
 			'Planck–Einstein v = 9.3575, 10.717 with u = 513, 1972 K (written here as u/Tc) in both; a1, a2 are set by the IIR reference ' +
 			'state. Molar mass 114.0416 g/mol, reducing point 382.513 K, 4.29 mol/dm³ (both). R = 8.3144621 J/(mol·K) as in pychemqt ' +
 			'(CoolProp carries 8.314472): the paper’s Table 3 values, printed to 7 digits, are reproduced with 8.3144621 and not with ' +
 			'8.314472. Checked in published-checks.test.ts with r1234ze-e.checks.ts: Table 3 (computer-program verification). No ' +
-			'saturation table of the paper was available in a public transcription: saturation is checked at the critical and normal ' +
+			'saturation table of the paper was available in a public copy: saturation is checked at the critical and normal ' +
 			'boiling points only. Limits 420 K and 100 MPa as the paper states them (from memory). Triple-point pressure 218.6 Pa: the equation’s own saturation pressure at 168.62 K, rounded. Published scientific data (facts), transcribed; no code copied.'
 	},
 	molarMass: M,

@@ -24,7 +24,7 @@ export const r32: FluidData = {
 			'R. Tillner-Roth, A. Yokozeki, "An International Standard Equation of State for Difluoromethane (R-32) for Temperatures from the Triple Point at 136.34 K to 435 K and Pressures up to 70 MPa", J. Phys. Chem. Ref. Data 26 (1997) 1273–1328, doi:10.1063/1.556002',
 		provenance:
 			'Coefficients transcribed from the public CoolProp data file (CoolProp/CoolProp, dev/fluids/R32.json) and compared ' +
-			'term by term by script with the independent pychemqt transcription (jjgomera/pychemqt, lib/mEoS/R32.py, class R32, ' +
+			'term by term by script with the independent pychemqt copy (jjgomera/pychemqt, lib/mEoS/R32.py, class R32, ' +
 			'"tillner"): all 19 residual terms identical digit for digit (n, d, t, l); ideal part identical (a1 = −8.258096, ' +
 			'a2 = 6.353098, a3 = 3.004486; Planck–Einstein a = 1.160761, 2.645151, 5.794987, 1.129475 with exponents 2.2718538, ' +
 			'11.9144210, 5.1415638, 32.7682170 in τ). Molar mass 52.024 g/mol, R = 8.314471 J/(mol·K), reducing point 351.255 K, ' +
