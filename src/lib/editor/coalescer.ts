@@ -32,15 +32,7 @@ export interface CoalescerHandlers<I, O> {
 export interface CoalescerOptions {
 	/** the least time from the start of one request to the start of the next (default 0) */
 	minIntervalMs?: number;
-	/** the clock and timer (tests, or another time base) */
-	now?: () => number;
-	setTimer?: (f: () => void, ms: number) => () => void;
 }
-
-const defaultTimer = (f: () => void, ms: number) => {
-	const t = setTimeout(f, ms);
-	return () => clearTimeout(t);
-};
 
 export function createCoalescer<I, O>(
 	run: (input: I) => Promise<O>,
@@ -48,10 +40,8 @@ export function createCoalescer<I, O>(
 	options: CoalescerOptions = {}
 ): Coalescer<I> {
 	const spacing = options.minIntervalMs ?? 0;
-	const now = options.now ?? (() => Date.now());
-	const setTimer = options.setTimer ?? defaultTimer;
 	let lastStart = -Infinity;
-	let cancelTimer: (() => void) | null = null;
+	let timer: ReturnType<typeof setTimeout> | undefined;
 	let inFlight = false;
 	let waiting: { input: I } | null = null;
 	let generation = 0;
@@ -65,29 +55,31 @@ export function createCoalescer<I, O>(
 		for (const f of w) f();
 	}
 
-	/** Start `input` now, or once the spacing since the last start has passed (if still the newest). */
+	/**
+	 * Start `input` now, or wait out the spacing since the last start (nothing is in flight then:
+	 * only `flush` starts a request meanwhile, and it stops the wait); the newest input goes.
+	 */
 	function startOrWait(input: I) {
-		const wait = lastStart + spacing - now();
+		const wait = lastStart + spacing - Date.now();
 		if (wait <= 0) return start(input);
 		waiting = { input };
-		cancelTimer ??= setTimer(() => {
-			cancelTimer = null;
+		timer ??= setTimeout(() => {
+			timer = undefined;
 			const next = waiting;
 			waiting = null;
-			if (next && !inFlight) start(next.input);
-			else if (next) waiting = next;
+			if (next) start(next.input);
 		}, wait);
 	}
 
 	function clearWait() {
-		cancelTimer?.();
-		cancelTimer = null;
+		clearTimeout(timer);
+		timer = undefined;
 	}
 
 	function start(input: I) {
 		clearWait();
 		inFlight = true;
-		lastStart = now();
+		lastStart = Date.now();
 		stats.sent++;
 		const gen = generation;
 		let promise: Promise<O>;
