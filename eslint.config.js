@@ -82,6 +82,7 @@ export default ts.config(
 		ignores: [
 			'build/',
 			'.svelte-kit/',
+			'.svelte-kit-build/',
 			'data/',
 			'tmp/',
 			'test-results/',

@@ -26,6 +26,9 @@ const config = {
 	preprocess: vitePreprocess(),
 	kit: {
 		adapter: withComputeWorker(adapter({ out: OUT })),
+		// `npm test` builds the app for the journeys while svelte-check reads .svelte-kit: the build
+		// gets a working directory of its own (SVELTEKIT_OUT_DIR) so neither sees the other's files
+		outDir: process.env.SVELTEKIT_OUT_DIR || '.svelte-kit',
 		// cross-site form posts are refused by our own hook (src/lib/server/csrf.ts), which lets
 		// token-carrying API scripts through and answers the API in its JSON error shape
 		csrf: { trustedOrigins: ['*'] },
