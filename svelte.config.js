@@ -27,7 +27,9 @@ const config = {
 	kit: {
 		adapter: withComputeWorker(adapter({ out: OUT })),
 		// `npm test` builds the app for the journeys while svelte-check reads .svelte-kit: the build
-		// gets a working directory of its own (SVELTEKIT_OUT_DIR) so neither sees the other's files
+		// gets a working directory of its own (SVELTEKIT_OUT_DIR) so neither sees the other's files.
+		// That build says tsconfig.json should extend .svelte-kit-build/tsconfig.json: it need not,
+		// the build reads no type information
 		outDir: process.env.SVELTEKIT_OUT_DIR || '.svelte-kit',
 		// cross-site form posts are refused by our own hook (src/lib/server/csrf.ts), which lets
 		// token-carrying API scripts through and answers the API in its JSON error shape

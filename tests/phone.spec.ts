@@ -61,7 +61,11 @@ async function pressable(control: Locator, what: string) {
 			bottom: b.y + b.height,
 			left: b.x,
 			right: b.x + b.width,
-			hit: hit ? (hit === el || el.contains(hit) ? 'itself' : hit.outerHTML.slice(0, 120)) : 'nothing'
+			hit: hit
+				? hit === el || el.contains(hit)
+					? 'itself'
+					: hit.outerHTML.slice(0, 120)
+				: 'nothing'
 		};
 	});
 	expect(seen.shown, `${what}: shown`).toBe(true);
