@@ -1,6 +1,6 @@
 #!/usr/bin/python3
 """Cross-check src/lib/thermo/if97/coefficients.ts (transcribed from python3-iapws) against a second,
-independent public transcription of IAPWS R7-97(2012): IF97.h of the CoolProp/IF97 repository on
+independent public copy of IAPWS R7-97(2012): IF97.h of the CoolProp/IF97 repository on
 GitHub (MIT licence; only its numbers are read here, nothing of it is copied into the project).
 
 Run: /usr/bin/python3 tests/reference/check-if97-coefficients.py path/to/IF97.h

@@ -1,6 +1,6 @@
 #!/usr/bin/python3
 """Cross-check src/lib/thermo/transport/water-coefficients.ts (transcribed from python3-iapws) against a
-second public transcription: IF97.h of the CoolProp/IF97 repository on GitHub (only its numbers are read).
+second public copy: IF97.h of the CoolProp/IF97 repository on GitHub (only its numbers are read).
 
 Run: /usr/bin/python3 tests/reference/check-water-transport-coefficients.py path/to/IF97.h
 Exits 1 on any term that differs by more than 1e-13 (relative) or is missing on either side.

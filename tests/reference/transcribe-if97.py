@@ -1,7 +1,7 @@
 #!/usr/bin/python3
 """Write src/lib/thermo/if97/coefficients.ts: the IAPWS-IF97 coefficients (IAPWS R7-97(2012)) as
 transcribed in python3-iapws (Debian, iapws/iapws97.py), read from that file's syntax tree so no
-number is retyped by hand. The tables are then cross-checked against a second public transcription
+number is retyped by hand. The tables are then cross-checked against a second public copy
 by tests/reference/check-if97-coefficients.py.
 
 Regenerate: apt-get install -y python3-iapws && /usr/bin/python3 tests/reference/transcribe-if97.py
@@ -54,7 +54,7 @@ out = ['/**',
        ' * IAPWS-IF97 coefficients: IAPWS R7-97(2012), Revised Release on the IAPWS Industrial Formulation 1997',
        ' * for the Thermodynamic Properties of Water and Steam. Each block names the release\'s table (table',
        ' * numbers from memory of the release\'s layout). Transcribed by tests/reference/transcribe-if97.py from',
-       f' * python3-iapws {iapws.__version__} (Debian) and cross-checked against a second public transcription by',
+       f' * python3-iapws {iapws.__version__} (Debian) and cross-checked against a second public copy by',
        ' * tests/reference/check-if97-coefficients.py. Generated: do not edit by hand.',
        ' */',
        '',
@@ -82,7 +82,7 @@ for name, fn, iname, jname, nname, table in BLOCKS:
 sat = lists('_PSat_T')['n'][1:]
 b23 = lists('_P23_T')['n'] + [lists('_t_P')['n'][1], lists('_t_P')['n'][2]]
 # python3-iapws 1.5.2 writes B23's n5 as 0.1391883977870e2 (a digit dropped); IAPWS R7-97(2012),
-# Table 1 and every other public transcription seen (CoolProp's IF97.h among them) give 0.13918839778870e2.
+# Table 1 and every other public copy seen (CoolProp's IF97.h among them) give 0.13918839778870e2.
 assert b23[4] == 0.1391883977870e2
 b23[4] = 0.13918839778870e2
 out.append('/** Saturation-pressure equation (region 4), IAPWS R7-97(2012), Table 34: n1…n10. */')

@@ -4,7 +4,7 @@ Read the published check values that pychemqt's tests transcribe from an equatio
 `Test.test_<eq>` method in lib/mEoS/<file>.py: `st = Fluid(T=…, rhom=…)` followed by
 `assertEqual(round(st.<property>.<unit>, n), value)`) and print them as Statewright check tables
 (src/lib/thermo/fluids/checks.ts), one per (comment, input kind). Each value keeps the digits the
-test states (n decimals), which is how the transcription records the printed table.
+test states (n decimals), which is how that copy records the printed table.
 
 Usage: transcribe-pychemqt-checks.py <pychemqt lib/mEoS/X.py> <method name> <class name> <source prefix>
 Only reads the file as text (Python's ast); runs none of it. Rows computed with another equation

@@ -2,7 +2,7 @@
  * IAPWS-IF97 coefficients: IAPWS R7-97(2012), Revised Release on the IAPWS Industrial Formulation 1997
  * for the Thermodynamic Properties of Water and Steam. Each block names the release's table (table
  * numbers from memory of the release's layout). Transcribed by tests/reference/transcribe-if97.py from
- * python3-iapws 1.5.2 (Debian) and cross-checked against a second public transcription by
+ * python3-iapws 1.5.2 (Debian) and cross-checked against a second public copy by
  * tests/reference/check-if97-coefficients.py. Generated: do not edit by hand.
  */
 

@@ -41,7 +41,7 @@ describe('thermal conductivity: Perkins & Huber (2011), J. Chem. Eng. Data 56, 4
 	// densities are in its comments). The copies differ in the last digit or two of several rows;
 	// each row is checked against both. pychemqt's R-1234ze(E) 300 K liquid value, 0.085550, is
 	// 0.19 % from CoolProp's 0.085389 — more than the whole critical enhancement there (0.15 %) — and
-	// is taken as a transcription slip: only CoolProp's figure is checked for that row.
+	// is taken as a copying slip: only CoolProp's figure is checked for that row.
 	const rows: ['r1234yf' | 'r1234ze-e', number, number, string, string | null][] = [
 		['r1234yf', 250, 2.80006, '0.0098481', '0.0098482'],
 		['r1234yf', 300, 4.671553, '0.013996', '0.013996'],

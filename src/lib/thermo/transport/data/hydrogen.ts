@@ -13,7 +13,7 @@
  * J. Phys. Chem. Ref. Data 40, 033101 (its normal-hydrogen coefficients):
  * λ = λ0(T) + Δλ(ρ, T) + Δλc(ρ, T), in W/(m·K).
  *
- * The numbers were read from two public transcriptions and compared term by term:
+ * The numbers were read from two public copies and compared term by term:
  * CoolProp/CoolProp dev/fluids/Hydrogen.json (TRANSPORT) with the residual viscosity in
  * src/Backends/Helmholtz/TransportRoutines.cpp (viscosity_hydrogen_higher_order_hardcoded), commit
  * ea27c6394887390270a03dcd0ad00a1274be4efc; and jjgomera/pychemqt lib/mEoS/H2.py (visco0 "Muzny

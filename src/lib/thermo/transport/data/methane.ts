@@ -18,7 +18,7 @@
  *   λc = 91.855/(η τ²) · X² · χ*^0.4681 · F, X = (∂p/∂T)_ρ/(ρR), χ* = 0.28631 δ τ RT/(∂p/∂ρ)_T,
  *      F = exp(−2.646 |T′|^½ − 2.678 ρ′² + 0.637 ρ′), T′ = 1 − T/Tc, ρ′ = 1 − δ, η in μPa·s.
  *
- * Coefficients read from two public transcriptions and compared term by term: CoolProp/CoolProp
+ * Coefficients read from two public copies and compared term by term: CoolProp/CoolProp
  * src/Backends/Helmholtz/TransportRoutines.cpp, conductivity_hardcoded_methane (which carries the
  * viscosity as well), commit ea27c6394887390270a03dcd0ad00a1274be4efc; and jjgomera/pychemqt
  * lib/mEoS/CH4.py, visco3 and thermo0 "Friend (1989)" with _ThCritical, and the forms in lib/meos.py

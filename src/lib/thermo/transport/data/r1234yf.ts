@@ -7,7 +7,7 @@
  * Its abstract (NIST author manuscript, PubMed Central PMC5103321) gives the range: triple point
  * (220 K) to 410 K at pressures up to 30 MPa.
  * Copies compared term by term: pychemqt lib/mEoS/R1234yf.py ("Huber (2016)" visco0; commit a26588c5)
- * and a public MATLAB transcription R1234yf_mu.m (found by exact-number search of public
+ * and a public MATLAB copy R1234yf_mu.m (found by exact-number search of public
  * repositories; the search did not name its repository); the dilute-gas terms also in the Fortran
  * source of the TREND library (its "R1234yf approximation of collision integral"). They agree, except
  * b3 of the Rainwater–Friend sum, 2471.01251 in pychemqt against 2471.0125 in the MATLAB copy (4e−9
