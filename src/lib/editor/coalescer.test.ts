@@ -164,4 +164,25 @@ describe('request coalescer', () => {
 		expect(server.calls).toHaveLength(5);
 		expect(c.stats.replaced).toBeGreaterThan(0);
 	});
+	it('with a spacing, an input started once the spacing is over replaces the one waiting for its timer', async () => {
+		const server = fakeServer(20);
+		const results: number[] = [];
+		const c = createCoalescer(
+			server.run,
+			{ result: (o) => results.push(o), error: () => {} },
+			{ minIntervalMs: 100 }
+		);
+		c.submit(1); // starts at 0, lands at 20
+		await vi.advanceTimersByTimeAsync(30);
+		c.submit(2); // waits for the spacing: its timer is due at 100
+		// the clock passes 100 before that timer has run (a busy page runs timers late), and a newer
+		// move comes: it starts at once, and the older one waiting must not be sent after it
+		vi.setSystemTime(Date.now() + 90);
+		c.submit(3);
+		expect(server.calls).toEqual([1, 3]);
+		await vi.advanceTimersByTimeAsync(500);
+		expect(server.calls).toEqual([1, 3]);
+		expect(results).toEqual([2, 6]);
+		expect(c.busy).toBe(false);
+	});
 });

@@ -65,9 +65,7 @@ export function createCoalescer<I, O>(
 		waiting = { input };
 		timer ??= setTimeout(() => {
 			timer = undefined;
-			const next = waiting;
-			waiting = null;
-			if (next) start(next.input);
+			if (waiting) start(waiting.input);
 		}, wait);
 	}
 
@@ -76,8 +74,10 @@ export function createCoalescer<I, O>(
 		timer = undefined;
 	}
 
+	/** Send `input`, the newest: an older input still waiting (for the spacing's timer) is dropped. */
 	function start(input: I) {
 		clearWait();
+		waiting = null;
 		inFlight = true;
 		lastStart = Date.now();
 		stats.sent++;
@@ -118,10 +118,7 @@ export function createCoalescer<I, O>(
 			else startOrWait(input);
 		},
 		flush() {
-			const next = waiting;
-			if (!next || inFlight) return;
-			waiting = null;
-			start(next.input);
+			if (waiting && !inFlight) start(waiting.input);
 		},
 		cancel() {
 			generation++;
