@@ -16,6 +16,18 @@ function fakeServer(latency: number) {
 	return { calls, run };
 }
 
+/** A coalescer spacing its requests 100 ms apart, on a fake server answering in 20 ms. */
+function spacedCoalescer() {
+	const server = fakeServer(20);
+	const results: number[] = [];
+	const c = createCoalescer(
+		server.run,
+		{ result: (o) => results.push(o), error: () => {} },
+		{ minIntervalMs: 100 }
+	);
+	return { server, results, c };
+}
+
 beforeEach(() => {
 	vi.useFakeTimers();
 });
@@ -123,13 +135,7 @@ describe('request coalescer', () => {
 	});
 
 	it('with a spacing, starts requests at least that far apart, the newest input winning; flush sends at once', async () => {
-		const server = fakeServer(20);
-		const results: number[] = [];
-		const c = createCoalescer(
-			server.run,
-			{ result: (o) => results.push(o), error: () => {} },
-			{ minIntervalMs: 100 }
-		);
+		const { server, results, c } = spacedCoalescer();
 		const t0 = Date.now();
 		const starts: number[] = [];
 		const calls = () => server.calls.length;
@@ -164,14 +170,9 @@ describe('request coalescer', () => {
 		expect(server.calls).toHaveLength(5);
 		expect(c.stats.replaced).toBeGreaterThan(0);
 	});
+
 	it('with a spacing, an input started once the spacing is over replaces the one waiting for its timer', async () => {
-		const server = fakeServer(20);
-		const results: number[] = [];
-		const c = createCoalescer(
-			server.run,
-			{ result: (o) => results.push(o), error: () => {} },
-			{ minIntervalMs: 100 }
-		);
+		const { server, results, c } = spacedCoalescer();
 		c.submit(1); // starts at 0, lands at 20
 		await vi.advanceTimersByTimeAsync(30);
 		c.submit(2); // waits for the spacing: its timer is due at 100
