@@ -394,9 +394,24 @@ export async function gotoQuiet(page: Page, url: string, quietMs = 150): Promise
 	await twoFrames(page);
 }
 
-/** Returns once the page has drawn two more frames (what a click or a load changed is laid out). */
+/**
+ * Returns once the page has drawn two more frames (what a click or a load changed is laid out), or
+ * after a second without a frame: headless Chromium now and then stops ticking animation frames for
+ * a page (a CI run once waited 90 s here for a frame that never came). The fallback forces a layout,
+ * so a caller that measures next still measures the page as it stands; every caller asserts on what
+ * it reads afterwards, so a late layout still fails there rather than here.
+ */
 export async function twoFrames(page: Page): Promise<void> {
 	await page.evaluate(
-		() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)))
+		() =>
+			new Promise<void>((resolve) => {
+				const done = () => {
+					clearTimeout(timer);
+					void document.documentElement.offsetHeight;
+					resolve();
+				};
+				const timer = setTimeout(done, 1000);
+				requestAnimationFrame(() => requestAnimationFrame(done));
+			})
 	);
 }
