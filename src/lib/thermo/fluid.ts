@@ -363,15 +363,29 @@ export class Fluid {
 		this.ancRhoV = new AncillaryEq(data.ancillaries.rhoVapor, data.critical.T);
 	}
 
-	/** αʳ and derivatives up to `order` at (δ, τ), into this.recR (overwritten by the next call). */
+	/**
+	 * αʳ and derivatives up to `order` at (δ, τ), into this.recR (overwritten by the next call).
+	 * A call at the (δ, τ) of the last one, at its order or lower, returns that record as it stands
+	 * (the same numbers; fields above the order asked for may then be set): a solver's final state
+	 * is often evaluated where its last iteration already was (a Newton step below round-off).
+	 */
 	residualAt(delta: number, tau: number, order: DerivativeOrder): AlphaRecord {
 		const rec = this.recR;
+		if (delta === this.recDelta && tau === this.recTau && order <= this.recOrder) return rec;
 		rec.reset();
 		this.ctx.set(delta, tau);
 		const terms = this.residual;
 		for (let i = 0; i < terms.length; i++) terms[i].add(this.ctx, order, rec);
+		this.recDelta = delta;
+		this.recTau = tau;
+		this.recOrder = order;
 		return rec;
 	}
+
+	/** where recR was last evaluated, and to which order */
+	private recDelta = NaN;
+	private recTau = NaN;
+	private recOrder = -1;
 
 	/**
 	 * α⁰ and derivatives up to `order` at (δ, τ), into this.recI (overwritten by the next call).
