@@ -17,6 +17,7 @@ import { densityAtTP } from './density.ts';
 import { evalSatLine, SatLine } from './dome.ts';
 import { locate, locateWithSat, placedState, twoPhaseAt } from './locate.ts';
 import { noStateInRange } from './range.ts';
+import { isobarStart } from './plane.ts';
 import { newtonBracket, scanRoots, type FD } from './roots.ts';
 import { TABLE_ACCURACY, satAtP, satGuess, triplePressure, type SatGuess } from './saturation.ts';
 
@@ -63,7 +64,8 @@ function solveAlongIsobar(
 	Tb: number,
 	fb: number,
 	T0: number,
-	rho0: number
+	rho0: number,
+	start?: number
 ): Point | null {
 	const p = new Point();
 	const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
@@ -76,7 +78,20 @@ function solveAlongIsobar(
 		return propValue(p, which) - y;
 	};
 	const slope = () => propDT(p, which) - (propDrho(p, which) * p.dPdT) / p.dPdrho;
-	const fast = newtonTRho(fl, P, which, y, branch, Ta, Tb, T0, rho0, p, g);
+	const fast = newtonTRho(
+		fl,
+		P,
+		which,
+		y,
+		branch,
+		Ta,
+		Tb,
+		T0,
+		start ?? rho0,
+		p,
+		g,
+		start !== undefined
+	);
 	if (fast) return fast;
 	let T = T0;
 	// rtsafe rule (Numerical Recipes): bisect when Newton leaves the bracket or stops halving
@@ -123,8 +138,10 @@ function solveAlongIsobar(
 
 /**
  * Fast path along an isobar: Newton in (T, ln ρ) on P(T, ρ) = P and y(T, ρ) = y at once (one
- * evaluation per step), from the density at T0. Gives up (null) if T leaves [Ta, Tb], the density
- * leaves the branch, or it does not settle in 30 steps; the bracketed search then takes over.
+ * evaluation per step), from the density at T0 (solved from rho0 on the branch), or from (T0, rho0)
+ * itself when `atStart` (an estimate off the isobar: the first steps bring it onto it). Gives up
+ * (null) if T leaves [Ta, Tb], the density leaves the branch, or it does not settle in 30 steps;
+ * the bracketed search then takes over.
  */
 function newtonTRho(
 	fl: Fluid,
@@ -137,10 +154,11 @@ function newtonTRho(
 	T0: number,
 	rho0: number,
 	p: Point,
-	g: SatGuess
+	g: SatGuess,
+	atStart = false
 ): Point | null {
 	let T = T0;
-	const r0 = rhoOnBranch(fl, T, P, branch, rho0, g);
+	const r0 = atStart ? rho0 : rhoOnBranch(fl, T, P, branch, rho0, g);
 	if (!(r0 > 0)) return null;
 	let z = Math.log(r0);
 	const sy = which === 's' ? fl.R : fl.R * fl.Tc;
@@ -189,6 +207,16 @@ function newtonTRho(
 	return null;
 }
 
+/**
+ * The density at T on the isobar through an evaluated point, estimated from the point's slope
+ * (∂ln ρ/∂ln T)_P = −T(∂P/∂T)_ρ/(ρ(∂P/∂ρ)_T), exact for an ideal gas: a start for the Newton in
+ * (T, ln ρ) that spares solving the density at T first.
+ */
+function alongIsobar(p: Point, T: number): number {
+	const slope = -(p.T * p.dPdT) / (p.rho * p.dPdrho);
+	return p.rho * Math.exp(slope * Math.log(T / p.T));
+}
+
 export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): State {
 	// the inputs in words, for a refusal only (not built on the way to an answer)
 	const what = () => `P = ${fmt(P)} Pa and ${which} = ${fmt(y)} ${UNIT[which]}`;
@@ -221,7 +249,8 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 				sat.T,
 				yL - y,
 				T0,
-				sat.rhoL
+				sat.rhoL,
+				alongIsobar(pL, T0)
 			);
 		} else {
 			const pV = line.pV;
@@ -238,10 +267,35 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 				fl.Tmax * (1 + 1e-7),
 				NaN,
 				T0,
-				sat.rhoV
+				sat.rhoV,
+				alongIsobar(pV, T0)
 			);
 		}
 	} else {
+		const branch: Branch = P < fl.Pc ? 'vapor' : 'any';
+		const p = new Point();
+		const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
+		// at or above Pc: straight to the Newton in (T, ln ρ) from the state grid's estimate, when y rises
+		// along the isobar there (one root); the bracket from both ends of the range only if that fails
+		const start = isobarStart(fl, P, which, y);
+		result = start
+			? newtonTRho(
+					fl,
+					P,
+					which,
+					y,
+					branch,
+					fl.Tmin * (1 - 1e-7),
+					fl.Tmax * (1 + 1e-7),
+					start[0],
+					start[1],
+					p,
+					g,
+					true
+				)
+			: null;
+	}
+	if (!result && !(P < fl.Pc && P >= triplePressure(fl) * (1 - 1e-9))) {
 		const branch: Branch = P < fl.Pc ? 'vapor' : 'any';
 		const p = new Point();
 		const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };

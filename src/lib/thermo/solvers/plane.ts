@@ -54,6 +54,10 @@ interface Grid {
 	branches: { nj: number; T: Float64Array; lnRho: Float64Array; y: Float64Array[] }[];
 	/** bounding boxes per pair key, per branch, per cell: [min a, max a, min b, max b] */
 	boxes: Map<string, Float64Array[]>;
+	/** per isotherm: ln of the pressure where its branches meet (Psat, or Pc above Tc) */
+	lnPmid: Float64Array;
+	/** ln of the liquid-like branches' top pressure (Pmax) */
+	lnPmax: number;
 }
 
 function buildGrid(fl: Fluid): Grid {
@@ -73,6 +77,7 @@ function buildGrid(fl: Fluid): Grid {
 	for (let i = Ts.length - 1; i > 0; i--) if (Ts[i] - Ts[i - 1] < 1e-6 * Ts[i]) Ts.splice(i, 1);
 	const nt = Ts.length;
 	const p = new Point();
+	const lnPmid = new Float64Array(nt);
 	const branches = [NV, NL].map((nj) => ({
 		nj,
 		T: new Float64Array(nt * nj),
@@ -84,6 +89,7 @@ function buildGrid(fl: Fluid): Grid {
 		const sub = T < fl.Tc * (1 - 1e-9);
 		const sat = sub ? satAtT(fl, T) : null;
 		const Pmid = sat ? sat.P : fl.Pc;
+		lnPmid[i] = Math.log(Pmid);
 		for (let b = 0; b < 2; b++) {
 			const br = branches[b];
 			const nj = br.nj;
@@ -113,7 +119,7 @@ function buildGrid(fl: Fluid): Grid {
 			}
 		}
 	}
-	return { nt, branches, boxes: new Map() };
+	return { nt, branches, boxes: new Map(), lnPmid, lnPmax: Math.log(fl.Pmax) };
 }
 
 function grid(fl: Fluid): Grid {
@@ -126,6 +132,52 @@ function grid(fl: Fluid): Grid {
 }
 
 const YI: Record<EnergyProp, number> = { u: 0, h: 1, s: 2 };
+
+/**
+ * A start (T, ρ) on the isobar P at or above Pc where u, h or s is Y, read off the state grid's
+ * liquid-like branches (linear in ln P along each isotherm, then between isotherms); null below Pc,
+ * or when Y lies outside the grid's values along the isobar, or when they do not rise with T along
+ * it (where an isobar turns, the caller's scan finds every root).
+ */
+export function isobarStart(
+	fl: Fluid,
+	P: number,
+	which: EnergyProp,
+	Y: number
+): [number, number] | null {
+	if (!(P >= fl.Pc && P <= fl.Pmax)) return null;
+	const g = grid(fl);
+	const br = g.branches[1];
+	const nj = br.nj;
+	const ys = br.y[YI[which]];
+	const lnP = Math.log(P);
+	let found: [number, number] | null = null;
+	let prevT = NaN,
+		prevY = NaN,
+		prevZ = NaN;
+	for (let i = 0; i < g.nt; i++) {
+		const f = (lnP - g.lnPmid[i]) / (g.lnPmax - g.lnPmid[i]);
+		if (!(f >= 0 && f <= 1)) return null;
+		const x = f * (nj - 1);
+		const j = Math.min(nj - 2, Math.floor(x));
+		const w = x - j;
+		const k = i * nj + j;
+		const y = ys[k] + w * (ys[k + 1] - ys[k]);
+		const z = br.lnRho[k] + w * (br.lnRho[k + 1] - br.lnRho[k]);
+		const T = br.T[k];
+		if (i > 0) {
+			if (!(y > prevY)) return null;
+			if (!found && Y >= prevY && Y <= y) {
+				const u = (Y - prevY) / (y - prevY);
+				found = [prevT + u * (T - prevT), Math.exp(prevZ + u * (z - prevZ))];
+			}
+		}
+		prevT = T;
+		prevY = y;
+		prevZ = z;
+	}
+	return found;
+}
 
 function boxes(g: Grid, a: EnergyProp, b: EnergyProp): Float64Array[] {
 	const key = a + b;
