@@ -9,6 +9,8 @@
 // (or the answer's stated precision): common practice.
 import { describe, expect, it } from 'vitest';
 import { fixState, getFluid } from '../index.ts';
+import { getCompiledFluid } from '../registry.ts';
+import { isobarStart } from './plane.ts';
 
 describe('two-energy pairs near Tmax', () => {
 	for (const id of ['hydrogen', 'nitrogen', 'carbon-dioxide', 'water'])
@@ -36,5 +38,41 @@ describe('two-energy pairs near Tmax', () => {
 	it('hydrogen at 995.76 K, 151.5 kPa from (h, s)', () => {
 		const st = fixState('hydrogen', { h: 14132017.612055108, s: 69287.41856979189 });
 		expect(st.T).toBeCloseTo(995.7629005599271, 6);
+	});
+});
+
+// Source of the check values: the states themselves, fixed from (T, P) by the engine's own
+// density solve; the start read off the grid is only asked to lie near them (common practice for
+// a Newton start: a few per cent), and (P, y) must come back to them.
+describe('isobar starts read off the grid (P at or above Pc)', () => {
+	it('none below Pc; near the state above it, for h, s and u', () => {
+		for (const id of ['water', 'carbon-dioxide', 'nitrogen', 'propane']) {
+			const f = getFluid(id);
+			const Pc = f.equationCritical.P;
+			expect(isobarStart(getCompiledFluid(id), 0.5 * Pc, 'h', 0)).toBeNull();
+			for (const [kT, kP] of [
+				[0.8, 1.5],
+				[1.2, 3],
+				[2, 10]
+			]) {
+				const T = Math.min(kT * f.equationCritical.T, f.limits.Tmax - 1);
+				const P = Math.min(kP * Pc, f.limits.Pmax);
+				const ref = fixState(id, { T, P });
+				for (const w of ['h', 's', 'u'] as const) {
+					const start = isobarStart(getCompiledFluid(id), P, w, ref[w]);
+					const where = `${id} ${w} at T = ${T}, P = ${P}`;
+					expect(start, where).not.toBeNull();
+					expect(Math.abs(start![0] / T - 1), where).toBeLessThan(0.05);
+					expect(Math.abs(start![1] / ref.rho - 1), where).toBeLessThan(0.1);
+					const got = fixState(id, { P, [w]: ref[w] });
+					expect(Math.abs(got.T / T - 1), where).toBeLessThan(1e-10);
+				}
+			}
+		}
+	});
+	it('none for a value outside the isobar’s range', () => {
+		const fl = getCompiledFluid('water');
+		expect(isobarStart(fl, 5e7, 'h', -1e9)).toBeNull();
+		expect(isobarStart(fl, 5e7, 'h', 1e9)).toBeNull();
 	});
 });
