@@ -35,17 +35,22 @@ function akasaka(fl: Fluid, T: number, dL0: number, dV0: number, out: AkasakaOut
 		dV = dV0;
 	let prevNorm = Infinity;
 	for (let it = 0; it < 60; it++) {
-		let r = fl.residualAt(dL, tau, 2);
+		let r = fl.residualAt(dL, tau, 3);
 		const JL = dL * (1 + r.d1);
 		const KL = r.d1 + r.a + Math.log(dL);
 		const JdL = 1 + 2 * r.d1 + r.d2;
 		const KdL = JdL / dL;
-		r = fl.residualAt(dV, tau, 2);
+		// second derivatives in δ: J″ = (2δαʳ_δ + 4δ²αʳ_δδ + δ³αʳ_δδδ)/δ, K″ = (3δ²αʳ_δδ + δ³αʳ_δδδ − 1)/δ²
+		const JddL = (2 * r.d1 + 4 * r.d2 + r.d3) / dL;
+		const KddL = (3 * r.d2 + r.d3 - 1) / (dL * dL);
+		r = fl.residualAt(dV, tau, 3);
 		const d1V = r.d1;
 		const JV = dV * (1 + d1V);
 		const KV = d1V + r.a + Math.log(dV);
 		const JdV = 1 + 2 * d1V + r.d2;
 		const KdV = JdV / dV;
+		const JddV = (2 * d1V + 4 * r.d2 + r.d3) / dV;
+		const KddV = (3 * r.d2 + r.d3 - 1) / (dV * dV);
 		const FJ = JV - JL;
 		const FK = KV - KL;
 		// J' carries the cancellation of 1 + δαʳ_δ in the liquid: judge it on the liquid's scale δ'
@@ -66,15 +71,22 @@ function akasaka(fl: Fluid, T: number, dL0: number, dV0: number, out: AkasakaOut
 		if (!Number.isFinite(det) || det === 0) return false;
 		let stepL = (FK * JdV - FJ * KdV) / det;
 		let stepV = (FK * JdL - FJ * KdL) / det;
-		// quadratic convergence in view (residuals below 1e−9 and a thousandth of the last ones): the
-		// residuals after this full step, about norm³/prev², lie below the 1e−15 tolerance, so the step
-		// is taken without evaluating once more; P from J(δ'') carried along the step (its error is
-		// of the order of the step squared, far below round-off)
+		// the residuals after this full step are its Taylor remainder, ½(F″_V·step_V² − F″_L·step_L²)
+		// to third order in the step; where the step is small (a start from the table: below a
+		// millionth of each density, so the third-order terms are some 1e−6 of the remainder) and that
+		// remainder lies below the 1e−15 tolerance (the residuals' round-off floor is higher, about
+		// 1e−14), the step is taken without evaluating once more. Also when quadratic convergence is in view (residuals below 1e−9 and a
+		// thousandth of the last ones: after the step about norm³/prev²). P from J(δ'') carried along
+		// the step (its error is of the order of the step squared, far below round-off)
+		const remainder =
+			(0.5 * Math.abs(JddV * stepV * stepV - JddL * stepL * stepL)) / dL +
+			0.5 * Math.abs(KddV * stepV * stepV - KddL * stepL * stepL);
 		if (
-			norm < 1e-9 &&
-			lastNorm < Infinity &&
-			norm <= 1e-3 * lastNorm &&
-			norm * (norm / lastNorm) ** 2 < 1e-17 &&
+			((Math.abs(stepL) < 1e-6 * dL && Math.abs(stepV) < 1e-6 * dV && remainder < 1e-15) ||
+				(norm < 1e-9 &&
+					lastNorm < Infinity &&
+					norm <= 1e-3 * lastNorm &&
+					norm * (norm / lastNorm) ** 2 < 1e-17)) &&
 			dL + stepL > dV + stepV &&
 			dV + stepV > 0
 		) {
