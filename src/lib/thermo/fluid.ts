@@ -364,28 +364,45 @@ export class Fluid {
 	}
 
 	/**
-	 * αʳ and derivatives up to `order` at (δ, τ), into this.recR (overwritten by the next call).
-	 * A call at the (δ, τ) of the last one, at its order or lower, returns that record as it stands
-	 * (the same numbers; fields above the order asked for may then be set): a solver's final state
-	 * is often evaluated where its last iteration already was (a Newton step below round-off).
+	 * αʳ and derivatives up to `order` at (δ, τ), into one of two records (either may be overwritten
+	 * by the next call but one). A call at the (δ, τ) of one of the last two evaluations, at its
+	 * order or lower, returns that record as it stands (the same numbers; fields above the order
+	 * asked for may then be set): a solver's final state is often evaluated where its last iteration
+	 * already was (a Newton step below round-off), and a saturation solve's two phases alternate.
 	 */
 	residualAt(delta: number, tau: number, order: DerivativeOrder): AlphaRecord {
-		const rec = this.recR;
-		if (delta === this.recDelta && tau === this.recTau && order <= this.recOrder) return rec;
+		if (delta === this.deltaA && tau === this.tauA && order <= this.orderA) return this.recR;
+		if (delta === this.deltaB && tau === this.tauB && order <= this.orderB) return this.recB;
+		// into the record not filled last; the other keeps its point
+		const intoA = this.lastB;
+		const rec = intoA ? this.recR : this.recB;
 		rec.reset();
 		this.ctx.set(delta, tau);
 		const terms = this.residual;
 		for (let i = 0; i < terms.length; i++) terms[i].add(this.ctx, order, rec);
-		this.recDelta = delta;
-		this.recTau = tau;
-		this.recOrder = order;
+		if (intoA) {
+			this.deltaA = delta;
+			this.tauA = tau;
+			this.orderA = order;
+		} else {
+			this.deltaB = delta;
+			this.tauB = tau;
+			this.orderB = order;
+		}
+		this.lastB = !intoA;
 		return rec;
 	}
 
-	/** where recR was last evaluated, and to which order */
-	private recDelta = NaN;
-	private recTau = NaN;
-	private recOrder = -1;
+	/** the second record, and where each record was last evaluated and to which order */
+	private readonly recB = new AlphaRecord();
+	private deltaA = NaN;
+	private tauA = NaN;
+	private orderA = -1;
+	private deltaB = NaN;
+	private tauB = NaN;
+	private orderB = -1;
+	/** whether recB was filled last */
+	private lastB = true;
 
 	/**
 	 * α⁰ and derivatives up to `order` at (δ, τ), into this.recI (overwritten by the next call).

@@ -431,7 +431,10 @@ export function satAtP(fl: Fluid, P: number): SatPoint {
 	const tab = satTable(fl);
 	const T0 = guessTsat(fl, tab, P);
 	const g0 = satGuess(fl, T0, { P: 0, rhoL: 0, rhoV: 0 });
-	let tau = fl.Tr / T0;
+	// T carried beside τ = Tr/T, computed as evalPoint computes it, so that the states at the answer
+	// are evaluated at the very τ the last iteration was
+	let T = T0;
+	let tau = fl.Tr / T;
 	let dL = g0.rhoL / fl.rhor;
 	let dV = g0.rhoV / fl.rhor;
 	const c = fl.rhor * fl.R * fl.Tr;
@@ -461,12 +464,9 @@ export function satAtP(fl: Fluid, P: number): SatPoint {
 		const ddL = (-r1 - a11 * dTau) / a12;
 		const ddV = (-r2 - a21 * dTau) / a23;
 		if (!Number.isFinite(dTau + ddL + ddV)) break;
-		let g = 1;
-		while (g > 1e-6 && !(dL + g * ddL > dV + g * ddV && dV + g * ddV > 0 && tau + g * dTau > 0))
-			g *= 0.5;
-		tau += g * dTau;
-		dL += g * ddL;
-		dV += g * ddV;
+		// a step below round-off (the residuals then at their floor: a liquid's P carries some 1e−10
+		// of cancellation at a few MPa): this point, where both phases were just evaluated, is the
+		// answer to 1e−13, and their states there cost nothing (Fluid.residualAt)
 		if (
 			Math.abs(dTau) < 1e-14 * tau &&
 			Math.abs(ddL) < 1e-13 * dL &&
@@ -477,8 +477,15 @@ export function satAtP(fl: Fluid, P: number): SatPoint {
 			ok = dL - dV > 1e-9 * dL;
 			break;
 		}
+		let g = 1;
+		while (g > 1e-6 && !(dL + g * ddL > dV + g * ddV && dV + g * ddV > 0 && tau + g * dTau > 0))
+			g *= 0.5;
+		T = fl.Tr / (tau + g * dTau);
+		tau = fl.Tr / T;
+		dL += g * ddL;
+		dV += g * ddV;
 	}
-	if (ok) return { T: fl.Tr / tau, P, rhoL: dL * fl.rhor, rhoV: dV * fl.rhor };
+	if (ok) return { T, P, rhoL: dL * fl.rhor, rhoV: dV * fl.rhor };
 	return satAtPByT(fl, P, T0);
 }
 
