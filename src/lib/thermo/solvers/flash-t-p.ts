@@ -14,6 +14,7 @@ import { P_LINE_TOL, pressureTol, singleState } from '../state.ts';
 import type { RootHint, State } from '../types.ts';
 import { densityAtTP } from './density.ts';
 import { locate, onLineAt, placedState } from './locate.ts';
+import { densityStart } from './plane.ts';
 import {
 	CRITICAL_BAND,
 	TABLE_ACCURACY,
@@ -45,7 +46,9 @@ export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State
 		// start no denser than 2ρc: at hundreds of MPa the ideal-gas guess P/(RT) can lie beyond the
 		// physical root, where Newton may settle on a spurious one of the equation (methane at
 		// 580 K, 444 MPa: P/(RT) ≈ 1480 kg/m³ led to a root at 1938 kg/m³ with cv < 0)
-		rho = densityAtTP(fl, T, P, Math.min(P / (fl.R * T), 2 * fl.rhoc));
+		// from the state grid's estimate where it has one (plane.ts)
+		const start = densityStart(fl, T, P);
+		rho = densityAtTP(fl, T, P, start > 0 ? start : Math.min(P / (fl.R * T), 2 * fl.rhoc));
 	} else {
 		satGuess(fl, T, g);
 		let side: 'liquid' | 'vapor';

@@ -56,8 +56,9 @@ interface Grid {
 	boxes: Map<string, Float64Array[]>;
 	/** per isotherm: ln of the pressure where its branches meet (Psat, or Pc above Tc) */
 	lnPmid: Float64Array;
-	/** ln of the liquid-like branches' top pressure (Pmax) */
+	/** ln of the liquid-like branches' top pressure (Pmax), and of the vapor-like ones' floor */
 	lnPmax: number;
+	lnPlo: number;
 }
 
 function buildGrid(fl: Fluid): Grid {
@@ -119,7 +120,14 @@ function buildGrid(fl: Fluid): Grid {
 			}
 		}
 	}
-	return { nt, branches, boxes: new Map(), lnPmid, lnPmax: Math.log(fl.Pmax) };
+	return {
+		nt,
+		branches,
+		boxes: new Map(),
+		lnPmid,
+		lnPmax: Math.log(fl.Pmax),
+		lnPlo: Math.log(Plo)
+	};
 }
 
 function grid(fl: Fluid): Grid {
@@ -132,6 +140,47 @@ function grid(fl: Fluid): Grid {
 }
 
 const YI: Record<EnergyProp, number> = { u: 0, h: 1, s: 2 };
+
+/** ln ρ at P on isotherm i of the grid, on the branch P lies on (linear in ln P); NaN outside it. */
+function lnRhoOnRow(g: Grid, i: number, lnP: number): number {
+	const liquid = lnP >= g.lnPmid[i];
+	const br = g.branches[liquid ? 1 : 0];
+	const f = liquid
+		? (lnP - g.lnPmid[i]) / (g.lnPmax - g.lnPmid[i])
+		: (lnP - g.lnPlo) / (g.lnPmid[i] - g.lnPlo);
+	if (!(f >= 0 && f <= 1)) return NaN;
+	const nj = br.nj;
+	const x = f * (nj - 1);
+	const j = Math.min(nj - 2, Math.floor(x));
+	const k = i * nj + j;
+	return br.lnRho[k] + (x - j) * (br.lnRho[k + 1] - br.lnRho[k]);
+}
+
+/**
+ * A start for the density at (T, P) above the critical temperature, read off the state grid
+ * (linear in ln P along the isotherms either side of T, then in T; they must both lie above Tc);
+ * NaN where the grid has none (P below its floor, T within its nearest isotherms of Tc).
+ */
+export function densityStart(fl: Fluid, T: number, P: number): number {
+	const g = grid(fl);
+	const Ts = g.branches[0].T;
+	const nv = g.branches[0].nj;
+	let lo = 0,
+		hi = g.nt - 1;
+	if (!(T >= Ts[0] && T <= Ts[hi * nv])) return NaN;
+	while (hi - lo > 1) {
+		const mid = (lo + hi) >> 1;
+		if (Ts[mid * nv] <= T) lo = mid;
+		else hi = mid;
+	}
+	const Ta = Ts[lo * nv],
+		Tb = Ts[hi * nv];
+	if (!(Ta >= fl.Tc)) return NaN;
+	const lnP = Math.log(P);
+	const za = lnRhoOnRow(g, lo, lnP),
+		zb = lnRhoOnRow(g, hi, lnP);
+	return Math.exp(za + ((T - Ta) / (Tb - Ta)) * (zb - za));
+}
 
 /**
  * A start (T, ρ) on the isobar P at or above Pc where u, h or s is Y, read off the state grid's
