@@ -17,6 +17,7 @@ import { locate, onLineAt, placedState } from './locate.ts';
 import { densityStart } from './plane.ts';
 import {
 	CRITICAL_BAND,
+	liquidStart,
 	TABLE_ACCURACY,
 	satAtT,
 	satGuess,
@@ -37,6 +38,23 @@ function failed(fl: Fluid, T: number, P: number): ThermoError {
 		`No density found for ${fl.id} at T = ${fmt(T)} K, P = ${fmt(P)} Pa.`,
 		'Please report the inputs; try values a little away from the critical point.'
 	);
+}
+
+/**
+ * A start for the vapor's density at (T, P ≤ Psat): Z = P/(ρRT) taken linear in ρ from the ideal gas
+ * (Z = 1 at ρ = 0) to the saturated vapor (Psat, ρ''), as a second virial coefficient would give,
+ * and solved for ρ (the root of bρ² + ρ − P/(RT) = 0, b = (Z'' − 1)/ρ''; 1 + 4bP/RT ≥ 0 for P ≤ Psat).
+ * Exact at both ends, where the plain scaling ρ''·P/Psat is off by 1 − Z'' in dilute gas (it is kept
+ * near Psat on a flat isotherm, below).
+ */
+function vaporStart(fl: Fluid, T: number, P: number, Psat: number, rhoV: number): number {
+	const RT = fl.R * T;
+	const Z = Psat / (rhoV * RT);
+	// near a flat saturated isotherm (Z'' well below 1) the line in Z bends P(ρ) over before ρ''
+	// (its slope there, RT(2Z'' − 1), is the true one's lower side): the plain scaling then, near Psat
+	if (Z < 0.8 && P > 0.5 * Psat) return (rhoV * P) / Psat;
+	const b = (Z - 1) / rhoV;
+	return (2 * P) / (RT * (1 + Math.sqrt(Math.max(0, 1 + (4 * b * P) / RT))));
 }
 
 export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State {
@@ -82,8 +100,15 @@ export function flashTP(fl: Fluid, T: number, P: number, hint?: RootHint): State
 		}
 		rho =
 			side === 'liquid'
-				? densityAtTP(fl, T, P, (sat ? sat.rhoL : g.rhoL) * (1 + 1e-12), lo, hi)
-				: densityAtTP(fl, T, P, ((sat ? sat.rhoV : g.rhoV) * P) / (sat ? sat.P : g.P), lo, hi);
+				? densityAtTP(fl, T, P, liquidStart(fl, T, P, sat ?? g), lo, hi)
+				: densityAtTP(
+						fl,
+						T,
+						P,
+						vaporStart(fl, T, P, sat ? sat.P : g.P, sat ? sat.rhoV : g.rhoV),
+						lo,
+						hi
+					);
 	}
 	if (!(rho > 0)) throw failed(fl, T, P);
 	evalPoint(fl, T, rho, p, 2);

@@ -26,6 +26,9 @@ interface AkasakaOut {
 	dL: number;
 	dV: number;
 	P: number;
+	/** the saturated liquid's (∂P/∂ρ)_T/(RT) and dK/dP of its bulk modulus K = ρ(∂P/∂ρ)_T (at the last point evaluated) */
+	kL: number;
+	k1L: number;
 }
 
 /** Newton–Akasaka at fixed τ; returns false if it fails (caller tries other guesses). */
@@ -42,6 +45,8 @@ function akasaka(fl: Fluid, T: number, dL0: number, dV0: number, out: AkasakaOut
 		const KdL = JdL / dL;
 		// second derivatives in δ: J″ = (2δαʳ_δ + 4δ²αʳ_δδ + δ³αʳ_δδδ)/δ, K″ = (3δ²αʳ_δδ + δ³αʳ_δδδ − 1)/δ²
 		const JddL = (2 * r.d1 + 4 * r.d2 + r.d3) / dL;
+		// dK/dP = 1 + ρ(∂²P/∂ρ²)_T/(∂P/∂ρ)_T = 1 + δJ″/J′
+		const k1L = 1 + (dL * JddL) / JdL;
 		const KddL = (3 * r.d2 + r.d3 - 1) / (dL * dL);
 		r = fl.residualAt(dV, tau, 3);
 		const d1V = r.d1;
@@ -61,6 +66,8 @@ function akasaka(fl: Fluid, T: number, dL0: number, dV0: number, out: AkasakaOut
 			if (dL - dV < 1e-9 * dL) return false; // the trivial solution
 			out.dL = dL;
 			out.dV = dV;
+			out.kL = JdL;
+			out.k1L = k1L;
 			// the vapor side gives P without cancellation at low T
 			out.P = dV * fl.rhor * fl.R * T * (1 + d1V);
 			return out.P > 0;
@@ -94,6 +101,8 @@ function akasaka(fl: Fluid, T: number, dL0: number, dV0: number, out: AkasakaOut
 				nV = dV + stepV;
 			if (nL - nV < 1e-9 * nL) return false; // the trivial solution
 			out.dL = nL;
+			out.kL = JdL;
+			out.k1L = k1L;
 			out.dV = nV;
 			out.P = fl.rhor * fl.R * T * (JV + JdV * stepV);
 			return out.P > 0;
@@ -119,7 +128,8 @@ function akasaka(fl: Fluid, T: number, dL0: number, dV0: number, out: AkasakaOut
  * Saturation table in two overlapping segments, each uniform in its own abscissa:
  * low: z = 1/T from the triple point to 0.95·Tc (ln P and ln ρ'' are nearly linear in 1/T);
  * high: z = ξ = (1 − T/Tc)^(1/3) from 0.85·Tc to the critical point (densities ≈ linear in ξ).
- * Below 0.9·Tc the low segment is used, above it the high one. Stored: ln P, ρ', ln ρ''.
+ * Below 0.9·Tc the low segment is used, above it the high one. Stored: ln P, ρ', ln ρ'', and the
+ * saturated liquid's (∂P/∂ρ)_T/(RT) and dK/dP (liquidStart).
  */
 interface SatSegment {
 	z0: number;
@@ -127,6 +137,9 @@ interface SatSegment {
 	lnP: Float64Array;
 	rhoL: Float64Array;
 	lnRhoV: Float64Array;
+	/** the saturated liquid's (∂P/∂ρ)_T/(RT) and dK/dP (AkasakaOut): a start for compressed liquid */
+	kL: Float64Array;
+	k1L: Float64Array;
 }
 /** Saturation nodes in rising T (triple point to just below Tc), with both phases' v, u, h, s. */
 export interface DomeNodes {
@@ -175,13 +188,18 @@ function segment(
 		dz: (z1 - z0) / (n - 1),
 		lnP: new Float64Array(n),
 		rhoL: new Float64Array(n),
-		lnRhoV: new Float64Array(n)
+		lnRhoV: new Float64Array(n),
+		kL: new Float64Array(n),
+		k1L: new Float64Array(n)
 	};
-	const out: AkasakaOut = { dL: 0, dV: 0, P: 0 };
+	const out: AkasakaOut = { dL: 0, dV: 0, P: 0, kL: 0, k1L: 0 };
 	for (let i = 0; i < n; i++) {
 		if (endsAtCritical && i === n - 1) {
 			seg.lnP[i] = Math.log(fl.Pc);
 			seg.rhoL[i] = fl.rhoc;
+			// (∂P/∂ρ)_T vanishes at the critical point; dK/dP held at its last value
+			seg.kL[i] = 0;
+			seg.k1L[i] = seg.k1L[i - 1];
 			seg.lnRhoV[i] = Math.log(fl.rhoc);
 			break;
 		}
@@ -230,6 +248,8 @@ function segment(
 			);
 		seg.lnP[i] = Math.log(out.P);
 		seg.rhoL[i] = out.dL * fl.rhor;
+		seg.kL[i] = out.kL;
+		seg.k1L[i] = out.k1L;
 		seg.lnRhoV[i] = Math.log(out.dV * fl.rhor);
 	}
 	return seg;
@@ -353,13 +373,31 @@ export function satGuess(fl: Fluid, T: number, out: SatGuess): SatGuess {
 }
 
 /**
+ * A start for the density of compressed liquid at (T, P > Psat) from the saturation table: the
+ * bulk modulus K = ρ(∂P/∂ρ)_T taken linear in P from the saturated liquid's (the Tait form),
+ * integrated: ln(ρ/ρ') = ln(1 + K₁(P − Psat)/K₀)/K₁. `g` is satGuess at T.
+ */
+export function liquidStart(fl: Fluid, T: number, P: number, g: SatGuess): number {
+	const tab = satTable(fl);
+	const low = T < tab.split;
+	const seg = low ? tab.low : tab.high;
+	const u = low ? (1 / T - seg.z0) / seg.dz : (xiOf(fl, T) - seg.z0) / seg.dz;
+	const K0 = g.rhoL * fl.R * T * lagrange(seg.kL, u);
+	const K1 = lagrange(seg.k1L, u);
+	const x = (P - g.P) / K0;
+	if (!(K0 > 0 && x > 0)) return g.rhoL * (1 + 1e-12);
+	const lnr = K1 > 1e-3 && Number.isFinite(K1) ? Math.log1p(K1 * x) / K1 : x;
+	return g.rhoL * Math.exp(lnr);
+}
+
+/**
  * Saturation at temperature T (K), Tt ≤ T ≤ Tc. Returns T, P (Pa) and the two densities (kg/m³).
  * `guess` (densities near T, e.g. from a neighbouring solve) replaces the table's start.
  * Within CRITICAL_BAND·Tc of Tc it returns the critical point. Throws `no-convergence` on failure.
  */
 export function satAtT(fl: Fluid, T: number, guess?: { rhoL: number; rhoV: number }): SatPoint {
 	if (T >= fl.Tc * (1 - CRITICAL_BAND)) return { T, P: fl.Pc, rhoL: fl.rhoc, rhoV: fl.rhoc };
-	const out: AkasakaOut = { dL: 0, dV: 0, P: 0 };
+	const out: AkasakaOut = { dL: 0, dV: 0, P: 0, kL: 0, k1L: 0 };
 	// near Tc Newton can also settle on the trivial solution ρ' ≈ ρ'': a solution must keep at least
 	// a quarter of the gap of its start
 	const from = (rL: number, rV: number) =>
