@@ -4,8 +4,11 @@
  * BENCH_FLUIDS=propane,argon), against the current budgets for every fluid (docs/performance.md's
  * performance budget; the same numbers as engine.bench.ts). Prints a table; never fails on time.
  *
- * States per fluid: single-phase points between the triple and 1.6× the critical temperature at
- * 0.2, 1 and 3 times the critical density, plus mixtures at x = 0.1 and 0.6 (inputs precomputed).
+ * States per fluid: single-phase points at six temperatures between the triple point and 1.6× the
+ * critical temperature at 0.2, 1 and 3 times the critical density, plus mixtures at x = 0.1 and 0.6
+ * (inputs precomputed). Six temperatures rather than four since 3 December 2026: the engine keeps
+ * its last two evaluations (Fluid.residualAt), and a fluid with only two states in range (R-1234ze(E)
+ * had) would have been timed on answers it already held.
  * Air (a mixture, pseudo-pure.ts) has no two-phase states: its bubble (x = 0) and dew (x = 1)
  * points stand in for the mixtures, and its "sat at T" column is the bubble point at T.
  */
@@ -52,12 +55,16 @@ function states(f: FluidInfo): { single: State[]; mixed: State[] } {
 	const rhoc = f.equationCritical.rho;
 	const Tt = f.triple.T;
 	const single: State[] = [];
-	for (const T of [
+	// distinct temperatures only: where Tmax lies below 1.3·Tc the last two would coincide
+	const temperatures = new Set([
 		Tt + 0.4 * (Tc - Tt),
+		Tt + 0.6 * (Tc - Tt),
 		Tt + 0.8 * (Tc - Tt),
-		1.1 * Tc,
+		Math.min(1.1 * Tc, 0.5 * (Tc + f.limits.Tmax)),
+		Math.min(1.3 * Tc, f.limits.Tmax),
 		Math.min(1.6 * Tc, f.limits.Tmax)
-	]) {
+	]);
+	for (const T of temperatures) {
 		for (const r of [0.2, 1, 3]) {
 			try {
 				const st = fixState(f.id, { T, rho: r * rhoc });
