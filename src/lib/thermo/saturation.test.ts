@@ -234,3 +234,29 @@ describe('the equation’s own critical point (FluidInfo.equationCritical, satur
 		});
 	}
 });
+
+// Source of the check values: the saturation at T the engine solves itself — P there must come back
+// as the given P, and T as that T, from saturation at P (a round trip); the evaluation counts are
+// this engine's own solver behaviour, not a published value.
+describe('saturation at P beside the critical point ends once its residuals stop shrinking', () => {
+	it('water at 21.83 MPa: few evaluations, and the round trip holds', () => {
+		const fl = getCompiledFluid('water');
+		const T = 646.2103;
+		const P = saturationAtT('water', T).P;
+		const term = fl.residual[0];
+		const add = term.add.bind(term);
+		let evaluations = 0;
+		term.add = (ctx, order, rec) => {
+			evaluations++;
+			add(ctx, order, rec);
+		};
+		try {
+			const s = saturationAtP('water', P);
+			// the steps stay ~1e−12 of the densities there: 30 iterations (60 evaluations) before
+			expect(evaluations).toBeLessThanOrEqual(12);
+			expect(Math.abs(s.T / T - 1)).toBeLessThan(1e-10);
+		} finally {
+			term.add = add;
+		}
+	});
+});

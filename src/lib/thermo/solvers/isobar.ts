@@ -65,7 +65,9 @@ function solveAlongIsobar(
 	fb: number,
 	T0: number,
 	rho0: number,
-	start?: number
+	start?: number,
+	/** a start (T, ρ) for the fast path to try before (T0, start) */
+	first?: [number, number] | null
 ): Point | null {
 	const p = new Point();
 	const g: SatGuess = { P: 0, rhoL: 0, rhoV: 0 };
@@ -78,20 +80,9 @@ function solveAlongIsobar(
 		return propValue(p, which) - y;
 	};
 	const slope = () => propDT(p, which) - (propDrho(p, which) * p.dPdT) / p.dPdrho;
-	const fast = newtonTRho(
-		fl,
-		P,
-		which,
-		y,
-		branch,
-		Ta,
-		Tb,
-		T0,
-		start ?? rho0,
-		p,
-		g,
-		start !== undefined
-	);
+	const fast =
+		(first ? newtonTRho(fl, P, which, y, branch, Ta, Tb, first[0], first[1], p, g, true) : null) ??
+		newtonTRho(fl, P, which, y, branch, Ta, Tb, T0, start ?? rho0, p, g, start !== undefined);
 	if (fast) return fast;
 	let T = T0;
 	// rtsafe rule (Numerical Recipes): bisect when Newton leaves the bracket or stops halving
@@ -268,7 +259,10 @@ export function flashPY(fl: Fluid, P: number, which: EnergyProp, y: number): Sta
 				NaN,
 				T0,
 				sat.rhoV,
-				alongIsobar(pV, T0)
+				alongIsobar(pV, T0),
+				// far from the saturated vapor (an isobar just below Pc, where cp is large at the line
+				// and the extrapolation falls short) the state grid's start
+				isobarStart(fl, P, which, y, true)
 			);
 		}
 	} else {

@@ -183,20 +183,24 @@ export function densityStart(fl: Fluid, T: number, P: number): number {
 }
 
 /**
- * A start (T, ρ) on the isobar P at or above Pc where u, h or s is Y, read off the state grid's
- * liquid-like branches (linear in ln P along each isotherm, then between isotherms); null below Pc,
- * or when Y lies outside the grid's values along the isobar, or when they do not rise with T along
- * it (where an isobar turns, the caller's scan finds every root).
+ * A start (T, ρ) on the isobar P where u, h or s is Y, read off the state grid (linear in ln P
+ * along each isotherm, then between isotherms): at or above Pc on the liquid-like branches, every
+ * isotherm; below Pc (`vapor`) on the vapor-like ones, the isotherms above the saturation
+ * temperature at P (a Y between the saturated vapor and the first of them gets none: a start
+ * extrapolated from the saturated vapor does there). Null also when Y lies outside the grid's
+ * values along the isobar, or when they do not rise with T along it (where an isobar turns, the
+ * caller's scan finds every root).
  */
 export function isobarStart(
 	fl: Fluid,
 	P: number,
 	which: EnergyProp,
-	Y: number
+	Y: number,
+	vapor = false
 ): [number, number] | null {
-	if (!(P >= fl.Pc && P <= fl.Pmax)) return null;
+	if (vapor ? !(P < fl.Pc) : !(P >= fl.Pc && P <= fl.Pmax)) return null;
 	const g = grid(fl);
-	const br = g.branches[1];
+	const br = g.branches[vapor ? 0 : 1];
 	const nj = br.nj;
 	const ys = br.y[YI[which]];
 	const lnP = Math.log(P);
@@ -205,8 +209,14 @@ export function isobarStart(
 		prevY = NaN,
 		prevZ = NaN;
 	for (let i = 0; i < g.nt; i++) {
-		const f = (lnP - g.lnPmid[i]) / (g.lnPmax - g.lnPmid[i]);
-		if (!(f >= 0 && f <= 1)) return null;
+		const f = vapor
+			? (lnP - g.lnPlo) / (g.lnPmid[i] - g.lnPlo)
+			: (lnP - g.lnPmid[i]) / (g.lnPmax - g.lnPmid[i]);
+		if (!(f >= 0 && f <= 1)) {
+			// below the saturation temperature at P the isobar is liquid: no vapor-like node there
+			if (vapor && Number.isNaN(prevT)) continue;
+			return null;
+		}
 		const x = f * (nj - 1);
 		const j = Math.min(nj - 2, Math.floor(x));
 		const w = x - j;
@@ -214,9 +224,12 @@ export function isobarStart(
 		const y = ys[k] + w * (ys[k + 1] - ys[k]);
 		const z = br.lnRho[k] + w * (br.lnRho[k + 1] - br.lnRho[k]);
 		const T = br.T[k];
-		if (i > 0) {
-			if (!(y > prevY)) return null;
-			if (!found && Y >= prevY && Y <= y) {
+		if (!Number.isNaN(prevT)) {
+			// a vapor-like isobar below Pc rises with T (cp > 0): a fall between isotherms is the linear
+			// interpolation's error beside the critical point (the nodes bunch toward Pc there), not a
+			// turn; no start from that interval
+			if (!(y > prevY) && !vapor) return null;
+			if (!found && y > prevY && Y >= prevY && Y <= y) {
 				const u = (Y - prevY) / (y - prevY);
 				found = [prevT + u * (T - prevT), Math.exp(prevZ + u * (z - prevZ))];
 			}
